@@ -41,6 +41,15 @@ type Molecule struct {
 	Adj [][]int
 	// SMILES is the input text the molecule was read from.
 	SMILES string
+
+	// nbrOrder[i], for atoms written with chirality, lists the neighbours in
+	// written order with -1 for a hydrogen (OpenSMILES chirality reference).
+	nbrOrder [][]int
+	// rings is the SSSR (atom indices in ring order); cycles the relevant
+	// cycles used for aromaticity; ringSys the fused/bridged ring systems.
+	rings   [][]int
+	cycles  [][]int
+	ringSys [][]int
 }
 
 // Other returns the atom at the other end of bond b from atom i.

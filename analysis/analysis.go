@@ -1,0 +1,140 @@
+// Package analysis turns the text of kiln files into everything the CLI and the
+// language server report: resolved species with their thermochemistry (given in
+// the file or estimated), reaction balance and thermochemistry, and diagnostics.
+//
+// Analysis is a pure function of text. A Workspace holds file contents in
+// memory (path → bytes) and asks an injected Loader for files it does not hold
+// (included files not open in an editor); it never touches the disk itself.
+// Results carry byte offsets into the files; converting to lines and UTF-16
+// columns is the caller's job (see speciesfile.LineIndex).
+package analysis
+
+import (
+	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/kinetics"
+	"kiln.dev/kiln/engine/molecule"
+	"kiln.dev/kiln/engine/nasa"
+	"kiln.dev/kiln/speciesfile"
+)
+
+// Settings are the user-adjustable parameters of an analysis.
+type Settings struct {
+	// DisplayUnits is "kcal/mol" or "kJ/mol": how energies are shown to people.
+	DisplayUnits string
+	// TMid and THigh are the NASA-7 fit temperatures in K (T_low is 300 K).
+	TMid, THigh float64
+	// MismatchHf298 (J/mol) and MismatchS298 (J/(mol K)) are the thresholds of
+	// the thermo-mismatch check between a given block and the estimate.
+	MismatchHf298, MismatchS298 float64
+	// CollisionFactor multiplies the collision-limit bound (1 = the plain bound).
+	CollisionFactor float64
+	// Stamp is written into the source line of blocks kiln inserts, e.g.
+	// "kiln 0.1.0, 2026-12-01". The caller sets it; analysis reads no clock.
+	Stamp string
+}
+
+// DefaultSettings returns the documented defaults: kcal/mol display, fits at
+// 1000/5000 K, mismatch thresholds 3 kcal/mol and 3 cal/(mol K), factor 1.
+func DefaultSettings() Settings {
+	return Settings{
+		DisplayUnits:    "kcal/mol",
+		TMid:            1000,
+		THigh:           5000,
+		MismatchHf298:   3 * 4184,
+		MismatchS298:    3 * 4.184,
+		CollisionFactor: 1,
+	}
+}
+
+// ThermoSource says where the thermochemistry of a species comes from.
+type ThermoSource string
+
+// Thermo sources; the strings are part of the summary JSON contract.
+const (
+	SourceFile     ThermoSource = "file"
+	SourceEstimate ThermoSource = "estimate"
+	SourceNone     ThermoSource = "none"
+)
+
+// Location is a span in a file of the workspace.
+type Location struct {
+	File string
+	Span speciesfile.Span
+}
+
+// Species is a resolved species declaration.
+type Species struct {
+	Name string
+	Loc  Location // the name token of the declaration
+	Decl *speciesfile.Species
+
+	Mol         *molecule.Molecule // nil without a (valid) structure
+	SMILESError error              // *molecule.SMILESError when the SMILES is bad
+	Formula     string
+	Composition map[string]int
+	Charge      int
+	MolarMass   float64 // g/mol, 0 when unknown
+
+	// Estimate is the group-additivity (or reference-library) estimate, nil
+	// when the structure cannot be estimated.
+	Estimate *Estimate
+	// Given is the file's own thermo block converted to a polynomial or a table.
+	Given *GivenThermo
+	// Source tells which of Given or Estimate the analysis uses.
+	Source ThermoSource
+
+	estimateErr error // why a structure could not be estimated
+}
+
+// Estimate is the thermochemistry kiln computes for a structure.
+type Estimate struct {
+	// Group is the additivity breakdown; nil for reference-library species.
+	Group *benson.Estimate
+	// Library names the reference entry used instead of groups ("" if none).
+	Library       string
+	LibrarySource string
+	Hf298, S298   float64    // J/mol, J/(mol K)
+	Cp            [7]float64 // J/(mol K) at benson.StdTemps
+	Uncertainty   float64    // J/mol
+	// Poly is the fitted (or library) NASA-7 polynomial; Fit reports its quality.
+	Poly   nasa.NASA7
+	Fit    nasa.FitReport
+	FitErr error
+}
+
+// GivenThermo is the thermochemistry written in the file for a species.
+type GivenThermo struct {
+	Poly  *nasa.NASA7 // from a nasa7 block, or fitted to a thermo-table block
+	Table *Table      // from a thermo-table block
+	// Fitted is true when Poly was fitted by kiln to Table.
+	Fitted bool
+	Span   speciesfile.Span
+}
+
+// Table is a thermo-table block in SI units.
+type Table struct {
+	Hf298, S298 float64
+	T, Cp       []float64
+}
+
+// Reaction is a resolved reaction with everything kiln can compute about it.
+// Pointer fields are nil when the value cannot be computed.
+type Reaction struct {
+	Decl     *speciesfile.Reaction
+	File     string
+	Line     int // 1-based line of the statement
+	Equation string
+	// Resolved is false when a species of the equation is undeclared.
+	Resolved bool
+	Balance  *kinetics.Balance
+	DH298    *float64 // J/mol
+	DS298    *float64 // J/(mol K)
+	DG298    *float64 // J/mol
+	// Kp at 298.15, 1000 and 1500 K (dimensionless, 1 bar).
+	Kp map[string]*float64
+	// ReverseRate1000 is k_r(1000 K) in cm3, mol, s units.
+	ReverseRate1000 *float64
+	Collision       *kinetics.Violation
+
+	reactants, products kinetics.Side // thermo of each side, nil when unknown
+}

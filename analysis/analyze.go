@@ -1,0 +1,301 @@
+package analysis
+
+import (
+	"context"
+	"fmt"
+	"path/filepath"
+	"sort"
+	"strings"
+
+	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/molecule"
+	"kiln.dev/kiln/speciesfile"
+)
+
+// Limits on includes (documented in FORMAT.md).
+const (
+	maxIncludeDepth = 16
+	maxFileSize     = 64 << 20
+)
+
+// CodeBadInclude is reported on an include that cannot be followed (missing
+// file, outside the workspace, cycle, too deep). It extends the list of codes
+// in FORMAT.md.
+const CodeBadInclude = "bad-include"
+
+// CodeDuplicateGroup is reported when a user-defined group is defined twice.
+const CodeDuplicateGroup = "duplicate-group"
+
+// analysis is the state of one Analyze call.
+type analysis struct {
+	w   *Workspace
+	ctx context.Context
+	set Settings
+	res *Result
+	// order is the files in resolution order: includes before the statements
+	// that follow them, depth first.
+	order []string
+}
+
+func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
+	path = filepath.Clean(path)
+	text, err := w.read(path)
+	if err != nil {
+		return nil, fmt.Errorf("analysing %s: %w", path, err)
+	}
+	set := w.Settings()
+	a := &analysis{w: w, ctx: ctx, set: set, res: &Result{
+		Path:     path,
+		Settings: set,
+		Files:    map[string]*speciesfile.File{},
+		ByName:   map[string]*Species{},
+		Uses:     map[string][]Location{},
+	}}
+	f := speciesfile.Parse(path, text)
+	a.res.File = f
+	a.res.Files[path] = f
+	a.res.Diagnostics = append(a.res.Diagnostics, f.Diags...)
+	a.includes(path, f, []string{path}, 0)
+	if err := ctx.Err(); err != nil {
+		return nil, err
+	}
+	a.groups()
+	if err := a.species(); err != nil {
+		return nil, err
+	}
+	if err := a.reactions(); err != nil {
+		return nil, err
+	}
+	sortDiagnostics(a.res.Diagnostics)
+	return a.res, nil
+}
+
+// report adds a diagnostic when it belongs to the analysed file.
+func (a *analysis) report(file string, d speciesfile.Diagnostic) {
+	if file != a.res.Path {
+		return
+	}
+	a.res.Diagnostics = append(a.res.Diagnostics, d)
+}
+
+// includes resolves the include statements of f (a file at path), parsing
+// included files depth first. stack holds the chain of including files.
+func (a *analysis) includes(path string, f *speciesfile.File, stack []string, depth int) {
+	a.order = append(a.order, path)
+	for _, inc := range f.Includes {
+		target, msg := a.resolveInclude(path, inc, stack, depth)
+		if path == a.res.Path {
+			a.res.Includes = append(a.res.Includes, ResolvedInclude{Decl: inc, Path: target})
+		}
+		if msg != "" {
+			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude, Message: msg})
+			continue
+		}
+		if _, seen := a.res.Files[target]; seen {
+			continue // included twice through different routes: one copy suffices
+		}
+		text, err := a.w.read(target)
+		if err != nil {
+			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
+				Message: fmt.Sprintf("cannot read included file %q: %v", inc.Path.Text, unwrapPathError(err))})
+			continue
+		}
+		if len(text) > maxFileSize {
+			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
+				Message: fmt.Sprintf("included file %q is larger than the 64 MiB limit", inc.Path.Text)})
+			continue
+		}
+		g := speciesfile.Parse(target, text)
+		a.res.Files[target] = g
+		if n := countErrors(g.Diags); n > 0 {
+			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityWarning, Code: CodeBadInclude,
+				Message: fmt.Sprintf("included file %q has %d syntax error(s); its broken statements are ignored", inc.Path.Text, n)})
+		}
+		a.includes(target, g, append(stack, target), depth+1)
+	}
+}
+
+// resolveInclude returns the cleaned target path of inc, or a message saying
+// why it cannot be followed.
+func (a *analysis) resolveInclude(from string, inc *speciesfile.Include, stack []string, depth int) (string, string) {
+	raw := strings.TrimSpace(inc.Path.Text)
+	if raw == "" {
+		return "", "include needs a file path"
+	}
+	if filepath.IsAbs(raw) {
+		return "", fmt.Sprintf("include path %q must be relative to the including file", raw)
+	}
+	target := filepath.Clean(filepath.Join(filepath.Dir(from), filepath.FromSlash(raw)))
+	if root := a.w.root; root != "" {
+		rel, err := filepath.Rel(root, target)
+		if err != nil || rel == ".." || strings.HasPrefix(rel, ".."+string(filepath.Separator)) {
+			return "", fmt.Sprintf("include path %q leaves the workspace %s", raw, root)
+		}
+	}
+	for _, s := range stack {
+		if s == target {
+			return "", fmt.Sprintf("include cycle: %s", cycleText(stack, target))
+		}
+	}
+	if depth+1 > maxIncludeDepth {
+		return "", fmt.Sprintf("includes nested deeper than %d files", maxIncludeDepth)
+	}
+	return target, ""
+}
+
+func cycleText(stack []string, target string) string {
+	var parts []string
+	for _, s := range stack {
+		parts = append(parts, filepath.Base(s))
+	}
+	return strings.Join(append(parts, filepath.Base(target)), " → ")
+}
+
+// groups collects user-defined group values from every file in scope.
+func (a *analysis) groups() {
+	seen := map[string]*Group{}
+	for _, path := range a.order {
+		for _, g := range a.res.Files[path].Groups {
+			name, err := benson.ParseGroupName(g.Name.Text)
+			if err != nil {
+				a.report(path, speciesfile.Diagnostic{Span: g.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
+					Message: fmt.Sprintf("group name %q is not Benson notation: %v", g.Name.Text, err)})
+				continue
+			}
+			if first, dup := seen[name]; dup {
+				a.report(path, speciesfile.Diagnostic{Span: g.Name.Span, Severity: speciesfile.SeverityWarning, Code: CodeDuplicateGroup,
+					Message: fmt.Sprintf("group %s is already defined; this definition is ignored", name),
+					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first definition"}}})
+				continue
+			}
+			gr := &Group{Name: name, Loc: Location{File: path, Span: g.Name.Span}, Decl: g}
+			seen[name] = gr
+			a.res.Groups = append(a.res.Groups, gr)
+		}
+	}
+}
+
+// userGroups converts the visible group statements to engine values. Groups
+// missing a value are skipped (the parser reports the missing line).
+func (a *analysis) userGroups() []benson.GroupValue {
+	var out []benson.GroupValue
+	for _, g := range a.res.Groups {
+		d := g.Decl
+		if d.Hf298 == nil || d.S298 == nil || len(d.Cp) == 0 {
+			continue
+		}
+		v := benson.GroupValue{Name: g.Name, Hf298: d.Hf298.SI, S298: d.S298.SI}
+		src := ""
+		if d.Source != nil {
+			src = d.Source.Text
+		}
+		v.Source = "user-defined (" + filepath.Base(g.Loc.File) + ")"
+		if src != "" {
+			v.Source = src + " (user-defined)"
+		}
+		T := make([]float64, len(d.Cp))
+		cp := make([]float64, len(d.Cp))
+		for i, p := range d.Cp {
+			T[i], cp[i] = p.T.SI, p.Cp.SI
+		}
+		for i, t := range benson.StdTemps {
+			v.Cp[i] = interpolate(T, cp, t)
+		}
+		out = append(out, v)
+	}
+	return out
+}
+
+// interpolate returns y(x) by linear interpolation in the points (xs, ys),
+// sorted or not, holding the end values outside their range.
+func interpolate(xs, ys []float64, x float64) float64 {
+	type pt struct{ x, y float64 }
+	pts := make([]pt, len(xs))
+	for i := range xs {
+		pts[i] = pt{xs[i], ys[i]}
+	}
+	sort.Slice(pts, func(i, j int) bool { return pts[i].x < pts[j].x })
+	if len(pts) == 0 {
+		return 0
+	}
+	if x <= pts[0].x {
+		return pts[0].y
+	}
+	for i := 1; i < len(pts); i++ {
+		if x <= pts[i].x {
+			f := (x - pts[i-1].x) / (pts[i].x - pts[i-1].x)
+			return pts[i-1].y + f*(pts[i].y-pts[i-1].y)
+		}
+	}
+	return pts[len(pts)-1].y
+}
+
+func countErrors(ds []speciesfile.Diagnostic) int {
+	n := 0
+	for _, d := range ds {
+		if d.Severity == speciesfile.SeverityError {
+			n++
+		}
+	}
+	return n
+}
+
+func sortDiagnostics(ds []speciesfile.Diagnostic) {
+	sort.SliceStable(ds, func(i, j int) bool {
+		if ds[i].Span.Start != ds[j].Span.Start {
+			return ds[i].Span.Start < ds[j].Span.Start
+		}
+		return ds[i].Code < ds[j].Code
+	})
+}
+
+// structure reads the species' SMILES, reporting bad-smiles at the exact
+// position inside the token.
+func (a *analysis) structure(path string, sp *Species) {
+	tok := sp.Decl.SMILES
+	if tok == nil {
+		return
+	}
+	m, err := molecule.ParseSMILES(tok.Text)
+	if err != nil {
+		sp.SMILESError = err
+		start, end := tok.Span.Start, tok.Span.End
+		if se, ok := err.(*molecule.SMILESError); ok {
+			start = tok.Span.Start + clamp(se.Pos, 0, len(tok.Text))
+			end = start + 1
+			if end > tok.Span.End {
+				end = tok.Span.End
+				if start == end && start > tok.Span.Start {
+					start--
+				}
+			}
+		}
+		a.report(path, speciesfile.Diagnostic{Span: speciesfile.Span{Start: start, End: end}, Severity: speciesfile.SeverityError,
+			Code: speciesfile.CodeBadSMILES, Message: fmt.Sprintf("bad SMILES for %s: %s", sp.Name, smilesReason(err))})
+		return
+	}
+	sp.Mol = m
+	sp.Formula = m.Formula()
+	sp.Composition = m.Composition()
+	sp.Charge = m.Charge()
+	sp.MolarMass = m.MolarMass()
+}
+
+// smilesReason strips the position prefix of a SMILES error (the diagnostic
+// carries the position).
+func smilesReason(err error) string {
+	if se, ok := err.(*molecule.SMILESError); ok {
+		return se.Msg
+	}
+	return err.Error()
+}
+
+func clamp(v, lo, hi int) int {
+	if v < lo {
+		return lo
+	}
+	if v > hi {
+		return hi
+	}
+	return v
+}

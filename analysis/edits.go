@@ -1,0 +1,157 @@
+package analysis
+
+import (
+	"errors"
+	"fmt"
+	"sort"
+	"strings"
+
+	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/speciesfile"
+)
+
+// Edit replaces the bytes of Span in File by NewText. An insertion has an
+// empty span. Every edit kiln makes is a minimal insertion or replacement.
+type Edit struct {
+	File    string
+	Span    speciesfile.Span
+	NewText string
+}
+
+// blockSource is the note written into an inserted block: where the numbers
+// came from.
+func (r *Result) blockSource(sp *Species) string {
+	stamp := r.Settings.Stamp
+	e := sp.Estimate
+	var b strings.Builder
+	b.WriteString("estimate")
+	if stamp != "" {
+		b.WriteString(", " + stamp)
+	}
+	if e.Library != "" {
+		fmt.Fprintf(&b, "; reference library %s: %s", e.Library, e.LibrarySource)
+		return b.String()
+	}
+	seen := map[string]bool{}
+	var srcs []string
+	for _, g := range e.Group.Groups {
+		if g.Source != "" && !seen[g.Source] {
+			seen[g.Source] = true
+			srcs = append(srcs, g.Source)
+		}
+	}
+	sort.Strings(srcs)
+	fmt.Fprintf(&b, "; Benson group additivity (groups: %s)", strings.Join(srcs, "; "))
+	if len(e.Group.Missing) > 0 {
+		b.WriteString("; approximated groups: ")
+		var ms []string
+		for _, m := range sortedMissing(e.Group) {
+			ms = append(ms, m.Group+"≈"+m.Approximation)
+		}
+		b.WriteString(strings.Join(ms, ", "))
+	}
+	return b.String()
+}
+
+// InsertThermoEdit returns the insertion of an estimated nasa7 block under
+// species sp, which must be declared in the analysed file and have no block.
+func (r *Result) InsertThermoEdit(sp *Species) (Edit, bool) {
+	if sp == nil || sp.Loc.File != r.Path || sp.Decl.NASA7 != nil || sp.Decl.Table != nil || sp.Estimate == nil || sp.Estimate.FitErr != nil {
+		return Edit{}, false
+	}
+	off, indent, nl := r.File.ThermoInsertion(sp.Decl)
+	text := r.blockText(sp, indent, nl)
+	if off > 0 && off <= len(r.File.Src) && !endsWithNewline(r.File.Src[:off]) {
+		text = nl + strings.TrimSuffix(text, nl)
+	}
+	return Edit{File: r.Path, Span: speciesfile.Span{Start: off, End: off}, NewText: text}, true
+}
+
+func endsWithNewline(b []byte) bool {
+	return len(b) > 0 && (b[len(b)-1] == '\n' || b[len(b)-1] == '\r')
+}
+
+func (r *Result) blockText(sp *Species, indent, nl string) string {
+	p := sp.Estimate.Poly
+	return speciesfile.FormatNASA7Block(indent, p.TLow, p.TMid, p.THigh, p.Low, p.High, r.blockSource(sp), nl)
+}
+
+// ReplaceThermoEdit returns the replacement of species sp's own thermo block
+// by the estimated nasa7 block.
+func (r *Result) ReplaceThermoEdit(sp *Species) (Edit, bool) {
+	if sp == nil || sp.Loc.File != r.Path || sp.Given == nil || sp.Estimate == nil || sp.Estimate.FitErr != nil {
+		return Edit{}, false
+	}
+	span := sp.Given.Span
+	src := r.File.Src
+	// The block span covers its lines; replace from the start of its first
+	// line so that the new block carries its own indentation.
+	start := span.Start
+	for start > 0 && src[start-1] != '\n' && src[start-1] != '\r' {
+		start--
+	}
+	indent := string(src[start:span.Start])
+	if strings.TrimLeft(indent, " \t") != "" {
+		start, indent = span.Start, ""
+	}
+	nl := "\n"
+	if strings.Contains(string(src), "\r\n") {
+		nl = "\r\n"
+	}
+	text := r.blockText(sp, indent, nl)
+	end := span.End
+	// Keep the line break that ends the block's last line in the file.
+	if end >= len(src) || (src[end] != '\n' && src[end] != '\r') {
+		if !endsWithNewline(src[:end]) {
+			text = strings.TrimSuffix(text, nl)
+		}
+	} else {
+		text = strings.TrimSuffix(text, nl)
+	}
+	if endsWithNewline(src[start:end]) {
+		text += nl
+	}
+	return Edit{File: r.Path, Span: speciesfile.Span{Start: start, End: end}, NewText: text}, true
+}
+
+// FillEdits returns an insertion for every species of the analysed file that
+// lacks a thermo block and can be estimated, in file order.
+func (r *Result) FillEdits() []Edit {
+	var out []Edit
+	for _, sp := range r.Species {
+		if e, ok := r.InsertThermoEdit(sp); ok {
+			out = append(out, e)
+		}
+	}
+	return out
+}
+
+// ErrOverlappingEdits is returned by ApplyEdits for edits that overlap.
+var ErrOverlappingEdits = errors.New("overlapping edits")
+
+// ApplyEdits applies edits (all for the same file) to src and returns the
+// new text. Edits at the same offset are applied in the order given.
+func ApplyEdits(src []byte, edits []Edit) ([]byte, error) {
+	es := append([]Edit(nil), edits...)
+	sort.SliceStable(es, func(i, j int) bool { return es[i].Span.Start < es[j].Span.Start })
+	var out []byte
+	last := 0
+	for _, e := range es {
+		if e.Span.Start < last || e.Span.End < e.Span.Start || e.Span.End > len(src) {
+			return nil, fmt.Errorf("applying edit at byte %d: %w", e.Span.Start, ErrOverlappingEdits)
+		}
+		out = append(out, src[last:e.Span.Start]...)
+		out = append(out, e.NewText...)
+		last = e.Span.End
+	}
+	return append(out, src[last:]...), nil
+}
+
+// StdTempKeys are the JSON keys of the standard temperatures.
+var StdTempKeys = func() [7]string {
+	var k [7]string
+	for i, T := range benson.StdTemps {
+		k[i] = fmt.Sprintf("%g", T)
+	}
+	return k
+}()

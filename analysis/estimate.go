@@ -1,0 +1,194 @@
+package analysis
+
+import (
+	"fmt"
+	"sort"
+	"strings"
+	"sync"
+
+	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/molecule"
+	"kiln.dev/kiln/engine/nasa"
+	"kiln.dev/kiln/engine/reflib"
+)
+
+// EstimateOptions are the per-species inputs of an estimate besides the structure.
+type EstimateOptions struct {
+	Multiplicity, Symmetry, OpticalIsomers int // 0 = computed from the structure
+	UserGroups                             []benson.GroupValue
+	TMid, THigh                            float64
+}
+
+// key identifies an estimate in the cache: the canonical structure and every
+// option that changes the numbers.
+func (o EstimateOptions) key(m *molecule.Molecule) string {
+	var b strings.Builder
+	fmt.Fprintf(&b, "%s|%s|%d|%d|%d|%g|%g", m.Canonical(), m.CanonicalStereo(), o.Multiplicity, o.Symmetry, o.OpticalIsomers, o.TMid, o.THigh)
+	for _, g := range o.UserGroups {
+		fmt.Fprintf(&b, "|%s:%g:%g:%v", g.Name, g.Hf298, g.S298, g.Cp)
+	}
+	return b.String()
+}
+
+// estimateCache remembers estimates by canonical structure and options so
+// that editing one species re-estimates only that species.
+type estimateCache struct {
+	lib *reflib.Library
+
+	mu sync.Mutex
+	m  map[string]*cacheEntry
+}
+
+type cacheEntry struct {
+	once sync.Once
+	est  *Estimate
+	err  error
+}
+
+func newEstimateCache() *estimateCache {
+	return &estimateCache{lib: reflib.New(), m: map[string]*cacheEntry{}}
+}
+
+// maxCacheEntries bounds the cache; past it the cache is cleared (estimates
+// are cheap to recompute, memory is not free).
+const maxCacheEntries = 200000
+
+func (c *estimateCache) get(m *molecule.Molecule, o EstimateOptions) (*Estimate, error) {
+	k := o.key(m)
+	c.mu.Lock()
+	e, ok := c.m[k]
+	if !ok {
+		if len(c.m) >= maxCacheEntries {
+			c.m = map[string]*cacheEntry{}
+		}
+		e = &cacheEntry{}
+		c.m[k] = e
+	}
+	c.mu.Unlock()
+	e.once.Do(func() { e.est, e.err = estimate(c.lib, m, o) })
+	return e.est, e.err
+}
+
+// EstimateMolecule estimates the thermochemistry of m: a reference-library
+// entry when the structure (and multiplicity) is one of the small species that
+// are not group additive, else Benson group additivity; then a NASA-7 fit.
+func (w *Workspace) EstimateMolecule(m *molecule.Molecule, o EstimateOptions) (*Estimate, error) {
+	return w.cache.get(m, o)
+}
+
+func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Estimate, error) {
+	if o.TMid == 0 {
+		o.TMid = 1000
+	}
+	if o.THigh == 0 {
+		o.THigh = 5000
+	}
+	if sp, ok := lib.Lookup(m, o.Multiplicity); ok {
+		e := &Estimate{
+			Library:       sp.Name,
+			LibrarySource: sp.Source,
+			Hf298:         sp.Hf298,
+			S298:          sp.S298,
+			Poly:          sp.Poly,
+		}
+		for i, T := range benson.StdTemps {
+			e.Cp[i] = sp.Poly.Cp(T)
+		}
+		return e, nil
+	}
+	g, err := benson.Estimate(m, benson.Options{
+		Multiplicity:   o.Multiplicity,
+		Symmetry:       o.Symmetry,
+		OpticalIsomers: o.OpticalIsomers,
+		UserGroups:     o.UserGroups,
+	})
+	if err != nil {
+		return nil, err
+	}
+	e := &Estimate{Group: g, Hf298: g.Hf298, S298: g.S298, Cp: g.Cp, Uncertainty: g.Uncertainty}
+	nAtoms, linear, rotors := shape(m)
+	cp0, cpInf := nasa.ClassicalLimits(nAtoms, linear, rotors)
+	T := benson.StdTemps[:]
+	e.Poly, e.Fit, e.FitErr = nasa.Fit(g.Hf298, g.S298, T, g.Cp[:], cp0, cpInf, nasa.FitOptions{TLow: 300, TMid: o.TMid, THigh: o.THigh})
+	return e, nil
+}
+
+// shape returns the total atom count (with hydrogens), whether the molecule
+// is linear and its number of internal rotors, as the classical Cp limit needs.
+//
+// Linear: one or two atoms, or every heavy atom sp-hybridised in a chain
+// (X≡C–H, O=C=O, HC≡C–C≡CH) — common practice. Internal rotors: single,
+// non-ring bonds between two heavy atoms that each carry at least one other
+// substituent (a methyl top counts; a bond to a terminal atom without
+// substituents does not).
+func shape(m *molecule.Molecule) (nAtoms int, linear bool, rotors int) {
+	heavy := len(m.Atoms)
+	h := 0
+	for _, a := range m.Atoms {
+		h += a.HCount
+	}
+	nAtoms = heavy + h
+	degree := func(i int) int { return len(m.Adj[i]) + m.Atoms[i].HCount }
+	switch {
+	case nAtoms <= 2:
+		linear = true
+	default:
+		linear = true
+		for i := range m.Atoms {
+			d := degree(i)
+			if d <= 1 {
+				continue
+			}
+			// An inner atom keeps a molecule linear only with two neighbours
+			// joined through a triple bond or two double bonds (sp centre).
+			if d != 2 {
+				linear = false
+				break
+			}
+			orders := 0
+			for _, b := range m.Adj[i] {
+				orders += m.Bonds[b].Order
+			}
+			orders += m.Atoms[i].HCount
+			if orders < 4 {
+				linear = false
+				break
+			}
+		}
+	}
+	inRing := ringBonds(m)
+	for bi, b := range m.Bonds {
+		if b.Order != 1 || b.Aromatic || inRing[bi] {
+			continue
+		}
+		if degree(b.A) > 1 && degree(b.B) > 1 {
+			rotors++
+		}
+	}
+	return nAtoms, linear, rotors
+}
+
+// sortedMissing lists the missing groups of an estimate by name.
+func sortedMissing(g *benson.Estimate) []benson.Missing {
+	if g == nil {
+		return nil
+	}
+	out := append([]benson.Missing(nil), g.Missing...)
+	sort.Slice(out, func(i, j int) bool { return out[i].Group < out[j].Group })
+	return out
+}
+
+// ringBonds marks the bonds (by index) that lie in a ring of the smallest set
+// of smallest rings.
+func ringBonds(m *molecule.Molecule) []bool {
+	out := make([]bool, len(m.Bonds))
+	for _, ring := range m.Rings() {
+		for k := range ring {
+			a, b := ring[k], ring[(k+1)%len(ring)]
+			if bi := m.BondBetween(a, b); bi >= 0 {
+				out[bi] = true
+			}
+		}
+	}
+	return out
+}

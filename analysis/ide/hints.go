@@ -1,0 +1,56 @@
+package ide
+
+import (
+	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/speciesfile"
+)
+
+// Hint is an inlay hint: Label shown at byte offset Offset.
+type Hint struct {
+	Offset int
+	Label  string
+}
+
+// InlayHints returns the hints for the statements of file that start in
+// [start, end): at the end of each species line
+// "ΔHf°298 −56.2 kcal/mol · S° 67.5 cal/(mol·K) (estimated|given)" and at the
+// end of each reaction line "ΔH°r −12.3 kcal/mol", in the display units.
+func InlayHints(x *Index, file string, start, end int, s analysis.Settings) []Hint {
+	f := x.File(file)
+	if f == nil {
+		return nil
+	}
+	u := displayUnits(s)
+	var out []Hint
+	for _, o := range x.Occurrences(file) {
+		if o.Span.Start < start || o.Span.Start >= end {
+			continue
+		}
+		switch o.Kind {
+		case KindSpeciesStmt:
+			sp := o.Species
+			if sp == nil || sp.Decl != o.SpeciesDecl {
+				continue // duplicate declaration: the first one carries the hint
+			}
+			v, word := inUse(sp)
+			if v == nil {
+				continue
+			}
+			out = append(out, Hint{Offset: lineEnd(f, o.SpeciesDecl.Name.Span.Start),
+				Label: "ΔHf°298 " + u.energy(v.hf) + " · S° " + u.entropy(v.s) + " (" + word + ")"})
+		case KindReactionStmt:
+			r := o.Reaction
+			if r == nil || r.DH298 == nil {
+				continue
+			}
+			out = append(out, Hint{Offset: lineEnd(f, o.ReactionDec.Keyword().Span.Start), Label: "ΔH°r " + u.energy(*r.DH298)})
+		}
+	}
+	return out
+}
+
+// spanOfLine returns the span of the line holding off, without terminator.
+func spanOfLine(f *speciesfile.File, off int) speciesfile.Span {
+	l := f.Lines.Line(off)
+	return speciesfile.Span{Start: f.Lines.LineStart(l), End: f.Lines.LineEnd(l)}
+}

@@ -1,0 +1,453 @@
+package ide
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strings"
+
+	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/nasa"
+	"kiln.dev/kiln/speciesfile"
+)
+
+// Caution is the line every species hover ends with.
+const Caution = "Group additivity typically errs by 1–3 kcal/mol; check against measured data, licensed engineering practice and local codes before relying on it."
+
+// T298 is the reference temperature, K.
+const T298 = 298.15
+
+// HoverResult is the text of a hover and the span it is about.
+type HoverResult struct {
+	Text string
+	Span speciesfile.Span
+}
+
+// Hover describes what is at byte offset off of file: a species
+// (declaration or use), a reaction, a user-defined group or an include. With
+// markdown false the text is plain (no tables or emphasis).
+func Hover(x *Index, file string, off int, s analysis.Settings, markdown bool) (HoverResult, bool) {
+	o, ok := x.At(file, off)
+	if !ok {
+		return HoverResult{}, false
+	}
+	w := &writer{md: markdown, u: displayUnits(s)}
+	switch o.Kind {
+	case KindSpeciesStmt, KindSpeciesDecl, KindSpeciesUse:
+		if o.Species == nil {
+			w.line(w.bold(o.Name) + " is not declared.")
+		} else {
+			w.species(o.Species)
+		}
+		if o.Kind == KindSpeciesStmt {
+			// Point at the name so the editor highlights something sensible.
+			o.Span = o.SpeciesDecl.Name.Span
+		}
+	case KindReactionStmt:
+		if o.Reaction == nil {
+			w.line(w.bold("reaction") + " " + w.code(o.Name))
+			w.line("Open this file to see its thermochemistry (it is analysed as an included file here).")
+		} else {
+			w.reaction(x, o.Reaction)
+		}
+	case KindGroupStmt, KindGroupDecl:
+		w.group(o)
+	case KindIncludePath:
+		if o.IncludePath == "" {
+			w.line("include " + w.code(o.Name) + " (unresolved)")
+		} else {
+			f := x.File(o.IncludePath)
+			w.line("include " + w.code(o.Name) + " → " + o.IncludePath)
+			if f != nil {
+				w.line(fmt.Sprintf("%d species, %d reactions, %d groups", len(f.Species), len(f.Reactions), len(f.Groups)))
+			}
+		}
+	default:
+		return HoverResult{}, false
+	}
+	return HoverResult{Text: strings.TrimRight(w.b.String(), "\n"), Span: o.Span}, true
+}
+
+// writer builds markdown or plain text.
+type writer struct {
+	b  strings.Builder
+	md bool
+	u  units
+}
+
+func (w *writer) line(s string) { w.b.WriteString(s); w.b.WriteString("\n\n") }
+
+func (w *writer) bold(s string) string {
+	if w.md {
+		return "**" + escapeMD(s) + "**"
+	}
+	return s
+}
+
+func (w *writer) code(s string) string {
+	if w.md {
+		return "`" + strings.ReplaceAll(s, "`", "'") + "`"
+	}
+	return s
+}
+
+func (w *writer) italic(s string) string {
+	if w.md {
+		return "_" + s + "_"
+	}
+	return s
+}
+
+// table writes a markdown table, or aligned plain-text rows.
+func (w *writer) table(header []string, rows [][]string) {
+	if w.md {
+		cell := func(s string) string { return strings.ReplaceAll(s, "|", "\\|") }
+		w.b.WriteString("|")
+		for _, h := range header {
+			w.b.WriteString(" " + cell(h) + " |")
+		}
+		w.b.WriteString("\n|")
+		for range header {
+			w.b.WriteString("---|")
+		}
+		w.b.WriteString("\n")
+		for _, r := range rows {
+			w.b.WriteString("|")
+			for _, c := range r {
+				w.b.WriteString(" " + cell(c) + " |")
+			}
+			w.b.WriteString("\n")
+		}
+		w.b.WriteString("\n")
+		return
+	}
+	width := make([]int, len(header))
+	all := append([][]string{header}, rows...)
+	for _, r := range all {
+		for i, c := range r {
+			if i < len(width) {
+				width[i] = max(width[i], len([]rune(c)))
+			}
+		}
+	}
+	for _, r := range all {
+		var parts []string
+		for i, c := range r {
+			parts = append(parts, c+strings.Repeat(" ", width[i]-len([]rune(c))))
+		}
+		w.b.WriteString(strings.TrimRight(strings.Join(parts, "  "), " ") + "\n")
+	}
+	w.b.WriteString("\n")
+}
+
+func escapeMD(s string) string {
+	r := strings.NewReplacer("*", "\\*", "_", "\\_", "`", "\\`", "[", "\\[", "]", "\\]", "<", "&lt;", ">", "&gt;")
+	return r.Replace(s)
+}
+
+// thermoValues are ΔHf°298 (J/mol), S°298 (J/(mol K)) and Cp at
+// benson.StdTemps (J/(mol K); NaN where unknown) of one thermo source.
+type thermoValues struct {
+	hf, s float64
+	cp    [7]float64
+	poly  *nasa.NASA7
+}
+
+func estimateValues(e *analysis.Estimate) *thermoValues {
+	if e == nil {
+		return nil
+	}
+	v := &thermoValues{hf: e.Hf298, s: e.S298, cp: e.Cp}
+	if e.FitErr == nil {
+		p := e.Poly
+		v.poly = &p
+	}
+	return v
+}
+
+func givenValues(g *analysis.GivenThermo) *thermoValues {
+	switch {
+	case g == nil:
+		return nil
+	case g.Poly != nil:
+		v := &thermoValues{hf: g.Poly.H(T298), s: g.Poly.S(T298), poly: g.Poly}
+		for i, T := range benson.StdTemps {
+			v.cp[i] = math.NaN()
+			if g.Poly.InRange(T) {
+				v.cp[i] = g.Poly.Cp(T)
+			}
+		}
+		return v
+	case g.Table != nil:
+		v := &thermoValues{hf: g.Table.Hf298, s: g.Table.S298}
+		for i, T := range benson.StdTemps {
+			v.cp[i] = tableCp(g.Table, T)
+		}
+		return v
+	}
+	return nil
+}
+
+// tableCp interpolates a thermo table's Cp linearly at T; NaN outside its range.
+func tableCp(t *analysis.Table, T float64) float64 {
+	type pt struct{ t, cp float64 }
+	pts := make([]pt, 0, len(t.T))
+	for i := range t.T {
+		if i < len(t.Cp) {
+			pts = append(pts, pt{t.T[i], t.Cp[i]})
+		}
+	}
+	sort.Slice(pts, func(i, j int) bool { return pts[i].t < pts[j].t })
+	for i := range pts {
+		if pts[i].t == T {
+			return pts[i].cp
+		}
+		if i > 0 && pts[i-1].t < T && T < pts[i].t {
+			f := (T - pts[i-1].t) / (pts[i].t - pts[i-1].t)
+			return pts[i-1].cp + f*(pts[i].cp-pts[i-1].cp)
+		}
+	}
+	return math.NaN()
+}
+
+// inUse returns the values the analysis uses for sp and a word saying where
+// they come from ("given" or "estimated"); nil when there are none.
+func inUse(sp *analysis.Species) (*thermoValues, string) {
+	switch sp.Source {
+	case analysis.SourceFile:
+		if v := givenValues(sp.Given); v != nil {
+			return v, "given"
+		}
+	case analysis.SourceEstimate:
+		if v := estimateValues(sp.Estimate); v != nil {
+			return v, "estimated"
+		}
+	}
+	return nil, ""
+}
+
+func (w *writer) species(sp *analysis.Species) {
+	head := w.bold(sp.Name)
+	if sp.Decl != nil && sp.Decl.SMILES != nil {
+		head += " " + w.code(sp.Decl.SMILES.Text)
+	}
+	w.line(head)
+	var facts []string
+	if sp.Formula != "" {
+		facts = append(facts, sp.Formula)
+	}
+	if sp.MolarMass > 0 {
+		facts = append(facts, num(sp.MolarMass, 2)+" g/mol")
+	}
+	if sp.Charge != 0 {
+		facts = append(facts, fmt.Sprintf("charge %+d", sp.Charge))
+	}
+	if len(facts) > 0 {
+		w.line(strings.Join(facts, " · "))
+	}
+	if sp.SMILESError != nil {
+		w.line("Structure not readable: " + sp.SMILESError.Error())
+	}
+	est, giv := estimateValues(sp.Estimate), givenValues(sp.Given)
+	if est == nil && giv == nil {
+		w.line("No thermochemistry: no thermo block in the file and no estimate for this structure.")
+		return
+	}
+	kj := units{kcal: false}
+	kc := units{kcal: true}
+	cols := []string{""}
+	var srcs []*thermoValues
+	if giv != nil {
+		cols = append(cols, "given")
+		srcs = append(srcs, giv)
+	}
+	if est != nil {
+		cols = append(cols, "estimated")
+		srcs = append(srcs, est)
+	}
+	if giv != nil && est != nil {
+		cols = append(cols, "given − estimated")
+	}
+	row := func(label string, f func(v *thermoValues) string, diff func(a, b *thermoValues) string) []string {
+		r := []string{label}
+		for _, v := range srcs {
+			r = append(r, f(v))
+		}
+		if len(srcs) == 2 {
+			r = append(r, diff(srcs[0], srcs[1]))
+		}
+		return r
+	}
+	var rows [][]string
+	rows = append(rows, row("ΔHf°298",
+		func(v *thermoValues) string { return kc.energy(v.hf) + " (" + kj.energy(v.hf) + ")" },
+		func(a, b *thermoValues) string { return w.u.energy(a.hf - b.hf) }))
+	rows = append(rows, row("S°298",
+		func(v *thermoValues) string { return w.u.entropy(v.s) },
+		func(a, b *thermoValues) string { return w.u.entropy(a.s - b.s) }))
+	for i, T := range benson.StdTemps {
+		i := i
+		rows = append(rows, row(fmt.Sprintf("Cp %g K", T),
+			func(v *thermoValues) string { return w.u.entropy(v.cp[i]) },
+			func(a, b *thermoValues) string { return w.u.entropy(a.cp[i] - b.cp[i]) }))
+	}
+	w.table(cols, rows)
+
+	if use, word := inUse(sp); use != nil && use.poly != nil {
+		p := use.poly
+		const n = 24
+		vs := make([]float64, n)
+		lo, hi := math.Inf(1), math.Inf(-1)
+		for i := range vs {
+			T := 300 + (p.THigh-300)*float64(i)/float64(n-1)
+			vs[i] = p.Cp(T)
+			lo, hi = math.Min(lo, vs[i]), math.Max(hi, vs[i])
+		}
+		w.line(fmt.Sprintf("Cp(T) %s K–%s K (%s polynomial): %s  %s … %s", num(300, 0), num(p.THigh, 0), word, sparkline(vs), w.u.entropy(lo), w.u.entropy(hi)))
+	}
+	if e := sp.Estimate; e != nil {
+		w.estimateDetail(e)
+	}
+	w.line(w.italic(Caution))
+}
+
+func (w *writer) estimateDetail(e *analysis.Estimate) {
+	if e.Library != "" {
+		w.line(fmt.Sprintf("Estimate from the reference library: %s (%s).", e.Library, e.LibrarySource))
+	}
+	g := e.Group
+	if g != nil {
+		terms := func(ts []benson.Term) [][]string {
+			var rows [][]string
+			for _, t := range ts {
+				rows = append(rows, []string{t.Name, fmt.Sprint(t.Count), w.u.energy(t.Hf298), w.u.entropy(t.S298), t.Source})
+			}
+			return rows
+		}
+		if len(g.Groups) > 0 {
+			w.line(w.bold("Groups"))
+			w.table([]string{"group", "count", "ΔHf°298", "S°298", "source"}, terms(g.Groups))
+		}
+		if len(g.Corrections) > 0 {
+			w.line(w.bold("Corrections"))
+			w.table([]string{"correction", "count", "ΔHf°298", "S°298", "source"}, terms(g.Corrections))
+		}
+		facts := []string{fmt.Sprintf("σ = %d", g.SymmetryNumber), fmt.Sprintf("optical isomers = %d", g.OpticalIsomers)}
+		if g.Multiplicity > 0 {
+			facts = append(facts, fmt.Sprintf("multiplicity = %d", g.Multiplicity))
+		}
+		w.line(strings.Join(facts, " · "))
+		for _, m := range g.Missing {
+			msg := "Missing group " + w.code(m.Group) + " approximated by " + w.code(m.Approximation)
+			if m.Note != "" {
+				msg += " (" + m.Note + ")"
+			}
+			w.line(msg)
+		}
+	}
+	if e.Uncertainty > 0 {
+		unc := "Uncertainty ±" + w.u.energy(e.Uncertainty)
+		if g != nil && g.Class != "" {
+			unc += " (class " + g.Class + ")"
+		}
+		w.line(unc)
+	}
+	if e.FitErr != nil {
+		w.line("NASA-7 fit failed: " + e.FitErr.Error())
+	} else if e.Fit.MaxCpResidual > 0 {
+		w.line("NASA-7 fit: worst Cp residual " + w.u.entropy(e.Fit.MaxCpResidual))
+	}
+}
+
+func (w *writer) reaction(x *Index, r *analysis.Reaction) {
+	w.line(w.bold("reaction") + " " + w.code(r.Equation))
+	switch {
+	case r.Balance == nil:
+		w.line("Balance: not checked (a species lacks a composition).")
+	case r.Balance.Balanced:
+		w.line("Balance: balanced ✓")
+	default:
+		w.line("Balance: unbalanced — " + r.Balance.Message())
+	}
+	if !r.Resolved {
+		w.line("Some species are not declared; thermochemistry is not computed.")
+	}
+	var rows [][]string
+	if r.DH298 != nil {
+		rows = append(rows, []string{"ΔH°r(298 K)", w.u.energy(*r.DH298)})
+	}
+	if r.DS298 != nil {
+		rows = append(rows, []string{"ΔS°r(298 K)", w.u.entropy(*r.DS298)})
+	}
+	if r.DG298 != nil {
+		rows = append(rows, []string{"ΔG°r(298 K)", w.u.energy(*r.DG298)})
+	}
+	keys := make([]string, 0, len(r.Kp))
+	for k := range r.Kp {
+		keys = append(keys, k)
+	}
+	sort.Slice(keys, func(i, j int) bool {
+		var a, b float64
+		fmt.Sscan(keys[i], &a)
+		fmt.Sscan(keys[j], &b)
+		return a < b
+	})
+	for _, k := range keys {
+		v := "—"
+		if p := r.Kp[k]; p != nil {
+			v = sci(*p)
+		}
+		rows = append(rows, []string{"Kp(" + k + " K)", v})
+	}
+	if r.ReverseRate1000 != nil {
+		rows = append(rows, []string{"k_r(1000 K)", sci(*r.ReverseRate1000) + " (cm3, mol, s)"})
+	}
+	if len(rows) > 0 {
+		w.table([]string{"quantity", "value"}, rows)
+	}
+	switch {
+	case r.Collision != nil:
+		w.line("Collision limit: exceeded — " + r.Collision.Message())
+	case r.Decl != nil && r.Decl.Rate != nil:
+		w.line("Collision limit: within the bound at 300–2500 K.")
+	default:
+		w.line("Collision limit: not checked (no rate parameters).")
+	}
+}
+
+func (w *writer) group(o Occurrence) {
+	name := o.Name
+	if o.Group != nil {
+		name = o.Group.Name
+	}
+	w.line(w.bold("group") + " " + w.code(name) + " (user-defined)")
+	d := o.GroupDecl
+	if d == nil {
+		return
+	}
+	var rows [][]string
+	if d.Hf298 != nil {
+		rows = append(rows, []string{"ΔHf°298", w.u.energy(d.Hf298.SI)})
+	}
+	if d.S298 != nil {
+		rows = append(rows, []string{"S°298", w.u.entropy(d.S298.SI)})
+	}
+	for _, p := range d.Cp {
+		rows = append(rows, []string{"Cp " + num(p.T.SI, 0) + " K", w.u.entropy(p.Cp.SI)})
+	}
+	if len(rows) > 0 {
+		w.table([]string{"quantity", "value"}, rows)
+	}
+	if d.Source != nil {
+		w.line("Source: " + d.Source.Text)
+	}
+	switch {
+	case o.Group == nil:
+		w.line("This group is not in effect (bad name or a duplicate definition).")
+	case len(o.Group.UsedBy) == 0:
+		w.line("Used by no species.")
+	default:
+		w.line("Used by: " + strings.Join(o.Group.UsedBy, ", "))
+	}
+}

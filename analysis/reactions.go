@@ -1,0 +1,352 @@
+package analysis
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strconv"
+	"strings"
+
+	"kiln.dev/kiln/engine/kinetics"
+	"kiln.dev/kiln/speciesfile"
+)
+
+// KeqTemperatures are the temperatures (K) at which Kp is reported, keyed as
+// in the summary JSON.
+var keqTemperatures = []struct {
+	Key string
+	T   float64
+}{{"298", T298}, {"1000", 1000}, {"1500", 1500}}
+
+// reactions resolves the reactions of the analysed file and records the uses
+// of species names in every file in scope.
+func (a *analysis) reactions() error {
+	seen := map[string]*speciesfile.Reaction{}
+	seenFile := map[string]string{}
+	for _, path := range a.order {
+		f := a.res.Files[path]
+		for _, d := range f.Reactions {
+			if err := a.ctx.Err(); err != nil {
+				return err
+			}
+			a.recordUses(path, d)
+			key := reactionKey(d)
+			if first, dup := seen[key]; dup {
+				if d.Duplicate == nil || first.Duplicate == nil {
+					line := a.res.Files[seenFile[key]].Lines.Position(first.Equation.Start).Line + 1
+					where := fmt.Sprintf("line %d", line)
+					if seenFile[key] != path {
+						where = fmt.Sprintf("%s:%d", shortPath(seenFile[key]), line)
+					}
+					a.report(path, speciesfile.Diagnostic{Span: d.Equation, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateReaction,
+						Message: fmt.Sprintf("this reaction repeats the one at %s; mark both with `duplicate` if both channels are intended", where),
+						Related: []speciesfile.Related{{File: seenFile[key], Span: first.Equation, Message: "first occurrence"}}})
+				}
+			} else {
+				seen[key] = d
+				seenFile[key] = path
+			}
+			if path != a.res.Path {
+				continue
+			}
+			a.res.Reactions = append(a.res.Reactions, a.reaction(path, d))
+		}
+	}
+	return nil
+}
+
+func (a *analysis) recordUses(path string, d *speciesfile.Reaction) {
+	add := func(t speciesfile.Token) {
+		a.res.Uses[t.Text] = append(a.res.Uses[t.Text], Location{File: path, Span: t.Span})
+	}
+	for _, t := range d.Reactants {
+		add(t.Name)
+	}
+	for _, t := range d.Products {
+		add(t.Name)
+	}
+	for _, e := range d.Efficiencies {
+		add(e.Name)
+	}
+	if c := falloffCollider(d); c != nil {
+		add(*c)
+	}
+}
+
+// falloffCollider returns the specific collider of a falloff "(+AR)" as a
+// token spanning the name, or nil for "(+M)" or no falloff.
+func falloffCollider(d *speciesfile.Reaction) *speciesfile.Token {
+	if d.Falloff == nil {
+		return nil
+	}
+	t := d.Falloff.Text
+	if !strings.HasPrefix(t, "(+") || !strings.HasSuffix(t, ")") {
+		return nil
+	}
+	name := t[2 : len(t)-1]
+	if name == "M" || name == "" {
+		return nil
+	}
+	start := d.Falloff.Span.Start + 2
+	return &speciesfile.Token{Span: speciesfile.Span{Start: start, End: start + len(name)}, Text: name}
+}
+
+// reactionKey identifies a reaction regardless of direction and term order.
+func reactionKey(d *speciesfile.Reaction) string {
+	side := func(ts []speciesfile.Term) string {
+		var parts []string
+		for _, t := range ts {
+			parts = append(parts, strconv.FormatFloat(t.Coeff, 'g', -1, 64)+" "+t.Name.Text)
+		}
+		sort.Strings(parts)
+		return strings.Join(parts, " + ")
+	}
+	l, r := side(d.Reactants), side(d.Products)
+	if r < l {
+		l, r = r, l
+	}
+	tb := ""
+	if d.ThirdBody {
+		tb = "+M"
+	}
+	if d.Falloff != nil {
+		tb = d.Falloff.Text
+	}
+	return l + " = " + r + " " + tb
+}
+
+// reaction computes balance, thermochemistry and rate checks of one reaction.
+func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
+	f := a.res.Files[path]
+	r := &Reaction{Decl: d, File: path, Line: f.Lines.Position(d.Span().Start).Line + 1, Equation: equationText(f, d), Resolved: true, Kp: map[string]*float64{}}
+	for _, k := range keqTemperatures {
+		r.Kp[k.Key] = nil
+	}
+	undeclared := func(t speciesfile.Token, what string) {
+		a.report(path, speciesfile.Diagnostic{Span: t.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUndeclaredSpecies,
+			Message: fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)})
+	}
+	for _, ts := range [][]speciesfile.Term{d.Reactants, d.Products} {
+		for _, t := range ts {
+			if _, ok := a.res.ByName[t.Name.Text]; !ok {
+				undeclared(t.Name, "species")
+				r.Resolved = false
+			}
+		}
+	}
+	for _, e := range d.Efficiencies {
+		if _, ok := a.res.ByName[e.Name.Text]; !ok {
+			undeclared(e.Name, "third-body efficiency for")
+		}
+	}
+	if c := falloffCollider(d); c != nil {
+		if _, ok := a.res.ByName[c.Text]; !ok {
+			undeclared(*c, "falloff collider")
+		}
+	}
+	if !r.Resolved {
+		return r
+	}
+	a.balance(path, d, r)
+	a.thermo(d, r)
+	a.rates(path, d, r)
+	return r
+}
+
+// equationText is the equation as written with runs of blanks collapsed.
+func equationText(f *speciesfile.File, d *speciesfile.Reaction) string {
+	return strings.Join(strings.Fields(string(f.Src[d.Equation.Start:d.Equation.End])), " ")
+}
+
+func (a *analysis) weighted(ts []speciesfile.Term) ([]kinetics.Weighted, bool) {
+	var out []kinetics.Weighted
+	for _, t := range ts {
+		sp := a.res.ByName[t.Name.Text]
+		if len(sp.Composition) == 0 {
+			return nil, false
+		}
+		out = append(out, kinetics.Weighted{Coeff: t.Coeff, Composition: sp.Composition, Charge: sp.Charge})
+	}
+	return out, true
+}
+
+func (a *analysis) balance(path string, d *speciesfile.Reaction, r *Reaction) {
+	re, ok1 := a.weighted(d.Reactants)
+	pr, ok2 := a.weighted(d.Products)
+	if !ok1 || !ok2 {
+		return // a species without structure or composition: nothing to balance against
+	}
+	b := kinetics.CheckBalance(re, pr)
+	r.Balance = &b
+	if !b.Balanced {
+		a.report(path, speciesfile.Diagnostic{Span: d.Equation, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUnbalancedReaction,
+			Message: "unbalanced reaction: " + b.Message()})
+	}
+}
+
+func (a *analysis) side(ts []speciesfile.Term) (kinetics.Side, bool) {
+	var out kinetics.Side
+	for _, t := range ts {
+		p := a.res.ByName[t.Name.Text].Thermo()
+		if p == nil {
+			return nil, false
+		}
+		out = append(out, kinetics.Term{Coeff: t.Coeff, Thermo: *p})
+	}
+	return out, true
+}
+
+func (a *analysis) thermo(d *speciesfile.Reaction, r *Reaction) {
+	re, ok1 := a.side(d.Reactants)
+	pr, ok2 := a.side(d.Products)
+	if !ok1 || !ok2 {
+		return
+	}
+	dh, ds, dg := kinetics.Delta(re, pr, T298)
+	r.DH298, r.DS298, r.DG298 = &dh, &ds, &dg
+	r.reactants, r.products = re, pr
+	for _, k := range keqTemperatures {
+		_, _, g := kinetics.Delta(re, pr, k.T)
+		kp := kinetics.Kp(g, k.T)
+		if !math.IsInf(kp, 0) && !math.IsNaN(kp) {
+			r.Kp[k.Key] = &kp
+		}
+	}
+}
+
+// Kc returns the equilibrium constant in (mol/cm3)^Δn at T, if the reaction's
+// thermochemistry is known.
+func (r *Reaction) Kc(T float64) (float64, bool) {
+	if r.reactants == nil {
+		return 0, false
+	}
+	_, _, g := kinetics.Delta(r.reactants, r.products, T)
+	return kinetics.Kc(kinetics.Kp(g, T), kinetics.DeltaN(r.reactants, r.products), T), true
+}
+
+// forward returns k_f(T) of the reaction's main rate in cm3, mol, s units.
+// For falloff reactions the main line is the high-pressure limit.
+func forward(d *speciesfile.Reaction) (func(T float64) float64, bool) {
+	if len(d.Pressures) > 0 {
+		var tab kinetics.PressureTable
+		for _, p := range d.Pressures {
+			if arr, ok := arrhenius(&p.Rate); ok {
+				tab = append(tab, kinetics.PressureRate{P: p.P.SI, Rate: arr})
+			}
+		}
+		if len(tab) > 0 {
+			return func(T float64) float64 { return tab.Rate(T, oneAtm) }, true
+		}
+	}
+	arr, ok := arrhenius(d.Rate)
+	if !ok {
+		return nil, false
+	}
+	return arr.Rate, true
+}
+
+// oneAtm (Pa) is the pressure at which a rate table is read for checks.
+const oneAtm = 101325
+
+func arrhenius(r *speciesfile.Arrhenius) (kinetics.Arrhenius, bool) {
+	if r == nil || r.A == nil {
+		return kinetics.Arrhenius{}, false
+	}
+	out := kinetics.Arrhenius{A: r.A.SI}
+	if r.N != nil {
+		out.N = r.N.SI
+	}
+	if r.Ea != nil {
+		out.Ea = r.Ea.SI
+	}
+	return out, true
+}
+
+func molecularity(ts []speciesfile.Term) int {
+	n := 0.0
+	for _, t := range ts {
+		n += t.Coeff
+	}
+	return int(math.Round(n))
+}
+
+func (a *analysis) sizes(ts []speciesfile.Term) (masses []float64, heavy []int) {
+	for _, t := range ts {
+		sp := a.res.ByName[t.Name.Text]
+		h := 0
+		for el, c := range sp.Composition {
+			if el != "H" {
+				h += c
+			}
+		}
+		for k := 0; k < int(math.Round(t.Coeff)); k++ {
+			masses = append(masses, sp.MolarMass)
+			heavy = append(heavy, h)
+		}
+	}
+	return masses, heavy
+}
+
+func (a *analysis) rates(path string, d *speciesfile.Reaction, r *Reaction) {
+	kf, ok := forward(d)
+	if !ok {
+		return
+	}
+	set := kinetics.CollisionSettings{Factor: a.set.CollisionFactor, TMin: 300, TMax: 2500}
+	third := 0
+	if d.ThirdBody {
+		third = 1
+	}
+	span := d.Equation
+	if d.Rate != nil {
+		span = d.Rate.Span
+	}
+	m, h := a.sizes(d.Reactants)
+	if v := kinetics.CollisionCheck(molecularity(d.Reactants)+third, m, h, kf, set); v != nil {
+		r.Collision = v
+		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
+			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K", v.Rate, v.Limit, rateUnits(v.Order), v.T)})
+	}
+	if !d.Reversible {
+		return
+	}
+	var kr func(T float64) float64
+	if arr, ok := arrhenius(d.Reverse); ok {
+		kr = arr.Rate
+	} else if r.reactants != nil {
+		kr = func(T float64) float64 {
+			kc, _ := r.Kc(T)
+			return kinetics.ReverseRate(kf(T), kc)
+		}
+	}
+	if kr == nil {
+		return
+	}
+	v := kr(1000)
+	if !math.IsNaN(v) && !math.IsInf(v, 0) {
+		r.ReverseRate1000 = &v
+	}
+	if r.Collision != nil {
+		return
+	}
+	m, h = a.sizes(d.Products)
+	if v := kinetics.CollisionCheck(molecularity(d.Products)+third, m, h, kr, set); v != nil {
+		v.Reverse = true
+		r.Collision = v
+		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
+			Message: fmt.Sprintf("reverse rate implied by thermochemistry, %.3g, exceeds the collision limit %.3g (%s) at %.0f K", v.Rate, v.Limit, rateUnits(v.Order), v.T)})
+	}
+}
+
+// rateUnits names the units of a rate constant of the given order.
+func rateUnits(order int) string {
+	switch order {
+	case 1:
+		return "s⁻¹"
+	case 2:
+		return "cm³/(mol·s)"
+	case 3:
+		return "cm⁶/(mol²·s)"
+	}
+	return fmt.Sprintf("order %d, cm, mol, s", order)
+}

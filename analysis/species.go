@@ -1,0 +1,476 @@
+package analysis
+
+import (
+	"errors"
+	"fmt"
+	"io/fs"
+	"math"
+	"sort"
+	"strings"
+	"unicode"
+
+	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/molecule"
+	"kiln.dev/kiln/engine/nasa"
+	"kiln.dev/kiln/speciesfile"
+)
+
+// species resolves every species declaration in scope: structure, given
+// thermo, estimate, and the checks that compare them.
+func (a *analysis) species() error {
+	user := a.userGroups()
+	byStructure := map[string]*Species{}
+	for _, path := range a.order {
+		f := a.res.Files[path]
+		for _, d := range f.Species {
+			if err := a.ctx.Err(); err != nil {
+				return err
+			}
+			sp := &Species{Name: d.Name.Text, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
+			if first, dup := a.res.ByName[sp.Name]; dup {
+				a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
+					Message: fmt.Sprintf("species %s is already declared (%s); this declaration is ignored", sp.Name, a.where(first.Loc)),
+					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first declaration of " + sp.Name}}})
+				continue
+			}
+			a.res.ByName[sp.Name] = sp
+			a.res.Species = append(a.res.Species, sp)
+
+			a.structure(path, sp)
+			if sp.Mol == nil && d.Composition != nil {
+				comp, err := ParseFormula(d.Composition.Text)
+				if err != nil {
+					a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
+						Message: fmt.Sprintf("composition %q: %v", d.Composition.Text, err)})
+				} else {
+					sp.Composition = comp
+					sp.Formula = HillFormula(comp)
+					sp.MolarMass = MolarMassOf(comp)
+				}
+			}
+			if sp.Mol != nil {
+				key := sp.Mol.Canonical() + " " + sp.Mol.CanonicalStereo() + fmt.Sprintf(" m%d", intAttr(d.Multiplicity))
+				if first, dup := byStructure[key]; dup {
+					a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
+						Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(first.Loc)),
+						Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: first.Name + " has this structure"}}})
+				} else {
+					byStructure[key] = sp
+				}
+				a.estimateSpecies(path, sp, user)
+			}
+			a.given(path, sp)
+			a.thermoChecks(path, sp)
+		}
+	}
+	for _, g := range a.res.Groups {
+		for _, sp := range a.res.Species {
+			if sp.Estimate != nil && sp.Estimate.Group != nil {
+				for _, t := range sp.Estimate.Group.Groups {
+					if t.Name == g.Name {
+						g.UsedBy = append(g.UsedBy, sp.Name)
+						break
+					}
+				}
+			}
+		}
+	}
+	return nil
+}
+
+func intAttr(a *speciesfile.IntAttr) int {
+	if a == nil {
+		return 0
+	}
+	return a.Value
+}
+
+// where describes a location for messages: "line 12" in the analysed file,
+// "common.kiln:12" elsewhere.
+func (a *analysis) where(l Location) string {
+	f := a.res.Files[l.File]
+	if f == nil {
+		return l.File
+	}
+	line := f.Lines.Position(l.Span.Start).Line + 1
+	if l.File == a.res.Path {
+		return fmt.Sprintf("line %d", line)
+	}
+	return fmt.Sprintf("%s:%d", shortPath(l.File), line)
+}
+
+func shortPath(p string) string {
+	i := strings.LastIndexAny(p, `/\`)
+	return p[i+1:]
+}
+
+func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.GroupValue) {
+	d := sp.Decl
+	e, err := a.w.EstimateMolecule(sp.Mol, EstimateOptions{
+		Multiplicity:   intAttr(d.Multiplicity),
+		Symmetry:       intAttr(d.Symmetry),
+		OpticalIsomers: intAttr(d.OpticalIsomers),
+		UserGroups:     user,
+		TMid:           a.set.TMid,
+		THigh:          a.set.THigh,
+	})
+	if err != nil {
+		sp.estimateErr = err
+		return
+	}
+	sp.Estimate = e
+	if miss := sortedMissing(e.Group); len(miss) > 0 {
+		var parts []string
+		for _, m := range miss {
+			s := m.Group
+			if m.Approximation != "" {
+				s += " (approximated by " + m.Approximation
+				if m.Note != "" {
+					s += ": " + m.Note
+				}
+				s += ")"
+			}
+			parts = append(parts, s)
+		}
+		a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
+			Message: fmt.Sprintf("%s: no value for group %s; define it with a `group` statement to replace the approximation", sp.Name, strings.Join(parts, ", "))})
+	}
+}
+
+// given converts the species' own thermo block, if any.
+func (a *analysis) given(path string, sp *Species) {
+	d := sp.Decl
+	switch {
+	case d.NASA7 != nil:
+		b := d.NASA7
+		p := nasa.NASA7{TLow: b.TLow.Value, TMid: b.TMid.Value, THigh: b.THigh.Value}
+		for i := 0; i < 7; i++ {
+			p.Low[i] = b.Low[i].Value
+			p.High[i] = b.High[i].Value
+		}
+		sp.Given = &GivenThermo{Poly: &p, Span: b.Span}
+	case d.Table != nil:
+		t := d.Table
+		if t.Hf298 == nil || t.S298 == nil {
+			return // the parser reports the missing line
+		}
+		tab := &Table{Hf298: t.Hf298.SI, S298: t.S298.SI}
+		for _, p := range t.Cp {
+			tab.T = append(tab.T, p.T.SI)
+			tab.Cp = append(tab.Cp, p.Cp.SI)
+		}
+		g := &GivenThermo{Table: tab, Span: t.Span}
+		if len(tab.T) >= 2 {
+			n, lin, rot := a.shapeOf(sp)
+			cp0, cpInf := nasa.ClassicalLimits(n, lin, rot)
+			if p, _, err := nasa.Fit(tab.Hf298, tab.S298, tab.T, tab.Cp, cp0, cpInf, nasa.FitOptions{TLow: 300, TMid: a.set.TMid, THigh: a.set.THigh}); err == nil {
+				g.Poly = &p
+				g.Fitted = true
+			}
+		}
+		sp.Given = g
+	default:
+		return
+	}
+	sp.Source = SourceFile
+}
+
+// shapeOf returns the atom count, linearity and rotor count of a species,
+// from its structure or, failing that, its composition (taken as non-linear
+// and without rotors).
+func (a *analysis) shapeOf(sp *Species) (int, bool, int) {
+	if sp.Mol != nil {
+		return shape(sp.Mol)
+	}
+	n := 0
+	for _, c := range sp.Composition {
+		n += c
+	}
+	if n == 0 {
+		n = 3
+	}
+	return n, n <= 2, 0
+}
+
+// thermoChecks compares given and estimated thermo and reports blocks that
+// are unsound or missing.
+func (a *analysis) thermoChecks(path string, sp *Species) {
+	d := sp.Decl
+	if sp.Given == nil {
+		if sp.Estimate != nil {
+			sp.Source = SourceEstimate
+			a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeMissingThermo,
+				Message: fmt.Sprintf("%s: no thermo block; estimated %s", sp.Name, a.thermoSummary(sp.Estimate.Hf298, sp.Estimate.S298))})
+			return
+		}
+		if sp.SMILESError != nil {
+			return // bad-smiles already says what to fix
+		}
+		why := "it has no structure (SMILES) to estimate from"
+		if sp.estimateErr != nil {
+			why = "kiln cannot estimate it: " + sp.estimateErr.Error()
+		}
+		a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeMissingThermo,
+			Message: fmt.Sprintf("%s has no thermo block and %s; add a nasa7 or thermo-table block", sp.Name, why)})
+		return
+	}
+	g := sp.Given
+	if g.Poly != nil && !g.Fitted {
+		cpMax := 0.0
+		if sp.Mol != nil || len(sp.Composition) > 0 {
+			n, lin, rot := a.shapeOf(sp)
+			_, cpInf := nasa.ClassicalLimits(n, lin, 0)
+			_ = rot // every rotor may be a stiff vibration at high T: bound by the all-vibration limit
+			cpMax = cpInf * 1.02
+		}
+		for _, p := range nasa.Check(*g.Poly, nasa.Tolerances{}, cpMax) {
+			code := speciesfile.CodeNonphysicalThermo
+			if p.Kind == "discontinuity" {
+				code = speciesfile.CodeThermoDiscontinuity
+			}
+			span := d.NASA7.Span
+			switch p.Part {
+			case "low":
+				span = d.NASA7.LowSpan
+			case "high":
+				span = d.NASA7.HighSpan
+			case "ranges":
+				span = speciesfile.Span{Start: d.NASA7.TLow.Tok.Span.Start, End: d.NASA7.THigh.Tok.Span.End}
+			}
+			a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: code, Message: sp.Name + ": " + p.Message})
+		}
+	}
+	if g.Table != nil {
+		a.tableChecks(path, sp)
+	}
+	if sp.Estimate == nil {
+		return
+	}
+	hf, s, ok := sp.givenAt298()
+	if !ok {
+		return
+	}
+	dh, ds := hf-sp.Estimate.Hf298, s-sp.Estimate.S298
+	var parts []string
+	if math.Abs(dh) > a.set.MismatchHf298 {
+		parts = append(parts, fmt.Sprintf("ΔHf°298 given %s vs estimated %s (difference %s)",
+			a.energy(hf), a.energy(sp.Estimate.Hf298), a.energy(dh)))
+	}
+	if math.Abs(ds) > a.set.MismatchS298 {
+		parts = append(parts, fmt.Sprintf("S°298 given %s vs estimated %s (difference %s)",
+			a.entropy(s), a.entropy(sp.Estimate.S298), a.entropy(ds)))
+	}
+	if len(parts) > 0 {
+		a.report(path, speciesfile.Diagnostic{Span: g.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+			Message: fmt.Sprintf("%s: %s; thresholds %s and %s", sp.Name, strings.Join(parts, "; "), a.energy(a.set.MismatchHf298), a.entropy(a.set.MismatchS298))})
+	}
+}
+
+// tableChecks reports unsound tabulated Cp values.
+func (a *analysis) tableChecks(path string, sp *Species) {
+	t := sp.Decl.Table
+	pts := append([]speciesfile.CpPoint(nil), t.Cp...)
+	sort.SliceStable(pts, func(i, j int) bool { return pts[i].T.SI < pts[j].T.SI })
+	for i, p := range pts {
+		if p.Cp.SI <= 0 {
+			a.report(path, speciesfile.Diagnostic{Span: p.Cp.Tok.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+				Message: fmt.Sprintf("%s: Cp at %g K is not positive", sp.Name, p.T.SI)})
+		}
+		if p.T.SI <= 0 {
+			a.report(path, speciesfile.Diagnostic{Span: p.T.Tok.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+				Message: fmt.Sprintf("%s: temperature %g K is not positive", sp.Name, p.T.SI)})
+		}
+		if i > 0 && p.Cp.SI < pts[i-1].Cp.SI-0.01*math.Abs(pts[i-1].Cp.SI) {
+			a.report(path, speciesfile.Diagnostic{Span: p.Cp.Tok.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+				Message: fmt.Sprintf("%s: Cp falls from %s at %g K to %s at %g K", sp.Name, a.entropy(pts[i-1].Cp.SI), pts[i-1].T.SI, a.entropy(p.Cp.SI), p.T.SI)})
+		}
+	}
+	if t.S298 != nil && t.S298.SI <= 0 {
+		a.report(path, speciesfile.Diagnostic{Span: t.S298.Tok.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+			Message: fmt.Sprintf("%s: S°298 must be positive", sp.Name)})
+	}
+}
+
+// givenAt298 returns ΔHf°298 and S°298 of the species' own block.
+func (sp *Species) givenAt298() (hf, s float64, ok bool) {
+	switch {
+	case sp.Given == nil:
+		return 0, 0, false
+	case sp.Given.Table != nil:
+		return sp.Given.Table.Hf298, sp.Given.Table.S298, true
+	case sp.Given.Poly != nil:
+		return sp.Given.Poly.H(T298), sp.Given.Poly.S(T298), true
+	}
+	return 0, 0, false
+}
+
+// T298 is the reference temperature, 298.15 K.
+const T298 = 298.15
+
+// Thermo returns the polynomial the analysis uses for the species (the
+// file's where given, else the estimate's), or nil.
+func (sp *Species) Thermo() *nasa.NASA7 {
+	switch sp.Source {
+	case SourceFile:
+		return sp.Given.Poly
+	case SourceEstimate:
+		if sp.Estimate.FitErr != nil {
+			return nil
+		}
+		return &sp.Estimate.Poly
+	}
+	return nil
+}
+
+// Hf298S298 returns the 298 K values the analysis uses for the species.
+func (sp *Species) Hf298S298() (hf, s float64, ok bool) {
+	switch sp.Source {
+	case SourceFile:
+		return sp.givenAt298()
+	case SourceEstimate:
+		return sp.Estimate.Hf298, sp.Estimate.S298, true
+	}
+	return 0, 0, false
+}
+
+// CpAt returns Cp at the standard temperatures from the thermo the analysis
+// uses: the estimate's group values, or the file's block evaluated.
+func (sp *Species) CpAt() ([7]float64, bool) {
+	var out [7]float64
+	switch sp.Source {
+	case SourceEstimate:
+		return sp.Estimate.Cp, true
+	case SourceFile:
+		if sp.Given.Table != nil {
+			for i, T := range benson.StdTemps {
+				out[i] = interpolate(sp.Given.Table.T, sp.Given.Table.Cp, T)
+			}
+			return out, len(sp.Given.Table.T) > 0
+		}
+		for i, T := range benson.StdTemps {
+			out[i] = sp.Given.Poly.Cp(T)
+		}
+		return out, true
+	}
+	return out, false
+}
+
+// energy formats an energy (J/mol) in the display units.
+func (a *analysis) energy(v float64) string { return FormatEnergy(v, a.set.DisplayUnits) }
+
+// entropy formats an entropy or heat capacity (J/(mol K)) in the display units.
+func (a *analysis) entropy(v float64) string { return FormatEntropy(v, a.set.DisplayUnits) }
+
+func (a *analysis) thermoSummary(hf, s float64) string {
+	return fmt.Sprintf("ΔHf°298 = %s, S°298 = %s", a.energy(hf), a.entropy(s))
+}
+
+// FormatEnergy writes v (J/mol) as "-56.21 kcal/mol" or "-235.2 kJ/mol".
+func FormatEnergy(v float64, units string) string {
+	if units == "kJ/mol" {
+		return fmt.Sprintf("%.1f kJ/mol", v/1000)
+	}
+	return fmt.Sprintf("%.2f kcal/mol", v/4184)
+}
+
+// FormatEntropy writes v (J/(mol K)) as "67.54 cal/(mol·K)" or "282.6 J/(mol·K)".
+func FormatEntropy(v float64, units string) string {
+	if units == "kJ/mol" {
+		return fmt.Sprintf("%.1f J/(mol·K)", v)
+	}
+	return fmt.Sprintf("%.2f cal/(mol·K)", v/4.184)
+}
+
+// ParseFormula reads an element formula such as "C10H8" or "CH3O2" into
+// element counts. Element symbols are one capital letter and an optional
+// lower-case one; counts default to 1.
+func ParseFormula(s string) (map[string]int, error) {
+	out := map[string]int{}
+	rs := []rune(s)
+	if len(rs) == 0 {
+		return nil, errors.New("empty formula")
+	}
+	for i := 0; i < len(rs); {
+		if !unicode.IsUpper(rs[i]) || rs[i] > unicode.MaxASCII {
+			return nil, fmt.Errorf("expected an element symbol at character %d, found %q", i+1, rs[i])
+		}
+		el := string(rs[i])
+		i++
+		if i < len(rs) && unicode.IsLower(rs[i]) && rs[i] <= unicode.MaxASCII {
+			el += string(rs[i])
+			i++
+		}
+		if _, known := atomicWeight[el]; !known {
+			return nil, fmt.Errorf("unknown element %q", el)
+		}
+		n := 0
+		for i < len(rs) && rs[i] >= '0' && rs[i] <= '9' {
+			n = n*10 + int(rs[i]-'0')
+			if n > 1e6 {
+				return nil, fmt.Errorf("count of %s is too large", el)
+			}
+			i++
+		}
+		if n == 0 {
+			n = 1
+		}
+		out[el] += n
+	}
+	return out, nil
+}
+
+// HillFormula writes element counts in Hill order: C, then H, then the rest
+// alphabetically; with no carbon, all alphabetically.
+func HillFormula(comp map[string]int) string {
+	var els []string
+	for el, n := range comp {
+		if n != 0 {
+			els = append(els, el)
+		}
+	}
+	_, hasC := comp["C"]
+	sort.Slice(els, func(i, j int) bool {
+		rank := func(e string) int {
+			if hasC && e == "C" {
+				return 0
+			}
+			if hasC && e == "H" {
+				return 1
+			}
+			return 2
+		}
+		ri, rj := rank(els[i]), rank(els[j])
+		if ri != rj {
+			return ri < rj
+		}
+		return els[i] < els[j]
+	})
+	var b strings.Builder
+	for _, el := range els {
+		b.WriteString(el)
+		if comp[el] != 1 {
+			fmt.Fprintf(&b, "%d", comp[el])
+		}
+	}
+	return b.String()
+}
+
+// MolarMassOf returns the molar mass (g/mol) of an element composition using
+// the standard atomic weights of molecule.AtomicWeight.
+func MolarMassOf(comp map[string]int) float64 {
+	m := 0.0
+	for el, n := range comp {
+		m += float64(n) * atomicWeight[el]
+	}
+	return m
+}
+
+var atomicWeight = molecule.AtomicWeights()
+
+func unwrapPathError(err error) error {
+	var pe *fs.PathError
+	if errors.As(err, &pe) {
+		return pe.Err
+	}
+	return err
+}

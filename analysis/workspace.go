@@ -1,0 +1,129 @@
+package analysis
+
+import (
+	"context"
+	"sync"
+
+	"kiln.dev/kiln/speciesfile"
+)
+
+// Loader reads a file the workspace does not hold in memory (an included
+// file that no editor has open). The CLI and the server pass a function that
+// reads the disk; tests pass a map.
+type Loader func(path string) ([]byte, error)
+
+// Workspace holds the text of the files being analysed and a cache of
+// estimates keyed by canonical structure. It is safe for concurrent use.
+type Workspace struct {
+	root string
+	load Loader
+
+	mu       sync.Mutex
+	settings Settings
+	overlay  map[string][]byte // open documents: path → text
+	cache    *estimateCache
+}
+
+// Result is the analysis of one file together with the files it includes.
+type Result struct {
+	Path     string
+	Settings Settings
+	File     *speciesfile.File
+	// Files holds the parsed file and every file it includes, by path.
+	Files map[string]*speciesfile.File
+	// Diagnostics of Path only, sorted by offset.
+	Diagnostics []speciesfile.Diagnostic
+	// Species declared in Path and its includes, in declaration order; the
+	// first declaration of a name wins in ByName.
+	Species []*Species
+	ByName  map[string]*Species
+	// Reactions declared in Path.
+	Reactions []*Reaction
+	// Groups are the user-defined group values visible from Path.
+	Groups []*Group
+	// Uses lists, per species name, every place a name is used in a reaction
+	// (terms, efficiencies, falloff collider) in Path and its includes.
+	Uses map[string][]Location
+	// Includes lists the include statements of Path with their resolved path
+	// ("" when unresolved).
+	Includes []ResolvedInclude
+}
+
+// ResolvedInclude is an include statement and the path it resolved to.
+type ResolvedInclude struct {
+	Decl *speciesfile.Include
+	Path string
+}
+
+// Group is a user-defined Benson group value from a `group` statement.
+type Group struct {
+	Name   string // normalised Benson notation
+	Loc    Location
+	Decl   *speciesfile.Group
+	UsedBy []string // species names whose estimate uses this group
+}
+
+// NewWorkspace returns a workspace rooted at root (includes must stay inside
+// it) that reads files it does not hold through load.
+func NewWorkspace(root string, load Loader, s Settings) *Workspace {
+	return &Workspace{root: root, load: load, settings: s, overlay: map[string][]byte{}, cache: newEstimateCache()}
+}
+
+// Root returns the workspace root directory.
+func (w *Workspace) Root() string { return w.root }
+
+// Settings returns the current settings.
+func (w *Workspace) Settings() Settings {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	return w.settings
+}
+
+// SetSettings replaces the settings; later analyses use them.
+func (w *Workspace) SetSettings(s Settings) {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	w.settings = s
+}
+
+// SetOverlay records the in-memory text of a file (an open document).
+func (w *Workspace) SetOverlay(path string, text []byte) {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	w.overlay[path] = text
+}
+
+// CloseOverlay forgets the in-memory text of a file; later reads go to the Loader.
+func (w *Workspace) CloseOverlay(path string) {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	delete(w.overlay, path)
+}
+
+// Overlays returns the paths of the files held in memory.
+func (w *Workspace) Overlays() []string {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	out := make([]string, 0, len(w.overlay))
+	for p := range w.overlay {
+		out = append(out, p)
+	}
+	return out
+}
+
+// read returns the text of path from the overlay or the loader.
+func (w *Workspace) read(path string) ([]byte, error) {
+	w.mu.Lock()
+	text, ok := w.overlay[path]
+	w.mu.Unlock()
+	if ok {
+		return text, nil
+	}
+	return w.load(path)
+}
+
+// Analyze parses path and its includes and computes everything about it.
+// It returns an error only when path itself cannot be read or ctx is done.
+func (w *Workspace) Analyze(ctx context.Context, path string) (*Result, error) {
+	return w.analyze(ctx, path)
+}

@@ -1,0 +1,135 @@
+package main
+
+import (
+	"context"
+	"encoding/json"
+	"fmt"
+	"sort"
+
+	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/speciesfile"
+)
+
+// checkDiag is one diagnostic of `kiln check --format json`. Lines and
+// columns are 1-based; columns count Unicode code points.
+type checkDiag struct {
+	File      string `json:"file"`
+	Line      int    `json:"line"`
+	Column    int    `json:"column"`
+	EndLine   int    `json:"end_line"`
+	EndColumn int    `json:"end_column"`
+	Severity  string `json:"severity"`
+	Code      string `json:"code"`
+	Message   string `json:"message"`
+}
+
+func runCheck(e env, args []string) (int, error) {
+	flags, files, err := parseArgs(args, withSettings(flagSpec{"format": true}))
+	if err != nil {
+		return 0, err
+	}
+	format := flags["format"]
+	if format == "" {
+		format = "text"
+	}
+	if format != "text" && format != "json" {
+		return 0, usagef("--format must be text or json, not %q", format)
+	}
+	if len(files) == 0 {
+		return 0, usagef("check needs at least one FILE")
+	}
+	set, err := settingsFrom(e, flags)
+	if err != nil {
+		return 0, err
+	}
+	var out []checkDiag
+	done := map[string]bool{}
+	for _, file := range files {
+		ws, abs, err := newWorkspace(file, flags, set)
+		if err != nil {
+			return 0, err
+		}
+		ds, err := checkFile(ws, abs, done)
+		if err != nil {
+			return 0, err
+		}
+		out = append(out, ds...)
+	}
+	sort.SliceStable(out, func(i, j int) bool {
+		a, b := out[i], out[j]
+		if a.File != b.File {
+			return a.File < b.File
+		}
+		if a.Line != b.Line {
+			return a.Line < b.Line
+		}
+		if a.Column != b.Column {
+			return a.Column < b.Column
+		}
+		return a.Code < b.Code
+	})
+	errors := 0
+	for _, d := range out {
+		if d.Severity == speciesfile.SeverityError.String() {
+			errors++
+		}
+	}
+	if format == "json" {
+		if out == nil {
+			out = []checkDiag{}
+		}
+		enc := json.NewEncoder(e.stdout)
+		enc.SetIndent("", "  ")
+		if err := enc.Encode(out); err != nil {
+			return 0, fmt.Errorf("writing output: %w", err)
+		}
+	} else {
+		for _, d := range out {
+			fmt.Fprintf(e.stdout, "%s:%d:%d: %s: %s [%s]\n", d.File, d.Line, d.Column, d.Severity, d.Message, d.Code)
+		}
+	}
+	if errors > 0 {
+		return exitProblems, nil
+	}
+	return exitOK, nil
+}
+
+// checkFile analyses path and every file it includes (each once per run) and
+// returns their diagnostics.
+func checkFile(ws *analysis.Workspace, path string, done map[string]bool) ([]checkDiag, error) {
+	if done[path] {
+		return nil, nil
+	}
+	done[path] = true
+	res, err := ws.Analyze(context.Background(), path)
+	if err != nil {
+		return nil, err
+	}
+	out := diagsOf(res)
+	for _, inc := range res.Includes {
+		if inc.Path == "" || done[inc.Path] {
+			continue
+		}
+		// An unreadable include is reported on its include line already.
+		more, err := checkFile(ws, inc.Path, done)
+		if err != nil {
+			continue
+		}
+		out = append(out, more...)
+	}
+	return out, nil
+}
+
+func diagsOf(res *analysis.Result) []checkDiag {
+	lines := res.File.Lines
+	name := displayPath(res.Path)
+	out := make([]checkDiag, 0, len(res.Diagnostics))
+	for _, d := range res.Diagnostics {
+		s, t := lines.Position(d.Span.Start), lines.Position(d.Span.End)
+		out = append(out, checkDiag{
+			File: name, Line: s.Line + 1, Column: s.Char + 1, EndLine: t.Line + 1, EndColumn: t.Char + 1,
+			Severity: d.Severity.String(), Code: d.Code, Message: d.Message,
+		})
+	}
+	return out
+}

@@ -1,0 +1,222 @@
+package main
+
+import (
+	"bytes"
+	"context"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"strings"
+
+	"kiln.dev/kiln/analysis"
+)
+
+func runFill(e env, args []string) (int, error) {
+	flags, files, err := parseArgs(args, withSettings(flagSpec{"dry-run": false}))
+	if err != nil {
+		return 0, err
+	}
+	if len(files) != 1 {
+		return 0, usagef("fill needs exactly one FILE")
+	}
+	set, err := settingsFrom(e, flags)
+	if err != nil {
+		return 0, err
+	}
+	ws, abs, err := newWorkspace(files[0], flags, set)
+	if err != nil {
+		return 0, err
+	}
+	res, err := ws.Analyze(context.Background(), abs)
+	if err != nil {
+		return 0, err
+	}
+	edits := res.FillEdits()
+	if len(edits) == 0 {
+		fmt.Fprintf(e.stderr, "kiln fill: %s: every species that kiln can estimate already has thermo\n", files[0])
+		return exitOK, nil
+	}
+	src := res.File.Src
+	out, err := analysis.ApplyEdits(src, edits)
+	if err != nil {
+		return 0, err
+	}
+	if flags["dry-run"] == "true" {
+		name := filepath.ToSlash(displayPath(abs))
+		writeUnifiedDiff(e.stdout, name, src, edits)
+		return exitOK, nil
+	}
+	if err := writeAtomic(abs, out); err != nil {
+		return 0, err
+	}
+	fmt.Fprintf(e.stderr, "kiln fill: %s: inserted %d thermo block(s)\n", files[0], len(edits))
+	return exitOK, nil
+}
+
+// writeAtomic replaces path by data: it writes a temporary file in the same
+// directory, syncs it and renames it over path, so readers see the old or the
+// new file and never a mixture. The temporary file is removed on failure and
+// the original keeps its permissions.
+func writeAtomic(path string, data []byte) (err error) {
+	st, err := os.Stat(path)
+	if err != nil {
+		return fmt.Errorf("writing %s: %w", path, err)
+	}
+	tmp, err := os.CreateTemp(filepath.Dir(path), "."+filepath.Base(path)+".kiln-*")
+	if err != nil {
+		return fmt.Errorf("writing %s: %w", path, err)
+	}
+	defer func() {
+		if err != nil {
+			tmp.Close()
+			os.Remove(tmp.Name())
+		}
+	}()
+	if _, err = tmp.Write(data); err != nil {
+		return fmt.Errorf("writing %s: %w", path, err)
+	}
+	if err = tmp.Chmod(st.Mode().Perm()); err != nil {
+		return fmt.Errorf("writing %s: %w", path, err)
+	}
+	if err = tmp.Sync(); err != nil {
+		return fmt.Errorf("writing %s: %w", path, err)
+	}
+	if err = tmp.Close(); err != nil {
+		return fmt.Errorf("writing %s: %w", path, err)
+	}
+	if err = os.Rename(tmp.Name(), path); err != nil {
+		return fmt.Errorf("writing %s: %w", path, err)
+	}
+	return nil
+}
+
+// splitLines splits text into lines that keep their terminators.
+func splitLines(b []byte) []string {
+	var out []string
+	for len(b) > 0 {
+		i := bytes.IndexAny(b, "\r\n")
+		if i < 0 {
+			out = append(out, string(b))
+			break
+		}
+		j := i + 1
+		if b[i] == '\r' && j < len(b) && b[j] == '\n' {
+			j++
+		}
+		out = append(out, string(b[:j]))
+		b = b[j:]
+	}
+	return out
+}
+
+// lineOf returns the 0-based line holding byte offset off of src.
+func lineOf(lines []string, off int) int {
+	n := 0
+	for i, l := range lines {
+		if off < n+len(l) {
+			return i
+		}
+		n += len(l)
+	}
+	return len(lines)
+}
+
+// writeUnifiedDiff prints the edits to src as a unified diff with three lines
+// of context. Each edit replaces whole lines: the lines its span touches.
+func writeUnifiedDiff(w io.Writer, name string, src []byte, edits []analysis.Edit) {
+	old := splitLines(src)
+	type hunk struct {
+		from, to int      // old lines [from, to) replaced
+		repl     []string // new lines
+	}
+	var hs []hunk
+	for _, e := range edits {
+		from := lineOf(old, e.Span.Start)
+		to := from
+		if e.Span.End > e.Span.Start {
+			to = lineOf(old, e.Span.End-1) + 1
+		}
+		lineStart := 0
+		for i := 0; i < from; i++ {
+			lineStart += len(old[i])
+		}
+		var buf strings.Builder
+		if from < len(old) {
+			buf.WriteString(old[from][:e.Span.Start-lineStart])
+		} else if e.Span.Start > lineStart {
+			buf.WriteString(string(src[lineStart:e.Span.Start]))
+		}
+		buf.WriteString(e.NewText)
+		endLine := to
+		if to > from || (from < len(old) && e.Span.Start > lineStart) {
+			if to == from {
+				to = from + 1
+				endLine = to
+			}
+			lastStart := 0
+			for i := 0; i < endLine-1; i++ {
+				lastStart += len(old[i])
+			}
+			buf.WriteString(old[endLine-1][e.Span.End-lastStart:])
+		}
+		hs = append(hs, hunk{from: from, to: to, repl: splitLines([]byte(buf.String()))})
+	}
+	fmt.Fprintf(w, "--- a/%s\n+++ b/%s\n", name, name)
+	const ctx = 3
+	delta := 0
+	for i := 0; i < len(hs); {
+		// Merge hunks whose context overlaps.
+		j := i + 1
+		for j < len(hs) && hs[j].from-hs[j-1].to <= 2*ctx {
+			j++
+		}
+		start := max(hs[i].from-ctx, 0)
+		end := min(hs[j-1].to+ctx, len(old))
+		var body []string
+		oldN, newN := 0, 0
+		cur := start
+		for k := i; k < j; k++ {
+			for ; cur < hs[k].from; cur++ {
+				body = append(body, " "+old[cur])
+				oldN++
+				newN++
+			}
+			for ; cur < hs[k].to; cur++ {
+				body = append(body, "-"+old[cur])
+				oldN++
+			}
+			for _, l := range hs[k].repl {
+				body = append(body, "+"+l)
+				newN++
+			}
+		}
+		for ; cur < end; cur++ {
+			body = append(body, " "+old[cur])
+			oldN++
+			newN++
+		}
+		fmt.Fprintf(w, "@@ -%d,%d +%d,%d @@\n", start+1, oldN, start+1+delta, newN)
+		for _, l := range body {
+			if !strings.HasSuffix(l, "\n") && !strings.HasSuffix(l, "\r") {
+				l += "\n\\ No newline at end of file\n"
+			}
+			fmt.Fprint(w, l)
+		}
+		delta += newN - oldN
+		i = j
+	}
+}
+
+// createIfMissing creates an empty file at path when none exists, so that
+// writeAtomic can take its permissions.
+func createIfMissing(path string) error {
+	f, err := os.OpenFile(path, os.O_WRONLY|os.O_CREATE|os.O_EXCL, 0o644)
+	if err != nil {
+		if os.IsExist(err) {
+			return nil
+		}
+		return fmt.Errorf("writing %s: %w", path, err)
+	}
+	return f.Close()
+}

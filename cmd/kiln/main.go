@@ -1,0 +1,174 @@
+// Command kiln checks, estimates and fills thermochemistry in kiln mechanism
+// files, and serves the same analysis to editors over the Language Server
+// Protocol.
+//
+//	kiln check FILE... [--format text|json]
+//	kiln estimate SMILES... [--json] [--nasa]
+//	kiln summary FILE [--json]
+//	kiln fill FILE [--dry-run]
+//	kiln plot SPECIES --file FILE -o OUT.svg
+//	kiln serve [--log FILE]
+//	kiln version | help
+package main
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"os"
+	"strings"
+)
+
+// Version is the kiln release.
+const Version = "0.1.0"
+
+// Exit codes shared by every command.
+const (
+	exitOK       = 0
+	exitProblems = 1 // errors found in the input (check, estimate)
+	exitUsage    = 2 // bad command line or I/O failure
+)
+
+// env is what a command runs against: its streams and working directory.
+type env struct {
+	stdin          io.Reader
+	stdout, stderr io.Writer
+	now            func() string // today's date, for stamps in inserted blocks
+}
+
+func main() {
+	e := env{stdin: os.Stdin, stdout: os.Stdout, stderr: os.Stderr, now: today}
+	os.Exit(run(e, os.Args[1:]))
+}
+
+// usageError is a command-line mistake: reported with a hint to `kiln help`.
+type usageError struct{ msg string }
+
+func (u usageError) Error() string { return u.msg }
+
+func usagef(format string, args ...any) error { return usageError{fmt.Sprintf(format, args...)} }
+
+// run executes one kiln command and returns its exit code.
+func run(e env, args []string) int {
+	if len(args) == 0 {
+		fmt.Fprint(e.stderr, helpText)
+		return exitUsage
+	}
+	cmd, rest := args[0], args[1:]
+	var (
+		code int
+		err  error
+	)
+	switch cmd {
+	case "check":
+		code, err = runCheck(e, rest)
+	case "estimate":
+		code, err = runEstimate(e, rest)
+	case "summary":
+		code, err = runSummary(e, rest)
+	case "fill":
+		code, err = runFill(e, rest)
+	case "plot":
+		code, err = runPlot(e, rest)
+	case "serve":
+		code, err = runServe(e, rest)
+	case "version", "--version", "-v":
+		fmt.Fprintf(e.stdout, "kiln %s\n", Version)
+		return exitOK
+	case "help", "--help", "-h":
+		fmt.Fprint(e.stdout, helpText)
+		return exitOK
+	default:
+		err = usagef("unknown command %q", cmd)
+	}
+	if err != nil {
+		var u usageError
+		if errors.As(err, &u) {
+			fmt.Fprintf(e.stderr, "kiln %s: %v\nRun 'kiln help' for usage.\n", cmd, err)
+		} else {
+			fmt.Fprintf(e.stderr, "kiln %s: %v\n", cmd, err)
+		}
+		return exitUsage
+	}
+	return code
+}
+
+const helpText = `kiln — thermochemistry and consistency checks for kinetic mechanism files
+
+Usage:
+  kiln check FILE... [--format text|json] [--units kcal/mol|kJ/mol]
+        Report problems as file:line:col: severity: message [code].
+        Exit 0 without errors, 1 with errors, 2 on usage or I/O problems.
+  kiln estimate SMILES... [--json] [--nasa] [--tmid K] [--thigh K]
+        Estimate ΔHf°298, S°298 and Cp(T) by group additivity, with the breakdown.
+        --nasa adds a fitted NASA 7-coefficient polynomial.
+  kiln summary FILE [--json] [--units kcal/mol|kJ/mol]
+        Tabulate species thermo and reaction thermochemistry (ΔH°r, ΔG°r, Kp, k_r).
+  kiln fill FILE [--dry-run] [--tmid K] [--thigh K]
+        Insert an estimated nasa7 block under every species that lacks thermo.
+        --dry-run prints a unified diff instead of writing the file.
+  kiln plot SPECIES --file FILE -o OUT.svg
+        Draw Cp/R, H/RT and S/R against T: estimate, fit and the file's own block.
+  kiln serve [--log FILE]
+        Run the language server on stdin/stdout.
+  kiln version
+  kiln help
+
+Common flags: --root DIR sets the workspace root that includes must stay in
+(default: the nearest directory above the file holding .git, else the file's
+directory). Flags may stand before or after the operands.
+
+Estimates are group-additivity estimates: they typically err by 1–3 kcal/mol.
+Check them against measured data, licensed engineering practice and local
+codes before relying on a result.
+`
+
+// flagSpec describes the flags a command accepts: name → takes a value.
+type flagSpec map[string]bool
+
+// parseArgs splits args into flags and operands. Flags may appear anywhere;
+// "--" ends flag parsing. Both "--name value" and "--name=value" are accepted,
+// and a single leading dash works too.
+func parseArgs(args []string, spec flagSpec) (flags map[string]string, operands []string, err error) {
+	flags = map[string]string{}
+	for i := 0; i < len(args); i++ {
+		a := args[i]
+		if a == "--" {
+			operands = append(operands, args[i+1:]...)
+			break
+		}
+		if len(a) < 2 || a[0] != '-' || isNumber(a) {
+			operands = append(operands, a)
+			continue
+		}
+		name := strings.TrimLeft(a, "-")
+		value, hasValue := "", false
+		if k := strings.IndexByte(name, '='); k >= 0 {
+			name, value, hasValue = name[:k], name[k+1:], true
+		}
+		takes, ok := spec[name]
+		if !ok {
+			return nil, nil, usagef("unknown flag %s", a)
+		}
+		if takes && !hasValue {
+			if i+1 >= len(args) {
+				return nil, nil, usagef("flag --%s needs a value", name)
+			}
+			i++
+			value = args[i]
+		} else if !takes && hasValue {
+			return nil, nil, usagef("flag --%s takes no value", name)
+		}
+		if !takes {
+			value = "true"
+		}
+		flags[name] = value
+	}
+	return flags, operands, nil
+}
+
+func isNumber(s string) bool {
+	var f float64
+	_, err := fmt.Sscanf(s, "%g", &f)
+	return err == nil
+}

@@ -1,0 +1,93 @@
+package main
+
+import (
+	"bytes"
+	"context"
+	"fmt"
+
+	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/internal/thermoplot"
+)
+
+func runPlot(e env, args []string) (int, error) {
+	flags, names, err := parseArgs(args, withSettings(flagSpec{"file": true, "o": true, "output": true}))
+	if err != nil {
+		return 0, err
+	}
+	if len(names) != 1 {
+		return 0, usagef("plot needs exactly one SPECIES name")
+	}
+	file := flags["file"]
+	if file == "" {
+		return 0, usagef("plot needs --file FILE")
+	}
+	out := flags["o"]
+	if out == "" {
+		out = flags["output"]
+	}
+	if out == "" {
+		return 0, usagef("plot needs -o OUT.svg")
+	}
+	set, err := settingsFrom(e, flags)
+	if err != nil {
+		return 0, err
+	}
+	ws, abs, err := newWorkspace(file, flags, set)
+	if err != nil {
+		return 0, err
+	}
+	res, err := ws.Analyze(context.Background(), abs)
+	if err != nil {
+		return 0, err
+	}
+	sp, ok := res.ByName[names[0]]
+	if !ok {
+		return 0, fmt.Errorf("%s: no species named %q", file, names[0])
+	}
+	var series []thermoplot.Series
+	tMax := set.THigh
+	if est := sp.Estimate; est != nil && est.FitErr == nil {
+		poly := est.Poly
+		cp := est.Cp
+		series = append(series,
+			thermoplot.Series{Name: "group estimate", Points: true, T: benson.StdTemps[:], Eval: func(T float64) (float64, float64, float64) {
+				for i, t := range benson.StdTemps {
+					if t == T {
+						return cp[i], poly.H(T), poly.S(T)
+					}
+				}
+				return poly.Cp(T), poly.H(T), poly.S(T)
+			}},
+			thermoplot.Series{Name: "fitted NASA-7", Eval: func(T float64) (float64, float64, float64) { return poly.Cp(T), poly.H(T), poly.S(T) }},
+		)
+	}
+	if g := sp.Given; g != nil && g.Poly != nil {
+		p := *g.Poly
+		name := "file block"
+		if g.Fitted {
+			name = "file table (fitted)"
+		}
+		series = append(series, thermoplot.Series{Name: name, Eval: func(T float64) (float64, float64, float64) { return p.Cp(T), p.H(T), p.S(T) }})
+		tMax = max(tMax, p.THigh)
+	}
+	if len(series) == 0 {
+		return 0, fmt.Errorf("%s has neither a thermo block nor an estimate to plot", sp.Name)
+	}
+	var buf bytes.Buffer
+	if err := thermoplot.Render(&buf, fmt.Sprintf("%s (%s)", sp.Name, sp.Formula), series, 300, tMax); err != nil {
+		return 0, fmt.Errorf("drawing %s: %w", sp.Name, err)
+	}
+	if err := writeNew(out, buf.Bytes()); err != nil {
+		return 0, err
+	}
+	return exitOK, nil
+}
+
+// writeNew writes data to path atomically, creating it if needed.
+func writeNew(path string, data []byte) error {
+	if err := createIfMissing(path); err != nil {
+		return err
+	}
+	return writeAtomic(path, data)
+}

@@ -1,0 +1,73 @@
+import { test } from 'node:test';
+import * as assert from 'node:assert/strict';
+import { defaultServerSettings, serverCommand, toServerSettings } from '../../src/settings';
+
+function reader(values: Record<string, unknown>): (key: string) => unknown {
+  return (key) => values[key];
+}
+
+test('empty configuration yields the server defaults', () => {
+  assert.deepEqual(toServerSettings(reader({})), { ...defaultServerSettings });
+});
+
+test('every kiln.* setting maps to its server key', () => {
+  const s = toServerSettings(
+    reader({
+      units: 'kJ/mol',
+      'fit.tMid': 1200,
+      'fit.tHigh': 4000,
+      'thresholds.hf298': 1.5,
+      'thresholds.s298': 2.5,
+      'thresholds.collisionFactor': 10,
+    }),
+  );
+  assert.deepEqual(s, {
+    units: 'kJ/mol',
+    tMid: 1200,
+    tHigh: 4000,
+    mismatchHf298: 1.5,
+    mismatchS298: 2.5,
+    collisionFactor: 10,
+  });
+  // The server reads exactly these keys; an extra or renamed key would be ignored silently.
+  assert.deepEqual(Object.keys(s).sort(), [
+    'collisionFactor',
+    'mismatchHf298',
+    'mismatchS298',
+    'tHigh',
+    'tMid',
+    'units',
+  ]);
+});
+
+test('malformed values fall back to defaults', () => {
+  const s = toServerSettings(
+    reader({
+      units: 'eV',
+      'fit.tMid': 'hot',
+      'fit.tHigh': Number.POSITIVE_INFINITY,
+      'thresholds.hf298': -1,
+      'thresholds.s298': Number.NaN,
+      'thresholds.collisionFactor': null,
+    }),
+  );
+  assert.deepEqual(s, { ...defaultServerSettings });
+});
+
+test('server command: path, serve, optional log file', () => {
+  assert.deepEqual(serverCommand(reader({})), { command: 'kiln', args: ['serve'] });
+  assert.deepEqual(serverCommand(reader({ 'server.path': ' /opt/kiln/bin/kiln ', 'server.logFile': '/tmp/k.log' })), {
+    command: '/opt/kiln/bin/kiln',
+    args: ['serve', '--log', '/tmp/k.log'],
+  });
+  assert.deepEqual(serverCommand(reader({ 'server.path': '' })), { command: 'kiln', args: ['serve'] });
+});
+
+test('package.json defaults agree with the server defaults', () => {
+  // eslint-disable-next-line @typescript-eslint/no-var-requires
+  const pkg = require('../../../package.json');
+  const props = pkg.contributes.configuration.properties;
+  const fromPackage = toServerSettings((key) => props[`kiln.${key}`]?.default);
+  assert.deepEqual(fromPackage, { ...defaultServerSettings });
+  assert.equal(props['kiln.server.path'].default, 'kiln');
+});

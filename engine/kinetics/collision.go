@@ -1,0 +1,220 @@
+package kinetics
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+)
+
+// Collision-check defaults.
+const (
+	DefaultCollisionTMin = 300.0  // K
+	DefaultCollisionTMax = 2500.0 // K
+	CollisionGridPoints  = 50     // temperatures scanned, log-spaced over [TMin, TMax]
+
+	// BathGasMass (amu) and BathGasHeavyAtoms describe the collision
+	// partner assumed for a third body M: N2, 2 × 14.0067 (IUPAC standard
+	// atomic weight of N), common practice for a bath gas.
+	BathGasMass       = 28.0134
+	BathGasHeavyAtoms = 2
+
+	// DiameterPerHeavyAtom is the collision diameter (Å) DefaultDiameter
+	// gives a molecule with one heavy atom (see DefaultDiameter).
+	DiameterPerHeavyAtom = 4.0
+)
+
+// CollisionSettings tunes CollisionCheck. The zero value means the defaults.
+type CollisionSettings struct {
+	// Factor multiplies every bound; 0 means 1. Values above 1 allow for
+	// capture rates that beat the hard-sphere estimate (e.g. ion–molecule
+	// reactions).
+	Factor float64
+	// TMin and TMax (K) bound the scanned range; 0 means 300 and 2500 K.
+	TMin, TMax float64
+	// Diameter, when set, replaces DefaultDiameter: it receives a molecule's
+	// mass (amu) and heavy-atom count and returns its collision diameter (Å).
+	Diameter func(massAmu float64, heavyAtoms int) float64
+}
+
+// Violation is the worst point at which a rate exceeded its collision limit.
+// Limit already includes CollisionSettings.Factor.
+type Violation struct {
+	T           float64 // K
+	Rate, Limit float64 // mechanism units of the given order
+	Reverse     bool    // set by the caller when the reverse direction was checked
+	Order       int     // molecularity the bound was taken for
+}
+
+// Ratio returns Rate/Limit (> 1 for a violation).
+func (v Violation) Ratio() float64 { return v.Rate / v.Limit }
+
+// Message describes the violation, e.g. "k(300 K) = 1e16 cm3/mol/s exceeds
+// the bimolecular collision limit 2.47e14 cm3/mol/s by a factor of 40".
+func (v Violation) Message() string {
+	dir := "k"
+	if v.Reverse {
+		dir = "reverse k"
+	}
+	return fmt.Sprintf("%s(%.0f K) = %s %s exceeds the %s collision limit %s %s by a factor of %s",
+		dir, v.T, sci(v.Rate), orderUnits(v.Order), molecularity(v.Order),
+		sci(v.Limit), orderUnits(v.Order), strconv.FormatFloat(v.Ratio(), 'g', 3, 64))
+}
+
+// DefaultDiameter estimates a collision diameter in Å from the heavy-atom
+// count n alone, as a deliberately generous upper envelope:
+//
+//	d = 4.0 Å · max(n, 1)^(1/3)
+//
+// i.e. a sphere whose volume grows in proportion to the heavy atoms. The
+// 4.0 Å anchor is kiln's own choice, set to lie above the Lennard-Jones σ
+// of common small molecules (Reid, Prausnitz & Poling, The Properties of
+// Gases and Liquids, 4th ed. 1987, App. B, from memory: H2 2.827, H2O 2.641,
+// O2 3.467, N2 3.798, CH4 3.758, CO2 3.941, C2H6 4.443, C3H8 5.118,
+// n-C4H10 4.687, C6H6 5.349, n-C6H14 5.949 Å). A generous diameter only
+// raises the bound, so the check errs towards silence. mass is unused.
+func DefaultDiameter(massAmu float64, heavyAtoms int) float64 {
+	return DiameterPerHeavyAtom * math.Cbrt(float64(max(heavyAtoms, 1)))
+}
+
+// CollisionLimit returns the upper bound on a rate constant of the given
+// molecularity at temperature T (K), times s.Factor, in mechanism units.
+// ok is false when no bound applies. The bounds are common practice:
+//
+// Unimolecular (order 1), s⁻¹: the transition-state-theory frequency
+//
+//	k ≤ kB T / h        (6.25e12 s⁻¹ at 300 K, 5.21e13 s⁻¹ at 2500 K)
+//
+// which a rate can only exceed through a large positive activation entropy
+// with a small barrier; masses are not used.
+//
+// Bimolecular (order 2), cm3/(mol s): the hard-sphere collision rate
+//
+//	k ≤ NA π d² sqrt(8 kB T/(π μ)) × 1e6
+//
+// with d = (d1 + d2)/2 (diameters from s.Diameter or DefaultDiameter, Å),
+// μ = m1 m2/(m1 + m2) the reduced mass (masses in amu). masses and
+// heavyAtoms hold one entry per molecule, coefficients expanded (2 A gives
+// two entries). For identical partners the symmetry factor 1/2 is not
+// applied, which keeps the bound generous. A reaction written with a third
+// body M and one reactant (A + M, k in cm3/(mol s)) is bimolecular: when
+// order is 2 and only one molecule is given, the other partner is taken to
+// be the bath gas N2 (BathGasMass, BathGasHeavyAtoms). The order must be
+// that of the rate constant checked: the high-pressure limit of a falloff
+// reaction A (+M) is unimolecular, not bimolecular.
+//
+// Termolecular and higher orders have no bound (ok = false): a three-body
+// rate constant is a capture rate times the lifetime of the energised
+// complex times its stabilising collision rate, and that lifetime grows
+// without a general ceiling with the complex's size, so no single formula
+// bounds it without also flagging sound low-pressure limits of large
+// molecules.
+func CollisionLimit(order int, masses []float64, heavyAtoms []int, T float64, s CollisionSettings) (limit float64, ok bool) {
+	factor := s.Factor
+	if factor == 0 {
+		factor = 1
+	}
+	switch order {
+	case 1:
+		return factor * Kb * T / H, true
+	case 2:
+		if len(masses) == 1 && len(heavyAtoms) == 1 {
+			masses = []float64{masses[0], BathGasMass}
+			heavyAtoms = []int{heavyAtoms[0], BathGasHeavyAtoms}
+		}
+		if len(masses) != 2 || len(heavyAtoms) != 2 || !(masses[0] > 0 && masses[1] > 0) {
+			return 0, false
+		}
+		diam := s.Diameter
+		if diam == nil {
+			diam = DefaultDiameter
+		}
+		d := 0.5 * (diam(masses[0], heavyAtoms[0]) + diam(masses[1], heavyAtoms[1])) * 1e-10 // m
+		mu := masses[0] * masses[1] / (masses[0] + masses[1]) * Amu                          // kg
+		v := math.Sqrt(8 * Kb * T / (math.Pi * mu))                                          // m/s, mean relative speed
+		return factor * NA * math.Pi * d * d * v * 1e6, true                                 // cm3/(mol s)
+	}
+	return 0, false
+}
+
+// CollisionCheck evaluates rate on CollisionGridPoints temperatures spaced
+// evenly in ln T over [s.TMin, s.TMax] and compares each with
+// CollisionLimit. It returns the point with the largest rate/limit ratio
+// above 1, or nil when the rate stays within the bound everywhere or no bound
+// applies (see CollisionLimit). NaN rates are skipped. order is the number of
+// molecules on the side being checked (reactants for the forward rate,
+// products for the reverse, coefficients counted, third body included as one
+// molecule); the returned Violation has Reverse false.
+func CollisionCheck(order int, masses []float64, heavyAtoms []int, rate func(T float64) float64, s CollisionSettings) *Violation {
+	tmin, tmax := s.TMin, s.TMax
+	if tmin <= 0 {
+		tmin = DefaultCollisionTMin
+	}
+	if tmax <= 0 {
+		tmax = DefaultCollisionTMax
+	}
+	if tmin > tmax {
+		tmin, tmax = tmax, tmin
+	}
+	var worst *Violation
+	for i := range CollisionGridPoints {
+		T := tmin * math.Pow(tmax/tmin, float64(i)/float64(CollisionGridPoints-1))
+		lim, ok := CollisionLimit(order, masses, heavyAtoms, T, s)
+		if !ok {
+			return nil
+		}
+		k := rate(T)
+		if !(k > lim) { // also skips NaN
+			continue
+		}
+		if worst == nil || k/lim > worst.Rate/worst.Limit {
+			worst = &Violation{T: T, Rate: k, Limit: lim, Order: order}
+		}
+	}
+	return worst
+}
+
+// orderUnits names the mechanism units of a rate constant of the given order.
+func orderUnits(order int) string {
+	switch order {
+	case 1:
+		return "s-1"
+	case 2:
+		return "cm3/mol/s"
+	case 3:
+		return "cm6/mol2/s"
+	}
+	return fmt.Sprintf("(cm3/mol)^%d/s", order-1)
+}
+
+// molecularity names a reaction order in words.
+func molecularity(order int) string {
+	switch order {
+	case 1:
+		return "unimolecular"
+	case 2:
+		return "bimolecular"
+	case 3:
+		return "termolecular"
+	}
+	return fmt.Sprintf("order-%d", order)
+}
+
+// sci prints x with 3 significant digits and a compact exponent: 1e16,
+// 2.47e14, 1.5e-5.
+func sci(x float64) string {
+	s := strconv.FormatFloat(x, 'g', 3, 64)
+	mant, exp, found := strings.Cut(s, "e")
+	if !found {
+		return s
+	}
+	neg := strings.HasPrefix(exp, "-")
+	exp = strings.TrimLeft(exp, "+-0")
+	if exp == "" {
+		return mant
+	}
+	if neg {
+		exp = "-" + exp
+	}
+	return mant + "e" + exp
+}

@@ -1,0 +1,472 @@
+package molecule
+
+import (
+	"fmt"
+	"strings"
+)
+
+// MaxHeavyAtoms is the largest number of non-hydrogen atoms ParseSMILES
+// accepts; larger inputs are rejected with an error rather than processed.
+const MaxHeavyAtoms = 500
+
+// SMILESError is a positioned error from ParseSMILES.
+type SMILESError struct {
+	Pos int    // byte offset in the SMILES string
+	Msg string // what is wrong, without the position
+}
+
+// Error implements error as "position N: msg".
+func (e *SMILESError) Error() string { return fmt.Sprintf("position %d: %s", e.Pos, e.Msg) }
+
+func errAt(pos int, format string, args ...any) *SMILESError {
+	return &SMILESError{Pos: pos, Msg: fmt.Sprintf(format, args...)}
+}
+
+// bondSymbol order: '-' 1, '=' 2, '#' 3, '$' 4, ':' aromatic, '/' and '\\' 1.
+func bondOrderOf(sym byte) int {
+	switch sym {
+	case '=':
+		return 2
+	case '#':
+		return 3
+	case '$':
+		return 4
+	}
+	return 1
+}
+
+type ringOpen struct {
+	atom   int
+	sym    byte // bond symbol written at the opening end, 0 if none
+	symPos int
+	pos    int // byte offset of the ring-bond digit (or %)
+	slot   int // index into nbr[atom] to fill on closure
+}
+
+type branch struct{ atom, pos int }
+
+type parser struct {
+	s       string
+	atoms   []Atom
+	bonds   []Bond
+	organic []bool  // organic-subset atom: implicit hydrogens apply
+	aromIn  []bool  // per bond: written as aromatic (order from kekulization)
+	nbr     [][]int // per atom: neighbours in written order (for chirality)
+	hadPrev []bool  // per atom: bonded to a preceding atom when written
+	bracketH []int  // per atom: H count written inside the bracket
+	heavy   int
+}
+
+// ParseSMILES reads an OpenSMILES string into a Molecule.
+//
+// Supported: the organic subset B C N O P S F Cl Br I with implicit hydrogens
+// from the lowest normal valence ≥ the bond-order sum (B 3; C 4; N 3,5; O 2;
+// P 3,5; S 2,4,6; halogens 1), aromatic b c n o p s, bracket atoms
+// [isotope symbol chirality Hn charge :class] including aromatic [se] and
+// [as], bonds - = # $ : / \, branches, ring closures 0–9 and %nn with the bond
+// symbol at either end, and '.'-separated components. The wildcard '*' is
+// rejected. Aromatic input is kekulized (maximum matching); aromaticity is then
+// perceived afresh on the Kekulé graph, so Kekulé and aromatic spellings of a
+// molecule give the same graph. Bracket atoms with fewer bonds+H than their
+// lowest normal valence (after the charge shift of valences) carry radical
+// electrons. Explicit [H] atoms bonded to one heavy atom are folded into its
+// HCount. Inputs with more than MaxHeavyAtoms heavy atoms are rejected.
+// Every error is a *SMILESError.
+func ParseSMILES(s string) (*Molecule, error) {
+	if s == "" {
+		return nil, errAt(0, "empty SMILES")
+	}
+	p := &parser{s: s}
+	if err := p.parse(); err != nil {
+		return nil, err
+	}
+	if err := p.kekulize(); err != nil {
+		return nil, err
+	}
+	if err := p.assignHydrogens(); err != nil {
+		return nil, err
+	}
+	m := p.build()
+	m.perceive()
+	return m, nil
+}
+
+func (p *parser) addAtom(a Atom, organic bool) (int, error) {
+	if a.Element != "H" {
+		p.heavy++
+		if p.heavy > MaxHeavyAtoms {
+			return 0, errAt(a.Pos, "more than %d heavy atoms", MaxHeavyAtoms)
+		}
+	}
+	p.atoms = append(p.atoms, a)
+	p.organic = append(p.organic, organic)
+	p.nbr = append(p.nbr, nil)
+	p.hadPrev = append(p.hadPrev, false)
+	p.bracketH = append(p.bracketH, a.HCount)
+	return len(p.atoms) - 1, nil
+}
+
+func (p *parser) addBond(a, b int, sym byte, pos int) (int, error) {
+	if a == b {
+		return 0, errAt(pos, "ring bond from an atom to itself")
+	}
+	for k := range p.bonds {
+		bd := &p.bonds[k]
+		if (bd.A == a && bd.B == b) || (bd.A == b && bd.B == a) {
+			return 0, errAt(pos, "second bond between the same two atoms")
+		}
+	}
+	arom := sym == ':' || (sym == 0 && p.atoms[a].Aromatic && p.atoms[b].Aromatic)
+	bd := Bond{A: a, B: b, Order: bondOrderOf(sym), Pos: pos}
+	if sym == '/' || sym == '\\' {
+		bd.Stereo = sym
+	}
+	if arom {
+		bd.Order = 0
+	}
+	p.bonds = append(p.bonds, bd)
+	p.aromIn = append(p.aromIn, arom)
+	return len(p.bonds) - 1, nil
+}
+
+func isBondSym(c byte) bool {
+	return c == '-' || c == '=' || c == '#' || c == '$' || c == ':' || c == '/' || c == '\\'
+}
+
+func (p *parser) parse() error {
+	s := p.s
+	prev := -1
+	var pendSym byte
+	pendPos := -1
+	var branches []branch
+	rings := map[int]*ringOpen{}
+	lastOpen := false // previous token was '('
+	i := 0
+	for i < len(s) {
+		c := s[i]
+		switch {
+		case isBondSym(c):
+			if pendSym != 0 {
+				return errAt(i, "two bonds in a row")
+			}
+			if prev < 0 {
+				return errAt(i, "bond with no atom before it")
+			}
+			pendSym, pendPos = c, i
+			i++
+			lastOpen = false
+			continue
+		case c == '(':
+			if prev < 0 {
+				return errAt(i, "branch with no atom before it")
+			}
+			if lastOpen {
+				return errAt(i, "branch starts with '('")
+			}
+			if pendSym != 0 {
+				return errAt(pendPos, "bond before '('")
+			}
+			branches = append(branches, branch{prev, i})
+			i++
+			lastOpen = true
+			continue
+		case c == ')':
+			if len(branches) == 0 {
+				return errAt(i, "unmatched ')'")
+			}
+			if lastOpen {
+				return errAt(i, "empty branch")
+			}
+			if pendSym != 0 {
+				return errAt(pendPos, "bond at the end of a branch")
+			}
+			prev = branches[len(branches)-1].atom
+			branches = branches[:len(branches)-1]
+			i++
+			continue
+		case c == '.':
+			if pendSym != 0 {
+				return errAt(pendPos, "bond before '.'")
+			}
+			if prev < 0 || lastOpen {
+				return errAt(i, "'.' with no atom before it")
+			}
+			prev = -1
+			i++
+			continue
+		case (c >= '0' && c <= '9') || c == '%':
+			if prev < 0 || lastOpen {
+				return errAt(i, "ring bond with no atom before it")
+			}
+			start := i
+			var num int
+			if c == '%' {
+				if i+2 >= len(s) || !isDigit(s[i+1]) || !isDigit(s[i+2]) {
+					return errAt(i, "'%%' must be followed by two digits")
+				}
+				num = int(s[i+1]-'0')*10 + int(s[i+2]-'0')
+				i += 3
+			} else {
+				num = int(c - '0')
+				i++
+			}
+			if r, ok := rings[num]; ok {
+				sym := pendSym
+				symPos := pendPos
+				if r.sym != 0 {
+					if sym != 0 && !compatibleRingSyms(r.sym, sym) {
+						return errAt(pendPos, "ring bond %d written with two different bond symbols", num)
+					}
+					if sym == 0 || sym == '/' || sym == '\\' {
+						sym, symPos = r.sym, r.symPos
+					}
+				}
+				pos := start
+				if symPos >= 0 {
+					pos = symPos
+				}
+				if _, err := p.addBond(r.atom, prev, sym, pos); err != nil {
+					return err
+				}
+				p.nbr[r.atom][r.slot] = prev
+				p.nbr[prev] = append(p.nbr[prev], r.atom)
+				delete(rings, num)
+			} else {
+				p.nbr[prev] = append(p.nbr[prev], -2)
+				rings[num] = &ringOpen{atom: prev, sym: pendSym, symPos: pendPos, pos: start, slot: len(p.nbr[prev]) - 1}
+			}
+			pendSym, pendPos = 0, -1
+			lastOpen = false
+			continue
+		}
+		// an atom
+		a, n, organic, err := p.readAtom(i)
+		if err != nil {
+			return err
+		}
+		idx, err := p.addAtom(a, organic)
+		if err != nil {
+			return err
+		}
+		if prev >= 0 {
+			pos := i
+			if pendSym != 0 {
+				pos = pendPos
+			}
+			if _, err := p.addBond(prev, idx, pendSym, pos); err != nil {
+				return err
+			}
+			p.nbr[prev] = append(p.nbr[prev], idx)
+			p.nbr[idx] = append(p.nbr[idx], prev)
+			p.hadPrev[idx] = true
+		} else if pendSym != 0 {
+			return errAt(pendPos, "bond with no atom before it")
+		}
+		pendSym, pendPos = 0, -1
+		prev = idx
+		lastOpen = false
+		i += n
+	}
+	if pendSym != 0 {
+		return errAt(pendPos, "bond at the end of the SMILES")
+	}
+	if lastOpen || len(branches) > 0 {
+		return errAt(branches[len(branches)-1].pos, "unclosed branch '('")
+	}
+	if prev < 0 {
+		return errAt(len(s)-1, "SMILES ends with '.'")
+	}
+	if len(rings) > 0 {
+		first := -1
+		for _, r := range rings {
+			if first < 0 || r.pos < first {
+				first = r.pos
+			}
+		}
+		return errAt(first, "unclosed ring bond")
+	}
+	return nil
+}
+
+// compatibleRingSyms reports whether the bond symbols written at the two ends
+// of a ring closure agree. Directional single bonds '/', '\\' count as single.
+func compatibleRingSyms(a, b byte) bool {
+	norm := func(c byte) byte {
+		if c == '/' || c == '\\' {
+			return '-'
+		}
+		return c
+	}
+	return norm(a) == norm(b)
+}
+
+func isDigit(c byte) bool { return c >= '0' && c <= '9' }
+
+// readAtom reads one atom token at s[i]: an organic-subset atom or a bracket
+// atom. It returns the atom, the token length and whether implicit hydrogens
+// apply (organic subset).
+func (p *parser) readAtom(i int) (Atom, int, bool, error) {
+	s := p.s
+	c := s[i]
+	if c == '[' {
+		a, n, err := p.readBracket(i)
+		return a, n, false, err
+	}
+	if c == '*' {
+		return Atom{}, 0, false, errAt(i, "wildcard atom '*' is not supported")
+	}
+	two := ""
+	if i+1 < len(s) {
+		two = s[i : i+2]
+	}
+	switch {
+	case two == "Cl" || two == "Br":
+		return Atom{Element: two, Pos: i, Len: 2}, 2, true, nil
+	case strings.IndexByte("BCNOPSFI", c) >= 0:
+		return Atom{Element: string(c), Pos: i, Len: 1}, 1, true, nil
+	case strings.IndexByte("bcnops", c) >= 0:
+		return Atom{Element: strings.ToUpper(string(c)), Aromatic: true, Pos: i, Len: 1}, 1, true, nil
+	}
+	if c >= 'A' && c <= 'Z' || c >= 'a' && c <= 'z' {
+		return Atom{}, 0, false, errAt(i, "element %q must be written in brackets", string(c))
+	}
+	return Atom{}, 0, false, errAt(i, "invalid character %q", rune(c))
+}
+
+func (p *parser) readBracket(start int) (Atom, int, error) {
+	s := p.s
+	end := strings.IndexByte(s[start:], ']')
+	if end < 0 {
+		return Atom{}, 0, errAt(start, "unclosed '['")
+	}
+	end += start
+	a := Atom{Pos: start, Len: end - start + 1}
+	i := start + 1
+	// isotope
+	j := i
+	for j < end && isDigit(s[j]) {
+		j++
+	}
+	if j > i {
+		if j-i > 3 {
+			return a, 0, errAt(i, "isotope mass number too long")
+		}
+		for k := i; k < j; k++ {
+			a.Isotope = a.Isotope*10 + int(s[k]-'0')
+		}
+		if a.Isotope == 0 {
+			return a, 0, errAt(i, "isotope mass number 0")
+		}
+		i = j
+	}
+	if i >= end {
+		return a, 0, errAt(i, "bracket atom without element")
+	}
+	// element
+	c := s[i]
+	switch {
+	case c == '*':
+		return a, 0, errAt(i, "wildcard atom '*' is not supported")
+	case c >= 'A' && c <= 'Z':
+		sym := string(c)
+		if i+1 < end && s[i+1] >= 'a' && s[i+1] <= 'z' {
+			if _, ok := elementIndex(s[i : i+2]); ok {
+				sym = s[i : i+2]
+			} else {
+				return a, 0, errAt(i, "unknown element %q", s[i:i+2])
+			}
+		}
+		if _, ok := elementIndex(sym); !ok {
+			return a, 0, errAt(i, "unknown element %q", sym)
+		}
+		a.Element = sym
+		i += len(sym)
+	case c >= 'a' && c <= 'z':
+		var sym string
+		if i+1 < end && (s[i:i+2] == "se" || s[i:i+2] == "as") {
+			sym = s[i : i+2]
+		} else if strings.IndexByte("bcnops", c) >= 0 {
+			sym = string(c)
+		} else {
+			return a, 0, errAt(i, "unknown aromatic element %q", string(c))
+		}
+		a.Element = strings.ToUpper(sym[:1]) + sym[1:]
+		a.Aromatic = true
+		i += len(sym)
+	default:
+		return a, 0, errAt(i, "invalid character %q in bracket atom", rune(c))
+	}
+	// chirality
+	if i < end && s[i] == '@' {
+		k := i + 1
+		if k < end && s[k] == '@' {
+			k++
+		} else {
+			for k < end && s[k] >= 'A' && s[k] <= 'Z' && s[k] != 'H' {
+				k++
+			}
+			for k < end && isDigit(s[k]) {
+				k++
+			}
+		}
+		a.Chirality = s[i:k]
+		i = k
+	}
+	// hydrogens
+	if i < end && s[i] == 'H' {
+		i++
+		a.HCount = 1
+		if i < end && isDigit(s[i]) {
+			a.HCount = int(s[i] - '0')
+			i++
+		}
+	}
+	// charge
+	if i < end && (s[i] == '+' || s[i] == '-') {
+		sign := 1
+		if s[i] == '-' {
+			sign = -1
+		}
+		ch := s[i]
+		i++
+		n := 1
+		if i < end && isDigit(s[i]) {
+			n = 0
+			k := i
+			for i < end && isDigit(s[i]) {
+				n = n*10 + int(s[i]-'0')
+				i++
+				if i-k > 2 {
+					return a, 0, errAt(k, "charge too large")
+				}
+			}
+		} else {
+			for i < end && s[i] == ch {
+				n++
+				i++
+			}
+		}
+		if n > 15 {
+			return a, 0, errAt(i, "charge too large")
+		}
+		a.Charge = sign * n
+	}
+	// class
+	if i < end && s[i] == ':' {
+		i++
+		k := i
+		for i < end && isDigit(s[i]) {
+			i++
+		}
+		if i == k || i-k > 8 {
+			return a, 0, errAt(k, "bad atom class")
+		}
+		for _, d := range s[k:i] {
+			a.Class = a.Class*10 + int(d-'0')
+		}
+	}
+	if i != end {
+		return a, 0, errAt(i, "unexpected %q in bracket atom", rune(s[i]))
+	}
+	return a, end - start + 1, nil
+}

@@ -1,0 +1,159 @@
+package nasa
+
+import (
+	"fmt"
+	"math"
+)
+
+// Tolerances bounds what Check accepts. Zero fields take the defaults of
+// DefaultTolerances.
+type Tolerances struct {
+	// Cp is the largest accepted jump of Cp at TMid and the slack allowed
+	// above the ceiling cpMax, in J/(mol K).
+	Cp float64
+	// H is the largest accepted jump of H at TMid, in J/mol.
+	H float64
+	// S is the largest accepted jump of S at TMid, in J/(mol K).
+	S float64
+	// CpFall is how far Cp may fall below its running maximum within
+	// [TLow, THigh] before Check calls it nonphysical, in J/(mol K).
+	CpFall float64
+}
+
+// DefaultTolerances returns the tolerances Check uses for zero fields:
+//
+//	Cp     = 0.01 R ≈ 0.083 J/(mol K)
+//	H      = 0.01 R × 1000 K ≈ 83 J/mol (0.01 R·TMid for the usual TMid)
+//	S      = 0.01 R ≈ 0.083 J/(mol K)
+//	CpFall = 0.2 R ≈ 1.66 J/(mol K)
+//
+// The jump tolerances are about 0.1–0.3 % of typical values at 1000 K:
+// coarse enough for hand-made and older published polynomials whose ranges
+// were fitted separately, fine enough to catch a mistyped coefficient. The
+// fall allowance is large because real electronic contributions make Cp of
+// some atoms and radicals fall with T (NIST-JANAF, Chase 1998: O atom Cp
+// falls from 21.91 J/(mol K) at 298 K to about 20.8 J/(mol K) near 1500 K);
+// it catches polynomials whose Cp turns down by whole R at high T.
+func DefaultTolerances() Tolerances {
+	return Tolerances{Cp: 0.01 * R, H: 0.01 * R * 1000, S: 0.01 * R, CpFall: 0.2 * R}
+}
+
+// Problem is one defect found by Check.
+type Problem struct {
+	// Kind is "discontinuity" or "nonphysical".
+	Kind string
+	// Message is a human-readable description with numbers and temperatures.
+	Message string
+	// Part names where the defect is: "low" or "high" (a coefficient block),
+	// "ranges" (the temperature limits) or "tmid" (the join).
+	Part string
+}
+
+const (
+	// KindDiscontinuity marks a jump of Cp, H or S at TMid.
+	KindDiscontinuity = "discontinuity"
+	// KindNonphysical marks a property no real ideal gas has.
+	KindNonphysical = "nonphysical"
+)
+
+// checkPoints is the number of grid points per range at which Check samples Cp.
+const checkPoints = 500
+
+// Check returns the defects of p, none for a sound polynomial:
+//
+//   - nonphysical, "ranges": TLow ≥ TMid, TMid ≥ THigh or TLow ≤ 0;
+//   - nonphysical, "low"/"high": a non-finite coefficient (then nothing else
+//     about that block is checked);
+//   - discontinuity, "tmid": |ΔCp|, |ΔH| or |ΔS| between the blocks at TMid
+//     above tol.Cp, tol.H, tol.S;
+//   - nonphysical, "low"/"high": Cp ≤ 0 somewhere in the block's range, Cp
+//     falling more than tol.CpFall below its running maximum, or Cp above
+//     cpMax + tol.Cp (cpMax in J/(mol K), the classical limit Cp∞ from
+//     ClassicalLimits; 0 skips this test).
+//
+// Each block is examined on its own range (low on [TLow, TMid], high on
+// [TMid, THigh]) at 500 evenly spaced temperatures; a fall is tracked across
+// both ranges. Ranges that are out of order are reported and the grid checks
+// are skipped.
+func Check(p NASA7, tol Tolerances, cpMax float64) []Problem {
+	def := DefaultTolerances()
+	if tol.Cp <= 0 {
+		tol.Cp = def.Cp
+	}
+	if tol.H <= 0 {
+		tol.H = def.H
+	}
+	if tol.S <= 0 {
+		tol.S = def.S
+	}
+	if tol.CpFall <= 0 {
+		tol.CpFall = def.CpFall
+	}
+	var out []Problem
+	add := func(kind, part, format string, args ...any) {
+		out = append(out, Problem{Kind: kind, Part: part, Message: fmt.Sprintf(format, args...)})
+	}
+	rangesOK := p.TLow > 0 && p.TLow < p.TMid && p.TMid < p.THigh && !math.IsInf(p.THigh, 0)
+	if !rangesOK {
+		add(KindNonphysical, "ranges", "temperature ranges %g–%g–%g K are not in increasing order of positive finite values", p.TLow, p.TMid, p.THigh)
+	}
+	lowOK, highOK := finite(&p.Low), finite(&p.High)
+	if !lowOK {
+		add(KindNonphysical, "low", "low-range coefficients are not all finite: %v", p.Low)
+	}
+	if !highOK {
+		add(KindNonphysical, "high", "high-range coefficients are not all finite: %v", p.High)
+	}
+	if !rangesOK {
+		return out
+	}
+	tm := p.TMid
+	if lowOK && highOK {
+		if d := R * (cpR(&p.High, tm) - cpR(&p.Low, tm)); math.Abs(d) > tol.Cp {
+			add(KindDiscontinuity, "tmid", "Cp jumps by %.4g J/(mol K) at %g K (low %.4g, high %.4g)", d, tm, R*cpR(&p.Low, tm), R*cpR(&p.High, tm))
+		}
+		if d := R * (hR(&p.High, tm) - hR(&p.Low, tm)); math.Abs(d) > tol.H {
+			add(KindDiscontinuity, "tmid", "H jumps by %.4g kJ/mol at %g K (low %.6g, high %.6g kJ/mol)", d/1000, tm, R*hR(&p.Low, tm)/1000, R*hR(&p.High, tm)/1000)
+		}
+		if d := R * (sR(&p.High, tm) - sR(&p.Low, tm)); math.Abs(d) > tol.S {
+			add(KindDiscontinuity, "tmid", "S jumps by %.4g J/(mol K) at %g K (low %.6g, high %.6g)", d, tm, R*sR(&p.Low, tm), R*sR(&p.High, tm))
+		}
+	}
+	peak := math.Inf(-1)
+	blocks := []struct {
+		part   string
+		a      *[7]float64
+		ok     bool
+		lo, hi float64
+	}{{"low", &p.Low, lowOK, p.TLow, p.TMid}, {"high", &p.High, highOK, p.TMid, p.THigh}}
+	for _, bl := range blocks {
+		if !bl.ok {
+			peak = math.Inf(-1)
+			continue
+		}
+		var minCp, minT, maxCp, maxT = math.Inf(1), 0.0, math.Inf(-1), 0.0
+		fallReported := false
+		for j := range checkPoints {
+			t := bl.lo + (bl.hi-bl.lo)*float64(j)/float64(checkPoints-1)
+			c := R * cpR(bl.a, t)
+			if c < minCp {
+				minCp, minT = c, t
+			}
+			if c > maxCp {
+				maxCp, maxT = c, t
+			}
+			if !fallReported && c < peak-tol.CpFall {
+				add(KindNonphysical, bl.part, "Cp falls with temperature: %.4g J/(mol K) at %.0f K, below %.4g J/(mol K) reached earlier", c, t, peak)
+				fallReported = true
+			}
+			peak = math.Max(peak, c)
+		}
+		if minCp <= 0 {
+			add(KindNonphysical, bl.part, "Cp is not positive: %.4g J/(mol K) at %.0f K", minCp, minT)
+		}
+		if cpMax > 0 && maxCp > cpMax+tol.Cp {
+			add(KindNonphysical, bl.part, "Cp = %.4g J/(mol K) at %.0f K exceeds the classical limit %.4g J/(mol K)", maxCp, maxT, cpMax)
+		}
+	}
+	return out
+}

@@ -1,0 +1,388 @@
+package lsp
+
+import (
+	"context"
+	"encoding/json"
+	"fmt"
+	"net/url"
+	"path/filepath"
+	"runtime/debug"
+	"strings"
+	"sync"
+	"time"
+
+	"go.lsp.dev/protocol"
+	"go.lsp.dev/uri"
+	"go.uber.org/zap"
+
+	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/analysis/ide"
+	"kiln.dev/kiln/speciesfile"
+)
+
+// document is an open text document.
+type document struct {
+	uri  protocol.DocumentURI
+	path string
+
+	// text state, guarded by server.mu
+	version int32
+	text    []byte
+	lines   *speciesfile.LineIndex
+
+	publishMu sync.Mutex // orders diagnostics publications
+
+	mu          sync.Mutex // guards the analysis state below
+	gen         uint64
+	cancel      context.CancelFunc
+	ready       chan struct{} // closed once the latest text is analysed
+	readyClosed bool
+	snap        *snapshot
+	closed      bool
+}
+
+// snapshot is a completed analysis of a document.
+type snapshot struct {
+	version int32
+	result  *analysis.Result
+	index   *ide.Index
+}
+
+// uriToPath turns a file:// URI into a clean OS path; other URIs (untitled:)
+// are used verbatim as workspace keys.
+func uriToPath(u protocol.DocumentURI) string {
+	s := string(u)
+	if strings.HasPrefix(s, "file://") {
+		if pu, err := url.Parse(s); err == nil && pu.Path != "" {
+			return filepath.Clean(filepath.FromSlash(pu.Path))
+		}
+	}
+	return s
+}
+
+// pathToURI is the inverse of uriToPath for open documents; other paths
+// become file:// URIs.
+func (s *server) pathToURI(path string) protocol.DocumentURI {
+	s.mu.Lock()
+	d := s.docs[path]
+	s.mu.Unlock()
+	if d != nil {
+		return d.uri
+	}
+	if strings.Contains(path, ":") && !filepath.IsAbs(path) && !strings.HasPrefix(path, "/") {
+		return protocol.DocumentURI(path)
+	}
+	return uri.File(path)
+}
+
+func (s *server) didOpen(raw json.RawMessage) error {
+	var p protocol.DidOpenTextDocumentParams
+	if err := json.Unmarshal(raw, &p); err != nil {
+		return fmt.Errorf("didOpen params: %w", err)
+	}
+	path := uriToPath(p.TextDocument.URI)
+	text := []byte(p.TextDocument.Text)
+	s.mu.Lock()
+	d := s.docs[path]
+	if d == nil {
+		d = &document{uri: p.TextDocument.URI, path: path}
+		s.docs[path] = d
+	}
+	d.version = p.TextDocument.Version
+	d.text = text
+	d.lines = speciesfile.NewLineIndex(text)
+	s.ws.SetOverlay(path, text)
+	s.mu.Unlock()
+	s.schedule(d, 0, true)
+	return nil
+}
+
+func (s *server) didChange(raw json.RawMessage) error {
+	var p didChangeParams
+	if err := json.Unmarshal(raw, &p); err != nil {
+		return fmt.Errorf("didChange params: %w", err)
+	}
+	path := uriToPath(p.TextDocument.URI)
+	s.mu.Lock()
+	d := s.docs[path]
+	if d == nil {
+		s.mu.Unlock()
+		return fmt.Errorf("didChange for a document that is not open: %s", p.TextDocument.URI)
+	}
+	text, lines := d.text, d.lines
+	for _, c := range p.ContentChanges {
+		text, lines = applyChange(text, lines, c)
+	}
+	d.text, d.lines = text, lines
+	d.version = p.TextDocument.Version
+	s.ws.SetOverlay(path, text)
+	s.mu.Unlock()
+	s.schedule(d, s.opts.Debounce, true)
+	return nil
+}
+
+// applyChange applies one content change (UTF-16 range, or whole text) and
+// returns the new text with its line index. Out-of-range positions are
+// clamped by LineIndex.Offset; a reversed range is treated as empty.
+func applyChange(text []byte, lines *speciesfile.LineIndex, c contentChange) ([]byte, *speciesfile.LineIndex) {
+	if c.Range == nil {
+		t := []byte(c.Text)
+		return t, speciesfile.NewLineIndex(t)
+	}
+	start := lines.Offset(int(c.Range.Start.Line), int(c.Range.Start.Character))
+	end := lines.Offset(int(c.Range.End.Line), int(c.Range.End.Character))
+	if end < start {
+		end = start
+	}
+	out := make([]byte, 0, len(text)-(end-start)+len(c.Text))
+	out = append(out, text[:start]...)
+	out = append(out, c.Text...)
+	out = append(out, text[end:]...)
+	return out, speciesfile.NewLineIndex(out)
+}
+
+func (s *server) didClose(raw json.RawMessage) error {
+	var p protocol.DidCloseTextDocumentParams
+	if err := json.Unmarshal(raw, &p); err != nil {
+		return fmt.Errorf("didClose params: %w", err)
+	}
+	path := uriToPath(p.TextDocument.URI)
+	s.mu.Lock()
+	d := s.docs[path]
+	delete(s.docs, path)
+	if d != nil {
+		s.ws.CloseOverlay(path)
+	}
+	s.mu.Unlock()
+	if d == nil {
+		return nil
+	}
+	d.mu.Lock()
+	d.closed = true
+	d.gen++
+	if d.cancel != nil {
+		d.cancel()
+	}
+	if !d.readyClosed {
+		close(d.ready)
+		d.readyClosed = true
+	}
+	d.mu.Unlock()
+	s.publish(d, nil, 0, true)
+	s.reanalyseIncluders(path)
+	return nil
+}
+
+func (s *server) didSave(raw json.RawMessage) error {
+	var p protocol.DidSaveTextDocumentParams
+	if err := json.Unmarshal(raw, &p); err != nil {
+		return fmt.Errorf("didSave params: %w", err)
+	}
+	s.reanalyseIncluders(uriToPath(p.TextDocument.URI))
+	return nil
+}
+
+// reanalyseAll schedules every open document (settings or files on disk changed).
+func (s *server) reanalyseAll() {
+	s.mu.Lock()
+	docs := make([]*document, 0, len(s.docs))
+	for _, d := range s.docs {
+		docs = append(docs, d)
+	}
+	s.mu.Unlock()
+	for _, d := range docs {
+		s.schedule(d, 0, false)
+	}
+}
+
+// reanalyseIncluders schedules the open documents whose last analysis read path.
+func (s *server) reanalyseIncluders(path string) {
+	s.mu.Lock()
+	docs := make([]*document, 0, len(s.docs))
+	for p, d := range s.docs {
+		if p != path {
+			docs = append(docs, d)
+		}
+	}
+	s.mu.Unlock()
+	for _, d := range docs {
+		d.mu.Lock()
+		uses := d.snap != nil && d.snap.result != nil && d.snap.result.Files[path] != nil
+		d.mu.Unlock()
+		if uses {
+			s.schedule(d, s.opts.Debounce, false)
+		}
+	}
+}
+
+// schedule starts an analysis of d after delay, cancelling any analysis
+// still running for an older text. When propagate is set, open documents
+// that include d are re-analysed afterwards.
+func (s *server) schedule(d *document, delay time.Duration, propagate bool) {
+	d.mu.Lock()
+	if d.closed {
+		d.mu.Unlock()
+		return
+	}
+	if d.cancel != nil {
+		d.cancel()
+	}
+	d.gen++
+	gen := d.gen
+	if d.ready == nil || d.readyClosed {
+		d.ready = make(chan struct{})
+		d.readyClosed = false
+	}
+	ctx, cancel := context.WithCancel(s.ctx)
+	d.cancel = cancel
+	d.mu.Unlock()
+
+	s.mu.Lock()
+	version := d.version
+	ws := s.ws
+	s.mu.Unlock()
+
+	s.wg.Add(1)
+	go func() {
+		defer s.wg.Done()
+		defer cancel()
+		defer func() {
+			if p := recover(); p != nil {
+				s.logger.Error("panic in analysis", zap.String("path", d.path), zap.Any("panic", p), zap.ByteString("stack", debug.Stack()))
+				s.finish(d, gen, &snapshot{version: version})
+			}
+		}()
+		if delay > 0 {
+			t := time.NewTimer(delay)
+			select {
+			case <-ctx.Done():
+				t.Stop()
+				return
+			case <-t.C:
+			}
+		}
+		res, err := ws.Analyze(ctx, d.path)
+		if ctx.Err() != nil {
+			return // superseded or shutting down
+		}
+		snap := &snapshot{version: version}
+		if err != nil {
+			s.logger.Warn("analysis failed", zap.String("path", d.path), zap.Error(err))
+		} else {
+			snap.result = res
+			snap.index = ide.NewIndex(res)
+		}
+		if s.finish(d, gen, snap) && propagate {
+			s.reanalyseIncluders(d.path)
+		}
+	}()
+}
+
+// finish records snap as d's analysis if gen is still current, wakes the
+// requests waiting for it and publishes its diagnostics.
+func (s *server) finish(d *document, gen uint64, snap *snapshot) bool {
+	d.mu.Lock()
+	if d.gen != gen || d.closed {
+		d.mu.Unlock()
+		return false
+	}
+	d.snap = snap
+	d.cancel = nil
+	if !d.readyClosed {
+		close(d.ready)
+		d.readyClosed = true
+	}
+	d.mu.Unlock()
+	var diags []speciesfile.Diagnostic
+	if snap.result != nil {
+		diags = snap.result.Diagnostics
+	}
+	s.publish(d, snap, gen, false)
+	_ = diags
+	return true
+}
+
+// publish sends the diagnostics of snap (none when snap is nil).
+func (s *server) publish(d *document, snap *snapshot, gen uint64, force bool) {
+	d.publishMu.Lock()
+	defer d.publishMu.Unlock()
+	if !force {
+		d.mu.Lock()
+		current := d.gen == gen && !d.closed
+		d.mu.Unlock()
+		if !current {
+			return
+		}
+	}
+	params := protocol.PublishDiagnosticsParams{URI: d.uri, Diagnostics: []protocol.Diagnostic{}}
+	if snap != nil {
+		if snap.version > 0 {
+			params.Version = uint32(snap.version)
+		}
+		if snap.result != nil {
+			params.Diagnostics = s.toDiagnostics(snap.result)
+		}
+	}
+	if err := s.conn.Notify(s.ctx, "textDocument/publishDiagnostics", params); err != nil {
+		s.logger.Debug("publishDiagnostics failed", zap.Error(err))
+	}
+}
+
+// errNotOpen is returned for requests about documents the client has not opened.
+type errNotOpen string
+
+func (e errNotOpen) Error() string { return fmt.Sprintf("document %s is not open", string(e)) }
+
+// await returns the analysis of the document's latest text, waiting for it
+// if needed.
+func (s *server) await(ctx context.Context, u protocol.DocumentURI) (*document, *snapshot, error) {
+	path := uriToPath(u)
+	s.mu.Lock()
+	d := s.docs[path]
+	s.mu.Unlock()
+	if d == nil {
+		return nil, nil, errNotOpen(u)
+	}
+	d.mu.Lock()
+	ready := d.ready
+	d.mu.Unlock()
+	select {
+	case <-ready:
+	case <-ctx.Done():
+		return nil, nil, ctx.Err()
+	}
+	d.mu.Lock()
+	snap := d.snap
+	closed := d.closed
+	d.mu.Unlock()
+	if closed {
+		return nil, nil, errNotOpen(u)
+	}
+	if snap == nil || snap.result == nil {
+		return nil, nil, fmt.Errorf("no analysis available for %s", u)
+	}
+	return d, snap, nil
+}
+
+// openSnapshots returns the latest analyses of every open document (waiting
+// for pending ones).
+func (s *server) openSnapshots(ctx context.Context) ([]*snapshot, error) {
+	s.mu.Lock()
+	uris := make([]protocol.DocumentURI, 0, len(s.docs))
+	for _, d := range s.docs {
+		uris = append(uris, d.uri)
+	}
+	s.mu.Unlock()
+	var out []*snapshot
+	for _, u := range uris {
+		_, snap, err := s.await(ctx, u)
+		if err != nil {
+			if ctx.Err() != nil {
+				return nil, ctx.Err()
+			}
+			continue
+		}
+		out = append(out, snap)
+	}
+	return out, nil
+}

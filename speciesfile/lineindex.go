@@ -1,0 +1,169 @@
+package speciesfile
+
+import (
+	"sort"
+	"unicode/utf8"
+)
+
+// LineIndex converts between byte offsets and line/column positions for one
+// source text. Lines end at "\n", "\r\n" or a lone "\r"; the terminator
+// belongs to the line it ends. A text with k terminators has k+1 lines (the
+// last possibly empty). A UTF-8 byte order mark is an ordinary character
+// (U+FEFF, one code point, one UTF-16 unit) for column purposes.
+//
+// It is the one offset/position converter of the project; it is immutable
+// after construction and safe for concurrent use.
+type LineIndex struct {
+	src    []byte
+	starts []int // byte offset of the start of each line
+	ends   []int // byte offset of the end of each line's content (before its terminator)
+	ascii  bool  // src is pure ASCII: Char == UTF16 == Col
+}
+
+// NewLineIndex indexes src. src must not be modified afterwards.
+func NewLineIndex(src []byte) *LineIndex {
+	li := &LineIndex{src: src, ascii: true}
+	n := 1
+	for _, c := range src {
+		if c == '\n' {
+			n++
+		} else if c >= 0x80 {
+			li.ascii = false
+		}
+	}
+	// lone CRs add lines too; count them on the second pass.
+	li.starts = make([]int, 0, n)
+	li.ends = make([]int, 0, n)
+	start := 0
+	for i := 0; i < len(src); i++ {
+		switch src[i] {
+		case '\n':
+			li.starts = append(li.starts, start)
+			li.ends = append(li.ends, i)
+			start = i + 1
+		case '\r':
+			li.starts = append(li.starts, start)
+			li.ends = append(li.ends, i)
+			if i+1 < len(src) && src[i+1] == '\n' {
+				i++
+			}
+			start = i + 1
+		}
+	}
+	li.starts = append(li.starts, start)
+	li.ends = append(li.ends, len(src))
+	return li
+}
+
+// LineCount returns the number of lines (terminators + 1).
+func (li *LineIndex) LineCount() int { return len(li.starts) }
+
+// LineStart returns the byte offset of the start of line (0-based), clamped
+// to [0, len(src)].
+func (li *LineIndex) LineStart(line int) int {
+	if line < 0 {
+		return 0
+	}
+	if line >= len(li.starts) {
+		return len(li.src)
+	}
+	return li.starts[line]
+}
+
+// LineEnd returns the byte offset of the end of line's content, before its
+// terminator, clamped like LineStart.
+func (li *LineIndex) LineEnd(line int) int {
+	if line < 0 {
+		return li.ends[0]
+	}
+	if line >= len(li.ends) {
+		return len(li.src)
+	}
+	return li.ends[line]
+}
+
+// Line returns the 0-based line containing byte offset off (clamped to
+// [0, len(src)]). An offset inside a terminator belongs to the line it ends.
+func (li *LineIndex) Line(off int) int {
+	off = clamp(off, 0, len(li.src))
+	// last line whose start <= off
+	return sort.Search(len(li.starts), func(i int) bool { return li.starts[i] > off }) - 1
+}
+
+// Position converts a byte offset (clamped to [0, len(src)]) to a Position.
+// An offset inside a multi-byte character counts that character as passed.
+func (li *LineIndex) Position(off int) Position {
+	off = clamp(off, 0, len(li.src))
+	line := li.Line(off)
+	start := li.starts[line]
+	p := Position{Line: line, Col: off - start}
+	if li.ascii {
+		p.Char, p.UTF16 = p.Col, p.Col
+		return p
+	}
+	end := min(off, li.ends[line])
+	for i := start; i < end; {
+		r, size := utf8.DecodeRune(li.src[i:])
+		p.Char++
+		if r >= 0x10000 && size == 4 {
+			p.UTF16 += 2
+		} else {
+			p.UTF16++
+		}
+		i += size
+	}
+	if off > end { // inside the terminator: bytes count as single units
+		p.Char += off - end
+		p.UTF16 += off - end
+	}
+	return p
+}
+
+// Offset converts a 0-based line and UTF-16 column to a byte offset. It is
+// the inverse of Position for valid positions and clamps otherwise: a line
+// < 0 is line 0, a column < 0 is column 0, a column past the end of the line
+// gives the end of the line (before the terminator), a line past the last
+// gives len(src). A column inside a surrogate pair gives the start of that
+// character.
+func (li *LineIndex) Offset(line, utf16Col int) int {
+	if line < 0 {
+		line = 0
+	}
+	if line >= len(li.starts) {
+		return len(li.src)
+	}
+	start, end := li.starts[line], li.ends[line]
+	if utf16Col <= 0 {
+		return start
+	}
+	if li.ascii {
+		return min(start+utf16Col, end)
+	}
+	units := 0
+	for i := start; i < end; {
+		r, size := utf8.DecodeRune(li.src[i:])
+		w := 1
+		if r >= 0x10000 && size == 4 {
+			w = 2
+		}
+		if units+w > utf16Col {
+			return i
+		}
+		units += w
+		i += size
+		if units == utf16Col {
+			return i
+		}
+	}
+	return end
+}
+
+func clamp(v, lo, hi int) int {
+	if v < lo {
+		return lo
+	}
+	if v > hi {
+		return hi
+	}
+	return v
+}

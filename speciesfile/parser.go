@@ -1,0 +1,1460 @@
+package speciesfile
+
+import (
+	"bytes"
+	"fmt"
+	"strconv"
+	"strings"
+	"unicode/utf8"
+)
+
+// Limits from FORMAT.md §5.
+const (
+	MaxFileSize  = 64 << 20 // bytes
+	MaxLineSize  = 1 << 20  // bytes, excluding the terminator
+	MaxSideTerms = 64       // terms per reaction side
+)
+
+// Exact unit constants (FORMAT.md §2).
+const (
+	JoulesPerCalorie = 4.184          // thermochemical calorie, exact by definition
+	GasConstant      = 8.314462618    // R in J/(mol K), CODATA 2018 (exact product N_A k_B, truncated)
+	PascalsPerAtm    = 101325.0       // exact by definition
+	PascalsPerBar    = 1e5            // exact by definition
+	PascalsPerTorr   = 101325.0 / 760 // exact by definition (1 atm / 760)
+)
+
+type lineKind uint8
+
+const (
+	lineBlank   lineKind = iota // only blanks
+	lineComment                 // only blanks and a comment
+	lineStmt                    // content starting in column 0
+	lineCont                    // indented content
+)
+
+// srcLine is one physical line.
+type srcLine struct {
+	start   int // first byte of the line
+	text    int // first non-blank byte (after a BOM on line 0)
+	end     int // end of the content, before the terminator
+	trimEnd int // end of the content without trailing blanks
+	next    int // start of the following line (== end for the last line)
+	kind    lineKind
+}
+
+type parser struct {
+	f   *File
+	src []byte
+	s   string // string(src), shared by all token texts
+
+	checkBytes bool // src has invalid UTF-8 or NUL bytes: check each line
+
+	pos     int // start of the next unread line
+	crlf    int // lines ending in \r\n
+	lf      int // lines ending in \n or a lone \r
+	pending *srcLine
+
+	toks    []Token // tokens of the current line (reused)
+	comment int     // offset of the current line's comment, -1 if none
+
+	energyFactor  float64 // J/mol per file energy unit
+	entropyFactor float64 // J/(mol K) per file entropy unit
+	unitsTok      *Token  // the accepted units statement
+	sawDecl       bool    // a species, reaction or group statement was seen
+
+	body []srcLine // continuation lines of the current statement (reused)
+}
+
+func newParser(name string, src []byte) *parser {
+	f := &File{
+		Name: name, Src: src, Lines: NewLineIndex(src),
+		EnergyUnit: "kcal/mol", EntropyUnit: "cal/mol/K", Newline: "\n",
+	}
+	p := &parser{
+		f: f, src: src, s: string(src), comment: -1,
+		energyFactor: 4184, entropyFactor: JoulesPerCalorie,
+	}
+	p.checkBytes = !utf8.Valid(src) || bytes.IndexByte(src, 0) >= 0
+	if bytes.HasPrefix(src, []byte("\xef\xbb\xbf")) {
+		f.BOM = true
+	}
+	return p
+}
+
+// errAt records a syntax error.
+func (p *parser) errAt(sp Span, format string, args ...any) {
+	p.f.Diags = append(p.f.Diags, Diagnostic{Span: sp, Severity: SeverityError, Code: CodeSyntax, Message: fmt.Sprintf(format, args...)})
+}
+
+// readLine reads the line at p.pos and advances.
+func (p *parser) readLine() (srcLine, bool) {
+	if p.pos >= len(p.src) {
+		return srcLine{}, false
+	}
+	src := p.src
+	l := srcLine{start: p.pos}
+	i := bytes.IndexAny(src[p.pos:], "\r\n")
+	if i < 0 {
+		l.end, l.next = len(src), len(src)
+	} else {
+		l.end = p.pos + i
+		l.next = l.end + 1
+		if src[l.end] == '\r' && l.next < len(src) && src[l.next] == '\n' {
+			l.next++
+			p.crlf++
+		} else {
+			p.lf++
+		}
+	}
+	p.pos = l.next
+	t := l.start
+	if t == 0 && p.f.BOM {
+		t = 3
+	}
+	bodyStart := t
+	for t < l.end && (src[t] == ' ' || src[t] == '\t') {
+		t++
+	}
+	l.text = t
+	e := l.end
+	for e > t && (src[e-1] == ' ' || src[e-1] == '\t') {
+		e--
+	}
+	l.trimEnd = e
+	switch {
+	case t == l.end:
+		l.kind = lineBlank
+	case src[t] == '#':
+		l.kind = lineComment
+	case t == bodyStart:
+		l.kind = lineStmt
+	default:
+		l.kind = lineCont
+	}
+	if l.end-l.start > MaxLineSize {
+		p.errAt(Span{l.start, l.start + 1}, "line too long: %d bytes (limit %d)", l.end-l.start, MaxLineSize)
+	}
+	if p.checkBytes {
+		p.checkLineBytes(l)
+	}
+	return l, true
+}
+
+// checkLineBytes reports the first invalid UTF-8 byte and the first NUL byte
+// of a line.
+func (p *parser) checkLineBytes(l srcLine) {
+	line := p.src[l.start:l.end]
+	if i := bytes.IndexByte(line, 0); i >= 0 {
+		p.errAt(Span{l.start + i, l.start + i + 1}, "NUL byte in text")
+	}
+	for i := 0; i < len(line); {
+		r, size := utf8.DecodeRune(line[i:])
+		if r == utf8.RuneError && size == 1 {
+			p.errAt(Span{l.start + i, l.start + i + 1}, "invalid UTF-8 byte 0x%02X", line[i])
+			return
+		}
+		i += size
+	}
+}
+
+// run parses the whole file.
+func (p *parser) run() {
+	f := p.f
+	if len(p.src) > MaxFileSize {
+		p.errAt(Span{0, 0}, "file too large: %d bytes (limit %d)", len(p.src), MaxFileSize)
+	}
+	extentStart := 0
+	var last Stmt
+	for {
+		var l srcLine
+		if p.pending != nil {
+			l, p.pending = *p.pending, nil
+		} else {
+			var ok bool
+			if l, ok = p.readLine(); !ok {
+				break
+			}
+		}
+		if l.kind == lineBlank || l.kind == lineComment {
+			continue
+		}
+		// l starts a statement (or is a stray indented line). Gather its
+		// continuation lines up to the next column-0 line.
+		p.body = p.body[:0]
+		lastOwn := l
+		for {
+			m, ok := p.readLine()
+			if !ok {
+				break
+			}
+			if m.kind == lineStmt {
+				p.pending = &m
+				break
+			}
+			if m.kind == lineCont {
+				p.body = append(p.body, m)
+				lastOwn = m
+			}
+		}
+		base := StmtBase{
+			Extent:   Span{extentStart, lastOwn.next},
+			BodySpan: Span{l.text, lastOwn.end},
+		}
+		extentStart = lastOwn.next
+		st := p.statement(l, base)
+		f.Stmts = append(f.Stmts, st)
+		last = st
+	}
+	if len(p.src) > 0 {
+		if last == nil {
+			f.Stmts = append(f.Stmts, &Trivia{StmtBase{Extent: Span{0, len(p.src)}, BodySpan: Span{len(p.src), len(p.src)}}})
+		} else {
+			setExtentEnd(last, len(p.src))
+		}
+	}
+	if p.crlf > p.lf {
+		f.Newline = "\r\n"
+	}
+}
+
+func setExtentEnd(st Stmt, end int) {
+	switch s := st.(type) {
+	case *Units:
+		s.Extent.End = end
+	case *Include:
+		s.Extent.End = end
+	case *Group:
+		s.Extent.End = end
+	case *Species:
+		s.Extent.End = end
+	case *Reaction:
+		s.Extent.End = end
+	case *BadStmt:
+		s.Extent.End = end
+	case *Trivia:
+		s.Extent.End = end
+	}
+}
+
+// tokenize splits the line [from, l.end) into p.toks and sets p.comment.
+func (p *parser) tokenize(l srcLine) []Token {
+	p.toks = p.toks[:0]
+	p.comment = -1
+	src := p.src
+	i := l.text
+	for i < l.end {
+		c := src[i]
+		if c == ' ' || c == '\t' {
+			i++
+			continue
+		}
+		if c == '#' {
+			p.comment = i
+			break
+		}
+		j := i + 1
+		for j < l.end && src[j] != ' ' && src[j] != '\t' {
+			j++
+		}
+		p.toks = append(p.toks, Token{Span{i, j}, p.s[i:j]})
+		i = j
+	}
+	return p.toks
+}
+
+// freeText returns the text from token k to the comment or end of line,
+// without trailing blanks; ok is false when there is no text.
+func (p *parser) freeText(l srcLine, toks []Token, k int) (Token, bool) {
+	if k >= len(toks) {
+		return Token{}, false
+	}
+	end := l.trimEnd
+	if p.comment >= 0 {
+		end = p.comment
+	}
+	for end > toks[k].Span.Start && (p.src[end-1] == ' ' || p.src[end-1] == '\t') {
+		end--
+	}
+	start := toks[k].Span.Start
+	return Token{Span{start, end}, p.s[start:end]}, true
+}
+
+const keywordList = "species, reaction, units, include, group"
+
+// statement dispatches on the keyword of line l.
+func (p *parser) statement(l srcLine, base StmtBase) Stmt {
+	toks := p.tokenize(l)
+	if l.kind == lineCont {
+		p.errAt(toks[0].Span, "indented line outside any statement: a statement starts in column 0 with one of %s", keywordList)
+		return &BadStmt{base}
+	}
+	base.KeywordTok = toks[0]
+	switch toks[0].Text {
+	case "units":
+		return p.units(toks, base)
+	case "include":
+		return p.include(toks, base)
+	case "group":
+		return p.group(toks, base)
+	case "species":
+		return p.species(toks, base)
+	case "reaction":
+		return p.reaction(toks, base)
+	}
+	p.errAt(toks[0].Span, "unknown keyword %q: expected one of %s", toks[0].Text, keywordList)
+	return &BadStmt{base}
+}
+
+// noBody reports continuation lines of a statement that takes none.
+func (p *parser) noBody(kw string) {
+	if len(p.body) > 0 {
+		toks := p.tokenize(p.body[0])
+		p.errAt(toks[0].Span, "unexpected indented line: %s takes no attribute lines", kw)
+	}
+}
+
+// extra reports tokens after the expected ones.
+func (p *parser) extra(toks []Token, after string) {
+	if len(toks) > 0 {
+		p.errAt(toks[0].Span, "unexpected %q after %s", toks[0].Text, after)
+	}
+}
+
+// endOf returns an empty span at the end of token t (for "expected X" errors
+// at the end of a line).
+func endOf(t Token) Span { return Span{t.Span.End, t.Span.End} }
+
+var energyUnits = map[string]float64{"kcal/mol": 4184, "kJ/mol": 1000, "cal/mol": JoulesPerCalorie, "J/mol": 1}
+
+func (p *parser) units(toks []Token, base StmtBase) Stmt {
+	st := &Units{StmtBase: base}
+	defer p.noBody("units")
+	if len(toks) < 2 {
+		p.errAt(endOf(toks[0]), "expected an energy unit after units: kcal/mol, kJ/mol, cal/mol or J/mol")
+		return st
+	}
+	st.Unit = toks[1]
+	p.extra(toks[2:], "the unit")
+	factor, ok := energyUnits[toks[1].Text]
+	switch {
+	case !ok:
+		p.errAt(toks[1].Span, "unknown energy unit %q: expected kcal/mol, kJ/mol, cal/mol or J/mol", toks[1].Text)
+	case p.unitsTok != nil:
+		p.errAt(toks[0].Span, "units declared twice (first on line %d)", p.f.Lines.Line(p.unitsTok.Span.Start)+1)
+	case p.sawDecl:
+		p.errAt(toks[0].Span, "units must come before any species, reaction or group statement")
+	default:
+		u := st.Unit
+		p.unitsTok = &u
+		p.energyFactor = factor
+		p.f.EnergyUnit = toks[1].Text
+		if factor == 1000 || factor == 1 {
+			p.entropyFactor = 1
+			p.f.EntropyUnit = "J/mol/K"
+		}
+	}
+	return st
+}
+
+func (p *parser) include(toks []Token, base StmtBase) Stmt {
+	st := &Include{StmtBase: base}
+	defer p.noBody("include")
+	if len(toks) < 2 {
+		p.errAt(endOf(toks[0]), "expected a file path after include")
+		return st
+	}
+	st.Path = toks[1]
+	p.extra(toks[2:], "the path (a path has no blanks)")
+	p.f.Includes = append(p.f.Includes, st)
+	return st
+}
+
+// attrSet tracks which attributes a statement has seen, for duplicate
+// detection.
+type attrSet struct {
+	seen [16]Token
+	has  uint32
+}
+
+// first records key under id; it reports false (after an error) if the
+// attribute was already given.
+func (p *parser) first(a *attrSet, id int, key Token) bool {
+	if a.has&(1<<id) != 0 {
+		p.errAt(key.Span, "duplicate attribute %q (first given on line %d)", key.Text, p.f.Lines.Line(a.seen[id].Span.Start)+1)
+		return false
+	}
+	a.has |= 1 << id
+	a.seen[id] = key
+	return true
+}
+
+// lineSpan is the span of an attribute line from its key to its last
+// non-blank byte.
+func lineSpan(l srcLine) Span { return Span{l.text, l.trimEnd} }
+
+// ---- thermo lines shared by group and thermo-table ----
+
+type thermoLines struct {
+	hf, s  *Number
+	cp     []CpPoint
+	source *Token
+	set    attrSet
+}
+
+const (
+	tHf = iota
+	tS
+	tCp
+	tSource
+)
+
+// thermoLine parses an hf298/s298/cp/source line; it reports false if the
+// key is not one of these.
+func (p *parser) thermoLine(l srcLine, toks []Token, t *thermoLines) bool {
+	key := toks[0]
+	switch key.Text {
+	case "hf298", "s298":
+		id, kind := tHf, kEnergy
+		if key.Text == "s298" {
+			id, kind = tS, kEntropy
+		}
+		if !p.first(&t.set, id, key) {
+			return true
+		}
+		if len(toks) < 2 {
+			p.errAt(endOf(key), "expected a number after %s", key.Text)
+			return true
+		}
+		p.extra(toks[2:], key.Text+" value")
+		if n, ok := p.number(toks[1], kind); ok {
+			if id == tHf {
+				t.hf = &n
+			} else {
+				t.s = &n
+			}
+		}
+	case "cp":
+		if !p.first(&t.set, tCp, key) {
+			return true
+		}
+		t.cp = p.cpPoints(key, toks[1:])
+	case "source":
+		if !p.first(&t.set, tSource, key) {
+			return true
+		}
+		if txt, ok := p.freeText(l, toks, 1); ok {
+			t.source = &txt
+		} else {
+			p.errAt(endOf(key), "expected text after source")
+		}
+	default:
+		return false
+	}
+	return true
+}
+
+// cpPoints parses T=VALUE pairs.
+func (p *parser) cpPoints(key Token, toks []Token) []CpPoint {
+	if len(toks) == 0 {
+		p.errAt(endOf(key), "expected T=VALUE pairs after cp (T in K)")
+		return nil
+	}
+	pts := make([]CpPoint, 0, len(toks))
+	for _, tk := range toks {
+		ts, vs, ok := splitPair(tk)
+		if !ok {
+			p.errAt(tk.Span, "expected a T=VALUE pair, found %q", tk.Text)
+			return nil
+		}
+		t, ok1 := p.number(ts, kTemp)
+		v, ok2 := p.number(vs, kEntropy)
+		if !ok1 || !ok2 {
+			return nil
+		}
+		if t.SI <= 0 {
+			p.errAt(ts.Span, "cp temperature must be positive, found %s", ts.Text)
+			return nil
+		}
+		if len(pts) > 0 && t.SI <= pts[len(pts)-1].T.SI {
+			p.errAt(ts.Span, "cp temperatures must increase: %s after %s", ts.Text, pts[len(pts)-1].T.Tok.Text)
+			return nil
+		}
+		pts = append(pts, CpPoint{T: t, Cp: v})
+	}
+	return pts
+}
+
+// splitPair splits "K=V" at the last '=' into two tokens.
+func splitPair(tk Token) (k, v Token, ok bool) {
+	i := strings.LastIndexByte(tk.Text, '=')
+	if i <= 0 {
+		return k, v, false
+	}
+	s := tk.Span.Start
+	k = Token{Span{s, s + i}, tk.Text[:i]}
+	v = Token{Span{s + i + 1, tk.Span.End}, tk.Text[i+1:]}
+	return k, v, true
+}
+
+// missingThermo reports which of hf298/s298/cp are missing.
+func (p *parser) missingThermo(at Span, what string, t *thermoLines) {
+	var miss []string
+	if t.set.has&(1<<tHf) == 0 {
+		miss = append(miss, "hf298")
+	}
+	if t.set.has&(1<<tS) == 0 {
+		miss = append(miss, "s298")
+	}
+	if t.set.has&(1<<tCp) == 0 {
+		miss = append(miss, "cp")
+	}
+	if len(miss) > 0 {
+		p.errAt(at, "%s is missing its %s line", what, strings.Join(miss, ", "))
+	}
+}
+
+func (p *parser) group(toks []Token, base StmtBase) Stmt {
+	p.sawDecl = true
+	st := &Group{StmtBase: base}
+	if len(toks) < 2 {
+		p.errAt(endOf(toks[0]), "expected a group name after group, e.g. C-(C)(H)3")
+	} else {
+		st.Name = toks[1]
+		p.extra(toks[2:], "the group name (a group name has no blanks)")
+	}
+	var t thermoLines
+	for _, l := range p.body {
+		lt := p.tokenize(l)
+		st.Attrs = append(st.Attrs, Attr{Key: lt[0], Span: lineSpan(l)})
+		if !p.thermoLine(l, lt, &t) {
+			p.errAt(lt[0].Span, "unknown group attribute %q: expected one of hf298, s298, cp, source", lt[0].Text)
+		}
+	}
+	st.Hf298, st.S298, st.Cp, st.Source = t.hf, t.s, t.cp, t.source
+	at := toks[0].Span
+	if len(toks) > 1 {
+		at = toks[1].Span
+	}
+	p.missingThermo(at, "group", &t)
+	p.f.Groups = append(p.f.Groups, st)
+	return st
+}
+
+// nameProblem returns why text cannot be a species name, or "".
+func nameProblem(text string) string {
+	switch text {
+	case "+", "=>", "<=>", "=", "M", "(+M)":
+		return fmt.Sprintf("%q is reserved and cannot be a species name", text)
+	}
+	if strings.HasPrefix(text, "(+") && strings.HasSuffix(text, ")") {
+		return fmt.Sprintf("%q is reserved (falloff collider) and cannot be a species name", text)
+	}
+	if n := scanNumber(text); n == len(text) {
+		return fmt.Sprintf("%q is a number, not a species name", text)
+	}
+	return ""
+}
+
+// species attribute ids
+const (
+	aMult = iota
+	aSym
+	aOpt
+	aComp
+	aNote
+	aNASA
+	aTable
+)
+
+const speciesAttrList = "multiplicity, symmetry, optical-isomers, composition, note, nasa7, thermo-table"
+
+func (p *parser) species(toks []Token, base StmtBase) Stmt {
+	p.sawDecl = true
+	st := &Species{StmtBase: base}
+	if len(toks) < 2 {
+		p.errAt(endOf(toks[0]), "expected a species name after species")
+	} else {
+		st.Name = toks[1]
+		if msg := nameProblem(toks[1].Text); msg != "" {
+			p.errAt(toks[1].Span, "%s", msg)
+		}
+		if len(toks) > 2 {
+			sm := toks[2]
+			st.SMILES = &sm
+			p.extra(toks[3:], "the SMILES (a SMILES has no blanks)")
+		}
+	}
+	var set attrSet
+	const (
+		blockNone = iota
+		blockNASA
+		blockTable
+	)
+	block := blockNone
+	var nasa *NASA7Block
+	var nasaSet attrSet
+	var table thermoLines
+	var tableHdr Token
+	blockAttr := -1
+	for _, l := range p.body {
+		lt := p.tokenize(l)
+		key := lt[0]
+		// block lines
+		switch block {
+		case blockNASA:
+			if key.Text == "low" || key.Text == "high" || key.Text == "source" {
+				p.nasaLine(l, lt, nasa, &nasaSet)
+				nasa.Span.End = l.trimEnd
+				st.Attrs[blockAttr].Span.End = l.trimEnd
+				continue
+			}
+		case blockTable:
+			if p.thermoLine(l, lt, &table) {
+				st.Table.Span.End = l.trimEnd
+				st.Attrs[blockAttr].Span.End = l.trimEnd
+				continue
+			}
+		}
+		block = blockNone
+		st.Attrs = append(st.Attrs, Attr{Key: key, Span: lineSpan(l)})
+		switch key.Text {
+		case "multiplicity", "symmetry", "optical-isomers":
+			id := aOpt
+			switch key.Text {
+			case "multiplicity":
+				id = aMult
+			case "symmetry":
+				id = aSym
+			}
+			if !p.first(&set, id, key) {
+				continue
+			}
+			ia := p.intAttr(lt)
+			if ia == nil {
+				continue
+			}
+			switch id {
+			case aMult:
+				st.Multiplicity = ia
+			case aSym:
+				st.Symmetry = ia
+			default:
+				st.OpticalIsomers = ia
+			}
+		case "composition":
+			if !p.first(&set, aComp, key) {
+				continue
+			}
+			if len(lt) < 2 {
+				p.errAt(endOf(key), "expected an element formula after composition, e.g. C10H8")
+				continue
+			}
+			p.extra(lt[2:], "the formula (a formula has no blanks)")
+			c := lt[1]
+			st.Composition = &c
+			formula, err := ParseFormula(c.Text)
+			if err != nil {
+				p.errAt(c.Span, "malformed composition %q: %v", c.Text, err)
+				continue
+			}
+			st.Formula = formula
+		case "note":
+			if !p.first(&set, aNote, key) {
+				continue
+			}
+			if txt, ok := p.freeText(l, lt, 1); ok {
+				st.Note = &txt
+			} else {
+				p.errAt(endOf(key), "expected text after note")
+			}
+		case "nasa7":
+			if !p.first(&set, aNASA, key) {
+				continue
+			}
+			if set.has&(1<<aTable) != 0 {
+				p.errAt(key.Span, "a species has either a nasa7 block or a thermo-table, not both")
+			}
+			nasa = &NASA7Block{Span: lineSpan(l), Header: key}
+			nasaSet = attrSet{}
+			p.nasaHeader(lt, nasa)
+			st.NASA7 = nasa
+			block, blockAttr = blockNASA, len(st.Attrs)-1
+		case "thermo-table":
+			if !p.first(&set, aTable, key) {
+				continue
+			}
+			if set.has&(1<<aNASA) != 0 {
+				p.errAt(key.Span, "a species has either a nasa7 block or a thermo-table, not both")
+			}
+			p.extra(lt[1:], "thermo-table (its values go on the following lines)")
+			st.Table = &ThermoTable{Span: lineSpan(l), Header: key}
+			tableHdr = key
+			block, blockAttr = blockTable, len(st.Attrs)-1
+		case "low", "high":
+			p.errAt(key.Span, "%q is only valid inside a nasa7 block", key.Text)
+		case "hf298", "s298", "cp":
+			p.errAt(key.Span, "%q is only valid inside a thermo-table block", key.Text)
+		case "source":
+			p.errAt(key.Span, "\"source\" is only valid inside a nasa7 or thermo-table block")
+		default:
+			p.errAt(key.Span, "unknown species attribute %q: expected one of %s", key.Text, speciesAttrList)
+		}
+	}
+	if nasa != nil {
+		var miss []string
+		if nasaSet.has&(1<<0) == 0 {
+			miss = append(miss, "low")
+		}
+		if nasaSet.has&(1<<1) == 0 {
+			miss = append(miss, "high")
+		}
+		if len(miss) > 0 {
+			p.errAt(nasa.Header.Span, "nasa7 block is missing its %s line", strings.Join(miss, " and "))
+		}
+	}
+	if st.Table != nil {
+		st.Table.Hf298, st.Table.S298, st.Table.Cp, st.Table.Source = table.hf, table.s, table.cp, table.source
+		p.missingThermo(tableHdr.Span, "thermo-table", &table)
+	}
+	if len(toks) >= 2 && st.SMILES == nil && st.Composition == nil {
+		p.errAt(toks[1].Span, "species %s has no SMILES, so it needs a composition line", toks[1].Text)
+	}
+	p.f.Species = append(p.f.Species, st)
+	return st
+}
+
+func (p *parser) intAttr(lt []Token) *IntAttr {
+	key := lt[0]
+	if len(lt) < 2 {
+		p.errAt(endOf(key), "expected a positive integer after %s", key.Text)
+		return nil
+	}
+	p.extra(lt[2:], key.Text+" value")
+	v, err := strconv.Atoi(lt[1].Text)
+	if err != nil || v < 1 || lt[1].Text[0] == '+' || lt[1].Text[0] == '-' {
+		p.errAt(lt[1].Span, "%s needs a positive integer, found %q", key.Text, lt[1].Text)
+		return nil
+	}
+	return &IntAttr{Key: key, Value: v, Tok: lt[1]}
+}
+
+func (p *parser) nasaHeader(lt []Token, b *NASA7Block) {
+	if len(lt) < 4 {
+		p.errAt(endOf(lt[len(lt)-1]), "expected three temperatures after nasa7: TLOW TMID THIGH (K)")
+		return
+	}
+	p.extra(lt[4:], "the three nasa7 temperatures")
+	var ts [3]Number
+	for i := range 3 {
+		n, ok := p.number(lt[1+i], kTemp)
+		if !ok {
+			return
+		}
+		ts[i] = n
+	}
+	b.TLow, b.TMid, b.THigh = ts[0], ts[1], ts[2]
+	if !(ts[0].SI > 0 && ts[0].SI < ts[1].SI && ts[1].SI < ts[2].SI) {
+		p.errAt(Span{lt[1].Span.Start, lt[3].Span.End}, "nasa7 temperatures must satisfy 0 < TLOW < TMID < THIGH")
+	}
+}
+
+func (p *parser) nasaLine(l srcLine, lt []Token, b *NASA7Block, set *attrSet) {
+	key := lt[0]
+	switch key.Text {
+	case "source":
+		if !p.first(set, 2, key) {
+			return
+		}
+		if txt, ok := p.freeText(l, lt, 1); ok {
+			b.Source = &txt
+		} else {
+			p.errAt(endOf(key), "expected text after source")
+		}
+		return
+	}
+	id := 0
+	dst := &b.Low
+	if key.Text == "high" {
+		id, dst = 1, &b.High
+	}
+	if !p.first(set, id, key) {
+		return
+	}
+	nums := lt[1:]
+	if len(nums) != 7 {
+		at := endOf(lt[len(lt)-1])
+		if len(nums) > 7 {
+			at = nums[7].Span
+		}
+		p.errAt(at, "expected 7 coefficients after %s, found %d", key.Text, len(nums))
+		return
+	}
+	var out [7]Number
+	for i, tk := range nums {
+		n, ok := p.number(tk, kDimless)
+		if !ok {
+			return
+		}
+		out[i] = n
+	}
+	*dst = out
+	if id == 0 {
+		b.LowSpan = lineSpan(l)
+	} else {
+		b.HighSpan = lineSpan(l)
+	}
+}
+
+// reaction attribute ids
+const (
+	rLow = iota
+	rTroe
+	rEff
+	rDup
+	rRev
+	rNote
+)
+
+const reactionAttrList = "low-pressure, troe, efficiencies, pressure, duplicate, reverse, note"
+
+func isRateToken(s string) bool {
+	return strings.HasPrefix(s, "A=") || strings.HasPrefix(s, "n=") || strings.HasPrefix(s, "Ea=")
+}
+
+func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
+	p.sawDecl = true
+	st := &Reaction{StmtBase: base}
+	p.f.Reactions = append(p.f.Reactions, st)
+	eqEnd := len(toks)
+	for i := 1; i < len(toks); i++ {
+		if isRateToken(toks[i].Text) {
+			eqEnd = i
+			break
+		}
+	}
+	eq := toks[1:eqEnd]
+	if len(eq) == 0 {
+		p.errAt(endOf(toks[0]), "expected a reaction equation after reaction, e.g. H + O2 <=> O + OH")
+	} else {
+		st.Equation = Span{eq[0].Span.Start, eq[len(eq)-1].Span.End}
+		p.equation(eq, st)
+	}
+	if eqEnd < len(toks) {
+		st.Rate = p.rate(toks[0], toks[eqEnd:], "")
+	}
+	var set attrSet
+	for _, bl := range p.body {
+		lt := p.tokenize(bl)
+		key := lt[0]
+		st.Attrs = append(st.Attrs, Attr{Key: key, Span: lineSpan(bl)})
+		switch key.Text {
+		case "low-pressure":
+			if !p.first(&set, rLow, key) {
+				continue
+			}
+			if st.Falloff == nil {
+				p.errAt(key.Span, "low-pressure needs a falloff reaction marked with (+M) on both sides")
+			}
+			st.LowPressure = p.rate(key, lt[1:], "low-pressure")
+		case "troe":
+			if !p.first(&set, rTroe, key) {
+				continue
+			}
+			st.Troe = p.troe(lt)
+		case "efficiencies":
+			if !p.first(&set, rEff, key) {
+				continue
+			}
+			if !st.ThirdBody && st.Falloff == nil {
+				p.errAt(key.Span, "efficiencies need a third body: M or (+M) in the equation")
+			}
+			st.Efficiencies = p.efficiencies(lt)
+		case "pressure":
+			p.pressure(lt, st)
+		case "duplicate":
+			if !p.first(&set, rDup, key) {
+				continue
+			}
+			p.extra(lt[1:], "duplicate")
+			k := key
+			st.Duplicate = &k
+		case "reverse":
+			if !p.first(&set, rRev, key) {
+				continue
+			}
+			if len(eq) > 0 && st.Arrow.Text == "=>" {
+				p.errAt(key.Span, "reverse needs a reversible (<=>) reaction")
+			}
+			st.Reverse = p.rate(key, lt[1:], "reverse")
+		case "note":
+			if !p.first(&set, rNote, key) {
+				continue
+			}
+			if txt, ok := p.freeText(bl, lt, 1); ok {
+				st.Note = &txt
+			} else {
+				p.errAt(endOf(key), "expected text after note")
+			}
+		default:
+			p.errAt(key.Span, "unknown reaction attribute %q: expected one of %s", key.Text, reactionAttrList)
+		}
+	}
+	if st.Troe != nil && st.LowPressure == nil {
+		p.errAt(st.Troe.Span, "troe needs a low-pressure line")
+	}
+	if eqEnd == len(toks) && len(st.Pressures) == 0 && len(eq) > 0 {
+		p.f.Diags = append(p.f.Diags, Diagnostic{Span: st.Equation, Severity: SeverityWarning, Code: CodeNoRate,
+			Message: "reaction has no rate parameters (A=, n=, Ea=)"})
+	}
+	return st
+}
+
+func isArrowLike(s string) bool {
+	switch s {
+	case "=", "->", "<->", "<=", "<-", "==", "<==>", "==>":
+		return true
+	}
+	return false
+}
+
+// equation parses the equation tokens into st.
+func (p *parser) equation(eq []Token, st *Reaction) {
+	arrow := -1
+	for i, t := range eq {
+		switch {
+		case t.Text == "<=>" || t.Text == "=>":
+			if arrow >= 0 {
+				p.errAt(t.Span, "second arrow %q: a reaction has exactly one arrow", t.Text)
+				return
+			}
+			arrow = i
+		case isArrowLike(t.Text):
+			p.errAt(t.Span, "%q is not an arrow: use <=> (reversible) or => (irreversible)", t.Text)
+			return
+		}
+	}
+	if arrow < 0 {
+		p.errAt(st.Equation, "missing arrow: expected <=> or => between reactants and products")
+		return
+	}
+	st.Arrow = eq[arrow]
+	st.Reversible = eq[arrow].Text == "<=>"
+	var ok1, ok2 bool
+	var m1, m2, f1, f2 *Token
+	st.Reactants, m1, f1, ok1 = p.side(eq[:arrow], eq[arrow], "reactant")
+	st.Products, m2, f2, ok2 = p.side(eq[arrow+1:], eq[arrow], "product")
+	if !ok1 || !ok2 {
+		return
+	}
+	switch {
+	case m1 != nil && m2 == nil:
+		p.errAt(m1.Span, "M (third body) must appear on both sides")
+	case m2 != nil && m1 == nil:
+		p.errAt(m2.Span, "M (third body) must appear on both sides")
+	case m1 != nil && (f1 != nil || f2 != nil):
+		p.errAt(m1.Span, "a reaction cannot have both M and a (+M) falloff collider")
+	case f1 != nil && f2 == nil:
+		p.errAt(f1.Span, "%s must appear on both sides", f1.Text)
+	case f2 != nil && f1 == nil:
+		p.errAt(f2.Span, "%s must appear on both sides", f2.Text)
+	case f1 != nil && f1.Text != f2.Text:
+		p.errAt(f2.Span, "falloff collider %s differs from %s on the reactant side", f2.Text, f1.Text)
+	default:
+		st.ThirdBody = m1 != nil
+		st.Falloff = f1
+	}
+}
+
+func isFalloffToken(s string) bool {
+	return len(s) > 3 && strings.HasPrefix(s, "(+") && strings.HasSuffix(s, ")")
+}
+
+// side parses one side of an equation. It returns the terms, the M token,
+// the falloff token and whether the side was well formed.
+func (p *parser) side(toks []Token, arrow Token, which string) (terms []Term, m, fall *Token, ok bool) {
+	if len(toks) == 0 {
+		if which == "reactant" {
+			p.errAt(arrow.Span, "empty reactant side: expected a species before %s", arrow.Text)
+		} else {
+			p.errAt(arrow.Span, "empty product side: expected a species after %s", arrow.Text)
+		}
+		return nil, nil, nil, false
+	}
+	terms = make([]Term, 0, (len(toks)+1)/2)
+	expectTerm := true
+	var prev Token
+	for i := 0; i < len(toks); i++ {
+		t := toks[i]
+		if fall != nil {
+			p.errAt(t.Span, "unexpected %q after %s: the falloff collider ends the %s side", t.Text, fall.Text, which)
+			return terms, m, fall, false
+		}
+		if !expectTerm {
+			switch {
+			case t.Text == "+":
+				expectTerm = true
+				prev = t
+			case isFalloffToken(t.Text):
+				ft := t
+				fall = &ft
+			default:
+				p.errAt(t.Span, "expected \"+\" between %q and %q", prev.Text, t.Text)
+				return terms, m, fall, false
+			}
+			continue
+		}
+		// expecting a term
+		switch {
+		case t.Text == "+":
+			p.errAt(t.Span, "expected a species name, found \"+\"")
+			return terms, m, fall, false
+		case isFalloffToken(t.Text):
+			if len(terms) == 0 && m == nil {
+				p.errAt(t.Span, "expected a species before %s", t.Text)
+			} else {
+				p.errAt(t.Span, "expected a species name after \"+\", found %s", t.Text)
+			}
+			return terms, m, fall, false
+		case t.Text == "M":
+			if m != nil {
+				p.errAt(t.Span, "M (third body) appears twice on the %s side", which)
+				return terms, m, fall, false
+			}
+			mt := t
+			m = &mt
+		default:
+			term := Term{Coeff: 1, Name: t}
+			if n := scanNumber(t.Text); n == len(t.Text) {
+				// a coefficient
+				v, err := strconv.ParseFloat(t.Text, 64)
+				if err != nil {
+					p.errAt(t.Span, "number out of range: %q", t.Text)
+					return terms, m, fall, false
+				}
+				if !(v > 0) {
+					p.errAt(t.Span, "bad coefficient %q: must be a positive number", t.Text)
+					return terms, m, fall, false
+				}
+				if i+1 >= len(toks) || toks[i+1].Text == "+" || isFalloffToken(toks[i+1].Text) {
+					p.errAt(t.Span, "expected a species name after coefficient %q", t.Text)
+					return terms, m, fall, false
+				}
+				next := toks[i+1]
+				if next.Text == "M" {
+					p.errAt(t.Span, "M (third body) cannot have a coefficient")
+					return terms, m, fall, false
+				}
+				if scanNumber(next.Text) == len(next.Text) {
+					p.errAt(next.Span, "expected a species name after coefficient %q, found %q", t.Text, next.Text)
+					return terms, m, fall, false
+				}
+				ct := t
+				term = Term{Coeff: v, CoeffTok: &ct, Name: next}
+				i++
+				t = next
+			}
+			if j := strings.Index(t.Text, "(+"); j > 0 && strings.HasSuffix(t.Text, ")") {
+				p.errAt(t.Span, "write %q as a separate token: %s %s", t.Text[j:], t.Text[:j], t.Text[j:])
+				return terms, m, fall, false
+			}
+			if msg := nameProblem(t.Text); msg != "" {
+				p.errAt(t.Span, "%s", msg)
+				return terms, m, fall, false
+			}
+			if len(terms) == MaxSideTerms {
+				p.errAt(t.Span, "too many terms: at most %d per side", MaxSideTerms)
+				return terms, m, fall, false
+			}
+			terms = append(terms, term)
+		}
+		expectTerm = false
+		prev = t
+	}
+	if expectTerm {
+		p.errAt(prev.Span, "expected a species name after \"+\"")
+		return terms, m, fall, false
+	}
+	if len(terms) == 0 {
+		p.errAt(m.Span, "the %s side has only a third body M: expected a species", which)
+		return terms, m, fall, false
+	}
+	return terms, m, fall, true
+}
+
+// rate parses A=, n=, Ea= tokens. what names the line for messages ("" for
+// the reaction line itself).
+func (p *parser) rate(key Token, toks []Token, what string) *Arrhenius {
+	ctx := "rate parameters"
+	if what != "" {
+		ctx = what + " rate parameters"
+	}
+	if len(toks) == 0 {
+		p.errAt(endOf(key), "expected A=, n= and Ea= after %s", key.Text)
+		return nil
+	}
+	r := &Arrhenius{Span: Span{toks[0].Span.Start, toks[len(toks)-1].Span.End}}
+	for _, tk := range toks {
+		k, v, ok := splitPair(tk)
+		var dst **Number
+		kind := kDimless
+		if ok {
+			switch k.Text {
+			case "A":
+				dst = &r.A
+			case "n":
+				dst = &r.N
+			case "Ea":
+				dst, kind = &r.Ea, kEa
+			}
+		}
+		if dst == nil {
+			p.errAt(tk.Span, "unexpected %q in %s: expected A=, n= or Ea=", tk.Text, ctx)
+			continue
+		}
+		if *dst != nil {
+			p.errAt(tk.Span, "duplicate %s= in %s", k.Text, ctx)
+			continue
+		}
+		if n, ok := p.number(v, kind); ok {
+			*dst = &n
+		}
+	}
+	var miss []string
+	if r.A == nil {
+		miss = append(miss, "A=")
+	}
+	if r.N == nil {
+		miss = append(miss, "n=")
+	}
+	if r.Ea == nil {
+		miss = append(miss, "Ea=")
+	}
+	if len(miss) > 0 {
+		p.missingRate(r, miss, ctx)
+	}
+	return r
+}
+
+func (p *parser) missingRate(r *Arrhenius, miss []string, ctx string) {
+	// Do not pile a "missing" error on a token that already has an error.
+	for i := len(p.f.Diags) - 1; i >= 0; i-- {
+		d := p.f.Diags[i]
+		if d.Span.Start < r.Span.Start {
+			break
+		}
+		if d.Span.End <= r.Span.End {
+			return
+		}
+	}
+	p.errAt(r.Span, "incomplete %s: missing %s (A=, n= and Ea= are all required)", ctx, strings.Join(miss, ", "))
+}
+
+func (p *parser) troe(lt []Token) *Troe {
+	key := lt[0]
+	if len(lt) < 2 {
+		p.errAt(endOf(key), "expected alpha=, T3=, T1= and optionally T2= after troe")
+		return nil
+	}
+	tr := &Troe{Span: Span{lt[1].Span.Start, lt[len(lt)-1].Span.End}}
+	for _, tk := range lt[1:] {
+		k, v, ok := splitPair(tk)
+		var dst **Number
+		kind := kTemp
+		if ok {
+			switch k.Text {
+			case "alpha":
+				dst, kind = &tr.Alpha, kDimless
+			case "T3":
+				dst = &tr.T3
+			case "T1":
+				dst = &tr.T1
+			case "T2":
+				dst = &tr.T2
+			}
+		}
+		if dst == nil {
+			p.errAt(tk.Span, "unexpected %q in troe: expected alpha=, T3=, T1= or T2=", tk.Text)
+			continue
+		}
+		if *dst != nil {
+			p.errAt(tk.Span, "duplicate %s= in troe", k.Text)
+			continue
+		}
+		if n, ok := p.number(v, kind); ok {
+			*dst = &n
+		}
+	}
+	var miss []string
+	if tr.Alpha == nil {
+		miss = append(miss, "alpha=")
+	}
+	if tr.T3 == nil {
+		miss = append(miss, "T3=")
+	}
+	if tr.T1 == nil {
+		miss = append(miss, "T1=")
+	}
+	if len(miss) > 0 {
+		p.missingTroe(tr, miss)
+	}
+	return tr
+}
+
+func (p *parser) missingTroe(tr *Troe, miss []string) {
+	for i := len(p.f.Diags) - 1; i >= 0; i-- {
+		d := p.f.Diags[i]
+		if d.Span.Start < tr.Span.Start {
+			break
+		}
+		if d.Span.End <= tr.Span.End {
+			return
+		}
+	}
+	p.errAt(tr.Span, "incomplete troe parameters: missing %s", strings.Join(miss, ", "))
+}
+
+func (p *parser) efficiencies(lt []Token) []Efficiency {
+	key := lt[0]
+	if len(lt) < 2 {
+		p.errAt(endOf(key), "expected NAME=VALUE pairs after efficiencies")
+		return nil
+	}
+	out := make([]Efficiency, 0, len(lt)-1)
+	for _, tk := range lt[1:] {
+		k, v, ok := splitPair(tk)
+		if !ok {
+			p.errAt(tk.Span, "expected a NAME=VALUE pair, found %q", tk.Text)
+			continue
+		}
+		if msg := nameProblem(k.Text); msg != "" {
+			p.errAt(k.Span, "%s", msg)
+			continue
+		}
+		n, ok := p.number(v, kDimless)
+		if !ok {
+			continue
+		}
+		if n.Value < 0 {
+			p.errAt(v.Span, "efficiency must be >= 0, found %s", v.Text)
+			continue
+		}
+		dup := false
+		for _, e := range out {
+			if e.Name.Text == k.Text {
+				p.errAt(k.Span, "duplicate efficiency for %s", k.Text)
+				dup = true
+				break
+			}
+		}
+		if !dup {
+			out = append(out, Efficiency{Name: k, Value: n})
+		}
+	}
+	return out
+}
+
+func (p *parser) pressure(lt []Token, st *Reaction) {
+	key := lt[0]
+	if len(lt) < 2 {
+		p.errAt(endOf(key), "expected a pressure with a unit after pressure, e.g. 1atm")
+		return
+	}
+	pn, ok := p.number(lt[1], kPressure)
+	if !ok {
+		return
+	}
+	if !(pn.SI > 0) {
+		p.errAt(lt[1].Span, "pressure must be positive, found %s", lt[1].Text)
+		return
+	}
+	if n := len(st.Pressures); n > 0 && pn.SI <= st.Pressures[n-1].P.SI {
+		p.errAt(lt[1].Span, "pressures must increase: %s after %s", lt[1].Text, st.Pressures[n-1].P.Tok.Text)
+		return
+	}
+	if len(lt) < 3 {
+		p.errAt(endOf(lt[1]), "expected A=, n= and Ea= after the pressure")
+		return
+	}
+	r := p.rate(lt[1], lt[2:], "pressure")
+	st.Pressures = append(st.Pressures, PressureRate{P: pn, Rate: *r})
+}
+
+// ---- numbers ----
+
+type unitKind uint8
+
+const (
+	kDimless  unitKind = iota // no unit allowed
+	kEnergy                   // energy per mole
+	kEa                       // activation energy: energy units or K
+	kEntropy                  // entropy / heat capacity
+	kTemp                     // temperature: K or nothing
+	kPressure                 // pressure: unit required
+)
+
+var entropyUnits = map[string]float64{"cal/mol/K": JoulesPerCalorie, "J/mol/K": 1, "kcal/mol/K": 4184, "kJ/mol/K": 1000}
+
+var pressureUnits = map[string]float64{"atm": PascalsPerAtm, "bar": PascalsPerBar, "Pa": 1, "kPa": 1000, "Torr": PascalsPerTorr}
+
+var unitLists = [...]string{
+	kEnergy:   "kcal/mol, kJ/mol, cal/mol or J/mol",
+	kEa:       "kcal/mol, kJ/mol, cal/mol, J/mol or K",
+	kEntropy:  "cal/mol/K, J/mol/K, kcal/mol/K or kJ/mol/K",
+	kTemp:     "K",
+	kPressure: "atm, bar, Pa, kPa or Torr",
+}
+
+// scanNumber returns the length of the longest prefix of s that is a number
+// per FORMAT.md §1.1, or 0.
+func scanNumber(s string) int {
+	i := 0
+	if i < len(s) && (s[i] == '+' || s[i] == '-') {
+		i++
+	}
+	d := 0
+	for i < len(s) && s[i] >= '0' && s[i] <= '9' {
+		i++
+		d++
+	}
+	if i < len(s) && s[i] == '.' {
+		i++
+		for i < len(s) && s[i] >= '0' && s[i] <= '9' {
+			i++
+			d++
+		}
+	}
+	if d == 0 {
+		return 0
+	}
+	if i < len(s) && (s[i] == 'e' || s[i] == 'E') {
+		j := i + 1
+		if j < len(s) && (s[j] == '+' || s[j] == '-') {
+			j++
+		}
+		k := j
+		for k < len(s) && s[k] >= '0' && s[k] <= '9' {
+			k++
+		}
+		if k > j {
+			i = k
+		}
+	}
+	return i
+}
+
+// number parses tok as a number of the given kind, reporting errors.
+func (p *parser) number(tok Token, kind unitKind) (Number, bool) {
+	s := tok.Text
+	n := scanNumber(s)
+	if n == 0 {
+		if s == "" {
+			p.errAt(tok.Span, "expected a number")
+		} else {
+			p.errAt(tok.Span, "expected a number, found %q", s)
+		}
+		return Number{}, false
+	}
+	if unit := s[n:]; len(unit) > 0 && (unit[0] == 'd' || unit[0] == 'D') && scanNumber("1e"+unit[1:]) == len(unit)+1 {
+		p.errAt(tok.Span, "malformed number %q: the exponent letter is e, not %c (write %se%s)", s, unit[0], s[:n], unit[1:])
+		return Number{}, false
+	}
+	v, err := strconv.ParseFloat(s[:n], 64)
+	if err != nil {
+		p.errAt(tok.Span, "number out of range: %q", s)
+		return Number{}, false
+	}
+	num := Number{Tok: tok, Value: v, Unit: s[n:]}
+	factor := 1.0
+	var ok bool
+	switch kind {
+	case kDimless:
+		ok = num.Unit == ""
+		if !ok {
+			p.errAt(tok.Span, "malformed number %q", s)
+			return Number{}, false
+		}
+	case kEnergy, kEa:
+		if num.Unit == "" {
+			factor, ok = p.energyFactor, true
+		} else if kind == kEa && num.Unit == "K" {
+			factor, ok = GasConstant, true
+		} else {
+			factor, ok = energyUnits[num.Unit]
+		}
+	case kEntropy:
+		if num.Unit == "" {
+			factor, ok = p.entropyFactor, true
+		} else {
+			factor, ok = entropyUnits[num.Unit]
+		}
+	case kTemp:
+		ok = num.Unit == "" || num.Unit == "K"
+	case kPressure:
+		if num.Unit == "" {
+			p.errAt(tok.Span, "pressure %q needs a unit: %s", s, unitLists[kPressure])
+			return Number{}, false
+		}
+		factor, ok = pressureUnits[num.Unit]
+	}
+	if !ok {
+		p.errAt(tok.Span, "unknown unit %q in %q: expected %s", num.Unit, s, unitLists[kind])
+		return Number{}, false
+	}
+	num.SI = v * factor
+	return num, true
+}
+
+// ParseFormula parses an element formula such as "C10H8" or "CH3O" into
+// element counts in written order (a repeated element is summed into its
+// first occurrence). Symbols are a capital letter optionally followed by a
+// lower-case letter; counts are positive integers, default 1.
+func ParseFormula(s string) ([]ElementCount, error) {
+	if s == "" {
+		return nil, fmt.Errorf("empty formula")
+	}
+	var out []ElementCount
+	for i := 0; i < len(s); {
+		if s[i] < 'A' || s[i] > 'Z' {
+			return nil, fmt.Errorf("expected an element symbol at %q", s[i:])
+		}
+		j := i + 1
+		if j < len(s) && s[j] >= 'a' && s[j] <= 'z' {
+			j++
+		}
+		sym := s[i:j]
+		k := j
+		for k < len(s) && s[k] >= '0' && s[k] <= '9' {
+			k++
+		}
+		count := 1
+		if k > j {
+			c, err := strconv.Atoi(s[j:k])
+			if err != nil || c < 1 {
+				return nil, fmt.Errorf("bad count %q for %s", s[j:k], sym)
+			}
+			count = c
+		}
+		found := false
+		for x := range out {
+			if out[x].Symbol == sym {
+				out[x].Count += count
+				found = true
+			}
+		}
+		if !found {
+			out = append(out, ElementCount{Symbol: sym, Count: count})
+		}
+		i = k
+	}
+	return out, nil
+}
+
+// Parse parses one .kiln file. It never fails or panics: problems are
+// reported in File.Diags (codes "syntax" and "no-rate") and the tree holds
+// whatever could be recognised. The statements' spans tile src exactly.
+func Parse(name string, src []byte) *File {
+	p := newParser(name, src)
+	p.run()
+	return p.f
+}
