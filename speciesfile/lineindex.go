@@ -1,6 +1,8 @@
 package speciesfile
 
 import (
+	"bytes"
+	"encoding/binary"
 	"sort"
 	"unicode/utf8"
 )
@@ -22,18 +24,26 @@ type LineIndex struct {
 
 // NewLineIndex indexes src. src must not be modified afterwards.
 func NewLineIndex(src []byte) *LineIndex {
-	li := &LineIndex{src: src, ascii: true}
-	n := 1
-	for _, c := range src {
-		if c == '\n' {
-			n++
-		} else if c >= 0x80 {
-			li.ascii = false
+	li := &LineIndex{src: src, ascii: isASCII(src)}
+	if bytes.IndexByte(src, '\r') < 0 {
+		// fast path: lines end only at '\n'
+		n := bytes.Count(src, []byte{'\n'}) + 1
+		li.starts = make([]int, 0, n)
+		li.ends = make([]int, 0, n)
+		start := 0
+		for {
+			i := bytes.IndexByte(src[start:], '\n')
+			if i < 0 {
+				break
+			}
+			li.starts = append(li.starts, start)
+			li.ends = append(li.ends, start+i)
+			start += i + 1
 		}
+		li.starts = append(li.starts, start)
+		li.ends = append(li.ends, len(src))
+		return li
 	}
-	// lone CRs add lines too; count them on the second pass.
-	li.starts = make([]int, 0, n)
-	li.ends = make([]int, 0, n)
 	start := 0
 	for i := 0; i < len(src); i++ {
 		switch src[i] {
@@ -53,6 +63,22 @@ func NewLineIndex(src []byte) *LineIndex {
 	li.starts = append(li.starts, start)
 	li.ends = append(li.ends, len(src))
 	return li
+}
+
+// isASCII reports whether b has no byte >= 0x80 (eight bytes at a time).
+func isASCII(b []byte) bool {
+	for len(b) >= 8 {
+		if binary.LittleEndian.Uint64(b)&0x8080808080808080 != 0 {
+			return false
+		}
+		b = b[8:]
+	}
+	for _, c := range b {
+		if c >= 0x80 {
+			return false
+		}
+	}
+	return true
 }
 
 // LineCount returns the number of lines (terminators + 1).

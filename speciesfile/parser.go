@@ -3,6 +3,7 @@ package speciesfile
 import (
 	"bytes"
 	"fmt"
+	"sort"
 	"strconv"
 	"strings"
 	"unicode/utf8"
@@ -50,12 +51,15 @@ type parser struct {
 
 	checkBytes bool // src has invalid UTF-8 or NUL bytes: check each line
 
-	pos     int // start of the next unread line
-	crlf    int // lines ending in \r\n
-	lf      int // lines ending in \n or a lone \r
-	pending *srcLine
+	pos        int // start of the next unread line
+	crlf       int // lines ending in \r\n
+	lf         int // lines ending in \n or a lone \r
+	pending    srcLine
+	hasPending bool
+	hasCR      bool // src contains '\r' (else lines end only at '\n')
 
 	toks    []Token // tokens of the current line (reused)
+	kw      []Token // tokens of the current statement's keyword line (reused)
 	comment int     // offset of the current line's comment, -1 if none
 
 	energyFactor  float64 // J/mol per file energy unit
@@ -76,6 +80,7 @@ func newParser(name string, src []byte) *parser {
 		energyFactor: 4184, entropyFactor: JoulesPerCalorie,
 	}
 	p.checkBytes = !utf8.Valid(src) || bytes.IndexByte(src, 0) >= 0
+	p.hasCR = bytes.IndexByte(src, '\r') >= 0
 	if bytes.HasPrefix(src, []byte("\xef\xbb\xbf")) {
 		f.BOM = true
 	}
@@ -94,7 +99,12 @@ func (p *parser) readLine() (srcLine, bool) {
 	}
 	src := p.src
 	l := srcLine{start: p.pos}
-	i := bytes.IndexAny(src[p.pos:], "\r\n")
+	var i int
+	if p.hasCR {
+		i = bytes.IndexAny(src[p.pos:], "\r\n")
+	} else {
+		i = bytes.IndexByte(src[p.pos:], '\n')
+	}
 	if i < 0 {
 		l.end, l.next = len(src), len(src)
 	} else {
@@ -168,8 +178,8 @@ func (p *parser) run() {
 	var last Stmt
 	for {
 		var l srcLine
-		if p.pending != nil {
-			l, p.pending = *p.pending, nil
+		if p.hasPending {
+			l, p.hasPending = p.pending, false
 		} else {
 			var ok bool
 			if l, ok = p.readLine(); !ok {
@@ -189,7 +199,7 @@ func (p *parser) run() {
 				break
 			}
 			if m.kind == lineStmt {
-				p.pending = &m
+				p.pending, p.hasPending = m, true
 				break
 			}
 			if m.kind == lineCont {
@@ -216,6 +226,8 @@ func (p *parser) run() {
 	if p.crlf > p.lf {
 		f.Newline = "\r\n"
 	}
+	// diagnostics in file order (stable: same-offset ones keep report order)
+	sort.SliceStable(f.Diags, func(i, j int) bool { return f.Diags[i].Span.Start < f.Diags[j].Span.Start })
 }
 
 func setExtentEnd(st Stmt, end int) {
@@ -284,7 +296,9 @@ const keywordList = "species, reaction, units, include, group"
 
 // statement dispatches on the keyword of line l.
 func (p *parser) statement(l srcLine, base StmtBase) Stmt {
-	toks := p.tokenize(l)
+	// keep the keyword line's tokens apart from p.toks, which body lines reuse
+	p.kw = append(p.kw[:0], p.tokenize(l)...)
+	toks := p.kw
 	if l.kind == lineCont {
 		p.errAt(toks[0].Span, "indented line outside any statement: a statement starts in column 0 with one of %s", keywordList)
 		return &BadStmt{base}
@@ -497,6 +511,15 @@ func splitPair(tk Token) (k, v Token, ok bool) {
 	return k, v, true
 }
 
+// linesList formats ["a"] as "its a line" and ["a","b","c"] as
+// "its a, b and c lines".
+func linesList(keys []string) string {
+	if len(keys) == 1 {
+		return "its " + keys[0] + " line"
+	}
+	return "its " + strings.Join(keys[:len(keys)-1], ", ") + " and " + keys[len(keys)-1] + " lines"
+}
+
 // missingThermo reports which of hf298/s298/cp are missing.
 func (p *parser) missingThermo(at Span, what string, t *thermoLines) {
 	var miss []string
@@ -510,7 +533,7 @@ func (p *parser) missingThermo(at Span, what string, t *thermoLines) {
 		miss = append(miss, "cp")
 	}
 	if len(miss) > 0 {
-		p.errAt(at, "%s is missing its %s line", what, strings.Join(miss, ", "))
+		p.errAt(at, "%s is missing %s", what, linesList(miss))
 	}
 }
 
@@ -532,11 +555,9 @@ func (p *parser) group(toks []Token, base StmtBase) Stmt {
 		}
 	}
 	st.Hf298, st.S298, st.Cp, st.Source = t.hf, t.s, t.cp, t.source
-	at := toks[0].Span
 	if len(toks) > 1 {
-		at = toks[1].Span
+		p.missingThermo(toks[1].Span, "group "+toks[1].Text, &t)
 	}
-	p.missingThermo(at, "group", &t)
 	p.f.Groups = append(p.f.Groups, st)
 	return st
 }
@@ -571,7 +592,15 @@ const speciesAttrList = "multiplicity, symmetry, optical-isomers, composition, n
 
 func (p *parser) species(toks []Token, base StmtBase) Stmt {
 	p.sawDecl = true
-	st := &Species{StmtBase: base}
+	// one allocation for the species and its small optional parts
+	sa := &struct {
+		sp                 Species
+		smiles, comp, note Token
+		ints               [3]IntAttr
+	}{}
+	st := &sa.sp
+	st.StmtBase = base
+	st.Attrs = make([]Attr, 0, len(p.body))
 	if len(toks) < 2 {
 		p.errAt(endOf(toks[0]), "expected a species name after species")
 	} else {
@@ -580,8 +609,8 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 			p.errAt(toks[1].Span, "%s", msg)
 		}
 		if len(toks) > 2 {
-			sm := toks[2]
-			st.SMILES = &sm
+			sa.smiles = toks[2]
+			st.SMILES = &sa.smiles
 			p.extra(toks[3:], "the SMILES (a SMILES has no blanks)")
 		}
 	}
@@ -630,17 +659,18 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 			if !p.first(&set, id, key) {
 				continue
 			}
-			ia := p.intAttr(lt)
-			if ia == nil {
+			ia, ok := p.intAttr(lt)
+			if !ok {
 				continue
 			}
+			sa.ints[id] = ia
 			switch id {
 			case aMult:
-				st.Multiplicity = ia
+				st.Multiplicity = &sa.ints[id]
 			case aSym:
-				st.Symmetry = ia
+				st.Symmetry = &sa.ints[id]
 			default:
-				st.OpticalIsomers = ia
+				st.OpticalIsomers = &sa.ints[id]
 			}
 		case "composition":
 			if !p.first(&set, aComp, key) {
@@ -651,8 +681,9 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 				continue
 			}
 			p.extra(lt[2:], "the formula (a formula has no blanks)")
-			c := lt[1]
-			st.Composition = &c
+			sa.comp = lt[1]
+			c := sa.comp
+			st.Composition = &sa.comp
 			formula, err := ParseFormula(c.Text)
 			if err != nil {
 				p.errAt(c.Span, "malformed composition %q: %v", c.Text, err)
@@ -664,7 +695,8 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 				continue
 			}
 			if txt, ok := p.freeText(l, lt, 1); ok {
-				st.Note = &txt
+				sa.note = txt
+				st.Note = &sa.note
 			} else {
 				p.errAt(endOf(key), "expected text after note")
 			}
@@ -710,7 +742,7 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 			miss = append(miss, "high")
 		}
 		if len(miss) > 0 {
-			p.errAt(nasa.Header.Span, "nasa7 block is missing its %s line", strings.Join(miss, " and "))
+			p.errAt(nasa.Header.Span, "nasa7 block is missing %s", linesList(miss))
 		}
 	}
 	if st.Table != nil {
@@ -724,19 +756,19 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 	return st
 }
 
-func (p *parser) intAttr(lt []Token) *IntAttr {
+func (p *parser) intAttr(lt []Token) (IntAttr, bool) {
 	key := lt[0]
 	if len(lt) < 2 {
 		p.errAt(endOf(key), "expected a positive integer after %s", key.Text)
-		return nil
+		return IntAttr{}, false
 	}
 	p.extra(lt[2:], key.Text+" value")
 	v, err := strconv.Atoi(lt[1].Text)
 	if err != nil || v < 1 || lt[1].Text[0] == '+' || lt[1].Text[0] == '-' {
 		p.errAt(lt[1].Span, "%s needs a positive integer, found %q", key.Text, lt[1].Text)
-		return nil
+		return IntAttr{}, false
 	}
-	return &IntAttr{Key: key, Value: v, Tok: lt[1]}
+	return IntAttr{Key: key, Value: v, Tok: lt[1]}, true
 }
 
 func (p *parser) nasaHeader(lt []Token, b *NASA7Block) {
@@ -824,7 +856,17 @@ func isRateToken(s string) bool {
 
 func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 	p.sawDecl = true
-	st := &Reaction{StmtBase: base}
+	// one allocation for the reaction, its optional tokens and main rate
+	ra := &struct {
+		r               Reaction
+		fall, dup, note Token
+		rate            rateStore
+	}{}
+	st := &ra.r
+	st.StmtBase = base
+	if len(p.body) > 0 {
+		st.Attrs = make([]Attr, 0, len(p.body))
+	}
 	p.f.Reactions = append(p.f.Reactions, st)
 	eqEnd := len(toks)
 	for i := 1; i < len(toks); i++ {
@@ -838,12 +880,16 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 		p.errAt(endOf(toks[0]), "expected a reaction equation after reaction, e.g. H + O2 <=> O + OH")
 	} else {
 		st.Equation = Span{eq[0].Span.Start, eq[len(eq)-1].Span.End}
-		p.equation(eq, st)
+		if fall, ok := p.equation(eq, st); ok {
+			ra.fall = fall
+			st.Falloff = &ra.fall
+		}
 	}
 	if eqEnd < len(toks) {
-		st.Rate = p.rate(toks[0], toks[eqEnd:], "")
+		st.Rate = p.rateInto(&ra.rate, toks[0], toks[eqEnd:], "")
 	}
 	var set attrSet
+	sawPressure := false
 	for _, bl := range p.body {
 		lt := p.tokenize(bl)
 		key := lt[0]
@@ -871,14 +917,15 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 			}
 			st.Efficiencies = p.efficiencies(lt)
 		case "pressure":
+			sawPressure = true
 			p.pressure(lt, st)
 		case "duplicate":
 			if !p.first(&set, rDup, key) {
 				continue
 			}
 			p.extra(lt[1:], "duplicate")
-			k := key
-			st.Duplicate = &k
+			ra.dup = key
+			st.Duplicate = &ra.dup
 		case "reverse":
 			if !p.first(&set, rRev, key) {
 				continue
@@ -892,7 +939,8 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 				continue
 			}
 			if txt, ok := p.freeText(bl, lt, 1); ok {
-				st.Note = &txt
+				ra.note = txt
+				st.Note = &ra.note
 			} else {
 				p.errAt(endOf(key), "expected text after note")
 			}
@@ -903,7 +951,7 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 	if st.Troe != nil && st.LowPressure == nil {
 		p.errAt(st.Troe.Span, "troe needs a low-pressure line")
 	}
-	if eqEnd == len(toks) && len(st.Pressures) == 0 && len(eq) > 0 {
+	if eqEnd == len(toks) && !sawPressure && len(eq) > 0 {
 		p.f.Diags = append(p.f.Diags, Diagnostic{Span: st.Equation, Severity: SeverityWarning, Code: CodeNoRate,
 			Message: "reaction has no rate parameters (A=, n=, Ea=)"})
 	}
@@ -918,34 +966,38 @@ func isArrowLike(s string) bool {
 	return false
 }
 
-// equation parses the equation tokens into st.
-func (p *parser) equation(eq []Token, st *Reaction) {
+// equation parses the equation tokens into st; it returns the falloff token
+// (ok true) for a well-formed falloff reaction.
+func (p *parser) equation(eq []Token, st *Reaction) (fall Token, isFalloff bool) {
 	arrow := -1
 	for i, t := range eq {
 		switch {
 		case t.Text == "<=>" || t.Text == "=>":
 			if arrow >= 0 {
 				p.errAt(t.Span, "second arrow %q: a reaction has exactly one arrow", t.Text)
-				return
+				return fall, false
 			}
 			arrow = i
 		case isArrowLike(t.Text):
 			p.errAt(t.Span, "%q is not an arrow: use <=> (reversible) or => (irreversible)", t.Text)
-			return
+			return fall, false
 		}
 	}
 	if arrow < 0 {
 		p.errAt(st.Equation, "missing arrow: expected <=> or => between reactants and products")
-		return
+		return fall, false
 	}
 	st.Arrow = eq[arrow]
 	st.Reversible = eq[arrow].Text == "<=>"
+	// both sides share one backing array (capped so they cannot overlap)
+	buf := make([]Term, 0, (len(eq)+1)/2)
 	var ok1, ok2 bool
 	var m1, m2, f1, f2 *Token
-	st.Reactants, m1, f1, ok1 = p.side(eq[:arrow], eq[arrow], "reactant")
-	st.Products, m2, f2, ok2 = p.side(eq[arrow+1:], eq[arrow], "product")
+	st.Reactants, m1, f1, ok1 = p.side(eq[:arrow], eq[arrow], "reactant", buf)
+	st.Reactants = st.Reactants[:len(st.Reactants):len(st.Reactants)]
+	st.Products, m2, f2, ok2 = p.side(eq[arrow+1:], eq[arrow], "product", buf[len(st.Reactants):len(st.Reactants)])
 	if !ok1 || !ok2 {
-		return
+		return fall, false
 	}
 	switch {
 	case m1 != nil && m2 == nil:
@@ -962,8 +1014,11 @@ func (p *parser) equation(eq []Token, st *Reaction) {
 		p.errAt(f2.Span, "falloff collider %s differs from %s on the reactant side", f2.Text, f1.Text)
 	default:
 		st.ThirdBody = m1 != nil
-		st.Falloff = f1
+		if f1 != nil {
+			return *f1, true
+		}
 	}
+	return fall, false
 }
 
 func isFalloffToken(s string) bool {
@@ -972,7 +1027,7 @@ func isFalloffToken(s string) bool {
 
 // side parses one side of an equation. It returns the terms, the M token,
 // the falloff token and whether the side was well formed.
-func (p *parser) side(toks []Token, arrow Token, which string) (terms []Term, m, fall *Token, ok bool) {
+func (p *parser) side(toks []Token, arrow Token, which string, terms []Term) (_ []Term, m, fall *Token, ok bool) {
 	if len(toks) == 0 {
 		if which == "reactant" {
 			p.errAt(arrow.Span, "empty reactant side: expected a species before %s", arrow.Text)
@@ -981,7 +1036,6 @@ func (p *parser) side(toks []Token, arrow Token, which string) (terms []Term, m,
 		}
 		return nil, nil, nil, false
 	}
-	terms = make([]Term, 0, (len(toks)+1)/2)
 	expectTerm := true
 	var prev Token
 	for i := 0; i < len(toks); i++ {
@@ -996,8 +1050,7 @@ func (p *parser) side(toks []Token, arrow Token, which string) (terms []Term, m,
 				expectTerm = true
 				prev = t
 			case isFalloffToken(t.Text):
-				ft := t
-				fall = &ft
+				fall = &toks[i]
 			default:
 				p.errAt(t.Span, "expected \"+\" between %q and %q", prev.Text, t.Text)
 				return terms, m, fall, false
@@ -1021,8 +1074,7 @@ func (p *parser) side(toks []Token, arrow Token, which string) (terms []Term, m,
 				p.errAt(t.Span, "M (third body) appears twice on the %s side", which)
 				return terms, m, fall, false
 			}
-			mt := t
-			m = &mt
+			m = &toks[i]
 		default:
 			term := Term{Coeff: 1, Name: t}
 			if n := scanNumber(t.Text); n == len(t.Text) {
@@ -1049,7 +1101,7 @@ func (p *parser) side(toks []Token, arrow Token, which string) (terms []Term, m,
 					p.errAt(next.Span, "expected a species name after coefficient %q, found %q", t.Text, next.Text)
 					return terms, m, fall, false
 				}
-				ct := t
+				ct := t // escapes: coefficients are rare enough
 				term = Term{Coeff: v, CoeffTok: &ct, Name: next}
 				i++
 				t = next
@@ -1084,7 +1136,17 @@ func (p *parser) side(toks []Token, arrow Token, which string) (terms []Term, m,
 
 // rate parses A=, n=, Ea= tokens. what names the line for messages ("" for
 // the reaction line itself).
+// rateStore is the storage of one Arrhenius set (one allocation).
+type rateStore struct {
+	r Arrhenius
+	n [3]Number
+}
+
 func (p *parser) rate(key Token, toks []Token, what string) *Arrhenius {
+	return p.rateInto(new(rateStore), key, toks, what)
+}
+
+func (p *parser) rateInto(ra *rateStore, key Token, toks []Token, what string) *Arrhenius {
 	ctx := "rate parameters"
 	if what != "" {
 		ctx = what + " rate parameters"
@@ -1093,19 +1155,21 @@ func (p *parser) rate(key Token, toks []Token, what string) *Arrhenius {
 		p.errAt(endOf(key), "expected A=, n= and Ea= after %s", key.Text)
 		return nil
 	}
-	r := &Arrhenius{Span: Span{toks[0].Span.Start, toks[len(toks)-1].Span.End}}
+	r := &ra.r
+	r.Span = Span{toks[0].Span.Start, toks[len(toks)-1].Span.End}
 	for _, tk := range toks {
 		k, v, ok := splitPair(tk)
 		var dst **Number
+		var slot *Number
 		kind := kDimless
 		if ok {
 			switch k.Text {
 			case "A":
-				dst = &r.A
+				dst, slot = &r.A, &ra.n[0]
 			case "n":
-				dst = &r.N
+				dst, slot = &r.N, &ra.n[1]
 			case "Ea":
-				dst, kind = &r.Ea, kEa
+				dst, slot, kind = &r.Ea, &ra.n[2], kEa
 			}
 		}
 		if dst == nil {
@@ -1116,8 +1180,13 @@ func (p *parser) rate(key Token, toks []Token, what string) *Arrhenius {
 			p.errAt(tk.Span, "duplicate %s= in %s", k.Text, ctx)
 			continue
 		}
+		if v.Text == "" {
+			p.errAt(tk.Span, "expected a number after %s=", k.Text)
+			continue
+		}
 		if n, ok := p.number(v, kind); ok {
-			*dst = &n
+			*slot = n
+			*dst = slot
 		}
 	}
 	var miss []string
@@ -1156,21 +1225,27 @@ func (p *parser) troe(lt []Token) *Troe {
 		p.errAt(endOf(key), "expected alpha=, T3=, T1= and optionally T2= after troe")
 		return nil
 	}
-	tr := &Troe{Span: Span{lt[1].Span.Start, lt[len(lt)-1].Span.End}}
+	ta := &struct {
+		t Troe
+		n [4]Number
+	}{}
+	tr := &ta.t
+	tr.Span = Span{lt[1].Span.Start, lt[len(lt)-1].Span.End}
 	for _, tk := range lt[1:] {
 		k, v, ok := splitPair(tk)
 		var dst **Number
+		var slot *Number
 		kind := kTemp
 		if ok {
 			switch k.Text {
 			case "alpha":
-				dst, kind = &tr.Alpha, kDimless
+				dst, slot, kind = &tr.Alpha, &ta.n[0], kDimless
 			case "T3":
-				dst = &tr.T3
+				dst, slot = &tr.T3, &ta.n[1]
 			case "T1":
-				dst = &tr.T1
+				dst, slot = &tr.T1, &ta.n[2]
 			case "T2":
-				dst = &tr.T2
+				dst, slot = &tr.T2, &ta.n[3]
 			}
 		}
 		if dst == nil {
@@ -1182,7 +1257,8 @@ func (p *parser) troe(lt []Token) *Troe {
 			continue
 		}
 		if n, ok := p.number(v, kind); ok {
-			*dst = &n
+			*slot = n
+			*dst = slot
 		}
 	}
 	var miss []string

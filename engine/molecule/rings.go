@@ -41,8 +41,11 @@ func (m *Molecule) ringBondFlags() []bool {
 					disc[w], low[w] = t, t
 					t++
 					stack = append(stack, frame{w, b, 0})
-				} else if disc[w] < low[f.v] {
-					low[f.v] = disc[w]
+				} else {
+					inRing[b] = true // a back edge closes a cycle
+					if disc[w] < low[f.v] {
+						low[f.v] = disc[w]
+					}
 				}
 				continue
 			}

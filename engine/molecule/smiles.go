@@ -211,21 +211,20 @@ func (p *parser) parse() error {
 				i++
 			}
 			if r, ok := rings[num]; ok {
-				sym := pendSym
-				symPos := pendPos
-				if r.sym != 0 {
-					if sym != 0 && !compatibleRingSyms(r.sym, sym) {
-						return errAt(pendPos, "ring bond %d written with two different bond symbols", num)
-					}
-					if sym == 0 || sym == '/' || sym == '\\' {
-						sym, symPos = r.sym, r.symPos
-					}
+				if r.sym != 0 && pendSym != 0 && !compatibleRingSyms(r.sym, pendSym) {
+					return errAt(pendPos, "ring bond %d written with two different bond symbols", num)
 				}
-				pos := start
-				if symPos >= 0 {
-					pos = symPos
+				// Bonds read "A sym B" in written direction: a symbol written
+				// only at the closing digit goes from the closing atom to the
+				// opener; otherwise the opener's symbol is used.
+				a, b, sym, pos := r.atom, prev, r.sym, r.symPos
+				if r.sym == 0 && pendSym != 0 {
+					a, b, sym, pos = prev, r.atom, pendSym, pendPos
 				}
-				if _, err := p.addBond(r.atom, prev, sym, pos); err != nil {
+				if sym == 0 {
+					pos = start
+				}
+				if _, err := p.addBond(a, b, sym, pos); err != nil {
 					return err
 				}
 				p.nbr[r.atom][r.slot] = prev

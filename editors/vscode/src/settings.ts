@@ -34,25 +34,35 @@ export const defaultServerSettings: Readonly<KilnServerSettings> = Object.freeze
 /** Reads one setting below the `kiln` section, e.g. `fit.tMid`. */
 export type SettingReader = (key: string) => unknown;
 
-function finiteNumber(v: unknown, fallback: number, min: number): number {
-  return typeof v === 'number' && Number.isFinite(v) && v >= min ? v : fallback;
+function positive(v: unknown, fallback: number): number {
+  return typeof v === 'number' && Number.isFinite(v) && v > 0 ? v : fallback;
 }
 
 /**
- * Builds the server settings from the `kiln.*` configuration. Values of the
- * wrong type, non-finite or below the allowed minimum fall back to the
- * defaults so the server never receives a malformed setting.
+ * Builds the server settings from the `kiln.*` configuration.
+ *
+ * The server rejects the whole settings object if any value is invalid, so
+ * invalid values are replaced by the defaults here: thresholds and the
+ * collision factor must be finite and > 0, and the fit temperatures must
+ * satisfy 300 K < tMid < tHigh ≤ 6000 K (otherwise both revert to 1000 K
+ * and 5000 K).
  */
 export function toServerSettings(get: SettingReader): KilnServerSettings {
   const d = defaultServerSettings;
   const units = get('units');
+  let tMid = positive(get('fit.tMid'), d.tMid);
+  let tHigh = positive(get('fit.tHigh'), d.tHigh);
+  if (!(tMid > 300 && tMid < tHigh && tHigh <= 6000)) {
+    tMid = d.tMid;
+    tHigh = d.tHigh;
+  }
   return {
     units: units === 'kJ/mol' || units === 'kcal/mol' ? units : d.units,
-    tMid: finiteNumber(get('fit.tMid'), d.tMid, 0),
-    tHigh: finiteNumber(get('fit.tHigh'), d.tHigh, 0),
-    mismatchHf298: finiteNumber(get('thresholds.hf298'), d.mismatchHf298, 0),
-    mismatchS298: finiteNumber(get('thresholds.s298'), d.mismatchS298, 0),
-    collisionFactor: finiteNumber(get('thresholds.collisionFactor'), d.collisionFactor, 0),
+    tMid,
+    tHigh,
+    mismatchHf298: positive(get('thresholds.hf298'), d.mismatchHf298),
+    mismatchS298: positive(get('thresholds.s298'), d.mismatchS298),
+    collisionFactor: positive(get('thresholds.collisionFactor'), d.collisionFactor),
   };
 }
 

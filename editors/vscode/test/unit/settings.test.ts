@@ -46,12 +46,28 @@ test('malformed values fall back to defaults', () => {
       units: 'eV',
       'fit.tMid': 'hot',
       'fit.tHigh': Number.POSITIVE_INFINITY,
-      'thresholds.hf298': -1,
+      'thresholds.hf298': 0,
       'thresholds.s298': Number.NaN,
       'thresholds.collisionFactor': null,
     }),
   );
   assert.deepEqual(s, { ...defaultServerSettings });
+});
+
+test('fit temperatures outside 300 K < tMid < tHigh <= 6000 K revert together', () => {
+  const cases: Array<[number, number]> = [
+    [300, 5000], // tMid must exceed 300 K
+    [2000, 1500], // tMid must be below tHigh
+    [1000, 6500], // tHigh at most 6000 K
+  ];
+  for (const [tMid, tHigh] of cases) {
+    const s = toServerSettings(reader({ 'fit.tMid': tMid, 'fit.tHigh': tHigh }));
+    assert.equal(s.tMid, 1000, `tMid for ${tMid}/${tHigh}`);
+    assert.equal(s.tHigh, 5000, `tHigh for ${tMid}/${tHigh}`);
+  }
+  const ok = toServerSettings(reader({ 'fit.tMid': 1200, 'fit.tHigh': 6000 }));
+  assert.equal(ok.tMid, 1200);
+  assert.equal(ok.tHigh, 6000);
 });
 
 test('server command: path, serve, optional log file', () => {

@@ -1,0 +1,90 @@
+;;; kiln-eglot-test.el --- eglot integration tests for kiln-mode  -*- lexical-binding: t; -*-
+
+;;; Commentary:
+;; Skipped when eglot cannot be loaded.  The live test also needs the
+;; environment variable KILN_BINARY naming the kiln binary, and
+;; KILN_FIXTURE naming a file with an undeclared species.
+
+;;; Code:
+
+(require 'ert)
+(require 'kiln-mode)
+(require 'package)
+
+(defun kiln-eglot-test--load ()
+  "Load eglot, from Emacs itself or from an installed package; non-nil on success."
+  (or (featurep 'eglot)
+      (progn
+        (unless package--initialized
+          ;; Debian's elpa-* packages; `emacs -Q' does not list them.
+          (dolist (d '("/usr/share/emacs/site-lisp/elpa"))
+            (when (file-directory-p d)
+              (add-to-list 'package-directory-list d)))
+          (package-initialize))
+        (require 'eglot nil t))))
+
+(defvar eglot-server-programs)
+(declare-function eglot "eglot")
+(declare-function eglot-current-server "eglot")
+(declare-function eglot-shutdown "eglot")
+(declare-function eglot--guess-contact "eglot")
+(declare-function eglot--TextDocumentPositionParams "eglot")
+(declare-function jsonrpc-request "jsonrpc")
+
+(ert-deftest kiln-eglot-server-registered ()
+  (skip-unless (kiln-eglot-test--load))
+  (should (equal (cdr (assoc 'kiln-mode eglot-server-programs)) '("kiln" "serve"))))
+
+(defun kiln-eglot-test--wait (pred seconds)
+  "Process events until PRED holds or SECONDS pass; return PRED's value."
+  (let ((deadline (+ (float-time) seconds))
+        value)
+    (while (and (not (setq value (funcall pred)))
+                (< (float-time) deadline))
+      (accept-process-output nil 0.05))
+    value))
+
+(ert-deftest kiln-eglot-live-diagnostics-and-hover ()
+  (skip-unless (kiln-eglot-test--load))
+  (let ((binary (getenv "KILN_BINARY"))
+        (fixture (getenv "KILN_FIXTURE")))
+    (skip-unless (and binary (not (string-empty-p binary)) fixture))
+    (let* ((dir (make-temp-file "kiln-eglot" t))
+           (file (expand-file-name "fixture.kiln" dir))
+           (eglot-server-programs (cons `(kiln-mode . (,binary "serve")) eglot-server-programs))
+           (buf nil))
+      (unwind-protect
+          (progn
+            (copy-file fixture file)
+            (setq buf (find-file-noselect file))
+            (with-current-buffer buf
+              (should (eq major-mode 'kiln-mode))
+              (apply #'eglot (eglot--guess-contact))
+              (should (kiln-eglot-test--wait #'eglot-current-server 20))
+              ;; Diagnostics arrive through flymake.
+              (let ((diag (kiln-eglot-test--wait
+                           (lambda ()
+                             (seq-find (lambda (d)
+                                         (string-match-p "HO2" (flymake-diagnostic-text d)))
+                                       (flymake-diagnostics)))
+                           20)))
+                (should diag)
+                (should (= (line-number-at-pos (flymake-diagnostic-beg diag)) 4)))
+              ;; Hover on the species name.
+              (goto-char (point-min))
+              (search-forward "species ethanol")
+              (backward-char 3)
+              (let* ((res (jsonrpc-request (eglot-current-server) :textDocument/hover
+                                           (eglot--TextDocumentPositionParams)))
+                     (contents (plist-get res :contents))
+                     (text (if (stringp contents) contents (format "%S" contents))))
+                (should (or (string-match-p "ΔHf" text) (string-match-p "kJ/mol\\|kcal/mol" text))))))
+        (when buf
+          (with-current-buffer buf
+            (when (eglot-current-server)
+              (eglot-shutdown (eglot-current-server))))
+          (kill-buffer buf))
+        (delete-directory dir t)))))
+
+(provide 'kiln-eglot-test)
+;;; kiln-eglot-test.el ends here

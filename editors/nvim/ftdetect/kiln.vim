@@ -1,0 +1,2 @@
+" Filetype detection for kiln mechanism files.
+autocmd BufRead,BufNewFile *.kiln setfiletype kiln

@@ -1,0 +1,47 @@
+#!/usr/bin/env bash
+# Runs every editor-plugin test: VS Code (grammar + unit tests, compile,
+# package), Neovim (headless, live server) and Emacs (ERT, live eglot test
+# when eglot is installed). Fails if any of them fails.
+#
+# Usage: editors/test.sh KILN_BINARY
+# Needs: node/npm (run `npm ci` in editors/vscode first, or this script does),
+#        nvim >= 0.7, emacs >= 27 (Debian: neovim emacs-nox [elpa-eglot]).
+set -uo pipefail
+
+if [[ $# -ne 1 ]]; then
+  echo "usage: $0 KILN_BINARY" >&2
+  exit 2
+fi
+binary=$(readlink -f "$1")
+here=$(cd "$(dirname "$0")" && pwd)
+failed=()
+
+run() {
+  local name=$1
+  shift
+  echo "=== editors: $name"
+  if "$@"; then
+    echo "=== editors: $name: ok"
+  else
+    echo "=== editors: $name: FAILED"
+    failed+=("$name")
+  fi
+}
+
+vscode() {
+  cd "$here/vscode" || return 1
+  if [[ ! -d node_modules ]]; then
+    npm ci --no-audit --no-fund || return 1
+  fi
+  npm test && npm run package && [[ -s kiln-0.1.0.vsix ]]
+}
+
+run vscode vscode
+run nvim "$here/nvim/test/run.sh" "$binary"
+run emacs "$here/emacs/test/run.sh" "$binary"
+
+if ((${#failed[@]} > 0)); then
+  echo "editors: failed: ${failed[*]}"
+  exit 1
+fi
+echo "editors: all passed"

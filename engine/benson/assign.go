@@ -1,0 +1,164 @@
+package benson
+
+import (
+	"fmt"
+	"sort"
+	"strings"
+)
+
+// groupOf returns the centre type and neighbour counts of atom i's group, and
+// false when the atom is not polyvalent (terminal atoms such as =O, Cl and
+// lone H make no group) .
+func (g *graph) groupOf(i int) (string, map[string]int, bool) {
+	a := g.m.Atoms[i]
+	centre := g.typ[i]
+	if len(g.nbr[i])+a.HCount < 2 {
+		return "", nil, false
+	}
+	counts := map[string]int{}
+	if a.HCount > 0 {
+		counts["H"] = a.HCount
+	}
+	skip := -1 // the implied partner: =C of Cd, ≡C of Ct, =O of CO
+	switch centre {
+	case "Cd", "CO":
+		skip = g.partner(i, 2)
+	case "Ct":
+		skip = g.partner(i, 3)
+	case "Ca":
+		return "Ca", map[string]int{}, true
+	}
+	for k, j := range g.nbr[i] {
+		if j == skip {
+			continue
+		}
+		if centre == "Cb" && g.benzBond[g.nbrBond[i][k]] {
+			continue // ring neighbours are implied by Cb
+		}
+		counts[g.ligandType(j)]++
+	}
+	return centre, counts, true
+}
+
+// ligandType is the type of atom j as a neighbour in a group name.
+func (g *graph) ligandType(j int) string {
+	return g.typ[j]
+}
+
+// relative lists, for each neighbour type, the closest type used to
+// approximate a missing group, with a cost ranking the approximation
+// (common practice: unsaturated carbon → its less unsaturated relative,
+// carbonyl → alkyl carbon; replacing O by C is a last resort).
+var relative = map[string]struct {
+	to   string
+	cost int
+}{
+	"Cbf": {"Cb", 1}, "Ca": {"Cd", 1}, "Cb": {"Cd", 1}, "Ct": {"Cd", 1},
+	"Cd": {"C", 1}, "CO": {"C", 1}, "O": {"C", 3},
+}
+
+// approximate finds the cheapest table group reachable from (centre,
+// counts) by replacing neighbour types with their relatives. It returns the
+// group, the replacements made, and false if none exists.
+func approximate(l lookup, centre string, counts map[string]int) (GroupValue, []string, bool) {
+	type state struct {
+		counts map[string]int
+		cost   int
+		steps  []string
+	}
+	seen := map[string]bool{groupName(centre, counts): true}
+	frontier := []state{{counts: counts}}
+	for len(frontier) > 0 {
+		sort.SliceStable(frontier, func(i, j int) bool { return frontier[i].cost < frontier[j].cost })
+		s := frontier[0]
+		frontier = frontier[1:]
+		if s.cost > 0 {
+			if v, ok := l.group(groupName(centre, s.counts)); ok {
+				return v, s.steps, true
+			}
+		}
+		for _, lig := range ligandOrder {
+			if s.counts[lig] == 0 {
+				continue
+			}
+			r, ok := relative[lig]
+			if !ok {
+				continue
+			}
+			next := make(map[string]int, len(s.counts))
+			for k, v := range s.counts {
+				next[k] = v
+			}
+			next[lig]--
+			if next[lig] == 0 {
+				delete(next, lig)
+			}
+			next[r.to]++
+			name := groupName(centre, next)
+			if seen[name] {
+				continue
+			}
+			seen[name] = true
+			steps := append(append([]string(nil), s.steps...), lig+"→"+r.to)
+			frontier = append(frontier, state{counts: next, cost: s.cost + r.cost, steps: steps})
+		}
+	}
+	return GroupValue{}, nil, false
+}
+
+// addGroups assigns a group to every polyvalent atom of g, looks the groups
+// up (user groups first) and appends one Term per distinct group, in order of
+// first appearance. Missing groups are replaced by their nearest relative and
+// listed in est.Missing.
+func addGroups(g *graph, l lookup, est *Result) error {
+	type acc struct {
+		centre string
+		counts map[string]int
+		n      int
+	}
+	index := map[string]int{}
+	var list []acc
+	var names []string
+	for i := range g.m.Atoms {
+		centre, counts, ok := g.groupOf(i)
+		if !ok {
+			continue
+		}
+		if _, known := centreLigands[centre]; !known {
+			return fmt.Errorf("benson: atom %d: element %s is outside the group tables", i+1, centre)
+		}
+		for lig := range counts {
+			if _, known := ligandRank[lig]; !known {
+				return fmt.Errorf("benson: atom %d: neighbour element %s is outside the group tables", i+1, lig)
+			}
+		}
+		name := groupName(centre, counts)
+		if k, ok := index[name]; ok {
+			list[k].n++
+			continue
+		}
+		index[name] = len(list)
+		list = append(list, acc{centre, counts, 1})
+		names = append(names, name)
+	}
+	for k, a := range list {
+		name := names[k]
+		if v, ok := l.group(name); ok {
+			est.Groups = append(est.Groups, term(v, a.n))
+			continue
+		}
+		v, steps, ok := approximate(l, a.centre, a.counts)
+		if !ok {
+			return fmt.Errorf("benson: no value and no approximation for group %s (add it with a user group)", name)
+		}
+		t := term(v, a.n)
+		t.Name = name + " ≈ " + v.Name
+		est.Groups = append(est.Groups, t)
+		est.Missing = append(est.Missing, Missing{
+			Group:         name,
+			Approximation: v.Name,
+			Note:          "neighbour types replaced: " + strings.Join(steps, ", "),
+		})
+	}
+	return nil
+}

@@ -1,0 +1,224 @@
+// Package benson estimates gas-phase thermochemistry of a molecular graph by
+// Benson's second-order group additivity: ΔHf°(298.15 K), S°(298.15 K, 1 bar)
+// and Cp°(T) at the temperatures in StdTemps.
+//
+// The estimate is
+//
+//	ΔHf° = Σ groups + Σ corrections
+//	S°   = Σ groups + Σ corrections − R ln σ + R ln n (+ R ln multiplicity for radicals)
+//	Cp°  = Σ groups + Σ corrections
+//
+// where the groups are polyvalent atoms with their first neighbours written in
+// Benson notation (C-(C)(H)3, Cd-(C)(H), Cb-(H), O-(C)(H), CO-(C)2 …), the
+// corrections are ring strain, gauche, 1,5, cis and ortho interactions and,
+// for radicals, hydrogen-bond increments; σ is the total (external × internal)
+// symmetry number and n the number of optical isomers. All values are in SI:
+// J/mol for ΔHf°, J/(mol K) for S° and Cp°. Tables are in kcal and cal and are
+// converted with 1 cal = 4.184 J.
+//
+// Scope: neutral C/H/O species (N, S and halogens appear only as neighbour
+// types when a user group supplies them). The small non-additive species (H2,
+// O2, H2O, CO …) belong to a reference library, not to this package. The
+// method is valid for ideal-gas molecules at 298.15 K and Cp from 300 K to
+// 1500 K; values outside that range need a polynomial fit elsewhere.
+package benson
+
+import (
+	"fmt"
+	"math"
+
+	"kiln.dev/kiln/engine/molecule"
+)
+
+// R is the molar gas constant in J/(mol K) (CODATA 2018, exact).
+const R = 8.314462618
+
+// calorie is the thermochemical calorie in J.
+const calorie = 4.184
+
+// StdTemps are the temperatures (K) at which Cp° is tabulated and estimated.
+var StdTemps = [7]float64{300, 400, 500, 600, 800, 1000, 1500}
+
+// GroupValue is one tabulated group (or a user-defined one): its ΔHf°298 in
+// J/mol, intrinsic S°298 in J/(mol K) (symmetry removed) and Cp° in J/(mol K)
+// at StdTemps, with the published source of the numbers.
+type GroupValue struct {
+	Name   string
+	Hf298  float64 // J/mol
+	S298   float64 // J/(mol K)
+	Cp     [7]float64
+	Source string
+}
+
+// Options adjust an estimate. Zero values mean "compute".
+type Options struct {
+	Multiplicity   int          // spin multiplicity 2S+1; 0 = unpaired electrons + 1
+	Symmetry       int          // total symmetry number σ; 0 = SymmetryNumber(m)
+	OpticalIsomers int          // n; 0 = 2^(unmarked potential stereocentres)
+	UserGroups     []GroupValue // win over the built-in table; names are normalised
+}
+
+// Term is one line of an estimate: Count × the value of one group or
+// correction, already multiplied (Hf298, S298 and Cp are the contribution).
+type Term struct {
+	Name   string
+	Count  int
+	Hf298  float64 // J/mol, contribution
+	S298   float64 // J/(mol K), contribution
+	Cp     [7]float64
+	Source string
+}
+
+// Missing records a group (or ring correction) absent from the tables and
+// the value used in its place.
+type Missing struct {
+	Group         string // trade notation
+	Approximation string // the group used instead ("" when none, contribution 0)
+	Note          string // how it approximates
+}
+
+// Result is the outcome of Estimate. Hf298, S298 and every Cp equal exactly
+// the sum of Groups and Corrections. (Go does not allow a type and a function
+// of the same name in one package, so the result type is Result.)
+type Result struct {
+	Formula   string
+	MolarMass float64 // g/mol
+
+	Hf298 float64    // J/mol
+	S298  float64    // J/(mol K)
+	Cp    [7]float64 // J/(mol K) at StdTemps
+
+	Groups      []Term
+	Corrections []Term
+
+	SymmetryNumber int
+	OpticalIsomers int
+	Multiplicity   int
+
+	Missing []Missing
+
+	// Class is the compound class whose validation error gives Uncertainty.
+	Class string
+	// Uncertainty is the mean absolute error of ΔHf° (J/mol) measured for
+	// Class on the training set by the accuracy test (one MAE, not 2×).
+	Uncertainty float64
+}
+
+// Estimate estimates the thermochemistry of m. It fails only for structures
+// outside the method's scope (charged atoms, a group that has neither a table
+// value nor an approximation); missing groups with an approximation are
+// reported in Result.Missing, never dropped.
+func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
+	if m == nil || len(m.Atoms) == 0 {
+		return nil, fmt.Errorf("benson: empty molecule")
+	}
+	for i, a := range m.Atoms {
+		if a.Charge != 0 {
+			return nil, fmt.Errorf("benson: atom %d (%s) has charge %+d: charged species are outside group additivity", i+1, a.Element, a.Charge)
+		}
+	}
+	tab := lookupTable(opts.UserGroups)
+	est := &Result{}
+	var err error
+	est.Formula, est.MolarMass, err = formula(m)
+	if err != nil {
+		return nil, fmt.Errorf("benson: %w", err)
+	}
+
+	// Radicals are estimated through their closed-shell parent.
+	unpaired := 0
+	for _, a := range m.Atoms {
+		unpaired += a.Radical
+	}
+	parent := m
+	if unpaired > 0 {
+		parent = parentOf(m)
+	}
+	g := newGraph(parent)
+
+	if err := addGroups(g, tab, est); err != nil {
+		return nil, err
+	}
+	addRingCorrections(g, tab, est)
+	addInteractions(g, tab, est)
+	if unpaired > 0 {
+		if err := addHBI(m, g, tab, est); err != nil {
+			return nil, err
+		}
+	}
+
+	// Spin, symmetry and optical isomers, on the species itself.
+	est.Multiplicity = opts.Multiplicity
+	if est.Multiplicity == 0 {
+		est.Multiplicity = unpaired + 1
+	}
+	if est.Multiplicity > 1 {
+		est.Corrections = append(est.Corrections, Term{
+			Name: fmt.Sprintf("spin degeneracy R ln %d", est.Multiplicity), Count: 1,
+			S298: R * math.Log(float64(est.Multiplicity)), Source: "statistical mechanics",
+		})
+	}
+	est.SymmetryNumber = opts.Symmetry
+	if est.SymmetryNumber == 0 {
+		est.SymmetryNumber = SymmetryNumber(m)
+	}
+	if est.SymmetryNumber > 1 {
+		est.Corrections = append(est.Corrections, Term{
+			Name: fmt.Sprintf("symmetry -R ln %d", est.SymmetryNumber), Count: 1,
+			S298: -R * math.Log(float64(est.SymmetryNumber)), Source: "statistical mechanics",
+		})
+	}
+	est.OpticalIsomers = opts.OpticalIsomers
+	if est.OpticalIsomers == 0 {
+		est.OpticalIsomers = OpticalIsomers(m)
+	}
+	if est.OpticalIsomers > 1 {
+		est.Corrections = append(est.Corrections, Term{
+			Name: fmt.Sprintf("optical isomers R ln %d", est.OpticalIsomers), Count: 1,
+			S298: R * math.Log(float64(est.OpticalIsomers)), Source: "statistical mechanics",
+		})
+	}
+
+	for _, t := range est.Groups {
+		est.add(t)
+	}
+	for _, t := range est.Corrections {
+		est.add(t)
+	}
+	est.Class = classify(m, g)
+	est.Uncertainty = classUncertainty(est.Class)
+	return est, nil
+}
+
+func (e *Result) add(t Term) {
+	e.Hf298 += t.Hf298
+	e.S298 += t.S298
+	for i := range e.Cp {
+		e.Cp[i] += t.Cp[i]
+	}
+}
+
+// term multiplies a table value by count.
+func term(v GroupValue, count int) Term {
+	t := Term{Name: v.Name, Count: count, Source: v.Source}
+	c := float64(count)
+	t.Hf298 = c * v.Hf298
+	t.S298 = c * v.S298
+	for i := range t.Cp {
+		t.Cp[i] = c * v.Cp[i]
+	}
+	return t
+}
+
+// parentOf returns a copy of m with every unpaired electron replaced by a
+// hydrogen: the closed-shell parent used by the HBI method.
+func parentOf(m *molecule.Molecule) *molecule.Molecule {
+	p := *m
+	p.Atoms = make([]molecule.Atom, len(m.Atoms))
+	copy(p.Atoms, m.Atoms)
+	for i := range p.Atoms {
+		p.Atoms[i].HCount += p.Atoms[i].Radical
+		p.Atoms[i].Radical = 0
+	}
+	return &p
+}

@@ -1,0 +1,104 @@
+package benson
+
+import (
+	"fmt"
+	"strconv"
+	"strings"
+)
+
+// ligandRank orders neighbour types in a normalised group name: heteroatoms
+// first, then carbonyl and unsaturated carbons, then sp3 carbon, then H
+// (so "C-(H)3(C)" normalises to "C-(C)(H)3", "C-(H)2(C)(O)" to "C-(O)(C)(H)2").
+var ligandRank = map[string]int{
+	"O": 0, "N": 1, "S": 2, "F": 3, "Cl": 4, "Br": 5, "I": 6,
+	"CO": 7, "Cbf": 8, "Cb": 9, "Ct": 10, "Cd": 11, "Ca": 12, "C": 13, "H": 14,
+}
+
+// centreLigands is the number of written neighbours of each group centre:
+// partners of multiple bonds and ring members of aromatic carbon are implied
+// by the centre type (Cd-(C)(H) has the =C partner implied, Cb-(H) its two
+// ring neighbours).
+var centreLigands = map[string]int{
+	"C": 4, "Cd": 2, "Ct": 1, "Cb": 1, "Cbf": 3, "Ca": 0, "CO": 2, "O": 2, "S": 2, "N": 3,
+}
+
+// ParseGroupName validates a group name in Benson notation, centre-(ligand)n…,
+// and returns it normalised: ligands merged and sorted (see ligandRank), counts
+// written after the parenthesis and omitted when 1. "C-(H)3(C)" and
+// "C-(C)(H)(H)(H)" both give "C-(C)(H)3". The ligand count must match the
+// centre (4 for C, 2 for Cd, CO, O, S, 1 for Ct and Cb, 3 for Cbf and N, 0
+// for Ca).
+func ParseGroupName(s string) (string, error) {
+	s = strings.TrimSpace(s)
+	centre, rest, hasDash := strings.Cut(s, "-")
+	want, ok := centreLigands[centre]
+	if !ok {
+		return "", fmt.Errorf("group %q: unknown centre %q", s, centre)
+	}
+	if !hasDash {
+		if want != 0 {
+			return "", fmt.Errorf("group %q: centre %s needs %d neighbours", s, centre, want)
+		}
+		return centre, nil
+	}
+	counts := map[string]int{}
+	total := 0
+	for rest != "" {
+		if rest[0] != '(' {
+			return "", fmt.Errorf("group %q: expected '(' at %q", s, rest)
+		}
+		end := strings.IndexByte(rest, ')')
+		if end < 0 {
+			return "", fmt.Errorf("group %q: unclosed '('", s)
+		}
+		lig := rest[1:end]
+		if _, ok := ligandRank[lig]; !ok {
+			return "", fmt.Errorf("group %q: unknown neighbour type %q", s, lig)
+		}
+		rest = rest[end+1:]
+		n := 1
+		j := 0
+		for j < len(rest) && rest[j] >= '0' && rest[j] <= '9' {
+			j++
+		}
+		if j > 0 {
+			n, _ = strconv.Atoi(rest[:j])
+			if n < 1 {
+				return "", fmt.Errorf("group %q: bad count for %s", s, lig)
+			}
+			rest = rest[j:]
+		}
+		counts[lig] += n
+		total += n
+	}
+	if total != want {
+		return "", fmt.Errorf("group %q: %d neighbours, centre %s takes %d", s, total, centre, want)
+	}
+	return groupName(centre, counts), nil
+}
+
+// groupName writes a normalised group name from a centre and neighbour counts.
+func groupName(centre string, counts map[string]int) string {
+	if len(counts) == 0 {
+		return centre
+	}
+	var b strings.Builder
+	b.WriteString(centre)
+	b.WriteByte('-')
+	for _, lig := range ligandOrder {
+		n := counts[lig]
+		if n == 0 {
+			continue
+		}
+		b.WriteByte('(')
+		b.WriteString(lig)
+		b.WriteByte(')')
+		if n > 1 {
+			b.WriteString(strconv.Itoa(n))
+		}
+	}
+	return b.String()
+}
+
+// ligandOrder lists the neighbour types by ligandRank.
+var ligandOrder = []string{"O", "N", "S", "F", "Cl", "Br", "I", "CO", "Cbf", "Cb", "Ct", "Cd", "Ca", "C", "H"}

@@ -1,0 +1,275 @@
+package molecule
+
+import "sort"
+
+// pauling holds Pauling electronegativities used to decide whether an
+// exocyclic double bond takes the ring atom's π electron. Source: Pauling
+// scale values as tabulated in the CRC Handbook of Chemistry and Physics,
+// entered from memory. Elements not listed count as 2.0 (less than carbon).
+var pauling = map[string]float64{
+	"H": 2.20, "B": 2.04, "C": 2.55, "N": 3.04, "O": 3.44, "F": 3.98,
+	"Si": 1.90, "P": 2.19, "S": 2.58, "Cl": 3.16, "As": 2.18, "Se": 2.55,
+	"Br": 2.96, "Te": 2.1, "I": 2.66,
+}
+
+// aromaticCapable lists the elements that can be written aromatic in SMILES
+// (b c n o p s, [se], [as]); only they take part in aromatic rings.
+var aromaticCapable = map[string]bool{"B": true, "C": true, "N": true, "O": true, "P": true, "S": true, "Se": true, "As": true}
+
+func electronegativity(sym string) float64 {
+	if x, ok := pauling[sym]; ok {
+		return x
+	}
+	return 2.0
+}
+
+// perceive computes rings, ring systems and aromaticity of a Kekulé graph.
+func (m *Molecule) perceive() {
+	inRing := m.ringBondFlags()
+	m.rings, m.cycles = m.findRings(inRing)
+	m.ringSys = ringSystems(len(m.Atoms), m.rings)
+	m.perceiveAromaticity(inRing)
+}
+
+// ringSystems unites SSSR rings that share a bond (two or more atoms): fused
+// and bridged rings form one system; spiro rings (one shared atom) do not.
+// Each system is a sorted atom list; systems are ordered by first atom.
+func ringSystems(n int, rings [][]int) [][]int {
+	parent := make([]int, len(rings))
+	for i := range parent {
+		parent[i] = i
+	}
+	var find func(int) int
+	find = func(x int) int {
+		for parent[x] != x {
+			parent[x] = parent[parent[x]]
+			x = parent[x]
+		}
+		return x
+	}
+	member := make([][]int, n) // atom -> rings
+	for r, ring := range rings {
+		for _, a := range ring {
+			member[a] = append(member[a], r)
+		}
+	}
+	for r1 := range rings {
+		for r2 := r1 + 1; r2 < len(rings); r2++ {
+			shared := 0
+			for _, a := range rings[r1] {
+				for _, b := range rings[r2] {
+					if a == b {
+						shared++
+					}
+				}
+			}
+			if shared >= 2 {
+				parent[find(r1)] = find(r2)
+			}
+		}
+	}
+	groups := map[int]map[int]bool{}
+	for r, ring := range rings {
+		g := find(r)
+		if groups[g] == nil {
+			groups[g] = map[int]bool{}
+		}
+		for _, a := range ring {
+			groups[g][a] = true
+		}
+	}
+	var out [][]int
+	for _, set := range groups {
+		var list []int
+		for a := range set {
+			list = append(list, a)
+		}
+		sort.Ints(list)
+		out = append(out, list)
+	}
+	sort.Slice(out, func(i, j int) bool { return out[i][0] < out[j][0] })
+	return out
+}
+
+// piContribution returns the π electrons atom i gives to a ring and whether
+// it can be part of an aromatic ring at all (Hückel model on the Kekulé
+// graph, close to the common toolkit default):
+//   - a double bond to a ring atom: 1 electron;
+//   - an exocyclic double bond to a more electronegative atom (C=O, C=N, C=S):
+//     0 electrons; to a less or equally electronegative atom: not a candidate;
+//   - no double bond, a lone pair and at most three σ partners (pyrrole N,
+//     furan O, thiophene S, [cH-]): 2 electrons;
+//   - no double bond, no nonbonding electrons and three σ partners (C⁺, B):
+//     0 electrons (empty p orbital);
+//   - anything else (sp3, triple bonds, cumulated double bonds, a radical
+//     centre without a double bond): not a candidate.
+func (m *Molecule) piContribution(i int, inRing []bool) (int, bool) {
+	a := m.Atoms[i]
+	if !aromaticCapable[a.Element] {
+		return 0, false
+	}
+	doubles, ringDouble, exo := 0, false, -1
+	for _, b := range m.Adj[i] {
+		switch o := m.Bonds[b].Order; {
+		case o >= 3:
+			return 0, false
+		case o == 2:
+			doubles++
+			if inRing[b] {
+				ringDouble = true
+			} else {
+				exo = m.Other(b, i)
+			}
+		}
+	}
+	sigma := len(m.Adj[i]) + a.HCount
+	if doubles > 1 || sigma > 3 {
+		return 0, false
+	}
+	if ringDouble {
+		return 1, true
+	}
+	if exo >= 0 {
+		if electronegativity(m.Atoms[exo].Element) > electronegativity(a.Element) {
+			return 0, true
+		}
+		return 0, false
+	}
+	e, ok := elementIndex(a.Element)
+	if !ok || e.Group < 13 {
+		return 0, false
+	}
+	ve := e.Group - 10 - a.Charge
+	nonbonding := ve - sigma
+	switch {
+	case a.Radical != 0:
+		return 0, false
+	case nonbonding >= 2:
+		return 2, true
+	case nonbonding == 0 && sigma == 3:
+		return 0, true
+	}
+	return 0, false
+}
+
+// perceiveAromaticity marks atoms and bonds aromatic. Every relevant cycle
+// whose atoms are all candidates and whose π count is 4n+2 is aromatic, and
+// so is every union of two or three such cycles fused through shared bonds
+// (azulene, and systems whose single rings fail but whose periphery obeys
+// Hückel's rule). All bonds of an aromatic cycle or union become aromatic.
+func (m *Molecule) perceiveAromaticity(inRing []bool) {
+	for i := range m.Atoms {
+		m.Atoms[i].Aromatic = false
+	}
+	for k := range m.Bonds {
+		m.Bonds[k].Aromatic = false
+	}
+	if len(m.cycles) == 0 {
+		return
+	}
+	n := len(m.Atoms)
+	elec := make([]int, n)
+	cand := make([]bool, n)
+	for i := range m.Atoms {
+		elec[i], cand[i] = m.piContribution(i, inRing)
+	}
+	var good [][]int
+	for _, c := range m.cycles {
+		ok := true
+		for _, a := range c {
+			if !cand[a] {
+				ok = false
+				break
+			}
+		}
+		if ok {
+			good = append(good, c)
+		}
+	}
+	bondsOf := func(c []int) []int {
+		out := make([]int, 0, len(c))
+		for k := range c {
+			if b := m.BondBetween(c[k], c[(k+1)%len(c)]); b >= 0 {
+				out = append(out, b)
+			}
+		}
+		return out
+	}
+	cb := make([][]int, len(good))
+	for k, c := range good {
+		cb[k] = bondsOf(c)
+	}
+	mark := func(set []int) {
+		atoms := map[int]bool{}
+		for _, k := range set {
+			for _, a := range good[k] {
+				atoms[a] = true
+			}
+		}
+		e := 0
+		for a := range atoms {
+			e += elec[a]
+		}
+		if e%4 != 2 {
+			return
+		}
+		for a := range atoms {
+			m.Atoms[a].Aromatic = true
+		}
+		for _, k := range set {
+			for _, b := range cb[k] {
+				m.Bonds[b].Aromatic = true
+			}
+		}
+	}
+	shareBond := func(x, y int) bool {
+		for _, b := range cb[x] {
+			for _, c := range cb[y] {
+				if b == c {
+					return true
+				}
+			}
+		}
+		return false
+	}
+	for k := range good {
+		mark([]int{k})
+	}
+	if len(good) > 30 {
+		return // very large cages: single rings only (bounded work)
+	}
+	fused := make([][]bool, len(good))
+	for x := range good {
+		fused[x] = make([]bool, len(good))
+		for y := range good {
+			if x != y {
+				fused[x][y] = shareBond(x, y)
+			}
+		}
+	}
+	for x := range good {
+		for y := x + 1; y < len(good); y++ {
+			if !fused[x][y] {
+				continue
+			}
+			mark([]int{x, y})
+			for z := y + 1; z < len(good); z++ {
+				if fused[x][z] || fused[y][z] {
+					mark([]int{x, y, z})
+				}
+			}
+		}
+	}
+	// triples whose middle ring is not the lowest index: x–z–y chains with
+	// x, y not fused directly
+	for z := range good {
+		for x := range good {
+			for y := x + 1; y < len(good); y++ {
+				if x == z || y == z || fused[x][y] || !fused[x][z] || !fused[y][z] {
+					continue
+				}
+				mark([]int{x, y, z})
+			}
+		}
+	}
+}

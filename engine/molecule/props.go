@@ -1,0 +1,190 @@
+package molecule
+
+import (
+	"fmt"
+	"sort"
+	"strings"
+)
+
+// Composition returns element symbol → number of atoms, hydrogens included
+// (implicit and explicit). Isotopes count under their element ("[2H]" is H).
+func (m *Molecule) Composition() map[string]int {
+	c := map[string]int{}
+	for _, a := range m.Atoms {
+		c[a.Element]++
+		if a.HCount > 0 {
+			c["H"] += a.HCount
+		}
+	}
+	return c
+}
+
+// Formula returns the neutral molecular formula in Hill order: C first, then
+// H, then the other elements alphabetically; without carbon every element
+// (H included) is alphabetical. Counts of 1 are omitted. The charge is not
+// part of the formula (see Charge).
+func (m *Molecule) Formula() string {
+	return HillFormula(m.Composition())
+}
+
+// HillFormula writes an element composition in Hill order (see Formula).
+func HillFormula(c map[string]int) string {
+	var els []string
+	for el, n := range c {
+		if n > 0 && el != "C" && (el != "H" || c["C"] == 0) {
+			els = append(els, el)
+		}
+	}
+	sort.Strings(els)
+	if c["C"] > 0 {
+		head := []string{"C"}
+		if c["H"] > 0 {
+			head = append(head, "H")
+		}
+		els = append(head, els...)
+	}
+	var b strings.Builder
+	for _, el := range els {
+		b.WriteString(el)
+		if c[el] != 1 {
+			fmt.Fprintf(&b, "%d", c[el])
+		}
+	}
+	return b.String()
+}
+
+// Charge returns the net formal charge (sum over atoms).
+func (m *Molecule) Charge() int {
+	q := 0
+	for _, a := range m.Atoms {
+		q += a.Charge
+	}
+	return q
+}
+
+// MolarMass returns the molar mass in g/mol: standard atomic weights (IUPAC
+// 2021 conventional values, see AtomicWeight) for atoms without an isotope
+// label and for implicit hydrogens; isotope-labelled atoms use the AME2020
+// atomic mass of that isotope where kiln has it (H-1/2/3, C-12/13/14,
+// N-14/15, O-16/17/18, F-19, S-32/34, Cl-35/37, Br-79/81) and otherwise their
+// mass number. The electron mass of a charge is ignored.
+func (m *Molecule) MolarMass() float64 {
+	hw, _ := AtomicWeight("H")
+	mass := 0.0
+	for _, a := range m.Atoms {
+		mass += float64(a.HCount) * hw
+		if a.Isotope > 0 {
+			if x, ok := isotopeMass[a.Element][a.Isotope]; ok {
+				mass += x
+			} else {
+				mass += float64(a.Isotope)
+			}
+			continue
+		}
+		w, _ := AtomicWeight(a.Element)
+		mass += w
+	}
+	return mass
+}
+
+// HeavyAtoms returns the number of non-hydrogen atoms.
+func (m *Molecule) HeavyAtoms() int {
+	n := 0
+	for _, a := range m.Atoms {
+		if a.Element != "H" {
+			n++
+		}
+	}
+	return n
+}
+
+// Rings returns the smallest set of smallest rings (SSSR): its size is the
+// cyclomatic number bonds − atoms + components; each ring lists atom indices
+// in ring order. When the SSSR is not unique (cubane) one valid choice is
+// returned. The slices are shared: do not modify them.
+func (m *Molecule) Rings() [][]int { return m.rings }
+
+// RingSystems returns the ring systems: sorted atom lists of SSSR rings joined
+// through shared bonds (fused or bridged). Spiro-joined rings are separate
+// systems that share one atom.
+func (m *Molecule) RingSystems() [][]int { return m.ringSys }
+
+// IsInRing reports whether atom i belongs to any ring.
+func (m *Molecule) IsInRing(i int) bool {
+	for _, r := range m.rings {
+		for _, a := range r {
+			if a == i {
+				return true
+			}
+		}
+	}
+	return false
+}
+
+// RingSizes returns the sizes of the SSSR rings that contain atom i,
+// ascending (empty for an acyclic atom).
+func (m *Molecule) RingSizes(i int) []int {
+	var out []int
+	for _, r := range m.rings {
+		for _, a := range r {
+			if a == i {
+				out = append(out, len(r))
+				break
+			}
+		}
+	}
+	sort.Ints(out)
+	return out
+}
+
+// Neighbors returns the atoms bonded to atom i (explicit graph atoms only;
+// implicit hydrogens are counted in Atoms[i].HCount).
+func (m *Molecule) Neighbors(i int) []int {
+	out := make([]int, 0, len(m.Adj[i]))
+	for _, b := range m.Adj[i] {
+		out = append(out, m.Other(b, i))
+	}
+	return out
+}
+
+// BondBetween returns the index into Bonds of the bond joining atoms i and j,
+// or -1 when they are not bonded.
+func (m *Molecule) BondBetween(i, j int) int {
+	if i < 0 || i >= len(m.Adj) {
+		return -1
+	}
+	for _, b := range m.Adj[i] {
+		if m.Other(b, i) == j {
+			return b
+		}
+	}
+	return -1
+}
+
+// UnpairedElectrons returns the number of unpaired electrons in the
+// highest-spin arrangement of the radical centres. Each atom contributes its
+// Radical count, except that an atom of group 13 or 14 with three or more
+// radical electrons keeps its valence s pair paired and contributes
+// Radical − 2: the carbon atom [C] (4 → 2, ground state ³P), methylidyne [CH]
+// (3 → 1, ²Π) and the boron atom [B] (3 → 1, ²P), matching their
+// spectroscopic ground states (NIST-JANAF, Chase 1998, from memory). Other
+// atoms keep their count: [N] 3 (⁴S), [NH] 2 (³Σ⁻), [O] 2 (³P), [CH2] 2.
+func (m *Molecule) UnpairedElectrons() int {
+	u := 0
+	for _, a := range m.Atoms {
+		r := a.Radical
+		if r >= 3 {
+			if e, ok := elementIndex(a.Element); ok && (e.Group == 13 || e.Group == 14) {
+				r -= 2
+			}
+		}
+		u += r
+	}
+	return u
+}
+
+// DefaultMultiplicity returns the spin multiplicity 2S+1 of the highest-spin
+// state, UnpairedElectrons()+1: singlet 1, doublet 2, triplet 3 (one atom
+// like [CH2] or two radical centres), quartet 4, … The species file may
+// override it.
+func (m *Molecule) DefaultMultiplicity() int { return m.UnpairedElectrons() + 1 }

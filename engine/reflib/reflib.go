@@ -1,0 +1,162 @@
+// Package reflib is the library of reference thermochemistry for small
+// species that group additivity does not cover (atoms, diatomics, small
+// radicals and the common combustion products): for each, ΔHf°298 (J/mol),
+// S°298 (J/(mol K), 1 bar) and a two-range NASA-7 polynomial, with the
+// published source of every number. Species are found by molecular structure
+// (canonical SMILES) and spin multiplicity. It does no I/O.
+//
+// How the polynomials are built (see data.go): most entries store published
+// NASA-7 coefficient blocks whose a6, a7 are recomputed from the stored
+// ΔHf°298 and S°298; monatomic gases use Cp = 5/2 R; CH4 stores fundamental
+// frequencies and its tabulated rigid-rotor/harmonic-oscillator Cp(T) is
+// fitted with nasa.FitPoly when the library is built. Valid temperature
+// ranges are those of the source (200 or 300 K to 3500, 5000 or 6000 K).
+package reflib
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+
+	"kiln.dev/kiln/engine/molecule"
+	"kiln.dev/kiln/engine/nasa"
+)
+
+// Species is one reference species.
+type Species struct {
+	Name         string
+	SMILES       string // as entered; the index uses its canonical form
+	Multiplicity int    // spin multiplicity 2S+1
+	Hf298        float64
+	S298         float64
+	Poly         nasa.NASA7
+	Source       string
+}
+
+// Library is an immutable, indexed set of reference species, safe for
+// concurrent use.
+type Library struct {
+	species []Species
+	index   map[string]int // canonical SMILES + "|" + multiplicity → species
+}
+
+// New builds the library and its index by canonical SMILES (each entry's
+// SMILES and aliases are read with molecule.ParseSMILES and written with
+// Canonical). It panics if an entry of the built-in table cannot be read,
+// fitted or indexed: that is a defect of the table, caught by the tests.
+func New() *Library {
+	l := &Library{index: map[string]int{}}
+	for _, e := range entries {
+		p, err := e.poly()
+		if err != nil {
+			panic(fmt.Sprintf("reflib: %s: %v", e.name, err))
+		}
+		l.species = append(l.species, Species{
+			Name: e.name, SMILES: e.smiles, Multiplicity: e.mult,
+			Hf298: e.hf298, S298: e.s298, Poly: p, Source: e.source,
+		})
+		for _, s := range append([]string{e.smiles}, e.aliases...) {
+			m, err := molecule.ParseSMILES(s)
+			if err != nil {
+				panic(fmt.Sprintf("reflib: %s: SMILES %q: %v", e.name, s, err))
+			}
+			k := key(m.Canonical(), e.mult)
+			if prev, dup := l.index[k]; dup {
+				panic(fmt.Sprintf("reflib: %s and %s share structure and multiplicity (%s)", l.species[prev].Name, e.name, k))
+			}
+			l.index[k] = len(l.species) - 1
+		}
+	}
+	return l
+}
+
+func key(canonical string, mult int) string { return canonical + "|" + strconv.Itoa(mult) }
+
+// Lookup returns the species with exactly the structure of m (same canonical
+// SMILES) and the given spin multiplicity; multiplicity 0 means the
+// molecule's default (m.DefaultMultiplicity(), the highest-spin state of its
+// radical centres). [CH2] therefore finds triplet CH2 with 0 or 3 and singlet
+// CH2(S) with 1. The returned Species is a copy owned by the caller.
+func (l *Library) Lookup(m *molecule.Molecule, multiplicity int) (*Species, bool) {
+	if m == nil {
+		return nil, false
+	}
+	if multiplicity == 0 {
+		multiplicity = m.DefaultMultiplicity()
+	}
+	i, ok := l.index[key(m.Canonical(), multiplicity)]
+	if !ok {
+		return nil, false
+	}
+	s := l.species[i]
+	return &s, true
+}
+
+// All returns a copy of every species, in table order.
+func (l *Library) All() []Species {
+	return append([]Species(nil), l.species...)
+}
+
+// c2 is the second radiation constant hc/k in cm K (CODATA 2018).
+const c2 = 1.438776877
+
+// poly builds the entry's polynomial (see the entry type).
+func (e entry) poly() (nasa.NASA7, error) {
+	p := nasa.NASA7{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh}
+	switch {
+	case e.monatomic:
+		p.Low[0], p.High[0] = 2.5, 2.5
+	case len(e.freqs) > 0:
+		var T, Cp []float64
+		for t := e.tLow; t <= e.tHigh; t += 50 {
+			T = append(T, t)
+			Cp = append(Cp, rrhoCp(t, e.freqs, e.linear))
+		}
+		fit, _, err := nasa.FitPoly(e.hf298, e.s298, T, Cp, nasa.FitOptions{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh})
+		if err != nil {
+			return p, fmt.Errorf("fitting RRHO Cp: %w", err)
+		}
+		return fit, nil
+	default:
+		p.Low, p.High = e.lo, e.hi
+	}
+	// a6, a7 from ΔHf°298 and S°298 (low block), then continuity of H and S
+	// at TMid (high block); see the nasa package for the formulas.
+	p.Low[5] += (e.hf298 - p.H(nasa.Tref)) / nasa.R
+	p.Low[6] += (e.s298 - p.S(nasa.Tref)) / nasa.R
+	hLow, sLow := lowAt(p, p.TMid), lowSAt(p, p.TMid)
+	p.High[5] += (hLow - p.H(p.TMid)) / nasa.R
+	p.High[6] += (sLow - p.S(p.TMid)) / nasa.R
+	return p, nil
+}
+
+// lowAt and lowSAt evaluate H and S of the low block at T even when T is
+// TMid (where NASA7 methods use the high block).
+func lowAt(p nasa.NASA7, T float64) float64 {
+	q := p
+	q.High = p.Low
+	return q.H(T)
+}
+
+func lowSAt(p nasa.NASA7, T float64) float64 {
+	q := p
+	q.High = p.Low
+	return q.S(T)
+}
+
+// rrhoCp is the ideal-gas heat capacity in J/(mol K) of a rigid rotor with
+// harmonic vibrations: Cp/R = 4 (non-linear) or 3.5 (linear) for translation,
+// rotation and Cp − Cv, plus Σ x² eˣ/(eˣ − 1)² with x = c2 ν/T per vibration
+// (ν in cm⁻¹, T in K).
+func rrhoCp(T float64, freqs []float64, linear bool) float64 {
+	c := 4.0
+	if linear {
+		c = 3.5
+	}
+	for _, nu := range freqs {
+		x := c2 * nu / T
+		ex := math.Exp(-x)
+		c += x * x * ex / ((1 - ex) * (1 - ex))
+	}
+	return nasa.R * c
+}
