@@ -89,7 +89,7 @@ type Species struct {
 // Estimate is the thermochemistry kiln computes for a structure.
 type Estimate struct {
 	// Group is the additivity breakdown; nil for reference-library species.
-	Group *benson.Estimate
+	Group *benson.Result
 	// Library names the reference entry used instead of groups ("" if none).
 	Library       string
 	LibrarySource string

@@ -169,7 +169,7 @@ func shape(m *molecule.Molecule) (nAtoms int, linear bool, rotors int) {
 }
 
 // sortedMissing lists the missing groups of an estimate by name.
-func sortedMissing(g *benson.Estimate) []benson.Missing {
+func sortedMissing(g *benson.Result) []benson.Missing {
 	if g == nil {
 		return nil
 	}

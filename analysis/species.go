@@ -251,18 +251,24 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		return
 	}
 	dh, ds := hf-sp.Estimate.Hf298, s-sp.Estimate.S298
-	var parts []string
+	// A table's mismatch points at the hf298 or s298 line; a polynomial's
+	// at the block header.
+	hfSpan, sSpan := g.Span, g.Span
+	if t := d.Table; t != nil {
+		hfSpan, sSpan = t.Hf298.Tok.Span, t.S298.Tok.Span
+	} else if d.NASA7 != nil {
+		hfSpan = d.NASA7.Header.Span
+		sSpan = hfSpan
+	}
 	if math.Abs(dh) > a.set.MismatchHf298 {
-		parts = append(parts, fmt.Sprintf("ΔHf°298 given %s vs estimated %s (difference %s)",
-			a.energy(hf), a.energy(sp.Estimate.Hf298), a.energy(dh)))
+		a.report(path, speciesfile.Diagnostic{Span: hfSpan, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+			Message: fmt.Sprintf("%s: ΔHf°298 given %s vs estimated %s (difference %s, threshold %s)",
+				sp.Name, a.energy(hf), a.energy(sp.Estimate.Hf298), a.energy(dh), a.energy(a.set.MismatchHf298))})
 	}
 	if math.Abs(ds) > a.set.MismatchS298 {
-		parts = append(parts, fmt.Sprintf("S°298 given %s vs estimated %s (difference %s)",
-			a.entropy(s), a.entropy(sp.Estimate.S298), a.entropy(ds)))
-	}
-	if len(parts) > 0 {
-		a.report(path, speciesfile.Diagnostic{Span: g.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
-			Message: fmt.Sprintf("%s: %s; thresholds %s and %s", sp.Name, strings.Join(parts, "; "), a.energy(a.set.MismatchHf298), a.entropy(a.set.MismatchS298))})
+		a.report(path, speciesfile.Diagnostic{Span: sSpan, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+			Message: fmt.Sprintf("%s: S°298 given %s vs estimated %s (difference %s, threshold %s)",
+				sp.Name, a.entropy(s), a.entropy(sp.Estimate.S298), a.entropy(ds), a.entropy(a.set.MismatchS298))})
 	}
 }
 

@@ -56,7 +56,7 @@ func TestSyntaxErrors(t *testing.T) {
 		{"species X C\n  nasa7 300 1000 5000\n    low 1 2 3 4 5 6 7\n", []wantDiag{{1, 2, 7, "syntax", "nasa7 block is missing its high line"}}},
 		{"species X C\n  nasa7 300 1000 5000\n    low 1 2 3 4 5 6\n    high 1 2 3 4 5 6 7\n", []wantDiag{{2, 19, 19, "syntax", "expected 7 coefficients after low, found 6"}}},
 		{"species X C\n  nasa7 300 1000 5000\n    low 1 2 3 4 5 6 7 8\n    high 1 2 3 4 5 6 7\n", []wantDiag{{2, 22, 23, "syntax", "expected 7 coefficients after low, found 8"}}},
-		{"species X C\n  nasa7 300 1000\n", []wantDiag{{1, 16, 16, "syntax", "expected three temperatures after nasa7: TLOW TMID THIGH (K)"}, {1, 2, 7, "syntax", "nasa7 block is missing its low and high lines"}}},
+		{"species X C\n  nasa7 300 1000\n", []wantDiag{{1, 2, 7, "syntax", "nasa7 block is missing its low and high lines"}, {1, 16, 16, "syntax", "expected three temperatures after nasa7: TLOW TMID THIGH (K)"}}},
 		{"species X C\n  nasa7 1000 300 5000\n    low 1 2 3 4 5 6 7\n    high 1 2 3 4 5 6 7\n", []wantDiag{{1, 8, 21, "syntax", "nasa7 temperatures must satisfy 0 < TLOW < TMID < THIGH"}}},
 		{"species X C\n  nasa7 300 1000 5000\n    low 1 2 3 4 5 6 1.5d13\n    high 1 2 3 4 5 6 7\n", []wantDiag{{2, 20, 26, "syntax", "malformed number \"1.5d13\": the exponent letter is e, not d (write 1.5e13)"}}},
 		{"species X C\n  nasa7 300 1000 5000\n    low 1 2 3 4 5 6 1e999999\n    high 1 2 3 4 5 6 7\n", []wantDiag{{2, 20, 28, "syntax", "number out of range: \"1e999999\""}}},
@@ -103,7 +103,7 @@ func TestSyntaxErrors(t *testing.T) {
 		{"reaction A <=> B A=1 n=0 Ea=0\n  duplicate now\n  duplicate\n", []wantDiag{{1, 12, 15, "syntax", "unexpected \"now\" after duplicate"}, {2, 2, 11, "syntax", "duplicate attribute \"duplicate\" (first given on line 2)"}}},
 		{"reaction A <=> B A=1 n=0 Ea=0\n  frob 1\n", []wantDiag{{1, 2, 6, "syntax", "unknown reaction attribute \"frob\": expected one of low-pressure, troe, efficiencies, pressure, duplicate, reverse, note"}}},
 		{"reaction A <=> B A=1 n=0 Ea=0\n  reverse\n", []wantDiag{{1, 9, 9, "syntax", "expected A=, n= and Ea= after reverse"}}},
-		{"x\xffy\n", []wantDiag{{0, 1, 2, "syntax", "invalid UTF-8 byte 0xFF"}, {0, 0, 3, "syntax", "unknown keyword \"x\\xffy\": expected one of species, reaction, units, include, group"}}},
+		{"x\xffy\n", []wantDiag{{0, 0, 3, "syntax", "unknown keyword \"x\\xffy\": expected one of species, reaction, units, include, group"}, {0, 1, 2, "syntax", "invalid UTF-8 byte 0xFF"}}},
 		{"species X C\x00\n", []wantDiag{{0, 11, 12, "syntax", "NUL byte in text"}}},
 	}
 	for _, c := range cases {

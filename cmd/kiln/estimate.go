@@ -186,7 +186,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, set 
 		return
 	}
 	fmt.Fprintf(w, "  formula %s, molar mass %.3f g/mol\n", *r.Formula, *r.MolarMass)
-	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', tabwriter.AlignRight)
+	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
 	const kcal = 4184.0
 	if g := est.Group; g != nil {
 		fmt.Fprintln(tw, "  group\tcount\tΔHf°298 kcal/mol\tS°298 cal/(mol·K)\tsource\t")

@@ -5,7 +5,6 @@ import (
 	"context"
 	"fmt"
 
-	"kiln.dev/kiln/analysis"
 	"kiln.dev/kiln/engine/benson"
 	"kiln.dev/kiln/internal/thermoplot"
 )

@@ -24,8 +24,8 @@ var smallSpecies = map[string]bool{
 
 type refRow struct {
 	name, smiles, class string
-	hf, s              float64 // NaN when not entered
-	cp                 [7]float64
+	hf, s               float64 // NaN when not entered
+	cp                  [7]float64
 }
 
 func readRef(t *testing.T, path string) []refRow {

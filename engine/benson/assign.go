@@ -9,16 +9,14 @@ import (
 // groupOf returns the centre type and neighbour counts of atom i's group, and
 // false when the atom is not polyvalent (terminal atoms such as =O, Cl and
 // lone H make no group) .
-func (g *graph) groupOf(i int) (string, map[string]int, bool) {
+func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 	a := g.m.Atoms[i]
 	centre := g.typ[i]
+	var counts ligCounts
 	if len(g.nbr[i])+a.HCount < 2 {
-		return "", nil, false
+		return "", counts, false
 	}
-	counts := map[string]int{}
-	if a.HCount > 0 {
-		counts["H"] = a.HCount
-	}
+	counts[ligandRank["H"]] = a.HCount
 	skip := -1 // the implied partner: =C of Cd, ≡C of Ct, =O of CO
 	switch centre {
 	case "Cd", "CO":
@@ -26,7 +24,7 @@ func (g *graph) groupOf(i int) (string, map[string]int, bool) {
 	case "Ct":
 		skip = g.partner(i, 3)
 	case "Ca":
-		return "Ca", map[string]int{}, true
+		return "Ca", counts, true
 	}
 	for k, j := range g.nbr[i] {
 		if j == skip {
@@ -35,7 +33,11 @@ func (g *graph) groupOf(i int) (string, map[string]int, bool) {
 		if centre == "Cb" && g.benzBond[g.nbrBond[i][k]] {
 			continue // ring neighbours are implied by Cb
 		}
-		counts[g.ligandType(j)]++
+		li, ok := ligandRank[g.ligandType(j)]
+		if !ok {
+			return g.ligandType(j), counts, false
+		}
+		counts[li]++
 	}
 	return centre, counts, true
 }
@@ -60,9 +62,9 @@ var relative = map[string]struct {
 // approximate finds the cheapest table group reachable from (centre,
 // counts) by replacing neighbour types with their relatives. It returns the
 // group, the replacements made, and false if none exists.
-func approximate(l lookup, centre string, counts map[string]int) (GroupValue, []string, bool) {
+func approximate(l lookup, centre string, counts ligCounts) (GroupValue, []string, bool) {
 	type state struct {
-		counts map[string]int
+		counts ligCounts
 		cost   int
 		steps  []string
 	}
@@ -77,23 +79,17 @@ func approximate(l lookup, centre string, counts map[string]int) (GroupValue, []
 				return v, s.steps, true
 			}
 		}
-		for _, lig := range ligandOrder {
-			if s.counts[lig] == 0 {
+		for li, lig := range ligandOrder {
+			if s.counts[li] == 0 {
 				continue
 			}
 			r, ok := relative[lig]
 			if !ok {
 				continue
 			}
-			next := make(map[string]int, len(s.counts))
-			for k, v := range s.counts {
-				next[k] = v
-			}
-			next[lig]--
-			if next[lig] == 0 {
-				delete(next, lig)
-			}
-			next[r.to]++
+			next := s.counts
+			next[li]--
+			next[ligandRank[r.to]]++
 			name := groupName(centre, next)
 			if seen[name] {
 				continue
@@ -113,7 +109,7 @@ func approximate(l lookup, centre string, counts map[string]int) (GroupValue, []
 func addGroups(g *graph, l lookup, est *Result) error {
 	type acc struct {
 		centre string
-		counts map[string]int
+		counts ligCounts
 		n      int
 	}
 	index := map[string]int{}
@@ -122,15 +118,13 @@ func addGroups(g *graph, l lookup, est *Result) error {
 	for i := range g.m.Atoms {
 		centre, counts, ok := g.groupOf(i)
 		if !ok {
+			if centre != "" {
+				return fmt.Errorf("benson: atom %d: neighbour element %s is outside the group tables", i+1, centre)
+			}
 			continue
 		}
 		if _, known := centreLigands[centre]; !known {
 			return fmt.Errorf("benson: atom %d: element %s is outside the group tables", i+1, centre)
-		}
-		for lig := range counts {
-			if _, known := ligandRank[lig]; !known {
-				return fmt.Errorf("benson: atom %d: neighbour element %s is outside the group tables", i+1, lig)
-			}
 		}
 		name := groupName(centre, counts)
 		if k, ok := index[name]; ok {

@@ -158,9 +158,17 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 			S298: R * math.Log(float64(est.Multiplicity)), Source: "statistical mechanics",
 		})
 	}
+	sg := g // σ and n are properties of the species itself
+	if unpaired > 0 {
+		sg = newGraph(m)
+	}
+	var sy *sym
+	if opts.Symmetry == 0 || opts.OpticalIsomers == 0 {
+		sy = newSym(sg)
+	}
 	est.SymmetryNumber = opts.Symmetry
 	if est.SymmetryNumber == 0 {
-		est.SymmetryNumber = SymmetryNumber(m)
+		est.SymmetryNumber = sy.number()
 	}
 	if est.SymmetryNumber > 1 {
 		est.Corrections = append(est.Corrections, Term{
@@ -170,7 +178,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	est.OpticalIsomers = opts.OpticalIsomers
 	if est.OpticalIsomers == 0 {
-		est.OpticalIsomers = OpticalIsomers(m)
+		est.OpticalIsomers = sy.opticalIsomers()
 	}
 	if est.OpticalIsomers > 1 {
 		est.Corrections = append(est.Corrections, Term{

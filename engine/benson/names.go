@@ -41,7 +41,7 @@ func ParseGroupName(s string) (string, error) {
 		}
 		return centre, nil
 	}
-	counts := map[string]int{}
+	var counts ligCounts
 	total := 0
 	for rest != "" {
 		if rest[0] != '(' {
@@ -52,7 +52,8 @@ func ParseGroupName(s string) (string, error) {
 			return "", fmt.Errorf("group %q: unclosed '('", s)
 		}
 		lig := rest[1:end]
-		if _, ok := ligandRank[lig]; !ok {
+		li, ok := ligandRank[lig]
+		if !ok {
 			return "", fmt.Errorf("group %q: unknown neighbour type %q", s, lig)
 		}
 		rest = rest[end+1:]
@@ -68,7 +69,7 @@ func ParseGroupName(s string) (string, error) {
 			}
 			rest = rest[j:]
 		}
-		counts[lig] += n
+		counts[li] += n
 		total += n
 	}
 	if total != want {
@@ -77,16 +78,20 @@ func ParseGroupName(s string) (string, error) {
 	return groupName(centre, counts), nil
 }
 
+// ligCounts counts neighbours by type, indexed by ligandRank.
+type ligCounts [15]int
+
 // groupName writes a normalised group name from a centre and neighbour counts.
-func groupName(centre string, counts map[string]int) string {
-	if len(counts) == 0 {
+func groupName(centre string, counts ligCounts) string {
+	if counts == (ligCounts{}) {
 		return centre
 	}
 	var b strings.Builder
+	b.Grow(24)
 	b.WriteString(centre)
 	b.WriteByte('-')
-	for _, lig := range ligandOrder {
-		n := counts[lig]
+	for li, lig := range ligandOrder {
+		n := counts[li]
 		if n == 0 {
 			continue
 		}

@@ -1,7 +1,6 @@
 package benson
 
 import (
-	"fmt"
 	"math"
 	"sort"
 
@@ -53,7 +52,11 @@ func OpticalIsomers(m *molecule.Molecule) int {
 	if m == nil || len(m.Atoms) == 0 {
 		return 1
 	}
-	s := newSym(newGraph(m))
+	return newSym(newGraph(m)).opticalIsomers()
+}
+
+func (s *sym) opticalIsomers() int {
+	m := s.g.m
 	k := 0
 	for _, c := range s.stereocentres() {
 		if m.Atoms[c].Chirality == "" {
@@ -128,16 +131,14 @@ func newSym(g *graph) *sym {
 	m := g.m
 	n := len(m.Atoms)
 	s := &sym{g: g, n: n, lab: make([]byte, n*n), tetra: make([]bool, n), lp: make([]int, n), static: 1}
-	for e, b := range m.Bonds {
+	for _, b := range m.Bonds {
 		l := byte(b.Order)
 		if b.Aromatic {
 			l = 4
 		}
-		_ = e
 		s.lab[b.A*n+b.B], s.lab[b.B*n+b.A] = l, l
 	}
 	s.refine()
-	freeH := make([]bool, n) // H factor already accounted for by a unit
 	for i, a := range m.Atoms {
 		d, h := len(g.nbr[i]), a.HCount
 		s.lp[i] = g.lonePairs(i)
@@ -204,7 +205,6 @@ func newSym(g *graph) *sym {
 		}
 		s.allene = append(s.allene, alleneUnit{c, x, y})
 	}
-	_ = freeH
 	// chairs: saturated six-membered rings
 	for _, r := range g.rings {
 		if len(r) != 6 {
@@ -253,26 +253,34 @@ func (s *sym) endLP(x int) int {
 
 // refine computes colour classes by iterated neighbourhood refinement
 // (1-dimensional Weisfeiler–Leman) from element, H count, aromaticity,
-// radical, charge and isotope.
+// radical, charge, isotope and degree.
 func (s *sym) refine() {
 	m := s.g.m
-	keys := make([]string, s.n)
+	sigs := make([][]int, s.n)
 	for i, a := range m.Atoms {
-		keys[i] = fmt.Sprintf("%s|%d|%t|%d|%d|%d|%d", a.Element, a.HCount, a.Aromatic, a.Radical, a.Charge, a.Isotope, len(s.g.nbr[i]))
+		arom := 0
+		if a.Aromatic {
+			arom = 1
+		}
+		el := 0
+		for _, c := range a.Element {
+			el = el*128 + int(c)
+		}
+		sigs[i] = []int{el, a.HCount, arom, a.Radical, a.Charge, a.Isotope, len(s.g.nbr[i])}
 	}
-	s.color = rank(keys)
+	s.color = rankSigs(sigs)
 	classes := count(s.color)
 	for {
-		sig := make([]string, s.n)
 		for i := range m.Atoms {
-			var nb []int
+			sig := sigs[i][:0]
+			sig = append(sig, s.color[i])
 			for _, j := range s.g.nbr[i] {
-				nb = append(nb, int(s.lab[i*s.n+j])*100000+s.color[j])
+				sig = append(sig, int(s.lab[i*s.n+j])*100000+s.color[j])
 			}
-			sort.Ints(nb)
-			sig[i] = fmt.Sprint(s.color[i], nb)
+			sort.Ints(sig[1:])
+			sigs[i] = sig
 		}
-		next := rank(sig)
+		next := rankSigs(sigs)
 		c := count(next)
 		s.color = next
 		if c == classes {
@@ -282,28 +290,43 @@ func (s *sym) refine() {
 	}
 }
 
-func rank(keys []string) []int {
-	u := append([]string(nil), keys...)
-	sort.Strings(u)
-	id := map[string]int{}
-	for _, k := range u {
-		if _, ok := id[k]; !ok {
-			id[k] = len(id)
-		}
+// rankSigs numbers distinct signatures 0, 1, … in lexicographic order.
+func rankSigs(sigs [][]int) []int {
+	idx := make([]int, len(sigs))
+	for i := range idx {
+		idx[i] = i
 	}
-	out := make([]int, len(keys))
-	for i, k := range keys {
-		out[i] = id[k]
+	less := func(a, b []int) int {
+		for k := 0; k < len(a) && k < len(b); k++ {
+			if a[k] != b[k] {
+				if a[k] < b[k] {
+					return -1
+				}
+				return 1
+			}
+		}
+		return len(a) - len(b)
+	}
+	sort.Slice(idx, func(i, j int) bool { return less(sigs[idx[i]], sigs[idx[j]]) < 0 })
+	out := make([]int, len(sigs))
+	r := 0
+	for k, i := range idx {
+		if k > 0 && less(sigs[idx[k-1]], sigs[i]) != 0 {
+			r++
+		}
+		out[i] = r
 	}
 	return out
 }
 
 func count(c []int) int {
-	seen := map[int]bool{}
+	max := -1
 	for _, x := range c {
-		seen[x] = true
+		if x > max {
+			max = x
+		}
 	}
-	return len(seen)
+	return max + 1
 }
 
 func (s *sym) number() int {

@@ -4,12 +4,15 @@ import (
 	"math/big"
 	"slices"
 	"sort"
+	"strings"
 )
 
-// DefaultSearchSteps is the step budget (partition refinements) used by
-// Canonical, CanonicalStereo and SymmetryClasses. Ordinary molecules need a
-// few dozen steps; only highly symmetric cages come near it.
-const DefaultSearchSteps = 200000
+// DefaultSearchWork is the work budget of the symmetry search used by
+// Canonical, CanonicalStereo and SymmetryClasses, in atom-refinements (one
+// partition refinement of an n-atom component costs n). Ordinary molecules
+// need well under a thousand; the budget bounds pathological inputs (hundreds
+// of identical branches) to about a second.
+const DefaultSearchWork = 4000000
 
 // cgraph is the heavy-atom graph seen by the symmetry search: atoms coloured
 // by their properties, bonds coloured by type.
@@ -29,13 +32,19 @@ func bondCode(b Bond) int {
 	return b.Order
 }
 
-func (m *Molecule) cgraph() *cgraph {
-	n := len(m.Atoms)
+// cgraphOf builds the coloured graph of the atoms listed (a union of
+// connected components); vertex k of the graph is atom atoms[k].
+func (m *Molecule) cgraphOf(atoms []int) *cgraph {
+	n := len(atoms)
+	local := make(map[int]int, n)
+	for k, a := range atoms {
+		local[a] = k
+	}
 	g := &cgraph{n: n, nbr: make([][]int, n), bt: make([][]int, n)}
-	for i := range m.Atoms {
+	for k, i := range atoms {
 		for _, b := range m.Adj[i] {
-			g.nbr[i] = append(g.nbr[i], m.Other(b, i))
-			g.bt[i] = append(g.bt[i], bondCode(m.Bonds[b]))
+			g.nbr[k] = append(g.nbr[k], local[m.Other(b, i)])
+			g.bt[k] = append(g.bt[k], bondCode(m.Bonds[b]))
 		}
 	}
 	key := func(i int) [7]int {
@@ -49,9 +58,9 @@ func (m *Molecule) cgraph() *cgraph {
 	}
 	keys := make([][7]int, n)
 	idx := make([]int, n)
-	for i := range idx {
-		keys[i] = key(i)
-		idx[i] = i
+	for k := range idx {
+		keys[k] = key(atoms[k])
+		idx[k] = k
 	}
 	sort.Slice(idx, func(x, y int) bool { return slices.Compare(keys[idx[x]][:], keys[idx[y]][:]) < 0 })
 	g.cell0 = make([]int, n)
@@ -75,27 +84,49 @@ func (g *cgraph) nbrKey(rank []int, a int, buf []int) []int {
 	return buf
 }
 
-// refine returns the coarsest equitable partition finer than rank: cells are
-// split by the multiset of (neighbour cell, bond code) until stable. Ranks
-// are cell starts, so the order of cells is preserved and the result is
-// label-invariant.
+// mix is a 64-bit finaliser (splitmix64) used to hash neighbour codes.
+func mix(x uint64) uint64 {
+	x += 0x9e3779b97f4a7c15
+	x = (x ^ (x >> 30)) * 0xbf58476d1ce4e5b9
+	x = (x ^ (x >> 27)) * 0x94d049bb133111eb
+	return x ^ (x >> 31)
+}
+
+// refine returns an equitable-style refinement of rank: cells are split by a
+// hash of the multiset of (neighbour cell, bond code) — the sum of mixed
+// codes, which needs no sorting — until the number of cells is stable. Ranks
+// are cell starts, so cells keep their order. The function depends only on
+// the coloured graph and the ranks, never on atom indices, so it commutes
+// with relabelling; a hash collision can only leave a cell coarser, which
+// costs search time but not correctness (leaves are compared by exact
+// traces).
 func (g *cgraph) refine(rank []int) []int {
 	n := g.n
 	cur := slices.Clone(rank)
 	cells := countCells(cur)
-	keys := make([][]int, n)
+	keys := make([]uint64, n)
 	idx := make([]int, n)
 	next := make([]int, n)
 	for cells < n {
 		for a := 0; a < n; a++ {
-			keys[a] = g.nbrKey(cur, a, keys[a])
+			var h uint64
+			for k, w := range g.nbr[a] {
+				h += mix(uint64(cur[w]*8 + g.bt[a][k]))
+			}
+			keys[a] = h
 			idx[a] = a
 		}
 		cmp := func(x, y int) int {
 			if cur[x] != cur[y] {
 				return cur[x] - cur[y]
 			}
-			return slices.Compare(keys[x], keys[y])
+			if keys[x] < keys[y] {
+				return -1
+			}
+			if keys[x] > keys[y] {
+				return 1
+			}
+			return 0
 		}
 		slices.SortFunc(idx, cmp)
 		for k, a := range idx {
@@ -200,8 +231,10 @@ type search struct {
 	gens      [][]int
 }
 
+// step charges one partition refinement (work proportional to the number of
+// atoms) against the budget.
 func (s *search) step() bool {
-	s.steps++
+	s.steps += s.g.n
 	if s.steps > s.budget {
 		s.exhausted = true
 	}
@@ -238,6 +271,26 @@ func (s *search) orbitsFixing(path []int) []int {
 		parent[i] = find(parent, i)
 	}
 	return parent
+}
+
+// extendOrbits merges into the union-find orb the generators from index
+// seen on that fix path, and returns the new count of generators seen.
+func (s *search) extendOrbits(orb []int, path []int, seen int) int {
+	for _, gm := range s.gens[seen:] {
+		fixes := true
+		for _, v := range path {
+			if gm[v] != v {
+				fixes = false
+				break
+			}
+		}
+		if fixes {
+			for a, b := range gm {
+				union(orb, a, b)
+			}
+		}
+	}
+	return len(s.gens)
 }
 
 func find(parent []int, x int) int {
@@ -309,14 +362,15 @@ func (s *search) automorphisms() (orbitSizes []int, exact bool) {
 	orbitSizes = make([]int, len(vs))
 	for i := len(vs) - 1; i >= 0; i-- {
 		var failed []int
+		orb, seen := s.orbitsFixing(vs[:i]), len(s.gens)
 		for _, w := range cells[i][1:] {
-			orb := s.orbitsFixing(vs[:i])
-			if orb[w] == orb[vs[i]] {
+			seen = s.extendOrbits(orb, vs[:i], seen)
+			if find(orb, w) == find(orb, vs[i]) {
 				continue
 			}
 			skip := false
 			for _, f := range failed {
-				if orb[f] == orb[w] {
+				if find(orb, f) == find(orb, w) {
 					skip = true
 					break
 				}
@@ -341,9 +395,9 @@ func (s *search) automorphisms() (orbitSizes []int, exact bool) {
 			}
 			s.addGen(gm)
 		}
-		orb := s.orbitsFixing(vs[:i])
+		s.extendOrbits(orb, vs[:i], seen)
 		for _, w := range cells[i] {
-			if orb[w] == orb[vs[i]] {
+			if find(orb, w) == find(orb, vs[i]) {
 				orbitSizes[i]++
 			}
 		}
@@ -423,14 +477,15 @@ func (s *search) canonical() []int {
 			return
 		}
 		var explored []int
+		orb, seen := s.orbitsFixing(path), len(s.gens)
 		for _, w := range t {
 			if s.exhausted {
 				return
 			}
-			orb := s.orbitsFixing(path)
+			seen = s.extendOrbits(orb, path, seen)
 			dup := false
 			for _, u := range explored {
-				if orb[u] == orb[w] {
+				if find(orb, u) == find(orb, w) {
 					dup = true
 					break
 				}
@@ -453,21 +508,158 @@ func (s *search) canonical() []int {
 
 // symmetryInfo is the result of a full symmetry analysis.
 type symmetryInfo struct {
-	labels     []int // canonical label per atom
-	gens       [][]int
-	orbitSizes []int
-	exact      bool
+	labels []int   // canonical label per atom
+	gens   [][]int // generators of the automorphism group (atom permutations)
+	order  *big.Int
+	exact  bool
 }
 
-func (m *Molecule) symmetry(budget int) symmetryInfo {
-	g := m.cgraph()
-	s := &search{g: g, budget: budget}
-	sizes, exact := s.automorphisms()
-	labels := s.canonical()
-	if s.exhausted {
-		exact = false
+// components returns the connected components (sorted atom lists).
+func (m *Molecule) components() [][]int {
+	n := len(m.Atoms)
+	seen := make([]bool, n)
+	var out [][]int
+	for i := 0; i < n; i++ {
+		if seen[i] {
+			continue
+		}
+		seen[i] = true
+		list := []int{i}
+		for k := 0; k < len(list); k++ {
+			for _, b := range m.Adj[list[k]] {
+				if o := m.Other(b, list[k]); !seen[o] {
+					seen[o] = true
+					list = append(list, o)
+				}
+			}
+		}
+		slices.Sort(list)
+		out = append(out, list)
 	}
-	return symmetryInfo{labels: labels, gens: s.gens, orbitSizes: sizes, exact: exact}
+	return out
+}
+
+// symmetry runs the search on every connected component (work budget shared
+// in equal parts), orders the components by their canonical strings and
+// joins the results: identical components are exchanged by extra generators
+// and multiply the group order by k! for k copies.
+func (m *Molecule) symmetry(budget int) symmetryInfo {
+	n := len(m.Atoms)
+	comps := m.components()
+	type compInfo struct {
+		atoms  []int
+		labels []int // local canonical labels
+		text   string
+	}
+	info := symmetryInfo{labels: make([]int, n), order: big.NewInt(1), exact: true}
+	cis := make([]compInfo, len(comps))
+	per := budget / max(1, len(comps))
+	for c, atoms := range comps {
+		g := m.cgraphOf(atoms)
+		s := &search{g: g, budget: per}
+		sizes, exact := s.automorphisms()
+		labels := s.canonical()
+		if labels == nil { // budget ran out before any leaf: use the refined partition order
+			labels = s.g.refine(s.g.cell0)
+			labels = tieBreak(labels)
+		}
+		if !exact || s.exhausted {
+			info.exact = false
+		}
+		for _, k := range sizes {
+			info.order.Mul(info.order, big.NewInt(int64(k)))
+		}
+		for _, gm := range s.gens {
+			glob := make([]int, n)
+			for i := range glob {
+				glob[i] = i
+			}
+			for k, a := range atoms {
+				glob[a] = atoms[gm[k]]
+			}
+			info.gens = append(info.gens, glob)
+		}
+		for k, a := range atoms {
+			info.labels[a] = labels[k]
+		}
+		cis[c] = compInfo{atoms: atoms, labels: labels}
+	}
+	if len(comps) == 1 {
+		return info
+	}
+	// canonical text of each component alone, then order components by it
+	for c := range cis {
+		lab := make([]int, n)
+		for i := range lab {
+			lab[i] = n + i // other components after this one
+		}
+		for k, a := range cis[c].atoms {
+			lab[a] = cis[c].labels[k]
+		}
+		full := m.writeSMILES(lab, false)
+		if d := strings.IndexByte(full, '.'); d >= 0 {
+			full = full[:d]
+		}
+		cis[c].text = full
+	}
+	slices.SortStableFunc(cis, func(a, b compInfo) int {
+		if len(a.atoms) != len(b.atoms) {
+			return len(a.atoms) - len(b.atoms)
+		}
+		return strings.Compare(a.text, b.text)
+	})
+	offset := 0
+	for c := range cis {
+		for k, a := range cis[c].atoms {
+			info.labels[a] = offset + cis[c].labels[k]
+		}
+		offset += len(cis[c].atoms)
+	}
+	for c := 0; c < len(cis); {
+		d := c + 1
+		for d < len(cis) && cis[d].text == cis[c].text && len(cis[d].atoms) == len(cis[c].atoms) {
+			d++
+		}
+		if d-c > 1 {
+			info.order.Mul(info.order, new(big.Int).MulRange(1, int64(d-c)))
+		}
+		for e := c + 1; e < d; e++ {
+			// swap component c and e atom by atom through their labels
+			byLabel := func(ci compInfo) []int {
+				out := make([]int, len(ci.atoms))
+				for k, a := range ci.atoms {
+					out[ci.labels[k]] = a
+				}
+				return out
+			}
+			x, y := byLabel(cis[c]), byLabel(cis[e])
+			gm := make([]int, n)
+			for i := range gm {
+				gm[i] = i
+			}
+			for k := range x {
+				gm[x[k]], gm[y[k]] = y[k], x[k]
+			}
+			info.gens = append(info.gens, gm)
+		}
+		c = d
+	}
+	return info
+}
+
+// tieBreak turns a partition (ranks = cell starts) into a labelling by atom
+// index within cells; used only when the search budget is exhausted.
+func tieBreak(rank []int) []int {
+	idx := make([]int, len(rank))
+	for i := range idx {
+		idx[i] = i
+	}
+	slices.SortStableFunc(idx, func(a, b int) int { return rank[a] - rank[b] })
+	out := make([]int, len(rank))
+	for k, a := range idx {
+		out[a] = k
+	}
+	return out
 }
 
 // SymmetryClasses returns, for every atom of the graph, the number of its
@@ -477,10 +669,10 @@ func (m *Molecule) symmetry(budget int) symmetryInfo {
 // electrons and aromaticity, bonds by order or aromaticity; stereo marks are
 // ignored). Classes are numbered 0, 1, … in order of their smallest
 // canonical label, so the numbering does not depend on input order. If the
-// search budget (DefaultSearchSteps) runs out, the classes may be finer than
+// search budget (DefaultSearchWork) runs out, the classes may be finer than
 // the true orbits for exotic cages; ordinary molecules never come near it.
 func (m *Molecule) SymmetryClasses() []int {
-	info := m.symmetry(DefaultSearchSteps)
+	info := m.symmetry(DefaultSearchWork)
 	return orbitClasses(len(m.Atoms), info.gens, info.labels)
 }
 
@@ -530,19 +722,15 @@ func orbitClasses(n int, gens [][]int, labels []int) []int {
 // maxSteps partition refinements; exact is false when the budget ran out
 // (the returned number is then a lower bound, 1 at least).
 func (m *Molecule) AutomorphismCount(maxSteps int) (*big.Int, bool) {
-	g := m.cgraph()
-	s := &search{g: g, budget: maxSteps}
-	sizes, exact := s.automorphisms()
-	n := big.NewInt(1)
-	if exact {
-		for _, k := range sizes {
-			n.Mul(n, big.NewInt(int64(k)))
-		}
+	info := m.symmetry(maxSteps * max(1, len(m.Atoms)))
+	n := new(big.Int).Set(info.order)
+	if !info.exact {
+		n.SetInt64(1)
 	}
 	for _, a := range m.Atoms {
 		if a.HCount > 1 {
 			n.Mul(n, new(big.Int).MulRange(1, int64(a.HCount)))
 		}
 	}
-	return n, exact
+	return n, info.exact
 }

@@ -23,6 +23,8 @@ type fixture struct {
 	heavy, radicals       int
 	classes               []int
 	molwt                 float64
+	rdkitCanon            string
+	rdkitCanonStereo      string
 	rdkitError            string
 }
 
@@ -44,8 +46,8 @@ func loadFixtures(t *testing.T) []fixture {
 			continue
 		}
 		c := strings.Split(line, "\t")
-		require.Len(t, c, 11, line)
-		fx := fixture{name: c[0], smiles: c[1], formula: c[2], rdkitError: c[10]}
+		require.Len(t, c, 13, line)
+		fx := fixture{name: c[0], smiles: c[1], formula: c[2], rdkitCanon: c[10], rdkitCanonStereo: c[11], rdkitError: c[12]}
 		if fx.rdkitError == "" {
 			atoi := func(s string) int { n, err := strconv.Atoi(s); require.NoError(t, err, line); return n }
 			fx.charge, fx.rings, fx.arom = atoi(c[3]), atoi(c[4]), atoi(c[5])
@@ -147,4 +149,60 @@ func TestFixturesAgainstRDKit(t *testing.T) {
 			check("molwt", math.Abs(m.MolarMass()-fx.molwt) <= tol, fmt.Sprintf("kiln %.4f, RDKit %.4f", m.MolarMass(), fx.molwt))
 		})
 	}
+}
+
+// sameByRDKitCleanup lists pairs RDKit identifies only because its
+// sanitization rewrites one of them: it turns pentavalent nitro N(=O)=O into
+// the charge-separated [N+](=O)[O-]. kiln reads both as written (different
+// formal charges, different graphs), so they stay distinct.
+var sameByRDKitCleanup = map[[2]string]bool{
+	{"C[N+]([O-])=O", "CN(=O)=O"}: true,
+}
+
+// TestCanonicalIdentityAgainstRDKit checks identity on the whole fixture set:
+// two rows get the same Canonical() exactly when RDKit's non-stereo canonical
+// SMILES agree, and the same CanonicalStereo() exactly when RDKit's isomeric
+// canonical SMILES agree. (Duplicated molecules in molecules.txt — Kekulé vs
+// aromatic spellings, reversed atom orders — make the "same" side non-empty.)
+func TestCanonicalIdentityAgainstRDKit(t *testing.T) {
+	fixtures := loadFixtures(t)
+	kiln := map[string][]string{}
+	kilnSt := map[string][]string{}
+	rd := map[string]string{}
+	rdSt := map[string]string{}
+	same := 0
+	for _, fx := range fixtures {
+		if fx.rdkitError != "" {
+			continue
+		}
+		m, err := ParseSMILES(fx.smiles)
+		require.NoError(t, err, fx.smiles)
+		c, cs := m.Canonical(), m.CanonicalStereo()
+		for _, other := range kiln[c] {
+			same++
+			assert.Equal(t, rd[other], fx.rdkitCanon, "kiln says %s and %s are one constitution (%s)", other, fx.smiles, c)
+		}
+		for _, other := range kilnSt[cs] {
+			assert.Equal(t, rdSt[other], fx.rdkitCanonStereo, "kiln says %s and %s are one stereoisomer (%s)", other, fx.smiles, cs)
+		}
+		for other, r := range rd {
+			if r == fx.rdkitCanon && !sameByRDKitCleanup[[2]string{other, fx.smiles}] {
+				m2, err := ParseSMILES(other)
+				require.NoError(t, err)
+				assert.Equal(t, m2.Canonical(), c, "RDKit says %s and %s are one constitution", other, fx.smiles)
+			}
+		}
+		for other, r := range rdSt {
+			if r == fx.rdkitCanonStereo && !sameByRDKitCleanup[[2]string{other, fx.smiles}] {
+				m2, err := ParseSMILES(other)
+				require.NoError(t, err)
+				assert.Equal(t, m2.CanonicalStereo(), cs, "RDKit says %s and %s are one stereoisomer", other, fx.smiles)
+			}
+		}
+		kiln[c] = append(kiln[c], fx.smiles)
+		kilnSt[cs] = append(kilnSt[cs], fx.smiles)
+		rd[fx.smiles] = fx.rdkitCanon
+		rdSt[fx.smiles] = fx.rdkitCanonStereo
+	}
+	assert.Greater(t, same, 5, "the set holds several respellings of one molecule")
 }

@@ -307,18 +307,22 @@ func (p *parser) build() *Molecule {
 	remap := make([]int, n)
 	m := &Molecule{SMILES: p.s}
 	for i := range p.atoms {
-		if p.foldable(i, deg, nb) && single[i] {
-			remap[i] = -1
-			// The hydrogen is one of the neighbour's written neighbours: its
-			// place in the chirality order becomes an implicit-H slot.
-			j := nb[i]
-			p.atoms[j].HCount++
-			p.atoms[i].Radical = 0
-			for k, x := range p.nbr[j] {
-				if x == i {
-					p.nbr[j][k] = -1
-				}
+		if !p.foldable(i, deg, nb) || !single[i] {
+			continue
+		}
+		remap[i] = -1
+		// The hydrogen is one of the neighbour's written neighbours: its
+		// place in the chirality order becomes a hydrogen slot.
+		j := nb[i]
+		p.atoms[j].HCount++
+		for k, x := range p.nbr[j] {
+			if x == i {
+				p.nbr[j][k] = -1
 			}
+		}
+	}
+	for i := range p.atoms {
+		if remap[i] < 0 {
 			continue
 		}
 		remap[i] = len(m.Atoms)

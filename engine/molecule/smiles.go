@@ -46,15 +46,15 @@ type ringOpen struct {
 type branch struct{ atom, pos int }
 
 type parser struct {
-	s       string
-	atoms   []Atom
-	bonds   []Bond
-	organic []bool  // organic-subset atom: implicit hydrogens apply
-	aromIn  []bool  // per bond: written as aromatic (order from kekulization)
-	nbr     [][]int // per atom: neighbours in written order (for chirality)
-	hadPrev []bool  // per atom: bonded to a preceding atom when written
-	bracketH []int  // per atom: H count written inside the bracket
-	heavy   int
+	s        string
+	atoms    []Atom
+	bonds    []Bond
+	organic  []bool  // organic-subset atom: implicit hydrogens apply
+	aromIn   []bool  // per bond: written as aromatic (order from kekulization)
+	nbr      [][]int // per atom: neighbours in written order (for chirality)
+	hadPrev  []bool  // per atom: bonded to a preceding atom when written
+	bracketH []int   // per atom: H count written inside the bracket
+	heavy    int
 }
 
 // ParseSMILES reads an OpenSMILES string into a Molecule.

@@ -28,13 +28,13 @@ var aromaticOrganic = map[string]bool{"B": true, "C": true, "N": true, "O": true
 // isomorphic graph. The string is then written by depth-first traversal from
 // the lowest label, branches and ring closures in label order. Conjugated
 // rings that are not aromatic keep the double-bond positions of their Kekulé
-// structure. For pathological inputs that exhaust DefaultSearchSteps the
+// structure. For pathological inputs that exhaust DefaultSearchWork the
 // string is still valid SMILES but may depend on input order.
 func (m *Molecule) Canonical() string {
 	if len(m.Atoms) == 0 {
 		return ""
 	}
-	info := m.symmetry(DefaultSearchSteps)
+	info := m.symmetry(DefaultSearchWork)
 	return m.writeSMILES(info.labels, false)
 }
 
@@ -48,7 +48,7 @@ func (m *Molecule) CanonicalStereo() string {
 	if len(m.Atoms) == 0 {
 		return ""
 	}
-	info := m.symmetry(DefaultSearchSteps)
+	info := m.symmetry(DefaultSearchWork)
 	best := m.writeSMILES(info.labels, true)
 	if !m.hasStereo() {
 		return best
@@ -120,6 +120,7 @@ type writer struct {
 	m        *Molecule
 	labels   []int
 	stereo   bool
+	kekule   bool // write aromatic rings as Kekulé structures
 	visited  []bool
 	closure  []bool  // per bond: ring closure
 	closures [][]int // per atom: ring-closure bonds (in label order of partner)
@@ -133,8 +134,12 @@ type writer struct {
 
 // writeSMILES writes the molecule visiting atoms in increasing labels.
 func (m *Molecule) writeSMILES(labels []int, stereo bool) string {
+	return m.writeSMILESOpts(labels, stereo, false)
+}
+
+func (m *Molecule) writeSMILESOpts(labels []int, stereo, kekule bool) string {
 	n := len(m.Atoms)
-	w := &writer{m: m, labels: labels, stereo: stereo,
+	w := &writer{m: m, labels: labels, stereo: stereo, kekule: kekule,
 		visited: make([]bool, n), closure: make([]bool, len(m.Bonds)),
 		closures: make([][]int, n), children: make([][]int, n), parent: make([]int, n),
 		pos: make([]int, n), bondSym: map[int]byte{}, digits: map[int]int{}}
@@ -197,7 +202,7 @@ func (w *writer) bondText(b, from int) string {
 	bd := w.m.Bonds[b]
 	o := w.m.Other(b, from)
 	switch {
-	case bd.Aromatic:
+	case bd.Aromatic && !w.kekule:
 		return ""
 	case bd.Order == 2:
 		return "="
@@ -209,7 +214,7 @@ func (w *writer) bondText(b, from int) string {
 	if s, ok := w.bondSym[b]; ok {
 		return string(s)
 	}
-	if w.m.Atoms[from].Aromatic && w.m.Atoms[o].Aromatic {
+	if w.m.Atoms[from].Aromatic && w.m.Atoms[o].Aromatic && !w.kekule {
 		return "-"
 	}
 	return ""
@@ -276,9 +281,10 @@ func (w *writer) impliedH(a int) (int, bool) {
 	vs, _ := valences(e, 0)
 	sum := 0
 	hasAromDouble := false
+	arom := at.Aromatic && !w.kekule
 	for _, b := range m.Adj[a] {
 		bd := m.Bonds[b]
-		if bd.Aromatic {
+		if bd.Aromatic && !w.kekule {
 			sum++
 			if bd.Order == 2 {
 				hasAromDouble = true
@@ -287,7 +293,7 @@ func (w *writer) impliedH(a int) (int, bool) {
 			sum += bd.Order
 		}
 	}
-	if at.Aromatic {
+	if arom {
 		nd := needsDouble(at, true, sum)
 		if nd != hasAromDouble {
 			return 0, false
@@ -310,11 +316,12 @@ func (w *writer) atomText(a int) string {
 		chir = w.chirality(a)
 	}
 	sym := at.Element
-	if at.Aromatic {
+	arom := at.Aromatic && !w.kekule
+	if arom {
 		sym = strings.ToLower(sym)
 	}
 	if at.Isotope == 0 && at.Charge == 0 && at.Radical == 0 && chir == "" &&
-		(at.Aromatic && aromaticOrganic[at.Element] || !at.Aromatic && organicSubset[at.Element]) {
+		(arom && aromaticOrganic[at.Element] || !arom && organicSubset[at.Element]) {
 		if h, ok := w.impliedH(a); ok && h == at.HCount {
 			return sym
 		}

@@ -129,7 +129,7 @@ func ClassicalLimits(nAtoms int, linear bool, nRotors int) (cp0, cpInf float64) 
 // sum of squared relative residuals ((Cp_fit − Cp)/Cp)²: A0…A3 by linear least
 // squares for each trial B, constrained so that Cp rises monotonically from
 // cp0 to cpInf, and B (30 K to 30 000 K) by a logarithmic grid search refined
-// by golden-section search. When no B gives a monotone shape with four A
+// by golden-section search (25 grid points, 25 golden steps). When no B gives a monotone shape with four A
 // terms, fewer terms are used (with none, Cp = cp0 + (cpInf −
 // cp0) y² is always monotone). At most len(T)−1 A terms are fitted, so one
 // point already determines a curve. When cp0 = cpInf (an atom) the result is
@@ -165,7 +165,7 @@ func FitWilhoit(T, Cp []float64, cp0, cpInf float64) (Wilhoit, error) {
 func fitWilhoitTerms(T, Cp []float64, cp0, cpInf float64, nA int) (Wilhoit, bool) {
 	const (
 		bMin, bMax = 30.0, 30000.0
-		nGrid      = 40
+		nGrid      = 25
 	)
 	best := Wilhoit{}
 	bestSSE := math.Inf(1)
@@ -197,7 +197,7 @@ func fitWilhoitTerms(T, Cp []float64, cp0, cpInf float64, nA int) (Wilhoit, bool
 	g := (math.Sqrt(5) - 1) / 2
 	x1, x2 := hi-g*(hi-lo), lo+g*(hi-lo)
 	f1, f2 := eval(x1), eval(x2)
-	for range 30 {
+	for range 25 {
 		if f1 <= f2 {
 			hi, x2, f2 = x2, x1, f1
 			x1 = hi - g*(hi-lo)
@@ -244,11 +244,20 @@ func wilhoitAtB(T, Cp []float64, cp0, cpInf, B float64, nA int) (Wilhoit, float6
 			}
 			ineq = append(ineq, linearRow{c: row, rhs: -2})
 		}
-		x, err := constrainedLSQ(a, b, nil, ineq, 1e-8)
-		if err != nil {
-			return w, 0, false
+		// The unconstrained optimum is often monotone already; only when it
+		// is not is the constrained problem solved.
+		x, err := leastSquares(a, mat.NewVecDense(len(b), b))
+		if err == nil {
+			copy(w.A[:], x.RawVector().Data)
 		}
-		copy(w.A[:], x)
+		if err != nil || !w.monotone() {
+			xc, err := constrainedLSQ(a, b, nil, ineq, 1e-8)
+			if err != nil {
+				return w, 0, false
+			}
+			w.A = [4]float64{}
+			copy(w.A[:], xc)
+		}
 	}
 	if !w.monotone() {
 		return w, 0, false

@@ -61,9 +61,15 @@
               (should (eq major-mode 'kiln-mode))
               (apply #'eglot (eglot--guess-contact))
               (should (kiln-eglot-test--wait #'eglot-current-server 20))
-              ;; Diagnostics arrive through flymake.
-              (let ((diag (kiln-eglot-test--wait
+              ;; Diagnostics arrive through flymake. Batch Emacs runs no
+              ;; command loop, so start flymake's check by hand (once a
+              ;; second until the diagnostic shows up).
+              (let* ((tick 0)
+                     (diag (kiln-eglot-test--wait
                            (lambda ()
+                             (when (= 0 (% tick 20))
+                               (flymake-start))
+                             (setq tick (1+ tick))
                              (seq-find (lambda (d)
                                          (string-match-p "HO2" (flymake-diagnostic-text d)))
                                        (flymake-diagnostics)))
