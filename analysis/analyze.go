@@ -55,7 +55,7 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 	a.res.File = f
 	a.res.Files[path] = f
 	a.res.Diagnostics = append(a.res.Diagnostics, f.Diags...)
-	a.includes(path, f, []string{path}, 0)
+	a.includes(path, f, []string{path}, 0, nil)
 	if err := ctx.Err(); err != nil {
 		return nil, err
 	}
@@ -79,8 +79,10 @@ func (a *analysis) report(file string, d speciesfile.Diagnostic) {
 }
 
 // includes resolves the include statements of f (a file at path), parsing
-// included files depth first. stack holds the chain of including files.
-func (a *analysis) includes(path string, f *speciesfile.File, stack []string, depth int) {
+// included files depth first. stack holds the chain of including files; top
+// is the include statement of the analysed file through which path was
+// reached (nil for the analysed file itself).
+func (a *analysis) includes(path string, f *speciesfile.File, stack []string, depth int, top *speciesfile.Include) {
 	a.order = append(a.order, path)
 	for _, inc := range f.Includes {
 		target, msg := a.resolveInclude(path, inc, stack, depth)
@@ -89,6 +91,12 @@ func (a *analysis) includes(path string, f *speciesfile.File, stack []string, de
 		}
 		if msg != "" {
 			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude, Message: msg})
+			if top != nil && strings.HasPrefix(msg, "include cycle") {
+				// A cycle further down is otherwise reported only in files
+				// that may never be analysed on their own: say it here too.
+				a.report(a.res.Path, speciesfile.Diagnostic{Span: top.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
+					Message: fmt.Sprintf("%s (through %s)", msg, top.Path.Text)})
+			}
 			continue
 		}
 		if _, seen := a.res.Files[target]; seen {
@@ -111,7 +119,11 @@ func (a *analysis) includes(path string, f *speciesfile.File, stack []string, de
 			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityWarning, Code: CodeBadInclude,
 				Message: fmt.Sprintf("included file %q has %d syntax error(s); its broken statements are ignored", inc.Path.Text, n)})
 		}
-		a.includes(target, g, append(stack, target), depth+1)
+		next := top
+		if next == nil {
+			next = inc
+		}
+		a.includes(target, g, append(stack[:len(stack):len(stack)], target), depth+1, next)
 	}
 }
 

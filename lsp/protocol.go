@@ -46,9 +46,9 @@ type cancelParams struct {
 
 // initializeParams is the subset of InitializeParams kiln reads.
 type initializeParams struct {
-	RootURI               protocol.DocumentURI      `json:"rootUri,omitempty"`
-	RootPath              string                    `json:"rootPath,omitempty"`
-	InitializationOptions json.RawMessage           `json:"initializationOptions,omitempty"`
+	RootURI               protocol.DocumentURI       `json:"rootUri,omitempty"`
+	RootPath              string                     `json:"rootPath,omitempty"`
+	InitializationOptions json.RawMessage            `json:"initializationOptions,omitempty"`
 	WorkspaceFolders      []protocol.WorkspaceFolder `json:"workspaceFolders,omitempty"`
 	Capabilities          struct {
 		TextDocument struct {
@@ -86,10 +86,10 @@ func serverCapabilities() map[string]any {
 			"change":    2, // incremental
 			"save":      map[string]any{"includeText": false},
 		},
-		"hoverProvider":          true,
-		"definitionProvider":     true,
-		"referencesProvider":     true,
-		"documentSymbolProvider": true,
+		"hoverProvider":           true,
+		"definitionProvider":      true,
+		"referencesProvider":      true,
+		"documentSymbolProvider":  true,
 		"workspaceSymbolProvider": true,
 		"completionProvider": map[string]any{
 			"triggerCharacters": []string{" "},

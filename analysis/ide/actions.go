@@ -34,7 +34,8 @@ const Placeholder = "?"
 //   - "Insert estimated NASA-7 thermo for NAME": a species without a thermo
 //     block whose estimate could be fitted (attached to its missing-thermo
 //     diagnostic when there is one);
-//   - "Replace thermo of NAME with estimate": on a thermo-mismatch diagnostic;
+//   - "Replace thermo of NAME with estimate": on a thermo-mismatch diagnostic
+//     (or anywhere on the statement of a species that has one);
 //   - "Declare species NAME": on an undeclared-species diagnostic, inserting
 //     `species NAME ?` after the last species declaration of the file;
 //   - "Fill all missing thermo blocks": every species of the file that the
@@ -54,6 +55,15 @@ func CodeActions(x *Index, file string, span speciesfile.Span) []Action {
 			continue
 		}
 		done[o.Species] = true
+		for _, d := range r.Diagnostics {
+			if d.Code == speciesfile.CodeThermoMismatch && d.Span.Start >= o.Span.Start && d.Span.Start <= o.Span.End && !overlaps(d.Span) {
+				if e, ok := r.ReplaceThermoEdit(o.Species); ok {
+					out = append(out, Action{Title: "Replace thermo of " + o.Name + " with estimate", Kind: ActionQuickFix,
+						Diagnostics: []speciesfile.Diagnostic{d}, Edits: []analysis.Edit{e}})
+				}
+				break
+			}
+		}
 		e, ok := r.InsertThermoEdit(o.Species)
 		if !ok {
 			continue

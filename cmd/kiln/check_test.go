@@ -60,22 +60,35 @@ func TestCheckMarkers(t *testing.T) {
 			require.NotEqual(t, exitUsage, code, stderr)
 			var diags []checkDiag
 			require.NoError(t, json.Unmarshal([]byte(stdout), &diags), stdout)
-			got := map[int][]string{}
+			// Diagnostics by "file:line"; wanted markers of every file reported.
+			got := map[string][]string{}
+			want := map[string][]string{}
+			addWants := func(path string) {
+				for line, codes := range wanted(t, path) {
+					want[fmt.Sprintf("%s:%d", filepath.Base(path), line)] = codes
+				}
+			}
+			addWants(file)
+			seen := map[string]bool{filepath.Base(file): true}
 			hasError := false
 			for _, d := range diags {
 				if d.Severity == "error" {
 					hasError = true
 				}
+				if !seen[filepath.Base(d.File)] {
+					seen[filepath.Base(d.File)] = true
+					addWants(d.File)
+				}
 				if d.Severity == "information" && !strings.HasPrefix(filepath.Base(file), "info-") {
 					continue
 				}
-				got[d.Line] = append(got[d.Line], d.Code)
+				k := fmt.Sprintf("%s:%d", filepath.Base(d.File), d.Line)
+				got[k] = append(got[k], d.Code)
 			}
 			for l := range got {
 				sort.Strings(got[l])
 			}
-			want := wanted(t, file)
-			assert.Equal(t, fmt.Sprint(want), fmt.Sprint(got), "diagnostics by line (want vs got); output:\n%s", stdout)
+			assert.Equal(t, want, got, "diagnostics by file:line (want vs got); output:\n%s", stdout)
 			if hasError {
 				assert.Equal(t, exitProblems, code)
 			} else {

@@ -17,10 +17,13 @@ const DefaultSearchWork = 4000000
 // cgraph is the heavy-atom graph seen by the symmetry search: atoms coloured
 // by their properties, bonds coloured by type.
 type cgraph struct {
-	n     int
-	nbr   [][]int
-	bt    [][]int
-	cell0 []int // initial partition: rank = start of the atom's colour class
+	// scratch buffers reused by refine (a cgraph serves one search)
+	keys      []uint64
+	idx, next []int
+	n         int
+	nbr       [][]int
+	bt        [][]int
+	cell0     []int // initial partition: rank = start of the atom's colour class
 }
 
 // bondCode colours a bond: 1–4 by Kekulé order, 5 when aromatic (so Kekulé
@@ -104,9 +107,11 @@ func (g *cgraph) refine(rank []int) []int {
 	n := g.n
 	cur := slices.Clone(rank)
 	cells := countCells(cur)
-	keys := make([]uint64, n)
-	idx := make([]int, n)
-	next := make([]int, n)
+	if g.keys == nil {
+		g.keys, g.idx, g.next = make([]uint64, n), make([]int, n), make([]int, n)
+	}
+	keys, idx, next := g.keys, g.idx, g.next
+	defer func() { g.next = next }()
 	for cells < n {
 		for a := 0; a < n; a++ {
 			var h uint64
@@ -543,7 +548,7 @@ func (m *Molecule) components() [][]int {
 // in equal parts), orders the components by their canonical strings and
 // joins the results: identical components are exchanged by extra generators
 // and multiply the group order by k! for k copies.
-func (m *Molecule) symmetry(budget int) symmetryInfo {
+func (m *Molecule) symmetry(budget int, withAut bool) symmetryInfo {
 	n := len(m.Atoms)
 	comps := m.components()
 	type compInfo struct {
@@ -557,7 +562,11 @@ func (m *Molecule) symmetry(budget int) symmetryInfo {
 	for c, atoms := range comps {
 		g := m.cgraphOf(atoms)
 		s := &search{g: g, budget: per}
-		sizes, exact := s.automorphisms()
+		var sizes []int
+		exact := true
+		if withAut {
+			sizes, exact = s.automorphisms()
+		}
 		labels := s.canonical()
 		if labels == nil { // budget ran out before any leaf: use the refined partition order
 			labels = s.g.refine(s.g.cell0)
@@ -672,7 +681,7 @@ func tieBreak(rank []int) []int {
 // search budget (DefaultSearchWork) runs out, the classes may be finer than
 // the true orbits for exotic cages; ordinary molecules never come near it.
 func (m *Molecule) SymmetryClasses() []int {
-	info := m.symmetry(DefaultSearchWork)
+	info := m.symmetry(DefaultSearchWork, true)
 	return orbitClasses(len(m.Atoms), info.gens, info.labels)
 }
 
@@ -722,7 +731,7 @@ func orbitClasses(n int, gens [][]int, labels []int) []int {
 // maxSteps partition refinements; exact is false when the budget ran out
 // (the returned number is then a lower bound, 1 at least).
 func (m *Molecule) AutomorphismCount(maxSteps int) (*big.Int, bool) {
-	info := m.symmetry(maxSteps * max(1, len(m.Atoms)))
+	info := m.symmetry(maxSteps*max(1, len(m.Atoms)), true)
 	n := new(big.Int).Set(info.order)
 	if !info.exact {
 		n.SetInt64(1)

@@ -24,7 +24,9 @@ type Atom struct {
 // Bond joins atoms A and B (indices into Molecule.Atoms). Order is the Kekulé
 // order 1, 2, 3 or 4 — aromatic bonds carry the order of one Kekulé structure
 // and Aromatic=true after perception. Stereo is '/', '\\' or 0 as written
-// next to the bond.
+// next to the bond; A and B are in written direction, so the bond reads
+// "A Stereo B" (for a ring closure whose symbol stands only at the closing
+// digit, A is the closing atom).
 type Bond struct {
 	A, B     int
 	Order    int

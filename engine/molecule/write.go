@@ -34,7 +34,7 @@ func (m *Molecule) Canonical() string {
 	if len(m.Atoms) == 0 {
 		return ""
 	}
-	info := m.symmetry(DefaultSearchWork)
+	info := m.symmetry(DefaultSearchWork, false)
 	return m.writeSMILES(info.labels, false)
 }
 
@@ -48,7 +48,7 @@ func (m *Molecule) CanonicalStereo() string {
 	if len(m.Atoms) == 0 {
 		return ""
 	}
-	info := m.symmetry(DefaultSearchWork)
+	info := m.symmetry(DefaultSearchWork, true)
 	best := m.writeSMILES(info.labels, true)
 	if !m.hasStereo() {
 		return best

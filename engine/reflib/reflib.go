@@ -38,6 +38,10 @@ type Species struct {
 type Library struct {
 	species []Species
 	index   map[string]int // canonical SMILES + "|" + multiplicity → species
+	// ground maps a canonical structure to its lowest-enthalpy entry: the
+	// electronic ground state a modeller means when no multiplicity is given
+	// (O=O is triplet oxygen, [CH2] triplet methylene).
+	ground map[string]int
 }
 
 // New builds the library and its index by canonical SMILES (each entry's
@@ -45,7 +49,7 @@ type Library struct {
 // Canonical). It panics if an entry of the built-in table cannot be read,
 // fitted or indexed: that is a defect of the table, caught by the tests.
 func New() *Library {
-	l := &Library{index: map[string]int{}}
+	l := &Library{index: map[string]int{}, ground: map[string]int{}}
 	for _, e := range entries {
 		p, err := e.poly()
 		if err != nil {
@@ -65,6 +69,10 @@ func New() *Library {
 				panic(fmt.Sprintf("reflib: %s and %s share structure and multiplicity (%s)", l.species[prev].Name, e.name, k))
 			}
 			l.index[k] = len(l.species) - 1
+			c := m.Canonical()
+			if g, ok := l.ground[c]; !ok || e.hf298 < l.species[g].Hf298 {
+				l.ground[c] = len(l.species) - 1
+			}
 		}
 	}
 	return l
@@ -74,17 +82,24 @@ func key(canonical string, mult int) string { return canonical + "|" + strconv.I
 
 // Lookup returns the species with exactly the structure of m (same canonical
 // SMILES) and the given spin multiplicity; multiplicity 0 means the
-// molecule's default (m.DefaultMultiplicity(), the highest-spin state of its
-// radical centres). [CH2] therefore finds triplet CH2 with 0 or 3 and singlet
-// CH2(S) with 1. The returned Species is a copy owned by the caller.
+// electronic ground state of that structure (the entry of lowest ΔHf°298),
+// whatever the graph's formal radical count says: O=O finds triplet O2, and
+// [CH2] finds triplet CH2 with 0 or 3 and singlet CH2(S) with 1. The returned Species is a copy owned by the caller.
 func (l *Library) Lookup(m *molecule.Molecule, multiplicity int) (*Species, bool) {
 	if m == nil {
 		return nil, false
 	}
+	c := m.Canonical()
+	var (
+		i  int
+		ok bool
+	)
 	if multiplicity == 0 {
-		multiplicity = m.DefaultMultiplicity()
+		// No multiplicity given: the electronic ground state.
+		i, ok = l.ground[c]
+	} else {
+		i, ok = l.index[key(c, multiplicity)]
 	}
-	i, ok := l.index[key(m.Canonical(), multiplicity)]
 	if !ok {
 		return nil, false
 	}

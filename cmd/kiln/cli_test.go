@@ -1,0 +1,260 @@
+package main
+
+import (
+	"encoding/json"
+	"os"
+	"path/filepath"
+	"sort"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+)
+
+func keysOf(m map[string]any) []string {
+	var out []string
+	for k := range m {
+		out = append(out, k)
+	}
+	sort.Strings(out)
+	return out
+}
+
+// TestEstimateJSONContract checks the exact keys and units of
+// `kiln estimate --json`, one object per input, even for one input.
+func TestEstimateJSONContract(t *testing.T) {
+	code, stdout, stderr := runKiln(t, "estimate", "--json", "CCO")
+	require.Equal(t, exitOK, code, stderr)
+	var arr []map[string]any
+	require.NoError(t, json.Unmarshal([]byte(stdout), &arr))
+	require.Len(t, arr, 1)
+	o := arr[0]
+	assert.Equal(t, []string{"corrections", "cp_j_mol_k", "error", "formula", "groups", "hf298_kj_mol", "input", "missing_groups",
+		"molar_mass_g_mol", "optical_isomers", "s298_j_mol_k", "symmetry_number", "uncertainty_hf298_kj_mol"}, keysOf(o))
+	assert.Equal(t, "C2H6O", o["formula"])
+	assert.Nil(t, o["error"])
+	// Ethanol, ΔHf°298(g) = −234.8 kJ/mol (NIST-JANAF / Pedley 1994, from
+	// memory); group additivity within 4 kJ/mol (~1 kcal/mol).
+	assert.InDelta(t, -234.8, o["hf298_kj_mol"].(float64), 4)
+	assert.InDelta(t, 46.069, o["molar_mass_g_mol"].(float64), 0.01)
+	cp := o["cp_j_mol_k"].(map[string]any)
+	assert.Equal(t, []string{"1000", "1500", "300", "400", "500", "600", "800"}, keysOf(cp))
+
+	// The breakdown sums to the totals.
+	sumH, sumS := 0.0, 0.0
+	for _, k := range []string{"groups", "corrections"} {
+		for _, g := range o[k].([]any) {
+			sumH += g.(map[string]any)["hf298_kj_mol"].(float64)
+			sumS += g.(map[string]any)["s298_j_mol_k"].(float64)
+		}
+	}
+	assert.InDelta(t, o["hf298_kj_mol"].(float64), sumH, 1e-9)
+	assert.InDelta(t, o["s298_j_mol_k"].(float64), sumS, 1e-9)
+	g0 := o["groups"].([]any)[0].(map[string]any)
+	assert.Equal(t, []string{"count", "hf298_kj_mol", "name", "s298_j_mol_k", "source"}, keysOf(g0))
+}
+
+// TestEstimateErrors: a bad input gets an error object with its position,
+// the others still get estimates, and the exit code is 1.
+func TestEstimateErrors(t *testing.T) {
+	code, stdout, _ := runKiln(t, "estimate", "C1CC", "--json", "CC")
+	assert.Equal(t, exitProblems, code)
+	var arr []map[string]any
+	require.NoError(t, json.Unmarshal([]byte(stdout), &arr))
+	require.Len(t, arr, 2)
+	e := arr[0]["error"].(map[string]any)
+	assert.Contains(t, e["message"], "ring")
+	assert.Equal(t, 1.0, e["position"]) // the ring-bond digit
+	assert.Nil(t, arr[0]["hf298_kj_mol"])
+	assert.Nil(t, arr[1]["error"])
+
+	code, stdout, _ = runKiln(t, "estimate", "C(C")
+	assert.Equal(t, exitProblems, code)
+	assert.Contains(t, stdout, "error at position 2")
+}
+
+// TestEstimateNASA: --nasa adds a polynomial that reproduces the estimate.
+func TestEstimateNASA(t *testing.T) {
+	code, stdout, stderr := runKiln(t, "estimate", "--json", "--nasa", "CCC")
+	require.Equal(t, exitOK, code, stderr)
+	var arr []struct {
+		Hf    float64 `json:"hf298_kj_mol"`
+		NASA7 struct {
+			TLow  float64    `json:"t_low"`
+			TMid  float64    `json:"t_mid"`
+			THigh float64    `json:"t_high"`
+			Low   [7]float64 `json:"low"`
+			High  [7]float64 `json:"high"`
+		} `json:"nasa7"`
+	}
+	require.NoError(t, json.Unmarshal([]byte(stdout), &arr))
+	p := arr[0].NASA7
+	assert.Equal(t, []float64{300, 1000, 5000}, []float64{p.TLow, p.TMid, p.THigh})
+	// H(298.15)/R from the low range, in K: a6 + T·(a1 + a2 T/2 + …).
+	T := 298.15
+	a := p.Low
+	hOverR := a[0]*T + a[1]*T*T/2 + a[2]*T*T*T/3 + a[3]*T*T*T*T/4 + a[4]*T*T*T*T*T/5 + a[5]
+	assert.InDelta(t, arr[0].Hf, hOverR*8.314462618/1000, 0.01)
+}
+
+// TestFlagsAnywhere: flags may stand before or after the operands.
+func TestFlagsAnywhere(t *testing.T) {
+	file := "../../testdata/check/valid.kiln"
+	_, before, _ := runKiln(t, "check", "--format", "json", file)
+	_, after, _ := runKiln(t, "check", file, "--format=json")
+	assert.Equal(t, before, after)
+	assert.True(t, strings.HasPrefix(before, "["))
+}
+
+func TestUsageErrors(t *testing.T) {
+	code, _, stderr := runKiln(t, "frobnicate")
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "unknown command")
+	code, _, stderr = runKiln(t, "check", "--format", "xml", "x.kiln")
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "--format")
+	code, _, stderr = runKiln(t, "check", "/nonexistent/file.kiln")
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "no such file")
+	code, stdout, _ := runKiln(t, "version")
+	assert.Equal(t, exitOK, code)
+	assert.Equal(t, "kiln "+Version+"\n", stdout)
+	code, stdout, _ = runKiln(t, "help")
+	assert.Equal(t, exitOK, code)
+	assert.Contains(t, stdout, "kiln check")
+}
+
+// TestSummaryJSONContract checks the keys of `kiln summary --json` and that
+// it reports what it can on a file with errors (exit 0).
+func TestSummaryJSONContract(t *testing.T) {
+	code, stdout, stderr := runKiln(t, "summary", "--json", "../../testdata/check/broken.kiln")
+	require.Equal(t, exitOK, code, stderr)
+	var s map[string][]map[string]any
+	require.NoError(t, json.Unmarshal([]byte(stdout), &s))
+	require.NotEmpty(t, s["species"])
+	require.NotEmpty(t, s["reactions"])
+	assert.Equal(t, []string{"cp_j_mol_k", "formula", "hf298_kj_mol", "name", "s298_j_mol_k", "smiles", "thermo_source"}, keysOf(s["species"][0]))
+	assert.Equal(t, []string{"balanced", "dg298_kj_mol", "dh298_kj_mol", "ds298_j_mol_k", "equation", "keq", "line", "reverse_rate"}, keysOf(s["reactions"][0]))
+	sources := map[string]string{}
+	for _, sp := range s["species"] {
+		sources[sp["name"].(string)] = sp["thermo_source"].(string)
+	}
+	assert.Equal(t, "estimate", sources["H"])
+	assert.Equal(t, "file", sources["CH4"])
+	assert.Equal(t, "none", sources["lump"])
+	byEq := map[string]map[string]any{}
+	for _, r := range s["reactions"] {
+		byEq[r["equation"].(string)] = r
+	}
+	unb := byEq["H + O2 <=> OH"]
+	require.NotNil(t, unb)
+	assert.Equal(t, false, unb["balanced"])
+	und := byEq["H + XYZ <=> OH + H2"]
+	require.NotNil(t, und)
+	assert.Nil(t, und["balanced"])
+	assert.Nil(t, und["dh298_kj_mol"])
+	ok := byEq["O + H2 <=> OH + H"]
+	require.NotNil(t, ok)
+	assert.Equal(t, true, ok["balanced"])
+	// O + H2 -> OH + H: ΔH°298 = 37.3 + 218.0 − 249.2 = 6.1 kJ/mol (NIST-JANAF,
+	// from memory); the library values agree within 1 kJ/mol.
+	assert.InDelta(t, 8.0, ok["dh298_kj_mol"].(float64), 2.5)
+	keq := ok["keq"].(map[string]any)
+	assert.Equal(t, []string{"1000", "1500", "298"}, keysOf(keq))
+	assert.NotNil(t, ok["reverse_rate"].(map[string]any)["1000"])
+	assert.Equal(t, 42.0, ok["line"])
+}
+
+// copyToTemp copies a file into a fresh temporary directory.
+func copyToTemp(t *testing.T, src string) string {
+	t.Helper()
+	data, err := os.ReadFile(src)
+	require.NoError(t, err)
+	dir := t.TempDir()
+	dst := filepath.Join(dir, filepath.Base(src))
+	require.NoError(t, os.WriteFile(dst, data, 0o644))
+	return dst
+}
+
+// isSubsequence reports whether every byte of a appears in b in order, i.e.
+// b is a made only of insertions into a.
+func isSubsequence(a, b []byte) bool {
+	i := 0
+	for j := 0; j < len(b) && i < len(a); j++ {
+		if a[i] == b[j] {
+			i++
+		}
+	}
+	return i == len(a)
+}
+
+// TestFill: fill inserts blocks only, is idempotent, atomic (no temp file
+// left) and leaves a file that check accepts without missing-thermo errors.
+func TestFill(t *testing.T) {
+	path := copyToTemp(t, "../../examples/furnace.kiln")
+	orig, err := os.ReadFile(path)
+	require.NoError(t, err)
+
+	code, diff, stderr := runKiln(t, "fill", path, "--dry-run")
+	require.Equal(t, exitOK, code, stderr)
+	assert.Contains(t, diff, "+  nasa7 300 1000 5000")
+	unchanged, _ := os.ReadFile(path)
+	assert.Equal(t, orig, unchanged, "--dry-run must not write")
+
+	code, _, stderr = runKiln(t, "fill", path)
+	require.Equal(t, exitOK, code, stderr)
+	filled, err := os.ReadFile(path)
+	require.NoError(t, err)
+	assert.Greater(t, len(filled), len(orig))
+	assert.True(t, isSubsequence(orig, filled), "fill may only insert")
+	entries, _ := os.ReadDir(filepath.Dir(path))
+	assert.Len(t, entries, 1, "no temporary file may remain")
+
+	code, _, _ = runKiln(t, "fill", path)
+	require.Equal(t, exitOK, code)
+	again, _ := os.ReadFile(path)
+	assert.Equal(t, filled, again, "fill is idempotent")
+
+	code, stdout, _ := runKiln(t, "check", "--format", "json", path)
+	var diags []checkDiag
+	require.NoError(t, json.Unmarshal([]byte(stdout), &diags))
+	for _, d := range diags {
+		assert.NotEqual(t, "missing-thermo", d.Code, "%+v", d)
+		assert.NotEqual(t, "error", d.Severity, "%+v", d)
+	}
+	assert.Equal(t, exitOK, code)
+
+	// The dry-run diff, applied, gives the written file: its + lines are
+	// exactly the inserted text.
+	var plus strings.Builder
+	for _, l := range strings.SplitAfter(diff, "\n") {
+		if strings.HasPrefix(l, "+") && !strings.HasPrefix(l, "+++") {
+			plus.WriteString(l[1:])
+		}
+	}
+	assert.Equal(t, len(filled)-len(orig), plus.Len())
+}
+
+// TestFillUnwritable: a path that cannot be written gives a clear error and
+// a non-zero exit, and the original stays untouched.
+func TestFillUnwritable(t *testing.T) {
+	if os.Geteuid() == 0 {
+		// root ignores directory permissions; use a directory that vanishes instead.
+		path := copyToTemp(t, "../../testdata/check/info-thermo.kiln")
+		code, _, stderr := runKiln(t, "fill", filepath.Join(path, "nested.kiln"))
+		assert.Equal(t, exitUsage, code)
+		assert.NotEmpty(t, stderr)
+		return
+	}
+	path := copyToTemp(t, "../../testdata/check/info-thermo.kiln")
+	orig, _ := os.ReadFile(path)
+	dir := filepath.Dir(path)
+	require.NoError(t, os.Chmod(dir, 0o500))
+	defer os.Chmod(dir, 0o700)
+	code, _, stderr := runKiln(t, "fill", path)
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "writing")
+	after, _ := os.ReadFile(path)
+	assert.Equal(t, orig, after)
+}
