@@ -122,6 +122,11 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 	if miss := sortedMissing(e.Group); len(miss) > 0 {
 		var parts []string
 		for _, m := range miss {
+			if isHBINote(m) {
+				// Untabulated radical S/Cp increments are not a group the
+				// user can supply: the hover and estimate output list them.
+				continue
+			}
 			s := m.Group
 			if m.Approximation != "" {
 				s += " (approximated by " + m.Approximation
@@ -132,10 +137,16 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 			}
 			parts = append(parts, s)
 		}
-		a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
-			Message: fmt.Sprintf("%s: no value for group %s; define it with a `group` statement to replace the approximation", sp.Name, strings.Join(parts, ", "))})
+		if len(parts) > 0 {
+			a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
+				Message: fmt.Sprintf("%s: no value for group %s; define it with a `group` statement to replace the approximation", sp.Name, strings.Join(parts, ", "))})
+		}
 	}
 }
+
+// isHBINote reports whether a missing entry is the note that a radical
+// site's entropy and heat-capacity increments are not tabulated.
+func isHBINote(m benson.Missing) bool { return strings.HasPrefix(m.Group, "HBI ") }
 
 // given converts the species' own thermo block, if any.
 func (a *analysis) given(path string, sp *Species) {

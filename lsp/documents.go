@@ -293,12 +293,7 @@ func (s *server) finish(d *document, gen uint64, snap *snapshot) bool {
 		d.readyClosed = true
 	}
 	d.mu.Unlock()
-	var diags []speciesfile.Diagnostic
-	if snap.result != nil {
-		diags = snap.result.Diagnostics
-	}
 	s.publish(d, snap, gen, false)
-	_ = diags
 	return true
 }
 

@@ -3,9 +3,7 @@ package lsp
 import (
 	"context"
 	"encoding/json"
-	"errors"
 	"fmt"
-	"sort"
 	"strings"
 
 	"go.lsp.dev/jsonrpc2"
@@ -222,10 +220,7 @@ func (s *server) references(ctx context.Context, raw json.RawMessage) (any, erro
 	seen := map[protocol.Location]bool{}
 	out := []protocol.Location{}
 	for _, sn := range snaps {
-		for _, l := range ide.References(sn.index, "", -1, false) {
-			_ = l
-		}
-		for _, l := range referencesByName(sn.index, name, p.Context.IncludeDeclaration) {
+		for _, l := range ide.NameReferences(sn.index, name, p.Context.IncludeDeclaration) {
 			if pl, ok := s.location(l, sn); ok && !seen[pl] {
 				seen[pl] = true
 				out = append(out, pl)
@@ -233,28 +228,6 @@ func (s *server) references(ctx context.Context, raw json.RawMessage) (any, erro
 		}
 	}
 	return out, nil
-}
-
-// referencesByName lists the declarations and uses of name in x.
-func referencesByName(x *ide.Index, name string, includeDecl bool) []analysis.Location {
-	var out []analysis.Location
-	for _, l := range sortedFiles(x) {
-		for _, o := range x.Occurrences(l) {
-			if o.Name == name && (o.Kind == ide.KindSpeciesUse || (includeDecl && o.Kind == ide.KindSpeciesDecl)) {
-				out = append(out, analysis.Location{File: l, Span: o.Span})
-			}
-		}
-	}
-	return out
-}
-
-func sortedFiles(x *ide.Index) []string {
-	files := make([]string, 0, len(x.Result().Files))
-	for p := range x.Result().Files {
-		files = append(files, p)
-	}
-	sort.Strings(files)
-	return files
 }
 
 // snapshotsWith returns first followed by the analyses of the other open documents.
@@ -458,5 +431,3 @@ func kindWanted(kind string, only []protocol.CodeActionKind) bool {
 	}
 	return false
 }
-
-var _ = errors.New

@@ -53,12 +53,12 @@ type Occurrence struct {
 	// SpeciesDecl is the declaration statement for KindSpeciesStmt/Decl
 	// (also for duplicate declarations that the analysis ignores).
 	SpeciesDecl *speciesfile.Species
-	Reaction    *analysis.Reaction     // KindReactionStmt in the analysed file
-	ReactionDec *speciesfile.Reaction  // KindReactionStmt, any file
-	Group       *analysis.Group        // KindGroup*, nil when not resolved
-	GroupDecl   *speciesfile.Group     // KindGroup*
-	Include     *speciesfile.Include   // KindIncludePath
-	IncludePath string                 // resolved path of the include ("" if unresolved)
+	Reaction    *analysis.Reaction    // KindReactionStmt in the analysed file
+	ReactionDec *speciesfile.Reaction // KindReactionStmt, any file
+	Group       *analysis.Group       // KindGroup*, nil when not resolved
+	GroupDecl   *speciesfile.Group    // KindGroup*
+	Include     *speciesfile.Include  // KindIncludePath
+	IncludePath string                // resolved path of the include ("" if unresolved)
 }
 
 // Index makes one analysis result searchable by position. Build it once per

@@ -44,10 +44,12 @@ func References(x *Index, file string, off int, includeDecl bool) []analysis.Loc
 	if !ok || (o.Kind != KindSpeciesDecl && o.Kind != KindSpeciesUse) {
 		return nil
 	}
-	return nameLocations(x, o.Name, includeDecl)
+	return NameReferences(x, o.Name, includeDecl)
 }
 
-func nameLocations(x *Index, name string, includeDecl bool) []analysis.Location {
+// NameReferences returns the uses (and declarations when includeDecl) of the
+// species called name in every file of x, in file and offset order.
+func NameReferences(x *Index, name string, includeDecl bool) []analysis.Location {
 	var out []analysis.Location
 	files := make([]string, 0, len(x.byFile))
 	for p := range x.byFile {
@@ -124,7 +126,7 @@ func Rename(xs []*Index, oldName, newName string) ([]analysis.Edit, error) {
 		if sp := x.r.ByName[newName]; sp != nil {
 			return nil, fmt.Errorf("species %s already exists (%s)", newName, sp.Loc.File)
 		}
-		for _, l := range nameLocations(x, oldName, true) {
+		for _, l := range NameReferences(x, oldName, true) {
 			if !seen[l] {
 				seen[l] = true
 				out = append(out, analysis.Edit{File: l.File, Span: l.Span, NewText: newName})

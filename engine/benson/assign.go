@@ -112,9 +112,12 @@ func addGroups(g *graph, l lookup, est *Result) error {
 		counts ligCounts
 		n      int
 	}
-	index := map[string]int{}
+	type key struct {
+		centre string
+		counts ligCounts
+	}
+	index := make(map[key]int, 8)
 	var list []acc
-	var names []string
 	for i := range g.m.Atoms {
 		centre, counts, ok := g.groupOf(i)
 		if !ok {
@@ -126,17 +129,15 @@ func addGroups(g *graph, l lookup, est *Result) error {
 		if _, known := centreLigands[centre]; !known {
 			return fmt.Errorf("benson: atom %d: element %s is outside the group tables", i+1, centre)
 		}
-		name := groupName(centre, counts)
-		if k, ok := index[name]; ok {
+		if k, ok := index[key{centre, counts}]; ok {
 			list[k].n++
 			continue
 		}
-		index[name] = len(list)
+		index[key{centre, counts}] = len(list)
 		list = append(list, acc{centre, counts, 1})
-		names = append(names, name)
 	}
-	for k, a := range list {
-		name := names[k]
+	for _, a := range list {
+		name := groupName(a.centre, a.counts)
 		if v, ok := l.group(name); ok {
 			est.Groups = append(est.Groups, term(v, a.n))
 			continue

@@ -118,12 +118,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		}
 	}
 	tab := lookupTable(opts.UserGroups)
-	est := &Result{}
-	var err error
-	est.Formula, est.MolarMass, err = formula(m)
-	if err != nil {
-		return nil, fmt.Errorf("benson: %w", err)
-	}
+	est := &Result{Formula: m.Formula(), MolarMass: m.MolarMass()}
 
 	// Radicals are estimated through their closed-shell parent.
 	unpaired := 0

@@ -2,6 +2,7 @@ package benson
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -101,7 +102,10 @@ func TestGroupAssignment(t *testing.T) {
 		t.Run(c.smiles, func(t *testing.T) {
 			e := estimate(t, c.smiles, Options{})
 			assert.Equal(t, c.want, groupCounts(e))
-			assert.Empty(t, e.Missing)
+			for _, m := range e.Missing {
+				// radicals report the HBI entropy/Cp increments that are not tabulated
+				assert.True(t, strings.HasPrefix(m.Group, "HBI dS, dCp: "), "unexpected missing %+v", m)
+			}
 		})
 	}
 }
@@ -222,25 +226,32 @@ func TestHBIArithmetic(t *testing.T) {
 	h := builtin().hbi["primary"]
 	assert.InDelta(t, h.bde-hfH, rad.Hf298-par.Hf298, 1e-6)
 	assert.InDelta(t, 101.1*4184-52.10*4184, rad.Hf298-par.Hf298, 1e-6, "D = 101.1, ΔHf(H) = 52.10 kcal/mol")
-	// S: parent intrinsic + ΔS_HBI + R ln 2 − R ln σ(radical)
-	want := par.S298 + R*math.Log(18) + h.value.S298 + R*math.Log(2) - R*math.Log(6)
+	// S: parent intrinsic + ΔS_HBI + R ln 2 − R ln σ(radical), plus the lost
+	// C–H vibrations where no ΔS_HBI is tabulated.
+	lost := 0.0
+	if !h.hasSCp {
+		lost = lostModes("primary", 1).S298
+		assert.Less(t, lost, 0.0)
+		assert.Greater(t, lost, -1.0, "the lost stretch and bends hold little entropy at 298 K")
+	}
+	want := par.S298 + R*math.Log(18) + h.value.S298 + R*math.Log(2) - R*math.Log(6) + lost
 	assert.InDelta(t, want, rad.S298, 1e-9)
 	assert.Equal(t, 2, rad.Multiplicity)
 }
 
 func TestMissingGroupAndUserGroup(t *testing.T) {
-	e := estimate(t, "COc1ccccc1", Options{})
+	e := estimate(t, "O=CC(=O)O", Options{}) // glyoxylic acid: CO-(O)(CO) is not tabulated
 	require.Len(t, e.Missing, 1)
-	assert.Equal(t, "O-(Cb)(C)", e.Missing[0].Group)
-	assert.Equal(t, "O-(Cd)(C)", e.Missing[0].Approximation, "Cb is approximated by its relative Cd")
-	approx, _ := builtin().groups["O-(Cd)(C)"]
-	assert.Equal(t, 1, groupCounts(e)["O-(Cb)(C) ≈ O-(Cd)(C)"])
+	assert.Equal(t, "CO-(O)(CO)", e.Missing[0].Group)
+	assert.Equal(t, "CO-(O)(C)", e.Missing[0].Approximation, "CO is approximated by its relative C")
+	approx := builtin().groups["CO-(O)(C)"]
+	assert.Equal(t, 1, groupCounts(e)["CO-(O)(CO) ≈ CO-(O)(C)"])
 
 	// A user group (written in another ligand order) fills the gap and is used.
-	user := GroupValue{Name: "O-(C)(Cb)", Hf298: -90000, S298: 40, Cp: [7]float64{10, 11, 12, 13, 14, 15, 16}, Source: "test"}
-	u := estimate(t, "COc1ccccc1", Options{UserGroups: []GroupValue{user}})
+	user := GroupValue{Name: "CO-(CO)(O)", Hf298: -90000, S298: 40, Cp: [7]float64{10, 11, 12, 13, 14, 15, 16}, Source: "test"}
+	u := estimate(t, "O=CC(=O)O", Options{UserGroups: []GroupValue{user}})
 	assert.Empty(t, u.Missing)
-	assert.Equal(t, 1, groupCounts(u)["O-(Cb)(C)"])
+	assert.Equal(t, 1, groupCounts(u)["CO-(O)(CO)"])
 	assert.InDelta(t, user.Hf298-approx.Hf298, u.Hf298-e.Hf298, 1e-6, "only that group's value changes")
 
 	// A user group also wins over a built-in one.
@@ -250,9 +261,53 @@ func TestMissingGroupAndUserGroup(t *testing.T) {
 }
 
 func TestRingApproximationReported(t *testing.T) {
-	e := estimate(t, "C12CCC(CC1)C2", Options{})
+	e := estimate(t, "C1CC2CCC1CC2", Options{}) // bicyclo[2.2.2]octane: no system value
 	require.NotEmpty(t, e.Missing)
 	assert.Contains(t, e.Missing[0].Group, "bridged")
+
+	// Norbornane has a tabulated whole-system strain: the ring terms plus a
+	// difference term give exactly the system Hf, and nothing is missing.
+	n := estimate(t, "C12CCC(CC1)C2", Options{})
+	assert.Empty(t, n.Missing)
+	var ringHf float64
+	for _, c := range n.Corrections {
+		if strings.HasPrefix(c.Name, "ring") {
+			ringHf += c.Hf298
+		}
+	}
+	assert.InDelta(t, builtin().corrections["system:bicyclo[2.2.1]heptane"].Hf298, ringHf, 1e-9)
+}
+
+// Every Cp(1500 K) entered by analogy equals Cp(1000 K) plus the published
+// 1000 → 1500 K increment of the named analog (exact up to rounding, 1e-9),
+// and no row repeats its 1000 K value at 1500 K unless that is the
+// published value (none of the built-in rows does).
+func TestCp1500ByAnalogy(t *testing.T) {
+	tabs := map[string]map[string]GroupValue{"groups": builtin().groups, "corrections": builtin().corrections}
+	n := 0
+	for _, tab := range tabs {
+		for name, v := range tab {
+			_, an, ok := strings.Cut(v.Source, "1500 K by analogy with ")
+			if !ok {
+				continue
+			}
+			n++
+			a, found := tab[an]
+			require.True(t, found, "%s: analog %s", name, an)
+			assert.NotContains(t, a.Source, "1500 K by analogy", "%s: analog must be published", name)
+			assert.InDelta(t, v.Cp[5]+a.Cp[6]-a.Cp[5], v.Cp[6], 1e-9, name)
+		}
+	}
+	assert.Positive(t, n)
+	for name, v := range builtin().groups {
+		assert.NotEqual(t, v.Cp[5], v.Cp[6], "%s: 1500 K equals 1000 K", name)
+	}
+}
+
+func TestRingKeys(t *testing.T) {
+	assert.Equal(t, 1, correctionCount(estimate(t, "O=C1CCCCC1", Options{}), "ring strain: cyclohexanone"))
+	assert.Equal(t, 1, correctionCount(estimate(t, "O=C1CCCC1", Options{}), "ring strain: cyclopentanone"))
+	assert.Equal(t, 1, correctionCount(estimate(t, "C1CC11CC1", Options{}), "ring system strain: spiro[2.2]pentane"))
 }
 
 func TestOutOfScope(t *testing.T) {
@@ -333,4 +388,19 @@ func TestUncertaintyFromClass(t *testing.T) {
 	assert.Equal(t, "radical", estimate(t, "C[CH2]", Options{}).Class)
 	assert.Equal(t, "aromatic-oxygen", estimate(t, "c1ccoc1", Options{}).Class)
 	assert.Equal(t, "acid-ester", estimate(t, "CC(=O)OC", Options{}).Class)
+}
+
+// The lost-vibration term: at high T each of the three modes approaches R
+// (classical equipartition), at room temperature the stiff stretch is frozen.
+func TestLostModes(t *testing.T) {
+	tm := lostModes("primary", 1)
+	// 1500 K: x = θ/T = 2.830, 1.391, 1.103 → Einstein functions x²eˣ/(eˣ−1)²
+	// = 0.5339, 0.8533, 0.9045 (computed separately) → ΔCp = −2.2916 R.
+	assert.InDelta(t, -2.2916*R, tm.Cp[6], 0.001*R)
+	assert.Greater(t, tm.Cp[0], -1.0*R, "300 K: little of the three modes is excited")
+	for i := 1; i < 7; i++ {
+		assert.Less(t, tm.Cp[i], tm.Cp[i-1], "the loss grows with T")
+	}
+	two := lostModes("primary", 2)
+	assert.InDelta(t, 2*tm.Cp[3], two.Cp[3], 1e-12)
 }

@@ -1,19 +1,16 @@
 package benson
 
-import (
-	"sort"
+import "kiln.dev/kiln/engine/molecule"
 
-	"kiln.dev/kiln/engine/molecule"
-)
-
-// graph is the per-estimate view of a molecule: neighbour lists, a smallest
-// set of smallest rings, benzenoid rings and the Benson atom type of every
-// atom. It is built once per call and only read afterwards.
+// graph is the per-estimate view of a molecule: neighbour lists, the
+// molecule's smallest set of smallest rings (molecule.Molecule.Rings),
+// benzenoid rings and the Benson atom type of every atom. It is built once
+// per call and only read afterwards.
 type graph struct {
 	m        *molecule.Molecule
 	nbr      [][]int // neighbour atoms, in m.Adj order
 	nbrBond  [][]int // bond index parallel to nbr
-	rings    [][]int // SSSR, each ring as a cyclic atom sequence
+	rings    [][]int // m.Rings(): SSSR, each ring a cyclic atom sequence (shared, read only)
 	ringBond []bool  // bond is in some ring of rings
 	ringAtom []int   // number of rings containing the atom
 	benzRing []bool  // rings[i] is a six-membered all-carbon aromatic ring
@@ -35,7 +32,7 @@ func newGraph(m *molecule.Molecule) *graph {
 			g.nbrBond[i] = append(g.nbrBond[i], b)
 		}
 	}
-	g.findRings()
+	g.rings = m.Rings()
 	g.ringBond = make([]bool, len(m.Bonds))
 	g.ringAtom = make([]int, n)
 	g.benzAtom = make([]int, n)
@@ -136,118 +133,3 @@ func (g *graph) partner(i, order int) int {
 
 // isCarbon reports whether atom i is carbon of any type.
 func (g *graph) isCarbon(i int) bool { return g.m.Atoms[i].Element == "C" }
-
-// findRings computes a smallest set of smallest rings: the shortest cycle
-// through each bond, kept when independent (over GF(2)) of shorter ones,
-// until the cyclomatic number bonds − atoms + components is reached.
-func (g *graph) findRings() {
-	m := g.m
-	n, nb := len(m.Atoms), len(m.Bonds)
-	comps := 0
-	seen := make([]bool, n)
-	for s := 0; s < n; s++ {
-		if seen[s] {
-			continue
-		}
-		comps++
-		stack := []int{s}
-		seen[s] = true
-		for len(stack) > 0 {
-			v := stack[len(stack)-1]
-			stack = stack[:len(stack)-1]
-			for _, w := range g.nbr[v] {
-				if !seen[w] {
-					seen[w] = true
-					stack = append(stack, w)
-				}
-			}
-		}
-	}
-	want := nb - n + comps
-	if want <= 0 {
-		return
-	}
-	type cand struct {
-		atoms []int
-		bits  []uint64
-	}
-	words := (nb + 63) / 64
-	var cands []cand
-	prev := make([]int, n)
-	prevBond := make([]int, n)
-	for e := 0; e < nb; e++ {
-		u, v := m.Bonds[e].A, m.Bonds[e].B
-		for i := range prev {
-			prev[i] = -2
-		}
-		prev[u] = -1
-		queue := []int{u}
-		for len(queue) > 0 && prev[v] == -2 {
-			x := queue[0]
-			queue = queue[1:]
-			for k, y := range g.nbr[x] {
-				b := g.nbrBond[x][k]
-				if b == e || prev[y] != -2 {
-					continue
-				}
-				prev[y] = x
-				prevBond[y] = b
-				queue = append(queue, y)
-			}
-		}
-		if prev[v] == -2 {
-			continue
-		}
-		c := cand{bits: make([]uint64, words)}
-		c.bits[e/64] |= 1 << (e % 64)
-		for x := v; x != u; x = prev[x] {
-			c.atoms = append(c.atoms, x)
-			b := prevBond[x]
-			c.bits[b/64] |= 1 << (b % 64)
-		}
-		c.atoms = append(c.atoms, u)
-		cands = append(cands, c)
-	}
-	sort.SliceStable(cands, func(i, j int) bool { return len(cands[i].atoms) < len(cands[j].atoms) })
-	var basis [][]uint64 // reduced rows, each with a distinct leading bit
-	var lead []int
-	for _, c := range cands {
-		if len(g.rings) == want {
-			break
-		}
-		v := append([]uint64(nil), c.bits...)
-		for i, row := range basis {
-			if v[lead[i]/64]&(1<<(lead[i]%64)) != 0 {
-				for w := range v {
-					v[w] ^= row[w]
-				}
-			}
-		}
-		l := -1
-		for w := range v {
-			if v[w] != 0 {
-				for bit := 0; bit < 64; bit++ {
-					if v[w]&(1<<bit) != 0 {
-						l = w*64 + bit
-						break
-					}
-				}
-				break
-			}
-		}
-		if l < 0 {
-			continue
-		}
-		// keep the basis reduced on the new leading bit
-		for i, row := range basis {
-			if row[l/64]&(1<<(l%64)) != 0 {
-				for w := range row {
-					basis[i][w] ^= v[w]
-				}
-			}
-		}
-		basis = append(basis, v)
-		lead = append(lead, l)
-		g.rings = append(g.rings, c.atoms)
-	}
-}

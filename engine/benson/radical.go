@@ -2,6 +2,7 @@ package benson
 
 import (
 	"fmt"
+	"math"
 
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -135,6 +136,56 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 		t := term(h.value, count[site])
 		t.Name = "HBI: " + site
 		est.Corrections = append(est.Corrections, t)
+		if !h.hasSCp {
+			est.Corrections = append(est.Corrections, lostModes(site, count[site]))
+			est.Missing = append(est.Missing, Missing{
+				Group:         "HBI dS, dCp: " + site,
+				Approximation: "lost X–H vibrations",
+				Note:          "no published entropy and heat-capacity increment at hand: the stretch and two bends of the removed H are taken out as harmonic oscillators",
+			})
+		}
 	}
 	return nil
+}
+
+// Wavenumbers (cm⁻¹) of the three vibrations an H atom brings to its heavy
+// atom: one stretch and two bends. Typical values of the trade (common
+// practice; C–H from alkane IR spectra, O–H from alcohols, the O–H torsion
+// taken as a low harmonic mode).
+var (
+	lostCH = [3]float64{2950, 1450, 1150}
+	lostOH = [3]float64{3650, 1250, 300}
+)
+
+// secondRadiation is hc/k in cm·K, the factor turning a wavenumber into a
+// vibrational temperature (CODATA 2018).
+const secondRadiation = 1.438776877
+
+// lostModes is the entropy and heat-capacity change of removing the three
+// vibrations of one hydrogen atom per radical site, each a harmonic
+// oscillator of vibrational temperature θ = hc·ν̃/k:
+//
+//	ΔCp(T) = −R Σ x² eˣ/(eˣ−1)²,   ΔS(T) = −R Σ [x/(eˣ−1) − ln(1−e⁻ˣ)],   x = θ/T
+//
+// It stands in for the tabulated HBI S and Cp increments where none are at
+// hand; ΔHf is unaffected (the HBI bond energy carries it).
+func lostModes(site string, count int) Term {
+	modes := lostCH
+	switch site {
+	case "alkoxy", "peroxy", "phenoxy":
+		modes = lostOH
+	}
+	t := Term{Name: "radical site: lost X–H vibrations (" + site + ")", Count: count, Source: "harmonic oscillators (common practice)"}
+	c := float64(count)
+	for _, nu := range modes {
+		th := secondRadiation * nu
+		x := th / 298.15
+		t.S298 -= c * R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
+		for i, T := range StdTemps {
+			x := th / T
+			ex := math.Exp(x)
+			t.Cp[i] -= c * R * x * x * ex / ((ex - 1) * (ex - 1))
+		}
+	}
+	return t
 }

@@ -15,7 +15,7 @@ func (g *graph) ringKey(ri int) (key, fallback string) {
 	}
 	r := g.rings[ri]
 	n := len(r)
-	oxy, other, aromatic := 0, 0, 0
+	oxy, other, aromatic, carbonyl := 0, 0, 0, 0
 	var oPos []int
 	var dbl []int // index k of ring bond r[k]–r[k+1] that is double
 	for k, a := range r {
@@ -30,6 +30,9 @@ func (g *graph) ringKey(ri int) (key, fallback string) {
 		}
 		if at.Aromatic {
 			aromatic++
+		}
+		if g.typ[a] == "CO" {
+			carbonyl++
 		}
 		b := g.bondBetween(a, r[(k+1)%n])
 		if o := g.order(b); o == 2 || o == 4 {
@@ -73,8 +76,18 @@ func (g *graph) ringKey(ri int) (key, fallback string) {
 	default:
 		carbo = fmt.Sprintf("C%d ring with %d double bonds", n, nd)
 	}
-	if oxy == 0 && other == 0 {
+	if oxy == 0 && other == 0 && carbonyl == 0 {
 		return carbo, ""
+	}
+	if oxy == 0 && other == 0 {
+		// ring carbonyl with exocyclic =O: cycloalkanone
+		switch {
+		case carbonyl == 1 && nd == 0 && n == 5:
+			return "cyclopentanone", carbo
+		case carbonyl == 1 && nd == 0 && n == 6:
+			return "cyclohexanone", carbo
+		}
+		return fmt.Sprintf("C%d ring with %d ring carbonyls, %d double bonds", n, carbonyl, nd), carbo
 	}
 	key = ""
 	if other == 0 {
@@ -141,7 +154,9 @@ func addRingCorrections(g *graph, l lookup, est *Result) {
 		t.Name = "ring strain: " + name[len("ring:"):]
 		est.Corrections = append(est.Corrections, t)
 	}
-	// Bridged (rings sharing ≥ 3 atoms) or spiro (sharing exactly 1 atom) systems.
+	// Bridged (rings sharing ≥ 3 atoms) or spiro (sharing exactly 1 atom)
+	// systems: a whole-system strain from the table when one is known,
+	// otherwise the sum of the ring corrections, reported in Missing.
 	for i := 0; i < len(g.rings); i++ {
 		for j := i + 1; j < len(g.rings); j++ {
 			shared := 0
@@ -159,14 +174,52 @@ func addRingCorrections(g *graph, l lookup, est *Result) {
 			case shared >= 3:
 				kind = "bridged"
 			}
-			if kind != "" {
-				est.Missing = append(est.Missing, Missing{
-					Group: fmt.Sprintf("ring system: %s %d/%d", kind, len(g.rings[i]), len(g.rings[j])),
-					Note:  "no correction for the polycyclic system; the sum of its ring corrections is used",
-				})
+			if kind == "" {
+				continue
+			}
+			if name := g.systemKey(i, j, shared); name != "" {
+				if v, ok := l.corrections["system:"+name]; ok {
+					ki, _ := g.ringKey(i)
+					kj, _ := g.ringKey(j)
+					t := Term{Name: "ring system strain: " + name, Count: 1, Source: v.Source + "; minus the ring terms " + ki + " and " + kj}
+					t.Hf298 = v.Hf298 - l.corrections["ring:"+ki].Hf298 - l.corrections["ring:"+kj].Hf298
+					est.Corrections = append(est.Corrections, t)
+					continue
+				}
+			}
+			est.Missing = append(est.Missing, Missing{
+				Group: fmt.Sprintf("ring system: %s %d/%d", kind, len(g.rings[i]), len(g.rings[j])),
+				Note:  "no correction for the polycyclic system; the sum of its ring corrections is used",
+			})
+		}
+	}
+}
+
+// systemKey names the saturated all-carbon bicyclic system formed by SSSR
+// rings i and j sharing `shared` atoms, when it is one of those with a
+// tabulated whole-system strain; "" otherwise. Only two-ring systems whose
+// rings touch no third ring qualify.
+func (g *graph) systemKey(i, j, shared int) string {
+	ri, rj := g.rings[i], g.rings[j]
+	for _, r := range [][]int{ri, rj} {
+		for k, a := range r {
+			if g.m.Atoms[a].Element != "C" || g.typ[a] != "C" || g.ringAtom[a] > 2 {
+				return ""
+			}
+			if g.order(g.bondBetween(a, r[(k+1)%len(r)])) != 1 {
+				return ""
 			}
 		}
 	}
+	atoms := len(ri) + len(rj) - shared
+	a, b := min(len(ri), len(rj)), max(len(ri), len(rj))
+	switch {
+	case shared == 3 && a == 5 && b == 5 && atoms == 7:
+		return "bicyclo[2.2.1]heptane"
+	case shared == 1 && a == 3 && b == 3:
+		return "spiro[2.2]pentane"
+	}
+	return ""
 }
 
 // sameRing reports whether atoms a and b lie together in some ring.

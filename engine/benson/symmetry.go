@@ -266,7 +266,9 @@ func (s *sym) refine() {
 		for _, c := range a.Element {
 			el = el*128 + int(c)
 		}
-		sigs[i] = []int{el, a.HCount, arom, a.Radical, a.Charge, a.Isotope, len(s.g.nbr[i])}
+		sig := make([]int, 7, max(7, len(s.g.nbr[i])+1))
+		sig[0], sig[1], sig[2], sig[3], sig[4], sig[5], sig[6] = el, a.HCount, arom, a.Radical, a.Charge, a.Isotope, len(s.g.nbr[i])
+		sigs[i] = sig
 	}
 	s.color = rankSigs(sigs)
 	classes := count(s.color)

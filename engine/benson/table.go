@@ -3,12 +3,10 @@ package benson
 import (
 	_ "embed"
 	"fmt"
-	"sort"
+	"math"
 	"strconv"
 	"strings"
 	"sync"
-
-	"kiln.dev/kiln/engine/molecule"
 )
 
 //go:embed groups.tsv
@@ -21,11 +19,13 @@ var correctionsTSV string
 var hbiTSV string
 
 // hbiValue is one hydrogen-bond increment: the R–H bond dissociation
-// enthalpy and the entropy and Cp changes on removing the H atom.
+// enthalpy and, when published values are at hand (hasSCp), the entropy and
+// Cp changes on removing the H atom.
 type hbiValue struct {
-	site  string
-	bde   float64 // J/mol
-	value GroupValue
+	site   string
+	bde    float64 // J/mol
+	hasSCp bool    // value.S298 and value.Cp are published increments
+	value  GroupValue
 }
 
 // tables holds the parsed built-in data. It is built once and never written
@@ -42,44 +42,111 @@ const hfH = 52.10 * calorie * 1000
 
 var builtin = sync.OnceValue(func() *tables {
 	t := &tables{groups: map[string]GroupValue{}, corrections: map[string]GroupValue{}, hbi: map[string]hbiValue{}}
-	for _, v := range mustParse("groups.tsv", groupsTSV) {
-		name, err := ParseGroupName(v.Name)
+	groups := mustParse("groups.tsv", groupsTSV)
+	for i := range groups {
+		name, err := ParseGroupName(groups[i].Name)
 		if err != nil {
-			panic(fmt.Sprintf("benson: built-in group %q: %v", v.Name, err))
+			panic(fmt.Sprintf("benson: built-in group %q: %v", groups[i].Name, err))
 		}
-		v.Name = name
-		if _, dup := t.groups[name]; dup {
-			panic(fmt.Sprintf("benson: built-in group %q listed twice", name))
-		}
-		t.groups[name] = v
-		t.order = append(t.order, name)
+		groups[i].Name = name
 	}
-	for _, v := range mustParse("corrections.tsv", correctionsTSV) {
+	for _, r := range mustFill("groups.tsv", groups) {
+		if _, dup := t.groups[r.Name]; dup {
+			panic(fmt.Sprintf("benson: built-in group %q listed twice", r.Name))
+		}
+		t.groups[r.Name] = r
+		t.order = append(t.order, r.Name)
+	}
+	for _, v := range mustFill("corrections.tsv", mustParse("corrections.tsv", correctionsTSV)) {
 		t.corrections[v.Name] = v
 	}
-	for _, v := range mustParse("hbi.tsv", hbiTSV) {
+	for _, r := range mustParse("hbi.tsv", hbiTSV) {
 		// Column 2 holds D(R–H); the ΔHf increment is D − ΔHf(H).
+		v := r.GroupValue
 		bde := v.Hf298
 		v.Hf298 = bde - hfH
-		t.hbi[v.Name] = hbiValue{site: v.Name, bde: bde, value: v}
+		has := !math.IsNaN(v.S298)
+		if !has {
+			v.S298 = 0
+			v.Cp = [7]float64{}
+		}
+		t.hbi[v.Name] = hbiValue{site: v.Name, bde: bde, hasSCp: has, value: v}
 	}
 	return t
 })
 
-// mustParse reads an embedded table; a malformed built-in table is a
-// programming error.
-func mustParse(file, text string) []GroupValue {
-	vs, err := parseTSV(text)
+// row is one parsed table line. Missing numbers ("-") are NaN; analog names
+// the row whose 1000 → 1500 K increment gives this row's 1500 K value
+// ("~name" in the 1500 K column), or is empty.
+type row struct {
+	GroupValue
+	analog string
+}
+
+func mustParse(file, text string) []row {
+	rs, err := parseTSV(text)
 	if err != nil {
 		panic(fmt.Sprintf("benson: %s: %v", file, err))
 	}
-	return vs
+	return rs
+}
+
+// mustFill resolves the "~analog" 1500 K entries of rows (see fill1500) and
+// checks that every number is present; a malformed built-in table is a
+// programming error.
+func mustFill(file string, rs []row) []GroupValue {
+	out, err := fill1500(rs)
+	if err != nil {
+		panic(fmt.Sprintf("benson: %s: %v", file, err))
+	}
+	return out
+}
+
+// fill1500 returns the rows as GroupValues, with the 1500 K Cp of each row
+// marked "~analog" set to
+//
+//	Cp(1500) = Cp(1000) + [Cp_analog(1500) − Cp_analog(1000)]
+//
+// where the analog is another row of the same table whose 1500 K value is
+// published (not itself by analogy). The source gains "1500 K by analogy with
+// <analog>".
+func fill1500(rs []row) ([]GroupValue, error) {
+	byName := make(map[string]row, len(rs))
+	for _, r := range rs {
+		byName[r.Name] = r
+	}
+	out := make([]GroupValue, 0, len(rs))
+	for _, r := range rs {
+		v := r.GroupValue
+		if r.analog != "" {
+			a, ok := byName[r.analog]
+			if !ok {
+				return nil, fmt.Errorf("%s: 1500 K analog %q is not in the table", r.Name, r.analog)
+			}
+			if a.analog != "" {
+				return nil, fmt.Errorf("%s: 1500 K analog %s has no published 1500 K value itself", r.Name, r.analog)
+			}
+			v.Cp[6] = v.Cp[5] + a.Cp[6] - a.Cp[5]
+			v.Source += "; 1500 K by analogy with " + r.analog
+		}
+		if math.IsNaN(v.Hf298) || math.IsNaN(v.S298) {
+			return nil, fmt.Errorf("%s: Hf and S are required", r.Name)
+		}
+		for i, c := range v.Cp {
+			if math.IsNaN(c) {
+				return nil, fmt.Errorf("%s: Cp at %g K is required", r.Name, StdTemps[i])
+			}
+		}
+		out = append(out, v)
+	}
+	return out, nil
 }
 
 // parseTSV reads rows "name Hf S Cp×7 source" with Hf in kcal/mol and S, Cp
-// in cal/(mol K), converting to J/mol and J/(mol K).
-func parseTSV(text string) ([]GroupValue, error) {
-	var out []GroupValue
+// in cal/(mol K), converting to J/mol and J/(mol K). A number written "-" is
+// not known (NaN); the 1500 K column may instead name an analog, "~name".
+func parseTSV(text string) ([]row, error) {
+	var out []row
 	for n, line := range strings.Split(text, "\n") {
 		if strings.TrimSpace(line) == "" || strings.HasPrefix(line, "#") {
 			continue
@@ -88,17 +155,28 @@ func parseTSV(text string) ([]GroupValue, error) {
 		if len(f) != 11 {
 			return nil, fmt.Errorf("line %d: %d columns, want 11", n+1, len(f))
 		}
+		var r row
 		var x [9]float64
 		for i := range x {
-			v, err := strconv.ParseFloat(f[i+1], 64)
+			s := f[i+1]
+			switch {
+			case s == "-":
+				x[i] = math.NaN()
+				continue
+			case i == 8 && strings.HasPrefix(s, "~"):
+				r.analog = s[1:]
+				x[i] = math.NaN()
+				continue
+			}
+			v, err := strconv.ParseFloat(s, 64)
 			if err != nil {
 				return nil, fmt.Errorf("line %d column %d: %w", n+1, i+2, err)
 			}
 			x[i] = v * calorie
 		}
-		g := GroupValue{Name: f[0], Hf298: x[0] * 1000, S298: x[1], Source: f[10]}
-		copy(g.Cp[:], x[2:])
-		out = append(out, g)
+		r.GroupValue = GroupValue{Name: f[0], Hf298: x[0] * 1000, S298: x[1], Source: f[10]}
+		copy(r.Cp[:], x[2:])
+		out = append(out, r)
 	}
 	return out, nil
 }
@@ -141,54 +219,4 @@ func (l lookup) group(name string) (GroupValue, bool) {
 	}
 	v, ok := l.groups[name]
 	return v, ok
-}
-
-// atomicWeight holds IUPAC 2021 standard atomic weights (abridged, g/mol).
-var atomicWeight = map[string]float64{
-	"H": 1.008, "C": 12.011, "N": 14.007, "O": 15.999, "F": 18.998, "Si": 28.085,
-	"P": 30.974, "S": 32.06, "Cl": 35.45, "Br": 79.904, "I": 126.90, "Ar": 39.95, "He": 4.0026,
-}
-
-// formula returns the Hill formula and molar mass (g/mol) of m.
-func formula(m *molecule.Molecule) (string, float64, error) {
-	count := map[string]int{}
-	for _, a := range m.Atoms {
-		count[a.Element]++
-		if a.HCount > 0 {
-			count["H"] += a.HCount
-		}
-	}
-	var mass float64
-	for el, n := range count {
-		w, ok := atomicWeight[el]
-		if !ok {
-			return "", 0, fmt.Errorf("no atomic weight for element %q", el)
-		}
-		mass += w * float64(n)
-	}
-	var els []string
-	for el := range count {
-		if el != "C" && el != "H" {
-			els = append(els, el)
-		}
-	}
-	sort.Strings(els)
-	if count["C"] > 0 {
-		els = append([]string{"C", "H"}, els...)
-	} else {
-		els = append(els, "H")
-		sort.Strings(els)
-	}
-	var b strings.Builder
-	for _, el := range els {
-		n := count[el]
-		if n == 0 {
-			continue
-		}
-		b.WriteString(el)
-		if n > 1 {
-			b.WriteString(strconv.Itoa(n))
-		}
-	}
-	return b.String(), mass, nil
 }

@@ -5,8 +5,6 @@ import (
 	"fmt"
 	"math"
 	"slices"
-
-	"gonum.org/v1/gonum/mat"
 )
 
 // FitOptions sets the temperature ranges of a fitted polynomial in K. Zero
@@ -245,71 +243,179 @@ func usablePoints(T, Cp []float64, opt FitOptions) ([]sample, error) {
 	return pts, nil
 }
 
+// Unknowns of solvePoly. Both blocks share the value c0 and the slope d1 at
+// TMid, which makes Cp and dCp/dT continuous there by construction:
+//
+//	Cp/R = c0 + d1 t + l2 sL² + l3 sL³ + l4 sL⁴   (low block)
+//	Cp/R = c0 + d1 t + h2 sH² + h3 sH³ + h4 sH⁴   (high block)
+//
+// with t = (T − TMid)/1000 K, sL = (T − TMid)/(TMid − TLow) ∈ [−1, 0] and
+// sH = (T − TMid)/(THigh − TMid) ∈ [0, 1]; the scaled, centred variables keep
+// the least-squares columns of similar size. u = (c0, d1, l2, l3, l4, h2, h3, h4).
+const nPoly = 8
+
+// polyBasis evaluates the columns of solvePoly's unknowns.
+type polyBasis struct{ tMid, dLow, dHigh float64 }
+
+func newPolyBasis(opt FitOptions) polyBasis {
+	return polyBasis{tMid: opt.TMid, dLow: opt.TMid - opt.TLow, dHigh: opt.THigh - opt.TMid}
+}
+
+// value writes into g the coefficients of Cp/R at T in the block given by
+// high (g has length nPoly).
+func (pb polyBasis) value(T float64, high bool, g []float64) {
+	clear(g)
+	g[0] = 1
+	g[1] = (T - pb.tMid) / tauScale
+	off, d := 2, pb.dLow
+	if high {
+		off, d = 5, pb.dHigh
+	}
+	s := (T - pb.tMid) / d
+	g[off] = s * s
+	g[off+1] = s * s * s
+	g[off+2] = s * s * s * s
+}
+
+// slope writes into g the coefficients of d(Cp/R)/dT × 1000 K at T in the
+// block given by high.
+func (pb polyBasis) slope(T float64, high bool, g []float64) {
+	clear(g)
+	g[1] = 1
+	off, d := 2, pb.dLow
+	if high {
+		off, d = 5, pb.dHigh
+	}
+	s := (T - pb.tMid) / d
+	k := tauScale / d
+	g[off] = 2 * s * k
+	g[off+1] = 3 * s * s * k
+	g[off+2] = 4 * s * s * s * k
+}
+
+// polyIneq is the family of inequalities of solvePoly, in this order: dCp/dT
+// ≥ 0 on the low grid and on the high grid (when monotone), then Cp ≤ cpMax
+// on the low and on the high grid (when cpMax > 0). Grid j of a block with m
+// points lies at lo + (hi − lo) j/(m − 1).
+type polyIneq struct {
+	pb         polyBasis
+	opt        FitOptions
+	monotone   bool
+	capR       float64 // cpMax/R, 0 for none
+	nMon, nAll int
+}
+
+func newPolyIneq(opt FitOptions, monotone bool, cpMax float64) *polyIneq {
+	f := &polyIneq{pb: newPolyBasis(opt), opt: opt, monotone: monotone}
+	if monotone {
+		f.nMon = nLowGrid + nHighGrid
+	}
+	f.nAll = f.nMon
+	if cpMax > 0 {
+		f.capR = cpMax / R
+		f.nAll += nLowGrid + nHighGrid
+	}
+	return f
+}
+
+func (f *polyIneq) size() int { return f.nAll }
+
+// point returns the temperature of grid index i (0 ≤ i < nLowGrid+nHighGrid)
+// and whether it is on the high grid.
+func (f *polyIneq) point(i int) (float64, bool) {
+	if i < nLowGrid {
+		return f.opt.TLow + (f.opt.TMid-f.opt.TLow)*float64(i)/float64(nLowGrid-1), false
+	}
+	j := i - nLowGrid
+	return f.opt.TMid + (f.opt.THigh-f.opt.TMid)*float64(j)/float64(nHighGrid-1), true
+}
+
+func (f *polyIneq) row(i int, g []float64) float64 {
+	if i < f.nMon {
+		t, high := f.point(i)
+		f.pb.slope(t, high, g)
+		return 0
+	}
+	t, high := f.point(i - f.nMon)
+	f.pb.value(t, high, g)
+	for k := range g {
+		g[k] = -g[k]
+	}
+	return -f.capR
+}
+
+func (f *polyIneq) slacks(u, s []float64) {
+	var g [nPoly]float64
+	for i := range s {
+		h := f.row(i, g[:])
+		s[i] = dot(g[:], u) - h
+	}
+}
+
 // solvePoly solves the constrained least-squares problem described on Fit for
-// the given samples; cpMax ≤ 0 means no ceiling.
+// the given samples; cpMax ≤ 0 means no ceiling. The unknowns are those of
+// polyBasis, so the equalities at TMid hold by construction; the data matrix
+// is reduced by Householder QR and the inequalities are handled by lsi.
 func solvePoly(hf298, s298 float64, samples []sample, opt FitOptions, monotone bool, cpMax float64) (NASA7, error) {
-	const n = 10 // τ-scaled Cp/R coefficients: 0–4 low, 5–9 high
-	a := mat.NewDense(len(samples), n, nil)
-	b := make([]float64, len(samples))
+	const n = nPoly
+	m := len(samples)
+	if m < n {
+		return NASA7{}, fmt.Errorf("constrained least squares: %d samples for %d unknowns", m, n)
+	}
+	pb := newPolyBasis(opt)
+	a := make([]float64, m*n)
+	b := make([]float64, m)
+	var cs [n]float64
 	for i, s := range samples {
-		off := 0
-		if s.T >= opt.TMid {
-			off = 5
-		}
-		tau := s.T / tauScale
+		row := a[i*n : (i+1)*n]
+		pb.value(s.T, s.T >= opt.TMid, row)
 		scale := s.W / (s.Cp / R)
-		tk := scale
-		for k := range 5 {
-			a.Set(i, off+k, tk)
-			tk *= tau
+		for k := range row {
+			row[k] *= scale
+			cs[k] += row[k] * row[k]
 		}
 		b[i] = s.W
 	}
-	tm := opt.TMid / tauScale
-	cont := make([]float64, n)
-	slope := make([]float64, n)
-	for k := range 5 {
-		cont[k] = math.Pow(tm, float64(k))
-		cont[5+k] = -cont[k]
-		if k > 0 {
-			slope[k] = float64(k) * math.Pow(tm, float64(k-1))
-			slope[5+k] = -slope[k]
+	// Unit-length columns, so that the rank test sees collinearity only.
+	for k := range cs {
+		if !(cs[k] > 0) || math.IsInf(cs[k], 0) {
+			return NASA7{}, errors.New("constrained least squares: too few independent data for the unknowns")
+		}
+		cs[k] = 1 / math.Sqrt(cs[k])
+	}
+	for i := range m {
+		for k := range n {
+			a[i*n+k] *= cs[k]
 		}
 	}
-	eq := []linearRow{{c: cont}, {c: slope}}
-	var ineq []linearRow
-	addGrid := func(lo, hi float64, m, off int) {
-		for j := range m {
-			t := lo + (hi-lo)*float64(j)/float64(m-1)
-			tau := t / tauScale
-			if monotone {
-				row := make([]float64, n)
-				for k := 1; k < 5; k++ {
-					row[off+k] = float64(k) * math.Pow(tau, float64(k-1))
-				}
-				ineq = append(ineq, linearRow{c: row})
-			}
-			if cpMax > 0 {
-				row := make([]float64, n)
-				for k := range 5 {
-					row[off+k] = -math.Pow(tau, float64(k))
-				}
-				ineq = append(ineq, linearRow{c: row, rhs: -cpMax / R})
-			}
-		}
+	householderQR(a, m, n, b)
+	if !triRank(a, n, n, 1e-12) {
+		return NASA7{}, errors.New("constrained least squares: too few independent data for the unknowns")
 	}
-	addGrid(opt.TLow, opt.TMid, nLowGrid, 0)
-	addGrid(opt.TMid, opt.THigh, nHighGrid, 5)
-	x, err := constrainedLSQ(a, b, eq, ineq, 1e-9)
-	if err != nil {
+	fam := scaledFamily{inner: newPolyIneq(opt, monotone, cpMax), scale: cs[:]}
+	var v [n]float64
+	if err := lsi(a, n, n, b[:n], &fam, 1e-9, v[:]); err != nil {
 		return NASA7{}, err
 	}
-	p := NASA7{TLow: opt.TLow, TMid: opt.TMid, THigh: opt.THigh}
-	for k := range 5 {
-		f := math.Pow(tauScale, float64(k))
-		p.Low[k] = x[k] / f
-		p.High[k] = x[5+k] / f
+	var u [n]float64
+	for k := range n {
+		u[k] = v[k] * cs[k]
 	}
+	p := NASA7{TLow: opt.TLow, TMid: opt.TMid, THigh: opt.THigh}
+	// Cp/R of each block as Σ βⱼ (T − TMid)ʲ, then expanded in powers of T:
+	// aₖ = Σⱼ≥ₖ βⱼ C(j,k) (−TMid)^(j−k).
+	toMonomial := func(beta [5]float64, dst *[7]float64) {
+		for k := range 5 {
+			c := 0.0
+			for j := 4; j >= k; j-- {
+				c += beta[j] * binomial(j, k) * math.Pow(-opt.TMid, float64(j-k))
+			}
+			dst[k] = c
+		}
+	}
+	dl, dh := pb.dLow, pb.dHigh
+	toMonomial([5]float64{u[0], u[1] / tauScale, u[2] / (dl * dl), u[3] / (dl * dl * dl), u[4] / (dl * dl * dl * dl)}, &p.Low)
+	toMonomial([5]float64{u[0], u[1] / tauScale, u[5] / (dh * dh), u[6] / (dh * dh * dh), u[7] / (dh * dh * dh * dh)}, &p.High)
 	p.Low[5] = hf298/R - hIntR(&p.Low, Tref)
 	p.Low[6] = s298/R - sIntR(&p.Low, Tref)
 	p.High[5] = hR(&p.Low, opt.TMid) - hIntR(&p.High, opt.TMid)
@@ -320,18 +426,102 @@ func solvePoly(hf298, s298 float64, samples []sample, opt FitOptions, monotone b
 	return p, nil
 }
 
-// denseMonotone checks on a 1 K grid that Cp never falls by more than 1e-6 R
-// below its running maximum over [TLow, THigh].
+// binomial returns C(n, k) for 0 ≤ k ≤ n ≤ 4 as a float64.
+func binomial(n, k int) float64 {
+	c := 1.0
+	for i := range k {
+		c = c * float64(n-i) / float64(i+1)
+	}
+	return c
+}
+
+// denseMonotone checks that Cp never falls by more than 1e-6 R below its
+// running maximum over [TLow, THigh] (the low block on [TLow, TMid], the high
+// block on [TMid, THigh]). The test is exact up to rounding: Cp is evaluated
+// at the range ends and at every stationary point, the real roots of the
+// cubic dCp/dT found by bisection between the roots of the quadratic
+// d²Cp/dT², and a fall can only end at one of those.
 func denseMonotone(p NASA7) error {
 	peak := math.Inf(-1)
-	for t := p.TLow; t <= p.THigh; t++ {
-		c := p.Cp(t)
-		if c < peak-1e-6*R {
-			return fmt.Errorf("Cp falls to %g J/(mol K) at %g K below the earlier %g J/(mol K)", c, t, peak)
+	for _, bl := range []struct {
+		a      *[7]float64
+		lo, hi float64
+	}{{&p.Low, p.TLow, p.TMid}, {&p.High, p.TMid, p.THigh}} {
+		var pts [5]float64
+		k := 0
+		pts[k] = bl.lo
+		k++
+		for _, r := range slopeRoots(bl.a, bl.lo, bl.hi) {
+			pts[k] = r
+			k++
 		}
-		peak = math.Max(peak, c)
+		pts[k] = bl.hi
+		k++
+		for _, t := range pts[:k] {
+			c := R * cpR(bl.a, t)
+			if c < peak-1e-6*R || math.IsNaN(c) {
+				return fmt.Errorf("Cp falls to %g J/(mol K) at %g K below the earlier %g J/(mol K)", c, t, peak)
+			}
+			peak = math.Max(peak, c)
+		}
 	}
 	return nil
+}
+
+// slopeRoots returns, in increasing order, the roots in (lo, hi) of the cubic
+// dCp/dT of block a at which its sign changes. The cubic is monotone between
+// the roots of its derivative, 2a3 + 6a4 T + 12a5 T² (1-based a), so each
+// such piece holds at most one root, found by bisection to rounding.
+func slopeRoots(a *[7]float64, lo, hi float64) []float64 {
+	// Break points: lo, real roots of the quadratic inside (lo, hi), hi.
+	br := []float64{lo}
+	qa, qb, qc := 12*a[4], 6*a[3], 2*a[2]
+	var qr []float64
+	switch {
+	case qa != 0:
+		disc := qb*qb - 4*qa*qc
+		if disc > 0 {
+			sq := math.Sqrt(disc)
+			// Numerically stable pair of roots.
+			q := -0.5 * (qb + math.Copysign(sq, qb))
+			qr = append(qr, q/qa)
+			if q != 0 {
+				qr = append(qr, qc/q)
+			}
+		}
+	case qb != 0:
+		qr = append(qr, -qc/qb)
+	}
+	if len(qr) == 2 && qr[0] > qr[1] {
+		qr[0], qr[1] = qr[1], qr[0]
+	}
+	for _, r := range qr {
+		if r > lo && r < hi {
+			br = append(br, r)
+		}
+	}
+	br = append(br, hi)
+	var roots []float64
+	for i := 0; i+1 < len(br); i++ {
+		x0, x1 := br[i], br[i+1]
+		f0, f1 := dcpR(a, x0), dcpR(a, x1)
+		if !(f0 < 0 && f1 > 0) && !(f0 > 0 && f1 < 0) {
+			continue
+		}
+		for range 200 {
+			mid := 0.5 * (x0 + x1)
+			if mid <= x0 || mid >= x1 {
+				break
+			}
+			if fm := dcpR(a, mid); (fm < 0) == (f0 < 0) {
+				x0, f0 = mid, fm
+			} else {
+				x1 = mid
+			}
+		}
+		roots = append(roots, 0.5*(x0+x1))
+	}
+	return roots
 }
 
 func report(p NASA7, pts []sample) FitReport {

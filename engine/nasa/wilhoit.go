@@ -4,8 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"math"
-
-	"gonum.org/v1/gonum/mat"
 )
 
 // Wilhoit is the heat-capacity form of R. C. Wilhoit (in: Thermodynamics
@@ -129,11 +127,13 @@ func ClassicalLimits(nAtoms int, linear bool, nRotors int) (cp0, cpInf float64) 
 // sum of squared relative residuals ((Cp_fit − Cp)/Cp)²: A0…A3 by linear least
 // squares for each trial B, constrained so that Cp rises monotonically from
 // cp0 to cpInf, and B (30 K to 30 000 K) by a logarithmic grid search refined
-// by golden-section search (25 grid points, 25 golden steps). When no B gives a monotone shape with four A
-// terms, fewer terms are used (with none, Cp = cp0 + (cpInf −
-// cp0) y² is always monotone). At most len(T)−1 A terms are fitted, so one
-// point already determines a curve. When cp0 = cpInf (an atom) the result is
-// the constant cp0 with B = 500 K.
+// by golden-section search (25 grid points, 25 golden steps). When no B gives
+// a monotone shape with four A terms, fewer terms are used (with none, Cp =
+// cp0 + (cpInf − cp0) y² is always monotone). At most d−1 A terms are fitted,
+// d the number of distinct temperatures, so one point already determines a
+// curve; a trial B at which the A terms are numerically undetermined (see
+// wilhoitAtB) is skipped. When cp0 = cpInf (an atom) the result is the
+// constant cp0 with B = 500 K.
 func FitWilhoit(T, Cp []float64, cp0, cpInf float64) (Wilhoit, error) {
 	if len(T) != len(Cp) {
 		return Wilhoit{}, fmt.Errorf("wilhoit fit: %d temperatures but %d heat capacities", len(T), len(Cp))
@@ -152,17 +152,47 @@ func FitWilhoit(T, Cp []float64, cp0, cpInf float64) (Wilhoit, error) {
 	if cpInf-cp0 <= 1e-12*cpInf {
 		return Wilhoit{Cp0: cp0, CpInf: cpInf, B: 500}, nil
 	}
-	maxTerms := min(4, len(T)-1)
+	maxTerms := min(4, distinct(T)-1)
+	ws := newWilhoitWork(len(T))
 	for nA := maxTerms; nA >= 0; nA-- {
-		if w, ok := fitWilhoitTerms(T, Cp, cp0, cpInf, nA); ok {
+		if w, ok := fitWilhoitTerms(T, Cp, cp0, cpInf, nA, ws); ok {
 			return w, nil
 		}
 	}
 	return Wilhoit{}, errors.New("wilhoit fit: no monotone fit found") // unreachable: nA = 0 is always monotone
 }
 
+// distinct counts the distinct values of x.
+func distinct(x []float64) int {
+	n := 0
+	for i, v := range x {
+		seen := false
+		for _, u := range x[:i] {
+			if u == v {
+				seen = true
+				break
+			}
+		}
+		if !seen {
+			n++
+		}
+	}
+	return n
+}
+
+// wilhoitWork is the scratch space of one FitWilhoit call, reused across the
+// trial values of B.
+type wilhoitWork struct {
+	a, b, colScale []float64
+	fam            wilhoitIneq
+}
+
+func newWilhoitWork(nPts int) *wilhoitWork {
+	return &wilhoitWork{a: make([]float64, nPts*4), b: make([]float64, nPts), colScale: make([]float64, 4)}
+}
+
 // fitWilhoitTerms searches B for the best monotone fit with nA free A terms.
-func fitWilhoitTerms(T, Cp []float64, cp0, cpInf float64, nA int) (Wilhoit, bool) {
+func fitWilhoitTerms(T, Cp []float64, cp0, cpInf float64, nA int, ws *wilhoitWork) (Wilhoit, bool) {
 	const (
 		bMin, bMax = 30.0, 30000.0
 		nGrid      = 25
@@ -170,7 +200,7 @@ func fitWilhoitTerms(T, Cp []float64, cp0, cpInf float64, nA int) (Wilhoit, bool
 	best := Wilhoit{}
 	bestSSE := math.Inf(1)
 	eval := func(lnB float64) float64 {
-		w, sse, ok := wilhoitAtB(T, Cp, cp0, cpInf, math.Exp(lnB), nA)
+		w, sse, ok := wilhoitAtB(T, Cp, cp0, cpInf, math.Exp(lnB), nA, ws)
 		if !ok {
 			return math.Inf(1)
 		}
@@ -211,56 +241,115 @@ func fitWilhoitTerms(T, Cp []float64, cp0, cpInf float64, nA int) (Wilhoit, bool
 	return best, true
 }
 
+// wilhoitGrid is the number of intervals of the y grid on which FitWilhoit
+// imposes a monotone shape.
+const wilhoitGrid = 50
+
+// wilhoitIneq is the family of monotonicity constraints on A0…A(nA−1):
+// d/dy of y²[1 + (y−1)ΣAᵢyⁱ] divided by y,
+// q(y) = 2 + Σ Aᵢ[(i+3) y^(i+1) − (i+2) yⁱ] ≥ 0, at y = 0, 1/50, …, 1.
+type wilhoitIneq struct{ nA int }
+
+func (f *wilhoitIneq) size() int { return wilhoitGrid + 1 }
+
+func (f *wilhoitIneq) row(j int, g []float64) float64 {
+	y := float64(j) / wilhoitGrid
+	yk := 1.0 // yᵏ
+	for k := range f.nA {
+		g[k] = (float64(k+3)*y - float64(k+2)) * yk
+		yk *= y
+	}
+	return -2
+}
+
+func (f *wilhoitIneq) slacks(a, s []float64) {
+	p := qPoly(a, f.nA)
+	for j := range s {
+		y := float64(j) / wilhoitGrid
+		s[j] = p[0] + y*(p[1]+y*(p[2]+y*(p[3]+y*p[4])))
+	}
+}
+
+// qPoly returns the monomial coefficients of q(y) (see wilhoitIneq) for the
+// first nA entries of a.
+func qPoly(a []float64, nA int) [5]float64 {
+	var p [5]float64
+	p[0] = 2
+	for k := range nA {
+		p[k+1] += float64(k+3) * a[k]
+		p[k] -= float64(k+2) * a[k]
+	}
+	return p
+}
+
 // wilhoitAtB solves the least-squares problem for A0…A(nA−1) at fixed B,
 // subject to the shape being non-decreasing at 51 values of y in [0, 1]
-// (linear inequalities in A), and returns
-// the fit, its sum of squared relative residuals and whether the result is
-// usable (solved and monotone on the finer check grid).
-func wilhoitAtB(T, Cp []float64, cp0, cpInf, B float64, nA int) (Wilhoit, float64, bool) {
+// (linear inequalities in A), and returns the fit, its sum of squared
+// relative residuals and whether the result is usable: the A terms are
+// determined (after scaling the columns to unit length, every diagonal entry
+// of the triangular factor exceeds 1e-10 of the largest) and the shape is
+// monotone (see monotone).
+//
+// The unconstrained optimum is often monotone already, which a sufficient
+// test on the Bernstein coefficients of q shows at once; only when it is not
+// is the constrained problem solved (lsi).
+func wilhoitAtB(T, Cp []float64, cp0, cpInf, B float64, nA int, ws *wilhoitWork) (Wilhoit, float64, bool) {
 	w := Wilhoit{Cp0: cp0, CpInf: cpInf, B: B}
 	d := cpInf - cp0
 	if nA > 0 {
-		a := mat.NewDense(len(T), nA, nil)
-		b := make([]float64, len(T))
+		m := len(T)
+		a, b, cs := ws.a[:m*nA], ws.b[:m], ws.colScale[:nA]
+		clear(cs)
 		for i := range T {
 			y := T[i] / (T[i] + B)
 			base := d * y * y * (y - 1) / Cp[i]
 			yk := 1.0
 			for k := range nA {
-				a.Set(i, k, base*yk)
+				v := base * yk
+				a[i*nA+k] = v
+				cs[k] += v * v
 				yk *= y
 			}
 			b[i] = (Cp[i] - cp0 - d*y*y) / Cp[i]
 		}
-		// Monotone shape: d/dy of y²[1 + (y−1)ΣAᵢyⁱ] divided by y,
-		// 2 + Σ Aᵢ[(i+3) y^(i+1) − (i+2) yⁱ] ≥ 0, at y = 0, 1/50, …, 1.
-		const nGrid = 50
-		ineq := make([]linearRow, 0, nGrid+1)
-		for j := 0; j <= nGrid; j++ {
-			y := float64(j) / nGrid
-			row := make([]float64, nA)
-			for k := range nA {
-				row[k] = float64(k+3)*math.Pow(y, float64(k+1)) - float64(k+2)*math.Pow(y, float64(k))
+		// Scale the columns to unit length: the rank test then measures
+		// collinearity rather than the size of yᵏ.
+		for k := range nA {
+			if !(cs[k] > 0) || math.IsInf(cs[k], 0) {
+				return w, 0, false
 			}
-			ineq = append(ineq, linearRow{c: row, rhs: -2})
+			cs[k] = 1 / math.Sqrt(cs[k])
 		}
-		// The unconstrained optimum is often monotone already; only when it
-		// is not is the constrained problem solved.
-		x, err := leastSquares(a, mat.NewVecDense(len(b), b))
-		if err == nil {
-			copy(w.A[:], x.RawVector().Data)
+		for i := range m {
+			for k := range nA {
+				a[i*nA+k] *= cs[k]
+			}
 		}
-		if err != nil || !w.monotone() {
-			xc, err := constrainedLSQ(a, b, nil, ineq, 1e-8)
-			if err != nil {
+		householderQR(a, m, nA, b)
+		if !triRank(a, nA, nA, 1e-10) {
+			return w, 0, false
+		}
+		x := w.A[:nA]
+		backSolve(a, nA, nA, b[:nA], x)
+		for k := range nA {
+			x[k] *= cs[k]
+		}
+		if !w.exactlyMonotone(nA) && !w.monotone() {
+			// Constrained solve in the scaled unknowns v = A/scale.
+			ws.fam = wilhoitIneq{nA: nA}
+			fam := scaledFamily{inner: &ws.fam, scale: cs}
+			var v [4]float64
+			if err := lsi(a, nA, nA, b[:nA], &fam, 1e-8, v[:nA]); err != nil {
 				return w, 0, false
 			}
 			w.A = [4]float64{}
-			copy(w.A[:], xc)
+			for k := range nA {
+				w.A[k] = v[k] * cs[k]
+			}
+			if !w.exactlyMonotone(nA) && !w.monotone() {
+				return w, 0, false
+			}
 		}
-	}
-	if !w.monotone() {
-		return w, 0, false
 	}
 	sse := 0.0
 	for i := range T {
@@ -271,6 +360,55 @@ func wilhoitAtB(T, Cp []float64, cp0, cpInf, B float64, nA int) (Wilhoit, float6
 		return w, 0, false
 	}
 	return w, sse, true
+}
+
+// scaledFamily presents the inequalities of inner in scaled unknowns
+// v = u/scale (u = scale ⊙ v, elementwise).
+type scaledFamily struct {
+	inner ineqFamily
+	scale []float64
+}
+
+func (f *scaledFamily) size() int { return f.inner.size() }
+
+func (f *scaledFamily) row(i int, g []float64) float64 {
+	h := f.inner.row(i, g)
+	for k := range g {
+		g[k] *= f.scale[k]
+	}
+	return h
+}
+
+func (f *scaledFamily) slacks(v, s []float64) {
+	var buf [nPoly]float64
+	u := buf[:len(v)]
+	for k := range v {
+		u[k] = v[k] * f.scale[k]
+	}
+	f.inner.slacks(u, s)
+}
+
+// exactlyMonotone is a sufficient test that the shape is non-decreasing on
+// y ∈ [0, 1]: the shape's derivative is y q(y) (see wilhoitIneq), and q ≥ 0
+// on [0, 1] when all Bernstein coefficients of q are non-negative (Farouki &
+// Rajan, Comput. Aided Geom. Des. 5 (1988), the convex-hull property). Only
+// the first nA terms of A are used. A false result proves nothing.
+func (w Wilhoit) exactlyMonotone(nA int) bool {
+	p := qPoly(w.A[:], nA)
+	// bᵢ = Σ_{j≤i} C(i,j)/C(4,j) pⱼ for degree 4.
+	var binom4 = [5]float64{1, 4, 6, 4, 1}
+	for i := range 5 {
+		c := 1.0 // C(i, j)
+		s := 0.0
+		for j := 0; j <= i; j++ {
+			s += c / binom4[j] * p[j]
+			c = c * float64(i-j) / float64(j+1)
+		}
+		if !(s >= 0) {
+			return false
+		}
+	}
+	return true
 }
 
 // monotone reports whether the Wilhoit shape never falls more than 1e-3
