@@ -35,6 +35,8 @@ type analysis struct {
 	// order is the files in resolution order: includes before the statements
 	// that follow them, depth first.
 	order []string
+	// parsed holds the structures read ahead by prepare.
+	parsed map[*speciesfile.Species]parsed
 }
 
 func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
@@ -268,7 +270,11 @@ func (a *analysis) structure(path string, sp *Species) {
 	if tok == nil {
 		return
 	}
-	m, err := molecule.ParseSMILES(tok.Text)
+	p, ok := a.parsed[sp.Decl]
+	if !ok {
+		p.mol, p.err = molecule.ParseSMILES(tok.Text)
+	}
+	m, err := p.mol, p.err
 	if err != nil {
 		sp.SMILESError = err
 		start, end := tok.Span.Start, tok.Span.End

@@ -5,8 +5,10 @@ import (
 	"fmt"
 	"io/fs"
 	"math"
+	"runtime"
 	"sort"
 	"strings"
+	"sync"
 	"unicode"
 
 	"kiln.dev/kiln/engine/benson"
@@ -19,6 +21,9 @@ import (
 // thermo, estimate, and the checks that compare them.
 func (a *analysis) species() error {
 	user := a.userGroups()
+	if err := a.prepare(user); err != nil {
+		return err
+	}
 	byStructure := map[string]*Species{}
 	for _, path := range a.order {
 		f := a.res.Files[path]
@@ -78,6 +83,76 @@ func (a *analysis) species() error {
 	return nil
 }
 
+// parsed is a species declaration's structure, read ahead of the
+// sequential pass.
+type parsed struct {
+	mol *molecule.Molecule
+	err error
+}
+
+// prepare reads every structure in scope and warms the estimate cache using
+// all cores: structures and estimates are independent of one another, while
+// the pass that follows (names, duplicates, diagnostics) is sequential.
+func (a *analysis) prepare(user []benson.GroupValue) error {
+	var decls []*speciesfile.Species
+	for _, path := range a.order {
+		for _, d := range a.res.Files[path].Species {
+			if d.SMILES != nil {
+				decls = append(decls, d)
+			}
+		}
+	}
+	a.parsed = make(map[*speciesfile.Species]parsed, len(decls))
+	results := make([]parsed, len(decls))
+	workers := runtime.GOMAXPROCS(0)
+	if workers > len(decls)/64+1 {
+		workers = len(decls)/64 + 1
+	}
+	var wg sync.WaitGroup
+	next := make(chan int, len(decls))
+	for i := range decls {
+		next <- i
+	}
+	close(next)
+	for w := 0; w < workers; w++ {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for i := range next {
+				if a.ctx.Err() != nil {
+					return
+				}
+				d := decls[i]
+				m, err := molecule.ParseSMILES(d.SMILES.Text)
+				results[i] = parsed{m, err}
+				if err == nil {
+					// Errors are reported by the sequential pass.
+					_, _ = a.w.EstimateMolecule(m, a.estimateOptions(d, user))
+				}
+			}
+		}()
+	}
+	wg.Wait()
+	if err := a.ctx.Err(); err != nil {
+		return err
+	}
+	for i, d := range decls {
+		a.parsed[d] = results[i]
+	}
+	return nil
+}
+
+func (a *analysis) estimateOptions(d *speciesfile.Species, user []benson.GroupValue) EstimateOptions {
+	return EstimateOptions{
+		Multiplicity:   intAttr(d.Multiplicity),
+		Symmetry:       intAttr(d.Symmetry),
+		OpticalIsomers: intAttr(d.OpticalIsomers),
+		UserGroups:     user,
+		TMid:           a.set.TMid,
+		THigh:          a.set.THigh,
+	}
+}
+
 func intAttr(a *speciesfile.IntAttr) int {
 	if a == nil {
 		return 0
@@ -106,14 +181,7 @@ func shortPath(p string) string {
 
 func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.GroupValue) {
 	d := sp.Decl
-	e, err := a.w.EstimateMolecule(sp.Mol, EstimateOptions{
-		Multiplicity:   intAttr(d.Multiplicity),
-		Symmetry:       intAttr(d.Symmetry),
-		OpticalIsomers: intAttr(d.OpticalIsomers),
-		UserGroups:     user,
-		TMid:           a.set.TMid,
-		THigh:          a.set.THigh,
-	})
+	e, err := a.w.EstimateMolecule(sp.Mol, a.estimateOptions(d, user))
 	if err != nil {
 		sp.estimateErr = err
 		return
