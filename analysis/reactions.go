@@ -214,6 +214,16 @@ func (a *analysis) thermo(d *speciesfile.Reaction, r *Reaction) {
 	}
 }
 
+// KpAt returns the dimensionless equilibrium constant Kp (1 bar) at T, if
+// the reaction's thermochemistry is known.
+func (r *Reaction) KpAt(T float64) (float64, bool) {
+	if r.reactants == nil {
+		return 0, false
+	}
+	_, _, g := kinetics.Delta(r.reactants, r.products, T)
+	return kinetics.Kp(g, T), true
+}
+
 // Kc returns the equilibrium constant in (mol/cm3)^Δn at T, if the reaction's
 // thermochemistry is known.
 func (r *Reaction) Kc(T float64) (float64, bool) {
