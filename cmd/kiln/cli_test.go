@@ -258,3 +258,19 @@ func TestFillUnwritable(t *testing.T) {
 	after, _ := os.ReadFile(path)
 	assert.Equal(t, orig, after)
 }
+
+// TestPlot draws a species of the example and checks the SVG; an unknown
+// species is a clear error.
+func TestPlot(t *testing.T) {
+	out := filepath.Join(t.TempDir(), "ethanol.svg")
+	code, _, stderr := runKiln(t, "plot", "ethanol", "--file", "../../examples/furnace.kiln", "-o", out)
+	require.Equal(t, exitOK, code, stderr)
+	svg, err := os.ReadFile(out)
+	require.NoError(t, err)
+	assert.Contains(t, string(svg[:200]), "<svg")
+	assert.Contains(t, string(svg), "ethanol")
+
+	code, _, stderr = runKiln(t, "plot", "nosuch", "--file", "../../examples/furnace.kiln", "-o", out)
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, `no species named "nosuch"`)
+}
