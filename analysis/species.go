@@ -9,7 +9,6 @@ import (
 	"sort"
 	"strings"
 	"sync"
-	"unicode"
 
 	"kiln.dev/kiln/engine/benson"
 	"kiln.dev/kiln/engine/molecule"
@@ -42,16 +41,15 @@ func (a *analysis) species() error {
 			a.res.Species = append(a.res.Species, sp)
 
 			a.structure(path, sp)
-			if sp.Mol == nil && d.Composition != nil {
-				comp, err := ParseFormula(d.Composition.Text)
-				if err != nil {
-					a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
-						Message: fmt.Sprintf("composition %q: %v", d.Composition.Text, err)})
-				} else {
-					sp.Composition = comp
-					sp.Formula = HillFormula(comp)
-					sp.MolarMass = MolarMassOf(comp)
+			if sp.Mol == nil && len(d.Formula) > 0 {
+				// The parser reports a malformed composition line.
+				comp := map[string]int{}
+				for _, ec := range d.Formula {
+					comp[ec.Symbol] += ec.Count
 				}
+				sp.Composition = comp
+				sp.Formula = molecule.HillFormula(comp)
+				sp.MolarMass = MolarMassOf(comp)
 			}
 			if sp.Mol != nil {
 				key := sp.Mol.Canonical() + " " + sp.Mol.CanonicalStereo() + fmt.Sprintf(" m%d", intAttr(d.Multiplicity))
@@ -466,91 +464,16 @@ func FormatEntropy(v float64, units string) string {
 	return fmt.Sprintf("%.2f cal/(mol·K)", v/4.184)
 }
 
-// ParseFormula reads an element formula such as "C10H8" or "CH3O2" into
-// element counts. Element symbols are one capital letter and an optional
-// lower-case one; counts default to 1.
-func ParseFormula(s string) (map[string]int, error) {
-	out := map[string]int{}
-	rs := []rune(s)
-	if len(rs) == 0 {
-		return nil, errors.New("empty formula")
-	}
-	for i := 0; i < len(rs); {
-		if !unicode.IsUpper(rs[i]) || rs[i] > unicode.MaxASCII {
-			return nil, fmt.Errorf("expected an element symbol at character %d, found %q", i+1, rs[i])
-		}
-		el := string(rs[i])
-		i++
-		if i < len(rs) && unicode.IsLower(rs[i]) && rs[i] <= unicode.MaxASCII {
-			el += string(rs[i])
-			i++
-		}
-		if _, known := atomicWeight[el]; !known {
-			return nil, fmt.Errorf("unknown element %q", el)
-		}
-		n := 0
-		for i < len(rs) && rs[i] >= '0' && rs[i] <= '9' {
-			n = n*10 + int(rs[i]-'0')
-			if n > 1e6 {
-				return nil, fmt.Errorf("count of %s is too large", el)
-			}
-			i++
-		}
-		if n == 0 {
-			n = 1
-		}
-		out[el] += n
-	}
-	return out, nil
-}
-
-// HillFormula writes element counts in Hill order: C, then H, then the rest
-// alphabetically; with no carbon, all alphabetically.
-func HillFormula(comp map[string]int) string {
-	var els []string
-	for el, n := range comp {
-		if n != 0 {
-			els = append(els, el)
-		}
-	}
-	_, hasC := comp["C"]
-	sort.Slice(els, func(i, j int) bool {
-		rank := func(e string) int {
-			if hasC && e == "C" {
-				return 0
-			}
-			if hasC && e == "H" {
-				return 1
-			}
-			return 2
-		}
-		ri, rj := rank(els[i]), rank(els[j])
-		if ri != rj {
-			return ri < rj
-		}
-		return els[i] < els[j]
-	})
-	var b strings.Builder
-	for _, el := range els {
-		b.WriteString(el)
-		if comp[el] != 1 {
-			fmt.Fprintf(&b, "%d", comp[el])
-		}
-	}
-	return b.String()
-}
-
 // MolarMassOf returns the molar mass (g/mol) of an element composition using
-// the standard atomic weights of molecule.AtomicWeight.
+// the standard atomic weights of molecule.AtomicWeight (unknown elements count 0).
 func MolarMassOf(comp map[string]int) float64 {
 	m := 0.0
 	for el, n := range comp {
-		m += float64(n) * atomicWeight[el]
+		w, _ := molecule.AtomicWeight(el)
+		m += float64(n) * w
 	}
 	return m
 }
-
-var atomicWeight = molecule.AtomicWeights()
 
 func unwrapPathError(err error) error {
 	var pe *fs.PathError

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"context"
 	"fmt"
 	"os"
 	"path/filepath"
@@ -117,4 +118,18 @@ func displayPath(path string) string {
 		return path
 	}
 	return rel
+}
+
+// analyzeFile analyses the one file a command operates on.
+func analyzeFile(e env, file string, flags map[string]string) (*analysis.Result, analysis.Settings, error) {
+	set, err := settingsFrom(e, flags)
+	if err != nil {
+		return nil, set, err
+	}
+	ws, abs, err := newWorkspace(file, flags, set)
+	if err != nil {
+		return nil, set, err
+	}
+	res, err := ws.Analyze(context.Background(), abs)
+	return res, set, err
 }

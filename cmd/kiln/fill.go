@@ -2,7 +2,6 @@ package main
 
 import (
 	"bytes"
-	"context"
 	"fmt"
 	"io"
 	"os"
@@ -20,18 +19,11 @@ func runFill(e env, args []string) (int, error) {
 	if len(files) != 1 {
 		return 0, usagef("fill needs exactly one FILE")
 	}
-	set, err := settingsFrom(e, flags)
+	res, _, err := analyzeFile(e, files[0], flags)
 	if err != nil {
 		return 0, err
 	}
-	ws, abs, err := newWorkspace(files[0], flags, set)
-	if err != nil {
-		return 0, err
-	}
-	res, err := ws.Analyze(context.Background(), abs)
-	if err != nil {
-		return 0, err
-	}
+	abs := res.Path
 	edits := res.FillEdits()
 	if len(edits) == 0 {
 		fmt.Fprintf(e.stderr, "kiln fill: %s: every species that kiln can estimate already has thermo\n", files[0])

@@ -2,7 +2,6 @@ package main
 
 import (
 	"bytes"
-	"context"
 	"fmt"
 
 	"kiln.dev/kiln/engine/benson"
@@ -28,15 +27,7 @@ func runPlot(e env, args []string) (int, error) {
 	if out == "" {
 		return 0, usagef("plot needs -o OUT.svg")
 	}
-	set, err := settingsFrom(e, flags)
-	if err != nil {
-		return 0, err
-	}
-	ws, abs, err := newWorkspace(file, flags, set)
-	if err != nil {
-		return 0, err
-	}
-	res, err := ws.Analyze(context.Background(), abs)
+	res, set, err := analyzeFile(e, file, flags)
 	if err != nil {
 		return 0, err
 	}

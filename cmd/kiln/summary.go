@@ -1,7 +1,6 @@
 package main
 
 import (
-	"context"
 	"encoding/json"
 	"fmt"
 	"io"
@@ -46,15 +45,7 @@ func runSummary(e env, args []string) (int, error) {
 	if len(files) != 1 {
 		return 0, usagef("summary needs exactly one FILE")
 	}
-	set, err := settingsFrom(e, flags)
-	if err != nil {
-		return 0, err
-	}
-	ws, abs, err := newWorkspace(files[0], flags, set)
-	if err != nil {
-		return 0, err
-	}
-	res, err := ws.Analyze(context.Background(), abs)
+	res, set, err := analyzeFile(e, files[0], flags)
 	if err != nil {
 		return 0, err
 	}
