@@ -57,8 +57,9 @@ const (
 	// pointWeight is the weight of an input point relative to a Wilhoit fill
 	// sample in Fit.
 	pointWeight = 3.0
-	// tauScale (K) scales temperature inside the least-squares problem,
-	// τ = T/tauScale, to keep the monomial columns of similar size.
+	// tauScale (K) is the temperature unit of the shared linear term and of
+	// the slope inequalities inside the least-squares problem (see
+	// polyBasis): slopes are d(Cp/R)/dT per 1000 K.
 	tauScale = 1000.0
 	// nLowGrid and nHighGrid are the numbers of points in each range at which
 	// monotonicity and the Cp ceiling are imposed.
@@ -80,19 +81,23 @@ type sample struct{ T, Cp, W float64 }
 // farther than 50 K from every input point (weight 1): this fills gaps in the
 // data and extrapolates above the last point. The objective is the weighted sum
 // of squared relative residuals of Cp. The ten Cp coefficients a1…a5 of both
-// ranges are solved by constrained least squares (null-space elimination,
-// gonum/mat) under
+// ranges are solved by constrained least squares under
 //
-//   - exact continuity of Cp and dCp/dT at TMid (equalities);
+//   - exact continuity of Cp and dCp/dT at TMid (built into the unknowns:
+//     both ranges share Cp and dCp/dT at TMid, see polyBasis);
 //   - dCp/dT ≥ 0 on 120 (low) and 240 (high) grid points, so Cp is monotone
-//     non-decreasing over [TLow, THigh] (active-set inequalities);
-//   - Cp ≤ cpInf on the same grids (active-set inequalities).
+//     non-decreasing over [TLow, THigh] (inequalities);
+//   - Cp ≤ cpInf on the same grids (inequalities),
+//
+// by Householder QR of the data and a dual active-set method (lsi) that forms
+// only the inequalities that become active, usually none or a few.
 //
 // Then a6 and a7 of the low range are fixed so that H(298.15) = hf298 and
 // S(298.15) = s298 exactly (298.15 K is evaluated with the low range even when
 // TLow = 300 K), and a6, a7 of the high range so that H and S are continuous
-// at TMid; these hold to floating-point rounding. Finally Cp is checked on a
-// 1 K grid: a fall of more than 1e-6 R anywhere is an error.
+// at TMid; these hold to floating-point rounding. Finally Cp is checked at
+// every stationary point of both ranges (see denseMonotone): a fall of more
+// than 1e-6 R anywhere in [TLow, THigh] is an error.
 //
 // Errors: mismatched or empty inputs, non-finite values, T ≤ 0, Cp ≤ 0,
 // limits not 0 < cp0 ≤ cpInf, an input Cp ≥ cpInf (inconsistent with the
@@ -300,13 +305,12 @@ func (pb polyBasis) slope(T float64, high bool, g []float64) {
 type polyIneq struct {
 	pb         polyBasis
 	opt        FitOptions
-	monotone   bool
 	capR       float64 // cpMax/R, 0 for none
 	nMon, nAll int
 }
 
 func newPolyIneq(opt FitOptions, monotone bool, cpMax float64) *polyIneq {
-	f := &polyIneq{pb: newPolyBasis(opt), opt: opt, monotone: monotone}
+	f := &polyIneq{pb: newPolyBasis(opt), opt: opt}
 	if monotone {
 		f.nMon = nLowGrid + nHighGrid
 	}
@@ -344,11 +348,36 @@ func (f *polyIneq) row(i int, g []float64) float64 {
 	return -f.capR
 }
 
+// slacks evaluates the same quantities as row·u − rhs, but by Horner's rule
+// on each block's polynomial in s = (T − TMid)/ΔT, without forming rows.
 func (f *polyIneq) slacks(u, s []float64) {
-	var g [nPoly]float64
+	type block struct {
+		dT, k      float64 // ΔT of the block, 1000 K/ΔT
+		c2, c3, c4 float64 // coefficients of s², s³, s⁴
+	}
+	blocks := [2]block{
+		{f.pb.dLow, tauScale / f.pb.dLow, u[2], u[3], u[4]},
+		{f.pb.dHigh, tauScale / f.pb.dHigh, u[5], u[6], u[7]},
+	}
+	c0, d1 := u[0], u[1]
 	for i := range s {
-		h := f.row(i, g[:])
-		s[i] = dot(g[:], u) - h
+		j := i
+		if i >= f.nMon {
+			j = i - f.nMon
+		}
+		t, high := f.point(j)
+		b := &blocks[0]
+		if high {
+			b = &blocks[1]
+		}
+		x := (t - f.pb.tMid) / b.dT
+		if i < f.nMon {
+			// d(Cp/R)/dT × 1000 K ≥ 0.
+			s[i] = d1 + b.k*x*(2*b.c2+x*(3*b.c3+x*4*b.c4))
+		} else {
+			// cpMax/R − Cp/R ≥ 0.
+			s[i] = f.capR - (c0 + d1*(t-f.pb.tMid)/tauScale + x*x*(b.c2+x*(b.c3+x*b.c4)))
+		}
 	}
 }
 
@@ -394,7 +423,7 @@ func solvePoly(hf298, s298 float64, samples []sample, opt FitOptions, monotone b
 	}
 	fam := scaledFamily{inner: newPolyIneq(opt, monotone, cpMax), scale: cs[:]}
 	var v [n]float64
-	if err := lsi(a, n, n, b[:n], &fam, 1e-9, v[:]); err != nil {
+	if _, err := lsi(a, n, n, b[:n], &fam, 1e-9, v[:], nil); err != nil {
 		return NASA7{}, err
 	}
 	var u [n]float64

@@ -130,68 +130,97 @@ type ineqFamily interface {
 // become active are ever formed as rows; the others are checked through
 // fam.slacks. When none is violated — the common case — the cost is one
 // triangular solve and one sweep over the constraints.
-func lsi(r []float64, n, stride int, c []float64, fam ineqFamily, tol float64, u []float64) error {
+//
+// hint, if not nil, is a guess of the active set (indices into fam), e.g. the
+// one returned for a neighbouring problem: when the equality-constrained
+// optimum on it has non-negative multipliers it is a valid starting point of
+// the method, which then usually just confirms it. The final active set is
+// returned (a fresh slice).
+func lsi(r []float64, n, stride int, c []float64, fam ineqFamily, tol float64, u []float64, hint []int) ([]int, error) {
 	m := fam.size()
 	backSolve(r, n, stride, c, u)
 	if m == 0 {
-		return nil
+		return nil, nil
 	}
 	buf := make([]float64, 2*n*n+8*n+m)
 	take := func(k int) []float64 { v := buf[:k:k]; buf = buf[k:]; return v }
 	var (
-		u0   = take(n)
-		s    = take(m)
-		z    = take(n)
-		g    = take(n)
-		ep   = take(n)
-		d    = take(n)
-		rd   = take(n) // dual direction, one entry per active constraint
-		tmp  = take(n)
-		lam  = take(n)[:0] // multipliers of the active constraints
-		nrm  = take(n * n) // active normals eᵢ, n per constraint
-		qr   = take(n * n) // triangular factor of the active normals
-		act  = make([]int, 0, n)
-		inA  = make([]bool, m)
-		fAct []float64
+		u0  = take(n)
+		s   = take(m)
+		z   = take(n)
+		g   = take(n)
+		ep  = take(n)
+		d   = take(n)
+		rd  = take(n) // dual direction, one entry per active constraint
+		tmp = take(n)
+		lam = take(n)[:0] // multipliers of the active constraints
+		nrm = take(n * n) // active normals eᵢ, n per constraint
+		qr  = take(n * n) // triangular factor of the active normals
+		act = make([]int, 0, n)
+		inA = make([]bool, m)
 	)
 	copy(u0, u)
+	// normal writes the unit normal eᵢ of inequality i in z-space into e
+	// and returns fᵢ on the same scale.
+	normal := func(i int, e []float64) (float64, error) {
+		h := fam.row(i, g)
+		forwardSolveT(r, n, stride, g, e)
+		f := h - dot(g, u0)
+		nn := math.Sqrt(dot(e, e))
+		if !(nn > 0) || math.IsInf(nn, 0) {
+			return 0, fmt.Errorf("constrained least squares: inequality %d has no usable normal", i)
+		}
+		for k := range e {
+			e[k] /= nn
+		}
+		return f / nn, nil
+	}
+	if k := len(hint); k > 0 && k <= n && warmStart(hint, m, n, nrm, qr, lam[:k], tmp, normal) {
+		act = append(act, hint...)
+		lam = lam[:k]
+		for _, i := range hint {
+			inA[i] = true
+		}
+		for j := range k {
+			for i := range n {
+				z[i] += lam[j] * nrm[j*n+i]
+			}
+		}
+		backSolve(r, n, stride, z, tmp)
+		for i := range u {
+			u[i] = u0[i] + tmp[i]
+		}
+	}
 	for iter := 0; ; iter++ {
 		if iter > 2*m+4*n {
-			return errors.New("constrained least squares: active-set method did not terminate")
+			return nil, errors.New("constrained least squares: active-set method did not terminate")
 		}
 		fam.slacks(u, s)
 		p, worst := -1, -tol
 		for i, v := range s {
 			if math.IsNaN(v) {
-				return errors.New("constrained least squares: NaN in the constraints")
+				return nil, errors.New("constrained least squares: NaN in the constraints")
 			}
 			if v < worst && !inA[i] {
 				p, worst = i, v
 			}
 		}
 		if p < 0 {
-			return nil
+			return append([]int(nil), act...), nil
 		}
 		// Normal and right-hand side of the new constraint in z-space.
-		hp := fam.row(p, g)
-		forwardSolveT(r, n, stride, g, ep)
-		fp := hp - dot(g, u0)
-		nn := math.Sqrt(dot(ep, ep))
-		if !(nn > 0) || math.IsInf(nn, 0) {
-			return fmt.Errorf("constrained least squares: inequality %d has no usable normal", p)
+		fp, err := normal(p, ep)
+		if err != nil {
+			return nil, err
 		}
-		for i := range ep {
-			ep[i] /= nn
-		}
-		fp /= nn
 		lp := 0.0
 		for step := 0; ; step++ {
 			if step > 2*n+2 {
-				return errors.New("constrained least squares: no progress adding an inequality")
+				return nil, errors.New("constrained least squares: no progress adding an inequality")
 			}
 			k := len(act)
 			if err := projectOut(nrm[:k*n], qr, n, k, ep, rd[:k], d, tmp); err != nil {
-				return err
+				return nil, err
 			}
 			// Partial step: the first active multiplier to reach zero.
 			t1, kb := math.Inf(1), -1
@@ -204,12 +233,14 @@ func lsi(r []float64, n, stride int, c []float64, fam ineqFamily, tol float64, u
 			}
 			// Full step: makes the new constraint active.
 			t2 := math.Inf(1)
-			if dd := dot(d, ep); dd > 1e-20 {
+			// d is numerically zero (|d| ≤ 1e-9 |e|) when the new normal lies
+			// in the span of the active ones; then only the dual step exists.
+			if dd := dot(d, ep); dd > 1e-18 && k < n {
 				t2 = -(dot(ep, z) - fp) / dd
 			}
 			t := math.Min(t1, t2)
 			if math.IsInf(t, 1) {
-				return errors.New("constrained least squares: inequality constraints are infeasible")
+				return nil, errors.New("constrained least squares: inequality constraints are infeasible")
 			}
 			if !math.IsInf(t2, 1) {
 				for i := range z {
@@ -224,7 +255,6 @@ func lsi(r []float64, n, stride int, c []float64, fam ineqFamily, tol float64, u
 				act = append(act, p)
 				copy(nrm[k*n:(k+1)*n], ep)
 				lam = append(lam, lp)
-				fAct = append(fAct, fp)
 				inA[p] = true
 				break
 			}
@@ -232,7 +262,6 @@ func lsi(r []float64, n, stride int, c []float64, fam ineqFamily, tol float64, u
 			inA[act[kb]] = false
 			act = append(act[:kb], act[kb+1:]...)
 			lam = append(lam[:kb], lam[kb+1:]...)
-			fAct = append(fAct[:kb], fAct[kb+1:]...)
 			copy(nrm[kb*n:], nrm[(kb+1)*n:k*n])
 		}
 		backSolve(r, n, stride, z, tmp)
@@ -240,6 +269,50 @@ func lsi(r []float64, n, stride int, c []float64, fam ineqFamily, tol float64, u
 			u[i] = u0[i] + tmp[i]
 		}
 	}
+}
+
+// warmStart tries the active set hint (distinct indices below m, at most n):
+// it writes the unit normals into nrm and the multipliers y of the
+// equality-constrained optimum min ‖z‖ subject to E_A z = f_A (z = E_Aᵀy,
+// RᵀR y = f_A with E_Aᵀ = QR) into lam, and reports whether they are all
+// non-negative with independent normals, i.e. whether the set is a valid
+// start of the dual method.
+func warmStart(hint []int, m, n int, nrm, qr, lam, tmp []float64, normal func(int, []float64) (float64, error)) bool {
+	k := len(hint)
+	var f [16]float64
+	for j, i := range hint {
+		if i < 0 || i >= m {
+			return false
+		}
+		for _, i2 := range hint[:j] {
+			if i2 == i {
+				return false
+			}
+		}
+		fj, err := normal(i, nrm[j*n:(j+1)*n])
+		if err != nil {
+			return false
+		}
+		f[j] = fj
+	}
+	a := qr[:n*k]
+	for c := range k {
+		for i := range n {
+			a[i*k+c] = nrm[c*n+i]
+		}
+	}
+	householderQR(a, n, k, tmp[:n])
+	if !triRank(a, k, k, 1e-12) {
+		return false
+	}
+	forwardSolveT(a, k, k, f[:k], tmp[:k])
+	backSolve(a, k, k, tmp[:k], lam)
+	for _, v := range lam {
+		if !(v >= 0) {
+			return false
+		}
+	}
+	return true
 }
 
 // projectOut splits the unit vector e into its component d orthogonal to the

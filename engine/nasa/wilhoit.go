@@ -1,9 +1,11 @@
 package nasa
 
 import (
+	"cmp"
 	"errors"
 	"fmt"
 	"math"
+	"slices"
 )
 
 // Wilhoit is the heat-capacity form of R. C. Wilhoit (in: Thermodynamics
@@ -127,7 +129,8 @@ func ClassicalLimits(nAtoms int, linear bool, nRotors int) (cp0, cpInf float64) 
 // sum of squared relative residuals ((Cp_fit − Cp)/Cp)²: A0…A3 by linear least
 // squares for each trial B, constrained so that Cp rises monotonically from
 // cp0 to cpInf, and B (30 K to 30 000 K) by a logarithmic grid search refined
-// by golden-section search (25 grid points, 25 golden steps). When no B gives
+// by Brent's method (25 grid points, then to about 1e-4 in ln B; see
+// fitWilhoitTerms). When no B gives
 // a monotone shape with four A terms, fewer terms are used (with none, Cp =
 // cp0 + (cpInf − cp0) y² is always monotone). At most d−1 A terms are fitted,
 // d the number of distinct temperatures, so one point already determines a
@@ -185,13 +188,24 @@ func distinct(x []float64) int {
 type wilhoitWork struct {
 	a, b, colScale []float64
 	fam            wilhoitIneq
+	// active is the active set of the last constrained solve, the warm
+	// start of the next (neighbouring B, same number of terms).
+	active []int
 }
 
 func newWilhoitWork(nPts int) *wilhoitWork {
 	return &wilhoitWork{a: make([]float64, nPts*4), b: make([]float64, nPts), colScale: make([]float64, 4)}
 }
 
-// fitWilhoitTerms searches B for the best monotone fit with nA free A terms.
+// fitWilhoitTerms searches B for the best monotone fit with nA free A terms:
+// the best of 25 logarithmically spaced B from 30 K to 30 000 K, refined by
+// Brent's minimisation between the grid neighbours of that point.
+//
+// On the grid the unconstrained residual at each B, a lower bound of the
+// constrained one, is computed first (one small QR); the full fits are then
+// done in increasing order of that bound and stop as soon as the bound
+// reaches the best sum found, which gives the same grid minimum as fitting
+// every B.
 func fitWilhoitTerms(T, Cp []float64, cp0, cpInf float64, nA int, ws *wilhoitWork) (Wilhoit, bool) {
 	const (
 		bMin, bMax = 30.0, 30000.0
@@ -199,6 +213,7 @@ func fitWilhoitTerms(T, Cp []float64, cp0, cpInf float64, nA int, ws *wilhoitWor
 	)
 	best := Wilhoit{}
 	bestSSE := math.Inf(1)
+	ws.active = nil
 	eval := func(lnB float64) float64 {
 		w, sse, ok := wilhoitAtB(T, Cp, cp0, cpInf, math.Exp(lnB), nA, ws)
 		if !ok {
@@ -210,10 +225,41 @@ func fitWilhoitTerms(T, Cp []float64, cp0, cpInf float64, nA int, ws *wilhoitWor
 		return sse
 	}
 	step := math.Log(bMax/bMin) / (nGrid - 1)
-	bestIdx := -1
+	lnB := func(i int) float64 { return math.Log(bMin) + float64(i)*step }
+	var (
+		order [nGrid]int
+		bound [nGrid]float64
+	)
 	for i := range nGrid {
+		order[i] = i
+		bound[i] = math.Inf(1)
+		if nA == 0 {
+			bound[i] = 0
+		} else if lb, ok := ws.reduce(T, Cp, cp0, cpInf, math.Exp(lnB(i)), nA); ok {
+			bound[i] = lb
+		}
+	}
+	slices.SortStableFunc(order[:], func(i, j int) int { return cmp.Compare(bound[i], bound[j]) })
+	bestIdx := -1
+	var (
+		acts [nGrid][]int // active sets found, the warm start of neighbours
+		done [nGrid]bool
+	)
+	for _, i := range order {
+		if math.IsInf(bound[i], 1) || bound[i] >= bestSSE {
+			break
+		}
+		ws.active = nil
+		for dist := 1; dist < nGrid && ws.active == nil; dist++ {
+			if j := i - dist; j >= 0 && done[j] {
+				ws.active = acts[j]
+			} else if j := i + dist; j < nGrid && done[j] {
+				ws.active = acts[j]
+			}
+		}
 		before := bestSSE
-		eval(math.Log(bMin) + float64(i)*step)
+		eval(lnB(i))
+		acts[i], done[i] = ws.active, true
 		if bestSSE < before {
 			bestIdx = i
 		}
@@ -221,24 +267,87 @@ func fitWilhoitTerms(T, Cp []float64, cp0, cpInf float64, nA int, ws *wilhoitWor
 	if bestIdx < 0 {
 		return Wilhoit{}, false
 	}
-	// Golden-section refinement between the neighbours of the best grid point.
-	lo := math.Log(bMin) + float64(max(bestIdx-1, 0))*step
-	hi := math.Log(bMin) + float64(min(bestIdx+1, nGrid-1))*step
-	g := (math.Sqrt(5) - 1) / 2
-	x1, x2 := hi-g*(hi-lo), lo+g*(hi-lo)
-	f1, f2 := eval(x1), eval(x2)
-	for range 25 {
-		if f1 <= f2 {
-			hi, x2, f2 = x2, x1, f1
-			x1 = hi - g*(hi-lo)
-			f1 = eval(x1)
+	lo := lnB(max(bestIdx-1, 0))
+	hi := lnB(min(bestIdx+1, nGrid-1))
+	ws.active = acts[bestIdx]
+	brentMin(eval, lo, hi, 1e-4, 30)
+	return best, true
+}
+
+// brentMin looks for a minimum of f on (a, b) by Brent's method, golden-
+// section steps combined with parabolic interpolation (R. P. Brent,
+// Algorithms for Minimization without Derivatives, 1973, ch. 5), until the
+// bracket is about 4·tol wide or after maxEval evaluations, and returns the
+// best point evaluated. f may return +Inf (no usable value); parabolic steps
+// are then skipped.
+func brentMin(f func(float64) float64, a, b, tol float64, maxEval int) (float64, float64) {
+	const cGold = 0.3819660112501051 // (3 − √5)/2
+	x := a + cGold*(b-a)
+	w, v := x, x
+	fx := f(x)
+	fw, fv := fx, fx
+	d, e := 0.0, 0.0
+	for range maxEval - 1 {
+		m := 0.5 * (a + b)
+		tol1 := 1e-10*math.Abs(x) + tol
+		tol2 := 2 * tol1
+		if math.Abs(x-m) <= tol2-0.5*(b-a) {
+			break
+		}
+		golden := true
+		if math.Abs(e) > tol1 && !math.IsInf(fx, 0) && !math.IsInf(fw, 0) && !math.IsInf(fv, 0) {
+			r := (x - w) * (fx - fv)
+			q := (x - v) * (fx - fw)
+			p := (x-v)*q - (x-w)*r
+			q = 2 * (q - r)
+			if q > 0 {
+				p = -p
+			} else {
+				q = -q
+			}
+			if math.Abs(p) < math.Abs(0.5*q*e) && p > q*(a-x) && p < q*(b-x) {
+				e = d
+				d = p / q
+				if u := x + d; u-a < tol2 || b-u < tol2 {
+					d = math.Copysign(tol1, m-x)
+				}
+				golden = false
+			}
+		}
+		if golden {
+			if x < m {
+				e = b - x
+			} else {
+				e = a - x
+			}
+			d = cGold * e
+		}
+		u := x + d
+		if math.Abs(d) < tol1 {
+			u = x + math.Copysign(tol1, d)
+		}
+		fu := f(u)
+		if fu <= fx {
+			if u < x {
+				b = x
+			} else {
+				a = x
+			}
+			v, fv, w, fw, x, fx = w, fw, x, fx, u, fu
 		} else {
-			lo, x1, f1 = x1, x2, f2
-			x2 = lo + g*(hi-lo)
-			f2 = eval(x2)
+			if u < x {
+				a = u
+			} else {
+				b = u
+			}
+			if fu <= fw || w == x {
+				v, fv, w, fw = w, fw, u, fu
+			} else if fu <= fv || v == x || v == w {
+				v, fv = u, fu
+			}
 		}
 	}
-	return best, true
+	return x, fx
 }
 
 // wilhoitGrid is the number of intervals of the y grid on which FitWilhoit
@@ -295,42 +404,13 @@ func qPoly(a []float64, nA int) [5]float64 {
 // is the constrained problem solved (lsi).
 func wilhoitAtB(T, Cp []float64, cp0, cpInf, B float64, nA int, ws *wilhoitWork) (Wilhoit, float64, bool) {
 	w := Wilhoit{Cp0: cp0, CpInf: cpInf, B: B}
-	d := cpInf - cp0
 	if nA > 0 {
-		m := len(T)
-		a, b, cs := ws.a[:m*nA], ws.b[:m], ws.colScale[:nA]
-		clear(cs)
-		for i := range T {
-			y := T[i] / (T[i] + B)
-			base := d * y * y * (y - 1) / Cp[i]
-			yk := 1.0
-			for k := range nA {
-				v := base * yk
-				a[i*nA+k] = v
-				cs[k] += v * v
-				yk *= y
-			}
-			b[i] = (Cp[i] - cp0 - d*y*y) / Cp[i]
-		}
-		// Scale the columns to unit length: the rank test then measures
-		// collinearity rather than the size of yᵏ.
-		for k := range nA {
-			if !(cs[k] > 0) || math.IsInf(cs[k], 0) {
-				return w, 0, false
-			}
-			cs[k] = 1 / math.Sqrt(cs[k])
-		}
-		for i := range m {
-			for k := range nA {
-				a[i*nA+k] *= cs[k]
-			}
-		}
-		householderQR(a, m, nA, b)
-		if !triRank(a, nA, nA, 1e-10) {
+		if _, ok := ws.reduce(T, Cp, cp0, cpInf, B, nA); !ok {
 			return w, 0, false
 		}
+		a, b, cs := ws.a[:nA*nA], ws.b[:nA], ws.colScale[:nA]
 		x := w.A[:nA]
-		backSolve(a, nA, nA, b[:nA], x)
+		backSolve(a, nA, nA, b, x)
 		for k := range nA {
 			x[k] *= cs[k]
 		}
@@ -339,9 +419,11 @@ func wilhoitAtB(T, Cp []float64, cp0, cpInf, B float64, nA int, ws *wilhoitWork)
 			ws.fam = wilhoitIneq{nA: nA}
 			fam := scaledFamily{inner: &ws.fam, scale: cs}
 			var v [4]float64
-			if err := lsi(a, nA, nA, b[:nA], &fam, 1e-8, v[:nA]); err != nil {
+			act, err := lsi(a, nA, nA, b, &fam, 1e-8, v[:nA], ws.active)
+			if err != nil {
 				return w, 0, false
 			}
+			ws.active = act
 			w.A = [4]float64{}
 			for k := range nA {
 				w.A[k] = v[k] * cs[k]
@@ -360,6 +442,55 @@ func wilhoitAtB(T, Cp []float64, cp0, cpInf, B float64, nA int, ws *wilhoitWork)
 		return w, 0, false
 	}
 	return w, sse, true
+}
+
+// reduce sets up the linear least-squares problem for A0…A(nA−1) at B
+// (nA ≥ 1): row i is the relative residual (Cp_fit − Cpᵢ)/Cpᵢ, linear in A,
+// with columns scaled to unit length (ws.colScale holds the factors), and
+// reduces it by Householder QR, leaving R in ws.a (stride nA) and Qᵀb in
+// ws.b. It returns the residual sum of squares of the unconstrained optimum,
+// a lower bound of the sum wilhoitAtB reports at this B (constraints can only
+// raise it), and false when the A terms are not determined (see wilhoitAtB).
+func (ws *wilhoitWork) reduce(T, Cp []float64, cp0, cpInf, B float64, nA int) (float64, bool) {
+	d := cpInf - cp0
+	m := len(T)
+	a, b, cs := ws.a[:m*nA], ws.b[:m], ws.colScale[:nA]
+	clear(cs)
+	for i := range T {
+		y := T[i] / (T[i] + B)
+		base := d * y * y * (y - 1) / Cp[i]
+		yk := 1.0
+		for k := range nA {
+			v := base * yk
+			a[i*nA+k] = v
+			cs[k] += v * v
+			yk *= y
+		}
+		b[i] = (Cp[i] - cp0 - d*y*y) / Cp[i]
+	}
+	// Scale the columns to unit length: the rank test then measures
+	// collinearity rather than the size of yᵏ.
+	for k := range nA {
+		if !(cs[k] > 0) || math.IsInf(cs[k], 0) {
+			return 0, false
+		}
+		cs[k] = 1 / math.Sqrt(cs[k])
+	}
+	for i := range m {
+		for k := range nA {
+			a[i*nA+k] *= cs[k]
+		}
+	}
+	householderQR(a, m, nA, b)
+	// R is the upper triangle of the first nA rows (stride nA): contiguous.
+	if !triRank(a, nA, nA, 1e-10) {
+		return 0, false
+	}
+	rss := 0.0
+	for _, v := range b[nA:] {
+		rss += v * v
+	}
+	return rss, !math.IsNaN(rss)
 }
 
 // scaledFamily presents the inequalities of inner in scaled unknowns
@@ -418,13 +549,23 @@ func (w Wilhoit) exactlyMonotone(nA int) bool {
 // between the points where FitWilhoit imposes monotonicity.
 func (w Wilhoit) monotone() bool {
 	const n = 400
+	// shape(y) = y²[1 + (y−1)ΣAᵢyⁱ] as Σ cₖ yᵏ (k ≤ 6), evaluated by Horner.
+	var c [7]float64
+	c[2] = 1
+	for i, a := range w.A {
+		c[i+3] += a
+		c[i+2] -= a
+	}
 	peak := 0.0
 	for i := 1; i <= n; i++ {
-		s := w.shape(float64(i) / n)
-		if s < peak-1e-3 || math.IsNaN(s) {
+		y := float64(i) / n
+		s := y * y * (c[2] + y*(c[3]+y*(c[4]+y*(c[5]+y*c[6]))))
+		if !(s >= peak-1e-3) { // also false for NaN
 			return false
 		}
-		peak = math.Max(peak, s)
+		if s > peak {
+			peak = s
+		}
 	}
 	return true
 }
