@@ -11,7 +11,7 @@ import (
 const (
 	DefaultCollisionTMin = 300.0  // K
 	DefaultCollisionTMax = 2500.0 // K
-	CollisionGridPoints  = 50     // temperatures scanned, log-spaced over [TMin, TMax]
+	CollisionGridPoints  = 20     // temperatures scanned, log-spaced over [TMin, TMax] (adjacent points 12 % apart: k(T)/limit(T) of an Arrhenius rate is smooth and has at most one maximum in between)
 
 	// BathGasMass (amu) and BathGasHeavyAtoms describe the collision
 	// partner assumed for a third body M: N2, 2 × 14.0067 (IUPAC standard
