@@ -1,6 +1,6 @@
 package molecule
 
-import "sort"
+import "slices"
 
 // pauling holds Pauling electronegativities used to decide whether an
 // exocyclic double bond takes the ring atom's π electron. Source: Pauling
@@ -33,61 +33,54 @@ func (m *Molecule) perceive() {
 
 // ringSystems unites SSSR rings that share a bond (two or more atoms): fused
 // and bridged rings form one system; spiro rings (one shared atom) do not.
-// Each system is a sorted atom list; systems are ordered by first atom.
+// Each system is a sorted atom list; systems are in lexicographic order
+// (by first atom, spiro partners sharing it by the atoms that follow).
 func ringSystems(n int, rings [][]int) [][]int {
+	if len(rings) == 0 {
+		return nil
+	}
 	parent := make([]int, len(rings))
 	for i := range parent {
 		parent[i] = i
-	}
-	var find func(int) int
-	find = func(x int) int {
-		for parent[x] != x {
-			parent[x] = parent[parent[x]]
-			x = parent[x]
-		}
-		return x
-	}
-	member := make([][]int, n) // atom -> rings
-	for r, ring := range rings {
-		for _, a := range ring {
-			member[a] = append(member[a], r)
-		}
 	}
 	for r1 := range rings {
 		for r2 := r1 + 1; r2 < len(rings); r2++ {
 			shared := 0
 			for _, a := range rings[r1] {
-				for _, b := range rings[r2] {
-					if a == b {
-						shared++
-					}
+				if slices.Contains(rings[r2], a) {
+					shared++
 				}
 			}
 			if shared >= 2 {
-				parent[find(r1)] = find(r2)
+				union(parent, r1, r2)
 			}
 		}
 	}
-	groups := map[int]map[int]bool{}
-	for r, ring := range rings {
-		g := find(r)
-		if groups[g] == nil {
-			groups[g] = map[int]bool{}
-		}
-		for _, a := range ring {
-			groups[g][a] = true
-		}
-	}
+	in := make([]bool, n)
 	var out [][]int
-	for _, set := range groups {
-		var list []int
-		for a := range set {
-			list = append(list, a)
+	for r := range rings {
+		if find(parent, r) != r {
+			continue
 		}
-		sort.Ints(list)
+		var list []int
+		for r2, ring := range rings {
+			if find(parent, r2) != r {
+				continue
+			}
+			for _, a := range ring {
+				if !in[a] {
+					in[a] = true
+					list = append(list, a)
+				}
+			}
+		}
+		for _, a := range list {
+			in[a] = false
+		}
+		slices.Sort(list)
 		out = append(out, list)
 	}
-	sort.Slice(out, func(i, j int) bool { return out[i][0] < out[j][0] })
+	slices.SortFunc(out, slices.Compare)
 	return out
 }
 
@@ -199,21 +192,28 @@ func (m *Molecule) perceiveAromaticity(inRing []bool) {
 	for k, c := range good {
 		cb[k] = bondsOf(c)
 	}
+	stamp := make([]int, n) // stamp[a] == tick: atom a counted in this union
+	tick := 0
+	var atoms []int
 	mark := func(set []int) {
-		atoms := map[int]bool{}
+		tick++
+		atoms = atoms[:0]
 		for _, k := range set {
 			for _, a := range good[k] {
-				atoms[a] = true
+				if stamp[a] != tick {
+					stamp[a] = tick
+					atoms = append(atoms, a)
+				}
 			}
 		}
 		e := 0
-		for a := range atoms {
+		for _, a := range atoms {
 			e += elec[a]
 		}
 		if e%4 != 2 {
 			return
 		}
-		for a := range atoms {
+		for _, a := range atoms {
 			m.Atoms[a].Aromatic = true
 		}
 		for _, k := range set {

@@ -3,7 +3,6 @@ package molecule
 import (
 	"math/big"
 	"slices"
-	"sort"
 	"strings"
 )
 
@@ -20,6 +19,9 @@ type cgraph struct {
 	// scratch buffers reused by refine (a cgraph serves one search)
 	keys      []uint64
 	idx, next []int
+	cnt       []int
+	rep, size []int // scratch of traceInto
+	tbuf      []int // scratch trace for comparisons
 	n         int
 	nbr       [][]int
 	bt        [][]int
@@ -36,36 +38,40 @@ func bondCode(b Bond) int {
 }
 
 // cgraphOf builds the coloured graph of the atoms listed (a union of
-// connected components); vertex k of the graph is atom atoms[k].
-func (m *Molecule) cgraphOf(atoms []int) *cgraph {
+// connected components); vertex k of the graph is atom atoms[k]. local is
+// scratch of length len(m.Atoms).
+func (m *Molecule) cgraphOf(atoms []int, local []int) *cgraph {
 	n := len(atoms)
-	local := make(map[int]int, n)
 	for k, a := range atoms {
 		local[a] = k
 	}
-	g := &cgraph{n: n, nbr: make([][]int, n), bt: make([][]int, n)}
-	for k, i := range atoms {
-		for _, b := range m.Adj[i] {
-			g.nbr[k] = append(g.nbr[k], local[m.Other(b, i)])
-			g.bt[k] = append(g.bt[k], bondCode(m.Bonds[b]))
-		}
+	deg := 0
+	for _, i := range atoms {
+		deg += len(m.Adj[i])
 	}
-	key := func(i int) [7]int {
-		a := m.Atoms[i]
+	g := &cgraph{n: n, nbr: make([][]int, n), bt: make([][]int, n)}
+	nb, bt := make([]int, 0, deg), make([]int, 0, deg)
+	for k, i := range atoms {
+		s := len(nb)
+		for _, b := range m.Adj[i] {
+			nb = append(nb, local[m.Other(b, i)])
+			bt = append(bt, bondCode(m.Bonds[b]))
+		}
+		g.nbr[k], g.bt[k] = nb[s:len(nb):len(nb)], bt[s:len(bt):len(bt)]
+	}
+	keys := make([][7]int, n)
+	idx := make([]int, n)
+	for k := range idx {
+		a := m.Atoms[atoms[k]]
 		e, _ := elementIndex(a.Element)
 		ar := 0
 		if a.Aromatic {
 			ar = 1
 		}
-		return [7]int{e.Z, a.Isotope, a.Charge, a.HCount, a.Radical, ar, len(m.Adj[i])}
-	}
-	keys := make([][7]int, n)
-	idx := make([]int, n)
-	for k := range idx {
-		keys[k] = key(atoms[k])
+		keys[k] = [7]int{e.Z, a.Isotope, a.Charge, a.HCount, a.Radical, ar, len(m.Adj[atoms[k]])}
 		idx[k] = k
 	}
-	sort.Slice(idx, func(x, y int) bool { return slices.Compare(keys[idx[x]][:], keys[idx[y]][:]) < 0 })
+	slices.SortFunc(idx, func(x, y int) int { return slices.Compare(keys[x][:], keys[y][:]) })
 	g.cell0 = make([]int, n)
 	for k, a := range idx {
 		if k > 0 && keys[a] == keys[idx[k-1]] {
@@ -75,16 +81,6 @@ func (m *Molecule) cgraphOf(atoms []int) *cgraph {
 		}
 	}
 	return g
-}
-
-// nbrKey is the sorted list of (neighbour rank, bond code) of atom a.
-func (g *cgraph) nbrKey(rank []int, a int, buf []int) []int {
-	buf = buf[:0]
-	for k, w := range g.nbr[a] {
-		buf = append(buf, rank[w]*8+g.bt[a][k])
-	}
-	slices.Sort(buf)
-	return buf
 }
 
 // mix is a 64-bit finaliser (splitmix64) used to hash neighbour codes.
@@ -105,62 +101,111 @@ func mix(x uint64) uint64 {
 // traces).
 func (g *cgraph) refine(rank []int) []int {
 	n := g.n
-	cur := slices.Clone(rank)
-	cells := countCells(cur)
+	out := make([]int, n)
+	if n == 0 {
+		return out
+	}
 	if g.keys == nil {
 		g.keys, g.idx, g.next = make([]uint64, n), make([]int, n), make([]int, n)
+		g.cnt = make([]int, n+1)
 	}
-	keys, idx, next := g.keys, g.idx, g.next
-	defer func() { g.next = next }()
+	keys, order, cnt := g.keys, g.idx, g.cnt
+	cur, next := out, g.next
+	copy(cur, rank)
+	// order lists the atoms by rank (cells are the runs of equal rank);
+	// ranks are cell starts, so a counting sort places them.
+	clear(cnt)
+	for _, r := range cur {
+		cnt[r+1]++
+	}
+	for r := 1; r <= n; r++ {
+		cnt[r] += cnt[r-1]
+	}
+	for a, r := range cur {
+		order[cnt[r]] = a
+		cnt[r]++
+	}
+	cells := 0
+	for k := 0; k < n; k++ {
+		if k == 0 || cur[order[k]] != cur[order[k-1]] {
+			cells++
+		}
+	}
+	// Each round splits every cell by the neighbour hash of its members,
+	// sub-cells ordered by hash; sorting cell by cell is the same as sorting
+	// all atoms by (rank, hash), and singletons need no work.
 	for cells < n {
-		for a := 0; a < n; a++ {
-			var h uint64
-			for k, w := range g.nbr[a] {
-				h += mix(uint64(cur[w]*8 + g.bt[a][k]))
+		c := 0
+		for s := 0; s < n; {
+			e := s + 1
+			for e < n && cur[order[e]] == cur[order[s]] {
+				e++
 			}
-			keys[a] = h
-			idx[a] = a
-		}
-		cmp := func(x, y int) int {
-			if cur[x] != cur[y] {
-				return cur[x] - cur[y]
+			if e-s == 1 {
+				next[order[s]] = s
+				c++
+				s = e
+				continue
 			}
-			if keys[x] < keys[y] {
-				return -1
+			seg := order[s:e]
+			for _, a := range seg {
+				var h uint64
+				bt := g.bt[a]
+				for k, w := range g.nbr[a] {
+					h += mix(uint64(cur[w]*8 + bt[k]))
+				}
+				keys[a] = h
 			}
-			if keys[x] > keys[y] {
-				return 1
-			}
-			return 0
-		}
-		slices.SortFunc(idx, cmp)
-		for k, a := range idx {
-			if k > 0 && cmp(idx[k-1], a) == 0 {
-				next[a] = next[idx[k-1]]
+			if len(seg) <= 12 {
+				for i := 1; i < len(seg); i++ {
+					for j := i; j > 0 && keys[seg[j]] < keys[seg[j-1]]; j-- {
+						seg[j], seg[j-1] = seg[j-1], seg[j]
+					}
+				}
 			} else {
-				next[a] = k
+				slices.SortFunc(seg, func(x, y int) int {
+					if keys[x] < keys[y] {
+						return -1
+					}
+					if keys[x] > keys[y] {
+						return 1
+					}
+					return 0
+				})
 			}
+			for k, a := range seg {
+				if k > 0 && keys[a] == keys[seg[k-1]] {
+					next[a] = next[seg[k-1]]
+				} else {
+					next[a] = s + k
+					c++
+				}
+			}
+			s = e
 		}
 		cur, next = next, cur
-		c := countCells(cur)
 		if c == cells {
 			break
 		}
 		cells = c
 	}
-	return cur
+	if &cur[0] != &out[0] {
+		copy(out, cur)
+		g.next = cur
+	}
+	return out
 }
 
-func countCells(rank []int) int {
-	seen := make([]bool, len(rank))
-	c := 0
+// discrete reports whether every cell of rank is a singleton.
+func discrete(rank []int, seen []bool) bool {
+	clear(seen)
 	for _, r := range rank {
-		if !seen[r] {
-			seen[r] = true
-			c++
+		if seen[r] {
+			return false
 		}
+		seen[r] = true
 	}
-	return c
+	return true
 }
 
 func individualize(rank []int, v int) []int {
@@ -184,7 +229,7 @@ func targetCell(rank []int) []int {
 	}
 	for r := 0; r < n; r++ {
 		if size[r] > 1 {
-			var out []int
+			out := make([]int, 0, size[r])
 			for a, x := range rank {
 				if x == r {
 					out = append(out, a)
@@ -201,11 +246,23 @@ func targetCell(rank []int) []int {
 // bond code) list of a member. For a discrete partition it is the labelled
 // graph itself (the certificate).
 func (g *cgraph) trace(rank []int) []int {
+	deg := 0
+	for _, nb := range g.nbr {
+		deg += len(nb)
+	}
+	return g.traceInto(rank, make([]int, 0, 3*g.n+deg))
+}
+
+// traceInto appends the trace of rank to dst[:0] (see trace).
+func (g *cgraph) traceInto(rank []int, dst []int) []int {
 	n := g.n
-	rep := make([]int, n)
-	size := make([]int, n)
+	if len(g.rep) < n {
+		g.rep, g.size = make([]int, n), make([]int, n)
+	}
+	rep, size := g.rep[:n], g.size[:n]
 	for i := range rep {
 		rep[i] = -1
+		size[i] = 0
 	}
 	for a, r := range rank {
 		if rep[r] < 0 {
@@ -213,15 +270,19 @@ func (g *cgraph) trace(rank []int) []int {
 		}
 		size[r]++
 	}
-	var out []int
-	var buf []int
+	out := dst[:0]
 	for r := 0; r < n; r++ {
 		if rep[r] < 0 {
 			continue
 		}
 		out = append(out, -1, r, size[r])
-		buf = g.nbrKey(rank, rep[r], buf)
-		out = append(out, buf...)
+		s := len(out)
+		a := rep[r]
+		bt := g.bt[a]
+		for k, w := range g.nbr[a] {
+			out = append(out, rank[w]*8+bt[k])
+		}
+		slices.Sort(out[s:])
 	}
 	return out
 }
@@ -230,6 +291,7 @@ func (g *cgraph) trace(rank []int) []int {
 // budget; gens collects automorphisms (atom permutations) found so far.
 type search struct {
 	g         *cgraph
+	root      []int // refined initial partition
 	steps     int
 	budget    int
 	exhausted bool
@@ -340,7 +402,7 @@ func (s *search) addGen(gm []int) {
 // ran out.
 func (s *search) automorphisms() (orbitSizes []int, exact bool) {
 	g := s.g
-	node := g.refine(g.cell0)
+	node := s.root
 	nodes := [][]int{node}
 	traces := [][]int{g.trace(node)}
 	var cells [][]int
@@ -414,7 +476,11 @@ func (s *search) automorphisms() (orbitSizes []int, exact bool) {
 // certificate equals the first leaf's, pruning nodes whose trace differs from
 // the first path's trace at the same depth.
 func (s *search) findEquivalent(node []int, d int, traces [][]int) []int {
-	if d >= len(traces) || !slices.Equal(s.g.trace(node), traces[d]) {
+	if d >= len(traces) {
+		return nil
+	}
+	s.g.tbuf = s.g.traceInto(node, s.g.tbuf)
+	if !slices.Equal(s.g.tbuf, traces[d]) {
 		return nil
 	}
 	t := targetCell(node)
@@ -507,7 +573,7 @@ func (s *search) canonical() []int {
 			explored = append(explored, w)
 		}
 	}
-	dfs(g.refine(g.cell0))
+	dfs(s.root)
 	return best
 }
 
@@ -517,6 +583,8 @@ type symmetryInfo struct {
 	gens   [][]int // generators of the automorphism group (atom permutations)
 	order  *big.Int
 	exact  bool
+	steps  int // largest search work spent on one component
+	comps  int // number of connected components
 }
 
 // components returns the connected components (sorted atom lists).
@@ -556,12 +624,27 @@ func (m *Molecule) symmetry(budget int, withAut bool) symmetryInfo {
 		labels []int // local canonical labels
 		text   string
 	}
-	info := symmetryInfo{labels: make([]int, n), order: big.NewInt(1), exact: true}
+	info := symmetryInfo{labels: make([]int, n), order: big.NewInt(1), exact: true, comps: len(comps)}
 	cis := make([]compInfo, len(comps))
 	per := budget / max(1, len(comps))
+	local := make([]int, n)
+	var seen []bool
 	for c, atoms := range comps {
-		g := m.cgraphOf(atoms)
-		s := &search{g: g, budget: per}
+		g := m.cgraphOf(atoms, local)
+		root := g.refine(g.cell0)
+		if len(seen) < len(atoms) {
+			seen = make([]bool, len(atoms))
+		}
+		if discrete(root, seen[:len(atoms)]) {
+			// Refinement alone told every atom apart: the refined partition
+			// is the only leaf of the search, and the group is trivial.
+			for k, a := range atoms {
+				info.labels[a] = root[k]
+			}
+			cis[c] = compInfo{atoms: atoms, labels: root}
+			continue
+		}
+		s := &search{g: g, budget: per, root: root}
 		var sizes []int
 		exact := true
 		if withAut {
@@ -569,14 +652,16 @@ func (m *Molecule) symmetry(budget int, withAut bool) symmetryInfo {
 		}
 		labels := s.canonical()
 		if labels == nil { // budget ran out before any leaf: use the refined partition order
-			labels = s.g.refine(s.g.cell0)
-			labels = tieBreak(labels)
+			labels = tieBreak(root)
 		}
+		info.steps = max(info.steps, s.steps)
 		if !exact || s.exhausted {
 			info.exact = false
 		}
 		for _, k := range sizes {
-			info.order.Mul(info.order, big.NewInt(int64(k)))
+			if k > 1 {
+				info.order.Mul(info.order, big.NewInt(int64(k)))
+			}
 		}
 		for _, gm := range s.gens {
 			glob := make([]int, n)
@@ -681,6 +766,9 @@ func tieBreak(rank []int) []int {
 // search budget (DefaultSearchWork) runs out, the classes may be finer than
 // the true orbits for exotic cages; ordinary molecules never come near it.
 func (m *Molecule) SymmetryClasses() []int {
+	if d := m.cache(); d != nil {
+		return slices.Clone(d.classes)
+	}
 	info := m.symmetry(DefaultSearchWork, true)
 	return orbitClasses(len(m.Atoms), info.gens, info.labels)
 }
@@ -695,21 +783,22 @@ func orbitClasses(n int, gens [][]int, labels []int) []int {
 			union(parent, a, b)
 		}
 	}
-	minLabel := map[int]int{}
-	for a := 0; a < n; a++ {
-		r := find(parent, a)
-		if l, ok := minLabel[r]; !ok || labels[a] < l {
-			minLabel[r] = labels[a]
+	// byLabel[l] is the atom with canonical label l; walking labels upwards
+	// meets each orbit first at its smallest label.
+	byLabel := make([]int, n)
+	for a, l := range labels {
+		byLabel[l] = a
+	}
+	num := make([]int, n)
+	for i := range num {
+		num[i] = -1
+	}
+	next := 0
+	for _, a := range byLabel {
+		if r := find(parent, a); num[r] < 0 {
+			num[r] = next
+			next++
 		}
-	}
-	roots := make([]int, 0, len(minLabel))
-	for r := range minLabel {
-		roots = append(roots, r)
-	}
-	sort.Slice(roots, func(i, j int) bool { return minLabel[roots[i]] < minLabel[roots[j]] })
-	num := map[int]int{}
-	for k, r := range roots {
-		num[r] = k
 	}
 	out := make([]int, n)
 	for a := range out {
@@ -731,7 +820,15 @@ func orbitClasses(n int, gens [][]int, labels []int) []int {
 // maxSteps partition refinements; exact is false when the budget ran out
 // (the returned number is then a lower bound, 1 at least).
 func (m *Molecule) AutomorphismCount(maxSteps int) (*big.Int, bool) {
-	info := m.symmetry(maxSteps*max(1, len(m.Atoms)), true)
+	budget := maxSteps * max(1, len(m.Atoms))
+	var info symmetryInfo
+	// The search is deterministic: a cached run that stayed within this
+	// budget on every component is exactly the run this budget would give.
+	if d := m.cache(); d != nil && d.info.exact && d.info.steps <= budget/max(1, d.info.comps) {
+		info = d.info
+	} else {
+		info = m.symmetry(budget, true)
+	}
 	n := new(big.Int).Set(info.order)
 	if !info.exact {
 		n.SetInt64(1)

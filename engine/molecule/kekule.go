@@ -305,7 +305,7 @@ func (p *parser) build() *Molecule {
 		single[b.B] = b.Order == 1
 	}
 	remap := make([]int, n)
-	m := &Molecule{SMILES: p.s}
+	m := &Molecule{SMILES: p.s, Atoms: make([]Atom, 0, n), Bonds: make([]Bond, 0, len(p.bonds))}
 	for i := range p.atoms {
 		if !p.foldable(i, deg, nb) || !single[i] {
 			continue
@@ -336,7 +336,22 @@ func (p *parser) build() *Molecule {
 		nbd.A, nbd.B = remap[b.A], remap[b.B]
 		m.Bonds = append(m.Bonds, nbd)
 	}
-	m.Adj = make([][]int, len(m.Atoms))
+	// Adj lists share one backing array (capacity-limited, so an append by a
+	// caller cannot run into the next atom's list).
+	na := len(m.Atoms)
+	m.Adj = make([][]int, na)
+	cnt := make([]int, na+1)
+	for _, b := range m.Bonds {
+		cnt[b.A+1]++
+		cnt[b.B+1]++
+	}
+	for i := 1; i <= na; i++ {
+		cnt[i] += cnt[i-1]
+	}
+	back := make([]int, cnt[na])
+	for i := range m.Adj {
+		m.Adj[i] = back[cnt[i]:cnt[i]:cnt[i+1]]
+	}
 	for k, b := range m.Bonds {
 		m.Adj[b.A] = append(m.Adj[b.A], k)
 		m.Adj[b.B] = append(m.Adj[b.B], k)

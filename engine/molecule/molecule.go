@@ -4,6 +4,11 @@
 // It reads OpenSMILES (see ParseSMILES) and does no I/O.
 package molecule
 
+import (
+	"slices"
+	"sync"
+)
+
 // Atom is one heavy (or explicitly written) atom of the graph. Hydrogens that
 // are implicit in the SMILES are not atoms of the graph: they are counted in
 // HCount. Explicit [H] atoms attached to a heavy atom are folded into HCount of
@@ -36,6 +41,12 @@ type Bond struct {
 }
 
 // Molecule is a molecular graph: possibly several '.'-separated components.
+//
+// A Molecule from ParseSMILES is meant to be read-only: its canonical forms
+// and symmetry classes are computed once, on first use, and then shared by
+// all goroutines. If Atoms or Bonds are changed or replaced afterwards (or a
+// changed copy is made), the cached results no longer match and are
+// recomputed on every call instead.
 type Molecule struct {
 	Atoms []Atom
 	Bonds []Bond
@@ -52,6 +63,47 @@ type Molecule struct {
 	rings   [][]int
 	cycles  [][]int
 	ringSys [][]int
+
+	// derived caches results computed from the graph (nil for a Molecule
+	// not made by ParseSMILES). It is a pointer so that copies of a
+	// Molecule share it; it records the graph it was computed for.
+	derived *derived
+}
+
+// derived holds the graph-dependent results that callers ask for again and
+// again. atoms and bonds are snapshots taken at parse time: the cache serves
+// only a Molecule whose Atoms and Bonds still equal them.
+type derived struct {
+	atoms []Atom
+	bonds []Bond
+
+	once    sync.Once
+	info    symmetryInfo // symmetry(DefaultSearchWork, true)
+	canon   string
+	classes []int
+
+	stereoOnce  sync.Once
+	canonStereo string
+}
+
+// newDerived snapshots m's graph for the cache.
+func newDerived(m *Molecule) *derived {
+	return &derived{atoms: slices.Clone(m.Atoms), bonds: slices.Clone(m.Bonds)}
+}
+
+// cache returns the computed cache of m, or nil when m has none or its
+// graph changed since parsing.
+func (m *Molecule) cache() *derived {
+	d := m.derived
+	if d == nil || !slices.Equal(d.atoms, m.Atoms) || !slices.Equal(d.bonds, m.Bonds) {
+		return nil
+	}
+	d.once.Do(func() {
+		d.info = m.symmetry(DefaultSearchWork, true)
+		d.canon = m.writeSMILES(d.info.labels, false)
+		d.classes = orbitClasses(len(m.Atoms), d.info.gens, d.info.labels)
+	})
+	return d
 }
 
 // Other returns the atom at the other end of bond b from atom i.

@@ -397,3 +397,81 @@ func BenchmarkSymmetry(b *testing.B) {
 		})
 	}
 }
+
+// BenchmarkSmallSpecies measures what reading one typical mechanism species
+// costs: parse (rings, aromaticity) + Canonical + SymmetryClasses.
+func BenchmarkSmallSpecies(b *testing.B) {
+	for _, s := range []string{"CCO", "CC(C)C[CH2]", "c1ccccc1C", "O=CC(C)OO", "C1CCCCC1", "[OH]"} {
+		b.Run(s, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				m, err := ParseSMILES(s)
+				if err != nil {
+					b.Fatal(err)
+				}
+				_ = m.Canonical()
+				_ = m.SymmetryClasses()
+			}
+		})
+	}
+}
+
+// BenchmarkMechanism20k reads 20,000 species SMILES of the sizes typical of
+// a combustion mechanism (cycled from a fixed list, each parsed afresh) and
+// takes Canonical, CanonicalStereo and SymmetryClasses of each; the time per
+// op is for all 20,000.
+func BenchmarkMechanism20k(b *testing.B) {
+	list := []string{"[H]", "[H][H]", "O", "[OH]", "O=O", "[O]O", "OO", "C", "[CH3]", "CC", "C[CH2]", "C=C",
+		"C#C", "CCC", "CC=C", "C[CH]C", "CCCC", "CC(C)C", "CC(C)C[CH2]", "CCCCCCC", "CC(C)CC(C)(C)C", "CCO",
+		"CC=O", "C[C]=O", "O=CC(C)OO", "CCOO", "CCO[O]", "CC(=O)CC", "C1CCCCC1", "C1CCOC1", "c1ccccc1",
+		"c1ccccc1C", "c1ccccc1O", "c1ccc2ccccc2c1", "C=CC=C", "CC(C)(C)O[O]", "COC", "OC=O", "O=C=O", "[C-]#[O+]"}
+	b.ReportAllocs()
+	for b.Loop() {
+		for k := 0; k < 20000; k++ {
+			m, err := ParseSMILES(list[k%len(list)])
+			if err != nil {
+				b.Fatal(err)
+			}
+			_ = m.Canonical()
+			_ = m.CanonicalStereo()
+			_ = m.SymmetryClasses()
+		}
+	}
+}
+
+// BenchmarkSymmetryUncached measures the symmetry search itself (the cached
+// results behind Canonical and SymmetryClasses are bypassed).
+func BenchmarkSymmetryUncached(b *testing.B) {
+	for _, s := range []string{thirtyAtoms, "CC(C)(C)C(C(C)(C)C)(C(C)(C)C)C(C)(C)C", "c1cc2ccc3ccc4ccc5ccc6ccc1c1c2c3c4c5c61"} {
+		m := parse(b, s)
+		b.Run(s, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				_ = m.symmetry(DefaultSearchWork, true)
+			}
+		})
+	}
+}
+
+// TestCacheFollowsChanges checks that a changed copy of a parsed molecule
+// (as a caller building a closed-shell parent does) gets results for its
+// own graph, not the cached ones of the original, and that the original's
+// cache is unaffected.
+func TestCacheFollowsChanges(t *testing.T) {
+	m := parse(t, "CC[CH2]")
+	want := parse(t, "CCC")
+	require.NotEqual(t, want.Canonical(), m.Canonical())
+	p := *m
+	p.Atoms = append([]Atom(nil), m.Atoms...)
+	for i := range p.Atoms {
+		p.Atoms[i].HCount += p.Atoms[i].Radical
+		p.Atoms[i].Radical = 0
+	}
+	assert.Equal(t, want.Canonical(), p.Canonical())
+	assert.Equal(t, want.SymmetryClasses(), p.SymmetryClasses())
+	assert.Equal(t, parse(t, "[CH2]CC").Canonical(), m.Canonical())
+	// repeated calls return equal, independent slices
+	c1 := m.SymmetryClasses()
+	c1[0] = 99
+	assert.NotEqual(t, 99, m.SymmetryClasses()[0])
+}

@@ -133,7 +133,7 @@ func (m *Molecule) findRings(inRing []bool) (sssr, relevant [][]int) {
 
 func (m *Molecule) componentRings(atoms, edges []int, inRing []bool) (sssr, relevant [][]int) {
 	rank := len(edges) - len(atoms) + 1
-	eIdx := make(map[int]int, len(edges))
+	eIdx := make([]int, len(m.Bonds))
 	for k, b := range edges {
 		eIdx[b] = k
 	}
@@ -146,10 +146,15 @@ func (m *Molecule) componentRings(atoms, edges []int, inRing []bool) (sssr, rele
 	for i := range mark {
 		mark[i] = -1
 	}
-	seen := map[string]bool{}
+	var seen map[string]bool
 	var cands []cycleCand
 	queue := make([]int, 0, len(atoms))
 	for _, v := range atoms {
+		if rank == 1 && len(cands) > 0 {
+			// A single cycle: the first atom's candidate is the ring, and
+			// every later atom would only find it again.
+			break
+		}
 		for _, a := range atoms {
 			dist[a] = -1
 		}
@@ -201,11 +206,16 @@ func (m *Molecule) componentRings(atoms, edges []int, inRing []bool) (sssr, rele
 				py = append(py, u)
 				set(parentB[u])
 			}
-			key := bitsKey(bits)
-			if seen[key] {
-				continue
+			if rank > 1 {
+				key := bitsKey(bits)
+				if seen[key] {
+					continue
+				}
+				if seen == nil {
+					seen = map[string]bool{}
+				}
+				seen[key] = true
 			}
-			seen[key] = true
 			cyc := make([]int, 0, len(px)+len(py)+1)
 			cyc = append(cyc, v)
 			for k := len(px) - 1; k >= 0; k-- {

@@ -54,7 +54,9 @@ type parser struct {
 	nbr      [][]int // per atom: neighbours in written order (for chirality)
 	hadPrev  []bool  // per atom: bonded to a preceding atom when written
 	bracketH []int   // per atom: H count written inside the bracket
-	heavy    int
+	// atomBonds[i] lists the bonds at atom i (indices into bonds)
+	atomBonds [][]int
+	heavy     int
 }
 
 // ParseSMILES reads an OpenSMILES string into a Molecule.
@@ -76,7 +78,7 @@ func ParseSMILES(s string) (*Molecule, error) {
 	if s == "" {
 		return nil, errAt(0, "empty SMILES")
 	}
-	p := &parser{s: s}
+	p := newParser(s)
 	if err := p.parse(); err != nil {
 		return nil, err
 	}
@@ -88,7 +90,25 @@ func ParseSMILES(s string) (*Molecule, error) {
 	}
 	m := p.build()
 	m.perceive()
+	m.derived = newDerived(m)
 	return m, nil
+}
+
+// newParser sizes the parser's per-atom and per-bond slices from an upper
+// bound of the atom count (letters in s), so reading does not regrow them.
+func newParser(s string) *parser {
+	n := 0
+	for i := 0; i < len(s); i++ {
+		if c := s[i] | 0x20; c >= 'a' && c <= 'z' {
+			n++
+		}
+	}
+	n = min(n, MaxHeavyAtoms+1)
+	return &parser{s: s,
+		atoms: make([]Atom, 0, n), bonds: make([]Bond, 0, n+4),
+		organic: make([]bool, 0, n), aromIn: make([]bool, 0, n+4),
+		nbr: make([][]int, 0, n), hadPrev: make([]bool, 0, n),
+		bracketH: make([]int, 0, n), atomBonds: make([][]int, 0, n)}
 }
 
 func (p *parser) addAtom(a Atom, organic bool) (int, error) {
@@ -101,6 +121,7 @@ func (p *parser) addAtom(a Atom, organic bool) (int, error) {
 	p.atoms = append(p.atoms, a)
 	p.organic = append(p.organic, organic)
 	p.nbr = append(p.nbr, nil)
+	p.atomBonds = append(p.atomBonds, nil)
 	p.hadPrev = append(p.hadPrev, false)
 	p.bracketH = append(p.bracketH, a.HCount)
 	return len(p.atoms) - 1, nil
@@ -110,7 +131,7 @@ func (p *parser) addBond(a, b int, sym byte, pos int) (int, error) {
 	if a == b {
 		return 0, errAt(pos, "ring bond from an atom to itself")
 	}
-	for k := range p.bonds {
+	for _, k := range p.atomBonds[a] {
 		bd := &p.bonds[k]
 		if (bd.A == a && bd.B == b) || (bd.A == b && bd.B == a) {
 			return 0, errAt(pos, "second bond between the same two atoms")
@@ -126,7 +147,10 @@ func (p *parser) addBond(a, b int, sym byte, pos int) (int, error) {
 	}
 	p.bonds = append(p.bonds, bd)
 	p.aromIn = append(p.aromIn, arom)
-	return len(p.bonds) - 1, nil
+	k := len(p.bonds) - 1
+	p.atomBonds[a] = append(p.atomBonds[a], k)
+	p.atomBonds[b] = append(p.atomBonds[b], k)
+	return k, nil
 }
 
 func isBondSym(c byte) bool {
@@ -139,7 +163,10 @@ func (p *parser) parse() error {
 	var pendSym byte
 	pendPos := -1
 	var branches []branch
-	rings := map[int]*ringOpen{}
+	// rings[num] is the open ring bond numbered num (open = true).
+	var rings [100]ringOpen
+	var ringOpenFlag [100]bool
+	openRings := 0
 	lastOpen := false // previous token was '('
 	i := 0
 	for i < len(s) {
@@ -210,7 +237,8 @@ func (p *parser) parse() error {
 				num = int(c - '0')
 				i++
 			}
-			if r, ok := rings[num]; ok {
+			if ringOpenFlag[num] {
+				r := &rings[num]
 				if r.sym != 0 && pendSym != 0 && !compatibleRingSyms(r.sym, pendSym) {
 					return errAt(pendPos, "ring bond %d written with two different bond symbols", num)
 				}
@@ -229,10 +257,13 @@ func (p *parser) parse() error {
 				}
 				p.nbr[r.atom][r.slot] = prev
 				p.nbr[prev] = append(p.nbr[prev], r.atom)
-				delete(rings, num)
+				ringOpenFlag[num] = false
+				openRings--
 			} else {
 				p.nbr[prev] = append(p.nbr[prev], -2)
-				rings[num] = &ringOpen{atom: prev, sym: pendSym, symPos: pendPos, pos: start, slot: len(p.nbr[prev]) - 1}
+				rings[num] = ringOpen{atom: prev, sym: pendSym, symPos: pendPos, pos: start, slot: len(p.nbr[prev]) - 1}
+				ringOpenFlag[num] = true
+				openRings++
 			}
 			pendSym, pendPos = 0, -1
 			lastOpen = false
@@ -275,10 +306,10 @@ func (p *parser) parse() error {
 	if prev < 0 {
 		return errAt(len(s)-1, "SMILES ends with '.'")
 	}
-	if len(rings) > 0 {
+	if openRings > 0 {
 		first := -1
-		for _, r := range rings {
-			if first < 0 || r.pos < first {
+		for num, r := range rings {
+			if ringOpenFlag[num] && (first < 0 || r.pos < first) {
 				first = r.pos
 			}
 		}
@@ -322,14 +353,43 @@ func (p *parser) readAtom(i int) (Atom, int, bool, error) {
 	case two == "Cl" || two == "Br":
 		return Atom{Element: two, Pos: i, Len: 2}, 2, true, nil
 	case strings.IndexByte("BCNOPSFI", c) >= 0:
-		return Atom{Element: string(c), Pos: i, Len: 1}, 1, true, nil
+		return Atom{Element: upperSymbol(s[i : i+1]), Pos: i, Len: 1}, 1, true, nil
 	case strings.IndexByte("bcnops", c) >= 0:
-		return Atom{Element: strings.ToUpper(string(c)), Aromatic: true, Pos: i, Len: 1}, 1, true, nil
+		return Atom{Element: upperSymbol(s[i : i+1]), Aromatic: true, Pos: i, Len: 1}, 1, true, nil
 	}
 	if c >= 'A' && c <= 'Z' || c >= 'a' && c <= 'z' {
 		return Atom{}, 0, false, errAt(i, "element %q must be written in brackets", string(c))
 	}
 	return Atom{}, 0, false, errAt(i, "invalid character %q", rune(c))
+}
+
+// upperSymbol returns the element symbol for a written (possibly aromatic,
+// lower-case) symbol, as a constant string so atoms do not keep the input
+// alive or allocate.
+func upperSymbol(sym string) string {
+	switch sym {
+	case "B", "b":
+		return "B"
+	case "C", "c":
+		return "C"
+	case "N", "n":
+		return "N"
+	case "O", "o":
+		return "O"
+	case "P", "p":
+		return "P"
+	case "S", "s":
+		return "S"
+	case "F":
+		return "F"
+	case "I":
+		return "I"
+	case "se":
+		return "Se"
+	case "as":
+		return "As"
+	}
+	return strings.ToUpper(sym[:1]) + sym[1:]
 }
 
 func (p *parser) readBracket(start int) (Atom, int, error) {
@@ -389,7 +449,7 @@ func (p *parser) readBracket(start int) (Atom, int, error) {
 		} else {
 			return a, 0, errAt(i, "unknown aromatic element %q", string(c))
 		}
-		a.Element = strings.ToUpper(sym[:1]) + sym[1:]
+		a.Element = upperSymbol(sym)
 		a.Aromatic = true
 		i += len(sym)
 	default:

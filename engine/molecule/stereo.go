@@ -25,11 +25,13 @@ func (m *Molecule) side(b, d int) (up bool, ok bool) {
 // DoubleBondStereo returns the cis/trans configuration of every non-aromatic
 // double bond whose two ends each carry a substituent bond marked / or \
 // (OpenSMILES: F/C=C/F is trans, F/C=C\F is cis). Each entry names one
-// marked substituent per side and whether the two are cis.
+// marked substituent per side and whether the two are cis. Marks on double
+// bonds inside rings of fewer than 8 atoms are ignored: such rings force
+// the configuration (common practice).
 func (m *Molecule) DoubleBondStereo() []CisTrans {
 	var out []CisTrans
 	for k, bd := range m.Bonds {
-		if bd.Order != 2 || bd.Aromatic {
+		if bd.Order != 2 || bd.Aromatic || m.inSmallRing(bd.A, bd.B) {
 			continue
 		}
 		ref := func(d, p int) (int, bool, bool) {
@@ -106,4 +108,23 @@ func (m *Molecule) PotentialStereocentres() []int {
 		}
 	}
 	return out
+}
+
+// inSmallRing reports whether atoms a and b (bonded) share an SSSR ring of
+// fewer than 8 atoms.
+func (m *Molecule) inSmallRing(a, b int) bool {
+	for _, r := range m.rings {
+		if len(r) >= 8 {
+			continue
+		}
+		ha, hb := false, false
+		for _, x := range r {
+			ha = ha || x == a
+			hb = hb || x == b
+		}
+		if ha && hb {
+			return true
+		}
+	}
+	return false
 }

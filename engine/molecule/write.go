@@ -34,6 +34,9 @@ func (m *Molecule) Canonical() string {
 	if len(m.Atoms) == 0 {
 		return ""
 	}
+	if d := m.cache(); d != nil {
+		return d.canon
+	}
 	info := m.symmetry(DefaultSearchWork, false)
 	return m.writeSMILES(info.labels, false)
 }
@@ -48,7 +51,16 @@ func (m *Molecule) CanonicalStereo() string {
 	if len(m.Atoms) == 0 {
 		return ""
 	}
-	info := m.symmetry(DefaultSearchWork, true)
+	if d := m.cache(); d != nil {
+		d.stereoOnce.Do(func() { d.canonStereo = m.canonicalStereo(d.info) })
+		return d.canonStereo
+	}
+	return m.canonicalStereo(m.symmetry(DefaultSearchWork, true))
+}
+
+// canonicalStereo writes the stereo canonical string from a symmetry
+// analysis (see CanonicalStereo).
+func (m *Molecule) canonicalStereo(info symmetryInfo) string {
 	best := m.writeSMILES(info.labels, true)
 	if !m.hasStereo() {
 		return best
@@ -128,8 +140,10 @@ type writer struct {
 	parent   []int   // per atom: tree bond to parent, -1 at roots
 	seq      []int   // atoms in output order
 	pos      []int   // output position of each atom
-	bondSym  map[int]byte
-	digits   map[int]int // ring-closure bond -> digit
+	bondSym  []byte  // per bond: chosen '/' or '\\', 0 for none
+	digits   []int   // per ring-closure bond: its open digit, 0 when not open
+	inUse    []bool  // per digit: held by an open ring closure
+	sorted   []int   // scratch of sortedBonds
 }
 
 // writeSMILES writes the molecule visiting atoms in increasing labels.
@@ -139,10 +153,12 @@ func (m *Molecule) writeSMILES(labels []int, stereo bool) string {
 
 func (m *Molecule) writeSMILESOpts(labels []int, stereo, kekule bool) string {
 	n := len(m.Atoms)
+	nb := len(m.Bonds)
 	w := &writer{m: m, labels: labels, stereo: stereo, kekule: kekule,
-		visited: make([]bool, n), closure: make([]bool, len(m.Bonds)),
+		visited: make([]bool, n), closure: make([]bool, nb),
 		closures: make([][]int, n), children: make([][]int, n), parent: make([]int, n),
-		pos: make([]int, n), bondSym: map[int]byte{}, digits: map[int]int{}}
+		pos: make([]int, n), bondSym: make([]byte, nb), digits: make([]int, nb),
+		seq: make([]int, 0, n)}
 	order := make([]int, n)
 	for i := range order {
 		order[i] = i
@@ -160,6 +176,7 @@ func (m *Molecule) writeSMILESOpts(labels []int, stereo, kekule bool) string {
 		w.assignDoubleBondSyms()
 	}
 	var b strings.Builder
+	b.Grow(2*n + 2*nb)
 	for k, r := range roots {
 		if k > 0 {
 			b.WriteByte('.')
@@ -169,9 +186,18 @@ func (m *Molecule) writeSMILESOpts(labels []int, stereo, kekule bool) string {
 	return b.String()
 }
 
+// sortedBonds returns the bonds of a in label order of the partner, in
+// scratch space that the next call reuses.
 func (w *writer) sortedBonds(a int) []int {
-	bs := slices.Clone(w.m.Adj[a])
-	slices.SortFunc(bs, func(x, y int) int { return w.labels[w.m.Other(x, a)] - w.labels[w.m.Other(y, a)] })
+	start := len(w.sorted)
+	w.sorted = append(w.sorted, w.m.Adj[a]...)
+	bs := w.sorted[start:]
+	// insertion sort: atoms have few bonds
+	for i := 1; i < len(bs); i++ {
+		for j := i; j > 0 && w.labels[w.m.Other(bs[j], a)] < w.labels[w.m.Other(bs[j-1], a)]; j-- {
+			bs[j], bs[j-1] = bs[j-1], bs[j]
+		}
+	}
 	return bs
 }
 
@@ -179,6 +205,8 @@ func (w *writer) dfs(a int) {
 	w.visited[a] = true
 	w.pos[a] = len(w.seq)
 	w.seq = append(w.seq, a)
+	mark := len(w.sorted)
+	defer func() { w.sorted = w.sorted[:mark] }()
 	for _, b := range w.sortedBonds(a) {
 		if b == w.parent[a] || w.closure[b] {
 			continue
@@ -211,8 +239,11 @@ func (w *writer) bondText(b, from int) string {
 	case bd.Order == 4:
 		return "$"
 	}
-	if s, ok := w.bondSym[b]; ok {
-		return string(s)
+	switch w.bondSym[b] {
+	case '/':
+		return "/"
+	case '\\':
+		return "\\"
 	}
 	if w.m.Atoms[from].Aromatic && w.m.Atoms[o].Aromatic && !w.kekule {
 		return "-"
@@ -221,19 +252,25 @@ func (w *writer) bondText(b, from int) string {
 }
 
 func (w *writer) emit(b *strings.Builder, a int) {
-	b.WriteString(w.atomText(a))
+	w.writeAtom(b, a)
 	// ring closures: partners already written close, others open
 	for _, rb := range w.closures[a] {
 		o := w.m.Other(rb, a)
 		if w.pos[o] < w.pos[a] {
-			writeDigit(b, w.digits[rb])
-			delete(w.digits, rb)
+			d := w.digits[rb]
+			writeDigit(b, d)
+			w.digits[rb] = 0
+			w.inUse[d] = false
 			continue
 		}
 		d := 1
-		for w.digitUsed(d) {
+		for d < len(w.inUse) && w.inUse[d] {
 			d++
 		}
+		for len(w.inUse) <= d {
+			w.inUse = append(w.inUse, false)
+		}
+		w.inUse[d] = true
 		w.digits[rb] = d
 		b.WriteString(w.bondText(rb, a))
 		writeDigit(b, d)
@@ -250,15 +287,6 @@ func (w *writer) emit(b *strings.Builder, a int) {
 			b.WriteByte(')')
 		}
 	}
-}
-
-func (w *writer) digitUsed(d int) bool {
-	for _, x := range w.digits {
-		if x == d {
-			return true
-		}
-	}
-	return false
 }
 
 func writeDigit(b *strings.Builder, d int) {
@@ -309,7 +337,8 @@ func (w *writer) impliedH(a int) (int, bool) {
 	return v - sum, true
 }
 
-func (w *writer) atomText(a int) string {
+// writeAtom writes the token of atom a.
+func (w *writer) writeAtom(b *strings.Builder, a int) {
 	at := w.m.Atoms[a]
 	chir := ""
 	if w.stereo {
@@ -318,15 +347,15 @@ func (w *writer) atomText(a int) string {
 	sym := at.Element
 	arom := at.Aromatic && !w.kekule
 	if arom {
-		sym = strings.ToLower(sym)
+		sym = lowerSymbol(sym)
 	}
 	if at.Isotope == 0 && at.Charge == 0 && at.Radical == 0 && chir == "" &&
 		(arom && aromaticOrganic[at.Element] || !arom && organicSubset[at.Element]) {
 		if h, ok := w.impliedH(a); ok && h == at.HCount {
-			return sym
+			b.WriteString(sym)
+			return
 		}
 	}
-	var b strings.Builder
 	b.WriteByte('[')
 	if at.Isotope > 0 {
 		b.WriteString(strconv.Itoa(at.Isotope))
@@ -350,7 +379,29 @@ func (w *writer) atomText(a int) string {
 		b.WriteString(strconv.Itoa(q))
 	}
 	b.WriteByte(']')
-	return b.String()
+}
+
+// lowerSymbol is the aromatic (lower-case) spelling of an element symbol.
+func lowerSymbol(sym string) string {
+	switch sym {
+	case "B":
+		return "b"
+	case "C":
+		return "c"
+	case "N":
+		return "n"
+	case "O":
+		return "o"
+	case "P":
+		return "p"
+	case "S":
+		return "s"
+	case "Se":
+		return "se"
+	case "As":
+		return "as"
+	}
+	return strings.ToLower(sym)
 }
 
 // outputNeighbours lists the neighbours of a in the order a reader sees them
@@ -433,7 +484,31 @@ func (w *writer) assignDoubleBondSyms() {
 		bx, by := w.m.Bonds[x.Bond], w.m.Bonds[y.Bond]
 		return min(w.pos[bx.A], w.pos[bx.B]) - min(w.pos[by.A], w.pos[by.B])
 	})
-	for _, sp := range specs {
+	// Process double bonds so that each next one, when possible, shares a
+	// marked single bond with one already done: the / \ relations form a
+	// parity system and propagating along shared bonds never contradicts a
+	// consistent input.
+	done := make([]bool, len(specs))
+	touches := func(sp CisTrans) bool {
+		d := w.m.Bonds[sp.Bond]
+		for _, e := range []int{d.A, d.B} {
+			for _, b := range w.m.Adj[e] {
+				if w.bondSym[b] != 0 {
+					return true
+				}
+			}
+		}
+		return false
+	}
+	for range specs {
+		next := -1
+		for k, sp := range specs {
+			if !done[k] && (next < 0 || touches(sp) && !touches(specs[next])) {
+				next = k
+			}
+		}
+		done[next] = true
+		sp := specs[next]
 		d := w.m.Bonds[sp.Bond]
 		d1, d2 := d.A, d.B
 		x, y := sp.A, sp.B
@@ -481,8 +556,8 @@ func (w *writer) firstSubstituent(d, p int) int {
 // sideOf reads the side (up = true) of substituent x of double-bond atom d
 // from an already chosen symbol on bond b.
 func (w *writer) sideOf(b, d, x int) (bool, bool) {
-	s, ok := w.bondSym[b]
-	if !ok {
+	s := w.bondSym[b]
+	if s == 0 {
 		return false, false
 	}
 	up := s == '/'
