@@ -1,7 +1,11 @@
 package lsp
 
 import (
+	"context"
+
 	"fmt"
+	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/analysis/ide"
 	"math/rand/v2"
 	"runtime"
 	"sort"
@@ -133,4 +137,26 @@ func reportPercentile(b *testing.B, lat []time.Duration, p float64, unit string)
 	sort.Slice(lat, func(i, j int) bool { return lat[i] < lat[j] })
 	k := int(p * float64(len(lat)-1))
 	b.ReportMetric(float64(lat[k])/float64(time.Millisecond), unit)
+}
+
+// BenchmarkAnalyzeWarm20k is the analysis alone (no protocol) of the
+// 20,000-species file with a warm estimate cache: the floor under
+// BenchmarkEdit20k, to tell analysis time from server overhead.
+func BenchmarkAnalyzeWarm20k(b *testing.B) {
+	text, _ := genMechanism(benchPairs)
+	ws := analysis.NewWorkspace(fakeRoot, func(string) ([]byte, error) { return nil, context.Canceled }, analysis.DefaultSettings())
+	p := fakeRoot + "/big.kiln"
+	ws.SetOverlay(p, []byte(text))
+	if _, err := ws.Analyze(context.Background(), p); err != nil {
+		b.Fatal(err)
+	}
+	b.ReportAllocs()
+	b.ResetTimer()
+	for b.Loop() {
+		r, err := ws.Analyze(context.Background(), p)
+		if err != nil {
+			b.Fatal(err)
+		}
+		_ = ide.NewIndex(r)
+	}
 }

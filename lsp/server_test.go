@@ -192,3 +192,23 @@ func TestDidChangeConfiguration(t *testing.T) {
 	}
 	t.Fatal("inlay hints did not switch to kJ/mol")
 }
+
+func TestRelatedInformation(t *testing.T) {
+	src := "species ethanol CCO\nspecies ethanol OCC\n"
+	e := newFakeEditor(t, map[string]string{"d.kiln": src, "inc.kiln": "species H [H]\n"}, fakeOptions{})
+	ds := e.open("d.kiln")
+	var dup *protocol.Diagnostic
+	for i, d := range ds {
+		if d.Code == "duplicate-species" {
+			dup = &ds[i]
+		}
+	}
+	require.NotNil(t, dup, diagSummary(ds))
+	assert.Equal(t, protocol.DiagnosticSeverityWarning, dup.Severity)
+	require.NotEmpty(t, dup.RelatedInformation)
+	rel := dup.RelatedInformation[0]
+	assert.Equal(t, e.uri("d.kiln"), rel.Location.URI)
+	// The first declaration's name: line 0, UTF-16 columns 8–15.
+	assert.Equal(t, protocol.Range{Start: protocol.Position{Line: 0, Character: 8}, End: protocol.Position{Line: 0, Character: 15}}, rel.Location.Range)
+	require.NoError(t, e.shutdown())
+}

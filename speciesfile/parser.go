@@ -2,8 +2,9 @@ package speciesfile
 
 import (
 	"bytes"
+	"cmp"
 	"fmt"
-	"sort"
+	"slices"
 	"strconv"
 	"strings"
 	"unicode/utf8"
@@ -51,12 +52,12 @@ type parser struct {
 
 	checkBytes bool // src has invalid UTF-8 or NUL bytes: check each line
 
-	pos        int // start of the next unread line
-	crlf       int // lines ending in \r\n
-	lf         int // lines ending in \n or a lone \r
+	lines      *LineIndex // f.Lines: the line boundaries readLine walks
+	line       int        // index of the next unread line in lines
+	crlf       int        // lines ending in \r\n
+	lf         int        // lines ending in \n or a lone \r
 	pending    srcLine
 	hasPending bool
-	hasCR      bool // src contains '\r' (else lines end only at '\n')
 
 	toks    []Token // tokens of the current line (reused)
 	kw      []Token // tokens of the current statement's keyword line (reused)
@@ -67,24 +68,109 @@ type parser struct {
 	unitsTok      *Token  // the accepted units statement
 	sawDecl       bool    // a species, reaction or group statement was seen
 
-	body []srcLine // continuation lines of the current statement (reused)
+	body    []srcLine // continuation lines of the current statement (reused)
+	attrBuf []Attr    // attribute lines of the current species (reused)
+	termBuf [2][]Term // reactant and product terms of the current reaction (reused)
+
+	// Node storage: the tree's small nodes are carved out of chunks (see
+	// slab) instead of being allocated one by one.
+	speciesNodes  slab[speciesNode]
+	reactionNodes slab[reactionNode]
+	nasaBlocks    slab[NASA7Block]
+	rates         slab[rateStore]
+	troes         slab[troeNode]
+	tokens        slab[Token]
+	intAttrs      slab[IntAttr]
+	numbers       slab[Number]
+	terms         slab[Term]
+	attrs         slab[Attr]
+	effs          slab[Efficiency]
+}
+
+// speciesNode is the storage of one species statement and its SMILES token
+// (one slab element); rarer optional parts come from their own slabs.
+type speciesNode struct {
+	sp     Species
+	smiles Token
+}
+
+// reactionNode is the storage of one reaction statement and its main rate
+// (one slab element); optional tokens come from the token slab.
+type reactionNode struct {
+	r    Reaction
+	rate rateStore
+}
+
+// troeNode is the storage of one troe line.
+type troeNode struct {
+	t Troe
+	n [4]Number
 }
 
 func newParser(name string, src []byte) *parser {
+	lines := NewLineIndex(src)
 	f := &File{
-		Name: name, Src: src, Lines: NewLineIndex(src),
+		Name: name, Src: src, Lines: lines,
 		EnergyUnit: "kcal/mol", EntropyUnit: "cal/mol/K", Newline: "\n",
 	}
 	p := &parser{
-		f: f, src: src, s: string(src), comment: -1,
+		f: f, src: src, s: string(src), comment: -1, lines: lines,
 		energyFactor: 4184, entropyFactor: JoulesPerCalorie,
 	}
-	p.checkBytes = !utf8.Valid(src) || bytes.IndexByte(src, 0) >= 0
-	p.hasCR = bytes.IndexByte(src, '\r') >= 0
+	// lines.ascii implies valid UTF-8; NUL is checked separately
+	p.checkBytes = (!lines.ascii && !utf8.Valid(src)) || bytes.IndexByte(src, 0) >= 0
 	if bytes.HasPrefix(src, []byte("\xef\xbb\xbf")) {
 		f.BOM = true
 	}
+	p.presize()
 	return p
+}
+
+// presize gives File.Stmts, File.Species and File.Reactions their final
+// capacity up front. Every line that starts with a byte other than a blank,
+// a terminator or '#' starts exactly one statement, so counting such lines
+// (and those whose first word is species or reaction) costs one pass over
+// the line starts and saves the repeated growth of the slices. The counts
+// are bounded by the number of lines, and every counted line yields a
+// statement node anyway.
+func (p *parser) presize() {
+	src, li := p.src, p.lines
+	stmts, species, reactions := 1, 0, 0 // +1: a leading indented line or trivia
+	for k, start := range li.starts {
+		if k == 0 && p.f.BOM {
+			start = 3
+		}
+		if start >= li.ends[k] {
+			continue
+		}
+		switch src[start] {
+		case ' ', '\t', '#':
+			continue
+		case 's':
+			if hasWord(src[start:li.ends[k]], "species") {
+				species++
+			}
+		case 'r':
+			if hasWord(src[start:li.ends[k]], "reaction") {
+				reactions++
+			}
+		}
+		stmts++
+	}
+	p.f.Stmts = make([]Stmt, 0, stmts)
+	if species > 0 {
+		p.f.Species = make([]*Species, 0, species)
+	}
+	if reactions > 0 {
+		p.f.Reactions = make([]*Reaction, 0, reactions)
+	}
+}
+
+// hasWord reports whether line starts with word followed by a blank or the
+// end of the line.
+func hasWord(line []byte, word string) bool {
+	return len(line) >= len(word) && string(line[:len(word)]) == word &&
+		(len(line) == len(word) || line[len(word)] == ' ' || line[len(word)] == '\t')
 }
 
 // errAt records a syntax error.
@@ -92,32 +178,24 @@ func (p *parser) errAt(sp Span, format string, args ...any) {
 	p.f.Diags = append(p.f.Diags, Diagnostic{Span: sp, Severity: SeverityError, Code: CodeSyntax, Message: fmt.Sprintf(format, args...)})
 }
 
-// readLine reads the line at p.pos and advances.
+// readLine reads the next line (the line boundaries come from the file's
+// LineIndex, which uses the same terminators) and advances.
 func (p *parser) readLine() (srcLine, bool) {
-	if p.pos >= len(p.src) {
+	li, k, src := p.lines, p.line, p.src
+	if k >= len(li.starts) || li.starts[k] >= len(src) {
 		return srcLine{}, false
 	}
-	src := p.src
-	l := srcLine{start: p.pos}
-	var i int
-	if p.hasCR {
-		i = bytes.IndexAny(src[p.pos:], "\r\n")
-	} else {
-		i = bytes.IndexByte(src[p.pos:], '\n')
+	l := srcLine{start: li.starts[k], end: li.ends[k], next: len(src)}
+	if k+1 < len(li.starts) {
+		l.next = li.starts[k+1]
 	}
-	if i < 0 {
-		l.end, l.next = len(src), len(src)
-	} else {
-		l.end = p.pos + i
-		l.next = l.end + 1
-		if src[l.end] == '\r' && l.next < len(src) && src[l.next] == '\n' {
-			l.next++
-			p.crlf++
-		} else {
-			p.lf++
-		}
+	switch l.next - l.end {
+	case 2:
+		p.crlf++
+	case 1:
+		p.lf++
 	}
-	p.pos = l.next
+	p.line++
 	t := l.start
 	if t == 0 && p.f.BOM {
 		t = 3
@@ -227,7 +305,7 @@ func (p *parser) run() {
 		f.Newline = "\r\n"
 	}
 	// diagnostics in file order (stable: same-offset ones keep report order)
-	sort.SliceStable(f.Diags, func(i, j int) bool { return f.Diags[i].Span.Start < f.Diags[j].Span.Start })
+	slices.SortStableFunc(f.Diags, func(a, b Diagnostic) int { return cmp.Compare(a.Span.Start, b.Span.Start) })
 }
 
 func setExtentEnd(st Stmt, end int) {
@@ -249,14 +327,14 @@ func setExtentEnd(st Stmt, end int) {
 	}
 }
 
-// tokenize splits the line [from, l.end) into p.toks and sets p.comment.
+// tokenize splits the line [l.text, l.trimEnd) into p.toks at blanks and
+// sets p.comment to the offset of a "#" that starts a token (-1 if none).
 func (p *parser) tokenize(l srcLine) []Token {
-	p.toks = p.toks[:0]
+	toks := p.toks[:0]
 	p.comment = -1
-	src := p.src
-	i := l.text
-	for i < l.end {
-		c := src[i]
+	line, s := p.src[:l.trimEnd], p.s
+	for i := l.text; i < len(line); {
+		c := line[i]
 		if c == ' ' || c == '\t' {
 			i++
 			continue
@@ -266,13 +344,14 @@ func (p *parser) tokenize(l srcLine) []Token {
 			break
 		}
 		j := i + 1
-		for j < l.end && src[j] != ' ' && src[j] != '\t' {
+		for j < len(line) && line[j] != ' ' && line[j] != '\t' {
 			j++
 		}
-		p.toks = append(p.toks, Token{Span{i, j}, p.s[i:j]})
+		toks = append(toks, Token{Span{i, j}, s[i:j]})
 		i = j
 	}
-	return p.toks
+	p.toks = toks
+	return toks
 }
 
 // freeText returns the text from token k to the comment or end of line,
@@ -335,11 +414,39 @@ func (p *parser) extra(toks []Token, after string) {
 	}
 }
 
+// newToken returns a pointer to a copy of t (slab-allocated).
+func (p *parser) newToken(t Token) *Token {
+	tp := p.tokens.new()
+	*tp = t
+	return tp
+}
+
+// extraAfterValue is extra(toks, key.Text+" value"), building the message
+// only when there is an error.
+func (p *parser) extraAfterValue(toks []Token, key Token) {
+	if len(toks) > 0 {
+		p.extra(toks, key.Text+" value")
+	}
+}
+
 // endOf returns an empty span at the end of token t (for "expected X" errors
 // at the end of a line).
 func endOf(t Token) Span { return Span{t.Span.End, t.Span.End} }
 
-var energyUnits = map[string]float64{"kcal/mol": 4184, "kJ/mol": 1000, "cal/mol": JoulesPerCalorie, "J/mol": 1}
+// energyUnit returns J/mol per unit u of energy per mole.
+func energyUnit(u string) (float64, bool) {
+	switch u {
+	case "kcal/mol":
+		return 4184, true
+	case "kJ/mol":
+		return 1000, true
+	case "cal/mol":
+		return JoulesPerCalorie, true
+	case "J/mol":
+		return 1, true
+	}
+	return 0, false
+}
 
 func (p *parser) units(toks []Token, base StmtBase) Stmt {
 	st := &Units{StmtBase: base}
@@ -350,7 +457,7 @@ func (p *parser) units(toks []Token, base StmtBase) Stmt {
 	}
 	st.Unit = toks[1]
 	p.extra(toks[2:], "the unit")
-	factor, ok := energyUnits[toks[1].Text]
+	factor, ok := energyUnit(toks[1].Text)
 	switch {
 	case !ok:
 		p.errAt(toks[1].Span, "unknown energy unit %q: expected kcal/mol, kJ/mol, cal/mol or J/mol", toks[1].Text)
@@ -440,12 +547,14 @@ func (p *parser) thermoLine(l srcLine, toks []Token, t *thermoLines) bool {
 			p.errAt(endOf(key), "expected a number after %s", key.Text)
 			return true
 		}
-		p.extra(toks[2:], key.Text+" value")
+		p.extraAfterValue(toks[2:], key)
 		if n, ok := p.number(toks[1], kind); ok {
+			np := p.numbers.new()
+			*np = n
 			if id == tHf {
-				t.hf = &n
+				t.hf = np
 			} else {
-				t.s = &n
+				t.s = np
 			}
 		}
 	case "cp":
@@ -458,7 +567,7 @@ func (p *parser) thermoLine(l srcLine, toks []Token, t *thermoLines) bool {
 			return true
 		}
 		if txt, ok := p.freeText(l, toks, 1); ok {
-			t.source = &txt
+			t.source = p.newToken(txt)
 		} else {
 			p.errAt(endOf(key), "expected text after source")
 		}
@@ -547,6 +656,9 @@ func (p *parser) group(toks []Token, base StmtBase) Stmt {
 		p.extra(toks[2:], "the group name (a group name has no blanks)")
 	}
 	var t thermoLines
+	if len(p.body) > 0 {
+		st.Attrs = p.attrs.take(len(p.body))
+	}
 	for _, l := range p.body {
 		lt := p.tokenize(l)
 		st.Attrs = append(st.Attrs, Attr{Key: lt[0], Span: lineSpan(l)})
@@ -592,15 +704,12 @@ const speciesAttrList = "multiplicity, symmetry, optical-isomers, composition, n
 
 func (p *parser) species(toks []Token, base StmtBase) Stmt {
 	p.sawDecl = true
-	// one allocation for the species and its small optional parts
-	sa := &struct {
-		sp                 Species
-		smiles, comp, note Token
-		ints               [3]IntAttr
-	}{}
+	sa := p.speciesNodes.new()
 	st := &sa.sp
 	st.StmtBase = base
-	st.Attrs = make([]Attr, 0, len(p.body))
+	// Attribute lines are collected in a reused buffer and copied into
+	// exactly sized storage at the end (p.body also holds block lines).
+	attrs := p.attrBuf[:0]
 	if len(toks) < 2 {
 		p.errAt(endOf(toks[0]), "expected a species name after species")
 	} else {
@@ -635,18 +744,18 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 			if key.Text == "low" || key.Text == "high" || key.Text == "source" {
 				p.nasaLine(l, lt, nasa, &nasaSet)
 				nasa.Span.End = l.trimEnd
-				st.Attrs[blockAttr].Span.End = l.trimEnd
+				attrs[blockAttr].Span.End = l.trimEnd
 				continue
 			}
 		case blockTable:
 			if p.thermoLine(l, lt, &table) {
 				st.Table.Span.End = l.trimEnd
-				st.Attrs[blockAttr].Span.End = l.trimEnd
+				attrs[blockAttr].Span.End = l.trimEnd
 				continue
 			}
 		}
 		block = blockNone
-		st.Attrs = append(st.Attrs, Attr{Key: key, Span: lineSpan(l)})
+		attrs = append(attrs, Attr{Key: key, Span: lineSpan(l)})
 		switch key.Text {
 		case "multiplicity", "symmetry", "optical-isomers":
 			id := aOpt
@@ -663,14 +772,15 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 			if !ok {
 				continue
 			}
-			sa.ints[id] = ia
+			iap := p.intAttrs.new()
+			*iap = ia
 			switch id {
 			case aMult:
-				st.Multiplicity = &sa.ints[id]
+				st.Multiplicity = iap
 			case aSym:
-				st.Symmetry = &sa.ints[id]
+				st.Symmetry = iap
 			default:
-				st.OpticalIsomers = &sa.ints[id]
+				st.OpticalIsomers = iap
 			}
 		case "composition":
 			if !p.first(&set, aComp, key) {
@@ -681,9 +791,8 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 				continue
 			}
 			p.extra(lt[2:], "the formula (a formula has no blanks)")
-			sa.comp = lt[1]
-			c := sa.comp
-			st.Composition = &sa.comp
+			c := lt[1]
+			st.Composition = p.newToken(c)
 			formula, err := ParseFormula(c.Text)
 			if err != nil {
 				p.errAt(c.Span, "malformed composition %q: %v", c.Text, err)
@@ -695,8 +804,7 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 				continue
 			}
 			if txt, ok := p.freeText(l, lt, 1); ok {
-				sa.note = txt
-				st.Note = &sa.note
+				st.Note = p.newToken(txt)
 			} else {
 				p.errAt(endOf(key), "expected text after note")
 			}
@@ -707,11 +815,12 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 			if set.has&(1<<aTable) != 0 {
 				p.errAt(key.Span, "a species has either a nasa7 block or a thermo-table, not both")
 			}
-			nasa = &NASA7Block{Span: lineSpan(l), Header: key}
+			nasa = p.nasaBlocks.new()
+			nasa.Span, nasa.Header = lineSpan(l), key
 			nasaSet = attrSet{}
 			p.nasaHeader(lt, nasa)
 			st.NASA7 = nasa
-			block, blockAttr = blockNASA, len(st.Attrs)-1
+			block, blockAttr = blockNASA, len(attrs)-1
 		case "thermo-table":
 			if !p.first(&set, aTable, key) {
 				continue
@@ -722,7 +831,7 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 			p.extra(lt[1:], "thermo-table (its values go on the following lines)")
 			st.Table = &ThermoTable{Span: lineSpan(l), Header: key}
 			tableHdr = key
-			block, blockAttr = blockTable, len(st.Attrs)-1
+			block, blockAttr = blockTable, len(attrs)-1
 		case "low", "high":
 			p.errAt(key.Span, "%q is only valid inside a nasa7 block", key.Text)
 		case "hf298", "s298", "cp":
@@ -732,6 +841,12 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 		default:
 			p.errAt(key.Span, "unknown species attribute %q: expected one of %s", key.Text, speciesAttrList)
 		}
+	}
+	p.attrBuf = attrs[:0]
+	if len(attrs) > 0 {
+		st.Attrs = append(p.attrs.take(len(attrs)), attrs...)
+	} else {
+		st.Attrs = []Attr{} // empty, not nil (does not allocate)
 	}
 	if nasa != nil {
 		var miss []string
@@ -762,7 +877,7 @@ func (p *parser) intAttr(lt []Token) (IntAttr, bool) {
 		p.errAt(endOf(key), "expected a positive integer after %s", key.Text)
 		return IntAttr{}, false
 	}
-	p.extra(lt[2:], key.Text+" value")
+	p.extraAfterValue(lt[2:], key)
 	v, err := strconv.Atoi(lt[1].Text)
 	if err != nil || v < 1 || lt[1].Text[0] == '+' || lt[1].Text[0] == '-' {
 		p.errAt(lt[1].Span, "%s needs a positive integer, found %q", key.Text, lt[1].Text)
@@ -799,7 +914,7 @@ func (p *parser) nasaLine(l srcLine, lt []Token, b *NASA7Block, set *attrSet) {
 			return
 		}
 		if txt, ok := p.freeText(l, lt, 1); ok {
-			b.Source = &txt
+			b.Source = p.newToken(txt)
 		} else {
 			p.errAt(endOf(key), "expected text after source")
 		}
@@ -856,16 +971,11 @@ func isRateToken(s string) bool {
 
 func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 	p.sawDecl = true
-	// one allocation for the reaction, its optional tokens and main rate
-	ra := &struct {
-		r               Reaction
-		fall, dup, note Token
-		rate            rateStore
-	}{}
+	ra := p.reactionNodes.new()
 	st := &ra.r
 	st.StmtBase = base
 	if len(p.body) > 0 {
-		st.Attrs = make([]Attr, 0, len(p.body))
+		st.Attrs = p.attrs.take(len(p.body))
 	}
 	p.f.Reactions = append(p.f.Reactions, st)
 	eqEnd := len(toks)
@@ -881,8 +991,7 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 	} else {
 		st.Equation = Span{eq[0].Span.Start, eq[len(eq)-1].Span.End}
 		if fall, ok := p.equation(eq, st); ok {
-			ra.fall = fall
-			st.Falloff = &ra.fall
+			st.Falloff = p.newToken(fall)
 		}
 	}
 	if eqEnd < len(toks) {
@@ -924,8 +1033,7 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 				continue
 			}
 			p.extra(lt[1:], "duplicate")
-			ra.dup = key
-			st.Duplicate = &ra.dup
+			st.Duplicate = p.newToken(key)
 		case "reverse":
 			if !p.first(&set, rRev, key) {
 				continue
@@ -939,8 +1047,7 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 				continue
 			}
 			if txt, ok := p.freeText(bl, lt, 1); ok {
-				ra.note = txt
-				st.Note = &ra.note
+				st.Note = p.newToken(txt)
 			} else {
 				p.errAt(endOf(key), "expected text after note")
 			}
@@ -989,13 +1096,20 @@ func (p *parser) equation(eq []Token, st *Reaction) (fall Token, isFalloff bool)
 	}
 	st.Arrow = eq[arrow]
 	st.Reversible = eq[arrow].Text == "<=>"
-	// both sides share one backing array (capped so they cannot overlap)
-	buf := make([]Term, 0, (len(eq)+1)/2)
-	var ok1, ok2 bool
-	var m1, m2, f1, f2 *Token
-	st.Reactants, m1, f1, ok1 = p.side(eq[:arrow], eq[arrow], "reactant", buf)
-	st.Reactants = st.Reactants[:len(st.Reactants):len(st.Reactants)]
-	st.Products, m2, f2, ok2 = p.side(eq[arrow+1:], eq[arrow], "product", buf[len(st.Reactants):len(st.Reactants)])
+	// The sides are parsed into reused buffers, then copied into one exactly
+	// sized backing array (capped so that they cannot overlap).
+	rs, m1, f1, ok1 := p.side(eq[:arrow], eq[arrow], "reactant", p.termBuf[0][:0])
+	ps, m2, f2, ok2 := p.side(eq[arrow+1:], eq[arrow], "product", p.termBuf[1][:0])
+	if rs != nil {
+		p.termBuf[0] = rs[:0]
+	}
+	if ps != nil {
+		p.termBuf[1] = ps[:0]
+	}
+	nr, np := len(rs), len(ps)
+	buf := p.terms.take(nr + np)
+	st.Reactants = copyTerms(buf[:0:nr], rs)
+	st.Products = copyTerms(buf[nr:nr:nr+np], ps)
 	if !ok1 || !ok2 {
 		return fall, false
 	}
@@ -1019,6 +1133,18 @@ func (p *parser) equation(eq []Token, st *Reaction) (fall Token, isFalloff bool)
 		}
 	}
 	return fall, false
+}
+
+// copyTerms appends src to dst (which has room for it); it returns nil for
+// a nil src and an empty, non-nil slice for an empty one.
+func copyTerms(dst, src []Term) []Term {
+	switch {
+	case src == nil:
+		return nil
+	case len(src) == 0:
+		return []Term{}
+	}
+	return append(dst, src...)
 }
 
 func isFalloffToken(s string) bool {
@@ -1077,9 +1203,8 @@ func (p *parser) side(toks []Token, arrow Token, which string, terms []Term) (_ 
 			m = &toks[i]
 		default:
 			term := Term{Coeff: 1, Name: t}
-			if n := scanNumber(t.Text); n == len(t.Text) {
+			if n, v, err := parseNumber(t.Text); n == len(t.Text) {
 				// a coefficient
-				v, err := strconv.ParseFloat(t.Text, 64)
 				if err != nil {
 					p.errAt(t.Span, "number out of range: %q", t.Text)
 					return terms, m, fall, false
@@ -1101,8 +1226,7 @@ func (p *parser) side(toks []Token, arrow Token, which string, terms []Term) (_ 
 					p.errAt(next.Span, "expected a species name after coefficient %q, found %q", t.Text, next.Text)
 					return terms, m, fall, false
 				}
-				ct := t // escapes: coefficients are rare enough
-				term = Term{Coeff: v, CoeffTok: &ct, Name: next}
+				term = Term{Coeff: v, CoeffTok: p.newToken(t), Name: next}
 				i++
 				t = next
 			}
@@ -1143,14 +1267,10 @@ type rateStore struct {
 }
 
 func (p *parser) rate(key Token, toks []Token, what string) *Arrhenius {
-	return p.rateInto(new(rateStore), key, toks, what)
+	return p.rateInto(p.rates.new(), key, toks, what)
 }
 
 func (p *parser) rateInto(ra *rateStore, key Token, toks []Token, what string) *Arrhenius {
-	ctx := "rate parameters"
-	if what != "" {
-		ctx = what + " rate parameters"
-	}
 	if len(toks) == 0 {
 		p.errAt(endOf(key), "expected A=, n= and Ea= after %s", key.Text)
 		return nil
@@ -1173,11 +1293,11 @@ func (p *parser) rateInto(ra *rateStore, key Token, toks []Token, what string) *
 			}
 		}
 		if dst == nil {
-			p.errAt(tk.Span, "unexpected %q in %s: expected A=, n= or Ea=", tk.Text, ctx)
+			p.errAt(tk.Span, "unexpected %q in %s: expected A=, n= or Ea=", tk.Text, rateContext(what))
 			continue
 		}
 		if *dst != nil {
-			p.errAt(tk.Span, "duplicate %s= in %s", k.Text, ctx)
+			p.errAt(tk.Span, "duplicate %s= in %s", k.Text, rateContext(what))
 			continue
 		}
 		if v.Text == "" {
@@ -1200,9 +1320,19 @@ func (p *parser) rateInto(ra *rateStore, key Token, toks []Token, what string) *
 		miss = append(miss, "Ea=")
 	}
 	if len(miss) > 0 {
-		p.missingRate(r, miss, ctx)
+		p.missingRate(r, miss, rateContext(what))
 	}
 	return r
+}
+
+// rateContext names a set of rate parameters in messages: "rate
+// parameters" for the reaction line, else e.g. "low-pressure rate
+// parameters".
+func rateContext(what string) string {
+	if what == "" {
+		return "rate parameters"
+	}
+	return what + " rate parameters"
 }
 
 func (p *parser) missingRate(r *Arrhenius, miss []string, ctx string) {
@@ -1225,10 +1355,7 @@ func (p *parser) troe(lt []Token) *Troe {
 		p.errAt(endOf(key), "expected alpha=, T3=, T1= and optionally T2= after troe")
 		return nil
 	}
-	ta := &struct {
-		t Troe
-		n [4]Number
-	}{}
+	ta := p.troes.new()
 	tr := &ta.t
 	tr.Span = Span{lt[1].Span.Start, lt[len(lt)-1].Span.End}
 	for _, tk := range lt[1:] {
@@ -1296,7 +1423,7 @@ func (p *parser) efficiencies(lt []Token) []Efficiency {
 		p.errAt(endOf(key), "expected NAME=VALUE pairs after efficiencies")
 		return nil
 	}
-	out := make([]Efficiency, 0, len(lt)-1)
+	out := p.effs.take(len(lt) - 1)
 	for _, tk := range lt[1:] {
 		k, v, ok := splitPair(tk)
 		if !ok {
@@ -1369,9 +1496,37 @@ const (
 	kPressure                 // pressure: unit required
 )
 
-var entropyUnits = map[string]float64{"cal/mol/K": JoulesPerCalorie, "J/mol/K": 1, "kcal/mol/K": 4184, "kJ/mol/K": 1000}
+// entropyUnit returns J/(mol K) per unit u of entropy or heat capacity.
+func entropyUnit(u string) (float64, bool) {
+	switch u {
+	case "cal/mol/K":
+		return JoulesPerCalorie, true
+	case "J/mol/K":
+		return 1, true
+	case "kcal/mol/K":
+		return 4184, true
+	case "kJ/mol/K":
+		return 1000, true
+	}
+	return 0, false
+}
 
-var pressureUnits = map[string]float64{"atm": PascalsPerAtm, "bar": PascalsPerBar, "Pa": 1, "kPa": 1000, "Torr": PascalsPerTorr}
+// pressureUnit returns Pa per unit u of pressure.
+func pressureUnit(u string) (float64, bool) {
+	switch u {
+	case "atm":
+		return PascalsPerAtm, true
+	case "bar":
+		return PascalsPerBar, true
+	case "Pa":
+		return 1, true
+	case "kPa":
+		return 1000, true
+	case "Torr":
+		return PascalsPerTorr, true
+	}
+	return 0, false
+}
 
 var unitLists = [...]string{
 	kEnergy:   "kcal/mol, kJ/mol, cal/mol or J/mol",
@@ -1422,7 +1577,7 @@ func scanNumber(s string) int {
 // number parses tok as a number of the given kind, reporting errors.
 func (p *parser) number(tok Token, kind unitKind) (Number, bool) {
 	s := tok.Text
-	n := scanNumber(s)
+	n, v, err := parseNumber(s)
 	if n == 0 {
 		if s == "" {
 			p.errAt(tok.Span, "expected a number")
@@ -1435,12 +1590,14 @@ func (p *parser) number(tok Token, kind unitKind) (Number, bool) {
 		p.errAt(tok.Span, "malformed number %q: the exponent letter is e, not %c (write %se%s)", s, unit[0], s[:n], unit[1:])
 		return Number{}, false
 	}
-	v, err := strconv.ParseFloat(s[:n], 64)
 	if err != nil {
 		p.errAt(tok.Span, "number out of range: %q", s)
 		return Number{}, false
 	}
-	num := Number{Tok: tok, Value: v, Unit: s[n:]}
+	num := Number{Tok: tok, Value: v}
+	if n < len(s) {
+		num.Unit = s[n:] // else leave the nil string: one pointer less for the GC
+	}
 	factor := 1.0
 	var ok bool
 	switch kind {
@@ -1456,13 +1613,13 @@ func (p *parser) number(tok Token, kind unitKind) (Number, bool) {
 		} else if kind == kEa && num.Unit == "K" {
 			factor, ok = GasConstant, true
 		} else {
-			factor, ok = energyUnits[num.Unit]
+			factor, ok = energyUnit(num.Unit)
 		}
 	case kEntropy:
 		if num.Unit == "" {
 			factor, ok = p.entropyFactor, true
 		} else {
-			factor, ok = entropyUnits[num.Unit]
+			factor, ok = entropyUnit(num.Unit)
 		}
 	case kTemp:
 		ok = num.Unit == "" || num.Unit == "K"
@@ -1471,7 +1628,7 @@ func (p *parser) number(tok Token, kind unitKind) (Number, bool) {
 			p.errAt(tok.Span, "pressure %q needs a unit: %s", s, unitLists[kPressure])
 			return Number{}, false
 		}
-		factor, ok = pressureUnits[num.Unit]
+		factor, ok = pressureUnit(num.Unit)
 	}
 	if !ok {
 		p.errAt(tok.Span, "unknown unit %q in %q: expected %s", num.Unit, s, unitLists[kind])

@@ -147,7 +147,7 @@ func TestLookup(t *testing.T) {
 		{"[O][O]", 0, "O2"},
 		{"O=O", 3, "O2"},
 		{"O=O", 0, "O2"}, // no multiplicity: the ground state, triplet O2
-		{"O=O", 1, ""}, // singlet O2 is not in the library
+		{"O=O", 1, ""},   // singlet O2 is not in the library
 		{"O", 0, "H2O"},
 		{"[OH]", 0, "OH"},
 		{"O[O]", 0, "HO2"},
