@@ -96,19 +96,22 @@ type Estimate struct {
 	Hf298, S298   float64    // J/mol, J/(mol K)
 	Cp            [7]float64 // J/(mol K) at benson.StdTemps
 	Uncertainty   float64    // J/mol
-	// Poly is the fitted (or library) NASA-7 polynomial; Fit reports its quality.
-	Poly   nasa.NASA7
-	Fit    nasa.FitReport
-	FitErr error
+	// The NASA-7 polynomial comes from NASA7(), the model for reaction
+	// thermochemistry from Thermo().
+	libPoly    nasa.NASA7
+	model      *groupThermo
+	fit        *fitResult
+	cp0, cpInf float64 // classical limits for the fit (J/(mol K))
+	tMid       float64
+	tHigh      float64
 }
 
 // GivenThermo is the thermochemistry written in the file for a species.
 type GivenThermo struct {
-	Poly  *nasa.NASA7 // from a nasa7 block, or fitted to a thermo-table block
+	Poly  *nasa.NASA7 // from a nasa7 block
 	Table *Table      // from a thermo-table block
-	// Fitted is true when Poly was fitted by kiln to Table.
-	Fitted bool
-	Span   speciesfile.Span
+	Span  speciesfile.Span
+	model *groupThermo // the table integrated, for reaction thermochemistry
 }
 
 // Table is a thermo-table block in SI units.

@@ -37,6 +37,8 @@ type analysis struct {
 	order []string
 	// parsed holds the structures read ahead by prepare.
 	parsed map[*speciesfile.Species]parsed
+	// userKey identifies the user-defined groups in estimate cache keys.
+	userKey string
 }
 
 func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {

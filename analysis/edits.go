@@ -56,7 +56,10 @@ func (r *Result) blockSource(sp *Species) string {
 // InsertThermoEdit returns the insertion of an estimated nasa7 block under
 // species sp, which must be declared in the analysed file and have no block.
 func (r *Result) InsertThermoEdit(sp *Species) (Edit, bool) {
-	if sp == nil || sp.Loc.File != r.Path || sp.Decl.NASA7 != nil || sp.Decl.Table != nil || sp.Estimate == nil || sp.Estimate.FitErr != nil {
+	if sp == nil || sp.Loc.File != r.Path || sp.Decl.NASA7 != nil || sp.Decl.Table != nil || sp.Estimate == nil {
+		return Edit{}, false
+	}
+	if _, _, err := sp.Estimate.NASA7(); err != nil {
 		return Edit{}, false
 	}
 	off, indent, nl := r.File.ThermoInsertion(sp.Decl)
@@ -72,14 +75,17 @@ func endsWithNewline(b []byte) bool {
 }
 
 func (r *Result) blockText(sp *Species, indent, nl string) string {
-	p := sp.Estimate.Poly
+	p, _, _ := sp.Estimate.NASA7()
 	return speciesfile.FormatNASA7Block(indent, p.TLow, p.TMid, p.THigh, p.Low, p.High, r.blockSource(sp), nl)
 }
 
 // ReplaceThermoEdit returns the replacement of species sp's own thermo block
 // by the estimated nasa7 block.
 func (r *Result) ReplaceThermoEdit(sp *Species) (Edit, bool) {
-	if sp == nil || sp.Loc.File != r.Path || sp.Given == nil || sp.Estimate == nil || sp.Estimate.FitErr != nil {
+	if sp == nil || sp.Loc.File != r.Path || sp.Given == nil || sp.Estimate == nil {
+		return Edit{}, false
+	}
+	if _, _, err := sp.Estimate.NASA7(); err != nil {
 		return Edit{}, false
 	}
 	span := sp.Given.Span

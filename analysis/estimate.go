@@ -3,6 +3,7 @@ package analysis
 import (
 	"fmt"
 	"sort"
+	"strconv"
 	"strings"
 	"sync"
 
@@ -17,14 +18,39 @@ type EstimateOptions struct {
 	Multiplicity, Symmetry, OpticalIsomers int // 0 = computed from the structure
 	UserGroups                             []benson.GroupValue
 	TMid, THigh                            float64
+
+	userKey string // groupsKey(UserGroups), computed once per analysis
 }
 
 // key identifies an estimate in the cache: the canonical structure and every
 // option that changes the numbers.
 func (o EstimateOptions) key(m *molecule.Molecule) string {
 	var b strings.Builder
-	fmt.Fprintf(&b, "%s|%s|%d|%d|%d|%g|%g", m.Canonical(), m.CanonicalStereo(), o.Multiplicity, o.Symmetry, o.OpticalIsomers, o.TMid, o.THigh)
-	for _, g := range o.UserGroups {
+	b.Grow(64)
+	b.WriteString(m.Canonical())
+	b.WriteByte('|')
+	b.WriteString(m.CanonicalStereo())
+	for _, n := range []int{o.Multiplicity, o.Symmetry, o.OpticalIsomers} {
+		b.WriteByte('|')
+		b.WriteString(strconv.Itoa(n))
+	}
+	for _, f := range []float64{o.TMid, o.THigh} {
+		b.WriteByte('|')
+		b.WriteString(strconv.FormatFloat(f, 'g', -1, 64))
+	}
+	if len(o.UserGroups) > 0 {
+		if o.userKey == "" {
+			o.userKey = groupsKey(o.UserGroups)
+		}
+		b.WriteString(o.userKey)
+	}
+	return b.String()
+}
+
+// groupsKey identifies a set of user-defined group values.
+func groupsKey(gs []benson.GroupValue) string {
+	var b strings.Builder
+	for _, g := range gs {
 		fmt.Fprintf(&b, "|%s:%g:%g:%v", g.Name, g.Hf298, g.S298, g.Cp)
 	}
 	return b.String()
@@ -89,7 +115,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 			LibrarySource: sp.Source,
 			Hf298:         sp.Hf298,
 			S298:          sp.S298,
-			Poly:          sp.Poly,
+			libPoly:       sp.Poly,
 		}
 		for i, T := range benson.StdTemps {
 			e.Cp[i] = sp.Poly.Cp(T)
@@ -105,11 +131,11 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 	if err != nil {
 		return nil, err
 	}
-	e := &Estimate{Group: g, Hf298: g.Hf298, S298: g.S298, Cp: g.Cp, Uncertainty: g.Uncertainty}
+	e := &Estimate{Group: g, Hf298: g.Hf298, S298: g.S298, Cp: g.Cp, Uncertainty: g.Uncertainty,
+		fit: &fitResult{}, tMid: o.TMid, tHigh: o.THigh}
 	nAtoms, linear, rotors := shape(m)
-	cp0, cpInf := nasa.ClassicalLimits(nAtoms, linear, rotors)
-	T := benson.StdTemps[:]
-	e.Poly, e.Fit, e.FitErr = nasa.Fit(g.Hf298, g.S298, T, g.Cp[:], cp0, cpInf, nasa.FitOptions{TLow: 300, TMid: o.TMid, THigh: o.THigh})
+	e.cp0, e.cpInf = nasa.ClassicalLimits(nAtoms, linear, rotors)
+	e.model = newGroupThermo(g.Hf298, g.S298, benson.StdTemps[:], g.Cp[:])
 	return e, nil
 }
 

@@ -187,11 +187,11 @@ func (a *analysis) balance(path string, d *speciesfile.Reaction, r *Reaction) {
 func (a *analysis) side(ts []speciesfile.Term) (kinetics.Side, bool) {
 	var out kinetics.Side
 	for _, t := range ts {
-		p := a.res.ByName[t.Name.Text].Thermo()
-		if p == nil {
+		th := a.res.ByName[t.Name.Text].Thermo()
+		if th == nil {
 			return nil, false
 		}
-		out = append(out, kinetics.Term{Coeff: t.Coeff, Thermo: *p})
+		out = append(out, kinetics.Term{Coeff: t.Coeff, Thermo: th})
 	}
 	return out, true
 }

@@ -11,6 +11,7 @@ import (
 	"sync"
 
 	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/kinetics"
 	"kiln.dev/kiln/engine/molecule"
 	"kiln.dev/kiln/engine/nasa"
 	"kiln.dev/kiln/speciesfile"
@@ -101,6 +102,9 @@ func (a *analysis) prepare(user []benson.GroupValue) error {
 		}
 	}
 	a.parsed = make(map[*speciesfile.Species]parsed, len(decls))
+	if len(user) > 0 {
+		a.userKey = groupsKey(user) // before the workers read it
+	}
 	results := make([]parsed, len(decls))
 	workers := runtime.GOMAXPROCS(0)
 	if workers > len(decls)/64+1 {
@@ -142,6 +146,7 @@ func (a *analysis) prepare(user []benson.GroupValue) error {
 
 func (a *analysis) estimateOptions(d *speciesfile.Species, user []benson.GroupValue) EstimateOptions {
 	return EstimateOptions{
+		userKey:        a.userKey,
 		Multiplicity:   intAttr(d.Multiplicity),
 		Symmetry:       intAttr(d.Symmetry),
 		OpticalIsomers: intAttr(d.OpticalIsomers),
@@ -237,13 +242,8 @@ func (a *analysis) given(path string, sp *Species) {
 			tab.Cp = append(tab.Cp, p.Cp.SI)
 		}
 		g := &GivenThermo{Table: tab, Span: t.Span}
-		if len(tab.T) >= 2 {
-			n, lin, rot := a.shapeOf(sp)
-			cp0, cpInf := nasa.ClassicalLimits(n, lin, rot)
-			if p, _, err := nasa.Fit(tab.Hf298, tab.S298, tab.T, tab.Cp, cp0, cpInf, nasa.FitOptions{TLow: 300, TMid: a.set.TMid, THigh: a.set.THigh}); err == nil {
-				g.Poly = &p
-				g.Fitted = true
-			}
+		if len(tab.T) > 0 {
+			g.model = newGroupThermo(tab.Hf298, tab.S298, tab.T, tab.Cp)
 		}
 		sp.Given = g
 	default:
@@ -292,7 +292,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		return
 	}
 	g := sp.Given
-	if g.Poly != nil && !g.Fitted {
+	if g.Poly != nil {
 		cpMax := 0.0
 		if sp.Mol != nil || len(sp.Composition) > 0 {
 			n, lin, rot := a.shapeOf(sp)
@@ -390,17 +390,20 @@ func (sp *Species) givenAt298() (hf, s float64, ok bool) {
 // T298 is the reference temperature, 298.15 K.
 const T298 = 298.15
 
-// Thermo returns the polynomial the analysis uses for the species (the
-// file's where given, else the estimate's), or nil.
-func (sp *Species) Thermo() *nasa.NASA7 {
+// Thermo returns the thermochemistry the analysis uses for the species: the
+// file's polynomial where given, else the estimate's model; nil when there
+// is none.
+func (sp *Species) Thermo() kinetics.Thermo {
 	switch sp.Source {
 	case SourceFile:
-		return sp.Given.Poly
-	case SourceEstimate:
-		if sp.Estimate.FitErr != nil {
-			return nil
+		if sp.Given.Poly != nil {
+			return *sp.Given.Poly
 		}
-		return &sp.Estimate.Poly
+		if sp.Given.model != nil {
+			return sp.Given.model
+		}
+	case SourceEstimate:
+		return sp.Estimate.Thermo()
 	}
 	return nil
 }

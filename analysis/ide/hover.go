@@ -159,8 +159,7 @@ func estimateValues(e *analysis.Estimate) *thermoValues {
 		return nil
 	}
 	v := &thermoValues{hf: e.Hf298, s: e.S298, cp: e.Cp}
-	if e.FitErr == nil {
-		p := e.Poly
+	if p, _, err := e.NASA7(); err == nil {
 		v.poly = &p
 	}
 	return v
@@ -353,10 +352,10 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		}
 		w.line(unc)
 	}
-	if e.FitErr != nil {
-		w.line("NASA-7 fit failed: " + e.FitErr.Error())
-	} else if e.Fit.MaxCpResidual > 0 {
-		w.line("NASA-7 fit: worst Cp residual " + w.u.entropy(e.Fit.MaxCpResidual))
+	if _, fit, err := e.NASA7(); err != nil {
+		w.line("NASA-7 fit failed: " + err.Error())
+	} else if fit.MaxCpResidual > 0 {
+		w.line("NASA-7 fit: worst Cp residual " + w.u.entropy(fit.MaxCpResidual))
 	}
 }
 

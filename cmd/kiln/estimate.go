@@ -163,12 +163,13 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		// so that the breakdown still sums to the totals.
 		r.Groups = append(r.Groups, groupJSON{Name: "reference: " + est.Library, Count: 1, Hf298: est.Hf298 / 1000, S298: est.S298, Source: est.LibrarySource})
 	}
-	if withNASA && est.FitErr == nil {
-		p := est.Poly
-		r.NASA7 = &nasaJSON{TLow: p.TLow, TMid: p.TMid, THigh: p.THigh, Low: p.Low, High: p.High, MaxCpResidual: est.Fit.MaxCpResidual}
-	}
-	if withNASA && est.FitErr != nil {
-		r.Error = &errorJSON{Message: "NASA-7 fit failed: " + est.FitErr.Error()}
+	if withNASA {
+		p, fit, err := est.NASA7()
+		if err != nil {
+			r.Error = &errorJSON{Message: "NASA-7 fit failed: " + err.Error()}
+		} else {
+			r.NASA7 = &nasaJSON{TLow: p.TLow, TMid: p.TMid, THigh: p.THigh, Low: p.Low, High: p.High, MaxCpResidual: fit.MaxCpResidual}
+		}
 	}
 	return r, est
 }
@@ -211,9 +212,8 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, set 
 		fmt.Fprintf(w, " %gK:%.2f", T, est.Cp[i]/4.184)
 	}
 	fmt.Fprintf(w, "  cal/(mol·K)\n")
-	if withNASA && est.FitErr == nil {
-		p := est.Poly
-		fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %.3f J/(mol·K)):\n", est.Fit.MaxCpResidual)
+	if p, fit, err := est.NASA7(); withNASA && err == nil {
+		fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %.3f J/(mol·K)):\n", fit.MaxCpResidual)
 		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, "kiln "+Version+" estimate", "\n"))
 	}
 	fmt.Fprintln(w, "  Group additivity typically errs by 1–3 kcal/mol; check against measured data before relying on it.")

@@ -3,6 +3,7 @@ package main
 import (
 	"bytes"
 	"fmt"
+	"math"
 
 	"kiln.dev/kiln/engine/benson"
 	"kiln.dev/kiln/internal/thermoplot"
@@ -37,8 +38,11 @@ func runPlot(e env, args []string) (int, error) {
 	}
 	var series []thermoplot.Series
 	tMax := set.THigh
-	if est := sp.Estimate; est != nil && est.FitErr == nil {
-		poly := est.Poly
+	if est := sp.Estimate; est != nil {
+		poly, _, err := est.NASA7()
+		if err != nil {
+			return 0, fmt.Errorf("fitting %s: %w", sp.Name, err)
+		}
 		cp := est.Cp
 		series = append(series,
 			thermoplot.Series{Name: "group estimate", Points: true, T: benson.StdTemps[:], Eval: func(T float64) (float64, float64, float64) {
@@ -54,12 +58,21 @@ func runPlot(e env, args []string) (int, error) {
 	}
 	if g := sp.Given; g != nil && g.Poly != nil {
 		p := *g.Poly
-		name := "file block"
-		if g.Fitted {
-			name = "file table (fitted)"
-		}
-		series = append(series, thermoplot.Series{Name: name, Eval: func(T float64) (float64, float64, float64) { return p.Cp(T), p.H(T), p.S(T) }})
+		series = append(series, thermoplot.Series{Name: "file block", Eval: func(T float64) (float64, float64, float64) { return p.Cp(T), p.H(T), p.S(T) }})
 		tMax = max(tMax, p.THigh)
+	}
+	if g := sp.Given; g != nil && g.Table != nil && len(g.Table.T) > 0 {
+		th := sp.Thermo()
+		tab := g.Table
+		series = append(series, thermoplot.Series{Name: "file table", Points: true, T: tab.T, Eval: func(T float64) (float64, float64, float64) {
+			cp := math.NaN() // a points series is evaluated at its own temperatures only
+			for i, t := range tab.T {
+				if t == T {
+					cp = tab.Cp[i]
+				}
+			}
+			return cp, th.H(T), th.S(T)
+		}})
 	}
 	if len(series) == 0 {
 		return 0, fmt.Errorf("%s has neither a thermo block nor an estimate to plot", sp.Name)
