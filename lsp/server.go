@@ -127,7 +127,13 @@ func Serve(ctx context.Context, stream io.ReadWriteCloser, logger *zap.Logger, o
 	}
 	cancel()
 	s.conn.Close()
-	<-s.conn.Done()
+	// The read loop may stay blocked on a stream that cannot be closed from
+	// here (a process's stdin): give it a moment, then return regardless so
+	// that the process can exit as the protocol asks.
+	select {
+	case <-s.conn.Done():
+	case <-time.After(200 * time.Millisecond):
+	}
 	s.wg.Wait()
 	return err
 }

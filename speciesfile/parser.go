@@ -937,15 +937,12 @@ func (p *parser) nasaLine(l srcLine, lt []Token, b *NASA7Block, set *attrSet) {
 		p.errAt(at, "expected 7 coefficients after %s, found %d", key.Text, len(nums))
 		return
 	}
-	var out [7]Number
 	for i, tk := range nums {
-		n, ok := p.number(tk, kDimless)
-		if !ok {
+		if !p.numberInto(&dst[i], tk, kDimless) {
+			*dst = [7]Number{} // all or nothing
 			return
 		}
-		out[i] = n
 	}
-	*dst = out
 	if id == 0 {
 		b.LowSpan = lineSpan(l)
 	} else {
@@ -1576,6 +1573,14 @@ func scanNumber(s string) int {
 
 // number parses tok as a number of the given kind, reporting errors.
 func (p *parser) number(tok Token, kind unitKind) (Number, bool) {
+	var num Number
+	ok := p.numberInto(&num, tok, kind)
+	return num, ok
+}
+
+// numberInto is number storing into *dst, which it writes only on success
+// (this saves copying the result when dst is already its final place).
+func (p *parser) numberInto(dst *Number, tok Token, kind unitKind) bool {
 	s := tok.Text
 	n, v, err := parseNumber(s)
 	if n == 0 {
@@ -1584,58 +1589,58 @@ func (p *parser) number(tok Token, kind unitKind) (Number, bool) {
 		} else {
 			p.errAt(tok.Span, "expected a number, found %q", s)
 		}
-		return Number{}, false
+		return false
 	}
 	if unit := s[n:]; len(unit) > 0 && (unit[0] == 'd' || unit[0] == 'D') && scanNumber("1e"+unit[1:]) == len(unit)+1 {
 		p.errAt(tok.Span, "malformed number %q: the exponent letter is e, not %c (write %se%s)", s, unit[0], s[:n], unit[1:])
-		return Number{}, false
+		return false
 	}
 	if err != nil {
 		p.errAt(tok.Span, "number out of range: %q", s)
-		return Number{}, false
+		return false
 	}
-	num := Number{Tok: tok, Value: v}
+	var unit string // the nil string when there is no unit: one pointer less for the GC
 	if n < len(s) {
-		num.Unit = s[n:] // else leave the nil string: one pointer less for the GC
+		unit = s[n:]
 	}
 	factor := 1.0
 	var ok bool
 	switch kind {
 	case kDimless:
-		ok = num.Unit == ""
+		ok = unit == ""
 		if !ok {
 			p.errAt(tok.Span, "malformed number %q", s)
-			return Number{}, false
+			return false
 		}
 	case kEnergy, kEa:
-		if num.Unit == "" {
+		if unit == "" {
 			factor, ok = p.energyFactor, true
-		} else if kind == kEa && num.Unit == "K" {
+		} else if kind == kEa && unit == "K" {
 			factor, ok = GasConstant, true
 		} else {
-			factor, ok = energyUnit(num.Unit)
+			factor, ok = energyUnit(unit)
 		}
 	case kEntropy:
-		if num.Unit == "" {
+		if unit == "" {
 			factor, ok = p.entropyFactor, true
 		} else {
-			factor, ok = entropyUnit(num.Unit)
+			factor, ok = entropyUnit(unit)
 		}
 	case kTemp:
-		ok = num.Unit == "" || num.Unit == "K"
+		ok = unit == "" || unit == "K"
 	case kPressure:
-		if num.Unit == "" {
+		if unit == "" {
 			p.errAt(tok.Span, "pressure %q needs a unit: %s", s, unitLists[kPressure])
-			return Number{}, false
+			return false
 		}
-		factor, ok = pressureUnit(num.Unit)
+		factor, ok = pressureUnit(unit)
 	}
 	if !ok {
-		p.errAt(tok.Span, "unknown unit %q in %q: expected %s", num.Unit, s, unitLists[kind])
-		return Number{}, false
+		p.errAt(tok.Span, "unknown unit %q in %q: expected %s", unit, s, unitLists[kind])
+		return false
 	}
-	num.SI = v * factor
-	return num, true
+	dst.Tok, dst.Value, dst.Unit, dst.SI = tok, v, unit, v*factor
+	return true
 }
 
 // ParseFormula parses an element formula such as "C10H8" or "CH3O" into
