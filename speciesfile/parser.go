@@ -937,12 +937,15 @@ func (p *parser) nasaLine(l srcLine, lt []Token, b *NASA7Block, set *attrSet) {
 		p.errAt(at, "expected 7 coefficients after %s, found %d", key.Text, len(nums))
 		return
 	}
+	var out [7]Number
 	for i, tk := range nums {
-		if !p.numberInto(&dst[i], tk, kDimless) {
-			*dst = [7]Number{} // all or nothing
+		n, ok := p.number(tk, kDimless)
+		if !ok {
 			return
 		}
+		out[i] = n
 	}
+	*dst = out
 	if id == 0 {
 		b.LowSpan = lineSpan(l)
 	} else {
@@ -1573,14 +1576,6 @@ func scanNumber(s string) int {
 
 // number parses tok as a number of the given kind, reporting errors.
 func (p *parser) number(tok Token, kind unitKind) (Number, bool) {
-	var num Number
-	ok := p.numberInto(&num, tok, kind)
-	return num, ok
-}
-
-// numberInto is number storing into *dst, which it writes only on success
-// (this saves copying the result when dst is already its final place).
-func (p *parser) numberInto(dst *Number, tok Token, kind unitKind) bool {
 	s := tok.Text
 	n, v, err := parseNumber(s)
 	if n == 0 {
@@ -1589,58 +1584,58 @@ func (p *parser) numberInto(dst *Number, tok Token, kind unitKind) bool {
 		} else {
 			p.errAt(tok.Span, "expected a number, found %q", s)
 		}
-		return false
+		return Number{}, false
 	}
 	if unit := s[n:]; len(unit) > 0 && (unit[0] == 'd' || unit[0] == 'D') && scanNumber("1e"+unit[1:]) == len(unit)+1 {
 		p.errAt(tok.Span, "malformed number %q: the exponent letter is e, not %c (write %se%s)", s, unit[0], s[:n], unit[1:])
-		return false
+		return Number{}, false
 	}
 	if err != nil {
 		p.errAt(tok.Span, "number out of range: %q", s)
-		return false
+		return Number{}, false
 	}
-	var unit string // the nil string when there is no unit: one pointer less for the GC
+	num := Number{Tok: tok, Value: v}
 	if n < len(s) {
-		unit = s[n:]
+		num.Unit = s[n:] // else leave the nil string: one pointer less for the GC
 	}
 	factor := 1.0
 	var ok bool
 	switch kind {
 	case kDimless:
-		ok = unit == ""
+		ok = num.Unit == ""
 		if !ok {
 			p.errAt(tok.Span, "malformed number %q", s)
-			return false
+			return Number{}, false
 		}
 	case kEnergy, kEa:
-		if unit == "" {
+		if num.Unit == "" {
 			factor, ok = p.energyFactor, true
-		} else if kind == kEa && unit == "K" {
+		} else if kind == kEa && num.Unit == "K" {
 			factor, ok = GasConstant, true
 		} else {
-			factor, ok = energyUnit(unit)
+			factor, ok = energyUnit(num.Unit)
 		}
 	case kEntropy:
-		if unit == "" {
+		if num.Unit == "" {
 			factor, ok = p.entropyFactor, true
 		} else {
-			factor, ok = entropyUnit(unit)
+			factor, ok = entropyUnit(num.Unit)
 		}
 	case kTemp:
-		ok = unit == "" || unit == "K"
+		ok = num.Unit == "" || num.Unit == "K"
 	case kPressure:
-		if unit == "" {
+		if num.Unit == "" {
 			p.errAt(tok.Span, "pressure %q needs a unit: %s", s, unitLists[kPressure])
-			return false
+			return Number{}, false
 		}
-		factor, ok = pressureUnit(unit)
+		factor, ok = pressureUnit(num.Unit)
 	}
 	if !ok {
-		p.errAt(tok.Span, "unknown unit %q in %q: expected %s", unit, s, unitLists[kind])
-		return false
+		p.errAt(tok.Span, "unknown unit %q in %q: expected %s", num.Unit, s, unitLists[kind])
+		return Number{}, false
 	}
-	dst.Tok, dst.Value, dst.Unit, dst.SI = tok, v, unit, v*factor
-	return true
+	num.SI = v * factor
+	return num, true
 }
 
 // ParseFormula parses an element formula such as "C10H8" or "CH3O" into
