@@ -274,7 +274,7 @@ func (a *analysis) structure(path string, sp *Species) {
 	}
 	p, ok := a.parsed[sp.Decl]
 	if !ok {
-		p.mol, p.err = molecule.ParseSMILES(tok.Text)
+		p = a.w.mols.parse(tok.Text)
 	}
 	m, err := p.mol, p.err
 	if err != nil {

@@ -218,3 +218,38 @@ func ringBonds(m *molecule.Molecule) []bool {
 	}
 	return out
 }
+
+// moleculeCache remembers structures by SMILES text: a molecule is read-only
+// once parsed and caches its own canonical form and symmetry, so a
+// re-analysis after an edit reads and canonicalises only new structures.
+type moleculeCache struct {
+	mu sync.Mutex
+	m  map[string]parsed
+}
+
+func newMoleculeCache() *moleculeCache { return &moleculeCache{m: map[string]parsed{}} }
+
+// maxCachedMolecules bounds the cache; past it the cache starts afresh.
+const maxCachedMolecules = 200000
+
+// parse returns the structure of smiles, from the cache when it was read before.
+func (c *moleculeCache) parse(smiles string) parsed {
+	c.mu.Lock()
+	p, ok := c.m[smiles]
+	c.mu.Unlock()
+	if ok {
+		return p
+	}
+	m, err := molecule.ParseSMILES(smiles)
+	if err == nil {
+		m.Canonical() // computed once here, off the sequential pass
+	}
+	p = parsed{m, err}
+	c.mu.Lock()
+	if len(c.m) >= maxCachedMolecules {
+		c.m = map[string]parsed{}
+	}
+	c.m[smiles] = p
+	c.mu.Unlock()
+	return p
+}

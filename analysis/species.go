@@ -125,11 +125,11 @@ func (a *analysis) prepare(user []benson.GroupValue) error {
 					return
 				}
 				d := decls[i]
-				m, err := molecule.ParseSMILES(d.SMILES.Text)
-				results[i] = parsed{m, err}
-				if err == nil {
+				p := a.w.mols.parse(d.SMILES.Text)
+				results[i] = p
+				if p.err == nil {
 					// Errors are reported by the sequential pass.
-					_, _ = a.w.EstimateMolecule(m, a.estimateOptions(d, user))
+					_, _ = a.w.EstimateMolecule(p.mol, a.estimateOptions(d, user))
 				}
 			}
 		}()
@@ -397,7 +397,7 @@ func (sp *Species) Thermo() kinetics.Thermo {
 	switch sp.Source {
 	case SourceFile:
 		if sp.Given.Poly != nil {
-			return *sp.Given.Poly
+			return sp.Given.Poly
 		}
 		if sp.Given.model != nil {
 			return sp.Given.model

@@ -134,7 +134,7 @@ func (e *Estimate) NASA7() (nasa.NASA7, nasa.FitReport, error) {
 // library polynomial, or the group values integrated (groupThermo).
 func (e *Estimate) Thermo() kinetics.Thermo {
 	if e.Library != "" {
-		return e.libPoly
+		return &e.libPoly // a pointer: no copy of the coefficients per call
 	}
 	return e.model
 }

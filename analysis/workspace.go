@@ -22,6 +22,7 @@ type Workspace struct {
 	settings Settings
 	overlay  map[string][]byte // open documents: path → text
 	cache    *estimateCache
+	mols     *moleculeCache
 }
 
 // Result is the analysis of one file together with the files it includes.
@@ -66,7 +67,7 @@ type Group struct {
 // NewWorkspace returns a workspace rooted at root (includes must stay inside
 // it) that reads files it does not hold through load.
 func NewWorkspace(root string, load Loader, s Settings) *Workspace {
-	return &Workspace{root: root, load: load, settings: s, overlay: map[string][]byte{}, cache: newEstimateCache()}
+	return &Workspace{root: root, load: load, settings: s, overlay: map[string][]byte{}, cache: newEstimateCache(), mols: newMoleculeCache()}
 }
 
 // Root returns the workspace root directory.

@@ -156,20 +156,30 @@ func CollisionCheck(order int, masses []float64, heavyAtoms []int, rate func(T f
 	if tmin > tmax {
 		tmin, tmax = tmax, tmin
 	}
+	// The bound scales as T (unimolecular) or √T (bimolecular): evaluate it
+	// once and scale it along the grid.
+	lim0, ok := CollisionLimit(order, masses, heavyAtoms, tmin, s)
+	if !ok {
+		return nil
+	}
+	power := 0.5
+	if order == 1 {
+		power = 1
+	}
 	var worst *Violation
+	step := math.Pow(tmax/tmin, 1/float64(CollisionGridPoints-1))
+	T := tmin
 	for i := range CollisionGridPoints {
-		T := tmin * math.Pow(tmax/tmin, float64(i)/float64(CollisionGridPoints-1))
-		lim, ok := CollisionLimit(order, masses, heavyAtoms, T, s)
-		if !ok {
-			return nil
+		if i == CollisionGridPoints-1 {
+			T = tmax // no drift at the end of the grid
 		}
-		k := rate(T)
-		if !(k > lim) { // also skips NaN
-			continue
+		lim := lim0 * math.Pow(T/tmin, power)
+		if k := rate(T); k > lim { // also skips NaN
+			if worst == nil || k/lim > worst.Rate/worst.Limit {
+				worst = &Violation{T: T, Rate: k, Limit: lim, Order: order}
+			}
 		}
-		if worst == nil || k/lim > worst.Rate/worst.Limit {
-			worst = &Violation{T: T, Rate: k, Limit: lim, Order: order}
-		}
+		T *= step
 	}
 	return worst
 }
