@@ -140,4 +140,5 @@ type Reaction struct {
 	Collision       *kinetics.Violation
 
 	reactants, products kinetics.Side // thermo of each side, nil when unknown
+	diags               []speciesfile.Diagnostic
 }

@@ -26,10 +26,8 @@ type EstimateOptions struct {
 // option that changes the numbers.
 func (o EstimateOptions) key(m *molecule.Molecule) string {
 	var b strings.Builder
-	b.Grow(64)
-	b.WriteString(m.Canonical())
-	b.WriteByte('|')
-	b.WriteString(m.CanonicalStereo())
+	b.Grow(96)
+	b.WriteString(identity(m))
 	for _, n := range []int{o.Multiplicity, o.Symmetry, o.OpticalIsomers} {
 		b.WriteByte('|')
 		b.WriteString(strconv.Itoa(n))
@@ -45,6 +43,12 @@ func (o EstimateOptions) key(m *molecule.Molecule) string {
 		b.WriteString(o.userKey)
 	}
 	return b.String()
+}
+
+// identity is a structure's canonical form with its stereo: two molecules
+// with the same identity have the same estimate.
+func identity(m *molecule.Molecule) string {
+	return m.Canonical() + "|" + m.CanonicalStereo()
 }
 
 // groupsKey identifies a set of user-defined group values.

@@ -3,9 +3,11 @@ package analysis
 import (
 	"fmt"
 	"math"
+	"runtime"
 	"sort"
 	"strconv"
 	"strings"
+	"sync"
 
 	"kiln.dev/kiln/engine/kinetics"
 	"kiln.dev/kiln/speciesfile"
@@ -51,6 +53,45 @@ func (a *analysis) reactions() error {
 			}
 			a.res.Reactions = append(a.res.Reactions, a.reaction(path, d))
 		}
+	}
+	return a.computeReactions()
+}
+
+// computeReactions works out balance, thermochemistry and rate checks of the
+// resolved reactions on all cores: each reaction depends only on the
+// species, which are settled by now. Diagnostics are merged in file order.
+func (a *analysis) computeReactions() error {
+	rs := a.res.Reactions
+	workers := min(runtime.GOMAXPROCS(0), len(rs)/256+1)
+	next := make(chan *Reaction, len(rs))
+	for _, r := range rs {
+		if r.Resolved {
+			next <- r
+		}
+	}
+	close(next)
+	var wg sync.WaitGroup
+	for range workers {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for r := range next {
+				if a.ctx.Err() != nil {
+					return
+				}
+				a.balance(r.Decl, r)
+				a.thermo(r.Decl, r)
+				a.rates(r.Decl, r)
+			}
+		}()
+	}
+	wg.Wait()
+	if err := a.ctx.Err(); err != nil {
+		return err
+	}
+	for _, r := range rs {
+		a.res.Diagnostics = append(a.res.Diagnostics, r.diags...)
+		r.diags = nil
 	}
 	return nil
 }
@@ -144,12 +185,6 @@ func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
 			undeclared(*c, "falloff collider")
 		}
 	}
-	if !r.Resolved {
-		return r
-	}
-	a.balance(path, d, r)
-	a.thermo(d, r)
-	a.rates(path, d, r)
 	return r
 }
 
@@ -170,7 +205,7 @@ func (a *analysis) weighted(ts []speciesfile.Term) ([]kinetics.Weighted, bool) {
 	return out, true
 }
 
-func (a *analysis) balance(path string, d *speciesfile.Reaction, r *Reaction) {
+func (a *analysis) balance(d *speciesfile.Reaction, r *Reaction) {
 	re, ok1 := a.weighted(d.Reactants)
 	pr, ok2 := a.weighted(d.Products)
 	if !ok1 || !ok2 {
@@ -179,7 +214,7 @@ func (a *analysis) balance(path string, d *speciesfile.Reaction, r *Reaction) {
 	b := kinetics.CheckBalance(re, pr)
 	r.Balance = &b
 	if !b.Balanced {
-		a.report(path, speciesfile.Diagnostic{Span: d.Equation, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUnbalancedReaction,
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: d.Equation, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUnbalancedReaction,
 			Message: "unbalanced reaction: " + b.Message()})
 	}
 }
@@ -297,7 +332,7 @@ func (a *analysis) sizes(ts []speciesfile.Term) (masses []float64, heavy []int) 
 	return masses, heavy
 }
 
-func (a *analysis) rates(path string, d *speciesfile.Reaction, r *Reaction) {
+func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 	kf, ok := forward(d)
 	if !ok {
 		return
@@ -314,7 +349,7 @@ func (a *analysis) rates(path string, d *speciesfile.Reaction, r *Reaction) {
 	m, h := a.sizes(d.Reactants)
 	if v := kinetics.CollisionCheck(molecularity(d.Reactants)+third, m, h, kf, set); v != nil {
 		r.Collision = v
-		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
 			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K", v.Rate, v.Limit, rateUnits(v.Order), v.T)})
 	}
 	if !d.Reversible {
@@ -343,7 +378,7 @@ func (a *analysis) rates(path string, d *speciesfile.Reaction, r *Reaction) {
 	if v := kinetics.CollisionCheck(molecularity(d.Products)+third, m, h, kr, set); v != nil {
 		v.Reverse = true
 		r.Collision = v
-		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
 			Message: fmt.Sprintf("reverse rate implied by thermochemistry, %.3g, exceeds the collision limit %.3g (%s) at %.0f K", v.Rate, v.Limit, rateUnits(v.Order), v.T)})
 	}
 }
