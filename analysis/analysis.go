@@ -83,7 +83,8 @@ type Species struct {
 	// Source tells which of Given or Estimate the analysis uses.
 	Source ThermoSource
 
-	estimateErr error // why a structure could not be estimated
+	estimateErr error  // why a structure could not be estimated
+	ident       string // identity(Mol), cached
 }
 
 // Estimate is the thermochemistry kiln computes for a structure.

@@ -295,10 +295,11 @@ func (a *analysis) structure(path string, sp *Species) {
 		return
 	}
 	sp.Mol = m
-	sp.Formula = m.Formula()
-	sp.Composition = m.Composition()
-	sp.Charge = m.Charge()
-	sp.MolarMass = m.MolarMass()
+	sp.Formula = p.formula
+	sp.Composition = p.composition
+	sp.Charge = p.charge
+	sp.MolarMass = p.molarMass
+	sp.ident = p.ident
 }
 
 // smilesReason strips the position prefix of a SMILES error (the diagnostic

@@ -24,10 +24,10 @@ type EstimateOptions struct {
 
 // key identifies an estimate in the cache: the canonical structure and every
 // option that changes the numbers.
-func (o EstimateOptions) key(m *molecule.Molecule) string {
+func (o EstimateOptions) key(ident string) string {
 	var b strings.Builder
-	b.Grow(96)
-	b.WriteString(identity(m))
+	b.Grow(len(ident) + 32)
+	b.WriteString(ident)
 	for _, n := range []int{o.Multiplicity, o.Symmetry, o.OpticalIsomers} {
 		b.WriteByte('|')
 		b.WriteString(strconv.Itoa(n))
@@ -83,8 +83,9 @@ func newEstimateCache() *estimateCache {
 // are cheap to recompute, memory is not free).
 const maxCacheEntries = 200000
 
-func (c *estimateCache) get(m *molecule.Molecule, o EstimateOptions) (*Estimate, error) {
-	k := o.key(m)
+// get returns the estimate of m (whose identity(m) is ident) with options o.
+func (c *estimateCache) get(ident string, m *molecule.Molecule, o EstimateOptions) (*Estimate, error) {
+	k := o.key(ident)
 	c.mu.Lock()
 	e, ok := c.m[k]
 	if !ok {
@@ -103,7 +104,7 @@ func (c *estimateCache) get(m *molecule.Molecule, o EstimateOptions) (*Estimate,
 // entry when the structure (and multiplicity) is one of the small species that
 // are not group additive, else Benson group additivity; then a NASA-7 fit.
 func (w *Workspace) EstimateMolecule(m *molecule.Molecule, o EstimateOptions) (*Estimate, error) {
-	return w.cache.get(m, o)
+	return w.cache.get(identity(m), m, o)
 }
 
 func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Estimate, error) {
@@ -245,10 +246,11 @@ func (c *moleculeCache) parse(smiles string) parsed {
 		return p
 	}
 	m, err := molecule.ParseSMILES(smiles)
+	p = parsed{mol: m, err: err}
 	if err == nil {
-		m.Canonical() // computed once here, off the sequential pass
+		p.formula, p.composition, p.charge, p.molarMass = m.Formula(), m.Composition(), m.Charge(), m.MolarMass()
+		p.ident = identity(m)
 	}
-	p = parsed{m, err}
 	c.mu.Lock()
 	if len(c.m) >= maxCachedMolecules {
 		c.m = map[string]parsed{}

@@ -7,6 +7,7 @@ import (
 	"math"
 	"runtime"
 	"sort"
+	"strconv"
 	"strings"
 	"sync"
 
@@ -53,7 +54,7 @@ func (a *analysis) species() error {
 				sp.MolarMass = MolarMassOf(comp)
 			}
 			if sp.Mol != nil {
-				key := sp.Mol.Canonical() + " " + sp.Mol.CanonicalStereo() + fmt.Sprintf(" m%d", intAttr(d.Multiplicity))
+				key := sp.ident + "|m" + strconv.Itoa(intAttr(d.Multiplicity))
 				if first, dup := byStructure[key]; dup {
 					a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
 						Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(first.Loc)),
@@ -87,6 +88,12 @@ func (a *analysis) species() error {
 type parsed struct {
 	mol *molecule.Molecule
 	err error
+	// Properties derived once per structure (the molecule is read-only).
+	formula     string
+	composition map[string]int
+	charge      int
+	molarMass   float64
+	ident       string // identity(mol)
 }
 
 // prepare reads every structure in scope and warms the estimate cache using
@@ -129,7 +136,7 @@ func (a *analysis) prepare(user []benson.GroupValue) error {
 				results[i] = p
 				if p.err == nil {
 					// Errors are reported by the sequential pass.
-					_, _ = a.w.EstimateMolecule(p.mol, a.estimateOptions(d, user))
+					_, _ = a.w.cache.get(p.ident, p.mol, a.estimateOptions(d, user))
 				}
 			}
 		}()
@@ -184,7 +191,7 @@ func shortPath(p string) string {
 
 func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.GroupValue) {
 	d := sp.Decl
-	e, err := a.w.EstimateMolecule(sp.Mol, a.estimateOptions(d, user))
+	e, err := a.w.cache.get(sp.ident, sp.Mol, a.estimateOptions(d, user))
 	if err != nil {
 		sp.estimateErr = err
 		return
