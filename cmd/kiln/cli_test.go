@@ -65,7 +65,7 @@ func TestEstimateErrors(t *testing.T) {
 	require.Len(t, arr, 2)
 	e := arr[0]["error"].(map[string]any)
 	assert.Contains(t, e["message"], "ring")
-	assert.Equal(t, 1.0, e["position"]) // the ring-bond digit
+	assert.Equal(t, 2.0, e["position"]) // the ring-bond digit, 1-based
 	assert.Nil(t, arr[0]["hf298_kj_mol"])
 	assert.Nil(t, arr[1]["error"])
 
@@ -273,4 +273,18 @@ func TestPlot(t *testing.T) {
 	code, _, stderr = runKiln(t, "plot", "nosuch", "--file", "../../examples/furnace.kiln", "-o", out)
 	assert.Equal(t, exitUsage, code)
 	assert.Contains(t, stderr, `no species named "nosuch"`)
+}
+
+// TestThresholdFlags: the mismatch threshold is settable from the command line.
+func TestThresholdFlags(t *testing.T) {
+	file := "../../testdata/check/broken.kiln"
+	_, out, _ := runKiln(t, "check", "--format", "json", file)
+	assert.Contains(t, out, "thermo-mismatch")
+	_, out, _ = runKiln(t, "check", "--format", "json", "--mismatch-hf", "50", file)
+	assert.NotContains(t, out, "thermo-mismatch", "a 36 kcal/mol difference is under a 50 kcal/mol threshold")
+	_, out, _ = runKiln(t, "check", "--format", "json", "--collision-factor", "1000", file)
+	assert.NotContains(t, out, "collision-limit")
+	code, _, stderr := runKiln(t, "check", "--mismatch-s", "-1", file)
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "--mismatch-s")
 }

@@ -3,6 +3,7 @@ package main
 import (
 	"context"
 	"fmt"
+	"math"
 	"os"
 	"path/filepath"
 	"strconv"
@@ -52,7 +53,8 @@ func workspaceRoot(file string) string {
 }
 
 // settingsFlags are the flags that adjust analysis settings, in every command.
-var settingsFlags = flagSpec{"units": true, "tmid": true, "thigh": true, "root": true}
+var settingsFlags = flagSpec{"units": true, "tmid": true, "thigh": true, "root": true,
+	"mismatch-hf": true, "mismatch-s": true, "collision-factor": true}
 
 func withSettings(spec flagSpec) flagSpec {
 	out := flagSpec{}
@@ -82,6 +84,22 @@ func settingsFrom(e env, flags map[string]string) (analysis.Settings, error) {
 				return s, usagef("--%s must be a temperature in K above 300, not %q", name, v)
 			}
 			*dst = f
+		}
+	}
+	for name, dst := range map[string]struct {
+		v     *float64
+		scale float64
+	}{
+		"mismatch-hf":      {&s.MismatchHf298, 4184}, // kcal/mol → J/mol
+		"mismatch-s":       {&s.MismatchS298, 4.184}, // cal/(mol K) → J/(mol K)
+		"collision-factor": {&s.CollisionFactor, 1},
+	} {
+		if v, ok := flags[name]; ok {
+			f, err := strconv.ParseFloat(v, 64)
+			if err != nil || !(f > 0) || math.IsInf(f, 0) {
+				return s, usagef("--%s must be a positive number, not %q", name, v)
+			}
+			*dst.v = f * dst.scale
 		}
 	}
 	if s.TMid >= s.THigh {

@@ -8,6 +8,7 @@ import (
 	"strconv"
 	"strings"
 	"text/tabwriter"
+	"unicode/utf8"
 
 	"kiln.dev/kiln/analysis"
 	"kiln.dev/kiln/engine/benson"
@@ -49,6 +50,8 @@ type correctionJSON struct {
 	S298  float64 `json:"s298_j_mol_k"`
 }
 
+// errorJSON is a failed estimate: position is the 1-based character position
+// in the input of the problem, null when the problem has no position.
 type errorJSON struct {
 	Message  string `json:"message"`
 	Position *int   `json:"position"`
@@ -128,7 +131,8 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 	if err != nil {
 		r.Error = &errorJSON{Message: err.Error()}
 		if se, ok := err.(*molecule.SMILESError); ok {
-			r.Error = &errorJSON{Message: se.Msg, Position: ptr(se.Pos)}
+			// 1-based character position, like the columns of `kiln check`.
+			r.Error = &errorJSON{Message: se.Msg, Position: ptr(utf8.RuneCountInString(in[:min(se.Pos, len(in))]) + 1)}
 		}
 		return r, nil
 	}
@@ -179,8 +183,8 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, set 
 	fmt.Fprintf(w, "%s\n", r.Input)
 	if r.Error != nil {
 		if r.Error.Position != nil {
-			fmt.Fprintf(w, "  error at position %d: %s\n", *r.Error.Position+1, r.Error.Message)
-			fmt.Fprintf(w, "    %s\n    %s^\n", r.Input, strings.Repeat(" ", len([]rune(r.Input[:min(*r.Error.Position, len(r.Input))]))))
+			fmt.Fprintf(w, "  error at position %d: %s\n", *r.Error.Position, r.Error.Message)
+			fmt.Fprintf(w, "    %s\n    %s^\n", r.Input, strings.Repeat(" ", *r.Error.Position-1))
 		} else {
 			fmt.Fprintf(w, "  error: %s\n", r.Error.Message)
 		}

@@ -99,9 +99,10 @@ Usage:
   kiln check FILE... [--format text|json] [--units kcal/mol|kJ/mol]
         Report problems as file:line:col: severity: message [code].
         Exit 0 without errors, 1 with errors, 2 on usage or I/O problems.
-  kiln estimate SMILES... [--json] [--nasa] [--tmid K] [--thigh K]
+  kiln estimate SMILES... [--json] [--nasa] [--multiplicity N] [--symmetry N] [--optical-isomers N]
         Estimate ΔHf°298, S°298 and Cp(T) by group additivity, with the breakdown.
-        --nasa adds a fitted NASA 7-coefficient polynomial.
+        --nasa adds a fitted NASA 7-coefficient polynomial. JSON errors give the
+        1-based character position in the SMILES.
   kiln summary FILE [--json] [--units kcal/mol|kJ/mol]
         Tabulate species thermo and reaction thermochemistry (ΔH°r, ΔG°r, Kp, k_r).
   kiln fill FILE [--dry-run] [--tmid K] [--thigh K]
@@ -114,9 +115,15 @@ Usage:
   kiln version
   kiln help
 
-Common flags: --root DIR sets the workspace root that includes must stay in
-(default: the nearest directory above the file holding .git, else the file's
-directory). Flags may stand before or after the operands.
+Common flags (every command; flags may stand before or after the operands):
+  --units kcal/mol|kJ/mol   energies in messages and tables (default kcal/mol)
+  --tmid K --thigh K        NASA-7 fit temperatures (default 1000 and 5000 K)
+  --mismatch-hf X           thermo-mismatch threshold on ΔHf°298, kcal/mol (default 3)
+  --mismatch-s X            thermo-mismatch threshold on S°298, cal/(mol·K) (default 3)
+  --collision-factor F      multiply the collision limit by F (default 1)
+  --root DIR                workspace root that includes must stay in (default: the
+                            nearest directory above the file holding .git, else
+                            the file's directory)
 
 Estimates are group-additivity estimates: they typically err by 1–3 kcal/mol.
 Check them against measured data, licensed engineering practice and local
