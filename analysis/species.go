@@ -194,6 +194,11 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 	e, err := a.w.cache.get(sp.ident, sp.Mol, a.estimateOptions(d, user))
 	if err != nil {
 		sp.estimateErr = err
+		var mg *benson.MissingGroupError
+		if errors.As(err, &mg) {
+			a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
+				Message: fmt.Sprintf("%s: no value for group %s and no group close enough to stand in; define it with a `group` statement", sp.Name, mg.Group)})
+		}
 		return
 	}
 	sp.Estimate = e

@@ -2,6 +2,7 @@ package benson
 
 import (
 	"fmt"
+	"slices"
 	"sort"
 	"strings"
 )
@@ -112,12 +113,9 @@ func addGroups(g *graph, l lookup, est *Result) error {
 		counts ligCounts
 		n      int
 	}
-	type key struct {
-		centre string
-		counts ligCounts
-	}
-	index := make(map[key]int, 8)
-	var list []acc
+	// A molecule has few distinct groups: a linear scan of list is cheaper
+	// than a map keyed by (centre, counts).
+	list := make([]acc, 0, 8)
 	for i := range g.m.Atoms {
 		centre, counts, ok := g.groupOf(i)
 		if !ok {
@@ -129,12 +127,15 @@ func addGroups(g *graph, l lookup, est *Result) error {
 		if _, known := centreLigands[centre]; !known {
 			return fmt.Errorf("benson: atom %d: element %s is outside the group tables", i+1, centre)
 		}
-		if k, ok := index[key{centre, counts}]; ok {
+		k := slices.IndexFunc(list, func(a acc) bool { return a.centre == centre && a.counts == counts })
+		if k >= 0 {
 			list[k].n++
 			continue
 		}
-		index[key{centre, counts}] = len(list)
 		list = append(list, acc{centre, counts, 1})
+	}
+	if est.Groups == nil && len(list) > 0 {
+		est.Groups = make([]Term, 0, len(list))
 	}
 	for _, a := range list {
 		name := groupName(a.centre, a.counts)
@@ -144,7 +145,7 @@ func addGroups(g *graph, l lookup, est *Result) error {
 		}
 		v, steps, ok := approximate(l, a.centre, a.counts)
 		if !ok {
-			return fmt.Errorf("benson: no value and no approximation for group %s (add it with a user group)", name)
+			return &MissingGroupError{Group: name}
 		}
 		t := term(v, a.n)
 		t.Name = name + " ≈ " + v.Name
@@ -156,4 +157,15 @@ func addGroups(g *graph, l lookup, est *Result) error {
 		})
 	}
 	return nil
+}
+
+// MissingGroupError reports a group with neither a value nor an
+// approximation: the estimate cannot be made until the user supplies the
+// group (Options.UserGroups).
+type MissingGroupError struct {
+	Group string // trade notation, e.g. "C-(N)(C)(H)2"
+}
+
+func (e *MissingGroupError) Error() string {
+	return fmt.Sprintf("benson: no value and no approximation for group %s (add it with a user group)", e.Group)
 }

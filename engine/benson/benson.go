@@ -26,6 +26,7 @@ package benson
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -149,7 +150,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	if est.Multiplicity > 1 {
 		est.Corrections = append(est.Corrections, Term{
-			Name: fmt.Sprintf("spin degeneracy R ln %d", est.Multiplicity), Count: 1,
+			Name: "spin degeneracy R ln " + strconv.Itoa(est.Multiplicity), Count: 1,
 			S298: R * math.Log(float64(est.Multiplicity)), Source: "statistical mechanics",
 		})
 	}
@@ -167,7 +168,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	if est.SymmetryNumber > 1 {
 		est.Corrections = append(est.Corrections, Term{
-			Name: fmt.Sprintf("symmetry -R ln %d", est.SymmetryNumber), Count: 1,
+			Name: "symmetry -R ln " + strconv.Itoa(est.SymmetryNumber), Count: 1,
 			S298: -R * math.Log(float64(est.SymmetryNumber)), Source: "statistical mechanics",
 		})
 	}
@@ -177,7 +178,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	if est.OpticalIsomers > 1 {
 		est.Corrections = append(est.Corrections, Term{
-			Name: fmt.Sprintf("optical isomers R ln %d", est.OpticalIsomers), Count: 1,
+			Name: "optical isomers R ln " + strconv.Itoa(est.OpticalIsomers), Count: 1,
 			S298: R * math.Log(float64(est.OpticalIsomers)), Source: "statistical mechanics",
 		})
 	}

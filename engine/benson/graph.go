@@ -21,23 +21,35 @@ type graph struct {
 
 func newGraph(m *molecule.Molecule) *graph {
 	n := len(m.Atoms)
-	g := &graph{m: m, nbr: make([][]int, n), nbrBond: make([][]int, n)}
+	deg := 0
+	for i := 0; i < n && i < len(m.Adj); i++ {
+		deg += len(m.Adj[i])
+	}
+	rings := m.Rings()
+	// One int slab and one bool slab back every per-atom and per-bond slice
+	// (they are only read after this function), so a graph costs a few
+	// allocations whatever the size of the molecule.
+	ints := make([]int, 2*deg+2*n)
+	bools := make([]bool, 2*len(m.Bonds)+len(rings))
+	g := &graph{m: m, nbr: make([][]int, 2*n)}
+	g.nbr, g.nbrBond = g.nbr[:n:n], g.nbr[n:]
 	for i := 0; i < n; i++ {
 		var adj []int
 		if i < len(m.Adj) {
 			adj = m.Adj[i]
 		}
-		for _, b := range adj {
-			g.nbr[i] = append(g.nbr[i], m.Other(b, i))
-			g.nbrBond[i] = append(g.nbrBond[i], b)
+		d := len(adj)
+		g.nbr[i], g.nbrBond[i] = ints[:d:d], ints[d:2*d:2*d]
+		ints = ints[2*d:]
+		for k, b := range adj {
+			g.nbr[i][k] = m.Other(b, i)
+			g.nbrBond[i][k] = b
 		}
 	}
-	g.rings = m.Rings()
-	g.ringBond = make([]bool, len(m.Bonds))
-	g.ringAtom = make([]int, n)
-	g.benzAtom = make([]int, n)
-	g.benzBond = make([]bool, len(m.Bonds))
-	g.benzRing = make([]bool, len(g.rings))
+	g.rings = rings
+	nb := len(m.Bonds)
+	g.ringBond, g.benzBond, g.benzRing = bools[:nb:nb], bools[nb:2*nb:2*nb], bools[2*nb:]
+	g.ringAtom, g.benzAtom = ints[:n:n], ints[n:2*n:2*n]
 	for ri, r := range g.rings {
 		benz := len(r) == 6
 		for k, a := range r {

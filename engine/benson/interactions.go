@@ -58,7 +58,8 @@ func addInteractions(g *graph, l lookup, est *Result) {
 		if g.typ[c] != "C" {
 			continue
 		}
-		var arms []int
+		var buf [8]int // the arms of one carbon: at most 4 in practice, kept on the stack
+		arms := buf[:0]
 		for k, p := range g.nbr[c] {
 			if g.typ[p] == "C" && !g.ringBond[g.nbrBond[c][k]] {
 				arms = append(arms, p)
@@ -98,15 +99,20 @@ func addInteractions(g *graph, l lookup, est *Result) {
 			ortho++
 		}
 	}
-	for _, c := range []struct {
-		name string
-		n    int
-	}{{"gauche", gauche}, {"1,5", syn}, {"cis", cis}, {"ortho", ortho}} {
+	for _, c := range [...]struct {
+		key, name string
+		n         int
+	}{
+		{"nni:gauche", "gauche interaction", gauche},
+		{"nni:1,5", "1,5 interaction", syn},
+		{"nni:cis", "cis interaction", cis},
+		{"nni:ortho", "ortho interaction", ortho},
+	} {
 		if c.n == 0 {
 			continue
 		}
-		t := term(l.corrections["nni:"+c.name], c.n)
-		t.Name = c.name + " interaction"
+		t := term(l.corrections[c.key], c.n)
+		t.Name = c.name
 		est.Corrections = append(est.Corrections, t)
 	}
 }

@@ -2,7 +2,7 @@ package benson
 
 import (
 	"math"
-	"sort"
+	"slices"
 
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -222,21 +222,21 @@ func newSym(g *graph) *sym {
 		}
 	}
 	// search order: BFS per component
+	// s.order doubles as the BFS queue: the atoms from head on are queued.
 	seen := make([]bool, n)
+	s.order = make([]int, 0, n)
 	for st := 0; st < n; st++ {
 		if seen[st] {
 			continue
 		}
 		seen[st] = true
-		q := []int{st}
-		for len(q) > 0 {
-			v := q[0]
-			q = q[1:]
-			s.order = append(s.order, v)
+		s.order = append(s.order, st)
+		for head := len(s.order) - 1; head < len(s.order); head++ {
+			v := s.order[head]
 			for _, w := range g.nbr[v] {
 				if !seen[w] {
 					seen[w] = true
-					q = append(q, w)
+					s.order = append(s.order, w)
 				}
 			}
 		}
@@ -256,6 +256,13 @@ func (s *sym) endLP(x int) int {
 // radical, charge, isotope and degree.
 func (s *sym) refine() {
 	m := s.g.m
+	// Every signature lives in one slab: atom i's has room for its colour
+	// and one entry per neighbour (at least the 7 initial invariants).
+	total := 0
+	for i := range m.Atoms {
+		total += max(7, len(s.g.nbr[i])+1)
+	}
+	slab := make([]int, total)
 	sigs := make([][]int, s.n)
 	for i, a := range m.Atoms {
 		arom := 0
@@ -266,11 +273,17 @@ func (s *sym) refine() {
 		for _, c := range a.Element {
 			el = el*128 + int(c)
 		}
-		sig := make([]int, 7, max(7, len(s.g.nbr[i])+1))
+		w := max(7, len(s.g.nbr[i])+1)
+		sig := slab[:7:w]
+		slab = slab[w:]
 		sig[0], sig[1], sig[2], sig[3], sig[4], sig[5], sig[6] = el, a.HCount, arom, a.Radical, a.Charge, a.Isotope, len(s.g.nbr[i])
 		sigs[i] = sig
 	}
-	s.color = rankSigs(sigs)
+	// Ranks alternate between two buffers: the previous colouring is read
+	// while the signatures are rebuilt, then overwritten by the next ranking.
+	idx := make([]int, 3*s.n)
+	idx, cur, spare := idx[:s.n:s.n], idx[s.n:2*s.n:2*s.n], idx[2*s.n:]
+	s.color = rankSigs(sigs, idx, cur)
 	classes := count(s.color)
 	for {
 		for i := range m.Atoms {
@@ -279,11 +292,12 @@ func (s *sym) refine() {
 			for _, j := range s.g.nbr[i] {
 				sig = append(sig, int(s.lab[i*s.n+j])*100000+s.color[j])
 			}
-			sort.Ints(sig[1:])
+			slices.Sort(sig[1:])
 			sigs[i] = sig
 		}
-		next := rankSigs(sigs)
+		next := rankSigs(sigs, idx, spare)
 		c := count(next)
+		spare = s.color
 		s.color = next
 		if c == classes {
 			return
@@ -292,28 +306,16 @@ func (s *sym) refine() {
 	}
 }
 
-// rankSigs numbers distinct signatures 0, 1, … in lexicographic order.
-func rankSigs(sigs [][]int) []int {
-	idx := make([]int, len(sigs))
+// rankSigs numbers distinct signatures 0, 1, … in lexicographic order into
+// out (len(sigs)), using idx (len(sigs)) as scratch, and returns out.
+func rankSigs(sigs [][]int, idx, out []int) []int {
 	for i := range idx {
 		idx[i] = i
 	}
-	less := func(a, b []int) int {
-		for k := 0; k < len(a) && k < len(b); k++ {
-			if a[k] != b[k] {
-				if a[k] < b[k] {
-					return -1
-				}
-				return 1
-			}
-		}
-		return len(a) - len(b)
-	}
-	sort.Slice(idx, func(i, j int) bool { return less(sigs[idx[i]], sigs[idx[j]]) < 0 })
-	out := make([]int, len(sigs))
+	slices.SortFunc(idx, func(a, b int) int { return slices.Compare(sigs[a], sigs[b]) })
 	r := 0
 	for k, i := range idx {
-		if k > 0 && less(sigs[idx[k-1]], sigs[i]) != 0 {
+		if k > 0 && slices.Compare(sigs[idx[k-1]], sigs[i]) != 0 {
 			r++
 		}
 		out[i] = r

@@ -49,8 +49,10 @@ func (m *Molecule) cgraphOf(atoms []int, local []int) *cgraph {
 	for _, i := range atoms {
 		deg += len(m.Adj[i])
 	}
-	g := &cgraph{n: n, nbr: make([][]int, n), bt: make([][]int, n)}
-	nb, bt := make([]int, 0, deg), make([]int, 0, deg)
+	lists := make([][]int, 2*n)
+	g := &cgraph{n: n, nbr: lists[:n:n], bt: lists[n:]}
+	ints := make([]int, 2*deg+2*n)
+	nb, bt := ints[:0:deg], ints[deg:deg:2*deg]
 	for k, i := range atoms {
 		s := len(nb)
 		for _, b := range m.Adj[i] {
@@ -60,7 +62,7 @@ func (m *Molecule) cgraphOf(atoms []int, local []int) *cgraph {
 		g.nbr[k], g.bt[k] = nb[s:len(nb):len(nb)], bt[s:len(bt):len(bt)]
 	}
 	keys := make([][7]int, n)
-	idx := make([]int, n)
+	idx := ints[2*deg : 2*deg+n : 2*deg+n]
 	for k := range idx {
 		a := m.Atoms[atoms[k]]
 		e, _ := elementIndex(a.Element)
@@ -72,7 +74,7 @@ func (m *Molecule) cgraphOf(atoms []int, local []int) *cgraph {
 		idx[k] = k
 	}
 	slices.SortFunc(idx, func(x, y int) int { return slices.Compare(keys[x][:], keys[y][:]) })
-	g.cell0 = make([]int, n)
+	g.cell0 = ints[2*deg+n:]
 	for k, a := range idx {
 		if k > 0 && keys[a] == keys[idx[k-1]] {
 			g.cell0[a] = g.cell0[idx[k-1]]
@@ -106,8 +108,9 @@ func (g *cgraph) refine(rank []int) []int {
 		return out
 	}
 	if g.keys == nil {
-		g.keys, g.idx, g.next = make([]uint64, n), make([]int, n), make([]int, n)
-		g.cnt = make([]int, n+1)
+		ints := make([]int, 3*n+1)
+		g.keys, g.idx, g.next = make([]uint64, n), ints[:n:n], ints[n:2*n:2*n]
+		g.cnt = ints[2*n:]
 	}
 	keys, order, cnt := g.keys, g.idx, g.cnt
 	cur, next := out, g.next
@@ -592,12 +595,16 @@ func (m *Molecule) components() [][]int {
 	n := len(m.Atoms)
 	seen := make([]bool, n)
 	var out [][]int
+	// The components partition the atoms, so their lists share one array:
+	// each list grows into the free space after the previous ones.
+	buf := make([]int, n)
 	for i := 0; i < n; i++ {
 		if seen[i] {
 			continue
 		}
 		seen[i] = true
-		list := []int{i}
+		list := buf[:1]
+		list[0] = i
 		for k := 0; k < len(list); k++ {
 			for _, b := range m.Adj[list[k]] {
 				if o := m.Other(b, list[k]); !seen[o] {
@@ -607,7 +614,8 @@ func (m *Molecule) components() [][]int {
 			}
 		}
 		slices.Sort(list)
-		out = append(out, list)
+		out = append(out, list[:len(list):len(list)])
+		buf = buf[len(list):]
 	}
 	return out
 }

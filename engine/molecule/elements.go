@@ -141,7 +141,7 @@ func valences(e element, q int) ([]int, bool) {
 		if q != 0 {
 			return nil, false
 		}
-		return []int{1}, true
+		return valence1, true
 	}
 	if e.Group < 13 {
 		return nil, false
@@ -153,25 +153,37 @@ func valences(e element, q int) ([]int, bool) {
 	second := e.Period == 2
 	switch g {
 	case 13:
-		return []int{3}, true
+		return valence3, true
 	case 14:
-		return []int{4}, true
+		return valence4, true
 	case 15:
-		return []int{3, 5}, true
+		return valence35, true
 	case 16:
 		if second {
-			return []int{2}, true
+			return valence2, true
 		}
-		return []int{2, 4, 6}, true
+		return valence246, true
 	case 17:
 		if second {
-			return []int{1}, true
+			return valence1, true
 		}
-		return []int{1, 3, 5, 7}, true
+		return valence1357, true
 	default:
-		return []int{0}, true
+		return valence0, true
 	}
 }
+
+// Normal valence lists returned by valences (read-only, shared by all callers).
+var (
+	valence0    = []int{0}
+	valence1    = []int{1}
+	valence2    = []int{2}
+	valence3    = []int{3}
+	valence4    = []int{4}
+	valence35   = []int{3, 5}
+	valence246  = []int{2, 4, 6}
+	valence1357 = []int{1, 3, 5, 7}
+)
 
 // lowestValence returns the lowest normal valence ≥ total, or false if total
 // exceeds every normal valence.

@@ -294,8 +294,9 @@ func (p *parser) foldable(i int, deg []int, nb []int) bool {
 // build folds explicit hydrogens and produces the Molecule with adjacency.
 func (p *parser) build() *Molecule {
 	n := len(p.atoms)
-	deg := make([]int, n)
-	nb := make([]int, n)
+	// Scratch for this function (and cnt below) shares one array.
+	scratch := make([]int, 4*n+1)
+	deg, nb, remap := scratch[:n:n], scratch[n:2*n:2*n], scratch[2*n:3*n:3*n]
 	single := make([]bool, n)
 	for _, b := range p.bonds {
 		deg[b.A]++
@@ -304,12 +305,13 @@ func (p *parser) build() *Molecule {
 		single[b.A] = b.Order == 1
 		single[b.B] = b.Order == 1
 	}
-	remap := make([]int, n)
-	m := &Molecule{SMILES: p.s, Atoms: make([]Atom, 0, n), Bonds: make([]Bond, 0, len(p.bonds))}
+	m := &Molecule{SMILES: p.s}
+	folded := 0
 	for i := range p.atoms {
 		if !p.foldable(i, deg, nb) || !single[i] {
 			continue
 		}
+		folded++
 		remap[i] = -1
 		// The hydrogen is one of the neighbour's written neighbours: its
 		// place in the chirality order becomes a hydrogen slot.
@@ -321,26 +323,39 @@ func (p *parser) build() *Molecule {
 			}
 		}
 	}
-	for i := range p.atoms {
-		if remap[i] < 0 {
-			continue
+	if folded == 0 {
+		// Nothing to remove: the parser's atoms and bonds (which it no longer
+		// uses) already are the molecule's, with the same indices.
+		for i := range remap {
+			remap[i] = i
 		}
-		remap[i] = len(m.Atoms)
-		m.Atoms = append(m.Atoms, p.atoms[i])
-	}
-	for _, b := range p.bonds {
-		if remap[b.A] < 0 || remap[b.B] < 0 {
-			continue
+		m.Atoms = p.atoms[:n:n]
+		m.Bonds = p.bonds[:len(p.bonds):len(p.bonds)]
+	} else {
+		m.Atoms = make([]Atom, 0, n-folded)
+		m.Bonds = make([]Bond, 0, len(p.bonds))
+		for i := range p.atoms {
+			if remap[i] < 0 {
+				continue
+			}
+			remap[i] = len(m.Atoms)
+			m.Atoms = append(m.Atoms, p.atoms[i])
 		}
-		nbd := b
-		nbd.A, nbd.B = remap[b.A], remap[b.B]
-		m.Bonds = append(m.Bonds, nbd)
+		for _, b := range p.bonds {
+			if remap[b.A] < 0 || remap[b.B] < 0 {
+				continue
+			}
+			nbd := b
+			nbd.A, nbd.B = remap[b.A], remap[b.B]
+			m.Bonds = append(m.Bonds, nbd)
+		}
 	}
 	// Adj lists share one backing array (capacity-limited, so an append by a
 	// caller cannot run into the next atom's list).
 	na := len(m.Atoms)
-	m.Adj = make([][]int, na)
-	cnt := make([]int, na+1)
+	lists := make([][]int, 2*na)
+	m.Adj = lists[:na:na]
+	cnt := scratch[3*n : 3*n+na+1]
 	for _, b := range m.Bonds {
 		cnt[b.A+1]++
 		cnt[b.B+1]++
@@ -356,7 +371,7 @@ func (p *parser) build() *Molecule {
 		m.Adj[b.A] = append(m.Adj[b.A], k)
 		m.Adj[b.B] = append(m.Adj[b.B], k)
 	}
-	m.nbrOrder = make([][]int, len(m.Atoms))
+	m.nbrOrder = lists[na:]
 	for i := range p.atoms {
 		if remap[i] < 0 || p.atoms[i].Chirality == "" {
 			continue

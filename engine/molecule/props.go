@@ -2,7 +2,9 @@ package molecule
 
 import (
 	"fmt"
+	"slices"
 	"sort"
+	"strconv"
 	"strings"
 )
 
@@ -24,7 +26,57 @@ func (m *Molecule) Composition() map[string]int {
 // (H included) is alphabetical. Counts of 1 are omitted. The charge is not
 // part of the formula (see Charge).
 func (m *Molecule) Formula() string {
-	return HillFormula(m.Composition())
+	// Same result as HillFormula(m.Composition()), counted in a small slice
+	// (molecules have few distinct elements) instead of a map.
+	type elCount struct {
+		el string
+		n  int
+	}
+	var buf [8]elCount
+	counts := buf[:0]
+	add := func(el string, n int) {
+		for k := range counts {
+			if counts[k].el == el {
+				counts[k].n += n
+				return
+			}
+		}
+		counts = append(counts, elCount{el, n})
+	}
+	nC, nH := 0, 0
+	for _, a := range m.Atoms {
+		switch a.Element {
+		case "C":
+			nC++
+		case "H":
+			nH++
+		default:
+			add(a.Element, 1)
+		}
+		nH += a.HCount
+	}
+	if nC == 0 && nH > 0 {
+		add("H", nH)
+	}
+	slices.SortFunc(counts, func(x, y elCount) int { return strings.Compare(x.el, y.el) })
+	var b strings.Builder
+	b.Grow(16)
+	write := func(el string, n int) {
+		b.WriteString(el)
+		if n != 1 {
+			b.WriteString(strconv.Itoa(n))
+		}
+	}
+	if nC > 0 {
+		write("C", nC)
+		if nH > 0 {
+			write("H", nH)
+		}
+	}
+	for _, c := range counts {
+		write(c.el, c.n)
+	}
+	return b.String()
 }
 
 // HillFormula writes an element composition in Hill order (see Formula).

@@ -104,11 +104,16 @@ func newParser(s string) *parser {
 		}
 	}
 	n = min(n, MaxHeavyAtoms+1)
+	// The bool and [][]int slices share one backing array each; their
+	// capacities are limited, so an append past the estimate reallocates
+	// only that slice.
+	bools := make([]bool, 3*n+4)
+	lists := make([][]int, 2*n)
 	return &parser{s: s,
 		atoms: make([]Atom, 0, n), bonds: make([]Bond, 0, n+4),
-		organic: make([]bool, 0, n), aromIn: make([]bool, 0, n+4),
-		nbr: make([][]int, 0, n), hadPrev: make([]bool, 0, n),
-		bracketH: make([]int, 0, n), atomBonds: make([][]int, 0, n)}
+		organic: bools[:0:n], hadPrev: bools[n : n : 2*n], aromIn: bools[2*n : 2*n : 3*n+4],
+		nbr: lists[:0:n], atomBonds: lists[n : n : 2*n],
+		bracketH: make([]int, 0, n)}
 }
 
 func (p *parser) addAtom(a Atom, organic bool) (int, error) {

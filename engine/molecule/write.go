@@ -154,12 +154,18 @@ func (m *Molecule) writeSMILES(labels []int, stereo bool) string {
 func (m *Molecule) writeSMILESOpts(labels []int, stereo, kekule bool) string {
 	n := len(m.Atoms)
 	nb := len(m.Bonds)
+	// Per-atom and per-bond state shares a few backing arrays (capacities
+	// limited, so no slice can grow into its neighbour).
+	bools := make([]bool, n+nb)
+	ints := make([]int, 4*n+nb)
+	lists := make([][]int, 2*n)
 	w := &writer{m: m, labels: labels, stereo: stereo, kekule: kekule,
-		visited: make([]bool, n), closure: make([]bool, nb),
-		closures: make([][]int, n), children: make([][]int, n), parent: make([]int, n),
-		pos: make([]int, n), bondSym: make([]byte, nb), digits: make([]int, nb),
-		seq: make([]int, 0, n)}
-	order := make([]int, n)
+		visited: bools[:n:n], closure: bools[n:],
+		closures: lists[:n:n], children: lists[n:],
+		parent: ints[:n:n], pos: ints[n : 2*n : 2*n], digits: ints[2*n : 2*n+nb : 2*n+nb],
+		seq:     ints[2*n+nb : 2*n+nb : 3*n+nb],
+		bondSym: make([]byte, nb)}
+	order := ints[3*n+nb:]
 	for i := range order {
 		order[i] = i
 	}
