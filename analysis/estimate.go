@@ -201,7 +201,7 @@ func shape(m *molecule.Molecule) (nAtoms int, linear bool, rotors int) {
 
 // sortedMissing lists the missing groups of an estimate by name.
 func sortedMissing(g *benson.Result) []benson.Missing {
-	if g == nil {
+	if g == nil || len(g.Missing) == 0 {
 		return nil
 	}
 	out := append([]benson.Missing(nil), g.Missing...)
