@@ -84,7 +84,8 @@ type Species struct {
 	Source ThermoSource
 
 	estimateErr error  // why a structure could not be estimated
-	ident       string // identity(Mol), cached
+	ident       string // estimate-cache key of the structure
+	inv         string // invariant(Mol): a cheap fingerprint for duplicate search
 }
 
 // Estimate is the thermochemistry kiln computes for a structure.

@@ -300,6 +300,7 @@ func (a *analysis) structure(path string, sp *Species) {
 	sp.Charge = p.charge
 	sp.MolarMass = p.molarMass
 	sp.ident = p.ident
+	sp.inv = p.inv
 }
 
 // smilesReason strips the position prefix of a SMILES error (the diagnostic

@@ -249,7 +249,10 @@ func (c *moleculeCache) parse(smiles string) parsed {
 	p = parsed{mol: m, err: err}
 	if err == nil {
 		p.formula, p.composition, p.charge, p.molarMass = m.Formula(), m.Composition(), m.Charge(), m.MolarMass()
-		p.ident = identity(m)
+		// Estimates are cached by the text: the same text is the same
+		// structure, and no canonical form is needed to find it again.
+		p.ident = "smiles:" + smiles
+		p.inv = invariant(m)
 	}
 	c.mu.Lock()
 	if len(c.m) >= maxCachedMolecules {

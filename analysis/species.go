@@ -25,7 +25,7 @@ func (a *analysis) species() error {
 	if err := a.prepare(user); err != nil {
 		return err
 	}
-	byStructure := map[string]*Species{}
+	byStructure := map[string][]*Species{}
 	for _, path := range a.order {
 		f := a.res.Files[path]
 		for _, d := range f.Species {
@@ -54,13 +54,10 @@ func (a *analysis) species() error {
 				sp.MolarMass = MolarMassOf(comp)
 			}
 			if sp.Mol != nil {
-				key := sp.ident + "|m" + strconv.Itoa(intAttr(d.Multiplicity))
-				if first, dup := byStructure[key]; dup {
+				if first := sameStructure(byStructure, sp); first != nil {
 					a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
 						Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(first.Loc)),
 						Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: first.Name + " has this structure"}}})
-				} else {
-					byStructure[key] = sp
 				}
 				a.estimateSpecies(path, sp, user)
 			}
@@ -83,6 +80,55 @@ func (a *analysis) species() error {
 	return nil
 }
 
+// sameStructure returns the first species in seen with the structure and
+// multiplicity of sp, and records sp. Species are bucketed by a cheap graph
+// invariant first; canonical forms are computed only within a bucket, so
+// most species never need one.
+func sameStructure(seen map[string][]*Species, sp *Species) *Species {
+	k := sp.inv + "|m" + strconv.Itoa(intAttr(sp.Decl.Multiplicity))
+	bucket := seen[k]
+	for _, other := range bucket {
+		if identity(other.Mol) == identity(sp.Mol) {
+			return other
+		}
+	}
+	seen[k] = append(bucket, sp)
+	return nil
+}
+
+// invariant is a cheap fingerprint of a molecular graph that equal graphs
+// share: the sorted list of atom labels after one round of neighbour
+// refinement, where an atom's label is its (element, isotope, charge,
+// radical electrons, H count, aromatic flag) and the refined label adds the
+// sorted (bond order, neighbour label) pairs. Different graphs rarely share
+// it, so canonical forms are needed only when two species do.
+func invariant(m *molecule.Molecule) string {
+	base := make([]string, len(m.Atoms))
+	for i, a := range m.Atoms {
+		ar := "a"
+		if !a.Aromatic {
+			ar = "s"
+		}
+		base[i] = a.Element + ar + strconv.Itoa(a.Isotope) + "," + strconv.Itoa(a.Charge) + "," + strconv.Itoa(a.Radical) + "," + strconv.Itoa(a.HCount)
+	}
+	refined := make([]string, len(m.Atoms))
+	var nb []string
+	for i := range m.Atoms {
+		nb = nb[:0]
+		for _, b := range m.Adj[i] {
+			order := m.Bonds[b].Order
+			if m.Bonds[b].Aromatic {
+				order = 4 // Kekulé orders differ between spellings of one ring
+			}
+			nb = append(nb, strconv.Itoa(order)+base[m.Other(b, i)])
+		}
+		sort.Strings(nb)
+		refined[i] = base[i] + "(" + strings.Join(nb, " ") + ")"
+	}
+	sort.Strings(refined)
+	return strings.Join(refined, ";")
+}
+
 // parsed is a species declaration's structure, read ahead of the
 // sequential pass.
 type parsed struct {
@@ -93,7 +139,8 @@ type parsed struct {
 	composition map[string]int
 	charge      int
 	molarMass   float64
-	ident       string // identity(mol)
+	ident       string // estimate-cache key of the structure
+	inv         string // invariant(mol)
 }
 
 // prepare reads every structure in scope and warms the estimate cache using

@@ -61,10 +61,10 @@ func (m *Molecule) CanonicalStereo() string {
 // canonicalStereo writes the stereo canonical string from a symmetry
 // analysis (see CanonicalStereo).
 func (m *Molecule) canonicalStereo(info symmetryInfo) string {
-	best := m.writeSMILES(info.labels, true)
 	if !m.hasStereo() {
-		return best
+		return m.Canonical() // nothing stereo to write: the same string
 	}
+	best := m.writeSMILES(info.labels, true)
 	for _, gm := range groupElements(info.gens, 5000) {
 		lab := make([]int, len(gm))
 		for a := range gm {

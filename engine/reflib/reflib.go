@@ -42,6 +42,9 @@ type Library struct {
 	// electronic ground state a modeller means when no multiplicity is given
 	// (O=O is triplet oxygen, [CH2] triplet methylene).
 	ground map[string]int
+	// maxHeavy is the largest heavy-atom count of any entry: bigger
+	// molecules are rejected without computing their canonical form.
+	maxHeavy int
 }
 
 // New builds the library and its index by canonical SMILES (each entry's
@@ -69,6 +72,7 @@ func New() *Library {
 				panic(fmt.Sprintf("reflib: %s and %s share structure and multiplicity (%s)", l.species[prev].Name, e.name, k))
 			}
 			l.index[k] = len(l.species) - 1
+			l.maxHeavy = max(l.maxHeavy, m.HeavyAtoms())
 			c := m.Canonical()
 			if g, ok := l.ground[c]; !ok || e.hf298 < l.species[g].Hf298 {
 				l.ground[c] = len(l.species) - 1
@@ -86,7 +90,7 @@ func key(canonical string, mult int) string { return canonical + "|" + strconv.I
 // whatever the graph's formal radical count says: O=O finds triplet O2, and
 // [CH2] finds triplet CH2 with 0 or 3 and singlet CH2(S) with 1. The returned Species is a copy owned by the caller.
 func (l *Library) Lookup(m *molecule.Molecule, multiplicity int) (*Species, bool) {
-	if m == nil {
+	if m == nil || m.HeavyAtoms() > l.maxHeavy {
 		return nil, false
 	}
 	c := m.Canonical()
