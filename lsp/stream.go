@@ -117,7 +117,16 @@ func (s *stream) readFrame() ([]byte, int64, error) {
 
 // Write frames and sends msg.
 func (s *stream) Write(ctx context.Context, msg jsonrpc2.Message) (int64, error) {
-	data, err := json.Marshal(msg)
+	// The message types marshal themselves; calling that directly skips
+	// encoding/json's re-validation of the output, which for a large
+	// publishDiagnostics costs as much as the encoding itself.
+	var data []byte
+	var err error
+	if m, ok := msg.(json.Marshaler); ok {
+		data, err = m.MarshalJSON()
+	} else {
+		data, err = json.Marshal(msg)
+	}
 	if err != nil {
 		return 0, fmt.Errorf("marshaling message: %w", err)
 	}
