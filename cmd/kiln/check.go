@@ -24,7 +24,7 @@ type checkDiag struct {
 }
 
 func runCheck(e env, args []string) (int, error) {
-	flags, files, err := parseArgs(args, withSettings(flagSpec{"format": true}))
+	flags, files, err := parseArgs(args, withSettings(flagSpec{"format": true, "min-severity": true}))
 	if err != nil {
 		return 0, err
 	}
@@ -37,6 +37,18 @@ func runCheck(e env, args []string) (int, error) {
 	}
 	if len(files) == 0 {
 		return 0, usagef("check needs at least one FILE")
+	}
+	minSev := speciesfile.SeverityHint
+	if v, ok := flags["min-severity"]; ok {
+		minSev = 0
+		for sv := speciesfile.SeverityError; sv <= speciesfile.SeverityHint; sv++ {
+			if sv.String() == v {
+				minSev = sv
+			}
+		}
+		if minSev == 0 {
+			return 0, usagef("--min-severity must be error, warning, information or hint, not %q", v)
+		}
 	}
 	set, err := settingsFrom(e, flags)
 	if err != nil {
@@ -53,7 +65,11 @@ func runCheck(e env, args []string) (int, error) {
 		if err != nil {
 			return 0, err
 		}
-		out = append(out, ds...)
+		for _, d := range ds {
+			if severityRank(d.Severity) <= minSev {
+				out = append(out, d)
+			}
+		}
 	}
 	sort.SliceStable(out, func(i, j int) bool {
 		a, b := out[i], out[j]
@@ -68,8 +84,9 @@ func runCheck(e env, args []string) (int, error) {
 		}
 		return a.Code < b.Code
 	})
-	errors := 0
+	errors, counts := 0, map[string]int{}
 	for _, d := range out {
+		counts[d.Severity]++
 		if d.Severity == speciesfile.SeverityError.String() {
 			errors++
 		}
@@ -86,6 +103,10 @@ func runCheck(e env, args []string) (int, error) {
 	} else {
 		for _, d := range out {
 			fmt.Fprintf(e.stdout, "%s:%d:%d: %s: %s [%s]\n", d.File, d.Line, d.Column, d.Severity, d.Message, d.Code)
+		}
+		if len(out) > 0 {
+			fmt.Fprintf(e.stderr, "kiln check: %d error(s), %d warning(s), %d information, %d hint(s)\n",
+				counts["error"], counts["warning"], counts["information"], counts["hint"])
 		}
 	}
 	if errors > 0 {
@@ -132,4 +153,15 @@ func diagsOf(res *analysis.Result) []checkDiag {
 		})
 	}
 	return out
+}
+
+// severityRank maps a severity name back to its Severity (hint for unknown
+// names, so that nothing is filtered by mistake).
+func severityRank(name string) speciesfile.Severity {
+	for sv := speciesfile.SeverityError; sv <= speciesfile.SeverityHint; sv++ {
+		if sv.String() == name {
+			return sv
+		}
+	}
+	return speciesfile.SeverityHint
 }

@@ -288,3 +288,19 @@ func TestThresholdFlags(t *testing.T) {
 	assert.Equal(t, exitUsage, code)
 	assert.Contains(t, stderr, "--mismatch-s")
 }
+
+// TestMinSeverity: --min-severity drops the less severe diagnostics but not
+// the exit code's reason.
+func TestMinSeverity(t *testing.T) {
+	file := "../../testdata/check/broken.kiln"
+	_, all, _ := runKiln(t, "check", file)
+	assert.Contains(t, all, ": information: ")
+	code, some, stderr := runKiln(t, "check", "--min-severity", "warning", file)
+	assert.Equal(t, exitProblems, code)
+	assert.NotContains(t, some, ": information: ")
+	assert.Contains(t, some, ": warning: ")
+	assert.Contains(t, stderr, "error(s)")
+	code, _, stderr = runKiln(t, "check", "--min-severity", "loud", file)
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "--min-severity")
+}

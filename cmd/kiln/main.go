@@ -96,8 +96,10 @@ func run(e env, args []string) int {
 const helpText = `kiln — thermochemistry and consistency checks for kinetic mechanism files
 
 Usage:
-  kiln check FILE... [--format text|json] [--units kcal/mol|kJ/mol]
-        Report problems as file:line:col: severity: message [code].
+  kiln check FILE... [--format text|json] [--min-severity error|warning|information|hint]
+        Report problems as file:line:col: severity: message [code] (a count
+        goes to stderr). --min-severity warning hides the information lines
+        that say which species kiln estimates.
         Exit 0 without errors, 1 with errors, 2 on usage or I/O problems.
   kiln estimate SMILES... [--json] [--nasa] [--multiplicity N] [--symmetry N] [--optical-isomers N]
         Estimate ΔHf°298, S°298 and Cp(T) by group additivity, with the breakdown.
