@@ -117,6 +117,11 @@ func addGroups(g *graph, l lookup, est *Result) error {
 	// than a map keyed by (centre, counts).
 	list := make([]acc, 0, 8)
 	for i := range g.m.Atoms {
+		if g.typ[i] == "Ca" && g.doubleToO(i) {
+			// A cumulated carbon carrying =O (ketene, C=C=O) has no group
+			// value: its oxygen would otherwise drop out of the sum unseen.
+			return fmt.Errorf("benson: atom %d is a ketene-type carbon (C=C=O), which has no group value; give the species a thermo block", i+1)
+		}
 		centre, counts, ok := g.groupOf(i)
 		if !ok {
 			if centre != "" {

@@ -404,3 +404,29 @@ func TestLostModes(t *testing.T) {
 	two := lostModes("primary", 2)
 	assert.InDelta(t, 2*tm.Cp[3], two.Cp[3], 1e-12)
 }
+
+// A ketene carbon has no group: the estimate fails with a reason instead of
+// leaving its oxygen out of the sum.
+func TestKeteneIsNotEstimated(t *testing.T) {
+	for _, smi := range []string{"C=C=O", "CC=C=O"} {
+		m, err := molecule.ParseSMILES(smi)
+		require.NoError(t, err)
+		_, err = Estimate(m, Options{})
+		require.Error(t, err, smi)
+		assert.Contains(t, err.Error(), "ketene")
+	}
+}
+
+// The vinoxy radical (O on a vinyl carbon) takes the resonance-stabilised
+// phenoxy increment, not the alkoxy one, and says so.
+func TestVinoxySite(t *testing.T) {
+	e := estimate(t, "C=C[O]", Options{})
+	assert.Equal(t, 1, correctionCount(e, "HBI: phenoxy"))
+	found := false
+	for _, m := range e.Missing {
+		if strings.Contains(m.Group, "vinoxy") {
+			found = true
+		}
+	}
+	assert.True(t, found, "the approximation is reported: %+v", e.Missing)
+}

@@ -133,6 +133,16 @@ func (g *graph) atomType(i int) string {
 	return "C"
 }
 
+// doubleToO reports whether atom i carries a double bond to an oxygen.
+func (g *graph) doubleToO(i int) bool {
+	for k, b := range g.nbrBond[i] {
+		if g.order(b) == 2 && g.m.Atoms[g.nbr[i][k]].Element == "O" {
+			return true
+		}
+	}
+	return false
+}
+
 // partner returns the atom joined to i by a bond of the given order, or -1.
 func (g *graph) partner(i, order int) int {
 	for k, b := range g.nbrBond[i] {

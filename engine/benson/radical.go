@@ -89,6 +89,10 @@ func siteOf(g *graph, i int) (site, missing string, err error) {
 				return "peroxy", "", nil
 			case "Cb":
 				return "phenoxy", "", nil
+			case "Cd":
+				// An enol O–H is as weak as phenol's (the radical is
+				// resonance-stabilised towards the carbonyl form).
+				return "phenoxy", "vinoxy radical site (O on Cd)", nil
 			case "CO":
 				return "alkoxy", "acyloxy radical site", nil
 			}
