@@ -281,7 +281,7 @@ func (a *analysis) structure(path string, sp *Species) {
 		sp.SMILESError = err
 		start, end := tok.Span.Start, tok.Span.End
 		if se, ok := err.(*molecule.SMILESError); ok {
-			start = tok.Span.Start + clamp(se.Pos, 0, len(tok.Text))
+			start = tok.Span.Start + min(max(se.Pos, 0), len(tok.Text))
 			end = start + 1
 			if end > tok.Span.End {
 				end = tok.Span.End
@@ -310,14 +310,4 @@ func smilesReason(err error) string {
 		return se.Msg
 	}
 	return err.Error()
-}
-
-func clamp(v, lo, hi int) int {
-	if v < lo {
-		return lo
-	}
-	if v > hi {
-		return hi
-	}
-	return v
 }
