@@ -118,6 +118,21 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 			return nil, fmt.Errorf("benson: atom %d (%s) has charge %+d: charged species are outside group additivity", i+1, a.Element, a.Charge)
 		}
 	}
+	if alt, ok := enoxyForm(m); ok {
+		// An α-carbonyl radical is estimated as its resonance structure with
+		// the electron on oxygen, whose O–H increment carries the
+		// stabilisation the plain alkyl increment lacks.
+		est, err := Estimate(alt, opts)
+		if err != nil {
+			return nil, err
+		}
+		est.Missing = append(est.Missing, Missing{
+			Group:         "HBI: alpha-carbonyl radical site",
+			Approximation: "resonance structure with the radical on oxygen",
+			Note:          "no α-carbonyl increment at hand: the C=C–O• resonance form is estimated instead",
+		})
+		return est, nil
+	}
 	tab := lookupTable(opts.UserGroups)
 	est := &Result{Formula: m.Formula(), MolarMass: m.MolarMass()}
 
@@ -225,4 +240,45 @@ func parentOf(m *molecule.Molecule) *molecule.Molecule {
 		p.Atoms[i].Radical = 0
 	}
 	return &p
+}
+
+// enoxyForm returns the resonance structure •C–C=O ↔ C=C–O• of a molecule
+// whose single unpaired electron sits on a carbon next to a carbonyl carbon
+// (an α-carbonyl radical such as CH2CHO or CH3C(O)CH2), with the electron
+// moved to the oxygen; ok is false for any other molecule. The copy shares
+// nothing mutable with m.
+func enoxyForm(m *molecule.Molecule) (*molecule.Molecule, bool) {
+	site, unpaired := -1, 0
+	for i, a := range m.Atoms {
+		unpaired += a.Radical
+		if a.Radical > 0 {
+			site = i
+		}
+	}
+	if unpaired != 1 || m.Atoms[site].Element != "C" || m.Atoms[site].Aromatic {
+		return nil, false
+	}
+	for _, b1 := range m.Adj[site] {
+		j := m.Other(b1, site)
+		if m.Bonds[b1].Order != 1 || m.Atoms[j].Element != "C" || m.Atoms[j].Aromatic {
+			continue
+		}
+		for _, b2 := range m.Adj[j] {
+			k := m.Other(b2, j)
+			if m.Bonds[b2].Order != 2 || m.Atoms[k].Element != "O" || len(m.Adj[k]) != 1 || m.Atoms[k].HCount != 0 {
+				continue
+			}
+			alt := &molecule.Molecule{
+				Atoms:  append([]molecule.Atom(nil), m.Atoms...),
+				Bonds:  append([]molecule.Bond(nil), m.Bonds...),
+				Adj:    m.Adj, // same connections; never modified
+				SMILES: m.SMILES,
+			}
+			alt.Bonds[b1].Order, alt.Bonds[b2].Order = 2, 1
+			alt.Bonds[b1].Stereo = 0
+			alt.Atoms[site].Radical, alt.Atoms[k].Radical = 0, 1
+			return alt, true
+		}
+	}
+	return nil, false
 }
