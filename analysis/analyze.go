@@ -4,8 +4,10 @@ import (
 	"context"
 	"fmt"
 	"path/filepath"
+	"runtime"
 	"sort"
 	"strings"
+	"sync"
 
 	"kiln.dev/kiln/engine/benson"
 	"kiln.dev/kiln/engine/molecule"
@@ -72,6 +74,34 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 	}
 	sortDiagnostics(a.res.Diagnostics)
 	return a.res, nil
+}
+
+// parallel calls fn(i) for i in [0, n) on up to GOMAXPROCS goroutines, one
+// goroutine per grain items at most (small inputs stay on one), and returns
+// ctx's error if the analysis was cancelled meanwhile. fn must only touch
+// index i's own data.
+func (a *analysis) parallel(n, grain int, fn func(i int)) error {
+	workers := min(runtime.GOMAXPROCS(0), n/grain+1)
+	next := make(chan int, n)
+	for i := range n {
+		next <- i
+	}
+	close(next)
+	var wg sync.WaitGroup
+	for range workers {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for i := range next {
+				if a.ctx.Err() != nil {
+					return
+				}
+				fn(i)
+			}
+		}()
+	}
+	wg.Wait()
+	return a.ctx.Err()
 }
 
 // report adds a diagnostic when it belongs to the analysed file.

@@ -3,17 +3,15 @@ package analysis
 import (
 	"fmt"
 	"math"
-	"runtime"
 	"sort"
 	"strconv"
 	"strings"
-	"sync"
 
 	"kiln.dev/kiln/engine/kinetics"
 	"kiln.dev/kiln/speciesfile"
 )
 
-// KeqTemperatures are the temperatures (K) at which Kp is reported, keyed as
+// keqTemperatures are the temperatures (K) at which Kp is reported, keyed as
 // in the summary JSON.
 var keqTemperatures = []struct {
 	Key string
@@ -62,31 +60,14 @@ func (a *analysis) reactions() error {
 // species, which are settled by now. Diagnostics are merged in file order.
 func (a *analysis) computeReactions() error {
 	rs := a.res.Reactions
-	workers := min(runtime.GOMAXPROCS(0), len(rs)/256+1)
-	next := make(chan *Reaction, len(rs))
-	for _, r := range rs {
-		if r.Resolved {
-			next <- r
+	err := a.parallel(len(rs), 256, func(i int) {
+		if r := rs[i]; r.Resolved {
+			a.balance(r.Decl, r)
+			a.thermo(r.Decl, r)
+			a.rates(r.Decl, r)
 		}
-	}
-	close(next)
-	var wg sync.WaitGroup
-	for range workers {
-		wg.Add(1)
-		go func() {
-			defer wg.Done()
-			for r := range next {
-				if a.ctx.Err() != nil {
-					return
-				}
-				a.balance(r.Decl, r)
-				a.thermo(r.Decl, r)
-				a.rates(r.Decl, r)
-			}
-		}()
-	}
-	wg.Wait()
-	if err := a.ctx.Err(); err != nil {
+	})
+	if err != nil {
 		return err
 	}
 	for _, r := range rs {

@@ -5,11 +5,9 @@ import (
 	"fmt"
 	"io/fs"
 	"math"
-	"runtime"
 	"sort"
 	"strconv"
 	"strings"
-	"sync"
 
 	"kiln.dev/kiln/engine/benson"
 	"kiln.dev/kiln/engine/kinetics"
@@ -160,36 +158,16 @@ func (a *analysis) prepare(user []benson.GroupValue) error {
 		a.userKey = groupsKey(user) // before the workers read it
 	}
 	results := make([]parsed, len(decls))
-	workers := runtime.GOMAXPROCS(0)
-	if workers > len(decls)/64+1 {
-		workers = len(decls)/64 + 1
-	}
-	var wg sync.WaitGroup
-	next := make(chan int, len(decls))
-	for i := range decls {
-		next <- i
-	}
-	close(next)
-	for w := 0; w < workers; w++ {
-		wg.Add(1)
-		go func() {
-			defer wg.Done()
-			for i := range next {
-				if a.ctx.Err() != nil {
-					return
-				}
-				d := decls[i]
-				p := a.w.mols.parse(d.SMILES.Text)
-				results[i] = p
-				if p.err == nil {
-					// Errors are reported by the sequential pass.
-					_, _ = a.w.cache.get(p.ident, p.mol, a.estimateOptions(d, user))
-				}
-			}
-		}()
-	}
-	wg.Wait()
-	if err := a.ctx.Err(); err != nil {
+	err := a.parallel(len(decls), 64, func(i int) {
+		d := decls[i]
+		p := a.w.mols.parse(d.SMILES.Text)
+		results[i] = p
+		if p.err == nil {
+			// Errors are reported by the sequential pass.
+			_, _ = a.w.cache.get(p.ident, p.mol, a.estimateOptions(d, user))
+		}
+	})
+	if err != nil {
 		return err
 	}
 	for i, d := range decls {
@@ -354,9 +332,10 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 	if g.Poly != nil {
 		cpMax := 0.0
 		if sp.Mol != nil || len(sp.Composition) > 0 {
-			n, lin, rot := a.shapeOf(sp)
+			// Rotors are not discounted: any of them may be a stiff
+			// vibration at high T, so the all-vibration limit bounds Cp.
+			n, lin, _ := a.shapeOf(sp)
 			_, cpInf := nasa.ClassicalLimits(n, lin, 0)
-			_ = rot // every rotor may be a stiff vibration at high T: bound by the all-vibration limit
 			cpMax = cpInf * 1.02
 		}
 		for _, p := range nasa.Check(*g.Poly, nasa.Tolerances{}, cpMax) {
