@@ -68,6 +68,12 @@ type Term struct {
 	S298   float64 // J/(mol K), contribution
 	Cp     [7]float64
 	Source string
+	// Atoms lists, for a group term, the atoms it accounts for (0-based
+	// indices into the structure estimated): the Count centres and the
+	// terminal atoms their group names imply (=O of CO, Cl of C-(Cl)(H)3).
+	// Every heavy atom appears in exactly one group term. Empty for
+	// corrections.
+	Atoms []int
 }
 
 // Missing records a group (or ring correction) absent from the tables and
@@ -115,8 +121,18 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	for i, a := range m.Atoms {
 		if a.Charge != 0 {
-			return nil, fmt.Errorf("benson: atom %d (%s) has charge %+d: charged species are outside group additivity", i+1, a.Element, a.Charge)
+			return nil, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d: charged species are outside group additivity — give the species a thermo block", a.Element, a.Charge)}
 		}
+	}
+	unpaired := 0
+	for _, a := range m.Atoms {
+		unpaired += a.Radical
+	}
+	if opts.Multiplicity != 0 && opts.Multiplicity != unpaired+1 {
+		// The method (parent + HBI + R ln(2S+1)) describes the high-spin
+		// state the structure's unpaired electrons imply; another spin state
+		// has a different energy that no table here gives.
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("multiplicity %d is not the one the structure implies (%d unpaired electrons: multiplicity %d); group additivity has no data for other spin states — give the species a thermo block", opts.Multiplicity, unpaired, unpaired+1)}
 	}
 	if alt, ok := enoxyForm(m); ok {
 		// An α-carbonyl radical is estimated as its resonance structure with
@@ -137,10 +153,6 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	est := &Result{Formula: m.Formula(), MolarMass: m.MolarMass()}
 
 	// Radicals are estimated through their closed-shell parent.
-	unpaired := 0
-	for _, a := range m.Atoms {
-		unpaired += a.Radical
-	}
 	parent := m
 	if unpaired > 0 {
 		parent = parentOf(m)
