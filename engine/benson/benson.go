@@ -26,6 +26,7 @@ package benson
 import (
 	"fmt"
 	"math"
+	"slices"
 	"strconv"
 
 	"kiln.dev/kiln/engine/molecule"
@@ -254,6 +255,20 @@ func parentOf(m *molecule.Molecule) *molecule.Molecule {
 	return &p
 }
 
+// rebuilt returns a full molecule (rings, aromaticity, caches: everything
+// the reader derives) for m's connections with the given atoms and bond
+// orders. It is the one place a derived form (a resonance structure) is
+// made; it goes through the molecule package's writer and reader so that
+// no ring or aromaticity data is lost, whatever the copy.
+func rebuilt(m *molecule.Molecule, atoms []molecule.Atom, bonds []molecule.Bond) (*molecule.Molecule, error) {
+	tmp := &molecule.Molecule{Atoms: atoms, Bonds: bonds, Adj: m.Adj}
+	out, err := molecule.ParseSMILES(tmp.Canonical())
+	if err != nil {
+		return nil, fmt.Errorf("benson: rebuilding a derived structure of %s: %w", m.SMILES, err)
+	}
+	return out, nil
+}
+
 // enoxyForm returns the resonance structure •C–C=O ↔ C=C–O• of a molecule
 // whose single unpaired electron sits on a carbon next to a carbonyl carbon
 // (an α-carbonyl radical such as CH2CHO or CH3C(O)CH2), with the electron
@@ -280,15 +295,15 @@ func enoxyForm(m *molecule.Molecule) (*molecule.Molecule, bool) {
 			if m.Bonds[b2].Order != 2 || m.Atoms[k].Element != "O" || len(m.Adj[k]) != 1 || m.Atoms[k].HCount != 0 {
 				continue
 			}
-			alt := &molecule.Molecule{
-				Atoms:  append([]molecule.Atom(nil), m.Atoms...),
-				Bonds:  append([]molecule.Bond(nil), m.Bonds...),
-				Adj:    m.Adj, // same connections; never modified
-				SMILES: m.SMILES,
+			atoms := slices.Clone(m.Atoms)
+			bonds := slices.Clone(m.Bonds)
+			bonds[b1].Order, bonds[b2].Order = 2, 1
+			bonds[b1].Stereo = 0
+			atoms[site].Radical, atoms[k].Radical = 0, 1
+			alt, err := rebuilt(m, atoms, bonds)
+			if err != nil {
+				return nil, false
 			}
-			alt.Bonds[b1].Order, alt.Bonds[b2].Order = 2, 1
-			alt.Bonds[b1].Stereo = 0
-			alt.Atoms[site].Radical, alt.Atoms[k].Radical = 0, 1
 			return alt, true
 		}
 	}

@@ -2,6 +2,7 @@ package benson
 
 import (
 	"errors"
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -94,4 +95,30 @@ func coveredAtoms(t testing.TB, e *Result) int {
 		}
 	}
 	return len(seen)
+}
+
+// A ring radical and its resonance structure are one species: the derived
+// form keeps its ring (and ring-strain term).
+func TestRingRadicalResonance(t *testing.T) {
+	for _, p := range [][2]string{
+		{"O=C1[CH]CCC1", "[O]C1=CCCC1"},
+		{"O=C1[CH]CCCC1", "[O]C1=CCCCC1"},
+		{"CC(=O)[CH2]", "C=C([O])C"},
+	} {
+		a := estimate(t, p[0], Options{})
+		b := estimate(t, p[1], Options{})
+		assert.InDelta(t, b.Hf298, a.Hf298, 1e-6, p[0])
+		assert.InDelta(t, b.S298, a.S298, 1e-9, p[0])
+		for i := range a.Cp {
+			assert.InDelta(t, b.Cp[i], a.Cp[i], 1e-9, p[0])
+		}
+	}
+	e := estimate(t, "O=C1[CH]CCC1", Options{})
+	ring := false
+	for _, c := range e.Corrections {
+		if strings.HasPrefix(c.Name, "ring strain") {
+			ring = true
+		}
+	}
+	assert.True(t, ring, "%+v", e.Corrections)
 }
