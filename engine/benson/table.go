@@ -36,6 +36,7 @@ type tables struct {
 	corrections map[string]GroupValue
 	hbi         map[string]hbiValue
 	centres     map[string]bool // centre types with at least one group
+	systems     []systemValue   // whole ring systems (systems.tsv)
 }
 
 // hfH is ΔHf°298 of the H atom, 52.10 kcal/mol (NIST-JANAF, Chase 1998).
@@ -62,6 +63,11 @@ var builtin = sync.OnceValue(func() *tables {
 	for _, v := range mustFill("corrections.tsv", mustParse("corrections.tsv", correctionsTSV)) {
 		t.corrections[v.Name] = v
 	}
+	sys, err := parseSystems(systemsTSV)
+	if err != nil {
+		panic(fmt.Sprintf("benson: systems.tsv: %v", err))
+	}
+	t.systems = sys
 	for _, r := range mustParse("hbi.tsv", hbiTSV) {
 		// Column 2 holds D(R–H); the ΔHf increment is D − ΔHf(H).
 		v := r.GroupValue
