@@ -28,6 +28,7 @@ import (
 	"math"
 	"slices"
 	"strconv"
+	"strings"
 
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -107,8 +108,10 @@ type Result struct {
 
 	// Class is the compound class whose validation error gives Uncertainty.
 	Class string
-	// Uncertainty is the mean absolute error of ΔHf° (J/mol) measured for
-	// Class on the training set by the accuracy test (one MAE, not 2×).
+	// Uncertainty is the standard uncertainty (1σ) of ΔHf° in J/mol: the
+	// class's measured error, widened by every approximation in Missing
+	// (see uncertainty in class.go); ±2σ covers ≥ 80 % of the validation
+	// species (TestAccuracy reports the coverage).
 	Uncertainty float64
 }
 
@@ -148,6 +151,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 			Approximation: "resonance structure with the radical on oxygen",
 			Note:          "no α-carbonyl increment at hand: the C=C–O• resonance form is estimated instead",
 		})
+		est.setUncertainty()
 		return est, nil
 	}
 	tab := lookupTable(opts.UserGroups)
@@ -218,8 +222,19 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		est.add(t)
 	}
 	est.Class = classify(m, g)
-	est.Uncertainty = classUncertainty(est.Class)
+	est.setUncertainty()
 	return est, nil
+}
+
+// setUncertainty sets e.Uncertainty from its class and approximations.
+func (e *Result) setUncertainty() {
+	strain := 0.0 // kcal/mol, ring and ring-system strain applied
+	for _, c := range e.Corrections {
+		if strings.HasPrefix(c.Name, "ring") {
+			strain += c.Hf298 / calorie / 1000
+		}
+	}
+	e.Uncertainty = uncertainty(e.Class, e, strain)
 }
 
 func (e *Result) add(t Term) {

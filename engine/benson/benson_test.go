@@ -400,8 +400,16 @@ func BenchmarkEstimateC10Aromatic(b *testing.B) {
 func TestUncertaintyFromClass(t *testing.T) {
 	e := estimate(t, "CCCC", Options{})
 	assert.Equal(t, "alkane", e.Class)
-	assert.InDelta(t, classMAE["alkane"]*4184, e.Uncertainty, 1e-9)
+	assert.InDelta(t, maeToSigma*classMAE["alkane"]*4184, e.Uncertainty, 1e-9)
 	assert.Positive(t, e.Uncertainty)
+	// Every approximation widens the uncertainty: a bridged system without
+	// a correction, a missing group, an unknown ring.
+	base := estimate(t, "C1CCCCC1", Options{}).Uncertainty
+	for _, smi := range []string{"C1CC2CCC(C1)C2", "C1=CC=C1", "C=CC(=O)C=C"} {
+		w := estimate(t, smi, Options{})
+		require.NotEmpty(t, w.Missing, smi)
+		assert.Greater(t, w.Uncertainty, base+4184, smi)
+	}
 	assert.Equal(t, "radical", estimate(t, "C[CH2]", Options{}).Class)
 	assert.Equal(t, "aromatic-oxygen", estimate(t, "c1ccoc1", Options{}).Class)
 	assert.Equal(t, "acid-ester", estimate(t, "CC(=O)OC", Options{}).Class)
