@@ -7,6 +7,7 @@
 //	kiln summary FILE [--json]
 //	kiln fill FILE [--dry-run]
 //	kiln plot SPECIES --file FILE -o OUT.svg
+//	kiln compare A.kiln B.kiln [--json] [--all] [--rate-factor F]
 //	kiln equilibrium FILE --mix "NAME:AMOUNT, …" [--temperature K] [--pressure P] [--adiabatic] [--volume] [--json]
 //	kiln serve [--log FILE]
 //	kiln version | help
@@ -71,6 +72,8 @@ func run(e env, args []string) int {
 		code, err = runFill(e, rest)
 	case "plot":
 		code, err = runPlot(e, rest)
+	case "compare":
+		code, err = runCompare(e, rest)
 	case "equilibrium":
 		code, err = runEquilibrium(e, rest)
 	case "serve":
@@ -115,6 +118,15 @@ Usage:
         --dry-run prints a unified diff instead of writing the file.
   kiln plot SPECIES --file FILE -o OUT.svg
         Draw Cp/R, H/RT and S/R against T: estimate, fit and the file's own block.
+  kiln compare A.kiln B.kiln [--json] [--all] [--rate-factor F]
+        Match species by structure and multiplicity (not by name) and report
+        species only in A or B, one structure under two names (with a rename
+        suggestion), one name for two structures, thermo differences B − A
+        (ΔHf°298, S°298, Cp and G at 300/1000/2000 K; flagged beyond
+        --mismatch-hf / --mismatch-s), and reactions matched by their species
+        with k_B/k_A at 500/1000/2000 K (flagged outside 1/F–F, default F = 2).
+        Exit 0 when nothing is flagged, 1 when a thermo or rate difference,
+        a second name or a name clash is found, 2 on usage or I/O problems.
   kiln equilibrium FILE --mix "NAME:AMOUNT, ..." [--temperature K] [--pressure P]
                    [--adiabatic] [--volume] [--json]
         Equilibrium composition over the file's species by Gibbs-energy
