@@ -76,8 +76,12 @@ type SpeciesPair struct {
 	// By is "structure" or, for lumped species, "name".
 	By string
 	// Thermo compares the two sides' thermochemistry; nil when either side
-	// has none.
+	// has none, or when SameEstimate.
 	Thermo *ThermoDiff
+	// SameEstimate is true when both sides estimate the species from the
+	// same structure with the same options (no thermo block on either
+	// side): the thermochemistry is identical and is not computed.
+	SameEstimate bool
 }
 
 // Renamed reports whether the two sides use different names.
@@ -153,7 +157,6 @@ type compareSide struct {
 type sideReaction struct {
 	d    *speciesfile.Reaction
 	file string
-	ref  ReactionRef
 }
 
 // Compare reads mechanisms A and B (each with its includes) and matches
@@ -177,13 +180,23 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 	c := &Comparison{A: sa.summary(), B: sb.summary(), Settings: w.Settings(), RateFactor: opts.RateFactor}
 	matchA, matchB := matchSpecies(sa, sb)
 	// Thermochemistry for the matched species, estimated where not given.
-	var need []*Species
-	var needSide []*compareSide
+	// A pair that both sides estimate from the same structure text with
+	// the same options has the same thermo by construction: not computed.
+	need := make([]*Species, 0, 2*len(sb.species))
+	needSide := make([]*compareSide, 0, 2*len(sb.species))
+	sameEstimate := map[int]bool{}
 	for i, sp := range sa.species {
-		if j := matchA[i]; j >= 0 {
-			need = append(need, sp, sb.species[j])
-			needSide = append(needSide, sa, sb)
+		j := matchA[i]
+		if j < 0 {
+			continue
 		}
+		if other := sb.species[j]; sp.Given == nil && other.Given == nil && sp.Mol != nil &&
+			sa.a.estimateOptions(sp.Decl, sa.user).key(sp.ident) == sb.a.estimateOptions(other.Decl, sb.user).key(other.ident) {
+			sameEstimate[i] = true
+			continue
+		}
+		need = append(need, sp, sb.species[j])
+		needSide = append(needSide, sa, sb)
 	}
 	if err := sa.a.parallel(len(need), 64, func(i int) { needSide[i].warm(need[i]) }); err != nil {
 		return nil, err
@@ -202,7 +215,11 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 		if sp.Mol == nil {
 			by = "name"
 		}
-		c.Species = append(c.Species, SpeciesPair{A: sa.ref(sp), B: sb.ref(other), By: by, Thermo: thermoDiff(sp, other, c.Settings)})
+		pair := SpeciesPair{A: sa.ref(sp), B: sb.ref(other), By: by, SameEstimate: sameEstimate[i]}
+		if !pair.SameEstimate {
+			pair.Thermo = thermoDiff(sp, other, c.Settings)
+		}
+		c.Species = append(c.Species, pair)
 	}
 	for j, sp := range sb.species {
 		if matchB[j] < 0 {
@@ -258,8 +275,13 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 	if len(s.user) > 0 {
 		a.userKey = groupsKey(s.user)
 	}
-	var decls []*speciesfile.Species
-	var files []string
+	nd := 0
+	for _, p := range a.order {
+		nd += len(a.res.Files[p].Species)
+	}
+	decls := make([]*speciesfile.Species, 0, nd)
+	files := make([]string, 0, nd)
+	s.species = make([]*Species, 0, nd)
 	for _, p := range a.order {
 		for _, d := range a.res.Files[p].Species {
 			if _, dup := s.byName[d.Name.Text]; dup {
@@ -298,11 +320,14 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 		}
 		a.given(files[i], sp)
 	}
+	nr := 0
 	for _, p := range a.order {
-		g := a.res.Files[p]
-		for _, d := range g.Reactions {
-			s.reactions = append(s.reactions, sideReaction{d: d, file: p,
-				ref: ReactionRef{Equation: equationText(g, d), File: p, Line: g.Lines.Position(d.Span().Start).Line + 1}})
+		nr += len(a.res.Files[p].Reactions)
+	}
+	s.reactions = make([]sideReaction, 0, nr)
+	for _, p := range a.order {
+		for _, d := range a.res.Files[p].Reactions {
+			s.reactions = append(s.reactions, sideReaction{d: d, file: p})
 		}
 	}
 	return s, nil
@@ -319,6 +344,12 @@ func (s *compareSide) summary() CompareSide {
 		}
 	}
 	return out
+}
+
+// rref describes a reaction of this side.
+func (s *compareSide) rref(r sideReaction) ReactionRef {
+	f := s.a.res.Files[r.file]
+	return ReactionRef{Equation: equationText(f, r.d), File: r.file, Line: f.Lines.Position(r.d.Span().Start).Line + 1}
 }
 
 func (s *compareSide) ref(sp *Species) SpeciesRef {
@@ -500,8 +531,8 @@ type reactionGroup struct {
 // groupReactions collects reactions by their undirected key (duplicates of
 // an equation fall into one group), in order of first appearance.
 func groupReactions(s *compareSide, names func(string) string) (map[string]*reactionGroup, []string) {
-	groups := map[string]*reactionGroup{}
-	var order []string
+	groups := make(map[string]*reactionGroup, len(s.reactions))
+	order := make([]string, 0, len(s.reactions))
 	for _, r := range s.reactions {
 		l, rt := directedKey(r.d.Reactants, names), directedKey(r.d.Products, names)
 		k := l + " = " + rt
@@ -536,10 +567,10 @@ func matchReactions(a, b *compareSide, mapB map[string]string) (pairs []Reaction
 		x := ga[k]
 		y, ok := gb[k]
 		if !ok {
-			onlyA = append(onlyA, x.rs[0].ref)
+			onlyA = append(onlyA, a.rref(x.rs[0]))
 			continue
 		}
-		p := ReactionPair{A: x.rs[0].ref, B: y.rs[0].ref, Reversed: x.left != y.left}
+		p := ReactionPair{A: a.rref(x.rs[0]), B: b.rref(y.rs[0]), Reversed: x.left != y.left}
 		for i, t := range CompareRateTemps {
 			ka, noteA, okA := a.rateOf(x, x.left, t.T)
 			kb, noteB, okB := b.rateOf(y, x.left, t.T)
@@ -557,7 +588,7 @@ func matchReactions(a, b *compareSide, mapB map[string]string) (pairs []Reaction
 	}
 	for _, k := range orderB {
 		if _, ok := ga[k]; !ok {
-			onlyB = append(onlyB, gb[k].rs[0].ref)
+			onlyB = append(onlyB, b.rref(gb[k].rs[0]))
 		}
 	}
 	return pairs, onlyA, onlyB

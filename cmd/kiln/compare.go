@@ -74,13 +74,17 @@ type compareValue struct {
 	Diff float64 `json:"diff"`
 }
 
+// compareThermo compares a matched pair's thermo. When both sides estimate
+// the same structure the same way, same_estimate is true and the values are
+// omitted (they are identical).
 type compareThermo struct {
-	SourceA string                  `json:"source_a"`
-	SourceB string                  `json:"source_b"`
-	Hf298   compareValue            `json:"hf298_kj_mol"`
-	S298    compareValue            `json:"s298_j_mol_k"`
-	Cp      map[string]compareValue `json:"cp_j_mol_k"`
-	G       map[string]compareValue `json:"g_kj_mol"`
+	SourceA      string                  `json:"source_a"`
+	SourceB      string                  `json:"source_b"`
+	SameEstimate bool                    `json:"same_estimate"`
+	Hf298        *compareValue           `json:"hf298_kj_mol,omitempty"`
+	S298         *compareValue           `json:"s298_j_mol_k,omitempty"`
+	Cp           map[string]compareValue `json:"cp_j_mol_k,omitempty"`
+	G            map[string]compareValue `json:"g_kj_mol,omitempty"`
 }
 
 type compareSpecies struct {
@@ -220,12 +224,13 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 		OnlyA: []compareRef{}, OnlyB: []compareRef{}, Reactions: []compareRxn{}, RxnOnlyA: []compareRxnRef{}, RxnOnlyB: []compareRxnRef{},
 	}
 	val := func(a, b, scale float64) compareValue { return compareValue{a / scale, b / scale, (b - a) / scale} }
+	pval := func(a, b, scale float64) *compareValue { v := val(a, b, scale); return &v }
 	for _, p := range c.Species {
 		row := compareSpecies{A: p.A.Name, B: p.B.Name, LineA: p.A.Line, LineB: p.B.Line, SMILESA: optString(p.A.SMILES),
 			SMILESB: optString(p.B.SMILES), MatchedBy: p.By, Flags: []string{}}
 		if t := p.Thermo; t != nil {
-			th := &compareThermo{SourceA: string(t.SourceA), SourceB: string(t.SourceB), Hf298: val(t.Hf298A, t.Hf298B, 1000),
-				S298: val(t.S298A, t.S298B, 1), Cp: map[string]compareValue{}, G: map[string]compareValue{}}
+			th := &compareThermo{SourceA: string(t.SourceA), SourceB: string(t.SourceB), Hf298: pval(t.Hf298A, t.Hf298B, 1000),
+				S298: pval(t.S298A, t.S298B, 1), Cp: map[string]compareValue{}, G: map[string]compareValue{}}
 			for k, tt := range analysis.CompareThermoTemps {
 				th.Cp[tt.Key] = val(t.CpA[k], t.CpB[k], 1)
 				th.G[tt.Key] = val(t.GA[k], t.GB[k], 1000)
@@ -235,6 +240,8 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 			if len(t.Flags) > 0 {
 				out.Summary.ThermoFlagged++
 			}
+		} else if p.SameEstimate {
+			row.Thermo = &compareThermo{SourceA: string(analysis.SourceEstimate), SourceB: string(analysis.SourceEstimate), SameEstimate: true}
 		}
 		if p.Renamed() {
 			out.Renames = append(out.Renames, compareRename{A: p.A.Name, B: p.B.Name,
@@ -368,7 +375,7 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 	for _, flaggedPass := range []bool{true, false} {
 		for _, p := range o.Species {
 			t := p.Thermo
-			if t == nil || (len(p.Flags) > 0) != flaggedPass {
+			if t == nil || t.SameEstimate || (len(p.Flags) > 0) != flaggedPass {
 				continue
 			}
 			if flaggedPass || t.Hf298.Diff != 0 || t.S298.Diff != 0 || t.G["1000"].Diff != 0 || t.Cp["1000"].Diff != 0 {
