@@ -124,13 +124,27 @@ func addGroups(g *graph, l lookup, est *Result) error {
 	type acc struct {
 		centre string
 		counts ligCounts
-		atoms  []int
+		n      int // centres
+		atoms  int // atoms accounted for (centres and named terminal atoms)
 	}
 	n := len(g.m.Atoms)
 	// A molecule has few distinct groups: a linear scan of list is cheaper
 	// than a map keyed by (centre, counts).
 	list := make([]acc, 0, 8)
-	covered := make([]int8, n)
+	// owner[i] is the list index of the group that accounts for atom i
+	// (-1: none yet); a second claim is an error.
+	owner := make([]int, n)
+	for i := range owner {
+		owner[i] = -1
+	}
+	claim := func(i, k int) error {
+		if owner[i] >= 0 {
+			return unsupported(g, i, "is counted by two groups")
+		}
+		owner[i] = k
+		list[k].atoms++
+		return nil
+	}
 	for i := range g.m.Atoms {
 		if g.typ[i] == "Ca" && g.doubleToO(i) {
 			// A cumulated carbon carrying =O (ketene, C=C=O) has no group
@@ -157,46 +171,56 @@ func addGroups(g *graph, l lookup, est *Result) error {
 			}
 			return unsupported(g, i, fmt.Sprintf("no group in the tables has a centre of type %s", centre))
 		}
-		covered[i]++
-		atoms := []int{i}
+		k := slices.IndexFunc(list, func(a acc) bool { return a.centre == centre && a.counts == counts })
+		if k < 0 {
+			list = append(list, acc{centre: centre, counts: counts})
+			k = len(list) - 1
+		}
+		list[k].n++
+		if err := claim(i, k); err != nil {
+			return err
+		}
 		// Terminal atoms named by this group: the implied partner of the
 		// centre type, and single-bonded terminal ligands.
-		for k, j := range g.nbr[i] {
+		for kk, j := range g.nbr[i] {
 			if !g.terminal(j) {
 				continue
 			}
-			o := g.order(g.nbrBond[i][k])
+			o := g.order(g.nbrBond[i][kk])
 			if o == 1 || (o == 2 && impliedPartner[centre] == g.m.Atoms[j].Element) {
-				covered[j]++
-				atoms = append(atoms, j)
+				if err := claim(j, k); err != nil {
+					return err
+				}
 			}
 		}
-		k := slices.IndexFunc(list, func(a acc) bool { return a.centre == centre && a.counts == counts })
-		if k >= 0 {
-			list[k].atoms = append(list[k].atoms, atoms...)
-			continue
-		}
-		list = append(list, acc{centre, counts, atoms})
 	}
-	for i, c := range covered {
-		if c != 1 {
-			return uncovered(g, i, int(c))
+	for i, k := range owner {
+		if k < 0 {
+			return uncovered(g, i, 0)
 		}
+	}
+	// One backing array for every group's atom list.
+	slab := make([]int, n)
+	start := make([]int, len(list))
+	off := 0
+	for k := range list {
+		start[k] = off
+		off += list[k].atoms
+	}
+	fill := slices.Clone(start)
+	for i, k := range owner {
+		slab[fill[k]] = i
+		fill[k]++
 	}
 	if est.Groups == nil && len(list) > 0 {
 		est.Groups = make([]Term, 0, len(list))
 	}
-	for _, a := range list {
+	for k, a := range list {
 		name := groupName(a.centre, a.counts)
-		count := 0
-		for _, i := range a.atoms {
-			if !g.terminal(i) {
-				count++
-			}
-		}
+		atoms := slab[start[k] : start[k]+a.atoms : start[k]+a.atoms]
 		if v, ok := l.group(name); ok {
-			t := term(v, count)
-			t.Atoms = a.atoms
+			t := term(v, a.n)
+			t.Atoms = atoms
 			est.Groups = append(est.Groups, t)
 			continue
 		}
@@ -204,9 +228,9 @@ func addGroups(g *graph, l lookup, est *Result) error {
 		if !ok {
 			return &MissingGroupError{Group: name}
 		}
-		t := term(v, count)
+		t := term(v, a.n)
 		t.Name = name + " ≈ " + v.Name
-		t.Atoms = a.atoms
+		t.Atoms = atoms
 		est.Groups = append(est.Groups, t)
 		est.Missing = append(est.Missing, Missing{
 			Group:         name,

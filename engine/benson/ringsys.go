@@ -108,6 +108,9 @@ type ringSys struct {
 
 // ringSystems returns the ring systems of g in order of their lowest atom.
 func (g *graph) ringSystems() []ringSys {
+	if len(g.rings) == 0 {
+		return nil // acyclic (every cycle lies in some SSSR ring)
+	}
 	n := len(g.m.Atoms)
 	disc := make([]int, n)
 	low := make([]int, n)
