@@ -179,6 +179,9 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	est.SymmetryNumber = opts.Symmetry
 	if est.SymmetryNumber == 0 {
+		if sy.err != nil {
+			return nil, sy.err
+		}
 		est.SymmetryNumber = sy.number()
 	}
 	if est.SymmetryNumber > 1 {
