@@ -28,24 +28,24 @@ var sigmaCases = []struct {
 	{"c1ccc2ccccc2c1", 4}, {"C/C=C/C", 18}, {"C/C=C\\C", 18}, {"C=C=C", 4}, {"C1CC1", 6}, {"N", 3},
 	{"CN(C)C", 81}, {"Cc1ccc(C)cc1", 36}, {"C1COCCO1", 2}, {"C[CH2]", 6}, {"[CH3]", 6},
 	// rigid polycyclics and cages (rotational subgroup of the point group)
-	{"C1C2CC3CC1CC(C2)C3", 12},            // adamantane, T_d → T
-	{"C12C3C4C1C5C2C3C45", 24},            // cubane, O_h → O
-	{"C1CC2CCC1CC2", 6},                   // bicyclo[2.2.2]octane, D_3h → D_3
-	{"C1CC2CCC1C2", 2},                    // norbornane, C_2v → C_2
-	{"C1C2CCC1CC2", 2},                    // norbornane, another spelling
-	{"C1CC2CC1C2", 2},                     // bicyclo[2.1.1]hexane, C_2v → C_2
-	{"C1CC2C1C2", 1},                      // bicyclo[2.1.0]pentane (housane), C_s: cis-fused only
-	{"C1C2CC12", 2},                       // bicyclo[1.1.0]butane, C_2v → C_2
-	{"C1C2CC1C2", 6},                      // bicyclo[1.1.1]pentane, D_3h → D_3
-	{"C1CC12CC2", 4},                      // spiropentane, D_2d → D_2
-	{"C1CCC2CCCCC2C1", 2},                 // decalin (trans C_2h / cis C_2)
-	{"C1CC2CCCC2C1", 2},                   // cis-bicyclo[3.3.0]octane, C_2v → C_2
-	{"C1CC2CCC2C1", 1},                    // cis-bicyclo[3.2.0]heptane, C_s
-	{"C12C3C1C23", 12},                    // tetrahedrane, T_d → T
-	{"C1CC11CC1", 4},                      // spiropentane, another spelling
-	{"C1CC2(C1)CCC2", 4},                  // spiro[3.3]heptane, D_2d → D_2
-	{"C1CC2(C1)CCCC2", 2},                 // spiro[3.4]octane, C_2v → C_2
-	{"C1CCC2CCCCC2C1", 2},                 // decalin, another spelling
+	{"C1C2CC3CC1CC(C2)C3", 12}, // adamantane, T_d → T
+	{"C12C3C4C1C5C2C3C45", 24}, // cubane, O_h → O
+	{"C1CC2CCC1CC2", 6},        // bicyclo[2.2.2]octane, D_3h → D_3
+	{"C1CC2CCC1C2", 2},         // norbornane, C_2v → C_2
+	{"C1C2CCC1CC2", 2},         // norbornane, another spelling
+	{"C1CC2CC1C2", 2},          // bicyclo[2.1.1]hexane, C_2v → C_2
+	{"C1CC2C1C2", 1},           // bicyclo[2.1.0]pentane (housane), C_s: cis-fused only
+	{"C1C2CC12", 2},            // bicyclo[1.1.0]butane, C_2v → C_2
+	{"C1C2CC1C2", 6},           // bicyclo[1.1.1]pentane, D_3h → D_3
+	{"C1CC12CC2", 4},           // spiropentane, D_2d → D_2
+	{"C1CCC2CCCCC2C1", 2},      // decalin (trans C_2h / cis C_2)
+	{"C1CC2CCCC2C1", 2},        // cis-bicyclo[3.3.0]octane, C_2v → C_2
+	{"C1CC2CCC2C1", 1},         // cis-bicyclo[3.2.0]heptane, C_s
+	{"C12C3C1C23", 12},         // tetrahedrane, T_d → T
+	{"C1CC11CC1", 4},           // spiropentane, another spelling
+	{"C1CC2(C1)CCC2", 4},       // spiro[3.3]heptane, D_2d → D_2
+	{"C1CC2(C1)CCCC2", 2},      // spiro[3.4]octane, C_2v → C_2
+	{"C1CCC2CCCCC2C1", 2},      // decalin, another spelling
 	{"[H][H]", 2}, {"O=O", 2}, {"[C-]#[O+]", 1}, {"Cl", 1}, {"CCl", 3}, {"ClC(Cl)(Cl)Cl", 12},
 	{"FC(F)F", 3}, {"C=CC=C", 2}, {"CC(C)=C", 18}, {"CC#C", 3},
 	{"CC.CC", 2 * 18 * 18}, // two identical components: 2!·18²
