@@ -234,16 +234,7 @@ func term(v GroupValue, count int) Term {
 
 // parentOf returns a copy of m with every unpaired electron replaced by a
 // hydrogen: the closed-shell parent used by the HBI method.
-func parentOf(m *molecule.Molecule) *molecule.Molecule {
-	p := *m
-	p.Atoms = make([]molecule.Atom, len(m.Atoms))
-	copy(p.Atoms, m.Atoms)
-	for i := range p.Atoms {
-		p.Atoms[i].HCount += p.Atoms[i].Radical
-		p.Atoms[i].Radical = 0
-	}
-	return &p
-}
+func parentOf(m *molecule.Molecule) *molecule.Molecule { return m.ClosedShellParent() }
 
 // enoxyForm returns the resonance structure •C–C=O ↔ C=C–O• of a molecule
 // whose single unpaired electron sits on a carbon next to a carbonyl carbon
@@ -271,15 +262,11 @@ func enoxyForm(m *molecule.Molecule) (*molecule.Molecule, bool) {
 			if m.Bonds[b2].Order != 2 || m.Atoms[k].Element != "O" || len(m.Adj[k]) != 1 || m.Atoms[k].HCount != 0 {
 				continue
 			}
-			alt := &molecule.Molecule{
-				Atoms:  append([]molecule.Atom(nil), m.Atoms...),
-				Bonds:  append([]molecule.Bond(nil), m.Bonds...),
-				Adj:    m.Adj, // same connections; never modified
-				SMILES: m.SMILES,
+			// built by the molecule package: rings and aromaticity stay right
+			alt, err := m.WithBondOrders(map[int]int{b1: 2, b2: 1}, map[int]int{site: 0, k: 1})
+			if err != nil {
+				return nil, false
 			}
-			alt.Bonds[b1].Order, alt.Bonds[b2].Order = 2, 1
-			alt.Bonds[b1].Stereo = 0
-			alt.Atoms[site].Radical, alt.Atoms[k].Radical = 0, 1
 			return alt, true
 		}
 	}
