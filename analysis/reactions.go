@@ -30,7 +30,8 @@ func (a *analysis) reactions() error {
 				return err
 			}
 			a.recordUses(path, d)
-			key := reactionKey(d)
+			rt := a.memo.reactionText(f, d)
+			key := rt.dupKey
 			if first, dup := seen[key]; dup {
 				if d.Duplicate == nil || first.Duplicate == nil {
 					line := a.res.Files[seenFile[key]].Lines.Position(first.Equation.Start).Line + 1
@@ -49,32 +50,66 @@ func (a *analysis) reactions() error {
 			if path != a.res.Path {
 				continue
 			}
-			a.res.Reactions = append(a.res.Reactions, a.reaction(path, d))
+			a.res.Reactions = append(a.res.Reactions, a.reaction(path, d, rt.equation))
 		}
 	}
 	return a.computeReactions()
 }
 
 // computeReactions works out balance, thermochemistry and rate checks of the
-// resolved reactions on all cores: each reaction depends only on the
-// species, which are settled by now. Diagnostics are merged in file order.
+// resolved reactions. Each reaction is one memoized unit reading its
+// statement and the species units of its terms; units not kept from the last
+// analysis are computed on all cores (the species are settled by now).
+// Diagnostics are merged in file order.
 func (a *analysis) computeReactions() error {
 	rs := a.res.Reactions
-	err := a.parallel(len(rs), 256, func(i int) {
-		if r := rs[i]; r.Resolved {
-			a.balance(r.Decl, r)
-			a.thermo(r.Decl, r)
-			a.rates(r.Decl, r)
+	f := a.res.File
+	units := make([]*reactionUnit, len(rs))
+	var todo []int
+	for i, r := range rs {
+		if !r.Resolved {
+			r.Kp = newKp()
+			continue
 		}
+		if u := a.memo.reaction(a, f, r.Decl); u != nil {
+			units[i] = u
+			continue
+		}
+		todo = append(todo, i)
+	}
+	err := a.parallel(len(todo), 256, func(k int) {
+		i := todo[k]
+		r := rs[i]
+		r.Kp = newKp()
+		a.balance(r.Decl, r)
+		a.thermo(r.Decl, r)
+		a.rates(r.Decl, r)
+		units[i] = newReactionUnit(string(bodyText(f, r.Decl)), f.EnergyUnit, a.reactionDeps(r.Decl), r)
+		r.diags = nil
 	})
 	if err != nil {
 		return err
 	}
-	for _, r := range rs {
-		a.res.Diagnostics = append(a.res.Diagnostics, r.diags...)
-		r.diags = nil
+	for i, r := range rs {
+		u := units[i]
+		if u == nil {
+			continue
+		}
+		u.apply(r)
+		a.memo.keepReaction(u)
+		a.res.Diagnostics = append(a.res.Diagnostics, relocate(u.diags, r.File, r.Decl.Body().Start)...)
 	}
 	return nil
+}
+
+// newKp returns the Kp map of a reaction with every reported temperature
+// present and no value yet.
+func newKp() map[string]*float64 {
+	kp := make(map[string]*float64, len(keqTemperatures))
+	for _, k := range keqTemperatures {
+		kp[k.Key] = nil
+	}
+	return kp
 }
 
 func (a *analysis) recordUses(path string, d *speciesfile.Reaction) {
@@ -137,13 +172,11 @@ func reactionKey(d *speciesfile.Reaction) string {
 	return l + " = " + r + " " + tb
 }
 
-// reaction computes balance, thermochemistry and rate checks of one reaction.
-func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
+// reaction resolves the names of one reaction (equation is its text with
+// blanks collapsed); computeReactions works out the rest.
+func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation string) *Reaction {
 	f := a.res.Files[path]
-	r := &Reaction{Decl: d, File: path, Line: f.Lines.Position(d.Span().Start).Line + 1, Equation: equationText(f, d), Resolved: true, Kp: map[string]*float64{}}
-	for _, k := range keqTemperatures {
-		r.Kp[k.Key] = nil
-	}
+	r := &Reaction{Decl: d, File: path, Line: f.Lines.Line(d.Span().Start) + 1, Equation: equation, Resolved: true}
 	undeclared := func(t speciesfile.Token, what string) {
 		a.report(path, speciesfile.Diagnostic{Span: t.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUndeclaredSpecies,
 			Message: fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)})

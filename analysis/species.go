@@ -17,13 +17,29 @@ import (
 )
 
 // species resolves every species declaration in scope: structure, given
-// thermo, estimate, and the checks that compare them.
+// thermo, estimate, and the checks that compare them. The rules of each
+// declaration (speciesRules) form one memoized unit; duplicate names and
+// structures are checked across declarations on every analysis.
 func (a *analysis) species() error {
 	user := a.userGroups()
-	if err := a.prepare(user); err != nil {
-		return err
+	if len(user) > 0 {
+		a.userKey = groupsKey(user) // before the workers read it
 	}
-	byStructure := map[string][]*Species{}
+	nSpecies, nReactions := 0, 0
+	for _, path := range a.order {
+		nSpecies += len(a.res.Files[path].Species)
+		nReactions += len(a.res.Files[path].Reactions)
+	}
+	a.memo = a.w.startMemo(a.res.Path, a.set, a.userKey, nSpecies, nReactions)
+
+	type item struct {
+		path string
+		f    *speciesfile.File
+		sp   *Species
+		u    *speciesUnit
+	}
+	items := make([]item, 0, nSpecies)
+	var todo []int
 	for _, path := range a.order {
 		f := a.res.Files[path]
 		for _, d := range f.Species {
@@ -39,28 +55,40 @@ func (a *analysis) species() error {
 			}
 			a.res.ByName[sp.Name] = sp
 			a.res.Species = append(a.res.Species, sp)
-
-			a.structure(path, sp)
-			if sp.Mol == nil && len(d.Formula) > 0 {
-				// The parser reports a malformed composition line.
-				comp := map[string]int{}
-				for _, ec := range d.Formula {
-					comp[ec.Symbol] += ec.Count
-				}
-				sp.Composition = comp
-				sp.Formula = molecule.HillFormula(comp)
-				sp.MolarMass = MolarMassOf(comp)
+			u := a.memo.species(f, d)
+			if u == nil {
+				todo = append(todo, len(items))
 			}
-			if sp.Mol != nil {
-				if first := sameStructure(byStructure, sp); first != nil {
-					a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
-						Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(first.Loc)),
-						Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: first.Name + " has this structure"}}})
-				}
-				a.estimateSpecies(path, sp, user)
+			items = append(items, item{path: path, f: f, sp: sp, u: u})
+		}
+	}
+	// Units not kept from the last analysis are computed on all cores: each
+	// reads only its own declaration and the (concurrency-safe) caches.
+	err := a.parallel(len(todo), 16, func(k int) {
+		it := &items[todo[k]]
+		var diags []speciesfile.Diagnostic
+		unit := *a
+		unit.sink = &diags
+		unit.speciesRules(it.path, it.sp, user)
+		it.u = newSpeciesUnit(string(bodyText(it.f, it.sp.Decl)), it.f.EnergyUnit, it.sp, diags, it.path)
+	})
+	if err != nil {
+		return err
+	}
+	byStructure := map[string][]*Species{}
+	for _, it := range items {
+		sp := it.sp
+		it.u.apply(sp)
+		a.memo.keepSpecies(it.u)
+		if it.path == a.res.Path {
+			a.res.Diagnostics = append(a.res.Diagnostics, relocate(it.u.diags, it.path, sp.Decl.Body().Start)...)
+		}
+		if sp.Mol != nil {
+			if first := sameStructure(byStructure, sp); first != nil {
+				a.report(it.path, speciesfile.Diagnostic{Span: sp.Decl.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
+					Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(first.Loc)),
+					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: first.Name + " has this structure"}}})
 			}
-			a.given(path, sp)
-			a.thermoChecks(path, sp)
 		}
 	}
 	for _, g := range a.res.Groups {
@@ -78,12 +106,36 @@ func (a *analysis) species() error {
 	return nil
 }
 
+// speciesRules runs the rules of one species declaration that read nothing
+// but the declaration (and the settings and user groups): structure,
+// composition, estimate, given thermo and the checks comparing them.
+func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupValue) {
+	d := sp.Decl
+	a.structure(path, sp)
+	if sp.Mol == nil && len(d.Formula) > 0 {
+		// The parser reports a malformed composition line.
+		comp := map[string]int{}
+		for _, ec := range d.Formula {
+			comp[ec.Symbol] += ec.Count
+		}
+		sp.Composition = comp
+		sp.Formula = molecule.HillFormula(comp)
+		sp.MolarMass = MolarMassOf(comp)
+	}
+	if sp.Mol != nil {
+		sp.structKey = sp.inv + "|m" + strconv.Itoa(intAttr(d.Multiplicity))
+		a.estimateSpecies(path, sp, user)
+	}
+	a.given(path, sp)
+	a.thermoChecks(path, sp)
+}
+
 // sameStructure returns the first species in seen with the structure and
 // multiplicity of sp, and records sp. Species are bucketed by a cheap graph
 // invariant first; canonical forms are computed only within a bucket, so
 // most species never need one.
 func sameStructure(seen map[string][]*Species, sp *Species) *Species {
-	k := sp.inv + "|m" + strconv.Itoa(intAttr(sp.Decl.Multiplicity))
+	k := sp.structKey
 	bucket := seen[k]
 	for _, other := range bucket {
 		if identity(other.Mol) == identity(sp.Mol) {
@@ -139,41 +191,6 @@ type parsed struct {
 	molarMass   float64
 	ident       string // estimate-cache key of the structure
 	inv         string // invariant(mol)
-}
-
-// prepare reads every structure in scope and warms the estimate cache using
-// all cores: structures and estimates are independent of one another, while
-// the pass that follows (names, duplicates, diagnostics) is sequential.
-func (a *analysis) prepare(user []benson.GroupValue) error {
-	var decls []*speciesfile.Species
-	for _, path := range a.order {
-		for _, d := range a.res.Files[path].Species {
-			if d.SMILES != nil {
-				decls = append(decls, d)
-			}
-		}
-	}
-	a.parsed = make(map[*speciesfile.Species]parsed, len(decls))
-	if len(user) > 0 {
-		a.userKey = groupsKey(user) // before the workers read it
-	}
-	results := make([]parsed, len(decls))
-	err := a.parallel(len(decls), 64, func(i int) {
-		d := decls[i]
-		p := a.w.mols.parse(d.SMILES.Text)
-		results[i] = p
-		if p.err == nil {
-			// Errors are reported by the sequential pass.
-			_, _ = a.w.cache.get(p.ident, p.mol, a.estimateOptions(d, user))
-		}
-	})
-	if err != nil {
-		return err
-	}
-	for i, d := range decls {
-		a.parsed[d] = results[i]
-	}
-	return nil
 }
 
 func (a *analysis) estimateOptions(d *speciesfile.Species, user []benson.GroupValue) EstimateOptions {

@@ -23,6 +23,9 @@ type Workspace struct {
 	overlay  map[string][]byte // open documents: path → text
 	cache    *estimateCache
 	mols     *moleculeCache
+
+	incremental bool
+	memos       map[string]*memoTables // by analysed path: units of its last finished analysis
 }
 
 // Result is the analysis of one file together with the files it includes.

@@ -1,0 +1,368 @@
+package analysis
+
+import (
+	"fmt"
+
+	"kiln.dev/kiln/speciesfile"
+)
+
+// Incremental analysis.
+//
+// An analysis is a staged pipeline: parse → includes → groups → species →
+// reactions → cross-statement checks (duplicate names, structures and
+// reactions). The costly stages are made of small units, one per statement:
+//
+//   - a species unit holds a species' structure, estimate, given thermo and
+//     the checks of its own statement (bad-smiles, missing-group,
+//     missing-thermo, thermo-mismatch, nonphysical-thermo, …);
+//   - a reaction unit holds a reaction's balance, thermochemistry and rate
+//     checks;
+//   - a reaction text unit holds what follows from a reaction's text alone
+//     (its duplicate-detection key and equation text).
+//
+// A unit is a pure function of what it reads, so it is keyed by exactly
+// that: the statement's text (its body, from the keyword to the end of its
+// last line), the file's energy unit, the settings and user-defined groups
+// (one table per setting and group set), and, for reactions, the species
+// units of the species it names. Diagnostics and spans inside a unit are
+// stored relative to the start of the statement, so that a unit moved by an
+// edit elsewhere is reused as is: an edit to one SMILES recomputes one
+// species unit and the reaction units that name that species; an edit in a
+// comment between statements recomputes no unit at all, only positions
+// (parsing, the cross-statement checks and the assembly of the result are
+// redone on every analysis; they are linear and cheap).
+//
+// Each analysis reads the table left by the previous finished analysis of
+// the same file and builds a new one holding only the units it used, which
+// replaces the old table when it completes. Tables are never modified after
+// they are published, so concurrent analyses share them without locks, and
+// units of deleted statements are dropped. The result is the same as an
+// analysis from scratch (tested on random edit sequences).
+
+// memoTables are the units of one finished analysis.
+type memoTables struct {
+	key       string // settings and user groups the units were computed with
+	species   map[string]*speciesUnit
+	reactions map[string]*reactionUnit
+	rtext     map[string]*reactionText
+}
+
+func newMemoTables(key string, species, reactions int) *memoTables {
+	return &memoTables{
+		key:       key,
+		species:   make(map[string]*speciesUnit, species),
+		reactions: make(map[string]*reactionUnit, reactions),
+		rtext:     make(map[string]*reactionText, reactions),
+	}
+}
+
+// memo is the memoization state of one analysis: the tables it reads (old,
+// possibly nil) and the tables it builds (next).
+type memo struct {
+	old, next *memoTables
+}
+
+// memoKey identifies the inputs shared by every unit of an analysis.
+func memoKey(s Settings, userKey string) string {
+	return fmt.Sprintf("%#v|%s", s, userKey)
+}
+
+// SetIncremental turns on keeping per-statement results between analyses of
+// a file (see the package's incremental analysis notes). The language server
+// turns it on; a one-shot run (`kiln check`) has nothing to reuse and leaves
+// it off. Results are the same either way.
+func (w *Workspace) SetIncremental(on bool) {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	w.incremental = on
+	if !on {
+		w.memos = nil
+	}
+}
+
+// startMemo returns the memo state for an analysis of path with the given
+// settings and user groups; nil when the workspace is not incremental.
+func (w *Workspace) startMemo(path string, s Settings, userKey string, nSpecies, nReactions int) *memo {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	if !w.incremental {
+		return nil
+	}
+	key := memoKey(s, userKey)
+	m := &memo{next: newMemoTables(key, nSpecies, nReactions)}
+	if old := w.memos[path]; old != nil && old.key == key {
+		m.old = old
+	}
+	return m
+}
+
+// finishMemo publishes the tables of a completed analysis of path.
+func (w *Workspace) finishMemo(path string, m *memo) {
+	if m == nil {
+		return
+	}
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	if !w.incremental {
+		return
+	}
+	if w.memos == nil {
+		w.memos = map[string]*memoTables{}
+	}
+	w.memos[path] = m.next
+}
+
+// ForgetFile drops the units kept for analyses of path (a closed document).
+func (w *Workspace) ForgetFile(path string) {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	delete(w.memos, path)
+}
+
+// bodyText returns the text of a statement's body (shared with the source).
+func bodyText(f *speciesfile.File, st speciesfile.Stmt) []byte {
+	b := st.Body()
+	if b.Start < 0 || b.End > len(f.Src) || b.Start > b.End {
+		return nil
+	}
+	return f.Src[b.Start:b.End]
+}
+
+// shift returns sp moved by delta bytes.
+func shift(sp speciesfile.Span, delta int) speciesfile.Span {
+	return speciesfile.Span{Start: sp.Start + delta, End: sp.End + delta}
+}
+
+// pinned reports whether a diagnostic of ds lies outside the statement body
+// [start, end]: such a unit cannot be moved and is reused only in place.
+func pinned(ds []speciesfile.Diagnostic, start, end int) bool {
+	for _, d := range ds {
+		if d.Span.Start < start || d.Span.End > end {
+			return true
+		}
+		for _, r := range d.Related {
+			if r.Span.Start < start || r.Span.End > end {
+				return true
+			}
+		}
+	}
+	return false
+}
+
+// relocate returns copies of ds with spans (and related spans in file) moved
+// by delta bytes.
+func relocate(ds []speciesfile.Diagnostic, file string, delta int) []speciesfile.Diagnostic {
+	if len(ds) == 0 {
+		return nil
+	}
+	out := make([]speciesfile.Diagnostic, len(ds))
+	for i, d := range ds {
+		d.Span = shift(d.Span, delta)
+		if len(d.Related) > 0 {
+			rel := make([]speciesfile.Related, len(d.Related))
+			for k, r := range d.Related {
+				if r.File == file {
+					r.Span = shift(r.Span, delta)
+				}
+				rel[k] = r
+			}
+			d.Related = rel
+		}
+		out[i] = d
+	}
+	return out
+}
+
+// speciesUnit is the result of the per-statement rules of one species
+// declaration: everything in Species but its name, location and syntax
+// node, and its diagnostics with spans relative to the statement body.
+type speciesUnit struct {
+	text       string // the statement body
+	energyUnit string // the file's energy unit the statement was read with
+	pinned     int    // body offset the unit is bound to, -1 when it can move
+	tmpl       Species
+	diags      []speciesfile.Diagnostic
+}
+
+func newSpeciesUnit(text, energyUnit string, sp *Species, diags []speciesfile.Diagnostic, file string) *speciesUnit {
+	body := sp.Decl.Body()
+	base := body.Start
+	u := &speciesUnit{text: text, energyUnit: energyUnit, pinned: -1, tmpl: *sp, diags: relocate(diags, file, -base)}
+	if pinned(diags, body.Start, body.End) {
+		u.pinned = base
+	}
+	u.tmpl.Name, u.tmpl.Loc, u.tmpl.Decl, u.tmpl.unit = "", Location{}, nil, nil
+	if sp.Given != nil {
+		g := *sp.Given
+		g.Span = shift(g.Span, -base)
+		u.tmpl.Given = &g
+	}
+	return u
+}
+
+// fits reports whether u can stand for statement st of file f.
+func (u *speciesUnit) fits(f *speciesfile.File, st speciesfile.Stmt) bool {
+	return u != nil && u.energyUnit == f.EnergyUnit && (u.pinned < 0 || u.pinned == st.Body().Start)
+}
+
+// apply fills sp (whose Name, Loc and Decl are set) from the unit.
+func (u *speciesUnit) apply(sp *Species) {
+	name, loc, decl := sp.Name, sp.Loc, sp.Decl
+	*sp = u.tmpl
+	sp.Name, sp.Loc, sp.Decl, sp.unit = name, loc, decl, u
+	if u.tmpl.Given != nil {
+		g := *u.tmpl.Given
+		g.Span = shift(g.Span, decl.Body().Start)
+		sp.Given = &g
+	}
+}
+
+// species returns the unit of a species declaration kept from the last
+// analysis, or nil. The returned unit is recorded for the next analysis.
+func (m *memo) species(f *speciesfile.File, d *speciesfile.Species) *speciesUnit {
+	if m == nil {
+		return nil
+	}
+	text := bodyText(f, d)
+	if u := m.next.species[string(text)]; u.fits(f, d) {
+		return u
+	}
+	if m.old == nil {
+		return nil
+	}
+	u := m.old.species[string(text)]
+	if !u.fits(f, d) {
+		return nil
+	}
+	m.next.species[u.text] = u
+	return u
+}
+
+// keepSpecies records a newly computed unit.
+func (m *memo) keepSpecies(u *speciesUnit) {
+	if m != nil {
+		m.next.species[u.text] = u
+	}
+}
+
+// reactionText is what follows from a reaction statement's text alone.
+type reactionText struct {
+	text     string
+	dupKey   string // reactionKey
+	equation string // equationText
+}
+
+// reactionText returns the text unit of reaction d of file f, computing it
+// when it is not kept.
+func (m *memo) reactionText(f *speciesfile.File, d *speciesfile.Reaction) *reactionText {
+	if m == nil {
+		return &reactionText{dupKey: reactionKey(d), equation: equationText(f, d)}
+	}
+	text := bodyText(f, d)
+	if u := m.next.rtext[string(text)]; u != nil {
+		return u
+	}
+	var u *reactionText
+	if m.old != nil {
+		u = m.old.rtext[string(text)]
+	}
+	if u == nil {
+		u = &reactionText{text: string(text), dupKey: reactionKey(d), equation: equationText(f, d)}
+	}
+	m.next.rtext[u.text] = u
+	return u
+}
+
+// reactionUnit is the balance, thermochemistry and rate checks of one
+// reaction, computed from its statement and the species units of its
+// reactants and products.
+type reactionUnit struct {
+	text       string
+	energyUnit string
+	pinned     int            // as in speciesUnit
+	deps       []*speciesUnit // species units of the reactants, then the products
+	tmpl       Reaction       // computed fields only
+	diags      []speciesfile.Diagnostic
+}
+
+// reactionDeps returns the species units a reaction's checks read, in term
+// order (reactants, then products).
+func (a *analysis) reactionDeps(d *speciesfile.Reaction) []*speciesUnit {
+	out := make([]*speciesUnit, 0, len(d.Reactants)+len(d.Products))
+	for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
+		for _, t := range ts {
+			out = append(out, a.res.ByName[t.Name.Text].unit)
+		}
+	}
+	return out
+}
+
+// depsMatch reports whether the species units named by d are deps.
+func (a *analysis) depsMatch(d *speciesfile.Reaction, deps []*speciesUnit) bool {
+	if len(deps) != len(d.Reactants)+len(d.Products) {
+		return false
+	}
+	i := 0
+	for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
+		for _, t := range ts {
+			sp := a.res.ByName[t.Name.Text]
+			if sp == nil || sp.unit == nil || sp.unit != deps[i] {
+				return false
+			}
+			i++
+		}
+	}
+	return true
+}
+
+// reaction returns the kept unit of resolved reaction d of file f, or nil.
+func (m *memo) reaction(a *analysis, f *speciesfile.File, d *speciesfile.Reaction) *reactionUnit {
+	if m == nil {
+		return nil
+	}
+	text := bodyText(f, d)
+	valid := func(u *reactionUnit) bool {
+		return u != nil && u.energyUnit == f.EnergyUnit && (u.pinned < 0 || u.pinned == d.Body().Start) && a.depsMatch(d, u.deps)
+	}
+	if u := m.next.reactions[string(text)]; valid(u) {
+		return u
+	}
+	if m.old == nil {
+		return nil
+	}
+	u := m.old.reactions[string(text)]
+	if !valid(u) {
+		return nil
+	}
+	m.next.reactions[u.text] = u
+	return u
+}
+
+func newReactionUnit(text, energyUnit string, deps []*speciesUnit, r *Reaction) *reactionUnit {
+	body := r.Decl.Body()
+	base := body.Start
+	u := &reactionUnit{text: text, energyUnit: energyUnit, pinned: -1, deps: deps, diags: relocate(r.diags, r.File, -base)}
+	if pinned(r.diags, body.Start, body.End) {
+		u.pinned = base
+	}
+	u.tmpl = Reaction{
+		Balance: r.Balance, DH298: r.DH298, DS298: r.DS298, DG298: r.DG298, Kp: r.Kp,
+		ReverseRate1000: r.ReverseRate1000, Collision: r.Collision,
+		reactants: r.reactants, products: r.products,
+	}
+	return u
+}
+
+// apply copies the unit's computed fields into r.
+func (u *reactionUnit) apply(r *Reaction) {
+	t := &u.tmpl
+	r.Balance, r.DH298, r.DS298, r.DG298, r.Kp = t.Balance, t.DH298, t.DS298, t.DG298, t.Kp
+	r.ReverseRate1000, r.Collision = t.ReverseRate1000, t.Collision
+	r.reactants, r.products = t.reactants, t.products
+}
+
+func (m *memo) keepReaction(u *reactionUnit) {
+	if m != nil {
+		m.next.reactions[u.text] = u
+	}
+}
