@@ -62,7 +62,6 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 		Settings: set,
 		Files:    map[string]*speciesfile.File{},
 		ByName:   map[string]*Species{},
-		Uses:     map[string][]Location{},
 	}}
 	f := speciesfile.Parse(path, text)
 	a.res.File = f
@@ -72,6 +71,7 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 	if err := ctx.Err(); err != nil {
 		return nil, err
 	}
+	a.res.order = a.order
 	a.groups()
 	if err := a.species(); err != nil {
 		return nil, err

@@ -18,18 +18,22 @@ var keqTemperatures = []struct {
 	T   float64
 }{{"298", T298}, {"1000", 1000}, {"1500", 1500}}
 
-// reactions resolves the reactions of the analysed file and records the uses
-// of species names in every file in scope.
+// reactions resolves the reactions of the analysed file and finds repeated
+// reactions in every file in scope.
 func (a *analysis) reactions() error {
-	seen := map[string]*speciesfile.Reaction{}
-	seenFile := map[string]string{}
+	n := 0
+	for _, path := range a.order {
+		n += len(a.res.Files[path].Reactions)
+	}
+	seen := make(map[string]*speciesfile.Reaction, n)
+	seenFile := make(map[string]string, n)
+	a.res.Reactions = make([]*Reaction, 0, len(a.res.File.Reactions))
 	for _, path := range a.order {
 		f := a.res.Files[path]
 		for _, d := range f.Reactions {
 			if err := a.ctx.Err(); err != nil {
 				return err
 			}
-			a.recordUses(path, d)
 			rt := a.memo.reactionText(f, d)
 			key := rt.dupKey
 			if first, dup := seen[key]; dup {
@@ -112,9 +116,9 @@ func newKp() map[string]*float64 {
 	return kp
 }
 
-func (a *analysis) recordUses(path string, d *speciesfile.Reaction) {
+func recordUses(uses map[string][]Location, path string, d *speciesfile.Reaction) {
 	add := func(t speciesfile.Token) {
-		a.res.Uses[t.Text] = append(a.res.Uses[t.Text], Location{File: path, Span: t.Span})
+		uses[t.Text] = append(uses[t.Text], Location{File: path, Span: t.Span})
 	}
 	for _, t := range d.Reactants {
 		add(t.Name)

@@ -31,6 +31,8 @@ func (a *analysis) species() error {
 		nReactions += len(a.res.Files[path].Reactions)
 	}
 	a.memo = a.w.startMemo(a.res.Path, a.set, a.userKey, nSpecies, nReactions)
+	a.res.ByName = make(map[string]*Species, nSpecies)
+	a.res.Species = make([]*Species, 0, nSpecies)
 
 	type item struct {
 		path string
@@ -75,7 +77,7 @@ func (a *analysis) species() error {
 	if err != nil {
 		return err
 	}
-	byStructure := map[string][]*Species{}
+	byStructure := make(map[string][]*Species, len(items))
 	for _, it := range items {
 		sp := it.sp
 		it.u.apply(sp)
