@@ -366,3 +366,10 @@ func (m *memo) keepReaction(u *reactionUnit) {
 		m.next.reactions[u.text] = u
 	}
 }
+
+// SameUnit reports whether sp and prev (a species of an earlier analysis by
+// the same incremental workspace) were made from the same unit: the same
+// declaration text read with the same settings, so the same results.
+func (sp *Species) SameUnit(prev *Species) bool {
+	return prev != nil && sp.unit != nil && sp.unit == prev.unit
+}

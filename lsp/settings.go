@@ -16,7 +16,12 @@ import (
 //	mismatchHf298    kcal/mol                thermo-mismatch threshold on ΔHf°298, > 0
 //	mismatchS298     cal/(mol K)             thermo-mismatch threshold on S°298, > 0
 //	collisionFactor  dimensionless           multiplies the collision-limit bound, > 0
+//	estimateNotes    boolean                 send per-species "estimated …" information
+//	                                         diagnostics (default: only to clients without
+//	                                         inlay hints; in files of more than 1,000
+//	                                         species only for species edited since opening)
 type userSettings struct {
+	EstimateNotes   *bool    `json:"estimateNotes"`
 	Units           *string  `json:"units"`
 	TMid            *float64 `json:"tMid"`
 	THigh           *float64 `json:"tHigh"`
@@ -29,24 +34,30 @@ type userSettings struct {
 const calorie = 4.184
 
 // applySettings reads raw (either {"kiln": {...}} or the flat object) onto
-// base and returns the result. Invalid values are rejected with an error and
-// leave base unchanged; null or empty input returns base.
-func applySettings(base analysis.Settings, raw json.RawMessage) (analysis.Settings, error) {
+// base and returns the result, with the estimateNotes setting (nil when
+// absent). Invalid values are rejected with an error and leave base
+// unchanged; null or empty input returns base.
+func applySettings(base analysis.Settings, raw json.RawMessage) (analysis.Settings, *bool, error) {
+	s, u, err := readSettings(base, raw)
+	return s, u.EstimateNotes, err
+}
+
+func readSettings(base analysis.Settings, raw json.RawMessage) (analysis.Settings, userSettings, error) {
+	var u userSettings
 	if len(raw) == 0 || string(raw) == "null" {
-		return base, nil
+		return base, u, nil
 	}
 	var wrapped struct {
 		Kiln json.RawMessage `json:"kiln"`
 	}
 	if err := json.Unmarshal(raw, &wrapped); err != nil {
-		return base, fmt.Errorf("settings: %w", err)
+		return base, userSettings{}, fmt.Errorf("settings: %w", err)
 	}
 	if len(wrapped.Kiln) > 0 && string(wrapped.Kiln) != "null" {
 		raw = wrapped.Kiln
 	}
-	var u userSettings
 	if err := json.Unmarshal(raw, &u); err != nil {
-		return base, fmt.Errorf("settings: %w", err)
+		return base, userSettings{}, fmt.Errorf("settings: %w", err)
 	}
 	s := base
 	if u.Units != nil {
@@ -54,7 +65,7 @@ func applySettings(base analysis.Settings, raw json.RawMessage) (analysis.Settin
 		case "kcal/mol", "kJ/mol":
 			s.DisplayUnits = *u.Units
 		default:
-			return base, fmt.Errorf("settings: units must be \"kcal/mol\" or \"kJ/mol\", got %q", *u.Units)
+			return base, userSettings{}, fmt.Errorf("settings: units must be \"kcal/mol\" or \"kJ/mol\", got %q", *u.Units)
 		}
 	}
 	positive := func(name string, v *float64, scale float64, dst *float64) error {
@@ -80,11 +91,11 @@ func applySettings(base analysis.Settings, raw json.RawMessage) (analysis.Settin
 		{"collisionFactor", u.CollisionFactor, 1, &s.CollisionFactor},
 	} {
 		if err := positive(f.name, f.v, f.scale, f.dst); err != nil {
-			return base, err
+			return base, userSettings{}, err
 		}
 	}
 	if !(s.TMid > 300 && s.TMid < s.THigh && s.THigh <= 6000) {
-		return base, fmt.Errorf("settings: need 300 K < tMid < tHigh ≤ 6000 K, got tMid=%g tHigh=%g", s.TMid, s.THigh)
+		return base, userSettings{}, fmt.Errorf("settings: need 300 K < tMid < tHigh ≤ 6000 K, got tMid=%g tHigh=%g", s.TMid, s.THigh)
 	}
-	return s, nil
+	return s, u, nil
 }

@@ -8,6 +8,7 @@ package ide
 
 import (
 	"sort"
+	"sync"
 
 	"kiln.dev/kiln/analysis"
 	"kiln.dev/kiln/speciesfile"
@@ -67,6 +68,9 @@ type Occurrence struct {
 type Index struct {
 	r      *analysis.Result
 	byFile map[string][]Occurrence // sorted by Span.Start, statements before their tokens
+
+	namesOnce sync.Once
+	names     []Completion // species names, sorted (built on first completion)
 }
 
 // NewIndex indexes r: every file it holds (the analysed file and its includes).
