@@ -29,9 +29,9 @@ type document struct {
 	version int32
 	text    []byte
 	lines   *speciesfile.LineIndex
-	seq     uint64      // number of text changes so far
-	edits   []textEdit  // changes made after latest's text, in order
-	latest  *snapshot   // the latest finished analysis (nil before the first)
+	seq     uint64     // number of text changes so far
+	edits   []textEdit // changes made after latest's text, in order
+	latest  *snapshot  // the latest finished analysis (nil before the first)
 
 	publishMu sync.Mutex // orders diagnostics publications; guards the fields below
 	published []protocol.Diagnostic
@@ -58,7 +58,7 @@ type snapshot struct {
 // textEdit is one change of a document's text: bytes [start, end) of the
 // text before it were replaced by newLen bytes.
 type textEdit struct {
-	seq               uint64
+	seq                uint64
 	start, end, newLen int
 }
 

@@ -43,7 +43,7 @@ type fakeEditor struct {
 	settled  map[protocol.DocumentURI]int32 // latest version whose analysis changed no diagnostics
 	pubs     int                            // publications received
 	notify   chan struct{}                  // closed and replaced on every publication or settled analysis
-	messages []string      // window/showMessage texts
+	messages []string                       // window/showMessage texts
 }
 
 type fakeOptions struct {

@@ -83,8 +83,8 @@ type server struct {
 	// estimateNotes setting (nil = by clientHints).
 	clientHints bool
 	notes       *bool
-	docs     map[string]*document // by path
-	inflight map[string]context.CancelFunc
+	docs        map[string]*document // by path
+	inflight    map[string]context.CancelFunc
 }
 
 // Serve runs a language server on stream until the client sends exit, the

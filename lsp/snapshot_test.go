@@ -80,7 +80,7 @@ func TestViewMapping(t *testing.T) {
 	v := view{edits: []textEdit{{seq: 1, start: 2, end: 4, newLen: 3}, {seq: 2, start: 0, end: 0, newLen: 1}}}
 	for _, c := range []struct {
 		old, cur int
-		ok      bool
+		ok       bool
 	}{{0, 0, true}, {1, 2, true}, {2, 3, true}, {4, 6, true}, {5, 7, true}, {6, 8, true}} {
 		got, ok := v.forward(c.old)
 		if c.old != 0 { // offset 0 is before the inserted "!"
