@@ -36,7 +36,9 @@ type Options struct {
 	Root string
 	// Loader reads files that are not open in the editor; nil reads the disk.
 	Loader analysis.Loader
-	// Debounce is the delay between a change and its analysis; 0 means 50 ms.
+	// Debounce is the delay between a change and its analysis; 0 means 20 ms
+	// (short: a newer change cancels an analysis in progress, and an analysis
+	// after a small edit recomputes only what the edit touched).
 	Debounce time.Duration
 	// Settings are the initial settings; the zero value means
 	// analysis.DefaultSettings(). Client settings are applied on top.
@@ -96,7 +98,7 @@ func Serve(ctx context.Context, stream io.ReadWriteCloser, logger *zap.Logger, o
 		logger = zap.NewNop()
 	}
 	if opts.Debounce <= 0 {
-		opts.Debounce = 50 * time.Millisecond
+		opts.Debounce = 20 * time.Millisecond
 	}
 	if opts.Loader == nil {
 		opts.Loader = os.ReadFile
