@@ -1,6 +1,7 @@
 package analysis
 
 import (
+	"bytes"
 	"fmt"
 
 	"kiln.dev/kiln/speciesfile"
@@ -39,27 +40,36 @@ import (
 // units of deleted statements are dropped. The result is the same as an
 // analysis from scratch (tested on random edit sequences).
 
-// memoTables are the units of one finished analysis.
+// memoTables are the units of one finished analysis, per file in scope.
 type memoTables struct {
-	key       string // settings and user groups the units were computed with
-	species   map[string]*speciesUnit
-	reactions map[string]*reactionUnit
-	rtext     map[string]*reactionText
+	key   string // settings and user groups the units were computed with
+	files map[string]*fileMemo
 }
 
-func newMemoTables(key string, species, reactions int) *memoTables {
-	return &memoTables{
-		key:       key,
-		species:   make(map[string]*speciesUnit, species),
-		reactions: make(map[string]*reactionUnit, reactions),
-		rtext:     make(map[string]*reactionText, reactions),
-	}
+// fileMemo holds the units of one file's statements, aligned with the
+// file's species and reaction lists (nil where none was made).
+type fileMemo struct {
+	file    *speciesfile.File
+	species []*speciesUnit
+	rtext   []*reactionText
+	rx      []*reactionUnit
 }
 
 // memo is the memoization state of one analysis: the tables it reads (old,
-// possibly nil) and the tables it builds (next).
+// possibly nil) and the tables it builds (next). Statements are matched
+// with the old file's by alignment: the unchanged statements before and
+// after the edited region are matched in order by comparing their text
+// (no hashing), and the statements of the edited region by a map of the old
+// region's texts.
 type memo struct {
 	old, next *memoTables
+	align     map[string]*alignment
+}
+
+// alignment maps a file's statements to those of its last analysis.
+type alignment struct {
+	old                *fileMemo // nil: nothing to reuse
+	species, reactions []int32   // index in the old lists, -1 for none
 }
 
 // memoKey identifies the inputs shared by every unit of an analysis.
@@ -82,14 +92,14 @@ func (w *Workspace) SetIncremental(on bool) {
 
 // startMemo returns the memo state for an analysis of path with the given
 // settings and user groups; nil when the workspace is not incremental.
-func (w *Workspace) startMemo(path string, s Settings, userKey string, nSpecies, nReactions int) *memo {
+func (w *Workspace) startMemo(path string, s Settings, userKey string) *memo {
 	w.mu.Lock()
 	defer w.mu.Unlock()
 	if !w.incremental {
 		return nil
 	}
 	key := memoKey(s, userKey)
-	m := &memo{next: newMemoTables(key, nSpecies, nReactions)}
+	m := &memo{next: &memoTables{key: key, files: map[string]*fileMemo{}}, align: map[string]*alignment{}}
 	if old := w.memos[path]; old != nil && old.key == key {
 		m.old = old
 	}
@@ -117,6 +127,64 @@ func (w *Workspace) ForgetFile(path string) {
 	w.mu.Lock()
 	defer w.mu.Unlock()
 	delete(w.memos, path)
+}
+
+// file returns the alignment of file f (at path) with its last analysis,
+// creating its next tables on first use.
+func (m *memo) file(path string, f *speciesfile.File) *alignment {
+	if al := m.align[path]; al != nil {
+		return al
+	}
+	m.next.files[path] = &fileMemo{
+		file:    f,
+		species: make([]*speciesUnit, len(f.Species)),
+		rtext:   make([]*reactionText, len(f.Reactions)),
+		rx:      make([]*reactionUnit, len(f.Reactions)),
+	}
+	al := &alignment{}
+	if m.old != nil {
+		if old := m.old.files[path]; old != nil && old.file.EnergyUnit == f.EnergyUnit {
+			al.old = old
+			al.species = alignLists(old.file, f, old.file.Species, f.Species)
+			al.reactions = alignLists(old.file, f, old.file.Reactions, f.Reactions)
+		}
+	}
+	m.align[path] = al
+	return al
+}
+
+// alignLists matches the statements of news (of file nf) with those of olds
+// (of file of) that have the same text: it returns, per new statement, the
+// index of an old one or -1.
+func alignLists[T speciesfile.Stmt](of, nf *speciesfile.File, olds, news []T) []int32 {
+	out := make([]int32, len(news))
+	for i := range out {
+		out[i] = -1
+	}
+	same := func(i, j int) bool { return bytes.Equal(bodyText(of, olds[i]), bodyText(nf, news[j])) }
+	p := 0
+	for p < len(olds) && p < len(news) && same(p, p) {
+		out[p] = int32(p)
+		p++
+	}
+	q := 0
+	for q < len(olds)-p && q < len(news)-p && same(len(olds)-1-q, len(news)-1-q) {
+		out[len(news)-1-q] = int32(len(olds) - 1 - q)
+		q++
+	}
+	if len(olds)-p-q == 0 || len(news)-p-q == 0 {
+		return out
+	}
+	region := make(map[string]int32, len(olds)-p-q)
+	for i := p; i < len(olds)-q; i++ {
+		region[string(bodyText(of, olds[i]))] = int32(i)
+	}
+	for j := p; j < len(news)-q; j++ {
+		if i, ok := region[string(bodyText(nf, news[j]))]; ok {
+			out[j] = i
+		}
+	}
+	return out
 }
 
 // bodyText returns the text of a statement's body (shared with the source).
@@ -149,6 +217,26 @@ func pinned(ds []speciesfile.Diagnostic, start, end int) bool {
 	return false
 }
 
+// appendRelocated appends ds to dst with spans (and related spans in file)
+// moved by delta bytes.
+func appendRelocated(dst, ds []speciesfile.Diagnostic, file string, delta int) []speciesfile.Diagnostic {
+	for _, d := range ds {
+		d.Span = shift(d.Span, delta)
+		if len(d.Related) > 0 {
+			rel := make([]speciesfile.Related, len(d.Related))
+			for k, r := range d.Related {
+				if r.File == file {
+					r.Span = shift(r.Span, delta)
+				}
+				rel[k] = r
+			}
+			d.Related = rel
+		}
+		dst = append(dst, d)
+	}
+	return dst
+}
+
 // relocate returns copies of ds with spans (and related spans in file) moved
 // by delta bytes.
 func relocate(ds []speciesfile.Diagnostic, file string, delta int) []speciesfile.Diagnostic {
@@ -177,17 +265,16 @@ func relocate(ds []speciesfile.Diagnostic, file string, delta int) []speciesfile
 // declaration: everything in Species but its name, location and syntax
 // node, and its diagnostics with spans relative to the statement body.
 type speciesUnit struct {
-	text       string // the statement body
 	energyUnit string // the file's energy unit the statement was read with
 	pinned     int    // body offset the unit is bound to, -1 when it can move
 	tmpl       Species
 	diags      []speciesfile.Diagnostic
 }
 
-func newSpeciesUnit(text, energyUnit string, sp *Species, diags []speciesfile.Diagnostic, file string) *speciesUnit {
+func newSpeciesUnit(energyUnit string, sp *Species, diags []speciesfile.Diagnostic, file string) *speciesUnit {
 	body := sp.Decl.Body()
 	base := body.Start
-	u := &speciesUnit{text: text, energyUnit: energyUnit, pinned: -1, tmpl: *sp, diags: relocate(diags, file, -base)}
+	u := &speciesUnit{energyUnit: energyUnit, pinned: -1, tmpl: *sp, diags: relocate(diags, file, -base)}
 	if pinned(diags, body.Start, body.End) {
 		u.pinned = base
 	}
@@ -217,59 +304,55 @@ func (u *speciesUnit) apply(sp *Species) {
 	}
 }
 
-// species returns the unit of a species declaration kept from the last
-// analysis, or nil. The returned unit is recorded for the next analysis.
-func (m *memo) species(f *speciesfile.File, d *speciesfile.Species) *speciesUnit {
+// species returns the unit of species declaration k of file f (at path)
+// kept from the last analysis, or nil. The returned unit is recorded for
+// the next analysis.
+func (m *memo) species(path string, f *speciesfile.File, k int) *speciesUnit {
 	if m == nil {
 		return nil
 	}
-	text := bodyText(f, d)
-	if u := m.next.species[string(text)]; u.fits(f, d) {
-		return u
-	}
-	if m.old == nil {
+	al := m.file(path, f)
+	if al.old == nil || al.species[k] < 0 {
 		return nil
 	}
-	u := m.old.species[string(text)]
-	if !u.fits(f, d) {
+	u := al.old.species[al.species[k]]
+	if !u.fits(f, f.Species[k]) {
 		return nil
 	}
-	m.next.species[u.text] = u
+	m.next.files[path].species[k] = u
 	return u
 }
 
-// keepSpecies records a newly computed unit.
-func (m *memo) keepSpecies(u *speciesUnit) {
+// keepSpecies records a newly computed unit of species declaration k of
+// the file at path.
+func (m *memo) keepSpecies(path string, k int, u *speciesUnit) {
 	if m != nil {
-		m.next.species[u.text] = u
+		m.next.files[path].species[k] = u
 	}
 }
 
 // reactionText is what follows from a reaction statement's text alone.
 type reactionText struct {
-	text     string
 	dupKey   string // reactionKey
 	equation string // equationText
 }
 
-// reactionText returns the text unit of reaction d of file f, computing it
-// when it is not kept.
-func (m *memo) reactionText(f *speciesfile.File, d *speciesfile.Reaction) *reactionText {
+// reactionText returns the text unit of reaction k of file f (at path),
+// computing it when it is not kept.
+func (m *memo) reactionText(path string, f *speciesfile.File, k int) *reactionText {
+	d := f.Reactions[k]
 	if m == nil {
 		return &reactionText{dupKey: reactionKey(d), equation: equationText(f, d)}
 	}
-	text := bodyText(f, d)
-	if u := m.next.rtext[string(text)]; u != nil {
-		return u
-	}
+	al := m.file(path, f)
 	var u *reactionText
-	if m.old != nil {
-		u = m.old.rtext[string(text)]
+	if al.old != nil && al.reactions[k] >= 0 {
+		u = al.old.rtext[al.reactions[k]]
 	}
 	if u == nil {
-		u = &reactionText{text: string(text), dupKey: reactionKey(d), equation: equationText(f, d)}
+		u = &reactionText{dupKey: reactionKey(d), equation: equationText(f, d)}
 	}
-	m.next.rtext[u.text] = u
+	m.next.files[path].rtext[k] = u
 	return u
 }
 
@@ -277,7 +360,6 @@ func (m *memo) reactionText(f *speciesfile.File, d *speciesfile.Reaction) *react
 // reaction, computed from its statement and the species units of its
 // reactants and products.
 type reactionUnit struct {
-	text       string
 	energyUnit string
 	pinned     int            // as in speciesUnit
 	deps       []*speciesUnit // species units of the reactants, then the products
@@ -315,33 +397,29 @@ func (a *analysis) depsMatch(d *speciesfile.Reaction, deps []*speciesUnit) bool 
 	return true
 }
 
-// reaction returns the kept unit of resolved reaction d of file f, or nil.
-func (m *memo) reaction(a *analysis, f *speciesfile.File, d *speciesfile.Reaction) *reactionUnit {
+// reaction returns the kept unit of resolved reaction k of file f (at
+// path), or nil.
+func (m *memo) reaction(a *analysis, path string, f *speciesfile.File, k int) *reactionUnit {
 	if m == nil {
 		return nil
 	}
-	text := bodyText(f, d)
-	valid := func(u *reactionUnit) bool {
-		return u != nil && u.energyUnit == f.EnergyUnit && (u.pinned < 0 || u.pinned == d.Body().Start) && a.depsMatch(d, u.deps)
-	}
-	if u := m.next.reactions[string(text)]; valid(u) {
-		return u
-	}
-	if m.old == nil {
+	al := m.file(path, f)
+	if al.old == nil || al.reactions[k] < 0 {
 		return nil
 	}
-	u := m.old.reactions[string(text)]
-	if !valid(u) {
+	d := f.Reactions[k]
+	u := al.old.rx[al.reactions[k]]
+	if u == nil || u.energyUnit != f.EnergyUnit || (u.pinned >= 0 && u.pinned != d.Body().Start) || !a.depsMatch(d, u.deps) {
 		return nil
 	}
-	m.next.reactions[u.text] = u
+	m.next.files[path].rx[k] = u
 	return u
 }
 
-func newReactionUnit(text, energyUnit string, deps []*speciesUnit, r *Reaction) *reactionUnit {
+func newReactionUnit(energyUnit string, deps []*speciesUnit, r *Reaction) *reactionUnit {
 	body := r.Decl.Body()
 	base := body.Start
-	u := &reactionUnit{text: text, energyUnit: energyUnit, pinned: -1, deps: deps, diags: relocate(r.diags, r.File, -base)}
+	u := &reactionUnit{energyUnit: energyUnit, pinned: -1, deps: deps, diags: relocate(r.diags, r.File, -base)}
 	if pinned(r.diags, body.Start, body.End) {
 		u.pinned = base
 	}
@@ -361,9 +439,10 @@ func (u *reactionUnit) apply(r *Reaction) {
 	r.reactants, r.products = t.reactants, t.products
 }
 
-func (m *memo) keepReaction(u *reactionUnit) {
+// keepReaction records a newly computed unit of reaction k of the file at path.
+func (m *memo) keepReaction(path string, k int, u *reactionUnit) {
 	if m != nil {
-		m.next.reactions[u.text] = u
+		m.next.files[path].rx[k] = u
 	}
 }
 

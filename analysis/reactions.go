@@ -3,6 +3,7 @@ package analysis
 import (
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -30,11 +31,11 @@ func (a *analysis) reactions() error {
 	a.res.Reactions = make([]*Reaction, 0, len(a.res.File.Reactions))
 	for _, path := range a.order {
 		f := a.res.Files[path]
-		for _, d := range f.Reactions {
+		for k, d := range f.Reactions {
 			if err := a.ctx.Err(); err != nil {
 				return err
 			}
-			rt := a.memo.reactionText(f, d)
+			rt := a.memo.reactionText(path, f, k)
 			key := rt.dupKey
 			if first, dup := seen[key]; dup {
 				if d.Duplicate == nil || first.Duplicate == nil {
@@ -75,7 +76,7 @@ func (a *analysis) computeReactions() error {
 			r.Kp = newKp()
 			continue
 		}
-		if u := a.memo.reaction(a, f, r.Decl); u != nil {
+		if u := a.memo.reaction(a, a.res.Path, f, i); u != nil {
 			units[i] = u
 			continue
 		}
@@ -88,20 +89,27 @@ func (a *analysis) computeReactions() error {
 		a.balance(r.Decl, r)
 		a.thermo(r.Decl, r)
 		a.rates(r.Decl, r)
-		units[i] = newReactionUnit(string(bodyText(f, r.Decl)), f.EnergyUnit, a.reactionDeps(r.Decl), r)
+		units[i] = newReactionUnit(f.EnergyUnit, a.reactionDeps(r.Decl), r)
 		r.diags = nil
 	})
 	if err != nil {
 		return err
 	}
+	n := 0
+	for _, u := range units {
+		if u != nil {
+			n += len(u.diags)
+		}
+	}
+	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n)
 	for i, r := range rs {
 		u := units[i]
 		if u == nil {
 			continue
 		}
 		u.apply(r)
-		a.memo.keepReaction(u)
-		a.res.Diagnostics = append(a.res.Diagnostics, relocate(u.diags, r.File, r.Decl.Body().Start)...)
+		a.memo.keepReaction(a.res.Path, i, u)
+		a.res.Diagnostics = appendRelocated(a.res.Diagnostics, u.diags, r.File, r.Decl.Body().Start)
 	}
 	return nil
 }

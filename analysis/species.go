@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io/fs"
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -25,18 +26,18 @@ func (a *analysis) species() error {
 	if len(user) > 0 {
 		a.userKey = groupsKey(user) // before the workers read it
 	}
-	nSpecies, nReactions := 0, 0
+	nSpecies := 0
 	for _, path := range a.order {
 		nSpecies += len(a.res.Files[path].Species)
-		nReactions += len(a.res.Files[path].Reactions)
 	}
-	a.memo = a.w.startMemo(a.res.Path, a.set, a.userKey, nSpecies, nReactions)
+	a.memo = a.w.startMemo(a.res.Path, a.set, a.userKey)
 	a.res.ByName = make(map[string]*Species, nSpecies)
 	a.res.Species = make([]*Species, 0, nSpecies)
 
 	type item struct {
 		path string
 		f    *speciesfile.File
+		k    int // index in f.Species
 		sp   *Species
 		u    *speciesUnit
 	}
@@ -44,7 +45,7 @@ func (a *analysis) species() error {
 	var todo []int
 	for _, path := range a.order {
 		f := a.res.Files[path]
-		for _, d := range f.Species {
+		for k, d := range f.Species {
 			if err := a.ctx.Err(); err != nil {
 				return err
 			}
@@ -57,11 +58,11 @@ func (a *analysis) species() error {
 			}
 			a.res.ByName[sp.Name] = sp
 			a.res.Species = append(a.res.Species, sp)
-			u := a.memo.species(f, d)
+			u := a.memo.species(path, f, k)
 			if u == nil {
 				todo = append(todo, len(items))
 			}
-			items = append(items, item{path: path, f: f, sp: sp, u: u})
+			items = append(items, item{path: path, f: f, k: k, sp: sp, u: u})
 		}
 	}
 	// Units not kept from the last analysis are computed on all cores: each
@@ -72,18 +73,25 @@ func (a *analysis) species() error {
 		unit := *a
 		unit.sink = &diags
 		unit.speciesRules(it.path, it.sp, user)
-		it.u = newSpeciesUnit(string(bodyText(it.f, it.sp.Decl)), it.f.EnergyUnit, it.sp, diags, it.path)
+		it.u = newSpeciesUnit(it.f.EnergyUnit, it.sp, diags, it.path)
 	})
 	if err != nil {
 		return err
 	}
+	n := len(a.res.Diagnostics)
+	for _, it := range items {
+		if it.path == a.res.Path {
+			n += len(it.u.diags)
+		}
+	}
+	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
 	byStructure := make(map[string][]*Species, len(items))
 	for _, it := range items {
 		sp := it.sp
 		it.u.apply(sp)
-		a.memo.keepSpecies(it.u)
+		a.memo.keepSpecies(it.path, it.k, it.u)
 		if it.path == a.res.Path {
-			a.res.Diagnostics = append(a.res.Diagnostics, relocate(it.u.diags, it.path, sp.Decl.Body().Start)...)
+			a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, sp.Decl.Body().Start)
 		}
 		if sp.Mol != nil {
 			if first := sameStructure(byStructure, sp); first != nil {
