@@ -420,6 +420,10 @@ func (s *server) workspaceSymbol(ctx context.Context, raw json.RawMessage) (any,
 	return out, nil
 }
 
+// maxCompletions bounds a completion answer; a longer list is cut and
+// marked incomplete, so that the client asks again as the word grows.
+const maxCompletions = 200
+
 func (s *server) completion(ctx context.Context, raw json.RawMessage) (any, error) {
 	var p protocol.CompletionParams
 	if err := decode(raw, &p); err != nil {
@@ -430,13 +434,29 @@ func (s *server) completion(ctx context.Context, raw json.RawMessage) (any, erro
 		return nil, err
 	}
 	// The context comes from the editor's current text, the names from the
-	// latest analysis.
+	// latest analysis. A short list is sent whole (the client filters it); a
+	// long one (a mechanism has tens of thousands of species names) only
+	// with the candidates that start with the word being typed, cut at
+	// maxCompletions and marked incomplete.
 	off := v.lines.Offset(int(p.Position.Line), int(p.Position.Character))
-	items := []protocol.CompletionItem{}
-	for _, c := range ide.CompleteText(v.snap.index, v.text, v.lines, off) {
-		items = append(items, protocol.CompletionItem{Label: c.Label, Detail: c.Detail, Kind: protocol.CompletionItemKind(c.Kind)})
+	all := ide.CompleteText(v.snap.index, v.text, v.lines, off)
+	start := off
+	for start > 0 && v.text[start-1] != ' ' && v.text[start-1] != '\t' && v.text[start-1] != '\n' && v.text[start-1] != '\r' {
+		start--
 	}
-	return &protocol.CompletionList{Items: items}, nil
+	word := string(v.text[start:off])
+	list := &protocol.CompletionList{Items: []protocol.CompletionItem{}}
+	for _, c := range all {
+		if len(all) > maxCompletions && !strings.HasPrefix(c.Label, word) {
+			continue
+		}
+		if len(list.Items) == maxCompletions {
+			list.IsIncomplete = true
+			break
+		}
+		list.Items = append(list.Items, protocol.CompletionItem{Label: c.Label, Detail: c.Detail, Kind: protocol.CompletionItemKind(c.Kind)})
+	}
+	return list, nil
 }
 
 func (s *server) foldingRange(ctx context.Context, raw json.RawMessage) (any, error) {

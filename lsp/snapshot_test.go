@@ -166,3 +166,32 @@ func TestPublishOnlyChanged(t *testing.T) {
 	assert.Equal(t, n+1, e.publications())
 	require.NoError(t, e.shutdown())
 }
+
+// TestCompletionLongListIsCut: species completions in a large file are
+// filtered by the word typed and cut, marked incomplete.
+func TestCompletionLongListIsCut(t *testing.T) {
+	var b strings.Builder
+	for i := range 3 * maxCompletions {
+		fmt.Fprintf(&b, "species S%d C\n", i)
+	}
+	b.WriteString("reaction S1")
+	e := newFakeEditor(t, map[string]string{"c.kiln": b.String()}, fakeOptions{inlayHints: true})
+	e.open("c.kiln")
+	complete := func(off int) protocol.CompletionList {
+		var list protocol.CompletionList
+		e.call("textDocument/completion", protocol.CompletionParams{TextDocumentPositionParams: protocol.TextDocumentPositionParams{
+			TextDocument: textDoc(e, "c.kiln"), Position: e.pos("c.kiln", off)}}, &list)
+		return list
+	}
+	end := len(e.text("c.kiln"))
+	list := complete(end) // after "S1"
+	require.NotEmpty(t, list.Items)
+	for _, it := range list.Items {
+		assert.True(t, strings.HasPrefix(it.Label, "S1"), it.Label)
+	}
+	assert.Len(t, list.Items, 1+10+100, "S1, S10–S19, S100–S199")
+	list = complete(end - 2) // after "reaction ": every name
+	assert.Len(t, list.Items, maxCompletions)
+	assert.True(t, list.IsIncomplete)
+	require.NoError(t, e.shutdown())
+}
