@@ -289,7 +289,9 @@ func BenchmarkAnalyzeWarm20k(b *testing.B) {
 	b.ResetTimer()
 	cpu0 := cpuTime()
 	i := 0
-	defer func() { b.ReportMetric(float64(cpuTime()-cpu0)/float64(time.Millisecond)/float64(max(i, 1)), "cpu-ms/op") }()
+	defer func() {
+		b.ReportMetric(float64(cpuTime()-cpu0)/float64(time.Millisecond)/float64(max(i, 1)), "cpu-ms/op")
+	}()
 	for b.Loop() {
 		decl := fmt.Sprintf("\nspecies M%d ", 1+i%benchMolecules)
 		at := strings.Index(text, decl) + len(decl)
