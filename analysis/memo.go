@@ -292,11 +292,15 @@ func (u *speciesUnit) fits(f *speciesfile.File, st speciesfile.Stmt) bool {
 	return u != nil && u.energyUnit == f.EnergyUnit && (u.pinned < 0 || u.pinned == st.Body().Start)
 }
 
-// apply fills sp (whose Name, Loc and Decl are set) from the unit.
-func (u *speciesUnit) apply(sp *Species) {
+// apply fills sp (whose Name, Loc and Decl are set) from the unit; keep
+// records the unit in sp (incremental analyses compare units).
+func (u *speciesUnit) apply(sp *Species, keep bool) {
 	name, loc, decl := sp.Name, sp.Loc, sp.Decl
 	*sp = u.tmpl
-	sp.Name, sp.Loc, sp.Decl, sp.unit = name, loc, decl, u
+	sp.Name, sp.Loc, sp.Decl = name, loc, decl
+	if keep {
+		sp.unit = u
+	}
 	if u.tmpl.Given != nil {
 		g := *u.tmpl.Given
 		g.Span = shift(g.Span, decl.Body().Start)
@@ -379,7 +383,8 @@ func (a *analysis) reactionDeps(d *speciesfile.Reaction) []*speciesUnit {
 	return out
 }
 
-// depsMatch reports whether the species units named by d are deps.
+// depsMatch reports whether the species units named by d are deps (only
+// called in incremental analyses, where species keep their units).
 func (a *analysis) depsMatch(d *speciesfile.Reaction, deps []*speciesUnit) bool {
 	if len(deps) != len(d.Reactants)+len(d.Products) {
 		return false

@@ -88,7 +88,7 @@ func (a *analysis) species() error {
 	byStructure := make(map[string][]*Species, len(items))
 	for _, it := range items {
 		sp := it.sp
-		it.u.apply(sp)
+		it.u.apply(sp, a.memo != nil)
 		a.memo.keepSpecies(it.path, it.k, it.u)
 		if it.path == a.res.Path {
 			a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, sp.Decl.Body().Start)
