@@ -64,6 +64,7 @@ type fileMemo struct {
 type memo struct {
 	old, next *memoTables
 	align     map[string]*alignment
+	changed   map[string]bool // names of the species whose unit was recomputed
 }
 
 // alignment maps a file's statements to those of its last analysis.
@@ -402,6 +403,25 @@ func (a *analysis) depsMatch(d *speciesfile.Reaction, deps []*speciesUnit) bool 
 	return true
 }
 
+// depsValid reports whether a kept reaction unit with deps still reads the
+// species units named by d: certainly when d names no species whose unit
+// was recomputed, else when every name's unit is still its dependency.
+func (m *memo) depsValid(a *analysis, d *speciesfile.Reaction, deps []*speciesUnit) bool {
+	if len(deps) != len(d.Reactants)+len(d.Products) {
+		return false
+	}
+	if len(m.changed) > 0 {
+		for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
+			for _, t := range ts {
+				if m.changed[t.Name.Text] {
+					return a.depsMatch(d, deps)
+				}
+			}
+		}
+	}
+	return true
+}
+
 // reaction returns the kept unit of resolved reaction k of file f (at
 // path), or nil.
 func (m *memo) reaction(a *analysis, path string, f *speciesfile.File, k int) *reactionUnit {
@@ -414,7 +434,7 @@ func (m *memo) reaction(a *analysis, path string, f *speciesfile.File, k int) *r
 	}
 	d := f.Reactions[k]
 	u := al.old.rx[al.reactions[k]]
-	if u == nil || u.energyUnit != f.EnergyUnit || (u.pinned >= 0 && u.pinned != d.Body().Start) || !a.depsMatch(d, u.deps) {
+	if u == nil || u.energyUnit != f.EnergyUnit || (u.pinned >= 0 && u.pinned != d.Body().Start) || !m.depsValid(a, d, u.deps) {
 		return nil
 	}
 	m.next.files[path].rx[k] = u

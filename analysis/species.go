@@ -65,6 +65,16 @@ func (a *analysis) species() error {
 			items = append(items, item{path: path, f: f, k: k, sp: sp, u: u})
 		}
 	}
+	// The names whose unit is recomputed: every other declared name stands
+	// for the same unit as in the last analysis (a declaration that kept its
+	// unit was the first of its name then too: only first declarations
+	// have units), so reaction units naming none of them stay valid.
+	if a.memo != nil {
+		a.memo.changed = make(map[string]bool, len(todo))
+		for _, k := range todo {
+			a.memo.changed[items[k].sp.Name] = true
+		}
+	}
 	// Units not kept from the last analysis are computed on all cores: each
 	// reads only its own declaration and the (concurrency-safe) caches.
 	err := a.parallel(len(todo), 16, func(k int) {

@@ -162,6 +162,7 @@ func benchEdits(b *testing.B, o fakeOptions, edit func(e *fakeEditor, i int)) {
 	b.ResetTimer()
 	i := 0
 	pubs := e.publications()
+	cpu0 := cpuTime()
 	for b.Loop() {
 		t0 := time.Now()
 		edit(e, i)
@@ -170,6 +171,7 @@ func benchEdits(b *testing.B, o fakeOptions, edit func(e *fakeEditor, i int)) {
 		i++
 	}
 	b.StopTimer()
+	b.ReportMetric(float64(cpuTime()-cpu0)/float64(time.Millisecond)/float64(max(i, 1)), "cpu-ms/edit")
 	reportPercentile(b, lat, 0.95, "p95-ms")
 	reportPercentile(b, lat, 0.5, "p50-ms")
 	b.ReportMetric(float64(e.publications()-pubs)/float64(i), "publishes/edit")
