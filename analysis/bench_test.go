@@ -9,6 +9,7 @@ import (
 	"testing"
 
 	"kiln.dev/kiln/internal/mechgen"
+	"kiln.dev/kiln/speciesfile"
 )
 
 // benchAnalyze analyses a generated mechanism of n molecules (2n species and
@@ -32,6 +33,20 @@ func benchAnalyze(b *testing.B, n int) {
 }
 
 func BenchmarkCheck1k(b *testing.B)  { benchAnalyze(b, 1000) }
+
+// BenchmarkTokenise10k reads (copies) and parses the 10k-molecule file:
+// the denominator of the check ÷ reading+tokenising ratio.
+func BenchmarkTokenise10k(b *testing.B) {
+	src := mechgen.Generate(mechgen.Options{Seed: 1, Molecules: 10000})
+	b.SetBytes(int64(len(src)))
+	b.ReportAllocs()
+	for b.Loop() {
+		text := bytes.Clone(src)
+		if f := speciesfile.Parse("gen.kiln", text); len(f.Species) < 20000 {
+			b.Fatal("short parse")
+		}
+	}
+}
 func BenchmarkCheck10k(b *testing.B) { benchAnalyze(b, 10000) }
 
 // reanalyseBench opens the generated 10k-molecule mechanism (20,000

@@ -89,22 +89,28 @@ func (a *analysis) computeReactions() error {
 		a.balance(r.Decl, r)
 		a.thermo(r.Decl, r)
 		a.rates(r.Decl, r)
-		units[i] = newReactionUnit(f.EnergyUnit, a.reactionDeps(r.Decl), r)
-		r.diags = nil
+		if a.memo != nil {
+			units[i] = newReactionUnit(f.EnergyUnit, a.reactionDeps(r.Decl), r)
+			r.diags = nil
+		}
 	})
 	if err != nil {
 		return err
 	}
 	n := 0
-	for _, u := range units {
+	for i, u := range units {
 		if u != nil {
 			n += len(u.diags)
 		}
+		n += len(rs[i].diags)
 	}
 	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n)
 	for i, r := range rs {
 		u := units[i]
 		if u == nil {
+			// Not incremental: the diagnostics were reported into r.
+			a.res.Diagnostics = append(a.res.Diagnostics, r.diags...)
+			r.diags = nil
 			continue
 		}
 		u.apply(r)

@@ -40,6 +40,9 @@ func (a *analysis) species() error {
 		k    int // index in f.Species
 		sp   *Species
 		u    *speciesUnit
+		// diags of the species' rules when there is no memo (no unit is
+		// made: nothing would reuse it).
+		diags []speciesfile.Diagnostic
 	}
 	items := make([]item, 0, nSpecies)
 	var todo []int
@@ -83,6 +86,10 @@ func (a *analysis) species() error {
 		unit := *a
 		unit.sink = &diags
 		unit.speciesRules(it.path, it.sp, user)
+		if a.memo == nil {
+			it.diags = diags
+			return
+		}
 		it.u = newSpeciesUnit(it.f.EnergyUnit, it.sp, diags, it.path)
 	})
 	if err != nil {
@@ -90,18 +97,25 @@ func (a *analysis) species() error {
 	}
 	n := len(a.res.Diagnostics)
 	for _, it := range items {
-		if it.path == a.res.Path {
+		if it.path == a.res.Path && it.u != nil {
 			n += len(it.u.diags)
+		}
+		if it.path == a.res.Path {
+			n += len(it.diags)
 		}
 	}
 	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
 	byStructure := make(map[string][]*Species, len(items))
 	for _, it := range items {
 		sp := it.sp
-		it.u.apply(sp, a.memo != nil)
-		a.memo.keepSpecies(it.path, it.k, it.u)
-		if it.path == a.res.Path {
-			a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, sp.Decl.Body().Start)
+		if it.u != nil {
+			it.u.apply(sp, a.memo != nil)
+			a.memo.keepSpecies(it.path, it.k, it.u)
+			if it.path == a.res.Path {
+				a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, sp.Decl.Body().Start)
+			}
+		} else if it.path == a.res.Path {
+			a.res.Diagnostics = append(a.res.Diagnostics, it.diags...)
 		}
 		if sp.Mol != nil {
 			if first := sameStructure(byStructure, sp); first != nil {
