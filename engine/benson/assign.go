@@ -22,10 +22,10 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 	switch centre {
 	case "Cd", "CO":
 		skip = g.partner(i, 2)
-	case "Ct":
+	case "Ct", "CN":
 		skip = g.partner(i, 3)
-	case "Ca":
-		return "Ca", counts, true
+	case "Ca", "Ck":
+		return centre, counts, true
 	}
 	for k, j := range g.nbr[i] {
 		if j == skip {
@@ -117,11 +117,6 @@ func addGroups(g *graph, l lookup, est *Result) error {
 	// than a map keyed by (centre, counts).
 	list := make([]acc, 0, 8)
 	for i := range g.m.Atoms {
-		if g.typ[i] == "Ca" && g.doubleToO(i) {
-			// A cumulated carbon carrying =O (ketene, C=C=O) has no group
-			// value: its oxygen would otherwise drop out of the sum unseen.
-			return fmt.Errorf("benson: atom %d is a ketene-type carbon (C=C=O), which has no group value; give the species a thermo block", i+1)
-		}
 		centre, counts, ok := g.groupOf(i)
 		if !ok {
 			if centre != "" {

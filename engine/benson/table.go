@@ -43,6 +43,9 @@ const hfH = 52.10 * calorie * 1000
 var builtin = sync.OnceValue(func() *tables {
 	t := &tables{groups: map[string]GroupValue{}, corrections: map[string]GroupValue{}, hbi: map[string]hbiValue{}}
 	groups := mustParse("groups.tsv", groupsTSV)
+	for _, x := range extraGroupTables {
+		groups = append(groups, mustParse(x.file, x.text)...)
+	}
 	for i := range groups {
 		name, err := ParseGroupName(groups[i].Name)
 		if err != nil {

@@ -1,0 +1,115 @@
+package benson
+
+import (
+	_ "embed"
+	"strconv"
+
+	"kiln.dev/kiln/engine/molecule"
+)
+
+// Nitrogen, sulfur and halogen groups, nitrile and ketene carbons.
+//
+// The values are in groups_nsx.tsv (same columns as groups.tsv), loaded with
+// the main table. Two carbon types are added to the Benson types of graph.go:
+//
+//   - CN: a carbon triple-bonded to nitrogen (nitrile). Its ≡N is implied, as
+//     the ≡C partner of Ct is; it is the centre of one group, CN-(X), and a
+//     neighbour type "CN" in the groups of its neighbours (C-(CN)(H)3 …). The
+//     classic tables give composite cyano groups (the sp3 carbon together with
+//     its C≡N); they are split here by the convention used for every other
+//     unsaturated neighbour: C-(CN)(X)… = C-(C)(X)…, CN-(X) = the rest.
+//   - Ck: a cumulated carbon carrying =O (ketene, R2C=C=O). Both double-bond
+//     partners are implied, so its group has no written neighbours, like the
+//     allene centre Ca; the =CR2 end is an ordinary Cd group.
+//
+// Terminal halogens and the nitrile N are ligands only (they centre no group),
+// as =O is; amine, amide and hydrazine nitrogen and divalent sulfur are group
+// centres N-(…)3 and S-(…)2.
+
+//go:embed groups_nsx.tsv
+var groupsNSXTSV string
+
+// extraGroupTables are parsed after groups.tsv into the one group table;
+// a name present twice is a defect of the tables.
+var extraGroupTables = []struct{ file, text string }{
+	{"groups_nsx.tsv", groupsNSXTSV},
+}
+
+// heteroCarbonType returns CN for a nitrile carbon and Ck for a ketene
+// carbon, and false for any other atom.
+func (g *graph) heteroCarbonType(i int) (string, bool) {
+	doubles, toO := 0, false
+	for k, b := range g.nbrBond[i] {
+		j := g.nbr[i][k]
+		switch g.order(b) {
+		case 3:
+			if g.m.Atoms[j].Element == "N" {
+				return "CN", true
+			}
+		case 2:
+			doubles++
+			if g.m.Atoms[j].Element == "O" {
+				toO = true
+			}
+		}
+	}
+	if doubles == 2 && toO {
+		return "Ck", true
+	}
+	return "", false
+}
+
+// heteroClass names the validation class of a molecule with heteroatoms
+// other than oxygen: halogen (any F, Cl, Br, I), else sulfur, else nitrogen;
+// "" for C/H/O molecules.
+func heteroClass(m *molecule.Molecule) string {
+	var n, s, x bool
+	for _, a := range m.Atoms {
+		switch a.Element {
+		case "F", "Cl", "Br", "I":
+			x = true
+		case "S":
+			s = true
+		case "N":
+			n = true
+		}
+	}
+	switch {
+	case x:
+		return "halogen"
+	case s:
+		return "sulfur"
+	case n:
+		return "nitrogen"
+	}
+	return ""
+}
+
+// addHalogenFlags reports, for every carbon bearing two or more halogens
+// (CHCl2–, CCl3–, CF3–, CF2<), that no geminal halogen–halogen interaction
+// correction is applied. The group values of the tables are those of
+// mono- and dihalides; the geminal interactions of polyhalogenated carbons
+// are not additive (Cohen & Benson, Chem. Rev. 93 (1993), from memory) and
+// the validation set shows errors of 2–10 kcal/mol for CCl3–, CF3– and
+// C2Cl6 without them. The estimate is kept but flagged.
+func addHalogenFlags(g *graph, est *Result) {
+	for i, a := range g.m.Atoms {
+		if a.Element != "C" {
+			continue
+		}
+		n := 0
+		for _, j := range g.nbr[i] {
+			switch g.m.Atoms[j].Element {
+			case "F", "Cl", "Br", "I":
+				n++
+			}
+		}
+		if n >= 2 {
+			est.Missing = append(est.Missing, Missing{
+				Group:         "halogen interaction: geminal on atom " + strconv.Itoa(i+1),
+				Approximation: "",
+				Note:          "no geminal halogen–halogen correction at hand; the sum of groups can be off by several kcal/mol",
+			})
+		}
+	}
+}

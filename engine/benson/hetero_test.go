@@ -1,0 +1,88 @@
+package benson
+
+import (
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/engine/molecule"
+)
+
+func heteroEstimate(t *testing.T, smi string) *Result {
+	t.Helper()
+	m, err := molecule.ParseSMILES(smi)
+	require.NoError(t, err, smi)
+	e, err := Estimate(m, Options{})
+	require.NoError(t, err, smi)
+	return e
+}
+
+func groupNames(e *Result) []string {
+	var out []string
+	for _, g := range e.Groups {
+		out = append(out, g.Name)
+	}
+	return out
+}
+
+// Every heavy atom of these molecules is the centre of one group or a ligand
+// the groups name (terminal halogen, nitrile N, carbonyl O): the groups are
+// exactly those listed, with no approximation.
+func TestHeteroGroupsAssigned(t *testing.T) {
+	cases := []struct {
+		smiles string
+		groups []string
+	}{
+		{"CCl", nil}, // C-(Cl)(H)3 has no value: refused (see TestHeteroRefusals)
+		{"CCCl", []string{"C-(C)(H)3", "C-(Cl)(C)(H)2"}},
+		{"CC#N", []string{"C-(CN)(H)3", "CN-(C)"}},
+		{"C=CC#N", []string{"Cd-(H)2", "Cd-(CN)(H)", "CN-(Cd)"}},
+		{"CCN", []string{"C-(C)(H)3", "C-(N)(C)(H)2", "N-(C)(H)2"}},
+		{"CC(N)=O", []string{"C-(CO)(H)3", "CO-(N)(C)", "N-(CO)(H)2"}},
+		{"CSSC", []string{"C-(S)(H)3", "S-(S)(C)"}},
+		{"CCS", []string{"C-(C)(H)3", "C-(S)(C)(H)2", "S-(C)(H)"}},
+		{"C=C=O", []string{"Cd-(H)2", "Ck"}},
+		{"CC=C=O", []string{"C-(Cd)(H)3", "Cd-(C)(H)", "Ck"}},
+		{"Clc1ccccc1", []string{"Cb-(H)", "Cb-(Cl)"}},
+	}
+	for _, c := range cases {
+		if c.groups == nil {
+			continue
+		}
+		e := heteroEstimate(t, c.smiles)
+		assert.ElementsMatch(t, c.groups, groupNames(e), c.smiles)
+		assert.Empty(t, e.Missing, c.smiles)
+	}
+}
+
+// Ketene estimated from groups reproduces the library ketene the Ck group
+// was derived from (to rounding of the table: 0.01 kcal/mol, 0.01 cal/(mol K)).
+func TestKeteneFromGroups(t *testing.T) {
+	e := heteroEstimate(t, "C=C=O")
+	assert.InDelta(t, -11.40, e.Hf298/calorie/1000, 0.01)
+	assert.InDelta(t, 57.81, e.S298/calorie, 0.01)
+	assert.Equal(t, 2, e.SymmetryNumber)
+}
+
+// Structures whose groups are not in the tables are refused with the group
+// named, never estimated without it.
+func TestHeteroRefusals(t *testing.T) {
+	for _, smi := range []string{"CCl", "c1ccncc1", "CS(C)=O", "N#CC#N", "CC(Cl)=O", "C=CCl"} {
+		m, err := molecule.ParseSMILES(smi)
+		require.NoError(t, err)
+		_, err = Estimate(m, Options{})
+		if assert.Error(t, err, smi) {
+			assert.True(t, strings.Contains(err.Error(), "group") || strings.Contains(err.Error(), "outside"), "%s: %v", smi, err)
+		}
+	}
+}
+
+// The class of a heteroatom compound is its element class.
+func TestHeteroClass(t *testing.T) {
+	assert.Equal(t, "halogen", heteroEstimate(t, "CCCl").Class)
+	assert.Equal(t, "sulfur", heteroEstimate(t, "CCS").Class)
+	assert.Equal(t, "nitrogen", heteroEstimate(t, "CCN").Class)
+	assert.Equal(t, "alkane", heteroEstimate(t, "CCC").Class)
+}
