@@ -29,6 +29,9 @@ import (
 //go:embed groups_nsx.tsv
 var groupsNSXTSV string
 
+//go:embed hbi_nsx.tsv
+var hbiNSXTSV string
+
 // extraGroupTables are parsed after groups.tsv into the one group table;
 // a name present twice is a defect of the tables.
 var extraGroupTables = []struct{ file, text string }{
@@ -112,4 +115,47 @@ func addHalogenFlags(g *graph, est *Result) {
 			})
 		}
 	}
+}
+
+// heteroSite classifies a radical site at or next to a heteroatom other
+// than O: aminyl (on N), thiyl (on S), alpha-amino, alpha-chloro and
+// alpha-fluoro (on an sp3 carbon bonded to N, Cl or F). missing names the
+// approximation when the site only resembles the increment used (a
+// secondary aminyl, an α-bromo site). ok is false for any other site.
+func heteroSite(g *graph, i int) (site, missing string, ok bool) {
+	switch g.m.Atoms[i].Element {
+	case "N":
+		carbons := 0
+		for _, j := range g.nbr[i] {
+			if g.isCarbon(j) {
+				carbons++
+			}
+		}
+		if carbons > 1 || len(g.nbr[i]) != carbons {
+			return "aminyl", "aminyl site other than R–NH (CH3NH–H increment used)", true
+		}
+		return "aminyl", "", true
+	case "S":
+		if len(g.nbr[i]) == 1 && g.isCarbon(g.nbr[i][0]) {
+			return "thiyl", "", true
+		}
+		return "thiyl", "thiyl site other than R–S (CH3S–H increment used)", true
+	case "C":
+		if g.typ[i] != "C" {
+			return "", "", false
+		}
+		for _, j := range g.nbr[i] {
+			switch g.m.Atoms[j].Element {
+			case "N":
+				return "alpha-amino", "", true
+			case "Cl":
+				return "alpha-chloro", "", true
+			case "F":
+				return "alpha-fluoro", "", true
+			case "Br", "I":
+				return "alpha-chloro", "α-bromo or α-iodo radical site (ClCH2–H increment used)", true
+			}
+		}
+	}
+	return "", "", false
 }

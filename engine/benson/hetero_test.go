@@ -86,3 +86,33 @@ func TestHeteroClass(t *testing.T) {
 	assert.Equal(t, "nitrogen", heteroEstimate(t, "CCN").Class)
 	assert.Equal(t, "alkane", heteroEstimate(t, "CCC").Class)
 }
+
+// Radical sites at and next to N, S and halogens take their own
+// bond-dissociation increments; sites the table only approximates say so.
+func TestHeteroRadicalSites(t *testing.T) {
+	cases := []struct {
+		smiles, site string
+		flagged      bool
+	}{
+		{"C[S]", "thiyl", false},
+		{"CC[S]", "thiyl", false},
+		{"C[NH]", "aminyl", false},
+		{"C[N]C", "aminyl", true},
+		{"[CH2]N", "alpha-amino", false},
+		{"CC[CH]Cl", "alpha-chloro", false},
+		{"C[CH]F", "alpha-fluoro", false},
+		{"[CH2]CBr", "primary", false},
+		{"C[CH]Br", "alpha-chloro", true},
+	}
+	for _, c := range cases {
+		e := heteroEstimate(t, c.smiles)
+		assert.Equal(t, 1, correctionCount(e, "HBI: "+c.site), "%s: %v", c.smiles, e.Corrections)
+		flagged := false
+		for _, m := range e.Missing {
+			if strings.HasPrefix(m.Group, "HBI: ") && !strings.HasPrefix(m.Group, "HBI dS") {
+				flagged = true
+			}
+		}
+		assert.Equal(t, c.flagged, flagged, "%s: %v", c.smiles, e.Missing)
+	}
+}

@@ -66,6 +66,9 @@ func siteOf(g *graph, i int) (site, missing string, err error) {
 				return "alpha-alkoxy", "", nil
 			}
 		}
+		if site, miss, ok := heteroSite(g, i); ok {
+			return site, miss, nil
+		}
 		alkyl := "primary"
 		switch {
 		case carbons == 2:
@@ -98,6 +101,9 @@ func siteOf(g *graph, i int) (site, missing string, err error) {
 			}
 		}
 		return "alkoxy", "", nil
+	}
+	if site, miss, ok := heteroSite(g, i); ok {
+		return site, miss, nil
 	}
 	return "", "", fmt.Errorf("benson: radical site on %s is outside the HBI table", g.m.Atoms[i].Element)
 }

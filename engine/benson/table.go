@@ -63,7 +63,7 @@ var builtin = sync.OnceValue(func() *tables {
 	for _, v := range mustFill("corrections.tsv", mustParse("corrections.tsv", correctionsTSV)) {
 		t.corrections[v.Name] = v
 	}
-	for _, r := range mustParse("hbi.tsv", hbiTSV) {
+	for _, r := range append(mustParse("hbi.tsv", hbiTSV), mustParse("hbi_nsx.tsv", hbiNSXTSV)...) {
 		// Column 2 holds D(R–H); the ΔHf increment is D − ΔHf(H).
 		v := r.GroupValue
 		bde := v.Hf298
