@@ -56,3 +56,16 @@ func TestFillCheckLibrary(t *testing.T) {
 		t.Skipf("%d polynomials taken from published tables exceed the harmonic classical Cp limit of the physicality check (electronic and anharmonic contributions it does not yet allow for); first: %s", len(aboveLimit), aboveLimit[0])
 	}
 }
+
+// TestDenoxExampleClean: the second shipped example (ammonia/NOx, chlorine
+// and sulfur chemistry) checks with no warning and no error.
+func TestDenoxExampleClean(t *testing.T) {
+	code, stdout, stderr := runKiln(t, "check", "--format", "json", "../../examples/denox.kiln")
+	require.Equal(t, exitOK, code, stderr)
+	var diags []checkDiag
+	require.NoError(t, json.Unmarshal([]byte(stdout), &diags))
+	require.NotEmpty(t, diags, "the species without thermo blocks report their estimates")
+	for _, d := range diags {
+		assert.Equal(t, "information", d.Severity, "%+v", d)
+	}
+}

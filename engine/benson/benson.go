@@ -152,7 +152,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	addRingCorrections(g, tab, est)
 	addInteractions(g, tab, est)
-	addHalogenFlags(g, est)
+	addHalogenFlags(g, tab, est)
 	if unpaired > 0 {
 		if err := addHBI(m, g, tab, est); err != nil {
 			return nil, err

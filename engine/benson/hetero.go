@@ -2,7 +2,6 @@ package benson
 
 import (
 	_ "embed"
-	"strconv"
 
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -88,32 +87,45 @@ func heteroClass(m *molecule.Molecule) string {
 	return ""
 }
 
-// addHalogenFlags reports, for every carbon bearing two or more halogens
-// (CHCl2–, CCl3–, CF3–, CF2<), that no geminal halogen–halogen interaction
-// correction is applied. The group values of the tables are those of
-// mono- and dihalides; the geminal interactions of polyhalogenated carbons
-// are not additive (Cohen & Benson, Chem. Rev. 93 (1993), from memory) and
-// the validation set shows errors of 2–10 kcal/mol for CCl3–, CF3– and
-// C2Cl6 without them. The estimate is kept but flagged.
-func addHalogenFlags(g *graph, est *Result) {
+// addHalogenFlags flags every group of a carbon that bears two or more
+// halogens and is bonded to another heavy atom (CHCl2–R, CCl3–R, CF3–R,
+// CF2<): such group values are those of the tables, which leave out the
+// halogen–halogen interactions across the C–R bond that make
+// polyhalogenated molecules non-additive (Cohen & Benson, Chem. Rev. 93
+// (1993), from memory); the validation set shows errors of 2–10 kcal/mol
+// for CCl3–, CF3– and C2Cl6 with them. The estimate is kept but flagged,
+// unless the user supplied the group (a `group` statement), which then
+// carries its own interactions.
+func addHalogenFlags(g *graph, l lookup, est *Result) {
 	for i, a := range g.m.Atoms {
 		if a.Element != "C" {
 			continue
 		}
-		n := 0
+		halogens, others := 0, 0
 		for _, j := range g.nbr[i] {
 			switch g.m.Atoms[j].Element {
 			case "F", "Cl", "Br", "I":
-				n++
+				halogens++
+			default:
+				others++
 			}
 		}
-		if n >= 2 {
-			est.Missing = append(est.Missing, Missing{
-				Group:         "halogen interaction: geminal on atom " + strconv.Itoa(i+1),
-				Approximation: "",
-				Note:          "no geminal halogen–halogen correction at hand; the sum of groups can be off by several kcal/mol",
-			})
+		if halogens < 2 || others == 0 {
+			continue
 		}
+		centre, counts, ok := g.groupOf(i)
+		if !ok {
+			continue
+		}
+		name := groupName(centre, counts)
+		if _, user := l.user[name]; user {
+			continue
+		}
+		est.Missing = append(est.Missing, Missing{
+			Group:         name,
+			Approximation: name + " without halogen interactions",
+			Note:          "polyhalogenated carbon: no geminal/vicinal halogen interaction correction at hand; errors of several kcal/mol are possible",
+		})
 	}
 }
 
