@@ -167,5 +167,5 @@ type MissingGroupError struct {
 }
 
 func (e *MissingGroupError) Error() string {
-	return fmt.Sprintf("benson: no value and no approximation for group %s (add it with a user group)", e.Group)
+	return fmt.Sprintf("benson: no value and no approximation for group %s: supply it with a `group %s` statement (hf298, s298, cp at 300…1500 K, source) or give the species a thermo block", e.Group, e.Group)
 }

@@ -16,8 +16,9 @@
 // J/mol for ΔHf°, J/(mol K) for S° and Cp°. Tables are in kcal and cal and are
 // converted with 1 cal = 4.184 J.
 //
-// Scope: neutral C/H/O species (N, S and halogens appear only as neighbour
-// types when a user group supplies them). The small non-additive species (H2,
+// Scope: neutral C/H/O/N/S/F/Cl/Br species with the groups of groups.tsv and
+// groups_nsx.tsv (hetero.go lists the nitrogen, sulfur and halogen coverage);
+// any other element, a charged atom or a group without a value is refused. The small non-additive species (H2,
 // O2, H2O, CO …) belong to a reference library, not to this package. The
 // method is valid for ideal-gas molecules at 298.15 K and Cp from 300 K to
 // 1500 K; values outside that range need a polynomial fit elsewhere.
