@@ -24,6 +24,8 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 		skip = g.partner(i, 2)
 	case "Ct", "CN":
 		skip = g.partner(i, 3)
+	case "CS":
+		skip = g.partnerElement(i, 2, "S")
 	case "Ca", "Ck":
 		return centre, counts, true
 	}

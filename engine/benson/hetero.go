@@ -37,8 +37,11 @@ var extraGroupTables = []struct{ file, text string }{
 	{"groups_nsx.tsv", groupsNSXTSV},
 }
 
-// heteroCarbonType returns CN for a nitrile carbon and Ck for a ketene
-// carbon, and false for any other atom.
+// heteroCarbonType returns CN for a nitrile carbon, CS for a thiocarbonyl
+// carbon (C=S, whose =S is implied like the =O of CO; the tables have no CS
+// group, so such species are refused naming the group, never estimated with
+// the sulfur left out) and Ck for a ketene carbon, and false for any other
+// atom.
 func (g *graph) heteroCarbonType(i int) (string, bool) {
 	doubles, toO := 0, false
 	for k, b := range g.nbrBond[i] {
@@ -50,8 +53,11 @@ func (g *graph) heteroCarbonType(i int) (string, bool) {
 			}
 		case 2:
 			doubles++
-			if g.m.Atoms[j].Element == "O" {
+			switch g.m.Atoms[j].Element {
+			case "O":
 				toO = true
+			case "S":
+				return "CS", true
 			}
 		}
 	}
@@ -170,4 +176,15 @@ func heteroSite(g *graph, i int) (site, missing string, ok bool) {
 		}
 	}
 	return "", "", false
+}
+
+// partnerElement returns the neighbour of i of the given element joined by a
+// bond of the given order, or -1.
+func (g *graph) partnerElement(i, order int, element string) int {
+	for k, b := range g.nbrBond[i] {
+		if j := g.nbr[i][k]; g.order(b) == order && g.m.Atoms[j].Element == element {
+			return j
+		}
+	}
+	return -1
 }

@@ -69,7 +69,7 @@ func TestKeteneFromGroups(t *testing.T) {
 // Structures whose groups are not in the tables are refused with the group
 // named, never estimated without it.
 func TestHeteroRefusals(t *testing.T) {
-	for _, smi := range []string{"CCl", "c1ccncc1", "CS(C)=O", "N#CC#N", "CC(Cl)=O", "C=CCl"} {
+	for _, smi := range []string{"CNCl", "c1ccncc1", "CS(C)=O", "NC#CC#N", "CC(Cl)=O", "C=CCl", "C=S", "CC(C)=S", "C=C=S", "CC(=S)OC", "C=NC", "CC#CC#N"} {
 		m, err := molecule.ParseSMILES(smi)
 		require.NoError(t, err)
 		_, err = Estimate(m, Options{})
