@@ -116,3 +116,62 @@ func TestHeteroRadicalSites(t *testing.T) {
 		assert.Equal(t, c.flagged, flagged, "%s: %v", c.smiles, e.Missing)
 	}
 }
+
+// TestHeteroAtomAccounting estimates a generated set of N, S and halogen
+// structures and checks, for every estimate made, that no heavy atom is
+// left out: the groups' counts add up to the polyvalent heavy atoms, and
+// every terminal heavy atom is a halogen ligand of a carbon group or the
+// implied partner of a CO, CN, CS or Ck centre. Refusals are allowed.
+func TestHeteroAtomAccounting(t *testing.T) {
+	skeletons := []string{"C%s", "CC%s", "CC(C)%s", "CC(C)(C)%s", "C=C%s", "C=CC%s", "CC(=O)%s", "c1ccccc1%s",
+		"C#CC%s", "CCC(=O)C%s", "C1CCC1%s", "C%sC", "CC(%s)CC"}
+	subs := []string{"F", "Cl", "Br", "I", "N", "NC", "N(C)C", "NN", "S", "SC", "SSC", "C#N", "C(=O)N", "C(N)=O",
+		"[N+](=O)[O-]", "C=S", "N=O", "OC#N", "N=C=O", "C(F)(F)F", "C(Cl)Cl", "C=C=O", "C(=O)Cl", "P", "[Si]"}
+	estimated, refused := 0, 0
+	for _, sk := range skeletons {
+		for _, sub := range subs {
+			smi := strings.Replace(sk, "%s", sub, 1)
+			m, err := molecule.ParseSMILES(smi)
+			if err != nil {
+				continue // not a valid structure; the reader reports it
+			}
+			e, err := Estimate(m, Options{})
+			if err != nil {
+				refused++
+				continue
+			}
+			estimated++
+			g := newGraph(m)
+			centres := 0
+			for _, term := range e.Groups {
+				centres += term.Count
+			}
+			poly := 0
+			for i, a := range m.Atoms {
+				if len(g.nbr[i])+a.HCount >= 2 {
+					poly++
+					continue
+				}
+				if len(g.nbr[i]) != 1 {
+					continue // an isolated atom is a library matter
+				}
+				j := g.nbr[i][0]
+				switch a.Element {
+				case "F", "Cl", "Br", "I":
+					assert.True(t, g.isCarbon(j), "%s: halogen on %s", smi, g.typ[j])
+				case "O", "S", "N":
+					switch g.typ[j] {
+					case "CO", "CN", "CS", "Ck":
+					default:
+						t.Errorf("%s: terminal %s on %s is in no group", smi, a.Element, g.typ[j])
+					}
+				default:
+					t.Errorf("%s: terminal %s is in no group", smi, a.Element)
+				}
+			}
+			assert.Equal(t, poly, centres, "%s: groups %v", smi, groupNames(e))
+		}
+	}
+	t.Logf("%d estimated, %d refused", estimated, refused)
+	assert.Greater(t, estimated, 100)
+}
