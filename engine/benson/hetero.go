@@ -69,7 +69,7 @@ func (g *graph) heteroCarbonType(i int) (string, bool) {
 
 // heteroClass names the validation class of a molecule with heteroatoms
 // other than oxygen: halogen (any F, Cl, Br, I), else sulfur, else nitrogen;
-// "" for C/H/O molecules.
+// carbonyl for a C/H/O ketene; "" for other C/H/O molecules.
 func heteroClass(m *molecule.Molecule) string {
 	var n, s, x bool
 	for _, a := range m.Atoms {
@@ -89,8 +89,35 @@ func heteroClass(m *molecule.Molecule) string {
 		return "sulfur"
 	case n:
 		return "nitrogen"
+	case ketene(m):
+		return "carbonyl" // a ketene is a carbonyl compound, not an ether
 	}
 	return ""
+}
+
+// ketene reports whether m has a carbon double-bonded to both O and C.
+func ketene(m *molecule.Molecule) bool {
+	for i, a := range m.Atoms {
+		if a.Element != "C" {
+			continue
+		}
+		toO, toC := false, false
+		for _, b := range m.Adj[i] {
+			if m.Bonds[b].Order != 2 {
+				continue
+			}
+			switch m.Atoms[m.Other(b, i)].Element {
+			case "O":
+				toO = true
+			case "C":
+				toC = true
+			}
+		}
+		if toO && toC {
+			return true
+		}
+	}
+	return false
 }
 
 // addHalogenFlags flags every group of a carbon that bears two or more

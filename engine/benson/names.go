@@ -23,6 +23,14 @@ var centreLigands = map[string]int{
 	"CN": 1, "Ck": 0, "CS": 2, // nitrile, ketene and thiocarbonyl carbons (hetero.go)
 }
 
+// impliedPartner names, per centre type, the element of a terminal
+// double-bonded partner that the centre type itself stands for: the =O of a
+// carbonyl group CO-(C)(H). A terminal atom joined by a double bond to any
+// other centre is named by no group and the estimate is refused. The ≡N of
+// a nitrile carbon CN is the one triple-bonded implied partner. This is the one place where a new centre
+// type (say a thiocarbonyl) declares the terminal atom it carries.
+var impliedPartner = map[string]string{"CO": "O", "Ck": "O", "CS": "S", "CN": "N"} // Ck, CS, CN: hetero.go
+
 // ParseGroupName validates a group name in Benson notation, centre-(ligand)n…,
 // and returns it normalised: ligands merged and sorted (see ligandRank), counts
 // written after the parenthesis and omitted when 1. "C-(H)3(C)" and
