@@ -10,6 +10,8 @@ import (
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/engine/molecule"
 )
 
 // TestNASA9Entered checks every NASA-9 entry against itself, which catches
@@ -107,4 +109,41 @@ func cell(t *testing.T, s string) (float64, bool) {
 	v, err := strconv.ParseFloat(strings.TrimSpace(s), 64)
 	require.NoError(t, err, s)
 	return v, true
+}
+
+// TestLookupNSX: the N, S and halogen entries are found from any spelling
+// of their structure, in their ground state when no multiplicity is given,
+// and not in a spin state the library lacks.
+func TestLookupNSX(t *testing.T) {
+	lib := New()
+	cases := []struct {
+		smiles string
+		mult   int
+		want   string
+	}{
+		{"[N]", 0, "N"}, {"[N]", 4, "N"}, {"[N]", 2, ""},
+		{"[NH]", 0, "NH"}, {"[NH]", 1, ""},
+		{"N=[N]", 0, "NNH"}, {"O=N", 0, "HNO"}, {"N(=O)O", 0, "HONO"},
+		{"[O-][N+](=O)O", 0, "HNO3"}, {"N#C", 0, "HCN"}, {"N#[C]", 0, "CN"},
+		{"O=C=N", 0, "HNCO"}, {"N#CO", 0, "HOCN"}, {"O=C=[N]", 0, "NCO"},
+		{"C=C=O", 0, "CH2CO"}, {"C#C[O]", 0, "HCCO"}, {"O=C=[CH]", 0, "HCCO"}, {"C#[C]", 0, "C2H"},
+		{"S=O", 0, "SO"}, {"O=S", 3, "SO"}, {"O=S=O", 0, "SO2"}, {"O=S(=O)=O", 0, "SO3"},
+		{"[C]=S", 0, "CS"}, {"S=C=S", 0, "CS2"}, {"S=C=O", 0, "COS"}, {"[SH]", 0, "SH"}, {"S", 0, "H2S"},
+		{"Cl", 0, "HCl"}, {"[Cl]", 0, "Cl"}, {"ClCl", 0, "Cl2"}, {"Cl[O]", 0, "ClO"}, {"ClO", 0, "HOCl"},
+		{"ClC(Cl)=O", 0, "COCl2"}, {"FC(F)(F)F", 0, "CF4"}, {"ClC", 0, "CH3Cl"}, {"Cl[CH2]", 0, "CH2Cl"},
+		{"NN", 0, "N2H4"}, {"N#CC#N", 0, "C2N2"}, {"O=C=[C]", 0, "C2O"}, {"O=[N+]([O-])[O]", 0, "NO3"},
+		{"CCl", 3, ""}, {"CCCl", 0, ""},
+	}
+	for _, c := range cases {
+		m, err := molecule.ParseSMILES(c.smiles)
+		require.NoError(t, err, c.smiles)
+		s, ok := lib.Lookup(m, c.mult)
+		if c.want == "" {
+			assert.False(t, ok, "%s ×%d found %v", c.smiles, c.mult, s)
+			continue
+		}
+		if assert.True(t, ok, "%s ×%d", c.smiles, c.mult) {
+			assert.Equal(t, c.want, s.Name, c.smiles)
+		}
+	}
 }
