@@ -215,3 +215,29 @@ func (g *graph) partnerElement(i, order int, element string) int {
 	}
 	return -1
 }
+
+// Thiyl radical sites (RS•) lose the parent thiol's S–H internal rotor: the
+// S–H torsion of CH3SH is a nearly free rotor (barrier ≈ 1.3 kcal/mol,
+// reduced moment ≈ 0.9 amu·Å², from memory), whose entropy is about
+// thiolRotorS without its symmetry number (free rotor 4.5, less Pitzer's
+// hindrance correction at V₀/RT ≈ 2), and whose Cp excess fades from about
+// 1.6 cal/(mol K) at 300 K to the free-rotor R/2 at high temperature
+// (common practice). The lost X–H vibrations (radical.go, lostModes) carry
+// no torsion, so the rotor is removed here, as the O–H rotor is for alkoxy.
+const thiolRotorS = 4.2 // cal/(mol K)
+
+var thiolRotorCp = [7]float64{1.6, 1.4, 1.3, 1.2, 1.1, 1.05, 1.0} // cal/(mol K) at StdTemps
+
+// heteroSiteChange returns the entropy and Cp change (J/(mol K)) of a
+// hetero radical site beyond its lost X–H vibrations, and false for sites
+// with none.
+func heteroSiteChange(g *graph, i int, site string) (float64, [7]float64, bool) {
+	var cp [7]float64
+	if site != "thiyl" || g.m.Atoms[i].Element != "S" || len(g.nbr[i]) != 1 {
+		return 0, cp, false
+	}
+	for k := range cp {
+		cp[k] = -thiolRotorCp[k] * calorie
+	}
+	return -thiolRotorS * calorie, cp, true
+}

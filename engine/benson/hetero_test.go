@@ -175,3 +175,19 @@ func TestHeteroAtomAccounting(t *testing.T) {
 	t.Logf("%d estimated, %d refused", estimated, refused)
 	assert.Greater(t, estimated, 100)
 }
+
+// A thiyl radical loses its parent thiol's S–H rotor (thiolRotorS): CH3S•
+// comes out 4.2 cal/(mol K) below CH3SH plus R ln 2 and the lost
+// vibrations, not at the thiol's entropy.
+func TestThiylRotorLoss(t *testing.T) {
+	rad := heteroEstimate(t, "C[S]")
+	found := false
+	for _, c := range rad.Corrections {
+		if strings.HasPrefix(c.Name, "radical site: inversion") {
+			found = true
+			assert.InDelta(t, -thiolRotorS*calorie, c.S298, 1e-9)
+			assert.InDelta(t, -thiolRotorCp[0]*calorie, c.Cp[0], 1e-9)
+		}
+	}
+	assert.True(t, found, "%v", rad.Corrections)
+}

@@ -241,6 +241,14 @@ func siteChanges(m *molecule.Molecule, g *graph) (Term, bool) {
 			t.S298 += R*(x/math.Expm1(x)-math.Log(-math.Expm1(-x))) - ohRotorS*calorie
 			continue
 		}
+		if dS, dCp, ok := heteroSiteChange(g, i, site); ok {
+			n++
+			t.S298 += dS
+			for c := range t.Cp {
+				t.Cp[c] += dCp[c]
+			}
+			continue
+		}
 		if a.Element != "C" || g.typ[i] != "C" {
 			continue
 		}
