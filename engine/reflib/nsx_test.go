@@ -147,3 +147,11 @@ func TestLookupNSX(t *testing.T) {
 		}
 	}
 }
+
+// BenchmarkBuild measures building the library (index and NASA-9 refits),
+// which New does once per process.
+func BenchmarkBuild(b *testing.B) {
+	for i := 0; i < b.N; i++ {
+		build()
+	}
+}

@@ -20,6 +20,7 @@ import (
 	"fmt"
 	"math"
 	"strconv"
+	"sync"
 
 	"kiln.dev/kiln/engine/molecule"
 	"kiln.dev/kiln/engine/nasa"
@@ -50,11 +51,18 @@ type Library struct {
 	maxHeavy int
 }
 
-// New builds the library and its index by canonical SMILES (each entry's
+// New returns the library. It is built once per process (the NASA-9
+// refits take a few milliseconds) and shared: a Library is immutable, and
+// Lookup and All return copies.
+func New() *Library { return built() }
+
+var built = sync.OnceValue(build)
+
+// build builds the library and its index by canonical SMILES (each entry's
 // SMILES and aliases are read with molecule.ParseSMILES and written with
 // Canonical). It panics if an entry of the built-in table cannot be read,
 // fitted or indexed: that is a defect of the table, caught by the tests.
-func New() *Library {
+func build() *Library {
 	l := &Library{index: map[string]int{}, ground: map[string]int{}}
 	for _, e := range append(append([]entry(nil), entries...), nsxEntries...) {
 		e.resolve()
