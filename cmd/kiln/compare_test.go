@@ -111,7 +111,7 @@ func TestCompareMechanisms(t *testing.T) {
 	assert.Equal(t, 1, o.Summary.ReactionsOnlyB)
 
 	// A wider factor clears the rate flag (thermo and names still fail).
-	wide := compareJSONOf(t, exitProblems, compareA, compareB, "--rate-factor", "5")
+	wide := compareJSONOf(t, exitProblems, compareA, compareB, "--rate-factor", "10")
 	assert.Zero(t, wide.Summary.RateFlagged)
 	// The thermo thresholds are the mismatch settings of every command.
 	loose := compareJSONOf(t, exitProblems, compareA, compareB, "--mismatch-hf", "5")
@@ -137,7 +137,7 @@ func TestCompareText(t *testing.T) {
 		assert.Less(t, utf8.RuneCountInString(line), 120, "line %d: %q", i+1, line)
 		assert.Equal(t, strings.TrimRight(line, " \t"), line, "trailing blanks on line %d", i+1)
 	}
-	for _, want := range []string{"rename hydroxyl to OH in sub.kiln", "propyl", "ethanol", "+4.20*", "2.62*", "B writes it reversed",
+	for _, want := range []string{"rename hydroxyl to OH in sub.kiln", "propyl", "ethanol", "+4.20*", "6.37*", "B writes it reversed",
 		"Species only in B (3)", "Reactions only in A (2)"} {
 		assert.Contains(t, stdout, want)
 	}
