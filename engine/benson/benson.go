@@ -37,7 +37,6 @@ package benson
 import (
 	"fmt"
 	"math"
-	"slices"
 	"strconv"
 	"strings"
 
@@ -210,6 +209,9 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	est.SymmetryNumber = opts.Symmetry
 	if est.SymmetryNumber == 0 {
+		if sy.err != nil {
+			return nil, sy.err
+		}
 		est.SymmetryNumber = sy.number()
 	}
 	if est.SymmetryNumber > 1 {
@@ -273,30 +275,7 @@ func term(v GroupValue, count int) Term {
 
 // parentOf returns a copy of m with every unpaired electron replaced by a
 // hydrogen: the closed-shell parent used by the HBI method.
-func parentOf(m *molecule.Molecule) *molecule.Molecule {
-	p := *m
-	p.Atoms = make([]molecule.Atom, len(m.Atoms))
-	copy(p.Atoms, m.Atoms)
-	for i := range p.Atoms {
-		p.Atoms[i].HCount += p.Atoms[i].Radical
-		p.Atoms[i].Radical = 0
-	}
-	return &p
-}
-
-// rebuilt returns a full molecule (rings, aromaticity, caches: everything
-// the reader derives) for m's connections with the given atoms and bond
-// orders. It is the one place a derived form (a resonance structure) is
-// made; it goes through the molecule package's writer and reader so that
-// no ring or aromaticity data is lost, whatever the copy.
-func rebuilt(m *molecule.Molecule, atoms []molecule.Atom, bonds []molecule.Bond) (*molecule.Molecule, error) {
-	tmp := &molecule.Molecule{Atoms: atoms, Bonds: bonds, Adj: m.Adj}
-	out, err := molecule.ParseSMILES(tmp.Canonical())
-	if err != nil {
-		return nil, fmt.Errorf("benson: rebuilding a derived structure of %s: %w", m.SMILES, err)
-	}
-	return out, nil
-}
+func parentOf(m *molecule.Molecule) *molecule.Molecule { return m.ClosedShellParent() }
 
 // enoxyForm returns the resonance structure •C–C=O ↔ C=C–O• of a molecule
 // whose single unpaired electron sits on a carbon next to a carbonyl carbon
@@ -324,12 +303,8 @@ func enoxyForm(m *molecule.Molecule) (*molecule.Molecule, bool) {
 			if m.Bonds[b2].Order != 2 || m.Atoms[k].Element != "O" || len(m.Adj[k]) != 1 || m.Atoms[k].HCount != 0 {
 				continue
 			}
-			atoms := slices.Clone(m.Atoms)
-			bonds := slices.Clone(m.Bonds)
-			bonds[b1].Order, bonds[b2].Order = 2, 1
-			bonds[b1].Stereo = 0
-			atoms[site].Radical, atoms[k].Radical = 0, 1
-			alt, err := rebuilt(m, atoms, bonds)
+			// built by the molecule package: rings and aromaticity stay right
+			alt, err := m.WithBondOrders(map[int]int{b1: 2, b2: 1}, map[int]int{site: 0, k: 1})
 			if err != nil {
 				return nil, false
 			}
