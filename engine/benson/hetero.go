@@ -6,10 +6,20 @@ import (
 	"kiln.dev/kiln/engine/molecule"
 )
 
-// Nitrogen, sulfur and halogen groups, nitrile and ketene carbons.
+// Nitrogen, sulfur and halogen groups, nitrile, ketene and thiocarbonyl
+// carbons, hetero radical sites.
 //
-// The values are in groups_nsx.tsv (same columns as groups.tsv), loaded with
-// the main table. Two carbon types are added to the Benson types of graph.go:
+// Coverage (values and sources in groups_nsx.tsv, same columns as
+// groups.tsv, loaded into the one group table): amines, aniline, hydrazines,
+// primary amides, nitriles; thiols, sulfides, disulfides; F and Cl on sp3
+// carbon next to carbon, Br on primary carbon, F, Cl, Br on benzene rings;
+// ketenes. Radical sites on N and S and next to N, Cl and F take the bond
+// dissociation enthalpies of hbi_nsx.tsv (heteroSite), thiyl sites the loss
+// of the thiol's S–H rotor (heteroSiteChange). Carbons bearing two or more
+// halogens next to another heavy atom are flagged (addHalogenFlags).
+// Everything else with N, S or halogens is refused, naming the group.
+//
+// Three carbon types are added to the Benson types of graph.go:
 //
 //   - CN: a carbon triple-bonded to nitrogen (nitrile). Its ≡N is implied, as
 //     the ≡C partner of Ct is; it is the centre of one group, CN-(X), and a
@@ -20,6 +30,9 @@ import (
 //   - Ck: a cumulated carbon carrying =O (ketene, R2C=C=O). Both double-bond
 //     partners are implied, so its group has no written neighbours, like the
 //     allene centre Ca; the =CR2 end is an ordinary Cd group.
+//   - CS: a carbon double-bonded to sulfur (thiocarbonyl); its =S is implied
+//     as the =O of CO is. The tables have no CS group: such species are
+//     refused naming the group, and a user group makes them estimable.
 //
 // Terminal halogens and the nitrile N are ligands only (they centre no group),
 // as =O is; amine, amide and hydrazine nitrogen and divalent sulfur are group
