@@ -124,7 +124,7 @@ func TestHeteroRadicalSites(t *testing.T) {
 // implied partner of a CO, CN, CS or Ck centre. Refusals are allowed.
 func TestHeteroAtomAccounting(t *testing.T) {
 	skeletons := []string{"C%s", "CC%s", "CC(C)%s", "CC(C)(C)%s", "C=C%s", "C=CC%s", "CC(=O)%s", "c1ccccc1%s",
-		"C#CC%s", "CCC(=O)C%s", "C1CCC1%s", "C%sC", "CC(%s)CC"}
+		"C#CC%s", "CCC(=O)C%s", "C1CCC1%s", "C%sC", "CC(%s)CC", "[CH2]C%s", "C[CH]C%s", "[CH2]%s"}
 	subs := []string{"F", "Cl", "Br", "I", "N", "NC", "N(C)C", "NN", "S", "SC", "SSC", "C#N", "C(=O)N", "C(N)=O",
 		"[N+](=O)[O-]", "C=S", "N=O", "OC#N", "N=C=O", "C(F)(F)F", "C(Cl)Cl", "C=C=O", "C(=O)Cl", "P", "[Si]"}
 	estimated, refused := 0, 0
