@@ -20,6 +20,7 @@ func (m *Molecule) ringBondFlags() []bool {
 		disc[i] = -1
 	}
 	type frame struct{ v, parentBond, next int }
+	stack := make([]frame, 0, n)
 	t := 0
 	for root := 0; root < n; root++ {
 		if disc[root] >= 0 {
@@ -27,7 +28,7 @@ func (m *Molecule) ringBondFlags() []bool {
 		}
 		disc[root], low[root] = t, t
 		t++
-		stack := []frame{{root, -1, 0}}
+		stack = append(stack[:0], frame{root, -1, 0})
 		for len(stack) > 0 {
 			f := &stack[len(stack)-1]
 			if f.next < len(m.Adj[f.v]) {
@@ -133,6 +134,26 @@ func (m *Molecule) findRings(inRing []bool) (sssr, relevant [][]int) {
 
 func (m *Molecule) componentRings(atoms, edges []int, inRing []bool) (sssr, relevant [][]int) {
 	rank := len(edges) - len(atoms) + 1
+	if rank == 1 {
+		// One simple cycle: walk it from its first atom.
+		cyc := make([]int, 1, len(atoms))
+		cyc[0] = atoms[0]
+		prev := -1
+		for len(cyc) < len(atoms) {
+			cur := cyc[len(cyc)-1]
+			for _, b := range m.Adj[cur] {
+				if o := m.Other(b, cur); inRing[b] && o != prev && o != cyc[0] {
+					prev = cur
+					cyc = append(cyc, o)
+					break
+				}
+			}
+			if cyc[len(cyc)-1] == cur { // cannot happen in a simple cycle
+				break
+			}
+		}
+		return [][]int{cyc}, [][]int{cyc}
+	}
 	eIdx := make([]int, len(m.Bonds))
 	for k, b := range edges {
 		eIdx[b] = k
