@@ -86,6 +86,8 @@ func (m *Molecule) findRings(inRing []bool) (sssr, relevant [][]int) {
 		comp[i] = -1
 	}
 	var comps [][]int
+	// component lists partition the ring atoms: they share one array
+	buf := make([]int, n)
 	for i := 0; i < n; i++ {
 		if comp[i] >= 0 {
 			continue
@@ -101,7 +103,8 @@ func (m *Molecule) findRings(inRing []bool) (sssr, relevant [][]int) {
 		}
 		c := len(comps)
 		comp[i] = c
-		list := []int{i}
+		list := buf[:1]
+		list[0] = i
 		for k := 0; k < len(list); k++ {
 			v := list[k]
 			for _, b := range m.Adj[v] {
@@ -115,11 +118,13 @@ func (m *Molecule) findRings(inRing []bool) (sssr, relevant [][]int) {
 				}
 			}
 		}
-		sort.Ints(list)
-		comps = append(comps, list)
+		slices.Sort(list)
+		comps = append(comps, list[:len(list):len(list)])
+		buf = buf[len(list):]
 	}
+	ebuf := make([]int, 0, len(m.Bonds))
 	for ci, atoms := range comps {
-		var edges []int
+		edges := ebuf[:0]
 		for b, bd := range m.Bonds {
 			if inRing[b] && comp[bd.A] == ci {
 				edges = append(edges, b)
