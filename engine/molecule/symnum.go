@@ -244,6 +244,7 @@ func (sc *sigmaCalc) total() (*big.Int, error) {
 	// Identical components share orbit classes (the search joins them), and
 	// different ones share none: k copies multiply σ by k!.
 	copies := map[int]int{}
+	known := map[int]*big.Int{} // σ of a component, by its key
 	for _, atoms := range comps {
 		key := sc.classes[atoms[0]]
 		for _, a := range atoms {
@@ -251,9 +252,13 @@ func (sc *sigmaCalc) total() (*big.Int, error) {
 		}
 		copies[key]++
 		sigma.Mul(sigma, big.NewInt(int64(copies[key])))
-		s, err := sc.component(atoms)
-		if err != nil {
-			return nil, err
+		s, ok := known[key]
+		if !ok {
+			var err error
+			if s, err = sc.component(atoms); err != nil {
+				return nil, err
+			}
+			known[key] = s
 		}
 		sigma.Mul(sigma, s)
 	}

@@ -109,3 +109,17 @@ func TestOpticalIsomersMolecule(t *testing.T) {
 	assert.Equal(t, 1, parse(t, "CCC(CC)C").OpticalIsomers())
 	assert.Equal(t, 1, parse(t, "C1C2CC3CC1CC(C2)C3").OpticalIsomers(), "adamantane bridgeheads have two alike ring paths")
 }
+
+func TestCanonicalContext(t *testing.T) {
+	m := parse(t, "C1C2CC3CC1CC(C2)C3")
+	c, err := m.CanonicalContext(context.Background())
+	require.NoError(t, err)
+	assert.Equal(t, m.Canonical(), c)
+	// an uncached copy with a cancelled context refuses instead of guessing
+	p := *m
+	p.Atoms = append([]Atom(nil), m.Atoms...)
+	ctx, cancel := context.WithCancel(context.Background())
+	cancel()
+	_, err = p.CanonicalContext(ctx)
+	assert.ErrorIs(t, err, context.Canceled)
+}
