@@ -54,7 +54,7 @@ type parser struct {
 	nbr      [][]int // per atom: neighbours in written order (for chirality)
 	hadPrev  []bool  // per atom: bonded to a preceding atom when written
 	bracketH []int   // per atom: H count written inside the bracket
-	heavy     int
+	heavy    int
 }
 
 // ParseSMILES reads an OpenSMILES string into a Molecule.
@@ -115,7 +115,7 @@ func newParser(s string) *parser {
 	return &parser{s: s,
 		atoms: make([]Atom, 0, n), bonds: make([]Bond, 0, n+4),
 		organic: bools[:0:n], hadPrev: bools[n : n : 2*n], aromIn: bools[2*n : 2*n : 3*n+4],
-		nbr: lists[:0:n],
+		nbr:      lists[:0:n],
 		bracketH: make([]int, 0, n)}
 }
 
