@@ -63,7 +63,11 @@ func (a *analysis) computeReactions() error {
 	err := a.parallel(len(rs), 256, func(i int) {
 		if r := rs[i]; r.Resolved {
 			a.balance(r.Decl, r)
-			a.thermo(r.Decl, r)
+			// Thermochemistry of a reaction that does not balance means
+			// nothing: it is neither shown nor used for reverse rates.
+			if r.Balance != nil && r.Balance.Balanced {
+				a.thermo(r.Decl, r)
+			}
 			a.rates(r.Decl, r)
 		}
 	})
@@ -140,13 +144,24 @@ func reactionKey(d *speciesfile.Reaction) string {
 // reaction computes balance, thermochemistry and rate checks of one reaction.
 func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
 	f := a.res.Files[path]
-	r := &Reaction{Decl: d, File: path, Line: f.Lines.Position(d.Span().Start).Line + 1, Equation: equationText(f, d), Resolved: true, Kp: map[string]*float64{}}
+	// The line is the keyword's, not the start of the statement's leading
+	// comment and blank lines.
+	r := &Reaction{Decl: d, File: path, Line: f.Lines.Position(d.Keyword().Span.Start).Line + 1, Equation: equationText(f, d), Resolved: true, Kp: map[string]*float64{}}
+	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Equation) {
+		// An equation the reader could not read is not data: the syntax
+		// error is the one diagnostic.
+		r.Resolved = false
+		return r
+	}
 	for _, k := range keqTemperatures {
 		r.Kp[k.Key] = nil
 	}
 	undeclared := func(t speciesfile.Token, what string) {
-		a.report(path, speciesfile.Diagnostic{Span: t.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUndeclaredSpecies,
-			Message: fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)})
+		msg := fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)
+		if parts := strings.Split(t.Text, "+"); len(parts) > 1 && !strings.HasPrefix(t.Text, "(+") {
+			msg = fmt.Sprintf("%s %s is not declared; if you meant %s, put blanks around each +", what, t.Text, strings.Join(parts, " + "))
+		}
+		a.report(path, speciesfile.Diagnostic{Span: t.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUndeclaredSpecies, Message: msg})
 	}
 	for _, ts := range [][]speciesfile.Term{d.Reactants, d.Products} {
 		for _, t := range ts {
@@ -314,6 +329,9 @@ func (a *analysis) sizes(ts []speciesfile.Term) (masses []float64, heavy []int) 
 }
 
 func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
+	if a.res.Files[r.File].ErrorIn(d.Body()) {
+		return // rate parameters with a syntax error are not data
+	}
 	kf, ok := forward(d)
 	if !ok {
 		return

@@ -32,8 +32,10 @@ func (a *analysis) species() error {
 			}
 			sp := &Species{Name: d.Name.Text, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
 			if first, dup := a.res.ByName[sp.Name]; dup {
-				a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
-					Message: fmt.Sprintf("species %s is already declared (%s); this declaration is ignored", sp.Name, a.where(first.Loc)),
+				// An error: a simulator reading the file may take either
+				// declaration.
+				a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeDuplicateSpecies,
+					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", sp.Name, a.where(first.Loc)),
 					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first declaration of " + sp.Name}}})
 				continue
 			}
@@ -221,8 +223,16 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 		sp.estimateErr = err
 		var mg *benson.MissingGroupError
 		if errors.As(err, &mg) {
-			a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
-				Message: fmt.Sprintf("%s: no value for group %s and no group close enough to stand in; define it with a `group` statement", sp.Name, mg.Group)})
+			// The root cause, reported once: without a usable thermo block
+			// the species has no thermo at all (an error, and no separate
+			// missing-thermo); with one, only the comparison is lost.
+			sev, then := speciesfile.SeverityWarning, "; define it with a `group` statement"
+			if !a.hasUsableBlock(path, d) {
+				sev, then = speciesfile.SeverityError, ", so its thermo cannot be estimated; define the group with a `group` statement or add a nasa7 or thermo-table block"
+			}
+			sp.rootReported = true
+			a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: sev, Code: speciesfile.CodeMissingGroup,
+				Message: fmt.Sprintf("%s: no value for group %s and no group close enough to stand in%s", sp.Name, mg.Group, then)})
 		}
 		return
 	}
@@ -256,9 +266,28 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 // site's entropy and heat-capacity increments are not tabulated.
 func isHBINote(m benson.Missing) bool { return strings.HasPrefix(m.Group, "HBI ") }
 
-// given converts the species' own thermo block, if any.
+// hasUsableBlock reports whether declaration d has a thermo block without
+// syntax errors: a block the reader could not read completely is not data.
+func (a *analysis) hasUsableBlock(path string, d *speciesfile.Species) bool {
+	f := a.res.Files[path]
+	switch {
+	case d.NASA7 != nil:
+		return !f.ErrorIn(d.NASA7.Span)
+	case d.Table != nil:
+		return !f.ErrorIn(d.Table.Span)
+	}
+	return false
+}
+
+// given converts the species' own thermo block, if any. A block with a
+// syntax error is ignored (the syntax error says what to fix); the species
+// is then estimated like one without a block.
 func (a *analysis) given(path string, sp *Species) {
 	d := sp.Decl
+	if (d.NASA7 != nil || d.Table != nil) && !a.hasUsableBlock(path, d) {
+		sp.brokenBlock = true
+		return
+	}
 	switch {
 	case d.NASA7 != nil:
 		b := d.NASA7
@@ -311,21 +340,29 @@ func (a *analysis) shapeOf(sp *Species) (int, bool, int) {
 func (a *analysis) thermoChecks(path string, sp *Species) {
 	d := sp.Decl
 	if sp.Given == nil {
+		block := "no thermo block"
+		if sp.brokenBlock {
+			block = "its thermo block has a syntax error and is ignored"
+		}
 		if sp.Estimate != nil {
 			sp.Source = SourceEstimate
 			a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeMissingThermo,
-				Message: fmt.Sprintf("%s: no thermo block; estimated %s", sp.Name, a.thermoSummary(sp.Estimate.Hf298, sp.Estimate.S298))})
+				Message: fmt.Sprintf("%s: %s; estimated %s", sp.Name, block, a.thermoSummary(sp.Estimate.Hf298, sp.Estimate.S298))})
 			return
 		}
-		if sp.SMILESError != nil {
-			return // bad-smiles already says what to fix
+		if sp.SMILESError != nil || sp.rootReported {
+			return // bad-smiles or missing-group already says what to fix
 		}
 		why := "it has no structure (SMILES) to estimate from"
 		if sp.estimateErr != nil {
 			why = "kiln cannot estimate it: " + sp.estimateErr.Error()
 		}
+		what := "has no thermo block"
+		if sp.brokenBlock {
+			what = "has no usable thermo block (the syntax error above)"
+		}
 		a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeMissingThermo,
-			Message: fmt.Sprintf("%s has no thermo block and %s; add a nasa7 or thermo-table block", sp.Name, why)})
+			Message: fmt.Sprintf("%s %s and %s; add a nasa7 or thermo-table block", sp.Name, what, why)})
 		return
 	}
 	g := sp.Given
