@@ -265,30 +265,6 @@ func (r *Reaction) Kc(T float64) (float64, bool) {
 	return kinetics.Kc(kinetics.Kp(g, T), kinetics.DeltaN(r.reactants, r.products), T), true
 }
 
-// forward returns k_f(T) of the reaction's main rate in cm3, mol, s units.
-// For falloff reactions the main line is the high-pressure limit.
-func forward(d *speciesfile.Reaction) (func(T float64) float64, bool) {
-	if len(d.Pressures) > 0 {
-		var tab kinetics.PressureTable
-		for _, p := range d.Pressures {
-			if arr, ok := arrhenius(&p.Rate); ok {
-				tab = append(tab, kinetics.PressureRate{P: p.P.SI, Rate: arr})
-			}
-		}
-		if len(tab) > 0 {
-			return func(T float64) float64 { return tab.Rate(T, oneAtm) }, true
-		}
-	}
-	arr, ok := arrhenius(d.Rate)
-	if !ok {
-		return nil, false
-	}
-	return arr.Rate, true
-}
-
-// oneAtm (Pa) is the pressure at which a rate table is read for checks.
-const oneAtm = 101325
-
 func arrhenius(r *speciesfile.Arrhenius) (kinetics.Arrhenius, bool) {
 	if r == nil || r.A == nil {
 		return kinetics.Arrhenius{}, false
@@ -328,62 +304,9 @@ func (a *analysis) sizes(ts []speciesfile.Term) (masses []float64, heavy []int) 
 	return masses, heavy
 }
 
-func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
-	if a.res.Files[r.File].ErrorIn(d.Body()) {
-		return // rate parameters with a syntax error are not data
-	}
-	kf, ok := forward(d)
-	if !ok {
-		return
-	}
-	set := kinetics.CollisionSettings{Factor: a.set.CollisionFactor, TMin: 300, TMax: 2500}
-	third := 0
-	if d.ThirdBody {
-		third = 1
-	}
-	span := d.Equation
-	if d.Rate != nil {
-		span = d.Rate.Span
-	}
-	m, h := a.sizes(d.Reactants)
-	if v := kinetics.CollisionCheck(molecularity(d.Reactants)+third, m, h, kf, set); v != nil {
-		r.Collision = v
-		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
-			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K", v.Rate, v.Limit, rateUnits(v.Order), v.T)})
-	}
-	if !d.Reversible {
-		return
-	}
-	var kr func(T float64) float64
-	if arr, ok := arrhenius(d.Reverse); ok {
-		kr = arr.Rate
-	} else if r.reactants != nil {
-		kr = func(T float64) float64 {
-			kc, _ := r.Kc(T)
-			return kinetics.ReverseRate(kf(T), kc)
-		}
-	}
-	if kr == nil {
-		return
-	}
-	v := kr(1000)
-	if !math.IsNaN(v) && !math.IsInf(v, 0) {
-		r.ReverseRate1000 = &v
-	}
-	if r.Collision != nil {
-		return
-	}
-	m, h = a.sizes(d.Products)
-	if v := kinetics.CollisionCheck(molecularity(d.Products)+third, m, h, kr, set); v != nil {
-		v.Reverse = true
-		r.Collision = v
-		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
-			Message: fmt.Sprintf("reverse rate implied by thermochemistry, %.3g, exceeds the collision limit %.3g (%s) at %.0f K", v.Rate, v.Limit, rateUnits(v.Order), v.T)})
-	}
-}
-
-// rateUnits names the units of a rate constant of the given order.
-func rateUnits(order int) string {
+// RateUnits names the units of a rate constant of the given order in the
+// mechanism's cm, mol, s system: "s⁻¹", "cm³/(mol·s)", "cm⁶/(mol²·s)".
+func RateUnits(order int) string {
 	switch order {
 	case 1:
 		return "s⁻¹"

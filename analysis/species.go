@@ -187,6 +187,7 @@ func (a *analysis) estimateOptions(d *speciesfile.Species, user []benson.GroupVa
 		UserGroups:     user,
 		TMid:           a.set.TMid,
 		THigh:          a.set.THigh,
+		ExplicitRange:  a.set.ExplicitFitRange,
 	}
 }
 
@@ -369,11 +370,8 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 	if g.Poly != nil {
 		cpMax := 0.0
 		if sp.Mol != nil || len(sp.Composition) > 0 {
-			// Rotors are not discounted: any of them may be a stiff
-			// vibration at high T, so the all-vibration limit bounds Cp.
 			n, lin, _ := a.shapeOf(sp)
-			_, cpInf := nasa.ClassicalLimits(n, lin, 0)
-			cpMax = cpInf * 1.02
+			cpMax = nasa.CpCeiling(n, lin)
 		}
 		for _, p := range nasa.Check(*g.Poly, nasa.Tolerances{}, cpMax) {
 			code := speciesfile.CodeNonphysicalThermo
@@ -389,7 +387,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 			case "ranges":
 				span = speciesfile.Span{Start: d.NASA7.TLow.Tok.Span.Start, End: d.NASA7.THigh.Tok.Span.End}
 			}
-			a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: code, Message: sp.Name + ": " + p.Message})
+			a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: code, Message: sp.Name + ": " + a.problemMessage(p)})
 		}
 	}
 	if g.Table != nil {
@@ -422,6 +420,27 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 			Message: fmt.Sprintf("%s: S°298 given %s vs estimated %s (difference %s, threshold %s)",
 				sp.Name, a.entropy(s), a.entropy(sp.Estimate.S298), a.entropy(ds), a.entropy(a.set.MismatchS298))})
 	}
+}
+
+// problemMessage describes a defect of a polynomial in the display units,
+// rounded for people.
+func (a *analysis) problemMessage(p nasa.Problem) string {
+	u := a.res.Units()
+	switch p.Test {
+	case "cp-jump":
+		return fmt.Sprintf("Cp jumps by %s at %g K (low block %s, high block %s)", u.Entropy(p.Other-p.Value), p.T, u.Entropy(p.Value), u.Entropy(p.Other))
+	case "h-jump":
+		return fmt.Sprintf("H jumps by %s at %g K (low block %s, high block %s)", u.Energy(p.Other-p.Value), p.T, u.Energy(p.Value), u.Energy(p.Other))
+	case "s-jump":
+		return fmt.Sprintf("S jumps by %s at %g K (low block %s, high block %s)", u.Entropy(p.Other-p.Value), p.T, u.Entropy(p.Value), u.Entropy(p.Other))
+	case "cp-falls":
+		return fmt.Sprintf("Cp falls with temperature: %s at %.0f K, below the %s reached earlier", u.Entropy(p.Value), p.T, u.Entropy(p.Other))
+	case "cp-nonpositive":
+		return fmt.Sprintf("Cp is not positive: %s at %.0f K", u.Entropy(p.Value), p.T)
+	case "cp-ceiling":
+		return fmt.Sprintf("Cp = %s at %.0f K exceeds %s, the classical limit with the allowance for electronic states and anharmonicity", u.Entropy(p.Value), p.T, u.Entropy(p.Other))
+	}
+	return p.Message
 }
 
 // tableChecks reports unsound tabulated Cp values.
@@ -517,29 +536,13 @@ func (sp *Species) CpAt() ([7]float64, bool) {
 }
 
 // energy formats an energy (J/mol) in the display units.
-func (a *analysis) energy(v float64) string { return FormatEnergy(v, a.set.DisplayUnits) }
+func (a *analysis) energy(v float64) string { return a.res.Units().Energy(v) }
 
 // entropy formats an entropy or heat capacity (J/(mol K)) in the display units.
-func (a *analysis) entropy(v float64) string { return FormatEntropy(v, a.set.DisplayUnits) }
+func (a *analysis) entropy(v float64) string { return a.res.Units().Entropy(v) }
 
 func (a *analysis) thermoSummary(hf, s float64) string {
 	return fmt.Sprintf("ΔHf°298 = %s, S°298 = %s", a.energy(hf), a.entropy(s))
-}
-
-// FormatEnergy writes v (J/mol) as "-56.21 kcal/mol" or "-235.2 kJ/mol".
-func FormatEnergy(v float64, units string) string {
-	if units == "kJ/mol" {
-		return fmt.Sprintf("%.1f kJ/mol", v/1000)
-	}
-	return fmt.Sprintf("%.2f kcal/mol", v/4184)
-}
-
-// FormatEntropy writes v (J/(mol K)) as "67.54 cal/(mol·K)" or "282.6 J/(mol·K)".
-func FormatEntropy(v float64, units string) string {
-	if units == "kJ/mol" {
-		return fmt.Sprintf("%.1f J/(mol·K)", v)
-	}
-	return fmt.Sprintf("%.2f cal/(mol·K)", v/4.184)
 }
 
 // MolarMassOf returns the molar mass (g/mol) of an element composition using

@@ -32,7 +32,7 @@ func Hover(x *Index, file string, off int, s analysis.Settings, markdown bool) (
 	if !ok {
 		return HoverResult{}, false
 	}
-	w := &writer{md: markdown, u: displayUnits(s)}
+	w := &writer{md: markdown, u: displayUnits(s, x.File(file))}
 	switch o.Kind {
 	case KindSpeciesStmt, KindSpeciesDecl, KindSpeciesUse:
 		if o.Species == nil {
@@ -399,8 +399,11 @@ func (w *writer) reaction(x *Index, r *analysis.Reaction) {
 		}
 		rows = append(rows, []string{"Kp(" + k + " K)", v})
 	}
+	if r.ForwardRate1000 != nil {
+		rows = append(rows, []string{"k_f(1000 K)", sci(*r.ForwardRate1000) + " " + analysis.RateUnits(r.ForwardOrder)})
+	}
 	if r.ReverseRate1000 != nil {
-		rows = append(rows, []string{"k_r(1000 K)", sci(*r.ReverseRate1000) + " (cm3, mol, s)"})
+		rows = append(rows, []string{"k_r(1000 K)", sci(*r.ReverseRate1000) + " " + analysis.RateUnits(r.ReverseOrder)})
 	}
 	if len(rows) > 0 {
 		w.table([]string{"quantity", "value"}, rows)

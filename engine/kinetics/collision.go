@@ -44,6 +44,20 @@ type Violation struct {
 	Rate, Limit float64 // mechanism units of the given order
 	Reverse     bool    // set by the caller when the reverse direction was checked
 	Order       int     // molecularity the bound was taken for
+	// P is the pressure (Pa) of the worst point of a pressure-dependent
+	// rate, 0 when the rate does not depend on pressure (set by the caller).
+	P float64
+}
+
+// CheckPressures returns the pressures (Pa) at which a pressure-dependent
+// rate is checked: 0.01 to 100 bar, two points per decade (1, 3.16, 10, …),
+// the range combustion and pyrolysis models are run at (common practice).
+func CheckPressures() []float64 {
+	out := make([]float64, 0, 9)
+	for i := 0; i <= 8; i++ {
+		out = append(out, 1e3*math.Pow(10, float64(i)/2))
+	}
+	return out
 }
 
 // Ratio returns Rate/Limit (> 1 for a violation).
