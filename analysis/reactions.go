@@ -304,16 +304,6 @@ func (a *analysis) sizes(ts []speciesfile.Term) (masses []float64, heavy []int) 
 	return masses, heavy
 }
 
-// RateUnits names the units of a rate constant of the given order in the
-// mechanism's cm, mol, s system: "s⁻¹", "cm³/(mol·s)", "cm⁶/(mol²·s)".
-func RateUnits(order int) string {
-	switch order {
-	case 1:
-		return "s⁻¹"
-	case 2:
-		return "cm³/(mol·s)"
-	case 3:
-		return "cm⁶/(mol²·s)"
-	}
-	return fmt.Sprintf("order %d, cm, mol, s", order)
-}
+// RateUnits names the units of a rate constant of the given order (see
+// kinetics.RateUnits, the one formatter).
+func RateUnits(order int) string { return kinetics.RateUnits(order) }

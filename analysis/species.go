@@ -513,26 +513,58 @@ func (sp *Species) Hf298S298() (hf, s float64, ok bool) {
 	return 0, 0, false
 }
 
-// CpAt returns Cp at the standard temperatures from the thermo the analysis
-// uses: the estimate's group values, or the file's block evaluated.
-func (sp *Species) CpAt() ([7]float64, bool) {
-	var out [7]float64
+// CpAt returns Cp (J/(mol K)) at T (K) from the block: the polynomial
+// inside [TLow, THigh], the table interpolated linearly between its
+// temperatures. Outside them ok is false: no command shows a value a block
+// does not give (one rule for summaries, hovers and plots).
+func (g *GivenThermo) CpAt(T float64) (float64, bool) {
+	switch {
+	case g.Poly != nil:
+		return g.Poly.Cp(T), g.Poly.InRange(T)
+	case g.Table != nil && len(g.Table.T) > 0:
+		lo, hi := math.Inf(1), math.Inf(-1)
+		for _, t := range g.Table.T {
+			lo, hi = math.Min(lo, t), math.Max(hi, t)
+		}
+		if T < lo || T > hi {
+			return 0, false
+		}
+		return interpolate(g.Table.T, g.Table.Cp, T), true
+	}
+	return 0, false
+}
+
+// Range returns the temperatures (K) the block covers.
+func (g *GivenThermo) Range() (lo, hi float64) {
+	switch {
+	case g.Poly != nil:
+		return g.Poly.TLow, g.Poly.THigh
+	case g.Table != nil && len(g.Table.T) > 0:
+		lo, hi = math.Inf(1), math.Inf(-1)
+		for _, t := range g.Table.T {
+			lo, hi = math.Min(lo, t), math.Max(hi, t)
+		}
+		return lo, hi
+	}
+	return 0, 0
+}
+
+// CpAt returns Cp at the standard temperatures (benson.StdTemps) from the
+// thermo the analysis uses: the estimate's values, or the file's block where
+// it covers the temperature (ok[i] false elsewhere, see GivenThermo.CpAt).
+func (sp *Species) CpAt() (cp [7]float64, ok [7]bool) {
 	switch sp.Source {
 	case SourceEstimate:
-		return sp.Estimate.Cp, true
+		for i := range ok {
+			ok[i] = true
+		}
+		return sp.Estimate.Cp, ok
 	case SourceFile:
-		if sp.Given.Table != nil {
-			for i, T := range benson.StdTemps {
-				out[i] = interpolate(sp.Given.Table.T, sp.Given.Table.Cp, T)
-			}
-			return out, len(sp.Given.Table.T) > 0
-		}
 		for i, T := range benson.StdTemps {
-			out[i] = sp.Given.Poly.Cp(T)
+			cp[i], ok[i] = sp.Given.CpAt(T)
 		}
-		return out, true
 	}
-	return out, false
+	return cp, ok
 }
 
 // energy formats an energy (J/mol) in the display units.

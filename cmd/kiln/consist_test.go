@@ -45,3 +45,157 @@ func TestSummaryLines(t *testing.T) {
 	_, text, _ := runKiln(t, "summary", "../../examples/furnace.kiln")
 	assert.Regexp(t, `(?m)^82\s+H \+ O2 <=> O \+ OH`, text)
 }
+
+// TestSummaryBrokenAndTables: a block with a syntax error is not taken from
+// the file (case 4), a table gives no Cp outside its temperatures (case 10,
+// the rule hovers follow too), an unbalanced reaction gets no values and the
+// exit code says there are errors (case 8).
+func TestSummaryBrokenAndTables(t *testing.T) {
+	path := writeTemp(t, "s.kiln", `species H [H]
+species O2 O=O
+  multiplicity 3
+species HO2 O[O]
+  nasa7 200 1000 3500
+    low 4.30179807E+00 -4.74912097E-03 2.11582905E-05 -2.42763914E-08 9.29225225E-12 2.64018485E+02 3.71666220E+00
+species lump
+  composition C2H2
+  thermo-table
+    hf298 54.2
+    s298 48.0
+    cp 400=12.0 500=13.1 600=14.0
+reaction H + O2 <=> HO2  A=1e13 n=0 Ea=0
+reaction H + O2 <=> HO2 + H  A=1e13 n=0 Ea=0
+`)
+	code, stdout, stderr := runKiln(t, "summary", "--json", path)
+	assert.Equal(t, exitProblems, code, stderr)
+	var s struct {
+		Species []struct {
+			Name   string              `json:"name"`
+			Source string              `json:"thermo_source"`
+			Hf     *float64            `json:"hf298_kj_mol"`
+			Cp     map[string]*float64 `json:"cp_j_mol_k"`
+		} `json:"species"`
+		Reactions []struct {
+			Balanced *bool               `json:"balanced"`
+			DH       *float64            `json:"dh298_kj_mol"`
+			Keq      map[string]*float64 `json:"keq"`
+		} `json:"reactions"`
+	}
+	require.NoError(t, json.Unmarshal([]byte(stdout), &s), stdout)
+	byName := map[string]int{}
+	for i, sp := range s.Species {
+		byName[sp.Name] = i
+	}
+	ho2 := s.Species[byName["HO2"]]
+	assert.Equal(t, "estimate", ho2.Source)
+	// HO2: 12.0 kJ/mol (NASA TM-4513 library value, ±3); never the zeros
+	// of a half-read block.
+	require.NotNil(t, ho2.Hf)
+	assert.InDelta(t, 12, *ho2.Hf, 3)
+	lump := s.Species[byName["lump"]]
+	assert.Equal(t, "file", lump.Source)
+	assert.Nil(t, lump.Cp["300"], "300 K is below the table")
+	assert.Nil(t, lump.Cp["800"], "800 K is above the table")
+	require.NotNil(t, lump.Cp["500"])
+	assert.InDelta(t, 13.1*4.184, *lump.Cp["500"], 1e-9)
+	require.Len(t, s.Reactions, 2)
+	assert.NotNil(t, s.Reactions[0].DH)
+	require.NotNil(t, s.Reactions[1].Balanced)
+	assert.False(t, *s.Reactions[1].Balanced)
+	assert.Nil(t, s.Reactions[1].DH)
+	assert.Nil(t, s.Reactions[1].Keq["1000"])
+
+	_, text, _ := runKiln(t, "summary", path)
+	assert.NotContains(t, text, "5e+105")
+	assert.Contains(t, text, "cm³/(mol·s)", "rates carry their units")
+}
+
+// TestOutputConventions (case 14): JSON numbers carry no binary noise and
+// temperature keys come in numeric order; text tables have no trailing
+// blanks and stay under 120 columns.
+func TestOutputConventions(t *testing.T) {
+	for _, args := range [][]string{
+		{"estimate", "--json", "CCO", "C1CCCCC1CCO"},
+		{"summary", "--json", "../../examples/furnace.kiln"},
+	} {
+		code, stdout, stderr := runKiln(t, args...)
+		require.Equal(t, exitOK, code, stderr)
+		assert.NotRegexp(t, `\d\.\d*(0000000|9999999)\d*`, stdout, "float noise in %v", args)
+		assert.Regexp(t, `(?s)"300": [^,]+,\s*"400": [^,]+,\s*"500": [^,]+,\s*"600": [^,]+,\s*"800": [^,]+,\s*"1000": [^,]+,\s*"1500"`, stdout, "Cp keys in order, %v", args)
+	}
+	for _, args := range [][]string{
+		{"summary", "../../examples/furnace.kiln"},
+		{"summary", "--units", "kJ/mol", "../../examples/furnace.kiln"},
+		{"estimate", "CCO", "CC(C)(C)c1ccccc1O", "C=CC(=O)OCC"},
+		{"estimate", "--sources", "CCO"},
+		{"check", "../../examples/furnace.kiln"},
+		{"help"},
+	} {
+		_, stdout, _ := runKiln(t, args...)
+		for i, line := range strings.Split(stdout, "\n") {
+			assert.False(t, strings.HasSuffix(line, " ") || strings.HasSuffix(line, "\t"), "%v line %d has trailing blanks: %q", args, i+1, line)
+			if args[0] != "check" {
+				assert.Less(t, len([]rune(line)), 120, "%v line %d: %q", args, i+1, line)
+			}
+		}
+	}
+}
+
+// TestFillRangesAndSkips: explicit --tmid/--thigh apply to every inserted
+// block, reference-library species included (case 3); species that get no
+// block are listed with the reason and make the exit code 1 (case 9).
+func TestFillRangesAndSkips(t *testing.T) {
+	path := writeTemp(t, "f.kiln", `species O2 O=O
+  multiplicity 3
+species OH [OH]
+species ethanol CCO
+species amine CCN
+species lump
+  composition C2
+`)
+	code, _, stderr := runKiln(t, "fill", "--tmid", "1200", "--thigh", "3000", path)
+	assert.Equal(t, exitProblems, code, stderr)
+	assert.Regexp(t, `f.kiln:5:9: skipped amine: cannot estimate: .*C-\(N\)\(C\)\(H\)2`, stderr)
+	assert.Regexp(t, `f.kiln:6:9: skipped lump: no structure`, stderr)
+	assert.Contains(t, stderr, "inserted 3 thermo block(s), skipped 2 species")
+	out, err := os.ReadFile(path)
+	require.NoError(t, err)
+	assert.Equal(t, 3, strings.Count(string(out), "nasa7 "))
+	for _, line := range strings.Split(string(out), "\n") {
+		if f := strings.Fields(line); len(f) == 4 && f[0] == "nasa7" {
+			assert.Equal(t, []string{"1200", "3000"}, f[2:], line)
+		}
+	}
+	// What fill wrote, check accepts (only the two species fill could not
+	// help remain).
+	code, stdout, _ := runKiln(t, "check", "--min-severity", "warning", path)
+	assert.Equal(t, exitProblems, code)
+	assert.Equal(t, 2, strings.Count(stdout, "\n"), stdout)
+
+	// A range beyond the reference data is refused, not extrapolated.
+	path = writeTemp(t, "g.kiln", "species O2 O=O\n  multiplicity 3\n")
+	code, _, stderr = runKiln(t, "fill", "--thigh", "5000", path)
+	assert.Equal(t, exitProblems, code)
+	assert.Contains(t, stderr, "end at 3500 K, below the requested THIGH 5000 K")
+
+	// Nothing to do: exit 0.
+	code, _, stderr = runKiln(t, "fill", path)
+	assert.Equal(t, exitOK, code, stderr)
+	code, _, stderr = runKiln(t, "fill", path)
+	assert.Equal(t, exitOK, code, stderr)
+	assert.Contains(t, stderr, "every species already has thermo")
+}
+
+// TestHelpEverywhere (case 14): --help and -h work on every command.
+func TestHelpEverywhere(t *testing.T) {
+	for _, cmd := range []string{"check", "estimate", "summary", "fill", "plot", "serve"} {
+		for _, h := range []string{"--help", "-h"} {
+			code, stdout, stderr := runKiln(t, cmd, h)
+			assert.Equal(t, exitOK, code, "%s %s: %s", cmd, h, stderr)
+			assert.Contains(t, stdout, "kiln "+cmd, "%s %s", cmd, h)
+		}
+	}
+	code, stdout, _ := runKiln(t, "check", "x.kiln", "--help")
+	assert.Equal(t, exitOK, code)
+	assert.NotContains(t, stdout, "kiln fill")
+}

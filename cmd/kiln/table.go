@@ -42,3 +42,21 @@ func shorten(s string, n int) string {
 	r := []rune(s)
 	return string(r[:n-1]) + "…"
 }
+
+// writeWrapped prints text after indent, broken at blanks so that lines stay
+// under maxTableWidth; continuation lines are indented two more blanks.
+func writeWrapped(w io.Writer, indent, text string) {
+	line := indent
+	for i, word := range strings.Fields(text) {
+		if i > 0 && utf8.RuneCountInString(line)+1+utf8.RuneCountInString(word) > maxTableWidth {
+			io.WriteString(w, line+"\n")
+			line = indent + "  " + word
+			continue
+		}
+		if i > 0 {
+			line += " "
+		}
+		line += word
+	}
+	io.WriteString(w, line+"\n")
+}
