@@ -367,6 +367,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		return
 	}
 	g := sp.Given
+	before := len(a.res.Diagnostics)
 	if g.Poly != nil {
 		cpMax := 0.0
 		if sp.Mol != nil || len(sp.Composition) > 0 {
@@ -393,6 +394,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 	if g.Table != nil {
 		a.tableChecks(path, sp)
 	}
+	defects := len(a.res.Diagnostics) > before
 	if sp.Estimate == nil {
 		return
 	}
@@ -419,6 +421,78 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		a.report(path, speciesfile.Diagnostic{Span: sSpan, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
 			Message: fmt.Sprintf("%s: S°298 given %s vs estimated %s (difference %s, threshold %s)",
 				sp.Name, a.entropy(s), a.entropy(sp.Estimate.S298), a.entropy(ds), a.entropy(a.set.MismatchS298))})
+	}
+	if !defects {
+		// A block with a defect of its own (reported above) is not also
+		// compared point by point: the defect is the root cause.
+		a.compareOverRange(path, sp, hfSpan)
+	}
+}
+
+// compareOverRange compares the given block with the estimate (or library
+// value) over the temperatures both cover, and reports the worst point:
+//
+//   - Cp(T), threshold Settings.MismatchCp;
+//   - H(T) − H(298.15 K), threshold Settings.MismatchHf298 (reported only
+//     when Cp is within its threshold: a Cp difference is the root cause).
+//
+// The estimate covers its group values' temperatures (300–1500 K; beyond
+// them it is an extrapolation, not data), a library species its polynomial's
+// range. Temperatures: the estimate's points for group values, every 50 K
+// for a library polynomial.
+func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.Span) {
+	g, e := sp.Given, sp.Estimate
+	lo, hi := g.Range()
+	var temps []float64
+	ref := e.curve()
+	what := "estimated"
+	if e.Library != "" {
+		what = "reference"
+		from, to := math.Max(lo, e.libPoly.TLow), math.Min(hi, e.libPoly.THigh)
+		for t := math.Ceil(from/50) * 50; t <= to; t += 50 {
+			temps = append(temps, t)
+		}
+	} else {
+		for _, t := range benson.StdTemps {
+			if t >= lo && t <= hi {
+				temps = append(temps, t)
+			}
+		}
+	}
+	givenH := func(T float64) (float64, bool) {
+		switch {
+		case g.Poly != nil:
+			return g.Poly.H(T) - g.Poly.H(T298), true
+		case g.model != nil:
+			return g.model.H(T) - g.model.H(T298), true
+		}
+		return 0, false
+	}
+	var worstCp, worstCpT, cpGiven, cpRef float64
+	var worstH, worstHT, hGiven, hRef float64
+	for _, T := range temps {
+		if c, ok := g.CpAt(T); ok {
+			if d := c - ref.Cp(T); math.Abs(d) > math.Abs(worstCp) {
+				worstCp, worstCpT, cpGiven, cpRef = d, T, c, ref.Cp(T)
+			}
+		}
+		if h, ok := givenH(T); ok && T > T298 {
+			r := ref.H(T) - ref.H(T298)
+			if d := h - r; math.Abs(d) > math.Abs(worstH) {
+				worstH, worstHT, hGiven, hRef = d, T, h, r
+			}
+		}
+	}
+	if math.Abs(worstCp) > a.set.MismatchCp {
+		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+			Message: fmt.Sprintf("%s: Cp at %g K given %s vs %s %s (difference %s, threshold %s)",
+				sp.Name, worstCpT, a.entropy(cpGiven), what, a.entropy(cpRef), a.entropy(worstCp), a.entropy(a.set.MismatchCp))})
+		return
+	}
+	if math.Abs(worstH) > a.set.MismatchHf298 {
+		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+			Message: fmt.Sprintf("%s: H(%g K) − H(298 K) given %s vs %s %s (difference %s, threshold %s)",
+				sp.Name, worstHT, a.energy(hGiven), what, a.energy(hRef), a.energy(worstH), a.energy(a.set.MismatchHf298))})
 	}
 }
 

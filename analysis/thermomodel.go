@@ -171,3 +171,19 @@ func (e *Estimate) Thermo() kinetics.Thermo {
 	}
 	return e.model
 }
+
+// thermoCurve is a thermo model with heat capacity: Cp (J/(mol K)), H
+// (J/mol), S (J/(mol K)) as functions of T (K).
+type thermoCurve interface {
+	Cp(T float64) float64
+	H(T float64) float64
+	S(T float64) float64
+}
+
+// curve returns the same model as Thermo, with Cp.
+func (e *Estimate) curve() thermoCurve {
+	if e.Library != "" {
+		return &e.libPoly
+	}
+	return e.model
+}

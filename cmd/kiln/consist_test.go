@@ -199,3 +199,22 @@ func TestHelpEverywhere(t *testing.T) {
 	assert.Equal(t, exitOK, code)
 	assert.NotContains(t, stdout, "kiln fill")
 }
+
+// TestMismatchCpFlag (case 5): the Cp comparison has its own threshold;
+// raising it leaves the H(T)−H(298 K) comparison, raising both silences it.
+func TestMismatchCpFlag(t *testing.T) {
+	file := "../../testdata/check/cp-mismatch.kiln"
+	_, out, _ := runKiln(t, "check", "--min-severity", "warning", file)
+	assert.Contains(t, out, "CH4: Cp at 3000 K")
+	_, out, _ = runKiln(t, "check", "--min-severity", "warning", "--mismatch-cp", "4", file)
+	assert.NotContains(t, out, "Cp at")
+	assert.Contains(t, out, "CH4: H(3000 K) − H(298 K)")
+	_, out, _ = runKiln(t, "check", "--min-severity", "warning", "--mismatch-cp", "4", "--mismatch-hf", "4", file)
+	assert.Empty(t, out)
+	code, _, stderr := runKiln(t, "check", "--mismatch-cp", "0", file)
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "--mismatch-cp: must be a positive number")
+	// The shipped example's CH4 block now agrees with the reference.
+	_, out, _ = runKiln(t, "check", "--min-severity", "warning", "../../examples/furnace.kiln")
+	assert.Empty(t, out)
+}
