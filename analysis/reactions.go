@@ -78,7 +78,69 @@ func (a *analysis) computeReactions() error {
 		a.res.Diagnostics = append(a.res.Diagnostics, r.diags...)
 		r.diags = nil
 	}
+	a.rangeChecks()
 	return nil
+}
+
+// Temperatures (K) at which the reaction checks evaluate species thermo:
+// ΔH°r, ΔS°r, ΔG°r at 298.15 K and Kp up to 1500 K for every reaction with
+// thermochemistry; Kc up to 2500 K for a reverse rate derived from it (the
+// collision check's range).
+const (
+	tmaxKp      = 1500
+	tmaxReverse = 2500
+	rangeSlack  = 2 // K: 298.15 K counts as inside a block starting at 300 K
+)
+
+// rangeChecks reports, once per species, a thermo block of the analysed file
+// that the reaction checks evaluate outside its temperature range (an
+// extrapolation kiln would otherwise do silently): thermo-out-of-range on
+// the block header, naming the first reaction that needs it.
+func (a *analysis) rangeChecks() {
+	type need struct {
+		tmax float64
+		line int
+	}
+	needs := map[*Species]need{}
+	for _, r := range a.res.Reactions {
+		if r.reactants == nil {
+			continue // no thermochemistry computed
+		}
+		tmax := float64(tmaxKp)
+		if r.model != nil && r.model.kc != nil && r.model.reverse == nil {
+			tmax = tmaxReverse
+		}
+		for _, ts := range [][]speciesfile.Term{r.Decl.Reactants, r.Decl.Products} {
+			for _, t := range ts {
+				sp := a.res.ByName[t.Name.Text]
+				if sp == nil || sp.Source != SourceFile {
+					continue
+				}
+				if n, ok := needs[sp]; !ok || tmax > n.tmax {
+					needs[sp] = need{tmax, r.Line}
+				}
+			}
+		}
+	}
+	for _, sp := range a.res.Species {
+		n, ok := needs[sp]
+		if !ok || sp.Loc.File != a.res.Path {
+			continue
+		}
+		lo, hi := sp.Given.Range()
+		if lo <= T298+rangeSlack && hi >= n.tmax-rangeSlack {
+			continue
+		}
+		span := sp.Given.Span
+		if d := sp.Decl.NASA7; d != nil {
+			span = d.Header.Span
+		} else if d := sp.Decl.Table; d != nil {
+			span = d.Header.Span
+		}
+		a.report(sp.Loc.File, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+			Message: fmt.Sprintf("%s: the block covers %g–%g K, but the reaction on line %d needs it from 298 K to %g K; values outside the block are extrapolated",
+				sp.Name, lo, hi, n.line, n.tmax)})
+	}
 }
 
 func (a *analysis) recordUses(path string, d *speciesfile.Reaction) {

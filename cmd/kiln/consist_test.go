@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"math"
 	"os"
 	"path/filepath"
 	"strings"
@@ -9,6 +10,9 @@ import (
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/engine/nasa"
+	"kiln.dev/kiln/speciesfile"
 )
 
 // writeTemp writes a kiln file into a fresh directory and returns its path.
@@ -217,4 +221,26 @@ func TestMismatchCpFlag(t *testing.T) {
 	// The shipped example's CH4 block now agrees with the reference.
 	_, out, _ = runKiln(t, "check", "--min-severity", "warning", "../../examples/furnace.kiln")
 	assert.Empty(t, out)
+}
+
+// TestPlotBlockRange (case 6): a file block is drawn over its own range
+// only, and its legend says which.
+func TestPlotBlockRange(t *testing.T) {
+	p := nasa.NASA7{TLow: 300, TMid: 1000, THigh: 3000, Low: [7]float64{4}, High: [7]float64{4}}
+	s := blockSeries(p)
+	assert.Contains(t, s.Name, "300–3000 K")
+	cp, _, _ := s.Eval(2000)
+	assert.InDelta(t, 4*nasa.R, cp, 1e-9)
+	cp, h, st := s.Eval(5000)
+	assert.True(t, math.IsNaN(cp) && math.IsNaN(h) && math.IsNaN(st))
+}
+
+// TestCodesDocumented: every diagnostic code is in FORMAT.md's table (one
+// list, extended, never renamed).
+func TestCodesDocumented(t *testing.T) {
+	doc, err := os.ReadFile("../../FORMAT.md")
+	require.NoError(t, err)
+	for _, c := range speciesfile.Codes {
+		assert.Contains(t, string(doc), "| `"+c+"` |", c)
+	}
 }
