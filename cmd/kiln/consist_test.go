@@ -244,3 +244,53 @@ func TestCodesDocumented(t *testing.T) {
 		assert.Contains(t, string(doc), "| `"+c+"` |", c)
 	}
 }
+
+// TestSummaryPressure (case 15): summary shows k_f of a falloff reaction at
+// the chosen pressure; the unit of --pressure is attached or bar.
+func TestSummaryPressure(t *testing.T) {
+	kf := func(args ...string) (float64, float64) {
+		code, stdout, stderr := runKiln(t, append([]string{"summary", "--json", "../../examples/furnace.kiln"}, args...)...)
+		require.Equal(t, exitOK, code, stderr)
+		var s struct {
+			Reactions []struct {
+				Equation string              `json:"equation"`
+				Kf       map[string]*float64 `json:"forward_rate"`
+				P        float64             `json:"rate_pressure_bar"`
+			} `json:"reactions"`
+		}
+		require.NoError(t, json.Unmarshal([]byte(stdout), &s))
+		for _, r := range s.Reactions {
+			if r.Equation == "CH3 + CH3 (+M) <=> C2H6 (+M)" {
+				require.NotNil(t, r.Kf["1000"])
+				return *r.Kf["1000"], r.P
+			}
+		}
+		t.Fatal("falloff reaction not found")
+		return 0, 0
+	}
+	k1, p1 := kf()
+	assert.InDelta(t, 1.01325, p1, 1e-9)
+	k01, p01 := kf("--pressure", "0.1")
+	assert.InDelta(t, 0.1, p01, 1e-12)
+	k100, _ := kf("--pressure", "10000kPa")
+	assert.Less(t, k01, k1)
+	assert.Less(t, k1, k100)
+	// k∞ of the example's line is 1.8e16 × 1000^-0.97 × exp(−0.62 kcal/RT).
+	assert.Less(t, k100, 1.8e16*math.Pow(1000, -0.97))
+	_, text, _ := runKiln(t, "summary", "--pressure", "10bar", "../../examples/furnace.kiln")
+	assert.Contains(t, text, "Rates at 1000 K and 10 bar")
+	code, _, stderr := runKiln(t, "summary", "--pressure", "10psi", "../../examples/furnace.kiln")
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "unknown unit")
+}
+
+// TestEstimateUnits (case 7): --units kJ/mol puts kJ/mol first everywhere
+// in the text output.
+func TestEstimateUnits(t *testing.T) {
+	_, out, _ := runKiln(t, "estimate", "--units", "kJ/mol", "CCO")
+	assert.Regexp(t, `ΔHf°298 = -234\.\d kJ/mol \(-55\.\d\d kcal/mol\)`, out)
+	assert.Contains(t, out, "ΔHf°298 kJ/mol")
+	assert.Contains(t, out, "Cp in J/(mol·K)")
+	_, out, _ = runKiln(t, "estimate", "CCO")
+	assert.Regexp(t, `ΔHf°298 = -55\.\d\d kcal/mol \(-234\.\d kJ/mol\)`, out)
+}
