@@ -75,9 +75,12 @@ func (in SettingsInput) Apply(base Settings) (Settings, error) {
 		}
 		*f.dst = *f.v * f.scale
 	}
-	if in.TMid != nil || in.THigh != nil {
-		s.ExplicitFitRange = true
-	}
+	// A range other than the defaults applies to every inserted block;
+	// the defaults leave reference-library species at their own ranges.
+	// (Editors send tMid and tHigh whether or not the user changed them, so
+	// "given" cannot mean "chosen"; the rule is the same for flags.)
+	def := DefaultSettings()
+	s.ExplicitFitRange = s.TMid != def.TMid || s.THigh != def.THigh
 	if !(s.TMid > 300 && s.TMid < s.THigh && s.THigh <= MaxTHigh) {
 		key := "tMid"
 		if in.THigh != nil {
