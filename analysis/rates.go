@@ -57,40 +57,67 @@ func (m *rateModel) reverseRate(T, P float64) (float64, bool) {
 	return kinetics.ReverseRate(m.forward(T, P), kc), true
 }
 
+// forward returns k_f(T) of d's rate lines where one pressure-independent
+// number per temperature is wanted (kiln compare): the high-pressure limit
+// of a falloff, a pressure table at 1 atm. Built from the same rate model.
+func forward(d *speciesfile.Reaction) (func(T float64) float64, bool) {
+	m, ok := baseRateModel(d)
+	if !ok {
+		return nil, false
+	}
+	if m.falloff != nil {
+		return m.falloff.High.Rate, true
+	}
+	return func(T float64) float64 { return m.forward(T, 101325) }, true
+}
+
+// baseRateModel reads the forward rate lines of d (main line, falloff,
+// pressure table); ok is false without usable rate parameters.
+func baseRateModel(d *speciesfile.Reaction) (*rateModel, bool) {
+	m := &rateModel{bathEff: 1}
+	for _, p := range d.Pressures {
+		if arr, ok := arrhenius(&p.Rate); ok {
+			m.table = append(m.table, kinetics.PressureRate{P: p.P.SI, Rate: arr})
+		}
+	}
+	if len(m.table) > 0 {
+		return m, true
+	}
+	arr, ok := arrhenius(d.Rate)
+	if !ok {
+		return nil, false
+	}
+	if low, ok := arrhenius(d.LowPressure); ok && d.Falloff != nil {
+		f := &kinetics.Falloff{High: arr, Low: low}
+		if tr := d.Troe; tr != nil && tr.Alpha != nil && tr.T3 != nil && tr.T1 != nil {
+			f.Troe = &kinetics.Troe{Alpha: tr.Alpha.SI, T3: tr.T3.SI, T1: tr.T1.SI}
+			if tr.T2 != nil {
+				f.Troe.T2, f.Troe.HasT2 = tr.T2.SI, true
+			}
+		}
+		m.falloff = f
+	} else {
+		m.plain = &arr
+	}
+	return m, true
+}
+
 // rateModelOf builds the rate model of a resolved reaction; ok is false
 // without usable rate parameters.
 func (a *analysis) rateModelOf(d *speciesfile.Reaction, r *Reaction) (*rateModel, bool) {
-	m := &rateModel{bathEff: 1}
+	m, ok := baseRateModel(d)
+	if !ok {
+		return nil, false
+	}
+	if m.falloff != nil {
+		m.bathEff = a.bathEfficiency(d)
+	}
 	third := 0
 	if d.ThirdBody {
 		third = 1
 	}
 	m.fwdOrder = molecularity(d.Reactants) + third
 	m.revOrder = molecularity(d.Products) + third
-	for _, p := range d.Pressures {
-		if arr, ok := arrhenius(&p.Rate); ok {
-			m.table = append(m.table, kinetics.PressureRate{P: p.P.SI, Rate: arr})
-		}
-	}
-	if len(m.table) == 0 {
-		arr, ok := arrhenius(d.Rate)
-		if !ok {
-			return nil, false
-		}
-		if low, ok := arrhenius(d.LowPressure); ok && d.Falloff != nil {
-			f := &kinetics.Falloff{High: arr, Low: low}
-			if tr := d.Troe; tr != nil && tr.Alpha != nil && tr.T3 != nil && tr.T1 != nil {
-				f.Troe = &kinetics.Troe{Alpha: tr.Alpha.SI, T3: tr.T3.SI, T1: tr.T1.SI}
-				if tr.T2 != nil {
-					f.Troe.T2, f.Troe.HasT2 = tr.T2.SI, true
-				}
-			}
-			m.falloff = f
-			m.bathEff = a.bathEfficiency(d)
-		} else {
-			m.plain = &arr
-		}
-	}
 	if d.Reversible {
 		if arr, ok := arrhenius(d.Reverse); ok {
 			m.reverse = &arr

@@ -124,7 +124,7 @@ func parseNumber(s string) (n int, v float64, err error) {
 
 // ParsePressure reads a pressure as the format writes one, a number with an
 // attached unit (`0.1atm`, `100kPa`, `2bar`), or a bare number taken in
-// defaultUnit, and returns it in Pa. Tools use it for pressures given on
+// defaultUnit ("" requires a unit), and returns it in Pa. Tools use it for pressures given on
 // their command line, so that the file and the flags read pressures alike.
 func ParsePressure(s, defaultUnit string) (float64, error) {
 	n, v, err := parseNumber(s)
@@ -137,6 +137,9 @@ func ParsePressure(s, defaultUnit string) (float64, error) {
 	u := s[n:]
 	if u == "" {
 		u = defaultUnit
+	}
+	if u == "" {
+		return 0, fmt.Errorf("pressure %q needs a unit: %s", s, unitLists[kPressure])
 	}
 	f, ok := pressureUnit(u)
 	if !ok {

@@ -1528,6 +1528,11 @@ func entropyUnit(u string) (float64, bool) {
 	return 0, false
 }
 
+// PressureUnit returns Pa per unit u of pressure (atm, bar, Pa, kPa, Torr:
+// the units FORMAT.md §2 accepts), so that command-line flags read
+// pressures exactly as files do.
+func PressureUnit(u string) (float64, bool) { return pressureUnit(u) }
+
 // pressureUnit returns Pa per unit u of pressure.
 func pressureUnit(u string) (float64, bool) {
 	switch u {

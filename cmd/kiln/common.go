@@ -100,7 +100,7 @@ func settingsFrom(e env, flags map[string]string) (analysis.Settings, error) {
 		}
 	}
 	if v, ok := flags["pressure"]; ok {
-		pa, err := speciesfile.ParsePressure(v, "bar")
+		pa, err := speciesfile.ParsePressure(v, "") // a unit is required, as in the file and kiln equilibrium
 		if err != nil {
 			return s, usagef("--pressure: %v", err)
 		}

@@ -7,6 +7,8 @@
 //	kiln summary FILE [--json] [--pressure P]
 //	kiln fill FILE [--dry-run]
 //	kiln plot SPECIES --file FILE -o OUT.svg
+//	kiln compare A.kiln B.kiln [--json] [--all] [--rate-factor F]
+//	kiln equilibrium FILE --mix "NAME:AMOUNT, …" [--temperature K] [--pressure P] [--adiabatic] [--volume] [--json]
 //	kiln serve [--log FILE]
 //	kiln version | help
 package main
@@ -70,6 +72,10 @@ func run(e env, args []string) int {
 		code, err = runFill(e, rest)
 	case "plot":
 		code, err = runPlot(e, rest)
+	case "compare":
+		code, err = runCompare(e, rest)
+	case "equilibrium":
+		code, err = runEquilibrium(e, rest)
 	case "serve":
 		code, err = runServe(e, rest)
 	case "version", "--version", "-v":
@@ -114,8 +120,8 @@ Usage:
   kiln summary FILE [--json] [--pressure P]
         Tabulate species thermo, reaction thermochemistry (ΔH°r, ΔG°r, Kp) and
         k_f, k_r at 1000 K with their units. --pressure sets where falloff and
-        pressure-table rates are taken (a unit attached: 10bar, 0.1atm, 50kPa;
-        a bare number is bar; default 1atm). Values that need a reaction to
+        pressure-table rates are taken (with a unit: 10bar, 0.1atm, 50kPa;
+        default 1atm). Values that need a reaction to
         balance are left out when it does not. Exit 1 when the file has errors.
   kiln fill FILE [--dry-run] [--tmid K] [--thigh K]
         Insert an estimated nasa7 block under every species that lacks thermo.
@@ -126,6 +132,25 @@ Usage:
   kiln plot SPECIES --file FILE -o OUT.svg
         Draw Cp/R, H/RT and S/R against T: estimate, fit and the file's own block
         (drawn only over the block's temperature range).
+  kiln compare A.kiln B.kiln [--json] [--all] [--rate-factor F]
+        Match species by structure and multiplicity (not by name) and report
+        species only in A or B, one structure under two names (with a rename
+        suggestion), one name for two structures, thermo differences B − A
+        (ΔHf°298, S°298, Cp and G at 300/1000/2000 K; flagged beyond
+        --mismatch-hf / --mismatch-s), and reactions matched by their species
+        with k_B/k_A at 500/1000/2000 K (flagged outside 1/F–F, default F = 2).
+        Exit 0 when nothing is flagged, 1 when a thermo or rate difference,
+        a second name or a name clash is found, 2 on usage or I/O problems.
+  kiln equilibrium FILE --mix "NAME:AMOUNT, ..." [--temperature K] [--pressure P]
+                   [--adiabatic] [--volume] [--json]
+        Equilibrium composition over the file's species by Gibbs-energy
+        minimisation, from the file's own thermo. --temperature (default
+        298.15 K) and --pressure (default 1atm; units atm, bar, Pa, kPa, Torr)
+        give the state of the mix; --adiabatic finds the flame temperature
+        (constant enthalpy, or constant internal energy with --volume);
+        --volume holds the mix's volume instead of the pressure.
+        Exit 0 when computed, 1 when the file cannot give an equilibrium
+        (a mix species without thermo, no convergence), 2 on usage or I/O.
   kiln serve [--log FILE]
         Run the language server on stdin/stdout.
   kiln version
