@@ -222,3 +222,14 @@ func TestFalloffCollision(t *testing.T) {
 }
 
 func kineticsConc(T, P float64) float64 { return kinetics.Concentration(T, P) }
+
+// TestCompareLines (case 1): compare reports a reaction on its keyword's
+// line, like every other command, whatever comments precede it.
+func TestCompareLines(t *testing.T) {
+	a := "species H [H]\nspecies H2 [H][H]\n\n# a comment\n\nreaction H + H <=> H2  A=1e13 n=0 Ea=0\n"
+	b := "species H [H]\nspecies H2 [H][H]\nreaction H + H <=> H2  A=2e13 n=0 Ea=0\n"
+	c := compareTexts(t, map[string]string{"/w/a.kiln": a, "/w/b.kiln": b}, "/w/a.kiln", "/w/b.kiln")
+	require.Len(t, c.Reactions, 1)
+	assert.Equal(t, 6, c.Reactions[0].A.Line)
+	assert.Equal(t, 3, c.Reactions[0].B.Line)
+}

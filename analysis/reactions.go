@@ -206,9 +206,7 @@ func reactionKey(d *speciesfile.Reaction) string {
 // reaction computes balance, thermochemistry and rate checks of one reaction.
 func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
 	f := a.res.Files[path]
-	// The line is the keyword's, not the start of the statement's leading
-	// comment and blank lines.
-	r := &Reaction{Decl: d, File: path, Line: f.Lines.Position(d.Keyword().Span.Start).Line + 1, Equation: equationText(f, d), Resolved: true, Kp: map[string]*float64{}}
+	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equationText(f, d), Resolved: true, Kp: map[string]*float64{}}
 	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Equation) {
 		// An equation the reader could not read is not data: the syntax
 		// error is the one diagnostic.
@@ -244,6 +242,13 @@ func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
 		}
 	}
 	return r
+}
+
+// StmtLine returns the 1-based line of a statement as every command shows
+// it: the line of its keyword, not of the comment and blank lines that
+// precede it (they belong to the statement's span).
+func StmtLine(f *speciesfile.File, st speciesfile.Stmt) int {
+	return f.Lines.Position(st.Keyword().Span.Start).Line + 1
 }
 
 // equationText is the equation as written with runs of blanks collapsed.
