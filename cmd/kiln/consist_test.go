@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"math"
 	"os"
+	"regexp"
 	"strings"
 	"testing"
 
@@ -114,8 +115,20 @@ func TestOutputConventions(t *testing.T) {
 	} {
 		code, stdout, stderr := runKiln(t, args...)
 		require.Equal(t, exitOK, code, stderr)
-		assert.NotRegexp(t, `\d\.\d*(0000000|9999999)\d*`, stdout, "float noise in %v", args)
+		assertShortNumbers(t, stdout, args)
 		assert.Regexp(t, `(?s)"300": [^,]+,\s*"400": [^,]+,\s*"500": [^,]+,\s*"600": [^,]+,\s*"800": [^,]+,\s*"1000": [^,]+,\s*"1500"`, stdout, "Cp keys in order, %v", args)
+	}
+	// Every --json output goes through the same writer: no float noise
+	// anywhere, numeric keys in order.
+	for _, args := range [][]string{
+		{"compare", "--json", "--all", "../../examples/furnace.kiln", "../../testdata/check/broken.kiln"},
+		{"equilibrium", "--json", "../../examples/furnace.kiln", "--mix", "CH4:1, O2:2, N2:7.52", "--temperature", "1500"},
+		{"check", "--format", "json", "../../testdata/check/broken.kiln"},
+	} {
+		_, stdout, stderr := runKiln(t, args...)
+		require.NotEmpty(t, stdout, "%v: %s", args, stderr)
+		assertShortNumbers(t, stdout, args)
+		assert.NotRegexp(t, `"1000": [^\n]*\n[^"]*"300"`, stdout, "numeric keys out of order in %v", args)
 	}
 	for _, args := range [][]string{
 		{"summary", "../../examples/furnace.kiln"},
@@ -306,5 +319,27 @@ func TestFlagsDocumented(t *testing.T) {
 	}
 	for _, s := range []string{"kiln.server.logFile", "kiln.trace.server", "go install ./cmd/kiln", "npm registry", "mismatchCp"} {
 		assert.Contains(t, string(readme), s)
+	}
+}
+
+var numberRE = regexp.MustCompile(`-?\d+(\.\d+)?([eE][-+]?\d+)?`)
+
+// assertShortNumbers checks that no number of a JSON text (outside strings,
+// roughly: after a colon or in an array) has more than 12 significant
+// digits.
+func assertShortNumbers(t *testing.T, text string, args []string) {
+	t.Helper()
+	for _, line := range strings.Split(text, "\n") {
+		v := strings.TrimSpace(line)
+		if i := strings.Index(v, "\": "); i >= 0 {
+			v = v[i+3:]
+		}
+		v = strings.TrimSuffix(v, ",")
+		if !numberRE.MatchString(v) || numberRE.FindString(v) != v {
+			continue
+		}
+		mant := strings.TrimLeft(strings.SplitN(strings.ToLower(v), "e", 2)[0], "-")
+		digits := strings.Trim(strings.Replace(mant, ".", "", 1), "0")
+		assert.LessOrEqual(t, len(digits), 12, "%v: %s", args, line)
 	}
 }

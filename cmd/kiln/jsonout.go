@@ -8,6 +8,7 @@ import (
 	"math"
 	"sort"
 	"strconv"
+	"strings"
 )
 
 // JSON output conventions shared by every command: numbers are rounded to
@@ -36,13 +37,17 @@ func jptr(p *float64) *float64 {
 	return ptr(jnum(*p))
 }
 
-// numericMap is a JSON object whose keys are numbers written as strings
-// ("300", "1000"); it marshals its keys in numeric order and its values
-// rounded by jnum (null for nil).
-type numericMap map[string]*float64
+// numericKeys is a JSON object whose keys are numbers written as strings
+// ("300", "1000"): it marshals its keys in numeric order (encoding/json
+// would sort them as text: "1000" before "300").
+type numericKeys[V any] map[string]V
+
+// numericMap is the common case: optional numbers by temperature or
+// pressure (null for nil).
+type numericMap = numericKeys[*float64]
 
 // MarshalJSON implements json.Marshaler.
-func (m numericMap) MarshalJSON() ([]byte, error) {
+func (m numericKeys[V]) MarshalJSON() ([]byte, error) {
 	if m == nil {
 		return []byte("null"), nil
 	}
@@ -70,7 +75,7 @@ func (m numericMap) MarshalJSON() ([]byte, error) {
 		}
 		buf.Write(kb)
 		buf.WriteByte(':')
-		vb, err := json.Marshal(jptr(m[k]))
+		vb, err := json.Marshal(m[k])
 		if err != nil {
 			return nil, err
 		}
@@ -80,12 +85,63 @@ func (m numericMap) MarshalJSON() ([]byte, error) {
 	return buf.Bytes(), nil
 }
 
-// writeJSON writes v indented, as every --json output is.
+// writeJSON writes v indented, as every --json output is, with every number
+// rounded to 12 significant digits (see jnum): the one place that decides
+// how kiln's JSON numbers look.
 func writeJSON(w io.Writer, v any) error {
-	enc := json.NewEncoder(w)
+	var buf bytes.Buffer
+	enc := json.NewEncoder(&buf)
 	enc.SetIndent("", "  ")
 	if err := enc.Encode(v); err != nil {
 		return fmt.Errorf("writing output: %w", err)
 	}
+	if _, err := w.Write(roundNumbers(buf.Bytes())); err != nil {
+		return fmt.Errorf("writing output: %w", err)
+	}
 	return nil
+}
+
+// roundNumbers rewrites every number literal of a JSON text (outside
+// strings) that has more than 12 significant digits, as jnum rounds it;
+// other numbers keep their spelling.
+func roundNumbers(in []byte) []byte {
+	out := make([]byte, 0, len(in))
+	inString, escaped := false, false
+	for i := 0; i < len(in); i++ {
+		c := in[i]
+		if inString {
+			out = append(out, c)
+			switch {
+			case escaped:
+				escaped = false
+			case c == '\\':
+				escaped = true
+			case c == '"':
+				inString = false
+			}
+			continue
+		}
+		if c == '"' {
+			inString = true
+			out = append(out, c)
+			continue
+		}
+		if c == '-' || (c >= '0' && c <= '9') {
+			j := i + 1
+			for j < len(in) && strings.IndexByte("0123456789.eE+-", in[j]) >= 0 {
+				j++
+			}
+			lit := string(in[i:j])
+			if v, err := strconv.ParseFloat(lit, 64); err == nil {
+				if r := jnum(v); r != v {
+					lit = strconv.FormatFloat(r, 'g', -1, 64)
+				}
+			}
+			out = append(out, lit...)
+			i = j - 1
+			continue
+		}
+		out = append(out, c)
+	}
+	return out
 }
