@@ -20,13 +20,12 @@ const (
 	maxFileSize     = 64 << 20
 )
 
-// CodeBadInclude is reported on an include that cannot be followed (missing
-// file, outside the workspace, cycle, too deep). It extends the list of codes
-// in FORMAT.md.
-const CodeBadInclude = "bad-include"
-
-// CodeDuplicateGroup is reported when a user-defined group is defined twice.
-const CodeDuplicateGroup = "duplicate-group"
+// CodeBadInclude and CodeDuplicateGroup are kept for callers of this
+// package; the one list of codes is in speciesfile (speciesfile.Codes).
+const (
+	CodeBadInclude     = speciesfile.CodeBadInclude
+	CodeDuplicateGroup = speciesfile.CodeDuplicateGroup
+)
 
 // analysis is the state of one Analyze call.
 type analysis struct {

@@ -349,7 +349,7 @@ func (s *compareSide) summary() CompareSide {
 // rref describes a reaction of this side.
 func (s *compareSide) rref(r sideReaction) ReactionRef {
 	f := s.a.res.Files[r.file]
-	return ReactionRef{Equation: equationText(f, r.d), File: r.file, Line: f.Lines.Position(r.d.Span().Start).Line + 1}
+	return ReactionRef{Equation: equationText(f, r.d), File: r.file, Line: StmtLine(f, r.d)}
 }
 
 func (s *compareSide) ref(sp *Species) SpeciesRef {

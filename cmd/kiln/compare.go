@@ -3,7 +3,6 @@ package main
 import (
 	"bytes"
 	"context"
-	"encoding/json"
 	"fmt"
 	"io"
 	"math"
@@ -78,13 +77,13 @@ type compareValue struct {
 // the same structure the same way, same_estimate is true and the values are
 // omitted (they are identical).
 type compareThermo struct {
-	SourceA      string                  `json:"source_a"`
-	SourceB      string                  `json:"source_b"`
-	SameEstimate bool                    `json:"same_estimate"`
-	Hf298        *compareValue           `json:"hf298_kj_mol,omitempty"`
-	S298         *compareValue           `json:"s298_j_mol_k,omitempty"`
-	Cp           map[string]compareValue `json:"cp_j_mol_k,omitempty"`
-	G            map[string]compareValue `json:"g_kj_mol,omitempty"`
+	SourceA      string                    `json:"source_a"`
+	SourceB      string                    `json:"source_b"`
+	SameEstimate bool                      `json:"same_estimate"`
+	Hf298        *compareValue             `json:"hf298_kj_mol,omitempty"`
+	S298         *compareValue             `json:"s298_j_mol_k,omitempty"`
+	Cp           numericKeys[compareValue] `json:"cp_j_mol_k,omitempty"`
+	G            numericKeys[compareValue] `json:"g_kj_mol,omitempty"`
 }
 
 type compareSpecies struct {
@@ -112,14 +111,14 @@ type compareClash struct {
 }
 
 type compareRxn struct {
-	EquationA string              `json:"equation_a"`
-	LineA     int                 `json:"line_a"`
-	EquationB string              `json:"equation_b"`
-	LineB     int                 `json:"line_b"`
-	Reversed  bool                `json:"reversed"`
-	Ratio     map[string]*float64 `json:"rate_ratio"`
-	Flagged   bool                `json:"flagged"`
-	Note      *string             `json:"note"`
+	EquationA string     `json:"equation_a"`
+	LineA     int        `json:"line_a"`
+	EquationB string     `json:"equation_b"`
+	LineB     int        `json:"line_b"`
+	Reversed  bool       `json:"reversed"`
+	Ratio     numericMap `json:"rate_ratio"`
+	Flagged   bool       `json:"flagged"`
+	Note      *string    `json:"note"`
 }
 
 type compareRxnRef struct {
@@ -181,10 +180,8 @@ func runCompare(e env, args []string) (int, error) {
 		code = exitProblems
 	}
 	if flags["json"] == "true" {
-		enc := json.NewEncoder(e.stdout)
-		enc.SetIndent("", "  ")
-		if err := enc.Encode(out); err != nil {
-			return 0, fmt.Errorf("writing output: %w", err)
+		if err := writeJSON(e.stdout, out); err != nil {
+			return 0, err
 		}
 		return code, nil
 	}
@@ -230,7 +227,7 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 			SMILESB: optString(p.B.SMILES), MatchedBy: p.By, Flags: []string{}}
 		if t := p.Thermo; t != nil {
 			th := &compareThermo{SourceA: string(t.SourceA), SourceB: string(t.SourceB), Hf298: pval(t.Hf298A, t.Hf298B, 1000),
-				S298: pval(t.S298A, t.S298B, 1), Cp: map[string]compareValue{}, G: map[string]compareValue{}}
+				S298: pval(t.S298A, t.S298B, 1), Cp: numericKeys[compareValue]{}, G: numericKeys[compareValue]{}}
 			for k, tt := range analysis.CompareThermoTemps {
 				th.Cp[tt.Key] = val(t.CpA[k], t.CpB[k], 1)
 				th.G[tt.Key] = val(t.GA[k], t.GB[k], 1000)
@@ -263,7 +260,7 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 	}
 	for _, p := range c.Reactions {
 		row := compareRxn{EquationA: p.A.Equation, LineA: p.A.Line, EquationB: p.B.Equation, LineB: p.B.Line, Reversed: p.Reversed,
-			Ratio: map[string]*float64{}, Flagged: p.Flagged(c.RateFactor), Note: optString(p.Note)}
+			Ratio: numericMap{}, Flagged: p.Flagged(c.RateFactor), Note: optString(p.Note)}
 		for k, tt := range analysis.CompareRateTemps {
 			row.Ratio[tt.Key] = p.Ratio[k]
 		}

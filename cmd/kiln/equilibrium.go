@@ -2,7 +2,6 @@ package main
 
 import (
 	"context"
-	"encoding/json"
 	"errors"
 	"fmt"
 	"io"
@@ -94,10 +93,8 @@ func runEquilibrium(e env, args []string) (int, error) {
 		fmt.Fprintf(e.stderr, "kiln equilibrium: %s has %d error(s) (`kiln check` lists them); broken statements were left out\n", out.File, n)
 	}
 	if flags["json"] == "true" {
-		enc := json.NewEncoder(e.stdout)
-		enc.SetIndent("", "  ")
-		if err := enc.Encode(out); err != nil {
-			return 0, fmt.Errorf("writing output: %w", err)
+		if err := writeJSON(e.stdout, out); err != nil {
+			return 0, err
 		}
 		return exitOK, nil
 	}
