@@ -38,23 +38,10 @@ func TestFillCheckLibrary(t *testing.T) {
 	code, stdout, stderr := runKiln(t, "check", "--format", "json", path)
 	var diags []checkDiag
 	require.NoError(t, json.Unmarshal([]byte(stdout), &diags), stderr)
-	var aboveLimit []string
 	for _, d := range diags {
-		if d.Code == "nonphysical-thermo" && strings.Contains(d.Message, "exceeds the classical limit") {
-			aboveLimit = append(aboveLimit, d.Message)
-			continue
-		}
 		assert.Contains(t, []string{"information", "hint"}, d.Severity, "%+v", d)
 	}
 	assert.Equal(t, exitOK, code)
-	if len(aboveLimit) > 0 {
-		// Tabulated Cp of real gases exceeds the harmonic classical limit
-		// the physicality check uses: electronic states (O, Cl, S, F atoms,
-		// NO, OH, ClO) and anharmonic stretches (HF, HCl, CHF3 at 3500 K).
-		// The check is being taught these contributions in separate work;
-		// until then this one assertion is skipped, not weakened.
-		t.Skipf("%d polynomials taken from published tables exceed the harmonic classical Cp limit of the physicality check (electronic and anharmonic contributions it does not yet allow for); first: %s", len(aboveLimit), aboveLimit[0])
-	}
 }
 
 // TestDenoxExampleClean: the second shipped example (ammonia/NOx, chlorine
