@@ -18,7 +18,9 @@ here=$(cd "$(dirname "$0")" && pwd)
 plugin=$(dirname "$here")
 work=$(mktemp -d)
 trap 'rm -rf "$work"' EXIT
-cp "$here/fixture.kiln" "$here/syntax.kiln" "$work/"
+cp "$here/fixture.kiln" "$here/syntax.kiln" "$here/severity.kiln" "$work/"
+# A fresh LSP log (stdpath cache/state) for the stderr check.
+export XDG_CACHE_HOME="$work/cache" XDG_STATE_HOME="$work/state"
 
 echo "nvim test: $(nvim --version | head -1), server $binary"
 # timeout guards against a hung server; every wait inside the test is <= 20 s.
