@@ -33,7 +33,9 @@
 
 (ert-deftest kiln-eglot-server-registered ()
   (skip-unless (kiln-eglot-test--load))
-  (should (equal (cdr (assoc 'kiln-mode eglot-server-programs)) '("kiln" "serve"))))
+  (should (featurep 'kiln-eglot))
+  (should (equal (cdr (assoc 'kiln-mode eglot-server-programs))
+                 '(kiln-eglot-server "kiln" "serve"))))
 
 (defun kiln-eglot-test--wait (pred seconds)
   "Process events until PRED holds or SECONDS pass; return PRED's value."
@@ -51,12 +53,16 @@
     (skip-unless (and binary (not (string-empty-p binary)) fixture))
     (let* ((dir (make-temp-file "kiln-eglot" t))
            (file (expand-file-name "fixture.kiln" dir))
-           (eglot-server-programs (cons `(kiln-mode . (,binary "serve")) eglot-server-programs))
+           (eglot-server-programs (cons `(kiln-mode . (kiln-eglot-server ,binary "serve"))
+                                        eglot-server-programs))
            (buf nil))
       (unwind-protect
           (progn
             (copy-file fixture file)
             (setq buf (find-file-noselect file))
+            ;; Shown in the (batch) frame's window: hints are asked for the
+            ;; visible part of the buffer.
+            (switch-to-buffer buf)
             (with-current-buffer buf
               (should (eq major-mode 'kiln-mode))
               (apply #'eglot (eglot--guess-contact))
@@ -84,7 +90,29 @@
                                            (eglot--TextDocumentPositionParams)))
                      (contents (plist-get res :contents))
                      (text (if (stringp contents) contents (format "%S" contents))))
-                (should (or (string-match-p "ΔHf" text) (string-match-p "kJ/mol\\|kcal/mol" text))))))
+                (should (or (string-match-p "ΔHf" text) (string-match-p "kJ/mol\\|kcal/mol" text))))
+              ;; Inlay hints: native where eglot has them, else overlays.
+              (if (fboundp 'eglot-inlay-hints-mode)
+                  (ert-pass)
+                (let ((caps (eglot-client-capabilities (eglot-current-server))))
+                  (should (plist-get (plist-get caps :textDocument) :inlayHint)))
+                (let ((hint (kiln-eglot-test--wait
+                             (lambda ()
+                               (seq-find
+                                (lambda (ov)
+                                  (and (overlay-get ov 'kiln-eglot-hint)
+                                       (string-match-p "ΔHf" (overlay-get ov 'after-string))
+                                       (save-excursion
+                                         (goto-char (overlay-start ov))
+                                         ;; At the end of the ethane line (no thermo data).
+                                         (and (eolp)
+                                              (string-match-p
+                                               "^species ethane "
+                                               (buffer-substring (line-beginning-position)
+                                                                 (line-end-position)))))))
+                                (overlays-in (point-min) (point-max))))
+                             20)))
+                  (should hint)))))
         (when buf
           (with-current-buffer buf
             (when (eglot-current-server)
