@@ -18,6 +18,13 @@
 ;;   (face `kiln-inlay-hint'), and tells the server so through the client
 ;;   capability textDocument.inlayHint.
 ;;
+;; - Large files: eglot 1.9 converts each diagnostic's position by
+;;   scanning from the top of the buffer, and pretty-prints every message
+;;   into its events buffer; with thousands of diagnostics that blocks Emacs
+;;   for seconds per update.  For the kiln server, positions are converted
+;;   in one pass over the buffer, and the events log is off by default
+;;   (`kiln-eglot-events-buffer-size').
+;;
 ;; Server settings go through `eglot-workspace-configuration', e.g.
 ;;   (setq-default eglot-workspace-configuration
 ;;                 '(:kiln (:units "kJ/mol" :estimateNotes :json-false)))
@@ -40,8 +47,19 @@
 (defface kiln-inlay-hint '((t :inherit shadow :height 0.9))
   "Face of the inlay hints shown by kiln-eglot.")
 
+(defcustom kiln-eglot-events-buffer-size 0
+  "Size of the kiln server's eglot events buffer; nil: `eglot-events-buffer-size'.
+0 (the default) keeps no log: eglot pretty-prints every message into it,
+which on a large mechanism costs seconds per diagnostics update."
+  :type '(choice (const :tag "As eglot-events-buffer-size" nil) integer))
+
 (defclass kiln-eglot-server (eglot-lsp-server) ()
   :documentation "The kiln language server (`kiln serve').")
+
+(cl-defmethod initialize-instance :after ((s kiln-eglot-server) &rest _)
+  "Apply `kiln-eglot-events-buffer-size' to S."
+  (when kiln-eglot-events-buffer-size
+    (setf (jsonrpc--events-buffer-scrollback-size s) kiln-eglot-events-buffer-size)))
 
 (add-to-list 'eglot-server-programs '(kiln-mode . (kiln-eglot-server "kiln" "serve")))
 
@@ -70,8 +88,13 @@
   "The part of the current buffer shown in windows, as (BEG . END), or nil."
   (let (beg end)
     (dolist (w (get-buffer-window-list nil nil t))
-      (let ((s (window-start w))
-            (e (or (window-end w t) (point-max))))
+      ;; From the window start, as many lines as the window has: cheap, and
+      ;; right also where redisplay has not run (batch).
+      (let* ((s (window-start w))
+             (e (save-excursion
+                  (goto-char s)
+                  (forward-line (1+ (window-body-height w)))
+                  (point))))
         (setq beg (if beg (min beg s) s)
               end (if end (max end e) e))))
     (and beg (cons beg end))))
@@ -89,14 +112,14 @@
 (defun kiln-eglot--render-hints (hints)
   "Show HINTS (a vector of LSP InlayHint) as overlays in the current buffer."
   (kiln-eglot--clear-hints)
-  (seq-doseq (h hints)
-    (let* ((pos (eglot--lsp-position-to-point (plist-get h :position)))
-           (ov (make-overlay pos pos nil t nil)))
-      (overlay-put ov 'kiln-eglot-hint t)
-      (overlay-put ov 'evaporate nil)
-      (overlay-put ov 'after-string
-                   (propertize (concat "  " (kiln-eglot--label (plist-get h :label)))
-                               'face 'kiln-inlay-hint)))))
+  (let ((points (kiln-eglot--points (mapcar (lambda (h) (plist-get h :position)) hints))))
+    (seq-doseq (h hints)
+      (let* ((pos (gethash (plist-get h :position) points))
+             (ov (make-overlay pos pos nil t nil)))
+        (overlay-put ov 'kiln-eglot-hint t)
+        (overlay-put ov 'after-string
+                     (propertize (concat "  " (kiln-eglot--label (plist-get h :label)))
+                                 'face 'kiln-inlay-hint))))))
 
 (defun kiln-eglot-refresh-hints (&optional buffer)
   "Ask the server for the inlay hints of the visible part of BUFFER; show them."
@@ -154,6 +177,95 @@
       (kiln-eglot--clear-hints))))
 
 (add-hook 'eglot-managed-mode-hook #'kiln-eglot--managed)
+
+;;;; Diagnostics of large files
+
+(defun kiln-eglot--fast-diagnostics-p ()
+  "Non-nil if this eglot's diagnostics internals are the ones handled here.
+That is eglot 1.9 and its kind (no inlay hints of its own)."
+  (and (not (fboundp 'eglot-inlay-hints-mode))
+       (fboundp 'eglot--report-to-flymake)
+       (fboundp 'eglot--make-diag)
+       (boundp 'eglot--current-flymake-report-fn)
+       (boundp 'eglot--diagnostics)))
+
+(defun kiln-eglot--points (positions)
+  "Buffer positions of the LSP POSITIONS (a list of plists), in one pass.
+Returns a hash table from each plist (by `eq') to its point."
+  (let ((out (make-hash-table :test #'eq :size (length positions)))
+        (sorted (sort (copy-sequence positions)
+                      (lambda (a b) (< (plist-get a :line) (plist-get b :line)))))
+        (line 0))
+    (save-excursion
+      (save-restriction
+        (widen)
+        (goto-char (point-min))
+        (dolist (p sorted)
+          (let ((want (plist-get p :line)))
+            (when (> want line)
+              (let ((short (forward-line (- want line))))
+                ;; -1: the buffer ended first.
+                (setq line (if (and (= short 0) (bolp)) want -1))))
+            (let ((bol (point)))
+              (if (< line 0)
+                  (puthash p (point-max) out)
+                (let ((tab-width 1)
+                      (col (plist-get p :character)))
+                  (funcall eglot-move-to-column-function (if (wholenump col) col 0))
+                  (puthash p (point) out)
+                  (goto-char bol))))))))
+    out))
+
+(defun kiln-eglot--diag-type (severity)
+  "The Flymake type of an LSP SEVERITY."
+  (cond ((null severity) 'eglot-error)
+        ((<= severity 1) 'eglot-error)
+        ((= severity 2) 'eglot-warning)
+        (t 'eglot-note)))
+
+(cl-defmethod eglot-handle-notification
+  ((server kiln-eglot-server) (method (eql textDocument/publishDiagnostics))
+   &rest args &key uri diagnostics &allow-other-keys)
+  "Publish DIAGNOSTICS for URI to Flymake, converting positions in one pass.
+Does what eglot 1.9 does, in time linear in the buffer and the diagnostics."
+  (let ((buffer (find-buffer-visiting (eglot--uri-to-path uri))))
+    (if (not (and buffer (kiln-eglot--fast-diagnostics-p)))
+        (apply #'cl-call-next-method server method args)
+      (with-current-buffer buffer
+        (let* ((positions nil)
+               (_ (seq-doseq (d diagnostics)
+                    (let ((range (plist-get d :range)))
+                      (push (plist-get range :start) positions)
+                      (push (plist-get range :end) positions))))
+               (points (kiln-eglot--points positions))
+               (diags
+                (cl-loop
+                 for d across diagnostics
+                 collect
+                 (let* ((range (plist-get d :range))
+                        (beg (gethash (plist-get range :start) points))
+                        (end (gethash (plist-get range :end) points))
+                        (code (plist-get d :code))
+                        (msg (concat (plist-get d :source)
+                                     (and code (format " [%s]" code))
+                                     ": " (plist-get d :message))))
+                   (when (>= beg end)
+                     (let* ((st (plist-get range :start))
+                            (region (flymake-diag-region
+                                     (current-buffer) (1+ (plist-get st :line))
+                                     (plist-get st :character))))
+                       (if region
+                           (setq beg (car region) end (cdr region))
+                         (save-excursion
+                           (goto-char beg)
+                           (setq beg (line-beginning-position)
+                                 end (line-end-position))))))
+                   (eglot--make-diag (current-buffer) beg end
+                                     (kiln-eglot--diag-type (plist-get d :severity))
+                                     msg `((eglot-lsp-diag . ,d)))))))
+          (if (and flymake-no-changes-timeout eglot--current-flymake-report-fn)
+              (eglot--report-to-flymake diags)
+            (setq eglot--diagnostics diags)))))))
 
 (cl-defmethod eglot-handle-notification :after
   ((_server kiln-eglot-server) (_method (eql textDocument/publishDiagnostics))

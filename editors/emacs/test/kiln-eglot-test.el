@@ -120,5 +120,26 @@
           (kill-buffer buf))
         (delete-directory dir t)))))
 
+(declare-function kiln-eglot--points "kiln-eglot")
+(declare-function eglot--lsp-position-to-point "eglot")
+
+(ert-deftest kiln-eglot-positions-in-one-pass-agree-with-eglot ()
+  ;; The one-pass conversion used for large diagnostics lists gives the
+  ;; points eglot's own conversion gives, also for non-ASCII text, columns
+  ;; past the end of a line and lines past the end of the buffer.
+  (skip-unless (kiln-eglot-test--load))
+  (with-temp-buffer
+    (insert "species ethanol CCO   # ΔHf°298 −56.0\n\n  note α and β\n"
+            "reaction a => b   A=1 n=0 Ea=0\nlast line without newline")
+    (let ((positions nil)
+          (seed 7))
+      (dotimes (_ 400)
+        (setq seed (% (+ (* seed 1103515245) 12345) 2147483648))
+        (push (list :line (% seed 8) :character (% (/ seed 8) 40)) positions))
+      (let ((points (kiln-eglot--points positions)))
+        (dolist (p positions)
+          (should (equal (cons p (gethash p points))
+                         (cons p (eglot--lsp-position-to-point p)))))))))
+
 (provide 'kiln-eglot-test)
 ;;; kiln-eglot-test.el ends here

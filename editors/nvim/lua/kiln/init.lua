@@ -13,6 +13,8 @@
 --     root_markers = { '.git' },              -- optional
 --     inlay_hints = true,                     -- optional: show estimates at line ends
 --     omnifunc = true,                        -- optional: set 'omnifunc' for <C-x><C-o>
+--     debounce_ms = 50,                       -- optional: delay before sending changes
+--     diagnostics = { severity_sort = true }, -- optional: vim.diagnostic options for kiln
 --     on_attach = function(client, bufnr) end, -- optional
 --   })
 --
@@ -34,6 +36,8 @@ local defaults = {
   root_markers = { '.git' },
   inlay_hints = true,
   omnifunc = true,
+  debounce_ms = 50,
+  diagnostics = { severity_sort = true },
   on_attach = nil,
 }
 
@@ -381,7 +385,7 @@ local function handlers(cfg)
   local h = {
     -- An error and a warning on one line: show the error.
     ['textDocument/publishDiagnostics'] = function(err, result, ctx, config)
-      config = vim.tbl_extend('keep', config or {}, { severity_sort = true })
+      config = vim.tbl_extend('keep', config or {}, cfg.diagnostics or {})
       local untitled = result and untitled_buffer(result.uri)
       if untitled then
         set_untitled_diagnostics(untitled, result, ctx, config)
@@ -427,6 +431,7 @@ local function start(root, cfg)
     settings = settings,
     capabilities = capabilities(cfg),
     handlers = handlers(cfg),
+    flags = { debounce_text_changes = cfg.debounce_ms },
     on_init = function(client)
       client.notify('workspace/didChangeConfiguration', { settings = settings })
       return true
