@@ -141,5 +141,28 @@
           (should (equal (cons p (gethash p points))
                          (cons p (eglot--lsp-position-to-point p)))))))))
 
+(declare-function kiln-bigfile-measure "kiln-bigfile")
+(declare-function kiln-bigfile-report "kiln-bigfile")
+
+(ert-deftest kiln-eglot-bigfile-edit ()
+  ;; A large generated mechanism: opening shows diagnostics, and an edit of
+  ;; one SMILES (and its undo) reaches Flymake.  The limit is generous: the
+  ;; test proves the path works; editors/bench.sh prints the real figures.
+  (skip-unless (kiln-eglot-test--load))
+  (let ((binary (getenv "KILN_BINARY"))
+        (big (getenv "KILN_BIG_FILE")))
+    (skip-unless (and binary (not (string-empty-p binary)) big (not (string-empty-p big))))
+    (require 'kiln-bigfile)
+    (let* ((copy (make-temp-file "kiln-big" nil ".kiln")))
+      (unwind-protect
+          (progn
+            (copy-file big copy t)
+            (let ((r (kiln-bigfile-measure binary copy 1 120)))
+              (kiln-bigfile-report copy r)
+              (should (null (plist-get r :failures)))
+              (should (= (length (plist-get r :edits)) 2))
+              (should (> (plist-get r :diagnostics) 0))))
+        (delete-file copy)))))
+
 (provide 'kiln-eglot-test)
 ;;; kiln-eglot-test.el ends here
