@@ -111,8 +111,10 @@ Usage:
         Estimate ΔHf°298, S°298 and Cp(T) by group additivity, with the breakdown.
         --nasa adds a fitted NASA 7-coefficient polynomial. JSON errors give the
         1-based character position in the SMILES.
-  kiln summary FILE [--json] [--units kcal/mol|kJ/mol]
-        Tabulate species thermo and reaction thermochemistry (ΔH°r, ΔG°r, Kp, k_r).
+  kiln summary FILE [--json] [--uncertain] [--units kcal/mol|kJ/mol]
+        Tabulate species thermo and reaction thermochemistry (ΔH°r, ΔG°r, Kp, k_r,
+        and the factor ×/÷ exp(σ(ΔG°r)/RT) that k_r(1000 K) inherits from
+        estimated thermo). --uncertain lists the largest factors first.
   kiln fill FILE [--dry-run] [--tmid K] [--thigh K]
         Insert an estimated nasa7 block under every species that lacks thermo.
         --dry-run prints a unified diff instead of writing the file.

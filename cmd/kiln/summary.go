@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
+	"sort"
 	"text/tabwriter"
 
 	"kiln.dev/kiln/analysis"
@@ -35,10 +36,13 @@ type summaryReaction struct {
 	DG298       *float64            `json:"dg298_kj_mol"`
 	Keq         map[string]*float64 `json:"keq"`
 	ReverseRate map[string]*float64 `json:"reverse_rate"`
+	// ReverseFactor is the factor k_r inherits from estimated thermo,
+	// exp(σ(ΔG°r)/RT) at 1000 K (null when k_r does not come from thermo).
+	ReverseFactor map[string]*float64 `json:"reverse_rate_factor"`
 }
 
 func runSummary(e env, args []string) (int, error) {
-	flags, files, err := parseArgs(args, withSettings(flagSpec{"json": false}))
+	flags, files, err := parseArgs(args, withSettings(flagSpec{"json": false, "uncertain": false}))
 	if err != nil {
 		return 0, err
 	}
@@ -50,6 +54,9 @@ func runSummary(e env, args []string) (int, error) {
 		return 0, err
 	}
 	s := buildSummary(res)
+	if flags["uncertain"] == "true" {
+		sortByReverseFactor(s.Reactions)
+	}
 	if flags["json"] == "true" {
 		enc := json.NewEncoder(e.stdout)
 		enc.SetIndent("", "  ")
@@ -98,6 +105,9 @@ func buildSummary(res *analysis.Result) summaryJSON {
 		if r.ReverseRate1000 != nil {
 			row.ReverseRate = map[string]*float64{"1000": r.ReverseRate1000}
 		}
+		if u, ok := res.ReverseRateUncertainty(r, 1000); ok {
+			row.ReverseFactor = map[string]*float64{"1000": ptr(u.Factor)}
+		}
 		s.Reactions = append(s.Reactions, row)
 	}
 	return s
@@ -137,7 +147,7 @@ func writeSummaryText(w io.Writer, s summaryJSON, set analysis.Settings) {
 	tw.Flush()
 	fmt.Fprintf(w, "\nReactions (%d)\n", len(s.Reactions))
 	tw = tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
-	fmt.Fprintf(tw, "line\tequation\tbalanced\tΔH°r %s\tΔG°r %s\tKp(298)\tKp(1000)\tKp(1500)\tk_r(1000 K)\n", eu, eu)
+	fmt.Fprintf(tw, "line\tequation\tbalanced\tΔH°r %s\tΔG°r %s\tKp(298)\tKp(1000)\tKp(1500)\tk_r(1000 K)\tk_r ×/÷\n", eu, eu)
 	for _, r := range s.Reactions {
 		bal := "—"
 		if r.Balanced != nil {
@@ -147,8 +157,28 @@ func writeSummaryText(w io.Writer, s summaryJSON, set analysis.Settings) {
 		if r.ReverseRate != nil {
 			kr = r.ReverseRate["1000"]
 		}
-		fmt.Fprintf(tw, "%d\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", r.Line, r.Equation, bal, num(r.DH298, ef, 2), num(r.DG298, ef, 2),
-			sci(r.Keq["298"]), sci(r.Keq["1000"]), sci(r.Keq["1500"]), sci(kr))
+		fmt.Fprintf(tw, "%d\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", r.Line, r.Equation, bal, num(r.DH298, ef, 2), num(r.DG298, ef, 2),
+			sci(r.Keq["298"]), sci(r.Keq["1000"]), sci(r.Keq["1500"]), sci(kr), num(reverseFactor(r), 1, 2))
 	}
 	tw.Flush()
+}
+
+// reverseFactor is a reaction's k_r factor at 1000 K, nil when none.
+func reverseFactor(r summaryReaction) *float64 {
+	if r.ReverseFactor == nil {
+		return nil
+	}
+	return r.ReverseFactor["1000"]
+}
+
+// sortByReverseFactor puts the reactions whose reverse rates rest on the
+// weakest thermo first (largest factor; reactions without one last).
+func sortByReverseFactor(rs []summaryReaction) {
+	sort.SliceStable(rs, func(i, j int) bool {
+		a, b := reverseFactor(rs[i]), reverseFactor(rs[j])
+		if a == nil || b == nil {
+			return a != nil && b == nil
+		}
+		return *a > *b
+	})
 }
