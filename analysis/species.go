@@ -53,9 +53,7 @@ func (a *analysis) species() error {
 			}
 			if sp.Mol != nil {
 				if first := sameStructure(byStructure, sp); first != nil {
-					a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
-						Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(first.Loc)),
-						Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: first.Name + " has this structure"}}})
+					a.reportSameStructure(path, sp, first)
 				}
 				a.estimateSpecies(path, sp, user)
 			}
