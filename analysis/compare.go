@@ -410,6 +410,27 @@ func matchSpecies(a, b *compareSide) (matchA, matchB []int) {
 	same := func(x, y *Species) bool {
 		return x.Decl.SMILES.Text == y.Decl.SMILES.Text || identity(x.Mol) == identity(y.Mol)
 	}
+	// Canonical forms are needed only where a bucket holds species of both
+	// sides spelled differently; compute those on all cores first (each
+	// molecule caches its own).
+	var mols []*Species
+	seen := map[*Species]bool{}
+	for _, sp := range a.species {
+		if sp.Mol == nil {
+			continue
+		}
+		for _, j := range buckets[key(sp)] {
+			if other := b.species[j]; other.Decl.SMILES.Text != sp.Decl.SMILES.Text {
+				for _, x := range []*Species{sp, other} {
+					if !seen[x] {
+						seen[x] = true
+						mols = append(mols, x)
+					}
+				}
+			}
+		}
+	}
+	_ = a.a.parallel(len(mols), 16, func(i int) { identity(mols[i].Mol) })
 	for i, sp := range a.species {
 		if sp.Mol == nil {
 			if j, ok := b.pos[sp.Name]; ok && b.species[j].Mol == nil && len(sp.Composition) > 0 && sameComposition(sp.Composition, b.species[j].Composition) {
