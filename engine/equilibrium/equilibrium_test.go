@@ -322,6 +322,34 @@ func TestErrors(t *testing.T) {
 	assert.Error(t, err)
 }
 
+// flat is a test thermo with constant H and S (Cp = 0).
+type flat struct{ h, s float64 }
+
+func (f flat) H(float64) float64 { return f.h }
+func (f flat) S(float64) float64 { return f.s }
+
+// TestAdiabaticOutOfRange: products that hold no heat (Cp = 0) cannot
+// absorb the energy released, so no temperature up to TMax balances it;
+// the search stops with a clear error instead of running on.
+func TestAdiabaticOutOfRange(t *testing.T) {
+	sys, err := NewSystem([]Species{
+		{Name: "X", Composition: map[string]int{"C": 1}, Thermo: flat{0, 100}},
+		{Name: "Y", Composition: map[string]int{"C": 1}, Thermo: flat{-1e6, 100}},
+	})
+	require.NoError(t, err)
+	_, err = sys.Solve(context.Background(), Problem{Feed: []float64{1, 0}, T: 300, P: atm, Adiabatic: true})
+	assert.ErrorContains(t, err, "above 6000 K")
+	// Trace amounts far below the float64 range of a mole fraction's
+	// neighbours are still exact: x_X/x_Y = exp(−(G_X − G_Y)/RT) = e^−377.
+	sys2, err := NewSystem([]Species{
+		{Name: "X", Composition: map[string]int{"C": 1}, Thermo: flat{1e6, 300}},
+		{Name: "Y", Composition: map[string]int{"C": 1}, Thermo: flat{0, 100}},
+	})
+	require.NoError(t, err)
+	r := solve(t, sys2, Problem{Feed: []float64{0, 1}, T: 300, P: atm})
+	assert.InDelta(t, -((1e6-300*300)-(0-300*100))/(R*300), math.Log(r.MoleFractions[0]), 1e-6)
+}
+
 // TestExcludedSpecies: species holding an element the feed lacks take no
 // part, and are listed.
 func TestExcludedSpecies(t *testing.T) {
