@@ -204,3 +204,35 @@ func BenchmarkCompare10kDistinct(b *testing.B) {
 		compareTexts(b, files, "/w/a.kiln", "/w/b.kiln")
 	}
 }
+
+// TestCompareGenerated: a generated mechanism against its renamed copy
+// (renameAll): every species and reaction is matched through the renaming,
+// every tenth reaction has k_B/k_A = 2 and the others 1. Large enough that
+// structures are read and estimated on several goroutines.
+func TestCompareGenerated(t *testing.T) {
+	src := mechgen.Generate(mechgen.Options{Seed: 3, Molecules: 300})
+	files := map[string]string{"/w/a.kiln": string(src), "/w/b.kiln": renameAll(string(src))}
+	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	assert.Len(t, c.Species, 607)
+	assert.Empty(t, c.OnlyA)
+	assert.Empty(t, c.OnlyB)
+	assert.Empty(t, c.NameClashes)
+	require.Len(t, c.Reactions, 900)
+	doubled := 0
+	for i, p := range c.Reactions {
+		want := 1.0
+		if (i+1)%10 == 0 {
+			want = 2
+			doubled++
+		}
+		for k := range p.Ratio {
+			require.NotNil(t, p.Ratio[k])
+			assert.InEpsilon(t, want, *p.Ratio[k], 1e-12, "%s", p.A.Equation)
+		}
+	}
+	assert.Equal(t, 90, doubled)
+	for _, p := range c.Species {
+		assert.True(t, p.SameEstimate, p.A.Name)
+		assert.True(t, p.Renamed())
+	}
+}
