@@ -79,8 +79,9 @@ type SpeciesPair struct {
 	// has none, or when SameEstimate.
 	Thermo *ThermoDiff
 	// SameEstimate is true when both sides estimate the species from the
-	// same structure with the same options (no thermo block on either
-	// side): the thermochemistry is identical and is not computed.
+	// same structure text with the same options (no thermo block on either
+	// side): the thermochemistry is identical (or, when kiln cannot
+	// estimate the structure, missing on both sides) and is not computed.
 	SameEstimate bool
 }
 
@@ -227,6 +228,9 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 		}
 		if i, ok := sa.pos[sp.Name]; ok && matchB[j] != i {
 			first := sa.species[i]
+			if first.Mol == nil && sp.Mol == nil && smilesOf(first) == smilesOf(sp) && sp.Decl.SMILES != nil {
+				continue // the same unreadable SMILES on both sides: not a clash
+			}
 			c.NameClashes = append(c.NameClashes, NameClash{Name: sp.Name, SMILESA: smilesOf(first), SMILESB: smilesOf(sp)})
 		}
 	}

@@ -75,8 +75,9 @@ type compareValue struct {
 }
 
 // compareThermo compares a matched pair's thermo. When both sides estimate
-// the same structure the same way, same_estimate is true and the values are
-// omitted (they are identical).
+// the same structure text the same way, same_estimate is true and the values
+// are omitted (identical on both sides, or missing on both when kiln cannot
+// estimate the structure).
 type compareThermo struct {
 	SourceA      string                  `json:"source_a"`
 	SourceB      string                  `json:"source_b"`
