@@ -128,6 +128,19 @@ func TestMethaneAirFlame(t *testing.T) {
 	assert.InDelta(t, 2330, rc.T, 20)
 }
 
+// TestHydrogenFlames: stoichiometric hydrogen burns at ≈ 2380 K in air and
+// ≈ 3080 K in oxygen at 1 atm from 298.15 K (common practice, from memory;
+// ±20 K for the spread of data sets and of the quoted values).
+func TestHydrogenFlames(t *testing.T) {
+	sys, err := NewSystem(librarySpecies(t, "H2", "O2", "N2", "H2O", "OH", "H", "O", "HO2", "H2O2", "NO"))
+	require.NoError(t, err)
+	air := solve(t, sys, Problem{Feed: feedOf(t, sys, map[string]float64{"H2": 2, "O2": 1, "N2": 3.76}), T: 298.15, P: atm, Adiabatic: true})
+	oxy := solve(t, sys, Problem{Feed: feedOf(t, sys, map[string]float64{"H2": 2, "O2": 1}), T: 298.15, P: atm, Adiabatic: true})
+	t.Logf("H2–air %.1f K, H2–O2 %.1f K", air.T, oxy.T)
+	assert.InDelta(t, 2380, air.T, 20)
+	assert.InDelta(t, 3080, oxy.T, 20)
+}
+
 // TestMethaneAirConstantVolume: the same mixture burnt in a closed vessel
 // reaches ≈ 2590 K (common practice, from memory; ±25 K for the spread of
 // data sets) and conserves internal energy; the pressure follows the ideal
