@@ -127,13 +127,27 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		}
 		return e, nil
 	}
-	g, err := benson.Estimate(m, benson.Options{
+	bo := benson.Options{
 		Multiplicity:   o.Multiplicity,
 		Symmetry:       o.Symmetry,
 		OpticalIsomers: o.OpticalIsomers,
 		UserGroups:     o.UserGroups,
-	})
+	}
+	// Estimates depend only on the structure: they are made from its
+	// canonical spelling (with stereo), so neither how a SMILES is written
+	// nor the order in which spellings are met changes a number.
+	cm := m
+	if c, err := molecule.ParseSMILES(m.CanonicalStereo()); err == nil {
+		cm = c
+	}
+	g, err := benson.Estimate(cm, bo)
 	if err != nil {
+		if cm != m {
+			// Report the refusal with the atom numbers of the user's SMILES.
+			if _, e2 := benson.Estimate(m, bo); e2 != nil {
+				err = e2
+			}
+		}
 		return nil, err
 	}
 	e := &Estimate{Group: g, Hf298: g.Hf298, S298: g.S298, Cp: g.Cp, Uncertainty: g.Uncertainty,

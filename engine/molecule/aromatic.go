@@ -24,8 +24,10 @@ func electronegativity(sym string) float64 {
 }
 
 // perceive computes rings, ring systems and aromaticity of a Kekulé graph.
-func (m *Molecule) perceive() {
-	inRing := m.ringBondFlags()
+func (m *Molecule) perceive() { m.perceiveWith(m.ringBondFlags()) }
+
+// perceiveWith is perceive with the ring-bond flags already computed.
+func (m *Molecule) perceiveWith(inRing []bool) {
 	m.rings, m.cycles = m.findRings(inRing)
 	m.ringSys = ringSystems(len(m.Atoms), m.rings)
 	m.perceiveAromaticity(inRing)
@@ -272,4 +274,14 @@ func (m *Molecule) perceiveAromaticity(inRing []bool) {
 			}
 		}
 	}
+}
+
+// atomInRing reports whether atom i has a ring bond.
+func (m *Molecule) atomInRing(i int, inRing []bool) bool {
+	for _, b := range m.Adj[i] {
+		if inRing[b] {
+			return true
+		}
+	}
+	return false
 }

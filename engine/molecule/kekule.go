@@ -258,6 +258,11 @@ func (p *parser) assignHydrogens() error {
 		e, _ := elementIndex(a.Element)
 		if p.organic[i] {
 			vs, _ := valences(e, 0)
+			if e.Group == 17 {
+				// OpenSMILES: F, Cl, Br and I written without brackets have
+				// valence 1 only; higher valences need a bracket atom.
+				vs = valence1
+			}
 			v, ok := lowestValence(vs, sums[i])
 			if !ok {
 				return errAt(a.Pos, "%s with valence %d", e.Name, sums[i])

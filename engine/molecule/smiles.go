@@ -63,10 +63,12 @@ type parser struct {
 //
 // Supported: the organic subset B C N O P S F Cl Br I with implicit hydrogens
 // from the lowest normal valence ≥ the bond-order sum (B 3; C 4; N 3,5; O 2;
-// P 3,5; S 2,4,6; halogens 1), aromatic b c n o p s, bracket atoms
-// [isotope symbol chirality Hn charge :class] including aromatic [se] and
-// [as], bonds - = # $ : / \, branches, ring closures 0–9 and %nn with the bond
-// symbol at either end, and '.'-separated components. The wildcard '*' is
+// P 3,5; S 2,4,6; halogens 1), aromatic b c n o p s (ring atoms only),
+// bracket atoms [isotope symbol chirality Hn charge :class] including
+// aromatic [se] and [as] and every OpenSMILES chirality class (@, @@,
+// @TH1–2, @AL1–2, @SP1–3, @TB1–20, @OH1–30; kept verbatim), bonds - = # $ : / \, branches, ring closures 0–9 and %nn with the bond
+// symbol at either end, and '.'-separated components ('.' never inside a
+// branch). The wildcard '*' is
 // rejected. Aromatic input is kekulized (maximum matching); aromaticity is then
 // perceived afresh on the Kekulé graph, so Kekulé and aromatic spellings of a
 // molecule give the same graph. Bracket atoms with fewer bonds+H than their
@@ -80,6 +82,9 @@ func ParseSMILES(s string) (*Molecule, error) {
 	}
 	p := newParser(s)
 	if err := p.parse(); err != nil {
+		return nil, err
+	}
+	if err := p.aromaticInRings(); err != nil {
 		return nil, err
 	}
 	if err := p.kekulize(); err != nil {
@@ -222,6 +227,9 @@ func (p *parser) parse() error {
 			}
 			if prev < 0 || lastOpen {
 				return errAt(i, "'.' with no atom before it")
+			}
+			if len(branches) > 0 {
+				return errAt(i, "'.' inside a branch (components must be separated outside parentheses)")
 			}
 			prev = -1
 			i++
@@ -462,16 +470,9 @@ func (p *parser) readBracket(start int) (Atom, int, error) {
 	}
 	// chirality
 	if i < end && s[i] == '@' {
-		k := i + 1
-		if k < end && s[k] == '@' {
-			k++
-		} else {
-			for k < end && s[k] >= 'A' && s[k] <= 'Z' && s[k] != 'H' {
-				k++
-			}
-			for k < end && isDigit(s[k]) {
-				k++
-			}
+		k, err := chiralityEnd(s, i, end)
+		if err != nil {
+			return a, 0, err
 		}
 		a.Chirality = s[i:k]
 		i = k
@@ -533,4 +534,71 @@ func (p *parser) readBracket(start int) (Atom, int, error) {
 		return a, 0, errAt(i, "unexpected %q in bracket atom", rune(s[i]))
 	}
 	return a, end - start + 1, nil
+}
+
+// chiralityClasses lists the OpenSMILES chirality classes with the largest
+// permutation number each allows: tetrahedral TH1–2, allene-like AL1–2,
+// square-planar SP1–3, trigonal-bipyramidal TB1–20, octahedral OH1–30.
+var chiralityClasses = [...]struct {
+	name string
+	max  int
+}{{"TH", 2}, {"AL", 2}, {"SP", 3}, {"TB", 20}, {"OH", 30}}
+
+// chiralityEnd reads the chirality mark that starts with '@' at s[i] inside
+// a bracket atom ending at end, and returns the offset just after it: "@",
+// "@@", or '@' followed by a class name and a permutation number. An 'H'
+// right after '@' is the hydrogen count, not a class. Any other letter after
+// '@' is an error at its position (it is never read as the next token).
+func chiralityEnd(s string, i, end int) (int, error) {
+	k := i + 1
+	if k < end && s[k] == '@' {
+		return k + 1, nil
+	}
+	if k >= end || s[k] < 'A' || s[k] > 'Z' || s[k] == 'H' {
+		return k, nil
+	}
+	for _, c := range chiralityClasses {
+		if k+2 > end || s[k:k+2] != c.name {
+			continue
+		}
+		d := k + 2
+		n := 0
+		for d < end && isDigit(s[d]) && d-k-2 < 3 {
+			n = n*10 + int(s[d]-'0')
+			d++
+		}
+		if d == k+2 {
+			return 0, errAt(k, "chirality class @%s needs a number (1–%d)", c.name, c.max)
+		}
+		if n < 1 || n > c.max {
+			return 0, errAt(k+2, "chirality @%s%d out of range (1–%d)", c.name, n, c.max)
+		}
+		return d, nil
+	}
+	j := k
+	for j < end && s[j] >= 'A' && s[j] <= 'Z' {
+		j++
+	}
+	return 0, errAt(k, "invalid chirality %q (expected @, @@, @TH1–2, @AL1–2, @SP1–3, @TB1–20 or @OH1–30)", "@"+s[k:j])
+}
+
+// aromaticInRings rejects atoms written aromatic (lower case) that lie on no
+// ring: OpenSMILES aromaticity is a property of ring atoms, so "CoC" is an
+// error rather than dimethyl ether.
+func (p *parser) aromaticInRings() error {
+	arom := false
+	for _, a := range p.atoms {
+		arom = arom || a.Aromatic
+	}
+	if !arom {
+		return nil
+	}
+	g := &Molecule{Atoms: p.atoms, Bonds: p.bonds, Adj: p.atomBonds}
+	inRing := g.ringBondFlags()
+	for i, a := range p.atoms {
+		if a.Aromatic && !g.atomInRing(i, inRing) {
+			return errAt(a.Pos, "aromatic atom %q not in a ring", p.s[a.Pos:a.Pos+a.Len])
+		}
+	}
+	return nil
 }
