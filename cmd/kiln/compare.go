@@ -75,7 +75,7 @@ type compareValue struct {
 }
 
 // compareThermo compares a matched pair's thermo. When both sides estimate
-// the same structure text the same way, same_estimate is true and the values
+// the structure with the same options, same_estimate is true and the values
 // are omitted (identical on both sides, or missing on both when kiln cannot
 // estimate the structure).
 type compareThermo struct {
