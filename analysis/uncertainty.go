@@ -10,9 +10,10 @@ import (
 // ReverseUncertainty is the uncertainty a reaction's reverse rate
 // k_r = k_f/Kc inherits from estimated thermochemistry. With ν_j the net
 // stoichiometric coefficient of species j (products minus reactants) and
-// σ_j the uncertainty of its estimated ΔHf°298 (the mean absolute error
-// kiln measured for its compound class), errors of different species taken
-// as independent:
+// σ_j the standard uncertainty of its estimated ΔHf°298 (Estimate.Uncertainty:
+// the error kiln measured for its compound class, widened for every
+// approximation the estimate made), errors of different species taken as
+// independent:
 //
 //	σ(ΔG°r) = sqrt(Σ_j (ν_j σ_j)²)        J/mol
 //	factor  = exp(σ(ΔG°r)/(R T))         (k_r is uncertain by ×/÷ factor)
@@ -26,8 +27,8 @@ type ReverseUncertainty struct {
 	Factor float64 // exp(σ/(R T)), ≥ 1
 	// Estimated lists the species whose estimates contribute, by name.
 	Estimated []string
-	// Unmeasured lists estimated species whose class has no measured
-	// error: the factor is then a lower bound.
+	// Unmeasured lists estimated species without an uncertainty (a class
+	// with no measured error): the factor is then a lower bound.
 	Unmeasured []string
 }
 
