@@ -165,7 +165,6 @@ type Result struct {
 	// H and U are the enthalpy and internal energy of the mixture (J, for
 	// the feed amounts, formation scale); S its entropy (J/K) and G = H − T S.
 	H, U, S, G float64
-	// MolarMass is not computed here (the caller knows the masses).
 	// ElementPotentials are π_i = λ_i/(R T) by element symbol.
 	ElementPotentials map[string]float64
 	// Iterations counts the Newton steps of the last composition solve;
