@@ -383,13 +383,30 @@ func (s *compareSide) thermoOf(sp *Species) {
 	}
 }
 
-// multiplicityOf is the spin multiplicity a species declares, else the one
-// its structure implies.
-func multiplicityOf(sp *Species) int {
+// multiplicity is the spin multiplicity a species declares, else that of
+// the electronic ground state the analysis assumes for its structure: the
+// reference library's ground state for its small species (O=O is triplet
+// oxygen, [CH2] triplet methylene), otherwise unpaired electrons + 1.
+func (s *compareSide) multiplicity(sp *Species) int {
 	if m := intAttr(sp.Decl.Multiplicity); m > 0 {
 		return m
 	}
+	if lib, ok := s.a.w.cache.lib.Lookup(sp.Mol, 0); ok {
+		return lib.Multiplicity
+	}
 	return sp.Mol.DefaultMultiplicity()
+}
+
+// matchKeys returns each species' bucket key for matching: its cheap graph
+// invariant and multiplicity ("" without a structure).
+func (s *compareSide) matchKeys() []string {
+	keys := make([]string, len(s.species))
+	for i, sp := range s.species {
+		if sp.Mol != nil {
+			keys[i] = sp.inv + "|m" + strconv.Itoa(s.multiplicity(sp))
+		}
+	}
+	return keys
 }
 
 // matchSpecies pairs species of a and b with the same structure (canonical
@@ -405,12 +422,11 @@ func matchSpecies(a, b *compareSide) (matchA, matchB []int) {
 	for j := range matchB {
 		matchB[j] = -1
 	}
-	key := func(sp *Species) string { return sp.inv + "|m" + strconv.Itoa(multiplicityOf(sp)) }
+	keysA, keysB := a.matchKeys(), b.matchKeys()
 	buckets := map[string][]int{}
 	for j, sp := range b.species {
 		if sp.Mol != nil {
-			k := key(sp)
-			buckets[k] = append(buckets[k], j)
+			buckets[keysB[j]] = append(buckets[keysB[j]], j)
 		}
 	}
 	same := func(x, y *Species) bool {
@@ -421,11 +437,11 @@ func matchSpecies(a, b *compareSide) (matchA, matchB []int) {
 	// molecule caches its own).
 	var mols []*Species
 	seen := map[*Species]bool{}
-	for _, sp := range a.species {
+	for i, sp := range a.species {
 		if sp.Mol == nil {
 			continue
 		}
-		for _, j := range buckets[key(sp)] {
+		for _, j := range buckets[keysA[i]] {
 			if other := b.species[j]; other.Decl.SMILES.Text != sp.Decl.SMILES.Text {
 				for _, x := range []*Species{sp, other} {
 					if !seen[x] {
@@ -446,7 +462,7 @@ func matchSpecies(a, b *compareSide) (matchA, matchB []int) {
 			}
 			continue
 		}
-		cands := buckets[key(sp)]
+		cands := buckets[keysA[i]]
 		best := -1
 		for _, j := range cands {
 			if matchB[j] >= 0 {

@@ -37,7 +37,8 @@ func pairNames(c *Comparison) map[string]string {
 
 // TestCompareMatching: structure and multiplicity decide, not names or
 // spellings; stereo isomers stay apart; lumped species pair by name and
-// composition; included files count.
+// composition; included files count; a multiplicity written out equals the
+// ground state kiln assumes without it (O=O is triplet oxygen).
 func TestCompareMatching(t *testing.T) {
 	files := map[string]string{
 		"/w/a.kiln": `species CH2 [CH2]
@@ -46,6 +47,8 @@ species singlet-CH2 [CH2]
 species cis C/C=C\C
 species trans C/C=C/C
 species benzene c1ccccc1
+species O2 O=O
+  multiplicity 3
 species tar
   composition C10H8
   thermo-table
@@ -67,6 +70,7 @@ species methylene [CH2]
 species E-butene C\C=C\C
 species Z-butene C/C=C\C
 species phenyl-H C1=CC=CC=C1
+species oxygen O=O
 species tar
   composition C10H8
   thermo-table
@@ -84,7 +88,7 @@ species propanone O=C(C)C
 	}
 	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
 	assert.Equal(t, map[string]string{"CH2": "methylene", "singlet-CH2": "methylene-s", "cis": "Z-butene", "trans": "E-butene",
-		"benzene": "phenyl-H", "tar": "tar", "acetone": "propanone"}, pairNames(c))
+		"benzene": "phenyl-H", "O2": "oxygen", "tar": "tar", "acetone": "propanone"}, pairNames(c))
 	require.Len(t, c.OnlyA, 1)
 	assert.Equal(t, "pitch", c.OnlyA[0].Name, "same name, other composition: not matched")
 	assert.Equal(t, "/w/more.kiln", c.Species[len(c.Species)-1].A.File)
