@@ -383,27 +383,13 @@ func (s *compareSide) thermoOf(sp *Species) {
 	}
 }
 
-// multiplicity is the spin multiplicity a species declares, else that of
-// the electronic ground state the analysis assumes for its structure: the
-// reference library's ground state for its small species (O=O is triplet
-// oxygen, [CH2] triplet methylene), otherwise unpaired electrons + 1.
-func (s *compareSide) multiplicity(sp *Species) int {
-	if m := intAttr(sp.Decl.Multiplicity); m > 0 {
-		return m
-	}
-	if lib, ok := s.a.w.cache.lib.Lookup(sp.Mol, 0); ok {
-		return lib.Multiplicity
-	}
-	return sp.Mol.DefaultMultiplicity()
-}
-
 // matchKeys returns each species' bucket key for matching: its cheap graph
-// invariant and multiplicity ("" without a structure).
+// invariant and effective multiplicity ("" without a structure).
 func (s *compareSide) matchKeys() []string {
 	keys := make([]string, len(s.species))
 	for i, sp := range s.species {
 		if sp.Mol != nil {
-			keys[i] = sp.inv + "|m" + strconv.Itoa(s.multiplicity(sp))
+			keys[i] = sp.inv + "|m" + strconv.Itoa(effectiveMultiplicity(s.a.w.cache.lib, sp))
 		}
 	}
 	return keys

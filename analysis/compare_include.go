@@ -3,8 +3,25 @@ package analysis
 import (
 	"fmt"
 
+	"kiln.dev/kiln/engine/reflib"
 	"kiln.dev/kiln/speciesfile"
 )
+
+// effectiveMultiplicity is the spin multiplicity a species (with a
+// structure) declares, else that of the electronic ground state the analysis
+// assumes for its structure: the reference library's ground state for its
+// small species (O=O is triplet oxygen, [CH2] triplet methylene), otherwise
+// unpaired electrons + 1. Structures are "the same species" for duplicate
+// diagnostics and for compare only with equal effective multiplicities.
+func effectiveMultiplicity(lib *reflib.Library, sp *Species) int {
+	if m := intAttr(sp.Decl.Multiplicity); m > 0 {
+		return m
+	}
+	if e, ok := lib.Lookup(sp.Mol, 0); ok {
+		return e.Multiplicity
+	}
+	return sp.Mol.DefaultMultiplicity()
+}
 
 // reportSameStructure reports that sp (declared in path) has the structure
 // and multiplicity of first, declared earlier under another name: on sp's

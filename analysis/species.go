@@ -52,7 +52,7 @@ func (a *analysis) species() error {
 				sp.MolarMass = MolarMassOf(comp)
 			}
 			if sp.Mol != nil {
-				if first := sameStructure(byStructure, sp); first != nil {
+				if first := sameStructure(byStructure, sp, effectiveMultiplicity(a.w.cache.lib, sp)); first != nil {
 					a.reportSameStructure(path, sp, first)
 				}
 				a.estimateSpecies(path, sp, user)
@@ -80,8 +80,8 @@ func (a *analysis) species() error {
 // multiplicity of sp, and records sp. Species are bucketed by a cheap graph
 // invariant first; canonical forms are computed only within a bucket, so
 // most species never need one.
-func sameStructure(seen map[string][]*Species, sp *Species) *Species {
-	k := sp.inv + "|m" + strconv.Itoa(intAttr(sp.Decl.Multiplicity))
+func sameStructure(seen map[string][]*Species, sp *Species, mult int) *Species {
+	k := sp.inv + "|m" + strconv.Itoa(mult)
 	bucket := seen[k]
 	for _, other := range bucket {
 		if identity(other.Mol) == identity(sp.Mol) {
