@@ -209,7 +209,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, set 
 	} else {
 		fmt.Fprintf(w, "  reference library: %s (%s)\n", est.Library, est.LibrarySource)
 	}
-	fmt.Fprintf(w, "  ΔHf°298 = %.2f kcal/mol = %.1f kJ/mol (± %.1f kcal/mol, class MAE)\n", est.Hf298/kcal, est.Hf298/1000, est.Uncertainty/kcal)
+	fmt.Fprintf(w, "  ΔHf°298 = %.2f kcal/mol = %.1f kJ/mol (± %.1f kcal/mol, 1σ: class error widened by each approximation)\n", est.Hf298/kcal, est.Hf298/1000, est.Uncertainty/kcal)
 	fmt.Fprintf(w, "  S°298   = %.2f cal/(mol·K) = %.2f J/(mol·K)\n", est.S298/4.184, est.S298)
 	fmt.Fprintf(w, "  Cp      ")
 	for i, T := range benson.StdTemps {

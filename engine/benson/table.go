@@ -58,7 +58,6 @@ var builtin = sync.OnceValue(func() *tables {
 		}
 		t.groups[r.Name] = r
 		t.order = append(t.order, r.Name)
-		t.centres[centreOf(r.Name)] = true
 	}
 	for _, v := range mustFill("corrections.tsv", mustParse("corrections.tsv", correctionsTSV)) {
 		t.corrections[v.Name] = v
@@ -79,6 +78,11 @@ var builtin = sync.OnceValue(func() *tables {
 			v.Cp = [7]float64{}
 		}
 		t.hbi[v.Name] = hbiValue{site: v.Name, bde: bde, hasSCp: has, value: v}
+	}
+	// The supported centres are read off the finished group table, so any
+	// group file loaded above (or added later) extends them.
+	for name := range t.groups {
+		t.centres[centreOf(name)] = true
 	}
 	return t
 })
