@@ -57,7 +57,7 @@ type Comparison struct {
 type CompareSide struct {
 	Path                string
 	Species, Reactions  int
-	Errors              int // error diagnostics in the file and its includes
+	Errors              int // syntax errors in the file and its includes, unreadable structures and includes of the file
 	UnreadableStructure []string
 }
 
@@ -341,8 +341,11 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 
 func (s *compareSide) summary() CompareSide {
 	out := CompareSide{Path: s.a.res.Path, Species: len(s.species), Reactions: len(s.reactions)}
-	for _, f := range s.a.res.Files {
-		out.Errors += countErrors(f.Diags)
+	out.Errors = countErrors(s.a.res.Diagnostics) // the file's syntax errors and the structure/include errors found here
+	for p, f := range s.a.res.Files {
+		if p != s.a.res.Path {
+			out.Errors += countErrors(f.Diags)
+		}
 	}
 	for _, sp := range s.species {
 		if sp.SMILESError != nil {

@@ -40,6 +40,9 @@ type compareFile struct {
 	Species   int    `json:"species"`
 	Reactions int    `json:"reactions"`
 	Errors    int    `json:"errors"`
+	// Unreadable lists species whose SMILES cannot be read: they match
+	// nothing and appear among the species only in their file.
+	Unreadable []string `json:"unreadable_structures"`
 }
 
 type compareThreshold struct {
@@ -209,6 +212,13 @@ func commonDir(a, b string) string {
 	}
 }
 
+func nonNil(s []string) []string {
+	if s == nil {
+		return []string{}
+	}
+	return s
+}
+
 func optString(s string) *string {
 	if s == "" {
 		return nil
@@ -218,8 +228,8 @@ func optString(s string) *string {
 
 func buildCompare(c *analysis.Comparison) compareJSON {
 	out := compareJSON{
-		A:          compareFile{displayPath(c.A.Path), c.A.Species, c.A.Reactions, c.A.Errors},
-		B:          compareFile{displayPath(c.B.Path), c.B.Species, c.B.Reactions, c.B.Errors},
+		A:          compareFile{displayPath(c.A.Path), c.A.Species, c.A.Reactions, c.A.Errors, nonNil(c.A.UnreadableStructure)},
+		B:          compareFile{displayPath(c.B.Path), c.B.Species, c.B.Reactions, c.B.Errors, nonNil(c.B.UnreadableStructure)},
 		Thresholds: compareThreshold{c.Settings.MismatchHf298 / 1000, c.Settings.MismatchS298, c.RateFactor},
 		Species:    []compareSpecies{}, Renames: []compareRename{}, Clashes: []compareClash{},
 		OnlyA: []compareRef{}, OnlyB: []compareRef{}, Reactions: []compareRxn{}, RxnOnlyA: []compareRxnRef{}, RxnOnlyB: []compareRxnRef{},
@@ -344,6 +354,9 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 	for _, f := range []compareFile{o.A, o.B} {
 		if f.Errors > 0 {
 			fmt.Fprintf(w, "note: %s has %d error(s) (`kiln check` lists them); broken statements were left out\n", f.File, f.Errors)
+		}
+		if n := len(f.Unreadable); n > 0 {
+			fmt.Fprintf(w, "note: %s: %d species with an unreadable SMILES match nothing (%s)\n", f.File, n, clip(strings.Join(f.Unreadable, ", "), 50))
 		}
 	}
 	fmt.Fprintf(w, "Species: %d matched by structure (%d under different names), %d only in A, %d only in B, %d name clash(es)\n",

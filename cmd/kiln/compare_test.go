@@ -42,6 +42,7 @@ func TestCompareMechanisms(t *testing.T) {
 	}
 	assert.Equal(t, map[string]string{"hydrogen-atom": "H", "hydroxyl": "OH", "water": "H2O", "ethane": "C2H6", "ethyl": "C2H5"}, renames)
 	assert.Contains(t, o.Renames[0].Suggestion, "rename hydrogen-atom to H in sub.kiln")
+	assert.Equal(t, compareFile{File: o.A.File, Species: 11, Reactions: 4, Errors: 0, Unreadable: []string{}}, o.A)
 
 	names := func(rs []compareRef) []string {
 		var out []string
@@ -155,4 +156,20 @@ func TestCompareText(t *testing.T) {
 	code, _, stderr = runKiln(t, "compare", compareA, compareB, "--rate-factor", "0.5")
 	assert.Equal(t, exitUsage, code)
 	assert.Contains(t, stderr, "--rate-factor")
+}
+
+// TestCompareUnreadable: species whose SMILES cannot be read match nothing,
+// are listed per file, and the same unreadable text is not a name clash.
+func TestCompareUnreadable(t *testing.T) {
+	a := writeTemp(t, "a.kiln", "species ok CC\nspecies bad C1CC\n")
+	b := writeTemp(t, "b.kiln", "species ok CC\nspecies bad C1CC\nspecies worse C(C\n")
+	o := compareJSONOf(t, exitOK, a, b)
+	assert.Equal(t, []string{"bad"}, o.A.Unreadable)
+	assert.Equal(t, []string{"bad", "worse"}, o.B.Unreadable)
+	assert.Equal(t, 1, o.Summary.Matched)
+	assert.Empty(t, o.Clashes)
+	assert.Equal(t, 1, o.A.Errors)
+	code, stdout, _ := runKiln(t, "compare", a, b)
+	assert.Equal(t, exitOK, code)
+	assert.Contains(t, stdout, "2 species with an unreadable SMILES match nothing (bad, worse)")
 }
