@@ -44,6 +44,8 @@ type analysis struct {
 	// via maps each included file to the include statement of the analysed
 	// file through which it is reached (where its problems are reported).
 	via map[string]*speciesfile.Include
+	// viaDups counts the same-structure reports made on each include.
+	viaDups map[*speciesfile.Include]int
 }
 
 func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {

@@ -23,6 +23,10 @@ func effectiveMultiplicity(lib *reflib.Library, sp *Species) int {
 	return sp.Mol.DefaultMultiplicity()
 }
 
+// maxIncludeDupReports bounds the same-structure warnings on one include
+// statement; one more says that there are more.
+const maxIncludeDupReports = 20
+
 // reportSameStructure reports that sp (declared in path) has the structure
 // and multiplicity of first, declared earlier under another name: on sp's
 // SMILES when path is the analysed file, else on the include statement of
@@ -40,6 +44,18 @@ func (a *analysis) reportSameStructure(path string, sp, first *Species) {
 	}
 	inc := a.via[path]
 	if inc == nil {
+		return
+	}
+	if a.viaDups == nil {
+		a.viaDups = map[*speciesfile.Include]int{}
+	}
+	a.viaDups[inc]++
+	switch n := a.viaDups[inc]; {
+	case n == maxIncludeDupReports+1:
+		a.report(a.res.Path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
+			Message: fmt.Sprintf("more structures brought in by %s are declared under two names; `kiln compare` lists them all", inc.Path.Text)})
+		return
+	case n > maxIncludeDupReports:
 		return
 	}
 	a.report(a.res.Path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,

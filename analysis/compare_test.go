@@ -240,3 +240,38 @@ func TestCompareGenerated(t *testing.T) {
 		assert.True(t, p.Renamed())
 	}
 }
+
+// TestIncludeDuplicatesBounded: an included file that repeats many of the
+// including file's structures under other names gets at most
+// maxIncludeDupReports warnings on the include, plus one that says there
+// are more.
+func TestIncludeDuplicatesBounded(t *testing.T) {
+	var main, sub strings.Builder
+	main.WriteString("include sub.kiln\n")
+	chain := "C"
+	for i := range 30 {
+		chain += "C"
+		fmt.Fprintf(&main, "species a%d %s\n", i, chain)
+		fmt.Fprintf(&sub, "species b%d %s\n", i, chain)
+	}
+	ws := NewWorkspace("/w", func(p string) ([]byte, error) {
+		if p == "/w/sub.kiln" {
+			return []byte(sub.String()), nil
+		}
+		return nil, fmt.Errorf("no file %s", p)
+	}, DefaultSettings())
+	ws.SetOverlay("/w/main.kiln", []byte(main.String()))
+	res, err := ws.Analyze(context.Background(), "/w/main.kiln")
+	require.NoError(t, err)
+	n, more := 0, 0
+	for _, d := range res.Diagnostics {
+		if d.Code == "duplicate-species" {
+			n++
+			if strings.Contains(d.Message, "kiln compare") {
+				more++
+			}
+		}
+	}
+	assert.Equal(t, maxIncludeDupReports+1, n)
+	assert.Equal(t, 1, more)
+}
