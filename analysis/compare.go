@@ -79,10 +79,9 @@ type SpeciesPair struct {
 	// has none, or when SameEstimate.
 	Thermo *ThermoDiff
 	// SameEstimate is true when both sides estimate the species (no thermo
-	// block on either side) with the same options: estimates depend on the
-	// structure, not its spelling, so the thermochemistry is identical (or,
-	// when kiln cannot estimate the structure, missing on both sides) and is
-	// not computed.
+	// block on either side) from the same SMILES text with the same
+	// options: the thermochemistry is identical (or, when kiln cannot
+	// estimate the structure, missing on both sides) and is not computed.
 	SameEstimate bool
 }
 
@@ -182,9 +181,10 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 	c := &Comparison{A: sa.summary(), B: sb.summary(), Settings: w.Settings(), RateFactor: opts.RateFactor}
 	matchA, matchB := matchSpecies(sa, sb)
 	// Thermochemistry for the matched species, estimated where not given.
-	// A pair matched by structure that both sides estimate with the same
-	// options has the same thermo by construction (estimates are made from
-	// the canonical spelling, see estimate()): not computed.
+	// A pair that both sides estimate from the same structure text with
+	// the same options has the same thermo by construction: not computed.
+	// (Differently spelled pairs are estimated: an estimate's independence
+	// of the spelling is tested, not assumed.)
 	need := make([]*Species, 0, 2*len(sb.species))
 	needSide := make([]*compareSide, 0, 2*len(sb.species))
 	sameEstimate := map[int]bool{}
@@ -194,7 +194,7 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 			continue
 		}
 		if other := sb.species[j]; sp.Given == nil && other.Given == nil && sp.Mol != nil &&
-			sa.a.estimateOptions(sp.Decl, sa.user).key("") == sb.a.estimateOptions(other.Decl, sb.user).key("") {
+			sa.a.estimateOptions(sp.Decl, sa.user).key(sp.ident) == sb.a.estimateOptions(other.Decl, sb.user).key(other.ident) {
 			sameEstimate[i] = true
 			continue
 		}

@@ -78,8 +78,8 @@ type compareValue struct {
 }
 
 // compareThermo compares a matched pair's thermo. When both sides estimate
-// the structure with the same options, same_estimate is true and the values
-// are omitted (identical on both sides, or missing on both when kiln cannot
+// it from the same SMILES text with the same options, same_estimate is true
+// and the values are omitted (identical on both sides, or missing on both when kiln cannot
 // estimate the structure).
 type compareThermo struct {
 	SourceA      string                  `json:"source_a"`

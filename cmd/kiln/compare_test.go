@@ -69,16 +69,22 @@ func TestCompareMechanisms(t *testing.T) {
 	assert.InDelta(t, 4.2*4.184, eth.Thermo.G["1000"].Diff, 1e-9, "same Cp and S: G differs by ΔHf only")
 	assert.Equal(t, []string{"hf298", "g300", "g1000", "g2000"}, eth.Flags)
 	assert.Equal(t, 1, o.Summary.ThermoFlagged)
-	// Matched species that both sides estimate (spelled alike or not,
-	// C[CH2] / [CH2]C) have the same thermo by construction: not computed.
+	// Matched species estimated on both sides: not computed when spelled
+	// alike; computed, and equal, when spelled differently (C[CH2] / [CH2]C).
 	for _, s := range o.Species {
 		if s.A == "ethanol" {
 			continue
 		}
 		assert.Empty(t, s.Flags, s.A)
 		require.NotNil(t, s.Thermo, s.A)
-		assert.True(t, s.Thermo.SameEstimate, s.A)
-		assert.Nil(t, s.Thermo.Hf298, s.A)
+		if *s.SMILESA != *s.SMILESB {
+			require.False(t, s.Thermo.SameEstimate, s.A)
+			assert.Zero(t, s.Thermo.Hf298.Diff, s.A)
+			assert.Zero(t, s.Thermo.G["2000"].Diff, s.A)
+		} else {
+			assert.True(t, s.Thermo.SameEstimate, s.A)
+			assert.Nil(t, s.Thermo.Hf298, s.A)
+		}
 	}
 
 	require.Len(t, o.Reactions, 2)
