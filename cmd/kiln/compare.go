@@ -392,7 +392,9 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 			if t == nil || t.SameEstimate || (len(p.Flags) > 0) != flaggedPass {
 				continue
 			}
-			if flaggedPass || t.Hf298.Diff != 0 || t.S298.Diff != 0 || t.G["1000"].Diff != 0 || t.Cp["1000"].Diff != 0 {
+			// Differences below 1e-6 (kJ/mol, J/(mol K)) are rounding noise.
+			noise := func(v float64) bool { return math.Abs(v) < 1e-6 }
+			if flaggedPass || !noise(t.Hf298.Diff) || !noise(t.S298.Diff) || !noise(t.G["1000"].Diff) || !noise(t.Cp["1000"].Diff) {
 				differ = append(differ, p)
 			}
 		}
