@@ -444,24 +444,20 @@ func (m *memo) reaction(a *analysis, path string, f *speciesfile.File, k int) *r
 func newReactionUnit(energyUnit string, deps []*speciesUnit, r *Reaction) *reactionUnit {
 	body := r.Decl.Body()
 	base := body.Start
-	u := &reactionUnit{energyUnit: energyUnit, pinned: -1, deps: deps, diags: relocate(r.diags, r.File, -base)}
+	u := &reactionUnit{energyUnit: energyUnit, pinned: -1, deps: deps, diags: relocate(r.diags, r.File, -base), tmpl: *r}
 	if pinned(r.diags, body.Start, body.End) {
 		u.pinned = base
 	}
-	u.tmpl = Reaction{
-		Balance: r.Balance, DH298: r.DH298, DS298: r.DS298, DG298: r.DG298, Kp: r.Kp,
-		ReverseRate1000: r.ReverseRate1000, Collision: r.Collision,
-		reactants: r.reactants, products: r.products,
-	}
+	u.tmpl.Decl, u.tmpl.File, u.tmpl.Line, u.tmpl.Equation, u.tmpl.diags = nil, "", 0, "", nil
 	return u
 }
 
-// apply copies the unit's computed fields into r.
+// apply copies the unit's computed fields into r (everything but what r
+// was made with: its statement, file, line, equation and resolution).
 func (u *reactionUnit) apply(r *Reaction) {
-	t := &u.tmpl
-	r.Balance, r.DH298, r.DS298, r.DG298, r.Kp = t.Balance, t.DH298, t.DS298, t.DG298, t.Kp
-	r.ReverseRate1000, r.Collision = t.ReverseRate1000, t.Collision
-	r.reactants, r.products = t.reactants, t.products
+	decl, file, line, eq, resolved := r.Decl, r.File, r.Line, r.Equation, r.Resolved
+	*r = u.tmpl
+	r.Decl, r.File, r.Line, r.Equation, r.Resolved = decl, file, line, eq, resolved
 }
 
 // keepReaction records a newly computed unit of reaction k of the file at path.
