@@ -151,6 +151,7 @@ type sigmaCalc struct {
 	n       int
 	classes []int
 	rot     []bool // per bond: rotatable
+	inRing  []bool // per bond: on a ring
 	frag    []int  // per atom: fragment index
 	frags   [][]int
 	g       *cgraph // whole molecule, for branch classes
@@ -166,6 +167,7 @@ func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 	n := len(m.Atoms)
 	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: make([]int, n), lp: make([]int, n), virtual: make([]bool, n)}
 	inRing := m.ringBondFlags()
+	sc.inRing = inRing
 	sc.rot = make([]bool, len(m.Bonds))
 	parent := make([]int, n)
 	for i := range parent {
@@ -484,7 +486,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 	}
 	// double bonds and allenes inside the fragment
-	inRing := m.ringBondFlags()
+	inRing := sc.inRing
 	doubles := func(i int) []int {
 		var out []int
 		for _, b := range m.Adj[i] {
