@@ -93,32 +93,41 @@ func (m *Molecule) SymmetryNumber() (*big.Int, error) {
 // SymmetryNumberContext is SymmetryNumber with cancellation: it returns
 // ctx.Err() (wrapped) if ctx is done before the result is known.
 func (m *Molecule) SymmetryNumberContext(ctx context.Context) (*big.Int, error) {
+	return m.symmetryNumber(ctx, DefaultSearchWork)
+}
+
+// symmetryNumber is SymmetryNumberContext with a work budget (atom
+// refinements): the whole-molecule search gets it, and the fragment searches
+// share another budget of the same size.
+func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, error) {
 	if len(m.Atoms) == 0 {
 		return big.NewInt(1), nil
 	}
-	info, err := m.symmetryInfo(ctx)
+	info, err := m.symmetryInfo(ctx, budget)
 	if err != nil {
 		return nil, err
 	}
 	classes := orbitClasses(len(m.Atoms), info.gens, info.labels)
 	sc := newSigmaCalc(ctx, m, classes)
+	sc.budget = budget
 	return sc.total()
 }
 
 // symmetryInfo returns the full symmetry analysis of m (cached when m came
-// from ParseSMILES), or an error when the search budget ran out.
-func (m *Molecule) symmetryInfo(ctx context.Context) (symmetryInfo, error) {
+// from ParseSMILES and the budget is the default), or an error when the
+// search budget ran out.
+func (m *Molecule) symmetryInfo(ctx context.Context, budget int) (symmetryInfo, error) {
 	var info symmetryInfo
-	if d := m.cache(); d != nil {
+	if d := m.cache(); d != nil && budget == DefaultSearchWork {
 		info = d.info
 	} else {
-		info = m.symmetryCtx(ctx, DefaultSearchWork, true)
+		info = m.symmetryCtx(ctx, budget, true)
 	}
 	if err := ctx.Err(); err != nil {
 		return info, fmt.Errorf("symmetry of %q: %w", m.SMILES, err)
 	}
 	if !info.exact {
-		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, DefaultSearchWork)
+		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, budget)
 	}
 	return info, nil
 }
@@ -159,6 +168,7 @@ type sigmaCalc struct {
 	local   []int
 	lp      []int
 	virtual []bool // per atom: cage atom with a virtual outward ligand
+	budget  int    // refinement steps left for the fragment searches
 	// parent bond of the fragment being analysed
 	pAtom, pNbr int
 }
@@ -577,7 +587,8 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 	}
 	g := m.cgraphOfSub(atoms, sc.local, sc.rot, extra)
 	root := g.refine(g.cell0)
-	s := &search{g: g, budget: DefaultSearchWork, root: root, ctx: sc.ctx}
+	s := &search{g: g, budget: sc.budget, root: root, ctx: sc.ctx}
+	defer func() { sc.budget -= s.steps }()
 	order := big.NewInt(1)
 	var labels []int
 	seenBuf := make([]bool, len(atoms))
@@ -715,7 +726,7 @@ func (sc *sigmaCalc) limitErr() error {
 	if err := sc.ctx.Err(); err != nil {
 		return fmt.Errorf("symmetry number of %q: %w", sc.m.SMILES, err)
 	}
-	return fmt.Errorf("symmetry number of %q: %w (more than %d refinement steps)", sc.m.SMILES, ErrWorkLimit, DefaultSearchWork)
+	return fmt.Errorf("symmetry number of %q: %w (work budget of %d refinement steps spent)", sc.m.SMILES, ErrWorkLimit, DefaultSearchWork)
 }
 
 // alike reports whether the two positions of a double-bond end are both

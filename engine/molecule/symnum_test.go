@@ -123,3 +123,17 @@ func TestCanonicalContext(t *testing.T) {
 	_, err = p.CanonicalContext(ctx)
 	assert.ErrorIs(t, err, context.Canceled)
 }
+
+// TestSymmetryWorkLimit checks that a search that runs out of its budget is
+// an error wrapping ErrWorkLimit, never a number.
+func TestSymmetryWorkLimit(t *testing.T) {
+	for _, s := range []string{"C12C3C4C1C5C2C3C45", "C1C2CC3CC1CC(C2)C3", "CC(C)(C)C(C(C)(C)C)(C(C)(C)C)C(C)(C)C"} {
+		m := parse(t, s)
+		_, err := m.symmetryNumber(context.Background(), 10)
+		require.Error(t, err, s)
+		assert.ErrorIs(t, err, ErrWorkLimit, s)
+		sg, err := m.symmetryNumber(context.Background(), DefaultSearchWork)
+		require.NoError(t, err, s)
+		assert.Positive(t, sg.Sign())
+	}
+}
