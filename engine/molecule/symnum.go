@@ -74,9 +74,13 @@ const maxSeeds = 64
 //     bridged bicycles (at most nine atoms) have both bridgeheads "out".
 //  4. Identical '.'-separated components multiply σ by k! for k copies.
 //
-// Stereo marks (@, @@, /, \) are not used: σ is that of the most symmetric
-// stereoisomer of the constitution (a meso form counts as its more symmetric
-// chiral diastereomer, e.g. 2,3-dichlorobutane 18 instead of 9). Branches on
+// Written configurations are used inside rigid fragments: tetrahedral
+// centres marked @/@@ (@TH1/@TH2) and double bonds marked / \ fix their
+// configuration relative to each other (cis-1,4-dimethylcyclohexane 9,
+// trans 18). Unmarked units take the most symmetric choice, and so does the
+// exchange of two identical halves across a central rotatable bond, marked
+// or not (a meso form such as meso-2,3-dichlorobutane counts as its more
+// symmetric chiral diastereomer: 18 instead of 9). Branches on
 // one atom count as alike when colour refinement with that atom singled out
 // cannot tell them apart (exact for trees; graphs that refinement cannot
 // separate are not expected in chemistry). Work is bounded: the symmetry
@@ -397,20 +401,7 @@ func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 			out = append(out, colParent)
 			continue
 		}
-		dup := false
-		for _, b2 := range m.Adj[i] {
-			if w := m.Other(b2, i); b2 != b && sc.rot[b2] && sc.classes[w] == sc.classes[v] && !(i == sc.pAtom && w == sc.pNbr) {
-				dup = true
-			}
-		}
-		c := sc.classes[v] * (sc.n + 1)
-		if dup {
-			if ranks == nil {
-				ranks = sc.refinedAt(i)
-			}
-			c += ranks[v] + 1
-		}
-		out = append(out, c)
+		out = append(out, sc.branchColour(i, v, &ranks))
 	}
 	for k := 0; k < m.Atoms[i].HCount; k++ {
 		out = append(out, colH)
@@ -421,6 +412,112 @@ func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 		}
 	}
 	slices.Sort(out)
+	return out
+}
+
+// branchColour is the colour of the branch across the rotatable bond from
+// atom i to its neighbour v (not the parent): its orbit class, refined by
+// the partition with i singled out when another branch of i shares the
+// class. *ranks caches that partition for atom i.
+func (sc *sigmaCalc) branchColour(i, v int, ranks *[]int) int {
+	m := sc.m
+	dup := false
+	for _, b2 := range m.Adj[i] {
+		if w := m.Other(b2, i); w != v && sc.rot[b2] && sc.classes[w] == sc.classes[v] && !(i == sc.pAtom && w == sc.pNbr) {
+			dup = true
+		}
+	}
+	c := sc.classes[v] * (sc.n + 1)
+	if dup {
+		if *ranks == nil {
+			*ranks = sc.refinedAt(i)
+		}
+		c += (*ranks)[v] + 1
+	}
+	return c
+}
+
+// positionCode is the position code (see centrePositions) of neighbour v of
+// atom i in the current fragment; v < 0 stands for a hydrogen.
+func (sc *sigmaCalc) positionCode(i, v int) int {
+	if v < 0 {
+		return -(colH + 10)
+	}
+	b := sc.m.BondBetween(i, v)
+	if b < 0 {
+		return 1 << 30
+	}
+	if !sc.rot[b] {
+		return v
+	}
+	if i == sc.pAtom && v == sc.pNbr {
+		return -(colParent + 10)
+	}
+	var ranks []int
+	return -(sc.branchColour(i, v, &ranks) + 10)
+}
+
+// writtenStereo returns the configuration equations {unit, ground, bit} of
+// the units whose configuration the SMILES states: tetrahedral centres marked
+// @/@@ (or @TH1/@TH2) and double bonds marked with / and \. The bit is the
+// written configuration relative to the unit's reference; ground is a
+// virtual unit, so only the relative configurations count (a molecule and
+// its mirror image have the same σ).
+func (sc *sigmaCalc) writtenStereo(units []unit, ground int) [][3]int {
+	m := sc.m
+	var out [][3]int
+	var ct []CisTrans
+	ctDone := false
+	for k, u := range units {
+		switch u.kind {
+		case 't':
+			a := m.Atoms[u.x]
+			odd := 0
+			switch a.Chirality {
+			case "@", "@TH1":
+			case "@@", "@TH2":
+				odd = 1
+			default:
+				continue
+			}
+			if u.x >= len(m.nbrOrder) || len(m.nbrOrder[u.x]) != 4 || sc.virtual[u.x] {
+				continue
+			}
+			pos := sc.centrePositions(u.x)
+			p := make([]int, 4)
+			for i, v := range m.nbrOrder[u.x] {
+				p[i] = slices.Index(pos, sc.positionCode(u.x, v))
+			}
+			if !isPerm(p) {
+				continue
+			}
+			out = append(out, [3]int{k, ground, permParity(p) ^ odd})
+		case 'd':
+			if !ctDone {
+				ct, ctDone = m.DoubleBondStereo(), true
+			}
+			for _, c := range ct {
+				bd := m.Bonds[c.Bond]
+				if !((bd.A == u.x && bd.B == u.y) || (bd.A == u.y && bd.B == u.x)) {
+					continue
+				}
+				xa, ya := c.A, c.B // marked substituents on the u.x and u.y sides
+				if bd.A != u.x {
+					xa, ya = c.B, c.A
+				}
+				ia := slices.Index(sc.endPositions(u.x, u.y), sc.positionCode(u.x, xa))
+				ib := slices.Index(sc.endPositions(u.y, u.x), sc.positionCode(u.y, ya))
+				if ia < 0 || ib < 0 {
+					continue
+				}
+				bit := 0
+				if (ia == ib) != c.Cis {
+					bit = 1
+				}
+				out = append(out, [3]int{k, ground, bit})
+			}
+		}
+	}
 	return out
 }
 
@@ -669,7 +766,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 	}
 	best := 0
-	nu := len(units)
+	nu := len(units) + 1 // the last node is the ground of written configurations
 	par := make([]int, nu)
 	bits := make([]int, nu)
 	save := make([]int, 2*nu)
@@ -681,7 +778,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 		return x, p
 	}
-	fixed := sc.cisFusions(units)
+	fixed := append(sc.writtenStereo(units, len(units)), sc.cisFusions(units)...)
 	for seed := 0; seed < len(cands) && seed < maxSeeds; seed++ {
 		for i := range par {
 			par[i], bits[i] = i, 0

@@ -137,3 +137,21 @@ func TestSymmetryWorkLimit(t *testing.T) {
 		assert.Positive(t, sg.Sign())
 	}
 }
+
+// TestSymmetryNumberWrittenStereo checks that configurations written with
+// @/@@ inside a rigid fragment are used: the two 1,4-dimethylcyclohexanes
+// are trans (C_2h, σ_ext 2) and cis (C_s, σ_ext 1), so their σ differ by 2,
+// and an unmarked spelling takes the more symmetric one.
+func TestSymmetryNumberWrittenStereo(t *testing.T) {
+	sigma := func(s string) int64 {
+		v, err := parse(t, s).SymmetryNumber()
+		require.NoError(t, err, s)
+		return v.Int64()
+	}
+	a, b := sigma("C[C@H]1CC[C@H](C)CC1"), sigma("C[C@H]1CC[C@@H](C)CC1")
+	assert.ElementsMatch(t, []int64{9, 18}, []int64{a, b})
+	assert.Equal(t, int64(18), sigma("CC1CCC(C)CC1"))
+	// cis/trans-1,2-dimethylcyclopropane: cis C_s (1), trans C_2 (2)
+	c, d := sigma("C[C@H]1C[C@H]1C"), sigma("C[C@H]1C[C@@H]1C")
+	assert.ElementsMatch(t, []int64{9, 18}, []int64{c, d})
+}
