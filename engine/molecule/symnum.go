@@ -77,10 +77,10 @@ const maxSeeds = 64
 // Written configurations are used inside rigid fragments: tetrahedral
 // centres marked @/@@ (@TH1/@TH2) and double bonds marked / \ fix their
 // configuration relative to each other (cis-1,4-dimethylcyclohexane 9,
-// trans 18). Unmarked units take the most symmetric choice, and so does the
-// exchange of two identical halves across a central rotatable bond, marked
-// or not (a meso form such as meso-2,3-dichlorobutane counts as its more
-// symmetric chiral diastereomer: 18 instead of 9). Branches on
+// trans 18), and the exchange of two identical halves across a central
+// rotatable bond counts only when it keeps the written @/@@ marks (meso- and
+// dl-2,3-dichlorobutane: 9 and 18). Unmarked units take the most symmetric
+// choice (unmarked 2,3-dichlorobutane: 18). Branches on
 // one atom count as alike when colour refinement with that atom singled out
 // cannot tell them apart (exact for trees; graphs that refinement cannot
 // separate are not expected in chemistry). Work is bounded: the symmetry
@@ -114,6 +114,7 @@ func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, er
 	classes := orbitClasses(len(m.Atoms), info.gens, info.labels)
 	sc := newSigmaCalc(ctx, m, classes)
 	sc.budget = budget
+	sc.gens = info.gens
 	return sc.total()
 }
 
@@ -171,8 +172,9 @@ type sigmaCalc struct {
 	root    []int   // refined initial partition of g
 	local   []int
 	lp      []int
-	virtual []bool // per atom: cage atom with a virtual outward ligand
-	budget  int    // refinement steps left for the fragment searches
+	virtual []bool  // per atom: cage atom with a virtual outward ligand
+	budget  int     // refinement steps left for the fragment searches
+	gens    [][]int // generators of the whole molecule's automorphism group
 	// parent bond of the fragment being analysed
 	pAtom, pNbr int
 }
@@ -355,7 +357,7 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 			}
 		}
 		u, v := m.Bonds[cb].A, m.Bonds[cb].B
-		if sc.classes[u] == sc.classes[v] {
+		if sc.classes[u] == sc.classes[v] && sc.swapKeepsMarks(u, v) {
 			sigma.SetInt64(2)
 		}
 		queue = append(queue, item{sc.frag[u], u, v}, item{sc.frag[v], v, u})
@@ -1172,4 +1174,66 @@ func isPerm(p []int) bool {
 		seen[x] = true
 	}
 	return true
+}
+
+// swapKeepsMarks reports whether the two identical halves on either side of
+// the central bond u–v can be exchanged without changing a written
+// tetrahedral configuration (@/@@): some graph automorphism mapping u to v
+// maps every marked centre onto a marked centre with the same configuration.
+// A meso form (halves mirror images of each other) fails. Without marks, or
+// when the group is too large to search (more than 5000 elements), the
+// exchange counts (most symmetric stereoisomer).
+func (sc *sigmaCalc) swapKeepsMarks(u, v int) bool {
+	m := sc.m
+	var marked []int
+	for i, a := range m.Atoms {
+		if a.Chirality == "@" || a.Chirality == "@@" || a.Chirality == "@TH1" || a.Chirality == "@TH2" {
+			if i < len(m.nbrOrder) && len(m.nbrOrder[i]) == 4 {
+				marked = append(marked, i)
+			}
+		}
+	}
+	if len(marked) == 0 || len(sc.gens) == 0 {
+		return true
+	}
+	elems := groupElements(sc.gens, maxFragmentGroup+1)
+	if len(elems) > maxFragmentGroup {
+		return true
+	}
+	odd := func(c string) int {
+		if c == "@@" || c == "@TH2" {
+			return 1
+		}
+		return 0
+	}
+	for _, phi := range elems {
+		if phi[u] != v {
+			continue
+		}
+		ok := true
+		for _, x := range marked {
+			y := phi[x]
+			cy := m.Atoms[y].Chirality
+			if y >= len(m.nbrOrder) || len(m.nbrOrder[y]) != 4 || (cy != "@" && cy != "@@" && cy != "@TH1" && cy != "@TH2") {
+				ok = false
+				break
+			}
+			p := make([]int, 4)
+			for k, w := range m.nbrOrder[x] {
+				img := -1
+				if w >= 0 {
+					img = phi[w]
+				}
+				p[k] = slices.Index(m.nbrOrder[y], img)
+			}
+			if !isPerm(p) || permParity(p)^odd(m.Atoms[x].Chirality)^odd(cy) != 0 {
+				ok = false
+				break
+			}
+		}
+		if ok {
+			return true
+		}
+	}
+	return false
 }

@@ -155,3 +155,20 @@ func TestSymmetryNumberWrittenStereo(t *testing.T) {
 	c, d := sigma("C[C@H]1C[C@H]1C"), sigma("C[C@H]1C[C@@H]1C")
 	assert.ElementsMatch(t, []int64{9, 18}, []int64{c, d})
 }
+
+// TestSymmetryNumberMeso checks the exchange of identical halves against
+// written marks: (2R,3R)-2,3-dichlorobutane has a C2 axis (σ = 2·3·3), the
+// meso form only a mirror or inversion centre (σ = 3·3).
+func TestSymmetryNumberMeso(t *testing.T) {
+	sigma := func(s string) int64 {
+		v, err := parse(t, s).SymmetryNumber()
+		require.NoError(t, err, s)
+		return v.Int64()
+	}
+	// CIP labels from RDKit 2022.09: (S,S) and (S,R) = meso
+	assert.Equal(t, int64(18), sigma("C[C@H](Cl)[C@H](C)Cl"), "(2S,3S)")
+	assert.Equal(t, int64(9), sigma("C[C@H](Cl)[C@@H](C)Cl"), "meso")
+	assert.Equal(t, int64(18), sigma("Cl[C@@H](C)[C@@H](Cl)C"), "(2S,3S) written from the other end")
+	assert.Equal(t, int64(9), sigma("Cl[C@@H](C)[C@H](Cl)C"), "meso written from the other end")
+	assert.Equal(t, int64(18), sigma("CC(Cl)C(C)Cl"), "unmarked: most symmetric")
+}
