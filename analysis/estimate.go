@@ -18,6 +18,10 @@ type EstimateOptions struct {
 	Multiplicity, Symmetry, OpticalIsomers int // 0 = computed from the structure
 	UserGroups                             []benson.GroupValue
 	TMid, THigh                            float64
+	// ExplicitRange makes TMid and THigh apply to reference-library species
+	// too (refitted to the library polynomial); otherwise those keep the
+	// library's own ranges.
+	ExplicitRange bool
 
 	userKey string // groupsKey(UserGroups), computed once per analysis
 }
@@ -35,6 +39,9 @@ func (o EstimateOptions) key(ident string) string {
 	for _, f := range []float64{o.TMid, o.THigh} {
 		b.WriteByte('|')
 		b.WriteString(strconv.FormatFloat(f, 'g', -1, 64))
+	}
+	if o.ExplicitRange {
+		b.WriteString("|x")
 	}
 	if len(o.UserGroups) > 0 {
 		if o.userKey == "" {
@@ -124,6 +131,9 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		}
 		for i, T := range benson.StdTemps {
 			e.Cp[i] = sp.Poly.Cp(T)
+		}
+		if o.ExplicitRange && (o.TMid != sp.Poly.TMid || o.THigh != sp.Poly.THigh) {
+			e.fit, e.tMid, e.tHigh = &fitResult{}, o.TMid, o.THigh
 		}
 		return e, nil
 	}

@@ -21,7 +21,8 @@
 // that its neighbour's group names (the =O of CO, a halogen ligand); the
 // supported elements and environments are exactly the centres and ligands
 // the loaded tables hold, so new group files extend the scope with no code
-// change. Anything else — an element or environment without groups, a
+// change (groups.tsv for C/H/O, groups_nsx.tsv for N, S, F, Cl and Br; see
+// hetero.go). Anything else — an element or environment without groups, a
 // molecule too small to have groups, a charged atom, a multiplicity other
 // than the one the structure implies — is refused with an *UnsupportedError
 // (or a *MissingGroupError naming a group the user could supply); no atom is
@@ -182,6 +183,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	addRingCorrections(g, tab, est)
 	addInteractions(g, tab, est)
+	addHalogenFlags(g, tab, est)
 	if unpaired > 0 {
 		if err := addHBI(m, g, tab, est); err != nil {
 			return nil, err

@@ -45,6 +45,9 @@ const hfH = 52.10 * calorie * 1000
 var builtin = sync.OnceValue(func() *tables {
 	t := &tables{groups: map[string]GroupValue{}, corrections: map[string]GroupValue{}, hbi: map[string]hbiValue{}, centres: map[string]bool{}}
 	groups := mustParse("groups.tsv", groupsTSV)
+	for _, x := range extraGroupTables {
+		groups = append(groups, mustParse(x.file, x.text)...)
+	}
 	for i := range groups {
 		name, err := ParseGroupName(groups[i].Name)
 		if err != nil {
@@ -67,7 +70,7 @@ var builtin = sync.OnceValue(func() *tables {
 		panic(fmt.Sprintf("benson: systems.tsv: %v", err))
 	}
 	t.systems = sys
-	for _, r := range mustParse("hbi.tsv", hbiTSV) {
+	for _, r := range append(mustParse("hbi.tsv", hbiTSV), mustParse("hbi_nsx.tsv", hbiNSXTSV)...) {
 		// Column 2 holds D(R–H); the ΔHf increment is D − ΔHf(H).
 		v := r.GroupValue
 		bde := v.Hf298
