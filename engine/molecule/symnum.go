@@ -175,6 +175,8 @@ type sigmaCalc struct {
 	virtual []bool  // per atom: cage atom with a virtual outward ligand
 	budget  int     // refinement steps left for the fragment searches
 	gens    [][]int // generators of the whole molecule's automorphism group
+	elems   [][]int // its elements, enumerated on demand (at most 5001)
+	marked  []int   // atoms with a written tetrahedral mark, nil until known
 	// parent bond of the fragment being analysed
 	pAtom, pNbr int
 }
@@ -569,6 +571,9 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 	for _, x := range atoms {
 		tet := sc.tetrahedral(x)
 		col := sc.outside(x, tet)
+		if len(atoms) == 1 && len(sc.markedAtoms()) > 0 {
+			col = sc.outsideSplit(x, tet)
+		}
 		dup := false
 		for k := 0; k < len(col); {
 			e := k
@@ -1184,20 +1189,39 @@ func isPerm(p []int) bool {
 // when the group is too large to search (more than 5000 elements), the
 // exchange counts (most symmetric stereoisomer).
 func (sc *sigmaCalc) swapKeepsMarks(u, v int) bool {
-	m := sc.m
-	var marked []int
-	for i, a := range m.Atoms {
-		if a.Chirality == "@" || a.Chirality == "@@" || a.Chirality == "@TH1" || a.Chirality == "@TH2" {
-			if i < len(m.nbrOrder) && len(m.nbrOrder[i]) == 4 {
-				marked = append(marked, i)
+	return sc.keepsMarks([][2]int{{u, v}})
+}
+
+// marked returns the atoms with a written tetrahedral mark (cached).
+func (sc *sigmaCalc) markedAtoms() []int {
+	if sc.marked == nil {
+		m := sc.m
+		sc.marked = []int{}
+		for i, a := range m.Atoms {
+			if isTetraMark(a.Chirality) && i < len(m.nbrOrder) && len(m.nbrOrder[i]) == 4 {
+				sc.marked = append(sc.marked, i)
 			}
 		}
 	}
+	return sc.marked
+}
+
+func isTetraMark(c string) bool { return c == "@" || c == "@@" || c == "@TH1" || c == "@TH2" }
+
+// keepsMarks reports whether some graph automorphism maps every pair's
+// first atom to its second and every marked centre onto a marked centre
+// with the same configuration. Without marks, or when the group has more
+// than 5000 elements, it reports true (most symmetric stereoisomer).
+func (sc *sigmaCalc) keepsMarks(req [][2]int) bool {
+	m := sc.m
+	marked := sc.markedAtoms()
 	if len(marked) == 0 || len(sc.gens) == 0 {
 		return true
 	}
-	elems := groupElements(sc.gens, maxFragmentGroup+1)
-	if len(elems) > maxFragmentGroup {
+	if sc.elems == nil {
+		sc.elems = groupElements(sc.gens, maxFragmentGroup+1)
+	}
+	if len(sc.elems) > maxFragmentGroup {
 		return true
 	}
 	odd := func(c string) int {
@@ -1206,17 +1230,18 @@ func (sc *sigmaCalc) swapKeepsMarks(u, v int) bool {
 		}
 		return 0
 	}
-	for _, phi := range elems {
-		if phi[u] != v {
-			continue
+next:
+	for _, phi := range sc.elems {
+		for _, r := range req {
+			if phi[r[0]] != r[1] {
+				continue next
+			}
 		}
-		ok := true
 		for _, x := range marked {
 			y := phi[x]
 			cy := m.Atoms[y].Chirality
-			if y >= len(m.nbrOrder) || len(m.nbrOrder[y]) != 4 || (cy != "@" && cy != "@@" && cy != "@TH1" && cy != "@TH2") {
-				ok = false
-				break
+			if y >= len(m.nbrOrder) || len(m.nbrOrder[y]) != 4 || !isTetraMark(cy) {
+				continue next
 			}
 			p := make([]int, 4)
 			for k, w := range m.nbrOrder[x] {
@@ -1227,13 +1252,71 @@ func (sc *sigmaCalc) swapKeepsMarks(u, v int) bool {
 				p[k] = slices.Index(m.nbrOrder[y], img)
 			}
 			if !isPerm(p) || permParity(p)^odd(m.Atoms[x].Chirality)^odd(cy) != 0 {
-				ok = false
-				break
+				continue next
 			}
 		}
-		if ok {
-			return true
-		}
+		return true
 	}
 	return false
+}
+
+// splitByMarks refines the branch colours col of the rotatable-bond
+// neighbours nb of atom x (parallel lists): two alike branches stay alike
+// only when an automorphism fixing x exchanges them and keeps the written
+// marks (the two arms of meso-2,4-pentanediol are mirror images, not alike).
+// Used for one-atom fragments, whose colours are compared only among
+// themselves.
+func (sc *sigmaCalc) splitByMarks(x int, nb, col []int) {
+	if len(sc.markedAtoms()) == 0 {
+		return
+	}
+	for i := range nb {
+		if col[i] < 0 {
+			continue
+		}
+		sub := 0
+		for j := 0; j < i; j++ {
+			if col[j] < 0 {
+				continue
+			}
+			if col[j]/64 == col[i] && sc.keepsMarks([][2]int{{x, x}, {nb[j], nb[i]}}) {
+				sub = col[j] % 64
+				break
+			}
+			if col[j]/64 == col[i] {
+				sub = max(sub, col[j]%64+1)
+			}
+		}
+		col[i] = col[i]*64 + sub
+	}
+}
+
+// outsideSplit is outside for a one-atom fragment, with alike branches
+// split by splitByMarks.
+func (sc *sigmaCalc) outsideSplit(i int, withLP bool) []int {
+	m := sc.m
+	var nb, col []int
+	var ranks []int
+	for _, b := range m.Adj[i] {
+		if !sc.rot[b] {
+			continue
+		}
+		v := m.Other(b, i)
+		if i == sc.pAtom && v == sc.pNbr {
+			nb, col = append(nb, v), append(col, colParent)
+			continue
+		}
+		nb, col = append(nb, v), append(col, sc.branchColour(i, v, &ranks))
+	}
+	sc.splitByMarks(i, nb, col)
+	for k := 0; k < m.Atoms[i].HCount; k++ {
+		col = append(col, colH)
+	}
+	if withLP {
+		for k := 0; k < sc.lp[i]; k++ {
+			col = append(col, colLP)
+		}
+	}
+	slices.Sort(col)
+	return col
 }

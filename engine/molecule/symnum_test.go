@@ -171,4 +171,9 @@ func TestSymmetryNumberMeso(t *testing.T) {
 	assert.Equal(t, int64(18), sigma("Cl[C@@H](C)[C@@H](Cl)C"), "(2S,3S) written from the other end")
 	assert.Equal(t, int64(9), sigma("Cl[C@@H](C)[C@H](Cl)C"), "meso written from the other end")
 	assert.Equal(t, int64(18), sigma("CC(Cl)C(C)Cl"), "unmarked: most symmetric")
+	// a central CH2 between two marked centres: 2,4-pentanediol
+	// (S,S) C2: 2·3·3; meso C_s: 3·3 (CIP labels from RDKit 2022.09)
+	assert.Equal(t, int64(18), sigma("C[C@H](O)C[C@H](C)O"), "(2S,4S)")
+	assert.Equal(t, int64(9), sigma("C[C@H](O)C[C@@H](C)O"), "meso")
+	assert.Equal(t, int64(18), sigma("CC(O)CC(C)O"), "unmarked")
 }
