@@ -116,6 +116,16 @@ func (a *analysis) parallel(n, grain int, fn func(i int)) error {
 	return a.ctx.Err()
 }
 
+// reported returns the number of diagnostics reported so far (to the sink
+// while one is set): a rule compares counts to learn whether an earlier
+// check of the same declaration found something.
+func (a *analysis) reported() int {
+	if a.sink != nil {
+		return len(*a.sink)
+	}
+	return len(a.res.Diagnostics)
+}
+
 // report adds a diagnostic when it belongs to the analysed file (or to the
 // sink of the statement whose rules are running).
 func (a *analysis) report(file string, d speciesfile.Diagnostic) {

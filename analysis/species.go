@@ -416,7 +416,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		return
 	}
 	g := sp.Given
-	before := len(a.res.Diagnostics)
+	before := a.reported()
 	if g.Poly != nil {
 		cpMax := 0.0
 		if sp.Mol != nil || len(sp.Composition) > 0 {
@@ -443,7 +443,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 	if g.Table != nil {
 		a.tableChecks(path, sp)
 	}
-	defects := len(a.res.Diagnostics) > before
+	defects := a.reported() > before
 	if sp.Estimate == nil {
 		return
 	}
