@@ -449,6 +449,15 @@ func newReactionUnit(energyUnit string, deps []*speciesUnit, r *Reaction) *react
 		u.pinned = base
 	}
 	u.tmpl.Decl, u.tmpl.File, u.tmpl.Line, u.tmpl.Equation, u.tmpl.diags = nil, "", 0, "", nil
+	if r.model != nil && r.model.kc != nil {
+		// The model's Kc is bound to r, which holds its syntax node (and
+		// through it the whole parse of its file): bind it to a reaction
+		// holding only the thermochemistry Kc reads, so that a kept unit
+		// keeps no old parse alive.
+		m := *r.model
+		m.kc = (&Reaction{reactants: r.reactants, products: r.products}).Kc
+		u.tmpl.model = &m
+	}
 	return u
 }
 
