@@ -32,7 +32,7 @@ func benchAnalyze(b *testing.B, n int) {
 	}
 }
 
-func BenchmarkCheck1k(b *testing.B)  { benchAnalyze(b, 1000) }
+func BenchmarkCheck1k(b *testing.B) { benchAnalyze(b, 1000) }
 
 // BenchmarkTokenise10k reads (copies) and parses the 10k-molecule file:
 // the denominator of the check ÷ reading+tokenising ratio.

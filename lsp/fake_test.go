@@ -45,7 +45,7 @@ type fakeEditor struct {
 	notify   chan struct{}                  // closed and replaced on every publication or settled analysis
 	liText   string                         // the text liCache indexes
 	liCache  *speciesfile.LineIndex
-	messages []string                       // window/showMessage texts
+	messages []string // window/showMessage texts
 }
 
 type fakeOptions struct {
