@@ -55,6 +55,10 @@ type snapshot struct {
 	index   *ide.Index
 }
 
+// maxPendingEdits bounds the edits kept between a document's latest
+// finished analysis and its current text.
+const maxPendingEdits = 10000
+
 // textEdit is one change of a document's text: bytes [start, end) of the
 // text before it were replaced by newLen bytes.
 type textEdit struct {
@@ -136,6 +140,12 @@ func (s *server) didChange(raw json.RawMessage) error {
 		d.seq++
 		e.seq = d.seq
 		d.edits = append(d.edits, e)
+		if len(d.edits) > maxPendingEdits {
+			// No analysis has finished for a long while (it keeps failing):
+			// stop mapping through an ever longer log; requests wait for
+			// the next analysis instead.
+			d.latest, d.edits = nil, nil
+		}
 	}
 	d.text, d.lines = text, lines
 	d.version = p.TextDocument.Version
