@@ -36,9 +36,23 @@ vscode() {
   npm test && npm run package && [[ -s kiln-0.1.0.vsix ]]
 }
 
+# A generated mechanism of ~5,000 species for the edit -> diagnostics tests.
+big=""
+if command -v go >/dev/null; then
+  bigdir=$(mktemp -d)
+  trap 'rm -rf "$bigdir"' EXIT
+  if (cd "$here/.." && go run ./internal/tools/genmech -molecules 2500 -seed 1 >"$bigdir/big5k.kiln"); then
+    big="$bigdir/big5k.kiln"
+  else
+    failed+=("genmech")
+  fi
+else
+  echo "editors: go not found; the large-file editor tests are skipped"
+fi
+
 run vscode vscode
-run nvim "$here/nvim/test/run.sh" "$binary"
-run emacs "$here/emacs/test/run.sh" "$binary"
+run nvim "$here/nvim/test/run.sh" "$binary" "$big"
+run emacs "$here/emacs/test/run.sh" "$binary" "$big"
 
 if ((${#failed[@]} > 0)); then
   echo "editors: failed: ${failed[*]}"

@@ -160,13 +160,13 @@ func TestFillRangesAndSkips(t *testing.T) {
   multiplicity 3
 species OH [OH]
 species ethanol CCO
-species amine CCN
+species pyridine c1ccncc1
 species lump
   composition C2
 `)
 	code, _, stderr := runKiln(t, "fill", "--tmid", "1200", "--thigh", "3000", path)
 	assert.Equal(t, exitProblems, code, stderr)
-	assert.Regexp(t, `f.kiln:5:9: skipped amine: cannot estimate: .*no value .*group`, stderr)
+	assert.Regexp(t, `f.kiln:5:9: skipped pyridine: cannot estimate: .*no value .*group`, stderr)
 	assert.Regexp(t, `f.kiln:6:9: skipped lump: no structure`, stderr)
 	assert.Contains(t, stderr, "inserted 3 thermo block(s), skipped 2 species")
 	out, err := os.ReadFile(path)

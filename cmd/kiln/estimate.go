@@ -221,7 +221,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 			fmt.Fprintln(w, "  (source: --sources or --json)")
 		}
 	}
-	fmt.Fprintf(w, "  ΔHf°298 = %s (%s), ± %s (class MAE)\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.Uncertainty))
+	fmt.Fprintf(w, "  ΔHf°298 = %s (%s), ± %s, 1σ: class error widened by each approximation\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.Uncertainty))
 	fmt.Fprintf(w, "  S°298   = %s (%s)\n", u.Entropy(est.S298), other.Entropy(est.S298))
 	fmt.Fprintf(w, "  Cp in %s:", u.EntropyName())
 	for i, T := range benson.StdTemps {

@@ -8,11 +8,13 @@ import (
 )
 
 // DefaultSearchWork is the work budget of the symmetry search used by
-// Canonical, CanonicalStereo and SymmetryClasses, in atom-refinements (one
-// partition refinement of an n-atom component costs n). Ordinary molecules
-// need well under a thousand; the budget bounds pathological inputs (hundreds
-// of identical branches) to about a second.
-const DefaultSearchWork = 4000000
+// Canonical, CanonicalStereo, SymmetryClasses and SymmetryNumber, in
+// atom-refinements (one partition refinement of an n-atom component costs
+// n). Ordinary molecules need well under a thousand, cages such as C60 a few
+// thousand; the budget bounds pathological inputs to roughly a tenth of a
+// second, after which CanonicalContext and SymmetryNumber report
+// ErrWorkLimit.
+const DefaultSearchWork = 1000000
 
 // cgraph is the heavy-atom graph seen by the symmetry search: atoms coloured
 // by their properties, bonds coloured by type.

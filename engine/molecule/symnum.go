@@ -57,7 +57,10 @@ const maxSeeds = 64
 //     - an acyclic double bond keeps cis partners cis (an end with two alike
 //     ligands halves the count instead); an allene keeps its handedness;
 //     - rings are planar, except a lone saturated six-membered ring, which is
-//     a chair (D3d);
+//     a chair (D3d), and cages (every atom bonded to three or more atoms of
+//     the fragment, three or more rings), which are 3-D: a three-connected
+//     cage atom without other ligands (fullerene carbon) is checked like a
+//     tetrahedral atom whose fourth ligand is its outward side;
 //     - rigid 3-D fragments (cages, bridged and fused saturated rings) are
 //     checked at every tetrahedral atom together: kiln picks the
 //     configuration of the tetrahedral atoms and double bonds that gives the
@@ -65,7 +68,10 @@ const maxSeeds = 64
 //     the only one that exists), by a search seeded at each of the first 64
 //     symmetry elements in canonical order. For an achiral rigid structure
 //     this keeps exactly the rotations: half of its graph automorphisms
-//     (adamantane 24 → 12, cubane 48 → 24, norbornane 4 → 2).
+//     (adamantane 24 → 12, cubane 48 → 24, norbornane 4 → 2). Geometries
+//     that small rings cannot take are excluded first: fusions with a ring
+//     of at most four atoms (or two of at most five) are cis, and small
+//     bridged bicycles (at most nine atoms) have both bridgeheads "out".
 //  4. Identical '.'-separated components multiply σ by k! for k copies.
 //
 // Stereo marks (@, @@, /, \) are not used: σ is that of the most symmetric
@@ -133,6 +139,7 @@ func (m *Molecule) OpticalIsomers() int {
 
 // Ligand colours of the outside positions of a fragment atom.
 const (
+	colOut    = -5 // the outward side of a three-connected cage atom
 	colParent = -4 // the bond to the parent fragment (unique)
 	colLP     = -3 // a lone pair counted as a ligand
 	colH      = -2 // an implicit hydrogen
@@ -150,13 +157,14 @@ type sigmaCalc struct {
 	root    []int   // refined initial partition of g
 	local   []int
 	lp      []int
+	virtual []bool // per atom: cage atom with a virtual outward ligand
 	// parent bond of the fragment being analysed
 	pAtom, pNbr int
 }
 
 func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 	n := len(m.Atoms)
-	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: make([]int, n), lp: make([]int, n)}
+	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: make([]int, n), lp: make([]int, n), virtual: make([]bool, n)}
 	inRing := m.ringBondFlags()
 	sc.rot = make([]bool, len(m.Bonds))
 	parent := make([]int, n)
@@ -236,6 +244,7 @@ func (sc *sigmaCalc) total() (*big.Int, error) {
 	// Identical components share orbit classes (the search joins them), and
 	// different ones share none: k copies multiply σ by k!.
 	copies := map[int]int{}
+	known := map[int]*big.Int{} // σ of a component, by its key
 	for _, atoms := range comps {
 		key := sc.classes[atoms[0]]
 		for _, a := range atoms {
@@ -243,9 +252,13 @@ func (sc *sigmaCalc) total() (*big.Int, error) {
 		}
 		copies[key]++
 		sigma.Mul(sigma, big.NewInt(int64(copies[key])))
-		s, err := sc.component(atoms)
-		if err != nil {
-			return nil, err
+		s, ok := known[key]
+		if !ok {
+			var err error
+			if s, err = sc.component(atoms); err != nil {
+				return nil, err
+			}
+			known[key] = s
 		}
 		sigma.Mul(sigma, s)
 	}
@@ -432,6 +445,15 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 	atoms := sc.frags[f]
 	static := big.NewInt(1)
 	halves := 0 // factors of 2 to divide out of static
+	// A cage (every atom with three or more fragment neighbours, three or
+	// more rings) is three-dimensional even where its atoms are sp2.
+	cage := len(atoms) >= 4
+	bonds := 0
+	for _, x := range atoms {
+		bonds += sc.inner(x)
+		cage = cage && sc.inner(x) >= 3
+	}
+	cage = cage && bonds/2-len(atoms)+1 >= 3
 	var units []unit
 	for _, x := range atoms {
 		tet := sc.tetrahedral(x)
@@ -454,6 +476,11 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 			} else {
 				units = append(units, unit{kind: 't', x: x})
 			}
+		} else if cage && len(col) == 0 && sc.inner(x) == 3 {
+			// a three-connected atom of a cage (fullerene carbon) points
+			// its free side outwards: a fourth, virtual ligand
+			units = append(units, unit{kind: 't', x: x})
+			sc.virtual[x] = true
 		}
 	}
 	// double bonds and allenes inside the fragment
@@ -728,7 +755,21 @@ func (sc *sigmaCalc) centrePositions(x int) []int {
 	for _, c := range sc.outside(x, true) {
 		out = append(out, -(c + 10))
 	}
+	if sc.virtual[x] {
+		out = append(out, -(colOut + 10))
+	}
 	return out
+}
+
+// inner counts the bonds of atom x inside its fragment.
+func (sc *sigmaCalc) inner(x int) int {
+	k := 0
+	for _, b := range sc.m.Adj[x] {
+		if !sc.rot[b] {
+			k++
+		}
+	}
+	return k
 }
 
 func imagePos(k int, phi func(int) int) int {
@@ -941,6 +982,72 @@ func (sc *sigmaCalc) cisFusions(units []unit) [][3]int {
 		parA := permBit(rest(pa, b, a1, a2), pa, id)
 		parB := permBit(rest(pb, a, b1, b2), pb, id)
 		out = append(out, [3]int{ka, kb, 1 ^ parA ^ parB})
+	}
+	return append(out, sc.smallBicycles(units, at)...)
+}
+
+// smallBicycles returns the configuration equations of the bridgeheads of
+// small bridged bicycles: two checked tetrahedral atoms a and b, not bonded,
+// joined by three bridges of two-connected atoms with at most nine atoms in
+// all (norbornane, bicyclo[2.2.2]octane, bicyclo[3.3.1]nonane), can only be
+// "out,out": both bridgehead ligands point away from the bicycle (common
+// practice; in,out isomers need much larger rings). Seen from a, the bridges
+// turn one way; seen from b, the other.
+func (sc *sigmaCalc) smallBicycles(units []unit, at map[int]int) [][3]int {
+	m := sc.m
+	var out [][3]int
+	for _, u := range units {
+		a := u.x
+		if u.kind != 't' || sc.inner(a) != 3 {
+			continue
+		}
+		var firsts, lasts []int
+		end, total := -1, 0
+		ok := true
+		for _, bd := range m.Adj[a] {
+			if sc.rot[bd] {
+				continue
+			}
+			prev, cur := a, m.Other(bd, a)
+			n := 0
+			for sc.inner(cur) == 2 && n <= 10 {
+				next := -1
+				for _, b2 := range m.Adj[cur] {
+					if o := m.Other(b2, cur); !sc.rot[b2] && o != prev {
+						next = o
+					}
+				}
+				prev, cur = cur, next
+				n++
+			}
+			if cur == a || (end >= 0 && cur != end) || n > 10 {
+				ok = false
+				break
+			}
+			end = cur
+			total += n
+			firsts = append(firsts, m.Other(bd, a))
+			lasts = append(lasts, prev)
+		}
+		kb, isUnit := at[end]
+		if !ok || !isUnit || end < a || m.BondBetween(a, end) >= 0 || total+2 > 9 {
+			continue
+		}
+		b := end
+		pa, pb := sc.centrePositions(a), sc.centrePositions(b)
+		rest := func(p []int, xs []int) []int {
+			out := slices.Clone(xs)
+			for _, k := range p {
+				if !slices.Contains(xs, k) {
+					out = append(out, k)
+				}
+			}
+			return out
+		}
+		id := func(x int) int { return x }
+		parA := permBit(rest(pa, firsts), pa, id)
+		parB := permBit(rest(pb, lasts), pb, id)
+		out = append(out, [3]int{at[a], kb, 1 ^ parA ^ parB})
 	}
 	return out
 }

@@ -46,6 +46,14 @@ var sigmaCases = []struct {
 	{"C1CC2(C1)CCC2", 4},       // spiro[3.3]heptane, D_2d → D_2
 	{"C1CC2(C1)CCCC2", 2},      // spiro[3.4]octane, C_2v → C_2
 	{"C1CCC2CCCCC2C1", 2},      // decalin, another spelling
+	{"C12C3C4C5C1C6C7C2C8C3C9C4C%10C5C6C%11C7C8C9C%10%11", 60},                                                                                 // dodecahedrane, I_h → I
+	{"c12c3c4c5c1c1c6c7c2c2c8c3c3c9c4c4c%10c5c5c1c1c6c6c%11c7c2c2c7c8c3c3c8c9c4c4c9c%10c5c5c1c1c6c6c%11c2c2c7c3c3c8c4c4c9c5c1c1c6c2c3c41", 60}, // C60, I_h → I
+	{"C12C3C4C1C5C2C3C45", 24},                     // cubane again (cage rule)
+	{"c1cc2ccc3ccc4ccc5ccc6ccc1c1c2c3c4c5c61", 12}, // coronene, D_6h (planar, not a cage)
+	{"C1=CC2CCC1C2", 1},                            // norbornene, C_s
+	{"C12C3C1C1C2C31", 6},                          // prismane, D_3h → D_3
+	{"C1=CC2CCC1CC2", 2},                           // bicyclo[2.2.2]oct-2-ene, C_2v → C_2
+	{"C1CC2CCCC(C1)C2", 2},                         // bicyclo[3.3.1]nonane, C_2v → C_2
 	{"[H][H]", 2}, {"O=O", 2}, {"[C-]#[O+]", 1}, {"Cl", 1}, {"CCl", 3}, {"ClC(Cl)(Cl)Cl", 12},
 	{"FC(F)F", 3}, {"C=CC=C", 2}, {"CC(C)=C", 18}, {"CC#C", 3},
 	{"CC.CC", 2 * 18 * 18}, // two identical components: 2!·18²
@@ -100,4 +108,18 @@ func TestOpticalIsomersMolecule(t *testing.T) {
 	assert.Equal(t, 1, parse(t, "CC(C)CC(C)C").OpticalIsomers())
 	assert.Equal(t, 1, parse(t, "CCC(CC)C").OpticalIsomers())
 	assert.Equal(t, 1, parse(t, "C1C2CC3CC1CC(C2)C3").OpticalIsomers(), "adamantane bridgeheads have two alike ring paths")
+}
+
+func TestCanonicalContext(t *testing.T) {
+	m := parse(t, "C1C2CC3CC1CC(C2)C3")
+	c, err := m.CanonicalContext(context.Background())
+	require.NoError(t, err)
+	assert.Equal(t, m.Canonical(), c)
+	// an uncached copy with a cancelled context refuses instead of guessing
+	p := *m
+	p.Atoms = append([]Atom(nil), m.Atoms...)
+	ctx, cancel := context.WithCancel(context.Background())
+	cancel()
+	_, err = p.CanonicalContext(ctx)
+	assert.ErrorIs(t, err, context.Canceled)
 }
