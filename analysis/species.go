@@ -54,10 +54,8 @@ func (a *analysis) species() error {
 				sp.MolarMass = MolarMassOf(comp)
 			}
 			if sp.Mol != nil {
-				if first := sameStructure(byStructure, sp); first != nil {
-					a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
-						Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(first.Loc)),
-						Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: first.Name + " has this structure"}}})
+				if first := sameStructure(byStructure, sp, effectiveMultiplicity(a.w.cache.lib, sp)); first != nil {
+					a.reportSameStructure(path, sp, first)
 				}
 				a.estimateSpecies(path, sp, user)
 			}
@@ -84,8 +82,8 @@ func (a *analysis) species() error {
 // multiplicity of sp, and records sp. Species are bucketed by a cheap graph
 // invariant first; canonical forms are computed only within a bucket, so
 // most species never need one.
-func sameStructure(seen map[string][]*Species, sp *Species) *Species {
-	k := sp.inv + "|m" + strconv.Itoa(intAttr(sp.Decl.Multiplicity))
+func sameStructure(seen map[string][]*Species, sp *Species, mult int) *Species {
+	k := sp.inv + "|m" + strconv.Itoa(mult)
 	bucket := seen[k]
 	for _, other := range bucket {
 		if identity(other.Mol) == identity(sp.Mol) {

@@ -382,6 +382,9 @@ func (w *writer) reaction(x *Index, r *analysis.Reaction) {
 	if r.ReverseRate1000 != nil {
 		rows = append(rows, []string{"k_r(1000 K)", sci(*r.ReverseRate1000) + " " + analysis.RateUnits(r.ReverseOrder)})
 	}
+	if u, ok := x.Result().ReverseRateUncertainty(r, 1000); ok {
+		rows = append(rows, []string{"k_r uncertainty (1000 K)", reverseFactorText(u, w.u)})
+	}
 	if len(rows) > 0 {
 		w.table([]string{"quantity", "value"}, rows)
 	}
@@ -429,4 +432,22 @@ func (w *writer) group(o Occurrence) {
 	default:
 		w.line("Used by: " + strings.Join(o.Group.UsedBy, ", "))
 	}
+}
+
+// reverseFactorText describes the factor a reverse rate inherits from
+// estimated thermochemistry, e.g. "×/÷ 1.50 (σ(ΔG°r) = 0.81 kcal/mol from the
+// estimates of propane, propyl)".
+func reverseFactorText(u analysis.ReverseUncertainty, un units) string {
+	if len(u.Estimated) == 0 {
+		return "×/÷ 1 (no estimated thermo: all from the file or the reference library)"
+	}
+	ge := ""
+	if len(u.Unmeasured) > 0 {
+		ge = "≥ "
+	}
+	s := fmt.Sprintf("%s×/÷ %.2f (σ(ΔG°r) = %s from the estimates of %s", ge, u.Factor, un.energy(u.Sigma), strings.Join(u.Estimated, ", "))
+	if len(u.Unmeasured) > 0 {
+		s += "; no measured error for " + strings.Join(u.Unmeasured, ", ")
+	}
+	return s + ")"
 }

@@ -138,7 +138,7 @@ func TestSummaryJSONContract(t *testing.T) {
 	require.NotEmpty(t, s["reactions"])
 	assert.Equal(t, []string{"cp_j_mol_k", "formula", "hf298_kj_mol", "name", "s298_j_mol_k", "smiles", "thermo_source"}, keysOf(s["species"][0]))
 	assert.Equal(t, []string{"balanced", "collision_limit", "dg298_kj_mol", "dh298_kj_mol", "ds298_j_mol_k", "equation", "forward_rate", "forward_rate_units",
-		"keq", "line", "rate_pressure_bar", "reverse_rate", "reverse_rate_units"}, keysOf(s["reactions"][0]))
+		"keq", "line", "rate_pressure_bar", "reverse_rate", "reverse_rate_factor", "reverse_rate_units"}, keysOf(s["reactions"][0]))
 	sources := map[string]string{}
 	for _, sp := range s["species"] {
 		sources[sp["name"].(string)] = sp["thermo_source"].(string)

@@ -39,6 +39,9 @@ type compareFile struct {
 	Species   int    `json:"species"`
 	Reactions int    `json:"reactions"`
 	Errors    int    `json:"errors"`
+	// Unreadable lists species whose SMILES cannot be read: they match
+	// nothing and appear among the species only in their file.
+	Unreadable []string `json:"unreadable_structures"`
 }
 
 type compareThreshold struct {
@@ -74,8 +77,9 @@ type compareValue struct {
 }
 
 // compareThermo compares a matched pair's thermo. When both sides estimate
-// the same structure the same way, same_estimate is true and the values are
-// omitted (they are identical).
+// it from the same SMILES text with the same options, same_estimate is true
+// and the values are omitted (identical on both sides, or missing on both when kiln cannot
+// estimate the structure).
 type compareThermo struct {
 	SourceA      string                    `json:"source_a"`
 	SourceB      string                    `json:"source_b"`
@@ -205,6 +209,13 @@ func commonDir(a, b string) string {
 	}
 }
 
+func nonNil(s []string) []string {
+	if s == nil {
+		return []string{}
+	}
+	return s
+}
+
 func optString(s string) *string {
 	if s == "" {
 		return nil
@@ -214,8 +225,8 @@ func optString(s string) *string {
 
 func buildCompare(c *analysis.Comparison) compareJSON {
 	out := compareJSON{
-		A:          compareFile{displayPath(c.A.Path), c.A.Species, c.A.Reactions, c.A.Errors},
-		B:          compareFile{displayPath(c.B.Path), c.B.Species, c.B.Reactions, c.B.Errors},
+		A:          compareFile{displayPath(c.A.Path), c.A.Species, c.A.Reactions, c.A.Errors, nonNil(c.A.UnreadableStructure)},
+		B:          compareFile{displayPath(c.B.Path), c.B.Species, c.B.Reactions, c.B.Errors, nonNil(c.B.UnreadableStructure)},
 		Thresholds: compareThreshold{c.Settings.MismatchHf298 / 1000, c.Settings.MismatchS298, c.RateFactor},
 		Species:    []compareSpecies{}, Renames: []compareRename{}, Clashes: []compareClash{},
 		OnlyA: []compareRef{}, OnlyB: []compareRef{}, Reactions: []compareRxn{}, RxnOnlyA: []compareRxnRef{}, RxnOnlyB: []compareRxnRef{},
@@ -341,6 +352,9 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 		if f.Errors > 0 {
 			fmt.Fprintf(w, "note: %s has %d error(s) (`kiln check` lists them); broken statements were left out\n", f.File, f.Errors)
 		}
+		if n := len(f.Unreadable); n > 0 {
+			fmt.Fprintf(w, "note: %s: %d species with an unreadable SMILES match nothing (%s)\n", f.File, n, clip(strings.Join(f.Unreadable, ", "), 50))
+		}
 	}
 	fmt.Fprintf(w, "Species: %d matched by structure (%d under different names), %d only in A, %d only in B, %d name clash(es)\n",
 		s.Matched, s.Renamed, s.OnlyA, s.OnlyB, s.NameClashes)
@@ -375,7 +389,9 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 			if t == nil || t.SameEstimate || (len(p.Flags) > 0) != flaggedPass {
 				continue
 			}
-			if flaggedPass || t.Hf298.Diff != 0 || t.S298.Diff != 0 || t.G["1000"].Diff != 0 || t.Cp["1000"].Diff != 0 {
+			// Differences below 1e-6 (kJ/mol, J/(mol K)) are rounding noise.
+			noise := func(v float64) bool { return math.Abs(v) < 1e-6 }
+			if flaggedPass || !noise(t.Hf298.Diff) || !noise(t.S298.Diff) || !noise(t.G["1000"].Diff) || !noise(t.Cp["1000"].Diff) {
 				differ = append(differ, p)
 			}
 		}

@@ -300,7 +300,8 @@ func writeEquilibriumText(w io.Writer, o equilibriumJSON) {
 	fmt.Fprintf(w, "Equilibrium of %s, %s\n", o.File, mode)
 	fmt.Fprintf(w, "initial  T = %.2f K  P = %s\n", o.InitialTemperature, pressureText(o.InitialPressure))
 	fmt.Fprintf(w, "final    T = %.2f K  P = %s\n", o.Temperature, pressureText(o.Pressure))
-	fmt.Fprintf(w, "mean molar mass %.3f g/mol, %.6g mol for the amounts given\n\n", o.MeanMolarMass, o.TotalMoles)
+	fmt.Fprintf(w, "mean molar mass %.3f g/mol, %.6g mol for the amounts given\n", o.MeanMolarMass, o.TotalMoles)
+	fmt.Fprintf(w, "(ideal gas over the file's neutral species only: no condensed phases such as soot)\n\n")
 	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
 	fmt.Fprintf(tw, "species\tmole fraction\tmol\n")
 	hidden := 0

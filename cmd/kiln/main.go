@@ -117,12 +117,14 @@ Usage:
         --nasa adds a fitted NASA 7-coefficient polynomial; --sources lists the
         source of each group (--json always has them). JSON errors give the
         1-based character position in the SMILES. Exit 1 if any input fails.
-  kiln summary FILE [--json] [--pressure P]
+  kiln summary FILE [--json] [--pressure P] [--uncertain]
         Tabulate species thermo, reaction thermochemistry (ΔH°r, ΔG°r, Kp) and
         k_f, k_r at 1000 K with their units. --pressure sets where falloff and
         pressure-table rates are taken (with a unit: 10bar, 0.1atm, 50kPa;
         default 1atm). Values that need a reaction to
         balance are left out when it does not. Exit 1 when the file has errors.
+        The k_r ×/÷ column is the factor exp(σ(ΔG°r)/RT) that k_r(1000 K)
+        inherits from estimated thermo; --uncertain lists the largest first.
   kiln fill FILE [--dry-run] [--tmid K] [--thigh K]
         Insert an estimated nasa7 block under every species that lacks thermo.
         --tmid/--thigh apply to every block, reference-library species included

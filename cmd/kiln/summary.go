@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"io"
+	"sort"
 	"strconv"
 
 	"kiln.dev/kiln/analysis"
@@ -43,10 +44,13 @@ type summaryReaction struct {
 	ForwardRateUnits   string     `json:"forward_rate_units"`
 	ReverseRateUnits   string     `json:"reverse_rate_units"`
 	CollisionViolation *string    `json:"collision_limit"`
+	// ReverseFactor is the factor k_r inherits from estimated thermo,
+	// exp(σ(ΔG°r)/RT) at 1000 K (null when k_r does not come from thermo).
+	ReverseFactor numericMap `json:"reverse_rate_factor"`
 }
 
 func runSummary(e env, args []string) (int, error) {
-	flags, files, err := parseArgs(args, withSettings(flagSpec{"json": false}))
+	flags, files, err := parseArgs(args, withSettings(flagSpec{"json": false, "uncertain": false}))
 	if err != nil {
 		return 0, err
 	}
@@ -58,6 +62,9 @@ func runSummary(e env, args []string) (int, error) {
 		return 0, err
 	}
 	s := buildSummary(res)
+	if flags["uncertain"] == "true" {
+		sortByReverseFactor(s.Reactions)
+	}
 	if flags["json"] == "true" {
 		if err := writeJSON(e.stdout, s); err != nil {
 			return 0, err
@@ -137,6 +144,9 @@ func buildSummary(res *analysis.Result) summaryJSON {
 		if v := r.Collision; v != nil {
 			row.CollisionViolation = ptr(v.Message())
 		}
+		if u, ok := res.ReverseRateUncertainty(r, 1000); ok {
+			row.ReverseFactor = numericMap{"1000": ptr(u.Factor)}
+		}
 		s.Reactions = append(s.Reactions, row)
 	}
 	return s
@@ -207,7 +217,31 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		if r.CollisionViolation != nil {
 			limit = "above collision limit"
 		}
-		rows = append(rows, []string{strconv.Itoa(r.Line), shorten(r.Equation, 44), kf, kr, limit})
+		factor := ""
+		if f := reverseFactor(r); f != nil {
+			factor = strconv.FormatFloat(*f, 'f', 2, 64)
+		}
+		rows = append(rows, []string{strconv.Itoa(r.Line), shorten(r.Equation, 44), kf, kr, factor, limit})
 	}
-	writeTable(w, "", []string{"line", "equation", "k_f", "k_r", "check"}, rows)
+	writeTable(w, "", []string{"line", "equation", "k_f", "k_r", "k_r ×/÷", "check"}, rows)
+}
+
+// reverseFactor is a reaction's k_r factor at 1000 K, nil when none.
+func reverseFactor(r summaryReaction) *float64 {
+	if r.ReverseFactor == nil {
+		return nil
+	}
+	return r.ReverseFactor["1000"]
+}
+
+// sortByReverseFactor puts the reactions whose reverse rates rest on the
+// weakest thermo first (largest factor; reactions without one last).
+func sortByReverseFactor(rs []summaryReaction) {
+	sort.SliceStable(rs, func(i, j int) bool {
+		a, b := reverseFactor(rs[i]), reverseFactor(rs[j])
+		if a == nil || b == nil {
+			return a != nil && b == nil
+		}
+		return *a > *b
+	})
 }
