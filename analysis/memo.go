@@ -92,7 +92,8 @@ func (w *Workspace) SetIncremental(on bool) {
 }
 
 // startMemo returns the memo state for an analysis of path with the given
-// settings and user groups; nil when the workspace is not incremental.
+// settings and user groups (and whatever else every unit reads, such as the
+// display units, in userKey); nil when the workspace is not incremental.
 func (w *Workspace) startMemo(path string, s Settings, userKey string) *memo {
 	w.mu.Lock()
 	defer w.mu.Unlock()

@@ -30,7 +30,8 @@ func (a *analysis) species() error {
 	for _, path := range a.order {
 		nSpecies += len(a.res.Files[path].Species)
 	}
-	a.memo = a.w.startMemo(a.res.Path, a.set, a.userKey)
+	// Messages are written in the analysed file's display units.
+	a.memo = a.w.startMemo(a.res.Path, a.set, a.userKey+"|"+a.res.Units().EnergyName())
 	a.res.ByName = make(map[string]*Species, nSpecies)
 	a.res.Species = make([]*Species, 0, nSpecies)
 
