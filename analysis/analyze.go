@@ -20,13 +20,12 @@ const (
 	maxFileSize     = 64 << 20
 )
 
-// CodeBadInclude is reported on an include that cannot be followed (missing
-// file, outside the workspace, cycle, too deep). It extends the list of codes
-// in FORMAT.md.
-const CodeBadInclude = "bad-include"
-
-// CodeDuplicateGroup is reported when a user-defined group is defined twice.
-const CodeDuplicateGroup = "duplicate-group"
+// CodeBadInclude and CodeDuplicateGroup are kept for callers of this
+// package; the one list of codes is in speciesfile (speciesfile.Codes).
+const (
+	CodeBadInclude     = speciesfile.CodeBadInclude
+	CodeDuplicateGroup = speciesfile.CodeDuplicateGroup
+)
 
 // analysis is the state of one Analyze call.
 type analysis struct {
@@ -41,6 +40,11 @@ type analysis struct {
 	parsed map[*speciesfile.Species]parsed
 	// userKey identifies the user-defined groups in estimate cache keys.
 	userKey string
+	// via maps each included file to the include statement of the analysed
+	// file through which it is reached (where its problems are reported).
+	via map[string]*speciesfile.Include
+	// viaDups counts the same-structure reports made on each include.
+	viaDups map[*speciesfile.Include]int
 }
 
 func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
@@ -157,6 +161,10 @@ func (a *analysis) includes(path string, f *speciesfile.File, stack []string, de
 		if next == nil {
 			next = inc
 		}
+		if a.via == nil {
+			a.via = map[string]*speciesfile.Include{}
+		}
+		a.via[target] = next
 		a.includes(target, g, append(stack[:len(stack):len(stack)], target), depth+1, next)
 	}
 }

@@ -18,6 +18,10 @@ type EstimateOptions struct {
 	Multiplicity, Symmetry, OpticalIsomers int // 0 = computed from the structure
 	UserGroups                             []benson.GroupValue
 	TMid, THigh                            float64
+	// ExplicitRange makes TMid and THigh apply to reference-library species
+	// too (refitted to the library polynomial); otherwise those keep the
+	// library's own ranges.
+	ExplicitRange bool
 
 	userKey string // groupsKey(UserGroups), computed once per analysis
 }
@@ -35,6 +39,9 @@ func (o EstimateOptions) key(ident string) string {
 	for _, f := range []float64{o.TMid, o.THigh} {
 		b.WriteByte('|')
 		b.WriteString(strconv.FormatFloat(f, 'g', -1, 64))
+	}
+	if o.ExplicitRange {
+		b.WriteString("|x")
 	}
 	if len(o.UserGroups) > 0 {
 		if o.userKey == "" {
@@ -125,15 +132,38 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		for i, T := range benson.StdTemps {
 			e.Cp[i] = sp.Poly.Cp(T)
 		}
+		if o.ExplicitRange && (o.TMid != sp.Poly.TMid || o.THigh != sp.Poly.THigh) {
+			e.fit, e.tMid, e.tHigh = &fitResult{}, o.TMid, o.THigh
+		}
 		return e, nil
 	}
-	g, err := benson.Estimate(m, benson.Options{
+	bo := benson.Options{
 		Multiplicity:   o.Multiplicity,
 		Symmetry:       o.Symmetry,
 		OpticalIsomers: o.OpticalIsomers,
 		UserGroups:     o.UserGroups,
-	})
+	}
+	// Estimates depend only on the structure: a polycyclic one is estimated
+	// from its canonical spelling (with stereo), so neither how a SMILES is
+	// written nor the order in which spellings are met changes a number.
+	// (Symmetry numbers of cages and bridged systems depend on the
+	// spelling until the molecule package's bounded automorphism count
+	// lands; acyclic and monocyclic structures do not, as
+	// TestEstimateRandomSpellings checks, and skip the extra canonical form.)
+	cm := m
+	if len(m.Rings()) >= 2 {
+		if c, err := molecule.ParseSMILES(m.CanonicalStereo()); err == nil {
+			cm = c
+		}
+	}
+	g, err := benson.Estimate(cm, bo)
 	if err != nil {
+		if cm != m {
+			// Report the refusal with the atom numbers of the user's SMILES.
+			if _, e2 := benson.Estimate(m, bo); e2 != nil {
+				err = e2
+			}
+		}
 		return nil, err
 	}
 	e := &Estimate{Group: g, Hf298: g.Hf298, S298: g.S298, Cp: g.Cp, Uncertainty: g.Uncertainty,

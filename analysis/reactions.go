@@ -63,7 +63,11 @@ func (a *analysis) computeReactions() error {
 	err := a.parallel(len(rs), 256, func(i int) {
 		if r := rs[i]; r.Resolved {
 			a.balance(r.Decl, r)
-			a.thermo(r.Decl, r)
+			// Thermochemistry of a reaction that does not balance means
+			// nothing: it is neither shown nor used for reverse rates.
+			if r.Balance != nil && r.Balance.Balanced {
+				a.thermo(r.Decl, r)
+			}
 			a.rates(r.Decl, r)
 		}
 	})
@@ -74,7 +78,69 @@ func (a *analysis) computeReactions() error {
 		a.res.Diagnostics = append(a.res.Diagnostics, r.diags...)
 		r.diags = nil
 	}
+	a.rangeChecks()
 	return nil
+}
+
+// Temperatures (K) at which the reaction checks evaluate species thermo:
+// ΔH°r, ΔS°r, ΔG°r at 298.15 K and Kp up to 1500 K for every reaction with
+// thermochemistry; Kc up to 2500 K for a reverse rate derived from it (the
+// collision check's range).
+const (
+	tmaxKp      = 1500
+	tmaxReverse = 2500
+	rangeSlack  = 2 // K: 298.15 K counts as inside a block starting at 300 K
+)
+
+// rangeChecks reports, once per species, a thermo block of the analysed file
+// that the reaction checks evaluate outside its temperature range (an
+// extrapolation kiln would otherwise do silently): thermo-out-of-range on
+// the block header, naming the first reaction that needs it.
+func (a *analysis) rangeChecks() {
+	type need struct {
+		tmax float64
+		line int
+	}
+	needs := map[*Species]need{}
+	for _, r := range a.res.Reactions {
+		if r.reactants == nil {
+			continue // no thermochemistry computed
+		}
+		tmax := float64(tmaxKp)
+		if r.model != nil && r.model.kc != nil && r.model.reverse == nil {
+			tmax = tmaxReverse
+		}
+		for _, ts := range [][]speciesfile.Term{r.Decl.Reactants, r.Decl.Products} {
+			for _, t := range ts {
+				sp := a.res.ByName[t.Name.Text]
+				if sp == nil || sp.Source != SourceFile {
+					continue
+				}
+				if n, ok := needs[sp]; !ok || tmax > n.tmax {
+					needs[sp] = need{tmax, r.Line}
+				}
+			}
+		}
+	}
+	for _, sp := range a.res.Species {
+		n, ok := needs[sp]
+		if !ok || sp.Loc.File != a.res.Path {
+			continue
+		}
+		lo, hi := sp.Given.Range()
+		if lo <= T298+rangeSlack && hi >= n.tmax-rangeSlack {
+			continue
+		}
+		span := sp.Given.Span
+		if d := sp.Decl.NASA7; d != nil {
+			span = d.Header.Span
+		} else if d := sp.Decl.Table; d != nil {
+			span = d.Header.Span
+		}
+		a.report(sp.Loc.File, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+			Message: fmt.Sprintf("%s: the block covers %g–%g K, but the reaction on line %d needs it from 298 K to %g K; values outside the block are extrapolated",
+				sp.Name, lo, hi, n.line, n.tmax)})
+	}
 }
 
 func (a *analysis) recordUses(path string, d *speciesfile.Reaction) {
@@ -140,13 +206,22 @@ func reactionKey(d *speciesfile.Reaction) string {
 // reaction computes balance, thermochemistry and rate checks of one reaction.
 func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
 	f := a.res.Files[path]
-	r := &Reaction{Decl: d, File: path, Line: f.Lines.Position(d.Span().Start).Line + 1, Equation: equationText(f, d), Resolved: true, Kp: map[string]*float64{}}
+	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equationText(f, d), Resolved: true, Kp: map[string]*float64{}}
+	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Equation) {
+		// An equation the reader could not read is not data: the syntax
+		// error is the one diagnostic.
+		r.Resolved = false
+		return r
+	}
 	for _, k := range keqTemperatures {
 		r.Kp[k.Key] = nil
 	}
 	undeclared := func(t speciesfile.Token, what string) {
-		a.report(path, speciesfile.Diagnostic{Span: t.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUndeclaredSpecies,
-			Message: fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)})
+		msg := fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)
+		if parts := strings.Split(t.Text, "+"); len(parts) > 1 && !strings.HasPrefix(t.Text, "(+") {
+			msg = fmt.Sprintf("%s %s is not declared; if you meant %s, put blanks around each +", what, t.Text, strings.Join(parts, " + "))
+		}
+		a.report(path, speciesfile.Diagnostic{Span: t.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUndeclaredSpecies, Message: msg})
 	}
 	for _, ts := range [][]speciesfile.Term{d.Reactants, d.Products} {
 		for _, t := range ts {
@@ -167,6 +242,13 @@ func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
 		}
 	}
 	return r
+}
+
+// StmtLine returns the 1-based line of a statement as every command shows
+// it: the line of its keyword, not of the comment and blank lines that
+// precede it (they belong to the statement's span).
+func StmtLine(f *speciesfile.File, st speciesfile.Stmt) int {
+	return f.Lines.Position(st.Keyword().Span.Start).Line + 1
 }
 
 // equationText is the equation as written with runs of blanks collapsed.
@@ -250,30 +332,6 @@ func (r *Reaction) Kc(T float64) (float64, bool) {
 	return kinetics.Kc(kinetics.Kp(g, T), kinetics.DeltaN(r.reactants, r.products), T), true
 }
 
-// forward returns k_f(T) of the reaction's main rate in cm3, mol, s units.
-// For falloff reactions the main line is the high-pressure limit.
-func forward(d *speciesfile.Reaction) (func(T float64) float64, bool) {
-	if len(d.Pressures) > 0 {
-		var tab kinetics.PressureTable
-		for _, p := range d.Pressures {
-			if arr, ok := arrhenius(&p.Rate); ok {
-				tab = append(tab, kinetics.PressureRate{P: p.P.SI, Rate: arr})
-			}
-		}
-		if len(tab) > 0 {
-			return func(T float64) float64 { return tab.Rate(T, oneAtm) }, true
-		}
-	}
-	arr, ok := arrhenius(d.Rate)
-	if !ok {
-		return nil, false
-	}
-	return arr.Rate, true
-}
-
-// oneAtm (Pa) is the pressure at which a rate table is read for checks.
-const oneAtm = 101325
-
 func arrhenius(r *speciesfile.Arrhenius) (kinetics.Arrhenius, bool) {
 	if r == nil || r.A == nil {
 		return kinetics.Arrhenius{}, false
@@ -313,66 +371,6 @@ func (a *analysis) sizes(ts []speciesfile.Term) (masses []float64, heavy []int) 
 	return masses, heavy
 }
 
-func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
-	kf, ok := forward(d)
-	if !ok {
-		return
-	}
-	set := kinetics.CollisionSettings{Factor: a.set.CollisionFactor, TMin: 300, TMax: 2500}
-	third := 0
-	if d.ThirdBody {
-		third = 1
-	}
-	span := d.Equation
-	if d.Rate != nil {
-		span = d.Rate.Span
-	}
-	m, h := a.sizes(d.Reactants)
-	if v := kinetics.CollisionCheck(molecularity(d.Reactants)+third, m, h, kf, set); v != nil {
-		r.Collision = v
-		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
-			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K", v.Rate, v.Limit, rateUnits(v.Order), v.T)})
-	}
-	if !d.Reversible {
-		return
-	}
-	var kr func(T float64) float64
-	if arr, ok := arrhenius(d.Reverse); ok {
-		kr = arr.Rate
-	} else if r.reactants != nil {
-		kr = func(T float64) float64 {
-			kc, _ := r.Kc(T)
-			return kinetics.ReverseRate(kf(T), kc)
-		}
-	}
-	if kr == nil {
-		return
-	}
-	v := kr(1000)
-	if !math.IsNaN(v) && !math.IsInf(v, 0) {
-		r.ReverseRate1000 = &v
-	}
-	if r.Collision != nil {
-		return
-	}
-	m, h = a.sizes(d.Products)
-	if v := kinetics.CollisionCheck(molecularity(d.Products)+third, m, h, kr, set); v != nil {
-		v.Reverse = true
-		r.Collision = v
-		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
-			Message: fmt.Sprintf("reverse rate implied by thermochemistry, %.3g, exceeds the collision limit %.3g (%s) at %.0f K", v.Rate, v.Limit, rateUnits(v.Order), v.T)})
-	}
-}
-
-// rateUnits names the units of a rate constant of the given order.
-func rateUnits(order int) string {
-	switch order {
-	case 1:
-		return "s⁻¹"
-	case 2:
-		return "cm³/(mol·s)"
-	case 3:
-		return "cm⁶/(mol²·s)"
-	}
-	return fmt.Sprintf("order %d, cm, mol, s", order)
-}
+// RateUnits names the units of a rate constant of the given order (see
+// kinetics.RateUnits, the one formatter).
+func RateUnits(order int) string { return kinetics.RateUnits(order) }

@@ -204,7 +204,8 @@ func TestRelatedInformation(t *testing.T) {
 		}
 	}
 	require.NotNil(t, dup, diagSummary(ds))
-	assert.Equal(t, protocol.DiagnosticSeverityWarning, dup.Severity)
+	// A name declared twice is an error (issue 14, case 11).
+	assert.Equal(t, protocol.DiagnosticSeverityError, dup.Severity)
 	require.NotEmpty(t, dup.RelatedInformation)
 	rel := dup.RelatedInformation[0]
 	assert.Equal(t, e.uri("d.kiln"), rel.Location.URI)

@@ -20,7 +20,7 @@ func InlayHints(x *Index, file string, start, end int, s analysis.Settings) []Hi
 	if f == nil {
 		return nil
 	}
-	u := displayUnits(s)
+	u := displayUnits(s, f)
 	var out []Hint
 	for _, o := range x.Occurrences(file) {
 		if o.Span.Start < start || o.Span.Start >= end {

@@ -22,10 +22,12 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 	switch centre {
 	case "Cd", "CO":
 		skip = g.partner(i, 2)
-	case "Ct":
+	case "Ct", "CN":
 		skip = g.partner(i, 3)
-	case "Ca":
-		return "Ca", counts, true
+	case "CS":
+		skip = g.partnerElement(i, 2, "S")
+	case "Ca", "Ck":
+		return centre, counts, true
 	}
 	for k, j := range g.nbr[i] {
 		if j == skip {
@@ -107,45 +109,116 @@ func approximate(l lookup, centre string, counts ligCounts) (GroupValue, []strin
 // up (user groups first) and appends one Term per distinct group, in order of
 // first appearance. Missing groups are replaced by their nearest relative and
 // listed in est.Missing.
+//
+// Atom accounting (enforced here, tested over a generated corpus): every
+// heavy atom is either the centre of exactly one group, or a terminal atom
+// (one heavy neighbour, no H) that its neighbour's group names — as a
+// ligand joined by a single bond (the Cl of C-(Cl)(H)3) or as the implied
+// partner of the centre type (the =O of CO, see impliedPartner). Any other
+// atom makes the estimate fail with an *UnsupportedError; no atom is ever
+// left out of the sum.
+//
+// Which centres exist is read from the loaded tables (built-in plus user
+// groups, lookup.hasCentre): an element or atom type with no group at all is
+// refused, and adding groups for it (a new table file or a user group)
+// makes it estimable with no change here.
 func addGroups(g *graph, l lookup, est *Result) error {
 	type acc struct {
 		centre string
 		counts ligCounts
-		n      int
+		n      int // centres
+		atoms  int // atoms accounted for (centres and named terminal atoms)
 	}
+	n := len(g.m.Atoms)
 	// A molecule has few distinct groups: a linear scan of list is cheaper
 	// than a map keyed by (centre, counts).
 	list := make([]acc, 0, 8)
+	// owner[i] is the list index of the group that accounts for atom i
+	// (-1: none yet); a second claim is an error.
+	owner := make([]int, n)
+	for i := range owner {
+		owner[i] = -1
+	}
+	claim := func(i, k int) error {
+		if owner[i] >= 0 {
+			return unsupported(g, i, "is counted by two groups")
+		}
+		owner[i] = k
+		list[k].atoms++
+		return nil
+	}
 	for i := range g.m.Atoms {
-		if g.typ[i] == "Ca" && g.doubleToO(i) {
-			// A cumulated carbon carrying =O (ketene, C=C=O) has no group
-			// value: its oxygen would otherwise drop out of the sum unseen.
-			return fmt.Errorf("benson: atom %d is a ketene-type carbon (C=C=O), which has no group value; give the species a thermo block", i+1)
+		for _, b := range g.nbrBond[i] {
+			if o := g.m.Bonds[b].Order; o > 3 && !g.m.Bonds[b].Aromatic {
+				return unsupported(g, i, fmt.Sprintf("has a bond of order %d, which no group describes", o))
+			}
 		}
 		centre, counts, ok := g.groupOf(i)
 		if !ok {
 			if centre != "" {
-				return fmt.Errorf("benson: atom %d: neighbour element %s is outside the group tables", i+1, centre)
+				return unsupported(g, i, fmt.Sprintf("has a neighbour of type %s, and no group in the tables can name it", centre))
 			}
-			continue
+			continue // terminal atom: claimed by its neighbour below, or refused
 		}
-		if _, known := centreLigands[centre]; !known {
-			return fmt.Errorf("benson: atom %d: element %s is outside the group tables", i+1, centre)
+		if !l.hasCentre(centre) {
+			if _, nameable := centreLigands[centre]; nameable {
+				// A group the user can define (a `group` statement) but
+				// no table has: missing, not unsupported.
+				return &MissingGroupError{Group: groupName(centre, counts)}
+			}
+			return unsupported(g, i, fmt.Sprintf("no group in the tables has a centre of type %s", centre))
 		}
 		k := slices.IndexFunc(list, func(a acc) bool { return a.centre == centre && a.counts == counts })
-		if k >= 0 {
-			list[k].n++
-			continue
+		if k < 0 {
+			list = append(list, acc{centre: centre, counts: counts})
+			k = len(list) - 1
 		}
-		list = append(list, acc{centre, counts, 1})
+		list[k].n++
+		if err := claim(i, k); err != nil {
+			return err
+		}
+		// Terminal atoms named by this group: the implied partner of the
+		// centre type, and single-bonded terminal ligands.
+		for kk, j := range g.nbr[i] {
+			if !g.terminal(j) {
+				continue
+			}
+			o := g.order(g.nbrBond[i][kk])
+			if o == 1 || (o >= 2 && impliedPartner[centre] == g.m.Atoms[j].Element) {
+				if err := claim(j, k); err != nil {
+					return err
+				}
+			}
+		}
+	}
+	for i, k := range owner {
+		if k < 0 {
+			return uncovered(g, i, 0)
+		}
+	}
+	// One backing array for every group's atom list.
+	slab := make([]int, n)
+	start := make([]int, len(list))
+	off := 0
+	for k := range list {
+		start[k] = off
+		off += list[k].atoms
+	}
+	fill := slices.Clone(start)
+	for i, k := range owner {
+		slab[fill[k]] = i
+		fill[k]++
 	}
 	if est.Groups == nil && len(list) > 0 {
 		est.Groups = make([]Term, 0, len(list))
 	}
-	for _, a := range list {
+	for k, a := range list {
 		name := groupName(a.centre, a.counts)
+		atoms := slab[start[k] : start[k]+a.atoms : start[k]+a.atoms]
 		if v, ok := l.group(name); ok {
-			est.Groups = append(est.Groups, term(v, a.n))
+			t := term(v, a.n)
+			t.Atoms = atoms
+			est.Groups = append(est.Groups, t)
 			continue
 		}
 		v, steps, ok := approximate(l, a.centre, a.counts)
@@ -154,6 +227,7 @@ func addGroups(g *graph, l lookup, est *Result) error {
 		}
 		t := term(v, a.n)
 		t.Name = name + " ≈ " + v.Name
+		t.Atoms = atoms
 		est.Groups = append(est.Groups, t)
 		est.Missing = append(est.Missing, Missing{
 			Group:         name,
@@ -164,6 +238,57 @@ func addGroups(g *graph, l lookup, est *Result) error {
 	return nil
 }
 
+// terminal reports whether atom j makes no group of its own: one heavy
+// neighbour at most and no hydrogen (=O, =S, ≡N, Cl, a lone atom).
+func (g *graph) terminal(j int) bool {
+	return len(g.nbr[j])+g.m.Atoms[j].HCount < 2
+}
+
+// UnsupportedError is a refusal: the structure holds an atom that no group
+// of the loaded tables can account for (an element or bonding environment
+// without groups, a molecule too small to have groups). Nothing is estimated.
+type UnsupportedError struct {
+	Atom   int    // 1-based atom number in the structure, 0 for the whole molecule
+	Reason string // why, in words
+}
+
+func (e *UnsupportedError) Error() string {
+	if e.Atom == 0 {
+		return "benson: " + e.Reason
+	}
+	return fmt.Sprintf("benson: atom %d %s", e.Atom, e.Reason)
+}
+
+func unsupported(g *graph, i int, why string) error {
+	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s): %s; group additivity cannot estimate this species — give it a thermo block", g.m.Atoms[i].Element, why)}
+}
+
+// uncovered explains why atom i is named by c groups instead of one.
+func uncovered(g *graph, i, c int) error {
+	heavy := 0
+	for _, x := range g.m.Atoms {
+		if x.Element != "H" {
+			heavy++
+		}
+	}
+	if c > 1 {
+		return unsupported(g, i, fmt.Sprintf("is counted by %d groups", c))
+	}
+	if len(g.nbr[i]) == 0 {
+		if heavy <= 1 || len(g.m.Atoms) <= 2 {
+			return &UnsupportedError{Reason: fmt.Sprintf("%s has no polyvalent atom with two or more neighbours, so no group applies (small species belong in a reference library or a thermo block)", g.m.Formula())}
+		}
+		return unsupported(g, i, "stands alone (no neighbours), so no group applies")
+	}
+	j := g.nbr[i][0]
+	o := g.order(g.nbrBond[i][0])
+	bond := map[int]string{1: "single", 2: "double", 3: "triple", 4: "aromatic"}[o]
+	if bond == "" {
+		bond = fmt.Sprintf("order-%d", o)
+	}
+	return unsupported(g, i, fmt.Sprintf("is a terminal atom (%s bond to atom %d, %s, type %s) that no group in the tables accounts for", bond, j+1, g.m.Atoms[j].Element, g.typ[j]))
+}
+
 // MissingGroupError reports a group with neither a value nor an
 // approximation: the estimate cannot be made until the user supplies the
 // group (Options.UserGroups).
@@ -172,5 +297,5 @@ type MissingGroupError struct {
 }
 
 func (e *MissingGroupError) Error() string {
-	return fmt.Sprintf("benson: no value and no approximation for group %s (add it with a user group)", e.Group)
+	return fmt.Sprintf("benson: no value and no approximation for group %s: supply it with a `group %s` statement (hf298, s298, cp at 300…1500 K, source) or give the species a thermo block", e.Group, e.Group)
 }

@@ -16,17 +16,30 @@
 // J/mol for ΔHf°, J/(mol K) for S° and Cp°. Tables are in kcal and cal and are
 // converted with 1 cal = 4.184 J.
 //
-// Scope: neutral C/H/O species (N, S and halogens appear only as neighbour
-// types when a user group supplies them). The small non-additive species (H2,
-// O2, H2O, CO …) belong to a reference library, not to this package. The
-// method is valid for ideal-gas molecules at 298.15 K and Cp from 300 K to
-// 1500 K; values outside that range need a polynomial fit elsewhere.
+// Scope and refusals: every heavy atom must be the centre of exactly one
+// group of the loaded tables (built-in plus user groups) or a terminal atom
+// that its neighbour's group names (the =O of CO, a halogen ligand); the
+// supported elements and environments are exactly the centres and ligands
+// the loaded tables hold, so new group files extend the scope with no code
+// change (groups.tsv for C/H/O, groups_nsx.tsv for N, S, F, Cl and Br; see
+// hetero.go). Anything else — an element or environment without groups, a
+// molecule too small to have groups, a charged atom, a multiplicity other
+// than the one the structure implies — is refused with an *UnsupportedError
+// (or a *MissingGroupError naming a group the user could supply); no atom is
+// ever left out of the sum. Groups with a stand-in, ring systems without a
+// correction (rings.go, ringsys.go) and radical sites without increments
+// are reported in Result.Missing and widen Result.Uncertainty. The small
+// non-additive species (H2, O2, H2O, CO …) belong to a reference library,
+// not to this package. The method is valid for ideal-gas molecules at
+// 298.15 K and Cp from 300 K to 1500 K; values outside that range need a
+// polynomial fit elsewhere.
 package benson
 
 import (
 	"fmt"
 	"math"
 	"strconv"
+	"strings"
 
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -68,6 +81,12 @@ type Term struct {
 	S298   float64 // J/(mol K), contribution
 	Cp     [7]float64
 	Source string
+	// Atoms lists, for a group term, the atoms it accounts for (0-based
+	// indices into the structure estimated): the Count centres and the
+	// terminal atoms their group names imply (=O of CO, Cl of C-(Cl)(H)3).
+	// Every heavy atom appears in exactly one group term. Empty for
+	// corrections.
+	Atoms []int
 }
 
 // Missing records a group (or ring correction) absent from the tables and
@@ -100,23 +119,38 @@ type Result struct {
 
 	// Class is the compound class whose validation error gives Uncertainty.
 	Class string
-	// Uncertainty is the mean absolute error of ΔHf° (J/mol) measured for
-	// Class on the training set by the accuracy test (one MAE, not 2×).
+	// Uncertainty is the standard uncertainty (1σ) of ΔHf° in J/mol: the
+	// class's measured error, widened by every approximation in Missing
+	// (see uncertainty in class.go); ±2σ covers ≥ 80 % of the validation
+	// species (TestAccuracy reports the coverage).
 	Uncertainty float64
 }
 
-// Estimate estimates the thermochemistry of m. It fails only for structures
-// outside the method's scope (charged atoms, a group that has neither a table
-// value nor an approximation); missing groups with an approximation are
-// reported in Result.Missing, never dropped.
+// Estimate estimates the thermochemistry of m. It fails for structures
+// outside the method's scope (see the package comment: *UnsupportedError,
+// or *MissingGroupError for a group with neither a table value nor an
+// approximation); missing groups with an approximation are reported in
+// Result.Missing, never dropped. The result depends on the graph only, not
+// on how m was spelled, except through SymmetryNumber and OpticalIsomers,
+// which the molecule package computes.
 func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	if m == nil || len(m.Atoms) == 0 {
 		return nil, fmt.Errorf("benson: empty molecule")
 	}
 	for i, a := range m.Atoms {
 		if a.Charge != 0 {
-			return nil, fmt.Errorf("benson: atom %d (%s) has charge %+d: charged species are outside group additivity", i+1, a.Element, a.Charge)
+			return nil, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d: charged species are outside group additivity — give the species a thermo block", a.Element, a.Charge)}
 		}
+	}
+	unpaired := 0
+	for _, a := range m.Atoms {
+		unpaired += a.Radical
+	}
+	if opts.Multiplicity != 0 && opts.Multiplicity != unpaired+1 {
+		// The method (parent + HBI + R ln(2S+1)) describes the high-spin
+		// state the structure's unpaired electrons imply; another spin state
+		// has a different energy that no table here gives.
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("multiplicity %d is not the one the structure implies (%d unpaired electrons: multiplicity %d); group additivity has no data for other spin states — give the species a thermo block", opts.Multiplicity, unpaired, unpaired+1)}
 	}
 	if alt, ok := enoxyForm(m); ok {
 		// An α-carbonyl radical is estimated as its resonance structure with
@@ -131,16 +165,13 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 			Approximation: "resonance structure with the radical on oxygen",
 			Note:          "no α-carbonyl increment at hand: the C=C–O• resonance form is estimated instead",
 		})
+		est.setUncertainty()
 		return est, nil
 	}
 	tab := lookupTable(opts.UserGroups)
 	est := &Result{Formula: m.Formula(), MolarMass: m.MolarMass()}
 
 	// Radicals are estimated through their closed-shell parent.
-	unpaired := 0
-	for _, a := range m.Atoms {
-		unpaired += a.Radical
-	}
 	parent := m
 	if unpaired > 0 {
 		parent = parentOf(m)
@@ -152,6 +183,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	addRingCorrections(g, tab, est)
 	addInteractions(g, tab, est)
+	addHalogenFlags(g, tab, est)
 	if unpaired > 0 {
 		if err := addHBI(m, g, tab, est); err != nil {
 			return nil, err
@@ -179,6 +211,9 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	est.SymmetryNumber = opts.Symmetry
 	if est.SymmetryNumber == 0 {
+		if sy.err != nil {
+			return nil, sy.err
+		}
 		est.SymmetryNumber = sy.number()
 	}
 	if est.SymmetryNumber > 1 {
@@ -205,8 +240,19 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		est.add(t)
 	}
 	est.Class = classify(m, g)
-	est.Uncertainty = classUncertainty(est.Class)
+	est.setUncertainty()
 	return est, nil
+}
+
+// setUncertainty sets e.Uncertainty from its class and approximations.
+func (e *Result) setUncertainty() {
+	strain := 0.0 // kcal/mol, ring and ring-system strain applied
+	for _, c := range e.Corrections {
+		if strings.HasPrefix(c.Name, "ring") {
+			strain += c.Hf298 / calorie / 1000
+		}
+	}
+	e.Uncertainty = uncertainty(e.Class, e, strain)
 }
 
 func (e *Result) add(t Term) {
@@ -231,16 +277,7 @@ func term(v GroupValue, count int) Term {
 
 // parentOf returns a copy of m with every unpaired electron replaced by a
 // hydrogen: the closed-shell parent used by the HBI method.
-func parentOf(m *molecule.Molecule) *molecule.Molecule {
-	p := *m
-	p.Atoms = make([]molecule.Atom, len(m.Atoms))
-	copy(p.Atoms, m.Atoms)
-	for i := range p.Atoms {
-		p.Atoms[i].HCount += p.Atoms[i].Radical
-		p.Atoms[i].Radical = 0
-	}
-	return &p
-}
+func parentOf(m *molecule.Molecule) *molecule.Molecule { return m.ClosedShellParent() }
 
 // enoxyForm returns the resonance structure •C–C=O ↔ C=C–O• of a molecule
 // whose single unpaired electron sits on a carbon next to a carbonyl carbon
@@ -268,15 +305,11 @@ func enoxyForm(m *molecule.Molecule) (*molecule.Molecule, bool) {
 			if m.Bonds[b2].Order != 2 || m.Atoms[k].Element != "O" || len(m.Adj[k]) != 1 || m.Atoms[k].HCount != 0 {
 				continue
 			}
-			alt := &molecule.Molecule{
-				Atoms:  append([]molecule.Atom(nil), m.Atoms...),
-				Bonds:  append([]molecule.Bond(nil), m.Bonds...),
-				Adj:    m.Adj, // same connections; never modified
-				SMILES: m.SMILES,
+			// built by the molecule package: rings and aromaticity stay right
+			alt, err := m.WithBondOrders(map[int]int{b1: 2, b2: 1}, map[int]int{site: 0, k: 1})
+			if err != nil {
+				return nil, false
 			}
-			alt.Bonds[b1].Order, alt.Bonds[b2].Order = 2, 1
-			alt.Bonds[b1].Stereo = 0
-			alt.Atoms[site].Radical, alt.Atoms[k].Radical = 0, 1
 			return alt, true
 		}
 	}

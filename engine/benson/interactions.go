@@ -2,7 +2,7 @@ package benson
 
 // Non-next-nearest-neighbour corrections, counted on the closed-shell graph.
 //
-// Gauche (Benson 1976; counting as in Cohen 1996): for every acyclic single
+// Gauche (Benson 1976): for every acyclic single
 // bond x–y between two sp3 carbons, let a and b be the numbers of carbon
 // neighbours of x and y other than each other. The most stable staggered
 // rotamer then has g(a,b) gauche pairs: g = 0 if a or b is 0 or a = b = 1;

@@ -66,6 +66,9 @@ func siteOf(g *graph, i int) (site, missing string, err error) {
 				return "alpha-alkoxy", "", nil
 			}
 		}
+		if site, miss, ok := heteroSite(g, i); ok {
+			return site, miss, nil
+		}
 		alkyl := "primary"
 		switch {
 		case carbons == 2:
@@ -98,6 +101,9 @@ func siteOf(g *graph, i int) (site, missing string, err error) {
 			}
 		}
 		return "alkoxy", "", nil
+	}
+	if site, miss, ok := heteroSite(g, i); ok {
+		return site, miss, nil
 	}
 	return "", "", fmt.Errorf("benson: radical site on %s is outside the HBI table", g.m.Atoms[i].Element)
 }
@@ -144,12 +150,144 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 			est.Corrections = append(est.Corrections, lostModes(site, count[site]))
 			est.Missing = append(est.Missing, Missing{
 				Group:         "HBI dS, dCp: " + site,
-				Approximation: "lost X–H vibrations",
-				Note:          "no published entropy and heat-capacity increment at hand: the stretch and two bends of the removed H are taken out as harmonic oscillators",
+				Approximation: "statistical-mechanics site model",
+				Note:          "no published entropy and heat-capacity increment at hand: the removed H's stretch and bends are taken out as harmonic oscillators, and the radical centre's inversion mode and changed internal rotors are added (radical.go)",
 			})
 		}
 	}
+	if t, ok := siteChanges(m, g); ok {
+		est.Corrections = append(est.Corrections, t)
+	}
 	return nil
+}
+
+// Statistical-mechanics changes at a radical site besides the lost X–H
+// vibrations (lostModes), for sites without tabulated HBI entropy and heat
+// capacity increments. Three effects, with typical values of the trade
+// (common practice; magnitudes as discussed by Lay, Bozzelli, Dean & Ritter
+// 1995 for their HBI derivation, numbers here from memory):
+//
+//   - Inversion: a non-conjugated carbon radical centre (alkyl,
+//     α-hydroxy, α-alkoxy) is planar or nearly so, with a soft out-of-plane
+//     (umbrella) vibration near inversionWavenumber that the sp3 parent
+//     lacks; it is added as a harmonic oscillator.
+//   - Freed rotors: each single bond from such a centre to another carbon
+//     was an internal rotor with a threefold barrier near 3 kcal/mol in the
+//     parent and is nearly free next to the planar centre (barrier a few
+//     tenths of a kcal/mol). Pitzer's hindered-rotor tables give
+//     S_free − S_hindered ≈ 1.0 cal/(mol K) at 298 K for a methyl-type top
+//     at V₀/RT ≈ 5 (freedRotorS), and the hindered rotor's Cp excess over
+//     the free rotor (freedRotorCp) fades with temperature.
+//   - Alkoxy: the O–H torsion of an alcohol parent is a nearly free rotor
+//     (barrier ≈ 1.1 kcal/mol; reduced moment ≈ 0.67 amu·Å² gives a free-rotor
+//     S of 4.2 and, with Pitzer's correction, ohRotorS ≈ 3.9 cal/(mol K)
+//     without its symmetry number), not the stiff 300 cm⁻¹ torsion lostModes
+//     removes for every O–H; the difference is removed here. Peroxy and
+//     phenoxy parents (ROO–H, ArO–H) have stiff torsions (barriers of
+//     several kcal/mol) and keep the harmonic treatment.
+//   - Conjugation: at an allylic or benzylic site the bond to the π system
+//     stops being a rotor (the barrier rises to 10–15 kcal/mol) and becomes
+//     a torsion near inversionWavenumber: the parent's hindered-rotor S
+//     (hinderedRotorS) and Cp (hinderedRotorCp) are removed and the torsion
+//     added as a harmonic oscillator. A propargylic site is left alone: the
+//     methyl "rotor" of a C≡C–CH3 parent turns about the molecular axis and
+//     is part of overall rotation, not an internal rotor.
+//
+// Spin degeneracy (R ln multiplicity) and the symmetry change (σ of the
+// radical itself) are applied in Estimate.
+const (
+	inversionWavenumber = 500.0 // cm⁻¹
+	freedRotorS         = 1.0   // cal/(mol K)
+	hinderedRotorS      = 4.9   // cal/(mol K), methyl-type top, symmetry number excluded
+	ohRotorS            = 3.9   // cal/(mol K), alcohol O–H torsion as a hindered rotor
+)
+
+var (
+	// cal/(mol K) at StdTemps
+	freedRotorCp    = [7]float64{0.5, 0.4, 0.3, 0.2, 0.1, 0, 0}
+	hinderedRotorCp = [7]float64{2.0, 1.9, 1.7, 1.6, 1.4, 1.3, 1.1}
+)
+
+// siteChanges returns one correction with the inversion, freed-rotor and
+// conjugation terms of every radical site of m (g is its parent), and false
+// when there are none.
+func siteChanges(m *molecule.Molecule, g *graph) (Term, bool) {
+	t := Term{Name: "radical site: inversion and internal-rotor changes", Source: "statistical mechanics, typical frequencies and barriers (common practice; see radical.go)"}
+	n := 0
+	vib := func(sign float64) {
+		th := secondRadiation * inversionWavenumber
+		x := th / 298.15
+		t.S298 += sign * R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
+		for i, T := range StdTemps {
+			x := th / T
+			ex := math.Exp(x)
+			t.Cp[i] += sign * R * x * x * ex / ((ex - 1) * (ex - 1))
+		}
+	}
+	for i, a := range m.Atoms {
+		if a.Radical != 1 {
+			continue
+		}
+		site, _, err := siteOf(g, i)
+		if err != nil {
+			continue
+		}
+		if a.Element == "O" && site == "alkoxy" && len(g.nbr[i]) == 1 && g.typ[g.nbr[i][0]] == "C" {
+			// Replace the stiff 300 cm⁻¹ torsion of lostModes by the
+			// alcohol's nearly free O–H rotor.
+			n++
+			th := secondRadiation * lostOH[2]
+			x := th / 298.15
+			t.S298 += R*(x/math.Expm1(x)-math.Log(-math.Expm1(-x))) - ohRotorS*calorie
+			continue
+		}
+		if dS, dCp, ok := heteroSiteChange(g, i, site); ok {
+			n++
+			t.S298 += dS
+			for c := range t.Cp {
+				t.Cp[c] += dCp[c]
+			}
+			continue
+		}
+		if a.Element != "C" || g.typ[i] != "C" {
+			continue
+		}
+		conjugated := false
+		for _, j := range g.nbr[i] {
+			switch g.typ[j] {
+			case "Cd", "Ca", "Cb", "Cbf":
+				conjugated = true
+			}
+		}
+		if (site == "allylic" || site == "benzylic") && !conjugated {
+			continue // propargylic: no internal rotor changes
+		}
+		switch site {
+		case "primary", "secondary", "tertiary", "alpha-hydroxy", "alpha-alkoxy":
+			if len(g.nbr[i]) == 0 {
+				continue // methyl-type: no parent rotor, no sp3 skeleton
+			}
+			n++
+			vib(+1)
+			for k, j := range g.nbr[i] {
+				if g.isCarbon(j) && g.order(g.nbrBond[i][k]) == 1 && len(g.nbr[j])+g.m.Atoms[j].HCount > 1 {
+					t.S298 += freedRotorS * calorie
+					for c := range t.Cp {
+						t.Cp[c] -= freedRotorCp[c] * calorie
+					}
+				}
+			}
+		case "allylic", "benzylic":
+			n++
+			vib(+1)
+			t.S298 -= hinderedRotorS * calorie
+			for c := range t.Cp {
+				t.Cp[c] -= hinderedRotorCp[c] * calorie
+			}
+		}
+	}
+	t.Count = n
+	return t, n > 0
 }
 
 // Wavenumbers (cm⁻¹) of the three vibrations an H atom brings to its heavy

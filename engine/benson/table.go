@@ -35,14 +35,19 @@ type tables struct {
 	order       []string              // file order, for GroupTable
 	corrections map[string]GroupValue
 	hbi         map[string]hbiValue
+	centres     map[string]bool // centre types with at least one group
+	systems     []systemValue   // whole ring systems (systems.tsv)
 }
 
 // hfH is ΔHf°298 of the H atom, 52.10 kcal/mol (NIST-JANAF, Chase 1998).
 const hfH = 52.10 * calorie * 1000
 
 var builtin = sync.OnceValue(func() *tables {
-	t := &tables{groups: map[string]GroupValue{}, corrections: map[string]GroupValue{}, hbi: map[string]hbiValue{}}
+	t := &tables{groups: map[string]GroupValue{}, corrections: map[string]GroupValue{}, hbi: map[string]hbiValue{}, centres: map[string]bool{}}
 	groups := mustParse("groups.tsv", groupsTSV)
+	for _, x := range extraGroupTables {
+		groups = append(groups, mustParse(x.file, x.text)...)
+	}
 	for i := range groups {
 		name, err := ParseGroupName(groups[i].Name)
 		if err != nil {
@@ -60,7 +65,12 @@ var builtin = sync.OnceValue(func() *tables {
 	for _, v := range mustFill("corrections.tsv", mustParse("corrections.tsv", correctionsTSV)) {
 		t.corrections[v.Name] = v
 	}
-	for _, r := range mustParse("hbi.tsv", hbiTSV) {
+	sys, err := parseSystems(systemsTSV)
+	if err != nil {
+		panic(fmt.Sprintf("benson: systems.tsv: %v", err))
+	}
+	t.systems = sys
+	for _, r := range append(mustParse("hbi.tsv", hbiTSV), mustParse("hbi_nsx.tsv", hbiNSXTSV)...) {
 		// Column 2 holds D(R–H); the ΔHf increment is D − ΔHf(H).
 		v := r.GroupValue
 		bde := v.Hf298
@@ -71,6 +81,11 @@ var builtin = sync.OnceValue(func() *tables {
 			v.Cp = [7]float64{}
 		}
 		t.hbi[v.Name] = hbiValue{site: v.Name, bde: bde, hasSCp: has, value: v}
+	}
+	// The supported centres are read off the finished group table, so any
+	// group file loaded above (or added later) extends them.
+	for name := range t.groups {
+		t.centres[centreOf(name)] = true
 	}
 	return t
 })
@@ -211,6 +226,28 @@ func lookupTable(user []GroupValue) lookup {
 		}
 	}
 	return l
+}
+
+// centreOf returns the centre type of a normalised group name ("C" for
+// "C-(C)(H)3", "Ca" for "Ca").
+func centreOf(name string) string {
+	c, _, _ := strings.Cut(name, "-")
+	return c
+}
+
+// hasCentre reports whether any loaded group (user or built-in) has centre
+// type c: the single gate deciding which elements and atom environments
+// group additivity supports.
+func (l lookup) hasCentre(c string) bool {
+	if l.centres[c] {
+		return true
+	}
+	for name := range l.user {
+		if centreOf(name) == c {
+			return true
+		}
+	}
+	return false
 }
 
 func (l lookup) group(name string) (GroupValue, bool) {

@@ -24,8 +24,10 @@ func electronegativity(sym string) float64 {
 }
 
 // perceive computes rings, ring systems and aromaticity of a Kekulé graph.
-func (m *Molecule) perceive() {
-	inRing := m.ringBondFlags()
+func (m *Molecule) perceive() { m.perceiveWith(m.ringBondFlags()) }
+
+// perceiveWith is perceive with the ring-bond flags already computed.
+func (m *Molecule) perceiveWith(inRing []bool) {
 	m.rings, m.cycles = m.findRings(inRing)
 	m.ringSys = ringSystems(len(m.Atoms), m.rings)
 	m.perceiveAromaticity(inRing)
@@ -57,12 +59,17 @@ func ringSystems(n int, rings [][]int) [][]int {
 		}
 	}
 	in := make([]bool, n)
-	var out [][]int
+	total := 0
+	for _, ring := range rings {
+		total += len(ring)
+	}
+	buf := make([]int, 0, total) // the systems' lists share one array
+	out := make([][]int, 0, len(rings))
 	for r := range rings {
 		if find(parent, r) != r {
 			continue
 		}
-		var list []int
+		list := buf[len(buf):len(buf)]
 		for r2, ring := range rings {
 			if find(parent, r2) != r {
 				continue
@@ -78,7 +85,8 @@ func ringSystems(n int, rings [][]int) [][]int {
 			in[a] = false
 		}
 		slices.Sort(list)
-		out = append(out, list)
+		out = append(out, list[:len(list):len(list)])
+		buf = buf[:len(buf)+len(list)]
 	}
 	slices.SortFunc(out, slices.Compare)
 	return out
@@ -272,4 +280,14 @@ func (m *Molecule) perceiveAromaticity(inRing []bool) {
 			}
 		}
 	}
+}
+
+// atomInRing reports whether atom i has a ring bond.
+func (m *Molecule) atomInRing(i int, inRing []bool) bool {
+	for _, b := range m.Adj[i] {
+		if inRing[b] {
+			return true
+		}
+	}
+	return false
 }

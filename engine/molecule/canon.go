@@ -1,17 +1,20 @@
 package molecule
 
 import (
+	"context"
 	"math/big"
 	"slices"
 	"strings"
 )
 
 // DefaultSearchWork is the work budget of the symmetry search used by
-// Canonical, CanonicalStereo and SymmetryClasses, in atom-refinements (one
-// partition refinement of an n-atom component costs n). Ordinary molecules
-// need well under a thousand; the budget bounds pathological inputs (hundreds
-// of identical branches) to about a second.
-const DefaultSearchWork = 4000000
+// Canonical, CanonicalStereo, SymmetryClasses and SymmetryNumber, in
+// atom-refinements (one partition refinement of an n-atom component costs
+// n). Ordinary molecules need well under a thousand, cages such as C60 a few
+// thousand; the budget bounds pathological inputs to roughly a tenth of a
+// second, after which CanonicalContext and SymmetryNumber report
+// ErrWorkLimit.
+const DefaultSearchWork = 1000000
 
 // cgraph is the heavy-atom graph seen by the symmetry search: atoms coloured
 // by their properties, bonds coloured by type.
@@ -41,13 +44,25 @@ func bondCode(b Bond) int {
 // connected components); vertex k of the graph is atom atoms[k]. local is
 // scratch of length len(m.Atoms).
 func (m *Molecule) cgraphOf(atoms []int, local []int) *cgraph {
+	return m.cgraphOfSub(atoms, local, nil, nil)
+}
+
+// cgraphOfSub is cgraphOf for a subgraph: bonds with skip[b] set are left
+// out (the atoms listed must be closed under the other bonds), and extra,
+// when not nil, adds a colour per atom (indexed by atom) to the initial
+// partition.
+func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []int) *cgraph {
 	n := len(atoms)
 	for k, a := range atoms {
 		local[a] = k
 	}
 	deg := 0
 	for _, i := range atoms {
-		deg += len(m.Adj[i])
+		for _, b := range m.Adj[i] {
+			if skip == nil || !skip[b] {
+				deg++
+			}
+		}
 	}
 	lists := make([][]int, 2*n)
 	g := &cgraph{n: n, nbr: lists[:n:n], bt: lists[n:]}
@@ -56,12 +71,15 @@ func (m *Molecule) cgraphOf(atoms []int, local []int) *cgraph {
 	for k, i := range atoms {
 		s := len(nb)
 		for _, b := range m.Adj[i] {
+			if skip != nil && skip[b] {
+				continue
+			}
 			nb = append(nb, local[m.Other(b, i)])
 			bt = append(bt, bondCode(m.Bonds[b]))
 		}
 		g.nbr[k], g.bt[k] = nb[s:len(nb):len(nb)], bt[s:len(bt):len(bt)]
 	}
-	keys := make([][7]int, n)
+	keys := make([][8]int, n)
 	idx := ints[2*deg : 2*deg+n : 2*deg+n]
 	for k := range idx {
 		a := m.Atoms[atoms[k]]
@@ -70,7 +88,11 @@ func (m *Molecule) cgraphOf(atoms []int, local []int) *cgraph {
 		if a.Aromatic {
 			ar = 1
 		}
-		keys[k] = [7]int{e.Z, a.Isotope, a.Charge, a.HCount, a.Radical, ar, len(m.Adj[atoms[k]])}
+		x := 0
+		if extra != nil {
+			x = extra[atoms[k]]
+		}
+		keys[k] = [8]int{e.Z, a.Isotope, a.Charge, a.HCount, a.Radical, ar, len(m.Adj[atoms[k]]), x}
 		idx[k] = k
 	}
 	slices.SortFunc(idx, func(x, y int) int { return slices.Compare(keys[x][:], keys[y][:]) })
@@ -299,6 +321,8 @@ type search struct {
 	budget    int
 	exhausted bool
 	gens      [][]int
+	ctx       context.Context // nil: no cancellation
+	calls     int
 }
 
 // step charges one partition refinement (work proportional to the number of
@@ -306,6 +330,10 @@ type search struct {
 func (s *search) step() bool {
 	s.steps += s.g.n
 	if s.steps > s.budget {
+		s.exhausted = true
+	}
+	s.calls++
+	if s.ctx != nil && s.calls%256 == 0 && s.ctx.Err() != nil {
 		s.exhausted = true
 	}
 	return !s.exhausted
@@ -625,6 +653,12 @@ func (m *Molecule) components() [][]int {
 // joins the results: identical components are exchanged by extra generators
 // and multiply the group order by k! for k copies.
 func (m *Molecule) symmetry(budget int, withAut bool) symmetryInfo {
+	return m.symmetryCtx(nil, budget, withAut)
+}
+
+// symmetryCtx is symmetry with cancellation (ctx may be nil): a cancelled
+// search ends as if its budget ran out (exact false).
+func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) symmetryInfo {
 	n := len(m.Atoms)
 	comps := m.components()
 	type compInfo struct {
@@ -652,7 +686,7 @@ func (m *Molecule) symmetry(budget int, withAut bool) symmetryInfo {
 			cis[c] = compInfo{atoms: atoms, labels: root}
 			continue
 		}
-		s := &search{g: g, budget: per, root: root}
+		s := &search{g: g, budget: per, root: root, ctx: ctx}
 		var sizes []int
 		exact := true
 		if withAut {

@@ -4,10 +4,7 @@
 // It reads OpenSMILES (see ParseSMILES) and does no I/O.
 package molecule
 
-import (
-	"slices"
-	"sync"
-)
+import "sync"
 
 // Atom is one heavy (or explicitly written) atom of the graph. Hydrogens that
 // are implicit in the SMILES are not atoms of the graph: they are counted in
@@ -42,15 +39,25 @@ type Bond struct {
 
 // Molecule is a molecular graph: possibly several '.'-separated components.
 //
-// A Molecule from ParseSMILES is meant to be read-only: its canonical forms
-// and symmetry classes are computed once, on first use, and then shared by
-// all goroutines. If Atoms or Bonds are changed or replaced afterwards (or a
-// changed copy is made), the cached results no longer match and are
-// recomputed on every call instead.
+// A Molecule is immutable once built: Atoms, Bonds and Adj are exported for
+// reading (m.Atoms[i].HCount, m.Bonds[b].Order) and must never be written.
+// Derived forms — the closed-shell parent of a radical, a resonance
+// structure with moved double bonds and radical sites — are made with the
+// constructors ClosedShellParent, WithHydrogenAdded and WithBondOrders, which
+// redo ring and aromaticity perception; copying the struct and editing the
+// copy would keep stale ring and aromaticity data and is not supported.
+// Build molecules with ParseSMILES or those constructors, never as struct
+// literals (a literal has no rings).
+//
+// Canonical forms and symmetry are computed once, on first use, and then
+// shared by all goroutines. As a guard against the unsupported copy-and-edit
+// pattern, a copy whose Atoms or Bonds slice was replaced recomputes them
+// instead of returning the original's.
 type Molecule struct {
 	Atoms []Atom
 	Bonds []Bond
-	// Adj[i] lists the indices into Bonds of the bonds at atom i.
+	// Adj[i] lists the indices into Bonds of the bonds at atom i. Derived
+	// forms share it with their original (connectivity does not change).
 	Adj [][]int
 	// SMILES is the input text the molecule was read from.
 	SMILES string
@@ -71,11 +78,14 @@ type Molecule struct {
 }
 
 // derived holds the graph-dependent results that callers ask for again and
-// again. atoms and bonds are snapshots taken at parse time: the cache serves
-// only a Molecule whose Atoms and Bonds still equal them.
+// again. atoms and bonds identify the slices the cache was made for (their
+// first elements and lengths): a copy of the Molecule with other slices does
+// not use it. Keeping identities instead of copies costs no memory per atom.
 type derived struct {
-	atoms []Atom
-	bonds []Bond
+	atoms  *Atom
+	natoms int
+	bonds  *Bond
+	nbonds int
 
 	once    sync.Once
 	info    symmetryInfo // symmetry(DefaultSearchWork, true)
@@ -86,16 +96,23 @@ type derived struct {
 	canonStereo string
 }
 
-// newDerived snapshots m's graph for the cache.
+func first[T any](s []T) *T {
+	if len(s) == 0 {
+		return nil
+	}
+	return &s[0]
+}
+
+// newDerived records m's graph slices for the cache.
 func newDerived(m *Molecule) *derived {
-	return &derived{atoms: slices.Clone(m.Atoms), bonds: slices.Clone(m.Bonds)}
+	return &derived{atoms: first(m.Atoms), natoms: len(m.Atoms), bonds: first(m.Bonds), nbonds: len(m.Bonds)}
 }
 
 // cache returns the computed cache of m, or nil when m has none or its
-// graph changed since parsing.
+// graph slices were replaced since it was built.
 func (m *Molecule) cache() *derived {
 	d := m.derived
-	if d == nil || !slices.Equal(d.atoms, m.Atoms) || !slices.Equal(d.bonds, m.Bonds) {
+	if d == nil || d.atoms != first(m.Atoms) || d.natoms != len(m.Atoms) || d.bonds != first(m.Bonds) || d.nbonds != len(m.Bonds) {
 		return nil
 	}
 	d.once.Do(func() {

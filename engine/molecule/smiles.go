@@ -54,19 +54,19 @@ type parser struct {
 	nbr      [][]int // per atom: neighbours in written order (for chirality)
 	hadPrev  []bool  // per atom: bonded to a preceding atom when written
 	bracketH []int   // per atom: H count written inside the bracket
-	// atomBonds[i] lists the bonds at atom i (indices into bonds)
-	atomBonds [][]int
-	heavy     int
+	heavy    int
 }
 
 // ParseSMILES reads an OpenSMILES string into a Molecule.
 //
 // Supported: the organic subset B C N O P S F Cl Br I with implicit hydrogens
 // from the lowest normal valence ≥ the bond-order sum (B 3; C 4; N 3,5; O 2;
-// P 3,5; S 2,4,6; halogens 1), aromatic b c n o p s, bracket atoms
-// [isotope symbol chirality Hn charge :class] including aromatic [se] and
-// [as], bonds - = # $ : / \, branches, ring closures 0–9 and %nn with the bond
-// symbol at either end, and '.'-separated components. The wildcard '*' is
+// P 3,5; S 2,4,6; halogens 1), aromatic b c n o p s (ring atoms only),
+// bracket atoms [isotope symbol chirality Hn charge :class] including
+// aromatic [se] and [as] and every OpenSMILES chirality class (@, @@,
+// @TH1–2, @AL1–2, @SP1–3, @TB1–20, @OH1–30; kept verbatim), bonds - = # $ : / \, branches, ring closures 0–9 and %nn with the bond
+// symbol at either end, and '.'-separated components ('.' never inside a
+// branch). The wildcard '*' is
 // rejected. Aromatic input is kekulized (maximum matching); aromaticity is then
 // perceived afresh on the Kekulé graph, so Kekulé and aromatic spellings of a
 // molecule give the same graph. Bracket atoms with fewer bonds+H than their
@@ -80,6 +80,9 @@ func ParseSMILES(s string) (*Molecule, error) {
 	}
 	p := newParser(s)
 	if err := p.parse(); err != nil {
+		return nil, err
+	}
+	if err := p.aromaticInRings(); err != nil {
 		return nil, err
 	}
 	if err := p.kekulize(); err != nil {
@@ -108,11 +111,11 @@ func newParser(s string) *parser {
 	// capacities are limited, so an append past the estimate reallocates
 	// only that slice.
 	bools := make([]bool, 3*n+4)
-	lists := make([][]int, 2*n)
+	lists := make([][]int, n)
 	return &parser{s: s,
 		atoms: make([]Atom, 0, n), bonds: make([]Bond, 0, n+4),
 		organic: bools[:0:n], hadPrev: bools[n : n : 2*n], aromIn: bools[2*n : 2*n : 3*n+4],
-		nbr: lists[:0:n], atomBonds: lists[n : n : 2*n],
+		nbr:      lists[:0:n],
 		bracketH: make([]int, 0, n)}
 }
 
@@ -126,20 +129,24 @@ func (p *parser) addAtom(a Atom, organic bool) (int, error) {
 	p.atoms = append(p.atoms, a)
 	p.organic = append(p.organic, organic)
 	p.nbr = append(p.nbr, nil)
-	p.atomBonds = append(p.atomBonds, nil)
 	p.hadPrev = append(p.hadPrev, false)
 	p.bracketH = append(p.bracketH, a.HCount)
 	return len(p.atoms) - 1, nil
 }
 
-func (p *parser) addBond(a, b int, sym byte, pos int) (int, error) {
+// addBond adds the bond a–b; closure is true for a ring-closure bond, the
+// only kind that can repeat an existing bond (a chain bond always reaches a
+// new atom).
+func (p *parser) addBond(a, b int, sym byte, pos int, closure bool) (int, error) {
 	if a == b {
 		return 0, errAt(pos, "ring bond from an atom to itself")
 	}
-	for _, k := range p.atomBonds[a] {
-		bd := &p.bonds[k]
-		if (bd.A == a && bd.B == b) || (bd.A == b && bd.B == a) {
-			return 0, errAt(pos, "second bond between the same two atoms")
+	if closure {
+		for k := range p.bonds {
+			bd := &p.bonds[k]
+			if (bd.A == a && bd.B == b) || (bd.A == b && bd.B == a) {
+				return 0, errAt(pos, "second bond between the same two atoms")
+			}
 		}
 	}
 	arom := sym == ':' || (sym == 0 && p.atoms[a].Aromatic && p.atoms[b].Aromatic)
@@ -152,10 +159,7 @@ func (p *parser) addBond(a, b int, sym byte, pos int) (int, error) {
 	}
 	p.bonds = append(p.bonds, bd)
 	p.aromIn = append(p.aromIn, arom)
-	k := len(p.bonds) - 1
-	p.atomBonds[a] = append(p.atomBonds[a], k)
-	p.atomBonds[b] = append(p.atomBonds[b], k)
-	return k, nil
+	return len(p.bonds) - 1, nil
 }
 
 func isBondSym(c byte) bool {
@@ -223,6 +227,9 @@ func (p *parser) parse() error {
 			if prev < 0 || lastOpen {
 				return errAt(i, "'.' with no atom before it")
 			}
+			if len(branches) > 0 {
+				return errAt(i, "'.' inside a branch (components must be separated outside parentheses)")
+			}
 			prev = -1
 			i++
 			continue
@@ -257,16 +264,22 @@ func (p *parser) parse() error {
 				if sym == 0 {
 					pos = start
 				}
-				if _, err := p.addBond(a, b, sym, pos); err != nil {
+				if _, err := p.addBond(a, b, sym, pos, true); err != nil {
 					return err
 				}
-				p.nbr[r.atom][r.slot] = prev
-				p.nbr[prev] = append(p.nbr[prev], r.atom)
+				if r.slot >= 0 {
+					p.nbr[r.atom][r.slot] = prev
+				}
+				p.addNbr(prev, r.atom)
 				ringOpenFlag[num] = false
 				openRings--
 			} else {
-				p.nbr[prev] = append(p.nbr[prev], -2)
-				rings[num] = ringOpen{atom: prev, sym: pendSym, symPos: pendPos, pos: start, slot: len(p.nbr[prev]) - 1}
+				slot := -1
+				if p.atoms[prev].Chirality != "" {
+					p.nbr[prev] = append(p.nbr[prev], -2)
+					slot = len(p.nbr[prev]) - 1
+				}
+				rings[num] = ringOpen{atom: prev, sym: pendSym, symPos: pendPos, pos: start, slot: slot}
 				ringOpenFlag[num] = true
 				openRings++
 			}
@@ -288,11 +301,11 @@ func (p *parser) parse() error {
 			if pendSym != 0 {
 				pos = pendPos
 			}
-			if _, err := p.addBond(prev, idx, pendSym, pos); err != nil {
+			if _, err := p.addBond(prev, idx, pendSym, pos, false); err != nil {
 				return err
 			}
-			p.nbr[prev] = append(p.nbr[prev], idx)
-			p.nbr[idx] = append(p.nbr[idx], prev)
+			p.addNbr(prev, idx)
+			p.addNbr(idx, prev)
 			p.hadPrev[idx] = true
 		} else if pendSym != 0 {
 			return errAt(pendPos, "bond with no atom before it")
@@ -462,16 +475,9 @@ func (p *parser) readBracket(start int) (Atom, int, error) {
 	}
 	// chirality
 	if i < end && s[i] == '@' {
-		k := i + 1
-		if k < end && s[k] == '@' {
-			k++
-		} else {
-			for k < end && s[k] >= 'A' && s[k] <= 'Z' && s[k] != 'H' {
-				k++
-			}
-			for k < end && isDigit(s[k]) {
-				k++
-			}
+		k, err := chiralityEnd(s, i, end)
+		if err != nil {
+			return a, 0, err
 		}
 		a.Chirality = s[i:k]
 		i = k
@@ -533,4 +539,102 @@ func (p *parser) readBracket(start int) (Atom, int, error) {
 		return a, 0, errAt(i, "unexpected %q in bracket atom", rune(s[i]))
 	}
 	return a, end - start + 1, nil
+}
+
+// chiralityClasses lists the OpenSMILES chirality classes with the largest
+// permutation number each allows: tetrahedral TH1–2, allene-like AL1–2,
+// square-planar SP1–3, trigonal-bipyramidal TB1–20, octahedral OH1–30.
+var chiralityClasses = [...]struct {
+	name string
+	max  int
+}{{"TH", 2}, {"AL", 2}, {"SP", 3}, {"TB", 20}, {"OH", 30}}
+
+// chiralityEnd reads the chirality mark that starts with '@' at s[i] inside
+// a bracket atom ending at end, and returns the offset just after it: "@",
+// "@@", or '@' followed by a class name and a permutation number. An 'H'
+// right after '@' is the hydrogen count, not a class. Any other letter after
+// '@' is an error at its position (it is never read as the next token).
+func chiralityEnd(s string, i, end int) (int, error) {
+	k := i + 1
+	if k < end && s[k] == '@' {
+		return k + 1, nil
+	}
+	if k >= end || s[k] < 'A' || s[k] > 'Z' || s[k] == 'H' {
+		return k, nil
+	}
+	for _, c := range chiralityClasses {
+		if k+2 > end || s[k:k+2] != c.name {
+			continue
+		}
+		d := k + 2
+		n := 0
+		for d < end && isDigit(s[d]) && d-k-2 < 3 {
+			n = n*10 + int(s[d]-'0')
+			d++
+		}
+		if d == k+2 {
+			return 0, errAt(k, "chirality class @%s needs a number (1–%d)", c.name, c.max)
+		}
+		if n < 1 || n > c.max {
+			return 0, errAt(k+2, "chirality @%s%d out of range (1–%d)", c.name, n, c.max)
+		}
+		return d, nil
+	}
+	j := k
+	for j < end && s[j] >= 'A' && s[j] <= 'Z' {
+		j++
+	}
+	return 0, errAt(k, "invalid chirality %q (expected @, @@, @TH1–2, @AL1–2, @SP1–3, @TB1–20 or @OH1–30)", "@"+s[k:j])
+}
+
+// aromaticInRings rejects atoms written aromatic (lower case) that lie on no
+// ring: OpenSMILES aromaticity is a property of ring atoms, so "CoC" is an
+// error rather than dimethyl ether.
+func (p *parser) aromaticInRings() error {
+	arom := false
+	for _, a := range p.atoms {
+		arom = arom || a.Aromatic
+	}
+	if !arom {
+		return nil
+	}
+	g := &Molecule{Atoms: p.atoms, Bonds: p.bonds, Adj: adjacency(len(p.atoms), p.bonds)}
+	inRing := g.ringBondFlags()
+	for i, a := range p.atoms {
+		if a.Aromatic && !g.atomInRing(i, inRing) {
+			return errAt(a.Pos, "aromatic atom %q not in a ring", p.s[a.Pos:a.Pos+a.Len])
+		}
+	}
+	return nil
+}
+
+// addNbr records x as the next written neighbour of atom i when i carries a
+// chirality mark (the only atoms whose neighbour order matters).
+func (p *parser) addNbr(i, x int) {
+	if p.atoms[i].Chirality != "" {
+		p.nbr[i] = append(p.nbr[i], x)
+	}
+}
+
+// adjacency returns the bond lists of n atoms (indices into bonds), all in
+// one backing array; each list's capacity is its length.
+func adjacency(n int, bonds []Bond) [][]int {
+	cnt := make([]int, n+1)
+	for _, b := range bonds {
+		cnt[b.A+1]++
+		cnt[b.B+1]++
+	}
+	for i := 1; i <= n; i++ {
+		cnt[i] += cnt[i-1]
+	}
+	back := make([]int, cnt[n])
+	adj := make([][]int, n)
+	for i := range adj {
+		adj[i] = back[cnt[i]:cnt[i]:cnt[i+1]]
+	}
+	for k, b := range bonds {
+		adj[b.A] = append(adj[b.A], k)
+		adj[b.B] = append(adj[b.B], k)
+	}
+	return adj
 }

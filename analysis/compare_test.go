@@ -1,0 +1,277 @@
+package analysis
+
+import (
+	"context"
+	"fmt"
+	"regexp"
+	"strconv"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/engine/kinetics"
+	"kiln.dev/kiln/internal/mechgen"
+)
+
+func compareTexts(t testing.TB, files map[string]string, a, b string) *Comparison {
+	ws := NewWorkspace("/w", func(p string) ([]byte, error) {
+		if s, ok := files[p]; ok {
+			return []byte(s), nil
+		}
+		return nil, fmt.Errorf("no file %s", p)
+	}, DefaultSettings())
+	c, err := ws.Compare(context.Background(), a, b, CompareOptions{})
+	require.NoError(t, err)
+	return c
+}
+
+func pairNames(c *Comparison) map[string]string {
+	out := map[string]string{}
+	for _, p := range c.Species {
+		out[p.A.Name] = p.B.Name
+	}
+	return out
+}
+
+// TestCompareMatching: structure and multiplicity decide, not names or
+// spellings; stereo isomers stay apart; lumped species pair by name and
+// composition; included files count; a multiplicity written out equals the
+// ground state kiln assumes without it (O=O is triplet oxygen).
+func TestCompareMatching(t *testing.T) {
+	files := map[string]string{
+		"/w/a.kiln": `species CH2 [CH2]
+species singlet-CH2 [CH2]
+  multiplicity 1
+species cis C/C=C\C
+species trans C/C=C/C
+species benzene c1ccccc1
+species O2 O=O
+  multiplicity 3
+species tar
+  composition C10H8
+  thermo-table
+    hf298 35
+    s298 80
+    cp 300=32 1000=70
+species pitch
+  composition C16H10
+  thermo-table
+    hf298 50
+    s298 90
+    cp 300=40 1000=90
+include more.kiln
+`,
+		"/w/more.kiln": "species acetone CC(C)=O\n",
+		"/w/b.kiln": `species methylene-s [CH2]
+  multiplicity 1
+species methylene [CH2]
+species E-butene C\C=C\C
+species Z-butene C/C=C\C
+species phenyl-H C1=CC=CC=C1
+species oxygen O=O
+species tar
+  composition C10H8
+  thermo-table
+    hf298 35
+    s298 80
+    cp 300=32 1000=70
+species pitch
+  composition C16H12
+  thermo-table
+    hf298 50
+    s298 90
+    cp 300=40 1000=90
+species propanone O=C(C)C
+`,
+	}
+	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	assert.Equal(t, map[string]string{"CH2": "methylene", "singlet-CH2": "methylene-s", "cis": "Z-butene", "trans": "E-butene",
+		"benzene": "phenyl-H", "O2": "oxygen", "tar": "tar", "acetone": "propanone"}, pairNames(c))
+	require.Len(t, c.OnlyA, 1)
+	assert.Equal(t, "pitch", c.OnlyA[0].Name, "same name, other composition: not matched")
+	assert.Equal(t, "/w/more.kiln", c.Species[len(c.Species)-1].A.File)
+	for _, p := range c.Species {
+		if p.A.Name == "tar" {
+			assert.Equal(t, "name", p.By)
+		} else {
+			assert.Equal(t, "structure", p.By)
+		}
+	}
+}
+
+// TestCompareReactions: duplicates are summed, third bodies must agree,
+// and an irreversible step written the other way has no ratio.
+func TestCompareReactions(t *testing.T) {
+	files := map[string]string{
+		"/w/a.kiln": `species H [H]
+species O2 O=O
+species HO2 [O]O
+species OH [OH]
+species O [O]
+reaction H + O2 (+M) <=> HO2 (+M)   A=4.6e12 n=0.44 Ea=0
+  low-pressure A=6.3e19 n=-1.4 Ea=0
+reaction H + O2 <=> O + OH   A=1e14 n=0 Ea=15
+  duplicate
+reaction H + O2 <=> O + OH   A=1e13 n=0 Ea=5
+  duplicate
+reaction HO2 + H => OH + OH   A=7e13 n=0 Ea=0.3
+`,
+		"/w/b.kiln": `species h [H]
+species o2 O=O
+species ho2 [O]O
+species oh [OH]
+species o [O]
+reaction h + o2 + M <=> ho2 + M   A=4.6e12 n=0.44 Ea=0
+reaction o2 + h <=> oh + o   A=1.1e14 n=0 Ea=15
+reaction oh + oh => ho2 + h   A=1e12 n=0 Ea=30
+`,
+	}
+	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	require.Len(t, c.Reactions, 2)
+	chain := c.Reactions[0]
+	assert.Equal(t, "o2 + h <=> oh + o", chain.B.Equation)
+	ka := func(T float64) float64 { return arr(1e14, 15).Rate(T) + arr(1e13, 5).Rate(T) }
+	for i, tt := range CompareRateTemps {
+		require.NotNil(t, chain.Ratio[i])
+		assert.InEpsilon(t, arr(1.1e14, 15).Rate(tt.T)/ka(tt.T), *chain.Ratio[i], 1e-12, "duplicates summed")
+	}
+	rev := c.Reactions[1]
+	assert.True(t, rev.Reversed)
+	assert.Equal(t, [3]*float64{}, rev.Ratio, "an irreversible step has no rate the other way")
+	// The falloff (+M) and the plain third body M are different reactions.
+	require.Len(t, c.ReactionsOnlyA, 1)
+	assert.Contains(t, c.ReactionsOnlyA[0].Equation, "(+M)")
+	require.Len(t, c.ReactionsOnlyB, 1)
+	assert.Contains(t, c.ReactionsOnlyB[0].Equation, "+ M")
+}
+
+func arr(a, eaKcal float64) kinetics.Arrhenius { return kinetics.Arrhenius{A: a, Ea: eaKcal * 4184} }
+
+var (
+	generatedName = regexp.MustCompile(`\b([MR])(\d+)\b`)
+	coreName      = regexp.MustCompile(`(^| )(H|H2|OH|H2O|HO2|H2O2|O2)( |$)`)
+	preExp        = regexp.MustCompile(`A=([0-9.e+-]+)`)
+)
+
+// renameAll gives every species of a generated mechanism another name and
+// doubles the pre-exponential factor of every tenth reaction.
+func renameAll(src string) string {
+	lines := strings.Split(src, "\n")
+	n := 0
+	for i, line := range lines {
+		line = generatedName.ReplaceAllString(line, "${1}x$2")
+		for range 2 { // adjacent matches share a blank
+			line = coreName.ReplaceAllString(line, "${1}${2}-b${3}")
+		}
+		if strings.HasPrefix(line, "reaction ") {
+			n++
+			if n%10 == 0 {
+				line = preExp.ReplaceAllStringFunc(line, func(m string) string {
+					v, _ := strconv.ParseFloat(m[2:], 64)
+					return "A=" + strconv.FormatFloat(2*v, 'g', -1, 64)
+				})
+			}
+		}
+		lines[i] = line
+	}
+	return strings.Join(lines, "\n")
+}
+
+// BenchmarkCompare10k compares two generated 10k-molecule mechanisms
+// (20,000 species and 30,000 reactions each, internal/mechgen): the same
+// mechanism with every name changed and every tenth rate doubled (a merge
+// of two spellings of one mechanism), from a cold workspace.
+func BenchmarkCompare10k(b *testing.B) {
+	a := mechgen.Generate(mechgen.Options{Seed: 1, Molecules: 10000})
+	renamed := renameAll(string(a))
+	files := map[string]string{"/w/a.kiln": string(a), "/w/b.kiln": renamed}
+	b.ResetTimer()
+	for b.Loop() {
+		c := compareTexts(b, files, "/w/a.kiln", "/w/b.kiln")
+		if len(c.Species) != 20007 || len(c.Reactions) != 30000 {
+			b.Fatalf("%d species, %d reactions matched", len(c.Species), len(c.Reactions))
+		}
+	}
+}
+
+// BenchmarkCompare10kDistinct compares two generated 10k-molecule
+// mechanisms from different seeds (few shared species).
+func BenchmarkCompare10kDistinct(b *testing.B) {
+	files := map[string]string{
+		"/w/a.kiln": string(mechgen.Generate(mechgen.Options{Seed: 1, Molecules: 10000})),
+		"/w/b.kiln": string(mechgen.Generate(mechgen.Options{Seed: 2, Molecules: 10000})),
+	}
+	b.ResetTimer()
+	for b.Loop() {
+		compareTexts(b, files, "/w/a.kiln", "/w/b.kiln")
+	}
+}
+
+// TestCompareGenerated: a generated mechanism against its renamed copy
+// (renameAll): every species and reaction is matched through the renaming,
+// every tenth reaction has k_B/k_A = 2 and the others 1. Large enough that
+// structures are read and estimated on several goroutines.
+func TestCompareGenerated(t *testing.T) {
+	src := mechgen.Generate(mechgen.Options{Seed: 3, Molecules: 300})
+	files := map[string]string{"/w/a.kiln": string(src), "/w/b.kiln": renameAll(string(src))}
+	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	assert.Len(t, c.Species, 607)
+	assert.Empty(t, c.OnlyA)
+	assert.Empty(t, c.OnlyB)
+	assert.Empty(t, c.NameClashes)
+	require.Len(t, c.Reactions, 900)
+	doubled := 0
+	for i, p := range c.Reactions {
+		want := 1.0
+		if (i+1)%10 == 0 {
+			want = 2
+			doubled++
+		}
+		for k := range p.Ratio {
+			require.NotNil(t, p.Ratio[k])
+			assert.InEpsilon(t, want, *p.Ratio[k], 1e-12, "%s", p.A.Equation)
+		}
+	}
+	assert.Equal(t, 90, doubled)
+	for _, p := range c.Species {
+		assert.True(t, p.SameEstimate, p.A.Name)
+		assert.True(t, p.Renamed())
+	}
+}
+
+// TestIncludeDuplicatesBounded: an included file that repeats many of the
+// including file's structures under other names gets at most
+// maxIncludeDupReports warnings on the include, plus one that says there
+// are more.
+func TestIncludeDuplicatesBounded(t *testing.T) {
+	var main, sub strings.Builder
+	main.WriteString("include sub.kiln\n")
+	chain := "C"
+	for i := range 30 {
+		chain += "C"
+		fmt.Fprintf(&main, "species a%d %s\n", i, chain)
+		fmt.Fprintf(&sub, "species b%d %s\n", i, chain)
+	}
+	ws := NewWorkspace("/w", func(p string) ([]byte, error) {
+		if p == "/w/sub.kiln" {
+			return []byte(sub.String()), nil
+		}
+		return nil, fmt.Errorf("no file %s", p)
+	}, DefaultSettings())
+	ws.SetOverlay("/w/main.kiln", []byte(main.String()))
+	res, err := ws.Analyze(context.Background(), "/w/main.kiln")
+	require.NoError(t, err)
+	n, more := 0, 0
+	for _, d := range res.Diagnostics {
+		if d.Code == "duplicate-species" {
+			n++
+			if strings.Contains(d.Message, "kiln compare") {
+				more++
+			}
+		}
+	}
+	assert.Equal(t, maxIncludeDupReports+1, n)
+	assert.Equal(t, 1, more)
+}

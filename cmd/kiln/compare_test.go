@@ -1,0 +1,181 @@
+package main
+
+import (
+	"encoding/json"
+	"fmt"
+	"math"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"testing"
+	"unicode/utf8"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/engine/kinetics"
+)
+
+var (
+	compareA = filepath.Join("..", "..", "testdata", "compare", "base.kiln")
+	compareB = filepath.Join("..", "..", "testdata", "compare", "sub.kiln")
+)
+
+func compareJSONOf(t *testing.T, wantCode int, args ...string) compareJSON {
+	t.Helper()
+	code, stdout, stderr := runKiln(t, append([]string{"compare", "--json"}, args...)...)
+	require.Equal(t, wantCode, code, stderr)
+	var o compareJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &o))
+	return o
+}
+
+// TestCompareMechanisms: testdata/compare holds two mechanisms that share
+// species under different names and spellings and differ in thermo and
+// rates (see its README).
+func TestCompareMechanisms(t *testing.T) {
+	o := compareJSONOf(t, exitProblems, compareA, compareB)
+
+	renames := map[string]string{}
+	for _, r := range o.Renames {
+		renames[r.B] = r.A
+	}
+	assert.Equal(t, map[string]string{"hydrogen-atom": "H", "hydroxyl": "OH", "water": "H2O", "ethane": "C2H6", "ethyl": "C2H5"}, renames)
+	assert.Contains(t, o.Renames[0].Suggestion, "rename hydrogen-atom to H in sub.kiln")
+	assert.Equal(t, compareFile{File: o.A.File, Species: 11, Reactions: 4, Errors: 0, Unreadable: []string{}}, o.A)
+
+	names := func(rs []compareRef) []string {
+		var out []string
+		for _, r := range rs {
+			out = append(out, r.Name)
+		}
+		return out
+	}
+	assert.ElementsMatch(t, []string{"CH2CHO", "propyl", "only-base", "CH3"}, names(o.OnlyA))
+	assert.ElementsMatch(t, []string{"vinoxy", "propyl", "only-sub"}, names(o.OnlyB))
+	require.Len(t, o.Clashes, 1)
+	assert.Equal(t, compareClash{Name: "propyl", SMILESA: "CC[CH2]", SMILESB: "CC=C"}, o.Clashes[0])
+
+	// Ethanol: spelled CCO and OCC, ΔHf°298 −56.2 vs −52.0 kcal/mol.
+	var eth *compareSpecies
+	for i, s := range o.Species {
+		if s.A == "ethanol" {
+			eth = &o.Species[i]
+		}
+	}
+	require.NotNil(t, eth)
+	assert.Equal(t, "ethanol", eth.B)
+	assert.InDelta(t, 4.2*4.184, eth.Thermo.Hf298.Diff, 1e-9)
+	assert.InDelta(t, 4.2*4.184, eth.Thermo.G["1000"].Diff, 1e-9, "same Cp and S: G differs by ΔHf only")
+	assert.Equal(t, []string{"hf298", "g300", "g1000", "g2000"}, eth.Flags)
+	assert.Equal(t, 1, o.Summary.ThermoFlagged)
+	// Matched species estimated on both sides: not computed when spelled
+	// alike; computed, and equal, when spelled differently (C[CH2] / [CH2]C).
+	for _, s := range o.Species {
+		if s.A == "ethanol" {
+			continue
+		}
+		assert.Empty(t, s.Flags, s.A)
+		require.NotNil(t, s.Thermo, s.A)
+		if *s.SMILESA != *s.SMILESB {
+			require.False(t, s.Thermo.SameEstimate, s.A)
+			assert.Zero(t, s.Thermo.Hf298.Diff, s.A)
+			assert.Zero(t, s.Thermo.G["2000"].Diff, s.A)
+		} else {
+			assert.True(t, s.Thermo.SameEstimate, s.A)
+			assert.Nil(t, s.Thermo.Hf298, s.A)
+		}
+	}
+
+	require.Len(t, o.Reactions, 2)
+	same, rev := o.Reactions[0], o.Reactions[1]
+	assert.Equal(t, "ethane + hydroxyl <=> ethyl + water", same.EquationB)
+	for _, k := range []string{"500", "1000", "2000"} {
+		assert.Equal(t, 1.0, *same.Ratio[k], "identical rate parameters")
+	}
+	assert.True(t, rev.Reversed)
+	// B writes ethyl + H2 → ethane + H (A=3e12, Ea=12 kcal/mol); in A's
+	// direction its rate is k_f/Kc with Kc from B's own thermo, which the
+	// summary of sub.kiln reports independently.
+	res, _, err := analyzeFile(env{now: today}, compareB, map[string]string{})
+	require.NoError(t, err)
+	for _, tc := range []struct {
+		key string
+		T   float64
+	}{{"500", 500}, {"1000", 1000}, {"2000", 2000}} {
+		kc, ok := res.Reactions[1].Kc(tc.T)
+		require.True(t, ok)
+		kb := kinetics.Arrhenius{A: 3e12, Ea: 12 * 4184}.Rate(tc.T) / kc
+		ka := kinetics.Arrhenius{A: 1.1e14, Ea: 9.7 * 4184}.Rate(tc.T)
+		assert.InEpsilon(t, kb/ka, *rev.Ratio[tc.key], 1e-9, tc.key)
+	}
+	assert.True(t, rev.Flagged, "k_B/k_A = %.2f at 500 K is outside 1/2–2", *rev.Ratio["500"])
+	assert.Equal(t, 2, o.Summary.ReactionsOnlyA)
+	assert.Equal(t, 1, o.Summary.ReactionsOnlyB)
+
+	// A factor wider than every ratio clears the rate flag (thermo and names
+	// still fail). The ratios rest on estimated thermo, so the factor is
+	// derived from them rather than fixed here.
+	widest := 1.0
+	for _, r := range rev.Ratio {
+		widest = math.Max(widest, math.Max(*r, 1 / *r))
+	}
+	wide := compareJSONOf(t, exitProblems, compareA, compareB, "--rate-factor", strconv.FormatFloat(1.01*widest, 'f', 3, 64))
+	assert.Zero(t, wide.Summary.RateFlagged)
+	// The thermo thresholds are the mismatch settings of every command.
+	loose := compareJSONOf(t, exitProblems, compareA, compareB, "--mismatch-hf", "5")
+	assert.Zero(t, loose.Summary.ThermoFlagged)
+	assert.InDelta(t, 5*4.184, loose.Thresholds.Hf298, 1e-12)
+}
+
+// TestCompareSelf: a mechanism compared with itself matches everything and
+// exits 0.
+func TestCompareSelf(t *testing.T) {
+	o := compareJSONOf(t, exitOK, compareA, compareA)
+	assert.Equal(t, 11, o.Summary.Matched)
+	assert.Zero(t, o.Summary.Renamed+o.Summary.OnlyA+o.Summary.OnlyB+o.Summary.NameClashes+o.Summary.ThermoFlagged+o.Summary.RateFlagged)
+	assert.Equal(t, 4, o.Summary.MatchedReactions)
+}
+
+// TestCompareText: the table is under 120 columns with no trailing blanks,
+// and the exit code follows the findings.
+func TestCompareText(t *testing.T) {
+	code, stdout, stderr := runKiln(t, "compare", compareA, compareB)
+	require.Equal(t, exitProblems, code, stderr)
+	for i, line := range strings.Split(stdout, "\n") {
+		assert.Less(t, utf8.RuneCountInString(line), 120, "line %d: %q", i+1, line)
+		assert.Equal(t, strings.TrimRight(line, " \t"), line, "trailing blanks on line %d", i+1)
+	}
+	// The reversed step's 500 K ratio as the JSON reports it, printed with two
+	// decimals and flagged.
+	rev := compareJSONOf(t, exitProblems, compareA, compareB).Reactions[1]
+	ratio500 := fmt.Sprintf("%.2f*", *rev.Ratio["500"])
+	for _, want := range []string{"rename hydroxyl to OH in sub.kiln", "propyl", "ethanol", "+4.20*", ratio500, "B writes it reversed",
+		"Species only in B (3)", "Reactions only in A (2)"} {
+		assert.Contains(t, stdout, want)
+	}
+	code, _, stderr = runKiln(t, "compare", compareA)
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "two files")
+	code, _, _ = runKiln(t, "compare", compareA, "missing.kiln")
+	assert.Equal(t, exitUsage, code)
+	code, _, stderr = runKiln(t, "compare", compareA, compareB, "--rate-factor", "0.5")
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "--rate-factor")
+}
+
+// TestCompareUnreadable: species whose SMILES cannot be read match nothing,
+// are listed per file, and the same unreadable text is not a name clash.
+func TestCompareUnreadable(t *testing.T) {
+	a := writeTemp(t, "a.kiln", "species ok CC\nspecies bad C1CC\n")
+	b := writeTemp(t, "b.kiln", "species ok CC\nspecies bad C1CC\nspecies worse C(C\n")
+	o := compareJSONOf(t, exitOK, a, b)
+	assert.Equal(t, []string{"bad"}, o.A.Unreadable)
+	assert.Equal(t, []string{"bad", "worse"}, o.B.Unreadable)
+	assert.Equal(t, 1, o.Summary.Matched)
+	assert.Empty(t, o.Clashes)
+	assert.Equal(t, 1, o.A.Errors)
+	code, stdout, _ := runKiln(t, "compare", a, b)
+	assert.Equal(t, exitOK, code)
+	assert.Contains(t, stdout, "2 species with an unreadable SMILES match nothing (bad, worse)")
+}

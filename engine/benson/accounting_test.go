@@ -1,0 +1,241 @@
+package benson
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"math/rand/v2"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/require"
+	"kiln.dev/kiln/engine/molecule"
+)
+
+// genElement is an element the structure generator draws, with its valence
+// and drawing weight.
+type genElement struct {
+	sym     string
+	valence int
+	weight  int
+}
+
+var genElements = []genElement{
+	{"C", 4, 60}, {"O", 2, 20}, {"N", 3, 5}, {"S", 2, 4}, {"F", 1, 3}, {"Cl", 1, 3}, {"Si", 4, 2}, {"Li", 1, 1},
+}
+
+// randomSMILES writes a random, valence-correct structure of 1–14 heavy
+// atoms: a random tree with multiple bonds, some ring closures, some radical
+// centres (a bracket atom with one H too few), now and then a benzene ring
+// or a charged atom. Every atom is a bracket atom with its H count, so the
+// reader adds nothing.
+func randomSMILES(r *rand.Rand) string {
+	total := 0
+	for _, e := range genElements {
+		total += e.weight
+	}
+	draw := func() genElement {
+		x := r.IntN(total)
+		for _, e := range genElements {
+			if x < e.weight {
+				return e
+			}
+			x -= e.weight
+		}
+		return genElements[0]
+	}
+	n := 1 + r.IntN(14)
+	type edge struct{ a, b, order int }
+	el := make([]genElement, n)
+	free := make([]int, n)
+	var tree, closures []edge
+	for i := range n {
+		el[i] = draw()
+		free[i] = el[i].valence
+		if i == 0 {
+			continue
+		}
+		var cand []int
+		for j := 0; j < i; j++ {
+			if free[j] > 0 {
+				cand = append(cand, j)
+			}
+		}
+		if len(cand) == 0 {
+			n = i
+			el, free = el[:n], free[:n]
+			break
+		}
+		j := cand[r.IntN(len(cand))]
+		maxO := min(free[j], free[i], 3)
+		o := 1
+		if maxO > 1 && r.IntN(4) == 0 {
+			o = 2 + r.IntN(maxO-1)
+		}
+		free[i] -= o
+		free[j] -= o
+		tree = append(tree, edge{j, i, o})
+	}
+	bonded := map[[2]int]bool{}
+	for _, e := range tree {
+		bonded[[2]int{e.a, e.b}] = true
+	}
+	for range r.IntN(3) {
+		a, b := r.IntN(n), r.IntN(n)
+		if a > b {
+			a, b = b, a
+		}
+		if a == b || bonded[[2]int{a, b}] || free[a] == 0 || free[b] == 0 {
+			continue
+		}
+		o := 1
+		if min(free[a], free[b]) > 1 && r.IntN(5) == 0 {
+			o = 2
+		}
+		free[a] -= o
+		free[b] -= o
+		bonded[[2]int{a, b}] = true
+		closures = append(closures, edge{a, b, o})
+	}
+	children := make([][]edge, n)
+	for _, e := range tree {
+		children[e.a] = append(children[e.a], e)
+	}
+	ringAt := make([][]string, n)
+	for k, e := range closures {
+		d := fmt.Sprintf("%%%d", 10+k)
+		sym := map[int]string{1: "", 2: "="}[e.order]
+		ringAt[e.a] = append(ringAt[e.a], sym+d)
+		ringAt[e.b] = append(ringAt[e.b], sym+d)
+	}
+	bondSym := map[int]string{1: "", 2: "=", 3: "#"}
+	var b strings.Builder
+	benz := r.IntN(10) == 0 && free[0] > 0
+	if benz {
+		b.WriteString("c1ccc(cc1)")
+		free[0]--
+	}
+	var write func(i int)
+	write = func(i int) {
+		h := free[i]
+		rad := h > 0 && r.IntN(8) == 0
+		if rad {
+			h--
+		}
+		charge := ""
+		if r.IntN(60) == 0 {
+			charge = "+"
+			if h > 0 {
+				h--
+			}
+		}
+		fmt.Fprintf(&b, "[%s", el[i].sym)
+		if h > 0 {
+			fmt.Fprintf(&b, "H%d", h)
+		}
+		b.WriteString(charge + "]")
+		for _, d := range ringAt[i] {
+			b.WriteString(d)
+		}
+		for k, e := range children[i] {
+			last := k == len(children[i])-1
+			if !last {
+				b.WriteByte('(')
+			}
+			b.WriteString(bondSym[e.order])
+			write(e.b)
+			if !last {
+				b.WriteByte(')')
+			}
+		}
+	}
+	write(0)
+	return b.String()
+}
+
+// TestAtomAccounting: over thousands of generated structures, an estimate
+// either is refused (with a reason) or accounts for every heavy atom exactly
+// once in its group terms, and its breakdown sums to its totals.
+func TestAtomAccounting(t *testing.T) {
+	r := rand.New(rand.NewPCG(12, 2026))
+	const want = 6000
+	parsed, estimated, refused := 0, 0, 0
+	reasons := map[string]int{}
+	for tries := 0; parsed < want && tries < 10*want; tries++ {
+		smi := randomSMILES(r)
+		m, err := molecule.ParseSMILES(smi)
+		if err != nil {
+			continue
+		}
+		parsed++
+		e, err := Estimate(m, Options{})
+		if err != nil {
+			var ue *UnsupportedError
+			var mg *MissingGroupError
+			if !errors.As(err, &ue) && !errors.As(err, &mg) {
+				t.Errorf("%s: refusal of unexpected type %T: %v", smi, err, err)
+			}
+			require.NotEmpty(t, err.Error())
+			refused++
+			msg := "other: " + err.Error()
+			switch {
+			case ue != nil:
+				msg, _, _ = strings.Cut(ue.Reason, ";")
+				if _, after, ok := strings.Cut(msg, "): "); ok {
+					msg = after
+				}
+				if i := strings.Index(msg, "(") - 1; i > 0 {
+					msg = msg[:i]
+				}
+			case mg != nil:
+				msg = "missing group " + centreOf(mg.Group)
+			}
+			reasons[msg]++
+			continue
+		}
+		estimated++
+		heavy := len(m.Atoms) // every graph atom (explicit isotopic H included)
+		seen := map[int]int{}
+		for _, g := range e.Groups {
+			for _, a := range g.Atoms {
+				seen[a]++
+			}
+			if g.Count < 1 || g.Count > len(g.Atoms) {
+				t.Errorf("%s: group %s counts %d for %d atoms", smi, g.Name, g.Count, len(g.Atoms))
+			}
+		}
+		if len(seen) != heavy {
+			t.Errorf("%s: %d heavy atoms, groups account for %d: %+v", smi, heavy, len(seen), e.Groups)
+		}
+		for a, n := range seen {
+			if n != 1 {
+				t.Errorf("%s: atom %d in %d groups", smi, a+1, n)
+			}
+		}
+		var h, s float64
+		var cp [7]float64
+		for _, ts := range [][]Term{e.Groups, e.Corrections} {
+			for _, x := range ts {
+				h += x.Hf298
+				s += x.S298
+				for i := range cp {
+					cp[i] += x.Cp[i]
+				}
+			}
+		}
+		require.InDelta(t, e.Hf298, h, 1e-6, smi)
+		require.InDelta(t, e.S298, s, 1e-9, smi)
+		for i := range cp {
+			require.InDelta(t, e.Cp[i], cp[i], 1e-9, smi)
+		}
+		require.False(t, math.IsNaN(e.Hf298) || math.IsNaN(e.S298), smi)
+	}
+	t.Logf("%d structures read, %d estimated, %d refused", parsed, estimated, refused)
+	for k, v := range reasons {
+		if v > 20 {
+			t.Logf("  %5d refused: %s", v, k)
+		}
+	}
+	require.GreaterOrEqual(t, parsed, 5000)
+	require.Greater(t, estimated, 1000, "the generator must exercise estimates, not only refusals")
+}

@@ -1,0 +1,88 @@
+package benson
+
+import (
+	"bufio"
+	"math"
+	"os"
+	"strconv"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/require"
+)
+
+// radicalRef is one row of testdata/thermo/radicals.tsv.
+type radicalRef struct {
+	name, smiles string
+	s, cp300     float64 // NaN when not entered
+}
+
+func readRadicals(t *testing.T) []radicalRef {
+	t.Helper()
+	f, err := os.Open("../../testdata/thermo/radicals.tsv")
+	require.NoError(t, err, "the radical reference file is part of the accuracy test")
+	defer f.Close()
+	var out []radicalRef
+	sc := bufio.NewScanner(f)
+	header := true
+	for sc.Scan() {
+		line := sc.Text()
+		if strings.HasPrefix(line, "#") || strings.TrimSpace(line) == "" {
+			continue
+		}
+		if header {
+			header = false
+			continue
+		}
+		c := strings.Split(line, "\t")
+		require.Len(t, c, 5, line)
+		num := func(s string) float64 {
+			if s == "" {
+				return math.NaN()
+			}
+			v, err := strconv.ParseFloat(s, 64)
+			require.NoError(t, err, line)
+			return v
+		}
+		out = append(out, radicalRef{name: c[0], smiles: c[1], s: num(c[2]), cp300: num(c[3])})
+	}
+	require.NoError(t, sc.Err())
+	return out
+}
+
+// Radical S° and Cp against published values: the statistical-mechanics
+// treatment of radical sites (radical.go). Aim (issue 12): S° MAE ≤ 1.0
+// cal/(mol K), none off by more than 2.5.
+func TestRadicalEntropy(t *testing.T) {
+	rows := readRadicals(t)
+	require.GreaterOrEqual(t, len(rows), 15)
+	var s, cp errStat
+	for _, r := range rows {
+		e := estimate(t, r.smiles, Options{})
+		ds := e.S298/calorie - r.s
+		dcp := e.Cp[0]/calorie - r.cp300
+		s.add(ds, r.name)
+		cp.add(dcp, r.name)
+		t.Logf("%-14s S %6.2f ref %6.2f  dS %+5.2f   Cp300 %6.2f dCp %+5.2f  σ=%d", r.name, e.S298/calorie, r.s, ds, e.Cp[0]/calorie, dcp, e.SymmetryNumber)
+	}
+	t.Logf("radicals: S° MAE %.2f max %.2f (%s), n=%d; Cp300 MAE %.2f max %.2f (%s), n=%d",
+		s.mae(), s.max, s.worst, s.n, cp.mae(), cp.max, cp.worst, cp.n)
+	if s.mae() > radicalSAim {
+		t.Errorf("radical S° MAE %.2f cal/(mol K) > %.2f", s.mae(), radicalSAim)
+	}
+	if s.max > 2.5 {
+		t.Errorf("radical S° off by %.2f cal/(mol K) for %s (> 2.5)", s.max, s.worst)
+	}
+	if cp.mae() > radicalCpAim {
+		t.Errorf("radical Cp300 MAE %.2f cal/(mol K) > %.2f", cp.mae(), radicalCpAim)
+	}
+}
+
+// radicalSAim and radicalCpAim are the S° and Cp(300 K) MAEs the radical
+// treatment must keep (cal/(mol K)): measured 0.57 and 0.42 (run of
+// 2026-12-03, 15 and 5 radicals) plus a margin of 0.2; the issue's aim for S°
+// is 1.0, so the tighter bound applies.
+const (
+	radicalSAim  = 0.77
+	radicalCpAim = 0.62
+)

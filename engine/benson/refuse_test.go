@@ -1,0 +1,127 @@
+package benson
+
+import (
+	"errors"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+)
+
+// Structures no group can account for are refused with a reason, never
+// estimated from the atoms that happen to have groups (or from nothing).
+func TestRefusals(t *testing.T) {
+	cases := []struct {
+		smiles string
+		opts   Options
+		reason string // a word the message must contain
+	}{
+		{"F", Options{}, "no polyvalent atom"},
+		{"Cl", Options{}, "no polyvalent atom"},
+		{"[HH]", Options{}, "no polyvalent atom"},
+		{"[H]", Options{}, "no polyvalent atom"},
+		{"[Fe]", Options{}, "no polyvalent atom"},
+		{"S=S", Options{}, "terminal atom"},
+		{"[Li][Li]", Options{}, "terminal atom"},
+		{"C$C", Options{}, "order 4"},
+		// Nitrile (CN), thiocarbonyl (CS) carbons: nameable centres whose
+		// groups these molecules need are not in the tables (HCN, cyanogen
+		// and CS2 are reference-library species; see hetero.go).
+		{"C#N", Options{}, "no value and no approximation for group CN-(H)"},
+		{"N#CC#N", Options{}, "no value and no approximation for group CN-(CN)"},
+		{"C=S", Options{}, "no value and no approximation for group CS-(H)2"},
+		{"S=C=S", Options{}, "no value and no approximation for group CS-(S)"},
+		{"C[Si](C)(C)C", Options{}, "no group in the tables"},
+		{"C[SiH3]", Options{}, "no group in the tables"},
+		{"C[NH3+]", Options{}, "charge"},
+		{"O=O", Options{Multiplicity: 1}, "terminal atom"},
+		{"CC", Options{Multiplicity: 3}, "multiplicity 3"},
+		{"C[CH2]", Options{Multiplicity: 4}, "multiplicity 4"},
+		{"[CH2]CC[CH2]", Options{Multiplicity: 1}, "multiplicity 1"},
+	}
+	for _, c := range cases {
+		t.Run(c.smiles, func(t *testing.T) {
+			est, err := Estimate(parse(t, c.smiles), c.opts)
+			require.Error(t, err, "%s estimated: %+v", c.smiles, est)
+			assert.Contains(t, err.Error(), c.reason)
+			var ue *UnsupportedError
+			var me *MissingGroupError
+			switch {
+			case strings.HasPrefix(c.reason, "no value"):
+				assert.True(t, errors.As(err, &me), "%T", err)
+			case c.reason != "charge":
+				assert.True(t, errors.As(err, &ue), "%T", err)
+			}
+		})
+	}
+}
+
+// Groups for a centre the built-in tables lack (here the thiocarbonyl
+// carbon CS, with made-up test values) make that centre estimable with no
+// other change: the support gate reads the loaded tables.
+func TestSupportGateReadsTables(t *testing.T) {
+	for _, c := range []struct {
+		smiles, reason string
+		user           []GroupValue
+	}{
+		{"CC(C)=S", "no value and no approximation for group CS-(C)2", []GroupValue{{Name: "CS-(C)2", Hf298: 1e3}, {Name: "C-(CS)(H)3", Hf298: -10e3}}},
+		{"CCl", "no value and no approximation for group C-(Cl)(H)3", []GroupValue{{Name: "C-(Cl)(H)3", Hf298: -20e3}}},
+	} {
+		m := parse(t, c.smiles)
+		_, err := Estimate(m, Options{})
+		require.Error(t, err, c.smiles)
+		assert.Contains(t, err.Error(), c.reason, c.smiles)
+		e, err := Estimate(m, Options{UserGroups: c.user})
+		require.NoError(t, err, c.smiles)
+		assert.Empty(t, e.Missing, c.smiles)
+		want := 0.0
+		for _, g := range e.Groups {
+			want += g.Hf298
+		}
+		assert.InDelta(t, want, e.Hf298, 1e-9)
+		assert.Equal(t, len(m.Atoms), coveredAtoms(t, e), c.smiles)
+	}
+}
+
+// coveredAtoms checks that no atom is named by two group terms and returns
+// how many atoms the group terms account for.
+func coveredAtoms(t testing.TB, e *Result) int {
+	t.Helper()
+	seen := map[int]bool{}
+	for _, g := range e.Groups {
+		for _, a := range g.Atoms {
+			if seen[a] {
+				t.Errorf("atom %d counted twice", a+1)
+			}
+			seen[a] = true
+		}
+	}
+	return len(seen)
+}
+
+// A ring radical and its resonance structure are one species: the derived
+// form keeps its ring (and ring-strain term).
+func TestRingRadicalResonance(t *testing.T) {
+	for _, p := range [][2]string{
+		{"O=C1[CH]CCC1", "[O]C1=CCCC1"},
+		{"O=C1[CH]CCCC1", "[O]C1=CCCCC1"},
+		{"CC(=O)[CH2]", "C=C([O])C"},
+	} {
+		a := estimate(t, p[0], Options{})
+		b := estimate(t, p[1], Options{})
+		assert.InDelta(t, b.Hf298, a.Hf298, 1e-6, p[0])
+		assert.InDelta(t, b.S298, a.S298, 1e-9, p[0])
+		for i := range a.Cp {
+			assert.InDelta(t, b.Cp[i], a.Cp[i], 1e-9, p[0])
+		}
+	}
+	e := estimate(t, "O=C1[CH]CCC1", Options{})
+	ring := false
+	for _, c := range e.Corrections {
+		if strings.HasPrefix(c.Name, "ring strain") {
+			ring = true
+		}
+	}
+	assert.True(t, ring, "%+v", e.Corrections)
+}

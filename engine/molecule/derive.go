@@ -1,0 +1,94 @@
+package molecule
+
+import (
+	"fmt"
+	"slices"
+)
+
+// ClosedShellParent returns the molecule with every radical electron
+// replaced by a hydrogen on the same atom (the parent used by the
+// hydrogen-bond-increment method: CC[CH2] → CCC). A molecule without radical
+// electrons is returned as is.
+func (m *Molecule) ClosedShellParent() *Molecule {
+	atoms := slices.Clone(m.Atoms)
+	changed := false
+	for i := range atoms {
+		if atoms[i].Radical > 0 {
+			atoms[i].HCount += atoms[i].Radical
+			atoms[i].Radical = 0
+			changed = true
+		}
+	}
+	if !changed {
+		return m
+	}
+	return m.derive(atoms, slices.Clone(m.Bonds))
+}
+
+// WithHydrogenAdded returns the molecule with one radical electron of atom i
+// replaced by a hydrogen (CC[CH2] with i = 2 → CCC). It is an error when atom
+// i carries no radical electron.
+func (m *Molecule) WithHydrogenAdded(i int) (*Molecule, error) {
+	if i < 0 || i >= len(m.Atoms) {
+		return nil, fmt.Errorf("add hydrogen: atom %d out of range (%d atoms)", i, len(m.Atoms))
+	}
+	if m.Atoms[i].Radical == 0 {
+		return nil, fmt.Errorf("add hydrogen: atom %d (%s) has no radical electron", i, m.Atoms[i].Element)
+	}
+	atoms := slices.Clone(m.Atoms)
+	atoms[i].HCount++
+	atoms[i].Radical--
+	return m.derive(atoms, slices.Clone(m.Bonds)), nil
+}
+
+// WithBondOrders returns a resonance structure of m: bond b gets order
+// orders[b] (1, 2 or 3) and atom i gets radicals[i] radical electrons, all
+// other bonds and atoms unchanged. Every atom must keep its valence (bond
+// orders + hydrogens + radical electrons), so •C–C=O → C=C–O• is accepted and
+// a change that creates or loses electrons is an error. Changed bonds lose
+// their cis/trans marks. Rings and aromaticity are perceived afresh.
+func (m *Molecule) WithBondOrders(orders map[int]int, radicals map[int]int) (*Molecule, error) {
+	bonds := slices.Clone(m.Bonds)
+	atoms := slices.Clone(m.Atoms)
+	for b, o := range orders {
+		if b < 0 || b >= len(bonds) {
+			return nil, fmt.Errorf("resonance structure: bond %d out of range (%d bonds)", b, len(bonds))
+		}
+		if o < 1 || o > 3 {
+			return nil, fmt.Errorf("resonance structure: bond order %d (want 1, 2 or 3)", o)
+		}
+		if bonds[b].Order != o {
+			bonds[b].Order = o
+			bonds[b].Stereo = 0
+		}
+	}
+	for i, r := range radicals {
+		if i < 0 || i >= len(atoms) || r < 0 {
+			return nil, fmt.Errorf("resonance structure: bad radical count %d for atom %d", r, i)
+		}
+		atoms[i].Radical = r
+	}
+	for i := range atoms {
+		before, after := m.Atoms[i].Radical, atoms[i].Radical
+		for _, b := range m.Adj[i] {
+			before += m.Bonds[b].Order
+			after += bonds[b].Order
+		}
+		if before != after {
+			return nil, fmt.Errorf("resonance structure: atom %d (%s) would change valence from %d to %d", i, atoms[i].Element, before, after)
+		}
+	}
+	return m.derive(atoms, bonds), nil
+}
+
+// derive builds a molecule with the same connectivity as m and the given
+// atoms and bonds (fresh slices owned by the result): rings and ring systems
+// are shared with m (they depend on connectivity only), aromaticity is
+// perceived afresh, and the result gets its own cache.
+func (m *Molecule) derive(atoms []Atom, bonds []Bond) *Molecule {
+	d := &Molecule{Atoms: atoms, Bonds: bonds, Adj: m.Adj, SMILES: m.SMILES,
+		nbrOrder: m.nbrOrder, rings: m.rings, cycles: m.cycles, ringSys: m.ringSys}
+	d.perceiveAromaticity(d.ringBondFlags())
+	d.derived = newDerived(d)
+	return d
+}

@@ -1,0 +1,1065 @@
+package molecule
+
+import (
+	"context"
+	"errors"
+	"fmt"
+	"math/big"
+	"slices"
+	"strconv"
+	"strings"
+)
+
+// ErrWorkLimit is wrapped by every error a per-structure computation
+// (symmetry search, symmetry number) returns when it ran out of its work
+// budget: the structure is too symmetric or too large to analyse within the
+// bound, and no number is given.
+var ErrWorkLimit = errors.New("work limit reached")
+
+// maxFragmentGroup bounds the symmetry elements of one rigid fragment that
+// SymmetryNumber enumerates to choose its stereo configuration (point groups
+// of organic molecules have at most 120 elements; larger groups arise only
+// in artificial inputs).
+const maxFragmentGroup = 5000
+
+// maxSeeds bounds the starting elements of the configuration search.
+const maxSeeds = 64
+
+// Symmetry number σ (external × internal rotation), one rule for every
+// structure.
+//
+// σ counts the permutations of identical atoms that rigid rotation of the
+// whole molecule and rotation of its internal tops can perform (Benson,
+// Thermochemical Kinetics, 2nd ed. 1976, ch. 2: σ = σ_ext·Π σ_int). kiln
+// computes it from the graph alone:
+//
+//  1. The molecule is cut at its rotatable bonds (single, non-aromatic bonds
+//     that lie on no ring) into rigid fragments: single atoms, ring systems,
+//     double- and triple-bonded units. Fragments and rotatable bonds form a
+//     tree per connected component.
+//  2. The tree's centre (a fragment, or a rotatable bond) is the frame: a
+//     central fragment contributes all its proper symmetry operations; a
+//     central bond contributes 2 when its two halves are identical, 1
+//     otherwise. Every other fragment is a top rotating about the bond to
+//     its parent and contributes the proper operations that keep that bond
+//     fixed (CH3 3, C(CH3)3 3, phenyl 2, OH 1).
+//  3. The operations of a fragment are the automorphisms of its atom graph
+//     (atoms coloured by element, charge, isotope, hydrogens, radical,
+//     aromaticity, orbit in the whole molecule and the kind of branch on each
+//     outside bond) that a proper rotation of an idealised structure can do:
+//     - a tetrahedral atom (sp3; N/P with one and O/S with two lone pairs
+//     counted as ligands) must see an even permutation of its four ligands;
+//     when two of its outside ligands (H, lone pairs, identical branches) are
+//     alike, swapping them fixes the parity and the atom contributes
+//     Π k!/2 instead of a check;
+//     - other atoms (trigonal, linear, radical centres) permute alike outside
+//     ligands freely: Π k!;
+//     - an acyclic double bond keeps cis partners cis (an end with two alike
+//     ligands halves the count instead); an allene keeps its handedness;
+//     - rings are planar, except a lone saturated six-membered ring, which is
+//     a chair (D3d), and cages (every atom bonded to three or more atoms of
+//     the fragment, three or more rings), which are 3-D: a three-connected
+//     cage atom without other ligands (fullerene carbon) is checked like a
+//     tetrahedral atom whose fourth ligand is its outward side;
+//     - rigid 3-D fragments (cages, bridged and fused saturated rings) are
+//     checked at every tetrahedral atom together: kiln picks the
+//     configuration of the tetrahedral atoms and double bonds that gives the
+//     most proper operations (the most symmetric stereoisomer — for a cage,
+//     the only one that exists), by a search seeded at each of the first 64
+//     symmetry elements in canonical order. For an achiral rigid structure
+//     this keeps exactly the rotations: half of its graph automorphisms
+//     (adamantane 24 → 12, cubane 48 → 24, norbornane 4 → 2). Geometries
+//     that small rings cannot take are excluded first: fusions with a ring
+//     of at most four atoms (or two of at most five) are cis, and small
+//     bridged bicycles (at most nine atoms) have both bridgeheads "out".
+//  4. Identical '.'-separated components multiply σ by k! for k copies.
+//
+// Stereo marks (@, @@, /, \) are not used: σ is that of the most symmetric
+// stereoisomer of the constitution (a meso form counts as its more symmetric
+// chiral diastereomer, e.g. 2,3-dichlorobutane 18 instead of 9). Branches on
+// one atom count as alike when colour refinement with that atom singled out
+// cannot tell them apart (exact for trees; graphs that refinement cannot
+// separate are not expected in chemistry). Work is bounded: the symmetry
+// search has a budget (DefaultSearchWork) and a fragment's symmetry elements
+// are enumerated only up to 5000; beyond either bound the result is an error
+// wrapping ErrWorkLimit, never a guess.
+
+// SymmetryNumber returns the total symmetry number σ (external × internal)
+// of m, at least 1, as an exact integer (see the rule above).
+func (m *Molecule) SymmetryNumber() (*big.Int, error) {
+	return m.SymmetryNumberContext(context.Background())
+}
+
+// SymmetryNumberContext is SymmetryNumber with cancellation: it returns
+// ctx.Err() (wrapped) if ctx is done before the result is known.
+func (m *Molecule) SymmetryNumberContext(ctx context.Context) (*big.Int, error) {
+	if len(m.Atoms) == 0 {
+		return big.NewInt(1), nil
+	}
+	info, err := m.symmetryInfo(ctx)
+	if err != nil {
+		return nil, err
+	}
+	classes := orbitClasses(len(m.Atoms), info.gens, info.labels)
+	sc := newSigmaCalc(ctx, m, classes)
+	return sc.total()
+}
+
+// symmetryInfo returns the full symmetry analysis of m (cached when m came
+// from ParseSMILES), or an error when the search budget ran out.
+func (m *Molecule) symmetryInfo(ctx context.Context) (symmetryInfo, error) {
+	var info symmetryInfo
+	if d := m.cache(); d != nil {
+		info = d.info
+	} else {
+		info = m.symmetryCtx(ctx, DefaultSearchWork, true)
+	}
+	if err := ctx.Err(); err != nil {
+		return info, fmt.Errorf("symmetry of %q: %w", m.SMILES, err)
+	}
+	if !info.exact {
+		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, DefaultSearchWork)
+	}
+	return info, nil
+}
+
+// OpticalIsomers returns n = 2^k, where k counts the potential stereocentres
+// (PotentialStereocentres) that are carbon atoms written without a chirality
+// mark: an unmarked centre stands for both configurations, a marked one for
+// the single enantiomer written. k is capped at 30.
+func (m *Molecule) OpticalIsomers() int {
+	k := 0
+	for _, c := range m.PotentialStereocentres() {
+		if m.Atoms[c].Element == "C" && m.Atoms[c].Chirality == "" && m.Atoms[c].Radical == 0 {
+			k++
+		}
+	}
+	return 1 << min(k, 30)
+}
+
+// Ligand colours of the outside positions of a fragment atom.
+const (
+	colOut    = -5 // the outward side of a three-connected cage atom
+	colParent = -4 // the bond to the parent fragment (unique)
+	colLP     = -3 // a lone pair counted as a ligand
+	colH      = -2 // an implicit hydrogen
+)
+
+type sigmaCalc struct {
+	ctx     context.Context
+	m       *Molecule
+	n       int
+	classes []int
+	rot     []bool // per bond: rotatable
+	frag    []int  // per atom: fragment index
+	frags   [][]int
+	g       *cgraph // whole molecule, for branch classes
+	root    []int   // refined initial partition of g
+	local   []int
+	lp      []int
+	virtual []bool // per atom: cage atom with a virtual outward ligand
+	// parent bond of the fragment being analysed
+	pAtom, pNbr int
+}
+
+func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
+	n := len(m.Atoms)
+	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: make([]int, n), lp: make([]int, n), virtual: make([]bool, n)}
+	inRing := m.ringBondFlags()
+	sc.rot = make([]bool, len(m.Bonds))
+	parent := make([]int, n)
+	for i := range parent {
+		parent[i] = i
+	}
+	for b, bd := range m.Bonds {
+		sc.rot[b] = bd.Order == 1 && !bd.Aromatic && !inRing[b]
+		if !sc.rot[b] {
+			union(parent, bd.A, bd.B)
+		}
+	}
+	sc.frag = make([]int, n)
+	id := map[int]int{}
+	for i := 0; i < n; i++ {
+		r := find(parent, i)
+		f, ok := id[r]
+		if !ok {
+			f = len(sc.frags)
+			id[r] = f
+			sc.frags = append(sc.frags, nil)
+		}
+		sc.frag[i] = f
+		sc.frags[f] = append(sc.frags[f], i)
+	}
+	for i := range m.Atoms {
+		sc.lp[i] = m.lonePairLigands(i)
+	}
+	return sc
+}
+
+// allSingle reports whether every bond of atom i is a non-aromatic single bond.
+func (m *Molecule) allSingle(i int) bool {
+	for _, b := range m.Adj[i] {
+		if m.Bonds[b].Order != 1 || m.Bonds[b].Aromatic {
+			return false
+		}
+	}
+	return true
+}
+
+// lonePairLigands is the number of lone pairs counted as ligands of a
+// tetrahedral atom: 1 for N and P with three σ partners, 2 for O and S with
+// two, all bonds single, not a radical (common practice).
+func (m *Molecule) lonePairLigands(i int) int {
+	a := m.Atoms[i]
+	d := len(m.Adj[i])
+	if a.Radical != 0 || !m.allSingle(i) {
+		return 0
+	}
+	switch a.Element {
+	case "N", "P":
+		if d+a.HCount == 3 {
+			return 1
+		}
+	case "O", "S":
+		if d+a.HCount == 2 {
+			return 2
+		}
+	}
+	return 0
+}
+
+// tetrahedral reports whether atom i is a tetrahedral centre (see the rule).
+func (sc *sigmaCalc) tetrahedral(i int) bool {
+	m := sc.m
+	a := m.Atoms[i]
+	l := sc.lp[i]
+	return m.allSingle(i) && a.Radical == 0 && len(m.Adj[i])+a.HCount+l == 4 && (a.Element != "C" || l == 0)
+}
+
+// total is σ of the whole molecule.
+func (sc *sigmaCalc) total() (*big.Int, error) {
+	m := sc.m
+	comps := m.components()
+	sigma := big.NewInt(1)
+	// Identical components share orbit classes (the search joins them), and
+	// different ones share none: k copies multiply σ by k!.
+	copies := map[int]int{}
+	known := map[int]*big.Int{} // σ of a component, by its key
+	for _, atoms := range comps {
+		key := sc.classes[atoms[0]]
+		for _, a := range atoms {
+			key = min(key, sc.classes[a])
+		}
+		copies[key]++
+		sigma.Mul(sigma, big.NewInt(int64(copies[key])))
+		s, ok := known[key]
+		if !ok {
+			var err error
+			if s, err = sc.component(atoms); err != nil {
+				return nil, err
+			}
+			known[key] = s
+		}
+		sigma.Mul(sigma, s)
+	}
+	return sigma, nil
+}
+
+// component is σ of one connected component (atoms ascending).
+func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
+	m := sc.m
+	// fragment tree of this component
+	var fr []int
+	seen := map[int]bool{}
+	for _, a := range atoms {
+		if f := sc.frag[a]; !seen[f] {
+			seen[f] = true
+			fr = append(fr, f)
+		}
+	}
+	type edge struct{ b, other int }
+	adj := map[int][]edge{}
+	for _, a := range atoms {
+		for _, b := range m.Adj[a] {
+			if sc.rot[b] && m.Bonds[b].A == a {
+				fa, fb := sc.frag[m.Bonds[b].A], sc.frag[m.Bonds[b].B]
+				adj[fa] = append(adj[fa], edge{b, fb})
+				adj[fb] = append(adj[fb], edge{b, fa})
+			}
+		}
+	}
+	// centre by peeling leaves
+	deg := map[int]int{}
+	for _, f := range fr {
+		deg[f] = len(adj[f])
+	}
+	left := len(fr)
+	removed := map[int]bool{}
+	var layer []int
+	for _, f := range fr {
+		if deg[f] <= 1 {
+			layer = append(layer, f)
+		}
+	}
+	for left > 2 {
+		var next []int
+		for _, f := range layer {
+			removed[f] = true
+			left--
+			for _, e := range adj[f] {
+				if !removed[e.other] {
+					deg[e.other]--
+					if deg[e.other] == 1 {
+						next = append(next, e.other)
+					}
+				}
+			}
+		}
+		layer = next
+	}
+	var centre []int
+	for _, f := range fr {
+		if !removed[f] {
+			centre = append(centre, f)
+		}
+	}
+	sigma := big.NewInt(1)
+	type item struct{ f, pAtom, pNbr int }
+	var queue []item
+	visited := map[int]bool{}
+	if len(centre) == 1 {
+		queue = append(queue, item{centre[0], -1, -1})
+		visited[centre[0]] = true
+	} else {
+		// central rotatable bond
+		var cb int = -1
+		for _, e := range adj[centre[0]] {
+			if e.other == centre[1] {
+				cb = e.b
+			}
+		}
+		u, v := m.Bonds[cb].A, m.Bonds[cb].B
+		if sc.classes[u] == sc.classes[v] {
+			sigma.SetInt64(2)
+		}
+		queue = append(queue, item{sc.frag[u], u, v}, item{sc.frag[v], v, u})
+		visited[sc.frag[u]], visited[sc.frag[v]] = true, true
+	}
+	for k := 0; k < len(queue); k++ {
+		it := queue[k]
+		s, err := sc.fragment(it.f, it.pAtom, it.pNbr)
+		if err != nil {
+			return nil, err
+		}
+		sigma.Mul(sigma, s)
+		for _, a := range sc.frags[it.f] {
+			for _, b := range m.Adj[a] {
+				if !sc.rot[b] {
+					continue
+				}
+				o := m.Other(b, a)
+				if f := sc.frag[o]; !visited[f] {
+					visited[f] = true
+					queue = append(queue, item{f, o, a})
+				}
+			}
+		}
+	}
+	return sigma, nil
+}
+
+// outside lists the colours of the outside positions of atom i of the
+// current fragment: rotatable-bond neighbours, hydrogens and (for
+// tetrahedral atoms) lone pairs. Branch colours are orbit classes, refined
+// by the partition with atom i singled out when two branches share a class.
+func (sc *sigmaCalc) outside(i int, withLP bool) []int {
+	m := sc.m
+	var out []int
+	var ranks []int
+	for _, b := range m.Adj[i] {
+		if !sc.rot[b] {
+			continue
+		}
+		v := m.Other(b, i)
+		if i == sc.pAtom && v == sc.pNbr {
+			out = append(out, colParent)
+			continue
+		}
+		dup := false
+		for _, b2 := range m.Adj[i] {
+			if w := m.Other(b2, i); b2 != b && sc.rot[b2] && sc.classes[w] == sc.classes[v] && !(i == sc.pAtom && w == sc.pNbr) {
+				dup = true
+			}
+		}
+		c := sc.classes[v] * (sc.n + 1)
+		if dup {
+			if ranks == nil {
+				ranks = sc.refinedAt(i)
+			}
+			c += ranks[v] + 1
+		}
+		out = append(out, c)
+	}
+	for k := 0; k < m.Atoms[i].HCount; k++ {
+		out = append(out, colH)
+	}
+	if withLP {
+		for k := 0; k < sc.lp[i]; k++ {
+			out = append(out, colLP)
+		}
+	}
+	slices.Sort(out)
+	return out
+}
+
+// refinedAt returns the refined partition of the whole molecule with atom i
+// individualised (ranks indexed by atom).
+func (sc *sigmaCalc) refinedAt(i int) []int {
+	if sc.g == nil {
+		all := make([]int, sc.n)
+		for k := range all {
+			all[k] = k
+		}
+		sc.g = sc.m.cgraphOf(all, make([]int, sc.n))
+		sc.root = sc.g.refine(sc.g.cell0)
+	}
+	return sc.g.refine(individualize(sc.root, i))
+}
+
+// unit is a stereo unit whose configuration is checked under the
+// fragment's symmetry elements: a tetrahedral centre (x), a double bond
+// (x=y) or an allene (centre x, ends y and z).
+type unit struct {
+	kind    byte // 't', 'd', 'a'
+	x, y, z int
+}
+
+// fragment returns the number of proper operations of fragment f (a top
+// rotating about the bond pAtom–pNbr when pAtom ≥ 0) times its static factor.
+func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
+	if err := sc.ctx.Err(); err != nil {
+		return nil, fmt.Errorf("symmetry number: %w", err)
+	}
+	m := sc.m
+	sc.pAtom, sc.pNbr = pAtom, pNbr
+	atoms := sc.frags[f]
+	static := big.NewInt(1)
+	halves := 0 // factors of 2 to divide out of static
+	// A cage (every atom with three or more fragment neighbours, three or
+	// more rings) is three-dimensional even where its atoms are sp2.
+	cage := len(atoms) >= 4
+	bonds := 0
+	for _, x := range atoms {
+		bonds += sc.inner(x)
+		cage = cage && sc.inner(x) >= 3
+	}
+	cage = cage && bonds/2-len(atoms)+1 >= 3
+	var units []unit
+	for _, x := range atoms {
+		tet := sc.tetrahedral(x)
+		col := sc.outside(x, tet)
+		dup := false
+		for k := 0; k < len(col); {
+			e := k
+			for e < len(col) && col[e] == col[k] {
+				e++
+			}
+			if e-k > 1 {
+				dup = true
+				static.Mul(static, new(big.Int).MulRange(1, int64(e-k)))
+			}
+			k = e
+		}
+		if tet {
+			if dup {
+				halves++
+			} else {
+				units = append(units, unit{kind: 't', x: x})
+			}
+		} else if cage && len(col) == 0 && sc.inner(x) == 3 {
+			// a three-connected atom of a cage (fullerene carbon) points
+			// its free side outwards: a fourth, virtual ligand
+			units = append(units, unit{kind: 't', x: x})
+			sc.virtual[x] = true
+		}
+	}
+	// double bonds and allenes inside the fragment
+	inRing := m.ringBondFlags()
+	doubles := func(i int) []int {
+		var out []int
+		for _, b := range m.Adj[i] {
+			if m.Bonds[b].Order == 2 && !m.Bonds[b].Aromatic {
+				out = append(out, m.Other(b, i))
+			}
+		}
+		return out
+	}
+	for _, x := range atoms {
+		dx := doubles(x)
+		if len(dx) == 2 && len(m.Adj[x]) == 2 && m.Atoms[x].HCount == 0 { // allene centre
+			y, z := dx[0], dx[1]
+			if len(doubles(y)) != 1 || len(doubles(z)) != 1 {
+				continue
+			}
+			ly, lz := sc.endPositions(y, x), sc.endPositions(z, x)
+			if len(ly) != 2 || len(lz) != 2 {
+				continue
+			}
+			if alike(ly) || alike(lz) {
+				halves++
+				continue
+			}
+			units = append(units, unit{kind: 'a', x: x, y: y, z: z})
+			continue
+		}
+		for _, b := range m.Adj[x] {
+			bd := m.Bonds[b]
+			if bd.A != x || bd.Order != 2 || bd.Aromatic || inRing[b] {
+				continue
+			}
+			y := bd.B
+			if len(doubles(x)) != 1 || len(doubles(y)) != 1 {
+				continue // allene ends are handled with their centre
+			}
+			lx, ly := sc.endPositions(x, y), sc.endPositions(y, x)
+			if len(lx) != 2 || len(ly) != 2 {
+				continue
+			}
+			if alike(lx) || alike(ly) {
+				halves++
+				continue
+			}
+			units = append(units, unit{kind: 'd', x: x, y: y})
+		}
+	}
+	for ; halves > 0; halves-- {
+		static.Rsh(static, 1)
+	}
+	if static.Sign() == 0 {
+		static.SetInt64(1)
+	}
+	if len(atoms) == 1 {
+		return static, nil // one atom: only the identity (a checked centre passes)
+	}
+	// symmetry elements of the fragment graph
+	extra := make([]int, sc.n)
+	keyOf := map[string]int{}
+	for _, x := range atoms {
+		col := sc.outside(x, false)
+		var b strings.Builder
+		b.WriteString(strconv.Itoa(sc.classes[x]))
+		for _, c := range col {
+			b.WriteByte(',')
+			b.WriteString(strconv.Itoa(c))
+		}
+		k, ok := keyOf[b.String()]
+		if !ok {
+			k = len(keyOf) + 1
+			keyOf[b.String()] = k
+		}
+		extra[x] = k
+	}
+	// keys are numbered in first-seen order, which depends on atom order:
+	// renumber them by the sorted key text so colours are spelling-free.
+	texts := make([]string, 0, len(keyOf))
+	for t := range keyOf {
+		texts = append(texts, t)
+	}
+	slices.Sort(texts)
+	renum := make([]int, len(keyOf)+1)
+	for r, t := range texts {
+		renum[keyOf[t]] = r + 1
+	}
+	for _, x := range atoms {
+		extra[x] = renum[extra[x]]
+	}
+	g := m.cgraphOfSub(atoms, sc.local, sc.rot, extra)
+	root := g.refine(g.cell0)
+	s := &search{g: g, budget: DefaultSearchWork, root: root, ctx: sc.ctx}
+	order := big.NewInt(1)
+	var labels []int
+	seenBuf := make([]bool, len(atoms))
+	if !discrete(root, seenBuf) {
+		sizes, exact := s.automorphisms()
+		if !exact {
+			return nil, sc.limitErr()
+		}
+		for _, k := range sizes {
+			order.Mul(order, big.NewInt(int64(k)))
+		}
+	}
+	chair := sc.chairRing(atoms)
+	if len(units) == 0 && chair == nil {
+		return order.Mul(order, static), nil
+	}
+	if order.Cmp(big.NewInt(maxFragmentGroup)) > 0 {
+		return nil, fmt.Errorf("symmetry number of %q: %w (a rigid fragment of %d atoms has %s symmetry elements, more than %d)",
+			m.SMILES, ErrWorkLimit, len(atoms), order, maxFragmentGroup)
+	}
+	if order.Int64() == 1 {
+		return static, nil
+	}
+	labels = s.canonical()
+	if s.exhausted || labels == nil {
+		return nil, sc.limitErr()
+	}
+	elems := groupElements(s.gens, maxFragmentGroup+1)
+	// canonical order: each element as a permutation of canonical labels
+	byLabel := make([]int, len(atoms))
+	for k, l := range labels {
+		byLabel[l] = k
+	}
+	canon := make([][]int, len(elems))
+	for e, gm := range elems {
+		p := make([]int, len(atoms))
+		for l := range p {
+			p[l] = labels[gm[byLabel[l]]]
+		}
+		canon[e] = p
+	}
+	idx := make([]int, len(elems))
+	for i := range idx {
+		idx[i] = i
+	}
+	slices.SortFunc(idx, func(a, b int) int { return slices.Compare(canon[a], canon[b]) })
+	// constraints of each element
+	type eq struct{ u, v, e int }
+	var cands [][]eq
+	uIndex := map[[4]int]int{}
+	for k, u := range units {
+		switch u.kind {
+		case 't', 'a':
+			uIndex[[4]int{int(u.kind), u.x, 0, 0}] = k
+		case 'd':
+			uIndex[[4]int{'d', u.x, u.y, 0}] = k
+			uIndex[[4]int{'d', u.y, u.x, 0}] = k
+		}
+	}
+	for _, e := range idx {
+		gm := elems[e]
+		phi := func(a int) int { return atoms[gm[sc.local[a]]] }
+		if chair != nil && !chairProper(chair, phi) {
+			continue
+		}
+		var eqs []eq
+		ok := true
+		for k, u := range units {
+			img, bit, good := sc.unitImage(u, phi, uIndex, units)
+			if !good {
+				ok = false
+				break
+			}
+			eqs = append(eqs, eq{k, img, bit})
+		}
+		if ok {
+			cands = append(cands, eqs)
+		}
+	}
+	best := 0
+	nu := len(units)
+	par := make([]int, nu)
+	bits := make([]int, nu)
+	save := make([]int, 2*nu)
+	findP := func(x int) (int, int) {
+		p := 0
+		for par[x] != x {
+			p ^= bits[x]
+			x = par[x]
+		}
+		return x, p
+	}
+	fixed := sc.cisFusions(units)
+	for seed := 0; seed < len(cands) && seed < maxSeeds; seed++ {
+		for i := range par {
+			par[i], bits[i] = i, 0
+		}
+		count := 0
+		var try func(eqs []eq) bool
+		try = func(eqs []eq) bool {
+			copy(save, par)
+			copy(save[nu:], bits)
+			for _, q := range eqs {
+				ru, pu := findP(q.u)
+				rv, pv := findP(q.v)
+				if ru == rv {
+					if pu^pv != q.e {
+						copy(par, save[:nu])
+						copy(bits, save[nu:])
+						return false
+					}
+					continue
+				}
+				par[ru], bits[ru] = rv, pu^pv^q.e
+			}
+			return true
+		}
+		for _, f := range fixed {
+			try([]eq{{f[0], f[1], f[2]}})
+		}
+		if !try(cands[seed]) {
+			continue
+		}
+		for _, eqs := range cands {
+			if try(eqs) {
+				count++
+			}
+		}
+		best = max(best, count)
+	}
+	return static.Mul(static, big.NewInt(int64(max(best, 1)))), nil
+}
+
+func (sc *sigmaCalc) limitErr() error {
+	if err := sc.ctx.Err(); err != nil {
+		return fmt.Errorf("symmetry number of %q: %w", sc.m.SMILES, err)
+	}
+	return fmt.Errorf("symmetry number of %q: %w (more than %d refinement steps)", sc.m.SMILES, ErrWorkLimit, DefaultSearchWork)
+}
+
+// alike reports whether the two positions of a double-bond end are both
+// outside the fragment and alike (for instance =CH2).
+func alike(l []int) bool { return l[0] < 0 && l[0] == l[1] }
+
+// endPositions lists the positions of double-bond end x other than its
+// partner y: fragment atoms as atom indices (≥ 0), outside ligands as
+// negative colour codes (-(colour+10)); an sp2 N keeps its lone pair.
+func (sc *sigmaCalc) endPositions(x, y int) []int {
+	m := sc.m
+	var out []int
+	for _, b := range m.Adj[x] {
+		o := m.Other(b, x)
+		if o == y || sc.rot[b] {
+			continue
+		}
+		out = append(out, o)
+	}
+	for _, c := range sc.outside(x, false) {
+		out = append(out, -(c + 10))
+	}
+	a := m.Atoms[x]
+	if (a.Element == "N" || a.Element == "P") && len(m.Adj[x])+a.HCount == 2 && a.Radical == 0 && a.Charge == 0 {
+		out = append(out, -(colLP + 10))
+	}
+	return out
+}
+
+// centrePositions lists the four positions of tetrahedral atom x.
+func (sc *sigmaCalc) centrePositions(x int) []int {
+	m := sc.m
+	var out []int
+	for _, b := range m.Adj[x] {
+		if !sc.rot[b] {
+			out = append(out, m.Other(b, x))
+		}
+	}
+	for _, c := range sc.outside(x, true) {
+		out = append(out, -(c + 10))
+	}
+	if sc.virtual[x] {
+		out = append(out, -(colOut + 10))
+	}
+	return out
+}
+
+// inner counts the bonds of atom x inside its fragment.
+func (sc *sigmaCalc) inner(x int) int {
+	k := 0
+	for _, b := range sc.m.Adj[x] {
+		if !sc.rot[b] {
+			k++
+		}
+	}
+	return k
+}
+
+func imagePos(k int, phi func(int) int) int {
+	if k >= 0 {
+		return phi(k)
+	}
+	return k
+}
+
+// unitImage returns the index of the image of unit u under phi and the
+// configuration bit (0: the reference configuration maps onto the image's
+// reference, 1: onto its mirror); good is false when the image is not a
+// unit of the same kind (cannot happen for an automorphism).
+func (sc *sigmaCalc) unitImage(u unit, phi func(int) int, uIndex map[[4]int]int, units []unit) (int, int, bool) {
+	switch u.kind {
+	case 't':
+		x2 := phi(u.x)
+		k, ok := uIndex[[4]int{'t', x2, 0, 0}]
+		if !ok {
+			return 0, 0, false
+		}
+		src, dst := sc.centrePositions(u.x), sc.centrePositions(x2)
+		return k, permBit(src, dst, phi), true
+	case 'd':
+		x2, y2 := phi(u.x), phi(u.y)
+		k, ok := uIndex[[4]int{'d', x2, y2, 0}]
+		if !ok {
+			return 0, 0, false
+		}
+		lx, ly := sc.endPositions(u.x, u.y), sc.endPositions(u.y, u.x)
+		ix := slices.Index(sc.endPositions(x2, y2), imagePos(lx[0], phi))
+		iy := slices.Index(sc.endPositions(y2, x2), imagePos(ly[0], phi))
+		if ix < 0 || iy < 0 {
+			return 0, 0, false
+		}
+		if ix != iy {
+			return k, 1, true
+		}
+		return k, 0, true
+	case 'a':
+		c2 := phi(u.x)
+		k, ok := uIndex[[4]int{'a', c2, 0, 0}]
+		if !ok {
+			return 0, 0, false
+		}
+		w := units[k]
+		// positions y0 y1 z0 z1 of u map to those of w, end by end
+		var p []int
+		for _, end := range []int{u.y, u.z} {
+			e2 := phi(end)
+			base := 0
+			if e2 != w.y {
+				base = 2
+			}
+			dst := sc.endPositions(e2, w.x)
+			for _, q := range sc.endPositions(end, u.x) {
+				j := slices.Index(dst, imagePos(q, phi))
+				if j < 0 {
+					return 0, 0, false
+				}
+				p = append(p, base+j)
+			}
+		}
+		if !isPerm(p) {
+			return 0, 0, false
+		}
+		return k, permParity(p), true
+	}
+	return 0, 0, false
+}
+
+// permBit returns 0 when phi maps the position list src onto dst by an even
+// permutation, 1 when odd (or when a position has no image in dst).
+func permBit(src, dst []int, phi func(int) int) int {
+	p := make([]int, len(src))
+	for i, k := range src {
+		j := slices.Index(dst, imagePos(k, phi))
+		if j < 0 {
+			return 1
+		}
+		p[i] = j
+	}
+	if !isPerm(p) || permParity(p) != 0 {
+		return 1
+	}
+	return 0
+}
+
+// chairRing returns the ring order of a fragment that is one saturated
+// six-membered ring (chair, D3d), or nil.
+func (sc *sigmaCalc) chairRing(atoms []int) []int {
+	m := sc.m
+	if len(atoms) != 6 {
+		return nil
+	}
+	for _, a := range atoms {
+		if !m.allSingle(a) || m.Atoms[a].Radical != 0 {
+			return nil
+		}
+		nin := 0
+		for _, b := range m.Adj[a] {
+			if !sc.rot[b] {
+				nin++
+			}
+		}
+		if nin != 2 {
+			return nil
+		}
+	}
+	ring := []int{atoms[0]}
+	prev := -1
+	for len(ring) < 6 {
+		cur := ring[len(ring)-1]
+		next := -1
+		for _, b := range m.Adj[cur] {
+			if o := m.Other(b, cur); !sc.rot[b] && o != prev && (len(ring) < 2 || o != ring[0]) {
+				next = o
+				break
+			}
+		}
+		if next < 0 {
+			return nil
+		}
+		prev = cur
+		ring = append(ring, next)
+	}
+	return ring
+}
+
+// chairProper reports whether phi, mapping a chair ring onto itself, is a
+// rotation of the chair: a turn by k positions needs k even, a flip i → k−i
+// needs k odd.
+func chairProper(ring []int, phi func(int) int) bool {
+	j := slices.Index(ring, phi(ring[0]))
+	j1 := slices.Index(ring, phi(ring[1]))
+	if j < 0 || j1 < 0 {
+		return true
+	}
+	if j1 == (j+1)%6 {
+		return j%2 == 0
+	}
+	return j%2 == 1
+}
+
+// cisFusions returns, for the bonds a–b between two checked tetrahedral
+// atoms that are shared by two small relevant rings (one of at most four
+// atoms, or both of at most five), the configuration equation that makes the
+// fusion cis: such rings cannot be trans-fused (common practice; housane,
+// bicyclo[3.3.0]octane, cubane faces). Each entry is {unit a, unit b, bit}:
+// r_a ⊕ r_b = bit.
+func (sc *sigmaCalc) cisFusions(units []unit) [][3]int {
+	m := sc.m
+	at := map[int]int{}
+	for k, u := range units {
+		if u.kind == 't' {
+			at[u.x] = k
+		}
+	}
+	var out [][3]int
+	for _, bd := range m.Bonds {
+		ka, oka := at[bd.A]
+		kb, okb := at[bd.B]
+		if !oka || !okb {
+			continue
+		}
+		a, b := bd.A, bd.B
+		// the two smallest relevant cycles through the bond
+		var rs [][]int
+		for _, c := range m.cycles {
+			for k := range c {
+				x, y := c[k], c[(k+1)%len(c)]
+				if (x == a && y == b) || (x == b && y == a) {
+					rs = append(rs, c)
+					break
+				}
+			}
+		}
+		if len(rs) < 2 {
+			continue
+		}
+		slices.SortStableFunc(rs, func(x, y []int) int { return len(x) - len(y) })
+		r1, r2 := rs[0], rs[1]
+		if !(len(r1) <= 4 || len(r2) <= 5) {
+			continue
+		}
+		nb := func(r []int, x, not int) int {
+			k := slices.Index(r, x)
+			p, q := r[(k+len(r)-1)%len(r)], r[(k+1)%len(r)]
+			if p == not {
+				return q
+			}
+			return p
+		}
+		a1, a2 := nb(r1, a, b), nb(r2, a, b)
+		b1, b2 := nb(r1, b, a), nb(r2, b, a)
+		if a1 == a2 || b1 == b2 {
+			continue
+		}
+		pa, pb := sc.centrePositions(a), sc.centrePositions(b)
+		rest := func(p []int, xs ...int) []int {
+			out := slices.Clone(xs)
+			for _, k := range p {
+				if !slices.Contains(xs, k) {
+					out = append(out, k)
+				}
+			}
+			return out
+		}
+		id := func(x int) int { return x }
+		parA := permBit(rest(pa, b, a1, a2), pa, id)
+		parB := permBit(rest(pb, a, b1, b2), pb, id)
+		out = append(out, [3]int{ka, kb, 1 ^ parA ^ parB})
+	}
+	return append(out, sc.smallBicycles(units, at)...)
+}
+
+// smallBicycles returns the configuration equations of the bridgeheads of
+// small bridged bicycles: two checked tetrahedral atoms a and b, not bonded,
+// joined by three bridges of two-connected atoms with at most nine atoms in
+// all (norbornane, bicyclo[2.2.2]octane, bicyclo[3.3.1]nonane), can only be
+// "out,out": both bridgehead ligands point away from the bicycle (common
+// practice; in,out isomers need much larger rings). Seen from a, the bridges
+// turn one way; seen from b, the other.
+func (sc *sigmaCalc) smallBicycles(units []unit, at map[int]int) [][3]int {
+	m := sc.m
+	var out [][3]int
+	for _, u := range units {
+		a := u.x
+		if u.kind != 't' || sc.inner(a) != 3 {
+			continue
+		}
+		var firsts, lasts []int
+		end, total := -1, 0
+		ok := true
+		for _, bd := range m.Adj[a] {
+			if sc.rot[bd] {
+				continue
+			}
+			prev, cur := a, m.Other(bd, a)
+			n := 0
+			for sc.inner(cur) == 2 && n <= 10 {
+				next := -1
+				for _, b2 := range m.Adj[cur] {
+					if o := m.Other(b2, cur); !sc.rot[b2] && o != prev {
+						next = o
+					}
+				}
+				prev, cur = cur, next
+				n++
+			}
+			if cur == a || (end >= 0 && cur != end) || n > 10 {
+				ok = false
+				break
+			}
+			end = cur
+			total += n
+			firsts = append(firsts, m.Other(bd, a))
+			lasts = append(lasts, prev)
+		}
+		kb, isUnit := at[end]
+		if !ok || !isUnit || end < a || m.BondBetween(a, end) >= 0 || total+2 > 9 {
+			continue
+		}
+		b := end
+		pa, pb := sc.centrePositions(a), sc.centrePositions(b)
+		rest := func(p []int, xs []int) []int {
+			out := slices.Clone(xs)
+			for _, k := range p {
+				if !slices.Contains(xs, k) {
+					out = append(out, k)
+				}
+			}
+			return out
+		}
+		id := func(x int) int { return x }
+		parA := permBit(rest(pa, firsts), pa, id)
+		parB := permBit(rest(pb, lasts), pb, id)
+		out = append(out, [3]int{at[a], kb, 1 ^ parA ^ parB})
+	}
+	return out
+}
+
+// isPerm reports whether p is a permutation of 0…len(p)-1.
+func isPerm(p []int) bool {
+	seen := make([]bool, len(p))
+	for _, x := range p {
+		if x < 0 || x >= len(p) || seen[x] {
+			return false
+		}
+		seen[x] = true
+	}
+	return true
+}

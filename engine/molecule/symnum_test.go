@@ -1,0 +1,125 @@
+package molecule
+
+import (
+	"context"
+	"errors"
+	"math/big"
+	"strings"
+	"testing"
+	"time"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+)
+
+// sigmaCases are total symmetry numbers σ = σ_ext·Π σ_int. Rigid molecules
+// take the order of the rotational subgroup of their point group (textbook
+// values, e.g. Herzberg; adamantane T_d, cubane O_h, bicyclo[2.2.2]octane
+// D_3h, norbornane C_2v); flexible ones multiply by their tops (Benson 1976,
+// ch. 2: neopentane 12·3⁴ = 972, isobutane 3·3³ = 81). Entered from memory /
+// common practice.
+var sigmaCases = []struct {
+	smiles string
+	sigma  int64
+}{
+	{"C", 12}, {"CC", 18}, {"CCC", 18}, {"CCCC", 18}, {"CC(C)C", 81}, {"CC(C)(C)C", 972},
+	{"C=C", 4}, {"c1ccccc1", 12}, {"Cc1ccccc1", 6}, {"C1CCCCC1", 6}, {"O", 2}, {"O=C=O", 2},
+	{"CC(C)=O", 18}, {"CO", 3}, {"CCO", 3}, {"COC", 18}, {"C=O", 2}, {"C#C", 2}, {"CC=C", 3},
+	{"c1ccc2ccccc2c1", 4}, {"C/C=C/C", 18}, {"C/C=C\\C", 18}, {"C=C=C", 4}, {"C1CC1", 6}, {"N", 3},
+	{"CN(C)C", 81}, {"Cc1ccc(C)cc1", 36}, {"C1COCCO1", 2}, {"C[CH2]", 6}, {"[CH3]", 6},
+	// rigid polycyclics and cages (rotational subgroup of the point group)
+	{"C1C2CC3CC1CC(C2)C3", 12}, // adamantane, T_d → T
+	{"C12C3C4C1C5C2C3C45", 24}, // cubane, O_h → O
+	{"C1CC2CCC1CC2", 6},        // bicyclo[2.2.2]octane, D_3h → D_3
+	{"C1CC2CCC1C2", 2},         // norbornane, C_2v → C_2
+	{"C1C2CCC1CC2", 2},         // norbornane, another spelling
+	{"C1CC2CC1C2", 2},          // bicyclo[2.1.1]hexane, C_2v → C_2
+	{"C1CC2C1C2", 1},           // bicyclo[2.1.0]pentane (housane), C_s: cis-fused only
+	{"C1C2CC12", 2},            // bicyclo[1.1.0]butane, C_2v → C_2
+	{"C1C2CC1C2", 6},           // bicyclo[1.1.1]pentane, D_3h → D_3
+	{"C1CC12CC2", 4},           // spiropentane, D_2d → D_2
+	{"C1CCC2CCCCC2C1", 2},      // decalin (trans C_2h / cis C_2)
+	{"C1CC2CCCC2C1", 2},        // cis-bicyclo[3.3.0]octane, C_2v → C_2
+	{"C1CC2CCC2C1", 1},         // cis-bicyclo[3.2.0]heptane, C_s
+	{"C12C3C1C23", 12},         // tetrahedrane, T_d → T
+	{"C1CC11CC1", 4},           // spiropentane, another spelling
+	{"C1CC2(C1)CCC2", 4},       // spiro[3.3]heptane, D_2d → D_2
+	{"C1CC2(C1)CCCC2", 2},      // spiro[3.4]octane, C_2v → C_2
+	{"C1CCC2CCCCC2C1", 2},      // decalin, another spelling
+	{"C12C3C4C5C1C6C7C2C8C3C9C4C%10C5C6C%11C7C8C9C%10%11", 60},                                                                                 // dodecahedrane, I_h → I
+	{"c12c3c4c5c1c1c6c7c2c2c8c3c3c9c4c4c%10c5c5c1c1c6c6c%11c7c2c2c7c8c3c3c8c9c4c4c9c%10c5c5c1c1c6c6c%11c2c2c7c3c3c8c4c4c9c5c1c1c6c2c3c41", 60}, // C60, I_h → I
+	{"C12C3C4C1C5C2C3C45", 24},                     // cubane again (cage rule)
+	{"c1cc2ccc3ccc4ccc5ccc6ccc1c1c2c3c4c5c61", 12}, // coronene, D_6h (planar, not a cage)
+	{"C1=CC2CCC1C2", 1},                            // norbornene, C_s
+	{"C12C3C1C1C2C31", 6},                          // prismane, D_3h → D_3
+	{"C1=CC2CCC1CC2", 2},                           // bicyclo[2.2.2]oct-2-ene, C_2v → C_2
+	{"C1CC2CCCC(C1)C2", 2},                         // bicyclo[3.3.1]nonane, C_2v → C_2
+	{"[H][H]", 2}, {"O=O", 2}, {"[C-]#[O+]", 1}, {"Cl", 1}, {"CCl", 3}, {"ClC(Cl)(Cl)Cl", 12},
+	{"FC(F)F", 3}, {"C=CC=C", 2}, {"CC(C)=C", 18}, {"CC#C", 3},
+	{"CC.CC", 2 * 18 * 18}, // two identical components: 2!·18²
+}
+
+func TestSymmetryNumberTable(t *testing.T) {
+	for _, c := range sigmaCases {
+		m := parse(t, c.smiles)
+		s, err := m.SymmetryNumber()
+		require.NoError(t, err, c.smiles)
+		assert.Equal(t, c.sigma, s.Int64(), c.smiles)
+	}
+}
+
+// TestSymmetryNumberBounded checks that highly symmetric inputs finish fast
+// (the bound is checked by benchmarks; here only that they finish and give
+// exact, non-overflowing numbers).
+func TestSymmetryNumberBounded(t *testing.T) {
+	tenEthanes := strings.TrimSuffix(strings.Repeat("CC.", 10), ".")
+	m := parse(t, tenEthanes)
+	s, err := m.SymmetryNumber()
+	require.NoError(t, err)
+	want := new(big.Int).MulRange(1, 10) // 10!
+	want.Mul(want, new(big.Int).Exp(big.NewInt(18), big.NewInt(10), nil))
+	assert.Equal(t, want.String(), s.String())
+
+	// 40-carbon highly branched alkane: C(C(C(C)(C)C)(C(C)(C)C))… — all
+	// methyl tops, σ far beyond int64 would be wrong to wrap around.
+	tbu := "C(C)(C)C"
+	big40 := "C(C(" + tbu + ")(" + tbu + ")" + tbu + ")(C(" + tbu + ")(" + tbu + ")" + tbu + ")(C(" + tbu + ")(" + tbu + ")" + tbu + ")C(" + tbu + ")(" + tbu + ")" + tbu
+	m = parse(t, big40)
+	require.Equal(t, 53, m.HeavyAtoms())
+	s, err = m.SymmetryNumber()
+	require.NoError(t, err)
+	// centre T-symmetric: 12; each of 4 quaternary arms: 3; each of 12 tBu: 3;
+	// 36 methyls: 3 each → 12·3^(4+12+36)
+	want = new(big.Int).Mul(big.NewInt(12), new(big.Int).Exp(big.NewInt(3), big.NewInt(52), nil))
+	assert.Equal(t, want.String(), s.String())
+
+	// a cancelled context gives an error, never a number
+	ctx, cancel := context.WithCancel(context.Background())
+	cancel()
+	_, err = parse(t, "C12C3C4C1C5C2C3C45").SymmetryNumberContext(ctx)
+	require.Error(t, err)
+	assert.True(t, errors.Is(err, context.Canceled))
+	_ = time.Second
+}
+
+func TestOpticalIsomersMolecule(t *testing.T) {
+	assert.Equal(t, 2, parse(t, "CCC(C)O").OpticalIsomers())
+	assert.Equal(t, 1, parse(t, "CC[C@H](C)O").OpticalIsomers())
+	assert.Equal(t, 1, parse(t, "CC(C)CC(C)C").OpticalIsomers())
+	assert.Equal(t, 1, parse(t, "CCC(CC)C").OpticalIsomers())
+	assert.Equal(t, 1, parse(t, "C1C2CC3CC1CC(C2)C3").OpticalIsomers(), "adamantane bridgeheads have two alike ring paths")
+}
+
+func TestCanonicalContext(t *testing.T) {
+	m := parse(t, "C1C2CC3CC1CC(C2)C3")
+	c, err := m.CanonicalContext(context.Background())
+	require.NoError(t, err)
+	assert.Equal(t, m.Canonical(), c)
+	// an uncached copy with a cancelled context refuses instead of guessing
+	p := *m
+	p.Atoms = append([]Atom(nil), m.Atoms...)
+	ctx, cancel := context.WithCancel(context.Background())
+	cancel()
+	_, err = p.CanonicalContext(ctx)
+	assert.ErrorIs(t, err, context.Canceled)
+}
