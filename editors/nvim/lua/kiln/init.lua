@@ -238,7 +238,9 @@ end
 -- Inlay hints rendered by the plugin (Neovim < 0.10).
 ------------------------------------------------------------------------
 local function kiln_client_for(bufnr)
-  for _, c in pairs(vim.lsp.buf_get_clients(bufnr)) do
+  -- get_clients from 0.10 on (buf_get_clients is deprecated there).
+  local clients = vim.lsp.get_clients and vim.lsp.get_clients({ bufnr = bufnr }) or vim.lsp.buf_get_clients(bufnr)
+  for _, c in pairs(clients) do
     if c.name == 'kiln' and not c.is_stopped() then
       return c
     end
