@@ -19,31 +19,53 @@ import (
 
 // Settings are the user-adjustable parameters of an analysis.
 type Settings struct {
-	// DisplayUnits is "kcal/mol" or "kJ/mol": how energies are shown to people.
+	// DisplayUnits is "kcal/mol" or "kJ/mol": how energies are shown to
+	// people; "" shows them in the file's own unit (see Units).
 	DisplayUnits string
 	// TMid and THigh are the NASA-7 fit temperatures in K (T_low is 300 K).
 	TMid, THigh float64
+	// ExplicitFitRange says TMid and THigh were chosen by the user: they then
+	// apply to every inserted block, reference-library species included.
+	ExplicitFitRange bool
 	// MismatchHf298 (J/mol) and MismatchS298 (J/(mol K)) are the thresholds of
 	// the thermo-mismatch check between a given block and the estimate.
 	MismatchHf298, MismatchS298 float64
+	// MismatchCp (J/(mol K)) is the threshold of the comparison of Cp(T)
+	// over a block's range; the comparison of H(T)−H(298 K) uses
+	// MismatchHf298.
+	MismatchCp float64
 	// CollisionFactor multiplies the collision-limit bound (1 = the plain bound).
 	CollisionFactor float64
+	// Pressure (Pa) is where pressure-dependent rates are shown (k_f, k_r
+	// in summaries and hovers); 0 means 1 atm. The collision-limit check
+	// scans kinetics.CheckPressures whatever this is.
+	Pressure float64
 	// Stamp is written into the source line of blocks kiln inserts, e.g.
 	// "kiln 0.1.0, 2026-12-01". The caller sets it; analysis reads no clock.
 	Stamp string
 }
 
-// DefaultSettings returns the documented defaults: kcal/mol display, fits at
-// 1000/5000 K, mismatch thresholds 3 kcal/mol and 3 cal/(mol K), factor 1.
+// DefaultSettings returns the documented defaults: the file's units, fits at
+// 1000/5000 K, mismatch thresholds 3 kcal/mol, 3 cal/(mol K) and (Cp)
+// 1.5 cal/(mol K), collision factor 1, rates shown at 1 atm.
 func DefaultSettings() Settings {
 	return Settings{
-		DisplayUnits:    "kcal/mol",
+		DisplayUnits:    "",
 		TMid:            1000,
 		THigh:           5000,
 		MismatchHf298:   3 * 4184,
 		MismatchS298:    3 * 4.184,
+		MismatchCp:      1.5 * 4.184,
 		CollisionFactor: 1,
 	}
+}
+
+// pressure returns the pressure (Pa) at which rates are shown.
+func (s Settings) pressure() float64 {
+	if s.Pressure > 0 {
+		return s.Pressure
+	}
+	return 101325
 }
 
 // ThermoSource says where the thermochemistry of a species comes from.
@@ -83,9 +105,13 @@ type Species struct {
 	// Source tells which of Given or Estimate the analysis uses.
 	Source ThermoSource
 
-	estimateErr error  // why a structure could not be estimated
-	ident       string // estimate-cache key of the structure
-	inv         string // invariant(Mol): a cheap fingerprint for duplicate search
+	estimateErr  error        // why a structure could not be estimated
+	rootReported bool         // a diagnostic already names why there is no thermo
+	brokenBlock  bool         // the declaration's thermo block has a syntax error
+	ident        string       // estimate-cache key of the structure
+	inv          string       // invariant(Mol): a cheap fingerprint for duplicate search
+	structKey    string       // inv and multiplicity: the bucket of the duplicate-structure search
+	unit         *speciesUnit // the memoized unit the species was made from
 }
 
 // Estimate is the thermochemistry kiln computes for a structure.
@@ -137,9 +163,14 @@ type Reaction struct {
 	DG298    *float64 // J/mol
 	// Kp at 298.15, 1000 and 1500 K (dimensionless, 1 bar).
 	Kp map[string]*float64
-	// ReverseRate1000 is k_r(1000 K) in cm3, mol, s units.
-	ReverseRate1000 *float64
-	Collision       *kinetics.Violation
+	// ForwardRate1000 and ReverseRate1000 are k_f and k_r at 1000 K and the
+	// settings' pressure, in cm, mol, s units of ForwardOrder and
+	// ReverseOrder (see RateUnits).
+	ForwardRate1000, ReverseRate1000 *float64
+	ForwardOrder, ReverseOrder       int
+	Collision                        *kinetics.Violation
+
+	model *rateModel // nil without usable rate parameters
 
 	reactants, products kinetics.Side // thermo of each side, nil when unknown
 	diags               []speciesfile.Diagnostic

@@ -1,10 +1,12 @@
 package analysis
 
 import (
+	"cmp"
 	"context"
 	"fmt"
 	"path/filepath"
 	"runtime"
+	"slices"
 	"sort"
 	"strings"
 	"sync"
@@ -20,13 +22,12 @@ const (
 	maxFileSize     = 64 << 20
 )
 
-// CodeBadInclude is reported on an include that cannot be followed (missing
-// file, outside the workspace, cycle, too deep). It extends the list of codes
-// in FORMAT.md.
-const CodeBadInclude = "bad-include"
-
-// CodeDuplicateGroup is reported when a user-defined group is defined twice.
-const CodeDuplicateGroup = "duplicate-group"
+// CodeBadInclude and CodeDuplicateGroup are kept for callers of this
+// package; the one list of codes is in speciesfile (speciesfile.Codes).
+const (
+	CodeBadInclude     = speciesfile.CodeBadInclude
+	CodeDuplicateGroup = speciesfile.CodeDuplicateGroup
+)
 
 // analysis is the state of one Analyze call.
 type analysis struct {
@@ -37,10 +38,20 @@ type analysis struct {
 	// order is the files in resolution order: includes before the statements
 	// that follow them, depth first.
 	order []string
-	// parsed holds the structures read ahead by prepare.
-	parsed map[*speciesfile.Species]parsed
 	// userKey identifies the user-defined groups in estimate cache keys.
 	userKey string
+	// memo holds the per-statement units kept between analyses (nil when
+	// the workspace is not incremental).
+	memo *memo
+	// sink, when set, receives every reported diagnostic instead of the
+	// result: the rules of one statement run with their own sink so that
+	// their diagnostics can be kept with the statement's unit.
+	sink *[]speciesfile.Diagnostic
+	// via maps each included file to the include statement of the analysed
+	// file through which it is reached (where its problems are reported).
+	via map[string]*speciesfile.Include
+	// viaDups counts the same-structure reports made on each include.
+	viaDups map[*speciesfile.Include]int
 }
 
 func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
@@ -55,7 +66,6 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 		Settings: set,
 		Files:    map[string]*speciesfile.File{},
 		ByName:   map[string]*Species{},
-		Uses:     map[string][]Location{},
 	}}
 	f := speciesfile.Parse(path, text)
 	a.res.File = f
@@ -65,6 +75,7 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 	if err := ctx.Err(); err != nil {
 		return nil, err
 	}
+	a.res.order = a.order
 	a.groups()
 	if err := a.species(); err != nil {
 		return nil, err
@@ -73,6 +84,7 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 		return nil, err
 	}
 	sortDiagnostics(a.res.Diagnostics)
+	w.finishMemo(path, a.memo)
 	return a.res, nil
 }
 
@@ -104,8 +116,23 @@ func (a *analysis) parallel(n, grain int, fn func(i int)) error {
 	return a.ctx.Err()
 }
 
-// report adds a diagnostic when it belongs to the analysed file.
+// reported returns the number of diagnostics reported so far (to the sink
+// while one is set): a rule compares counts to learn whether an earlier
+// check of the same declaration found something.
+func (a *analysis) reported() int {
+	if a.sink != nil {
+		return len(*a.sink)
+	}
+	return len(a.res.Diagnostics)
+}
+
+// report adds a diagnostic when it belongs to the analysed file (or to the
+// sink of the statement whose rules are running).
 func (a *analysis) report(file string, d speciesfile.Diagnostic) {
+	if a.sink != nil {
+		*a.sink = append(*a.sink, d)
+		return
+	}
 	if file != a.res.Path {
 		return
 	}
@@ -157,6 +184,10 @@ func (a *analysis) includes(path string, f *speciesfile.File, stack []string, de
 		if next == nil {
 			next = inc
 		}
+		if a.via == nil {
+			a.via = map[string]*speciesfile.Include{}
+		}
+		a.via[target] = next
 		a.includes(target, g, append(stack[:len(stack):len(stack)], target), depth+1, next)
 	}
 }
@@ -287,11 +318,11 @@ func countErrors(ds []speciesfile.Diagnostic) int {
 }
 
 func sortDiagnostics(ds []speciesfile.Diagnostic) {
-	sort.SliceStable(ds, func(i, j int) bool {
-		if ds[i].Span.Start != ds[j].Span.Start {
-			return ds[i].Span.Start < ds[j].Span.Start
+	slices.SortStableFunc(ds, func(x, y speciesfile.Diagnostic) int {
+		if x.Span.Start != y.Span.Start {
+			return cmp.Compare(x.Span.Start, y.Span.Start)
 		}
-		return ds[i].Code < ds[j].Code
+		return strings.Compare(x.Code, y.Code)
 	})
 }
 
@@ -302,10 +333,7 @@ func (a *analysis) structure(path string, sp *Species) {
 	if tok == nil {
 		return
 	}
-	p, ok := a.parsed[sp.Decl]
-	if !ok {
-		p = a.w.mols.parse(tok.Text)
-	}
+	p := a.w.mols.parse(tok.Text)
 	m, err := p.mol, p.err
 	if err != nil {
 		sp.SMILESError = err

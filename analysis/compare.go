@@ -57,7 +57,7 @@ type Comparison struct {
 type CompareSide struct {
 	Path                string
 	Species, Reactions  int
-	Errors              int // error diagnostics in the file and its includes
+	Errors              int // syntax errors in the file and its includes, unreadable structures and includes of the file
 	UnreadableStructure []string
 }
 
@@ -78,9 +78,10 @@ type SpeciesPair struct {
 	// Thermo compares the two sides' thermochemistry; nil when either side
 	// has none, or when SameEstimate.
 	Thermo *ThermoDiff
-	// SameEstimate is true when both sides estimate the species from the
-	// same structure with the same options (no thermo block on either
-	// side): the thermochemistry is identical and is not computed.
+	// SameEstimate is true when both sides estimate the species (no thermo
+	// block on either side) from the same SMILES text with the same
+	// options: the thermochemistry is identical (or, when kiln cannot
+	// estimate the structure, missing on both sides) and is not computed.
 	SameEstimate bool
 }
 
@@ -182,6 +183,8 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 	// Thermochemistry for the matched species, estimated where not given.
 	// A pair that both sides estimate from the same structure text with
 	// the same options has the same thermo by construction: not computed.
+	// (Differently spelled pairs are estimated: an estimate's independence
+	// of the spelling is tested, not assumed.)
 	need := make([]*Species, 0, 2*len(sb.species))
 	needSide := make([]*compareSide, 0, 2*len(sb.species))
 	sameEstimate := map[int]bool{}
@@ -227,6 +230,9 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 		}
 		if i, ok := sa.pos[sp.Name]; ok && matchB[j] != i {
 			first := sa.species[i]
+			if first.Mol == nil && sp.Mol == nil && smilesOf(first) == smilesOf(sp) && sp.Decl.SMILES != nil {
+				continue // the same unreadable SMILES on both sides: not a clash
+			}
 			c.NameClashes = append(c.NameClashes, NameClash{Name: sp.Name, SMILESA: smilesOf(first), SMILESB: smilesOf(sp)})
 		}
 	}
@@ -261,7 +267,7 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 	}
 	set := w.Settings()
 	a := &analysis{w: w, ctx: ctx, set: set, res: &Result{Path: path, Settings: set, Files: map[string]*speciesfile.File{},
-		ByName: map[string]*Species{}, Uses: map[string][]Location{}}}
+		ByName: map[string]*Species{}}}
 	f := speciesfile.Parse(path, text)
 	a.res.File = f
 	a.res.Files[path] = f
@@ -295,19 +301,14 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 			files = append(files, p)
 		}
 	}
-	results := make([]parsed, len(decls))
+	// Read the structures on all cores; structure() below finds them in
+	// the workspace's molecule cache.
 	if err := a.parallel(len(decls), 64, func(i int) {
 		if d := decls[i]; d.SMILES != nil {
-			results[i] = a.w.mols.parse(d.SMILES.Text)
+			a.w.mols.parse(d.SMILES.Text)
 		}
 	}); err != nil {
 		return nil, err
-	}
-	a.parsed = make(map[*speciesfile.Species]parsed, len(decls))
-	for i, d := range decls {
-		if d.SMILES != nil {
-			a.parsed[d] = results[i]
-		}
 	}
 	for i, sp := range s.species {
 		a.structure(files[i], sp)
@@ -335,8 +336,11 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 
 func (s *compareSide) summary() CompareSide {
 	out := CompareSide{Path: s.a.res.Path, Species: len(s.species), Reactions: len(s.reactions)}
-	for _, f := range s.a.res.Files {
-		out.Errors += countErrors(f.Diags)
+	out.Errors = countErrors(s.a.res.Diagnostics) // the file's syntax errors and the structure/include errors found here
+	for p, f := range s.a.res.Files {
+		if p != s.a.res.Path {
+			out.Errors += countErrors(f.Diags)
+		}
 	}
 	for _, sp := range s.species {
 		if sp.SMILESError != nil {
@@ -349,7 +353,7 @@ func (s *compareSide) summary() CompareSide {
 // rref describes a reaction of this side.
 func (s *compareSide) rref(r sideReaction) ReactionRef {
 	f := s.a.res.Files[r.file]
-	return ReactionRef{Equation: equationText(f, r.d), File: r.file, Line: f.Lines.Position(r.d.Span().Start).Line + 1}
+	return ReactionRef{Equation: equationText(f, r.d), File: r.file, Line: StmtLine(f, r.d)}
 }
 
 func (s *compareSide) ref(sp *Species) SpeciesRef {
@@ -377,13 +381,16 @@ func (s *compareSide) thermoOf(sp *Species) {
 	}
 }
 
-// multiplicityOf is the spin multiplicity a species declares, else the one
-// its structure implies.
-func multiplicityOf(sp *Species) int {
-	if m := intAttr(sp.Decl.Multiplicity); m > 0 {
-		return m
+// matchKeys returns each species' bucket key for matching: its cheap graph
+// invariant and effective multiplicity ("" without a structure).
+func (s *compareSide) matchKeys() []string {
+	keys := make([]string, len(s.species))
+	for i, sp := range s.species {
+		if sp.Mol != nil {
+			keys[i] = sp.inv + "|m" + strconv.Itoa(effectiveMultiplicity(s.a.w.cache.lib, sp))
+		}
 	}
-	return sp.Mol.DefaultMultiplicity()
+	return keys
 }
 
 // matchSpecies pairs species of a and b with the same structure (canonical
@@ -399,17 +406,37 @@ func matchSpecies(a, b *compareSide) (matchA, matchB []int) {
 	for j := range matchB {
 		matchB[j] = -1
 	}
-	key := func(sp *Species) string { return sp.inv + "|m" + strconv.Itoa(multiplicityOf(sp)) }
+	keysA, keysB := a.matchKeys(), b.matchKeys()
 	buckets := map[string][]int{}
 	for j, sp := range b.species {
 		if sp.Mol != nil {
-			k := key(sp)
-			buckets[k] = append(buckets[k], j)
+			buckets[keysB[j]] = append(buckets[keysB[j]], j)
 		}
 	}
 	same := func(x, y *Species) bool {
 		return x.Decl.SMILES.Text == y.Decl.SMILES.Text || identity(x.Mol) == identity(y.Mol)
 	}
+	// Canonical forms are needed only where a bucket holds species of both
+	// sides spelled differently; compute those on all cores first (each
+	// molecule caches its own).
+	var mols []*Species
+	seen := map[*Species]bool{}
+	for i, sp := range a.species {
+		if sp.Mol == nil {
+			continue
+		}
+		for _, j := range buckets[keysA[i]] {
+			if other := b.species[j]; other.Decl.SMILES.Text != sp.Decl.SMILES.Text {
+				for _, x := range []*Species{sp, other} {
+					if !seen[x] {
+						seen[x] = true
+						mols = append(mols, x)
+					}
+				}
+			}
+		}
+	}
+	_ = a.a.parallel(len(mols), 16, func(i int) { identity(mols[i].Mol) })
 	for i, sp := range a.species {
 		if sp.Mol == nil {
 			if j, ok := b.pos[sp.Name]; ok && b.species[j].Mol == nil && len(sp.Composition) > 0 && sameComposition(sp.Composition, b.species[j].Composition) {
@@ -419,7 +446,7 @@ func matchSpecies(a, b *compareSide) (matchA, matchB []int) {
 			}
 			continue
 		}
-		cands := buckets[key(sp)]
+		cands := buckets[keysA[i]]
 		best := -1
 		for _, j := range cands {
 			if matchB[j] >= 0 {

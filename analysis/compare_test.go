@@ -37,7 +37,8 @@ func pairNames(c *Comparison) map[string]string {
 
 // TestCompareMatching: structure and multiplicity decide, not names or
 // spellings; stereo isomers stay apart; lumped species pair by name and
-// composition; included files count.
+// composition; included files count; a multiplicity written out equals the
+// ground state kiln assumes without it (O=O is triplet oxygen).
 func TestCompareMatching(t *testing.T) {
 	files := map[string]string{
 		"/w/a.kiln": `species CH2 [CH2]
@@ -46,6 +47,8 @@ species singlet-CH2 [CH2]
 species cis C/C=C\C
 species trans C/C=C/C
 species benzene c1ccccc1
+species O2 O=O
+  multiplicity 3
 species tar
   composition C10H8
   thermo-table
@@ -67,6 +70,7 @@ species methylene [CH2]
 species E-butene C\C=C\C
 species Z-butene C/C=C\C
 species phenyl-H C1=CC=CC=C1
+species oxygen O=O
 species tar
   composition C10H8
   thermo-table
@@ -84,7 +88,7 @@ species propanone O=C(C)C
 	}
 	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
 	assert.Equal(t, map[string]string{"CH2": "methylene", "singlet-CH2": "methylene-s", "cis": "Z-butene", "trans": "E-butene",
-		"benzene": "phenyl-H", "tar": "tar", "acetone": "propanone"}, pairNames(c))
+		"benzene": "phenyl-H", "O2": "oxygen", "tar": "tar", "acetone": "propanone"}, pairNames(c))
 	require.Len(t, c.OnlyA, 1)
 	assert.Equal(t, "pitch", c.OnlyA[0].Name, "same name, other composition: not matched")
 	assert.Equal(t, "/w/more.kiln", c.Species[len(c.Species)-1].A.File)
@@ -203,4 +207,71 @@ func BenchmarkCompare10kDistinct(b *testing.B) {
 	for b.Loop() {
 		compareTexts(b, files, "/w/a.kiln", "/w/b.kiln")
 	}
+}
+
+// TestCompareGenerated: a generated mechanism against its renamed copy
+// (renameAll): every species and reaction is matched through the renaming,
+// every tenth reaction has k_B/k_A = 2 and the others 1. Large enough that
+// structures are read and estimated on several goroutines.
+func TestCompareGenerated(t *testing.T) {
+	src := mechgen.Generate(mechgen.Options{Seed: 3, Molecules: 300})
+	files := map[string]string{"/w/a.kiln": string(src), "/w/b.kiln": renameAll(string(src))}
+	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	assert.Len(t, c.Species, 607)
+	assert.Empty(t, c.OnlyA)
+	assert.Empty(t, c.OnlyB)
+	assert.Empty(t, c.NameClashes)
+	require.Len(t, c.Reactions, 900)
+	doubled := 0
+	for i, p := range c.Reactions {
+		want := 1.0
+		if (i+1)%10 == 0 {
+			want = 2
+			doubled++
+		}
+		for k := range p.Ratio {
+			require.NotNil(t, p.Ratio[k])
+			assert.InEpsilon(t, want, *p.Ratio[k], 1e-12, "%s", p.A.Equation)
+		}
+	}
+	assert.Equal(t, 90, doubled)
+	for _, p := range c.Species {
+		assert.True(t, p.SameEstimate, p.A.Name)
+		assert.True(t, p.Renamed())
+	}
+}
+
+// TestIncludeDuplicatesBounded: an included file that repeats many of the
+// including file's structures under other names gets at most
+// maxIncludeDupReports warnings on the include, plus one that says there
+// are more.
+func TestIncludeDuplicatesBounded(t *testing.T) {
+	var main, sub strings.Builder
+	main.WriteString("include sub.kiln\n")
+	chain := "C"
+	for i := range 30 {
+		chain += "C"
+		fmt.Fprintf(&main, "species a%d %s\n", i, chain)
+		fmt.Fprintf(&sub, "species b%d %s\n", i, chain)
+	}
+	ws := NewWorkspace("/w", func(p string) ([]byte, error) {
+		if p == "/w/sub.kiln" {
+			return []byte(sub.String()), nil
+		}
+		return nil, fmt.Errorf("no file %s", p)
+	}, DefaultSettings())
+	ws.SetOverlay("/w/main.kiln", []byte(main.String()))
+	res, err := ws.Analyze(context.Background(), "/w/main.kiln")
+	require.NoError(t, err)
+	n, more := 0, 0
+	for _, d := range res.Diagnostics {
+		if d.Code == "duplicate-species" {
+			n++
+			if strings.Contains(d.Message, "kiln compare") {
+				more++
+			}
+		}
+	}
+	assert.Equal(t, maxIncludeDupReports+1, n)
+	assert.Equal(t, 1, more)
 }

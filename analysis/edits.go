@@ -123,13 +123,54 @@ func (r *Result) ReplaceThermoEdit(sp *Species) (Edit, bool) {
 // FillEdits returns an insertion for every species of the analysed file that
 // lacks a thermo block and can be estimated, in file order.
 func (r *Result) FillEdits() []Edit {
+	out, _ := r.FillPlan()
+	return out
+}
+
+// Skip is a species of the analysed file that lacks a usable thermo block
+// and gets none from fill, with the reason.
+type Skip struct {
+	Species *Species
+	Reason  string
+}
+
+// FillPlan returns the insertions of FillEdits and every species declared in
+// the analysed file that still has no usable thermo block after them, with
+// the reason: nothing is skipped silently.
+func (r *Result) FillPlan() ([]Edit, []Skip) {
 	var out []Edit
+	var skips []Skip
 	for _, sp := range r.Species {
+		if sp.Loc.File != r.Path || sp.Given != nil {
+			continue
+		}
 		if e, ok := r.InsertThermoEdit(sp); ok {
 			out = append(out, e)
+			continue
 		}
+		skips = append(skips, Skip{Species: sp, Reason: skipReason(sp)})
 	}
-	return out
+	return out, skips
+}
+
+// skipReason says why no block can be inserted for sp.
+func skipReason(sp *Species) string {
+	switch {
+	case sp.brokenBlock:
+		return "its thermo block has a syntax error; fix or delete the block"
+	case sp.SMILESError != nil:
+		return "bad SMILES: " + smilesReason(sp.SMILESError)
+	case sp.Decl.SMILES == nil:
+		return "no structure (SMILES) to estimate from; add a nasa7 or thermo-table block"
+	case sp.estimateErr != nil:
+		return "cannot estimate: " + sp.estimateErr.Error()
+	case sp.Estimate == nil:
+		return "no estimate"
+	}
+	if _, _, err := sp.Estimate.NASA7(); err != nil {
+		return "no NASA-7 polynomial: " + err.Error()
+	}
+	return "no block can be inserted here"
 }
 
 // ErrOverlappingEdits is returned by ApplyEdits for edits that overlap.

@@ -18,6 +18,10 @@ type EstimateOptions struct {
 	Multiplicity, Symmetry, OpticalIsomers int // 0 = computed from the structure
 	UserGroups                             []benson.GroupValue
 	TMid, THigh                            float64
+	// ExplicitRange makes TMid and THigh apply to reference-library species
+	// too (refitted to the library polynomial); otherwise those keep the
+	// library's own ranges.
+	ExplicitRange bool
 
 	userKey string // groupsKey(UserGroups), computed once per analysis
 }
@@ -35,6 +39,9 @@ func (o EstimateOptions) key(ident string) string {
 	for _, f := range []float64{o.TMid, o.THigh} {
 		b.WriteByte('|')
 		b.WriteString(strconv.FormatFloat(f, 'g', -1, 64))
+	}
+	if o.ExplicitRange {
+		b.WriteString("|x")
 	}
 	if len(o.UserGroups) > 0 {
 		if o.userKey == "" {
@@ -125,6 +132,9 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		for i, T := range benson.StdTemps {
 			e.Cp[i] = sp.Poly.Cp(T)
 		}
+		if o.ExplicitRange && (o.TMid != sp.Poly.TMid || o.THigh != sp.Poly.THigh) {
+			e.fit, e.tMid, e.tHigh = &fitResult{}, o.TMid, o.THigh
+		}
 		return e, nil
 	}
 	bo := benson.Options{
@@ -133,12 +143,18 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		OpticalIsomers: o.OpticalIsomers,
 		UserGroups:     o.UserGroups,
 	}
-	// Estimates depend only on the structure: they are made from its
-	// canonical spelling (with stereo), so neither how a SMILES is written
-	// nor the order in which spellings are met changes a number.
+	// Estimates depend only on the structure: a polycyclic one is estimated
+	// from its canonical spelling (with stereo), so neither how a SMILES is
+	// written nor the order in which spellings are met changes a number.
+	// (Symmetry numbers of cages and bridged systems depend on the
+	// spelling until the molecule package's bounded automorphism count
+	// lands; acyclic and monocyclic structures do not, as
+	// TestEstimateRandomSpellings checks, and skip the extra canonical form.)
 	cm := m
-	if c, err := molecule.ParseSMILES(m.CanonicalStereo()); err == nil {
-		cm = c
+	if len(m.Rings()) >= 2 {
+		if c, err := molecule.ParseSMILES(m.CanonicalStereo()); err == nil {
+			cm = c
+		}
 	}
 	g, err := benson.Estimate(cm, bo)
 	if err != nil {
@@ -150,12 +166,31 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		}
 		return nil, err
 	}
+	if err := physical(g); err != nil {
+		return nil, err
+	}
 	e := &Estimate{Group: g, Hf298: g.Hf298, S298: g.S298, Cp: g.Cp, Uncertainty: g.Uncertainty,
 		fit: &fitResult{}, tMid: o.TMid, tHigh: o.THigh}
 	nAtoms, linear, rotors := shape(m)
 	e.cp0, e.cpInf = nasa.ClassicalLimits(nAtoms, linear, rotors)
 	e.model = newGroupThermo(g.Hf298, g.S298, benson.StdTemps[:], g.Cp[:])
 	return e, nil
+}
+
+// physical refuses a group-additivity result no gas can have: S°298 ≤ 0 or
+// Cp ≤ 0 at a tabulated temperature. Group values alone do not produce one;
+// an override such as `symmetry 99999999999999` (S falls by R ln σ) does,
+// and a number that cannot be true is not reported as an estimate.
+func physical(g *benson.Result) error {
+	if !(g.S298 > 0) {
+		return fmt.Errorf("the estimate is not physical: S°298 = %.2f J/(mol K) ≤ 0 (symmetry number %d, optical isomers %d: check any symmetry or optical-isomers override)", g.S298, g.SymmetryNumber, g.OpticalIsomers)
+	}
+	for i, cp := range g.Cp {
+		if !(cp > 0) {
+			return fmt.Errorf("the estimate is not physical: Cp(%g K) = %.2f J/(mol K) ≤ 0", benson.StdTemps[i], cp)
+		}
+	}
+	return nil
 }
 
 // shape returns the total atom count (with hydrogens), whether the molecule
@@ -272,7 +307,9 @@ func (c *moleculeCache) parse(smiles string) parsed {
 	if len(c.m) >= maxCachedMolecules {
 		c.m = map[string]parsed{}
 	}
-	c.m[smiles] = p
+	// The text is a token of a file's source: a copy keeps the source of
+	// a superseded version from being held by the cache.
+	c.m[strings.Clone(smiles)] = p
 	c.mu.Unlock()
 	return p
 }

@@ -3,6 +3,7 @@ package analysis
 import (
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -18,19 +19,24 @@ var keqTemperatures = []struct {
 	T   float64
 }{{"298", T298}, {"1000", 1000}, {"1500", 1500}}
 
-// reactions resolves the reactions of the analysed file and records the uses
-// of species names in every file in scope.
+// reactions resolves the reactions of the analysed file and finds repeated
+// reactions in every file in scope.
 func (a *analysis) reactions() error {
-	seen := map[string]*speciesfile.Reaction{}
-	seenFile := map[string]string{}
+	n := 0
+	for _, path := range a.order {
+		n += len(a.res.Files[path].Reactions)
+	}
+	seen := make(map[string]*speciesfile.Reaction, n)
+	seenFile := make(map[string]string, n)
+	a.res.Reactions = make([]*Reaction, 0, len(a.res.File.Reactions))
 	for _, path := range a.order {
 		f := a.res.Files[path]
-		for _, d := range f.Reactions {
+		for k, d := range f.Reactions {
 			if err := a.ctx.Err(); err != nil {
 				return err
 			}
-			a.recordUses(path, d)
-			key := reactionKey(d)
+			rt := a.memo.reactionText(path, f, k)
+			key := rt.dupKey
 			if first, dup := seen[key]; dup {
 				if d.Duplicate == nil || first.Duplicate == nil {
 					line := a.res.Files[seenFile[key]].Lines.Position(first.Equation.Start).Line + 1
@@ -49,37 +55,138 @@ func (a *analysis) reactions() error {
 			if path != a.res.Path {
 				continue
 			}
-			a.res.Reactions = append(a.res.Reactions, a.reaction(path, d))
+			a.res.Reactions = append(a.res.Reactions, a.reaction(path, d, rt.equation))
 		}
 	}
 	return a.computeReactions()
 }
 
 // computeReactions works out balance, thermochemistry and rate checks of the
-// resolved reactions on all cores: each reaction depends only on the
-// species, which are settled by now. Diagnostics are merged in file order.
+// resolved reactions. Each reaction is one memoized unit reading its
+// statement and the species units of its terms; units not kept from the last
+// analysis are computed on all cores (the species are settled by now).
+// Diagnostics are merged in file order.
 func (a *analysis) computeReactions() error {
 	rs := a.res.Reactions
-	err := a.parallel(len(rs), 256, func(i int) {
-		if r := rs[i]; r.Resolved {
-			a.balance(r.Decl, r)
+	f := a.res.File
+	units := make([]*reactionUnit, len(rs))
+	var todo []int
+	for i, r := range rs {
+		if !r.Resolved {
+			continue
+		}
+		if u := a.memo.reaction(a, a.res.Path, f, i); u != nil {
+			units[i] = u
+			continue
+		}
+		todo = append(todo, i)
+	}
+	err := a.parallel(len(todo), 256, func(k int) {
+		i := todo[k]
+		r := rs[i]
+		a.balance(r.Decl, r)
+		// Thermochemistry of a reaction that does not balance means
+		// nothing: it is neither shown nor used for reverse rates.
+		if r.Balance != nil && r.Balance.Balanced {
 			a.thermo(r.Decl, r)
-			a.rates(r.Decl, r)
+		}
+		a.rates(r.Decl, r)
+		if a.memo != nil {
+			units[i] = newReactionUnit(f.EnergyUnit, a.reactionDeps(r.Decl), r)
+			r.diags = nil
 		}
 	})
 	if err != nil {
 		return err
 	}
-	for _, r := range rs {
-		a.res.Diagnostics = append(a.res.Diagnostics, r.diags...)
-		r.diags = nil
+	n := 0
+	for i, u := range units {
+		if u != nil {
+			n += len(u.diags)
+		}
+		n += len(rs[i].diags)
 	}
+	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n)
+	for i, r := range rs {
+		u := units[i]
+		if u == nil {
+			// Not incremental: the diagnostics were reported into r.
+			a.res.Diagnostics = append(a.res.Diagnostics, r.diags...)
+			r.diags = nil
+			continue
+		}
+		u.apply(r)
+		a.memo.keepReaction(a.res.Path, i, u)
+		a.res.Diagnostics = appendRelocated(a.res.Diagnostics, u.diags, r.File, r.Decl.Body().Start)
+	}
+	a.rangeChecks()
 	return nil
 }
 
-func (a *analysis) recordUses(path string, d *speciesfile.Reaction) {
+// Temperatures (K) at which the reaction checks evaluate species thermo:
+// ΔH°r, ΔS°r, ΔG°r at 298.15 K and Kp up to 1500 K for every reaction with
+// thermochemistry; Kc up to 2500 K for a reverse rate derived from it (the
+// collision check's range).
+const (
+	tmaxKp      = 1500
+	tmaxReverse = 2500
+	rangeSlack  = 2 // K: 298.15 K counts as inside a block starting at 300 K
+)
+
+// rangeChecks reports, once per species, a thermo block of the analysed file
+// that the reaction checks evaluate outside its temperature range (an
+// extrapolation kiln would otherwise do silently): thermo-out-of-range on
+// the block header, naming the first reaction that needs it.
+func (a *analysis) rangeChecks() {
+	type need struct {
+		tmax float64
+		line int
+	}
+	needs := map[*Species]need{}
+	for _, r := range a.res.Reactions {
+		if r.reactants == nil {
+			continue // no thermochemistry computed
+		}
+		tmax := float64(tmaxKp)
+		if r.model != nil && r.model.kc != nil && r.model.reverse == nil {
+			tmax = tmaxReverse
+		}
+		for _, ts := range [][]speciesfile.Term{r.Decl.Reactants, r.Decl.Products} {
+			for _, t := range ts {
+				sp := a.res.ByName[t.Name.Text]
+				if sp == nil || sp.Source != SourceFile {
+					continue
+				}
+				if n, ok := needs[sp]; !ok || tmax > n.tmax {
+					needs[sp] = need{tmax, r.Line}
+				}
+			}
+		}
+	}
+	for _, sp := range a.res.Species {
+		n, ok := needs[sp]
+		if !ok || sp.Loc.File != a.res.Path {
+			continue
+		}
+		lo, hi := sp.Given.Range()
+		if lo <= T298+rangeSlack && hi >= n.tmax-rangeSlack {
+			continue
+		}
+		span := sp.Given.Span
+		if d := sp.Decl.NASA7; d != nil {
+			span = d.Header.Span
+		} else if d := sp.Decl.Table; d != nil {
+			span = d.Header.Span
+		}
+		a.report(sp.Loc.File, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+			Message: fmt.Sprintf("%s: the block covers %g–%g K, but the reaction on line %d needs it from 298 K to %g K; values outside the block are extrapolated",
+				sp.Name, lo, hi, n.line, n.tmax)})
+	}
+}
+
+func recordUses(uses map[string][]Location, path string, d *speciesfile.Reaction) {
 	add := func(t speciesfile.Token) {
-		a.res.Uses[t.Text] = append(a.res.Uses[t.Text], Location{File: path, Span: t.Span})
+		uses[t.Text] = append(uses[t.Text], Location{File: path, Span: t.Span})
 	}
 	for _, t := range d.Reactants {
 		add(t.Name)
@@ -137,16 +244,26 @@ func reactionKey(d *speciesfile.Reaction) string {
 	return l + " = " + r + " " + tb
 }
 
-// reaction computes balance, thermochemistry and rate checks of one reaction.
-func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
+// reaction resolves the names of one reaction (equation is its text with
+// blanks collapsed); computeReactions works out the rest.
+func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation string) *Reaction {
 	f := a.res.Files[path]
-	r := &Reaction{Decl: d, File: path, Line: f.Lines.Position(d.Span().Start).Line + 1, Equation: equationText(f, d), Resolved: true, Kp: map[string]*float64{}}
+	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equation, Resolved: true, Kp: map[string]*float64{}}
+	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Equation) {
+		// An equation the reader could not read is not data: the syntax
+		// error is the one diagnostic.
+		r.Resolved = false
+		return r
+	}
 	for _, k := range keqTemperatures {
 		r.Kp[k.Key] = nil
 	}
 	undeclared := func(t speciesfile.Token, what string) {
-		a.report(path, speciesfile.Diagnostic{Span: t.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUndeclaredSpecies,
-			Message: fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)})
+		msg := fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)
+		if parts := strings.Split(t.Text, "+"); len(parts) > 1 && !strings.HasPrefix(t.Text, "(+") {
+			msg = fmt.Sprintf("%s %s is not declared; if you meant %s, put blanks around each +", what, t.Text, strings.Join(parts, " + "))
+		}
+		a.report(path, speciesfile.Diagnostic{Span: t.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUndeclaredSpecies, Message: msg})
 	}
 	for _, ts := range [][]speciesfile.Term{d.Reactants, d.Products} {
 		for _, t := range ts {
@@ -167,6 +284,13 @@ func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
 		}
 	}
 	return r
+}
+
+// StmtLine returns the 1-based line of a statement as every command shows
+// it: the line of its keyword, not of the comment and blank lines that
+// precede it (they belong to the statement's span).
+func StmtLine(f *speciesfile.File, st speciesfile.Stmt) int {
+	return f.Lines.Position(st.Keyword().Span.Start).Line + 1
 }
 
 // equationText is the equation as written with runs of blanks collapsed.
@@ -250,30 +374,6 @@ func (r *Reaction) Kc(T float64) (float64, bool) {
 	return kinetics.Kc(kinetics.Kp(g, T), kinetics.DeltaN(r.reactants, r.products), T), true
 }
 
-// forward returns k_f(T) of the reaction's main rate in cm3, mol, s units.
-// For falloff reactions the main line is the high-pressure limit.
-func forward(d *speciesfile.Reaction) (func(T float64) float64, bool) {
-	if len(d.Pressures) > 0 {
-		var tab kinetics.PressureTable
-		for _, p := range d.Pressures {
-			if arr, ok := arrhenius(&p.Rate); ok {
-				tab = append(tab, kinetics.PressureRate{P: p.P.SI, Rate: arr})
-			}
-		}
-		if len(tab) > 0 {
-			return func(T float64) float64 { return tab.Rate(T, oneAtm) }, true
-		}
-	}
-	arr, ok := arrhenius(d.Rate)
-	if !ok {
-		return nil, false
-	}
-	return arr.Rate, true
-}
-
-// oneAtm (Pa) is the pressure at which a rate table is read for checks.
-const oneAtm = 101325
-
 func arrhenius(r *speciesfile.Arrhenius) (kinetics.Arrhenius, bool) {
 	if r == nil || r.A == nil {
 		return kinetics.Arrhenius{}, false
@@ -313,66 +413,6 @@ func (a *analysis) sizes(ts []speciesfile.Term) (masses []float64, heavy []int) 
 	return masses, heavy
 }
 
-func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
-	kf, ok := forward(d)
-	if !ok {
-		return
-	}
-	set := kinetics.CollisionSettings{Factor: a.set.CollisionFactor, TMin: 300, TMax: 2500}
-	third := 0
-	if d.ThirdBody {
-		third = 1
-	}
-	span := d.Equation
-	if d.Rate != nil {
-		span = d.Rate.Span
-	}
-	m, h := a.sizes(d.Reactants)
-	if v := kinetics.CollisionCheck(molecularity(d.Reactants)+third, m, h, kf, set); v != nil {
-		r.Collision = v
-		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
-			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K", v.Rate, v.Limit, rateUnits(v.Order), v.T)})
-	}
-	if !d.Reversible {
-		return
-	}
-	var kr func(T float64) float64
-	if arr, ok := arrhenius(d.Reverse); ok {
-		kr = arr.Rate
-	} else if r.reactants != nil {
-		kr = func(T float64) float64 {
-			kc, _ := r.Kc(T)
-			return kinetics.ReverseRate(kf(T), kc)
-		}
-	}
-	if kr == nil {
-		return
-	}
-	v := kr(1000)
-	if !math.IsNaN(v) && !math.IsInf(v, 0) {
-		r.ReverseRate1000 = &v
-	}
-	if r.Collision != nil {
-		return
-	}
-	m, h = a.sizes(d.Products)
-	if v := kinetics.CollisionCheck(molecularity(d.Products)+third, m, h, kr, set); v != nil {
-		v.Reverse = true
-		r.Collision = v
-		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
-			Message: fmt.Sprintf("reverse rate implied by thermochemistry, %.3g, exceeds the collision limit %.3g (%s) at %.0f K", v.Rate, v.Limit, rateUnits(v.Order), v.T)})
-	}
-}
-
-// rateUnits names the units of a rate constant of the given order.
-func rateUnits(order int) string {
-	switch order {
-	case 1:
-		return "s⁻¹"
-	case 2:
-		return "cm³/(mol·s)"
-	case 3:
-		return "cm⁶/(mol²·s)"
-	}
-	return fmt.Sprintf("order %d, cm, mol, s", order)
-}
+// RateUnits names the units of a rate constant of the given order (see
+// kinetics.RateUnits, the one formatter).
+func RateUnits(order int) string { return kinetics.RateUnits(order) }

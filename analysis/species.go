@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io/fs"
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -17,50 +18,112 @@ import (
 )
 
 // species resolves every species declaration in scope: structure, given
-// thermo, estimate, and the checks that compare them.
+// thermo, estimate, and the checks that compare them. The rules of each
+// declaration (speciesRules) form one memoized unit; duplicate names and
+// structures are checked across declarations on every analysis.
 func (a *analysis) species() error {
 	user := a.userGroups()
-	if err := a.prepare(user); err != nil {
-		return err
+	if len(user) > 0 {
+		a.userKey = groupsKey(user) // before the workers read it
 	}
-	byStructure := map[string][]*Species{}
+	nSpecies := 0
+	for _, path := range a.order {
+		nSpecies += len(a.res.Files[path].Species)
+	}
+	// Messages are written in the analysed file's display units.
+	a.memo = a.w.startMemo(a.res.Path, a.set, a.userKey+"|"+a.res.Units().EnergyName())
+	a.res.ByName = make(map[string]*Species, nSpecies)
+	a.res.Species = make([]*Species, 0, nSpecies)
+
+	type item struct {
+		path string
+		f    *speciesfile.File
+		k    int // index in f.Species
+		sp   *Species
+		u    *speciesUnit
+		// diags of the species' rules when there is no memo (no unit is
+		// made: nothing would reuse it).
+		diags []speciesfile.Diagnostic
+	}
+	items := make([]item, 0, nSpecies)
+	var todo []int
 	for _, path := range a.order {
 		f := a.res.Files[path]
-		for _, d := range f.Species {
+		for k, d := range f.Species {
 			if err := a.ctx.Err(); err != nil {
 				return err
 			}
 			sp := &Species{Name: d.Name.Text, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
 			if first, dup := a.res.ByName[sp.Name]; dup {
-				a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
-					Message: fmt.Sprintf("species %s is already declared (%s); this declaration is ignored", sp.Name, a.where(first.Loc)),
+				// An error: a simulator reading the file may take either
+				// declaration.
+				a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeDuplicateSpecies,
+					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", sp.Name, a.where(first.Loc)),
 					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first declaration of " + sp.Name}}})
 				continue
 			}
 			a.res.ByName[sp.Name] = sp
 			a.res.Species = append(a.res.Species, sp)
-
-			a.structure(path, sp)
-			if sp.Mol == nil && len(d.Formula) > 0 {
-				// The parser reports a malformed composition line.
-				comp := map[string]int{}
-				for _, ec := range d.Formula {
-					comp[ec.Symbol] += ec.Count
-				}
-				sp.Composition = comp
-				sp.Formula = molecule.HillFormula(comp)
-				sp.MolarMass = MolarMassOf(comp)
+			u := a.memo.species(path, f, k)
+			if u == nil {
+				todo = append(todo, len(items))
 			}
-			if sp.Mol != nil {
-				if first := sameStructure(byStructure, sp); first != nil {
-					a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
-						Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(first.Loc)),
-						Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: first.Name + " has this structure"}}})
-				}
-				a.estimateSpecies(path, sp, user)
+			items = append(items, item{path: path, f: f, k: k, sp: sp, u: u})
+		}
+	}
+	// The names whose unit is recomputed: every other declared name stands
+	// for the same unit as in the last analysis (a declaration that kept its
+	// unit was the first of its name then too: only first declarations
+	// have units), so reaction units naming none of them stay valid.
+	if a.memo != nil {
+		a.memo.changed = make(map[string]bool, len(todo))
+		for _, k := range todo {
+			a.memo.changed[items[k].sp.Name] = true
+		}
+	}
+	// Units not kept from the last analysis are computed on all cores: each
+	// reads only its own declaration and the (concurrency-safe) caches.
+	err := a.parallel(len(todo), 16, func(k int) {
+		it := &items[todo[k]]
+		var diags []speciesfile.Diagnostic
+		unit := *a
+		unit.sink = &diags
+		unit.speciesRules(it.path, it.sp, user)
+		if a.memo == nil {
+			it.diags = diags
+			return
+		}
+		it.u = newSpeciesUnit(it.f.EnergyUnit, it.sp, diags, it.path)
+	})
+	if err != nil {
+		return err
+	}
+	n := len(a.res.Diagnostics)
+	for _, it := range items {
+		if it.path == a.res.Path && it.u != nil {
+			n += len(it.u.diags)
+		}
+		if it.path == a.res.Path {
+			n += len(it.diags)
+		}
+	}
+	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
+	byStructure := make(map[string][]*Species, len(items))
+	for _, it := range items {
+		sp := it.sp
+		if it.u != nil {
+			it.u.apply(sp, a.memo != nil)
+			a.memo.keepSpecies(it.path, it.k, it.u)
+			if it.path == a.res.Path {
+				a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, sp.Decl.Body().Start)
 			}
-			a.given(path, sp)
-			a.thermoChecks(path, sp)
+		} else if it.path == a.res.Path {
+			a.res.Diagnostics = append(a.res.Diagnostics, it.diags...)
+		}
+		if sp.Mol != nil {
+			if first := sameStructure(byStructure, sp); first != nil {
+				a.reportSameStructure(it.path, sp, first)
+			}
 		}
 	}
 	for _, g := range a.res.Groups {
@@ -78,12 +141,36 @@ func (a *analysis) species() error {
 	return nil
 }
 
+// speciesRules runs the rules of one species declaration that read nothing
+// but the declaration (and the settings and user groups): structure,
+// composition, estimate, given thermo and the checks comparing them.
+func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupValue) {
+	d := sp.Decl
+	a.structure(path, sp)
+	if sp.Mol == nil && len(d.Formula) > 0 {
+		// The parser reports a malformed composition line.
+		comp := map[string]int{}
+		for _, ec := range d.Formula {
+			comp[ec.Symbol] += ec.Count
+		}
+		sp.Composition = comp
+		sp.Formula = molecule.HillFormula(comp)
+		sp.MolarMass = MolarMassOf(comp)
+	}
+	if sp.Mol != nil {
+		sp.structKey = sp.inv + "|m" + strconv.Itoa(effectiveMultiplicity(a.w.cache.lib, sp))
+		a.estimateSpecies(path, sp, user)
+	}
+	a.given(path, sp)
+	a.thermoChecks(path, sp)
+}
+
 // sameStructure returns the first species in seen with the structure and
 // multiplicity of sp, and records sp. Species are bucketed by a cheap graph
 // invariant first; canonical forms are computed only within a bucket, so
 // most species never need one.
 func sameStructure(seen map[string][]*Species, sp *Species) *Species {
-	k := sp.inv + "|m" + strconv.Itoa(intAttr(sp.Decl.Multiplicity))
+	k := sp.structKey
 	bucket := seen[k]
 	for _, other := range bucket {
 		if identity(other.Mol) == identity(sp.Mol) {
@@ -141,41 +228,6 @@ type parsed struct {
 	inv         string // invariant(mol)
 }
 
-// prepare reads every structure in scope and warms the estimate cache using
-// all cores: structures and estimates are independent of one another, while
-// the pass that follows (names, duplicates, diagnostics) is sequential.
-func (a *analysis) prepare(user []benson.GroupValue) error {
-	var decls []*speciesfile.Species
-	for _, path := range a.order {
-		for _, d := range a.res.Files[path].Species {
-			if d.SMILES != nil {
-				decls = append(decls, d)
-			}
-		}
-	}
-	a.parsed = make(map[*speciesfile.Species]parsed, len(decls))
-	if len(user) > 0 {
-		a.userKey = groupsKey(user) // before the workers read it
-	}
-	results := make([]parsed, len(decls))
-	err := a.parallel(len(decls), 64, func(i int) {
-		d := decls[i]
-		p := a.w.mols.parse(d.SMILES.Text)
-		results[i] = p
-		if p.err == nil {
-			// Errors are reported by the sequential pass.
-			_, _ = a.w.cache.get(p.ident, p.mol, a.estimateOptions(d, user))
-		}
-	})
-	if err != nil {
-		return err
-	}
-	for i, d := range decls {
-		a.parsed[d] = results[i]
-	}
-	return nil
-}
-
 func (a *analysis) estimateOptions(d *speciesfile.Species, user []benson.GroupValue) EstimateOptions {
 	return EstimateOptions{
 		userKey:        a.userKey,
@@ -185,6 +237,7 @@ func (a *analysis) estimateOptions(d *speciesfile.Species, user []benson.GroupVa
 		UserGroups:     user,
 		TMid:           a.set.TMid,
 		THigh:          a.set.THigh,
+		ExplicitRange:  a.set.ExplicitFitRange,
 	}
 }
 
@@ -221,8 +274,16 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 		sp.estimateErr = err
 		var mg *benson.MissingGroupError
 		if errors.As(err, &mg) {
-			a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
-				Message: fmt.Sprintf("%s: no value for group %s and no group close enough to stand in; define it with a `group` statement", sp.Name, mg.Group)})
+			// The root cause, reported once: without a usable thermo block
+			// the species has no thermo at all (an error, and no separate
+			// missing-thermo); with one, only the comparison is lost.
+			sev, then := speciesfile.SeverityWarning, "; define it with a `group` statement"
+			if !a.hasUsableBlock(path, d) {
+				sev, then = speciesfile.SeverityError, ", so its thermo cannot be estimated; define the group with a `group` statement or add a nasa7 or thermo-table block"
+			}
+			sp.rootReported = true
+			a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: sev, Code: speciesfile.CodeMissingGroup,
+				Message: fmt.Sprintf("%s: no value for group %s and no group close enough to stand in%s", sp.Name, mg.Group, then)})
 		}
 		return
 	}
@@ -256,9 +317,28 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 // site's entropy and heat-capacity increments are not tabulated.
 func isHBINote(m benson.Missing) bool { return strings.HasPrefix(m.Group, "HBI ") }
 
-// given converts the species' own thermo block, if any.
+// hasUsableBlock reports whether declaration d has a thermo block without
+// syntax errors: a block the reader could not read completely is not data.
+func (a *analysis) hasUsableBlock(path string, d *speciesfile.Species) bool {
+	f := a.res.Files[path]
+	switch {
+	case d.NASA7 != nil:
+		return !f.ErrorIn(d.NASA7.Span)
+	case d.Table != nil:
+		return !f.ErrorIn(d.Table.Span)
+	}
+	return false
+}
+
+// given converts the species' own thermo block, if any. A block with a
+// syntax error is ignored (the syntax error says what to fix); the species
+// is then estimated like one without a block.
 func (a *analysis) given(path string, sp *Species) {
 	d := sp.Decl
+	if (d.NASA7 != nil || d.Table != nil) && !a.hasUsableBlock(path, d) {
+		sp.brokenBlock = true
+		return
+	}
 	switch {
 	case d.NASA7 != nil:
 		b := d.NASA7
@@ -311,32 +391,38 @@ func (a *analysis) shapeOf(sp *Species) (int, bool, int) {
 func (a *analysis) thermoChecks(path string, sp *Species) {
 	d := sp.Decl
 	if sp.Given == nil {
+		block := "no thermo block"
+		if sp.brokenBlock {
+			block = "its thermo block has a syntax error and is ignored"
+		}
 		if sp.Estimate != nil {
 			sp.Source = SourceEstimate
 			a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeMissingThermo,
-				Message: fmt.Sprintf("%s: no thermo block; estimated %s", sp.Name, a.thermoSummary(sp.Estimate.Hf298, sp.Estimate.S298))})
+				Message: fmt.Sprintf("%s: %s; estimated %s", sp.Name, block, a.thermoSummary(sp.Estimate.Hf298, sp.Estimate.S298))})
 			return
 		}
-		if sp.SMILESError != nil {
-			return // bad-smiles already says what to fix
+		if sp.SMILESError != nil || sp.rootReported {
+			return // bad-smiles or missing-group already says what to fix
 		}
 		why := "it has no structure (SMILES) to estimate from"
 		if sp.estimateErr != nil {
 			why = "kiln cannot estimate it: " + sp.estimateErr.Error()
 		}
+		what := "has no thermo block"
+		if sp.brokenBlock {
+			what = "has no usable thermo block (the syntax error above)"
+		}
 		a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeMissingThermo,
-			Message: fmt.Sprintf("%s has no thermo block and %s; add a nasa7 or thermo-table block", sp.Name, why)})
+			Message: fmt.Sprintf("%s %s and %s; add a nasa7 or thermo-table block", sp.Name, what, why)})
 		return
 	}
 	g := sp.Given
+	before := a.reported()
 	if g.Poly != nil {
 		cpMax := 0.0
 		if sp.Mol != nil || len(sp.Composition) > 0 {
-			// Rotors are not discounted: any of them may be a stiff
-			// vibration at high T, so the all-vibration limit bounds Cp.
 			n, lin, _ := a.shapeOf(sp)
-			_, cpInf := nasa.ClassicalLimits(n, lin, 0)
-			cpMax = cpInf * 1.02
+			cpMax = nasa.CpCeiling(n, lin)
 		}
 		for _, p := range nasa.Check(*g.Poly, nasa.Tolerances{}, cpMax) {
 			code := speciesfile.CodeNonphysicalThermo
@@ -352,12 +438,13 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 			case "ranges":
 				span = speciesfile.Span{Start: d.NASA7.TLow.Tok.Span.Start, End: d.NASA7.THigh.Tok.Span.End}
 			}
-			a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: code, Message: sp.Name + ": " + p.Message})
+			a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: code, Message: sp.Name + ": " + a.problemMessage(p)})
 		}
 	}
 	if g.Table != nil {
 		a.tableChecks(path, sp)
 	}
+	defects := a.reported() > before
 	if sp.Estimate == nil {
 		return
 	}
@@ -385,6 +472,99 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 			Message: fmt.Sprintf("%s: S°298 given %s vs estimated %s (difference %s, threshold %s)",
 				sp.Name, a.entropy(s), a.entropy(sp.Estimate.S298), a.entropy(ds), a.entropy(a.set.MismatchS298))})
 	}
+	if !defects {
+		// A block with a defect of its own (reported above) is not also
+		// compared point by point: the defect is the root cause.
+		a.compareOverRange(path, sp, hfSpan)
+	}
+}
+
+// compareOverRange compares the given block with the estimate (or library
+// value) over the temperatures both cover, and reports the worst point:
+//
+//   - Cp(T), threshold Settings.MismatchCp;
+//   - H(T) − H(298.15 K), threshold Settings.MismatchHf298 (reported only
+//     when Cp is within its threshold: a Cp difference is the root cause).
+//
+// The estimate covers its group values' temperatures (300–1500 K; beyond
+// them it is an extrapolation, not data), a library species its polynomial's
+// range. Temperatures: the estimate's points for group values, every 50 K
+// for a library polynomial.
+func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.Span) {
+	g, e := sp.Given, sp.Estimate
+	lo, hi := g.Range()
+	var temps []float64
+	ref := e.curve()
+	what := "estimated"
+	if e.Library != "" {
+		what = "reference"
+		from, to := math.Max(lo, e.libPoly.TLow), math.Min(hi, e.libPoly.THigh)
+		for t := math.Ceil(from/50) * 50; t <= to; t += 50 {
+			temps = append(temps, t)
+		}
+	} else {
+		for _, t := range benson.StdTemps {
+			if t >= lo && t <= hi {
+				temps = append(temps, t)
+			}
+		}
+	}
+	givenH := func(T float64) (float64, bool) {
+		switch {
+		case g.Poly != nil:
+			return g.Poly.H(T) - g.Poly.H(T298), true
+		case g.model != nil:
+			return g.model.H(T) - g.model.H(T298), true
+		}
+		return 0, false
+	}
+	var worstCp, worstCpT, cpGiven, cpRef float64
+	var worstH, worstHT, hGiven, hRef float64
+	for _, T := range temps {
+		if c, ok := g.CpAt(T); ok {
+			if d := c - ref.Cp(T); math.Abs(d) > math.Abs(worstCp) {
+				worstCp, worstCpT, cpGiven, cpRef = d, T, c, ref.Cp(T)
+			}
+		}
+		if h, ok := givenH(T); ok && T > T298 {
+			r := ref.H(T) - ref.H(T298)
+			if d := h - r; math.Abs(d) > math.Abs(worstH) {
+				worstH, worstHT, hGiven, hRef = d, T, h, r
+			}
+		}
+	}
+	if math.Abs(worstCp) > a.set.MismatchCp {
+		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+			Message: fmt.Sprintf("%s: Cp at %g K given %s vs %s %s (difference %s, threshold %s)",
+				sp.Name, worstCpT, a.entropy(cpGiven), what, a.entropy(cpRef), a.entropy(worstCp), a.entropy(a.set.MismatchCp))})
+		return
+	}
+	if math.Abs(worstH) > a.set.MismatchHf298 {
+		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+			Message: fmt.Sprintf("%s: H(%g K) − H(298 K) given %s vs %s %s (difference %s, threshold %s)",
+				sp.Name, worstHT, a.energy(hGiven), what, a.energy(hRef), a.energy(worstH), a.energy(a.set.MismatchHf298))})
+	}
+}
+
+// problemMessage describes a defect of a polynomial in the display units,
+// rounded for people.
+func (a *analysis) problemMessage(p nasa.Problem) string {
+	u := a.res.Units()
+	switch p.Test {
+	case "cp-jump":
+		return fmt.Sprintf("Cp jumps by %s at %g K (low block %s, high block %s)", u.Entropy(p.Other-p.Value), p.T, u.Entropy(p.Value), u.Entropy(p.Other))
+	case "h-jump":
+		return fmt.Sprintf("H jumps by %s at %g K (low block %s, high block %s)", u.Energy(p.Other-p.Value), p.T, u.Energy(p.Value), u.Energy(p.Other))
+	case "s-jump":
+		return fmt.Sprintf("S jumps by %s at %g K (low block %s, high block %s)", u.Entropy(p.Other-p.Value), p.T, u.Entropy(p.Value), u.Entropy(p.Other))
+	case "cp-falls":
+		return fmt.Sprintf("Cp falls with temperature: %s at %.0f K, below the %s reached earlier", u.Entropy(p.Value), p.T, u.Entropy(p.Other))
+	case "cp-nonpositive":
+		return fmt.Sprintf("Cp is not positive: %s at %.0f K", u.Entropy(p.Value), p.T)
+	case "cp-ceiling":
+		return fmt.Sprintf("Cp = %s at %.0f K exceeds %s, the classical limit with the allowance for electronic states and anharmonicity", u.Entropy(p.Value), p.T, u.Entropy(p.Other))
+	}
+	return p.Message
 }
 
 // tableChecks reports unsound tabulated Cp values.
@@ -457,52 +637,68 @@ func (sp *Species) Hf298S298() (hf, s float64, ok bool) {
 	return 0, 0, false
 }
 
-// CpAt returns Cp at the standard temperatures from the thermo the analysis
-// uses: the estimate's group values, or the file's block evaluated.
-func (sp *Species) CpAt() ([7]float64, bool) {
-	var out [7]float64
+// CpAt returns Cp (J/(mol K)) at T (K) from the block: the polynomial
+// inside [TLow, THigh], the table interpolated linearly between its
+// temperatures. Outside them ok is false: no command shows a value a block
+// does not give (one rule for summaries, hovers and plots).
+func (g *GivenThermo) CpAt(T float64) (float64, bool) {
+	switch {
+	case g.Poly != nil:
+		return g.Poly.Cp(T), g.Poly.InRange(T)
+	case g.Table != nil && len(g.Table.T) > 0:
+		lo, hi := math.Inf(1), math.Inf(-1)
+		for _, t := range g.Table.T {
+			lo, hi = math.Min(lo, t), math.Max(hi, t)
+		}
+		if T < lo || T > hi {
+			return 0, false
+		}
+		return interpolate(g.Table.T, g.Table.Cp, T), true
+	}
+	return 0, false
+}
+
+// Range returns the temperatures (K) the block covers.
+func (g *GivenThermo) Range() (lo, hi float64) {
+	switch {
+	case g.Poly != nil:
+		return g.Poly.TLow, g.Poly.THigh
+	case g.Table != nil && len(g.Table.T) > 0:
+		lo, hi = math.Inf(1), math.Inf(-1)
+		for _, t := range g.Table.T {
+			lo, hi = math.Min(lo, t), math.Max(hi, t)
+		}
+		return lo, hi
+	}
+	return 0, 0
+}
+
+// CpAt returns Cp at the standard temperatures (benson.StdTemps) from the
+// thermo the analysis uses: the estimate's values, or the file's block where
+// it covers the temperature (ok[i] false elsewhere, see GivenThermo.CpAt).
+func (sp *Species) CpAt() (cp [7]float64, ok [7]bool) {
 	switch sp.Source {
 	case SourceEstimate:
-		return sp.Estimate.Cp, true
+		for i := range ok {
+			ok[i] = true
+		}
+		return sp.Estimate.Cp, ok
 	case SourceFile:
-		if sp.Given.Table != nil {
-			for i, T := range benson.StdTemps {
-				out[i] = interpolate(sp.Given.Table.T, sp.Given.Table.Cp, T)
-			}
-			return out, len(sp.Given.Table.T) > 0
-		}
 		for i, T := range benson.StdTemps {
-			out[i] = sp.Given.Poly.Cp(T)
+			cp[i], ok[i] = sp.Given.CpAt(T)
 		}
-		return out, true
 	}
-	return out, false
+	return cp, ok
 }
 
 // energy formats an energy (J/mol) in the display units.
-func (a *analysis) energy(v float64) string { return FormatEnergy(v, a.set.DisplayUnits) }
+func (a *analysis) energy(v float64) string { return a.res.Units().Energy(v) }
 
 // entropy formats an entropy or heat capacity (J/(mol K)) in the display units.
-func (a *analysis) entropy(v float64) string { return FormatEntropy(v, a.set.DisplayUnits) }
+func (a *analysis) entropy(v float64) string { return a.res.Units().Entropy(v) }
 
 func (a *analysis) thermoSummary(hf, s float64) string {
 	return fmt.Sprintf("ΔHf°298 = %s, S°298 = %s", a.energy(hf), a.entropy(s))
-}
-
-// FormatEnergy writes v (J/mol) as "-56.21 kcal/mol" or "-235.2 kJ/mol".
-func FormatEnergy(v float64, units string) string {
-	if units == "kJ/mol" {
-		return fmt.Sprintf("%.1f kJ/mol", v/1000)
-	}
-	return fmt.Sprintf("%.2f kcal/mol", v/4184)
-}
-
-// FormatEntropy writes v (J/(mol K)) as "67.54 cal/(mol·K)" or "282.6 J/(mol·K)".
-func FormatEntropy(v float64, units string) string {
-	if units == "kJ/mol" {
-		return fmt.Sprintf("%.1f J/(mol·K)", v)
-	}
-	return fmt.Sprintf("%.2f cal/(mol·K)", v/4.184)
 }
 
 // MolarMassOf returns the molar mass (g/mol) of an element composition using

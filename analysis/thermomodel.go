@@ -1,6 +1,7 @@
 package analysis
 
 import (
+	"fmt"
 	"math"
 	"sort"
 	"sync"
@@ -118,11 +119,21 @@ type fitResult struct {
 // for library species, else a fit to the group values (made on first use;
 // fitting is the costly step of an estimate, and most uses need only the
 // values). FitReport is zero for library species.
+//
+// With explicit fit temperatures (EstimateOptions.ExplicitRange) a library
+// polynomial is refitted to the requested TMid and THigh: its Cp sampled
+// every 10 K over its own range, fitted by nasa.FitPoly with ΔHf°298 and
+// S°298 kept exact. A THigh above the library's own is refused (that would
+// extrapolate the reference data).
 func (e *Estimate) NASA7() (nasa.NASA7, nasa.FitReport, error) {
-	if e.Library != "" {
+	if e.Library != "" && e.fit == nil {
 		return e.libPoly, nasa.FitReport{}, nil
 	}
 	f := e.fit
+	if e.Library != "" {
+		f.once.Do(func() { f.poly, f.report, f.err = e.refitLibrary() })
+		return f.poly, f.report, f.err
+	}
 	f.once.Do(func() {
 		f.poly, f.report, f.err = nasa.Fit(e.Hf298, e.S298, benson.StdTemps[:], e.Cp[:], e.cp0, e.cpInf,
 			nasa.FitOptions{TLow: 300, TMid: e.tMid, THigh: e.tHigh})
@@ -130,11 +141,49 @@ func (e *Estimate) NASA7() (nasa.NASA7, nasa.FitReport, error) {
 	return f.poly, f.report, f.err
 }
 
+// refitLibrary fits the library polynomial anew with the requested TMid and
+// THigh (see NASA7).
+func (e *Estimate) refitLibrary() (nasa.NASA7, nasa.FitReport, error) {
+	lib := e.libPoly
+	if e.tHigh > lib.THigh {
+		return nasa.NASA7{}, nasa.FitReport{}, fmt.Errorf("the reference data for %s end at %g K, below the requested THIGH %g K (kiln does not extrapolate them)", e.Library, lib.THigh, e.tHigh)
+	}
+	if e.tMid <= lib.TLow {
+		return nasa.NASA7{}, nasa.FitReport{}, fmt.Errorf("the requested TMID %g K is not above the reference data's lowest temperature %g K", e.tMid, lib.TLow)
+	}
+	var T, cp []float64
+	for t := lib.TLow; t <= e.tHigh+1e-9; t += 10 {
+		T = append(T, t)
+		cp = append(cp, lib.Cp(t))
+	}
+	p, rep, err := nasa.FitPoly(e.Hf298, e.S298, T, cp, nasa.FitOptions{TLow: lib.TLow, TMid: e.tMid, THigh: e.tHigh})
+	if err != nil {
+		return p, rep, fmt.Errorf("refitting the reference data of %s to %g/%g K: %w", e.Library, e.tMid, e.tHigh, err)
+	}
+	return p, rep, nil
+}
+
 // Thermo returns the model the reaction checks use for the estimate: the
 // library polynomial, or the group values integrated (groupThermo).
 func (e *Estimate) Thermo() kinetics.Thermo {
 	if e.Library != "" {
 		return &e.libPoly // a pointer: no copy of the coefficients per call
+	}
+	return e.model
+}
+
+// thermoCurve is a thermo model with heat capacity: Cp (J/(mol K)), H
+// (J/mol), S (J/(mol K)) as functions of T (K).
+type thermoCurve interface {
+	Cp(T float64) float64
+	H(T float64) float64
+	S(T float64) float64
+}
+
+// curve returns the same model as Thermo, with Cp.
+func (e *Estimate) curve() thermoCurve {
+	if e.Library != "" {
+		return &e.libPoly
 	}
 	return e.model
 }

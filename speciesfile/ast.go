@@ -45,8 +45,10 @@ func (s Severity) String() string {
 	return "unknown"
 }
 
-// Stable diagnostic codes. This is the full list; it is a public interface
-// (editors and CI scripts filter on it). FORMAT.md describes each code.
+// Stable diagnostic codes. This is the full list, for the reader and the
+// analysis layer alike; it is a public interface (editors and CI scripts
+// filter on it): codes are only ever added, never renamed. FORMAT.md
+// describes each code.
 const (
 	CodeSyntax              = "syntax"
 	CodeUndeclaredSpecies   = "undeclared-species"
@@ -61,7 +63,17 @@ const (
 	CodeNoRate              = "no-rate"
 	CodeCollisionLimit      = "collision-limit"
 	CodeDuplicateReaction   = "duplicate-reaction"
+	// Extensions of the list in FORMAT.md (reported by the analysis layer).
+	CodeBadInclude       = "bad-include"
+	CodeDuplicateGroup   = "duplicate-group"
+	CodeThermoOutOfRange = "thermo-out-of-range"
 )
+
+// Codes lists every diagnostic code, in FORMAT.md's order: the one list
+// (FORMAT.md's table is checked against it by a test).
+var Codes = []string{CodeSyntax, CodeUndeclaredSpecies, CodeDuplicateSpecies, CodeBadSMILES, CodeUnbalancedReaction,
+	CodeMissingGroup, CodeMissingThermo, CodeThermoDiscontinuity, CodeThermoMismatch, CodeNonphysicalThermo,
+	CodeNoRate, CodeCollisionLimit, CodeDuplicateReaction, CodeBadInclude, CodeDuplicateGroup, CodeThermoOutOfRange}
 
 // Related points at another place (possibly in another file) that explains a
 // diagnostic, e.g. the first declaration of a duplicated species.

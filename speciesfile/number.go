@@ -1,6 +1,9 @@
 package speciesfile
 
-import "strconv"
+import (
+	"fmt"
+	"strconv"
+)
 
 // exactPow10 holds the powers of ten that a float64 represents exactly
 // (10^0 … 10^22; 5^22 < 2^53, so 10^22 = 2^22·5^22 is exact).
@@ -117,4 +120,33 @@ func parseNumber(s string) (n int, v float64, err error) {
 	}
 	v, err = strconv.ParseFloat(s[:n], 64)
 	return n, v, err
+}
+
+// ParsePressure reads a pressure as the format writes one, a number with an
+// attached unit (`0.1atm`, `100kPa`, `2bar`), or a bare number taken in
+// defaultUnit ("" requires a unit), and returns it in Pa. Tools use it for pressures given on
+// their command line, so that the file and the flags read pressures alike.
+func ParsePressure(s, defaultUnit string) (float64, error) {
+	n, v, err := parseNumber(s)
+	if n == 0 {
+		return 0, fmt.Errorf("%q is not a pressure: expected a number with a unit, e.g. 1atm or 100kPa", s)
+	}
+	if err != nil {
+		return 0, fmt.Errorf("pressure %q: number out of range", s)
+	}
+	u := s[n:]
+	if u == "" {
+		u = defaultUnit
+	}
+	if u == "" {
+		return 0, fmt.Errorf("pressure %q needs a unit: %s", s, unitLists[kPressure])
+	}
+	f, ok := pressureUnit(u)
+	if !ok {
+		return 0, fmt.Errorf("pressure %q: unknown unit %q (expected %s)", s, u, unitLists[kPressure])
+	}
+	if !(v > 0) {
+		return 0, fmt.Errorf("pressure %q must be positive", s)
+	}
+	return v * f, nil
 }

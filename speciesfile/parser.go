@@ -15,6 +15,10 @@ const (
 	MaxFileSize  = 64 << 20 // bytes
 	MaxLineSize  = 1 << 20  // bytes, excluding the terminator
 	MaxSideTerms = 64       // terms per reaction side
+	// MaxCoefficient bounds a stoichiometric coefficient. Every per-molecule
+	// computation (balance, collision partners) is linear in the
+	// coefficients, so the bound is also a bound on their work.
+	MaxCoefficient = 1000
 )
 
 // Exact unit constants (FORMAT.md §2).
@@ -373,6 +377,8 @@ func (p *parser) freeText(l srcLine, toks []Token, k int) (Token, bool) {
 
 const keywordList = "species, reaction, units, include, group"
 
+var keywords = []string{"species", "reaction", "units", "include", "group"}
+
 // statement dispatches on the keyword of line l.
 func (p *parser) statement(l srcLine, base StmtBase) Stmt {
 	// keep the keyword line's tokens apart from p.toks, which body lines reuse
@@ -395,7 +401,7 @@ func (p *parser) statement(l srcLine, base StmtBase) Stmt {
 	case "reaction":
 		return p.reaction(toks, base)
 	}
-	p.errAt(toks[0].Span, "unknown keyword %q: expected one of %s", toks[0].Text, keywordList)
+	p.errAt(toks[0].Span, "unknown keyword %q: %sexpected one of %s", toks[0].Text, didYouMean(toks[0].Text, keywords), keywordList)
 	return &BadStmt{base}
 }
 
@@ -663,7 +669,7 @@ func (p *parser) group(toks []Token, base StmtBase) Stmt {
 		lt := p.tokenize(l)
 		st.Attrs = append(st.Attrs, Attr{Key: lt[0], Span: lineSpan(l)})
 		if !p.thermoLine(l, lt, &t) {
-			p.errAt(lt[0].Span, "unknown group attribute %q: expected one of hf298, s298, cp, source", lt[0].Text)
+			p.errAt(lt[0].Span, "unknown group attribute %q: %sexpected one of hf298, s298, cp, source", lt[0].Text, didYouMean(lt[0].Text, []string{"hf298", "s298", "cp", "source"}))
 		}
 	}
 	st.Hf298, st.S298, st.Cp, st.Source = t.hf, t.s, t.cp, t.source
@@ -839,7 +845,7 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 		case "source":
 			p.errAt(key.Span, "\"source\" is only valid inside a nasa7 or thermo-table block")
 		default:
-			p.errAt(key.Span, "unknown species attribute %q: expected one of %s", key.Text, speciesAttrList)
+			p.errAt(key.Span, "unknown species attribute %q: %sexpected one of %s", key.Text, didYouMean(key.Text, strings.Split(speciesAttrList, ", ")), speciesAttrList)
 		}
 	}
 	p.attrBuf = attrs[:0]
@@ -986,6 +992,7 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 		}
 	}
 	eq := toks[1:eqEnd]
+	diagsBefore := len(p.f.Diags)
 	if len(eq) == 0 {
 		p.errAt(endOf(toks[0]), "expected a reaction equation after reaction, e.g. H + O2 <=> O + OH")
 	} else {
@@ -1052,13 +1059,20 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 				p.errAt(endOf(key), "expected text after note")
 			}
 		default:
-			p.errAt(key.Span, "unknown reaction attribute %q: expected one of %s", key.Text, reactionAttrList)
+			p.errAt(key.Span, "unknown reaction attribute %q: %sexpected one of %s", key.Text, didYouMean(key.Text, strings.Split(reactionAttrList, ", ")), reactionAttrList)
 		}
 	}
 	if st.Troe != nil && st.LowPressure == nil {
 		p.errAt(st.Troe.Span, "troe needs a low-pressure line")
 	}
-	if eqEnd == len(toks) && !sawPressure && len(eq) > 0 {
+	eqBroken := false
+	for _, d := range p.f.Diags[diagsBefore:] {
+		if d.Span.Start >= st.Equation.Start && d.Span.Start <= st.Equation.End {
+			eqBroken = true
+		}
+	}
+	if eqEnd == len(toks) && !sawPressure && len(eq) > 0 && !eqBroken {
+		// (An equation with a syntax error gets that error only.)
 		p.f.Diags = append(p.f.Diags, Diagnostic{Span: st.Equation, Severity: SeverityWarning, Code: CodeNoRate,
 			Message: "reaction has no rate parameters (A=, n=, Ea=)"})
 	}
@@ -1091,6 +1105,12 @@ func (p *parser) equation(eq []Token, st *Reaction) (fall Token, isFalloff bool)
 		}
 	}
 	if arrow < 0 {
+		for _, t := range eq {
+			if strings.Contains(t.Text, "=>") {
+				p.errAt(t.Span, "missing arrow: %q holds one; put blanks around the arrow and around each +, e.g. H + O2 <=> O + OH", t.Text)
+				return fall, false
+			}
+		}
 		p.errAt(st.Equation, "missing arrow: expected <=> or => between reactants and products")
 		return fall, false
 	}
@@ -1211,6 +1231,10 @@ func (p *parser) side(toks []Token, arrow Token, which string, terms []Term) (_ 
 				}
 				if !(v > 0) {
 					p.errAt(t.Span, "bad coefficient %q: must be a positive number", t.Text)
+					return terms, m, fall, false
+				}
+				if v > MaxCoefficient {
+					p.errAt(t.Span, "coefficient %q is too large: at most %d", t.Text, MaxCoefficient)
 					return terms, m, fall, false
 				}
 				if i+1 >= len(toks) || toks[i+1].Text == "+" || isFalloffToken(toks[i+1].Text) {

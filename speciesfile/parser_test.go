@@ -470,3 +470,55 @@ func TestTestdata(t *testing.T) {
 		})
 	}
 }
+
+// TestConsistencyReader covers the reader's part of issue 14: a bounded
+// stoichiometric coefficient (case 13), "did you mean" for misspelt
+// keywords and attributes, and a hint when an equation lacks blanks
+// (case 14).
+func TestConsistencyReader(t *testing.T) {
+	cases := []struct{ src, want string }{
+		{"reaction 1e10 H2 => 2e10 H\n", `coefficient "1e10" is too large: at most 1000`},
+		{"reaction 2 H2 => 1001 H\n", `coefficient "1001" is too large`},
+		{"specie H [H]\n", `did you mean "species"?`},
+		{"Species H [H]\n", `did you mean "species"?`},
+		{"raection H => H\n", `did you mean "reaction"?`},
+		{"species H [H]\n  multiplicty 2\n", `did you mean "multiplicity"?`},
+		{"reaction H + H <=> H2\n  duplicat\n", `did you mean "duplicate"?`},
+		{"group C-(C)(H)3\n  hf29 1\n", `did you mean "hf298"?`},
+		{"reaction CH4+OH=>CH3+H2O\n", `put blanks around the arrow and around each +`},
+	}
+	for _, c := range cases {
+		f := Parse("t.kiln", []byte(c.src))
+		var msgs []string
+		for _, d := range f.Diags {
+			msgs = append(msgs, d.Message)
+		}
+		assert.Contains(t, strings.Join(msgs, "\n"), c.want, c.src)
+	}
+	// A coefficient at the bound is accepted.
+	f := Parse("t.kiln", []byte("reaction 1000 H2 => 500 H4\n"))
+	require.Len(t, f.Diags, 1)
+	assert.Equal(t, CodeNoRate, f.Diags[0].Code)
+	// An equation with a syntax error gets that error only, no no-rate.
+	f = Parse("t.kiln", []byte("reaction H + O2 <=>\n"))
+	require.Len(t, f.Diags, 1)
+	assert.Equal(t, CodeSyntax, f.Diags[0].Code)
+	// Nothing is suggested for words far from every keyword.
+	f = Parse("t.kiln", []byte("xyzzy H\n"))
+	assert.NotContains(t, f.Diags[0].Message, "did you mean")
+}
+
+// TestErrorIn: the errors of a block are found by offset, the end
+// included, in a file with many statements.
+func TestErrorIn(t *testing.T) {
+	var b strings.Builder
+	for i := 0; i < 200; i++ {
+		b.WriteString("species A" + strings.Repeat("x", i%7) + " C\n  nasa7 300 1000 3000\n")
+	}
+	f := Parse("t.kiln", []byte(b.String()))
+	require.NotEmpty(t, f.Diags)
+	for _, sp := range f.Species[:5] {
+		assert.True(t, f.ErrorIn(sp.NASA7.Span), "missing low/high lines")
+		assert.False(t, f.ErrorIn(sp.Name.Span))
+	}
+}

@@ -36,6 +36,9 @@ const Placeholder = "?"
 //     diagnostic when there is one);
 //   - "Replace thermo of NAME with estimate": on a thermo-mismatch diagnostic
 //     (or anywhere on the statement of a species that has one);
+//   - "Rename B to A" and "Rename A to B": on a duplicate-species diagnostic
+//     for one structure declared under two names (here or in an included
+//     file), see sameStructureRenames;
 //   - "Declare species NAME": on an undeclared-species diagnostic, inserting
 //     `species NAME ?` after the last species declaration of the file;
 //   - "Fill all missing thermo blocks": every species of the file that the
@@ -50,7 +53,7 @@ func CodeActions(x *Index, file string, span speciesfile.Span) []Action {
 	}
 	var out []Action
 	done := map[*analysis.Species]bool{}
-	for _, o := range x.Occurrences(file) {
+	for _, o := range x.OccurrencesIn(file, span.Start-1, span.End+1) {
 		if o.Kind != KindSpeciesStmt || !overlaps(o.Span) || o.Species == nil || o.Species.Decl != o.SpeciesDecl || done[o.Species] {
 			continue
 		}
@@ -91,6 +94,8 @@ func CodeActions(x *Index, file string, span speciesfile.Span) []Action {
 				out = append(out, Action{Title: "Replace thermo of " + o.Species.Name + " with estimate", Kind: ActionQuickFix,
 					Diagnostics: []speciesfile.Diagnostic{d}, Edits: []analysis.Edit{e}})
 			}
+		case speciesfile.CodeDuplicateSpecies:
+			out = append(out, sameStructureRenames(x, file, d)...)
 		case speciesfile.CodeUndeclaredSpecies:
 			if d.Span.Start < 0 || d.Span.End > len(r.File.Src) || d.Span.End <= d.Span.Start {
 				continue

@@ -6,6 +6,7 @@ import (
 	"strings"
 
 	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/speciesfile"
 )
 
 // Unit conversions (exact): 1 cal = 4.184 J (thermochemical calorie).
@@ -19,7 +20,11 @@ type units struct {
 	kcal bool // kcal/mol and cal/(mol·K); else kJ/mol and J/(mol·K)
 }
 
-func displayUnits(s analysis.Settings) units { return units{kcal: s.DisplayUnits != "kJ/mol"} }
+// displayUnits takes the unit choice from analysis.UnitsFor, the one rule
+// for every output (f: the file the text is about, may be nil).
+func displayUnits(s analysis.Settings, f *speciesfile.File) units {
+	return units{kcal: !analysis.UnitsFor(s, f).KJ}
+}
 
 func (u units) energyName() string {
 	if u.kcal {

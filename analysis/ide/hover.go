@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strconv"
 	"strings"
 
 	"kiln.dev/kiln/analysis"
@@ -32,7 +33,7 @@ func Hover(x *Index, file string, off int, s analysis.Settings, markdown bool) (
 	if !ok {
 		return HoverResult{}, false
 	}
-	w := &writer{md: markdown, u: displayUnits(s)}
+	w := &writer{md: markdown, u: displayUnits(s, x.File(file))}
 	switch o.Kind {
 	case KindSpeciesStmt, KindSpeciesDecl, KindSpeciesUse:
 		if o.Species == nil {
@@ -166,48 +167,25 @@ func estimateValues(e *analysis.Estimate) *thermoValues {
 }
 
 func givenValues(g *analysis.GivenThermo) *thermoValues {
-	switch {
-	case g == nil:
+	if g == nil {
 		return nil
+	}
+	v := &thermoValues{poly: g.Poly}
+	switch {
 	case g.Poly != nil:
-		v := &thermoValues{hf: g.Poly.H(T298), s: g.Poly.S(T298), poly: g.Poly}
-		for i, T := range benson.StdTemps {
-			v.cp[i] = math.NaN()
-			if g.Poly.InRange(T) {
-				v.cp[i] = g.Poly.Cp(T)
-			}
-		}
-		return v
+		v.hf, v.s = g.Poly.H(T298), g.Poly.S(T298)
 	case g.Table != nil:
-		v := &thermoValues{hf: g.Table.Hf298, s: g.Table.S298}
-		for i, T := range benson.StdTemps {
-			v.cp[i] = tableCp(g.Table, T)
-		}
-		return v
+		v.hf, v.s = g.Table.Hf298, g.Table.S298
+	default:
+		return nil
 	}
-	return nil
-}
-
-// tableCp interpolates a thermo table's Cp linearly at T; NaN outside its range.
-func tableCp(t *analysis.Table, T float64) float64 {
-	type pt struct{ t, cp float64 }
-	pts := make([]pt, 0, len(t.T))
-	for i := range t.T {
-		if i < len(t.Cp) {
-			pts = append(pts, pt{t.T[i], t.Cp[i]})
+	for i, T := range benson.StdTemps {
+		v.cp[i] = math.NaN() // outside the block: no value (analysis.GivenThermo.CpAt)
+		if c, ok := g.CpAt(T); ok {
+			v.cp[i] = c
 		}
 	}
-	sort.Slice(pts, func(i, j int) bool { return pts[i].t < pts[j].t })
-	for i := range pts {
-		if pts[i].t == T {
-			return pts[i].cp
-		}
-		if i > 0 && pts[i-1].t < T && T < pts[i].t {
-			f := (T - pts[i-1].t) / (pts[i].t - pts[i-1].t)
-			return pts[i-1].cp + f*(pts[i].cp-pts[i-1].cp)
-		}
-	}
-	return math.NaN()
+	return v
 }
 
 // inUse returns the values the analysis uses for sp and a word saying where
@@ -399,8 +377,22 @@ func (w *writer) reaction(x *Index, r *analysis.Reaction) {
 		}
 		rows = append(rows, []string{"Kp(" + k + " K)", v})
 	}
+	at := ""
+	if r.PressureDependent() {
+		p := x.r.Settings.Pressure
+		if p == 0 {
+			p = 101325
+		}
+		at = " at " + strconv.FormatFloat(p/1e5, 'g', 4, 64) + " bar"
+	}
+	if r.ForwardRate1000 != nil {
+		rows = append(rows, []string{"k_f(1000 K)", sci(*r.ForwardRate1000) + " " + analysis.RateUnits(r.ForwardOrder) + at})
+	}
 	if r.ReverseRate1000 != nil {
-		rows = append(rows, []string{"k_r(1000 K)", sci(*r.ReverseRate1000) + " (cm3, mol, s)"})
+		rows = append(rows, []string{"k_r(1000 K)", sci(*r.ReverseRate1000) + " " + analysis.RateUnits(r.ReverseOrder) + at})
+	}
+	if u, ok := x.Result().ReverseRateUncertainty(r, 1000); ok {
+		rows = append(rows, []string{"k_r uncertainty (1000 K)", reverseFactorText(u, w.u)})
 	}
 	if len(rows) > 0 {
 		w.table([]string{"quantity", "value"}, rows)
@@ -449,4 +441,22 @@ func (w *writer) group(o Occurrence) {
 	default:
 		w.line("Used by: " + strings.Join(o.Group.UsedBy, ", "))
 	}
+}
+
+// reverseFactorText describes the factor a reverse rate inherits from
+// estimated thermochemistry, e.g. "×/÷ 1.50 (σ(ΔG°r) = 0.81 kcal/mol from the
+// estimates of propane, propyl)".
+func reverseFactorText(u analysis.ReverseUncertainty, un units) string {
+	if len(u.Estimated) == 0 {
+		return "×/÷ 1 (no estimated thermo: all from the file or the reference library)"
+	}
+	ge := ""
+	if len(u.Unmeasured) > 0 {
+		ge = "≥ "
+	}
+	s := fmt.Sprintf("%s×/÷ %.2f (σ(ΔG°r) = %s from the estimates of %s", ge, u.Factor, un.energy(u.Sigma), strings.Join(u.Estimated, ", "))
+	if len(u.Unmeasured) > 0 {
+		s += "; no measured error for " + strings.Join(u.Unmeasured, ", ")
+	}
+	return s + ")"
 }

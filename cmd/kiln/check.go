@@ -2,7 +2,6 @@ package main
 
 import (
 	"context"
-	"encoding/json"
 	"fmt"
 	"sort"
 
@@ -95,10 +94,8 @@ func runCheck(e env, args []string) (int, error) {
 		if out == nil {
 			out = []checkDiag{}
 		}
-		enc := json.NewEncoder(e.stdout)
-		enc.SetIndent("", "  ")
-		if err := enc.Encode(out); err != nil {
-			return 0, fmt.Errorf("writing output: %w", err)
+		if err := writeJSON(e.stdout, out); err != nil {
+			return 0, err
 		}
 	} else {
 		for _, d := range out {

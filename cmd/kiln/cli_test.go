@@ -126,16 +126,19 @@ func TestUsageErrors(t *testing.T) {
 }
 
 // TestSummaryJSONContract checks the keys of `kiln summary --json` and that
-// it reports what it can on a file with errors (exit 0).
+// it reports what it can on a file with errors, exiting 1 for them (issue
+// 14, case 8: an unbalanced reaction gets no thermochemistry).
 func TestSummaryJSONContract(t *testing.T) {
 	code, stdout, stderr := runKiln(t, "summary", "--json", "../../testdata/check/broken.kiln")
-	require.Equal(t, exitOK, code, stderr)
+	require.Equal(t, exitProblems, code, stderr)
+	assert.Contains(t, stderr, "error(s)")
 	var s map[string][]map[string]any
 	require.NoError(t, json.Unmarshal([]byte(stdout), &s))
 	require.NotEmpty(t, s["species"])
 	require.NotEmpty(t, s["reactions"])
 	assert.Equal(t, []string{"cp_j_mol_k", "formula", "hf298_kj_mol", "name", "s298_j_mol_k", "smiles", "thermo_source"}, keysOf(s["species"][0]))
-	assert.Equal(t, []string{"balanced", "dg298_kj_mol", "dh298_kj_mol", "ds298_j_mol_k", "equation", "keq", "line", "reverse_rate"}, keysOf(s["reactions"][0]))
+	assert.Equal(t, []string{"balanced", "collision_limit", "dg298_kj_mol", "dh298_kj_mol", "ds298_j_mol_k", "equation", "forward_rate", "forward_rate_units",
+		"keq", "line", "rate_pressure_bar", "reverse_rate", "reverse_rate_factor", "reverse_rate_units"}, keysOf(s["reactions"][0]))
 	sources := map[string]string{}
 	for _, sp := range s["species"] {
 		sources[sp["name"].(string)] = sp["thermo_source"].(string)
@@ -150,6 +153,11 @@ func TestSummaryJSONContract(t *testing.T) {
 	unb := byEq["H + O2 <=> OH"]
 	require.NotNil(t, unb)
 	assert.Equal(t, false, unb["balanced"])
+	assert.Nil(t, unb["dh298_kj_mol"])
+	assert.Nil(t, unb["reverse_rate"])
+	for _, k := range []string{"298", "1000", "1500"} {
+		assert.Nil(t, unb["keq"].(map[string]any)[k])
+	}
 	und := byEq["H + XYZ <=> OH + H2"]
 	require.NotNil(t, und)
 	assert.Nil(t, und["balanced"])

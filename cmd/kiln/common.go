@@ -2,14 +2,15 @@ package main
 
 import (
 	"context"
+	"errors"
 	"fmt"
-	"math"
 	"os"
 	"path/filepath"
 	"strconv"
 	"time"
 
 	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/speciesfile"
 )
 
 // maxFileBytes is the largest file kiln reads (FORMAT.md, limits).
@@ -52,14 +53,19 @@ func workspaceRoot(file string) string {
 	}
 }
 
-// settingsFlags are the flags that adjust analysis settings, in every command.
-var settingsFlags = flagSpec{"units": true, "tmid": true, "thigh": true, "root": true,
-	"mismatch-hf": true, "mismatch-s": true, "collision-factor": true}
+// settingsFlags maps the flags that adjust analysis settings, in every
+// command, to their keys in analysis.SettingsInput (the one validator the
+// language server uses too).
+var settingsFlags = map[string]string{
+	"units": "units", "tmid": "tMid", "thigh": "tHigh",
+	"mismatch-hf": "mismatchHf298", "mismatch-s": "mismatchS298", "mismatch-cp": "mismatchCp",
+	"collision-factor": "collisionFactor", "pressure": "pressure",
+}
 
 func withSettings(spec flagSpec) flagSpec {
-	out := flagSpec{}
-	for k, v := range settingsFlags {
-		out[k] = v
+	out := flagSpec{"root": true}
+	for k := range settingsFlags {
+		out[k] = true
 	}
 	for k, v := range spec {
 		out[k] = v
@@ -71,41 +77,48 @@ func withSettings(spec flagSpec) flagSpec {
 func settingsFrom(e env, flags map[string]string) (analysis.Settings, error) {
 	s := analysis.DefaultSettings()
 	s.Stamp = fmt.Sprintf("kiln %s, %s", Version, e.now())
+	var in analysis.SettingsInput
 	if u, ok := flags["units"]; ok {
-		if u != "kcal/mol" && u != "kJ/mol" {
-			return s, usagef("--units must be kcal/mol or kJ/mol, not %q", u)
-		}
-		s.DisplayUnits = u
+		in.Units = &u
 	}
-	for name, dst := range map[string]*float64{"tmid": &s.TMid, "thigh": &s.THigh} {
-		if v, ok := flags[name]; ok {
-			f, err := strconv.ParseFloat(v, 64)
-			if err != nil || f <= 300 || f > 20000 {
-				return s, usagef("--%s must be a temperature in K above 300, not %q", name, v)
+	num := func(flag string) (*float64, error) {
+		v, ok := flags[flag]
+		if !ok {
+			return nil, nil
+		}
+		f, err := strconv.ParseFloat(v, 64)
+		if err != nil {
+			return nil, usagef("--%s must be a number, not %q", flag, v)
+		}
+		return &f, nil
+	}
+	var err error
+	for flag, dst := range map[string]**float64{"tmid": &in.TMid, "thigh": &in.THigh, "mismatch-hf": &in.MismatchHf298,
+		"mismatch-s": &in.MismatchS298, "mismatch-cp": &in.MismatchCp, "collision-factor": &in.CollisionFactor} {
+		if *dst, err = num(flag); err != nil {
+			return s, err
+		}
+	}
+	if v, ok := flags["pressure"]; ok {
+		pa, err := speciesfile.ParsePressure(v, "") // a unit is required, as in the file and kiln equilibrium
+		if err != nil {
+			return s, usagef("--pressure: %v", err)
+		}
+		in.Pressure = ptr(pa / 1e5)
+	}
+	out, err := in.Apply(s)
+	if err != nil {
+		var se *analysis.SettingError
+		if errors.As(err, &se) {
+			for flag, key := range settingsFlags {
+				if key == se.Key {
+					return s, usagef("--%s: %s", flag, se.Msg)
+				}
 			}
-			*dst = f
 		}
+		return s, usagef("%v", err)
 	}
-	for name, dst := range map[string]struct {
-		v     *float64
-		scale float64
-	}{
-		"mismatch-hf":      {&s.MismatchHf298, 4184}, // kcal/mol → J/mol
-		"mismatch-s":       {&s.MismatchS298, 4.184}, // cal/(mol K) → J/(mol K)
-		"collision-factor": {&s.CollisionFactor, 1},
-	} {
-		if v, ok := flags[name]; ok {
-			f, err := strconv.ParseFloat(v, 64)
-			if err != nil || !(f > 0) || math.IsInf(f, 0) {
-				return s, usagef("--%s must be a positive number, not %q", name, v)
-			}
-			*dst.v = f * dst.scale
-		}
-	}
-	if s.TMid >= s.THigh {
-		return s, usagef("--tmid (%g K) must be below --thigh (%g K)", s.TMid, s.THigh)
-	}
-	return s, nil
+	return out, nil
 }
 
 // newWorkspace returns a workspace for file that reads the disk.

@@ -3,7 +3,6 @@ package main
 import (
 	"bytes"
 	"context"
-	"encoding/json"
 	"fmt"
 	"io"
 	"math"
@@ -40,6 +39,9 @@ type compareFile struct {
 	Species   int    `json:"species"`
 	Reactions int    `json:"reactions"`
 	Errors    int    `json:"errors"`
+	// Unreadable lists species whose SMILES cannot be read: they match
+	// nothing and appear among the species only in their file.
+	Unreadable []string `json:"unreadable_structures"`
 }
 
 type compareThreshold struct {
@@ -75,16 +77,17 @@ type compareValue struct {
 }
 
 // compareThermo compares a matched pair's thermo. When both sides estimate
-// the same structure the same way, same_estimate is true and the values are
-// omitted (they are identical).
+// it from the same SMILES text with the same options, same_estimate is true
+// and the values are omitted (identical on both sides, or missing on both when kiln cannot
+// estimate the structure).
 type compareThermo struct {
-	SourceA      string                  `json:"source_a"`
-	SourceB      string                  `json:"source_b"`
-	SameEstimate bool                    `json:"same_estimate"`
-	Hf298        *compareValue           `json:"hf298_kj_mol,omitempty"`
-	S298         *compareValue           `json:"s298_j_mol_k,omitempty"`
-	Cp           map[string]compareValue `json:"cp_j_mol_k,omitempty"`
-	G            map[string]compareValue `json:"g_kj_mol,omitempty"`
+	SourceA      string                    `json:"source_a"`
+	SourceB      string                    `json:"source_b"`
+	SameEstimate bool                      `json:"same_estimate"`
+	Hf298        *compareValue             `json:"hf298_kj_mol,omitempty"`
+	S298         *compareValue             `json:"s298_j_mol_k,omitempty"`
+	Cp           numericKeys[compareValue] `json:"cp_j_mol_k,omitempty"`
+	G            numericKeys[compareValue] `json:"g_kj_mol,omitempty"`
 }
 
 type compareSpecies struct {
@@ -112,14 +115,14 @@ type compareClash struct {
 }
 
 type compareRxn struct {
-	EquationA string              `json:"equation_a"`
-	LineA     int                 `json:"line_a"`
-	EquationB string              `json:"equation_b"`
-	LineB     int                 `json:"line_b"`
-	Reversed  bool                `json:"reversed"`
-	Ratio     map[string]*float64 `json:"rate_ratio"`
-	Flagged   bool                `json:"flagged"`
-	Note      *string             `json:"note"`
+	EquationA string     `json:"equation_a"`
+	LineA     int        `json:"line_a"`
+	EquationB string     `json:"equation_b"`
+	LineB     int        `json:"line_b"`
+	Reversed  bool       `json:"reversed"`
+	Ratio     numericMap `json:"rate_ratio"`
+	Flagged   bool       `json:"flagged"`
+	Note      *string    `json:"note"`
 }
 
 type compareRxnRef struct {
@@ -181,10 +184,8 @@ func runCompare(e env, args []string) (int, error) {
 		code = exitProblems
 	}
 	if flags["json"] == "true" {
-		enc := json.NewEncoder(e.stdout)
-		enc.SetIndent("", "  ")
-		if err := enc.Encode(out); err != nil {
-			return 0, fmt.Errorf("writing output: %w", err)
+		if err := writeJSON(e.stdout, out); err != nil {
+			return 0, err
 		}
 		return code, nil
 	}
@@ -208,6 +209,13 @@ func commonDir(a, b string) string {
 	}
 }
 
+func nonNil(s []string) []string {
+	if s == nil {
+		return []string{}
+	}
+	return s
+}
+
 func optString(s string) *string {
 	if s == "" {
 		return nil
@@ -217,8 +225,8 @@ func optString(s string) *string {
 
 func buildCompare(c *analysis.Comparison) compareJSON {
 	out := compareJSON{
-		A:          compareFile{displayPath(c.A.Path), c.A.Species, c.A.Reactions, c.A.Errors},
-		B:          compareFile{displayPath(c.B.Path), c.B.Species, c.B.Reactions, c.B.Errors},
+		A:          compareFile{displayPath(c.A.Path), c.A.Species, c.A.Reactions, c.A.Errors, nonNil(c.A.UnreadableStructure)},
+		B:          compareFile{displayPath(c.B.Path), c.B.Species, c.B.Reactions, c.B.Errors, nonNil(c.B.UnreadableStructure)},
 		Thresholds: compareThreshold{c.Settings.MismatchHf298 / 1000, c.Settings.MismatchS298, c.RateFactor},
 		Species:    []compareSpecies{}, Renames: []compareRename{}, Clashes: []compareClash{},
 		OnlyA: []compareRef{}, OnlyB: []compareRef{}, Reactions: []compareRxn{}, RxnOnlyA: []compareRxnRef{}, RxnOnlyB: []compareRxnRef{},
@@ -230,7 +238,7 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 			SMILESB: optString(p.B.SMILES), MatchedBy: p.By, Flags: []string{}}
 		if t := p.Thermo; t != nil {
 			th := &compareThermo{SourceA: string(t.SourceA), SourceB: string(t.SourceB), Hf298: pval(t.Hf298A, t.Hf298B, 1000),
-				S298: pval(t.S298A, t.S298B, 1), Cp: map[string]compareValue{}, G: map[string]compareValue{}}
+				S298: pval(t.S298A, t.S298B, 1), Cp: numericKeys[compareValue]{}, G: numericKeys[compareValue]{}}
 			for k, tt := range analysis.CompareThermoTemps {
 				th.Cp[tt.Key] = val(t.CpA[k], t.CpB[k], 1)
 				th.G[tt.Key] = val(t.GA[k], t.GB[k], 1000)
@@ -263,7 +271,7 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 	}
 	for _, p := range c.Reactions {
 		row := compareRxn{EquationA: p.A.Equation, LineA: p.A.Line, EquationB: p.B.Equation, LineB: p.B.Line, Reversed: p.Reversed,
-			Ratio: map[string]*float64{}, Flagged: p.Flagged(c.RateFactor), Note: optString(p.Note)}
+			Ratio: numericMap{}, Flagged: p.Flagged(c.RateFactor), Note: optString(p.Note)}
 		for k, tt := range analysis.CompareRateTemps {
 			row.Ratio[tt.Key] = p.Ratio[k]
 		}
@@ -344,6 +352,9 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 		if f.Errors > 0 {
 			fmt.Fprintf(w, "note: %s has %d error(s) (`kiln check` lists them); broken statements were left out\n", f.File, f.Errors)
 		}
+		if n := len(f.Unreadable); n > 0 {
+			fmt.Fprintf(w, "note: %s: %d species with an unreadable SMILES match nothing (%s)\n", f.File, n, clip(strings.Join(f.Unreadable, ", "), 50))
+		}
 	}
 	fmt.Fprintf(w, "Species: %d matched by structure (%d under different names), %d only in A, %d only in B, %d name clash(es)\n",
 		s.Matched, s.Renamed, s.OnlyA, s.OnlyB, s.NameClashes)
@@ -378,7 +389,9 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 			if t == nil || t.SameEstimate || (len(p.Flags) > 0) != flaggedPass {
 				continue
 			}
-			if flaggedPass || t.Hf298.Diff != 0 || t.S298.Diff != 0 || t.G["1000"].Diff != 0 || t.Cp["1000"].Diff != 0 {
+			// Differences below 1e-6 (kJ/mol, J/(mol K)) are rounding noise.
+			noise := func(v float64) bool { return math.Abs(v) < 1e-6 }
+			if flaggedPass || !noise(t.Hf298.Diff) || !noise(t.S298.Diff) || !noise(t.G["1000"].Diff) || !noise(t.Cp["1000"].Diff) {
 				differ = append(differ, p)
 			}
 		}

@@ -42,6 +42,7 @@ func TestCompareMechanisms(t *testing.T) {
 	}
 	assert.Equal(t, map[string]string{"hydrogen-atom": "H", "hydroxyl": "OH", "water": "H2O", "ethane": "C2H6", "ethyl": "C2H5"}, renames)
 	assert.Contains(t, o.Renames[0].Suggestion, "rename hydrogen-atom to H in sub.kiln")
+	assert.Equal(t, compareFile{File: o.A.File, Species: 11, Reactions: 4, Errors: 0, Unreadable: []string{}}, o.A)
 
 	names := func(rs []compareRef) []string {
 		var out []string
@@ -68,20 +69,19 @@ func TestCompareMechanisms(t *testing.T) {
 	assert.InDelta(t, 4.2*4.184, eth.Thermo.G["1000"].Diff, 1e-9, "same Cp and S: G differs by ΔHf only")
 	assert.Equal(t, []string{"hf298", "g300", "g1000", "g2000"}, eth.Flags)
 	assert.Equal(t, 1, o.Summary.ThermoFlagged)
-	// Matched species estimated on both sides agree exactly: computed when
-	// spelled differently (C[CH2] / [CH2]C), skipped when spelled alike.
+	// Matched species estimated on both sides: not computed when spelled
+	// alike; computed, and equal, when spelled differently (C[CH2] / [CH2]C).
 	for _, s := range o.Species {
 		if s.A == "ethanol" {
 			continue
 		}
 		assert.Empty(t, s.Flags, s.A)
 		require.NotNil(t, s.Thermo, s.A)
-		if s.A == "C2H5" {
-			require.False(t, s.Thermo.SameEstimate)
+		if *s.SMILESA != *s.SMILESB {
+			require.False(t, s.Thermo.SameEstimate, s.A)
 			assert.Zero(t, s.Thermo.Hf298.Diff, s.A)
 			assert.Zero(t, s.Thermo.G["2000"].Diff, s.A)
 		} else {
-			assert.Equal(t, *s.SMILESA, *s.SMILESB, s.A)
 			assert.True(t, s.Thermo.SameEstimate, s.A)
 			assert.Nil(t, s.Thermo.Hf298, s.A)
 		}
@@ -162,4 +162,20 @@ func TestCompareText(t *testing.T) {
 	code, _, stderr = runKiln(t, "compare", compareA, compareB, "--rate-factor", "0.5")
 	assert.Equal(t, exitUsage, code)
 	assert.Contains(t, stderr, "--rate-factor")
+}
+
+// TestCompareUnreadable: species whose SMILES cannot be read match nothing,
+// are listed per file, and the same unreadable text is not a name clash.
+func TestCompareUnreadable(t *testing.T) {
+	a := writeTemp(t, "a.kiln", "species ok CC\nspecies bad C1CC\n")
+	b := writeTemp(t, "b.kiln", "species ok CC\nspecies bad C1CC\nspecies worse C(C\n")
+	o := compareJSONOf(t, exitOK, a, b)
+	assert.Equal(t, []string{"bad"}, o.A.Unreadable)
+	assert.Equal(t, []string{"bad", "worse"}, o.B.Unreadable)
+	assert.Equal(t, 1, o.Summary.Matched)
+	assert.Empty(t, o.Clashes)
+	assert.Equal(t, 1, o.A.Errors)
+	code, stdout, _ := runKiln(t, "compare", a, b)
+	assert.Equal(t, exitOK, code)
+	assert.Contains(t, stdout, "2 species with an unreadable SMILES match nothing (bad, worse)")
 }

@@ -2,7 +2,6 @@ package main
 
 import (
 	"context"
-	"encoding/json"
 	"errors"
 	"fmt"
 	"io"
@@ -94,10 +93,8 @@ func runEquilibrium(e env, args []string) (int, error) {
 		fmt.Fprintf(e.stderr, "kiln equilibrium: %s has %d error(s) (`kiln check` lists them); broken statements were left out\n", out.File, n)
 	}
 	if flags["json"] == "true" {
-		enc := json.NewEncoder(e.stdout)
-		enc.SetIndent("", "  ")
-		if err := enc.Encode(out); err != nil {
-			return 0, fmt.Errorf("writing output: %w", err)
+		if err := writeJSON(e.stdout, out); err != nil {
+			return 0, err
 		}
 		return exitOK, nil
 	}
@@ -303,7 +300,8 @@ func writeEquilibriumText(w io.Writer, o equilibriumJSON) {
 	fmt.Fprintf(w, "Equilibrium of %s, %s\n", o.File, mode)
 	fmt.Fprintf(w, "initial  T = %.2f K  P = %s\n", o.InitialTemperature, pressureText(o.InitialPressure))
 	fmt.Fprintf(w, "final    T = %.2f K  P = %s\n", o.Temperature, pressureText(o.Pressure))
-	fmt.Fprintf(w, "mean molar mass %.3f g/mol, %.6g mol for the amounts given\n\n", o.MeanMolarMass, o.TotalMoles)
+	fmt.Fprintf(w, "mean molar mass %.3f g/mol, %.6g mol for the amounts given\n", o.MeanMolarMass, o.TotalMoles)
+	fmt.Fprintf(w, "(ideal gas over the file's neutral species only: no condensed phases such as soot)\n\n")
 	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
 	fmt.Fprintf(tw, "species\tmole fraction\tmol\n")
 	hidden := 0

@@ -122,6 +122,32 @@ func TestEquilibriumWaterDissociation(t *testing.T) {
 	assert.InEpsilon(t, lo, got, 0.02)
 }
 
+// TestEquilibriumThermoRange: a species that matters at the answer but
+// whose thermo does not reach that temperature is flagged with its range;
+// fixed T and V gives the pressure from the amounts.
+func TestEquilibriumThermoRange(t *testing.T) {
+	f := writeTemp(t, "r.kiln", `species H2O O
+  nasa7 300 1000 1500
+    low  4.198640560e+00 -2.036434100e-03  6.520402110e-06 -5.487970620e-09  1.771978170e-12 -3.029372670e+04 -8.490322080e-01
+    high 4.198640560e+00 -2.036434100e-03  6.520402110e-06 -5.487970620e-09  1.771978170e-12 -3.029372670e+04 -8.490322080e-01
+    source test block: the low-range water coefficients reused for both ranges, valid to 1500 K only
+species H2 [H][H]
+species O2 O=O
+`)
+	o := equilibriumJSONOf(t, f, "--mix", "H2O:1", "--temperature", "2500", "--pressure", "1bar", "--volume")
+	out := o["outside_thermo_range"].([]any)
+	require.Len(t, out, 1)
+	assert.Equal(t, "H2O", out[0].(map[string]any)["name"])
+	assert.Contains(t, out[0].(map[string]any)["reason"], "valid 300–1500 K, used at 2500 K")
+	assert.Equal(t, true, o["constant_volume"])
+	assert.Equal(t, 2500.0, o["temperature_k"])
+	// Fixed volume of 1 mol at 2500 K and 1 bar: P = n R T / V.
+	assert.InEpsilon(t, o["total_mol"].(float64)*1e5, o["pressure_pa"].(float64), 1e-9)
+	code, stdout, _ := runKiln(t, "equilibrium", f, "--mix", "H2O:1", "--temperature", "2500")
+	require.Equal(t, exitOK, code)
+	assert.Contains(t, stdout, "warning: H2O: the file's nasa7 block is valid 300–1500 K, used at 2500 K")
+}
+
 func TestEquilibriumErrors(t *testing.T) {
 	f := writeTemp(t, "air.kiln", airFile)
 	for _, c := range []struct {

@@ -1,13 +1,11 @@
 package main
 
 import (
-	"encoding/json"
 	"fmt"
 	"io"
 	"os"
 	"strconv"
 	"strings"
-	"text/tabwriter"
 	"unicode/utf8"
 
 	"kiln.dev/kiln/analysis"
@@ -19,20 +17,20 @@ import (
 // estimateJSON is one element of `kiln estimate --json`; the keys are a
 // public contract (SI units in the names).
 type estimateJSON struct {
-	Input          string             `json:"input"`
-	Formula        *string            `json:"formula"`
-	MolarMass      *float64           `json:"molar_mass_g_mol"`
-	Hf298          *float64           `json:"hf298_kj_mol"`
-	S298           *float64           `json:"s298_j_mol_k"`
-	Cp             map[string]float64 `json:"cp_j_mol_k"`
-	Groups         []groupJSON        `json:"groups"`
-	Corrections    []correctionJSON   `json:"corrections"`
-	SymmetryNumber *int               `json:"symmetry_number"`
-	OpticalIsomers *int               `json:"optical_isomers"`
-	MissingGroups  []string           `json:"missing_groups"`
-	Uncertainty    *float64           `json:"uncertainty_hf298_kj_mol"`
-	Error          *errorJSON         `json:"error"`
-	NASA7          *nasaJSON          `json:"nasa7,omitempty"`
+	Input          string           `json:"input"`
+	Formula        *string          `json:"formula"`
+	MolarMass      *float64         `json:"molar_mass_g_mol"`
+	Hf298          *float64         `json:"hf298_kj_mol"`
+	S298           *float64         `json:"s298_j_mol_k"`
+	Cp             numericMap       `json:"cp_j_mol_k"`
+	Groups         []groupJSON      `json:"groups"`
+	Corrections    []correctionJSON `json:"corrections"`
+	SymmetryNumber *int             `json:"symmetry_number"`
+	OpticalIsomers *int             `json:"optical_isomers"`
+	MissingGroups  []string         `json:"missing_groups"`
+	Uncertainty    *float64         `json:"uncertainty_hf298_kj_mol"`
+	Error          *errorJSON       `json:"error"`
+	NASA7          *nasaJSON        `json:"nasa7,omitempty"`
 }
 
 type groupJSON struct {
@@ -68,7 +66,7 @@ type nasaJSON struct {
 }
 
 func runEstimate(e env, args []string) (int, error) {
-	flags, inputs, err := parseArgs(args, withSettings(flagSpec{"json": false, "nasa": false, "multiplicity": true, "symmetry": true, "optical-isomers": true}))
+	flags, inputs, err := parseArgs(args, withSettings(flagSpec{"json": false, "nasa": false, "sources": false, "multiplicity": true, "symmetry": true, "optical-isomers": true}))
 	if err != nil {
 		return 0, err
 	}
@@ -79,7 +77,7 @@ func runEstimate(e env, args []string) (int, error) {
 	if err != nil {
 		return 0, err
 	}
-	opts := analysis.EstimateOptions{TMid: set.TMid, THigh: set.THigh}
+	opts := analysis.EstimateOptions{TMid: set.TMid, THigh: set.THigh, ExplicitRange: set.ExplicitFitRange}
 	for name, dst := range map[string]*int{"multiplicity": &opts.Multiplicity, "symmetry": &opts.Symmetry, "optical-isomers": &opts.OpticalIsomers} {
 		if v, ok := flags[name]; ok {
 			n, err := strconv.Atoi(v)
@@ -106,13 +104,11 @@ func runEstimate(e env, args []string) (int, error) {
 		if i > 0 {
 			fmt.Fprintln(e.stdout)
 		}
-		writeEstimateText(e.stdout, r, est, set, withNASA)
+		writeEstimateText(e.stdout, r, est, analysis.UnitsFor(set, nil), withNASA, flags["sources"] == "true")
 	}
 	if flags["json"] == "true" {
-		enc := json.NewEncoder(e.stdout)
-		enc.SetIndent("", "  ")
-		if err := enc.Encode(results); err != nil {
-			return 0, fmt.Errorf("writing output: %w", err)
+		if err := writeJSON(e.stdout, results); err != nil {
+			return 0, err
 		}
 	}
 	if failed {
@@ -137,25 +133,25 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		return r, nil
 	}
 	r.Formula = ptr(m.Formula())
-	r.MolarMass = ptr(m.MolarMass())
+	r.MolarMass = ptr(jnum(m.MolarMass()))
 	est, err := ws.EstimateMolecule(m, opts)
 	if err != nil {
 		r.Error = &errorJSON{Message: err.Error()}
 		return r, nil
 	}
-	r.Hf298 = ptr(est.Hf298 / 1000)
-	r.S298 = ptr(est.S298)
-	r.Cp = map[string]float64{}
+	r.Hf298 = ptr(jnum(est.Hf298 / 1000))
+	r.S298 = ptr(jnum(est.S298))
+	r.Cp = numericMap{}
 	for i, k := range analysis.StdTempKeys {
-		r.Cp[k] = est.Cp[i]
+		r.Cp[k] = ptr(est.Cp[i])
 	}
-	r.Uncertainty = ptr(est.Uncertainty / 1000)
+	r.Uncertainty = ptr(jnum(est.Uncertainty / 1000))
 	if g := est.Group; g != nil {
 		for _, t := range g.Groups {
-			r.Groups = append(r.Groups, groupJSON{Name: t.Name, Count: t.Count, Hf298: t.Hf298 / 1000, S298: t.S298, Source: t.Source})
+			r.Groups = append(r.Groups, groupJSON{Name: t.Name, Count: t.Count, Hf298: jnum(t.Hf298 / 1000), S298: jnum(t.S298), Source: t.Source})
 		}
 		for _, t := range g.Corrections {
-			r.Corrections = append(r.Corrections, correctionJSON{Name: t.Name, Count: t.Count, Hf298: t.Hf298 / 1000, S298: t.S298})
+			r.Corrections = append(r.Corrections, correctionJSON{Name: t.Name, Count: t.Count, Hf298: jnum(t.Hf298 / 1000), S298: jnum(t.S298)})
 		}
 		for _, ms := range g.Missing {
 			r.MissingGroups = append(r.MissingGroups, ms.Group)
@@ -165,21 +161,24 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 	} else {
 		// A reference-library species: the whole value is one reference term,
 		// so that the breakdown still sums to the totals.
-		r.Groups = append(r.Groups, groupJSON{Name: "reference: " + est.Library, Count: 1, Hf298: est.Hf298 / 1000, S298: est.S298, Source: est.LibrarySource})
+		r.Groups = append(r.Groups, groupJSON{Name: "reference: " + est.Library, Count: 1, Hf298: jnum(est.Hf298 / 1000), S298: jnum(est.S298), Source: est.LibrarySource})
 	}
 	if withNASA {
 		p, fit, err := est.NASA7()
 		if err != nil {
 			r.Error = &errorJSON{Message: "NASA-7 fit failed: " + err.Error()}
 		} else {
-			r.NASA7 = &nasaJSON{TLow: p.TLow, TMid: p.TMid, THigh: p.THigh, Low: p.Low, High: p.High, MaxCpResidual: fit.MaxCpResidual}
+			r.NASA7 = &nasaJSON{TLow: p.TLow, TMid: p.TMid, THigh: p.THigh, Low: p.Low, High: p.High, MaxCpResidual: jnum(fit.MaxCpResidual)}
 		}
 	}
 	return r, est
 }
 
-// writeEstimateText prints the readable breakdown of one estimate.
-func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, set analysis.Settings, withNASA bool) {
+// writeEstimateText prints the readable breakdown of one estimate in the
+// display units u (the other unit in parentheses for the totals). Group
+// sources are listed with --sources, one line per group, so that the table
+// stays narrow; --json always has them.
+func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u analysis.Units, withNASA, withSources bool) {
 	fmt.Fprintf(w, "%s\n", r.Input)
 	if r.Error != nil {
 		if r.Error.Position != nil {
@@ -190,36 +189,48 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, set 
 		}
 		return
 	}
+	other := analysis.Units{KJ: !u.KJ}
+	f2 := func(v float64) string { return strconv.FormatFloat(v, 'f', 2, 64) }
 	fmt.Fprintf(w, "  formula %s, molar mass %.3f g/mol\n", *r.Formula, *r.MolarMass)
-	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
-	const kcal = 4184.0
 	if g := est.Group; g != nil {
-		fmt.Fprintln(tw, "  group\tcount\tΔHf°298 kcal/mol\tS°298 cal/(mol·K)\tsource\t")
+		var rows [][]string
 		for _, t := range g.Groups {
-			fmt.Fprintf(tw, "  %s\t%d\t%.2f\t%.2f\t%s\t\n", t.Name, t.Count, t.Hf298/kcal, t.S298/4.184, t.Source)
+			rows = append(rows, []string{t.Name, strconv.Itoa(t.Count), f2(u.EnergyValue(t.Hf298)), f2(u.EntropyValue(t.S298))})
 		}
 		for _, t := range g.Corrections {
-			fmt.Fprintf(tw, "  %s\t%d\t%.2f\t%.2f\t(correction)\t\n", t.Name, t.Count, t.Hf298/kcal, t.S298/4.184)
+			rows = append(rows, []string{t.Name + " (correction)", strconv.Itoa(t.Count), f2(u.EnergyValue(t.Hf298)), f2(u.EntropyValue(t.S298))})
 		}
-		tw.Flush()
+		writeTable(w, "  ", []string{"group", "count", "ΔHf°298 " + u.EnergyName(), "S°298 " + u.EntropyName()}, rows)
 		fmt.Fprintf(w, "  symmetry number σ = %d, optical isomers n = %d, multiplicity %d\n", g.SymmetryNumber, g.OpticalIsomers, g.Multiplicity)
 		for _, ms := range g.Missing {
 			fmt.Fprintf(w, "  MISSING group %s: approximated by %s (%s)\n", ms.Group, ms.Approximation, ms.Note)
 		}
+		if withSources {
+			fmt.Fprintln(w, "  sources:")
+			for _, t := range g.Groups {
+				writeWrapped(w, "    ", t.Name+": "+t.Source)
+			}
+		} else {
+			fmt.Fprintln(w, "  (group sources: --sources or --json)")
+		}
 	} else {
-		fmt.Fprintf(w, "  reference library: %s (%s)\n", est.Library, est.LibrarySource)
+		fmt.Fprintf(w, "  reference library: %s\n", est.Library)
+		if withSources {
+			writeWrapped(w, "    ", "source: "+est.LibrarySource)
+		} else {
+			fmt.Fprintln(w, "  (source: --sources or --json)")
+		}
 	}
-	fmt.Fprintf(w, "  ΔHf°298 = %.2f kcal/mol = %.1f kJ/mol (± %.1f kcal/mol, class MAE)\n", est.Hf298/kcal, est.Hf298/1000, est.Uncertainty/kcal)
-	fmt.Fprintf(w, "  S°298   = %.2f cal/(mol·K) = %.2f J/(mol·K)\n", est.S298/4.184, est.S298)
-	fmt.Fprintf(w, "  Cp      ")
+	fmt.Fprintf(w, "  ΔHf°298 = %s (%s), ± %s, 1σ: class error widened by each approximation\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.Uncertainty))
+	fmt.Fprintf(w, "  S°298   = %s (%s)\n", u.Entropy(est.S298), other.Entropy(est.S298))
+	fmt.Fprintf(w, "  Cp in %s:", u.EntropyName())
 	for i, T := range benson.StdTemps {
-		fmt.Fprintf(w, " %gK:%.2f", T, est.Cp[i]/4.184)
+		fmt.Fprintf(w, " %gK %s", T, f2(u.EntropyValue(est.Cp[i])))
 	}
-	fmt.Fprintf(w, "  cal/(mol·K)\n")
+	fmt.Fprintln(w)
 	if p, fit, err := est.NASA7(); withNASA && err == nil {
-		fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %.3f J/(mol·K)):\n", fit.MaxCpResidual)
+		fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %s):\n", u.Entropy(fit.MaxCpResidual))
 		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, "kiln "+Version+" estimate", "\n"))
 	}
 	fmt.Fprintln(w, "  Group additivity typically errs by 1–3 kcal/mol; check against measured data before relying on it.")
-	_ = set
 }

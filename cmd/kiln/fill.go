@@ -24,10 +24,22 @@ func runFill(e env, args []string) (int, error) {
 		return 0, err
 	}
 	abs := res.Path
-	edits := res.FillEdits()
+	edits, skips := res.FillPlan()
+	// Every species left without thermo is listed with its reason, and makes
+	// the exit code 1 (documented in kiln help).
+	code := exitOK
+	for _, sk := range skips {
+		pos := res.File.Lines.Position(sk.Species.Loc.Span.Start)
+		fmt.Fprintf(e.stderr, "%s:%d:%d: skipped %s: %s\n", displayPath(abs), pos.Line+1, pos.Char+1, sk.Species.Name, sk.Reason)
+		code = exitProblems
+	}
 	if len(edits) == 0 {
-		fmt.Fprintf(e.stderr, "kiln fill: %s: every species that kiln can estimate already has thermo\n", files[0])
-		return exitOK, nil
+		if len(skips) == 0 {
+			fmt.Fprintf(e.stderr, "kiln fill: %s: every species already has thermo\n", files[0])
+		} else {
+			fmt.Fprintf(e.stderr, "kiln fill: %s: nothing inserted, %d species skipped\n", files[0], len(skips))
+		}
+		return code, nil
 	}
 	src := res.File.Src
 	out, err := analysis.ApplyEdits(src, edits)
@@ -37,13 +49,17 @@ func runFill(e env, args []string) (int, error) {
 	if flags["dry-run"] == "true" {
 		name := filepath.ToSlash(displayPath(abs))
 		writeUnifiedDiff(e.stdout, name, src, edits)
-		return exitOK, nil
+		return code, nil
 	}
 	if err := writeAtomic(abs, out); err != nil {
 		return 0, err
 	}
-	fmt.Fprintf(e.stderr, "kiln fill: %s: inserted %d thermo block(s)\n", files[0], len(edits))
-	return exitOK, nil
+	msg := fmt.Sprintf("inserted %d thermo block(s)", len(edits))
+	if len(skips) > 0 {
+		msg += fmt.Sprintf(", skipped %d species (listed above)", len(skips))
+	}
+	fmt.Fprintf(e.stderr, "kiln fill: %s: %s\n", files[0], msg)
+	return code, nil
 }
 
 // writeAtomic replaces path by data: it writes a temporary file in the same

@@ -3,8 +3,8 @@
 // Protocol.
 //
 //	kiln check FILE... [--format text|json]
-//	kiln estimate SMILES... [--json] [--nasa]
-//	kiln summary FILE [--json]
+//	kiln estimate SMILES... [--json] [--nasa] [--sources]
+//	kiln summary FILE [--json] [--pressure P]
 //	kiln fill FILE [--dry-run]
 //	kiln plot SPECIES --file FILE -o OUT.svg
 //	kiln compare A.kiln B.kiln [--json] [--all] [--rate-factor F]
@@ -87,6 +87,10 @@ func run(e env, args []string) int {
 	default:
 		err = usagef("unknown command %q", cmd)
 	}
+	if errors.Is(err, errHelp) {
+		fmt.Fprint(e.stdout, commandHelp(cmd))
+		return exitOK
+	}
 	if err != nil {
 		var u usageError
 		if errors.As(err, &u) {
@@ -107,17 +111,29 @@ Usage:
         goes to stderr). --min-severity warning hides the information lines
         that say which species kiln estimates.
         Exit 0 without errors, 1 with errors, 2 on usage or I/O problems.
-  kiln estimate SMILES... [--json] [--nasa] [--multiplicity N] [--symmetry N] [--optical-isomers N]
+  kiln estimate SMILES... [--json] [--nasa] [--sources] [--multiplicity N] [--symmetry N]
+                [--optical-isomers N]
         Estimate ΔHf°298, S°298 and Cp(T) by group additivity, with the breakdown.
-        --nasa adds a fitted NASA 7-coefficient polynomial. JSON errors give the
-        1-based character position in the SMILES.
-  kiln summary FILE [--json] [--units kcal/mol|kJ/mol]
-        Tabulate species thermo and reaction thermochemistry (ΔH°r, ΔG°r, Kp, k_r).
+        --nasa adds a fitted NASA 7-coefficient polynomial; --sources lists the
+        source of each group (--json always has them). JSON errors give the
+        1-based character position in the SMILES. Exit 1 if any input fails.
+  kiln summary FILE [--json] [--pressure P] [--uncertain]
+        Tabulate species thermo, reaction thermochemistry (ΔH°r, ΔG°r, Kp) and
+        k_f, k_r at 1000 K with their units. --pressure sets where falloff and
+        pressure-table rates are taken (with a unit: 10bar, 0.1atm, 50kPa;
+        default 1atm). Values that need a reaction to
+        balance are left out when it does not. Exit 1 when the file has errors.
+        The k_r ×/÷ column is the factor exp(σ(ΔG°r)/RT) that k_r(1000 K)
+        inherits from estimated thermo; --uncertain lists the largest first.
   kiln fill FILE [--dry-run] [--tmid K] [--thigh K]
         Insert an estimated nasa7 block under every species that lacks thermo.
-        --dry-run prints a unified diff instead of writing the file.
+        --tmid/--thigh apply to every block, reference-library species included
+        (refitted; a THIGH beyond the reference data is refused). Species that
+        get no block are listed on stderr with the reason, and the exit code is
+        then 1. --dry-run prints a unified diff instead of writing the file.
   kiln plot SPECIES --file FILE -o OUT.svg
-        Draw Cp/R, H/RT and S/R against T: estimate, fit and the file's own block.
+        Draw Cp/R, H/RT and S/R against T: estimate, fit and the file's own block
+        (drawn only over the block's temperature range).
   kiln compare A.kiln B.kiln [--json] [--all] [--rate-factor F]
         Match species by structure and multiplicity (not by name) and report
         species only in A or B, one structure under two names (with a rename
@@ -140,14 +156,18 @@ Usage:
   kiln serve [--log FILE]
         Run the language server on stdin/stdout.
   kiln version
-  kiln help
+  kiln help          (or --help / -h after any command)
 
 Common flags (every command; flags may stand before or after the operands):
-  --units kcal/mol|kJ/mol   energies in messages and tables (default kcal/mol)
-  --tmid K --thigh K        NASA-7 fit temperatures (default 1000 and 5000 K)
-  --mismatch-hf X           thermo-mismatch threshold on ΔHf°298, kcal/mol (default 3)
+  --units kcal/mol|kJ/mol   energies in messages and tables (default: the file's unit)
+  --tmid K --thigh K        NASA-7 fit temperatures (default 1000 and 5000 K; 300 < tmid
+                            < thigh ≤ 6000)
+  --mismatch-hf X           thermo-mismatch threshold on ΔHf°298 and H(T)−H(298 K),
+                            kcal/mol (default 3)
   --mismatch-s X            thermo-mismatch threshold on S°298, cal/(mol·K) (default 3)
+  --mismatch-cp X           thermo-mismatch threshold on Cp(T), cal/(mol·K) (default 1.5)
   --collision-factor F      multiply the collision limit by F (default 1)
+  --pressure P              pressure for displayed rates (see summary)
   --root DIR                workspace root that includes must stay in (default: the
                             nearest directory above the file holding .git, else
                             the file's directory)
@@ -156,6 +176,40 @@ Estimates are group-additivity estimates: they typically err by 1–3 kcal/mol.
 Check them against measured data, licensed engineering practice and local
 codes before relying on a result.
 `
+
+// errHelp is returned by parseArgs for --help (or -h) anywhere on a
+// command line: the command's help is printed and kiln exits 0.
+var errHelp = errors.New("help requested")
+
+// commandHelp returns the part of helpText about cmd (its usage lines) and
+// the common flags.
+func commandHelp(cmd string) string {
+	lines := strings.Split(helpText, "\n")
+	var b strings.Builder
+	in := false
+	for _, l := range lines {
+		switch {
+		case strings.HasPrefix(l, "  kiln "):
+			in = strings.HasPrefix(l, "  kiln "+cmd+" ") || l == "  kiln "+cmd
+		case strings.HasPrefix(l, "Common flags"):
+			in = cmd != "serve"
+			if in {
+				b.WriteString("\n")
+			}
+		case l == "" || !strings.HasPrefix(l, " "):
+			if !strings.HasPrefix(l, "Common flags") {
+				in = in && strings.HasPrefix(l, " ")
+			}
+		}
+		if in {
+			b.WriteString(l + "\n")
+		}
+	}
+	if b.Len() == 0 {
+		return helpText
+	}
+	return "Usage:\n" + b.String()
+}
 
 // flagSpec describes the flags a command accepts: name → takes a value.
 type flagSpec map[string]bool
@@ -176,6 +230,9 @@ func parseArgs(args []string, spec flagSpec) (flags map[string]string, operands 
 			continue
 		}
 		name := strings.TrimLeft(a, "-")
+		if name == "help" || name == "h" {
+			return nil, nil, errHelp
+		}
 		value, hasValue := "", false
 		if k := strings.IndexByte(name, '='); k >= 0 {
 			name, value, hasValue = name[:k], name[k+1:], true

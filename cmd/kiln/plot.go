@@ -6,6 +6,7 @@ import (
 	"math"
 
 	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/nasa"
 	"kiln.dev/kiln/internal/thermoplot"
 )
 
@@ -57,9 +58,8 @@ func runPlot(e env, args []string) (int, error) {
 		)
 	}
 	if g := sp.Given; g != nil && g.Poly != nil {
-		p := *g.Poly
-		series = append(series, thermoplot.Series{Name: "file block", Eval: func(T float64) (float64, float64, float64) { return p.Cp(T), p.H(T), p.S(T) }})
-		tMax = max(tMax, p.THigh)
+		series = append(series, blockSeries(*g.Poly))
+		tMax = max(tMax, g.Poly.THigh)
 	}
 	if g := sp.Given; g != nil && g.Table != nil && len(g.Table.T) > 0 {
 		th := sp.Thermo()
@@ -85,6 +85,18 @@ func runPlot(e env, args []string) (int, error) {
 		return 0, err
 	}
 	return exitOK, nil
+}
+
+// blockSeries draws a file's polynomial over its own range only: no value
+// (a gap in the line) outside [TLow, THigh], so the plot shows where the
+// block ends; the legend gives the range.
+func blockSeries(p nasa.NASA7) thermoplot.Series {
+	return thermoplot.Series{Name: fmt.Sprintf("file block (%g–%g K)", p.TLow, p.THigh), Eval: func(T float64) (float64, float64, float64) {
+		if !p.InRange(T) {
+			return math.NaN(), math.NaN(), math.NaN()
+		}
+		return p.Cp(T), p.H(T), p.S(T)
+	}}
 }
 
 // writeNew writes data to path atomically, creating it if needed.

@@ -49,9 +49,14 @@ func runServe(e env, args []string) (int, error) {
 }
 
 // newLogger logs to the file at path, or to stderr when path is empty —
-// never to stdout, which carries the protocol.
+// never to stdout, which carries the protocol. Editors show whatever a
+// server writes on stderr as errors, so stderr gets warnings and errors
+// only (everything with --verbose); a log file also gets information.
 func newLogger(e env, path string, verbose bool) (*zap.Logger, func(), error) {
-	level := zapcore.InfoLevel
+	level := zapcore.WarnLevel
+	if path != "" {
+		level = zapcore.InfoLevel
+	}
 	if verbose {
 		level = zapcore.DebugLevel
 	}

@@ -43,6 +43,10 @@ func TestServeExits(t *testing.T) {
 			}
 			assert.Equal(t, want, code, "shutdown=%v stderr=%s", shutdown, errb.String())
 			require.Contains(t, out.String(), `"capabilities"`, "initialize was answered on stdout")
+			if shutdown {
+				// Editors show stderr as errors: a clean session writes nothing there.
+				assert.Empty(t, errb.String(), "stderr of a clean session")
+			}
 		case <-time.After(10 * time.Second):
 			t.Fatalf("serve did not exit (shutdown=%v)", shutdown)
 		}

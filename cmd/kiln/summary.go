@@ -1,72 +1,101 @@
 package main
 
 import (
-	"encoding/json"
 	"fmt"
 	"io"
-	"text/tabwriter"
+	"sort"
+	"strconv"
 
 	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/speciesfile"
 )
 
 // summaryJSON is the output of `kiln summary --json`; the keys are a public
-// contract. Values that cannot be computed are null.
+// contract (SI units in the names; later keys are extensions). Values that
+// cannot be computed are null.
 type summaryJSON struct {
 	Species   []summarySpecies  `json:"species"`
 	Reactions []summaryReaction `json:"reactions"`
 }
 
 type summarySpecies struct {
-	Name         string             `json:"name"`
-	SMILES       *string            `json:"smiles"`
-	Formula      *string            `json:"formula"`
-	ThermoSource string             `json:"thermo_source"`
-	Hf298        *float64           `json:"hf298_kj_mol"`
-	S298         *float64           `json:"s298_j_mol_k"`
-	Cp           map[string]float64 `json:"cp_j_mol_k"`
+	Name         string     `json:"name"`
+	SMILES       *string    `json:"smiles"`
+	Formula      *string    `json:"formula"`
+	ThermoSource string     `json:"thermo_source"`
+	Hf298        *float64   `json:"hf298_kj_mol"`
+	S298         *float64   `json:"s298_j_mol_k"`
+	Cp           numericMap `json:"cp_j_mol_k"` // null where the block does not reach
 }
 
 type summaryReaction struct {
-	Line        int                 `json:"line"`
-	Equation    string              `json:"equation"`
-	Balanced    *bool               `json:"balanced"`
-	DH298       *float64            `json:"dh298_kj_mol"`
-	DS298       *float64            `json:"ds298_j_mol_k"`
-	DG298       *float64            `json:"dg298_kj_mol"`
-	Keq         map[string]*float64 `json:"keq"`
-	ReverseRate map[string]*float64 `json:"reverse_rate"`
+	Line        int        `json:"line"`
+	Equation    string     `json:"equation"`
+	Balanced    *bool      `json:"balanced"`
+	DH298       *float64   `json:"dh298_kj_mol"`
+	DS298       *float64   `json:"ds298_j_mol_k"`
+	DG298       *float64   `json:"dg298_kj_mol"`
+	Keq         numericMap `json:"keq"`
+	ReverseRate numericMap `json:"reverse_rate"`
+	// Extensions: k_f at 1000 K, the pressure both rates are taken at
+	// (bar), and the units of each rate.
+	ForwardRate        numericMap `json:"forward_rate"`
+	RatePressure       float64    `json:"rate_pressure_bar"`
+	ForwardRateUnits   string     `json:"forward_rate_units"`
+	ReverseRateUnits   string     `json:"reverse_rate_units"`
+	CollisionViolation *string    `json:"collision_limit"`
+	// ReverseFactor is the factor k_r inherits from estimated thermo,
+	// exp(σ(ΔG°r)/RT) at 1000 K (null when k_r does not come from thermo).
+	ReverseFactor numericMap `json:"reverse_rate_factor"`
 }
 
 func runSummary(e env, args []string) (int, error) {
-	flags, files, err := parseArgs(args, withSettings(flagSpec{"json": false}))
+	flags, files, err := parseArgs(args, withSettings(flagSpec{"json": false, "uncertain": false}))
 	if err != nil {
 		return 0, err
 	}
 	if len(files) != 1 {
 		return 0, usagef("summary needs exactly one FILE")
 	}
-	res, set, err := analyzeFile(e, files[0], flags)
+	res, _, err := analyzeFile(e, files[0], flags)
 	if err != nil {
 		return 0, err
 	}
 	s := buildSummary(res)
-	if flags["json"] == "true" {
-		enc := json.NewEncoder(e.stdout)
-		enc.SetIndent("", "  ")
-		if err := enc.Encode(s); err != nil {
-			return 0, fmt.Errorf("writing output: %w", err)
-		}
-		return exitOK, nil
+	if flags["uncertain"] == "true" {
+		sortByReverseFactor(s.Reactions)
 	}
-	writeSummaryText(e.stdout, s, set)
+	if flags["json"] == "true" {
+		if err := writeJSON(e.stdout, s); err != nil {
+			return 0, err
+		}
+	} else {
+		writeSummaryText(e.stdout, s, res.Units())
+	}
+	// Values of a file with errors are incomplete: say so in the exit code,
+	// as check does.
+	if n := countErrors(res.Diagnostics); n > 0 {
+		fmt.Fprintf(e.stderr, "kiln summary: %s has %d error(s); values that depend on them are missing (run kiln check)\n", files[0], n)
+		return exitProblems, nil
+	}
 	return exitOK, nil
+}
+
+func countErrors(ds []speciesfile.Diagnostic) int {
+	n := 0
+	for _, d := range ds {
+		if d.Severity == speciesfile.SeverityError {
+			n++
+		}
+	}
+	return n
 }
 
 func kilo(p *float64) *float64 {
 	if p == nil {
 		return nil
 	}
-	return ptr(*p / 1000)
+	return ptr(jnum(*p / 1000))
 }
 
 func buildSummary(res *analysis.Result) summaryJSON {
@@ -80,75 +109,139 @@ func buildSummary(res *analysis.Result) summaryJSON {
 			row.Formula = ptr(sp.Formula)
 		}
 		if hf, s298, ok := sp.Hf298S298(); ok {
-			row.Hf298, row.S298 = ptr(hf/1000), ptr(s298)
+			row.Hf298, row.S298 = kilo(&hf), ptr(jnum(s298))
 		}
-		if cp, ok := sp.CpAt(); ok {
-			row.Cp = map[string]float64{}
+		if sp.Source != analysis.SourceNone {
+			cp, ok := sp.CpAt()
+			row.Cp = numericMap{}
 			for i, k := range analysis.StdTempKeys {
-				row.Cp[k] = cp[i]
+				row.Cp[k] = nil
+				if ok[i] {
+					row.Cp[k] = ptr(cp[i])
+				}
 			}
 		}
 		s.Species = append(s.Species, row)
 	}
+	P := res.Settings.Pressure
+	if P == 0 {
+		P = 101325
+	}
 	for _, r := range res.Reactions {
-		row := summaryReaction{Line: r.Line, Equation: r.Equation, DH298: kilo(r.DH298), DS298: r.DS298, DG298: kilo(r.DG298), Keq: r.Kp}
+		row := summaryReaction{Line: r.Line, Equation: r.Equation, DH298: kilo(r.DH298), DS298: jptr(r.DS298), DG298: kilo(r.DG298),
+			Keq: numericMap(r.Kp), RatePressure: jnum(P / 1e5)}
 		if r.Balance != nil {
 			row.Balanced = ptr(r.Balance.Balanced)
 		}
+		if r.ForwardRate1000 != nil {
+			row.ForwardRate = numericMap{"1000": r.ForwardRate1000}
+			row.ForwardRateUnits = analysis.RateUnits(r.ForwardOrder)
+		}
 		if r.ReverseRate1000 != nil {
-			row.ReverseRate = map[string]*float64{"1000": r.ReverseRate1000}
+			row.ReverseRate = numericMap{"1000": r.ReverseRate1000}
+			row.ReverseRateUnits = analysis.RateUnits(r.ReverseOrder)
+		}
+		if v := r.Collision; v != nil {
+			row.CollisionViolation = ptr(v.Message())
+		}
+		if u, ok := res.ReverseRateUncertainty(r, 1000); ok {
+			row.ReverseFactor = numericMap{"1000": ptr(u.Factor)}
 		}
 		s.Reactions = append(s.Reactions, row)
 	}
 	return s
 }
 
-func writeSummaryText(w io.Writer, s summaryJSON, set analysis.Settings) {
-	eu, su, ef, sf := "kcal/mol", "cal/(mol·K)", 4.184, 4.184
-	if set.DisplayUnits == "kJ/mol" {
-		eu, su, ef, sf = "kJ/mol", "J/(mol·K)", 1, 1
+// sciText writes a value with 3 significant digits ("—" for none).
+func sciText(p *float64) string {
+	if p == nil {
+		return "—"
 	}
-	num := func(p *float64, f float64, prec int) string {
+	return strconv.FormatFloat(*p, 'g', 3, 64)
+}
+
+// writeSummaryText prints three tables (species; reaction thermochemistry;
+// rates), each under 120 columns and without trailing blanks. Energies are
+// in the display units; long equations are shortened (--json has them
+// whole).
+func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
+	fixed := func(p *float64, conv func(float64) float64) string {
 		if p == nil {
 			return "—"
 		}
-		return fmt.Sprintf("%.*f", prec, *p/f)
+		return strconv.FormatFloat(conv(*p), 'f', 2, 64)
 	}
-	sci := func(p *float64) string {
-		if p == nil {
-			return "—"
-		}
-		return fmt.Sprintf("%.3g", *p)
+	energy := func(kj *float64) string {
+		return fixed(kj, func(v float64) float64 { return u.EnergyValue(v * 1000) })
 	}
-	fmt.Fprintf(w, "Species (%d)\n", len(s.Species))
-	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
-	fmt.Fprintf(tw, "name\tformula\tthermo\tΔHf°298 %s\tS°298 %s\tCp300 %s\n", eu, su, su)
+	entropy := func(p *float64) string { return fixed(p, u.EntropyValue) }
+	fmt.Fprintf(w, "Species (%d); ΔHf°298 in %s, S°298 and Cp in %s\n", len(s.Species), u.EnergyName(), u.EntropyName())
+	var rows [][]string
 	for _, sp := range s.Species {
 		formula := "—"
 		if sp.Formula != nil {
 			formula = *sp.Formula
 		}
-		var cp *float64
-		if v, ok := sp.Cp["300"]; ok {
-			cp = ptr(v)
-		}
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", sp.Name, formula, sp.ThermoSource, num(sp.Hf298, ef, 2), num(sp.S298, sf, 2), num(cp, sf, 2))
+		rows = append(rows, []string{shorten(sp.Name, 24), formula, sp.ThermoSource, energy(sp.Hf298), entropy(sp.S298),
+			entropy(sp.Cp["300"]), entropy(sp.Cp["1000"]), entropy(sp.Cp["1500"])})
 	}
-	tw.Flush()
-	fmt.Fprintf(w, "\nReactions (%d)\n", len(s.Reactions))
-	tw = tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
-	fmt.Fprintf(tw, "line\tequation\tbalanced\tΔH°r %s\tΔG°r %s\tKp(298)\tKp(1000)\tKp(1500)\tk_r(1000 K)\n", eu, eu)
+	writeTable(w, "", []string{"name", "formula", "thermo", "ΔHf°298", "S°298", "Cp(300)", "Cp(1000)", "Cp(1500)"}, rows)
+
+	fmt.Fprintf(w, "\nReactions (%d); ΔH°r and ΔG°r at 298 K in %s, Kp at 1 bar\n", len(s.Reactions), u.EnergyName())
+	rows = rows[:0]
 	for _, r := range s.Reactions {
 		bal := "—"
 		if r.Balanced != nil {
 			bal = map[bool]string{true: "yes", false: "NO"}[*r.Balanced]
 		}
-		var kr *float64
-		if r.ReverseRate != nil {
-			kr = r.ReverseRate["1000"]
-		}
-		fmt.Fprintf(tw, "%d\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", r.Line, r.Equation, bal, num(r.DH298, ef, 2), num(r.DG298, ef, 2),
-			sci(r.Keq["298"]), sci(r.Keq["1000"]), sci(r.Keq["1500"]), sci(kr))
+		rows = append(rows, []string{strconv.Itoa(r.Line), shorten(r.Equation, 44), bal, energy(r.DH298), energy(r.DG298),
+			sciText(r.Keq["298"]), sciText(r.Keq["1000"]), sciText(r.Keq["1500"])})
 	}
-	tw.Flush()
+	writeTable(w, "", []string{"line", "equation", "balanced", "ΔH°r", "ΔG°r", "Kp(298)", "Kp(1000)", "Kp(1500)"}, rows)
+
+	P := 1.01325
+	if len(s.Reactions) > 0 {
+		P = s.Reactions[0].RatePressure
+	}
+	fmt.Fprintf(w, "\nRates at 1000 K and %s bar (cm, mol, s units; k_r from k_f/Kc unless given)\n", strconv.FormatFloat(P, 'g', 6, 64))
+	rows = rows[:0]
+	for _, r := range s.Reactions {
+		kf, kr := sciText(r.ForwardRate["1000"]), sciText(r.ReverseRate["1000"])
+		if r.ForwardRateUnits != "" {
+			kf += " " + r.ForwardRateUnits
+		}
+		if r.ReverseRateUnits != "" {
+			kr += " " + r.ReverseRateUnits
+		}
+		limit := ""
+		if r.CollisionViolation != nil {
+			limit = "above collision limit"
+		}
+		factor := ""
+		if f := reverseFactor(r); f != nil {
+			factor = strconv.FormatFloat(*f, 'f', 2, 64)
+		}
+		rows = append(rows, []string{strconv.Itoa(r.Line), shorten(r.Equation, 44), kf, kr, factor, limit})
+	}
+	writeTable(w, "", []string{"line", "equation", "k_f", "k_r", "k_r ×/÷", "check"}, rows)
+}
+
+// reverseFactor is a reaction's k_r factor at 1000 K, nil when none.
+func reverseFactor(r summaryReaction) *float64 {
+	if r.ReverseFactor == nil {
+		return nil
+	}
+	return r.ReverseFactor["1000"]
+}
+
+// sortByReverseFactor puts the reactions whose reverse rates rest on the
+// weakest thermo first (largest factor; reactions without one last).
+func sortByReverseFactor(rs []summaryReaction) {
+	sort.SliceStable(rs, func(i, j int) bool {
+		a, b := reverseFactor(rs[i]), reverseFactor(rs[j])
+		if a == nil || b == nil {
+			return a != nil && b == nil
+		}
+		return *a > *b
+	})
 }

@@ -16,7 +16,11 @@
 ;;   This is done with `syntax-propertize-function'.
 ;; - Indentation: attribute lines by `kiln-attribute-indent' (2), the lines
 ;;   of a nasa7 or thermo-table block by `kiln-block-indent' (4).
-;; - If eglot is loaded, `kiln serve' is registered as the language server.
+;; - Typing a keyword as the first word of a line re-indents it, so a
+;;   statement typed under an indented line goes back to column 0.
+;; - If eglot is loaded, `kiln serve' is registered as the language server
+;;   (kiln-eglot.el), and the estimates the server offers as inlay hints are
+;;   shown at line ends, also on eglot versions without inlay hints.
 ;;
 ;; Usage:
 ;;   (add-to-list 'load-path "/path/to/kiln/editors/emacs")
@@ -248,6 +252,25 @@ comment-only line in column 0 is left there."
         (when (> offset 0)
           (move-to-column (+ col offset)))))))
 
+(defconst kiln--reindent-keywords
+  (append kiln-statement-keywords kiln-attribute-keywords)
+  "Keywords that re-indent their line when typed as its first word.")
+
+(defun kiln--electric-indent-p (char)
+  "Non-nil if the CHAR just typed should re-indent the current line.
+That is a blank ending a keyword that is the first word of its line,
+so that a statement typed under an indented line moves to column 0.
+For `electric-indent-functions'."
+  (and (memq char '(?\s ?\t))
+       (save-excursion
+         (skip-chars-backward " \t")
+         (let ((end (point)))
+           (back-to-indentation)
+           (and (< (point) end)
+                (member (buffer-substring-no-properties (point) end)
+                        kiln--reindent-keywords)
+                t)))))
+
 ;;;; Mode
 
 (defvar kiln-imenu-generic-expression
@@ -272,16 +295,18 @@ comment-only line in column 0 is left there."
   (setq-local indent-tabs-mode nil)
   (setq-local tab-width 8)
   (setq-local electric-indent-chars '(?\n))
+  (add-hook 'electric-indent-functions #'kiln--electric-indent-p nil t)
   (setq-local imenu-generic-expression kiln-imenu-generic-expression))
 
 ;;;###autoload
 (add-to-list 'auto-mode-alist '("\\.kiln\\'" . kiln-mode))
 
 
-;; Language server: `kiln serve' over stdio.
-(defvar eglot-server-programs)
-(with-eval-after-load 'eglot
-  (add-to-list 'eglot-server-programs '(kiln-mode . ("kiln" "serve"))))
 
 (provide 'kiln-mode)
+
+;; Language server: `kiln serve' over stdio, through eglot (kiln-eglot.el:
+;; inlay hints on eglot versions without them).
+(with-eval-after-load 'eglot
+  (require 'kiln-eglot nil t))
 ;;; kiln-mode.el ends here

@@ -22,10 +22,12 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 	switch centre {
 	case "Cd", "CO":
 		skip = g.partner(i, 2)
-	case "Ct":
+	case "Ct", "CN":
 		skip = g.partner(i, 3)
-	case "Ca":
-		return "Ca", counts, true
+	case "CS":
+		skip = g.partnerElement(i, 2, "S")
+	case "Ca", "Ck":
+		return centre, counts, true
 	}
 	for k, j := range g.nbr[i] {
 		if j == skip {
@@ -146,11 +148,6 @@ func addGroups(g *graph, l lookup, est *Result) error {
 		return nil
 	}
 	for i := range g.m.Atoms {
-		if g.typ[i] == "Ca" && g.doubleToO(i) {
-			// A cumulated carbon carrying =O (ketene, C=C=O) has no group
-			// value: say so rather than the generic terminal-atom refusal.
-			return unsupported(g, i, "is a ketene-type carbon (C=C=O), which has no group value")
-		}
 		for _, b := range g.nbrBond[i] {
 			if o := g.m.Bonds[b].Order; o > 3 && !g.m.Bonds[b].Aromatic {
 				return unsupported(g, i, fmt.Sprintf("has a bond of order %d, which no group describes", o))
@@ -187,7 +184,7 @@ func addGroups(g *graph, l lookup, est *Result) error {
 				continue
 			}
 			o := g.order(g.nbrBond[i][kk])
-			if o == 1 || (o == 2 && impliedPartner[centre] == g.m.Atoms[j].Element) {
+			if o == 1 || (o >= 2 && impliedPartner[centre] == g.m.Atoms[j].Element) {
 				if err := claim(j, k); err != nil {
 					return err
 				}
@@ -300,5 +297,5 @@ type MissingGroupError struct {
 }
 
 func (e *MissingGroupError) Error() string {
-	return fmt.Sprintf("benson: no value and no approximation for group %s (add it with a user group)", e.Group)
+	return fmt.Sprintf("benson: no value and no approximation for group %s: supply it with a `group %s` statement (hf298, s298, cp at 300…1500 K, source) or give the species a thermo block", e.Group, e.Group)
 }

@@ -16,11 +16,23 @@
 // J/mol for ΔHf°, J/(mol K) for S° and Cp°. Tables are in kcal and cal and are
 // converted with 1 cal = 4.184 J.
 //
-// Scope: neutral C/H/O species (N, S and halogens appear only as neighbour
-// types when a user group supplies them). The small non-additive species (H2,
-// O2, H2O, CO …) belong to a reference library, not to this package. The
-// method is valid for ideal-gas molecules at 298.15 K and Cp from 300 K to
-// 1500 K; values outside that range need a polynomial fit elsewhere.
+// Scope and refusals: every heavy atom must be the centre of exactly one
+// group of the loaded tables (built-in plus user groups) or a terminal atom
+// that its neighbour's group names (the =O of CO, a halogen ligand); the
+// supported elements and environments are exactly the centres and ligands
+// the loaded tables hold, so new group files extend the scope with no code
+// change (groups.tsv for C/H/O, groups_nsx.tsv for N, S, F, Cl and Br; see
+// hetero.go). Anything else — an element or environment without groups, a
+// molecule too small to have groups, a charged atom, a multiplicity other
+// than the one the structure implies — is refused with an *UnsupportedError
+// (or a *MissingGroupError naming a group the user could supply); no atom is
+// ever left out of the sum. Groups with a stand-in, ring systems without a
+// correction (rings.go, ringsys.go) and radical sites without increments
+// are reported in Result.Missing and widen Result.Uncertainty. The small
+// non-additive species (H2, O2, H2O, CO …) belong to a reference library,
+// not to this package. The method is valid for ideal-gas molecules at
+// 298.15 K and Cp from 300 K to 1500 K; values outside that range need a
+// polynomial fit elsewhere.
 package benson
 
 import (
@@ -114,10 +126,13 @@ type Result struct {
 	Uncertainty float64
 }
 
-// Estimate estimates the thermochemistry of m. It fails only for structures
-// outside the method's scope (charged atoms, a group that has neither a table
-// value nor an approximation); missing groups with an approximation are
-// reported in Result.Missing, never dropped.
+// Estimate estimates the thermochemistry of m. It fails for structures
+// outside the method's scope (see the package comment: *UnsupportedError,
+// or *MissingGroupError for a group with neither a table value nor an
+// approximation); missing groups with an approximation are reported in
+// Result.Missing, never dropped. The result depends on the graph only, not
+// on how m was spelled, except through SymmetryNumber and OpticalIsomers,
+// which the molecule package computes.
 func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	if m == nil || len(m.Atoms) == 0 {
 		return nil, fmt.Errorf("benson: empty molecule")
@@ -168,6 +183,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	addRingCorrections(g, tab, est)
 	addInteractions(g, tab, est)
+	addHalogenFlags(g, tab, est)
 	if unpaired > 0 {
 		if err := addHBI(m, g, tab, est); err != nil {
 			return nil, err

@@ -430,18 +430,6 @@ func TestLostModes(t *testing.T) {
 	assert.InDelta(t, 2*tm.Cp[3], two.Cp[3], 1e-12)
 }
 
-// A ketene carbon has no group: the estimate fails with a reason instead of
-// leaving its oxygen out of the sum.
-func TestKeteneIsNotEstimated(t *testing.T) {
-	for _, smi := range []string{"C=C=O", "CC=C=O"} {
-		m, err := molecule.ParseSMILES(smi)
-		require.NoError(t, err)
-		_, err = Estimate(m, Options{})
-		require.Error(t, err, smi)
-		assert.Contains(t, err.Error(), "ketene")
-	}
-}
-
 // The vinoxy radical (O on a vinyl carbon) takes the resonance-stabilised
 // phenoxy increment, not the alkoxy one, and says so.
 func TestVinoxySite(t *testing.T) {

@@ -10,8 +10,8 @@ import (
 )
 
 // FuzzEstimate: every structure the SMILES reader accepts is either
-// estimated or refused with an error — never a panic — and an estimate's
-// breakdown sums to its totals.
+// estimated or refused with an error — never a panic — an estimate accounts
+// for every heavy atom exactly once, and its breakdown sums to its totals.
 func FuzzEstimate(f *testing.F) {
 	if fh, err := os.Open("../../testdata/smiles/molecules.txt"); err == nil {
 		sc := bufio.NewScanner(fh)
@@ -33,6 +33,19 @@ func FuzzEstimate(f *testing.F) {
 		e, err := Estimate(m, Options{})
 		if err != nil {
 			return
+		}
+		seen := map[int]bool{}
+		for _, g := range e.Groups {
+			for _, a := range g.Atoms {
+				if seen[a] {
+					t.Fatalf("%s: atom %d in two groups", smi, a+1)
+				}
+				seen[a] = true
+			}
+		}
+		heavy := len(m.Atoms) // every graph atom (explicit isotopic H included)
+		if len(seen) != heavy {
+			t.Fatalf("%s: groups account for %d of %d heavy atoms", smi, len(seen), heavy)
 		}
 		h, s := 0.0, 0.0
 		for _, ts := range [][]Term{e.Groups, e.Corrections} {

@@ -96,7 +96,8 @@ func (g *graph) bondBetween(a, c int) int {
 
 // atomType is the Benson type of atom i: C (sp3 carbon), Cd (alkene), Ct
 // (alkyne), Ca (allene centre), CO (carbonyl), Cb (benzenoid aromatic), Cbf
-// (aromatic carbon shared by two benzenoid rings), or the element symbol.
+// (aromatic carbon shared by two benzenoid rings), CN (nitrile carbon) and Ck
+// (ketene carbon, see hetero.go), or the element symbol.
 func (g *graph) atomType(i int) string {
 	a := g.m.Atoms[i]
 	if a.Element != "C" {
@@ -107,6 +108,9 @@ func (g *graph) atomType(i int) string {
 	}
 	if g.benzAtom[i] == 1 {
 		return "Cb"
+	}
+	if t, ok := g.heteroCarbonType(i); ok {
+		return t
 	}
 	doubles, triples, toO := 0, 0, false
 	for k, b := range g.nbrBond[i] {

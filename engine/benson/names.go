@@ -11,7 +11,7 @@ import (
 // (so "C-(H)3(C)" normalises to "C-(C)(H)3", "C-(H)2(C)(O)" to "C-(O)(C)(H)2").
 var ligandRank = map[string]int{
 	"O": 0, "N": 1, "S": 2, "F": 3, "Cl": 4, "Br": 5, "I": 6,
-	"CO": 7, "Cbf": 8, "Cb": 9, "Ct": 10, "Cd": 11, "Ca": 12, "C": 13, "H": 14,
+	"CO": 7, "CN": 8, "CS": 9, "Cbf": 10, "Cb": 11, "Ct": 12, "Cd": 13, "Ca": 14, "C": 15, "H": 16,
 }
 
 // centreLigands is the number of written neighbours of each group centre:
@@ -20,15 +20,16 @@ var ligandRank = map[string]int{
 // ring neighbours).
 var centreLigands = map[string]int{
 	"C": 4, "Cd": 2, "Ct": 1, "Cb": 1, "Cbf": 3, "Ca": 0, "CO": 2, "O": 2, "S": 2, "N": 3,
+	"CN": 1, "Ck": 0, "CS": 2, // nitrile, ketene and thiocarbonyl carbons (hetero.go)
 }
 
 // impliedPartner names, per centre type, the element of a terminal
 // double-bonded partner that the centre type itself stands for: the =O of a
 // carbonyl group CO-(C)(H). A terminal atom joined by a double bond to any
-// other centre (the S of C=S, the O of a ketene C=C=O) is named by no group
-// and the estimate is refused. This is the one place where a new centre
+// other centre is named by no group and the estimate is refused. The ≡N of
+// a nitrile carbon CN is the one triple-bonded implied partner. This is the one place where a new centre
 // type (say a thiocarbonyl) declares the terminal atom it carries.
-var impliedPartner = map[string]string{"CO": "O"}
+var impliedPartner = map[string]string{"CO": "O", "Ck": "O", "CS": "S", "CN": "N"} // Ck, CS, CN: hetero.go
 
 // ParseGroupName validates a group name in Benson notation, centre-(ligand)n…,
 // and returns it normalised: ligands merged and sorted (see ligandRank), counts
@@ -87,7 +88,7 @@ func ParseGroupName(s string) (string, error) {
 }
 
 // ligCounts counts neighbours by type, indexed by ligandRank.
-type ligCounts [15]int
+type ligCounts [17]int
 
 // groupName writes a normalised group name from a centre and neighbour counts.
 func groupName(centre string, counts ligCounts) string {
@@ -114,4 +115,4 @@ func groupName(centre string, counts ligCounts) string {
 }
 
 // ligandOrder lists the neighbour types by ligandRank.
-var ligandOrder = []string{"O", "N", "S", "F", "Cl", "Br", "I", "CO", "Cbf", "Cb", "Ct", "Cd", "Ca", "C", "H"}
+var ligandOrder = []string{"O", "N", "S", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Ct", "Cd", "Ca", "C", "H"}

@@ -66,6 +66,9 @@ func siteOf(g *graph, i int) (site, missing string, err error) {
 				return "alpha-alkoxy", "", nil
 			}
 		}
+		if site, miss, ok := heteroSite(g, i); ok {
+			return site, miss, nil
+		}
 		alkyl := "primary"
 		switch {
 		case carbons == 2:
@@ -98,6 +101,9 @@ func siteOf(g *graph, i int) (site, missing string, err error) {
 			}
 		}
 		return "alkoxy", "", nil
+	}
+	if site, miss, ok := heteroSite(g, i); ok {
+		return site, miss, nil
 	}
 	return "", "", fmt.Errorf("benson: radical site on %s is outside the HBI table", g.m.Atoms[i].Element)
 }
@@ -233,6 +239,14 @@ func siteChanges(m *molecule.Molecule, g *graph) (Term, bool) {
 			th := secondRadiation * lostOH[2]
 			x := th / 298.15
 			t.S298 += R*(x/math.Expm1(x)-math.Log(-math.Expm1(-x))) - ohRotorS*calorie
+			continue
+		}
+		if dS, dCp, ok := heteroSiteChange(g, i, site); ok {
+			n++
+			t.S298 += dS
+			for c := range t.Cp {
+				t.Cp[c] += dCp[c]
+			}
 			continue
 		}
 		if a.Element != "C" || g.typ[i] != "C" {

@@ -45,6 +45,9 @@ const hfH = 52.10 * calorie * 1000
 var builtin = sync.OnceValue(func() *tables {
 	t := &tables{groups: map[string]GroupValue{}, corrections: map[string]GroupValue{}, hbi: map[string]hbiValue{}, centres: map[string]bool{}}
 	groups := mustParse("groups.tsv", groupsTSV)
+	for _, x := range extraGroupTables {
+		groups = append(groups, mustParse(x.file, x.text)...)
+	}
 	for i := range groups {
 		name, err := ParseGroupName(groups[i].Name)
 		if err != nil {
@@ -58,7 +61,6 @@ var builtin = sync.OnceValue(func() *tables {
 		}
 		t.groups[r.Name] = r
 		t.order = append(t.order, r.Name)
-		t.centres[centreOf(r.Name)] = true
 	}
 	for _, v := range mustFill("corrections.tsv", mustParse("corrections.tsv", correctionsTSV)) {
 		t.corrections[v.Name] = v
@@ -68,7 +70,7 @@ var builtin = sync.OnceValue(func() *tables {
 		panic(fmt.Sprintf("benson: systems.tsv: %v", err))
 	}
 	t.systems = sys
-	for _, r := range mustParse("hbi.tsv", hbiTSV) {
+	for _, r := range append(mustParse("hbi.tsv", hbiTSV), mustParse("hbi_nsx.tsv", hbiNSXTSV)...) {
 		// Column 2 holds D(R–H); the ΔHf increment is D − ΔHf(H).
 		v := r.GroupValue
 		bde := v.Hf298
@@ -79,6 +81,11 @@ var builtin = sync.OnceValue(func() *tables {
 			v.Cp = [7]float64{}
 		}
 		t.hbi[v.Name] = hbiValue{site: v.Name, bde: bde, hasSCp: has, value: v}
+	}
+	// The supported centres are read off the finished group table, so any
+	// group file loaded above (or added later) extends them.
+	for name := range t.groups {
+		t.centres[centreOf(name)] = true
 	}
 	return t
 })

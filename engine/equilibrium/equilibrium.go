@@ -165,7 +165,6 @@ type Result struct {
 	// H and U are the enthalpy and internal energy of the mixture (J, for
 	// the feed amounts, formation scale); S its entropy (J/K) and G = H − T S.
 	H, U, S, G float64
-	// MolarMass is not computed here (the caller knows the masses).
 	// ElementPotentials are π_i = λ_i/(R T) by element symbol.
 	ElementPotentials map[string]float64
 	// Iterations counts the Newton steps of the last composition solve;
@@ -562,26 +561,49 @@ func (sub *subsystem) adiabatic(ctx context.Context, energy func(*state) float64
 		}
 		return st, energy(st) - target, nil
 	}
-	// The equilibrium energy rises with T; start from the feed temperature
-	// and step up (combustion) or down until the sign changes.
-	lo, hi := TMin, TMax
-	sLo, fLo, err := solve(lo, nil)
+	// The equilibrium energy rises with T: start from the feed temperature
+	// and step up (combustion) or down by 500 K until the sign changes, so
+	// that the thermo is evaluated far from the answer only when needed.
+	const step = 500.0
+	T0 := p.T
+	st0, f0, err := solve(T0, nil)
 	if err != nil {
 		return nil, err
 	}
-	if fLo > 0 {
-		return nil, fmt.Errorf("equilibrium: the adiabatic temperature is below %g K", TMin)
+	if f0 == 0 {
+		sub.outer = 0
+		return st0, nil
 	}
-	_, fHi, err := solve(hi, nil)
-	if err != nil {
-		return nil, err
-	}
-	if fHi < 0 {
-		return nil, fmt.Errorf("equilibrium: the adiabatic temperature is above %g K (the mixture releases more energy than %g K of products can hold)", TMax, TMax)
+	lo, hi := T0, T0
+	fLo, fHi := f0, f0
+	warm := st0
+	for fLo > 0 || fHi < 0 {
+		if fHi < 0 { // too cold: raise the upper end
+			if hi >= TMax {
+				return nil, fmt.Errorf("equilibrium: the adiabatic temperature is above %g K (the mixture releases more energy than %g K of products can hold)", TMax, TMax)
+			}
+			lo, fLo = hi, fHi
+			hi = math.Min(hi+step, TMax)
+			st, f, err := solve(hi, warm)
+			if err != nil {
+				return nil, err
+			}
+			fHi, warm = f, st
+		} else { // too hot: lower the lower end
+			if lo <= TMin {
+				return nil, fmt.Errorf("equilibrium: the adiabatic temperature is below %g K", TMin)
+			}
+			hi, fHi = lo, fLo
+			lo = math.Max(lo-step, TMin)
+			st, f, err := solve(lo, warm)
+			if err != nil {
+				return nil, err
+			}
+			fLo, warm = f, st
+		}
 	}
 	scale := math.Max(math.Abs(target), R*1000) // J per mole of feed
 	side := 0
-	warm := sLo
 	for it := 1; it <= maxOuter; it++ {
 		T := (lo*fHi - hi*fLo) / (fHi - fLo)
 		if !(T > lo && T < hi) {

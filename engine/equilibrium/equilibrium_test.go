@@ -128,6 +128,19 @@ func TestMethaneAirFlame(t *testing.T) {
 	assert.InDelta(t, 2330, rc.T, 20)
 }
 
+// TestHydrogenFlames: stoichiometric hydrogen burns at ≈ 2380 K in air and
+// ≈ 3080 K in oxygen at 1 atm from 298.15 K (common practice, from memory;
+// ±20 K for the spread of data sets and of the quoted values).
+func TestHydrogenFlames(t *testing.T) {
+	sys, err := NewSystem(librarySpecies(t, "H2", "O2", "N2", "H2O", "OH", "H", "O", "HO2", "H2O2", "NO"))
+	require.NoError(t, err)
+	air := solve(t, sys, Problem{Feed: feedOf(t, sys, map[string]float64{"H2": 2, "O2": 1, "N2": 3.76}), T: 298.15, P: atm, Adiabatic: true})
+	oxy := solve(t, sys, Problem{Feed: feedOf(t, sys, map[string]float64{"H2": 2, "O2": 1}), T: 298.15, P: atm, Adiabatic: true})
+	t.Logf("H2–air %.1f K, H2–O2 %.1f K", air.T, oxy.T)
+	assert.InDelta(t, 2380, air.T, 20)
+	assert.InDelta(t, 3080, oxy.T, 20)
+}
+
 // TestMethaneAirConstantVolume: the same mixture burnt in a closed vessel
 // reaches ≈ 2590 K (common practice, from memory; ±25 K for the spread of
 // data sets) and conserves internal energy; the pressure follows the ideal
@@ -320,6 +333,34 @@ func TestErrors(t *testing.T) {
 	cancel()
 	_, err = sys.Solve(cancelled, Problem{Feed: []float64{1, 0}, T: 1000, P: atm, Adiabatic: true})
 	assert.Error(t, err)
+}
+
+// flat is a test thermo with constant H and S (Cp = 0).
+type flat struct{ h, s float64 }
+
+func (f flat) H(float64) float64 { return f.h }
+func (f flat) S(float64) float64 { return f.s }
+
+// TestAdiabaticOutOfRange: products that hold no heat (Cp = 0) cannot
+// absorb the energy released, so no temperature up to TMax balances it;
+// the search stops with a clear error instead of running on.
+func TestAdiabaticOutOfRange(t *testing.T) {
+	sys, err := NewSystem([]Species{
+		{Name: "X", Composition: map[string]int{"C": 1}, Thermo: flat{0, 100}},
+		{Name: "Y", Composition: map[string]int{"C": 1}, Thermo: flat{-1e6, 100}},
+	})
+	require.NoError(t, err)
+	_, err = sys.Solve(context.Background(), Problem{Feed: []float64{1, 0}, T: 300, P: atm, Adiabatic: true})
+	assert.ErrorContains(t, err, "above 6000 K")
+	// Trace amounts far below the float64 range of a mole fraction's
+	// neighbours are still exact: x_X/x_Y = exp(−(G_X − G_Y)/RT) = e^−377.
+	sys2, err := NewSystem([]Species{
+		{Name: "X", Composition: map[string]int{"C": 1}, Thermo: flat{1e6, 300}},
+		{Name: "Y", Composition: map[string]int{"C": 1}, Thermo: flat{0, 100}},
+	})
+	require.NoError(t, err)
+	r := solve(t, sys2, Problem{Feed: []float64{0, 1}, T: 300, P: atm})
+	assert.InDelta(t, -((1e6-300*300)-(0-300*100))/(R*300), math.Log(r.MoleFractions[0]), 1e-6)
 }
 
 // TestExcludedSpecies: species holding an element the feed lacks take no

@@ -44,6 +44,20 @@ type Violation struct {
 	Rate, Limit float64 // mechanism units of the given order
 	Reverse     bool    // set by the caller when the reverse direction was checked
 	Order       int     // molecularity the bound was taken for
+	// P is the pressure (Pa) of the worst point of a pressure-dependent
+	// rate, 0 when the rate does not depend on pressure (set by the caller).
+	P float64
+}
+
+// CheckPressures returns the pressures (Pa) at which a pressure-dependent
+// rate is checked: 0.01 to 100 bar, two points per decade (1, 3.16, 10, …),
+// the range combustion and pyrolysis models are run at (common practice).
+func CheckPressures() []float64 {
+	out := make([]float64, 0, 9)
+	for i := 0; i <= 8; i++ {
+		out = append(out, 1e3*math.Pow(10, float64(i)/2))
+	}
+	return out
 }
 
 // Ratio returns Rate/Limit (> 1 for a violation).
@@ -56,9 +70,13 @@ func (v Violation) Message() string {
 	if v.Reverse {
 		dir = "reverse k"
 	}
-	return fmt.Sprintf("%s(%.0f K) = %s %s exceeds the %s collision limit %s %s by a factor of %s",
-		dir, v.T, sci(v.Rate), orderUnits(v.Order), molecularity(v.Order),
-		sci(v.Limit), orderUnits(v.Order), strconv.FormatFloat(v.Ratio(), 'g', 3, 64))
+	at := fmt.Sprintf("%.0f K", v.T)
+	if v.P > 0 {
+		at += fmt.Sprintf(", %s bar", strconv.FormatFloat(v.P/1e5, 'g', 3, 64))
+	}
+	return fmt.Sprintf("%s(%s) = %s %s exceeds the %s collision limit %s %s by a factor of %s",
+		dir, at, sci(v.Rate), RateUnits(v.Order), molecularity(v.Order),
+		sci(v.Limit), RateUnits(v.Order), strconv.FormatFloat(v.Ratio(), 'g', 3, 64))
 }
 
 // DefaultDiameter estimates a collision diameter in Å from the heavy-atom
@@ -184,17 +202,31 @@ func CollisionCheck(order int, masses []float64, heavyAtoms []int, rate func(T f
 	return worst
 }
 
-// orderUnits names the mechanism units of a rate constant of the given order.
-func orderUnits(order int) string {
-	switch order {
-	case 1:
-		return "s-1"
-	case 2:
-		return "cm3/mol/s"
-	case 3:
-		return "cm6/mol2/s"
+// RateUnits names the units of a rate constant of the given order in the
+// mechanism's cm, mol, s system: "s⁻¹", "cm³/(mol·s)", "cm⁶/(mol²·s)", …
+// (order n: cm^(3(n−1)) mol^(1−n) s⁻¹). Every message and table that shows
+// a rate constant uses it.
+func RateUnits(order int) string {
+	switch {
+	case order == 1:
+		return "s⁻¹"
+	case order == 2:
+		return "cm³/(mol·s)"
+	case order > 2:
+		return "cm" + superscript(3*(order-1)) + "/(mol" + superscript(order-1) + "·s)"
 	}
-	return fmt.Sprintf("(cm3/mol)^%d/s", order-1)
+	return fmt.Sprintf("(order %d)", order)
+}
+
+// superscript writes n ≥ 0 in superscript digits.
+func superscript(n int) string {
+	const digits = "⁰¹²³⁴⁵⁶⁷⁸⁹"
+	var b strings.Builder
+	for _, c := range strconv.Itoa(n) {
+		r := []rune(digits)[c-'0']
+		b.WriteRune(r)
+	}
+	return b.String()
 }
 
 // molecularity names a reaction order in words.

@@ -85,7 +85,7 @@ func TestCollisionCheckFiresForHugeBimolecularA(t *testing.T) {
 	assert.InEpsilon(t, 2.7825e14, v.Limit, 1e-4)
 	assert.InEpsilon(t, 35.94, v.Ratio(), 1e-3)
 	assert.Equal(t, 2, v.Order)
-	assert.Equal(t, "k(300 K) = 1e16 cm3/mol/s exceeds the bimolecular collision limit 2.78e14 cm3/mol/s by a factor of 35.9", v.Message())
+	assert.Equal(t, "k(300 K) = 1e16 cm³/(mol·s) exceeds the bimolecular collision limit 2.78e14 cm³/(mol·s) by a factor of 35.9", v.Message())
 	v.Reverse = true
 	assert.Contains(t, v.Message(), "reverse k(300 K)")
 
@@ -129,7 +129,7 @@ func TestCollisionCheckFindsWorstPoint(t *testing.T) {
 	u := CollisionCheck(1, nil, nil, Arrhenius{A: 1e14}.Rate, CollisionSettings{})
 	require.NotNil(t, u)
 	assert.InEpsilon(t, 15.998, u.Ratio(), 1e-4)
-	assert.Equal(t, "k(300 K) = 1e14 s-1 exceeds the unimolecular collision limit 6.25e12 s-1 by a factor of 16", u.Message())
+	assert.Equal(t, "k(300 K) = 1e14 s⁻¹ exceeds the unimolecular collision limit 6.25e12 s⁻¹ by a factor of 16", u.Message())
 
 	// NaN rates are skipped; termolecular has no bound.
 	assert.Nil(t, CollisionCheck(1, nil, nil, func(float64) float64 { return math.NaN() }, CollisionSettings{}))

@@ -59,12 +59,17 @@ func ringSystems(n int, rings [][]int) [][]int {
 		}
 	}
 	in := make([]bool, n)
-	var out [][]int
+	total := 0
+	for _, ring := range rings {
+		total += len(ring)
+	}
+	buf := make([]int, 0, total) // the systems' lists share one array
+	out := make([][]int, 0, len(rings))
 	for r := range rings {
 		if find(parent, r) != r {
 			continue
 		}
-		var list []int
+		list := buf[len(buf):len(buf)]
 		for r2, ring := range rings {
 			if find(parent, r2) != r {
 				continue
@@ -80,7 +85,8 @@ func ringSystems(n int, rings [][]int) [][]int {
 			in[a] = false
 		}
 		slices.Sort(list)
-		out = append(out, list)
+		out = append(out, list[:len(list):len(list)])
+		buf = buf[:len(buf)+len(list)]
 	}
 	slices.SortFunc(out, slices.Compare)
 	return out

@@ -80,15 +80,36 @@ func (p *parser) kekulize() error {
 	for i := range p.atoms {
 		need[i] = p.atoms[i].Aromatic && needsDouble(p.atoms[i], p.organic[i], sums[i])
 	}
+	// adjacency of the atoms that need a double bond, through bonds written
+	// aromatic, in one backing array
+	cnt := make([]int, n+1)
+	for k, b := range p.bonds {
+		if p.aromIn[k] && need[b.A] && need[b.B] {
+			cnt[b.A+1]++
+			cnt[b.B+1]++
+		}
+	}
+	for i := 1; i <= n; i++ {
+		cnt[i] += cnt[i-1]
+	}
+	back := make([]int, cnt[n])
 	adj := make([][]int, n)
-	edge := map[[2]int]int{}
+	for i := range adj {
+		adj[i] = back[cnt[i]:cnt[i]:cnt[i+1]]
+	}
 	for k, b := range p.bonds {
 		if p.aromIn[k] && need[b.A] && need[b.B] {
 			adj[b.A] = append(adj[b.A], b.B)
 			adj[b.B] = append(adj[b.B], b.A)
-			edge[[2]int{b.A, b.B}] = k
-			edge[[2]int{b.B, b.A}] = k
 		}
+	}
+	edge := func(a, b int) int {
+		for k, bd := range p.bonds {
+			if p.aromIn[k] && ((bd.A == a && bd.B == b) || (bd.A == b && bd.B == a)) {
+				return k
+			}
+		}
+		return -1
 	}
 	match := maxMatching(n, adj)
 	for k := range p.bonds {
@@ -98,7 +119,7 @@ func (p *parser) kekulize() error {
 	}
 	for i := 0; i < n; i++ {
 		if need[i] && match[i] > i {
-			p.bonds[edge[[2]int{i, match[i]}]].Order = 2
+			p.bonds[edge(i, match[i])].Order = 2
 		}
 	}
 	for i := 0; i < n; i++ {

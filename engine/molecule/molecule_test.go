@@ -475,3 +475,15 @@ func TestCacheFollowsChanges(t *testing.T) {
 	c1[0] = 99
 	assert.NotEqual(t, 99, m.SymmetryClasses()[0])
 }
+
+// BenchmarkRead30Atoms measures reading alone (tokens, kekulization,
+// hydrogens, rings, aromaticity); canonical form and symmetry are computed
+// only when asked for.
+func BenchmarkRead30Atoms(b *testing.B) {
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := ParseSMILES(thirtyAtoms); err != nil {
+			b.Fatal(err)
+		}
+	}
+}

@@ -152,8 +152,10 @@ func (m *Molecule) HeavyAtoms() int {
 
 // Rings returns the smallest set of smallest rings (SSSR): its size is the
 // cyclomatic number bonds − atoms + components; each ring lists atom indices
-// in ring order. When the SSSR is not unique (cubane) one valid choice is
-// returned. The slices are shared: do not modify them.
+// in ring order. When the SSSR is not unique (cubane, adamantane) one valid
+// choice is returned, and which one depends on the atom order: anything that
+// must not depend on the spelling (ring-strain terms) should use
+// RingSystemInfo instead. The slices are shared: do not modify them.
 func (m *Molecule) Rings() [][]int { return m.rings }
 
 // RingSystems returns the ring systems: sorted atom lists of SSSR rings joined
@@ -173,11 +175,13 @@ func (m *Molecule) IsInRing(i int) bool {
 	return false
 }
 
-// RingSizes returns the sizes of the SSSR rings that contain atom i,
-// ascending (empty for an acyclic atom).
+// RingSizes returns the sizes of the relevant cycles (see RingSystem) that
+// contain atom i, ascending (empty for an acyclic atom). Unlike the SSSR,
+// relevant cycles do not depend on the spelling: a cubane carbon is always in
+// three 4-rings.
 func (m *Molecule) RingSizes(i int) []int {
 	var out []int
-	for _, r := range m.rings {
+	for _, r := range m.cycles {
 		for _, a := range r {
 			if a == i {
 				out = append(out, len(r))

@@ -20,6 +20,7 @@ func (m *Molecule) ringBondFlags() []bool {
 		disc[i] = -1
 	}
 	type frame struct{ v, parentBond, next int }
+	stack := make([]frame, 0, n)
 	t := 0
 	for root := 0; root < n; root++ {
 		if disc[root] >= 0 {
@@ -27,7 +28,7 @@ func (m *Molecule) ringBondFlags() []bool {
 		}
 		disc[root], low[root] = t, t
 		t++
-		stack := []frame{{root, -1, 0}}
+		stack = append(stack[:0], frame{root, -1, 0})
 		for len(stack) > 0 {
 			f := &stack[len(stack)-1]
 			if f.next < len(m.Adj[f.v]) {
@@ -85,6 +86,8 @@ func (m *Molecule) findRings(inRing []bool) (sssr, relevant [][]int) {
 		comp[i] = -1
 	}
 	var comps [][]int
+	// component lists partition the ring atoms: they share one array
+	buf := make([]int, n)
 	for i := 0; i < n; i++ {
 		if comp[i] >= 0 {
 			continue
@@ -100,7 +103,8 @@ func (m *Molecule) findRings(inRing []bool) (sssr, relevant [][]int) {
 		}
 		c := len(comps)
 		comp[i] = c
-		list := []int{i}
+		list := buf[:1]
+		list[0] = i
 		for k := 0; k < len(list); k++ {
 			v := list[k]
 			for _, b := range m.Adj[v] {
@@ -114,11 +118,13 @@ func (m *Molecule) findRings(inRing []bool) (sssr, relevant [][]int) {
 				}
 			}
 		}
-		sort.Ints(list)
-		comps = append(comps, list)
+		slices.Sort(list)
+		comps = append(comps, list[:len(list):len(list)])
+		buf = buf[len(list):]
 	}
+	ebuf := make([]int, 0, len(m.Bonds))
 	for ci, atoms := range comps {
-		var edges []int
+		edges := ebuf[:0]
 		for b, bd := range m.Bonds {
 			if inRing[b] && comp[bd.A] == ci {
 				edges = append(edges, b)
@@ -133,6 +139,26 @@ func (m *Molecule) findRings(inRing []bool) (sssr, relevant [][]int) {
 
 func (m *Molecule) componentRings(atoms, edges []int, inRing []bool) (sssr, relevant [][]int) {
 	rank := len(edges) - len(atoms) + 1
+	if rank == 1 {
+		// One simple cycle: walk it from its first atom.
+		cyc := make([]int, 1, len(atoms))
+		cyc[0] = atoms[0]
+		prev := -1
+		for len(cyc) < len(atoms) {
+			cur := cyc[len(cyc)-1]
+			for _, b := range m.Adj[cur] {
+				if o := m.Other(b, cur); inRing[b] && o != prev && o != cyc[0] {
+					prev = cur
+					cyc = append(cyc, o)
+					break
+				}
+			}
+			if cyc[len(cyc)-1] == cur { // cannot happen in a simple cycle
+				break
+			}
+		}
+		return [][]int{cyc}, [][]int{cyc}
+	}
 	eIdx := make([]int, len(m.Bonds))
 	for k, b := range edges {
 		eIdx[b] = k

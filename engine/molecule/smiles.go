@@ -54,9 +54,7 @@ type parser struct {
 	nbr      [][]int // per atom: neighbours in written order (for chirality)
 	hadPrev  []bool  // per atom: bonded to a preceding atom when written
 	bracketH []int   // per atom: H count written inside the bracket
-	// atomBonds[i] lists the bonds at atom i (indices into bonds)
-	atomBonds [][]int
-	heavy     int
+	heavy    int
 }
 
 // ParseSMILES reads an OpenSMILES string into a Molecule.
@@ -113,11 +111,11 @@ func newParser(s string) *parser {
 	// capacities are limited, so an append past the estimate reallocates
 	// only that slice.
 	bools := make([]bool, 3*n+4)
-	lists := make([][]int, 2*n)
+	lists := make([][]int, n)
 	return &parser{s: s,
 		atoms: make([]Atom, 0, n), bonds: make([]Bond, 0, n+4),
 		organic: bools[:0:n], hadPrev: bools[n : n : 2*n], aromIn: bools[2*n : 2*n : 3*n+4],
-		nbr: lists[:0:n], atomBonds: lists[n : n : 2*n],
+		nbr:      lists[:0:n],
 		bracketH: make([]int, 0, n)}
 }
 
@@ -131,20 +129,24 @@ func (p *parser) addAtom(a Atom, organic bool) (int, error) {
 	p.atoms = append(p.atoms, a)
 	p.organic = append(p.organic, organic)
 	p.nbr = append(p.nbr, nil)
-	p.atomBonds = append(p.atomBonds, nil)
 	p.hadPrev = append(p.hadPrev, false)
 	p.bracketH = append(p.bracketH, a.HCount)
 	return len(p.atoms) - 1, nil
 }
 
-func (p *parser) addBond(a, b int, sym byte, pos int) (int, error) {
+// addBond adds the bond a–b; closure is true for a ring-closure bond, the
+// only kind that can repeat an existing bond (a chain bond always reaches a
+// new atom).
+func (p *parser) addBond(a, b int, sym byte, pos int, closure bool) (int, error) {
 	if a == b {
 		return 0, errAt(pos, "ring bond from an atom to itself")
 	}
-	for _, k := range p.atomBonds[a] {
-		bd := &p.bonds[k]
-		if (bd.A == a && bd.B == b) || (bd.A == b && bd.B == a) {
-			return 0, errAt(pos, "second bond between the same two atoms")
+	if closure {
+		for k := range p.bonds {
+			bd := &p.bonds[k]
+			if (bd.A == a && bd.B == b) || (bd.A == b && bd.B == a) {
+				return 0, errAt(pos, "second bond between the same two atoms")
+			}
 		}
 	}
 	arom := sym == ':' || (sym == 0 && p.atoms[a].Aromatic && p.atoms[b].Aromatic)
@@ -157,10 +159,7 @@ func (p *parser) addBond(a, b int, sym byte, pos int) (int, error) {
 	}
 	p.bonds = append(p.bonds, bd)
 	p.aromIn = append(p.aromIn, arom)
-	k := len(p.bonds) - 1
-	p.atomBonds[a] = append(p.atomBonds[a], k)
-	p.atomBonds[b] = append(p.atomBonds[b], k)
-	return k, nil
+	return len(p.bonds) - 1, nil
 }
 
 func isBondSym(c byte) bool {
@@ -265,16 +264,22 @@ func (p *parser) parse() error {
 				if sym == 0 {
 					pos = start
 				}
-				if _, err := p.addBond(a, b, sym, pos); err != nil {
+				if _, err := p.addBond(a, b, sym, pos, true); err != nil {
 					return err
 				}
-				p.nbr[r.atom][r.slot] = prev
-				p.nbr[prev] = append(p.nbr[prev], r.atom)
+				if r.slot >= 0 {
+					p.nbr[r.atom][r.slot] = prev
+				}
+				p.addNbr(prev, r.atom)
 				ringOpenFlag[num] = false
 				openRings--
 			} else {
-				p.nbr[prev] = append(p.nbr[prev], -2)
-				rings[num] = ringOpen{atom: prev, sym: pendSym, symPos: pendPos, pos: start, slot: len(p.nbr[prev]) - 1}
+				slot := -1
+				if p.atoms[prev].Chirality != "" {
+					p.nbr[prev] = append(p.nbr[prev], -2)
+					slot = len(p.nbr[prev]) - 1
+				}
+				rings[num] = ringOpen{atom: prev, sym: pendSym, symPos: pendPos, pos: start, slot: slot}
 				ringOpenFlag[num] = true
 				openRings++
 			}
@@ -296,11 +301,11 @@ func (p *parser) parse() error {
 			if pendSym != 0 {
 				pos = pendPos
 			}
-			if _, err := p.addBond(prev, idx, pendSym, pos); err != nil {
+			if _, err := p.addBond(prev, idx, pendSym, pos, false); err != nil {
 				return err
 			}
-			p.nbr[prev] = append(p.nbr[prev], idx)
-			p.nbr[idx] = append(p.nbr[idx], prev)
+			p.addNbr(prev, idx)
+			p.addNbr(idx, prev)
 			p.hadPrev[idx] = true
 		} else if pendSym != 0 {
 			return errAt(pendPos, "bond with no atom before it")
@@ -593,7 +598,7 @@ func (p *parser) aromaticInRings() error {
 	if !arom {
 		return nil
 	}
-	g := &Molecule{Atoms: p.atoms, Bonds: p.bonds, Adj: p.atomBonds}
+	g := &Molecule{Atoms: p.atoms, Bonds: p.bonds, Adj: adjacency(len(p.atoms), p.bonds)}
 	inRing := g.ringBondFlags()
 	for i, a := range p.atoms {
 		if a.Aromatic && !g.atomInRing(i, inRing) {
@@ -601,4 +606,35 @@ func (p *parser) aromaticInRings() error {
 		}
 	}
 	return nil
+}
+
+// addNbr records x as the next written neighbour of atom i when i carries a
+// chirality mark (the only atoms whose neighbour order matters).
+func (p *parser) addNbr(i, x int) {
+	if p.atoms[i].Chirality != "" {
+		p.nbr[i] = append(p.nbr[i], x)
+	}
+}
+
+// adjacency returns the bond lists of n atoms (indices into bonds), all in
+// one backing array; each list's capacity is its length.
+func adjacency(n int, bonds []Bond) [][]int {
+	cnt := make([]int, n+1)
+	for _, b := range bonds {
+		cnt[b.A+1]++
+		cnt[b.B+1]++
+	}
+	for i := 1; i <= n; i++ {
+		cnt[i] += cnt[i-1]
+	}
+	back := make([]int, cnt[n])
+	adj := make([][]int, n)
+	for i := range adj {
+		adj[i] = back[cnt[i]:cnt[i]:cnt[i+1]]
+	}
+	for k, b := range bonds {
+		adj[b.A] = append(adj[b.A], k)
+		adj[b.B] = append(adj[b.B], k)
+	}
+	return adj
 }

@@ -57,7 +57,10 @@ const maxSeeds = 64
 //     - an acyclic double bond keeps cis partners cis (an end with two alike
 //     ligands halves the count instead); an allene keeps its handedness;
 //     - rings are planar, except a lone saturated six-membered ring, which is
-//     a chair (D3d);
+//     a chair (D3d), and cages (every atom bonded to three or more atoms of
+//     the fragment, three or more rings), which are 3-D: a three-connected
+//     cage atom without other ligands (fullerene carbon) is checked like a
+//     tetrahedral atom whose fourth ligand is its outward side;
 //     - rigid 3-D fragments (cages, bridged and fused saturated rings) are
 //     checked at every tetrahedral atom together: kiln picks the
 //     configuration of the tetrahedral atoms and double bonds that gives the
@@ -65,12 +68,19 @@ const maxSeeds = 64
 //     the only one that exists), by a search seeded at each of the first 64
 //     symmetry elements in canonical order. For an achiral rigid structure
 //     this keeps exactly the rotations: half of its graph automorphisms
-//     (adamantane 24 → 12, cubane 48 → 24, norbornane 4 → 2).
+//     (adamantane 24 → 12, cubane 48 → 24, norbornane 4 → 2). Geometries
+//     that small rings cannot take are excluded first: fusions with a ring
+//     of at most four atoms (or two of at most five) are cis, and small
+//     bridged bicycles (at most nine atoms) have both bridgeheads "out".
 //  4. Identical '.'-separated components multiply σ by k! for k copies.
 //
-// Stereo marks (@, @@, /, \) are not used: σ is that of the most symmetric
-// stereoisomer of the constitution (a meso form counts as its more symmetric
-// chiral diastereomer, e.g. 2,3-dichlorobutane 18 instead of 9). Branches on
+// Written configurations are used inside rigid fragments: tetrahedral
+// centres marked @/@@ (@TH1/@TH2) and double bonds marked / \ fix their
+// configuration relative to each other (cis-1,4-dimethylcyclohexane 9,
+// trans 18), and the exchange of two identical halves across a central
+// rotatable bond counts only when it keeps the written @/@@ marks (meso- and
+// dl-2,3-dichlorobutane: 9 and 18). Unmarked units take the most symmetric
+// choice (unmarked 2,3-dichlorobutane: 18). Branches on
 // one atom count as alike when colour refinement with that atom singled out
 // cannot tell them apart (exact for trees; graphs that refinement cannot
 // separate are not expected in chemistry). Work is bounded: the symmetry
@@ -87,32 +97,42 @@ func (m *Molecule) SymmetryNumber() (*big.Int, error) {
 // SymmetryNumberContext is SymmetryNumber with cancellation: it returns
 // ctx.Err() (wrapped) if ctx is done before the result is known.
 func (m *Molecule) SymmetryNumberContext(ctx context.Context) (*big.Int, error) {
+	return m.symmetryNumber(ctx, DefaultSearchWork)
+}
+
+// symmetryNumber is SymmetryNumberContext with a work budget (atom
+// refinements): the whole-molecule search gets it, and the fragment searches
+// share another budget of the same size.
+func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, error) {
 	if len(m.Atoms) == 0 {
 		return big.NewInt(1), nil
 	}
-	info, err := m.symmetryInfo(ctx)
+	info, err := m.symmetryInfo(ctx, budget)
 	if err != nil {
 		return nil, err
 	}
 	classes := orbitClasses(len(m.Atoms), info.gens, info.labels)
 	sc := newSigmaCalc(ctx, m, classes)
+	sc.budget = budget
+	sc.gens = info.gens
 	return sc.total()
 }
 
 // symmetryInfo returns the full symmetry analysis of m (cached when m came
-// from ParseSMILES), or an error when the search budget ran out.
-func (m *Molecule) symmetryInfo(ctx context.Context) (symmetryInfo, error) {
+// from ParseSMILES and the budget is the default), or an error when the
+// search budget ran out.
+func (m *Molecule) symmetryInfo(ctx context.Context, budget int) (symmetryInfo, error) {
 	var info symmetryInfo
-	if d := m.cache(); d != nil {
+	if d := m.cache(); d != nil && budget == DefaultSearchWork {
 		info = d.info
 	} else {
-		info = m.symmetryCtx(ctx, DefaultSearchWork, true)
+		info = m.symmetryCtx(ctx, budget, true)
 	}
 	if err := ctx.Err(); err != nil {
 		return info, fmt.Errorf("symmetry of %q: %w", m.SMILES, err)
 	}
 	if !info.exact {
-		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, DefaultSearchWork)
+		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, budget)
 	}
 	return info, nil
 }
@@ -133,6 +153,7 @@ func (m *Molecule) OpticalIsomers() int {
 
 // Ligand colours of the outside positions of a fragment atom.
 const (
+	colOut    = -5 // the outward side of a three-connected cage atom
 	colParent = -4 // the bond to the parent fragment (unique)
 	colLP     = -3 // a lone pair counted as a ligand
 	colH      = -2 // an implicit hydrogen
@@ -144,20 +165,27 @@ type sigmaCalc struct {
 	n       int
 	classes []int
 	rot     []bool // per bond: rotatable
+	inRing  []bool // per bond: on a ring
 	frag    []int  // per atom: fragment index
 	frags   [][]int
 	g       *cgraph // whole molecule, for branch classes
 	root    []int   // refined initial partition of g
 	local   []int
 	lp      []int
+	virtual []bool  // per atom: cage atom with a virtual outward ligand
+	budget  int     // refinement steps left for the fragment searches
+	gens    [][]int // generators of the whole molecule's automorphism group
+	elems   [][]int // its elements, enumerated on demand (at most 5001)
+	marked  []int   // atoms with a written tetrahedral mark, nil until known
 	// parent bond of the fragment being analysed
 	pAtom, pNbr int
 }
 
 func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 	n := len(m.Atoms)
-	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: make([]int, n), lp: make([]int, n)}
+	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: make([]int, n), lp: make([]int, n), virtual: make([]bool, n)}
 	inRing := m.ringBondFlags()
+	sc.inRing = inRing
 	sc.rot = make([]bool, len(m.Bonds))
 	parent := make([]int, n)
 	for i := range parent {
@@ -236,6 +264,7 @@ func (sc *sigmaCalc) total() (*big.Int, error) {
 	// Identical components share orbit classes (the search joins them), and
 	// different ones share none: k copies multiply σ by k!.
 	copies := map[int]int{}
+	known := map[int]*big.Int{} // σ of a component, by its key
 	for _, atoms := range comps {
 		key := sc.classes[atoms[0]]
 		for _, a := range atoms {
@@ -243,9 +272,13 @@ func (sc *sigmaCalc) total() (*big.Int, error) {
 		}
 		copies[key]++
 		sigma.Mul(sigma, big.NewInt(int64(copies[key])))
-		s, err := sc.component(atoms)
-		if err != nil {
-			return nil, err
+		s, ok := known[key]
+		if !ok {
+			var err error
+			if s, err = sc.component(atoms); err != nil {
+				return nil, err
+			}
+			known[key] = s
 		}
 		sigma.Mul(sigma, s)
 	}
@@ -326,7 +359,7 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 			}
 		}
 		u, v := m.Bonds[cb].A, m.Bonds[cb].B
-		if sc.classes[u] == sc.classes[v] {
+		if sc.classes[u] == sc.classes[v] && sc.swapKeepsMarks(u, v) {
 			sigma.SetInt64(2)
 		}
 		queue = append(queue, item{sc.frag[u], u, v}, item{sc.frag[v], v, u})
@@ -372,20 +405,7 @@ func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 			out = append(out, colParent)
 			continue
 		}
-		dup := false
-		for _, b2 := range m.Adj[i] {
-			if w := m.Other(b2, i); b2 != b && sc.rot[b2] && sc.classes[w] == sc.classes[v] && !(i == sc.pAtom && w == sc.pNbr) {
-				dup = true
-			}
-		}
-		c := sc.classes[v] * (sc.n + 1)
-		if dup {
-			if ranks == nil {
-				ranks = sc.refinedAt(i)
-			}
-			c += ranks[v] + 1
-		}
-		out = append(out, c)
+		out = append(out, sc.branchColour(i, v, &ranks))
 	}
 	for k := 0; k < m.Atoms[i].HCount; k++ {
 		out = append(out, colH)
@@ -396,6 +416,112 @@ func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 		}
 	}
 	slices.Sort(out)
+	return out
+}
+
+// branchColour is the colour of the branch across the rotatable bond from
+// atom i to its neighbour v (not the parent): its orbit class, refined by
+// the partition with i singled out when another branch of i shares the
+// class. *ranks caches that partition for atom i.
+func (sc *sigmaCalc) branchColour(i, v int, ranks *[]int) int {
+	m := sc.m
+	dup := false
+	for _, b2 := range m.Adj[i] {
+		if w := m.Other(b2, i); w != v && sc.rot[b2] && sc.classes[w] == sc.classes[v] && !(i == sc.pAtom && w == sc.pNbr) {
+			dup = true
+		}
+	}
+	c := sc.classes[v] * (sc.n + 1)
+	if dup {
+		if *ranks == nil {
+			*ranks = sc.refinedAt(i)
+		}
+		c += (*ranks)[v] + 1
+	}
+	return c
+}
+
+// positionCode is the position code (see centrePositions) of neighbour v of
+// atom i in the current fragment; v < 0 stands for a hydrogen.
+func (sc *sigmaCalc) positionCode(i, v int) int {
+	if v < 0 {
+		return -(colH + 10)
+	}
+	b := sc.m.BondBetween(i, v)
+	if b < 0 {
+		return 1 << 30
+	}
+	if !sc.rot[b] {
+		return v
+	}
+	if i == sc.pAtom && v == sc.pNbr {
+		return -(colParent + 10)
+	}
+	var ranks []int
+	return -(sc.branchColour(i, v, &ranks) + 10)
+}
+
+// writtenStereo returns the configuration equations {unit, ground, bit} of
+// the units whose configuration the SMILES states: tetrahedral centres marked
+// @/@@ (or @TH1/@TH2) and double bonds marked with / and \. The bit is the
+// written configuration relative to the unit's reference; ground is a
+// virtual unit, so only the relative configurations count (a molecule and
+// its mirror image have the same σ).
+func (sc *sigmaCalc) writtenStereo(units []unit, ground int) [][3]int {
+	m := sc.m
+	var out [][3]int
+	var ct []CisTrans
+	ctDone := false
+	for k, u := range units {
+		switch u.kind {
+		case 't':
+			a := m.Atoms[u.x]
+			odd := 0
+			switch a.Chirality {
+			case "@", "@TH1":
+			case "@@", "@TH2":
+				odd = 1
+			default:
+				continue
+			}
+			if u.x >= len(m.nbrOrder) || len(m.nbrOrder[u.x]) != 4 || sc.virtual[u.x] {
+				continue
+			}
+			pos := sc.centrePositions(u.x)
+			p := make([]int, 4)
+			for i, v := range m.nbrOrder[u.x] {
+				p[i] = slices.Index(pos, sc.positionCode(u.x, v))
+			}
+			if !isPerm(p) {
+				continue
+			}
+			out = append(out, [3]int{k, ground, permParity(p) ^ odd})
+		case 'd':
+			if !ctDone {
+				ct, ctDone = m.DoubleBondStereo(), true
+			}
+			for _, c := range ct {
+				bd := m.Bonds[c.Bond]
+				if !((bd.A == u.x && bd.B == u.y) || (bd.A == u.y && bd.B == u.x)) {
+					continue
+				}
+				xa, ya := c.A, c.B // marked substituents on the u.x and u.y sides
+				if bd.A != u.x {
+					xa, ya = c.B, c.A
+				}
+				ia := slices.Index(sc.endPositions(u.x, u.y), sc.positionCode(u.x, xa))
+				ib := slices.Index(sc.endPositions(u.y, u.x), sc.positionCode(u.y, ya))
+				if ia < 0 || ib < 0 {
+					continue
+				}
+				bit := 0
+				if (ia == ib) != c.Cis {
+					bit = 1
+				}
+				out = append(out, [3]int{k, ground, bit})
+			}
+		}
+	}
 	return out
 }
 
@@ -432,10 +558,22 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 	atoms := sc.frags[f]
 	static := big.NewInt(1)
 	halves := 0 // factors of 2 to divide out of static
+	// A cage (every atom with three or more fragment neighbours, three or
+	// more rings) is three-dimensional even where its atoms are sp2.
+	cage := len(atoms) >= 4
+	bonds := 0
+	for _, x := range atoms {
+		bonds += sc.inner(x)
+		cage = cage && sc.inner(x) >= 3
+	}
+	cage = cage && bonds/2-len(atoms)+1 >= 3
 	var units []unit
 	for _, x := range atoms {
 		tet := sc.tetrahedral(x)
 		col := sc.outside(x, tet)
+		if len(atoms) == 1 && len(sc.markedAtoms()) > 0 {
+			col = sc.outsideSplit(x, tet)
+		}
 		dup := false
 		for k := 0; k < len(col); {
 			e := k
@@ -454,10 +592,15 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 			} else {
 				units = append(units, unit{kind: 't', x: x})
 			}
+		} else if cage && len(col) == 0 && sc.inner(x) == 3 {
+			// a three-connected atom of a cage (fullerene carbon) points
+			// its free side outwards: a fourth, virtual ligand
+			units = append(units, unit{kind: 't', x: x})
+			sc.virtual[x] = true
 		}
 	}
 	// double bonds and allenes inside the fragment
-	inRing := m.ringBondFlags()
+	inRing := sc.inRing
 	doubles := func(i int) []int {
 		var out []int
 		for _, b := range m.Adj[i] {
@@ -548,7 +691,8 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 	}
 	g := m.cgraphOfSub(atoms, sc.local, sc.rot, extra)
 	root := g.refine(g.cell0)
-	s := &search{g: g, budget: DefaultSearchWork, root: root, ctx: sc.ctx}
+	s := &search{g: g, budget: sc.budget, root: root, ctx: sc.ctx}
+	defer func() { sc.budget -= s.steps }()
 	order := big.NewInt(1)
 	var labels []int
 	seenBuf := make([]bool, len(atoms))
@@ -629,7 +773,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 	}
 	best := 0
-	nu := len(units)
+	nu := len(units) + 1 // the last node is the ground of written configurations
 	par := make([]int, nu)
 	bits := make([]int, nu)
 	save := make([]int, 2*nu)
@@ -641,7 +785,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 		return x, p
 	}
-	fixed := sc.cisFusions(units)
+	fixed := append(sc.writtenStereo(units, len(units)), sc.cisFusions(units)...)
 	for seed := 0; seed < len(cands) && seed < maxSeeds; seed++ {
 		for i := range par {
 			par[i], bits[i] = i, 0
@@ -686,7 +830,7 @@ func (sc *sigmaCalc) limitErr() error {
 	if err := sc.ctx.Err(); err != nil {
 		return fmt.Errorf("symmetry number of %q: %w", sc.m.SMILES, err)
 	}
-	return fmt.Errorf("symmetry number of %q: %w (more than %d refinement steps)", sc.m.SMILES, ErrWorkLimit, DefaultSearchWork)
+	return fmt.Errorf("symmetry number of %q: %w (work budget of %d refinement steps spent)", sc.m.SMILES, ErrWorkLimit, DefaultSearchWork)
 }
 
 // alike reports whether the two positions of a double-bond end are both
@@ -728,7 +872,21 @@ func (sc *sigmaCalc) centrePositions(x int) []int {
 	for _, c := range sc.outside(x, true) {
 		out = append(out, -(c + 10))
 	}
+	if sc.virtual[x] {
+		out = append(out, -(colOut + 10))
+	}
 	return out
+}
+
+// inner counts the bonds of atom x inside its fragment.
+func (sc *sigmaCalc) inner(x int) int {
+	k := 0
+	for _, b := range sc.m.Adj[x] {
+		if !sc.rot[b] {
+			k++
+		}
+	}
+	return k
 }
 
 func imagePos(k int, phi func(int) int) int {
@@ -942,6 +1100,72 @@ func (sc *sigmaCalc) cisFusions(units []unit) [][3]int {
 		parB := permBit(rest(pb, a, b1, b2), pb, id)
 		out = append(out, [3]int{ka, kb, 1 ^ parA ^ parB})
 	}
+	return append(out, sc.smallBicycles(units, at)...)
+}
+
+// smallBicycles returns the configuration equations of the bridgeheads of
+// small bridged bicycles: two checked tetrahedral atoms a and b, not bonded,
+// joined by three bridges of two-connected atoms with at most nine atoms in
+// all (norbornane, bicyclo[2.2.2]octane, bicyclo[3.3.1]nonane), can only be
+// "out,out": both bridgehead ligands point away from the bicycle (common
+// practice; in,out isomers need much larger rings). Seen from a, the bridges
+// turn one way; seen from b, the other.
+func (sc *sigmaCalc) smallBicycles(units []unit, at map[int]int) [][3]int {
+	m := sc.m
+	var out [][3]int
+	for _, u := range units {
+		a := u.x
+		if u.kind != 't' || sc.inner(a) != 3 {
+			continue
+		}
+		var firsts, lasts []int
+		end, total := -1, 0
+		ok := true
+		for _, bd := range m.Adj[a] {
+			if sc.rot[bd] {
+				continue
+			}
+			prev, cur := a, m.Other(bd, a)
+			n := 0
+			for sc.inner(cur) == 2 && n <= 10 {
+				next := -1
+				for _, b2 := range m.Adj[cur] {
+					if o := m.Other(b2, cur); !sc.rot[b2] && o != prev {
+						next = o
+					}
+				}
+				prev, cur = cur, next
+				n++
+			}
+			if cur == a || (end >= 0 && cur != end) || n > 10 {
+				ok = false
+				break
+			}
+			end = cur
+			total += n
+			firsts = append(firsts, m.Other(bd, a))
+			lasts = append(lasts, prev)
+		}
+		kb, isUnit := at[end]
+		if !ok || !isUnit || end < a || m.BondBetween(a, end) >= 0 || total+2 > 9 {
+			continue
+		}
+		b := end
+		pa, pb := sc.centrePositions(a), sc.centrePositions(b)
+		rest := func(p []int, xs []int) []int {
+			out := slices.Clone(xs)
+			for _, k := range p {
+				if !slices.Contains(xs, k) {
+					out = append(out, k)
+				}
+			}
+			return out
+		}
+		id := func(x int) int { return x }
+		parA := permBit(rest(pa, firsts), pa, id)
+		parB := permBit(rest(pb, lasts), pb, id)
+		out = append(out, [3]int{at[a], kb, 1 ^ parA ^ parB})
+	}
 	return out
 }
 
@@ -955,4 +1179,144 @@ func isPerm(p []int) bool {
 		seen[x] = true
 	}
 	return true
+}
+
+// swapKeepsMarks reports whether the two identical halves on either side of
+// the central bond u–v can be exchanged without changing a written
+// tetrahedral configuration (@/@@): some graph automorphism mapping u to v
+// maps every marked centre onto a marked centre with the same configuration.
+// A meso form (halves mirror images of each other) fails. Without marks, or
+// when the group is too large to search (more than 5000 elements), the
+// exchange counts (most symmetric stereoisomer).
+func (sc *sigmaCalc) swapKeepsMarks(u, v int) bool {
+	return sc.keepsMarks([][2]int{{u, v}})
+}
+
+// marked returns the atoms with a written tetrahedral mark (cached).
+func (sc *sigmaCalc) markedAtoms() []int {
+	if sc.marked == nil {
+		m := sc.m
+		sc.marked = []int{}
+		for i, a := range m.Atoms {
+			if isTetraMark(a.Chirality) && i < len(m.nbrOrder) && len(m.nbrOrder[i]) == 4 {
+				sc.marked = append(sc.marked, i)
+			}
+		}
+	}
+	return sc.marked
+}
+
+func isTetraMark(c string) bool { return c == "@" || c == "@@" || c == "@TH1" || c == "@TH2" }
+
+// keepsMarks reports whether some graph automorphism maps every pair's
+// first atom to its second and every marked centre onto a marked centre
+// with the same configuration. Without marks, or when the group has more
+// than 5000 elements, it reports true (most symmetric stereoisomer).
+func (sc *sigmaCalc) keepsMarks(req [][2]int) bool {
+	m := sc.m
+	marked := sc.markedAtoms()
+	if len(marked) == 0 || len(sc.gens) == 0 {
+		return true
+	}
+	if sc.elems == nil {
+		sc.elems = groupElements(sc.gens, maxFragmentGroup+1)
+	}
+	if len(sc.elems) > maxFragmentGroup {
+		return true
+	}
+	odd := func(c string) int {
+		if c == "@@" || c == "@TH2" {
+			return 1
+		}
+		return 0
+	}
+next:
+	for _, phi := range sc.elems {
+		for _, r := range req {
+			if phi[r[0]] != r[1] {
+				continue next
+			}
+		}
+		for _, x := range marked {
+			y := phi[x]
+			cy := m.Atoms[y].Chirality
+			if y >= len(m.nbrOrder) || len(m.nbrOrder[y]) != 4 || !isTetraMark(cy) {
+				continue next
+			}
+			p := make([]int, 4)
+			for k, w := range m.nbrOrder[x] {
+				img := -1
+				if w >= 0 {
+					img = phi[w]
+				}
+				p[k] = slices.Index(m.nbrOrder[y], img)
+			}
+			if !isPerm(p) || permParity(p)^odd(m.Atoms[x].Chirality)^odd(cy) != 0 {
+				continue next
+			}
+		}
+		return true
+	}
+	return false
+}
+
+// splitByMarks refines the branch colours col of the rotatable-bond
+// neighbours nb of atom x (parallel lists): two alike branches stay alike
+// only when an automorphism fixing x exchanges them and keeps the written
+// marks (the two arms of meso-2,4-pentanediol are mirror images, not alike).
+// Used for one-atom fragments, whose colours are compared only among
+// themselves.
+func (sc *sigmaCalc) splitByMarks(x int, nb, col []int) {
+	if len(sc.markedAtoms()) == 0 {
+		return
+	}
+	for i := range nb {
+		if col[i] < 0 {
+			continue
+		}
+		sub := 0
+		for j := 0; j < i; j++ {
+			if col[j] < 0 {
+				continue
+			}
+			if col[j]/64 == col[i] && sc.keepsMarks([][2]int{{x, x}, {nb[j], nb[i]}}) {
+				sub = col[j] % 64
+				break
+			}
+			if col[j]/64 == col[i] {
+				sub = max(sub, col[j]%64+1)
+			}
+		}
+		col[i] = col[i]*64 + sub
+	}
+}
+
+// outsideSplit is outside for a one-atom fragment, with alike branches
+// split by splitByMarks.
+func (sc *sigmaCalc) outsideSplit(i int, withLP bool) []int {
+	m := sc.m
+	var nb, col []int
+	var ranks []int
+	for _, b := range m.Adj[i] {
+		if !sc.rot[b] {
+			continue
+		}
+		v := m.Other(b, i)
+		if i == sc.pAtom && v == sc.pNbr {
+			nb, col = append(nb, v), append(col, colParent)
+			continue
+		}
+		nb, col = append(nb, v), append(col, sc.branchColour(i, v, &ranks))
+	}
+	sc.splitByMarks(i, nb, col)
+	for k := 0; k < m.Atoms[i].HCount; k++ {
+		col = append(col, colH)
+	}
+	if withLP {
+		for k := 0; k < sc.lp[i]; k++ {
+			col = append(col, colLP)
+		}
+	}
+	slices.Sort(col)
+	return col
 }

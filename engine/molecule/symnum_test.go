@@ -46,6 +46,14 @@ var sigmaCases = []struct {
 	{"C1CC2(C1)CCC2", 4},       // spiro[3.3]heptane, D_2d → D_2
 	{"C1CC2(C1)CCCC2", 2},      // spiro[3.4]octane, C_2v → C_2
 	{"C1CCC2CCCCC2C1", 2},      // decalin, another spelling
+	{"C12C3C4C5C1C6C7C2C8C3C9C4C%10C5C6C%11C7C8C9C%10%11", 60},                                                                                 // dodecahedrane, I_h → I
+	{"c12c3c4c5c1c1c6c7c2c2c8c3c3c9c4c4c%10c5c5c1c1c6c6c%11c7c2c2c7c8c3c3c8c9c4c4c9c%10c5c5c1c1c6c6c%11c2c2c7c3c3c8c4c4c9c5c1c1c6c2c3c41", 60}, // C60, I_h → I
+	{"C12C3C4C1C5C2C3C45", 24},                     // cubane again (cage rule)
+	{"c1cc2ccc3ccc4ccc5ccc6ccc1c1c2c3c4c5c61", 12}, // coronene, D_6h (planar, not a cage)
+	{"C1=CC2CCC1C2", 1},                            // norbornene, C_s
+	{"C12C3C1C1C2C31", 6},                          // prismane, D_3h → D_3
+	{"C1=CC2CCC1CC2", 2},                           // bicyclo[2.2.2]oct-2-ene, C_2v → C_2
+	{"C1CC2CCCC(C1)C2", 2},                         // bicyclo[3.3.1]nonane, C_2v → C_2
 	{"[H][H]", 2}, {"O=O", 2}, {"[C-]#[O+]", 1}, {"Cl", 1}, {"CCl", 3}, {"ClC(Cl)(Cl)Cl", 12},
 	{"FC(F)F", 3}, {"C=CC=C", 2}, {"CC(C)=C", 18}, {"CC#C", 3},
 	{"CC.CC", 2 * 18 * 18}, // two identical components: 2!·18²
@@ -100,4 +108,72 @@ func TestOpticalIsomersMolecule(t *testing.T) {
 	assert.Equal(t, 1, parse(t, "CC(C)CC(C)C").OpticalIsomers())
 	assert.Equal(t, 1, parse(t, "CCC(CC)C").OpticalIsomers())
 	assert.Equal(t, 1, parse(t, "C1C2CC3CC1CC(C2)C3").OpticalIsomers(), "adamantane bridgeheads have two alike ring paths")
+}
+
+func TestCanonicalContext(t *testing.T) {
+	m := parse(t, "C1C2CC3CC1CC(C2)C3")
+	c, err := m.CanonicalContext(context.Background())
+	require.NoError(t, err)
+	assert.Equal(t, m.Canonical(), c)
+	// an uncached copy with a cancelled context refuses instead of guessing
+	p := *m
+	p.Atoms = append([]Atom(nil), m.Atoms...)
+	ctx, cancel := context.WithCancel(context.Background())
+	cancel()
+	_, err = p.CanonicalContext(ctx)
+	assert.ErrorIs(t, err, context.Canceled)
+}
+
+// TestSymmetryWorkLimit checks that a search that runs out of its budget is
+// an error wrapping ErrWorkLimit, never a number.
+func TestSymmetryWorkLimit(t *testing.T) {
+	for _, s := range []string{"C12C3C4C1C5C2C3C45", "C1C2CC3CC1CC(C2)C3", "CC(C)(C)C(C(C)(C)C)(C(C)(C)C)C(C)(C)C"} {
+		m := parse(t, s)
+		_, err := m.symmetryNumber(context.Background(), 10)
+		require.Error(t, err, s)
+		assert.ErrorIs(t, err, ErrWorkLimit, s)
+		sg, err := m.symmetryNumber(context.Background(), DefaultSearchWork)
+		require.NoError(t, err, s)
+		assert.Positive(t, sg.Sign())
+	}
+}
+
+// TestSymmetryNumberWrittenStereo checks that configurations written with
+// @/@@ inside a rigid fragment are used: the two 1,4-dimethylcyclohexanes
+// are trans (C_2h, σ_ext 2) and cis (C_s, σ_ext 1), so their σ differ by 2,
+// and an unmarked spelling takes the more symmetric one.
+func TestSymmetryNumberWrittenStereo(t *testing.T) {
+	sigma := func(s string) int64 {
+		v, err := parse(t, s).SymmetryNumber()
+		require.NoError(t, err, s)
+		return v.Int64()
+	}
+	a, b := sigma("C[C@H]1CC[C@H](C)CC1"), sigma("C[C@H]1CC[C@@H](C)CC1")
+	assert.ElementsMatch(t, []int64{9, 18}, []int64{a, b})
+	assert.Equal(t, int64(18), sigma("CC1CCC(C)CC1"))
+	// cis/trans-1,2-dimethylcyclopropane: cis C_s (1), trans C_2 (2)
+	c, d := sigma("C[C@H]1C[C@H]1C"), sigma("C[C@H]1C[C@@H]1C")
+	assert.ElementsMatch(t, []int64{9, 18}, []int64{c, d})
+}
+
+// TestSymmetryNumberMeso checks the exchange of identical halves against
+// written marks: (2R,3R)-2,3-dichlorobutane has a C2 axis (σ = 2·3·3), the
+// meso form only a mirror or inversion centre (σ = 3·3).
+func TestSymmetryNumberMeso(t *testing.T) {
+	sigma := func(s string) int64 {
+		v, err := parse(t, s).SymmetryNumber()
+		require.NoError(t, err, s)
+		return v.Int64()
+	}
+	// CIP labels from RDKit 2022.09: (S,S) and (S,R) = meso
+	assert.Equal(t, int64(18), sigma("C[C@H](Cl)[C@H](C)Cl"), "(2S,3S)")
+	assert.Equal(t, int64(9), sigma("C[C@H](Cl)[C@@H](C)Cl"), "meso")
+	assert.Equal(t, int64(18), sigma("Cl[C@@H](C)[C@@H](Cl)C"), "(2S,3S) written from the other end")
+	assert.Equal(t, int64(9), sigma("Cl[C@@H](C)[C@H](Cl)C"), "meso written from the other end")
+	assert.Equal(t, int64(18), sigma("CC(Cl)C(C)Cl"), "unmarked: most symmetric")
+	// a central CH2 between two marked centres: 2,4-pentanediol
+	// (S,S) C2: 2·3·3; meso C_s: 3·3 (CIP labels from RDKit 2022.09)
+	assert.Equal(t, int64(18), sigma("C[C@H](O)C[C@H](C)O"), "(2S,4S)")
+	assert.Equal(t, int64(9), sigma("C[C@H](O)C[C@@H](C)O"), "meso")
+	assert.Equal(t, int64(18), sigma("CC(O)CC(C)O"), "unmarked")
 }

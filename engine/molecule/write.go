@@ -1,6 +1,8 @@
 package molecule
 
 import (
+	"context"
+	"fmt"
 	"slices"
 	"strconv"
 	"strings"
@@ -39,6 +41,31 @@ func (m *Molecule) Canonical() string {
 	}
 	info := m.symmetry(DefaultSearchWork, false)
 	return m.writeSMILES(info.labels, false)
+}
+
+// CanonicalContext is Canonical with a guarantee: it returns an error
+// wrapping ErrWorkLimit when the symmetry search ran out of its budget
+// (DefaultSearchWork) before the canonical labelling was certain, and
+// ctx.Err() (wrapped) when ctx is done first, instead of a string that might
+// depend on the spelling.
+func (m *Molecule) CanonicalContext(ctx context.Context) (string, error) {
+	if len(m.Atoms) == 0 {
+		return "", nil
+	}
+	if d := m.cache(); d != nil {
+		if !d.info.exact {
+			return "", fmt.Errorf("canonical form of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, DefaultSearchWork)
+		}
+		return d.canon, nil
+	}
+	info := m.symmetryCtx(ctx, DefaultSearchWork, false)
+	if err := ctx.Err(); err != nil {
+		return "", fmt.Errorf("canonical form of %q: %w", m.SMILES, err)
+	}
+	if !info.exact {
+		return "", fmt.Errorf("canonical form of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, DefaultSearchWork)
+	}
+	return m.writeSMILES(info.labels, false), nil
 }
 
 // CanonicalStereo is Canonical with stereo: tetrahedral marks @/@@ (and

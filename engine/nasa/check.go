@@ -43,11 +43,43 @@ func DefaultTolerances() Tolerances {
 type Problem struct {
 	// Kind is "discontinuity" or "nonphysical".
 	Kind string
-	// Message is a human-readable description with numbers and temperatures.
+	// Message is a human-readable description with numbers and temperatures
+	// in SI units; callers that show numbers in other units format their own
+	// from the fields below.
 	Message string
 	// Part names where the defect is: "low" or "high" (a coefficient block),
 	// "ranges" (the temperature limits) or "tmid" (the join).
 	Part string
+	// Test names the failed test: "ranges", "finite", "cp-jump", "h-jump",
+	// "s-jump", "cp-falls", "cp-nonpositive" or "cp-ceiling".
+	Test string
+	// T is the temperature (K) of the defect, Value the property there (Cp
+	// in J/(mol K), H in J/mol, S in J/(mol K)) and Other the value it is
+	// compared with: the high block's value at TMid for jumps (Value is the
+	// low block's), the running maximum for cp-falls, the ceiling for
+	// cp-ceiling.
+	T, Value, Other float64
+}
+
+// ExcessCpAllowance (J/(mol K)) is how far Check lets Cp rise above the
+// classical all-vibration limit Cp∞ of ClassicalLimits before it calls it
+// nonphysical: 2 R. Real gases exceed Cp∞ through electronic heat capacity
+// (low-lying excited states: the Schottky contribution of O, O2, HO2, NO,
+// NO2) and vibrational anharmonicity at flame temperatures. In the NASA
+// TM-4513 polynomials of kiln's reference library the excess reaches
+// 0.42 R for O2 at 3500 K, 0.47 R for N2O near 5900 K and 1.5 R for NO2 at
+// 6000 K (measured by kiln over each polynomial's range); 2 R covers these
+// with a margin while a mistyped coefficient, which moves Cp by many R,
+// is still caught.
+const ExcessCpAllowance = 2 * R
+
+// CpCeiling returns the highest Cp (J/(mol K)) Check accepts for a molecule
+// of nAtoms atoms: the classical all-vibration limit Cp∞ (no internal rotor
+// discounted, since any rotor may be a stiff vibration at high T) plus
+// ExcessCpAllowance.
+func CpCeiling(nAtoms int, linear bool) float64 {
+	_, cpInf := ClassicalLimits(nAtoms, linear, 0)
+	return cpInf + ExcessCpAllowance
 }
 
 const (
@@ -91,19 +123,19 @@ func Check(p NASA7, tol Tolerances, cpMax float64) []Problem {
 		tol.CpFall = def.CpFall
 	}
 	var out []Problem
-	add := func(kind, part, format string, args ...any) {
-		out = append(out, Problem{Kind: kind, Part: part, Message: fmt.Sprintf(format, args...)})
+	add := func(kind, part, test string, T, value, other float64, format string, args ...any) {
+		out = append(out, Problem{Kind: kind, Part: part, Test: test, T: T, Value: value, Other: other, Message: fmt.Sprintf(format, args...)})
 	}
 	rangesOK := p.TLow > 0 && p.TLow < p.TMid && p.TMid < p.THigh && !math.IsInf(p.THigh, 0)
 	if !rangesOK {
-		add(KindNonphysical, "ranges", "temperature ranges %g–%g–%g K are not in increasing order of positive finite values", p.TLow, p.TMid, p.THigh)
+		add(KindNonphysical, "ranges", "ranges", 0, 0, 0, "temperature ranges %g–%g–%g K are not in increasing order of positive finite values", p.TLow, p.TMid, p.THigh)
 	}
 	lowOK, highOK := finite(&p.Low), finite(&p.High)
 	if !lowOK {
-		add(KindNonphysical, "low", "low-range coefficients are not all finite: %v", p.Low)
+		add(KindNonphysical, "low", "finite", 0, 0, 0, "low-range coefficients are not all finite: %v", p.Low)
 	}
 	if !highOK {
-		add(KindNonphysical, "high", "high-range coefficients are not all finite: %v", p.High)
+		add(KindNonphysical, "high", "finite", 0, 0, 0, "high-range coefficients are not all finite: %v", p.High)
 	}
 	if !rangesOK {
 		return out
@@ -111,13 +143,13 @@ func Check(p NASA7, tol Tolerances, cpMax float64) []Problem {
 	tm := p.TMid
 	if lowOK && highOK {
 		if d := R * (cpR(&p.High, tm) - cpR(&p.Low, tm)); math.Abs(d) > tol.Cp {
-			add(KindDiscontinuity, "tmid", "Cp jumps by %.4g J/(mol K) at %g K (low %.4g, high %.4g)", d, tm, R*cpR(&p.Low, tm), R*cpR(&p.High, tm))
+			add(KindDiscontinuity, "tmid", "cp-jump", tm, R*cpR(&p.Low, tm), R*cpR(&p.High, tm), "Cp jumps by %.4g J/(mol K) at %g K (low %.4g, high %.4g)", d, tm, R*cpR(&p.Low, tm), R*cpR(&p.High, tm))
 		}
 		if d := R * (hR(&p.High, tm) - hR(&p.Low, tm)); math.Abs(d) > tol.H {
-			add(KindDiscontinuity, "tmid", "H jumps by %.4g kJ/mol at %g K (low %.6g, high %.6g kJ/mol)", d/1000, tm, R*hR(&p.Low, tm)/1000, R*hR(&p.High, tm)/1000)
+			add(KindDiscontinuity, "tmid", "h-jump", tm, R*hR(&p.Low, tm), R*hR(&p.High, tm), "H jumps by %.4g kJ/mol at %g K (low %.6g, high %.6g kJ/mol)", d/1000, tm, R*hR(&p.Low, tm)/1000, R*hR(&p.High, tm)/1000)
 		}
 		if d := R * (sR(&p.High, tm) - sR(&p.Low, tm)); math.Abs(d) > tol.S {
-			add(KindDiscontinuity, "tmid", "S jumps by %.4g J/(mol K) at %g K (low %.6g, high %.6g)", d, tm, R*sR(&p.Low, tm), R*sR(&p.High, tm))
+			add(KindDiscontinuity, "tmid", "s-jump", tm, R*sR(&p.Low, tm), R*sR(&p.High, tm), "S jumps by %.4g J/(mol K) at %g K (low %.6g, high %.6g)", d, tm, R*sR(&p.Low, tm), R*sR(&p.High, tm))
 		}
 	}
 	peak := math.Inf(-1)
@@ -144,16 +176,16 @@ func Check(p NASA7, tol Tolerances, cpMax float64) []Problem {
 				maxCp, maxT = c, t
 			}
 			if !fallReported && c < peak-tol.CpFall {
-				add(KindNonphysical, bl.part, "Cp falls with temperature: %.4g J/(mol K) at %.0f K, below %.4g J/(mol K) reached earlier", c, t, peak)
+				add(KindNonphysical, bl.part, "cp-falls", t, c, peak, "Cp falls with temperature: %.4g J/(mol K) at %.0f K, below %.4g J/(mol K) reached earlier", c, t, peak)
 				fallReported = true
 			}
 			peak = math.Max(peak, c)
 		}
 		if minCp <= 0 {
-			add(KindNonphysical, bl.part, "Cp is not positive: %.4g J/(mol K) at %.0f K", minCp, minT)
+			add(KindNonphysical, bl.part, "cp-nonpositive", minT, minCp, 0, "Cp is not positive: %.4g J/(mol K) at %.0f K", minCp, minT)
 		}
 		if cpMax > 0 && maxCp > cpMax+tol.Cp {
-			add(KindNonphysical, bl.part, "Cp = %.4g J/(mol K) at %.0f K exceeds the classical limit %.4g J/(mol K)", maxCp, maxT, cpMax)
+			add(KindNonphysical, bl.part, "cp-ceiling", maxT, maxCp, cpMax, "Cp = %.4g J/(mol K) at %.0f K exceeds the ceiling %.4g J/(mol K) (classical limit with electronic and anharmonic allowance)", maxCp, maxT, cpMax)
 		}
 	}
 	return out

@@ -1,7 +1,7 @@
 package reflib
 
 // entry is one library species as entered. Exactly one of coefficient blocks
-// (lo/hi), monatomic or freqs is used to build the polynomial:
+// (lo/hi), monatomic, n9 or freqs is used to build the polynomial:
 //
 //   - lo, hi: NASA-7 coefficient blocks (a1…a7, low and high range) taken as
 //     published; a6 and a7 are then recomputed from hf298 and s298 (low block)
@@ -10,6 +10,7 @@ package reflib
 //     data and those the coefficients were made with.
 //   - monatomic: Cp = 5/2 R exactly over the range (an atom without electronic
 //     states low enough to matter below 6000 K).
+//   - n9: NASA-9 coefficient blocks (see nasa9), refitted to NASA-7.
 //   - freqs: Cp from rigid-rotor / harmonic-oscillator statistical mechanics
 //     with these fundamentals (cm⁻¹), tabulated every 50 K and fitted with
 //     nasa.FitPoly when the library is built.
@@ -27,7 +28,13 @@ type entry struct {
 	monatomic bool
 	freqs     []float64
 	linear    bool
-	source    string
+	// implied: hf298 and s298 are those the lo block implies at 298.15 K
+	// (for coefficient sets published without separate formation data).
+	implied bool
+	// n9: NASA-9 blocks; Cp is tabulated from them every 50 K and fitted
+	// with nasa.FitPoly, and s298 is theirs at 298.15 K (see data_nsx.go).
+	n9     *nasa9
+	source string
 }
 
 // Sources, cited once here and referred to in each entry.

@@ -5,6 +5,9 @@
 // published source of every number. Species are found by molecular structure
 // (canonical SMILES) and spin multiplicity. It does no I/O.
 //
+// data_nsx.go adds nitrogen, sulfur and halogen species, ketene, ketenyl and
+// ethynyl from NASA/TP-2002-211556 (NASA-9, refitted) and GRI-Mech 3.0.
+//
 // How the polynomials are built (see data.go): most entries store published
 // NASA-7 coefficient blocks whose a6, a7 are recomputed from the stored
 // ΔHf°298 and S°298; monatomic gases use Cp = 5/2 R; CH4 stores fundamental
@@ -17,6 +20,7 @@ import (
 	"fmt"
 	"math"
 	"strconv"
+	"sync"
 
 	"kiln.dev/kiln/engine/molecule"
 	"kiln.dev/kiln/engine/nasa"
@@ -47,13 +51,21 @@ type Library struct {
 	maxHeavy int
 }
 
-// New builds the library and its index by canonical SMILES (each entry's
+// New returns the library. It is built once per process (the NASA-9
+// refits take a few milliseconds) and shared: a Library is immutable, and
+// Lookup and All return copies.
+func New() *Library { return built() }
+
+var built = sync.OnceValue(build)
+
+// build builds the library and its index by canonical SMILES (each entry's
 // SMILES and aliases are read with molecule.ParseSMILES and written with
 // Canonical). It panics if an entry of the built-in table cannot be read,
 // fitted or indexed: that is a defect of the table, caught by the tests.
-func New() *Library {
+func build() *Library {
 	l := &Library{index: map[string]int{}, ground: map[string]int{}}
-	for _, e := range entries {
+	for _, e := range append(append([]entry(nil), entries...), nsxEntries...) {
+		e.resolve()
 		p, err := e.poly()
 		if err != nil {
 			panic(fmt.Sprintf("reflib: %s: %v", e.name, err))
@@ -125,6 +137,17 @@ func (e entry) poly() (nasa.NASA7, error) {
 	switch {
 	case e.monatomic:
 		p.Low[0], p.High[0] = 2.5, 2.5
+	case e.n9 != nil:
+		var T, Cp []float64
+		for t := e.tLow; t <= e.tHigh; t += 50 {
+			T = append(T, t)
+			Cp = append(Cp, e.n9.cp(t))
+		}
+		fit, _, err := nasa.FitPoly(e.hf298, e.s298, T, Cp, nasa.FitOptions{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh})
+		if err != nil {
+			return p, fmt.Errorf("fitting NASA-9 Cp: %w", err)
+		}
+		return fit, nil
 	case len(e.freqs) > 0:
 		var T, Cp []float64
 		for t := e.tLow; t <= e.tHigh; t += 50 {
@@ -147,6 +170,46 @@ func (e entry) poly() (nasa.NASA7, error) {
 	p.High[5] += (hLow - p.H(p.TMid)) / nasa.R
 	p.High[6] += (sLow - p.S(p.TMid)) / nasa.R
 	return p, nil
+}
+
+// resolve fills hf298 and s298 where the entry takes them from its
+// coefficients: S°298 of NASA-9 entries, both values of implied entries.
+func (e *entry) resolve() {
+	switch {
+	case e.n9 != nil:
+		e.s298 = e.n9.s(nasa.Tref)
+	case e.implied:
+		p := nasa.NASA7{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh, Low: e.lo, High: e.lo}
+		e.hf298, e.s298 = p.H(nasa.Tref), p.S(nasa.Tref)
+	}
+}
+
+// block returns the NASA-9 block valid at T (the high one from 1000 K).
+func (n *nasa9) block(T float64) *[9]float64 {
+	if T >= 1000 {
+		return &n.hi
+	}
+	return &n.lo
+}
+
+// cp is the NASA-9 heat capacity in J/(mol K), Cp/R = Σ a_i T^(i−3).
+func (n *nasa9) cp(T float64) float64 {
+	a := n.block(T)
+	return nasa.R * (a[0]/(T*T) + a[1]/T + a[2] + T*(a[3]+T*(a[4]+T*(a[5]+T*a[6]))))
+}
+
+// h is the NASA-9 enthalpy in J/mol (ΔHf°298 + H(T) − H(298.15)).
+func (n *nasa9) h(T float64) float64 {
+	a := n.block(T)
+	hrt := -a[0]/(T*T) + a[1]*math.Log(T)/T + a[2] + T*(a[3]/2+T*(a[4]/3+T*(a[5]/4+T*a[6]/5))) + a[7]/T
+	return nasa.R * T * hrt
+}
+
+// s is the NASA-9 entropy in J/(mol K) at 1 bar.
+func (n *nasa9) s(T float64) float64 {
+	a := n.block(T)
+	sr := -a[0]/(2*T*T) - a[1]/T + a[2]*math.Log(T) + T*(a[3]+T*(a[4]/2+T*(a[5]/3+T*a[6]/4))) + a[8]
+	return nasa.R * sr
 }
 
 // lowAt and lowSAt evaluate H and S of the low block at T even when T is

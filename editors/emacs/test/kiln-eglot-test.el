@@ -33,7 +33,9 @@
 
 (ert-deftest kiln-eglot-server-registered ()
   (skip-unless (kiln-eglot-test--load))
-  (should (equal (cdr (assoc 'kiln-mode eglot-server-programs)) '("kiln" "serve"))))
+  (should (featurep 'kiln-eglot))
+  (should (equal (cdr (assoc 'kiln-mode eglot-server-programs))
+                 '(kiln-eglot-server "kiln" "serve"))))
 
 (defun kiln-eglot-test--wait (pred seconds)
   "Process events until PRED holds or SECONDS pass; return PRED's value."
@@ -51,12 +53,16 @@
     (skip-unless (and binary (not (string-empty-p binary)) fixture))
     (let* ((dir (make-temp-file "kiln-eglot" t))
            (file (expand-file-name "fixture.kiln" dir))
-           (eglot-server-programs (cons `(kiln-mode . (,binary "serve")) eglot-server-programs))
+           (eglot-server-programs (cons `(kiln-mode . (kiln-eglot-server ,binary "serve"))
+                                        eglot-server-programs))
            (buf nil))
       (unwind-protect
           (progn
             (copy-file fixture file)
             (setq buf (find-file-noselect file))
+            ;; Shown in the (batch) frame's window: hints are asked for the
+            ;; visible part of the buffer.
+            (switch-to-buffer buf)
             (with-current-buffer buf
               (should (eq major-mode 'kiln-mode))
               (apply #'eglot (eglot--guess-contact))
@@ -84,13 +90,79 @@
                                            (eglot--TextDocumentPositionParams)))
                      (contents (plist-get res :contents))
                      (text (if (stringp contents) contents (format "%S" contents))))
-                (should (or (string-match-p "ΔHf" text) (string-match-p "kJ/mol\\|kcal/mol" text))))))
+                (should (or (string-match-p "ΔHf" text) (string-match-p "kJ/mol\\|kcal/mol" text))))
+              ;; Inlay hints: native where eglot has them, else overlays.
+              (if (fboundp 'eglot-inlay-hints-mode)
+                  (ert-pass)
+                (let ((caps (eglot-client-capabilities (eglot-current-server))))
+                  (should (plist-get (plist-get caps :textDocument) :inlayHint)))
+                (let ((hint (kiln-eglot-test--wait
+                             (lambda ()
+                               (seq-find
+                                (lambda (ov)
+                                  (and (overlay-get ov 'kiln-eglot-hint)
+                                       (string-match-p "ΔHf" (overlay-get ov 'after-string))
+                                       (save-excursion
+                                         (goto-char (overlay-start ov))
+                                         ;; At the end of the ethane line (no thermo data).
+                                         (and (eolp)
+                                              (string-match-p
+                                               "^species ethane "
+                                               (buffer-substring (line-beginning-position)
+                                                                 (line-end-position)))))))
+                                (overlays-in (point-min) (point-max))))
+                             20)))
+                  (should hint)))))
         (when buf
           (with-current-buffer buf
             (when (eglot-current-server)
               (eglot-shutdown (eglot-current-server))))
           (kill-buffer buf))
         (delete-directory dir t)))))
+
+(declare-function kiln-eglot--points "kiln-eglot")
+(declare-function eglot--lsp-position-to-point "eglot")
+
+(ert-deftest kiln-eglot-positions-in-one-pass-agree-with-eglot ()
+  ;; The one-pass conversion used for large diagnostics lists gives the
+  ;; points eglot's own conversion gives, also for non-ASCII text, columns
+  ;; past the end of a line and lines past the end of the buffer.
+  (skip-unless (kiln-eglot-test--load))
+  (with-temp-buffer
+    (insert "species ethanol CCO   # ΔHf°298 −56.0\n\n  note α and β\n"
+            "reaction a => b   A=1 n=0 Ea=0\nlast line without newline")
+    (let ((positions nil)
+          (seed 7))
+      (dotimes (_ 400)
+        (setq seed (% (+ (* seed 1103515245) 12345) 2147483648))
+        (push (list :line (% seed 8) :character (% (/ seed 8) 40)) positions))
+      (let ((points (kiln-eglot--points positions)))
+        (dolist (p positions)
+          (should (equal (cons p (gethash p points))
+                         (cons p (eglot--lsp-position-to-point p)))))))))
+
+(declare-function kiln-bigfile-measure "kiln-bigfile")
+(declare-function kiln-bigfile-report "kiln-bigfile")
+
+(ert-deftest kiln-eglot-bigfile-edit ()
+  ;; A large generated mechanism: opening shows diagnostics, and an edit of
+  ;; one SMILES (and its undo) reaches Flymake.  The limit is generous: the
+  ;; test proves the path works; editors/bench.sh prints the real figures.
+  (skip-unless (kiln-eglot-test--load))
+  (let ((binary (getenv "KILN_BINARY"))
+        (big (getenv "KILN_BIG_FILE")))
+    (skip-unless (and binary (not (string-empty-p binary)) big (not (string-empty-p big))))
+    (require 'kiln-bigfile)
+    (let* ((copy (make-temp-file "kiln-big" nil ".kiln")))
+      (unwind-protect
+          (progn
+            (copy-file big copy t)
+            (let ((r (kiln-bigfile-measure binary copy 1 120)))
+              (kiln-bigfile-report copy r)
+              (should (null (plist-get r :failures)))
+              (should (= (length (plist-get r :edits)) 2))
+              (should (> (plist-get r :diagnostics) 0))))
+        (delete-file copy)))))
 
 (provide 'kiln-eglot-test)
 ;;; kiln-eglot-test.el ends here

@@ -198,5 +198,31 @@ reaction CH3 + CH3 (+M) <=> C2H6 (+M)   A=2.1e16 n=-0.97 Ea=0.62
     (indent-according-to-mode)
     (should (= (current-indentation) 0))))
 
+;; Typing, as a user does: self-insert-command and newline with
+;; `electric-indent-mode' (on by default).
+(defun kiln-test-type (string)
+  "Type STRING character by character as interactive commands."
+  (dolist (c (string-to-list string))
+    (let ((last-command-event c))
+      (if (eq c ?\n)
+          (call-interactively #'newline)
+        (call-interactively #'self-insert-command)))))
+
+(ert-deftest kiln-mode-typed-statement-goes-to-column-0 ()
+  (kiln-test-with-buffer "species ethanol CCO\n  multiplicity 1"
+    (electric-indent-local-mode 1)
+    (goto-char (point-max))
+    (kiln-test-type "\nspecies ethane CC\nreaction ethanol => ethane")
+    (should (equal (buffer-string)
+                   "species ethanol CCO\n  multiplicity 1\nspecies ethane CC\nreaction ethanol => ethane"))))
+
+(ert-deftest kiln-mode-typed-block-layout ()
+  (kiln-test-with-buffer ""
+    (electric-indent-local-mode 1)
+    (kiln-test-type "species ethanol CCO\nnasa7 300 1000 5000\nlow 1 2 3\nhigh 1 2 3\nsymmetry 3\ngroup C-(C)(H)3\nhf298 -10.2")
+    (should (equal (buffer-string)
+                   (concat "species ethanol CCO\n  nasa7 300 1000 5000\n    low 1 2 3\n"
+                           "    high 1 2 3\n  symmetry 3\ngroup C-(C)(H)3\n  hf298 -10.2")))))
+
 (provide 'kiln-mode-test)
 ;;; kiln-mode-test.el ends here

@@ -6,7 +6,7 @@ local binary = assert(os.getenv('KILN_BINARY'), 'KILN_BINARY not set')
 local workdir = assert(os.getenv('KILN_WORKDIR'), 'KILN_WORKDIR not set')
 
 vim.opt.runtimepath:prepend(plugin_dir)
-vim.cmd('filetype plugin on')
+vim.cmd('filetype plugin indent on')
 vim.cmd('syntax on')
 
 local passed, failed = 0, 0
@@ -123,11 +123,61 @@ check('root_dir: nearest .git ancestor, else the file directory', function()
 end)
 
 ------------------------------------------------------------------------
+-- Indentation (indent/kiln.lua), typed as a user types it.
+------------------------------------------------------------------------
+local function keys(s)
+  vim.api.nvim_feedkeys(vim.api.nvim_replace_termcodes(s, true, false, true), 'xt', false)
+end
+
+check('indent: a statement typed under an indented line goes to column 0', function()
+  vim.cmd('enew!')
+  vim.bo.filetype = 'kiln'
+  expect(vim.bo.indentexpr ~= '', 'indentexpr not set')
+  vim.api.nvim_buf_set_lines(0, 0, -1, false, { 'species ethanol CCO', '  multiplicity 1' })
+  vim.cmd('normal! G')
+  keys('ospecies ethane CC<Esc>')
+  keys('oreaction ethanol => ethane<Esc>')
+  local lines = vim.api.nvim_buf_get_lines(0, 0, -1, false)
+  expect(lines[3] == 'species ethane CC', 'species line: ' .. vim.inspect(lines[3]))
+  expect(lines[4] == 'reaction ethanol => ethane', 'reaction line: ' .. vim.inspect(lines[4]))
+end)
+
+check('indent: attributes by 2, block lines by 4, back to 2 after a block', function()
+  vim.cmd('enew!')
+  vim.bo.filetype = 'kiln'
+  keys('ispecies ethanol CCO<CR>nasa7 300 1000 5000<CR>low 1 2 3 4 5 6 7<CR>high 1 2 3 4 5 6 7<CR>symmetry 3<CR>group C-(C)(H)3<CR>hf298 -10.2<Esc>')
+  local got = vim.api.nvim_buf_get_lines(0, 0, -1, false)
+  local want = {
+    'species ethanol CCO',
+    '  nasa7 300 1000 5000',
+    '    low 1 2 3 4 5 6 7',
+    '    high 1 2 3 4 5 6 7',
+    '  symmetry 3',
+    'group C-(C)(H)3',
+    '  hf298 -10.2',
+  }
+  expect(vim.deep_equal(got, want), 'got ' .. vim.inspect(got))
+  -- = over the whole buffer leaves it as it is.
+  vim.cmd('normal! gg=G')
+  got = vim.api.nvim_buf_get_lines(0, 0, -1, false)
+  expect(vim.deep_equal(got, want), 'after gg=G: ' .. vim.inspect(got))
+end)
+
+------------------------------------------------------------------------
 -- Live checks against the language server.
 ------------------------------------------------------------------------
 local TIMEOUT = 20000 -- ms; generous for a cold start on a loaded CI machine
 
-require('kiln').setup({ cmd = { binary, 'serve' }, settings = { units = 'kJ/mol' } })
+-- Messages the server shows (window/showMessage).
+local notes = {}
+local show_message = vim.lsp.handlers['window/showMessage']
+vim.lsp.handlers['window/showMessage'] = function(err, result, ctx, config)
+  table.insert(notes, result and result.message or '')
+  return show_message(err, result, ctx, config)
+end
+
+-- No settings: the plugin must still send a settings object, not an array.
+require('kiln').setup({ cmd = { binary, 'serve' } })
 vim.cmd('edit ' .. vim.fn.fnameescape(workdir .. '/fixture.kiln'))
 local bufnr = vim.api.nvim_get_current_buf()
 
@@ -161,6 +211,15 @@ local function line_of(pattern)
   for i, l in ipairs(vim.api.nvim_buf_get_lines(bufnr, 0, -1, false)) do
     if l:find(pattern) then
       return i - 1 -- 0-based
+    end
+  end
+  error('no line matches ' .. pattern)
+end
+
+local function line_of_buf(b, pattern)
+  for i, l in ipairs(vim.api.nvim_buf_get_lines(b, 0, -1, false)) do
+    if l:find(pattern) then
+      return i - 1
     end
   end
   error('no line matches ' .. pattern)
@@ -258,6 +317,174 @@ if live_ok then
     -- The block must follow the ethanol declaration.
     expect(lines[l + 2]:match('^%s+nasa7%s'), 'nasa7 is not right under the species line:\n' .. table.concat(lines, '\n'))
   end)
+  check('settings: an empty settings table is sent as an object', function()
+    vim.wait(300, function() return false end)
+    for _, m in ipairs(notes) do
+      expect(not m:find('settings', 1, true), 'server complained: ' .. m)
+    end
+  end)
+
+  check('completion: omnifunc set by the README setup, <C-x><C-o> lists species', function()
+    expect(vim.bo[bufnr].omnifunc == 'v:lua.vim.lsp.omnifunc', 'omnifunc is ' .. vim.inspect(vim.bo[bufnr].omnifunc))
+    vim.cmd('normal! G')
+    local items
+    local au = vim.api.nvim_create_autocmd('CompleteChanged', {
+      callback = function()
+        items = vim.fn.complete_info({ 'items' }).items
+      end,
+    })
+    -- Typed keys run until insert mode ends; a timer ends it once the menu
+    -- shows (or after TIMEOUT).
+    local deadline = vim.loop.now() + TIMEOUT
+    local timer = vim.loop.new_timer()
+    local ended = false
+    timer:start(20, 20, vim.schedule_wrap(function()
+      if not ended and (items or vim.loop.now() > deadline) then
+        ended = true
+        timer:stop()
+        timer:close()
+        vim.api.nvim_feedkeys(vim.api.nvim_replace_termcodes('<C-e><Esc>', true, false, true), 'n', false)
+      end
+    end))
+    vim.v.errmsg = ''
+    vim.api.nvim_feedkeys(vim.api.nvim_replace_termcodes('oreaction eth<C-x><C-o>', true, false, true), 'tx!', false)
+    vim.api.nvim_del_autocmd(au)
+    local errmsg = vim.v.errmsg
+    vim.cmd('silent! undo')
+    expect(not errmsg:find('E764'), errmsg)
+    expect(items, 'no completion menu within ' .. TIMEOUT .. ' ms; errmsg ' .. errmsg)
+    local words = {}
+    for _, it in ipairs(items) do
+      words[it.word] = true
+    end
+    expect(words.ethanol and words.ethane, 'completion items: ' .. vim.inspect(vim.tbl_keys(words)))
+  end)
+
+  check('inlay hints: capability advertised, estimates shown at line ends', function()
+    local client = kiln_client()
+    if require('kiln').native_inlay_hints() then
+      return -- Neovim shows them itself
+    end
+    local caps = client.config.capabilities
+    expect(caps.textDocument and caps.textDocument.inlayHint, 'textDocument.inlayHint not advertised')
+    local l = line_of('^species ethane ')
+    local text
+    local ok = vim.wait(TIMEOUT, function()
+      for _, m in ipairs(vim.api.nvim_buf_get_extmarks(bufnr, require('kiln').hint_namespace, { l, 0 }, { l, -1 }, { details = true })) do
+        text = m[4].virt_text[1][1]
+        return text:find('ΔHf', 1, true) ~= nil
+      end
+      return false
+    end, 50)
+    expect(ok, 'no inlay hint on line ' .. l .. ': ' .. tostring(text))
+  end)
+
+  check('severity: an error on a line with a warning is the one shown', function()
+    vim.cmd('edit ' .. vim.fn.fnameescape(workdir .. '/severity.kiln'))
+    local b = vim.api.nvim_get_current_buf()
+    local l = line_of_buf(b, '^reaction')
+    local ok = vim.wait(TIMEOUT, function()
+      local sev = {}
+      for _, d in ipairs(vim.diagnostic.get(b, { lnum = l })) do
+        sev[d.severity] = true
+      end
+      return sev[vim.diagnostic.severity.ERROR] and sev[vim.diagnostic.severity.WARN]
+    end, 50)
+    expect(ok, 'want an error and a warning on line ' .. l .. ': ' .. vim.inspect(vim.diagnostic.get(b, { lnum = l })))
+    local ns = vim.lsp.diagnostic.get_namespace(client_id)
+    local vt_ns = vim.diagnostic.get_namespace(ns).user_data.virt_text_ns
+    local marks = vim.api.nvim_buf_get_extmarks(b, vt_ns, { l, 0 }, { l, -1 }, { details = true })
+    expect(#marks == 1, 'virtual text marks on the line: ' .. #marks)
+    local chunks = marks[1][4].virt_text
+    local last = chunks[#chunks]
+    expect(last[2] == 'DiagnosticVirtualTextError', 'message shown with ' .. last[2] .. ': ' .. last[1])
+    expect(last[1]:find('unbalanced', 1, true), 'message shown: ' .. last[1])
+    local float_b = vim.diagnostic.open_float(b, { scope = 'line', pos = l })
+    if float_b then
+      local fl = vim.api.nvim_buf_get_lines(float_b, 0, -1, false)
+      vim.cmd('silent! fclose') -- 0.7 has no :fclose; the float closes on the next move
+      local first_msg = fl[2] or ''
+      expect(first_msg:find('unbalanced', 1, true), 'float lists first: ' .. first_msg)
+    end
+    vim.cmd('buffer ' .. bufnr)
+  end)
+
+  check('unnamed buffer with ft=kiln is analysed', function()
+    vim.cmd('enew!')
+    local b = vim.api.nvim_get_current_buf()
+    vim.api.nvim_buf_set_lines(b, 0, -1, false, {
+      'species ethanol CCO',
+      'reaction ethanol => HO2   A=1e13 n=0 Ea=80',
+    })
+    vim.bo[b].filetype = 'kiln'
+    local ok = vim.wait(TIMEOUT, function()
+      for _, d in ipairs(vim.diagnostic.get(b)) do
+        if d.code == 'undeclared-species' then
+          return true
+        end
+      end
+      return false
+    end, 50)
+    expect(ok, 'no undeclared-species diagnostic in the unnamed buffer: ' .. vim.inspect(vim.diagnostic.get(b)))
+    -- Nothing landed in a stray buffer named after the URI.
+    for _, o in ipairs(vim.api.nvim_list_bufs()) do
+      expect(not vim.api.nvim_buf_get_name(o):find('untitled:', 1, true), 'stray buffer ' .. vim.api.nvim_buf_get_name(o))
+    end
+    vim.cmd('buffer ' .. bufnr)
+  end)
+
+  check('restart after a crash: the buffer is in sync, later edits are sent', function()
+    local has_code = function(code)
+      for _, d in ipairs(vim.diagnostic.get(bufnr)) do
+        if d.code == code then
+          return true
+        end
+      end
+      return false
+    end
+    expect(vim.wait(TIMEOUT, function() return has_code('undeclared-species') end, 50), 'no undeclared-species before the crash')
+    local old = kiln_client()
+    vim.loop.kill(old.rpc.pid, 9)
+    expect(vim.wait(TIMEOUT, function() return vim.lsp.get_client_by_id(old.id) == nil end, 50), 'client did not notice the crash')
+    -- Typed while no server runs: declares HO2.
+    vim.api.nvim_buf_set_lines(bufnr, -1, -1, false, { 'species HO2 O[O]' })
+    vim.cmd('KilnRestart')
+    local new_id
+    expect(vim.wait(TIMEOUT, function()
+      for _, c in pairs(vim.lsp.buf_get_clients(bufnr)) do
+        if c.name == 'kiln' and c.initialized then
+          new_id = c.id
+          return true
+        end
+      end
+      return false
+    end, 50), 'no kiln client after :KilnRestart')
+    client_id = new_id
+    -- The new server has the text typed during the crash ...
+    expect(vim.wait(TIMEOUT, function()
+      return not has_code('undeclared-species') and #vim.diagnostic.get(bufnr) > 0
+    end, 50), 'HO2 declared during the crash is unknown to the new server: ' .. vim.inspect(vim.diagnostic.get(bufnr)))
+    -- ... and an edit after the restart reaches it.
+    vim.api.nvim_buf_set_lines(bufnr, -2, -1, false, {})
+    expect(vim.wait(TIMEOUT, function() return has_code('undeclared-species') end, 50),
+      'edit after restart not sent: ' .. vim.inspect(vim.diagnostic.get(bufnr)))
+  end)
+
+  check('server stderr: no [ERROR] lines in the LSP log', function()
+    local path = vim.lsp.get_log_path()
+    local f = io.open(path, 'r')
+    local bad = {}
+    if f then
+      for line in f:lines() do
+        if line:find('[ERROR]', 1, true) and line:find('stderr', 1, true) then
+          table.insert(bad, line)
+        end
+      end
+      f:close()
+    end
+    expect(#bad == 0, #bad .. ' stderr lines logged as errors, e.g. ' .. tostring(bad[1]))
+  end)
+
 end
 
 io.stdout:write(string.format('%d passed, %d failed\n', passed, failed))

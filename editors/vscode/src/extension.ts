@@ -7,6 +7,7 @@ import {
   ServerOptions,
   TransportKind,
 } from 'vscode-languageclient/node';
+import { reindentAfterKeyword } from './indent';
 import { restartKeys, serverCommand, toServerSettings } from './settings';
 
 const clientId = 'kiln';
@@ -102,12 +103,34 @@ class KilnClient {
 
 let active: KilnClient | undefined;
 
+/**
+ * Re-indents a line when a blank ends its first word and that word is a
+ * keyword: a statement typed under an indented line goes back to column 0
+ * (the language configuration's rules can only add or remove one level).
+ * Runs with editor.formatOnType, on by default for kiln files.
+ */
+const keywordIndenter: vscode.OnTypeFormattingEditProvider = {
+  provideOnTypeFormattingEdits(document, position) {
+    const lines: string[] = [];
+    for (let i = 0; i <= position.line; i++) {
+      lines.push(document.lineAt(i).text);
+    }
+    const edit = reindentAfterKeyword(lines, position.line);
+    if (!edit) {
+      return [];
+    }
+    const range = new vscode.Range(position.line, 0, position.line, edit.length);
+    return [vscode.TextEdit.replace(range, edit.text)];
+  },
+};
+
 export async function activate(context: vscode.ExtensionContext): Promise<void> {
   const output = vscode.window.createOutputChannel('kiln');
   const kiln = new KilnClient(output);
   active = kiln;
   context.subscriptions.push(
     output,
+    vscode.languages.registerOnTypeFormattingEditProvider({ language: 'kiln' }, keywordIndenter, ' '),
     vscode.commands.registerCommand('kiln.restartServer', async () => {
       await kiln.restart();
       void vscode.window.setStatusBarMessage('kiln: language server restarted', 3000);

@@ -19,6 +19,11 @@ export interface KilnServerSettings {
   mismatchS298: number;
   /** Multiple of the collision limit above which a rate is reported. */
   collisionFactor: number;
+  /**
+   * Send the per-species "estimated …" information diagnostics. Absent: the
+   * server decides (off for clients that show inlay hints).
+   */
+  estimateNotes?: boolean;
 }
 
 /** Defaults; they equal the server's own defaults and the package.json defaults. */
@@ -56,7 +61,7 @@ export function toServerSettings(get: SettingReader): KilnServerSettings {
     tMid = d.tMid;
     tHigh = d.tHigh;
   }
-  return {
+  const out: KilnServerSettings = {
     units: units === 'kJ/mol' || units === 'kcal/mol' ? units : d.units,
     tMid,
     tHigh,
@@ -64,6 +69,11 @@ export function toServerSettings(get: SettingReader): KilnServerSettings {
     mismatchS298: positive(get('thresholds.s298'), d.mismatchS298),
     collisionFactor: positive(get('thresholds.collisionFactor'), d.collisionFactor),
   };
+  const notes = get('estimateNotes');
+  if (typeof notes === 'boolean') {
+    out.estimateNotes = notes;
+  }
+  return out;
 }
 
 /** The command line that starts the server: `<path> serve [--log FILE]`. */

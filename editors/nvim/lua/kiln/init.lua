@@ -3,34 +3,56 @@
 -- Works on Neovim 0.7 and later using only vim.lsp.start_client and
 -- vim.lsp.buf_attach_client. One server process runs per root directory;
 -- the root is the nearest ancestor holding a .git entry, else the file's
--- directory.
+-- directory (for an unnamed buffer: the current directory).
 --
 --   require('kiln').setup({
 --     cmd = { 'kiln', 'serve' },              -- server command line
 --     settings = { units = 'kJ/mol', tMid = 1000, tHigh = 5000,
---                  mismatchHf298 = 3, mismatchS298 = 3, collisionFactor = 1 },
+--                  mismatchHf298 = 3, mismatchS298 = 3, collisionFactor = 1,
+--                  estimateNotes = false },
 --     root_markers = { '.git' },              -- optional
+--     inlay_hints = true,                     -- optional: show estimates at line ends
+--     omnifunc = true,                        -- optional: set 'omnifunc' for <C-x><C-o>
+--     debounce_ms = 50,                       -- optional: delay before sending changes
+--     diagnostics = { severity_sort = true }, -- optional: vim.diagnostic options for kiln
 --     on_attach = function(client, bufnr) end, -- optional
 --   })
 --
 -- settings are sent as initializationOptions {kiln = settings} and as
 -- workspace/didChangeConfiguration {settings = {kiln = settings}}; the keys
 -- are the server's own (see the kiln README).
+--
+-- Inlay hints (estimated ΔHf°298 and S°298 of species without thermo data,
+-- ΔH°r of reactions) use Neovim's own inlay hints where it has them (0.10+).
+-- Older versions have none: there this plugin asks the server for the hints
+-- of the visible lines and shows them as end-of-line virtual text
+-- (highlight group KilnInlayHint), and tells the server so through the
+-- client capability textDocument.inlayHint.
 local M = {}
 
 local defaults = {
   cmd = { 'kiln', 'serve' },
   settings = {},
   root_markers = { '.git' },
+  inlay_hints = true,
+  omnifunc = true,
+  debounce_ms = 50,
+  diagnostics = { severity_sort = true },
   on_attach = nil,
 }
 
--- Per-Neovim-session state: the active configuration and client ids by root.
+-- Per-Neovim-session state.
 local state = {
   config = nil,
-  clients = {},
+  clients = {}, -- client id by root
   augroup = nil,
+  watched = {}, -- buffers whose changes this plugin follows (see watch)
+  orphaned = {}, -- buffers changed while no language client was attached
+  hint_timers = {}, -- pending inlay-hint refresh per buffer
 }
+
+local hint_ns = vim.api.nvim_create_namespace('kiln_inlay_hints')
+M.hint_namespace = hint_ns
 
 local function merged(opts)
   local cfg = vim.tbl_deep_extend('force', {}, defaults, opts or {})
@@ -38,6 +60,22 @@ local function merged(opts)
     cfg.cmd = { cfg.cmd, 'serve' }
   end
   return cfg
+end
+
+-- The settings object as sent to the server. An empty Lua table would be
+-- encoded as a JSON array, which the server rejects.
+local function settings_payload(settings)
+  local s = settings
+  if s == nil or next(s) == nil then
+    s = vim.empty_dict()
+  end
+  return { kiln = s }
+end
+
+--- True if this Neovim shows inlay hints itself (0.10 and later).
+function M.native_inlay_hints()
+  local ih = vim.lsp.inlay_hint
+  return type(ih) == 'table' and type(ih.enable) == 'function'
 end
 
 --- Returns the directory used as the workspace root for a file: the nearest
@@ -69,6 +107,318 @@ local function client_alive(id)
   return c ~= nil and not c.is_stopped()
 end
 
+------------------------------------------------------------------------
+-- Unnamed buffers. vim.lsp names a buffer by its file name; an unnamed
+-- buffer would be sent as "file://", which names no file, and the server's
+-- answers for it would never find the buffer again. Unnamed buffers are
+-- given the URI "untitled:kiln-N" (N the buffer number) instead; the server
+-- keeps such documents in memory like the untitled documents of other
+-- editors.
+------------------------------------------------------------------------
+local untitled_prefix = 'untitled:kiln-'
+
+-- The buffer an untitled:kiln-N URI names, or nil.
+local function untitled_buffer(uri)
+  local n = type(uri) == 'string' and uri:match('^untitled:kiln%-(%d+)$')
+  local b = n and tonumber(n)
+  if b and vim.api.nvim_buf_is_valid(b) and vim.api.nvim_buf_get_name(b) == '' then
+    return b
+  end
+  return nil
+end
+
+-- Neovim 0.7 finds the buffer of published diagnostics by file name, which
+-- an untitled URI is not: such diagnostics are converted and set here.
+local function set_untitled_diagnostics(bufnr, result, ctx, config)
+  local client = vim.lsp.get_client_by_id(ctx.client_id)
+  local enc = client and client.offset_encoding or 'utf-16'
+  local ns = vim.lsp.diagnostic.get_namespace(ctx.client_id)
+  local function col(pos)
+    local ok, c = pcall(vim.lsp.util._get_line_byte_from_position, bufnr, pos, enc)
+    return ok and c or pos.character
+  end
+  local out = {}
+  for _, d in ipairs(result.diagnostics or {}) do
+    table.insert(out, {
+      lnum = d.range.start.line,
+      col = col(d.range.start),
+      end_lnum = d.range['end'].line,
+      end_col = col(d.range['end']),
+      severity = d.severity or vim.diagnostic.severity.ERROR,
+      message = d.message,
+      source = d.source,
+      code = d.code,
+      user_data = { lsp = d },
+    })
+  end
+  if config then
+    vim.diagnostic.config(config, ns)
+  end
+  vim.diagnostic.set(ns, bufnr, out)
+end
+
+local function install_untitled_uris()
+  if vim.uri_from_bufnr == nil or M._untitled_installed then
+    return
+  end
+  M._untitled_installed = true
+  local from_bufnr, to_bufnr = vim.uri_from_bufnr, vim.uri_to_bufnr
+  vim.uri_from_bufnr = function(bufnr)
+    local b = (bufnr == nil or bufnr == 0) and vim.api.nvim_get_current_buf() or bufnr
+    if vim.api.nvim_buf_is_valid(b) and vim.api.nvim_buf_get_name(b) == '' and vim.bo[b].filetype == 'kiln' then
+      return untitled_prefix .. b
+    end
+    return from_bufnr(bufnr)
+  end
+  vim.uri_to_bufnr = function(uri)
+    return untitled_buffer(uri) or to_bufnr(uri)
+  end
+end
+
+------------------------------------------------------------------------
+-- Re-synchronisation after a server crash. On Neovim 0.7-0.9, a change
+-- made while no client is attached makes vim.lsp stop following the
+-- buffer (its on_lines callback detaches) while it still records the
+-- buffer as attached, so a client attached later receives the didOpen but
+-- none of the later changes. This plugin notes such changes and, before
+-- attaching the new client, clears vim.lsp's record so that attaching
+-- follows the buffer again and opens it with its full current text.
+------------------------------------------------------------------------
+local function lsp_buffer_clients()
+  local f = vim.lsp.buf_attach_client
+  for i = 1, 200 do
+    local name, val = debug.getupvalue(f, i)
+    if name == nil then
+      return nil
+    end
+    if name == 'all_buffer_active_clients' and type(val) == 'table' then
+      return val
+    end
+  end
+  return nil
+end
+
+local function watch(bufnr)
+  if state.watched[bufnr] then
+    return
+  end
+  local tracked = lsp_buffer_clients()
+  if not tracked then
+    return -- a Neovim whose change tracking this plugin does not know
+  end
+  state.watched[bufnr] = true
+  vim.api.nvim_buf_attach(bufnr, false, {
+    on_lines = function()
+      local ids = tracked[bufnr]
+      if ids ~= nil and next(ids) == nil then
+        state.orphaned[bufnr] = true
+      end
+    end,
+    on_reload = function() end,
+    on_detach = function()
+      state.watched[bufnr] = nil
+      state.orphaned[bufnr] = nil
+    end,
+  })
+end
+
+local function repair_tracking(bufnr)
+  if not state.orphaned[bufnr] then
+    return
+  end
+  state.orphaned[bufnr] = nil
+  local tracked = lsp_buffer_clients()
+  local ids = tracked and tracked[bufnr]
+  if ids ~= nil and next(ids) == nil then
+    tracked[bufnr] = nil
+  end
+end
+
+------------------------------------------------------------------------
+-- Inlay hints rendered by the plugin (Neovim < 0.10).
+------------------------------------------------------------------------
+local function kiln_client_for(bufnr)
+  -- get_clients from 0.10 on (buf_get_clients is deprecated there).
+  local clients = vim.lsp.get_clients and vim.lsp.get_clients({ bufnr = bufnr }) or vim.lsp.buf_get_clients(bufnr)
+  for _, c in pairs(clients) do
+    if c.name == 'kiln' and not c.is_stopped() then
+      return c
+    end
+  end
+  return nil
+end
+
+local function label_text(label)
+  if type(label) == 'string' then
+    return label
+  end
+  local parts = {}
+  for _, p in ipairs(label or {}) do
+    table.insert(parts, p.value or '')
+  end
+  return table.concat(parts)
+end
+
+-- Lines (0-based, end exclusive) shown in the windows displaying bufnr,
+-- or nil when no window shows it.
+local function visible_range(bufnr)
+  local first, last
+  for _, win in ipairs(vim.api.nvim_list_wins()) do
+    if vim.api.nvim_win_get_buf(win) == bufnr then
+      local r = vim.api.nvim_win_call(win, function()
+        return { vim.fn.line('w0'), vim.fn.line('w$') }
+      end)
+      local top, bot = r[1], r[2]
+      first = math.min(first or top, top)
+      last = math.max(last or bot, bot)
+    end
+  end
+  if not first then
+    return nil
+  end
+  return first - 1, last
+end
+
+--- Shows the inlay hints of bufnr at the ends of their lines.
+--- hints are LSP InlayHint objects.
+function M.render_hints(bufnr, hints, first, last)
+  vim.api.nvim_buf_clear_namespace(bufnr, hint_ns, 0, -1)
+  local by_line = {}
+  local nlines = vim.api.nvim_buf_line_count(bufnr)
+  for _, h in ipairs(hints or {}) do
+    local l = h.position and h.position.line
+    if l and l >= first and l < last and l < nlines then
+      by_line[l] = by_line[l] or {}
+      table.insert(by_line[l], label_text(h.label))
+    end
+  end
+  for l, labels in pairs(by_line) do
+    vim.api.nvim_buf_set_extmark(bufnr, hint_ns, l, 0, {
+      virt_text = { { '  ' .. table.concat(labels, '  '), 'KilnInlayHint' } },
+      virt_text_pos = 'eol',
+      hl_mode = 'combine',
+      priority = 5, -- before diagnostics' virtual text
+    })
+  end
+end
+
+--- Asks the server for the hints of the visible lines of bufnr and shows them.
+function M.refresh_hints(bufnr)
+  bufnr = (bufnr == nil or bufnr == 0) and vim.api.nvim_get_current_buf() or bufnr
+  if not vim.api.nvim_buf_is_valid(bufnr) then
+    return
+  end
+  local client = kiln_client_for(bufnr)
+  local first, last = visible_range(bufnr)
+  if not client or not first then
+    return
+  end
+  local tick = vim.api.nvim_buf_get_changedtick(bufnr)
+  local params = {
+    textDocument = { uri = vim.uri_from_bufnr(bufnr) },
+    range = { start = { line = first, character = 0 }, ['end'] = { line = last, character = 0 } },
+  }
+  client.request('textDocument/inlayHint', params, function(err, result)
+    if err or not vim.api.nvim_buf_is_valid(bufnr) then
+      return
+    end
+    if vim.api.nvim_buf_get_changedtick(bufnr) ~= tick then
+      return -- the text moved on; the next publication asks again
+    end
+    M.render_hints(bufnr, result, first, last)
+  end, bufnr)
+end
+
+local function schedule_hints(bufnr, delay)
+  if state.hint_timers[bufnr] then
+    state.hint_timers[bufnr]:stop()
+    state.hint_timers[bufnr]:close()
+  end
+  local t = vim.loop.new_timer()
+  state.hint_timers[bufnr] = t
+  t:start(delay or 50, 0, vim.schedule_wrap(function()
+    if state.hint_timers[bufnr] == t then
+      state.hint_timers[bufnr] = nil
+      t:close()
+    end
+    M.refresh_hints(bufnr)
+  end))
+end
+
+local function own_hints(cfg)
+  return cfg.inlay_hints and not M.native_inlay_hints()
+end
+
+local function enable_hints(bufnr, cfg)
+  if not cfg.inlay_hints then
+    return
+  end
+  if M.native_inlay_hints() then
+    -- 0.10: enable(true, {bufnr = n}); nightlies before it: enable(bufnr, true).
+    if not pcall(vim.lsp.inlay_hint.enable, true, { bufnr = bufnr }) then
+      pcall(vim.lsp.inlay_hint.enable, bufnr, true)
+    end
+    return
+  end
+  vim.api.nvim_create_autocmd({ 'WinScrolled', 'BufWinEnter' }, {
+    group = state.augroup,
+    buffer = bufnr,
+    callback = function()
+      schedule_hints(bufnr, 100)
+    end,
+  })
+  schedule_hints(bufnr, 0)
+end
+
+------------------------------------------------------------------------
+-- Client.
+------------------------------------------------------------------------
+local function capabilities(cfg)
+  local caps = vim.lsp.protocol.make_client_capabilities()
+  if own_hints(cfg) then
+    caps.textDocument = caps.textDocument or {}
+    caps.textDocument.inlayHint = { dynamicRegistration = false }
+    caps.workspace = caps.workspace or {}
+    caps.workspace.inlayHint = { refreshSupport = true }
+  end
+  return caps
+end
+
+local function handlers(cfg)
+  local publish = vim.lsp.handlers['textDocument/publishDiagnostics']
+  local h = {
+    -- An error and a warning on one line: show the error.
+    -- The kiln display options (cfg.diagnostics) are set on the client's
+    -- namespace once, in on_init: passing them here would make Neovim 0.7
+    -- draw every publication twice (vim.diagnostic.config redraws).
+    ['textDocument/publishDiagnostics'] = function(err, result, ctx, config)
+      local untitled = result and untitled_buffer(result.uri)
+      if untitled then
+        set_untitled_diagnostics(untitled, result, ctx, config)
+      else
+        publish(err, result, ctx, config)
+      end
+      if own_hints(cfg) and result and result.uri then
+        local b = vim.uri_to_bufnr(result.uri)
+        if vim.api.nvim_buf_is_loaded(b) then
+          schedule_hints(b, 0)
+        end
+      end
+    end,
+  }
+  if own_hints(cfg) then
+    h['workspace/inlayHint/refresh'] = function()
+      for _, b in ipairs(vim.api.nvim_list_bufs()) do
+        if vim.api.nvim_buf_is_loaded(b) and vim.bo[b].filetype == 'kiln' then
+          schedule_hints(b, 0)
+        end
+      end
+      return vim.NIL
+    end
+  end
+  return h
+end
+
 local function start(root, cfg)
   if vim.fn.executable(cfg.cmd[1]) ~= 1 then
     vim.notify(
@@ -77,7 +427,7 @@ local function start(root, cfg)
     )
     return nil
   end
-  local settings = { kiln = cfg.settings }
+  local settings = settings_payload(cfg.settings)
   return vim.lsp.start_client({
     name = 'kiln',
     cmd = cfg.cmd,
@@ -85,12 +435,22 @@ local function start(root, cfg)
     workspace_folders = { { uri = vim.uri_from_fname(root), name = root } },
     init_options = settings,
     settings = settings,
-    capabilities = vim.lsp.protocol.make_client_capabilities(),
+    capabilities = capabilities(cfg),
+    handlers = handlers(cfg),
+    flags = { debounce_text_changes = cfg.debounce_ms },
     on_init = function(client)
+      if cfg.diagnostics and next(cfg.diagnostics) then
+        vim.diagnostic.config(cfg.diagnostics, vim.lsp.diagnostic.get_namespace(client.id))
+      end
       client.notify('workspace/didChangeConfiguration', { settings = settings })
       return true
     end,
-    on_attach = cfg.on_attach,
+    on_attach = function(client, bufnr)
+      enable_hints(bufnr, cfg)
+      if cfg.on_attach then
+        cfg.on_attach(client, bufnr)
+      end
+    end,
     on_exit = function()
       vim.schedule(function()
         if state.clients[root] and not client_alive(state.clients[root]) then
@@ -107,6 +467,7 @@ end
 function M.attach(bufnr)
   bufnr = (bufnr == nil or bufnr == 0) and vim.api.nvim_get_current_buf() or bufnr
   local cfg = state.config or merged(nil)
+  install_untitled_uris()
   local fname = vim.api.nvim_buf_get_name(bufnr)
   if fname == '' then
     fname = vim.fn.getcwd() .. '/untitled.kiln'
@@ -118,7 +479,12 @@ function M.attach(bufnr)
     state.clients[root] = id
   end
   if id then
+    repair_tracking(bufnr)
     vim.lsp.buf_attach_client(bufnr, id)
+    watch(bufnr)
+    if cfg.omnifunc and vim.bo[bufnr].omnifunc == '' then
+      vim.bo[bufnr].omnifunc = 'v:lua.vim.lsp.omnifunc'
+    end
   end
   return id
 end
@@ -129,11 +495,12 @@ function M.update_settings(settings)
   local cfg = state.config or merged(nil)
   cfg.settings = vim.tbl_deep_extend('force', cfg.settings, settings or {})
   state.config = cfg
+  local payload = settings_payload(cfg.settings)
   for _, id in pairs(state.clients) do
     local c = vim.lsp.get_client_by_id(id)
     if c and not c.is_stopped() then
-      c.config.settings = { kiln = cfg.settings }
-      c.notify('workspace/didChangeConfiguration', { settings = { kiln = cfg.settings } })
+      c.config.settings = payload
+      c.notify('workspace/didChangeConfiguration', { settings = payload })
     end
   end
 end
@@ -149,6 +516,7 @@ local function kiln_buffers()
 end
 
 --- Stops all kiln servers and starts them again for the open kiln buffers.
+--- Each buffer is opened in the new server with its full current text.
 function M.restart()
   for root, id in pairs(state.clients) do
     local c = vim.lsp.get_client_by_id(id)
@@ -161,7 +529,9 @@ function M.restart()
   -- Give the old processes a moment to exit before starting new ones.
   vim.defer_fn(function()
     for _, b in ipairs(bufs) do
-      M.attach(b)
+      if vim.api.nvim_buf_is_valid(b) then
+        M.attach(b)
+      end
     end
   end, 200)
 end
@@ -171,6 +541,7 @@ end
 function M.setup(opts)
   state.config = merged(opts)
   state.augroup = vim.api.nvim_create_augroup('kiln_lsp', { clear = true })
+  vim.api.nvim_set_hl(0, 'KilnInlayHint', { link = 'Comment', default = true })
   vim.api.nvim_create_autocmd('FileType', {
     group = state.augroup,
     pattern = 'kiln',

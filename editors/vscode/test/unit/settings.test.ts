@@ -40,6 +40,14 @@ test('every kiln.* setting maps to its server key', () => {
   ]);
 });
 
+test('estimateNotes is sent only when set, as a boolean', () => {
+  assert.equal('estimateNotes' in toServerSettings(reader({})), false);
+  assert.equal('estimateNotes' in toServerSettings(reader({ estimateNotes: null })), false);
+  assert.equal('estimateNotes' in toServerSettings(reader({ estimateNotes: 'yes' })), false);
+  assert.equal(toServerSettings(reader({ estimateNotes: false })).estimateNotes, false);
+  assert.equal(toServerSettings(reader({ estimateNotes: true })).estimateNotes, true);
+});
+
 test('malformed values fall back to defaults', () => {
   const s = toServerSettings(
     reader({
@@ -86,4 +94,7 @@ test('package.json defaults agree with the server defaults', () => {
   const fromPackage = toServerSettings((key) => props[`kiln.${key}`]?.default);
   assert.deepEqual(fromPackage, { ...defaultServerSettings });
   assert.equal(props['kiln.server.path'].default, 'kiln');
+  assert.equal(props['kiln.estimateNotes'].default, null);
+  // The keyword re-indentation runs as on-type formatting.
+  assert.equal(pkg.contributes.configurationDefaults['[kiln]']['editor.formatOnType'], true);
 });

@@ -1,0 +1,248 @@
+package analysis
+
+import (
+	"fmt"
+	"math"
+
+	"kiln.dev/kiln/engine/kinetics"
+	"kiln.dev/kiln/speciesfile"
+)
+
+// rateModel is a reaction's rate expression as kiln evaluates it, the one
+// place where the rate lines of a reaction become numbers: k_f(T, P) from
+// the main Arrhenius line, a falloff (Lindemann or Troe between k0 and k∞,
+// with [M] of the N2 bath gas), or a pressure table; k_r(T, P) from an
+// explicit reverse line or from k_f/Kc.
+type rateModel struct {
+	plain    *kinetics.Arrhenius
+	falloff  *kinetics.Falloff
+	table    kinetics.PressureTable
+	bathEff  float64 // third-body efficiency of the N2 bath gas in a falloff
+	reverse  *kinetics.Arrhenius
+	kc       func(T float64) (float64, bool)
+	fwdOrder int // order of k_f: reactant molecules (+1 with a bare M)
+	revOrder int
+}
+
+// PressureDependent reports whether k_f depends on pressure.
+func (m *rateModel) PressureDependent() bool { return m.falloff != nil || len(m.table) > 0 }
+
+// forward returns k_f(T, P) in cm, mol, s units of order fwdOrder, T in K,
+// P in Pa.
+func (m *rateModel) forward(T, P float64) float64 {
+	switch {
+	case m.falloff != nil:
+		return m.falloff.Rate(T, m.bathEff*kinetics.Concentration(T, P))
+	case len(m.table) > 0:
+		return m.table.Rate(T, P)
+	case m.plain != nil:
+		return m.plain.Rate(T)
+	}
+	return math.NaN()
+}
+
+// reverseRate returns k_r(T, P); ok is false when it cannot be computed
+// (irreversible reaction, or no thermochemistry for Kc).
+func (m *rateModel) reverseRate(T, P float64) (float64, bool) {
+	if m.reverse != nil {
+		return m.reverse.Rate(T), true
+	}
+	if m.kc == nil {
+		return 0, false
+	}
+	kc, ok := m.kc(T)
+	if !ok {
+		return 0, false
+	}
+	return kinetics.ReverseRate(m.forward(T, P), kc), true
+}
+
+// forward returns k_f(T) of d's rate lines where one pressure-independent
+// number per temperature is wanted (kiln compare): the high-pressure limit
+// of a falloff, a pressure table at 1 atm. Built from the same rate model.
+func forward(d *speciesfile.Reaction) (func(T float64) float64, bool) {
+	m, ok := baseRateModel(d)
+	if !ok {
+		return nil, false
+	}
+	if m.falloff != nil {
+		return m.falloff.High.Rate, true
+	}
+	return func(T float64) float64 { return m.forward(T, 101325) }, true
+}
+
+// baseRateModel reads the forward rate lines of d (main line, falloff,
+// pressure table); ok is false without usable rate parameters.
+func baseRateModel(d *speciesfile.Reaction) (*rateModel, bool) {
+	m := &rateModel{bathEff: 1}
+	for _, p := range d.Pressures {
+		if arr, ok := arrhenius(&p.Rate); ok {
+			m.table = append(m.table, kinetics.PressureRate{P: p.P.SI, Rate: arr})
+		}
+	}
+	if len(m.table) > 0 {
+		return m, true
+	}
+	arr, ok := arrhenius(d.Rate)
+	if !ok {
+		return nil, false
+	}
+	if low, ok := arrhenius(d.LowPressure); ok && d.Falloff != nil {
+		f := &kinetics.Falloff{High: arr, Low: low}
+		if tr := d.Troe; tr != nil && tr.Alpha != nil && tr.T3 != nil && tr.T1 != nil {
+			f.Troe = &kinetics.Troe{Alpha: tr.Alpha.SI, T3: tr.T3.SI, T1: tr.T1.SI}
+			if tr.T2 != nil {
+				f.Troe.T2, f.Troe.HasT2 = tr.T2.SI, true
+			}
+		}
+		m.falloff = f
+	} else {
+		m.plain = &arr
+	}
+	return m, true
+}
+
+// rateModelOf builds the rate model of a resolved reaction; ok is false
+// without usable rate parameters.
+func (a *analysis) rateModelOf(d *speciesfile.Reaction, r *Reaction) (*rateModel, bool) {
+	m, ok := baseRateModel(d)
+	if !ok {
+		return nil, false
+	}
+	if m.falloff != nil {
+		m.bathEff = a.bathEfficiency(d)
+	}
+	third := 0
+	if d.ThirdBody {
+		third = 1
+	}
+	m.fwdOrder = molecularity(d.Reactants) + third
+	m.revOrder = molecularity(d.Products) + third
+	if d.Reversible {
+		if arr, ok := arrhenius(d.Reverse); ok {
+			m.reverse = &arr
+		} else if r.reactants != nil {
+			m.kc = r.Kc
+		}
+	}
+	return m, true
+}
+
+// bathEfficiency is the third-body efficiency of the N2 bath gas: the value
+// listed for the species whose composition is N2, else 1. A falloff with a
+// named collider (+AR) has that collider as its bath, efficiency 1.
+func (a *analysis) bathEfficiency(d *speciesfile.Reaction) float64 {
+	if falloffCollider(d) != nil {
+		return 1
+	}
+	for _, e := range d.Efficiencies {
+		if sp := a.res.ByName[e.Name.Text]; sp != nil && len(sp.Composition) == 1 && sp.Composition["N"] == 2 {
+			return e.Value.SI
+		}
+	}
+	return 1
+}
+
+// worstCollision runs the collision check of rate (k(T, P)) at each
+// pressure and returns the worst violation, with its pressure when the rate
+// depends on it.
+func worstCollision(order int, masses []float64, heavy []int, rate func(T, P float64) float64, pressures []float64, dependent bool, set kinetics.CollisionSettings) *kinetics.Violation {
+	var worst *kinetics.Violation
+	for _, P := range pressures {
+		v := kinetics.CollisionCheck(order, masses, heavy, func(T float64) float64 { return rate(T, P) }, set)
+		if v != nil && (worst == nil || v.Ratio() > worst.Ratio()) {
+			if dependent {
+				v.P = P
+			}
+			worst = v
+		}
+	}
+	return worst
+}
+
+// rates computes k_f and k_r at 1000 K and the settings' pressure, and
+// checks both against the collision limit over 300–2500 K and, for
+// pressure-dependent rates, over kinetics.CheckPressures (N2 bath gas).
+func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
+	if a.res.Files[r.File].ErrorIn(d.Body()) {
+		return // rate parameters with a syntax error are not data
+	}
+	m, ok := a.rateModelOf(d, r)
+	if !ok {
+		return
+	}
+	r.model = m
+	r.ForwardOrder, r.ReverseOrder = m.fwdOrder, m.revOrder
+	P := a.set.pressure()
+	if v := m.forward(1000, P); finite(v) {
+		r.ForwardRate1000 = &v
+	}
+	if v, ok := m.reverseRate(1000, P); ok && finite(v) {
+		r.ReverseRate1000 = &v
+	}
+	pressures := []float64{P}
+	if m.PressureDependent() {
+		pressures = kinetics.CheckPressures()
+	}
+	set := kinetics.CollisionSettings{Factor: a.set.CollisionFactor, TMin: 300, TMax: 2500}
+	span := d.Equation
+	if d.Rate != nil {
+		span = d.Rate.Span
+	}
+	ms, hs := a.sizes(d.Reactants)
+	if v := worstCollision(m.fwdOrder, ms, hs, m.forward, pressures, m.PressureDependent(), set); v != nil {
+		r.Collision = v
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
+			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K%s", v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v))})
+		return
+	}
+	if !d.Reversible || (m.reverse == nil && m.kc == nil) {
+		return
+	}
+	kr := func(T, P float64) float64 {
+		k, ok := m.reverseRate(T, P)
+		if !ok {
+			return math.NaN()
+		}
+		return k
+	}
+	ms, hs = a.sizes(d.Products)
+	if v := worstCollision(m.revOrder, ms, hs, kr, pressures, m.PressureDependent() && m.reverse == nil, set); v != nil {
+		v.Reverse = true
+		r.Collision = v
+		what := "reverse rate implied by thermochemistry"
+		if m.reverse != nil {
+			what = "reverse rate"
+		}
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
+			Message: fmt.Sprintf("%s, %.3g, exceeds the collision limit %.3g (%s) at %.0f K%s", what, v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v))})
+	}
+}
+
+// atPressure is ", 0.1 bar (N2 bath)" for a pressure-dependent violation.
+func atPressure(v *kinetics.Violation) string {
+	if v.P == 0 {
+		return ""
+	}
+	return fmt.Sprintf(" and %g bar (N2 bath gas)", v.P/1e5)
+}
+
+// RatesAt returns k_f and k_r of the reaction at T (K) and P (Pa), in cm,
+// mol, s units of orders ForwardOrder and ReverseOrder; an ok is false when
+// that rate cannot be computed.
+func (r *Reaction) RatesAt(T, P float64) (kf, kr float64, okF, okR bool) {
+	if r.model == nil {
+		return 0, 0, false, false
+	}
+	kf = r.model.forward(T, P)
+	okF = finite(kf)
+	kr, okR = r.model.reverseRate(T, P)
+	return kf, kr, okF, okR && finite(kr)
+}
+
+// PressureDependent reports whether the reaction's k_f depends on pressure
+// (falloff or pressure table): its rates are then shown at
+// Settings.Pressure.
+func (r *Reaction) PressureDependent() bool { return r.model != nil && r.model.PressureDependent() }
+
+func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }

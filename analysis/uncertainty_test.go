@@ -1,0 +1,72 @@
+package analysis
+
+import (
+	"context"
+	"math"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/engine/kinetics"
+)
+
+func analyzeText(t *testing.T, text string) *Result {
+	t.Helper()
+	ws := NewWorkspace("/w", func(string) ([]byte, error) { return nil, assert.AnError }, DefaultSettings())
+	ws.SetOverlay("/w/u.kiln", []byte(text))
+	res, err := ws.Analyze(context.Background(), "/w/u.kiln")
+	require.NoError(t, err)
+	return res
+}
+
+func TestReverseRateUncertainty(t *testing.T) {
+	res := analyzeText(t, `species H [H]
+species H2 [H][H]
+species propane CCC
+species propyl CC[CH2]
+species ethanol CCO
+  thermo-table
+    hf298 -56.2
+    s298 67.5
+    cp 300=15.7 1000=33.4
+species ethoxy CC[O]
+reaction propane + H <=> propyl + H2   A=1e14 n=0 Ea=9
+reaction propane + H => propyl + H2   A=1e14 n=0 Ea=9
+  duplicate
+reaction ethanol + H <=> ethoxy + H2   A=1e13 n=0 Ea=8
+reaction propyl + propane <=> propane + propyl   A=1e11 n=0 Ea=10
+reaction ethoxy + H2 <=> ethanol + H   A=1e12 n=0 Ea=10
+  reverse A=1e13 n=0 Ea=8
+`)
+	require.Len(t, res.Reactions, 5)
+	sig := func(name string) float64 { return res.ByName[name].Estimate.Uncertainty }
+	require.Positive(t, sig("propane"))
+	require.Positive(t, sig("propyl"))
+
+	// Two estimated species (H and H2 come from the reference library).
+	u, ok := res.ReverseRateUncertainty(res.Reactions[0], 1000)
+	require.True(t, ok)
+	want := math.Hypot(sig("propane"), sig("propyl"))
+	assert.InDelta(t, want, u.Sigma, 1e-9)
+	assert.InDelta(t, math.Exp(want/(kinetics.R*1000)), u.Factor, 1e-12)
+	assert.Equal(t, []string{"propane", "propyl"}, u.Estimated)
+
+	_, ok = res.ReverseRateUncertainty(res.Reactions[1], 1000)
+	assert.False(t, ok, "irreversible: no reverse rate")
+
+	// Ethanol's thermo comes from the file: only ethoxy's estimate counts.
+	u, ok = res.ReverseRateUncertainty(res.Reactions[2], 1000)
+	require.True(t, ok)
+	assert.InDelta(t, sig("ethoxy"), u.Sigma, 1e-9)
+	assert.Equal(t, []string{"ethoxy"}, u.Estimated)
+
+	// A species on both sides cancels.
+	u, ok = res.ReverseRateUncertainty(res.Reactions[3], 1000)
+	require.True(t, ok)
+	assert.Zero(t, u.Sigma)
+	assert.Equal(t, 1.0, u.Factor)
+
+	_, ok = res.ReverseRateUncertainty(res.Reactions[4], 1000)
+	assert.False(t, ok, "an explicit reverse rate does not come from thermo")
+}

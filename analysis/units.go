@@ -1,0 +1,104 @@
+package analysis
+
+import (
+	"fmt"
+
+	"kiln.dev/kiln/speciesfile"
+)
+
+// Units is how kiln shows energies and entropies to people: the one place
+// that chooses the unit, names it and converts to it. Messages, hovers,
+// inlay hints and the CLI's text output all go through it; JSON output and
+// the analysis itself stay in SI (J/mol, J/(mol K)).
+//
+// The display unit is the setting (--units, the editor's `units`) when it is
+// given, else the file's own energy unit: kJ/mol for `units kJ/mol` and
+// `units J/mol` files, kcal/mol otherwise. Entropies and heat capacities
+// follow: J/(mol·K) with kJ/mol, cal/(mol·K) with kcal/mol.
+type Units struct {
+	KJ bool // kJ/mol and J/(mol·K); else kcal/mol and cal/(mol·K)
+}
+
+// JoulesPerCalorie is the thermochemical calorie (exact by definition).
+const JoulesPerCalorie = 4.184
+
+// UnitsFor returns the display units for the settings and file f (nil: no
+// file, the setting or kcal/mol).
+func UnitsFor(s Settings, f *speciesfile.File) Units {
+	switch s.DisplayUnits {
+	case "kJ/mol":
+		return Units{KJ: true}
+	case "kcal/mol":
+		return Units{}
+	}
+	if f != nil && (f.EnergyUnit == "kJ/mol" || f.EnergyUnit == "J/mol") {
+		return Units{KJ: true}
+	}
+	return Units{}
+}
+
+// Units returns the display units of the analysed file.
+func (r *Result) Units() Units { return UnitsFor(r.Settings, r.File) }
+
+// EnergyName is "kcal/mol" or "kJ/mol".
+func (u Units) EnergyName() string {
+	if u.KJ {
+		return "kJ/mol"
+	}
+	return "kcal/mol"
+}
+
+// EntropyName is "cal/(mol·K)" or "J/(mol·K)".
+func (u Units) EntropyName() string {
+	if u.KJ {
+		return "J/(mol·K)"
+	}
+	return "cal/(mol·K)"
+}
+
+// EnergyValue converts an energy from J/mol to the display unit.
+func (u Units) EnergyValue(j float64) float64 {
+	if u.KJ {
+		return j / 1000
+	}
+	return j / (1000 * JoulesPerCalorie)
+}
+
+// EntropyValue converts an entropy or heat capacity from J/(mol K) to the
+// display unit.
+func (u Units) EntropyValue(v float64) float64 {
+	if u.KJ {
+		return v
+	}
+	return v / JoulesPerCalorie
+}
+
+// Energy writes an energy (J/mol) for people: "-56.21 kcal/mol" or
+// "-235.2 kJ/mol" (about 10 J/mol resolution in both).
+func (u Units) Energy(j float64) string {
+	if u.KJ {
+		return fmt.Sprintf("%.1f kJ/mol", u.EnergyValue(j))
+	}
+	return fmt.Sprintf("%.2f kcal/mol", u.EnergyValue(j))
+}
+
+// Entropy writes an entropy or heat capacity (J/(mol K)) for people:
+// "67.54 cal/(mol·K)" or "282.6 J/(mol·K)".
+func (u Units) Entropy(v float64) string {
+	if u.KJ {
+		return fmt.Sprintf("%.1f J/(mol·K)", v)
+	}
+	return fmt.Sprintf("%.2f cal/(mol·K)", u.EntropyValue(v))
+}
+
+// FormatEnergy writes v (J/mol) in the named display unit ("kcal/mol" or
+// "kJ/mol"); see Units.Energy.
+func FormatEnergy(v float64, units string) string {
+	return Units{KJ: units == "kJ/mol"}.Energy(v)
+}
+
+// FormatEntropy writes v (J/(mol K)) in the entropy unit that goes with the
+// named energy unit; see Units.Entropy.
+func FormatEntropy(v float64, units string) string {
+	return Units{KJ: units == "kJ/mol"}.Entropy(v)
+}

@@ -1,0 +1,147 @@
+package main
+
+import (
+	"bytes"
+	"encoding/json"
+	"fmt"
+	"io"
+	"math"
+	"sort"
+	"strconv"
+	"strings"
+)
+
+// JSON output conventions shared by every command: numbers are rounded to
+// 12 significant digits, so that binary float noise never shows
+// (68.664, not 68.66400000000003: the data behind them carry at most 6
+// significant digits); maps keyed by temperature or pressure list their keys
+// in numeric order.
+
+// jnum rounds v to 12 significant digits for output.
+func jnum(v float64) float64 {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return v
+	}
+	r, err := strconv.ParseFloat(strconv.FormatFloat(v, 'g', 12, 64), 64)
+	if err != nil {
+		return v
+	}
+	return r
+}
+
+// jptr is jnum for optional values.
+func jptr(p *float64) *float64 {
+	if p == nil {
+		return nil
+	}
+	return ptr(jnum(*p))
+}
+
+// numericKeys is a JSON object whose keys are numbers written as strings
+// ("300", "1000"): it marshals its keys in numeric order (encoding/json
+// would sort them as text: "1000" before "300").
+type numericKeys[V any] map[string]V
+
+// numericMap is the common case: optional numbers by temperature or
+// pressure (null for nil).
+type numericMap = numericKeys[*float64]
+
+// MarshalJSON implements json.Marshaler.
+func (m numericKeys[V]) MarshalJSON() ([]byte, error) {
+	if m == nil {
+		return []byte("null"), nil
+	}
+	keys := make([]string, 0, len(m))
+	for k := range m {
+		keys = append(keys, k)
+	}
+	sort.Slice(keys, func(i, j int) bool {
+		a, errA := strconv.ParseFloat(keys[i], 64)
+		b, errB := strconv.ParseFloat(keys[j], 64)
+		if errA != nil || errB != nil || a == b {
+			return keys[i] < keys[j]
+		}
+		return a < b
+	})
+	var buf bytes.Buffer
+	buf.WriteByte('{')
+	for i, k := range keys {
+		if i > 0 {
+			buf.WriteByte(',')
+		}
+		kb, err := json.Marshal(k)
+		if err != nil {
+			return nil, err
+		}
+		buf.Write(kb)
+		buf.WriteByte(':')
+		vb, err := json.Marshal(m[k])
+		if err != nil {
+			return nil, err
+		}
+		buf.Write(vb)
+	}
+	buf.WriteByte('}')
+	return buf.Bytes(), nil
+}
+
+// writeJSON writes v indented, as every --json output is, with every number
+// rounded to 12 significant digits (see jnum): the one place that decides
+// how kiln's JSON numbers look.
+func writeJSON(w io.Writer, v any) error {
+	var buf bytes.Buffer
+	enc := json.NewEncoder(&buf)
+	enc.SetIndent("", "  ")
+	if err := enc.Encode(v); err != nil {
+		return fmt.Errorf("writing output: %w", err)
+	}
+	if _, err := w.Write(roundNumbers(buf.Bytes())); err != nil {
+		return fmt.Errorf("writing output: %w", err)
+	}
+	return nil
+}
+
+// roundNumbers rewrites every number literal of a JSON text (outside
+// strings) that has more than 12 significant digits, as jnum rounds it;
+// other numbers keep their spelling.
+func roundNumbers(in []byte) []byte {
+	out := make([]byte, 0, len(in))
+	inString, escaped := false, false
+	for i := 0; i < len(in); i++ {
+		c := in[i]
+		if inString {
+			out = append(out, c)
+			switch {
+			case escaped:
+				escaped = false
+			case c == '\\':
+				escaped = true
+			case c == '"':
+				inString = false
+			}
+			continue
+		}
+		if c == '"' {
+			inString = true
+			out = append(out, c)
+			continue
+		}
+		if c == '-' || (c >= '0' && c <= '9') {
+			j := i + 1
+			for j < len(in) && strings.IndexByte("0123456789.eE+-", in[j]) >= 0 {
+				j++
+			}
+			lit := string(in[i:j])
+			if v, err := strconv.ParseFloat(lit, 64); err == nil {
+				if r := jnum(v); r != v {
+					lit = strconv.FormatFloat(r, 'g', -1, 64)
+				}
+			}
+			out = append(out, lit...)
+			i = j - 1
+			continue
+		}
+		out = append(out, c)
+	}
+	return out
+}

@@ -1,0 +1,58 @@
+package main
+
+import (
+	"encoding/json"
+	"fmt"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/engine/reflib"
+)
+
+// libraryMechanism writes a species file that declares every species of the
+// reference library by structure and multiplicity, without thermo.
+func libraryMechanism(t *testing.T) string {
+	t.Helper()
+	var b strings.Builder
+	b.WriteString("# every reference-library species, no thermo blocks (written by TestFillCheckLibrary)\n")
+	for i, s := range reflib.New().All() {
+		fmt.Fprintf(&b, "species lib%d %s\n  multiplicity %d\n  note %s\n", i+1, s.SMILES, s.Multiplicity, s.Name)
+	}
+	path := filepath.Join(t.TempDir(), "library.kiln")
+	require.NoError(t, os.WriteFile(path, []byte(b.String()), 0o644))
+	return path
+}
+
+// TestFillCheckLibrary: `kiln fill` then `kiln check` on a mechanism that
+// uses every reference-library species reports nothing above information:
+// what fill writes from the library, check accepts.
+func TestFillCheckLibrary(t *testing.T) {
+	path := libraryMechanism(t)
+	code, _, stderr := runKiln(t, "fill", path)
+	require.Equal(t, exitOK, code, stderr)
+	code, stdout, stderr := runKiln(t, "check", "--format", "json", path)
+	var diags []checkDiag
+	require.NoError(t, json.Unmarshal([]byte(stdout), &diags), stderr)
+	for _, d := range diags {
+		assert.Contains(t, []string{"information", "hint"}, d.Severity, "%+v", d)
+	}
+	assert.Equal(t, exitOK, code)
+}
+
+// TestDenoxExampleClean: the second shipped example (ammonia/NOx, chlorine
+// and sulfur chemistry) checks with no warning and no error.
+func TestDenoxExampleClean(t *testing.T) {
+	code, stdout, stderr := runKiln(t, "check", "--format", "json", "../../examples/denox.kiln")
+	require.Equal(t, exitOK, code, stderr)
+	var diags []checkDiag
+	require.NoError(t, json.Unmarshal([]byte(stdout), &diags))
+	require.NotEmpty(t, diags, "the species without thermo blocks report their estimates")
+	for _, d := range diags {
+		assert.Equal(t, "information", d.Severity, "%+v", d)
+	}
+}

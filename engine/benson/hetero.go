@@ -1,0 +1,256 @@
+package benson
+
+import (
+	_ "embed"
+
+	"kiln.dev/kiln/engine/molecule"
+)
+
+// Nitrogen, sulfur and halogen groups, nitrile, ketene and thiocarbonyl
+// carbons, hetero radical sites.
+//
+// Coverage (values and sources in groups_nsx.tsv, same columns as
+// groups.tsv, loaded into the one group table): amines, aniline, hydrazines,
+// primary amides, nitriles; thiols, sulfides, disulfides; F and Cl on sp3
+// carbon next to carbon, Br on primary carbon, F, Cl, Br on benzene rings;
+// ketenes. Radical sites on N and S and next to N, Cl and F take the bond
+// dissociation enthalpies of hbi_nsx.tsv (heteroSite), thiyl sites the loss
+// of the thiol's S–H rotor (heteroSiteChange). Carbons bearing two or more
+// halogens next to another heavy atom are flagged (addHalogenFlags).
+// Everything else with N, S or halogens is refused, naming the group.
+//
+// Three carbon types are added to the Benson types of graph.go:
+//
+//   - CN: a carbon triple-bonded to nitrogen (nitrile). Its ≡N is implied, as
+//     the ≡C partner of Ct is; it is the centre of one group, CN-(X), and a
+//     neighbour type "CN" in the groups of its neighbours (C-(CN)(H)3 …). The
+//     classic tables give composite cyano groups (the sp3 carbon together with
+//     its C≡N); they are split here by the convention used for every other
+//     unsaturated neighbour: C-(CN)(X)… = C-(C)(X)…, CN-(X) = the rest.
+//   - Ck: a cumulated carbon carrying =O (ketene, R2C=C=O). Both double-bond
+//     partners are implied, so its group has no written neighbours, like the
+//     allene centre Ca; the =CR2 end is an ordinary Cd group.
+//   - CS: a carbon double-bonded to sulfur (thiocarbonyl); its =S is implied
+//     as the =O of CO is. The tables have no CS group: such species are
+//     refused naming the group, and a user group makes them estimable.
+//
+// Terminal halogens and the nitrile N are ligands only (they centre no group),
+// as =O is; amine, amide and hydrazine nitrogen and divalent sulfur are group
+// centres N-(…)3 and S-(…)2.
+
+//go:embed groups_nsx.tsv
+var groupsNSXTSV string
+
+//go:embed hbi_nsx.tsv
+var hbiNSXTSV string
+
+// extraGroupTables are parsed after groups.tsv into the one group table;
+// a name present twice is a defect of the tables.
+var extraGroupTables = []struct{ file, text string }{
+	{"groups_nsx.tsv", groupsNSXTSV},
+}
+
+// heteroCarbonType returns CN for a nitrile carbon, CS for a thiocarbonyl
+// carbon (C=S, whose =S is implied like the =O of CO; the tables have no CS
+// group, so such species are refused naming the group, never estimated with
+// the sulfur left out) and Ck for a ketene carbon, and false for any other
+// atom.
+func (g *graph) heteroCarbonType(i int) (string, bool) {
+	doubles, toO := 0, false
+	for k, b := range g.nbrBond[i] {
+		j := g.nbr[i][k]
+		switch g.order(b) {
+		case 3:
+			if g.m.Atoms[j].Element == "N" {
+				return "CN", true
+			}
+		case 2:
+			doubles++
+			switch g.m.Atoms[j].Element {
+			case "O":
+				toO = true
+			case "S":
+				return "CS", true
+			}
+		}
+	}
+	if doubles == 2 && toO {
+		return "Ck", true
+	}
+	return "", false
+}
+
+// heteroClass names the validation class of a molecule with heteroatoms
+// other than oxygen: halogen (any F, Cl, Br, I), else sulfur, else nitrogen;
+// carbonyl for a C/H/O ketene; "" for other C/H/O molecules.
+func heteroClass(m *molecule.Molecule) string {
+	var n, s, x bool
+	for _, a := range m.Atoms {
+		switch a.Element {
+		case "F", "Cl", "Br", "I":
+			x = true
+		case "S":
+			s = true
+		case "N":
+			n = true
+		}
+	}
+	switch {
+	case x:
+		return "halogen"
+	case s:
+		return "sulfur"
+	case n:
+		return "nitrogen"
+	case ketene(m):
+		return "carbonyl" // a ketene is a carbonyl compound, not an ether
+	}
+	return ""
+}
+
+// ketene reports whether m has a carbon double-bonded to both O and C.
+func ketene(m *molecule.Molecule) bool {
+	for i, a := range m.Atoms {
+		if a.Element != "C" {
+			continue
+		}
+		toO, toC := false, false
+		for _, b := range m.Adj[i] {
+			if m.Bonds[b].Order != 2 {
+				continue
+			}
+			switch m.Atoms[m.Other(b, i)].Element {
+			case "O":
+				toO = true
+			case "C":
+				toC = true
+			}
+		}
+		if toO && toC {
+			return true
+		}
+	}
+	return false
+}
+
+// addHalogenFlags flags every group of a carbon that bears two or more
+// halogens and is bonded to another heavy atom (CHCl2–R, CCl3–R, CF3–R,
+// CF2<): such group values are those of the tables, which leave out the
+// halogen–halogen interactions across the C–R bond that make
+// polyhalogenated molecules non-additive (Cohen & Benson, Chem. Rev. 93
+// (1993), from memory); the validation set shows errors of 2–10 kcal/mol
+// for CCl3–, CF3– and C2Cl6 with them. The estimate is kept but flagged,
+// unless the user supplied the group (a `group` statement), which then
+// carries its own interactions.
+func addHalogenFlags(g *graph, l lookup, est *Result) {
+	for i, a := range g.m.Atoms {
+		if a.Element != "C" {
+			continue
+		}
+		halogens, others := 0, 0
+		for _, j := range g.nbr[i] {
+			switch g.m.Atoms[j].Element {
+			case "F", "Cl", "Br", "I":
+				halogens++
+			default:
+				others++
+			}
+		}
+		if halogens < 2 || others == 0 {
+			continue
+		}
+		centre, counts, ok := g.groupOf(i)
+		if !ok {
+			continue
+		}
+		name := groupName(centre, counts)
+		if _, user := l.user[name]; user {
+			continue
+		}
+		est.Missing = append(est.Missing, Missing{
+			Group:         name,
+			Approximation: name + " without halogen interactions",
+			Note:          "polyhalogenated carbon: no geminal/vicinal halogen interaction correction at hand; errors of several kcal/mol are possible",
+		})
+	}
+}
+
+// heteroSite classifies a radical site at or next to a heteroatom other
+// than O: aminyl (on N), thiyl (on S), alpha-amino, alpha-chloro and
+// alpha-fluoro (on an sp3 carbon bonded to N, Cl or F). missing names the
+// approximation when the site only resembles the increment used (a
+// secondary aminyl, an α-bromo site). ok is false for any other site.
+func heteroSite(g *graph, i int) (site, missing string, ok bool) {
+	switch g.m.Atoms[i].Element {
+	case "N":
+		carbons := 0
+		for _, j := range g.nbr[i] {
+			if g.isCarbon(j) {
+				carbons++
+			}
+		}
+		if carbons > 1 || len(g.nbr[i]) != carbons {
+			return "aminyl", "aminyl site other than R–NH (CH3NH–H increment used)", true
+		}
+		return "aminyl", "", true
+	case "S":
+		if len(g.nbr[i]) == 1 && g.isCarbon(g.nbr[i][0]) {
+			return "thiyl", "", true
+		}
+		return "thiyl", "thiyl site other than R–S (CH3S–H increment used)", true
+	case "C":
+		if g.typ[i] != "C" {
+			return "", "", false
+		}
+		for _, j := range g.nbr[i] {
+			switch g.m.Atoms[j].Element {
+			case "N":
+				return "alpha-amino", "", true
+			case "Cl":
+				return "alpha-chloro", "", true
+			case "F":
+				return "alpha-fluoro", "", true
+			case "Br", "I":
+				return "alpha-chloro", "α-bromo or α-iodo radical site (ClCH2–H increment used)", true
+			}
+		}
+	}
+	return "", "", false
+}
+
+// partnerElement returns the neighbour of i of the given element joined by a
+// bond of the given order, or -1.
+func (g *graph) partnerElement(i, order int, element string) int {
+	for k, b := range g.nbrBond[i] {
+		if j := g.nbr[i][k]; g.order(b) == order && g.m.Atoms[j].Element == element {
+			return j
+		}
+	}
+	return -1
+}
+
+// Thiyl radical sites (RS•) lose the parent thiol's S–H internal rotor: the
+// S–H torsion of CH3SH is a nearly free rotor (barrier ≈ 1.3 kcal/mol,
+// reduced moment ≈ 0.9 amu·Å², from memory), whose entropy is about
+// thiolRotorS without its symmetry number (free rotor 4.5, less Pitzer's
+// hindrance correction at V₀/RT ≈ 2), and whose Cp excess fades from about
+// 1.6 cal/(mol K) at 300 K to the free-rotor R/2 at high temperature
+// (common practice). The lost X–H vibrations (radical.go, lostModes) carry
+// no torsion, so the rotor is removed here, as the O–H rotor is for alkoxy.
+const thiolRotorS = 4.2 // cal/(mol K)
+
+var thiolRotorCp = [7]float64{1.6, 1.4, 1.3, 1.2, 1.1, 1.05, 1.0} // cal/(mol K) at StdTemps
+
+// heteroSiteChange returns the entropy and Cp change (J/(mol K)) of a
+// hetero radical site beyond its lost X–H vibrations, and false for sites
+// with none.
+func heteroSiteChange(g *graph, i int, site string) (float64, [7]float64, bool) {
+	var cp [7]float64
+	if site != "thiyl" || g.m.Atoms[i].Element != "S" || len(g.nbr[i]) != 1 {
+		return 0, cp, false
+	}
+	for k := range cp {
+		cp[k] = -thiolRotorCp[k] * calorie
+	}
+	return -thiolRotorS * calorie, cp, true
+}

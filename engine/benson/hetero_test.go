@@ -1,0 +1,193 @@
+package benson
+
+import (
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/engine/molecule"
+)
+
+func heteroEstimate(t *testing.T, smi string) *Result {
+	t.Helper()
+	m, err := molecule.ParseSMILES(smi)
+	require.NoError(t, err, smi)
+	e, err := Estimate(m, Options{})
+	require.NoError(t, err, smi)
+	return e
+}
+
+func groupNames(e *Result) []string {
+	var out []string
+	for _, g := range e.Groups {
+		out = append(out, g.Name)
+	}
+	return out
+}
+
+// Every heavy atom of these molecules is the centre of one group or a ligand
+// the groups name (terminal halogen, nitrile N, carbonyl O): the groups are
+// exactly those listed, with no approximation.
+func TestHeteroGroupsAssigned(t *testing.T) {
+	cases := []struct {
+		smiles string
+		groups []string
+	}{
+		{"CCl", nil}, // C-(Cl)(H)3 has no value: refused (see TestHeteroRefusals)
+		{"CCCl", []string{"C-(C)(H)3", "C-(Cl)(C)(H)2"}},
+		{"CC#N", []string{"C-(CN)(H)3", "CN-(C)"}},
+		{"C=CC#N", []string{"Cd-(H)2", "Cd-(CN)(H)", "CN-(Cd)"}},
+		{"CCN", []string{"C-(C)(H)3", "C-(N)(C)(H)2", "N-(C)(H)2"}},
+		{"CC(N)=O", []string{"C-(CO)(H)3", "CO-(N)(C)", "N-(CO)(H)2"}},
+		{"CSSC", []string{"C-(S)(H)3", "S-(S)(C)"}},
+		{"CCS", []string{"C-(C)(H)3", "C-(S)(C)(H)2", "S-(C)(H)"}},
+		{"C=C=O", []string{"Cd-(H)2", "Ck"}},
+		{"CC=C=O", []string{"C-(Cd)(H)3", "Cd-(C)(H)", "Ck"}},
+		{"Clc1ccccc1", []string{"Cb-(H)", "Cb-(Cl)"}},
+	}
+	for _, c := range cases {
+		if c.groups == nil {
+			continue
+		}
+		e := heteroEstimate(t, c.smiles)
+		assert.ElementsMatch(t, c.groups, groupNames(e), c.smiles)
+		assert.Empty(t, e.Missing, c.smiles)
+	}
+}
+
+// Ketene estimated from groups reproduces the library ketene the Ck group
+// was derived from (to rounding of the table: 0.01 kcal/mol, 0.01 cal/(mol K)).
+func TestKeteneFromGroups(t *testing.T) {
+	e := heteroEstimate(t, "C=C=O")
+	assert.InDelta(t, -11.40, e.Hf298/calorie/1000, 0.01)
+	assert.InDelta(t, 57.81, e.S298/calorie, 0.01)
+	assert.Equal(t, 2, e.SymmetryNumber)
+}
+
+// Structures whose groups are not in the tables are refused with the group
+// named, never estimated without it.
+func TestHeteroRefusals(t *testing.T) {
+	for _, smi := range []string{"CNCl", "c1ccncc1", "CS(C)=O", "NC#CC#N", "CC(Cl)=O", "C=CCl", "C=S", "CC(C)=S", "C=C=S", "CC(=S)OC", "C=NC", "CC#CC#N"} {
+		m, err := molecule.ParseSMILES(smi)
+		require.NoError(t, err)
+		_, err = Estimate(m, Options{})
+		if assert.Error(t, err, smi) {
+			assert.True(t, strings.Contains(err.Error(), "group") || strings.Contains(err.Error(), "outside"), "%s: %v", smi, err)
+		}
+	}
+}
+
+// The class of a heteroatom compound is its element class.
+func TestHeteroClass(t *testing.T) {
+	assert.Equal(t, "halogen", heteroEstimate(t, "CCCl").Class)
+	assert.Equal(t, "sulfur", heteroEstimate(t, "CCS").Class)
+	assert.Equal(t, "nitrogen", heteroEstimate(t, "CCN").Class)
+	assert.Equal(t, "alkane", heteroEstimate(t, "CCC").Class)
+}
+
+// Radical sites at and next to N, S and halogens take their own
+// bond-dissociation increments; sites the table only approximates say so.
+func TestHeteroRadicalSites(t *testing.T) {
+	cases := []struct {
+		smiles, site string
+		flagged      bool
+	}{
+		{"C[S]", "thiyl", false},
+		{"CC[S]", "thiyl", false},
+		{"C[NH]", "aminyl", false},
+		{"C[N]C", "aminyl", true},
+		{"[CH2]N", "alpha-amino", false},
+		{"CC[CH]Cl", "alpha-chloro", false},
+		{"C[CH]F", "alpha-fluoro", false},
+		{"[CH2]CBr", "primary", false},
+		{"C[CH]Br", "alpha-chloro", true},
+	}
+	for _, c := range cases {
+		e := heteroEstimate(t, c.smiles)
+		assert.Equal(t, 1, correctionCount(e, "HBI: "+c.site), "%s: %v", c.smiles, e.Corrections)
+		flagged := false
+		for _, m := range e.Missing {
+			if strings.HasPrefix(m.Group, "HBI: ") && !strings.HasPrefix(m.Group, "HBI dS") {
+				flagged = true
+			}
+		}
+		assert.Equal(t, c.flagged, flagged, "%s: %v", c.smiles, e.Missing)
+	}
+}
+
+// TestHeteroAtomAccounting estimates a generated set of N, S and halogen
+// structures and checks, for every estimate made, that no heavy atom is
+// left out: the groups' counts add up to the polyvalent heavy atoms, and
+// every terminal heavy atom is a halogen ligand of a carbon group or the
+// implied partner of a CO, CN, CS or Ck centre. Refusals are allowed.
+func TestHeteroAtomAccounting(t *testing.T) {
+	skeletons := []string{"C%s", "CC%s", "CC(C)%s", "CC(C)(C)%s", "C=C%s", "C=CC%s", "CC(=O)%s", "c1ccccc1%s",
+		"C#CC%s", "CCC(=O)C%s", "C1CCC1%s", "C%sC", "CC(%s)CC", "[CH2]C%s", "C[CH]C%s", "[CH2]%s"}
+	subs := []string{"F", "Cl", "Br", "I", "N", "NC", "N(C)C", "NN", "S", "SC", "SSC", "C#N", "C(=O)N", "C(N)=O",
+		"[N+](=O)[O-]", "C=S", "N=O", "OC#N", "N=C=O", "C(F)(F)F", "C(Cl)Cl", "C=C=O", "C(=O)Cl", "P", "[Si]"}
+	estimated, refused := 0, 0
+	for _, sk := range skeletons {
+		for _, sub := range subs {
+			smi := strings.Replace(sk, "%s", sub, 1)
+			m, err := molecule.ParseSMILES(smi)
+			if err != nil {
+				continue // not a valid structure; the reader reports it
+			}
+			e, err := Estimate(m, Options{})
+			if err != nil {
+				refused++
+				continue
+			}
+			estimated++
+			g := newGraph(m)
+			centres := 0
+			for _, term := range e.Groups {
+				centres += term.Count
+			}
+			poly := 0
+			for i, a := range m.Atoms {
+				if len(g.nbr[i])+a.HCount >= 2 {
+					poly++
+					continue
+				}
+				if len(g.nbr[i]) != 1 {
+					continue // an isolated atom is a library matter
+				}
+				j := g.nbr[i][0]
+				switch a.Element {
+				case "F", "Cl", "Br", "I":
+					assert.True(t, g.isCarbon(j), "%s: halogen on %s", smi, g.typ[j])
+				case "O", "S", "N":
+					switch g.typ[j] {
+					case "CO", "CN", "CS", "Ck":
+					default:
+						t.Errorf("%s: terminal %s on %s is in no group", smi, a.Element, g.typ[j])
+					}
+				default:
+					t.Errorf("%s: terminal %s is in no group", smi, a.Element)
+				}
+			}
+			assert.Equal(t, poly, centres, "%s: groups %v", smi, groupNames(e))
+		}
+	}
+	t.Logf("%d estimated, %d refused", estimated, refused)
+	assert.Greater(t, estimated, 100)
+}
+
+// A thiyl radical loses its parent thiol's S–H rotor (thiolRotorS): CH3S•
+// comes out 4.2 cal/(mol K) below CH3SH plus R ln 2 and the lost
+// vibrations, not at the thiol's entropy.
+func TestThiylRotorLoss(t *testing.T) {
+	rad := heteroEstimate(t, "C[S]")
+	found := false
+	for _, c := range rad.Corrections {
+		if strings.HasPrefix(c.Name, "radical site: inversion") {
+			found = true
+			assert.InDelta(t, -thiolRotorS*calorie, c.S298, 1e-9)
+			assert.InDelta(t, -thiolRotorCp[0]*calorie, c.Cp[0], 1e-9)
+		}
+	}
+	assert.True(t, found, "%v", rad.Corrections)
+}

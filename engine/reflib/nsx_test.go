@@ -1,0 +1,157 @@
+package reflib
+
+import (
+	"math"
+	"os"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/engine/molecule"
+)
+
+// TestNASA9Entered checks every NASA-9 entry against itself, which catches
+// a mistyped coefficient: the low block with b1 must give the published
+// ΔHf°298 at 298.15 K (within 5 J/mol + 10 ppm: the compilation's gas constant,
+// 8.31451 J/(mol K), differs from CODATA 2018 by 6 ppm), and
+// the two blocks must meet at 1000 K in Cp, H and S (within 0.05 % of Cp,
+// 5 J/mol of H, 0.01 J/(mol K) of S: the published blocks are constrained to
+// be continuous there and are printed to ten significant digits).
+func TestNASA9Entered(t *testing.T) {
+	n := 0
+	for _, e := range nsxEntries {
+		if e.n9 == nil {
+			continue
+		}
+		n++
+		assert.InDelta(t, e.hf298, e.n9.h(298.15), 5+1e-5*math.Abs(e.hf298), "%s: ΔHf°298 implied by the low block and b1", e.name)
+		lo, hi := nasa9{lo: e.n9.lo, hi: e.n9.lo}, nasa9{lo: e.n9.hi, hi: e.n9.hi}
+		assert.InEpsilon(t, lo.cp(1000), hi.cp(1000), 5e-4, "%s: Cp at 1000 K", e.name)
+		assert.InDelta(t, lo.h(1000), hi.h(1000), 5, "%s: H at 1000 K", e.name)
+		assert.InDelta(t, lo.s(1000), hi.s(1000), 0.01, "%s: S at 1000 K", e.name)
+	}
+	assert.Greater(t, n, 20)
+}
+
+// TestNASA9Refit checks the NASA-7 refit of every NASA-9 entry against the
+// NASA-9 Cp at every 50 K from 300 K to the top of its range: within 0.5 %
+// (the agreement the library asks of a polynomial with its table over
+// 300–3000 K in TestAgreesWithJANAF).
+func TestNASA9Refit(t *testing.T) {
+	lib := New()
+	byName := map[string]Species{}
+	for _, s := range lib.All() {
+		byName[s.Name] = s
+	}
+	for _, e := range nsxEntries {
+		if e.n9 == nil {
+			continue
+		}
+		s, ok := byName[e.name]
+		require.True(t, ok, e.name)
+		worst, at := 0.0, 0.0
+		for T := 300.0; T <= e.tHigh; T += 50 {
+			if d := math.Abs(s.Poly.Cp(T)/e.n9.cp(T) - 1); d > worst {
+				worst, at = d, T
+			}
+		}
+		assert.Less(t, worst, 0.005, "%s: NASA-7 refit Cp off by %.3g %% at %g K", e.name, 100*worst, at)
+	}
+}
+
+// TestLibraryAgainstTables compares every N, S and halogen library species
+// that has a row in testdata/thermo/nsx_library.tsv with the values typed
+// there from the published tables: ΔHf°298 within 0.1 kcal/mol (0.418
+// kJ/mol), S°298 within 0.1 cal/(mol K) (0.418 J/(mol K)), Cp°298 within
+// 1 % (table values from memory are good to about that).
+func TestLibraryAgainstTables(t *testing.T) {
+	path := filepath.Join("..", "..", "testdata", "thermo", "nsx_library.tsv")
+	data, err := os.ReadFile(path)
+	require.NoError(t, err, "the reference table must exist; this test must not pass vacuously")
+	byName := map[string]Species{}
+	for _, s := range New().All() {
+		byName[s.Name] = s
+	}
+	rows := 0
+	for _, line := range strings.Split(string(data), "\n") {
+		if line == "" || strings.HasPrefix(line, "#") || strings.HasPrefix(line, "name\t") {
+			continue
+		}
+		f := strings.Split(line, "\t")
+		require.Len(t, f, 5, "row %q", line)
+		s, ok := byName[f[0]]
+		if !assert.True(t, ok, "%s is not in the library", f[0]) {
+			continue
+		}
+		rows++
+		if v, ok := cell(t, f[1]); ok {
+			assert.InDelta(t, v, s.Hf298/1000, 0.418, "%s ΔHf°298 (kJ/mol) [%s]", s.Name, f[4])
+		}
+		if v, ok := cell(t, f[2]); ok {
+			assert.InDelta(t, v, s.S298, 0.418, "%s S°298 (J/(mol K)) [%s]", s.Name, f[4])
+		}
+		if v, ok := cell(t, f[3]); ok {
+			assert.InEpsilon(t, v, s.Poly.Cp(298.15), 0.01, "%s Cp°298 (J/(mol K)) [%s]", s.Name, f[4])
+		}
+	}
+	assert.GreaterOrEqual(t, rows, 30)
+}
+
+func cell(t *testing.T, s string) (float64, bool) {
+	t.Helper()
+	if strings.TrimSpace(s) == "" {
+		return 0, false
+	}
+	v, err := strconv.ParseFloat(strings.TrimSpace(s), 64)
+	require.NoError(t, err, s)
+	return v, true
+}
+
+// TestLookupNSX: the N, S and halogen entries are found from any spelling
+// of their structure, in their ground state when no multiplicity is given,
+// and not in a spin state the library lacks.
+func TestLookupNSX(t *testing.T) {
+	lib := New()
+	cases := []struct {
+		smiles string
+		mult   int
+		want   string
+	}{
+		{"[N]", 0, "N"}, {"[N]", 4, "N"}, {"[N]", 2, ""},
+		{"[NH]", 0, "NH"}, {"[NH]", 1, ""},
+		{"N=[N]", 0, "NNH"}, {"O=N", 0, "HNO"}, {"N(=O)O", 0, "HONO"},
+		{"[O-][N+](=O)O", 0, "HNO3"}, {"N#C", 0, "HCN"}, {"N#[C]", 0, "CN"},
+		{"O=C=N", 0, "HNCO"}, {"N#CO", 0, "HOCN"}, {"O=C=[N]", 0, "NCO"},
+		{"C=C=O", 0, "CH2CO"}, {"C#C[O]", 0, "HCCO"}, {"O=C=[CH]", 0, "HCCO"}, {"C#[C]", 0, "C2H"},
+		{"S=O", 0, "SO"}, {"O=S", 3, "SO"}, {"O=S=O", 0, "SO2"}, {"O=S(=O)=O", 0, "SO3"},
+		{"[C]=S", 0, "CS"}, {"S=C=S", 0, "CS2"}, {"S=C=O", 0, "COS"}, {"[SH]", 0, "SH"}, {"S", 0, "H2S"},
+		{"Cl", 0, "HCl"}, {"[Cl]", 0, "Cl"}, {"ClCl", 0, "Cl2"}, {"Cl[O]", 0, "ClO"}, {"ClO", 0, "HOCl"},
+		{"ClC(Cl)=O", 0, "COCl2"}, {"FC(F)(F)F", 0, "CF4"}, {"ClC", 0, "CH3Cl"}, {"Cl[CH2]", 0, "CH2Cl"},
+		{"NN", 0, "N2H4"}, {"N#CC#N", 0, "C2N2"}, {"O=C=[C]", 0, "C2O"}, {"O=[N+]([O-])[O]", 0, "NO3"},
+		{"CCl", 3, ""}, {"CCCl", 0, ""},
+	}
+	for _, c := range cases {
+		m, err := molecule.ParseSMILES(c.smiles)
+		require.NoError(t, err, c.smiles)
+		s, ok := lib.Lookup(m, c.mult)
+		if c.want == "" {
+			assert.False(t, ok, "%s ×%d found %v", c.smiles, c.mult, s)
+			continue
+		}
+		if assert.True(t, ok, "%s ×%d", c.smiles, c.mult) {
+			assert.Equal(t, c.want, s.Name, c.smiles)
+		}
+	}
+}
+
+// BenchmarkBuild measures building the library (index and NASA-9 refits),
+// which New does once per process.
+func BenchmarkBuild(b *testing.B) {
+	for i := 0; i < b.N; i++ {
+		build()
+	}
+}
