@@ -23,8 +23,8 @@
 // the loaded tables hold, so new group files extend the scope with no code
 // change (groups.tsv for C/H/O, groups_nsx.tsv for N, S, F, Cl and Br; see
 // hetero.go). Anything else — an element or environment without groups, a
-// molecule too small to have groups, a charged atom, a multiplicity other
-// than the one the structure implies — is refused with an *UnsupportedError
+// molecule too small to have groups, a charged or isotope-labelled atom, a
+// multiplicity other than the one the structure implies — is refused with an *UnsupportedError
 // (or a *MissingGroupError naming a group the user could supply); no atom is
 // ever left out of the sum. Groups with a stand-in, ring systems without a
 // correction (rings.go, ringsys.go) and radical sites without increments
@@ -142,6 +142,12 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	for i, a := range m.Atoms {
 		if a.Charge != 0 {
 			return nil, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d: charged species are outside group additivity — give the species a thermo block", a.Element, a.Charge)}
+		}
+		if a.Isotope != 0 {
+			// Group values are for natural isotopic composition; a label
+			// changes zero-point energies, masses and symmetry, which no
+			// table here covers.
+			return nil, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%d%s) is isotope-labelled: the reference library holds no labelled species and group values are for natural isotopic composition — give the species a thermo block", a.Isotope, a.Element)}
 		}
 	}
 	unpaired := 0
