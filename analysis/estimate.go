@@ -171,12 +171,31 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		}
 		return nil, err
 	}
+	if err := physical(g); err != nil {
+		return nil, err
+	}
 	e := &Estimate{Group: g, Hf298: g.Hf298, S298: g.S298, Cp: g.Cp, Uncertainty: g.Uncertainty,
 		fit: &fitResult{}, tMid: o.TMid, tHigh: o.THigh}
 	nAtoms, linear, rotors := shape(m)
 	e.cp0, e.cpInf = nasa.ClassicalLimits(nAtoms, linear, rotors)
 	e.model = newGroupThermo(g.Hf298, g.S298, benson.StdTemps[:], g.Cp[:])
 	return e, nil
+}
+
+// physical refuses a group-additivity result no gas can have: S°298 ≤ 0 or
+// Cp ≤ 0 at a tabulated temperature. Group values alone do not produce one;
+// an override such as `symmetry 99999999999999` (S falls by R ln σ) does,
+// and a number that cannot be true is not reported as an estimate.
+func physical(g *benson.Result) error {
+	if !(g.S298 > 0) {
+		return fmt.Errorf("the estimate is not physical: S°298 = %.2f J/(mol K) ≤ 0 (symmetry number %d, optical isomers %d: check any symmetry or optical-isomers override)", g.S298, g.SymmetryNumber, g.OpticalIsomers)
+	}
+	for i, cp := range g.Cp {
+		if !(cp > 0) {
+			return fmt.Errorf("the estimate is not physical: Cp(%g K) = %.2f J/(mol K) ≤ 0", benson.StdTemps[i], cp)
+		}
+	}
+	return nil
 }
 
 // shape returns the total atom count (with hydrogens), whether the molecule

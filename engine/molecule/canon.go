@@ -24,6 +24,7 @@ type cgraph struct {
 	idx, next []int
 	cnt       []int
 	rep, size []int // scratch of traceInto
+	ind       []int // scratch of child
 	tbuf      []int // scratch trace for comparisons
 	n         int
 	nbr       [][]int
@@ -234,7 +235,13 @@ func discrete(rank []int, seen []bool) bool {
 }
 
 func individualize(rank []int, v int) []int {
-	out := slices.Clone(rank)
+	return individualizeInto(make([]int, len(rank)), rank, v)
+}
+
+// individualizeInto writes into out (len(rank)) the partition rank with atom
+// v split off in front of its cell, and returns out.
+func individualizeInto(out, rank []int, v int) []int {
+	copy(out, rank)
 	r := rank[v]
 	for a, x := range rank {
 		if x == r && a != v {
@@ -340,7 +347,11 @@ func (s *search) step() bool {
 }
 
 func (s *search) child(node []int, v int) []int {
-	return s.g.refine(individualize(node, v))
+	g := s.g
+	if len(g.ind) < g.n {
+		g.ind = make([]int, g.n)
+	}
+	return g.refine(individualizeInto(g.ind[:g.n], node, v))
 }
 
 // orbitsFixing returns a union-find root array of the orbits of the group

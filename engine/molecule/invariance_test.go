@@ -64,6 +64,8 @@ var invarianceSet = []string{
 	"C/C=C/C", "C/C=C\\C", "CC=C=CC", "C=CC=C", "CC(C)(C)O[O]", "C[CH]C", "CC(=O)O",
 	"N[C@@H](C)C(=O)O", "C[C@H](O)[C@@H](C)O",
 	"CC.CC.CC", "c1ccccc1.c1ccccc1",
+	"C[C@H]1CC[C@H](C)CC1", "C[C@H]1CC[C@@H](C)CC1", "C[C@H]1C[C@@H]1C", "C[C@H]1C[C@H]1C",
+	"F/C=C/C=C/F", "F/C=C\\C=C/F", "C[C@@H]1CC2CCC1C2",
 }
 
 // TestSpellingInvariance respells every molecule of invarianceSet at random

@@ -2,6 +2,15 @@
 // atoms with their implicit hydrogens, bonds with Kekulé orders and aromatic
 // flags, rings, radical centres, identity (a canonical form) and graph symmetry.
 // It reads OpenSMILES (see ParseSMILES) and does no I/O.
+//
+// Everything derived from a molecule depends only on its structure, never on
+// how it was written: the canonical forms, symmetry classes, the symmetry
+// number σ (SymmetryNumber, one bounded computation for every structure),
+// optical isomers and the ring description (RingSystemInfo). Molecules are
+// immutable; derived forms (closed-shell parent, resonance structures) come
+// from constructors. Every per-structure computation is bounded: searches
+// have a work budget and report ErrWorkLimit instead of guessing, and the
+// Context variants honour cancellation.
 package molecule
 
 import "sync"

@@ -74,9 +74,13 @@ const maxSeeds = 64
 //     bridged bicycles (at most nine atoms) have both bridgeheads "out".
 //  4. Identical '.'-separated components multiply σ by k! for k copies.
 //
-// Stereo marks (@, @@, /, \) are not used: σ is that of the most symmetric
-// stereoisomer of the constitution (a meso form counts as its more symmetric
-// chiral diastereomer, e.g. 2,3-dichlorobutane 18 instead of 9). Branches on
+// Written configurations are used inside rigid fragments: tetrahedral
+// centres marked @/@@ (@TH1/@TH2) and double bonds marked / \ fix their
+// configuration relative to each other (cis-1,4-dimethylcyclohexane 9,
+// trans 18), and the exchange of two identical halves across a central
+// rotatable bond counts only when it keeps the written @/@@ marks (meso- and
+// dl-2,3-dichlorobutane: 9 and 18). Unmarked units take the most symmetric
+// choice (unmarked 2,3-dichlorobutane: 18). Branches on
 // one atom count as alike when colour refinement with that atom singled out
 // cannot tell them apart (exact for trees; graphs that refinement cannot
 // separate are not expected in chemistry). Work is bounded: the symmetry
@@ -93,32 +97,42 @@ func (m *Molecule) SymmetryNumber() (*big.Int, error) {
 // SymmetryNumberContext is SymmetryNumber with cancellation: it returns
 // ctx.Err() (wrapped) if ctx is done before the result is known.
 func (m *Molecule) SymmetryNumberContext(ctx context.Context) (*big.Int, error) {
+	return m.symmetryNumber(ctx, DefaultSearchWork)
+}
+
+// symmetryNumber is SymmetryNumberContext with a work budget (atom
+// refinements): the whole-molecule search gets it, and the fragment searches
+// share another budget of the same size.
+func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, error) {
 	if len(m.Atoms) == 0 {
 		return big.NewInt(1), nil
 	}
-	info, err := m.symmetryInfo(ctx)
+	info, err := m.symmetryInfo(ctx, budget)
 	if err != nil {
 		return nil, err
 	}
 	classes := orbitClasses(len(m.Atoms), info.gens, info.labels)
 	sc := newSigmaCalc(ctx, m, classes)
+	sc.budget = budget
+	sc.gens = info.gens
 	return sc.total()
 }
 
 // symmetryInfo returns the full symmetry analysis of m (cached when m came
-// from ParseSMILES), or an error when the search budget ran out.
-func (m *Molecule) symmetryInfo(ctx context.Context) (symmetryInfo, error) {
+// from ParseSMILES and the budget is the default), or an error when the
+// search budget ran out.
+func (m *Molecule) symmetryInfo(ctx context.Context, budget int) (symmetryInfo, error) {
 	var info symmetryInfo
-	if d := m.cache(); d != nil {
+	if d := m.cache(); d != nil && budget == DefaultSearchWork {
 		info = d.info
 	} else {
-		info = m.symmetryCtx(ctx, DefaultSearchWork, true)
+		info = m.symmetryCtx(ctx, budget, true)
 	}
 	if err := ctx.Err(); err != nil {
 		return info, fmt.Errorf("symmetry of %q: %w", m.SMILES, err)
 	}
 	if !info.exact {
-		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, DefaultSearchWork)
+		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, budget)
 	}
 	return info, nil
 }
@@ -151,13 +165,18 @@ type sigmaCalc struct {
 	n       int
 	classes []int
 	rot     []bool // per bond: rotatable
+	inRing  []bool // per bond: on a ring
 	frag    []int  // per atom: fragment index
 	frags   [][]int
 	g       *cgraph // whole molecule, for branch classes
 	root    []int   // refined initial partition of g
 	local   []int
 	lp      []int
-	virtual []bool // per atom: cage atom with a virtual outward ligand
+	virtual []bool  // per atom: cage atom with a virtual outward ligand
+	budget  int     // refinement steps left for the fragment searches
+	gens    [][]int // generators of the whole molecule's automorphism group
+	elems   [][]int // its elements, enumerated on demand (at most 5001)
+	marked  []int   // atoms with a written tetrahedral mark, nil until known
 	// parent bond of the fragment being analysed
 	pAtom, pNbr int
 }
@@ -166,6 +185,7 @@ func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 	n := len(m.Atoms)
 	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: make([]int, n), lp: make([]int, n), virtual: make([]bool, n)}
 	inRing := m.ringBondFlags()
+	sc.inRing = inRing
 	sc.rot = make([]bool, len(m.Bonds))
 	parent := make([]int, n)
 	for i := range parent {
@@ -339,7 +359,7 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 			}
 		}
 		u, v := m.Bonds[cb].A, m.Bonds[cb].B
-		if sc.classes[u] == sc.classes[v] {
+		if sc.classes[u] == sc.classes[v] && sc.swapKeepsMarks(u, v) {
 			sigma.SetInt64(2)
 		}
 		queue = append(queue, item{sc.frag[u], u, v}, item{sc.frag[v], v, u})
@@ -385,20 +405,7 @@ func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 			out = append(out, colParent)
 			continue
 		}
-		dup := false
-		for _, b2 := range m.Adj[i] {
-			if w := m.Other(b2, i); b2 != b && sc.rot[b2] && sc.classes[w] == sc.classes[v] && !(i == sc.pAtom && w == sc.pNbr) {
-				dup = true
-			}
-		}
-		c := sc.classes[v] * (sc.n + 1)
-		if dup {
-			if ranks == nil {
-				ranks = sc.refinedAt(i)
-			}
-			c += ranks[v] + 1
-		}
-		out = append(out, c)
+		out = append(out, sc.branchColour(i, v, &ranks))
 	}
 	for k := 0; k < m.Atoms[i].HCount; k++ {
 		out = append(out, colH)
@@ -409,6 +416,112 @@ func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 		}
 	}
 	slices.Sort(out)
+	return out
+}
+
+// branchColour is the colour of the branch across the rotatable bond from
+// atom i to its neighbour v (not the parent): its orbit class, refined by
+// the partition with i singled out when another branch of i shares the
+// class. *ranks caches that partition for atom i.
+func (sc *sigmaCalc) branchColour(i, v int, ranks *[]int) int {
+	m := sc.m
+	dup := false
+	for _, b2 := range m.Adj[i] {
+		if w := m.Other(b2, i); w != v && sc.rot[b2] && sc.classes[w] == sc.classes[v] && !(i == sc.pAtom && w == sc.pNbr) {
+			dup = true
+		}
+	}
+	c := sc.classes[v] * (sc.n + 1)
+	if dup {
+		if *ranks == nil {
+			*ranks = sc.refinedAt(i)
+		}
+		c += (*ranks)[v] + 1
+	}
+	return c
+}
+
+// positionCode is the position code (see centrePositions) of neighbour v of
+// atom i in the current fragment; v < 0 stands for a hydrogen.
+func (sc *sigmaCalc) positionCode(i, v int) int {
+	if v < 0 {
+		return -(colH + 10)
+	}
+	b := sc.m.BondBetween(i, v)
+	if b < 0 {
+		return 1 << 30
+	}
+	if !sc.rot[b] {
+		return v
+	}
+	if i == sc.pAtom && v == sc.pNbr {
+		return -(colParent + 10)
+	}
+	var ranks []int
+	return -(sc.branchColour(i, v, &ranks) + 10)
+}
+
+// writtenStereo returns the configuration equations {unit, ground, bit} of
+// the units whose configuration the SMILES states: tetrahedral centres marked
+// @/@@ (or @TH1/@TH2) and double bonds marked with / and \. The bit is the
+// written configuration relative to the unit's reference; ground is a
+// virtual unit, so only the relative configurations count (a molecule and
+// its mirror image have the same σ).
+func (sc *sigmaCalc) writtenStereo(units []unit, ground int) [][3]int {
+	m := sc.m
+	var out [][3]int
+	var ct []CisTrans
+	ctDone := false
+	for k, u := range units {
+		switch u.kind {
+		case 't':
+			a := m.Atoms[u.x]
+			odd := 0
+			switch a.Chirality {
+			case "@", "@TH1":
+			case "@@", "@TH2":
+				odd = 1
+			default:
+				continue
+			}
+			if u.x >= len(m.nbrOrder) || len(m.nbrOrder[u.x]) != 4 || sc.virtual[u.x] {
+				continue
+			}
+			pos := sc.centrePositions(u.x)
+			p := make([]int, 4)
+			for i, v := range m.nbrOrder[u.x] {
+				p[i] = slices.Index(pos, sc.positionCode(u.x, v))
+			}
+			if !isPerm(p) {
+				continue
+			}
+			out = append(out, [3]int{k, ground, permParity(p) ^ odd})
+		case 'd':
+			if !ctDone {
+				ct, ctDone = m.DoubleBondStereo(), true
+			}
+			for _, c := range ct {
+				bd := m.Bonds[c.Bond]
+				if !((bd.A == u.x && bd.B == u.y) || (bd.A == u.y && bd.B == u.x)) {
+					continue
+				}
+				xa, ya := c.A, c.B // marked substituents on the u.x and u.y sides
+				if bd.A != u.x {
+					xa, ya = c.B, c.A
+				}
+				ia := slices.Index(sc.endPositions(u.x, u.y), sc.positionCode(u.x, xa))
+				ib := slices.Index(sc.endPositions(u.y, u.x), sc.positionCode(u.y, ya))
+				if ia < 0 || ib < 0 {
+					continue
+				}
+				bit := 0
+				if (ia == ib) != c.Cis {
+					bit = 1
+				}
+				out = append(out, [3]int{k, ground, bit})
+			}
+		}
+	}
 	return out
 }
 
@@ -458,6 +571,9 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 	for _, x := range atoms {
 		tet := sc.tetrahedral(x)
 		col := sc.outside(x, tet)
+		if len(atoms) == 1 && len(sc.markedAtoms()) > 0 {
+			col = sc.outsideSplit(x, tet)
+		}
 		dup := false
 		for k := 0; k < len(col); {
 			e := k
@@ -484,7 +600,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 	}
 	// double bonds and allenes inside the fragment
-	inRing := m.ringBondFlags()
+	inRing := sc.inRing
 	doubles := func(i int) []int {
 		var out []int
 		for _, b := range m.Adj[i] {
@@ -575,7 +691,8 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 	}
 	g := m.cgraphOfSub(atoms, sc.local, sc.rot, extra)
 	root := g.refine(g.cell0)
-	s := &search{g: g, budget: DefaultSearchWork, root: root, ctx: sc.ctx}
+	s := &search{g: g, budget: sc.budget, root: root, ctx: sc.ctx}
+	defer func() { sc.budget -= s.steps }()
 	order := big.NewInt(1)
 	var labels []int
 	seenBuf := make([]bool, len(atoms))
@@ -656,7 +773,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 	}
 	best := 0
-	nu := len(units)
+	nu := len(units) + 1 // the last node is the ground of written configurations
 	par := make([]int, nu)
 	bits := make([]int, nu)
 	save := make([]int, 2*nu)
@@ -668,7 +785,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 		return x, p
 	}
-	fixed := sc.cisFusions(units)
+	fixed := append(sc.writtenStereo(units, len(units)), sc.cisFusions(units)...)
 	for seed := 0; seed < len(cands) && seed < maxSeeds; seed++ {
 		for i := range par {
 			par[i], bits[i] = i, 0
@@ -713,7 +830,7 @@ func (sc *sigmaCalc) limitErr() error {
 	if err := sc.ctx.Err(); err != nil {
 		return fmt.Errorf("symmetry number of %q: %w", sc.m.SMILES, err)
 	}
-	return fmt.Errorf("symmetry number of %q: %w (more than %d refinement steps)", sc.m.SMILES, ErrWorkLimit, DefaultSearchWork)
+	return fmt.Errorf("symmetry number of %q: %w (work budget of %d refinement steps spent)", sc.m.SMILES, ErrWorkLimit, DefaultSearchWork)
 }
 
 // alike reports whether the two positions of a double-bond end are both
@@ -1062,4 +1179,144 @@ func isPerm(p []int) bool {
 		seen[x] = true
 	}
 	return true
+}
+
+// swapKeepsMarks reports whether the two identical halves on either side of
+// the central bond u–v can be exchanged without changing a written
+// tetrahedral configuration (@/@@): some graph automorphism mapping u to v
+// maps every marked centre onto a marked centre with the same configuration.
+// A meso form (halves mirror images of each other) fails. Without marks, or
+// when the group is too large to search (more than 5000 elements), the
+// exchange counts (most symmetric stereoisomer).
+func (sc *sigmaCalc) swapKeepsMarks(u, v int) bool {
+	return sc.keepsMarks([][2]int{{u, v}})
+}
+
+// marked returns the atoms with a written tetrahedral mark (cached).
+func (sc *sigmaCalc) markedAtoms() []int {
+	if sc.marked == nil {
+		m := sc.m
+		sc.marked = []int{}
+		for i, a := range m.Atoms {
+			if isTetraMark(a.Chirality) && i < len(m.nbrOrder) && len(m.nbrOrder[i]) == 4 {
+				sc.marked = append(sc.marked, i)
+			}
+		}
+	}
+	return sc.marked
+}
+
+func isTetraMark(c string) bool { return c == "@" || c == "@@" || c == "@TH1" || c == "@TH2" }
+
+// keepsMarks reports whether some graph automorphism maps every pair's
+// first atom to its second and every marked centre onto a marked centre
+// with the same configuration. Without marks, or when the group has more
+// than 5000 elements, it reports true (most symmetric stereoisomer).
+func (sc *sigmaCalc) keepsMarks(req [][2]int) bool {
+	m := sc.m
+	marked := sc.markedAtoms()
+	if len(marked) == 0 || len(sc.gens) == 0 {
+		return true
+	}
+	if sc.elems == nil {
+		sc.elems = groupElements(sc.gens, maxFragmentGroup+1)
+	}
+	if len(sc.elems) > maxFragmentGroup {
+		return true
+	}
+	odd := func(c string) int {
+		if c == "@@" || c == "@TH2" {
+			return 1
+		}
+		return 0
+	}
+next:
+	for _, phi := range sc.elems {
+		for _, r := range req {
+			if phi[r[0]] != r[1] {
+				continue next
+			}
+		}
+		for _, x := range marked {
+			y := phi[x]
+			cy := m.Atoms[y].Chirality
+			if y >= len(m.nbrOrder) || len(m.nbrOrder[y]) != 4 || !isTetraMark(cy) {
+				continue next
+			}
+			p := make([]int, 4)
+			for k, w := range m.nbrOrder[x] {
+				img := -1
+				if w >= 0 {
+					img = phi[w]
+				}
+				p[k] = slices.Index(m.nbrOrder[y], img)
+			}
+			if !isPerm(p) || permParity(p)^odd(m.Atoms[x].Chirality)^odd(cy) != 0 {
+				continue next
+			}
+		}
+		return true
+	}
+	return false
+}
+
+// splitByMarks refines the branch colours col of the rotatable-bond
+// neighbours nb of atom x (parallel lists): two alike branches stay alike
+// only when an automorphism fixing x exchanges them and keeps the written
+// marks (the two arms of meso-2,4-pentanediol are mirror images, not alike).
+// Used for one-atom fragments, whose colours are compared only among
+// themselves.
+func (sc *sigmaCalc) splitByMarks(x int, nb, col []int) {
+	if len(sc.markedAtoms()) == 0 {
+		return
+	}
+	for i := range nb {
+		if col[i] < 0 {
+			continue
+		}
+		sub := 0
+		for j := 0; j < i; j++ {
+			if col[j] < 0 {
+				continue
+			}
+			if col[j]/64 == col[i] && sc.keepsMarks([][2]int{{x, x}, {nb[j], nb[i]}}) {
+				sub = col[j] % 64
+				break
+			}
+			if col[j]/64 == col[i] {
+				sub = max(sub, col[j]%64+1)
+			}
+		}
+		col[i] = col[i]*64 + sub
+	}
+}
+
+// outsideSplit is outside for a one-atom fragment, with alike branches
+// split by splitByMarks.
+func (sc *sigmaCalc) outsideSplit(i int, withLP bool) []int {
+	m := sc.m
+	var nb, col []int
+	var ranks []int
+	for _, b := range m.Adj[i] {
+		if !sc.rot[b] {
+			continue
+		}
+		v := m.Other(b, i)
+		if i == sc.pAtom && v == sc.pNbr {
+			nb, col = append(nb, v), append(col, colParent)
+			continue
+		}
+		nb, col = append(nb, v), append(col, sc.branchColour(i, v, &ranks))
+	}
+	sc.splitByMarks(i, nb, col)
+	for k := 0; k < m.Atoms[i].HCount; k++ {
+		col = append(col, colH)
+	}
+	if withLP {
+		for k := 0; k < sc.lp[i]; k++ {
+			col = append(col, colLP)
+		}
+	}
+	slices.Sort(col)
+	return col
 }

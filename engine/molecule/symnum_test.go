@@ -123,3 +123,57 @@ func TestCanonicalContext(t *testing.T) {
 	_, err = p.CanonicalContext(ctx)
 	assert.ErrorIs(t, err, context.Canceled)
 }
+
+// TestSymmetryWorkLimit checks that a search that runs out of its budget is
+// an error wrapping ErrWorkLimit, never a number.
+func TestSymmetryWorkLimit(t *testing.T) {
+	for _, s := range []string{"C12C3C4C1C5C2C3C45", "C1C2CC3CC1CC(C2)C3", "CC(C)(C)C(C(C)(C)C)(C(C)(C)C)C(C)(C)C"} {
+		m := parse(t, s)
+		_, err := m.symmetryNumber(context.Background(), 10)
+		require.Error(t, err, s)
+		assert.ErrorIs(t, err, ErrWorkLimit, s)
+		sg, err := m.symmetryNumber(context.Background(), DefaultSearchWork)
+		require.NoError(t, err, s)
+		assert.Positive(t, sg.Sign())
+	}
+}
+
+// TestSymmetryNumberWrittenStereo checks that configurations written with
+// @/@@ inside a rigid fragment are used: the two 1,4-dimethylcyclohexanes
+// are trans (C_2h, σ_ext 2) and cis (C_s, σ_ext 1), so their σ differ by 2,
+// and an unmarked spelling takes the more symmetric one.
+func TestSymmetryNumberWrittenStereo(t *testing.T) {
+	sigma := func(s string) int64 {
+		v, err := parse(t, s).SymmetryNumber()
+		require.NoError(t, err, s)
+		return v.Int64()
+	}
+	a, b := sigma("C[C@H]1CC[C@H](C)CC1"), sigma("C[C@H]1CC[C@@H](C)CC1")
+	assert.ElementsMatch(t, []int64{9, 18}, []int64{a, b})
+	assert.Equal(t, int64(18), sigma("CC1CCC(C)CC1"))
+	// cis/trans-1,2-dimethylcyclopropane: cis C_s (1), trans C_2 (2)
+	c, d := sigma("C[C@H]1C[C@H]1C"), sigma("C[C@H]1C[C@@H]1C")
+	assert.ElementsMatch(t, []int64{9, 18}, []int64{c, d})
+}
+
+// TestSymmetryNumberMeso checks the exchange of identical halves against
+// written marks: (2R,3R)-2,3-dichlorobutane has a C2 axis (σ = 2·3·3), the
+// meso form only a mirror or inversion centre (σ = 3·3).
+func TestSymmetryNumberMeso(t *testing.T) {
+	sigma := func(s string) int64 {
+		v, err := parse(t, s).SymmetryNumber()
+		require.NoError(t, err, s)
+		return v.Int64()
+	}
+	// CIP labels from RDKit 2022.09: (S,S) and (S,R) = meso
+	assert.Equal(t, int64(18), sigma("C[C@H](Cl)[C@H](C)Cl"), "(2S,3S)")
+	assert.Equal(t, int64(9), sigma("C[C@H](Cl)[C@@H](C)Cl"), "meso")
+	assert.Equal(t, int64(18), sigma("Cl[C@@H](C)[C@@H](Cl)C"), "(2S,3S) written from the other end")
+	assert.Equal(t, int64(9), sigma("Cl[C@@H](C)[C@H](Cl)C"), "meso written from the other end")
+	assert.Equal(t, int64(18), sigma("CC(Cl)C(C)Cl"), "unmarked: most symmetric")
+	// a central CH2 between two marked centres: 2,4-pentanediol
+	// (S,S) C2: 2·3·3; meso C_s: 3·3 (CIP labels from RDKit 2022.09)
+	assert.Equal(t, int64(18), sigma("C[C@H](O)C[C@H](C)O"), "(2S,4S)")
+	assert.Equal(t, int64(9), sigma("C[C@H](O)C[C@@H](C)O"), "meso")
+	assert.Equal(t, int64(18), sigma("CC(O)CC(C)O"), "unmarked")
+}
