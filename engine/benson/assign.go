@@ -5,6 +5,8 @@ import (
 	"slices"
 	"sort"
 	"strings"
+
+	"kiln.dev/kiln/engine/molecule"
 )
 
 // groupOf returns the centre type and neighbour counts of atom i's group, and
@@ -209,7 +211,7 @@ atoms:
 		}
 	}
 	if len(refusals) > 0 {
-		return canonicalRefusal(g, refusals)
+		return canonicalRefusal(g.m, refusals)
 	}
 	// One backing array for every group's atom list.
 	slab := make([]int, n)
@@ -285,11 +287,11 @@ type atomError struct {
 // canonicalRefusal returns the refusal of the atom of lowest canonical
 // symmetry class (the first found among atoms of that class), so that the
 // reason given does not depend on the atom order of the SMILES.
-func canonicalRefusal(g *graph, rs []atomError) error {
+func canonicalRefusal(m *molecule.Molecule, rs []atomError) error {
 	if len(rs) == 1 {
 		return rs[0].err
 	}
-	cls := g.m.SymmetryClasses()
+	cls := m.SymmetryClasses()
 	best := rs[0]
 	for _, r := range rs[1:] {
 		if cls[r.atom] < cls[best.atom] {

@@ -139,16 +139,23 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	if m == nil || len(m.Atoms) == 0 {
 		return nil, fmt.Errorf("benson: empty molecule")
 	}
+	// Charged and isotope-labelled atoms: refused, naming the atom of lowest
+	// canonical symmetry class so that the reason does not depend on the
+	// atom order of the SMILES.
+	var refusals []atomError
 	for i, a := range m.Atoms {
-		if a.Charge != 0 {
-			return nil, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d: charged species are outside group additivity — give the species a thermo block", a.Element, a.Charge)}
-		}
-		if a.Isotope != 0 {
+		switch {
+		case a.Charge != 0:
+			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d: charged species are outside group additivity — give the species a thermo block", a.Element, a.Charge)}})
+		case a.Isotope != 0:
 			// Group values are for natural isotopic composition; a label
 			// changes zero-point energies, masses and symmetry, which no
 			// table here covers.
-			return nil, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%d%s) is isotope-labelled: the reference library holds no labelled species and group values are for natural isotopic composition — give the species a thermo block", a.Isotope, a.Element)}
+			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%d%s) is isotope-labelled: the reference library holds no labelled species and group values are for natural isotopic composition — give the species a thermo block", a.Isotope, a.Element)}})
 		}
+	}
+	if len(refusals) > 0 {
+		return nil, canonicalRefusal(m, refusals)
 	}
 	unpaired := 0
 	for _, a := range m.Atoms {

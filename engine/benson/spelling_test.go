@@ -230,6 +230,9 @@ func respell(m *molecule.Molecule, r *rand.Rand) string {
 			}
 		}
 		s := "[" + sym
+		if at.Isotope != 0 {
+			s = fmt.Sprintf("[%d%s", at.Isotope, sym)
+		}
 		switch {
 		case at.HCount == 1:
 			s += "H"
@@ -379,6 +382,12 @@ var spellingFixed = []string{
 	"c1ccc2c(c1)oc1ccccc12", "CC1=CC(=O)CC(C)(C)C1", "[CH2]c1ccccc1", "C1=CC=CC1", "[CH]1C=CC=C1",
 }
 
+// spellingRefused are refused structures added to the corpus: charged,
+// isotope-labelled, several missing groups.
+var spellingRefused = []string{
+	"C[N+](=O)[O-]", "CC[NH3+].[Cl-]", "[2H]CC[13CH3]", "C[Si](C)CC[Li]", "CC(=S)C(=S)C", "OB(O)CCP",
+}
+
 // TestRandomSpellingsOneAnswer: ≥ 2,000 estimable random structures
 // (radicals and closed-shell, acyclic and cyclic), each estimated directly
 // by Estimate from its generated spelling and from 6 random respellings,
@@ -441,6 +450,24 @@ func TestRandomSpellingsOneAnswer(t *testing.T) {
 			}
 		}
 		estimated++
+	}
+	// Refusals name the same reason whatever the spelling.
+	for _, smi := range spellingRefused {
+		m, err := molecule.ParseSMILES(smi)
+		require.NoError(t, err, smi)
+		ref, _ := outcome(m)
+		require.True(t, strings.HasPrefix(ref, "missing group") || strings.HasPrefix(ref, "unsupported"), "%s: %s", smi, ref)
+		for range 3 * spellings {
+			sp := respell(m, r)
+			mm, err := molecule.ParseSMILES(sp)
+			require.NoError(t, err, "%s respelled as %s", smi, sp)
+			if got, _ := outcome(mm); got != ref {
+				failed++
+				t.Errorf("%s and its spelling %s are refused differently:\n%s\nvs\n%s", smi, sp, ref, got)
+				break
+			}
+		}
+		refused++
 	}
 	t.Logf("%d structures estimated (%d radicals, %d cyclic), %d refused, each from %d spellings; %d with differing results, %d of them beyond term order and rounding",
 		estimated, radicals, cyclic, refused, 1+spellings, failed, answers)
