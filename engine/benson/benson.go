@@ -167,6 +167,30 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		// has a different energy that no table here gives.
 		return nil, &UnsupportedError{Reason: fmt.Sprintf("multiplicity %d is not the one the structure implies (%d unpaired electrons: multiplicity %d); group additivity has no data for other spin states — give the species a thermo block", opts.Multiplicity, unpaired, unpaired+1)}
 	}
+	forms, bounded := kekuleForms(m)
+	if len(forms) > 1 {
+		return chooseKekule(forms, opts)
+	}
+	est, err := estimateForm(m, opts)
+	if err == nil && bounded {
+		est.Missing = append(est.Missing, Missing{
+			Group:         "Kekulé structure of a non-benzenoid aromatic ring",
+			Approximation: "the Kekulé structure read from the SMILES",
+			Note:          fmt.Sprintf("too many Kekulé structures to compare (bound %d): the reader's is used", maxKekuleForms),
+		})
+		est.finish()
+	}
+	return est, err
+}
+
+// estimateForm estimates m as written, with its Kekulé structure (see
+// kekule.go); m has passed Estimate's checks of charge, isotopes and
+// multiplicity.
+func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
+	unpaired := 0
+	for _, a := range m.Atoms {
+		unpaired += a.Radical
+	}
 	if alt, several, ok := enoxyForm(m); ok {
 		// An α-carbonyl radical is estimated as its resonance structure with
 		// the electron on oxygen, whose O–H increment carries the

@@ -383,9 +383,11 @@ var spellingFixed = []string{
 }
 
 // spellingRefused are refused structures added to the corpus: charged,
-// isotope-labelled, several missing groups.
+// isotope-labelled, several missing groups, Kekulé-dependent groups.
 var spellingRefused = []string{
 	"C[N+](=O)[O-]", "CC[NH3+].[Cl-]", "[2H]CC[13CH3]", "C[Si](C)CC[Li]", "CC(=S)C(=S)C", "OB(O)CCP",
+	// pyridine-type rings: groups follow the Kekulé structure (kekule.go)
+	"Cc1ccccn1", "c1ccc2ncccc2c1", "Cc1ccc2cccnc2c1", "Cc1nccs1",
 }
 
 // TestRandomSpellingsOneAnswer: ≥ 2,000 estimable random structures
