@@ -49,7 +49,7 @@ func kekuleForms(m *molecule.Molecule) (forms []*molecule.Molecule, bounded bool
 			break
 		}
 	}
-	if !aromatic {
+	if !aromatic || onlyBenzenoid(m) {
 		return nil, false
 	}
 	g := newGraph(m)
@@ -204,4 +204,32 @@ func betterRefusal(a, b error) bool {
 		return ma.Group < mb.Group
 	}
 	return false
+}
+
+// onlyBenzenoid reports whether every ring of m with an aromatic bond is a
+// benzenoid ring (six aromatic carbons, six aromatic bonds), so that no
+// aromatic bond is typed from its Kekulé order. Every ring bond lies in a
+// ring of the smallest set, so checking those rings is enough.
+func onlyBenzenoid(m *molecule.Molecule) bool {
+	for _, r := range m.Rings() {
+		arom, benz := false, len(r) == 6
+		for k, a := range r {
+			b := m.BondBetween(a, r[(k+1)%len(r)])
+			if b < 0 {
+				return false
+			}
+			if m.Bonds[b].Aromatic {
+				arom = true
+			} else {
+				benz = false
+			}
+			if at := m.Atoms[a]; at.Element != "C" || !at.Aromatic {
+				benz = false
+			}
+		}
+		if arom && !benz {
+			return false
+		}
+	}
+	return true
 }
