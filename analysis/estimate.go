@@ -77,9 +77,10 @@ type estimateCache struct {
 }
 
 type cacheEntry struct {
-	once sync.Once
-	est  *Estimate
-	err  error
+	once   sync.Once
+	est    *Estimate
+	err    error
+	smiles string // the spelling the entry was computed from
 }
 
 func newEstimateCache() *estimateCache {
@@ -103,7 +104,13 @@ func (c *estimateCache) get(ident string, m *molecule.Molecule, o EstimateOption
 		c.m[k] = e
 	}
 	c.mu.Unlock()
-	e.once.Do(func() { e.est, e.err = estimate(c.lib, m, o) })
+	e.once.Do(func() { e.est, e.err = estimate(c.lib, m, o); e.smiles = m.SMILES })
+	if e.err != nil && m.SMILES != e.smiles {
+		// The numbers are the structure's, but a refusal quotes atom
+		// numbers (and text) of the spelling it was made for: another
+		// spelling gets its own message, not the first one's.
+		return estimate(c.lib, m, o)
+	}
 	return e.est, e.err
 }
 
@@ -143,13 +150,11 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		OpticalIsomers: o.OpticalIsomers,
 		UserGroups:     o.UserGroups,
 	}
-	// Estimates depend only on the structure: a polycyclic one is estimated
-	// from its canonical spelling (with stereo), so neither how a SMILES is
-	// written nor the order in which spellings are met changes a number.
-	// (Symmetry numbers of cages and bridged systems depend on the
-	// spelling until the molecule package's bounded automorphism count
-	// lands; acyclic and monocyclic structures do not, as
-	// TestEstimateRandomSpellings checks, and skip the extra canonical form.)
+	// Estimates depend only on the structure: benson.Estimate is a function
+	// of the graph (engine/benson TestRandomSpellingsOneAnswer, acyclic,
+	// cyclic and radical structures). As a second guard, a polycyclic
+	// structure is estimated from its canonical spelling (with stereo);
+	// acyclic and monocyclic ones skip the extra canonical form.
 	cm := m
 	if len(m.Rings()) >= 2 {
 		if c, err := molecule.ParseSMILES(m.CanonicalStereo()); err == nil {

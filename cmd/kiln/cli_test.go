@@ -312,3 +312,36 @@ func TestMinSeverity(t *testing.T) {
 	assert.Equal(t, exitUsage, code)
 	assert.Contains(t, stderr, "--min-severity")
 }
+
+// TestEstimateSpellingsEachOwn: spellings of one structure on one command
+// line give identical numbers, and each result (a refusal too) is reported
+// for its own input: the input echoed, the atom numbers of its own spelling.
+func TestEstimateSpellingsEachOwn(t *testing.T) {
+	code, stdout, _ := runKiln(t, "estimate", "--json", "CC([C](C)O)=C", "C[C](O)C(C)=C")
+	require.Equal(t, exitOK, code)
+	var arr []map[string]any
+	require.NoError(t, json.Unmarshal([]byte(stdout), &arr))
+	require.Len(t, arr, 2)
+	assert.Equal(t, "CC([C](C)O)=C", arr[0]["input"])
+	assert.Equal(t, "C[C](O)C(C)=C", arr[1]["input"])
+	assert.Equal(t, arr[0]["hf298_kj_mol"], arr[1]["hf298_kj_mol"])
+	assert.Equal(t, arr[0]["s298_j_mol_k"], arr[1]["s298_j_mol_k"])
+	assert.Equal(t, arr[0]["cp_j_mol_k"], arr[1]["cp_j_mol_k"])
+	assert.Equal(t, arr[0]["missing_groups"], arr[1]["missing_groups"])
+
+	// A refusal names an atom of the spelling it is printed under.
+	code, stdout, _ = runKiln(t, "estimate", "CC[Si]", "[Si]CC")
+	assert.Equal(t, exitProblems, code)
+	parts := strings.SplitN(stdout, "\n\n", 2)
+	require.Len(t, parts, 2, stdout)
+	assert.True(t, strings.HasPrefix(parts[0], "CC[Si]\n"), parts[0])
+	assert.Contains(t, parts[0], "atom 2 (C)")
+	assert.True(t, strings.HasPrefix(parts[1], "[Si]CC\n"), parts[1])
+	assert.Contains(t, parts[1], "atom 2 (C)")
+	code, stdout, _ = runKiln(t, "estimate", "C(C)[Si]", "[Si]C(C)")
+	assert.Equal(t, exitProblems, code)
+	parts = strings.SplitN(stdout, "\n\n", 2)
+	require.Len(t, parts, 2, stdout)
+	assert.Contains(t, parts[0], "atom 1 (C)")
+	assert.Contains(t, parts[1], "atom 2 (C)")
+}

@@ -5,6 +5,8 @@ import (
 	"slices"
 	"sort"
 	"strings"
+
+	"kiln.dev/kiln/engine/molecule"
 )
 
 // groupOf returns the centre type and neighbour counts of atom i's group, and
@@ -106,9 +108,16 @@ func approximate(l lookup, centre string, counts ligCounts) (GroupValue, []strin
 }
 
 // addGroups assigns a group to every polyvalent atom of g, looks the groups
-// up (user groups first) and appends one Term per distinct group, in order of
-// first appearance. Missing groups are replaced by their nearest relative and
-// listed in est.Missing.
+// up (user groups first) and appends one Term per distinct group (Estimate
+// sorts them by name). Missing groups are replaced by their nearest relative
+// and listed in est.Missing.
+//
+// Refusals depend on the graph only, not on the atom order: every atom is
+// examined; an *UnsupportedError wins over a *MissingGroupError (no user
+// group can make an unsupported atom estimable), the unsupported atom
+// reported is the one of lowest canonical symmetry class
+// (molecule.SymmetryClasses; atoms of one class fail alike), and the missing
+// group reported is the first by name.
 //
 // Atom accounting (enforced here, tested over a generated corpus): every
 // heavy atom is either the centre of exactly one group, or a terminal atom
@@ -139,34 +148,43 @@ func addGroups(g *graph, l lookup, est *Result) error {
 	for i := range owner {
 		owner[i] = -1
 	}
-	claim := func(i, k int) error {
+	// Refusals found so far: at most one per atom, and missing groups.
+	var refusals []atomError
+	refuse := func(i int, err error) { refusals = append(refusals, atomError{i, err}) }
+	var missing, newCentre []string // missing groups; those with a centre no table has
+	claim := func(i, k int) {
 		if owner[i] >= 0 {
-			return unsupported(g, i, "is counted by two groups")
+			refuse(i, unsupported(g, i, "is counted by two groups"))
+			return
 		}
 		owner[i] = k
 		list[k].atoms++
-		return nil
 	}
+atoms:
 	for i := range g.m.Atoms {
 		for _, b := range g.nbrBond[i] {
 			if o := g.m.Bonds[b].Order; o > 3 && !g.m.Bonds[b].Aromatic {
-				return unsupported(g, i, fmt.Sprintf("has a bond of order %d, which no group describes", o))
+				refuse(i, unsupported(g, i, fmt.Sprintf("has a bond of order %d, which no group describes", o)))
+				continue atoms
 			}
 		}
 		centre, counts, ok := g.groupOf(i)
 		if !ok {
 			if centre != "" {
-				return unsupported(g, i, fmt.Sprintf("has a neighbour of type %s, and no group in the tables can name it", centre))
+				refuse(i, unsupported(g, i, fmt.Sprintf("has a neighbour of type %s, and no group in the tables can name it", centre)))
 			}
 			continue // terminal atom: claimed by its neighbour below, or refused
 		}
 		if !l.hasCentre(centre) {
-			if _, nameable := centreLigands[centre]; nameable {
-				// A group the user can define (a `group` statement) but
-				// no table has: missing, not unsupported.
-				return &MissingGroupError{Group: groupName(centre, counts)}
+			if _, nameable := centreLigands[centre]; !nameable {
+				refuse(i, unsupported(g, i, fmt.Sprintf("no group in the tables has a centre of type %s", centre)))
+				continue
 			}
-			return unsupported(g, i, fmt.Sprintf("no group in the tables has a centre of type %s", centre))
+			// A group the user can define (a `group` statement) but no
+			// table has: missing, not unsupported, and reported before
+			// groups whose centre is known. It still accounts for its
+			// atoms.
+			newCentre = append(newCentre, groupName(centre, counts))
 		}
 		k := slices.IndexFunc(list, func(a acc) bool { return a.centre == centre && a.counts == counts })
 		if k < 0 {
@@ -174,9 +192,7 @@ func addGroups(g *graph, l lookup, est *Result) error {
 			k = len(list) - 1
 		}
 		list[k].n++
-		if err := claim(i, k); err != nil {
-			return err
-		}
+		claim(i, k)
 		// Terminal atoms named by this group: the implied partner of the
 		// centre type, and single-bonded terminal ligands.
 		for kk, j := range g.nbr[i] {
@@ -185,16 +201,17 @@ func addGroups(g *graph, l lookup, est *Result) error {
 			}
 			o := g.order(g.nbrBond[i][kk])
 			if o == 1 || (o >= 2 && impliedPartner[centre] == g.m.Atoms[j].Element) {
-				if err := claim(j, k); err != nil {
-					return err
-				}
+				claim(j, k)
 			}
 		}
 	}
 	for i, k := range owner {
-		if k < 0 {
-			return uncovered(g, i, 0)
+		if k < 0 && !slices.ContainsFunc(refusals, func(r atomError) bool { return r.atom == i }) {
+			refuse(i, uncovered(g, i, 0))
 		}
+	}
+	if len(refusals) > 0 {
+		return canonicalRefusal(g.m, refusals)
 	}
 	// One backing array for every group's atom list.
 	slab := make([]int, n)
@@ -223,7 +240,8 @@ func addGroups(g *graph, l lookup, est *Result) error {
 		}
 		v, steps, ok := approximate(l, a.centre, a.counts)
 		if !ok {
-			return &MissingGroupError{Group: name}
+			missing = append(missing, name)
+			continue
 		}
 		t := term(v, a.n)
 		t.Name = name + " ≈ " + v.Name
@@ -235,7 +253,52 @@ func addGroups(g *graph, l lookup, est *Result) error {
 			Note:          "neighbour types replaced: " + strings.Join(steps, ", "),
 		})
 	}
+	if len(missing) > 0 {
+		return missingGroups(newCentre, missing)
+	}
 	return nil
+}
+
+// missingGroups is the refusal for missing groups: the first by name of
+// those with a centre no table has (the root cause), else of all; the
+// others are listed in Also.
+func missingGroups(newCentre, all []string) *MissingGroupError {
+	slices.Sort(all)
+	all = slices.Compact(all)
+	first := all[0]
+	if len(newCentre) > 0 {
+		first = slices.Min(newCentre)
+	}
+	e := &MissingGroupError{Group: first}
+	for _, g := range all {
+		if g != first {
+			e.Also = append(e.Also, g)
+		}
+	}
+	return e
+}
+
+// atomError is a refusal found at one atom.
+type atomError struct {
+	atom int
+	err  error
+}
+
+// canonicalRefusal returns the refusal of the atom of lowest canonical
+// symmetry class (the first found among atoms of that class), so that the
+// reason given does not depend on the atom order of the SMILES.
+func canonicalRefusal(m *molecule.Molecule, rs []atomError) error {
+	if len(rs) == 1 {
+		return rs[0].err
+	}
+	cls := m.SymmetryClasses()
+	best := rs[0]
+	for _, r := range rs[1:] {
+		if cls[r.atom] < cls[best.atom] {
+			best = r
+		}
+	}
+	return best.err
 }
 
 // terminal reports whether atom j makes no group of its own: one heavy
@@ -293,9 +356,14 @@ func uncovered(g *graph, i, c int) error {
 // approximation: the estimate cannot be made until the user supplies the
 // group (Options.UserGroups).
 type MissingGroupError struct {
-	Group string // trade notation, e.g. "C-(N)(C)(H)2"
+	Group string   // trade notation, e.g. "C-(N)(C)(H)2"
+	Also  []string // further groups the species lacks, by name
 }
 
 func (e *MissingGroupError) Error() string {
-	return fmt.Sprintf("benson: no value and no approximation for group %s: supply it with a `group %s` statement (hf298, s298, cp at 300…1500 K, source) or give the species a thermo block", e.Group, e.Group)
+	also := ""
+	if len(e.Also) > 0 {
+		also = " (also missing: " + strings.Join(e.Also, ", ") + ")"
+	}
+	return fmt.Sprintf("benson: no value and no approximation for group %s%s: supply it with a `group %s` statement (hf298, s298, cp at 300…1500 K, source) or give the species a thermo block", e.Group, also, e.Group)
 }

@@ -23,8 +23,8 @@
 // the loaded tables hold, so new group files extend the scope with no code
 // change (groups.tsv for C/H/O, groups_nsx.tsv for N, S, F, Cl and Br; see
 // hetero.go). Anything else — an element or environment without groups, a
-// molecule too small to have groups, a charged atom, a multiplicity other
-// than the one the structure implies — is refused with an *UnsupportedError
+// molecule too small to have groups, a charged or isotope-labelled atom, a
+// multiplicity other than the one the structure implies — is refused with an *UnsupportedError
 // (or a *MissingGroupError naming a group the user could supply); no atom is
 // ever left out of the sum. Groups with a stand-in, ring systems without a
 // correction (rings.go, ringsys.go) and radical sites without increments
@@ -36,8 +36,10 @@
 package benson
 
 import (
+	"cmp"
 	"fmt"
 	"math"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -137,10 +139,23 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	if m == nil || len(m.Atoms) == 0 {
 		return nil, fmt.Errorf("benson: empty molecule")
 	}
+	// Charged and isotope-labelled atoms: refused, naming the atom of lowest
+	// canonical symmetry class so that the reason does not depend on the
+	// atom order of the SMILES.
+	var refusals []atomError
 	for i, a := range m.Atoms {
-		if a.Charge != 0 {
-			return nil, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d: charged species are outside group additivity — give the species a thermo block", a.Element, a.Charge)}
+		switch {
+		case a.Charge != 0:
+			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d: charged species are outside group additivity — give the species a thermo block", a.Element, a.Charge)}})
+		case a.Isotope != 0:
+			// Group values are for natural isotopic composition; a label
+			// changes zero-point energies, masses and symmetry, which no
+			// table here covers.
+			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%d%s) is isotope-labelled: the reference library holds no labelled species and group values are for natural isotopic composition — give the species a thermo block", a.Isotope, a.Element)}})
 		}
+	}
+	if len(refusals) > 0 {
+		return nil, canonicalRefusal(m, refusals)
 	}
 	unpaired := 0
 	for _, a := range m.Atoms {
@@ -152,7 +167,31 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		// has a different energy that no table here gives.
 		return nil, &UnsupportedError{Reason: fmt.Sprintf("multiplicity %d is not the one the structure implies (%d unpaired electrons: multiplicity %d); group additivity has no data for other spin states — give the species a thermo block", opts.Multiplicity, unpaired, unpaired+1)}
 	}
-	if alt, ok := enoxyForm(m); ok {
+	forms, bounded := kekuleForms(m)
+	if len(forms) > 1 {
+		return chooseKekule(forms, opts)
+	}
+	est, err := estimateForm(m, opts)
+	if err == nil && bounded {
+		est.Missing = append(est.Missing, Missing{
+			Group:         "Kekulé structure of a non-benzenoid aromatic ring",
+			Approximation: "the Kekulé structure read from the SMILES",
+			Note:          fmt.Sprintf("too many Kekulé structures to compare (bound %d): the reader's is used", maxKekuleForms),
+		})
+		est.finish()
+	}
+	return est, err
+}
+
+// estimateForm estimates m as written, with its Kekulé structure (see
+// kekule.go); m has passed Estimate's checks of charge, isotopes and
+// multiplicity.
+func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
+	unpaired := 0
+	for _, a := range m.Atoms {
+		unpaired += a.Radical
+	}
+	if alt, several, ok := enoxyForm(m); ok {
 		// An α-carbonyl radical is estimated as its resonance structure with
 		// the electron on oxygen, whose O–H increment carries the
 		// stabilisation the plain alkyl increment lacks.
@@ -165,7 +204,10 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 			Approximation: "resonance structure with the radical on oxygen",
 			Note:          "no α-carbonyl increment at hand: the C=C–O• resonance form is estimated instead",
 		})
-		est.setUncertainty()
+		if several != "" {
+			est.Missing = append(est.Missing, severalStabilisers(several, "alpha-carbonyl via the C=C–O• resonance structure"))
+		}
+		est.finish()
 		return est, nil
 	}
 	tab := lookupTable(opts.UserGroups)
@@ -233,15 +275,32 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		})
 	}
 
-	for _, t := range est.Groups {
-		est.add(t)
-	}
-	for _, t := range est.Corrections {
-		est.add(t)
-	}
 	est.Class = classify(m, g)
-	est.setUncertainty()
+	est.finish()
 	return est, nil
+}
+
+// finish puts the groups and flags of e in their canonical order and sets
+// the totals and the uncertainty from them. The order of every list of a
+// Result depends on the graph only, never on the atom order of the SMILES:
+// groups are sorted by name, flags by group, approximation and note, and
+// every producer of corrections appends them in a fixed order (ring
+// strain by name, interactions, HBI by site, spin, symmetry, optical
+// isomers). The totals are summed in that order, so two spellings of one
+// molecule agree to the last bit.
+func (e *Result) finish() {
+	slices.SortStableFunc(e.Groups, func(a, b Term) int { return strings.Compare(a.Name, b.Name) })
+	slices.SortStableFunc(e.Missing, func(a, b Missing) int {
+		return cmp.Or(strings.Compare(a.Group, b.Group), strings.Compare(a.Approximation, b.Approximation), strings.Compare(a.Note, b.Note))
+	})
+	e.Hf298, e.S298, e.Cp = 0, 0, [7]float64{}
+	for _, t := range e.Groups {
+		e.add(t)
+	}
+	for _, t := range e.Corrections {
+		e.add(t)
+	}
+	e.setUncertainty()
 }
 
 // setUncertainty sets e.Uncertainty from its class and approximations.
@@ -284,7 +343,14 @@ func parentOf(m *molecule.Molecule) *molecule.Molecule { return m.ClosedShellPar
 // (an α-carbonyl radical such as CH2CHO or CH3C(O)CH2), with the electron
 // moved to the oxygen; ok is false for any other molecule. The copy shares
 // nothing mutable with m.
-func enoxyForm(m *molecule.Molecule) (*molecule.Molecule, bool) {
+//
+// The choice depends on the graph only: with several carbonyl neighbours
+// the electron goes to the oxygen of lowest canonical symmetry class
+// (molecule.SymmetryClasses; oxygens of one class give isomorphic resonance
+// structures). several describes the site's stabilising neighbours when it
+// has more than one (radical.go, rule 2): "alpha-carbonyl ×2",
+// "alpha-carbonyl, allylic"; "" otherwise.
+func enoxyForm(m *molecule.Molecule) (alt *molecule.Molecule, several string, ok bool) {
 	site, unpaired := -1, 0
 	for i, a := range m.Atoms {
 		unpaired += a.Radical
@@ -293,25 +359,53 @@ func enoxyForm(m *molecule.Molecule) (*molecule.Molecule, bool) {
 		}
 	}
 	if unpaired != 1 || m.Atoms[site].Element != "C" || m.Atoms[site].Aromatic {
-		return nil, false
+		return nil, "", false
 	}
+	type cand struct{ b1, b2, k int }
+	var cands []cand
+	carbonyls := 0 // carbonyl carbons next to the site
 	for _, b1 := range m.Adj[site] {
 		j := m.Other(b1, site)
 		if m.Bonds[b1].Order != 1 || m.Atoms[j].Element != "C" || m.Atoms[j].Aromatic {
 			continue
 		}
+		found := false
 		for _, b2 := range m.Adj[j] {
 			k := m.Other(b2, j)
 			if m.Bonds[b2].Order != 2 || m.Atoms[k].Element != "O" || len(m.Adj[k]) != 1 || m.Atoms[k].HCount != 0 {
 				continue
 			}
-			// built by the molecule package: rings and aromaticity stay right
-			alt, err := m.WithBondOrders(map[int]int{b1: 2, b2: 1}, map[int]int{site: 0, k: 1})
-			if err != nil {
-				return nil, false
-			}
-			return alt, true
+			cands = append(cands, cand{b1, b2, k})
+			found = true
+		}
+		if found {
+			carbonyls++
 		}
 	}
-	return nil, false
+	if len(cands) == 0 {
+		return nil, "", false
+	}
+	c := cands[0]
+	if len(cands) > 1 {
+		cls := m.SymmetryClasses()
+		for _, x := range cands[1:] {
+			if cls[x.k] < cls[c.k] {
+				c = x
+			}
+		}
+	}
+	// built by the molecule package: rings and aromaticity stay right
+	alt, err := m.WithBondOrders(map[int]int{c.b1: 2, c.b2: 1}, map[int]int{site: 0, c.k: 1})
+	if err != nil {
+		return nil, "", false
+	}
+	parts := []string{"alpha-carbonyl"}
+	if carbonyls > 1 {
+		parts[0] = fmt.Sprintf("alpha-carbonyl ×%d", carbonyls)
+	}
+	_, others, n := newGraph(m.ClosedShellParent()).stabiliserKinds(site)
+	if carbonyls+n < 2 {
+		return alt, "", true
+	}
+	return alt, strings.Join(append(parts, others...), ", "), true
 }

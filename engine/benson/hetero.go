@@ -175,11 +175,13 @@ func addHalogenFlags(g *graph, l lookup, est *Result) {
 	}
 }
 
-// heteroSite classifies a radical site at or next to a heteroatom other
-// than O: aminyl (on N), thiyl (on S), alpha-amino, alpha-chloro and
-// alpha-fluoro (on an sp3 carbon bonded to N, Cl or F). missing names the
-// approximation when the site only resembles the increment used (a
-// secondary aminyl, an α-bromo site). ok is false for any other site.
+// heteroSite classifies a radical site on a heteroatom other than O:
+// aminyl (on N), thiyl (on S). missing names the approximation when the site
+// only resembles the increment used (a secondary aminyl). ok is false for any
+// other site. Carbon sites next to N, Cl, F, Br or I (alpha-amino,
+// alpha-chloro, alpha-fluoro) are classified with the other stabilising
+// neighbours of a carbon centre, by one priority rule (radical.go,
+// stabilisers).
 func heteroSite(g *graph, i int) (site, missing string, ok bool) {
 	switch g.m.Atoms[i].Element {
 	case "N":
@@ -198,22 +200,6 @@ func heteroSite(g *graph, i int) (site, missing string, ok bool) {
 			return "thiyl", "", true
 		}
 		return "thiyl", "thiyl site other than R–S (CH3S–H increment used)", true
-	case "C":
-		if g.typ[i] != "C" {
-			return "", "", false
-		}
-		for _, j := range g.nbr[i] {
-			switch g.m.Atoms[j].Element {
-			case "N":
-				return "alpha-amino", "", true
-			case "Cl":
-				return "alpha-chloro", "", true
-			case "F":
-				return "alpha-fluoro", "", true
-			case "Br", "I":
-				return "alpha-chloro", "α-bromo or α-iodo radical site (ClCH2–H increment used)", true
-			}
-		}
 	}
 	return "", "", false
 }

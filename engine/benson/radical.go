@@ -1,8 +1,11 @@
 package benson
 
 import (
+	"cmp"
 	"fmt"
 	"math"
+	"slices"
+	"strings"
 
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -25,49 +28,171 @@ import (
 // Site types: primary, secondary, tertiary alkyl (by the number of carbon
 // neighbours), allylic (next to Cd, Ca or Ct), benzylic (next to Cb), vinylic
 // (on Cd), phenyl (on Cb), acyl (on CO), α-hydroxy and α-alkoxy (sp3 carbon
-// next to O bearing H or not), alkoxy (on O), phenoxy (O on Cb), peroxy (O
-// on O). Sites outside this list use the nearest one and are reported in
-// Missing.
+// next to O bearing H or not), α-amino, α-chloro and α-fluoro (next to N, Cl
+// or F, see hetero.go), alkoxy (on O), phenoxy (O on Cb), peroxy (O on O).
+// Sites outside this list use the nearest one and are reported in Missing.
+//
+// One answer per molecule: the site type is a function of the graph, never
+// of the order in which atoms or neighbours were written. An sp3 carbon
+// centre can have several stabilising neighbours at once (CH2=C(CH3)–•C(OH)–
+// is allylic and α-hydroxy). The rule (common practice: the most
+// delocalising neighbour dominates the C–H bond strength; the published
+// increments are for singly stabilised sites only):
+//
+//  1. Every neighbour is classified on its own (stabilisers below); the
+//     centre takes the site type of the most stabilising one — the first in
+//     stabilisers, which is ordered by increasing D(R–H) of the tables
+//     (allylic 88.8 < propargylic, allylic value < benzylic 89.7 <
+//     α-amino 93.9 < α-hydroxy = α-alkoxy 96.1 < α-chloro 100.1 <
+//     α-bromo, chloro value < α-fluoro 101.3 kcal/mol; TestStabiliserOrder
+//     keeps the order and the tables in step).
+//  2. A centre with two or more stabilising neighbours (of one kind or of
+//     several: pentadienyl, allylic and α-hydroxy, …) is flagged in Missing
+//     ("HBI: radical site with several stabilising neighbours …"), which
+//     widens the uncertainty: the further stabilisation (or captodative
+//     effect) of the other neighbours is not in the increment used.
+//  3. An α-carbonyl centre is estimated as its C=C–O• resonance structure
+//     (enoxyForm in benson.go), whatever its other neighbours; with two
+//     carbonyl neighbours the one whose oxygen has the lowest canonical
+//     symmetry class (molecule.SymmetryClasses) takes the electron, and other
+//     stabilising neighbours are flagged as in rule 2.
+//  4. No stabilising neighbour: primary, secondary or tertiary by the number
+//     of carbon neighbours.
 
-// siteOf classifies radical site i (an atom of the parent graph g).
-func siteOf(g *graph, i int) (site, missing string, err error) {
+// stabiliser is one kind of stabilising neighbour of an sp3 carbon radical
+// centre: the site type it gives and the approximation note ("" when the
+// increment is the site's own).
+type stabiliser struct {
+	kind, site, missing string
+}
+
+// stabilisers are ordered from most to least stabilising (see rule 1 above).
+var stabilisers = []stabiliser{
+	{"allylic", "allylic", ""},
+	{"propargylic", "allylic", "propargylic radical site"},
+	{"benzylic", "benzylic", ""},
+	{"alpha-amino", "alpha-amino", ""},
+	{"alpha-hydroxy", "alpha-hydroxy", ""},
+	{"alpha-alkoxy", "alpha-alkoxy", ""},
+	{"alpha-chloro", "alpha-chloro", ""},
+	{"alpha-bromo", "alpha-chloro", "α-bromo or α-iodo radical site (ClCH2–H increment used)"},
+	{"alpha-fluoro", "alpha-fluoro", ""},
+}
+
+// stabiliserOf returns the index in stabilisers of neighbour j of an sp3
+// carbon radical centre, or -1 when j does not stabilise the radical.
+func (g *graph) stabiliserOf(j int) int {
+	kind := ""
+	switch g.typ[j] {
+	case "Cd", "Ca":
+		kind = "allylic"
+	case "Ct":
+		kind = "propargylic"
+	case "Cb":
+		kind = "benzylic"
+	case "O":
+		kind = "alpha-alkoxy"
+		if g.m.Atoms[j].HCount > 0 {
+			kind = "alpha-hydroxy"
+		}
+	case "N":
+		kind = "alpha-amino"
+	case "Cl":
+		kind = "alpha-chloro"
+	case "Br", "I":
+		kind = "alpha-bromo"
+	case "F":
+		kind = "alpha-fluoro"
+	}
+	for k, s := range stabilisers {
+		if s.kind == kind {
+			return k
+		}
+	}
+	return -1
+}
+
+// stabilisation returns the stabilising neighbours of sp3 carbon i: the
+// best (lowest index in stabilisers, -1 for none) and a description of all
+// of them in stabilisers order ("allylic, alpha-hydroxy"; "allylic ×2"),
+// empty unless there are at least two.
+func (g *graph) stabilisation(i int) (best int, several string) {
+	best, parts, n := g.stabiliserKinds(i)
+	if n < 2 {
+		return best, ""
+	}
+	return best, strings.Join(parts, ", ")
+}
+
+// stabiliserKinds returns the best stabilising neighbour of carbon i (index in
+// stabilisers, -1 for none), the kinds present in stabilisers order with
+// their counts ("allylic ×2") and the number of stabilising neighbours.
+func (g *graph) stabiliserKinds(i int) (best int, parts []string, n int) {
+	var count [16]int
+	best = -1
+	for _, j := range g.nbr[i] {
+		k := g.stabiliserOf(j)
+		if k < 0 {
+			continue
+		}
+		count[k]++
+		n++
+		if best < 0 || k < best {
+			best = k
+		}
+	}
+	for k, c := range count[:len(stabilisers)] {
+		switch {
+		case c == 1:
+			parts = append(parts, stabilisers[k].kind)
+		case c > 1:
+			parts = append(parts, fmt.Sprintf("%s ×%d", stabilisers[k].kind, c))
+		}
+	}
+	return best, parts, n
+}
+
+// severalStabilisers is the Missing entry of rule 2 for a centre with the
+// stabilising neighbours described by several, estimated as site.
+func severalStabilisers(several, site string) Missing {
+	return Missing{
+		Group:         "HBI: radical site with several stabilising neighbours (" + several + ")",
+		Approximation: "HBI: " + site,
+		Note:          "no increment for a radical centre stabilised from several sides: the most stabilising neighbour's increment (lowest D(R–H)) is used and the others' effect is left out",
+	}
+}
+
+// siteOf classifies radical site i (an atom of the parent graph g). missing
+// names the approximation when the site only resembles the increment used;
+// several describes the stabilising neighbours of a carbon centre that has
+// two or more (rule 2), "" otherwise.
+func siteOf(g *graph, i int) (site, missing, several string, err error) {
 	switch g.m.Atoms[i].Element {
 	case "C":
 		switch g.typ[i] {
 		case "Cb", "Cbf":
-			return "phenyl", "", nil
+			return "phenyl", "", "", nil
 		case "Cd":
-			return "vinylic", "", nil
+			return "vinylic", "", "", nil
 		case "CO":
-			return "acyl", "", nil
+			return "acyl", "", "", nil
 		case "Ct", "Ca":
-			return "vinylic", "ethynyl/allenyl radical site", nil
+			return "vinylic", "ethynyl/allenyl radical site", "", nil
 		}
-		carbons := 0
-		var next []string
+		if g.typ[i] == "C" {
+			if best, several := g.stabilisation(i); best >= 0 {
+				s := stabilisers[best]
+				return s.site, s.missing, several, nil
+			}
+		}
+		carbons, carbonyl := 0, false
 		for _, j := range g.nbr[i] {
-			next = append(next, g.typ[j])
 			if g.isCarbon(j) {
 				carbons++
 			}
-		}
-		for k, t := range next {
-			switch t {
-			case "Cd", "Ca":
-				return "allylic", "", nil
-			case "Ct":
-				return "allylic", "propargylic radical site", nil
-			case "Cb":
-				return "benzylic", "", nil
-			case "O":
-				if g.m.Atoms[g.nbr[i][k]].HCount > 0 {
-					return "alpha-hydroxy", "", nil
-				}
-				return "alpha-alkoxy", "", nil
+			if g.typ[j] == "CO" {
+				carbonyl = true
 			}
-		}
-		if site, miss, ok := heteroSite(g, i); ok {
-			return site, miss, nil
 		}
 		alkyl := "primary"
 		switch {
@@ -76,36 +201,55 @@ func siteOf(g *graph, i int) (site, missing string, err error) {
 		case carbons >= 3:
 			alkyl = "tertiary"
 		}
-		for _, t := range next {
-			if t == "CO" {
-				return alkyl, "alpha-carbonyl radical site (no resonance increment)", nil
-			}
+		if g.typ[i] != "C" {
+			// nitrile, ketene or thiocarbonyl carbon: no increment at hand
+			return alkyl, "radical site on a " + g.typ[i] + " carbon", "", nil
+		}
+		if carbonyl {
+			return alkyl, "alpha-carbonyl radical site (no resonance increment)", "", nil
 		}
 		if carbons == 0 {
-			return "primary", "methyl-type radical site", nil
+			return "primary", "methyl-type radical site", "", nil
 		}
-		return alkyl, "", nil
+		return alkyl, "", "", nil
 	case "O":
+		// A radical oxygen has one neighbour; were there more, the first
+		// type in this order would decide.
+		best := ""
 		for _, j := range g.nbr[i] {
 			switch g.typ[j] {
 			case "O":
-				return "peroxy", "", nil
+				best = "peroxy"
 			case "Cb":
-				return "phenoxy", "", nil
+				if best != "peroxy" {
+					best = "phenoxy"
+				}
 			case "Cd":
-				// An enol O–H is as weak as phenol's (the radical is
-				// resonance-stabilised towards the carbonyl form).
-				return "phenoxy", "vinoxy radical site (O on Cd)", nil
+				if best == "" || best == "acyloxy" {
+					best = "vinoxy"
+				}
 			case "CO":
-				return "alkoxy", "acyloxy radical site", nil
+				if best == "" {
+					best = "acyloxy"
+				}
 			}
 		}
-		return "alkoxy", "", nil
+		switch best {
+		case "peroxy", "phenoxy":
+			return best, "", "", nil
+		case "vinoxy":
+			// An enol O–H is as weak as phenol's (the radical is
+			// resonance-stabilised towards the carbonyl form).
+			return "phenoxy", "vinoxy radical site (O on Cd)", "", nil
+		case "acyloxy":
+			return "alkoxy", "acyloxy radical site", "", nil
+		}
+		return "alkoxy", "", "", nil
 	}
 	if site, miss, ok := heteroSite(g, i); ok {
-		return site, miss, nil
+		return site, miss, "", nil
 	}
-	return "", "", fmt.Errorf("benson: radical site on %s is outside the HBI table", g.m.Atoms[i].Element)
+	return "", "", "", fmt.Errorf("benson: radical site on %s is outside the HBI table", g.m.Atoms[i].Element)
 }
 
 // addHBI appends one correction per radical site type of m (count = number
@@ -117,9 +261,12 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 		if a.Radical == 0 {
 			continue
 		}
-		site, miss, err := siteOf(g, i)
+		site, miss, several, err := siteOf(g, i)
 		if err != nil {
 			return fmt.Errorf("atom %d: %w", i+1, err)
+		}
+		if several != "" {
+			est.Missing = append(est.Missing, severalStabilisers(several, site))
 		}
 		if miss != "" {
 			est.Missing = append(est.Missing, Missing{
@@ -138,6 +285,7 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 		}
 		count[site] += a.Radical
 	}
+	slices.Sort(order) // canonical term order, whatever the atom order
 	for _, site := range order {
 		h, ok := l.hbi[site]
 		if !ok {
@@ -210,84 +358,113 @@ var (
 
 // siteChanges returns one correction with the inversion, freed-rotor and
 // conjugation terms of every radical site of m (g is its parent), and false
-// when there are none.
+// when there are none. The sites' changes are summed in a canonical order
+// (sorted by value), so that the total does not depend on the atom order,
+// not even in its last bit.
 func siteChanges(m *molecule.Molecule, g *graph) (Term, bool) {
-	t := Term{Name: "radical site: inversion and internal-rotor changes", Source: "statistical mechanics, typical frequencies and barriers (common practice; see radical.go)"}
-	n := 0
-	vib := func(sign float64) {
-		th := secondRadiation * inversionWavenumber
-		x := th / 298.15
-		t.S298 += sign * R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
-		for i, T := range StdTemps {
-			x := th / T
-			ex := math.Exp(x)
-			t.Cp[i] += sign * R * x * x * ex / ((ex - 1) * (ex - 1))
-		}
-	}
+	var sites []siteDelta
 	for i, a := range m.Atoms {
 		if a.Radical != 1 {
 			continue
 		}
-		site, _, err := siteOf(g, i)
-		if err != nil {
-			continue
-		}
-		if a.Element == "O" && site == "alkoxy" && len(g.nbr[i]) == 1 && g.typ[g.nbr[i][0]] == "C" {
-			// Replace the stiff 300 cm⁻¹ torsion of lostModes by the
-			// alcohol's nearly free O–H rotor.
-			n++
-			th := secondRadiation * lostOH[2]
-			x := th / 298.15
-			t.S298 += R*(x/math.Expm1(x)-math.Log(-math.Expm1(-x))) - ohRotorS*calorie
-			continue
-		}
-		if dS, dCp, ok := heteroSiteChange(g, i, site); ok {
-			n++
-			t.S298 += dS
-			for c := range t.Cp {
-				t.Cp[c] += dCp[c]
-			}
-			continue
-		}
-		if a.Element != "C" || g.typ[i] != "C" {
-			continue
-		}
-		conjugated := false
-		for _, j := range g.nbr[i] {
-			switch g.typ[j] {
-			case "Cd", "Ca", "Cb", "Cbf":
-				conjugated = true
-			}
-		}
-		if (site == "allylic" || site == "benzylic") && !conjugated {
-			continue // propargylic: no internal rotor changes
-		}
-		switch site {
-		case "primary", "secondary", "tertiary", "alpha-hydroxy", "alpha-alkoxy":
-			if len(g.nbr[i]) == 0 {
-				continue // methyl-type: no parent rotor, no sp3 skeleton
-			}
-			n++
-			vib(+1)
-			for k, j := range g.nbr[i] {
-				if g.isCarbon(j) && g.order(g.nbrBond[i][k]) == 1 && len(g.nbr[j])+g.m.Atoms[j].HCount > 1 {
-					t.S298 += freedRotorS * calorie
-					for c := range t.Cp {
-						t.Cp[c] -= freedRotorCp[c] * calorie
-					}
-				}
-			}
-		case "allylic", "benzylic":
-			n++
-			vib(+1)
-			t.S298 -= hinderedRotorS * calorie
-			for c := range t.Cp {
-				t.Cp[c] -= hinderedRotorCp[c] * calorie
-			}
+		if d, ok := siteChange(g, i); ok {
+			sites = append(sites, d)
 		}
 	}
-	t.Count = n
-	return t, n > 0
+	if len(sites) == 0 {
+		return Term{}, false
+	}
+	slices.SortFunc(sites, func(x, y siteDelta) int {
+		if c := cmp.Compare(x.s, y.s); c != 0 {
+			return c
+		}
+		return slices.Compare(x.cp[:], y.cp[:])
+	})
+	t := Term{Name: "radical site: inversion and internal-rotor changes", Count: len(sites), Source: "statistical mechanics, typical frequencies and barriers (common practice; see radical.go)"}
+	for _, d := range sites {
+		t.S298 += d.s
+		for c := range t.Cp {
+			t.Cp[c] += d.cp[c]
+		}
+	}
+	return t, true
+}
+
+// siteDelta is the entropy and Cp change (J/(mol K)) of one radical site.
+type siteDelta struct {
+	s  float64
+	cp [7]float64
+}
+
+// siteChange returns the inversion, freed-rotor and conjugation change of
+// radical site i (one unpaired electron) of parent graph g, and false for a
+// site without one.
+func siteChange(g *graph, i int) (siteDelta, bool) {
+	var d siteDelta
+	vib := func(sign float64) {
+		th := secondRadiation * inversionWavenumber
+		x := th / 298.15
+		d.s += sign * R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
+		for i, T := range StdTemps {
+			x := th / T
+			ex := math.Exp(x)
+			d.cp[i] += sign * R * x * x * ex / ((ex - 1) * (ex - 1))
+		}
+	}
+	a := g.m.Atoms[i]
+	site, _, _, err := siteOf(g, i)
+	if err != nil {
+		return d, false
+	}
+	if a.Element == "O" && site == "alkoxy" && len(g.nbr[i]) == 1 && g.typ[g.nbr[i][0]] == "C" {
+		// Replace the stiff 300 cm⁻¹ torsion of lostModes by the
+		// alcohol's nearly free O–H rotor.
+		th := secondRadiation * lostOH[2]
+		x := th / 298.15
+		d.s += R*(x/math.Expm1(x)-math.Log(-math.Expm1(-x))) - ohRotorS*calorie
+		return d, true
+	}
+	if dS, dCp, ok := heteroSiteChange(g, i, site); ok {
+		d.s, d.cp = dS, dCp
+		return d, true
+	}
+	if a.Element != "C" || g.typ[i] != "C" {
+		return d, false
+	}
+	conjugated := false
+	for _, j := range g.nbr[i] {
+		switch g.typ[j] {
+		case "Cd", "Ca", "Cb", "Cbf":
+			conjugated = true
+		}
+	}
+	if (site == "allylic" || site == "benzylic") && !conjugated {
+		return d, false // propargylic: no internal rotor changes
+	}
+	switch site {
+	case "primary", "secondary", "tertiary", "alpha-hydroxy", "alpha-alkoxy":
+		if len(g.nbr[i]) == 0 {
+			return d, false // methyl-type: no parent rotor, no sp3 skeleton
+		}
+		vib(+1)
+		for k, j := range g.nbr[i] {
+			if g.isCarbon(j) && g.order(g.nbrBond[i][k]) == 1 && len(g.nbr[j])+g.m.Atoms[j].HCount > 1 {
+				d.s += freedRotorS * calorie
+				for c := range d.cp {
+					d.cp[c] -= freedRotorCp[c] * calorie
+				}
+			}
+		}
+		return d, true
+	case "allylic", "benzylic":
+		vib(+1)
+		d.s -= hinderedRotorS * calorie
+		for c := range d.cp {
+			d.cp[c] -= hinderedRotorCp[c] * calorie
+		}
+		return d, true
+	}
+	return d, false
 }
 
 // Wavenumbers (cm⁻¹) of the three vibrations an H atom brings to its heavy

@@ -86,3 +86,57 @@ const (
 	radicalSAim  = 0.77
 	radicalCpAim = 0.62
 )
+
+// A radical centre with several stabilising neighbours takes the most
+// stabilising one's increment, whatever the spelling, and says so
+// (radical.go, rules 1 and 2).
+func TestRadicalSitePriority(t *testing.T) {
+	for _, c := range []struct {
+		spellings []string
+		site      string
+		several   string // "" when no flag is expected
+	}{
+		{[]string{"CC([C](C)O)=C", "C[C](O)C(C)=C", "O[C](C)C(=C)C", "C=C(C)[C](O)C"}, "allylic", "allylic, alpha-hydroxy"},
+		{[]string{"C=C[CH]OC", "CO[CH]C=C"}, "allylic", "allylic, alpha-alkoxy"},
+		{[]string{"C=C[CH]C=C", "C(=C)[CH]C=C"}, "allylic", "allylic ×2"},
+		{[]string{"c1ccccc1[CH]O", "O[CH]c1ccccc1"}, "benzylic", "benzylic, alpha-hydroxy"},
+		{[]string{"C#C[CH]C=C", "C=C[CH]C#C"}, "allylic", "allylic, propargylic"},
+		{[]string{"CC[CH]O", "O[CH]CC"}, "alpha-hydroxy", ""},
+		{[]string{"C=CC[CH2]", "[CH2]CC=C"}, "primary", ""},
+	} {
+		var ref *Result
+		for _, s := range c.spellings {
+			e := estimate(t, s, Options{})
+			require.Equal(t, 1, correctionCount(e, "HBI: "+c.site), "%s: %v", s, e.Corrections)
+			flag := ""
+			for _, m := range e.Missing {
+				if after, ok := strings.CutPrefix(m.Group, "HBI: radical site with several stabilising neighbours ("); ok {
+					flag = strings.TrimSuffix(after, ")")
+				}
+			}
+			require.Equal(t, c.several, flag, "%s: %+v", s, e.Missing)
+			if ref == nil {
+				ref = e
+				continue
+			}
+			require.Equal(t, ref.Hf298, e.Hf298, s)
+			require.Equal(t, ref.S298, e.S298, s)
+			require.Equal(t, ref.Cp, e.Cp, s)
+			require.Equal(t, ref.Uncertainty, e.Uncertainty, s)
+		}
+	}
+}
+
+// The priority order of stabilising neighbours follows the bond
+// dissociation enthalpies of the loaded HBI tables: most stabilising
+// (weakest C–H bond) first.
+func TestStabiliserOrder(t *testing.T) {
+	l := lookupTable(nil)
+	prev := 0.0
+	for _, s := range stabilisers {
+		h, ok := l.hbi[s.site]
+		require.True(t, ok, s.site)
+		require.GreaterOrEqual(t, h.bde, prev, "%s (%s) is ranked after a less stabilising neighbour", s.kind, s.site)
+		prev = h.bde
+	}
+}

@@ -125,3 +125,14 @@ func TestRingRadicalResonance(t *testing.T) {
 	}
 	assert.True(t, ring, "%+v", e.Corrections)
 }
+
+// Isotope-labelled species are refused with a reason, not estimated as
+// their natural-abundance analogue.
+func TestIsotopeRefused(t *testing.T) {
+	for _, s := range []string{"[2H]C", "C[2H]", "[13CH3]C", "[2H]O[2H]", "[2H][2H]", "[2HH]", "[2H]"} {
+		_, err := Estimate(parse(t, s), Options{})
+		var ue *UnsupportedError
+		require.ErrorAs(t, err, &ue, s)
+		assert.Contains(t, ue.Reason, "isotope-labelled", s)
+	}
+}

@@ -596,6 +596,7 @@ func addRingCorrections(g *graph, l lookup, est *Result) {
 				}
 			}
 		}
+		slices.Sort(keys) // sums below in a canonical order
 		// Whole-system value from the table?
 		var matched *systemValue
 		for i := range l.systems {
@@ -660,6 +661,9 @@ func addRingCorrections(g *graph, l lookup, est *Result) {
 			Note:          "no strain correction for this polycyclic system is tabulated; the sum of the corrections of its component rings is used and the uncertainty widened",
 		})
 	}
+	// Terms in a canonical order (by name), whatever the atom order.
+	slices.Sort(order)
+	slices.Sort(sysOrder)
 	for _, name := range order {
 		t := term(l.corrections[name], counts[name])
 		t.Name = "ring strain: " + name[len("ring:"):]

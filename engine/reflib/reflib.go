@@ -3,7 +3,7 @@
 // radicals and the common combustion products): for each, ΔHf°298 (J/mol),
 // S°298 (J/(mol K), 1 bar) and a two-range NASA-7 polynomial, with the
 // published source of every number. Species are found by molecular structure
-// (canonical SMILES) and spin multiplicity. It does no I/O.
+// (canonical SMILES; see structureKey) and spin multiplicity. It does no I/O.
 //
 // data_nsx.go adds nitrogen, sulfur and halogen species, ketene, ketenyl and
 // ethynyl from NASA/TP-2002-211556 (NASA-9, refitted) and GRI-Mech 3.0.
@@ -19,7 +19,9 @@ package reflib
 import (
 	"fmt"
 	"math"
+	"slices"
 	"strconv"
+	"strings"
 	"sync"
 
 	"kiln.dev/kiln/engine/molecule"
@@ -79,13 +81,13 @@ func build() *Library {
 			if err != nil {
 				panic(fmt.Sprintf("reflib: %s: SMILES %q: %v", e.name, s, err))
 			}
-			k := key(m.Canonical(), e.mult)
+			c := structureKey(m)
+			k := key(c, e.mult)
 			if prev, dup := l.index[k]; dup {
 				panic(fmt.Sprintf("reflib: %s and %s share structure and multiplicity (%s)", l.species[prev].Name, e.name, k))
 			}
 			l.index[k] = len(l.species) - 1
 			l.maxHeavy = max(l.maxHeavy, m.HeavyAtoms())
-			c := m.Canonical()
 			if g, ok := l.ground[c]; !ok || e.hf298 < l.species[g].Hf298 {
 				l.ground[c] = len(l.species) - 1
 			}
@@ -96,16 +98,62 @@ func build() *Library {
 
 func key(canonical string, mult int) string { return canonical + "|" + strconv.Itoa(mult) }
 
+// structureKey identifies the structure of m whatever its spelling: its
+// canonical SMILES, except for molecules made of hydrogen only. Those keep
+// their hydrogens as graph atoms in some spellings ([H][H]: two atoms and a
+// bond) and fold them into a hydrogen count in others ([HH]: one atom with
+// one H), which the canonical form tells apart; they are keyed by the number
+// of hydrogens and unpaired electrons of each '.'-separated component
+// ("H:2/0" for H2, "H:1/1" for the H atom). Isotope labels and charges keep
+// the canonical form, so [2H][2H] and [H+] find no protium entry.
+func structureKey(m *molecule.Molecule) string {
+	for _, a := range m.Atoms {
+		if a.Element != "H" || a.Isotope != 0 || a.Charge != 0 {
+			return m.Canonical()
+		}
+	}
+	comp := make([]int, len(m.Atoms)) // component of each atom, by union–find
+	for i := range comp {
+		comp[i] = i
+	}
+	find := func(x int) int {
+		for comp[x] != x {
+			x = comp[x]
+		}
+		return x
+	}
+	for _, b := range m.Bonds {
+		comp[find(b.A)] = find(b.B)
+	}
+	type count struct{ h, unpaired int }
+	byRoot := map[int]*count{}
+	for i, a := range m.Atoms {
+		r := find(i)
+		if byRoot[r] == nil {
+			byRoot[r] = &count{}
+		}
+		byRoot[r].h += 1 + a.HCount
+		byRoot[r].unpaired += a.Radical
+	}
+	parts := make([]string, 0, len(byRoot))
+	for _, c := range byRoot {
+		parts = append(parts, fmt.Sprintf("%d/%d", c.h, c.unpaired))
+	}
+	slices.Sort(parts)
+	return "H:" + strings.Join(parts, ".")
+}
+
 // Lookup returns the species with exactly the structure of m (same canonical
-// SMILES) and the given spin multiplicity; multiplicity 0 means the
-// electronic ground state of that structure (the entry of lowest ΔHf°298),
+// SMILES, or for hydrogen-only molecules the same structureKey, so that
+// [HH] and [H][H] both find H2) and the given spin multiplicity;
+// multiplicity 0 means the electronic ground state of that structure (the entry of lowest ΔHf°298),
 // whatever the graph's formal radical count says: O=O finds triplet O2, and
 // [CH2] finds triplet CH2 with 0 or 3 and singlet CH2(S) with 1. The returned Species is a copy owned by the caller.
 func (l *Library) Lookup(m *molecule.Molecule, multiplicity int) (*Species, bool) {
 	if m == nil || m.HeavyAtoms() > l.maxHeavy {
 		return nil, false
 	}
-	c := m.Canonical()
+	c := structureKey(m)
 	var (
 		i  int
 		ok bool

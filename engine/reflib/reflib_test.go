@@ -155,6 +155,20 @@ func TestLookup(t *testing.T) {
 		{"[C-]#[O+]", 0, "CO"},
 		{"[Ar]", 0, "Ar"},
 		{"[H][H]", 0, "H2"},
+		{"[HH]", 0, "H2"}, // H folded into a count: the same structure
+		{"[HH]", 1, "H2"},
+		{"[H]", 0, "H"},
+		{"[H].[H]", 0, ""}, // two atoms, not a molecule
+		{"[2H][2H]", 0, ""},
+		{"[2HH]", 0, ""},
+		{"[H+]", 0, ""},
+		{"[OH2]", 0, "H2O"},
+		{"[H]O[H]", 0, "H2O"},
+		{"[2H]O[2H]", 0, ""},
+		{"[H][O]", 0, "OH"},
+		{"[C]=O", 0, "CO"},
+		{"[H]C([H])([H])[H]", 0, "CH4"},
+		{"[H]Cl", 0, "HCl"},
 		{"CC", 0, ""},
 		{"[CH3]", 0, "CH3"},
 		{"[CH3]", 4, ""},
@@ -171,4 +185,58 @@ func TestLookup(t *testing.T) {
 	}
 	_, ok := lib.Lookup(nil, 0)
 	assert.False(t, ok)
+}
+
+// Every library species is found from other spellings of its structure:
+// all atoms in brackets with explicit [H] neighbours, started from each
+// atom in turn.
+func TestLookupSpellingIndependent(t *testing.T) {
+	lib := New()
+	for _, sp := range lib.All() {
+		m, err := molecule.ParseSMILES(sp.SMILES)
+		require.NoError(t, err, sp.Name)
+		for root := range m.Atoms {
+			s := explicitH(m, root)
+			mm, err := molecule.ParseSMILES(s)
+			require.NoError(t, err, "%s: %s", sp.Name, s)
+			got, ok := lib.Lookup(mm, sp.Multiplicity)
+			if assert.True(t, ok, "%s spelled %s", sp.Name, s) {
+				assert.Equal(t, sp.Name, got.Name, s)
+			}
+		}
+	}
+}
+
+// explicitH writes tree-shaped m from root with every atom in brackets and
+// its hydrogens as explicit [H] atoms.
+func explicitH(m *molecule.Molecule, root int) string {
+	var b strings.Builder
+	seen := make([]bool, len(m.Atoms))
+	var write func(a int)
+	write = func(a int) {
+		seen[a] = true
+		at := m.Atoms[a]
+		b.WriteString("[" + at.Element)
+		switch {
+		case at.Charge > 0:
+			b.WriteString(strings.Repeat("+", at.Charge))
+		case at.Charge < 0:
+			b.WriteString(strings.Repeat("-", -at.Charge))
+		}
+		b.WriteString("]")
+		for range at.HCount {
+			b.WriteString("([H])")
+		}
+		for _, bi := range m.Adj[a] {
+			o := m.Other(bi, a)
+			if seen[o] {
+				continue
+			}
+			b.WriteString("(" + map[int]string{1: "", 2: "=", 3: "#"}[m.Bonds[bi].Order])
+			write(o)
+			b.WriteString(")")
+		}
+	}
+	write(root)
+	return b.String()
 }
