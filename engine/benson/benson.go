@@ -124,6 +124,13 @@ type Result struct {
 	// (see uncertainty in class.go); ±2σ covers ≥ 80 % of the validation
 	// species (TestAccuracy reports the coverage).
 	Uncertainty float64
+
+	// Form is the canonical SMILES of the resonance structure that was
+	// estimated, when the species has more than one (resonance.go); ""
+	// otherwise. ResonanceForms counts its distinct structures (0 when
+	// there is only one).
+	Form           string
+	ResonanceForms int
 }
 
 // Estimate estimates the thermochemistry of m. It fails for structures
@@ -152,22 +159,14 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		// has a different energy that no table here gives.
 		return nil, &UnsupportedError{Reason: fmt.Sprintf("multiplicity %d is not the one the structure implies (%d unpaired electrons: multiplicity %d); group additivity has no data for other spin states — give the species a thermo block", opts.Multiplicity, unpaired, unpaired+1)}
 	}
-	if alt, ok := enoxyForm(m); ok {
-		// An α-carbonyl radical is estimated as its resonance structure with
-		// the electron on oxygen, whose O–H increment carries the
-		// stabilisation the plain alkyl increment lacks.
-		est, err := Estimate(alt, opts)
-		if err != nil {
-			return nil, err
-		}
-		est.Missing = append(est.Missing, Missing{
-			Group:         "HBI: alpha-carbonyl radical site",
-			Approximation: "resonance structure with the radical on oxygen",
-			Note:          "no α-carbonyl increment at hand: the C=C–O• resonance form is estimated instead",
-		})
-		est.setUncertainty()
-		return est, nil
-	}
+	// Radicals with several resonance structures are estimated as their
+	// most stable one (resonance.go).
+	return estimateResonance(m, opts)
+}
+
+// estimateForm estimates m as written (one resonance structure).
+func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
+	unpaired := m.UnpairedElectrons()
 	tab := lookupTable(opts.UserGroups)
 	est := &Result{Formula: m.Formula(), MolarMass: m.MolarMass()}
 
@@ -278,40 +277,3 @@ func term(v GroupValue, count int) Term {
 // parentOf returns a copy of m with every unpaired electron replaced by a
 // hydrogen: the closed-shell parent used by the HBI method.
 func parentOf(m *molecule.Molecule) *molecule.Molecule { return m.ClosedShellParent() }
-
-// enoxyForm returns the resonance structure •C–C=O ↔ C=C–O• of a molecule
-// whose single unpaired electron sits on a carbon next to a carbonyl carbon
-// (an α-carbonyl radical such as CH2CHO or CH3C(O)CH2), with the electron
-// moved to the oxygen; ok is false for any other molecule. The copy shares
-// nothing mutable with m.
-func enoxyForm(m *molecule.Molecule) (*molecule.Molecule, bool) {
-	site, unpaired := -1, 0
-	for i, a := range m.Atoms {
-		unpaired += a.Radical
-		if a.Radical > 0 {
-			site = i
-		}
-	}
-	if unpaired != 1 || m.Atoms[site].Element != "C" || m.Atoms[site].Aromatic {
-		return nil, false
-	}
-	for _, b1 := range m.Adj[site] {
-		j := m.Other(b1, site)
-		if m.Bonds[b1].Order != 1 || m.Atoms[j].Element != "C" || m.Atoms[j].Aromatic {
-			continue
-		}
-		for _, b2 := range m.Adj[j] {
-			k := m.Other(b2, j)
-			if m.Bonds[b2].Order != 2 || m.Atoms[k].Element != "O" || len(m.Adj[k]) != 1 || m.Atoms[k].HCount != 0 {
-				continue
-			}
-			// built by the molecule package: rings and aromaticity stay right
-			alt, err := m.WithBondOrders(map[int]int{b1: 2, b2: 1}, map[int]int{site: 0, k: 1})
-			if err != nil {
-				return nil, false
-			}
-			return alt, true
-		}
-	}
-	return nil, false
-}
