@@ -24,7 +24,9 @@
 // change (groups.tsv for C/H/O, groups_nsx.tsv for N, S, F, Cl and Br; see
 // hetero.go). Anything else — an element or environment without groups, a
 // molecule too small to have groups, a charged atom, a multiplicity other
-// than the one the structure implies — is refused with an *UnsupportedError
+// than the one the structure implies, a structure of several disconnected
+// parts, an atom with two unpaired electrons or unpaired electrons on
+// bonded atoms (spin states without increment data) — is refused with an *UnsupportedError
 // (or a *MissingGroupError naming a group the user could supply); no atom is
 // ever left out of the sum. Groups with a stand-in, ring systems without a
 // correction (rings.go, ringsys.go) and radical sites without increments
@@ -148,6 +150,12 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		if a.Charge != 0 {
 			return nil, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d: charged species are outside group additivity — give the species a thermo block", a.Element, a.Charge)}
 		}
+	}
+	if n := components(m); n > 1 {
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("the structure has %d disconnected parts ('.' in the SMILES): a species is one molecule — give each part its own species, or give this one a thermo block", n)}
+	}
+	if err := spinScope(m); err != nil {
+		return nil, err
 	}
 	unpaired := 0
 	for _, a := range m.Atoms {
@@ -277,3 +285,56 @@ func term(v GroupValue, count int) Term {
 // parentOf returns a copy of m with every unpaired electron replaced by a
 // hydrogen: the closed-shell parent used by the HBI method.
 func parentOf(m *molecule.Molecule) *molecule.Molecule { return m.ClosedShellParent() }
+
+// components returns the number of connected parts of m.
+func components(m *molecule.Molecule) int {
+	seen := make([]bool, len(m.Atoms))
+	n := 0
+	for s := range m.Atoms {
+		if seen[s] {
+			continue
+		}
+		n++
+		seen[s] = true
+		stack := []int{s}
+		for len(stack) > 0 {
+			i := stack[len(stack)-1]
+			stack = stack[:len(stack)-1]
+			for _, b := range m.Adj[i] {
+				if j := m.Other(b, i); !seen[j] {
+					seen[j] = true
+					stack = append(stack, j)
+				}
+			}
+		}
+	}
+	return n
+}
+
+// spinScope refuses the spin states that hydrogen-bond increments do not
+// describe. An increment is the energy of breaking one X–H bond to leave one
+// unpaired electron on X, with the other electrons paired; it says nothing
+// about
+//
+//   - an atom with two or more unpaired electrons (carbene, vinylidene,
+//     nitrene or atom centres such as C=[C] and [CH2]): their singlet and
+//     triplet states differ by up to tens of kcal/mol, and which is the
+//     ground state depends on the substituents;
+//   - unpaired electrons on bonded atoms ([C]#[C], [CH]=[CH]): the two
+//     electrons couple to a (partial) bond, a state with no increment.
+//
+// Such species need a thermo block (or are in the reference library, which
+// is consulted before this package).
+func spinScope(m *molecule.Molecule) error {
+	for i, a := range m.Atoms {
+		if a.Radical > 1 {
+			return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) carries %d unpaired electrons (a carbene- or vinylidene-type centre): its spin states have no hydrogen-bond-increment data — give the species a thermo block", a.Element, a.Radical)}
+		}
+	}
+	for _, b := range m.Bonds {
+		if m.Atoms[b.A].Radical > 0 && m.Atoms[b.B].Radical > 0 {
+			return &UnsupportedError{Atom: b.A + 1, Reason: fmt.Sprintf("(%s) and atom %d (%s) are bonded and both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data — give the species a thermo block", m.Atoms[b.A].Element, b.B+1, m.Atoms[b.B].Element)}
+		}
+	}
+	return nil
+}

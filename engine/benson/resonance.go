@@ -28,9 +28,10 @@ import (
 //     and perceives aromaticity afresh.
 //  2. Structures with an sp (cumulated or triple-bonded) atom in a ring of
 //     eight atoms or fewer are not Lewis structures of the species (the ring
-//     cannot hold the linear geometry): they are explored through but not
-//     chosen while another structure is available (this keeps the σ radical
-//     of phenyl a σ radical).
+//     cannot hold the linear geometry), nor are structures with unpaired
+//     electrons on bonded atoms: they are explored through but not chosen
+//     while another structure is available (this keeps the σ radical of
+//     phenyl a σ radical).
 //  3. The representative is the most stable Lewis structure (common
 //     practice): the most aromatic rings, then the lowest estimated ΔHf°
 //     (each structure estimated by groups and its own radical-site
@@ -119,8 +120,14 @@ func stateKey(m *molecule.Molecule) string {
 }
 
 // lewisAdmissible reports whether no atom of a ring of at most eight atoms
-// is sp (two double bonds or a triple bond).
+// is sp (two double bonds or a triple bond) and no two bonded atoms both
+// carry an unpaired electron.
 func lewisAdmissible(m *molecule.Molecule) bool {
+	for _, b := range m.Bonds {
+		if m.Atoms[b.A].Radical > 0 && m.Atoms[b.B].Radical > 0 {
+			return false // unpaired electrons on bonded atoms pair up
+		}
+	}
 	for i := range m.Atoms {
 		multiple, triple := 0, false
 		for _, b := range m.Adj[i] {
