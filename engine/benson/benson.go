@@ -195,6 +195,7 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 		if err := addHBI(m, g, tab, est); err != nil {
 			return nil, err
 		}
+		addRingRadical(m, est) // small and cyclically conjugated rings (ringradical.go)
 	}
 
 	// Spin, symmetry and optical isomers, on the species itself.
