@@ -28,10 +28,10 @@ var resonanceRadicals = []string{
 	"[O]C1=CC=CCC1", "c1ccc2c(c1)[CH]c1ccccc12", "[CH2]C=CC#C",
 }
 
-// respell writes m as a random Kekulé SMILES: a random start atom and
+// respellKekule writes m as a random Kekulé SMILES: a random start atom and
 // branch order, every atom a bracket atom with its hydrogen count (so a
 // radical is an atom with too few), every multiple bond explicit.
-func respell(m *molecule.Molecule, r *rand.Rand) string {
+func respellKekule(m *molecule.Molecule, r *rand.Rand) string {
 	n := len(m.Atoms)
 	visited := make([]bool, n)
 	seen := make([]bool, len(m.Bonds))
@@ -193,7 +193,7 @@ func TestResonanceOneAnswer(t *testing.T) {
 		for fi, f := range forms {
 			spellings := []string{f.Canonical()}
 			for range 3 {
-				spellings = append(spellings, respell(f, r))
+				spellings = append(spellings, respellKekule(f, r))
 			}
 			for _, s := range spellings {
 				g, err := molecule.ParseSMILES(s)
