@@ -90,9 +90,9 @@ func respellKekule(m *molecule.Molecule, r *rand.Rand) string {
 	return sb.String()
 }
 
-// fingerprint is everything an estimate promises, rounded far below any
+// resultKey is everything an estimate promises, rounded far below any
 // group value so that summation order cannot show.
-func fingerprint(e *Result) string {
+func resultKey(e *Result) string {
 	var miss []string
 	for _, m := range e.Missing {
 		miss = append(miss, m.Group+" ≈ "+m.Approximation)
@@ -203,7 +203,7 @@ func TestResonanceOneAnswer(t *testing.T) {
 				if err != nil {
 					gotErr = err.Error()
 				} else {
-					got = fingerprint(e)
+					got = resultKey(e)
 				}
 				if fi == 0 && s == spellings[0] {
 					want, wantErr = got, gotErr
@@ -234,7 +234,7 @@ func TestResonanceRepresentative(t *testing.T) {
 	} {
 		a, b := estimate(t, c[0], Options{}), estimate(t, c[1], Options{})
 		assert.Equal(t, parse(t, c[1]).Canonical(), a.Form, c[0])
-		assert.Equal(t, fingerprint(b), fingerprint(a), c[0])
+		assert.Equal(t, resultKey(b), resultKey(a), c[0])
 	}
 	phenyl := parse(t, "[c]1ccccc1")
 	forms, _ := resonanceForms(phenyl, maxResonanceForms)
