@@ -327,15 +327,35 @@ func components(m *molecule.Molecule) int {
 // Such species need a thermo block (or are in the reference library, which
 // is consulted before this package).
 func spinScope(m *molecule.Molecule) error {
+	// The atom named is chosen by element (then electron count), never by
+	// atom order, so that every spelling gets the same message.
+	best := -1
 	for i, a := range m.Atoms {
-		if a.Radical > 1 {
-			return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) carries %d unpaired electrons (a carbene- or vinylidene-type centre): its spin states have no hydrogen-bond-increment data — give the species a thermo block", a.Element, a.Radical)}
+		if a.Radical > 1 && (best < 0 || a.Element < m.Atoms[best].Element ||
+			a.Element == m.Atoms[best].Element && a.Radical > m.Atoms[best].Radical) {
+			best = i
 		}
 	}
+	if best >= 0 {
+		a := m.Atoms[best]
+		return &UnsupportedError{Atom: best + 1, Reason: fmt.Sprintf("(%s) carries %d unpaired electrons (a carbene- or vinylidene-type centre): its spin states have no hydrogen-bond-increment data — give the species a thermo block", a.Element, a.Radical)}
+	}
+	pair, at, first, second := "", 0, "", ""
 	for _, b := range m.Bonds {
-		if m.Atoms[b.A].Radical > 0 && m.Atoms[b.B].Radical > 0 {
-			return &UnsupportedError{Atom: b.A + 1, Reason: fmt.Sprintf("(%s) and atom %d (%s) are bonded and both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data — give the species a thermo block", m.Atoms[b.A].Element, b.B+1, m.Atoms[b.B].Element)}
+		x, y := m.Atoms[b.A], m.Atoms[b.B]
+		if x.Radical == 0 || y.Radical == 0 {
+			continue
 		}
+		i := b.A
+		if y.Element < x.Element {
+			x, y, i = y, x, b.B
+		}
+		if p := x.Element + "–" + y.Element; pair == "" || p < pair {
+			pair, at, first, second = p, i+1, x.Element, y.Element
+		}
+	}
+	if pair != "" {
+		return &UnsupportedError{Atom: at, Reason: fmt.Sprintf("(%s) and its %s neighbour both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data — give the species a thermo block", first, second)}
 	}
 	return nil
 }
