@@ -79,7 +79,11 @@ func addRingRadical(m *molecule.Molecule, est *Result) {
 		n := len(ring)
 		if n == 5 && allCarbon(m, ring) {
 			est.Corrections = append(est.Corrections, bdeCorrection(cyclopentadienylBDE, used, "cyclically delocalised 5-ring"))
-			if substituted(m, ring) || flagged {
+			// The measured bond enthalpy replaces the increment and
+			// whatever it left out (e.g. a second allylic neighbour):
+			// the increment's own flags no longer apply.
+			est.Missing = slices.DeleteFunc(est.Missing, func(x Missing) bool { return strings.HasPrefix(x.Group, "HBI: ") })
+			if substituted(m, ring) {
 				est.Missing = append(est.Missing, Missing{
 					Group:         "ring radical: substituted or hetero cyclopentadienyl site",
 					Approximation: "C–H bond enthalpy of " + cyclopentadienylBDE.parent,
