@@ -309,3 +309,34 @@ func TestResonanceAccuracy(t *testing.T) {
 	t.Logf("resonance radicals: MAE %.2f kcal/mol over %d structures", mae, n)
 	assert.LessOrEqual(t, mae, maxMAE)
 }
+
+// BenchmarkEstimateResonance estimates radicals with several resonance
+// structures (benzyl: 3 distinct; 1-naphthylmethyl; a C21 polyene radical
+// at the structure bound), each parse included.
+func BenchmarkEstimateResonance(b *testing.B) {
+	for _, s := range []string{"[CH2]c1ccccc1", "[CH2]c1cccc2ccccc12", "[CH2]" + strings.Repeat("C=C", 10)} {
+		b.Run(s, func(b *testing.B) {
+			for b.Loop() {
+				m, err := molecule.ParseSMILES(s)
+				if err != nil {
+					b.Fatal(err)
+				}
+				if _, err := Estimate(m, Options{}); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+	// baseline: benzyl as one structure, without the enumeration
+	b.Run("one structure [CH2]c1ccccc1", func(b *testing.B) {
+		for b.Loop() {
+			m, err := molecule.ParseSMILES("[CH2]c1ccccc1")
+			if err != nil {
+				b.Fatal(err)
+			}
+			if _, err := estimateForm(m, Options{}); err != nil {
+				b.Fatal(err)
+			}
+		}
+	})
+}
