@@ -28,9 +28,12 @@ type estimateJSON struct {
 	SymmetryNumber *int             `json:"symmetry_number"`
 	OpticalIsomers *int             `json:"optical_isomers"`
 	MissingGroups  []string         `json:"missing_groups"`
-	Uncertainty    *float64         `json:"uncertainty_hf298_kj_mol"`
-	Error          *errorJSON       `json:"error"`
-	NASA7          *nasaJSON        `json:"nasa7,omitempty"`
+	// ResonanceForm is the canonical SMILES of the resonance structure
+	// estimated, for a radical with several (engine/benson/resonance.go).
+	ResonanceForm string     `json:"resonance_form,omitempty"`
+	Uncertainty   *float64   `json:"uncertainty_hf298_kj_mol"`
+	Error         *errorJSON `json:"error"`
+	NASA7         *nasaJSON  `json:"nasa7,omitempty"`
 }
 
 type groupJSON struct {
@@ -158,6 +161,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		}
 		r.SymmetryNumber = ptr(g.SymmetryNumber)
 		r.OpticalIsomers = ptr(g.OpticalIsomers)
+		r.ResonanceForm = g.Form
 	} else {
 		// A reference-library species: the whole value is one reference term,
 		// so that the breakdown still sums to the totals.
@@ -202,6 +206,9 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		}
 		writeTable(w, "  ", []string{"group", "count", "ΔHf°298 " + u.EnergyName(), "S°298 " + u.EntropyName()}, rows)
 		fmt.Fprintf(w, "  symmetry number σ = %d, optical isomers n = %d, multiplicity %d\n", g.SymmetryNumber, g.OpticalIsomers, g.Multiplicity)
+		if g.Form != "" {
+			fmt.Fprintf(w, "  estimated as the resonance structure %s (most stable of %d)\n", g.Form, g.ResonanceForms)
+		}
 		for _, ms := range g.Missing {
 			fmt.Fprintf(w, "  MISSING group %s: approximated by %s (%s)\n", ms.Group, ms.Approximation, ms.Note)
 		}

@@ -24,7 +24,9 @@
 // change (groups.tsv for C/H/O, groups_nsx.tsv for N, S, F, Cl and Br; see
 // hetero.go). Anything else — an element or environment without groups, a
 // molecule too small to have groups, a charged or isotope-labelled atom, a
-// multiplicity other than the one the structure implies — is refused with an *UnsupportedError
+// multiplicity other than the one the structure implies, a structure of
+// several disconnected parts, an atom with two unpaired electrons or unpaired
+// electrons on bonded atoms (spin states without increment data) — is refused with an *UnsupportedError
 // (or a *MissingGroupError naming a group the user could supply); no atom is
 // ever left out of the sum. Groups with a stand-in, ring systems without a
 // correction (rings.go, ringsys.go) and radical sites without increments
@@ -126,6 +128,13 @@ type Result struct {
 	// (see uncertainty in class.go); ±2σ covers ≥ 80 % of the validation
 	// species (TestAccuracy reports the coverage).
 	Uncertainty float64
+
+	// Form is the canonical SMILES of the resonance structure that was
+	// estimated, when the species has more than one (resonance.go); ""
+	// otherwise. ResonanceForms counts its distinct structures (0 when
+	// there is only one).
+	Form           string
+	ResonanceForms int
 }
 
 // Estimate estimates the thermochemistry of m. It fails for structures
@@ -157,6 +166,12 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	if len(refusals) > 0 {
 		return nil, canonicalRefusal(m, refusals)
 	}
+	if n := components(m); n > 1 {
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("the structure has %d disconnected parts ('.' in the SMILES): a species is one molecule — give each part its own species, or give this one a thermo block", n)}
+	}
+	if err := spinScope(m); err != nil {
+		return nil, err
+	}
 	unpaired := 0
 	for _, a := range m.Atoms {
 		unpaired += a.Radical
@@ -171,7 +186,9 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	if len(forms) > 1 {
 		return chooseKekule(forms, opts)
 	}
-	est, err := estimateForm(m, opts)
+	// Radicals with several resonance structures are estimated as their
+	// most stable one (resonance.go).
+	est, err := estimateResonance(m, opts)
 	if err == nil && bounded {
 		est.Missing = append(est.Missing, Missing{
 			Group:         "Kekulé structure of a non-benzenoid aromatic ring",
@@ -183,33 +200,11 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	return est, err
 }
 
-// estimateForm estimates m as written, with its Kekulé structure (see
-// kekule.go); m has passed Estimate's checks of charge, isotopes and
-// multiplicity.
+// estimateForm estimates m as written: one Kekulé structure (kekule.go) and
+// one resonance structure (resonance.go); m has passed Estimate's checks of
+// charge, isotopes, connectivity, spin and multiplicity.
 func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
-	unpaired := 0
-	for _, a := range m.Atoms {
-		unpaired += a.Radical
-	}
-	if alt, several, ok := enoxyForm(m); ok {
-		// An α-carbonyl radical is estimated as its resonance structure with
-		// the electron on oxygen, whose O–H increment carries the
-		// stabilisation the plain alkyl increment lacks.
-		est, err := Estimate(alt, opts)
-		if err != nil {
-			return nil, err
-		}
-		est.Missing = append(est.Missing, Missing{
-			Group:         "HBI: alpha-carbonyl radical site",
-			Approximation: "resonance structure with the radical on oxygen",
-			Note:          "no α-carbonyl increment at hand: the C=C–O• resonance form is estimated instead",
-		})
-		if several != "" {
-			est.Missing = append(est.Missing, severalStabilisers(several, "alpha-carbonyl via the C=C–O• resonance structure"))
-		}
-		est.finish()
-		return est, nil
-	}
+	unpaired := m.UnpairedElectrons()
 	tab := lookupTable(opts.UserGroups)
 	est := &Result{Formula: m.Formula(), MolarMass: m.MolarMass()}
 
@@ -230,6 +225,7 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 		if err := addHBI(m, g, tab, est); err != nil {
 			return nil, err
 		}
+		addRingRadical(m, est) // small and cyclically conjugated rings (ringradical.go)
 	}
 
 	// Spin, symmetry and optical isomers, on the species itself.
@@ -338,74 +334,75 @@ func term(v GroupValue, count int) Term {
 // hydrogen: the closed-shell parent used by the HBI method.
 func parentOf(m *molecule.Molecule) *molecule.Molecule { return m.ClosedShellParent() }
 
-// enoxyForm returns the resonance structure •C–C=O ↔ C=C–O• of a molecule
-// whose single unpaired electron sits on a carbon next to a carbonyl carbon
-// (an α-carbonyl radical such as CH2CHO or CH3C(O)CH2), with the electron
-// moved to the oxygen; ok is false for any other molecule. The copy shares
-// nothing mutable with m.
-//
-// The choice depends on the graph only: with several carbonyl neighbours
-// the electron goes to the oxygen of lowest canonical symmetry class
-// (molecule.SymmetryClasses; oxygens of one class give isomorphic resonance
-// structures). several describes the site's stabilising neighbours when it
-// has more than one (radical.go, rule 2): "alpha-carbonyl ×2",
-// "alpha-carbonyl, allylic"; "" otherwise.
-func enoxyForm(m *molecule.Molecule) (alt *molecule.Molecule, several string, ok bool) {
-	site, unpaired := -1, 0
-	for i, a := range m.Atoms {
-		unpaired += a.Radical
-		if a.Radical > 0 {
-			site = i
-		}
-	}
-	if unpaired != 1 || m.Atoms[site].Element != "C" || m.Atoms[site].Aromatic {
-		return nil, "", false
-	}
-	type cand struct{ b1, b2, k int }
-	var cands []cand
-	carbonyls := 0 // carbonyl carbons next to the site
-	for _, b1 := range m.Adj[site] {
-		j := m.Other(b1, site)
-		if m.Bonds[b1].Order != 1 || m.Atoms[j].Element != "C" || m.Atoms[j].Aromatic {
+// components returns the number of connected parts of m.
+func components(m *molecule.Molecule) int {
+	seen := make([]bool, len(m.Atoms))
+	n := 0
+	for s := range m.Atoms {
+		if seen[s] {
 			continue
 		}
-		found := false
-		for _, b2 := range m.Adj[j] {
-			k := m.Other(b2, j)
-			if m.Bonds[b2].Order != 2 || m.Atoms[k].Element != "O" || len(m.Adj[k]) != 1 || m.Atoms[k].HCount != 0 {
-				continue
-			}
-			cands = append(cands, cand{b1, b2, k})
-			found = true
-		}
-		if found {
-			carbonyls++
-		}
-	}
-	if len(cands) == 0 {
-		return nil, "", false
-	}
-	c := cands[0]
-	if len(cands) > 1 {
-		cls := m.SymmetryClasses()
-		for _, x := range cands[1:] {
-			if cls[x.k] < cls[c.k] {
-				c = x
+		n++
+		seen[s] = true
+		stack := []int{s}
+		for len(stack) > 0 {
+			i := stack[len(stack)-1]
+			stack = stack[:len(stack)-1]
+			for _, b := range m.Adj[i] {
+				if j := m.Other(b, i); !seen[j] {
+					seen[j] = true
+					stack = append(stack, j)
+				}
 			}
 		}
 	}
-	// built by the molecule package: rings and aromaticity stay right
-	alt, err := m.WithBondOrders(map[int]int{c.b1: 2, c.b2: 1}, map[int]int{site: 0, c.k: 1})
-	if err != nil {
-		return nil, "", false
+	return n
+}
+
+// spinScope refuses the spin states that hydrogen-bond increments do not
+// describe. An increment is the energy of breaking one X–H bond to leave one
+// unpaired electron on X, with the other electrons paired; it says nothing
+// about
+//
+//   - an atom with two or more unpaired electrons (carbene, vinylidene,
+//     nitrene or atom centres such as C=[C] and [CH2]): their singlet and
+//     triplet states differ by up to tens of kcal/mol, and which is the
+//     ground state depends on the substituents;
+//   - unpaired electrons on bonded atoms ([C]#[C], [CH]=[CH]): the two
+//     electrons couple to a (partial) bond, a state with no increment.
+//
+// Such species need a thermo block (or are in the reference library, which
+// is consulted before this package).
+func spinScope(m *molecule.Molecule) error {
+	// The atom named is chosen by element (then electron count), never by
+	// atom order, so that every spelling gets the same message.
+	best := -1
+	for i, a := range m.Atoms {
+		if a.Radical > 1 && (best < 0 || a.Element < m.Atoms[best].Element ||
+			a.Element == m.Atoms[best].Element && a.Radical > m.Atoms[best].Radical) {
+			best = i
+		}
 	}
-	parts := []string{"alpha-carbonyl"}
-	if carbonyls > 1 {
-		parts[0] = fmt.Sprintf("alpha-carbonyl ×%d", carbonyls)
+	if best >= 0 {
+		a := m.Atoms[best]
+		return &UnsupportedError{Atom: best + 1, Reason: fmt.Sprintf("(%s) carries %d unpaired electrons (a carbene- or vinylidene-type centre): its spin states have no hydrogen-bond-increment data — give the species a thermo block", a.Element, a.Radical)}
 	}
-	_, others, n := newGraph(m.ClosedShellParent()).stabiliserKinds(site)
-	if carbonyls+n < 2 {
-		return alt, "", true
+	pair, at, first, second := "", 0, "", ""
+	for _, b := range m.Bonds {
+		x, y := m.Atoms[b.A], m.Atoms[b.B]
+		if x.Radical == 0 || y.Radical == 0 {
+			continue
+		}
+		i := b.A
+		if y.Element < x.Element {
+			x, y, i = y, x, b.B
+		}
+		if p := x.Element + "–" + y.Element; pair == "" || p < pair {
+			pair, at, first, second = p, i+1, x.Element, y.Element
+		}
 	}
-	return alt, strings.Join(append(parts, others...), ", "), true
+	if pair != "" {
+		return &UnsupportedError{Atom: at, Reason: fmt.Sprintf("(%s) and its %s neighbour both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data — give the species a thermo block", first, second)}
+	}
+	return nil
 }

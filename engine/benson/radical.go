@@ -52,7 +52,7 @@ import (
 //     widens the uncertainty: the further stabilisation (or captodative
 //     effect) of the other neighbours is not in the increment used.
 //  3. An α-carbonyl centre is estimated as its C=C–O• resonance structure
-//     (enoxyForm in benson.go), whatever its other neighbours; with two
+//     (the enoxy resonance structure, resonance.go), whatever its other neighbours; with two
 //     carbonyl neighbours the one whose oxygen has the lowest canonical
 //     symmetry class (molecule.SymmetryClasses) takes the electron, and other
 //     stabilising neighbours are flagged as in rule 2.
