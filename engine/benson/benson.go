@@ -68,7 +68,7 @@ type GroupValue struct {
 type Options struct {
 	Multiplicity   int          // spin multiplicity 2S+1; 0 = unpaired electrons + 1
 	Symmetry       int          // total symmetry number σ; 0 = SymmetryNumber(m)
-	OpticalIsomers int          // n; 0 = 2^(unmarked potential stereocentres)
+	OpticalIsomers int          // n; 0 = stereoisomers of the structure (molecule.OpticalIsomers)
 	UserGroups     []GroupValue // win over the built-in table; names are normalised
 }
 
@@ -224,7 +224,11 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	est.OpticalIsomers = opts.OpticalIsomers
 	if est.OpticalIsomers == 0 {
-		est.OpticalIsomers = sy.opticalIsomers()
+		n, err := sy.opticalIsomers()
+		if err != nil {
+			return nil, err
+		}
+		est.OpticalIsomers = n
 	}
 	if est.OpticalIsomers > 1 {
 		est.Corrections = append(est.Corrections, Term{

@@ -29,10 +29,11 @@ func SymmetryNumber(m *molecule.Molecule) int {
 	return s.sigma
 }
 
-// OpticalIsomers returns n = 2^k where k counts potential stereocentres (sp3
-// carbon with four constitutionally different ligands) that carry no @/@@
-// mark: an unmarked centre stands for both configurations, a marked one for
-// the single enantiomer written.
+// OpticalIsomers returns n, the number of stereoisomers the structure
+// stands for (molecule.Molecule.OpticalIsomers documents the rule: distinct
+// configurations of the tetrahedral carbons that the rings allow, up to the
+// graph's symmetry; a written @/@@ fixes its centre), or 0 when it cannot be
+// computed within the work bound (Estimate reports the error).
 func OpticalIsomers(m *molecule.Molecule) int {
 	if m == nil || len(m.Atoms) == 0 {
 		return 1
@@ -67,4 +68,6 @@ func symmetryOf(ctx context.Context, m *molecule.Molecule) *sym {
 // number returns σ; 0 when it could not be computed (see err).
 func (s *sym) number() int { return s.sigma }
 
-func (s *sym) opticalIsomers() int { return s.m.OpticalIsomers() }
+func (s *sym) opticalIsomers() (int, error) {
+	return s.m.OpticalIsomersContext(context.Background())
+}

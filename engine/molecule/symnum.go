@@ -137,20 +137,6 @@ func (m *Molecule) symmetryInfo(ctx context.Context, budget int) (symmetryInfo, 
 	return info, nil
 }
 
-// OpticalIsomers returns n = 2^k, where k counts the potential stereocentres
-// (PotentialStereocentres) that are carbon atoms written without a chirality
-// mark: an unmarked centre stands for both configurations, a marked one for
-// the single enantiomer written. k is capped at 30.
-func (m *Molecule) OpticalIsomers() int {
-	k := 0
-	for _, c := range m.PotentialStereocentres() {
-		if m.Atoms[c].Element == "C" && m.Atoms[c].Chirality == "" && m.Atoms[c].Radical == 0 {
-			k++
-		}
-	}
-	return 1 << min(k, 30)
-}
-
 // Ligand colours of the outside positions of a fragment atom.
 const (
 	colOut    = -5 // the outward side of a three-connected cage atom

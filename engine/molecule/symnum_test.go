@@ -177,3 +177,38 @@ func TestSymmetryNumberMeso(t *testing.T) {
 	assert.Equal(t, int64(9), sigma("C[C@H](O)C[C@@H](C)O"), "meso")
 	assert.Equal(t, int64(18), sigma("CC(O)CC(C)O"), "unmarked")
 }
+
+// Optical isomers count stereoisomers, not 2^centres: small bicycles keep
+// their bridgeheads out,out, small fused rings are cis, cages are fixed,
+// meso forms count once. Expected values: stereoisomers by hand from the
+// geometric rule (common practice), cross-checked with RDKit stereoisomer
+// enumeration with embedding (testdata/smiles/optical.tsv, see
+// make_optical.py; RDKit also lists a trans-fused cyclobutane on
+// norbornane for C1CC2CC1C1CCC21, which kiln's cis rule excludes).
+func TestOpticalIsomersRingSystems(t *testing.T) {
+	for _, c := range []struct {
+		smi  string
+		want int
+	}{
+		{"CC1CC2CCC1C2", 4},     // 2-methylnorbornane: exo/endo × enantiomers
+		{"C1CC2CC1C1CCC21", 2},  // cyclobutane cis-fused on norbornane: exo, endo (both Cs)
+		{"C1CC2C3CC1C3C2", 2},   // one chiral pair
+		{"CC1C2CC2C1C", 4},      // 2,3-dimethylhousane
+		{"OC1C2CC3C(C2)C13", 2}, // syn/anti OH on a chiral-free cage
+		{"C12C3C4C5C1C6C7C8C2C9C3C%10C4C%11C5C6C%12C7C%13C8C9C%10C%11C%12%13", 1},
+		{"C12C3C4C5C1C6C7C2C8C3C9C4C%10C5C6C%11C7C8C9C%10%11", 1}, // dodecahedrane
+		{"C12C3C1C1C2C31", 1},       // prismane
+		{"CC12C3C4C1C5C2C3C45", 1},  // methylcubane
+		{"C1C2CC3CC1CC(C2)C3", 1},   // adamantane
+		{"CC(O)C(C)O", 3},           // R,R; S,S; meso
+		{"C[C@H](O)[C@@H](C)O", 1},  // meso written
+		{"C[C@H](O)[C@H](C)O", 1},   // one enantiomer written
+		{"OC(C(O)C(O)=O)C(O)=O", 3}, // tartaric acid
+		{"CC1CCC(C)CC1", 2},         // cis, trans
+		{"CC1CCCC2CCCCC12", 8},      // decalin fusion may be trans
+	} {
+		n, err := parse(t, c.smi).OpticalIsomersContext(context.Background())
+		require.NoError(t, err, c.smi)
+		assert.Equal(t, c.want, n, c.smi)
+	}
+}
