@@ -212,3 +212,33 @@ func TestOpticalIsomersRingSystems(t *testing.T) {
 		assert.Equal(t, c.want, n, c.smi)
 	}
 }
+
+// A radical or cation centre conjugated with a π system is planar and part
+// of the rigid fragment (no free CH2 top); cumulenes with an odd number of
+// double bonds are planar, with an even number twisted. Point groups:
+// common practice (textbook structures).
+func TestSymmetryConjugatedRadicalsCumulenes(t *testing.T) {
+	for _, c := range []struct {
+		smi  string
+		want int64
+	}{
+		{"[CH2]c1ccccc1", 2},   // benzyl C2v
+		{"[CH2+]c1ccccc1", 2},  // benzyl cation C2v
+		{"C=C[CH2]", 2},        // allyl C2v
+		{"[CH2]C=CC=C", 2},     // pentadienyl C2v, either spelling
+		{"C=C[CH]C=C", 2},      //
+		{"[CH2]C(=O)C", 3},     // acetonyl: planar CH2, methyl top 3
+		{"[CH2]C(C)=C", 6},     // 2-methylallyl: C2v × methyl 3
+		{"C=C(C=C)[CH2]", 2},   // cross-conjugated ends differ from CH2
+		{"C[CH2]", 6},          // ethyl: no π system, CH2 stays a top
+		{"C=C=C=C", 4},         // butatriene D2h
+		{"C=C=C", 4},           // allene D2d
+		{"C=C=C=C=C", 4},       // pentatetraene D2d
+		{"FC(F)=C=C=C(F)F", 4}, // D2h
+		{"C=C", 4},
+	} {
+		s, err := parse(t, c.smi).SymmetryNumber()
+		require.NoError(t, err, c.smi)
+		assert.Equal(t, c.want, s.Int64(), c.smi)
+	}
+}
