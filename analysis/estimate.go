@@ -183,7 +183,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 // and a number that cannot be true is not reported as an estimate.
 func physical(g *benson.Result) error {
 	if !(g.S298 > 0) {
-		return fmt.Errorf("the estimate is not physical: S°298 = %.2f J/(mol K) ≤ 0 (symmetry number %d, optical isomers %d: check any symmetry or optical-isomers override)", g.S298, g.SymmetryNumber, g.OpticalIsomers)
+		return fmt.Errorf("the estimate is not physical: S°298 = %.2f J/(mol K) ≤ 0 (symmetry number %s, optical isomers %d: check any symmetry or optical-isomers override)", g.S298, g.Sigma(), g.OpticalIsomers)
 	}
 	for i, cp := range g.Cp {
 		if !(cp > 0) {

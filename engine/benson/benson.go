@@ -111,7 +111,8 @@ type Result struct {
 	Groups      []Term
 	Corrections []Term
 
-	SymmetryNumber int
+	SymmetryNumber int    // σ; 0 when σ exceeds the int range (see SymmetryExact)
+	SymmetryExact  string // σ in decimal, exact for any size
 	OpticalIsomers int
 	Multiplicity   int
 
@@ -124,6 +125,14 @@ type Result struct {
 	// (see uncertainty in class.go); ±2σ covers ≥ 80 % of the validation
 	// species (TestAccuracy reports the coverage).
 	Uncertainty float64
+}
+
+// Sigma returns σ in decimal, exact for any size.
+func (r *Result) Sigma() string {
+	if r.SymmetryExact != "" {
+		return r.SymmetryExact
+	}
+	return strconv.Itoa(r.SymmetryNumber)
 }
 
 // Estimate estimates the thermochemistry of m. It fails for structures
@@ -209,17 +218,18 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	if opts.Symmetry == 0 || opts.OpticalIsomers == 0 {
 		sy = newSym(sg)
 	}
-	est.SymmetryNumber = opts.Symmetry
-	if est.SymmetryNumber == 0 {
+	est.SymmetryNumber, est.SymmetryExact = opts.Symmetry, strconv.Itoa(opts.Symmetry)
+	lnSigma := math.Log(float64(opts.Symmetry))
+	if opts.Symmetry == 0 {
 		if sy.err != nil {
 			return nil, sy.err
 		}
-		est.SymmetryNumber = sy.number()
+		est.SymmetryNumber, est.SymmetryExact, lnSigma = sy.number(), sy.exact.String(), lnBig(sy.exact)
 	}
-	if est.SymmetryNumber > 1 {
+	if lnSigma > 0 {
 		est.Corrections = append(est.Corrections, Term{
-			Name: "symmetry -R ln " + strconv.Itoa(est.SymmetryNumber), Count: 1,
-			S298: -R * math.Log(float64(est.SymmetryNumber)), Source: "statistical mechanics",
+			Name: "symmetry -R ln " + est.SymmetryExact, Count: 1,
+			S298: -R * lnSigma, Source: "statistical mechanics",
 		})
 	}
 	est.OpticalIsomers = opts.OpticalIsomers

@@ -78,10 +78,17 @@ func (m *Molecule) stereoPositions(i int) []int {
 // OpticalIsomersContext is OpticalIsomers with cancellation and an error
 // (wrapping ErrWorkLimit) when the count is beyond the work bound.
 func (m *Molecule) OpticalIsomersContext(ctx context.Context) (int, error) {
+	cand := make([]bool, len(m.Atoms))
+	for i := range m.Atoms {
+		cand[i] = m.stereoUnit(i)
+	}
+	if err := m.dropAlikeBranches(ctx, cand); err != nil {
+		return 0, err
+	}
 	var units []int
 	at := map[int]int{}
 	for i := range m.Atoms {
-		if m.stereoUnit(i) {
+		if cand[i] {
 			at[i] = len(units)
 			units = append(units, i)
 		}
@@ -494,4 +501,70 @@ func (m *Molecule) cageRelations(units []int, at map[int]int, inRing []bool, rin
 		}
 	}
 	return out
+}
+
+// dropAlikeBranches clears cand[x] for the stereo units that carry two
+// symmetry-equivalent acyclic branches with no stereo unit in them
+// (C(CH3)2, two tert-butyls): exchanging the branches is a symmetry that
+// fixes everything else, so x has one configuration. Repeated until
+// nothing changes (a branch may lose its last unit). Pseudo-asymmetric
+// centres (C3 of a pentitol) keep their units: their branches carry units.
+func (m *Molecule) dropAlikeBranches(ctx context.Context, cand []bool) error {
+	some := false
+	for _, c := range cand {
+		some = some || c
+	}
+	if !some {
+		return nil
+	}
+	info, err := m.symmetryInfo(ctx, DefaultSearchWork)
+	if err != nil {
+		return fmt.Errorf("optical isomers: %w", err)
+	}
+	classes := orbitClasses(len(m.Atoms), info.gens, info.labels)
+	inRing := m.ringBondFlags()
+	// hasUnit reports whether the branch entered from x through y holds a
+	// candidate unit (acyclic branches only: the bond x–y is on no ring).
+	hasUnit := func(x, y int) bool {
+		seen := map[int]bool{x: true, y: true}
+		stack := []int{y}
+		for len(stack) > 0 {
+			a := stack[len(stack)-1]
+			stack = stack[:len(stack)-1]
+			if cand[a] {
+				return true
+			}
+			for _, o := range m.Neighbors(a) {
+				if !seen[o] {
+					seen[o] = true
+					stack = append(stack, o)
+				}
+			}
+		}
+		return false
+	}
+	for changed := true; changed; {
+		changed = false
+		for x := range m.Atoms {
+			if !cand[x] {
+				continue
+			}
+			free := map[int]bool{} // classes of unit-free acyclic branches
+			for _, b := range m.Adj[x] {
+				if inRing[b] {
+					continue
+				}
+				y := m.Other(b, x)
+				if hasUnit(x, y) {
+					continue
+				}
+				if free[classes[y]] {
+					cand[x], changed = false, true
+					break
+				}
+				free[classes[y]] = true
+			}
+		}
+	}
+	return nil
 }
