@@ -150,6 +150,9 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		if a.Charge != 0 {
 			return nil, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d: charged species are outside group additivity — give the species a thermo block", a.Element, a.Charge)}
 		}
+		if a.Isotope != 0 {
+			return nil, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) is written with mass number %d: group values are for natural isotopic abundance, and isotopologues differ in S° and Cp (mass and zero-point effects) — give the species a thermo block", a.Element, a.Isotope)}
+		}
 	}
 	unpaired := 0
 	for _, a := range m.Atoms {
