@@ -1,6 +1,7 @@
 package analysis
 
 import (
+	"context"
 	"fmt"
 	"sort"
 	"strconv"
@@ -53,9 +54,17 @@ func (o EstimateOptions) key(ident string) string {
 }
 
 // identity is a structure's canonical form with its stereo: two molecules
-// with the same identity have the same estimate.
+// with the same identity have the same estimate. When the canonical search
+// runs out of its work bound the form would depend on the spelling, so the
+// identity is the spelling itself (marked so it never equals a canonical
+// form): two such spellings are not recognised as one structure, but two
+// structures are never merged.
 func identity(m *molecule.Molecule) string {
-	return m.Canonical() + "|" + m.CanonicalStereo()
+	c, err := m.CanonicalContext(context.Background())
+	if err != nil {
+		return "\x00uncanonical|" + m.SMILES
+	}
+	return c + "|" + m.CanonicalStereo()
 }
 
 // groupsKey identifies a set of user-defined group values.
