@@ -322,7 +322,8 @@ func (m *Molecule) ringStereoRelations(ctx context.Context, units []int, at map[
 		}
 		return o
 	}
-	out = append(out, m.cageRelations(units, at, inRing, ringNbrs)...)
+	cageRels, inCage := m.cageRelations(units, at, inRing, ringNbrs)
+	out = append(out, cageRels...)
 	// small bicycles: three disjoint paths a…b with at most 7 inner atoms
 	type path struct {
 		first, last int
@@ -334,8 +335,8 @@ func (m *Molecule) ringStereoRelations(ctx context.Context, units []int, at map[
 			continue
 		}
 		for _, b := range units[ia+1:] {
-			if len(ringNbrs(b)) < 3 || m.BondBetween(a, b) >= 0 {
-				continue
+			if len(ringNbrs(b)) < 3 || m.BondBetween(a, b) >= 0 || (inCage[a] && inCage[b]) {
+				continue // cage atoms are fixed by the cage's faces
 			}
 			// simple paths a → b with at most 7 inner atoms
 			var paths []path
@@ -418,8 +419,9 @@ func (m *Molecule) ringStereoRelations(ctx context.Context, units []int, at map[
 // … c–a–b–e …, c→b→(third) at a and a→e→(third) at b have the same
 // handedness seen from outside (the faces are the smallest relevant cycles
 // through each bond).
-func (m *Molecule) cageRelations(units []int, at map[int]int, inRing []bool, ringNbrs func(int) []int) [][3]int {
+func (m *Molecule) cageRelations(units []int, at map[int]int, inRing []bool, ringNbrs func(int) []int) ([][3]int, []bool) {
 	n := len(m.Atoms)
+	inCage := make([]bool, n)
 	parent := make([]int, n)
 	for i := range parent {
 		parent[i] = i
@@ -452,6 +454,9 @@ func (m *Molecule) cageRelations(units []int, at map[int]int, inRing []bool, rin
 		// three-connected atoms: bonds = 3n/2, rings = bonds − n + 1
 		if !cage || 3*len(atoms)/2-len(atoms)+1 < 3 {
 			continue
+		}
+		for _, x := range atoms {
+			inCage[x] = true
 		}
 		order := func(x, first, second int) []int {
 			p := []int{first, second}
@@ -500,7 +505,7 @@ func (m *Molecule) cageRelations(units []int, at map[int]int, inRing []bool, rin
 			out = append(out, [3]int{at[a], at[b], permBit(order(a, c, b), pa, id) ^ permBit(order(b, a, e), pb, id)})
 		}
 	}
-	return out
+	return out, inCage
 }
 
 // dropAlikeBranches clears cand[x] for the stereo units that carry two
