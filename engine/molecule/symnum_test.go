@@ -197,15 +197,17 @@ func TestOpticalIsomersRingSystems(t *testing.T) {
 		{"OC1C2CC3C(C2)C13", 2}, // syn/anti OH on a chiral-free cage
 		{"C12C3C4C5C1C6C7C8C2C9C3C%10C4C%11C5C6C%12C7C%13C8C9C%10C%11C%12%13", 1},
 		{"C12C3C4C5C1C6C7C2C8C3C9C4C%10C5C6C%11C7C8C9C%10%11", 1}, // dodecahedrane
-		{"C12C3C1C1C2C31", 1},       // prismane
-		{"CC12C3C4C1C5C2C3C45", 1},  // methylcubane
-		{"C1C2CC3CC1CC(C2)C3", 1},   // adamantane
-		{"CC(O)C(C)O", 3},           // R,R; S,S; meso
-		{"C[C@H](O)[C@@H](C)O", 1},  // meso written
-		{"C[C@H](O)[C@H](C)O", 1},   // one enantiomer written
-		{"OC(C(O)C(O)=O)C(O)=O", 3}, // tartaric acid
-		{"CC1CCC(C)CC1", 2},         // cis, trans
-		{"CC1CCCC2CCCCC12", 8},      // decalin fusion may be trans
+		{"C12C3C1C1C2C31", 1}, // prismane
+		{"C12C3C4C5C1C1C6C7C2C2C8C3C3C9C4C4C%10C5C5C1C1C6C6C%11C7C2C2C7C8C3C3C8C9C4C4C9C%10C5C5C1C1C6C6C%11C2C2C7C3C3C8C4C4C9C5C1C1C6C2C3C41", 1}, // C60H60
+		{"OC1C(O)C(O)C(O)C(O)C1O", 9}, // inositols: 8 achiral + 1 chiral pair
+		{"CC12C3C4C1C5C2C3C45", 1},    // methylcubane
+		{"C1C2CC3CC1CC(C2)C3", 1},     // adamantane
+		{"CC(O)C(C)O", 3},             // R,R; S,S; meso
+		{"C[C@H](O)[C@@H](C)O", 1},    // meso written
+		{"C[C@H](O)[C@H](C)O", 1},     // one enantiomer written
+		{"OC(C(O)C(O)=O)C(O)=O", 3},   // tartaric acid
+		{"CC1CCC(C)CC1", 2},           // cis, trans
+		{"CC1CCCC2CCCCC12", 8},        // decalin fusion may be trans
 	} {
 		n, err := parse(t, c.smi).OpticalIsomersContext(context.Background())
 		require.NoError(t, err, c.smi)
