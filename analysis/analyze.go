@@ -1,10 +1,12 @@
 package analysis
 
 import (
+	"cmp"
 	"context"
 	"fmt"
 	"path/filepath"
 	"runtime"
+	"slices"
 	"sort"
 	"strings"
 	"sync"
@@ -36,10 +38,15 @@ type analysis struct {
 	// order is the files in resolution order: includes before the statements
 	// that follow them, depth first.
 	order []string
-	// parsed holds the structures read ahead by prepare.
-	parsed map[*speciesfile.Species]parsed
 	// userKey identifies the user-defined groups in estimate cache keys.
 	userKey string
+	// memo holds the per-statement units kept between analyses (nil when
+	// the workspace is not incremental).
+	memo *memo
+	// sink, when set, receives every reported diagnostic instead of the
+	// result: the rules of one statement run with their own sink so that
+	// their diagnostics can be kept with the statement's unit.
+	sink *[]speciesfile.Diagnostic
 	// via maps each included file to the include statement of the analysed
 	// file through which it is reached (where its problems are reported).
 	via map[string]*speciesfile.Include
@@ -59,7 +66,6 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 		Settings: set,
 		Files:    map[string]*speciesfile.File{},
 		ByName:   map[string]*Species{},
-		Uses:     map[string][]Location{},
 	}}
 	f := speciesfile.Parse(path, text)
 	a.res.File = f
@@ -69,6 +75,7 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 	if err := ctx.Err(); err != nil {
 		return nil, err
 	}
+	a.res.order = a.order
 	a.groups()
 	if err := a.species(); err != nil {
 		return nil, err
@@ -77,6 +84,7 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 		return nil, err
 	}
 	sortDiagnostics(a.res.Diagnostics)
+	w.finishMemo(path, a.memo)
 	return a.res, nil
 }
 
@@ -108,8 +116,23 @@ func (a *analysis) parallel(n, grain int, fn func(i int)) error {
 	return a.ctx.Err()
 }
 
-// report adds a diagnostic when it belongs to the analysed file.
+// reported returns the number of diagnostics reported so far (to the sink
+// while one is set): a rule compares counts to learn whether an earlier
+// check of the same declaration found something.
+func (a *analysis) reported() int {
+	if a.sink != nil {
+		return len(*a.sink)
+	}
+	return len(a.res.Diagnostics)
+}
+
+// report adds a diagnostic when it belongs to the analysed file (or to the
+// sink of the statement whose rules are running).
 func (a *analysis) report(file string, d speciesfile.Diagnostic) {
+	if a.sink != nil {
+		*a.sink = append(*a.sink, d)
+		return
+	}
 	if file != a.res.Path {
 		return
 	}
@@ -295,11 +318,11 @@ func countErrors(ds []speciesfile.Diagnostic) int {
 }
 
 func sortDiagnostics(ds []speciesfile.Diagnostic) {
-	sort.SliceStable(ds, func(i, j int) bool {
-		if ds[i].Span.Start != ds[j].Span.Start {
-			return ds[i].Span.Start < ds[j].Span.Start
+	slices.SortStableFunc(ds, func(x, y speciesfile.Diagnostic) int {
+		if x.Span.Start != y.Span.Start {
+			return cmp.Compare(x.Span.Start, y.Span.Start)
 		}
-		return ds[i].Code < ds[j].Code
+		return strings.Compare(x.Code, y.Code)
 	})
 }
 
@@ -310,10 +333,7 @@ func (a *analysis) structure(path string, sp *Species) {
 	if tok == nil {
 		return
 	}
-	p, ok := a.parsed[sp.Decl]
-	if !ok {
-		p = a.w.mols.parse(tok.Text)
-	}
+	p := a.w.mols.parse(tok.Text)
 	m, err := p.mol, p.err
 	if err != nil {
 		sp.SMILESError = err

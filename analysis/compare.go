@@ -267,7 +267,7 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 	}
 	set := w.Settings()
 	a := &analysis{w: w, ctx: ctx, set: set, res: &Result{Path: path, Settings: set, Files: map[string]*speciesfile.File{},
-		ByName: map[string]*Species{}, Uses: map[string][]Location{}}}
+		ByName: map[string]*Species{}}}
 	f := speciesfile.Parse(path, text)
 	a.res.File = f
 	a.res.Files[path] = f
@@ -301,19 +301,14 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 			files = append(files, p)
 		}
 	}
-	results := make([]parsed, len(decls))
+	// Read the structures on all cores; structure() below finds them in
+	// the workspace's molecule cache.
 	if err := a.parallel(len(decls), 64, func(i int) {
 		if d := decls[i]; d.SMILES != nil {
-			results[i] = a.w.mols.parse(d.SMILES.Text)
+			a.w.mols.parse(d.SMILES.Text)
 		}
 	}); err != nil {
 		return nil, err
-	}
-	a.parsed = make(map[*speciesfile.Species]parsed, len(decls))
-	for i, d := range decls {
-		if d.SMILES != nil {
-			a.parsed[d] = results[i]
-		}
 	}
 	for i, sp := range s.species {
 		a.structure(files[i], sp)

@@ -316,7 +316,9 @@ func (c *moleculeCache) parse(smiles string) parsed {
 	if len(c.m) >= maxCachedMolecules {
 		c.m = map[string]parsed{}
 	}
-	c.m[smiles] = p
+	// The text is a token of a file's source: a copy keeps the source of
+	// a superseded version from being held by the cache.
+	c.m[strings.Clone(smiles)] = p
 	c.mu.Unlock()
 	return p
 }

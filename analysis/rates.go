@@ -240,4 +240,9 @@ func (r *Reaction) RatesAt(T, P float64) (kf, kr float64, okF, okR bool) {
 	return kf, kr, okF, okR && finite(kr)
 }
 
+// PressureDependent reports whether the reaction's k_f depends on pressure
+// (falloff or pressure table): its rates are then shown at
+// Settings.Pressure.
+func (r *Reaction) PressureDependent() bool { return r.model != nil && r.model.PressureDependent() }
+
 func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }

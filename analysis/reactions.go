@@ -3,6 +3,7 @@ package analysis
 import (
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -18,19 +19,24 @@ var keqTemperatures = []struct {
 	T   float64
 }{{"298", T298}, {"1000", 1000}, {"1500", 1500}}
 
-// reactions resolves the reactions of the analysed file and records the uses
-// of species names in every file in scope.
+// reactions resolves the reactions of the analysed file and finds repeated
+// reactions in every file in scope.
 func (a *analysis) reactions() error {
-	seen := map[string]*speciesfile.Reaction{}
-	seenFile := map[string]string{}
+	n := 0
+	for _, path := range a.order {
+		n += len(a.res.Files[path].Reactions)
+	}
+	seen := make(map[string]*speciesfile.Reaction, n)
+	seenFile := make(map[string]string, n)
+	a.res.Reactions = make([]*Reaction, 0, len(a.res.File.Reactions))
 	for _, path := range a.order {
 		f := a.res.Files[path]
-		for _, d := range f.Reactions {
+		for k, d := range f.Reactions {
 			if err := a.ctx.Err(); err != nil {
 				return err
 			}
-			a.recordUses(path, d)
-			key := reactionKey(d)
+			rt := a.memo.reactionText(path, f, k)
+			key := rt.dupKey
 			if first, dup := seen[key]; dup {
 				if d.Duplicate == nil || first.Duplicate == nil {
 					line := a.res.Files[seenFile[key]].Lines.Position(first.Equation.Start).Line + 1
@@ -49,34 +55,69 @@ func (a *analysis) reactions() error {
 			if path != a.res.Path {
 				continue
 			}
-			a.res.Reactions = append(a.res.Reactions, a.reaction(path, d))
+			a.res.Reactions = append(a.res.Reactions, a.reaction(path, d, rt.equation))
 		}
 	}
 	return a.computeReactions()
 }
 
 // computeReactions works out balance, thermochemistry and rate checks of the
-// resolved reactions on all cores: each reaction depends only on the
-// species, which are settled by now. Diagnostics are merged in file order.
+// resolved reactions. Each reaction is one memoized unit reading its
+// statement and the species units of its terms; units not kept from the last
+// analysis are computed on all cores (the species are settled by now).
+// Diagnostics are merged in file order.
 func (a *analysis) computeReactions() error {
 	rs := a.res.Reactions
-	err := a.parallel(len(rs), 256, func(i int) {
-		if r := rs[i]; r.Resolved {
-			a.balance(r.Decl, r)
-			// Thermochemistry of a reaction that does not balance means
-			// nothing: it is neither shown nor used for reverse rates.
-			if r.Balance != nil && r.Balance.Balanced {
-				a.thermo(r.Decl, r)
-			}
-			a.rates(r.Decl, r)
+	f := a.res.File
+	units := make([]*reactionUnit, len(rs))
+	var todo []int
+	for i, r := range rs {
+		if !r.Resolved {
+			continue
+		}
+		if u := a.memo.reaction(a, a.res.Path, f, i); u != nil {
+			units[i] = u
+			continue
+		}
+		todo = append(todo, i)
+	}
+	err := a.parallel(len(todo), 256, func(k int) {
+		i := todo[k]
+		r := rs[i]
+		a.balance(r.Decl, r)
+		// Thermochemistry of a reaction that does not balance means
+		// nothing: it is neither shown nor used for reverse rates.
+		if r.Balance != nil && r.Balance.Balanced {
+			a.thermo(r.Decl, r)
+		}
+		a.rates(r.Decl, r)
+		if a.memo != nil {
+			units[i] = newReactionUnit(f.EnergyUnit, a.reactionDeps(r.Decl), r)
+			r.diags = nil
 		}
 	})
 	if err != nil {
 		return err
 	}
-	for _, r := range rs {
-		a.res.Diagnostics = append(a.res.Diagnostics, r.diags...)
-		r.diags = nil
+	n := 0
+	for i, u := range units {
+		if u != nil {
+			n += len(u.diags)
+		}
+		n += len(rs[i].diags)
+	}
+	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n)
+	for i, r := range rs {
+		u := units[i]
+		if u == nil {
+			// Not incremental: the diagnostics were reported into r.
+			a.res.Diagnostics = append(a.res.Diagnostics, r.diags...)
+			r.diags = nil
+			continue
+		}
+		u.apply(r)
+		a.memo.keepReaction(a.res.Path, i, u)
+		a.res.Diagnostics = appendRelocated(a.res.Diagnostics, u.diags, r.File, r.Decl.Body().Start)
 	}
 	a.rangeChecks()
 	return nil
@@ -143,9 +184,9 @@ func (a *analysis) rangeChecks() {
 	}
 }
 
-func (a *analysis) recordUses(path string, d *speciesfile.Reaction) {
+func recordUses(uses map[string][]Location, path string, d *speciesfile.Reaction) {
 	add := func(t speciesfile.Token) {
-		a.res.Uses[t.Text] = append(a.res.Uses[t.Text], Location{File: path, Span: t.Span})
+		uses[t.Text] = append(uses[t.Text], Location{File: path, Span: t.Span})
 	}
 	for _, t := range d.Reactants {
 		add(t.Name)
@@ -203,10 +244,11 @@ func reactionKey(d *speciesfile.Reaction) string {
 	return l + " = " + r + " " + tb
 }
 
-// reaction computes balance, thermochemistry and rate checks of one reaction.
-func (a *analysis) reaction(path string, d *speciesfile.Reaction) *Reaction {
+// reaction resolves the names of one reaction (equation is its text with
+// blanks collapsed); computeReactions works out the rest.
+func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation string) *Reaction {
 	f := a.res.Files[path]
-	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equationText(f, d), Resolved: true, Kp: map[string]*float64{}}
+	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equation, Resolved: true, Kp: map[string]*float64{}}
 	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Equation) {
 		// An equation the reader could not read is not data: the syntax
 		// error is the one diagnostic.

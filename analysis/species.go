@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io/fs"
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -17,16 +18,38 @@ import (
 )
 
 // species resolves every species declaration in scope: structure, given
-// thermo, estimate, and the checks that compare them.
+// thermo, estimate, and the checks that compare them. The rules of each
+// declaration (speciesRules) form one memoized unit; duplicate names and
+// structures are checked across declarations on every analysis.
 func (a *analysis) species() error {
 	user := a.userGroups()
-	if err := a.prepare(user); err != nil {
-		return err
+	if len(user) > 0 {
+		a.userKey = groupsKey(user) // before the workers read it
 	}
-	byStructure := map[string][]*Species{}
+	nSpecies := 0
+	for _, path := range a.order {
+		nSpecies += len(a.res.Files[path].Species)
+	}
+	// Messages are written in the analysed file's display units.
+	a.memo = a.w.startMemo(a.res.Path, a.set, a.userKey+"|"+a.res.Units().EnergyName())
+	a.res.ByName = make(map[string]*Species, nSpecies)
+	a.res.Species = make([]*Species, 0, nSpecies)
+
+	type item struct {
+		path string
+		f    *speciesfile.File
+		k    int // index in f.Species
+		sp   *Species
+		u    *speciesUnit
+		// diags of the species' rules when there is no memo (no unit is
+		// made: nothing would reuse it).
+		diags []speciesfile.Diagnostic
+	}
+	items := make([]item, 0, nSpecies)
+	var todo []int
 	for _, path := range a.order {
 		f := a.res.Files[path]
-		for _, d := range f.Species {
+		for k, d := range f.Species {
 			if err := a.ctx.Err(); err != nil {
 				return err
 			}
@@ -41,26 +64,66 @@ func (a *analysis) species() error {
 			}
 			a.res.ByName[sp.Name] = sp
 			a.res.Species = append(a.res.Species, sp)
-
-			a.structure(path, sp)
-			if sp.Mol == nil && len(d.Formula) > 0 {
-				// The parser reports a malformed composition line.
-				comp := map[string]int{}
-				for _, ec := range d.Formula {
-					comp[ec.Symbol] += ec.Count
-				}
-				sp.Composition = comp
-				sp.Formula = molecule.HillFormula(comp)
-				sp.MolarMass = MolarMassOf(comp)
+			u := a.memo.species(path, f, k)
+			if u == nil {
+				todo = append(todo, len(items))
 			}
-			if sp.Mol != nil {
-				if first := sameStructure(byStructure, sp, effectiveMultiplicity(a.w.cache.lib, sp)); first != nil {
-					a.reportSameStructure(path, sp, first)
-				}
-				a.estimateSpecies(path, sp, user)
+			items = append(items, item{path: path, f: f, k: k, sp: sp, u: u})
+		}
+	}
+	// The names whose unit is recomputed: every other declared name stands
+	// for the same unit as in the last analysis (a declaration that kept its
+	// unit was the first of its name then too: only first declarations
+	// have units), so reaction units naming none of them stay valid.
+	if a.memo != nil {
+		a.memo.changed = make(map[string]bool, len(todo))
+		for _, k := range todo {
+			a.memo.changed[items[k].sp.Name] = true
+		}
+	}
+	// Units not kept from the last analysis are computed on all cores: each
+	// reads only its own declaration and the (concurrency-safe) caches.
+	err := a.parallel(len(todo), 16, func(k int) {
+		it := &items[todo[k]]
+		var diags []speciesfile.Diagnostic
+		unit := *a
+		unit.sink = &diags
+		unit.speciesRules(it.path, it.sp, user)
+		if a.memo == nil {
+			it.diags = diags
+			return
+		}
+		it.u = newSpeciesUnit(it.f.EnergyUnit, it.sp, diags, it.path)
+	})
+	if err != nil {
+		return err
+	}
+	n := len(a.res.Diagnostics)
+	for _, it := range items {
+		if it.path == a.res.Path && it.u != nil {
+			n += len(it.u.diags)
+		}
+		if it.path == a.res.Path {
+			n += len(it.diags)
+		}
+	}
+	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
+	byStructure := make(map[string][]*Species, len(items))
+	for _, it := range items {
+		sp := it.sp
+		if it.u != nil {
+			it.u.apply(sp, a.memo != nil)
+			a.memo.keepSpecies(it.path, it.k, it.u)
+			if it.path == a.res.Path {
+				a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, sp.Decl.Body().Start)
 			}
-			a.given(path, sp)
-			a.thermoChecks(path, sp)
+		} else if it.path == a.res.Path {
+			a.res.Diagnostics = append(a.res.Diagnostics, it.diags...)
+		}
+		if sp.Mol != nil {
+			if first := sameStructure(byStructure, sp); first != nil {
+				a.reportSameStructure(it.path, sp, first)
+			}
 		}
 	}
 	for _, g := range a.res.Groups {
@@ -78,12 +141,36 @@ func (a *analysis) species() error {
 	return nil
 }
 
+// speciesRules runs the rules of one species declaration that read nothing
+// but the declaration (and the settings and user groups): structure,
+// composition, estimate, given thermo and the checks comparing them.
+func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupValue) {
+	d := sp.Decl
+	a.structure(path, sp)
+	if sp.Mol == nil && len(d.Formula) > 0 {
+		// The parser reports a malformed composition line.
+		comp := map[string]int{}
+		for _, ec := range d.Formula {
+			comp[ec.Symbol] += ec.Count
+		}
+		sp.Composition = comp
+		sp.Formula = molecule.HillFormula(comp)
+		sp.MolarMass = MolarMassOf(comp)
+	}
+	if sp.Mol != nil {
+		sp.structKey = sp.inv + "|m" + strconv.Itoa(effectiveMultiplicity(a.w.cache.lib, sp))
+		a.estimateSpecies(path, sp, user)
+	}
+	a.given(path, sp)
+	a.thermoChecks(path, sp)
+}
+
 // sameStructure returns the first species in seen with the structure and
 // multiplicity of sp, and records sp. Species are bucketed by a cheap graph
 // invariant first; canonical forms are computed only within a bucket, so
 // most species never need one.
-func sameStructure(seen map[string][]*Species, sp *Species, mult int) *Species {
-	k := sp.inv + "|m" + strconv.Itoa(mult)
+func sameStructure(seen map[string][]*Species, sp *Species) *Species {
+	k := sp.structKey
 	bucket := seen[k]
 	for _, other := range bucket {
 		if identity(other.Mol) == identity(sp.Mol) {
@@ -139,41 +226,6 @@ type parsed struct {
 	molarMass   float64
 	ident       string // estimate-cache key of the structure
 	inv         string // invariant(mol)
-}
-
-// prepare reads every structure in scope and warms the estimate cache using
-// all cores: structures and estimates are independent of one another, while
-// the pass that follows (names, duplicates, diagnostics) is sequential.
-func (a *analysis) prepare(user []benson.GroupValue) error {
-	var decls []*speciesfile.Species
-	for _, path := range a.order {
-		for _, d := range a.res.Files[path].Species {
-			if d.SMILES != nil {
-				decls = append(decls, d)
-			}
-		}
-	}
-	a.parsed = make(map[*speciesfile.Species]parsed, len(decls))
-	if len(user) > 0 {
-		a.userKey = groupsKey(user) // before the workers read it
-	}
-	results := make([]parsed, len(decls))
-	err := a.parallel(len(decls), 64, func(i int) {
-		d := decls[i]
-		p := a.w.mols.parse(d.SMILES.Text)
-		results[i] = p
-		if p.err == nil {
-			// Errors are reported by the sequential pass.
-			_, _ = a.w.cache.get(p.ident, p.mol, a.estimateOptions(d, user))
-		}
-	})
-	if err != nil {
-		return err
-	}
-	for i, d := range decls {
-		a.parsed[d] = results[i]
-	}
-	return nil
 }
 
 func (a *analysis) estimateOptions(d *speciesfile.Species, user []benson.GroupValue) EstimateOptions {
@@ -365,7 +417,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		return
 	}
 	g := sp.Given
-	before := len(a.res.Diagnostics)
+	before := a.reported()
 	if g.Poly != nil {
 		cpMax := 0.0
 		if sp.Mol != nil || len(sp.Composition) > 0 {
@@ -392,7 +444,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 	if g.Table != nil {
 		a.tableChecks(path, sp)
 	}
-	defects := len(a.res.Diagnostics) > before
+	defects := a.reported() > before
 	if sp.Estimate == nil {
 		return
 	}

@@ -23,6 +23,9 @@ type Workspace struct {
 	overlay  map[string][]byte // open documents: path → text
 	cache    *estimateCache
 	mols     *moleculeCache
+
+	incremental bool
+	memos       map[string]*memoTables // by analysed path: units of its last finished analysis
 }
 
 // Result is the analysis of one file together with the files it includes.
@@ -42,12 +45,28 @@ type Result struct {
 	Reactions []*Reaction
 	// Groups are the user-defined group values visible from Path.
 	Groups []*Group
-	// Uses lists, per species name, every place a name is used in a reaction
-	// (terms, efficiencies, falloff collider) in Path and its includes.
-	Uses map[string][]Location
 	// Includes lists the include statements of Path with their resolved path
 	// ("" when unresolved).
 	Includes []ResolvedInclude
+
+	order    []string // files in resolution order
+	usesOnce sync.Once
+	uses     map[string][]Location
+}
+
+// Uses lists, per species name, every place a name is used in a reaction
+// (terms, efficiencies, falloff collider) in Path and its includes, in
+// resolution order. It is built on first use.
+func (r *Result) Uses() map[string][]Location {
+	r.usesOnce.Do(func() {
+		r.uses = map[string][]Location{}
+		for _, path := range r.order {
+			for _, d := range r.Files[path].Reactions {
+				recordUses(r.uses, path, d)
+			}
+		}
+	})
+	return r.uses
 }
 
 // ResolvedInclude is an include statement and the path it resolved to.

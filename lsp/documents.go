@@ -29,8 +29,14 @@ type document struct {
 	version int32
 	text    []byte
 	lines   *speciesfile.LineIndex
+	seq     uint64     // number of text changes so far
+	edits   []textEdit // changes made after latest's text, in order
+	latest  *snapshot  // the latest finished analysis (nil before the first)
 
-	publishMu sync.Mutex // orders diagnostics publications
+	publishMu sync.Mutex // orders diagnostics publications; guards the fields below
+	published []protocol.Diagnostic
+	hasPub    bool
+	noteNames map[string]bool // species changed since open (estimate notes of large files)
 
 	mu          sync.Mutex // guards the analysis state below
 	gen         uint64
@@ -44,8 +50,20 @@ type document struct {
 // snapshot is a completed analysis of a document.
 type snapshot struct {
 	version int32
+	seq     uint64 // the document's change count when its text was taken
 	result  *analysis.Result
 	index   *ide.Index
+}
+
+// maxPendingEdits bounds the edits kept between a document's latest
+// finished analysis and its current text.
+const maxPendingEdits = 10000
+
+// textEdit is one change of a document's text: bytes [start, end) of the
+// text before it were replaced by newLen bytes.
+type textEdit struct {
+	seq                uint64
+	start, end, newLen int
 }
 
 // uriToPath turns a file:// URI into a clean OS path; other URIs (untitled:)
@@ -91,8 +109,14 @@ func (s *server) didOpen(raw json.RawMessage) error {
 	d.version = p.TextDocument.Version
 	d.text = text
 	d.lines = speciesfile.NewLineIndex(text)
+	d.seq++
+	d.edits = nil
+	d.latest = nil // a reopened text cannot be mapped to the old analysis
 	s.ws.SetOverlay(path, text)
 	s.mu.Unlock()
+	d.publishMu.Lock()
+	d.noteNames = nil
+	d.publishMu.Unlock()
 	s.schedule(d, 0, true)
 	return nil
 }
@@ -111,7 +135,17 @@ func (s *server) didChange(raw json.RawMessage) error {
 	}
 	text, lines := d.text, d.lines
 	for _, c := range p.ContentChanges {
-		text, lines = applyChange(text, lines, c)
+		var e textEdit
+		text, lines, e = applyChange(text, lines, c)
+		d.seq++
+		e.seq = d.seq
+		d.edits = append(d.edits, e)
+		if len(d.edits) > maxPendingEdits {
+			// No analysis has finished for a long while (it keeps failing):
+			// stop mapping through an ever longer log; requests wait for
+			// the next analysis instead.
+			d.latest, d.edits = nil, nil
+		}
 	}
 	d.text, d.lines = text, lines
 	d.version = p.TextDocument.Version
@@ -122,12 +156,22 @@ func (s *server) didChange(raw json.RawMessage) error {
 }
 
 // applyChange applies one content change (UTF-16 range, or whole text) and
-// returns the new text with its line index. Out-of-range positions are
-// clamped by LineIndex.Offset; a reversed range is treated as empty.
-func applyChange(text []byte, lines *speciesfile.LineIndex, c contentChange) ([]byte, *speciesfile.LineIndex) {
+// returns the new text with its line index and the change as a byte edit (a
+// whole-text change is narrowed to the bytes that differ). Out-of-range
+// positions are clamped by LineIndex.Offset; a reversed range is treated as
+// empty.
+func applyChange(text []byte, lines *speciesfile.LineIndex, c contentChange) ([]byte, *speciesfile.LineIndex, textEdit) {
 	if c.Range == nil {
 		t := []byte(c.Text)
-		return t, speciesfile.NewLineIndex(t)
+		pre := 0
+		for pre < len(text) && pre < len(t) && text[pre] == t[pre] {
+			pre++
+		}
+		suf := 0
+		for suf < len(text)-pre && suf < len(t)-pre && text[len(text)-1-suf] == t[len(t)-1-suf] {
+			suf++
+		}
+		return t, speciesfile.NewLineIndex(t), textEdit{start: pre, end: len(text) - suf, newLen: len(t) - pre - suf}
 	}
 	start := lines.Offset(int(c.Range.Start.Line), int(c.Range.Start.Character))
 	end := lines.Offset(int(c.Range.End.Line), int(c.Range.End.Character))
@@ -138,7 +182,7 @@ func applyChange(text []byte, lines *speciesfile.LineIndex, c contentChange) ([]
 	out = append(out, text[:start]...)
 	out = append(out, c.Text...)
 	out = append(out, text[end:]...)
-	return out, speciesfile.NewLineIndex(out)
+	return out, speciesfile.NewLineIndex(out), textEdit{start: start, end: end, newLen: len(c.Text)}
 }
 
 func (s *server) didClose(raw json.RawMessage) error {
@@ -152,6 +196,7 @@ func (s *server) didClose(raw json.RawMessage) error {
 	delete(s.docs, path)
 	if d != nil {
 		s.ws.CloseOverlay(path)
+		s.ws.ForgetFile(path)
 	}
 	s.mu.Unlock()
 	if d == nil {
@@ -238,7 +283,7 @@ func (s *server) schedule(d *document, delay time.Duration, propagate bool) {
 	d.mu.Unlock()
 
 	s.mu.Lock()
-	version := d.version
+	version, seq, text := d.version, d.seq, d.text
 	ws := s.ws
 	s.mu.Unlock()
 
@@ -249,7 +294,7 @@ func (s *server) schedule(d *document, delay time.Duration, propagate bool) {
 		defer func() {
 			if p := recover(); p != nil {
 				s.logger.Error("panic in analysis", zap.String("path", d.path), zap.Any("panic", p), zap.ByteString("stack", debug.Stack()))
-				s.finish(d, gen, &snapshot{version: version})
+				s.finish(d, gen, &snapshot{version: version, seq: seq})
 			}
 		}()
 		if delay > 0 {
@@ -265,7 +310,10 @@ func (s *server) schedule(d *document, delay time.Duration, propagate bool) {
 		if ctx.Err() != nil {
 			return // superseded or shutting down
 		}
-		snap := &snapshot{version: version}
+		if err == nil && !sameBytes(res.File.Src, text) {
+			return // the text changed meanwhile: a newer analysis is scheduled
+		}
+		snap := &snapshot{version: version, seq: seq}
 		if err != nil {
 			s.logger.Warn("analysis failed", zap.String("path", d.path), zap.Error(err))
 		} else {
@@ -286,6 +334,7 @@ func (s *server) finish(d *document, gen uint64, snap *snapshot) bool {
 		d.mu.Unlock()
 		return false
 	}
+	prev := d.snap
 	d.snap = snap
 	d.cancel = nil
 	if !d.readyClosed {
@@ -293,11 +342,34 @@ func (s *server) finish(d *document, gen uint64, snap *snapshot) bool {
 		d.readyClosed = true
 	}
 	d.mu.Unlock()
+	if snap.result != nil {
+		s.mu.Lock()
+		if d.latest == nil || d.latest.seq <= snap.seq {
+			d.latest = snap
+			k := 0
+			for k < len(d.edits) && d.edits[k].seq <= snap.seq {
+				k++
+			}
+			d.edits = d.edits[k:len(d.edits):len(d.edits)]
+		}
+		s.mu.Unlock()
+	}
+	s.noteChanges(d, prev, snap)
 	s.publish(d, snap, gen, false)
 	return true
 }
 
-// publish sends the diagnostics of snap (none when snap is nil).
+// sameBytes reports whether a and b are the same slice (the analysed text is
+// the text an analysis was scheduled for).
+func sameBytes(a, b []byte) bool {
+	if len(a) != len(b) {
+		return false
+	}
+	return len(a) == 0 || &a[0] == &b[0]
+}
+
+// publish sends the diagnostics of snap (none when snap is nil), unless they
+// are the ones last sent for the document (force sends regardless).
 func (s *server) publish(d *document, snap *snapshot, gen uint64, force bool) {
 	d.publishMu.Lock()
 	defer d.publishMu.Unlock()
@@ -315,12 +387,46 @@ func (s *server) publish(d *document, snap *snapshot, gen uint64, force bool) {
 			params.Version = uint32(snap.version)
 		}
 		if snap.result != nil {
-			params.Diagnostics = s.toDiagnostics(snap.result)
+			params.Diagnostics = s.toDiagnostics(snap.result, s.noteFilter(d, snap))
 		}
 	}
+	if !force && d.hasPub && sameDiagnostics(d.published, params.Diagnostics) {
+		s.settled(d, snap, false)
+		return
+	}
+	d.published, d.hasPub = params.Diagnostics, true
 	if err := s.conn.Notify(s.ctx, "textDocument/publishDiagnostics", params); err != nil {
 		s.logger.Debug("publishDiagnostics failed", zap.Error(err))
 	}
+	s.settled(d, snap, true)
+}
+
+// settled tells the test hook that the analysis of a version is published
+// or found to change nothing.
+func (s *server) settled(d *document, snap *snapshot, published bool) {
+	if s.opts.settled != nil && snap != nil {
+		s.opts.settled(d.uri, snap.version, published)
+	}
+}
+
+// sameDiagnostics reports whether two lists are equal.
+func sameDiagnostics(a, b []protocol.Diagnostic) bool {
+	if len(a) != len(b) {
+		return false
+	}
+	for i := range a {
+		x, y := &a[i], &b[i]
+		if x.Range != y.Range || x.Severity != y.Severity || x.Code != y.Code || x.Message != y.Message ||
+			x.Source != y.Source || len(x.RelatedInformation) != len(y.RelatedInformation) {
+			return false
+		}
+		for k := range x.RelatedInformation {
+			if x.RelatedInformation[k] != y.RelatedInformation[k] {
+				return false
+			}
+		}
+	}
+	return true
 }
 
 // errNotOpen is returned for requests about documents the client has not opened.

@@ -40,13 +40,18 @@ type fakeEditor struct {
 	texts    map[protocol.DocumentURI]string
 	versions map[protocol.DocumentURI]int32
 	diags    map[protocol.DocumentURI]protocol.PublishDiagnosticsParams
-	notify   chan struct{} // closed and replaced on every publication
-	messages []string      // window/showMessage texts
+	settled  map[protocol.DocumentURI]int32 // latest version whose analysis changed no diagnostics
+	pubs     int                            // publications received
+	notify   chan struct{}                  // closed and replaced on every publication or settled analysis
+	liText   string                         // the text liCache indexes
+	liCache  *speciesfile.LineIndex
+	messages []string // window/showMessage texts
 }
 
 type fakeOptions struct {
 	initOptions any
 	plainText   bool // the client's hover supports only plaintext
+	inlayHints  bool // the client advertises textDocument.inlayHint
 	debounce    time.Duration
 }
 
@@ -61,6 +66,7 @@ func newFakeEditor(t testing.TB, files map[string]string, o fakeOptions) *fakeEd
 		t: t, disk: disk, done: make(chan error, 1),
 		texts: map[protocol.DocumentURI]string{}, versions: map[protocol.DocumentURI]int32{},
 		diags: map[protocol.DocumentURI]protocol.PublishDiagnosticsParams{}, notify: make(chan struct{}),
+		settled: map[protocol.DocumentURI]int32{},
 	}
 	serverSide, clientSide := net.Pipe()
 	loader := func(p string) ([]byte, error) {
@@ -75,7 +81,7 @@ func newFakeEditor(t testing.TB, files map[string]string, o fakeOptions) *fakeEd
 	ctx, cancel := context.WithCancel(context.Background())
 	t.Cleanup(cancel)
 	go func() {
-		e.done <- Serve(ctx, serverSide, zap.NewNop(), Options{Root: fakeRoot, Loader: loader, Debounce: o.debounce})
+		e.done <- Serve(ctx, serverSide, zap.NewNop(), Options{Root: fakeRoot, Loader: loader, Debounce: o.debounce, settled: e.onSettled})
 	}()
 	e.conn = jsonrpc2.NewConn(jsonrpc2.NewStream(clientSide))
 	e.conn.Go(ctx, e.handle)
@@ -85,12 +91,14 @@ func newFakeEditor(t testing.TB, files map[string]string, o fakeOptions) *fakeEd
 	if o.plainText {
 		formats = []string{"plaintext"}
 	}
+	td := map[string]any{"hover": map[string]any{"contentFormat": formats}}
+	if o.inlayHints {
+		td["inlayHint"] = map[string]any{"dynamicRegistration": false}
+	}
 	params := map[string]any{
-		"processId": 1,
-		"rootUri":   string(uri.File(fakeRoot)),
-		"capabilities": map[string]any{
-			"textDocument": map[string]any{"hover": map[string]any{"contentFormat": formats}},
-		},
+		"processId":    1,
+		"rootUri":      string(uri.File(fakeRoot)),
+		"capabilities": map[string]any{"textDocument": td},
 	}
 	if o.initOptions != nil {
 		params["initializationOptions"] = o.initOptions
@@ -114,6 +122,7 @@ func (e *fakeEditor) handle(ctx context.Context, reply jsonrpc2.Replier, req jso
 		}
 		e.mu.Lock()
 		e.diags[p.URI] = p
+		e.pubs++
 		close(e.notify)
 		e.notify = make(chan struct{})
 		e.mu.Unlock()
@@ -130,6 +139,26 @@ func (e *fakeEditor) handle(ctx context.Context, reply jsonrpc2.Replier, req jso
 		return reply(ctx, nil, nil)
 	}
 	return nil
+}
+
+// onSettled is the server's test hook: the analysis of version v of u is
+// published (the publication is on its way) or changed nothing.
+func (e *fakeEditor) onSettled(u protocol.DocumentURI, v int32, published bool) {
+	if published {
+		return
+	}
+	e.mu.Lock()
+	defer e.mu.Unlock()
+	e.settled[u] = v
+	close(e.notify)
+	e.notify = make(chan struct{})
+}
+
+// publications returns the number of publications received so far.
+func (e *fakeEditor) publications() int {
+	e.mu.Lock()
+	defer e.mu.Unlock()
+	return e.pubs
 }
 
 // call sends a request and decodes its result, failing the test on error.
@@ -179,7 +208,7 @@ func (e *fakeEditor) change(rel string, changes ...contentChange) int32 {
 	text := []byte(e.texts[u])
 	lines := speciesfile.NewLineIndex(text)
 	for _, c := range changes {
-		text, lines = applyChange(text, lines, c)
+		text, lines, _ = applyChange(text, lines, c)
 	}
 	e.texts[u] = string(text)
 	e.versions[u]++
@@ -198,9 +227,21 @@ func (e *fakeEditor) typeAt(rel string, off int, s string) int32 {
 	return e.change(rel, contentChange{Range: e.rangeAt(rel, off, off), Text: s})
 }
 
+// lineIndex returns the line index of rel's current text (cached: large
+// files would otherwise dominate the measured request times).
+func (e *fakeEditor) lineIndex(rel string) *speciesfile.LineIndex {
+	text := e.text(rel)
+	e.mu.Lock()
+	defer e.mu.Unlock()
+	if e.liCache == nil || e.liText != text {
+		e.liText, e.liCache = text, speciesfile.NewLineIndex([]byte(text))
+	}
+	return e.liCache
+}
+
 // rangeAt converts byte offsets of rel's current text to a protocol range.
 func (e *fakeEditor) rangeAt(rel string, start, end int) *protocol.Range {
-	li := speciesfile.NewLineIndex([]byte(e.text(rel)))
+	li := e.lineIndex(rel)
 	ps, pe := li.Position(start), li.Position(end)
 	return &protocol.Range{
 		Start: protocol.Position{Line: uint32(ps.Line), Character: uint32(ps.UTF16)},
@@ -214,11 +255,13 @@ func (e *fakeEditor) pos(rel string, off int) protocol.Position {
 
 // offsetOf converts a protocol position of rel's current text to a byte offset.
 func (e *fakeEditor) offsetOf(rel string, p protocol.Position) int {
-	li := speciesfile.NewLineIndex([]byte(e.text(rel)))
+	li := e.lineIndex(rel)
 	return li.Offset(int(p.Line), int(p.Character))
 }
 
-// waitDiagnostics waits until the diagnostics of rel's current version arrive.
+// waitDiagnostics waits until the diagnostics of rel's current version
+// arrive, or the server reports that its analysis left them unchanged, and
+// returns the diagnostics in force.
 func (e *fakeEditor) waitDiagnostics(rel string) []protocol.Diagnostic {
 	e.t.Helper()
 	u := e.uri(rel)
@@ -227,9 +270,10 @@ func (e *fakeEditor) waitDiagnostics(rel string) []protocol.Diagnostic {
 		e.mu.Lock()
 		p, ok := e.diags[u]
 		want := e.versions[u]
+		settled := e.settled[u] == want
 		ch := e.notify
 		e.mu.Unlock()
-		if ok && int32(p.Version) == want {
+		if ok && (int32(p.Version) == want || settled) {
 			return p.Diagnostics
 		}
 		select {
@@ -285,7 +329,7 @@ func (e *fakeEditor) applyEdit(we *protocol.WorkspaceEdit) []string {
 		lines := speciesfile.NewLineIndex(text)
 		for _, ed := range edits {
 			r := ed.Range
-			text, lines = applyChange(text, lines, contentChange{Range: &r, Text: ed.NewText})
+			text, lines, _ = applyChange(text, lines, contentChange{Range: &r, Text: ed.NewText})
 		}
 		e.disk[p] = string(text)
 		e.mu.Unlock()

@@ -78,6 +78,18 @@ func (s *server) at(ctx context.Context, p protocol.TextDocumentPositionParams) 
 	return target{doc: d, snap: snap, file: f, off: offset(f, p.Position)}, nil
 }
 
+// viewAt resolves a position against the latest finished analysis without
+// waiting for one in progress; ok is false when the position lies in text
+// typed since that analysis.
+func (s *server) viewAt(ctx context.Context, p protocol.TextDocumentPositionParams) (view, int, bool, error) {
+	v, err := s.view(ctx, p.TextDocument.URI)
+	if err != nil {
+		return view{}, 0, false, err
+	}
+	off, ok := v.offset(p.Position)
+	return v, off, ok, nil
+}
+
 // location converts an analysis location, using whichever of the snapshots
 // holds the file.
 func (s *server) location(l analysis.Location, snaps ...*snapshot) (protocol.Location, bool) {
@@ -89,11 +101,14 @@ func (s *server) location(l analysis.Location, snaps ...*snapshot) (protocol.Loc
 	return protocol.Location{}, false
 }
 
-// toDiagnostics converts the diagnostics of r's file.
-func (s *server) toDiagnostics(r *analysis.Result) []protocol.Diagnostic {
+// toDiagnostics converts the diagnostics of r's file that keep accepts (all
+// when keep is nil).
+func (s *server) toDiagnostics(r *analysis.Result, keep func(speciesfile.Diagnostic) bool) []protocol.Diagnostic {
 	out := make([]protocol.Diagnostic, 0, len(r.Diagnostics))
 	for _, d := range r.Diagnostics {
-		out = append(out, s.toDiagnostic(r, d))
+		if keep == nil || keep(d) {
+			out = append(out, s.toDiagnostic(r, d))
+		}
 	}
 	return out
 }
@@ -135,6 +150,60 @@ func (s *server) workspaceEdit(edits []analysis.Edit, snaps ...*snapshot) (*prot
 	return we, nil
 }
 
+// viewEdit groups edits by file, mapping those in the viewed document to its
+// current text; ok is false when one of them touches text changed since.
+func (s *server) viewEdit(v view, edits []analysis.Edit) (*protocol.WorkspaceEdit, bool) {
+	we := &protocol.WorkspaceEdit{Changes: map[protocol.DocumentURI][]protocol.TextEdit{}}
+	for _, e := range edits {
+		l, ok := s.viewLocation(v, analysis.Location{File: e.File, Span: e.Span})
+		if !ok {
+			return nil, false
+		}
+		we.Changes[l.URI] = append(we.Changes[l.URI], protocol.TextEdit{Range: l.Range, NewText: e.NewText})
+	}
+	return we, true
+}
+
+// openViews returns the views of every open document that has a finished
+// analysis (waiting for none).
+func (s *server) openViews(ctx context.Context) ([]view, error) {
+	s.mu.Lock()
+	uris := make([]protocol.DocumentURI, 0, len(s.docs))
+	for _, d := range s.docs {
+		if d.latest != nil {
+			uris = append(uris, d.uri)
+		}
+	}
+	s.mu.Unlock()
+	var out []view
+	for _, u := range uris {
+		v, err := s.view(ctx, u)
+		if err != nil {
+			if ctx.Err() != nil {
+				return nil, ctx.Err()
+			}
+			continue
+		}
+		out = append(out, v)
+	}
+	return out, nil
+}
+
+// locationIn converts a location using the view that holds its file.
+func (s *server) locationIn(views []view, l analysis.Location) (protocol.Location, bool) {
+	for _, v := range views {
+		if v.doc.path == l.File {
+			return s.viewLocation(v, l)
+		}
+	}
+	for _, v := range views {
+		if v.snap.result.Files[l.File] != nil {
+			return s.location(l, v.snap)
+		}
+	}
+	return protocol.Location{}, false
+}
+
 // --- requests ---
 
 func (s *server) hover(ctx context.Context, raw json.RawMessage) (any, error) {
@@ -142,14 +211,14 @@ func (s *server) hover(ctx context.Context, raw json.RawMessage) (any, error) {
 	if err := decode(raw, &p); err != nil {
 		return nil, err
 	}
-	t, err := s.at(ctx, p)
-	if err != nil {
+	v, off, ok, err := s.viewAt(ctx, p)
+	if err != nil || !ok {
 		return nil, err
 	}
 	s.mu.Lock()
 	md := s.markdown
 	s.mu.Unlock()
-	h, ok := ide.Hover(t.snap.index, t.doc.path, t.off, s.currentSettings(), md)
+	h, ok := ide.Hover(v.snap.index, v.doc.path, off, s.currentSettings(), md)
 	if !ok {
 		return nil, nil
 	}
@@ -157,7 +226,10 @@ func (s *server) hover(ctx context.Context, raw json.RawMessage) (any, error) {
 	if md {
 		kind = protocol.Markdown
 	}
-	rng := rangeOf(t.file, h.Span)
+	rng, ok := v.rangeOf(h.Span)
+	if !ok {
+		return nil, nil // the hovered text changed since the analysis
+	}
 	return &protocol.Hover{Contents: protocol.MarkupContent{Kind: kind, Value: h.Text}, Range: &rng}, nil
 }
 
@@ -166,18 +238,20 @@ func (s *server) inlayHint(ctx context.Context, raw json.RawMessage) (any, error
 	if err := decode(raw, &p); err != nil {
 		return nil, err
 	}
-	d, snap, err := s.await(ctx, p.TextDocument.URI)
+	v, err := s.view(ctx, p.TextDocument.URI)
 	if err != nil {
 		return nil, err
 	}
-	f := snap.result.Files[d.path]
-	start, end := offset(f, p.Range.Start), offset(f, p.Range.End)
+	start, _ := v.offset(p.Range.Start)
+	end, _ := v.offset(p.Range.End)
 	if end <= start {
-		end = len(f.Src) + 1
+		end = len(v.file.Src) + 1
 	}
 	out := []inlayHint{}
-	for _, h := range ide.InlayHints(snap.index, d.path, start, end, s.currentSettings()) {
-		out = append(out, inlayHint{Position: position(f, h.Offset), Label: h.Label, PaddingLeft: true})
+	for _, h := range ide.InlayHints(v.snap.index, v.doc.path, start, end, s.currentSettings()) {
+		if pos, ok := v.position(h.Offset); ok {
+			out = append(out, inlayHint{Position: pos, Label: h.Label, PaddingLeft: true})
+		}
 	}
 	return out, nil
 }
@@ -187,13 +261,16 @@ func (s *server) definition(ctx context.Context, raw json.RawMessage) (any, erro
 	if err := decode(raw, &p); err != nil {
 		return nil, err
 	}
-	t, err := s.at(ctx, p)
+	v, off, ok, err := s.viewAt(ctx, p)
 	if err != nil {
 		return nil, err
 	}
 	out := []protocol.Location{}
-	for _, l := range ide.Definition(t.snap.index, t.doc.path, t.off) {
-		if pl, ok := s.location(l, t.snap); ok {
+	if !ok {
+		return out, nil
+	}
+	for _, l := range ide.Definition(v.snap.index, v.doc.path, off) {
+		if pl, ok := s.viewLocation(v, l); ok {
 			out = append(out, pl)
 		}
 	}
@@ -294,16 +371,23 @@ func (s *server) documentSymbol(ctx context.Context, raw json.RawMessage) (any, 
 	if err := decode(raw, &p); err != nil {
 		return nil, err
 	}
-	d, snap, err := s.await(ctx, p.TextDocument.URI)
+	v, err := s.view(ctx, p.TextDocument.URI)
 	if err != nil {
 		return nil, err
 	}
-	f := snap.result.Files[d.path]
 	out := []protocol.DocumentSymbol{}
-	for _, sym := range ide.DocumentSymbols(snap.index, d.path) {
+	for _, sym := range ide.DocumentSymbols(v.snap.index, v.doc.path) {
+		r, ok1 := v.rangeOf(sym.Span)
+		sel, ok2 := v.rangeOf(sym.Selection)
+		if !ok2 {
+			continue // the name was edited since the analysis
+		}
+		if !ok1 {
+			r = sel
+		}
 		out = append(out, protocol.DocumentSymbol{
 			Name: sym.Name, Detail: sym.Detail, Kind: protocol.SymbolKind(sym.Kind),
-			Range: rangeOf(f, sym.Span), SelectionRange: rangeOf(f, sym.Selection),
+			Range: r, SelectionRange: sel,
 		})
 	}
 	return out, nil
@@ -317,17 +401,17 @@ func (s *server) workspaceSymbol(ctx context.Context, raw json.RawMessage) (any,
 	if err := decode(raw, &p); err != nil {
 		return nil, err
 	}
-	snaps, err := s.openSnapshots(ctx)
+	views, err := s.openViews(ctx)
 	if err != nil {
 		return nil, err
 	}
-	xs := make([]*ide.Index, len(snaps))
-	for i, sn := range snaps {
-		xs[i] = sn.index
+	xs := make([]*ide.Index, len(views))
+	for i, v := range views {
+		xs[i] = v.snap.index
 	}
 	out := []protocol.SymbolInformation{}
 	for _, sym := range ide.WorkspaceSymbols(xs, p.Query, maxWorkspaceSymbols) {
-		l, ok := s.location(analysis.Location{File: sym.File, Span: sym.Selection}, snaps...)
+		l, ok := s.locationIn(views, analysis.Location{File: sym.File, Span: sym.Selection})
 		if !ok {
 			continue
 		}
@@ -336,20 +420,43 @@ func (s *server) workspaceSymbol(ctx context.Context, raw json.RawMessage) (any,
 	return out, nil
 }
 
+// maxCompletions bounds a completion answer; a longer list is cut and
+// marked incomplete, so that the client asks again as the word grows.
+const maxCompletions = 200
+
 func (s *server) completion(ctx context.Context, raw json.RawMessage) (any, error) {
 	var p protocol.CompletionParams
 	if err := decode(raw, &p); err != nil {
 		return nil, err
 	}
-	t, err := s.at(ctx, p.TextDocumentPositionParams)
+	v, err := s.view(ctx, p.TextDocument.URI)
 	if err != nil {
 		return nil, err
 	}
-	items := []protocol.CompletionItem{}
-	for _, c := range ide.Complete(t.snap.index, t.doc.path, t.off) {
-		items = append(items, protocol.CompletionItem{Label: c.Label, Detail: c.Detail, Kind: protocol.CompletionItemKind(c.Kind)})
+	// The context comes from the editor's current text, the names from the
+	// latest analysis. A short list is sent whole (the client filters it); a
+	// long one (a mechanism has tens of thousands of species names) only
+	// with the candidates that start with the word being typed, cut at
+	// maxCompletions and marked incomplete.
+	off := v.lines.Offset(int(p.Position.Line), int(p.Position.Character))
+	all := ide.CompleteText(v.snap.index, v.text, v.lines, off)
+	start := off
+	for start > 0 && v.text[start-1] != ' ' && v.text[start-1] != '\t' && v.text[start-1] != '\n' && v.text[start-1] != '\r' {
+		start--
 	}
-	return &protocol.CompletionList{Items: items}, nil
+	word := string(v.text[start:off])
+	list := &protocol.CompletionList{Items: []protocol.CompletionItem{}}
+	for _, c := range all {
+		if len(all) > maxCompletions && !strings.HasPrefix(c.Label, word) {
+			continue
+		}
+		if len(list.Items) == maxCompletions {
+			list.IsIncomplete = true
+			break
+		}
+		list.Items = append(list.Items, protocol.CompletionItem{Label: c.Label, Detail: c.Detail, Kind: protocol.CompletionItemKind(c.Kind)})
+	}
+	return list, nil
 }
 
 func (s *server) foldingRange(ctx context.Context, raw json.RawMessage) (any, error) {
@@ -357,17 +464,18 @@ func (s *server) foldingRange(ctx context.Context, raw json.RawMessage) (any, er
 	if err := decode(raw, &p); err != nil {
 		return nil, err
 	}
-	d, snap, err := s.await(ctx, p.TextDocument.URI)
+	v, err := s.view(ctx, p.TextDocument.URI)
 	if err != nil {
 		return nil, err
 	}
-	f := snap.result.Files[d.path]
 	out := []protocol.FoldingRange{}
-	for _, fr := range ide.FoldingRanges(f) {
-		out = append(out, protocol.FoldingRange{
-			StartLine: uint32(f.Lines.Line(fr.Start)), EndLine: uint32(f.Lines.Line(fr.End)),
-			Kind: protocol.FoldingRangeKind(fr.Kind),
-		})
+	for _, fr := range ide.FoldingRanges(v.file) {
+		start, ok1 := v.position(fr.Start)
+		end, ok2 := v.position(fr.End)
+		if !ok1 || !ok2 || end.Line <= start.Line {
+			continue
+		}
+		out = append(out, protocol.FoldingRange{StartLine: start.Line, EndLine: end.Line, Kind: protocol.FoldingRangeKind(fr.Kind)})
 	}
 	return out, nil
 }
@@ -394,24 +502,28 @@ func (s *server) codeAction(ctx context.Context, raw json.RawMessage) (any, erro
 	if err := decode(raw, &p); err != nil {
 		return nil, err
 	}
-	d, snap, err := s.await(ctx, p.TextDocument.URI)
+	v, err := s.view(ctx, p.TextDocument.URI)
 	if err != nil {
 		return nil, err
 	}
-	f := snap.result.Files[d.path]
-	span := speciesfile.Span{Start: offset(f, p.Range.Start), End: offset(f, p.Range.End)}
+	start, _ := v.offset(p.Range.Start)
+	end, _ := v.offset(p.Range.End)
 	out := []protocol.CodeAction{}
-	for _, a := range ide.CodeActions(snap.index, d.path, span) {
+	for _, a := range ide.CodeActions(v.snap.index, v.doc.path, speciesfile.Span{Start: start, End: max(start, end)}) {
 		if !kindWanted(a.Kind, p.Context.Only) {
 			continue
 		}
-		we, err := s.workspaceEdit(a.Edits, snap)
-		if err != nil {
-			return nil, err
+		we, ok := s.viewEdit(v, a.Edits)
+		if !ok {
+			continue // the text it would change was edited since the analysis
 		}
 		ca := protocol.CodeAction{Title: a.Title, Kind: protocol.CodeActionKind(a.Kind), Edit: we, IsPreferred: a.Preferred}
 		for _, dg := range a.Diagnostics {
-			ca.Diagnostics = append(ca.Diagnostics, s.toDiagnostic(snap.result, dg))
+			pd := s.toDiagnostic(v.snap.result, dg)
+			if r, ok := v.rangeOf(dg.Span); ok {
+				pd.Range = r
+			}
+			ca.Diagnostics = append(ca.Diagnostics, pd)
 		}
 		out = append(out, ca)
 	}

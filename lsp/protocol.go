@@ -55,6 +55,8 @@ type initializeParams struct {
 			Hover struct {
 				ContentFormat []string `json:"contentFormat,omitempty"`
 			} `json:"hover"`
+			// InlayHint is present when the client renders inlay hints.
+			InlayHint *json.RawMessage `json:"inlayHint,omitempty"`
 		} `json:"textDocument"`
 	} `json:"capabilities"`
 }

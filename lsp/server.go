@@ -36,11 +36,18 @@ type Options struct {
 	Root string
 	// Loader reads files that are not open in the editor; nil reads the disk.
 	Loader analysis.Loader
-	// Debounce is the delay between a change and its analysis; 0 means 50 ms.
+	// Debounce is the delay between a change and its analysis; 0 means 20 ms
+	// (short: a newer change cancels an analysis in progress, and an analysis
+	// after a small edit recomputes only what the edit touched).
 	Debounce time.Duration
 	// Settings are the initial settings; the zero value means
 	// analysis.DefaultSettings(). Client settings are applied on top.
 	Settings *analysis.Settings
+
+	// settled, when set (by tests), is called after each finished analysis
+	// of a document once its diagnostics are published (published is true)
+	// or found unchanged.
+	settled func(uri protocol.DocumentURI, version int32, published bool)
 }
 
 // ErrExitWithoutShutdown is returned by Serve when the client sent exit
@@ -74,8 +81,12 @@ type server struct {
 	ws       *analysis.Workspace
 	settings analysis.Settings
 	markdown bool
-	docs     map[string]*document // by path
-	inflight map[string]context.CancelFunc
+	// clientHints: the client renders textDocument/inlayHint; notes: the
+	// estimateNotes setting (nil = by clientHints).
+	clientHints bool
+	notes       *bool
+	docs        map[string]*document // by path
+	inflight    map[string]context.CancelFunc
 }
 
 // Serve runs a language server on stream until the client sends exit, the
@@ -87,7 +98,7 @@ func Serve(ctx context.Context, stream io.ReadWriteCloser, logger *zap.Logger, o
 		logger = zap.NewNop()
 	}
 	if opts.Debounce <= 0 {
-		opts.Debounce = 50 * time.Millisecond
+		opts.Debounce = 20 * time.Millisecond
 	}
 	if opts.Loader == nil {
 		opts.Loader = os.ReadFile
@@ -307,10 +318,10 @@ func (s *server) initialize(raw json.RawMessage) (any, error) {
 			root = p.RootPath
 		}
 	}
-	settings, err := applySettings(s.settings, p.InitializationOptions)
+	settings, notes, err := applySettings(s.settings, p.InitializationOptions)
 	if err != nil {
 		s.logger.Warn("ignoring initializationOptions", zap.Error(err))
-		settings = s.settings
+		settings, notes = s.settings, nil
 	}
 	markdown := len(p.Capabilities.TextDocument.Hover.ContentFormat) == 0 // clients that say nothing get markdown
 	for _, f := range p.Capabilities.TextDocument.Hover.ContentFormat {
@@ -321,10 +332,15 @@ func (s *server) initialize(raw json.RawMessage) (any, error) {
 	s.mu.Lock()
 	s.settings = settings
 	s.markdown = markdown
+	s.clientHints = p.Capabilities.TextDocument.InlayHint != nil
+	if notes != nil {
+		s.notes = notes
+	}
 	s.ws = analysis.NewWorkspace(root, s.opts.Loader, settings)
+	s.ws.SetIncremental(true)
 	s.state = stateRunning
 	s.mu.Unlock()
-	s.logger.Info("initialized", zap.String("root", root), zap.Bool("markdown", markdown))
+	s.logger.Info("initialized", zap.String("root", root), zap.Bool("markdown", markdown), zap.Bool("inlayHints", s.clientHints))
 	return map[string]any{
 		"capabilities": serverCapabilities(),
 		"serverInfo":   map[string]any{"name": "kiln"},
@@ -337,10 +353,13 @@ func (s *server) didChangeConfiguration(raw json.RawMessage) error {
 		return fmt.Errorf("didChangeConfiguration params: %w", err)
 	}
 	s.mu.Lock()
-	settings, err := applySettings(s.settings, p.Settings)
+	settings, notes, err := applySettings(s.settings, p.Settings)
 	if err == nil {
 		s.settings = settings
 		s.ws.SetSettings(settings)
+		if notes != nil {
+			s.notes = notes
+		}
 	}
 	s.mu.Unlock()
 	if err != nil {

@@ -130,14 +130,15 @@ func TestPanicBecomesInternalError(t *testing.T) {
 func TestCancelRequest(t *testing.T) {
 	// A request that waits for an analysis that never comes (debounce of an
 	// hour) must end with RequestCancelled when the client cancels it.
+	// Rename waits for the analysis of the current text (it edits text).
 	e := newFakeEditor(t, map[string]string{"a.kiln": smokeFile}, fakeOptions{debounce: time.Hour})
 	e.open("a.kiln")
 	e.typeAt("a.kiln", 0, "# edit\n") // schedules an analysis an hour away
 	errc := make(chan error, 1)
 	go func() {
-		errc <- e.callErr("textDocument/hover", protocol.TextDocumentPositionParams{TextDocument: textDoc(e, "a.kiln")}, nil)
+		errc <- e.callErr("textDocument/prepareRename", protocol.TextDocumentPositionParams{TextDocument: textDoc(e, "a.kiln")}, nil)
 	}()
-	// The client's request ids count from 1: initialize was 1, hover is 2.
+	// The client's request ids count from 1: initialize was 1, this is 2.
 	deadline := time.After(10 * time.Second)
 	for {
 		require.NoError(t, e.conn.Notify(context.Background(), "$/cancelRequest", map[string]any{"id": 2}))
@@ -157,19 +158,22 @@ func TestCancelRequest(t *testing.T) {
 
 func TestSettings(t *testing.T) {
 	base := analysis.DefaultSettings()
-	s, err := applySettings(base, json.RawMessage(`{"kiln": {"units": "kJ/mol", "tMid": 1200, "mismatchHf298": 2, "mismatchS298": 1.5, "collisionFactor": 3}}`))
+	s, notes, err := applySettings(base, json.RawMessage(`{"kiln": {"units": "kJ/mol", "tMid": 1200, "mismatchHf298": 2, "mismatchS298": 1.5, "collisionFactor": 3, "estimateNotes": false}}`))
 	require.NoError(t, err)
+	require.NotNil(t, notes)
+	assert.False(t, *notes)
 	assert.Equal(t, "kJ/mol", s.DisplayUnits)
 	assert.Equal(t, 1200.0, s.TMid)
 	// 2 kcal/mol = 8368 J/mol and 1.5 cal/(mol K) = 6.276 J/(mol K) exactly; 1e-9 allows for rounding.
 	assert.InDelta(t, 8368, s.MismatchHf298, 1e-9)
 	assert.InDelta(t, 6.276, s.MismatchS298, 1e-9)
 	assert.Equal(t, 3.0, s.CollisionFactor)
-	flat, err := applySettings(base, json.RawMessage(`{"units": "kJ/mol"}`))
+	flat, notes, err := applySettings(base, json.RawMessage(`{"units": "kJ/mol"}`))
 	require.NoError(t, err)
+	assert.Nil(t, notes, "absent estimateNotes keeps the default")
 	assert.Equal(t, "kJ/mol", flat.DisplayUnits)
-	for _, bad := range []string{`{"units": "eV"}`, `{"tMid": -1}`, `{"tMid": 6000}`, `{"collisionFactor": 0}`, `[1]`} {
-		_, err := applySettings(base, json.RawMessage(bad))
+	for _, bad := range []string{`{"units": "eV"}`, `{"tMid": -1}`, `{"tMid": 6000}`, `{"collisionFactor": 0}`, `[1]`, `{"estimateNotes": "yes"}`} {
+		_, _, err := applySettings(base, json.RawMessage(bad))
 		assert.Error(t, err, bad)
 	}
 }

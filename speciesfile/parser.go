@@ -992,6 +992,7 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 		}
 	}
 	eq := toks[1:eqEnd]
+	diagsBefore := len(p.f.Diags)
 	if len(eq) == 0 {
 		p.errAt(endOf(toks[0]), "expected a reaction equation after reaction, e.g. H + O2 <=> O + OH")
 	} else {
@@ -1064,7 +1065,13 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 	if st.Troe != nil && st.LowPressure == nil {
 		p.errAt(st.Troe.Span, "troe needs a low-pressure line")
 	}
-	if eqEnd == len(toks) && !sawPressure && len(eq) > 0 && !p.f.ErrorIn(st.Equation) {
+	eqBroken := false
+	for _, d := range p.f.Diags[diagsBefore:] {
+		if d.Span.Start >= st.Equation.Start && d.Span.Start <= st.Equation.End {
+			eqBroken = true
+		}
+	}
+	if eqEnd == len(toks) && !sawPressure && len(eq) > 0 && !eqBroken {
 		// (An equation with a syntax error gets that error only.)
 		p.f.Diags = append(p.f.Diags, Diagnostic{Span: st.Equation, Severity: SeverityWarning, Code: CodeNoRate,
 			Message: "reaction has no rate parameters (A=, n=, Ea=)"})

@@ -507,3 +507,18 @@ func TestConsistencyReader(t *testing.T) {
 	f = Parse("t.kiln", []byte("xyzzy H\n"))
 	assert.NotContains(t, f.Diags[0].Message, "did you mean")
 }
+
+// TestErrorIn: the errors of a block are found by offset, the end
+// included, in a file with many statements.
+func TestErrorIn(t *testing.T) {
+	var b strings.Builder
+	for i := 0; i < 200; i++ {
+		b.WriteString("species A" + strings.Repeat("x", i%7) + " C\n  nasa7 300 1000 3000\n")
+	}
+	f := Parse("t.kiln", []byte(b.String()))
+	require.NotEmpty(t, f.Diags)
+	for _, sp := range f.Species[:5] {
+		assert.True(t, f.ErrorIn(sp.NASA7.Span), "missing low/high lines")
+		assert.False(t, f.ErrorIn(sp.Name.Span))
+	}
+}

@@ -1,6 +1,9 @@
 package speciesfile
 
-import "fmt"
+import (
+	"fmt"
+	"sort"
+)
 
 // didYouMean returns `did you mean "x"? ` for the candidate closest to word
 // when it is within one edit (words of up to five letters) or two edits
@@ -62,9 +65,14 @@ func editDistance(a, b string, limit int) int {
 // [s.Start, s.End] (the end included: "expected more" errors sit just after
 // the last token). Analysis uses it so that a block or an equation with a
 // syntax error is never used as data.
+//
+// Diags are sorted by start offset (Parse sorts them), so the search is a
+// binary search plus the errors inside s: callers may ask once per block
+// of a large file.
 func (f *File) ErrorIn(s Span) bool {
-	for _, d := range f.Diags {
-		if d.Severity == SeverityError && d.Span.Start >= s.Start && d.Span.Start <= s.End {
+	i := sort.Search(len(f.Diags), func(i int) bool { return f.Diags[i].Span.Start >= s.Start })
+	for ; i < len(f.Diags) && f.Diags[i].Span.Start <= s.End; i++ {
+		if f.Diags[i].Severity == SeverityError {
 			return true
 		}
 	}

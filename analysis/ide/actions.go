@@ -53,7 +53,7 @@ func CodeActions(x *Index, file string, span speciesfile.Span) []Action {
 	}
 	var out []Action
 	done := map[*analysis.Species]bool{}
-	for _, o := range x.Occurrences(file) {
+	for _, o := range x.OccurrencesIn(file, span.Start-1, span.End+1) {
 		if o.Kind != KindSpeciesStmt || !overlaps(o.Span) || o.Species == nil || o.Species.Decl != o.SpeciesDecl || done[o.Species] {
 			continue
 		}

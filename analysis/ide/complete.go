@@ -44,12 +44,22 @@ var (
 //     line: species names (detail = formula) and M.
 func Complete(x *Index, file string, off int) []Completion {
 	f := x.File(file)
-	if f == nil || off < 0 || off > len(f.Src) {
+	if f == nil {
 		return nil
 	}
-	l := f.Lines.Line(off)
-	ls := f.Lines.LineStart(l)
-	prefix := string(f.Src[ls:off])
+	return CompleteText(x, f.Src, f.Lines, off)
+}
+
+// CompleteText is Complete for a text that may be newer than the indexed
+// analysis (an editor's text while the analysis catches up): the context is
+// read from src (with its line index lines), the species names from x.
+func CompleteText(x *Index, src []byte, lines *speciesfile.LineIndex, off int) []Completion {
+	if off < 0 || off > len(src) {
+		return nil
+	}
+	l := lines.Line(off)
+	ls := lines.LineStart(l)
+	prefix := string(src[ls:off])
 	if strings.Contains(prefix, " #") || strings.HasPrefix(strings.TrimLeft(prefix, " \t"), "#") {
 		return nil // in a comment
 	}
@@ -72,7 +82,7 @@ func Complete(x *Index, file string, off int) []Completion {
 		}
 		return speciesCompletions(x, true)
 	case indented && firstWord:
-		return words2(attrNames(l, f, len(prefix)-len(body)), CompletionProperty, "attribute")
+		return words2(attrNames(l, src, lines, len(prefix)-len(body)), CompletionProperty, "attribute")
 	case indented && len(words) > 0 && words[0] == "efficiencies":
 		return speciesCompletions(x, false)
 	}
@@ -88,11 +98,16 @@ func words2(ws []string, k CompletionKind, detail string) []Completion {
 }
 
 func speciesCompletions(x *Index, thirdBody bool) []Completion {
-	out := make([]Completion, 0, len(x.r.Species)+2)
-	for _, sp := range x.r.Species {
-		out = append(out, Completion{Label: sp.Name, Detail: sp.Formula, Kind: CompletionConstant})
-	}
-	sort.Slice(out, func(i, j int) bool { return out[i].Label < out[j].Label })
+	x.namesOnce.Do(func() {
+		names := make([]Completion, 0, len(x.r.Species))
+		for _, sp := range x.r.Species {
+			names = append(names, Completion{Label: sp.Name, Detail: sp.Formula, Kind: CompletionConstant})
+		}
+		sort.Slice(names, func(i, j int) bool { return names[i].Label < names[j].Label })
+		x.names = names
+	})
+	out := make([]Completion, 0, len(x.names)+2)
+	out = append(out, x.names...)
 	if thirdBody {
 		out = append(out, Completion{Label: "M", Detail: "third body", Kind: CompletionKeyword},
 			Completion{Label: "(+M)", Detail: "falloff third body", Kind: CompletionKeyword})
@@ -102,10 +117,10 @@ func speciesCompletions(x *Index, thirdBody bool) []Completion {
 
 // attrNames finds the statement (and block) above line l and returns the
 // names that may start line l.
-func attrNames(l int, f *speciesfile.File, curIndent int) []string {
+func attrNames(l int, src []byte, lines *speciesfile.LineIndex, curIndent int) []string {
 	minBetween := -1 // smallest indentation of the indented lines between
 	for k := l - 1; k >= 0; k-- {
-		line := f.Src[f.Lines.LineStart(k):f.Lines.LineEnd(k)]
+		line := src[lines.LineStart(k):lines.LineEnd(k)]
 		if isComment(line) || len(strings.TrimSpace(string(line))) == 0 {
 			continue
 		}

@@ -22,7 +22,7 @@ func InlayHints(x *Index, file string, start, end int, s analysis.Settings) []Hi
 	}
 	u := displayUnits(s, f)
 	var out []Hint
-	for _, o := range x.Occurrences(file) {
+	for _, o := range x.OccurrencesIn(file, start, end) {
 		if o.Span.Start < start || o.Span.Start >= end {
 			continue
 		}

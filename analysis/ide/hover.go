@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strconv"
 	"strings"
 
 	"kiln.dev/kiln/analysis"
@@ -376,11 +377,19 @@ func (w *writer) reaction(x *Index, r *analysis.Reaction) {
 		}
 		rows = append(rows, []string{"Kp(" + k + " K)", v})
 	}
+	at := ""
+	if r.PressureDependent() {
+		p := x.r.Settings.Pressure
+		if p == 0 {
+			p = 101325
+		}
+		at = " at " + strconv.FormatFloat(p/1e5, 'g', 4, 64) + " bar"
+	}
 	if r.ForwardRate1000 != nil {
-		rows = append(rows, []string{"k_f(1000 K)", sci(*r.ForwardRate1000) + " " + analysis.RateUnits(r.ForwardOrder)})
+		rows = append(rows, []string{"k_f(1000 K)", sci(*r.ForwardRate1000) + " " + analysis.RateUnits(r.ForwardOrder) + at})
 	}
 	if r.ReverseRate1000 != nil {
-		rows = append(rows, []string{"k_r(1000 K)", sci(*r.ReverseRate1000) + " " + analysis.RateUnits(r.ReverseOrder)})
+		rows = append(rows, []string{"k_r(1000 K)", sci(*r.ReverseRate1000) + " " + analysis.RateUnits(r.ReverseOrder) + at})
 	}
 	if u, ok := x.Result().ReverseRateUncertainty(r, 1000); ok {
 		rows = append(rows, []string{"k_r uncertainty (1000 K)", reverseFactorText(u, w.u)})

@@ -160,3 +160,26 @@ func TestFoldingRanges(t *testing.T) {
 	assert.Contains(t, lines, [2]int{3, 5}, "nasa7 block")
 	assert.NotContains(t, lines, [2]int{6, 6}, "single-line statements do not fold")
 }
+
+// TestHoverTableRange (issue 14, case 10): hover follows the one rule for
+// tables that summary follows: no Cp outside the table's temperatures, the
+// interpolated value inside.
+func TestHoverTableRange(t *testing.T) {
+	src := "species lump\n  composition C2H2\n  thermo-table\n    hf298 54.2\n    s298 48.0\n    cp 400=12.0 500=13.1 600=14.0\n"
+	x := analyse(t, map[string]string{"/w/a.kiln": src}, "/w/a.kiln")
+	h, ok := Hover(x, "/w/a.kiln", strings.Index(src, "lump"), analysis.DefaultSettings(), false)
+	require.True(t, ok)
+	lines := map[string]string{}
+	for _, l := range strings.Split(h.Text, "\n") {
+		for _, k := range []string{"Cp 300 K", "Cp 500 K", "Cp 800 K"} {
+			if strings.Contains(l, k) {
+				lines[k] = l
+			}
+		}
+	}
+	assert.Contains(t, lines["Cp 500 K"], "13.1")
+	assert.Contains(t, lines["Cp 300 K"], "—")
+	assert.NotContains(t, lines["Cp 300 K"], "12.0")
+	assert.Contains(t, lines["Cp 800 K"], "—")
+	assert.NotContains(t, lines["Cp 800 K"], "14.0")
+}

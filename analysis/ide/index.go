@@ -8,6 +8,7 @@ package ide
 
 import (
 	"sort"
+	"sync"
 
 	"kiln.dev/kiln/analysis"
 	"kiln.dev/kiln/speciesfile"
@@ -61,61 +62,70 @@ type Occurrence struct {
 	IncludePath string                // resolved path of the include ("" if unresolved)
 }
 
-// Index makes one analysis result searchable by position. Build it once per
-// result (NewIndex is linear in the size of the files); lookups are
-// logarithmic. An Index is immutable and safe for concurrent use.
+// Index makes one analysis result searchable by position. NewIndex is cheap
+// (it keeps no per-statement data); lookups binary-search the statements of
+// a file and build the occurrences of the one statement they land in. An
+// Index is immutable and safe for concurrent use.
 type Index struct {
-	r      *analysis.Result
-	byFile map[string][]Occurrence // sorted by Span.Start, statements before their tokens
+	r        *analysis.Result
+	groups   map[*speciesfile.Group]*analysis.Group
+	includes map[*speciesfile.Include]string
+
+	namesOnce sync.Once
+	names     []Completion // species names, sorted (built on first completion)
 }
 
 // NewIndex indexes r: every file it holds (the analysed file and its includes).
 func NewIndex(r *analysis.Result) *Index {
-	x := &Index{r: r, byFile: map[string][]Occurrence{}}
-	reactions := map[*speciesfile.Reaction]*analysis.Reaction{}
-	for _, rx := range r.Reactions {
-		reactions[rx.Decl] = rx
-	}
-	groups := map[*speciesfile.Group]*analysis.Group{}
+	x := &Index{r: r, groups: map[*speciesfile.Group]*analysis.Group{}, includes: map[*speciesfile.Include]string{}}
 	for _, g := range r.Groups {
-		groups[g.Decl] = g
+		x.groups[g.Decl] = g
 	}
-	includes := map[*speciesfile.Include]string{}
 	for _, inc := range r.Includes {
-		includes[inc.Decl] = inc.Path
-	}
-	for path, f := range r.Files {
-		var occ []Occurrence
-		for _, st := range f.Stmts {
-			switch s := st.(type) {
-			case *speciesfile.Species:
-				sp := r.ByName[s.Name.Text]
-				occ = append(occ,
-					Occurrence{Kind: KindSpeciesStmt, File: path, Span: s.Body(), Name: s.Name.Text, Species: sp, SpeciesDecl: s},
-					Occurrence{Kind: KindSpeciesDecl, File: path, Span: s.Name.Span, Name: s.Name.Text, Species: sp, SpeciesDecl: s})
-			case *speciesfile.Reaction:
-				occ = append(occ, Occurrence{Kind: KindReactionStmt, File: path, Span: s.Body(), Name: equationText(f, s), Reaction: reactions[s], ReactionDec: s})
-				for _, u := range reactionUses(s) {
-					occ = append(occ, Occurrence{Kind: KindSpeciesUse, File: path, Span: u.Span, Name: u.Text, Species: r.ByName[u.Text], ReactionDec: s, Reaction: reactions[s]})
-				}
-			case *speciesfile.Group:
-				g := groups[s]
-				occ = append(occ,
-					Occurrence{Kind: KindGroupStmt, File: path, Span: s.Body(), Name: s.Name.Text, Group: g, GroupDecl: s},
-					Occurrence{Kind: KindGroupDecl, File: path, Span: s.Name.Span, Name: s.Name.Text, Group: g, GroupDecl: s})
-			case *speciesfile.Include:
-				occ = append(occ, Occurrence{Kind: KindIncludePath, File: path, Span: s.Path.Span, Name: s.Path.Text, Include: s, IncludePath: includes[s]})
-			}
-		}
-		sort.SliceStable(occ, func(i, j int) bool {
-			if occ[i].Span.Start != occ[j].Span.Start {
-				return occ[i].Span.Start < occ[j].Span.Start
-			}
-			return occ[i].Kind.statement() && !occ[j].Kind.statement()
-		})
-		x.byFile[path] = occ
+		x.includes[inc.Decl] = inc.Path
 	}
 	return x
+}
+
+// reaction returns the resolved reaction of statement d (analysed file only).
+func (x *Index) reaction(path string, d *speciesfile.Reaction) *analysis.Reaction {
+	if path != x.r.Path {
+		return nil
+	}
+	rs := x.r.Reactions // in file order
+	start := d.Span().Start
+	i := sort.Search(len(rs), func(i int) bool { return rs[i].Decl.Span().Start >= start })
+	if i < len(rs) && rs[i].Decl == d {
+		return rs[i]
+	}
+	return nil
+}
+
+// stmtOccurrences appends the occurrences of statement st of file path to
+// out: the statement, then its tokens in offset order.
+func (x *Index) stmtOccurrences(out []Occurrence, path string, f *speciesfile.File, st speciesfile.Stmt) []Occurrence {
+	r := x.r
+	switch s := st.(type) {
+	case *speciesfile.Species:
+		sp := r.ByName[s.Name.Text]
+		out = append(out,
+			Occurrence{Kind: KindSpeciesStmt, File: path, Span: s.Body(), Name: s.Name.Text, Species: sp, SpeciesDecl: s},
+			Occurrence{Kind: KindSpeciesDecl, File: path, Span: s.Name.Span, Name: s.Name.Text, Species: sp, SpeciesDecl: s})
+	case *speciesfile.Reaction:
+		rx := x.reaction(path, s)
+		out = append(out, Occurrence{Kind: KindReactionStmt, File: path, Span: s.Body(), Name: equationText(f, s), Reaction: rx, ReactionDec: s})
+		for _, u := range reactionUses(s) {
+			out = append(out, Occurrence{Kind: KindSpeciesUse, File: path, Span: u.Span, Name: u.Text, Species: r.ByName[u.Text], ReactionDec: s, Reaction: rx})
+		}
+	case *speciesfile.Group:
+		g := x.groups[s]
+		out = append(out,
+			Occurrence{Kind: KindGroupStmt, File: path, Span: s.Body(), Name: s.Name.Text, Group: g, GroupDecl: s},
+			Occurrence{Kind: KindGroupDecl, File: path, Span: s.Name.Span, Name: s.Name.Text, Group: g, GroupDecl: s})
+	case *speciesfile.Include:
+		out = append(out, Occurrence{Kind: KindIncludePath, File: path, Span: s.Path.Span, Name: s.Path.Text, Include: s, IncludePath: x.includes[s]})
+	}
+	return out
 }
 
 // Result returns the indexed analysis result.
@@ -124,22 +134,70 @@ func (x *Index) Result() *analysis.Result { return x.r }
 // File returns the parsed file at path (nil when the result does not hold it).
 func (x *Index) File(path string) *speciesfile.File { return x.r.Files[path] }
 
-// Occurrences returns the occurrences of a file in offset order (shared; do
-// not modify).
-func (x *Index) Occurrences(path string) []Occurrence { return x.byFile[path] }
+// files returns the paths of the files of the index, sorted.
+func (x *Index) files() []string {
+	out := make([]string, 0, len(x.r.Files))
+	for p := range x.r.Files {
+		out = append(out, p)
+	}
+	sort.Strings(out)
+	return out
+}
+
+// Occurrences returns the occurrences of a file in offset order (built on
+// each call: linear in the size of the file).
+func (x *Index) Occurrences(path string) []Occurrence {
+	f := x.File(path)
+	if f == nil {
+		return nil
+	}
+	var out []Occurrence
+	for _, st := range f.Stmts {
+		out = x.stmtOccurrences(out, path, f, st)
+	}
+	return out
+}
+
+// OccurrencesIn returns the occurrences of the statements of a file whose
+// extent meets [start, end], in offset order.
+func (x *Index) OccurrencesIn(path string, start, end int) []Occurrence {
+	f := x.File(path)
+	if f == nil {
+		return nil
+	}
+	st := f.Stmts
+	i := sort.Search(len(st), func(i int) bool { return st[i].Span().End >= start })
+	var out []Occurrence
+	for ; i < len(st) && st[i].Span().Start <= end; i++ {
+		out = x.stmtOccurrences(out, path, f, st[i])
+	}
+	return out
+}
 
 // At returns the innermost occurrence whose span holds off (the end offset
 // of a token counts as inside it, so a cursor just after a name finds it).
 func (x *Index) At(path string, off int) (Occurrence, bool) {
-	occ := x.byFile[path]
-	i := sort.Search(len(occ), func(i int) bool { return occ[i].Span.Start > off }) - 1
-	for ; i >= 0; i-- {
-		o := occ[i]
-		if off >= o.Span.Start && (off < o.Span.End || (!o.Kind.statement() && off == o.Span.End)) {
-			return o, true
+	f := x.File(path)
+	if f == nil {
+		return Occurrence{}, false
+	}
+	st := f.Stmts
+	// The statement whose extent holds off, and the one before it (a token
+	// may end exactly where the next statement's extent begins).
+	k := sort.Search(len(st), func(i int) bool { return st[i].Span().Start > off }) - 1
+	var buf [16]Occurrence
+	for _, j := range [2]int{k, k - 1} {
+		if j < 0 || j >= len(st) {
+			continue
 		}
-		if o.Kind.statement() {
-			break // tokens never straddle statements
+		occ := x.stmtOccurrences(buf[:0], path, f, st[j])
+		i := sort.Search(len(occ), func(i int) bool { return occ[i].Span.Start > off }) - 1
+		for ; i >= 0; i-- {
+			o := occ[i]
+			if off >= o.Span.Start && (off < o.Span.End || (!o.Kind.statement() && off == o.Span.End)) {
+				// Prefer the innermost: a token after its statement in order.
+				return o, true
+			}
 		}
 	}
 	return Occurrence{}, false

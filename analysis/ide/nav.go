@@ -51,13 +51,8 @@ func References(x *Index, file string, off int, includeDecl bool) []analysis.Loc
 // species called name in every file of x, in file and offset order.
 func NameReferences(x *Index, name string, includeDecl bool) []analysis.Location {
 	var out []analysis.Location
-	files := make([]string, 0, len(x.byFile))
-	for p := range x.byFile {
-		files = append(files, p)
-	}
-	sort.Strings(files)
-	for _, p := range files {
-		for _, o := range x.byFile[p] {
+	for _, p := range x.files() {
+		for _, o := range x.Occurrences(p) {
 			if o.Name != name {
 				continue
 			}
@@ -198,12 +193,7 @@ func WorkspaceSymbols(xs []*Index, query string, limit int) []Symbol {
 	seen := map[string]bool{}
 	var out []Symbol
 	for _, x := range xs {
-		files := make([]string, 0, len(x.byFile))
-		for p := range x.byFile {
-			files = append(files, p)
-		}
-		sort.Strings(files)
-		for _, p := range files {
+		for _, p := range x.files() {
 			if seen[p] {
 				continue
 			}

@@ -1,0 +1,485 @@
+package analysis
+
+import (
+	"bytes"
+	"fmt"
+
+	"kiln.dev/kiln/speciesfile"
+)
+
+// Incremental analysis.
+//
+// An analysis is a staged pipeline: parse → includes → groups → species →
+// reactions → cross-statement checks (duplicate names, structures and
+// reactions). The costly stages are made of small units, one per statement:
+//
+//   - a species unit holds a species' structure, estimate, given thermo and
+//     the checks of its own statement (bad-smiles, missing-group,
+//     missing-thermo, thermo-mismatch, nonphysical-thermo, …);
+//   - a reaction unit holds a reaction's balance, thermochemistry and rate
+//     checks;
+//   - a reaction text unit holds what follows from a reaction's text alone
+//     (its duplicate-detection key and equation text).
+//
+// A unit is a pure function of what it reads, so it is keyed by exactly
+// that: the statement's text (its body, from the keyword to the end of its
+// last line), the file's energy unit, the settings and user-defined groups
+// (one table per setting and group set), and, for reactions, the species
+// units of the species it names. Diagnostics and spans inside a unit are
+// stored relative to the start of the statement, so that a unit moved by an
+// edit elsewhere is reused as is: an edit to one SMILES recomputes one
+// species unit and the reaction units that name that species; an edit in a
+// comment between statements recomputes no unit at all, only positions
+// (parsing, the cross-statement checks and the assembly of the result are
+// redone on every analysis; they are linear and cheap).
+//
+// Each analysis reads the table left by the previous finished analysis of
+// the same file and builds a new one holding only the units it used, which
+// replaces the old table when it completes. Tables are never modified after
+// they are published, so concurrent analyses share them without locks, and
+// units of deleted statements are dropped. The result is the same as an
+// analysis from scratch (tested on random edit sequences).
+
+// memoTables are the units of one finished analysis, per file in scope.
+type memoTables struct {
+	key   string // settings and user groups the units were computed with
+	files map[string]*fileMemo
+}
+
+// fileMemo holds the units of one file's statements, aligned with the
+// file's species and reaction lists (nil where none was made).
+type fileMemo struct {
+	file    *speciesfile.File
+	species []*speciesUnit
+	rtext   []*reactionText
+	rx      []*reactionUnit
+}
+
+// memo is the memoization state of one analysis: the tables it reads (old,
+// possibly nil) and the tables it builds (next). Statements are matched
+// with the old file's by alignment: the unchanged statements before and
+// after the edited region are matched in order by comparing their text
+// (no hashing), and the statements of the edited region by a map of the old
+// region's texts.
+type memo struct {
+	old, next *memoTables
+	align     map[string]*alignment
+	changed   map[string]bool // names of the species whose unit was recomputed
+}
+
+// alignment maps a file's statements to those of its last analysis.
+type alignment struct {
+	old                *fileMemo // nil: nothing to reuse
+	species, reactions []int32   // index in the old lists, -1 for none
+}
+
+// memoKey identifies the inputs shared by every unit of an analysis.
+func memoKey(s Settings, userKey string) string {
+	return fmt.Sprintf("%#v|%s", s, userKey)
+}
+
+// SetIncremental turns on keeping per-statement results between analyses of
+// a file (see the package's incremental analysis notes). The language server
+// turns it on; a one-shot run (`kiln check`) has nothing to reuse and leaves
+// it off. Results are the same either way.
+func (w *Workspace) SetIncremental(on bool) {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	w.incremental = on
+	if !on {
+		w.memos = nil
+	}
+}
+
+// startMemo returns the memo state for an analysis of path with the given
+// settings and user groups (and whatever else every unit reads, such as the
+// display units, in userKey); nil when the workspace is not incremental.
+func (w *Workspace) startMemo(path string, s Settings, userKey string) *memo {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	if !w.incremental {
+		return nil
+	}
+	key := memoKey(s, userKey)
+	m := &memo{next: &memoTables{key: key, files: map[string]*fileMemo{}}, align: map[string]*alignment{}}
+	if old := w.memos[path]; old != nil && old.key == key {
+		m.old = old
+	}
+	return m
+}
+
+// finishMemo publishes the tables of a completed analysis of path.
+func (w *Workspace) finishMemo(path string, m *memo) {
+	if m == nil {
+		return
+	}
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	if !w.incremental {
+		return
+	}
+	if w.memos == nil {
+		w.memos = map[string]*memoTables{}
+	}
+	w.memos[path] = m.next
+}
+
+// ForgetFile drops the units kept for analyses of path (a closed document).
+func (w *Workspace) ForgetFile(path string) {
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	delete(w.memos, path)
+}
+
+// file returns the alignment of file f (at path) with its last analysis,
+// creating its next tables on first use.
+func (m *memo) file(path string, f *speciesfile.File) *alignment {
+	if al := m.align[path]; al != nil {
+		return al
+	}
+	m.next.files[path] = &fileMemo{
+		file:    f,
+		species: make([]*speciesUnit, len(f.Species)),
+		rtext:   make([]*reactionText, len(f.Reactions)),
+		rx:      make([]*reactionUnit, len(f.Reactions)),
+	}
+	al := &alignment{}
+	if m.old != nil {
+		if old := m.old.files[path]; old != nil && old.file.EnergyUnit == f.EnergyUnit {
+			al.old = old
+			al.species = alignLists(old.file, f, old.file.Species, f.Species)
+			al.reactions = alignLists(old.file, f, old.file.Reactions, f.Reactions)
+		}
+	}
+	m.align[path] = al
+	return al
+}
+
+// alignLists matches the statements of news (of file nf) with those of olds
+// (of file of) that have the same text: it returns, per new statement, the
+// index of an old one or -1.
+func alignLists[T speciesfile.Stmt](of, nf *speciesfile.File, olds, news []T) []int32 {
+	out := make([]int32, len(news))
+	for i := range out {
+		out[i] = -1
+	}
+	same := func(i, j int) bool { return bytes.Equal(bodyText(of, olds[i]), bodyText(nf, news[j])) }
+	p := 0
+	for p < len(olds) && p < len(news) && same(p, p) {
+		out[p] = int32(p)
+		p++
+	}
+	q := 0
+	for q < len(olds)-p && q < len(news)-p && same(len(olds)-1-q, len(news)-1-q) {
+		out[len(news)-1-q] = int32(len(olds) - 1 - q)
+		q++
+	}
+	if len(olds)-p-q == 0 || len(news)-p-q == 0 {
+		return out
+	}
+	region := make(map[string]int32, len(olds)-p-q)
+	for i := p; i < len(olds)-q; i++ {
+		region[string(bodyText(of, olds[i]))] = int32(i)
+	}
+	for j := p; j < len(news)-q; j++ {
+		if i, ok := region[string(bodyText(nf, news[j]))]; ok {
+			out[j] = i
+		}
+	}
+	return out
+}
+
+// bodyText returns the text of a statement's body (shared with the source).
+func bodyText(f *speciesfile.File, st speciesfile.Stmt) []byte {
+	b := st.Body()
+	if b.Start < 0 || b.End > len(f.Src) || b.Start > b.End {
+		return nil
+	}
+	return f.Src[b.Start:b.End]
+}
+
+// shift returns sp moved by delta bytes.
+func shift(sp speciesfile.Span, delta int) speciesfile.Span {
+	return speciesfile.Span{Start: sp.Start + delta, End: sp.End + delta}
+}
+
+// pinned reports whether a diagnostic of ds lies outside the statement body
+// [start, end]: such a unit cannot be moved and is reused only in place.
+func pinned(ds []speciesfile.Diagnostic, start, end int) bool {
+	for _, d := range ds {
+		if d.Span.Start < start || d.Span.End > end {
+			return true
+		}
+		for _, r := range d.Related {
+			if r.Span.Start < start || r.Span.End > end {
+				return true
+			}
+		}
+	}
+	return false
+}
+
+// appendRelocated appends ds to dst with spans (and related spans in file)
+// moved by delta bytes.
+func appendRelocated(dst, ds []speciesfile.Diagnostic, file string, delta int) []speciesfile.Diagnostic {
+	for _, d := range ds {
+		d.Span = shift(d.Span, delta)
+		if len(d.Related) > 0 {
+			rel := make([]speciesfile.Related, len(d.Related))
+			for k, r := range d.Related {
+				if r.File == file {
+					r.Span = shift(r.Span, delta)
+				}
+				rel[k] = r
+			}
+			d.Related = rel
+		}
+		dst = append(dst, d)
+	}
+	return dst
+}
+
+// relocate returns copies of ds with spans (and related spans in file) moved
+// by delta bytes.
+func relocate(ds []speciesfile.Diagnostic, file string, delta int) []speciesfile.Diagnostic {
+	if len(ds) == 0 {
+		return nil
+	}
+	out := make([]speciesfile.Diagnostic, len(ds))
+	for i, d := range ds {
+		d.Span = shift(d.Span, delta)
+		if len(d.Related) > 0 {
+			rel := make([]speciesfile.Related, len(d.Related))
+			for k, r := range d.Related {
+				if r.File == file {
+					r.Span = shift(r.Span, delta)
+				}
+				rel[k] = r
+			}
+			d.Related = rel
+		}
+		out[i] = d
+	}
+	return out
+}
+
+// speciesUnit is the result of the per-statement rules of one species
+// declaration: everything in Species but its name, location and syntax
+// node, and its diagnostics with spans relative to the statement body.
+type speciesUnit struct {
+	energyUnit string // the file's energy unit the statement was read with
+	pinned     int    // body offset the unit is bound to, -1 when it can move
+	tmpl       Species
+	diags      []speciesfile.Diagnostic
+}
+
+func newSpeciesUnit(energyUnit string, sp *Species, diags []speciesfile.Diagnostic, file string) *speciesUnit {
+	body := sp.Decl.Body()
+	base := body.Start
+	u := &speciesUnit{energyUnit: energyUnit, pinned: -1, tmpl: *sp, diags: relocate(diags, file, -base)}
+	if pinned(diags, body.Start, body.End) {
+		u.pinned = base
+	}
+	u.tmpl.Name, u.tmpl.Loc, u.tmpl.Decl, u.tmpl.unit = "", Location{}, nil, nil
+	if sp.Given != nil {
+		g := *sp.Given
+		g.Span = shift(g.Span, -base)
+		u.tmpl.Given = &g
+	}
+	return u
+}
+
+// fits reports whether u can stand for statement st of file f.
+func (u *speciesUnit) fits(f *speciesfile.File, st speciesfile.Stmt) bool {
+	return u != nil && u.energyUnit == f.EnergyUnit && (u.pinned < 0 || u.pinned == st.Body().Start)
+}
+
+// apply fills sp (whose Name, Loc and Decl are set) from the unit; keep
+// records the unit in sp (incremental analyses compare units).
+func (u *speciesUnit) apply(sp *Species, keep bool) {
+	name, loc, decl := sp.Name, sp.Loc, sp.Decl
+	*sp = u.tmpl
+	sp.Name, sp.Loc, sp.Decl = name, loc, decl
+	if keep {
+		sp.unit = u
+	}
+	if u.tmpl.Given != nil {
+		g := *u.tmpl.Given
+		g.Span = shift(g.Span, decl.Body().Start)
+		sp.Given = &g
+	}
+}
+
+// species returns the unit of species declaration k of file f (at path)
+// kept from the last analysis, or nil. The returned unit is recorded for
+// the next analysis.
+func (m *memo) species(path string, f *speciesfile.File, k int) *speciesUnit {
+	if m == nil {
+		return nil
+	}
+	al := m.file(path, f)
+	if al.old == nil || al.species[k] < 0 {
+		return nil
+	}
+	u := al.old.species[al.species[k]]
+	if !u.fits(f, f.Species[k]) {
+		return nil
+	}
+	m.next.files[path].species[k] = u
+	return u
+}
+
+// keepSpecies records a newly computed unit of species declaration k of
+// the file at path.
+func (m *memo) keepSpecies(path string, k int, u *speciesUnit) {
+	if m != nil {
+		m.next.files[path].species[k] = u
+	}
+}
+
+// reactionText is what follows from a reaction statement's text alone.
+type reactionText struct {
+	dupKey   string // reactionKey
+	equation string // equationText
+}
+
+// reactionText returns the text unit of reaction k of file f (at path),
+// computing it when it is not kept.
+func (m *memo) reactionText(path string, f *speciesfile.File, k int) *reactionText {
+	d := f.Reactions[k]
+	if m == nil {
+		return &reactionText{dupKey: reactionKey(d), equation: equationText(f, d)}
+	}
+	al := m.file(path, f)
+	var u *reactionText
+	if al.old != nil && al.reactions[k] >= 0 {
+		u = al.old.rtext[al.reactions[k]]
+	}
+	if u == nil {
+		u = &reactionText{dupKey: reactionKey(d), equation: equationText(f, d)}
+	}
+	m.next.files[path].rtext[k] = u
+	return u
+}
+
+// reactionUnit is the balance, thermochemistry and rate checks of one
+// reaction, computed from its statement and the species units of its
+// reactants and products.
+type reactionUnit struct {
+	energyUnit string
+	pinned     int            // as in speciesUnit
+	deps       []*speciesUnit // species units of the reactants, then the products
+	tmpl       Reaction       // computed fields only
+	diags      []speciesfile.Diagnostic
+}
+
+// reactionDeps returns the species units a reaction's checks read, in term
+// order (reactants, then products).
+func (a *analysis) reactionDeps(d *speciesfile.Reaction) []*speciesUnit {
+	out := make([]*speciesUnit, 0, len(d.Reactants)+len(d.Products))
+	for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
+		for _, t := range ts {
+			out = append(out, a.res.ByName[t.Name.Text].unit)
+		}
+	}
+	return out
+}
+
+// depsMatch reports whether the species units named by d are deps (only
+// called in incremental analyses, where species keep their units).
+func (a *analysis) depsMatch(d *speciesfile.Reaction, deps []*speciesUnit) bool {
+	if len(deps) != len(d.Reactants)+len(d.Products) {
+		return false
+	}
+	i := 0
+	for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
+		for _, t := range ts {
+			sp := a.res.ByName[t.Name.Text]
+			if sp == nil || sp.unit == nil || sp.unit != deps[i] {
+				return false
+			}
+			i++
+		}
+	}
+	return true
+}
+
+// depsValid reports whether a kept reaction unit with deps still reads the
+// species units named by d: certainly when d names no species whose unit
+// was recomputed, else when every name's unit is still its dependency.
+func (m *memo) depsValid(a *analysis, d *speciesfile.Reaction, deps []*speciesUnit) bool {
+	if len(deps) != len(d.Reactants)+len(d.Products) {
+		return false
+	}
+	if len(m.changed) > 0 {
+		for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
+			for _, t := range ts {
+				if m.changed[t.Name.Text] {
+					return a.depsMatch(d, deps)
+				}
+			}
+		}
+	}
+	return true
+}
+
+// reaction returns the kept unit of resolved reaction k of file f (at
+// path), or nil.
+func (m *memo) reaction(a *analysis, path string, f *speciesfile.File, k int) *reactionUnit {
+	if m == nil {
+		return nil
+	}
+	al := m.file(path, f)
+	if al.old == nil || al.reactions[k] < 0 {
+		return nil
+	}
+	d := f.Reactions[k]
+	u := al.old.rx[al.reactions[k]]
+	if u == nil || u.energyUnit != f.EnergyUnit || (u.pinned >= 0 && u.pinned != d.Body().Start) || !m.depsValid(a, d, u.deps) {
+		return nil
+	}
+	m.next.files[path].rx[k] = u
+	return u
+}
+
+func newReactionUnit(energyUnit string, deps []*speciesUnit, r *Reaction) *reactionUnit {
+	body := r.Decl.Body()
+	base := body.Start
+	u := &reactionUnit{energyUnit: energyUnit, pinned: -1, deps: deps, diags: relocate(r.diags, r.File, -base), tmpl: *r}
+	if pinned(r.diags, body.Start, body.End) {
+		u.pinned = base
+	}
+	u.tmpl.Decl, u.tmpl.File, u.tmpl.Line, u.tmpl.Equation, u.tmpl.diags = nil, "", 0, "", nil
+	if r.model != nil && r.model.kc != nil {
+		// The model's Kc is bound to r, which holds its syntax node (and
+		// through it the whole parse of its file): bind it to a reaction
+		// holding only the thermochemistry Kc reads, so that a kept unit
+		// keeps no old parse alive.
+		m := *r.model
+		m.kc = (&Reaction{reactants: r.reactants, products: r.products}).Kc
+		u.tmpl.model = &m
+	}
+	return u
+}
+
+// apply copies the unit's computed fields into r (everything but what r
+// was made with: its statement, file, line, equation and resolution).
+func (u *reactionUnit) apply(r *Reaction) {
+	decl, file, line, eq, resolved := r.Decl, r.File, r.Line, r.Equation, r.Resolved
+	*r = u.tmpl
+	r.Decl, r.File, r.Line, r.Equation, r.Resolved = decl, file, line, eq, resolved
+}
+
+// keepReaction records a newly computed unit of reaction k of the file at path.
+func (m *memo) keepReaction(path string, k int, u *reactionUnit) {
+	if m != nil {
+		m.next.files[path].rx[k] = u
+	}
+}
+
+// SameUnit reports whether sp and prev (a species of an earlier analysis by
+// the same incremental workspace) were made from the same unit: the same
+// declaration text read with the same settings, so the same results.
+func (sp *Species) SameUnit(prev *Species) bool {
+	return prev != nil && sp.unit != nil && sp.unit == prev.unit
+}
