@@ -1,6 +1,7 @@
 package analysis
 
 import (
+	"context"
 	"fmt"
 	"sort"
 	"strconv"
@@ -53,9 +54,17 @@ func (o EstimateOptions) key(ident string) string {
 }
 
 // identity is a structure's canonical form with its stereo: two molecules
-// with the same identity have the same estimate.
+// with the same identity have the same estimate. When the canonical search
+// runs out of its work bound the form would depend on the spelling, so the
+// identity is the spelling itself (marked so it never equals a canonical
+// form): two such spellings are not recognised as one structure, but two
+// structures are never merged.
 func identity(m *molecule.Molecule) string {
-	return m.Canonical() + "|" + m.CanonicalStereo()
+	c, err := m.CanonicalContext(context.Background())
+	if err != nil {
+		return "\x00uncanonical|" + m.SMILES
+	}
+	return c + "|" + m.CanonicalStereo()
 }
 
 // groupsKey identifies a set of user-defined group values.
@@ -188,7 +197,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 // and a number that cannot be true is not reported as an estimate.
 func physical(g *benson.Result) error {
 	if !(g.S298 > 0) {
-		return fmt.Errorf("the estimate is not physical: S°298 = %.2f J/(mol K) ≤ 0 (symmetry number %d, optical isomers %d: check any symmetry or optical-isomers override)", g.S298, g.SymmetryNumber, g.OpticalIsomers)
+		return fmt.Errorf("the estimate is not physical: S°298 = %.2f J/(mol K) ≤ 0 (symmetry number %s, optical isomers %d: check any symmetry or optical-isomers override)", g.S298, g.Sigma(), g.OpticalIsomers)
 	}
 	for i, cp := range g.Cp {
 		if !(cp > 0) {

@@ -310,7 +310,7 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 			w.line(w.bold("Corrections"))
 			w.table([]string{"correction", "count", "ΔHf°298", "S°298", "source"}, terms(g.Corrections))
 		}
-		facts := []string{fmt.Sprintf("σ = %d", g.SymmetryNumber), fmt.Sprintf("optical isomers = %d", g.OpticalIsomers)}
+		facts := []string{"σ = " + g.Sigma(), fmt.Sprintf("optical isomers = %d", g.OpticalIsomers)}
 		if g.Multiplicity > 0 {
 			facts = append(facts, fmt.Sprintf("multiplicity = %d", g.Multiplicity))
 		}

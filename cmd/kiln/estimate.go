@@ -1,6 +1,7 @@
 package main
 
 import (
+	"encoding/json"
 	"fmt"
 	"io"
 	"os"
@@ -25,7 +26,7 @@ type estimateJSON struct {
 	Cp             numericMap       `json:"cp_j_mol_k"`
 	Groups         []groupJSON      `json:"groups"`
 	Corrections    []correctionJSON `json:"corrections"`
-	SymmetryNumber *int             `json:"symmetry_number"`
+	SymmetryNumber *json.Number     `json:"symmetry_number"` // exact integer of any size
 	OpticalIsomers *int             `json:"optical_isomers"`
 	MissingGroups  []string         `json:"missing_groups"`
 	// ResonanceForm is the canonical SMILES of the resonance structure
@@ -159,7 +160,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		for _, ms := range g.Missing {
 			r.MissingGroups = append(r.MissingGroups, ms.Group)
 		}
-		r.SymmetryNumber = ptr(g.SymmetryNumber)
+		r.SymmetryNumber = ptr(json.Number(g.Sigma()))
 		r.OpticalIsomers = ptr(g.OpticalIsomers)
 		r.ResonanceForm = g.Form
 	} else {
@@ -205,7 +206,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 			rows = append(rows, []string{t.Name + " (correction)", strconv.Itoa(t.Count), f2(u.EnergyValue(t.Hf298)), f2(u.EntropyValue(t.S298))})
 		}
 		writeTable(w, "  ", []string{"group", "count", "ΔHf°298 " + u.EnergyName(), "S°298 " + u.EntropyName()}, rows)
-		fmt.Fprintf(w, "  symmetry number σ = %d, optical isomers n = %d, multiplicity %d\n", g.SymmetryNumber, g.OpticalIsomers, g.Multiplicity)
+		fmt.Fprintf(w, "  symmetry number σ = %s, optical isomers n = %d, multiplicity %d\n", g.Sigma(), g.OpticalIsomers, g.Multiplicity)
 		if g.Form != "" {
 			fmt.Fprintf(w, "  estimated as the resonance structure %s (most stable of %d)\n", g.Form, g.ResonanceForms)
 		}

@@ -72,7 +72,7 @@ type GroupValue struct {
 type Options struct {
 	Multiplicity   int          // spin multiplicity 2S+1; 0 = unpaired electrons + 1
 	Symmetry       int          // total symmetry number σ; 0 = SymmetryNumber(m)
-	OpticalIsomers int          // n; 0 = 2^(unmarked potential stereocentres)
+	OpticalIsomers int          // n; 0 = stereoisomers of the structure (molecule.OpticalIsomers)
 	UserGroups     []GroupValue // win over the built-in table; names are normalised
 }
 
@@ -115,7 +115,8 @@ type Result struct {
 	Groups      []Term
 	Corrections []Term
 
-	SymmetryNumber int
+	SymmetryNumber int    // σ; 0 when σ exceeds the int range (see SymmetryExact)
+	SymmetryExact  string // σ in decimal, exact for any size
 	OpticalIsomers int
 	Multiplicity   int
 
@@ -135,6 +136,14 @@ type Result struct {
 	// there is only one).
 	Form           string
 	ResonanceForms int
+}
+
+// Sigma returns σ in decimal, exact for any size.
+func (r *Result) Sigma() string {
+	if r.SymmetryExact != "" {
+		return r.SymmetryExact
+	}
+	return strconv.Itoa(r.SymmetryNumber)
 }
 
 // Estimate estimates the thermochemistry of m. It fails for structures
@@ -247,22 +256,27 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	if opts.Symmetry == 0 || opts.OpticalIsomers == 0 {
 		sy = newSym(sg)
 	}
-	est.SymmetryNumber = opts.Symmetry
-	if est.SymmetryNumber == 0 {
+	est.SymmetryNumber, est.SymmetryExact = opts.Symmetry, strconv.Itoa(opts.Symmetry)
+	lnSigma := math.Log(float64(opts.Symmetry))
+	if opts.Symmetry == 0 {
 		if sy.err != nil {
 			return nil, sy.err
 		}
-		est.SymmetryNumber = sy.number()
+		est.SymmetryNumber, est.SymmetryExact, lnSigma = sy.number(), sy.exact.String(), lnBig(sy.exact)
 	}
-	if est.SymmetryNumber > 1 {
+	if lnSigma > 0 {
 		est.Corrections = append(est.Corrections, Term{
-			Name: "symmetry -R ln " + strconv.Itoa(est.SymmetryNumber), Count: 1,
-			S298: -R * math.Log(float64(est.SymmetryNumber)), Source: "statistical mechanics",
+			Name: "symmetry -R ln " + est.SymmetryExact, Count: 1,
+			S298: -R * lnSigma, Source: "statistical mechanics",
 		})
 	}
 	est.OpticalIsomers = opts.OpticalIsomers
 	if est.OpticalIsomers == 0 {
-		est.OpticalIsomers = sy.opticalIsomers()
+		n, err := sy.opticalIsomers()
+		if err != nil {
+			return nil, err
+		}
+		est.OpticalIsomers = n
 	}
 	if est.OpticalIsomers > 1 {
 		est.Corrections = append(est.Corrections, Term{

@@ -142,7 +142,6 @@ func generatedResonanceRadicals(t *testing.T, want int) []string {
 	return out
 }
 
-
 // One answer per molecule: every resonance structure of a radical, each in
 // several random spellings, gives the same values, symmetry number, flags,
 // uncertainty and representative structure (or the same refusal).

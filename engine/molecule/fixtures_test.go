@@ -122,7 +122,9 @@ func TestFixturesAgainstRDKit(t *testing.T) {
 				}
 				assert.True(t, ok, "%s %s: %s", fx.smiles, field, msg)
 			}
-			check("formula", m.Formula() == want, fmt.Sprintf("kiln %s, RDKit %s", m.Formula(), fx.formula))
+			// RDKit's CalcMolFormula leaves mass numbers out; kiln's Formula
+			// keeps them (D, [13C]), so the element formula is compared.
+			check("formula", HillFormula(m.Composition()) == want, fmt.Sprintf("kiln %s, RDKit %s", HillFormula(m.Composition()), fx.formula))
 			check("charge", m.Charge() == fx.charge, fmt.Sprintf("kiln %d, RDKit %d", m.Charge(), fx.charge))
 			check("rings", len(m.Rings()) == fx.rings, fmt.Sprintf("kiln %d, RDKit %d", len(m.Rings()), fx.rings))
 			arom := 0

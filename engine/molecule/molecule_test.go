@@ -159,9 +159,9 @@ func TestFormulaCompositionMass(t *testing.T) {
 		{"Cl", "ClH", 0, 1.008 + 35.45},
 		{"[NH4+]", "H4N", 1, 4*1.008 + 14.007},
 		{"CC(=O)[O-]", "C2H3O2", -1, 2*12.011 + 3*1.008 + 2*15.999},
-		{"[2H]O[2H]", "H2O", 0, 2*2.01410177812 + 15.999},
-		{"[13CH4]", "CH4", 0, 13.00335483507 + 4*1.008},
-		{"C[18OH]", "CH4O", 0, 12.011 + 4*1.008 + 17.99915961286},
+		{"[2H]O[2H]", "D2O", 0, 2*2.01410177812 + 15.999},
+		{"[13CH4]", "[13C]H4", 0, 13.00335483507 + 4*1.008},
+		{"C[18OH]", "CH4[18O]", 0, 12.011 + 4*1.008 + 17.99915961286},
 		{"[Na+].[Cl-]", "ClNa", 0, 22.98976928 + 35.45},
 	}
 	for _, c := range cases {
@@ -486,4 +486,21 @@ func BenchmarkRead30Atoms(b *testing.B) {
 			b.Fatal(err)
 		}
 	}
+}
+
+// The formula keeps written mass numbers; the composition counts elements.
+func TestFormulaIsotopes(t *testing.T) {
+	for smi, want := range map[string]string{
+		"CC[2H]":                "C2H5D",
+		"[2H]C([2H])([2H])[2H]": "CD4",
+		"[2H]O[2H]":             "D2O",
+		"[13CH4]":               "[13C]H4",
+		"C[13CH3]":              "C[13C]H6",
+		"[3H]Cl":                "ClT",
+		"CCO":                   "C2H6O",
+	} {
+		m := parse(t, smi)
+		assert.Equal(t, want, m.Formula(), smi)
+	}
+	assert.Equal(t, "C2H6", HillFormula(parse(t, "CC[2H]").Composition()))
 }

@@ -24,57 +24,68 @@ func (m *Molecule) Composition() map[string]int {
 // Formula returns the neutral molecular formula in Hill order: C first, then
 // H, then the other elements alphabetically; without carbon every element
 // (H included) is alphabetical. Counts of 1 are omitted. The charge is not
-// part of the formula (see Charge).
+// part of the formula (see Charge). Atoms written with a mass number keep
+// it: ²H and ³H as D and T, others as [13C], each right after its element
+// (CC[2H] is C2H5D, [13CH4] is [13C]H4); Composition counts elements only.
 func (m *Molecule) Formula() string {
-	// Same result as HillFormula(m.Composition()), counted in a small slice
-	// (molecules have few distinct elements) instead of a map.
 	type elCount struct {
-		el string
-		n  int
+		el  string // element, for ordering
+		iso int
+		n   int
 	}
 	var buf [8]elCount
 	counts := buf[:0]
-	add := func(el string, n int) {
+	add := func(el string, iso, n int) {
 		for k := range counts {
-			if counts[k].el == el {
+			if counts[k].el == el && counts[k].iso == iso {
 				counts[k].n += n
 				return
 			}
 		}
-		counts = append(counts, elCount{el, n})
+		counts = append(counts, elCount{el, iso, n})
 	}
-	nC, nH := 0, 0
+	hasC := false
 	for _, a := range m.Atoms {
-		switch a.Element {
-		case "C":
-			nC++
-		case "H":
-			nH++
-		default:
-			add(a.Element, 1)
+		hasC = hasC || a.Element == "C"
+		add(a.Element, a.Isotope, 1)
+		if a.HCount > 0 {
+			add("H", 0, a.HCount)
 		}
-		nH += a.HCount
 	}
-	if nC == 0 && nH > 0 {
-		add("H", nH)
+	rank := func(el string) int {
+		switch {
+		case hasC && el == "C":
+			return 0
+		case hasC && el == "H":
+			return 1
+		}
+		return 2
 	}
-	slices.SortFunc(counts, func(x, y elCount) int { return strings.Compare(x.el, y.el) })
+	slices.SortFunc(counts, func(x, y elCount) int {
+		if c := rank(x.el) - rank(y.el); c != 0 {
+			return c
+		}
+		if c := strings.Compare(x.el, y.el); c != 0 {
+			return c
+		}
+		return x.iso - y.iso
+	})
 	var b strings.Builder
 	b.Grow(16)
-	write := func(el string, n int) {
-		b.WriteString(el)
-		if n != 1 {
-			b.WriteString(strconv.Itoa(n))
-		}
-	}
-	if nC > 0 {
-		write("C", nC)
-		if nH > 0 {
-			write("H", nH)
-		}
-	}
 	for _, c := range counts {
-		write(c.el, c.n)
+		switch {
+		case c.iso == 0:
+			b.WriteString(c.el)
+		case c.el == "H" && c.iso == 2:
+			b.WriteString("D")
+		case c.el == "H" && c.iso == 3:
+			b.WriteString("T")
+		default:
+			b.WriteString("[" + strconv.Itoa(c.iso) + c.el + "]")
+		}
+		if c.n != 1 {
+			b.WriteString(strconv.Itoa(c.n))
+		}
 	}
 	return b.String()
 }

@@ -50,8 +50,13 @@ func TestReaderRejects(t *testing.T) {
 		{"c", 0, "not in a ring"},
 		{"Cc1ccccc1c", 9, "not in a ring"},
 		{"C[nH]C", 1, "not in a ring"},
-		{"C(C.)C", 3, "'.' inside a branch"},
-		{"C(C.C)C", 3, "'.' inside a branch"},
+		{"C(C.)C", 3, "'.' must be followed by an atom"},
+		{"C(.)C", 2, "'.' must be followed by an atom"},
+		{"C..C", 1, "'.' must be followed by an atom"},
+		{".C", 0, "'.' with no atom before it"},
+		{"C.", 1, "SMILES ends with '.'"},
+		{"C:C", 1, "aromatic bond ':' not in a ring"},
+		{"c1ccccc1:C", 8, "aromatic bond ':' not in a ring"},
 		{"CClC", 1, "chlorine with valence 2"},
 		{"CBr(C)C", 1, "bromine with valence 3"},
 		{"FF(F)F", 1, "fluorine with valence 3"},
@@ -66,9 +71,24 @@ func TestReaderRejects(t *testing.T) {
 		assert.Contains(t, se.Msg, c.msg, c.smiles)
 	}
 	// still accepted: halogens in brackets may take higher valences, and a
-	// dot after a closed branch separates components.
-	for _, s := range []string{"F[Cl](F)F", "C(C)C.C", "ClCl", "c1ccccc1.[Na+]", "C[I+]C"} {
+	// dot after a closed branch separates components; per the OpenSMILES
+	// grammar (chain ::= chain dot branched_atom; branch ::= '(' dot chain
+	// ')') a dot may also stand inside a branch or open it.
+	for _, s := range []string{"F[Cl](F)F", "C(C)C.C", "ClCl", "c1ccccc1.[Na+]", "C[I+]C", "C(C.C)C", "CC(.C)C", "C(.C)", "c1ccccc1-c1ccccc1", "c1:c:c:c:c:c:1"} {
 		_, err := ParseSMILES(s)
 		assert.NoError(t, err, s)
 	}
+}
+
+// Dots inside branches follow the grammar: the branch root keeps its
+// place, the atom after the dot starts a new component.
+func TestDotInBranch(t *testing.T) {
+	a, err := ParseSMILES("C(C.C)C")
+	require.NoError(t, err)
+	b, err := ParseSMILES("CCC.C")
+	require.NoError(t, err)
+	assert.Equal(t, b.Canonical(), a.Canonical())
+	c, err := ParseSMILES("CC(.C)C")
+	require.NoError(t, err)
+	assert.Equal(t, b.Canonical(), c.Canonical())
 }

@@ -65,8 +65,9 @@ type parser struct {
 // bracket atoms [isotope symbol chirality Hn charge :class] including
 // aromatic [se] and [as] and every OpenSMILES chirality class (@, @@,
 // @TH1–2, @AL1–2, @SP1–3, @TB1–20, @OH1–30; kept verbatim), bonds - = # $ : / \, branches, ring closures 0–9 and %nn with the bond
-// symbol at either end, and '.'-separated components ('.' never inside a
-// branch). The wildcard '*' is
+// symbol at either end, and '.'-separated components (a '.' may stand
+// inside a branch or open it, C(C.C)C and CC(.C)C, as the OpenSMILES grammar
+// allows; an atom must follow every '.'). The wildcard '*' is
 // rejected. Aromatic input is kekulized (maximum matching); aromaticity is then
 // perceived afresh on the Kekulé graph, so Kekulé and aromatic spellings of a
 // molecule give the same graph. Bracket atoms with fewer bonds+H than their
@@ -178,8 +179,12 @@ func (p *parser) parse() error {
 	openRings := 0
 	lastOpen := false // previous token was '('
 	i := 0
+	dotPos := -1 // a '.' waiting for its atom
 	for i < len(s) {
 		c := s[i]
+		if dotPos >= 0 && (isBondSym(c) || c == '(' || c == ')' || c == '.' || isDigit(c) || c == '%') {
+			return errAt(dotPos, "'.' must be followed by an atom")
+		}
 		switch {
 		case isBondSym(c):
 			if pendSym != 0 {
@@ -221,17 +226,20 @@ func (p *parser) parse() error {
 			i++
 			continue
 		case c == '.':
+			// OpenSMILES: chain ::= chain dot branched_atom and
+			// branch ::= '(' dot chain ')', so a dot may stand inside a
+			// branch or open one (C(C.C)C, CC(.C)C), but an atom must
+			// follow it.
 			if pendSym != 0 {
 				return errAt(pendPos, "bond before '.'")
 			}
-			if prev < 0 || lastOpen {
+			if prev < 0 && !lastOpen {
 				return errAt(i, "'.' with no atom before it")
 			}
-			if len(branches) > 0 {
-				return errAt(i, "'.' inside a branch (components must be separated outside parentheses)")
-			}
 			prev = -1
+			dotPos = i
 			i++
+			lastOpen = false
 			continue
 		case (c >= '0' && c <= '9') || c == '%':
 			if prev < 0 || lastOpen {
@@ -313,10 +321,14 @@ func (p *parser) parse() error {
 		pendSym, pendPos = 0, -1
 		prev = idx
 		lastOpen = false
+		dotPos = -1
 		i += n
 	}
 	if pendSym != 0 {
 		return errAt(pendPos, "bond at the end of the SMILES")
+	}
+	if dotPos >= 0 {
+		return errAt(dotPos, "SMILES ends with '.'")
 	}
 	if lastOpen || len(branches) > 0 {
 		return errAt(branches[len(branches)-1].pos, "unclosed branch '('")
@@ -590,10 +602,22 @@ func chiralityEnd(s string, i, end int) (int, error) {
 // aromaticInRings rejects atoms written aromatic (lower case) that lie on no
 // ring: OpenSMILES aromaticity is a property of ring atoms, so "CoC" is an
 // error rather than dimethyl ether.
+//
+// Likewise an explicit aromatic bond ':' must lie on a ring: between atoms
+// on no common ring ("C:C") its order is undefined (OpenSMILES leaves ':'
+// outside aromatic rings unspecified), so it is an error rather than a
+// guessed single bond.
 func (p *parser) aromaticInRings() error {
 	arom := false
 	for _, a := range p.atoms {
 		arom = arom || a.Aromatic
+	}
+	colon := func(k int) bool {
+		pos := p.bonds[k].Pos
+		return p.aromIn[k] && pos >= 0 && pos < len(p.s) && p.s[pos] == ':'
+	}
+	for k := range p.bonds {
+		arom = arom || colon(k)
 	}
 	if !arom {
 		return nil
@@ -603,6 +627,11 @@ func (p *parser) aromaticInRings() error {
 	for i, a := range p.atoms {
 		if a.Aromatic && !g.atomInRing(i, inRing) {
 			return errAt(a.Pos, "aromatic atom %q not in a ring", p.s[a.Pos:a.Pos+a.Len])
+		}
+	}
+	for k := range p.bonds {
+		if colon(k) && !inRing[k] {
+			return errAt(p.bonds[k].Pos, "aromatic bond ':' not in a ring (its order is undefined; write -, = or # instead)")
 		}
 	}
 	return nil

@@ -56,6 +56,15 @@ const maxSeeds = 64
 //     ligands freely: Π k!;
 //     - an acyclic double bond keeps cis partners cis (an end with two alike
 //     ligands halves the count instead); an allene keeps its handedness;
+//     cumulene chains generalise both: with an odd number of double bonds
+//     the ends are coplanar (cis/trans, butatriene D2h), with an even
+//     number perpendicular (handedness, pentatetraene D2d);
+//     - a carbon radical or cation centre with three σ partners next to a
+//     double bond or aromatic ring is planar and shares the unpaired
+//     electron (or charge) along the allylic chain: the system is one rigid
+//     delocalised unit whose ends are alike when the hybrid is symmetric
+//     (allyl and benzyl C2v, σ 2), and a planar end with two alike outside
+//     ligands halves the count like a double-bond end;
 //     - rings are planar, except a lone saturated six-membered ring, which is
 //     a chair (D3d), and cages (every atom bonded to three or more atoms of
 //     the fragment, three or more rings), which are 3-D: a three-connected
@@ -107,12 +116,17 @@ func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, er
 	if len(m.Atoms) == 0 {
 		return big.NewInt(1), nil
 	}
+	hybrid, hbonds := m.conjugatedRadical()
+	if hybrid != nil {
+		m = m.hybridForm(hybrid, hbonds)
+	}
 	info, err := m.symmetryInfo(ctx, budget)
 	if err != nil {
 		return nil, err
 	}
 	classes := orbitClasses(len(m.Atoms), info.gens, info.labels)
 	sc := newSigmaCalc(ctx, m, classes)
+	sc.hybrid = hybrid
 	sc.budget = budget
 	sc.gens = info.gens
 	return sc.total()
@@ -135,20 +149,6 @@ func (m *Molecule) symmetryInfo(ctx context.Context, budget int) (symmetryInfo, 
 		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, budget)
 	}
 	return info, nil
-}
-
-// OpticalIsomers returns n = 2^k, where k counts the potential stereocentres
-// (PotentialStereocentres) that are carbon atoms written without a chirality
-// mark: an unmarked centre stands for both configurations, a marked one for
-// the single enantiomer written. k is capped at 30.
-func (m *Molecule) OpticalIsomers() int {
-	k := 0
-	for _, c := range m.PotentialStereocentres() {
-		if m.Atoms[c].Element == "C" && m.Atoms[c].Chirality == "" && m.Atoms[c].Radical == 0 {
-			k++
-		}
-	}
-	return 1 << min(k, 30)
 }
 
 // Ligand colours of the outside positions of a fragment atom.
@@ -177,6 +177,7 @@ type sigmaCalc struct {
 	gens    [][]int // generators of the whole molecule's automorphism group
 	elems   [][]int // its elements, enumerated on demand (at most 5001)
 	marked  []int   // atoms with a written tetrahedral mark, nil until known
+	hybrid  []bool  // per atom: in a conjugated radical (or cation) system, nil if none
 	// parent bond of the fragment being analysed
 	pAtom, pNbr int
 }
@@ -610,42 +611,60 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 		return out
 	}
+	// cumulene chains e1=c=…=c=e2 (n double bonds; n = 1 a plain double
+	// bond): ends of an odd chain lie in one plane (cis/trans like a double
+	// bond, butatriene D2h), ends of an even chain are perpendicular
+	// (handedness like an allene, D2d)
 	for _, x := range atoms {
-		dx := doubles(x)
-		if len(dx) == 2 && len(m.Adj[x]) == 2 && m.Atoms[x].HCount == 0 { // allene centre
-			y, z := dx[0], dx[1]
-			if len(doubles(y)) != 1 || len(doubles(z)) != 1 {
-				continue
-			}
-			ly, lz := sc.endPositions(y, x), sc.endPositions(z, x)
-			if len(ly) != 2 || len(lz) != 2 {
-				continue
-			}
-			if alike(ly) || alike(lz) {
-				halves++
-				continue
-			}
-			units = append(units, unit{kind: 'a', x: x, y: y, z: z})
+		if len(doubles(x)) != 1 {
 			continue
 		}
-		for _, b := range m.Adj[x] {
-			bd := m.Bonds[b]
-			if bd.A != x || bd.Order != 2 || bd.Aromatic || inRing[b] {
-				continue
+		chain := []int{x}
+		prev, cur := x, doubles(x)[0]
+		ringChain := false
+		for {
+			if b := m.BondBetween(prev, cur); b >= 0 && inRing[b] {
+				ringChain = true
 			}
-			y := bd.B
-			if len(doubles(x)) != 1 || len(doubles(y)) != 1 {
-				continue // allene ends are handled with their centre
+			chain = append(chain, cur)
+			d := doubles(cur)
+			if len(d) != 2 || len(m.Adj[cur]) != 2 || m.Atoms[cur].HCount != 0 || len(chain) > len(atoms) {
+				break
 			}
-			lx, ly := sc.endPositions(x, y), sc.endPositions(y, x)
-			if len(lx) != 2 || len(ly) != 2 {
-				continue
+			next := d[0]
+			if next == prev {
+				next = d[1]
 			}
-			if alike(lx) || alike(ly) {
-				halves++
-				continue
-			}
+			prev, cur = cur, next
+		}
+		y := chain[len(chain)-1]
+		n := len(chain) - 1
+		if len(doubles(y)) != 1 || y < x || ringChain {
+			continue
+		}
+		lx, ly := sc.endPositions(x, chain[1]), sc.endPositions(y, chain[n-1])
+		if len(lx) != 2 || len(ly) != 2 {
+			continue
+		}
+		if alike(lx) || alike(ly) {
+			halves++
+			continue
+		}
+		if n%2 == 1 {
 			units = append(units, unit{kind: 'd', x: x, y: y})
+		} else {
+			units = append(units, unit{kind: 'a', x: chain[n/2], y: x, z: y})
+		}
+	}
+	// a planar trigonal end of a conjugated radical system with two alike
+	// outside ligands (benzyl CH2): exchanging them alone is a reflection,
+	// like the ends of a double bond
+	for _, x := range atoms {
+		if sc.hybrid != nil && sc.hybrid[x] && !sc.tetrahedral(x) && len(atoms) > 1 {
+			col := sc.outside(x, false)
+			if len(col) == 2 && col[0] == col[1] {
+				halves++
+			}
 		}
 	}
 	for ; halves > 0; halves-- {
@@ -838,14 +857,14 @@ func (sc *sigmaCalc) limitErr() error {
 func alike(l []int) bool { return l[0] < 0 && l[0] == l[1] }
 
 // endPositions lists the positions of double-bond end x other than its
-// partner y: fragment atoms as atom indices (≥ 0), outside ligands as
+// partner y (or, at the end of a cumulene chain, the atom it is double-bonded to): fragment atoms as atom indices (≥ 0), outside ligands as
 // negative colour codes (-(colour+10)); an sp2 N keeps its lone pair.
 func (sc *sigmaCalc) endPositions(x, y int) []int {
 	m := sc.m
 	var out []int
 	for _, b := range m.Adj[x] {
 		o := m.Other(b, x)
-		if o == y || sc.rot[b] {
+		if o == y || sc.rot[b] || (m.Bonds[b].Order == 2 && !m.Bonds[b].Aromatic) {
 			continue
 		}
 		out = append(out, o)
@@ -1319,4 +1338,78 @@ func (sc *sigmaCalc) outsideSplit(i int, withLP bool) []int {
 	}
 	slices.Sort(col)
 	return col
+}
+
+// conjugatedRadical marks the atoms of conjugated radical (and carbocation)
+// systems: a trigonal carbon radical or cation centre (three σ partners,
+// single bonds) next to a double bond or an aromatic ring is planar with it,
+// and the unpaired electron (or the charge) is shared along the allylic
+// chain (allyl, benzyl, pentadienyl, acetonyl). It returns nil when m has
+// none; bonds marks the bonds of the systems.
+func (m *Molecule) conjugatedRadical() (atoms, bonds []bool) {
+	var queue []int
+	for i, a := range m.Atoms {
+		if a.Element == "C" && (a.Radical == 1 || (a.Charge == 1 && a.Radical == 0)) &&
+			len(m.Adj[i])+a.HCount == 3 && m.allSingle(i) {
+			queue = append(queue, i)
+		}
+	}
+	var bl []int
+	seen := map[int]bool{}
+	for k := 0; k < len(queue); k++ {
+		r := queue[k]
+		if seen[r] {
+			continue
+		}
+		seen[r] = true
+		for _, b := range m.Adj[r] {
+			if m.Bonds[b].Order != 1 || m.Bonds[b].Aromatic {
+				continue
+			}
+			a := m.Other(b, r)
+			if m.Atoms[a].Aromatic {
+				bl = append(bl, b)
+				continue
+			}
+			for _, b2 := range m.Adj[a] {
+				if bd := m.Bonds[b2]; bd.Order == 2 && !bd.Aromatic {
+					bl = append(bl, b, b2)
+					queue = append(queue, m.Other(b2, a))
+				}
+			}
+		}
+	}
+	if len(bl) == 0 {
+		return nil, nil
+	}
+	atoms, bonds = make([]bool, len(m.Atoms)), make([]bool, len(m.Bonds))
+	for _, b := range bl {
+		bonds[b] = true
+		atoms[m.Bonds[b].A], atoms[m.Bonds[b].B] = true, true
+	}
+	return atoms, bonds
+}
+
+// hybridForm returns a private copy of m in which the conjugated radical
+// systems (atoms and bonds marked) are delocalised units: their bonds
+// aromatic, their atoms aromatic without a radical flag (so the symmetry
+// search sees the ends of allyl as alike, and the system is rigid). Used
+// only for σ.
+func (m *Molecule) hybridForm(atoms, bonds []bool) *Molecule {
+	h := *m
+	h.derived = nil
+	h.Atoms = slices.Clone(m.Atoms)
+	h.Bonds = slices.Clone(m.Bonds)
+	for i := range h.Atoms {
+		if atoms[i] {
+			h.Atoms[i].Aromatic = true
+			h.Atoms[i].Radical = 0
+		}
+	}
+	for b := range h.Bonds {
+		if bonds[b] {
+			h.Bonds[b].Aromatic = true
+		}
+	}
+	return &h
 }

@@ -177,3 +177,70 @@ func TestSymmetryNumberMeso(t *testing.T) {
 	assert.Equal(t, int64(9), sigma("C[C@H](O)C[C@@H](C)O"), "meso")
 	assert.Equal(t, int64(18), sigma("CC(O)CC(C)O"), "unmarked")
 }
+
+// Optical isomers count stereoisomers, not 2^centres: small bicycles keep
+// their bridgeheads out,out, small fused rings are cis, cages are fixed,
+// meso forms count once. Expected values: stereoisomers by hand from the
+// geometric rule (common practice), cross-checked with RDKit stereoisomer
+// enumeration with embedding (testdata/smiles/optical.tsv, see
+// make_optical.py; RDKit also lists a trans-fused cyclobutane on
+// norbornane for C1CC2CC1C1CCC21, which kiln's cis rule excludes).
+func TestOpticalIsomersRingSystems(t *testing.T) {
+	for _, c := range []struct {
+		smi  string
+		want int
+	}{
+		{"CC1CC2CCC1C2", 4},     // 2-methylnorbornane: exo/endo × enantiomers
+		{"C1CC2CC1C1CCC21", 2},  // cyclobutane cis-fused on norbornane: exo, endo (both Cs)
+		{"C1CC2C3CC1C3C2", 2},   // one chiral pair
+		{"CC1C2CC2C1C", 4},      // 2,3-dimethylhousane
+		{"OC1C2CC3C(C2)C13", 2}, // syn/anti OH on a chiral-free cage
+		{"C12C3C4C5C1C6C7C8C2C9C3C%10C4C%11C5C6C%12C7C%13C8C9C%10C%11C%12%13", 1},
+		{"C12C3C4C5C1C6C7C2C8C3C9C4C%10C5C6C%11C7C8C9C%10%11", 1}, // dodecahedrane
+		{"C12C3C1C1C2C31", 1}, // prismane
+		{"C12C3C4C5C1C1C6C7C2C2C8C3C3C9C4C4C%10C5C5C1C1C6C6C%11C7C2C2C7C8C3C3C8C9C4C4C9C%10C5C5C1C1C6C6C%11C2C2C7C3C3C8C4C4C9C5C1C1C6C2C3C41", 1}, // C60H60
+		{"OC1C(O)C(O)C(O)C(O)C1O", 9}, // inositols: 8 achiral + 1 chiral pair
+		{"CC12C3C4C1C5C2C3C45", 1},    // methylcubane
+		{"C1C2CC3CC1CC(C2)C3", 1},     // adamantane
+		{"CC(O)C(C)O", 3},             // R,R; S,S; meso
+		{"C[C@H](O)[C@@H](C)O", 1},    // meso written
+		{"C[C@H](O)[C@H](C)O", 1},     // one enantiomer written
+		{"OC(C(O)C(O)=O)C(O)=O", 3},   // tartaric acid
+		{"CC1CCC(C)CC1", 2},           // cis, trans
+		{"CC1CCCC2CCCCC12", 8},        // decalin fusion may be trans
+	} {
+		n, err := parse(t, c.smi).OpticalIsomersContext(context.Background())
+		require.NoError(t, err, c.smi)
+		assert.Equal(t, c.want, n, c.smi)
+	}
+}
+
+// A radical or cation centre conjugated with a π system is planar and part
+// of the rigid fragment (no free CH2 top); cumulenes with an odd number of
+// double bonds are planar, with an even number twisted. Point groups:
+// common practice (textbook structures).
+func TestSymmetryConjugatedRadicalsCumulenes(t *testing.T) {
+	for _, c := range []struct {
+		smi  string
+		want int64
+	}{
+		{"[CH2]c1ccccc1", 2},   // benzyl C2v
+		{"[CH2+]c1ccccc1", 2},  // benzyl cation C2v
+		{"C=C[CH2]", 2},        // allyl C2v
+		{"[CH2]C=CC=C", 2},     // pentadienyl C2v, either spelling
+		{"C=C[CH]C=C", 2},      //
+		{"[CH2]C(=O)C", 3},     // acetonyl: planar CH2, methyl top 3
+		{"[CH2]C(C)=C", 6},     // 2-methylallyl: C2v × methyl 3
+		{"C=C(C=C)[CH2]", 2},   // cross-conjugated ends differ from CH2
+		{"C[CH2]", 6},          // ethyl: no π system, CH2 stays a top
+		{"C=C=C=C", 4},         // butatriene D2h
+		{"C=C=C", 4},           // allene D2d
+		{"C=C=C=C=C", 4},       // pentatetraene D2d
+		{"FC(F)=C=C=C(F)F", 4}, // D2h
+		{"C=C", 4},
+	} {
+		s, err := parse(t, c.smi).SymmetryNumber()
+		require.NoError(t, err, c.smi)
+		assert.Equal(t, c.want, s.Int64(), c.smi)
+	}
+}
