@@ -75,11 +75,12 @@ type formatter struct {
 	rows   map[int]*row // by line number
 	order  []int
 	broken map[speciesfile.Stmt]bool
+	syntax []speciesfile.Diagnostic // the file's syntax errors
 }
 
 func (fm *formatter) isBroken(s speciesfile.Span) bool {
-	for _, d := range fm.f.Diags {
-		if d.Code == speciesfile.CodeSyntax && d.Span.Start < s.End+1 && d.Span.End >= s.Start {
+	for _, d := range fm.syntax {
+		if d.Span.Start < s.End+1 && d.Span.End >= s.Start {
 			return true
 		}
 	}
@@ -90,6 +91,11 @@ func (fm *formatter) isBroken(s speciesfile.Span) bool {
 func (fm *formatter) collect() {
 	f := fm.f
 	fm.broken = map[speciesfile.Stmt]bool{}
+	for _, d := range f.Diags {
+		if d.Code == speciesfile.CodeSyntax {
+			fm.syntax = append(fm.syntax, d)
+		}
+	}
 	for _, st := range f.Stmts {
 		switch st.(type) {
 		case *speciesfile.BadStmt, *speciesfile.Trivia:

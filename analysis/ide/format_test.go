@@ -3,6 +3,7 @@ package ide
 import (
 	"context"
 	"fmt"
+	"math/rand/v2"
 	"os"
 	"path/filepath"
 	"strings"
@@ -157,4 +158,47 @@ func TestFormatBrokenLineInBlock(t *testing.T) {
 	require.NotEmpty(t, f.Diags)
 	want := "species A C\nreaction A <=> A   A=1 n=0 Ea=0\n  duplicate\nreaction A  <=>  A A=x n=0 Ea=0\nreaction A => A   A=10 n=0 Ea=0\n"
 	assert.Equal(t, want, formatText(t, "/w/f.kiln", src))
+}
+
+// Random changes to the blanks between tokens (and to the indentation of
+// continuation lines) of every fixture and example: formatting keeps the
+// tokens and the statements, and formatting its result changes nothing.
+func TestFormatRandomBlanks(t *testing.T) {
+	rng := rand.New(rand.NewPCG(15, 4))
+	blanks := []string{" ", "  ", "\t", " \t ", "      "}
+	for name, src := range formatInputs(t) {
+		for range 20 {
+			lines := strings.SplitAfter(src, "\n")
+			for i, l := range lines {
+				body := strings.TrimRight(l, "\r\n")
+				end := l[len(body):]
+				fields := strings.Fields(body)
+				if len(fields) == 0 || rng.IntN(3) == 0 {
+					continue
+				}
+				var b strings.Builder
+				if body[0] == ' ' || body[0] == '\t' {
+					b.WriteString(blanks[rng.IntN(len(blanks))])
+				}
+				for j, fl := range fields {
+					if j > 0 {
+						b.WriteString(blanks[rng.IntN(len(blanks))])
+					}
+					b.WriteString(fl)
+				}
+				if rng.IntN(4) == 0 {
+					b.WriteString(blanks[rng.IntN(len(blanks))])
+				}
+				lines[i] = b.String() + end
+			}
+			in := strings.Join(lines, "")
+			f := speciesfile.Parse("/w/f.kiln", []byte(in))
+			once := apply(t, in, Format(f))
+			require.Equal(t, tokens(in), tokens(once), "%s: tokens changed formatting %q", name, in)
+			g := speciesfile.Parse("/w/f.kiln", []byte(once))
+			require.Empty(t, Format(g), "%s: formatting %q twice changed it", name, in)
+			require.Equal(t, len(f.Stmts), len(g.Stmts), "%s: statements", name)
+			require.Equal(t, len(f.Diags), len(g.Diags), "%s: reader diagnostics", name)
+		}
+	}
 }
