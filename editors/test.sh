@@ -1,11 +1,15 @@
 #!/usr/bin/env bash
 # Runs every editor-plugin test: VS Code (grammar + unit tests, compile,
-# package), Neovim (headless, live server) and Emacs (ERT, live eglot test
-# when eglot is installed). Fails if any of them fails.
+# package; end to end in a code-server build of VS Code driven by headless
+# Chromium), Neovim (headless, live server) and Emacs (ERT, live eglot tests
+# when eglot is installed), the last two also on a generated 5,000-species
+# mechanism. Fails if any of them fails.
 #
 # Usage: editors/test.sh KILN_BINARY
 # Needs: node/npm (run `npm ci` in editors/vscode first, or this script does),
-#        nvim >= 0.7, emacs >= 27 (Debian: neovim emacs-nox [elpa-eglot]).
+#        nvim >= 0.7, emacs >= 27 (Debian: neovim emacs-nox [elpa-eglot]),
+#        go (to generate the large mechanism), chromium, g++ and make (VS Code
+#        end-to-end test; see vscode/test/e2e/run.sh).
 set -uo pipefail
 
 if [[ $# -ne 1 ]]; then
@@ -51,6 +55,11 @@ else
 fi
 
 run vscode vscode
+if [[ -x /usr/bin/chromium || -n "${CHROMIUM:-}" ]]; then
+  run vscode-e2e "$here/vscode/test/e2e/run.sh" "$binary" "$here/vscode/kiln-0.1.0.vsix"
+else
+  echo "editors: chromium not found; the VS Code end-to-end test is skipped (apt-get install chromium)"
+fi
 run nvim "$here/nvim/test/run.sh" "$binary" "$big"
 run emacs "$here/emacs/test/run.sh" "$binary" "$big"
 

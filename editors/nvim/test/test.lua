@@ -398,13 +398,13 @@ if live_ok then
     local chunks = marks[1][4].virt_text
     local last = chunks[#chunks]
     expect(last[2] == 'DiagnosticVirtualTextError', 'message shown with ' .. last[2] .. ': ' .. last[1])
-    expect(last[1]:find('expected', 1, true), 'message shown: ' .. last[1])
+    expect(last[1]:find('unbalanced', 1, true), 'message shown: ' .. last[1])
     local float_b = vim.diagnostic.open_float(b, { scope = 'line', pos = l })
     if float_b then
       local fl = vim.api.nvim_buf_get_lines(float_b, 0, -1, false)
       vim.cmd('silent! fclose') -- 0.7 has no :fclose; the float closes on the next move
       local first_msg = fl[2] or ''
-      expect(first_msg:find('expected', 1, true), 'float lists first: ' .. first_msg)
+      expect(first_msg:find('unbalanced', 1, true), 'float lists first: ' .. first_msg)
     end
     vim.cmd('buffer ' .. bufnr)
   end)

@@ -151,7 +151,9 @@ local function set_untitled_diagnostics(bufnr, result, ctx, config)
       user_data = { lsp = d },
     })
   end
-  vim.diagnostic.config(config, ns)
+  if config then
+    vim.diagnostic.config(config, ns)
+  end
   vim.diagnostic.set(ns, bufnr, out)
 end
 
@@ -236,7 +238,9 @@ end
 -- Inlay hints rendered by the plugin (Neovim < 0.10).
 ------------------------------------------------------------------------
 local function kiln_client_for(bufnr)
-  for _, c in pairs(vim.lsp.buf_get_clients(bufnr)) do
+  -- get_clients from 0.10 on (buf_get_clients is deprecated there).
+  local clients = vim.lsp.get_clients and vim.lsp.get_clients({ bufnr = bufnr }) or vim.lsp.buf_get_clients(bufnr)
+  for _, c in pairs(clients) do
     if c.name == 'kiln' and not c.is_stopped() then
       return c
     end
@@ -384,8 +388,10 @@ local function handlers(cfg)
   local publish = vim.lsp.handlers['textDocument/publishDiagnostics']
   local h = {
     -- An error and a warning on one line: show the error.
+    -- The kiln display options (cfg.diagnostics) are set on the client's
+    -- namespace once, in on_init: passing them here would make Neovim 0.7
+    -- draw every publication twice (vim.diagnostic.config redraws).
     ['textDocument/publishDiagnostics'] = function(err, result, ctx, config)
-      config = vim.tbl_extend('keep', config or {}, cfg.diagnostics or {})
       local untitled = result and untitled_buffer(result.uri)
       if untitled then
         set_untitled_diagnostics(untitled, result, ctx, config)
@@ -433,6 +439,9 @@ local function start(root, cfg)
     handlers = handlers(cfg),
     flags = { debounce_text_changes = cfg.debounce_ms },
     on_init = function(client)
+      if cfg.diagnostics and next(cfg.diagnostics) then
+        vim.diagnostic.config(cfg.diagnostics, vim.lsp.diagnostic.get_namespace(client.id))
+      end
       client.notify('workspace/didChangeConfiguration', { settings = settings })
       return true
     end,
