@@ -42,7 +42,7 @@ const (
 // statements with a syntax error are left alone. Applying the edits and
 // formatting again yields no edits.
 func Format(f *speciesfile.File) []analysis.Edit {
-	fm := formatter{f: f, rows: map[int]*row{}}
+	fm := formatter{f: f, rows: make([]*row, f.Lines.LineCount()+1)}
 	fm.collect()
 	fm.group()
 	return fm.render()
@@ -72,7 +72,7 @@ type colGroup struct {
 
 type formatter struct {
 	f      *speciesfile.File
-	rows   map[int]*row // by line number
+	rows   []*row // by line number (nil: left alone)
 	order  []int
 	broken map[speciesfile.Stmt]bool
 	syntax []speciesfile.Diagnostic // the file's syntax errors
@@ -275,7 +275,7 @@ func (fm *formatter) group() {
 		}
 	}
 	for _, r := range fm.rows {
-		if r.grp != nil {
+		if r != nil && r.grp != nil {
 			r.grp.measure()
 		}
 	}
