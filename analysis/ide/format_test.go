@@ -202,3 +202,9 @@ func TestFormatRandomBlanks(t *testing.T) {
 		}
 	}
 }
+
+func TestFormatAlignsCRLF(t *testing.T) {
+	src := "species a C\r\nspecies bbb CC\r\n  nasa7 300 1000 5000\r\n    low 1 2 3 4 5 6 7\r\n  high -1 2 3 4 5 6 7\r\nreaction a <=> bbb A=1 n=0 Ea=0\r\nreaction bbb <=> a A=10 n=0 Ea=0\r\n"
+	want := "species a   C\r\nspecies bbb CC\r\n  nasa7 300 1000 5000\r\n    low   1 2 3 4 5 6 7\r\n    high -1 2 3 4 5 6 7\r\nreaction a <=> bbb   A=1  n=0 Ea=0\r\nreaction bbb <=> a   A=10 n=0 Ea=0\r\n"
+	assert.Equal(t, want, formatText(t, "/w/f.kiln", src))
+}
