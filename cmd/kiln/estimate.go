@@ -10,6 +10,7 @@ import (
 	"unicode/utf8"
 
 	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/analysis/ide"
 	"kiln.dev/kiln/engine/benson"
 	"kiln.dev/kiln/engine/molecule"
 	"kiln.dev/kiln/speciesfile"
@@ -240,5 +241,5 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %s):\n", u.Entropy(fit.MaxCpResidual))
 		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, "kiln "+Version+" estimate", "\n"))
 	}
-	fmt.Fprintln(w, "  Group additivity typically errs by 1–3 kcal/mol; check against measured data before relying on it.")
+	writeWrapped(w, "  ", ide.Caution)
 }
