@@ -60,9 +60,19 @@ const delocalisedGroup = "HBI: radical delocalised over three or more open-chain
 // more than two resonance structures; "" otherwise. Benzylic and phenoxy
 // increments are measured on the delocalised aromatic radicals themselves,
 // so they are not flagged.
-func openChainDelocalised(est *Result, forms int) string {
-	if forms <= 2 {
+//
+// Only open-chain delocalisation counts: a form with its unpaired electron on
+// a ring atom makes the radical a ring radical, which ringradical.go treats.
+func openChainDelocalised(est *Result, forms []*molecule.Molecule) string {
+	if len(forms) <= 2 {
 		return ""
+	}
+	for _, f := range forms {
+		for i, a := range f.Atoms {
+			if a.Radical > 0 && len(f.RingSizes(i)) > 0 {
+				return ""
+			}
+		}
 	}
 	for _, c := range est.Corrections {
 		for _, site := range []string{"allylic", "propargylic"} {
@@ -258,7 +268,7 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 		if best != nil {
 			best.Form = bestCanon
 			best.ResonanceForms = len(cands)
-			if site := openChainDelocalised(best, len(forms)); site != "" {
+			if site := openChainDelocalised(best, forms); site != "" {
 				// Pentadienyl-type radicals: the electron is shared by three or
 				// more open-chain sites, and the increment of one allylic or
 				// propargylic site leaves the further stabilisation out
