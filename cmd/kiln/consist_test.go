@@ -166,8 +166,10 @@ species lump
 `)
 	code, _, stderr := runKiln(t, "fill", "--tmid", "1200", "--thigh", "3000", path)
 	assert.Equal(t, exitProblems, code, stderr)
-	assert.Regexp(t, `f.kiln:5:9: skipped pyridine: cannot estimate: .*no value .*group`, stderr)
-	assert.Regexp(t, `f.kiln:6:9: skipped lump: no structure`, stderr)
+	// Positions are those of the written file, where check reports the
+	// same species (three blocks were inserted above them).
+	assert.Regexp(t, `f.kiln:17:9: skipped pyridine: cannot estimate: .*no value .*group`, stderr)
+	assert.Regexp(t, `f.kiln:18:9: skipped lump: no structure`, stderr)
 	assert.Contains(t, stderr, "inserted 3 thermo block(s), skipped 2 species")
 	out, err := os.ReadFile(path)
 	require.NoError(t, err)
@@ -182,6 +184,8 @@ species lump
 	code, stdout, _ := runKiln(t, "check", "--min-severity", "warning", path)
 	assert.Equal(t, exitProblems, code)
 	assert.Equal(t, 2, strings.Count(stdout, "\n"), stdout)
+	assert.Contains(t, stdout, "f.kiln:17:", "check reports pyridine on the line where fill said it skipped it")
+	assert.Contains(t, stdout, "f.kiln:18:9:", "check reports lump where fill said it skipped it")
 
 	// A range beyond the reference data is refused, not extrapolated.
 	path = writeTemp(t, "g.kiln", "species O2 O=O\n  multiplicity 3\n")

@@ -9,6 +9,7 @@ import (
 	"strings"
 
 	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/speciesfile"
 )
 
 func runFill(e env, args []string) (int, error) {
@@ -25,11 +26,26 @@ func runFill(e env, args []string) (int, error) {
 	}
 	abs := res.Path
 	edits, skips := res.FillPlan()
+	src := res.File.Src
+	out, err := analysis.ApplyEdits(src, edits)
+	if err != nil {
+		return 0, err
+	}
 	// Every species left without thermo is listed with its reason, and makes
-	// the exit code 1 (documented in kiln help).
+	// the exit code 1 (documented in kiln help). Positions are those of the
+	// file as it is on disk afterwards (the written file, or the unchanged
+	// one with --dry-run), where kiln check then reports the same species.
+	lines, shifted := res.File.Lines, len(edits) > 0 && flags["dry-run"] != "true"
+	if shifted {
+		lines = speciesfile.NewLineIndex(out)
+	}
 	code := exitOK
 	for _, sk := range skips {
-		pos := res.File.Lines.Position(sk.Species.Loc.Span.Start)
+		off := sk.Species.Loc.Span.Start
+		if shifted {
+			off = shiftedOffset(off, edits)
+		}
+		pos := lines.Position(off)
 		fmt.Fprintf(e.stderr, "%s:%d:%d: skipped %s: %s\n", displayPath(abs), pos.Line+1, pos.Char+1, sk.Species.Name, sk.Reason)
 		code = exitProblems
 	}
@@ -40,11 +56,6 @@ func runFill(e env, args []string) (int, error) {
 			fmt.Fprintf(e.stderr, "kiln fill: %s: nothing inserted, %d species skipped\n", files[0], len(skips))
 		}
 		return code, nil
-	}
-	src := res.File.Src
-	out, err := analysis.ApplyEdits(src, edits)
-	if err != nil {
-		return 0, err
 	}
 	if flags["dry-run"] == "true" {
 		name := filepath.ToSlash(displayPath(abs))
@@ -60,6 +71,20 @@ func runFill(e env, args []string) (int, error) {
 	}
 	fmt.Fprintf(e.stderr, "kiln fill: %s: %s\n", files[0], msg)
 	return code, nil
+}
+
+// shiftedOffset maps byte offset off of the original text to the text with
+// edits applied: every edit that ends at or before off moves it by the
+// difference in length (fill's edits are insertions between statements, so
+// none overlaps a statement's start).
+func shiftedOffset(off int, edits []analysis.Edit) int {
+	d := 0
+	for _, ed := range edits {
+		if ed.Span.End <= off {
+			d += len(ed.NewText) - ed.Span.Len()
+		}
+	}
+	return off + d
 }
 
 // writeAtomic replaces path by data: it writes a temporary file in the same
