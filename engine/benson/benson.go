@@ -310,7 +310,35 @@ func (e *Result) finish() {
 	for _, t := range e.Corrections {
 		e.add(t)
 	}
+	if f, ok := cpFalls(e); ok && !slices.ContainsFunc(e.Missing, func(m Missing) bool { return m.Group == cpFallsGroup }) {
+		e.Missing = append(e.Missing, f)
+		slices.SortStableFunc(e.Missing, func(a, b Missing) int {
+			return cmp.Or(strings.Compare(a.Group, b.Group), strings.Compare(a.Approximation, b.Approximation), strings.Compare(a.Note, b.Note))
+		})
+	}
 	e.setUncertainty()
+}
+
+// cpFallsGroup names the flag for a group sum whose Cp falls with T.
+const cpFallsGroup = "Cp(T) of the group sum"
+
+// cpFalls reports a group sum whose heat capacity falls by more than 0.2 %
+// from one tabulated temperature to the next. The heat capacity of a
+// molecule without low-lying electronic states rises with T (more
+// vibrational modes excited); a falling sum means some group values, often
+// the 1500 K entries of quaternary centres, do not add up for this
+// structure, so the Cp (and the fits made from it) is flagged.
+func cpFalls(e *Result) (Missing, bool) {
+	for i := 1; i < len(e.Cp); i++ {
+		if e.Cp[i] < 0.998*e.Cp[i-1] {
+			return Missing{
+				Group:         cpFallsGroup,
+				Approximation: "the group sum as it stands",
+				Note:          fmt.Sprintf("Cp falls from %.1f J/(mol K) at %g K to %.1f at %g K, which a molecule's heat capacity does not do; the group values do not add up for this structure", e.Cp[i-1], StdTemps[i-1], e.Cp[i], StdTemps[i]),
+			}, true
+		}
+	}
+	return Missing{}, false
 }
 
 // setUncertainty sets e.Uncertainty from its class and approximations.
