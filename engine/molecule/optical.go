@@ -258,61 +258,7 @@ func (m *Molecule) OpticalIsomersContext(ctx context.Context) (int, error) {
 // bicycles (see the rule above), in the positions of stereoPositions.
 func (m *Molecule) ringStereoRelations(ctx context.Context, units []int, at map[int]int) ([][3]int, error) {
 	inRing := m.ringBondFlags()
-	id := func(x int) int { return x }
-	rest := func(p []int, xs []int) []int {
-		out := slices.Clone(xs)
-		for _, k := range p {
-			if !slices.Contains(xs, k) {
-				out = append(out, k)
-			}
-		}
-		return out
-	}
-	var out [][3]int
-	// cis fusions
-	for _, bd := range m.Bonds {
-		ka, oka := at[bd.A]
-		kb, okb := at[bd.B]
-		if !oka || !okb {
-			continue
-		}
-		a, b := bd.A, bd.B
-		var rs [][]int
-		for _, c := range m.cycles {
-			for k := range c {
-				x, y := c[k], c[(k+1)%len(c)]
-				if (x == a && y == b) || (x == b && y == a) {
-					rs = append(rs, c)
-					break
-				}
-			}
-		}
-		if len(rs) < 2 {
-			continue
-		}
-		slices.SortStableFunc(rs, func(x, y []int) int { return len(x) - len(y) })
-		r1, r2 := rs[0], rs[1]
-		if !(len(r1) <= 4 || len(r2) <= 5) {
-			continue
-		}
-		nb := func(r []int, x, not int) int {
-			k := slices.Index(r, x)
-			p, q := r[(k+len(r)-1)%len(r)], r[(k+1)%len(r)]
-			if p == not {
-				return q
-			}
-			return p
-		}
-		a1, a2 := nb(r1, a, b), nb(r2, a, b)
-		b1, b2 := nb(r1, b, a), nb(r2, b, a)
-		if a1 == a2 || b1 == b2 {
-			continue
-		}
-		pa, pb := m.stereoPositions(a), m.stereoPositions(b)
-		parA := permBit(rest(pa, []int{b, a1, a2}), pa, id)
-		parB := permBit(rest(pb, []int{a, b1, b2}), pb, id)
-		out = append(out, [3]int{ka, kb, 1 ^ parA ^ parB})
-	}
+	out := m.cisFusionRelations(at, m.stereoPositions)
 	ringNbrs := func(x int) []int {
 		var o []int
 		for _, b := range m.Adj[x] {
@@ -399,10 +345,9 @@ func (m *Molecule) ringStereoRelations(ctx context.Context, units []int, at map[
 							continue
 						}
 						found = true
-						pa, pb := m.stereoPositions(a), m.stereoPositions(b)
-						parA := permBit(rest(pa, []int{p.first, q.first, r.first}), pa, id)
-						parB := permBit(rest(pb, []int{p.last, q.last, r.last}), pb, id)
-						out = append(out, [3]int{at[a], at[b], 1 ^ parA ^ parB})
+						bit := oppositeTurnBit(m.stereoPositions(a), []int{p.first, q.first, r.first},
+							m.stereoPositions(b), []int{p.last, q.last, r.last})
+						out = append(out, [3]int{at[a], at[b], bit})
 					}
 				}
 			}

@@ -1050,20 +1050,30 @@ func chairProper(ring []int, phi func(int) int) bool {
 	return j%2 == 1
 }
 
-// cisFusions returns, for the bonds a–b between two checked tetrahedral
-// atoms that are shared by two small relevant rings (one of at most four
-// atoms, or both of at most five), the configuration equation that makes the
-// fusion cis: such rings cannot be trans-fused (common practice; housane,
-// bicyclo[3.3.0]octane, cubane faces). Each entry is {unit a, unit b, bit}:
-// r_a ⊕ r_b = bit.
+// cisFusions returns the configuration equations of the checked tetrahedral
+// atoms fixed by the ring geometry: cis fusions of small rings
+// (cisFusionRelations) and bridgeheads of small bicycles (smallBicycles).
+// Each entry is {unit a, unit b, bit}: r_a ⊕ r_b = bit.
 func (sc *sigmaCalc) cisFusions(units []unit) [][3]int {
-	m := sc.m
 	at := map[int]int{}
 	for k, u := range units {
 		if u.kind == 't' {
 			at[u.x] = k
 		}
 	}
+	out := sc.m.cisFusionRelations(at, sc.centrePositions)
+	return append(out, sc.smallBicycles(units, at)...)
+}
+
+// cisFusionRelations returns, for the bonds a–b between two atoms of at
+// (atom → unit) that are shared by two small relevant rings (one of at most
+// four atoms, or both of at most five), the configuration equation that
+// makes the fusion cis: such rings cannot be trans-fused (common practice;
+// housane, bicyclo[3.3.0]octane, cubane faces). positions lists the four
+// positions of a tetrahedral atom. Each entry is {unit a, unit b, bit}:
+// r_a ⊕ r_b = bit. Both the symmetry number and the optical isomer count
+// use it.
+func (m *Molecule) cisFusionRelations(at map[int]int, positions func(int) []int) [][3]int {
 	var out [][3]int
 	for _, bd := range m.Bonds {
 		ka, oka := at[bd.A]
@@ -1104,22 +1114,30 @@ func (sc *sigmaCalc) cisFusions(units []unit) [][3]int {
 		if a1 == a2 || b1 == b2 {
 			continue
 		}
-		pa, pb := sc.centrePositions(a), sc.centrePositions(b)
-		rest := func(p []int, xs ...int) []int {
-			out := slices.Clone(xs)
-			for _, k := range p {
-				if !slices.Contains(xs, k) {
-					out = append(out, k)
-				}
-			}
-			return out
-		}
-		id := func(x int) int { return x }
-		parA := permBit(rest(pa, b, a1, a2), pa, id)
-		parB := permBit(rest(pb, a, b1, b2), pb, id)
-		out = append(out, [3]int{ka, kb, 1 ^ parA ^ parB})
+		bit := oppositeTurnBit(positions(a), []int{b, a1, a2}, positions(b), []int{a, b1, b2})
+		out = append(out, [3]int{ka, kb, bit})
 	}
-	return append(out, sc.smallBicycles(units, at)...)
+	return out
+}
+
+// oppositeTurnBit returns the bit of the configuration equation
+// r_a ⊕ r_b = bit which says that three ligands fromA of atom a (positions
+// pa) and the corresponding three ligands fromB of atom b (positions pb)
+// turn one way seen from a and the other seen from b: the rings of a cis
+// fusion, the bridges of an out,out bicycle. The listed ligands come first,
+// then the remaining positions in their order.
+func oppositeTurnBit(pa, fromA, pb, fromB []int) int {
+	rest := func(p []int, xs []int) []int {
+		out := slices.Clone(xs)
+		for _, k := range p {
+			if !slices.Contains(xs, k) {
+				out = append(out, k)
+			}
+		}
+		return out
+	}
+	id := func(x int) int { return x }
+	return 1 ^ permBit(rest(pa, fromA), pa, id) ^ permBit(rest(pb, fromB), pb, id)
 }
 
 // smallBicycles returns the configuration equations of the bridgeheads of
@@ -1170,20 +1188,8 @@ func (sc *sigmaCalc) smallBicycles(units []unit, at map[int]int) [][3]int {
 			continue
 		}
 		b := end
-		pa, pb := sc.centrePositions(a), sc.centrePositions(b)
-		rest := func(p []int, xs []int) []int {
-			out := slices.Clone(xs)
-			for _, k := range p {
-				if !slices.Contains(xs, k) {
-					out = append(out, k)
-				}
-			}
-			return out
-		}
-		id := func(x int) int { return x }
-		parA := permBit(rest(pa, firsts), pa, id)
-		parB := permBit(rest(pb, lasts), pb, id)
-		out = append(out, [3]int{at[a], kb, 1 ^ parA ^ parB})
+		bit := oppositeTurnBit(sc.centrePositions(a), firsts, sc.centrePositions(b), lasts)
+		out = append(out, [3]int{at[a], kb, bit})
 	}
 	return out
 }
