@@ -2,7 +2,6 @@ package benson
 
 import (
 	"errors"
-	"fmt"
 	"math"
 	"math/rand/v2"
 	"strings"
@@ -11,14 +10,6 @@ import (
 	"github.com/stretchr/testify/require"
 	"kiln.dev/kiln/engine/molecule"
 )
-
-// genElement is an element the structure generator draws, with its valence
-// and drawing weight.
-type genElement struct {
-	sym     string
-	valence int
-	weight  int
-}
 
 var genElements = []genElement{
 	{"C", 4, 60}, {"O", 2, 20}, {"N", 3, 5}, {"S", 2, 4}, {"F", 1, 3}, {"Cl", 1, 3}, {"Si", 4, 2}, {"Li", 1, 1},
@@ -30,97 +21,17 @@ var genElements = []genElement{
 // or a charged atom. Every atom is a bracket atom with its H count, so the
 // reader adds nothing.
 func randomSMILES(r *rand.Rand) string {
-	total := 0
-	for _, e := range genElements {
-		total += e.weight
+	s := randomTree(r, genElements, 1+r.IntN(14), false)
+	s.addClosures(r, r.IntN(3))
+	prefix := ""
+	if r.IntN(10) == 0 && s.free[0] > 0 {
+		prefix = "c1ccc(cc1)"
+		s.free[0]--
 	}
-	draw := func() genElement {
-		x := r.IntN(total)
-		for _, e := range genElements {
-			if x < e.weight {
-				return e
-			}
-			x -= e.weight
-		}
-		return genElements[0]
-	}
-	n := 1 + r.IntN(14)
-	type edge struct{ a, b, order int }
-	el := make([]genElement, n)
-	free := make([]int, n)
-	var tree, closures []edge
-	for i := range n {
-		el[i] = draw()
-		free[i] = el[i].valence
-		if i == 0 {
-			continue
-		}
-		var cand []int
-		for j := 0; j < i; j++ {
-			if free[j] > 0 {
-				cand = append(cand, j)
-			}
-		}
-		if len(cand) == 0 {
-			n = i
-			el, free = el[:n], free[:n]
-			break
-		}
-		j := cand[r.IntN(len(cand))]
-		maxO := min(free[j], free[i], 3)
-		o := 1
-		if maxO > 1 && r.IntN(4) == 0 {
-			o = 2 + r.IntN(maxO-1)
-		}
-		free[i] -= o
-		free[j] -= o
-		tree = append(tree, edge{j, i, o})
-	}
-	bonded := map[[2]int]bool{}
-	for _, e := range tree {
-		bonded[[2]int{e.a, e.b}] = true
-	}
-	for range r.IntN(3) {
-		a, b := r.IntN(n), r.IntN(n)
-		if a > b {
-			a, b = b, a
-		}
-		if a == b || bonded[[2]int{a, b}] || free[a] == 0 || free[b] == 0 {
-			continue
-		}
-		o := 1
-		if min(free[a], free[b]) > 1 && r.IntN(5) == 0 {
-			o = 2
-		}
-		free[a] -= o
-		free[b] -= o
-		bonded[[2]int{a, b}] = true
-		closures = append(closures, edge{a, b, o})
-	}
-	children := make([][]edge, n)
-	for _, e := range tree {
-		children[e.a] = append(children[e.a], e)
-	}
-	ringAt := make([][]string, n)
-	for k, e := range closures {
-		d := fmt.Sprintf("%%%d", 10+k)
-		sym := map[int]string{1: "", 2: "="}[e.order]
-		ringAt[e.a] = append(ringAt[e.a], sym+d)
-		ringAt[e.b] = append(ringAt[e.b], sym+d)
-	}
-	bondSym := map[int]string{1: "", 2: "=", 3: "#"}
-	var b strings.Builder
-	benz := r.IntN(10) == 0 && free[0] > 0
-	if benz {
-		b.WriteString("c1ccc(cc1)")
-		free[0]--
-	}
-	var write func(i int)
-	write = func(i int) {
-		h := free[i]
-		rad := h > 0 && r.IntN(8) == 0
-		if rad {
-			h--
+	return s.write(prefix, func(i int) (int, string) {
+		h := s.free[i]
+		if h > 0 && r.IntN(8) == 0 {
+			h-- // radical centre
 		}
 		charge := ""
 		if r.IntN(60) == 0 {
@@ -129,28 +40,8 @@ func randomSMILES(r *rand.Rand) string {
 				h--
 			}
 		}
-		fmt.Fprintf(&b, "[%s", el[i].sym)
-		if h > 0 {
-			fmt.Fprintf(&b, "H%d", h)
-		}
-		b.WriteString(charge + "]")
-		for _, d := range ringAt[i] {
-			b.WriteString(d)
-		}
-		for k, e := range children[i] {
-			last := k == len(children[i])-1
-			if !last {
-				b.WriteByte('(')
-			}
-			b.WriteString(bondSym[e.order])
-			write(e.b)
-			if !last {
-				b.WriteByte(')')
-			}
-		}
-	}
-	write(0)
-	return b.String()
+		return h, charge
+	})
 }
 
 // TestAtomAccounting: over thousands of generated structures, an estimate

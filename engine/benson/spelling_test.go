@@ -29,83 +29,19 @@ var spellElements = []genElement{
 // up to two ring closures, now and then a benzene ring, and (in about half
 // of the structures) one or two radical centres.
 func spellStructure(r *rand.Rand) string {
-	total := 0
-	for _, e := range spellElements {
-		total += e.weight
-	}
-	draw := func() genElement {
-		x := r.IntN(total)
-		for _, e := range spellElements {
-			if x < e.weight {
-				return e
-			}
-			x -= e.weight
-		}
-		return spellElements[0]
-	}
-	n := 2 + r.IntN(11)
-	type edge struct{ a, b, order int }
-	el := make([]genElement, n)
-	free := make([]int, n)
-	var tree, closures []edge
-	for i := range n {
-		el[i] = draw()
-		if i == 0 && el[i].valence == 1 {
-			el[i] = spellElements[0]
-		}
-		free[i] = el[i].valence
-		if i == 0 {
-			continue
-		}
-		var cand []int
-		for j := 0; j < i; j++ {
-			if free[j] > 0 {
-				cand = append(cand, j)
-			}
-		}
-		if len(cand) == 0 {
-			n = i
-			el, free = el[:n], free[:n]
-			break
-		}
-		j := cand[r.IntN(len(cand))]
-		o := 1
-		if maxO := min(free[j], free[i], 3); maxO > 1 && r.IntN(4) == 0 {
-			o = 2 + r.IntN(maxO-1)
-		}
-		free[i] -= o
-		free[j] -= o
-		tree = append(tree, edge{j, i, o})
-	}
-	bonded := map[[2]int]bool{}
-	for _, e := range tree {
-		bonded[[2]int{e.a, e.b}] = true
-	}
+	s := randomTree(r, spellElements, 2+r.IntN(11), true)
+	tries := 0
 	if r.IntN(3) == 0 {
-		for range 1 + r.IntN(2) {
-			a, b := r.IntN(n), r.IntN(n)
-			if a > b {
-				a, b = b, a
-			}
-			if a == b || bonded[[2]int{a, b}] || free[a] == 0 || free[b] == 0 {
-				continue
-			}
-			o := 1
-			if min(free[a], free[b]) > 1 && r.IntN(5) == 0 {
-				o = 2
-			}
-			free[a] -= o
-			free[b] -= o
-			bonded[[2]int{a, b}] = true
-			closures = append(closures, edge{a, b, o})
-		}
+		tries = 1 + r.IntN(2)
 	}
+	s.addClosures(r, tries)
+	n := len(s.el)
 	radical := make([]int, n)
 	if r.IntN(2) == 0 {
 		for range 1 + r.IntN(4)/3 { // mostly one site, sometimes two
 			var cand []int
 			for i := range n {
-				if free[i] > radical[i] {
+				if s.free[i] > radical[i] {
 					cand = append(cand, i)
 				}
 			}
@@ -114,47 +50,12 @@ func spellStructure(r *rand.Rand) string {
 			}
 		}
 	}
-	children := make([][]edge, n)
-	for _, e := range tree {
-		children[e.a] = append(children[e.a], e)
+	prefix := ""
+	if r.IntN(8) == 0 && s.free[0] > radical[0] {
+		prefix = "c1ccc(cc1)"
+		s.free[0]--
 	}
-	ringAt := make([][]string, n)
-	for k, e := range closures {
-		d := fmt.Sprintf("%%%d", 10+k)
-		sym := map[int]string{1: "", 2: "="}[e.order]
-		ringAt[e.a] = append(ringAt[e.a], sym+d)
-		ringAt[e.b] = append(ringAt[e.b], sym+d)
-	}
-	bondSym := map[int]string{1: "", 2: "=", 3: "#"}
-	var b strings.Builder
-	if r.IntN(8) == 0 && free[0] > radical[0] {
-		b.WriteString("c1ccc(cc1)")
-		free[0]--
-	}
-	var write func(i int)
-	write = func(i int) {
-		fmt.Fprintf(&b, "[%s", el[i].sym)
-		if h := free[i] - radical[i]; h > 0 {
-			fmt.Fprintf(&b, "H%d", h)
-		}
-		b.WriteString("]")
-		for _, d := range ringAt[i] {
-			b.WriteString(d)
-		}
-		for k, e := range children[i] {
-			last := k == len(children[i])-1
-			if !last {
-				b.WriteByte('(')
-			}
-			b.WriteString(bondSym[e.order])
-			write(e.b)
-			if !last {
-				b.WriteByte(')')
-			}
-		}
-	}
-	write(0)
-	return b.String()
+	return s.write(prefix, func(i int) (int, string) { return s.free[i] - radical[i], "" })
 }
 
 // respell writes m as another SMILES of the same structure: a random start
