@@ -160,10 +160,23 @@ func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupVal
 	if sp.Mol != nil {
 		sp.structKey = sp.inv + "|m" + strconv.Itoa(effectiveMultiplicity(a.w.cache.lib, sp))
 		a.estimateSpecies(path, sp, user)
+		if e := sp.Estimate; e != nil && e.Group != nil && e.Group.Form != "" {
+			// A radical with several resonance structures is one species
+			// whichever is written: its key is the representative structure
+			// the estimate chose (engine/benson/resonance.go), so that
+			// propargyl written as [CH2]C#C and as C=C=[CH] are found to be
+			// the same structure.
+			sp.structKey = resonanceKeyPrefix + e.Group.Form + "|m" + strconv.Itoa(effectiveMultiplicity(a.w.cache.lib, sp))
+		}
 	}
 	a.given(path, sp)
 	a.thermoChecks(path, sp)
 }
+
+// resonanceKeyPrefix marks a duplicate-search key made from a radical's
+// representative resonance structure (a canonical SMILES) rather than from a
+// graph invariant.
+const resonanceKeyPrefix = "resonance|"
 
 // sameStructure returns the first species in seen with the structure and
 // multiplicity of sp, and records sp. Species are bucketed by a cheap graph
@@ -172,6 +185,9 @@ func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupVal
 func sameStructure(seen map[string][]*Species, sp *Species) *Species {
 	k := sp.structKey
 	bucket := seen[k]
+	if len(bucket) > 0 && strings.HasPrefix(k, resonanceKeyPrefix) {
+		return bucket[0] // the key is the canonical representative itself
+	}
 	for _, other := range bucket {
 		if identity(other.Mol) == identity(sp.Mol) {
 			return other
