@@ -245,22 +245,7 @@ func relocate(ds []speciesfile.Diagnostic, file string, delta int) []speciesfile
 	if len(ds) == 0 {
 		return nil
 	}
-	out := make([]speciesfile.Diagnostic, len(ds))
-	for i, d := range ds {
-		d.Span = shift(d.Span, delta)
-		if len(d.Related) > 0 {
-			rel := make([]speciesfile.Related, len(d.Related))
-			for k, r := range d.Related {
-				if r.File == file {
-					r.Span = shift(r.Span, delta)
-				}
-				rel[k] = r
-			}
-			d.Related = rel
-		}
-		out[i] = d
-	}
-	return out
+	return appendRelocated(make([]speciesfile.Diagnostic, 0, len(ds)), ds, file, delta)
 }
 
 // speciesUnit is the result of the per-statement rules of one species
