@@ -1,7 +1,6 @@
 package analysis
 
 import (
-	"context"
 	"math"
 	"testing"
 
@@ -13,11 +12,7 @@ import (
 
 func analyzeText(t *testing.T, text string) *Result {
 	t.Helper()
-	ws := NewWorkspace("/w", func(string) ([]byte, error) { return nil, assert.AnError }, DefaultSettings())
-	ws.SetOverlay("/w/u.kiln", []byte(text))
-	res, err := ws.Analyze(context.Background(), "/w/u.kiln")
-	require.NoError(t, err)
-	return res
+	return analyseWith(t, text, DefaultSettings())
 }
 
 func TestReverseRateUncertainty(t *testing.T) {
