@@ -56,6 +56,13 @@ func readRadicals(t *testing.T) []radicalRef {
 func TestRadicalEntropy(t *testing.T) {
 	rows := readRadicals(t)
 	require.GreaterOrEqual(t, len(rows), 15)
+	ncp := 0
+	for _, r := range rows {
+		if !math.IsNaN(r.cp300) {
+			ncp++
+		}
+	}
+	require.GreaterOrEqual(t, ncp, 15, "radical Cp is validated against at least 15 published values (issue 12)")
 	var s, cp errStat
 	for _, r := range rows {
 		e := estimate(t, r.smiles, Options{})
@@ -79,12 +86,13 @@ func TestRadicalEntropy(t *testing.T) {
 }
 
 // radicalSAim and radicalCpAim are the S° and Cp(300 K) MAEs the radical
-// treatment must keep (cal/(mol K)): measured 0.57 and 0.42 (run of
-// 2026-12-03, 15 and 5 radicals) plus a margin of 0.2; the issue's aim for S°
-// is 1.0, so the tighter bound applies.
+// treatment must keep (cal/(mol K)): measured 0.52 and 0.69 (run of
+// 2026-12-03, 15 radicals each; the Cp bound was 0.62 when only 5 Cp values
+// were entered) plus a margin of 0.2. The issue's aim for S° is 1.0, so the
+// tighter bound applies; it sets no Cp aim.
 const (
-	radicalSAim  = 0.77
-	radicalCpAim = 0.62
+	radicalSAim  = 0.72
+	radicalCpAim = 0.89
 )
 
 // A radical centre with several stabilising neighbours takes the most
