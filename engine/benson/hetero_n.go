@@ -1,0 +1,203 @@
+package benson
+
+import (
+	_ "embed"
+	"fmt"
+
+	"kiln.dev/kiln/engine/molecule"
+)
+
+// Nitrogen beyond amines, amides and nitriles: nitro, nitrite and nitrate
+// groups, aromatic nitrogen of azine rings (pyridine, pyrazine, pyrimidine),
+// saturated nitrogen rings, and the nitrogen types that make azo, imine and
+// nitroso compounds nameable (refused or missing, never estimated without
+// their group). Values and sources in groups_n.tsv, ring corrections in
+// corrections_n.tsv.
+//
+// Nitrogen atom types (graph.atomType asks nitrogenType):
+//
+//   - NO2: a nitro nitrogen, N(=O)=O. Both =O are implied partners (claimed by
+//     the NO2 group, names.go impliedPartner), so the group has one written
+//     neighbour: NO2-(C), NO2-(Cb), NO2-(O) (nitrate). The classic tables give
+//     composite groups (the carbon, or the ester oxygen, together with its
+//     NO2); they are split by the convention hetero.go uses for the nitrile:
+//     C-(NO2)(X)… = C-(C)(X)…, O-(NO2)(C) = O-(C)2, NO2-(X) = the rest.
+//   - NO: a nitroso nitrogen, X–N=O, with its =O implied: NO-(O) for a
+//     nitrite ester, split from the composite O-(NO)(C) in the same way.
+//     C-nitroso compounds have no group value (NO-(C) is missing).
+//   - Nb: the nitrogen of a six-membered aromatic ring of carbons and
+//     nitrogens (pyridine-type: two ring neighbours, no H). Such a ring is
+//     treated as benzenoid: its carbons are Cb with their ring neighbours
+//     implied, and Nb, with no written neighbour at all, stands for "=N–" in
+//     place of a Cb–H. Two adjacent Nb (pyridazine) carry an N–N interaction
+//     no table gives: flagged (addAzineFlags). A fused carbon next to Nb
+//     (quinoline) is approximated as next to Cb, flagged.
+//   - NA: an azo nitrogen (N=N), its =N partner implied as the =C of Cd.
+//     No azo group value is at hand: such species are refused naming the
+//     group (a `group` statement makes them estimable).
+//   - NI: an imine nitrogen (C=N). The imine carbon would be typed as an
+//     alkene carbon, so NI is deliberately not a nameable centre: imines are
+//     refused, never estimated with the C=N taken as C=C.
+//
+// A nitro, nitrate or N-oxide unit written charge-separated (C[N+](=O)[O-],
+// the usual SMILES) is read as the neutral pentavalent structure
+// (CN(=O)=O) before anything else (neutralNO): both spellings give the same
+// graph, the same groups and the same symmetry number. Any other formal
+// charge is refused.
+
+//go:embed groups_n.tsv
+var groupsNTSV string
+
+//go:embed corrections_n.tsv
+var correctionsNTSV string
+
+//go:embed hbi_n.tsv
+var hbiNTSV string
+
+// azineN reports whether atom a of m is a pyridine-type ring nitrogen:
+// aromatic, neutral, no H, no radical, two neighbours.
+func azineN(m *molecule.Molecule, a int) bool {
+	at := m.Atoms[a]
+	return at.Element == "N" && at.Aromatic && at.HCount == 0 && at.Charge == 0 && at.Radical == 0 && len(m.Adj[a]) == 2
+}
+
+// nitrogenType returns the Benson type of nitrogen atom i (see the file
+// comment): Nb, NO2, NO, NA, NI, or N for amine-type (and nitrile) nitrogen.
+func (g *graph) nitrogenType(i int) string {
+	if g.benzAtom[i] > 0 {
+		return "Nb"
+	}
+	toO, toN, toC := 0, 0, 0
+	for k, b := range g.nbrBond[i] {
+		j := g.nbr[i][k]
+		if g.order(b) != 2 {
+			continue
+		}
+		switch g.m.Atoms[j].Element {
+		case "O":
+			if g.terminal(j) {
+				toO++
+			}
+		case "N":
+			toN++
+		case "C":
+			toC++
+		}
+	}
+	deg := len(g.nbr[i]) + g.m.Atoms[i].HCount
+	switch {
+	case toO == 2 && toN == 0 && toC == 0 && deg == 3:
+		return "NO2"
+	case toO == 1 && toN == 0 && toC == 0 && deg == 2:
+		return "NO"
+	case toN == 1 && toO == 0 && toC == 0 && deg == 2:
+		return "NA"
+	case toC == 1 && toO == 0 && toN == 0 && deg == 2:
+		return "NI"
+	}
+	return "N"
+}
+
+// impliedTerminal reports whether neighbour k of centre i is a terminal
+// atom that the centre type stands for (the =O pair of NO2, the =O of CO),
+// and so is not written as a ligand.
+func (g *graph) impliedTerminal(i, k int, centre string) bool {
+	if centre != "NO2" && centre != "NO" {
+		return false // other centres skip their one partner in groupOf
+	}
+	p, ok := impliedPartner[centre]
+	j := g.nbr[i][k]
+	return ok && g.order(g.nbrBond[i][k]) >= 2 && g.m.Atoms[j].Element == p && g.terminal(j)
+}
+
+// neutralNO returns m with every charge-separated N⁺–O⁻ unit — a
+// non-aromatic N⁺ single-bonded to a terminal O⁻ (no H, no radical) — written
+// as N=O, the pentavalent neutral structure the nitro and nitrate groups
+// describe. m itself is returned when it has no such unit or when the
+// rewritten structure would break a valence rule (the charges are then
+// refused by Estimate).
+func neutralNO(m *molecule.Molecule) *molecule.Molecule {
+	var charges, orders map[int]int
+	for i, a := range m.Atoms {
+		if a.Element != "N" || a.Charge != 1 || a.Aromatic {
+			continue
+		}
+		for _, b := range m.Adj[i] {
+			j := m.Other(b, i)
+			o := m.Atoms[j]
+			if o.Element != "O" || o.Charge != -1 || m.Bonds[b].Order != 1 || len(m.Adj[j]) != 1 || o.HCount != 0 || o.Radical != 0 || o.Isotope != 0 {
+				continue
+			}
+			if charges == nil {
+				charges, orders = map[int]int{}, map[int]int{}
+			}
+			charges[i], charges[j], orders[b] = 0, 0, 2
+			break
+		}
+	}
+	if charges == nil {
+		return m
+	}
+	n, err := m.WithCharges(charges, orders)
+	if err != nil {
+		return m
+	}
+	return n
+}
+
+// chargeRefusal explains why charged atom i of m is refused: an ion (net
+// charge) or a charge-separated structure other than the N⁺–O⁻ units
+// neutralNO rewrites.
+func chargeRefusal(m *molecule.Molecule, i int) error {
+	net := 0
+	for _, a := range m.Atoms {
+		net += a.Charge
+	}
+	a := m.Atoms[i]
+	if net != 0 {
+		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d and the species has net charge %+d: ions are outside group additivity — give the species a thermo block", a.Element, a.Charge, net)}
+	}
+	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d in a neutral charge-separated structure that no group describes (only the N⁺–O⁻ of nitro, nitrate and N-oxide units is read as N=O) — give the species a thermo block", a.Element, a.Charge)}
+}
+
+// addAzineFlags flags each pair of adjacent azine nitrogens (pyridazine,
+// 1,2,3-triazine): the Nb group value comes from pyridine and leaves out the
+// N–N interaction, which is large (pyridazine lies about 20 kcal/mol above
+// pyrazine and pyrimidine; Pedley et al. 1986, from memory).
+func addAzineFlags(g *graph, l lookup, est *Result) {
+	if _, user := l.user["Nb"]; user {
+		return
+	}
+	for _, b := range g.m.Bonds {
+		if g.typ[b.A] == "Nb" && g.typ[b.B] == "Nb" {
+			est.Missing = append(est.Missing, Missing{
+				Group:         "Nb–Nb (adjacent aromatic nitrogens)",
+				Approximation: "Nb without an N–N interaction",
+				Note:          "no correction for adjacent ring nitrogens at hand; the estimate is likely too low by many kcal/mol",
+			})
+			return
+		}
+	}
+}
+
+// nitrogenRingKey names the ring correction of a saturated ring whose only
+// heteroatom is one amine nitrogen (aziridine … piperidine), or "".
+func (g *graph) nitrogenRingKey(r []int, nd int) string {
+	nN := 0
+	for _, a := range r {
+		switch g.m.Atoms[a].Element {
+		case "C":
+		case "N":
+			if g.typ[a] != "N" {
+				return ""
+			}
+			nN++
+		default:
+			return ""
+		}
+	}
+	if nN != 1 || nd != 0 {
+		return ""
+	}
+	return map[int]string{3: "aziridine", 4: "azetidine", 5: "pyrrolidine", 6: "piperidine"}[len(r)]
+}
