@@ -192,6 +192,9 @@ func heteroSite(g *graph, i int) (site, missing string, ok bool) {
 				carbons++
 			}
 		}
+		if site, ok := nitrogenSite(g, i, carbons); ok { // hetero_n.go
+			return site, "", true
+		}
 		if carbons > 1 || len(g.nbr[i]) != carbons {
 			return "aminyl", "aminyl site other than R–NH (CH3NH–H increment used)", true
 		}

@@ -201,3 +201,22 @@ func (g *graph) nitrogenRingKey(r []int, nd int) string {
 	}
 	return map[int]string{3: "aziridine", 4: "azetidine", 5: "pyrrolidine", 6: "piperidine"}[len(r)]
 }
+
+// typeNote describes a centre type that no table has and no user group can
+// name, for the refusal message; "" for others.
+func typeNote(centre string) string {
+	if centre == "NI" {
+		return " (an imine nitrogen, C=N: the tables have no imine groups, and the imine carbon cannot be told from an alkene carbon by the group notation)"
+	}
+	return ""
+}
+
+// nitrogenSite classifies the N-centred radical sites that have their own
+// increment in hbi_n.tsv: anilino (C6H5NH•, an NH next to a benzene ring).
+// Other N sites take the aminyl increment (hetero.go, heteroSite).
+func nitrogenSite(g *graph, i, carbons int) (string, bool) {
+	if carbons == 1 && len(g.nbr[i]) == 1 && g.typ[g.nbr[i][0]] == "Cb" { // g is the parent graph: the N carries NH2 there
+		return "anilino", true
+	}
+	return "", false
+}

@@ -99,6 +99,7 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"C[NH]", "aminyl", false},
 		{"C[N]C", "aminyl", true},
 		{"[CH2]N", "alpha-amino", false},
+		{"c1ccccc1[NH]", "anilino", false}, // hbi_n.tsv
 		{"CC[CH]Cl", "alpha-chloro", false},
 		{"C[CH]F", "alpha-fluoro", false},
 		{"[CH2]CBr", "primary", false},
