@@ -180,6 +180,7 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 	}
 	c := &Comparison{A: sa.summary(), B: sb.summary(), Settings: w.Settings(), RateFactor: opts.RateFactor}
 	matchA, matchB := matchSpecies(sa, sb)
+	matchResonance(sa, sb, matchA, matchB)
 	// Thermochemistry for the matched species, estimated where not given.
 	// A pair that both sides estimate from the same structure text with
 	// the same options has the same thermo by construction: not computed.

@@ -101,6 +101,23 @@ species propanone O=C(C)C
 	}
 }
 
+// TestCompareResonance: one delocalised radical written as two resonance
+// structures on the two sides is one species (propargyl's structures are
+// different graphs; allyl's are the same graph), while radicals that only
+// share a skeleton (1- and 2-propyl) stay apart.
+func TestCompareResonance(t *testing.T) {
+	files := map[string]string{
+		"/w/a.kiln": "species C3H3 [CH2]C#C\nspecies allyl [CH2]C=C\nspecies npropyl CC[CH2]\nspecies CH2CHO [CH2]C=O\n",
+		"/w/b.kiln": "species propargyl C=C=[CH]\nspecies C3H5 C=C[CH2]\nspecies ipropyl C[CH]C\nspecies vinoxy C=C[O]\n",
+	}
+	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	assert.Equal(t, map[string]string{"C3H3": "propargyl", "allyl": "C3H5", "CH2CHO": "vinoxy"}, pairNames(c))
+	require.Len(t, c.OnlyA, 1)
+	assert.Equal(t, "npropyl", c.OnlyA[0].Name)
+	require.Len(t, c.OnlyB, 1)
+	assert.Equal(t, "ipropyl", c.OnlyB[0].Name)
+}
+
 // TestCompareReactions: duplicates are summed, third bodies must agree,
 // and an irreversible step written the other way has no ratio.
 func TestCompareReactions(t *testing.T) {
