@@ -220,3 +220,61 @@ func nitrogenSite(g *graph, i, carbons int) (string, bool) {
 	}
 	return "", false
 }
+
+// nitrogenSiteNote names the approximation made for a carbon radical site
+// whose increment was measured without the nitrogen group next to it: a
+// site on or next to an azine ring (the benzene increments are used), next
+// to a nitro, nitroso or azo nitrogen (the alkyl increment is used), or next
+// to the ester oxygen of a nitrate or nitrite (the α-alkoxy increment is
+// used). "" when none applies.
+func nitrogenSiteNote(g *graph, i int, site string) string {
+	if g.m.Atoms[i].Element != "C" {
+		return ""
+	}
+	switch site {
+	case "phenyl":
+		if g.inAzineRing(i) {
+			return "radical site on an azine ring carbon (benzene increment used)"
+		}
+		return ""
+	case "benzylic":
+		for _, j := range g.nbr[i] {
+			if g.typ[j] == "Cb" && g.inAzineRing(j) {
+				return "radical site next to an azine ring (benzylic increment used)"
+			}
+		}
+		return ""
+	}
+	for _, j := range g.nbr[i] {
+		switch g.typ[j] {
+		case "NO2", "NO", "NA":
+			return "radical site next to a " + g.typ[j] + " nitrogen (alkyl increment used)"
+		case "O":
+			for _, k := range g.nbr[j] {
+				if t := g.typ[k]; t == "NO2" || t == "NO" {
+					return "radical site next to the O of a nitrate or nitrite ester (α-alkoxy increment used)"
+				}
+			}
+		}
+	}
+	return ""
+}
+
+// inAzineRing reports whether atom a lies in a benzenoid ring that holds an
+// azine nitrogen.
+func (g *graph) inAzineRing(a int) bool {
+	for ri, r := range g.rings {
+		if !g.benzRing[ri] {
+			continue
+		}
+		has, hasN := false, false
+		for _, x := range r {
+			has = has || x == a
+			hasN = hasN || g.typ[x] == "Nb"
+		}
+		if has && hasN {
+			return true
+		}
+	}
+	return false
+}

@@ -100,6 +100,11 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"C[N]C", "aminyl", true},
 		{"[CH2]N", "alpha-amino", false},
 		{"c1ccccc1[NH]", "anilino", false}, // hbi_n.tsv
+		{"C[CH][N+](=O)[O-]", "primary", true},
+		{"[CH2]O[N+](=O)[O-]", "alpha-alkoxy", true},
+		{"[c]1ccncc1", "phenyl", true},
+		{"[CH2]c1ccccn1", "benzylic", true},
+		{"[CH2]c1ccccc1", "benzylic", false},
 		{"CC[CH]Cl", "alpha-chloro", false},
 		{"C[CH]F", "alpha-fluoro", false},
 		{"[CH2]CBr", "primary", false},

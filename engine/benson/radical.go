@@ -265,6 +265,9 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 		if err != nil {
 			return fmt.Errorf("atom %d: %w", i+1, err)
 		}
+		if miss == "" {
+			miss = nitrogenSiteNote(g, i, site) // hetero_n.go
+		}
 		if several != "" {
 			est.Missing = append(est.Missing, severalStabilisers(several, site))
 		}
