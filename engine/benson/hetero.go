@@ -17,7 +17,9 @@ import (
 // dissociation enthalpies of hbi_nsx.tsv (heteroSite), thiyl sites the loss
 // of the thiol's S–H rotor (heteroSiteChange). Carbons bearing two or more
 // halogens next to another heavy atom are flagged (addHalogenFlags).
-// Everything else with N, S or halogens is refused, naming the group.
+// Nitro, nitrate, nitrite and azine nitrogen, nitrogen rings and the azo,
+// imine and nitroso types are in hetero_n.go. Everything else with N, S or
+// halogens is refused, naming the group.
 //
 // Three carbon types are added to the Benson types of graph.go:
 //

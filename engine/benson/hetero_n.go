@@ -157,7 +157,7 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 	if net != 0 {
 		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d and the species has net charge %+d: ions are outside group additivity — give the species a thermo block", a.Element, a.Charge, net)}
 	}
-	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d in a neutral charge-separated structure that no group describes (only the N⁺–O⁻ of nitro, nitrate and N-oxide units is read as N=O) — give the species a thermo block", a.Element, a.Charge)}
+	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d in a neutral charge-separated structure that no group describes (only a non-aromatic N⁺ bonded to a terminal O⁻, as in nitro and nitrate groups, is read as N=O) — give the species a thermo block", a.Element, a.Charge)}
 }
 
 // addAzineFlags flags each pair of adjacent azine nitrogens (pyridazine,
