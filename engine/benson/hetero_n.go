@@ -164,6 +164,13 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 // 1,2,3-triazine): the Nb group value comes from pyridine and leaves out the
 // N–N interaction, which is large (pyridazine lies about 20 kcal/mol above
 // pyrazine and pyrimidine; Pedley et al. 1986, from memory).
+//
+// It also handles substituents on a ring carbon next to Nb (the 2-position
+// of pyridine): an alkyl substituent there takes the correction
+// nni:azine-alpha-alkyl of corrections_n.tsv (the Cb-(C) group is that of
+// benzene, and the published azine groups put an alkyl group next to the
+// ring N 1.7 kcal/mol lower); any other substituent there is flagged, its
+// benzene group being used.
 func addAzineFlags(g *graph, l lookup, est *Result) {
 	if _, user := l.user["Nb"]; user {
 		return
@@ -175,8 +182,37 @@ func addAzineFlags(g *graph, l lookup, est *Result) {
 				Approximation: "Nb without an N–N interaction",
 				Note:          "no correction for adjacent ring nitrogens at hand; the estimate is likely too low by many kcal/mol",
 			})
-			return
+			break
 		}
+	}
+	alkyl := 0
+	var other []string
+	for n := range g.m.Atoms {
+		if g.typ[n] != "Nb" {
+			continue
+		}
+		for _, c := range g.nbr[n] {
+			s := g.substituent(c)
+			switch {
+			case s < 0:
+			case g.typ[s] == "C":
+				alkyl++
+			default:
+				other = append(other, "Cb-("+g.typ[s]+")")
+			}
+		}
+	}
+	if alkyl > 0 {
+		t := term(l.corrections["nni:azine-alpha-alkyl"], alkyl)
+		t.Name = "alkyl next to ring N"
+		est.Corrections = append(est.Corrections, t)
+	}
+	for _, o := range other {
+		est.Missing = append(est.Missing, Missing{
+			Group:         o + " next to a ring N",
+			Approximation: o + " of benzene",
+			Note:          "no group for this substituent next to an azine nitrogen; the benzene group is used (the published azine groups differ from the benzene ones by up to about 2.5 kcal/mol)",
+		})
 	}
 }
 

@@ -199,3 +199,21 @@ func TestThiylRotorLoss(t *testing.T) {
 	}
 	assert.True(t, found, "%v", rad.Corrections)
 }
+
+// An alkyl group next to an azine N takes the azine-alpha correction once
+// per group; one elsewhere on the ring takes none; another substituent next
+// to the N is flagged (hetero_n.go, addAzineFlags).
+func TestAzineAlphaSubstituents(t *testing.T) {
+	for _, c := range []struct {
+		smiles  string
+		n       int
+		flagged bool
+	}{
+		{"Cc1ccccn1", 1, false}, {"Cc1cccc(C)n1", 2, false}, {"Cc1ccncc1", 0, false}, {"c1ccncc1", 0, false},
+		{"COc1ccccn1", 0, true}, {"Cc1cnccn1", 1, false},
+	} {
+		e := heteroEstimate(t, c.smiles)
+		assert.Equal(t, c.n, correctionCount(e, "alkyl next to ring N"), "%s: %v", c.smiles, e.Corrections)
+		assert.Equal(t, c.flagged, len(e.Missing) > 0, "%s: %v", c.smiles, e.Missing)
+	}
+}
