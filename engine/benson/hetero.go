@@ -48,6 +48,7 @@ var hbiNSXTSV string
 // a name present twice is a defect of the tables.
 var extraGroupTables = []struct{ file, text string }{
 	{"groups_nsx.tsv", groupsNSXTSV},
+	{"groups_sx.tsv", groupsSXTSV}, // hetero_sx.go
 }
 
 // heteroCarbonType returns CN for a nitrile carbon, CS for a thiocarbonyl
