@@ -170,7 +170,7 @@ func addHalogenFlags(g *graph, l lookup, est *Result) {
 		}
 		est.Missing = append(est.Missing, Missing{
 			Group:         name,
-			Approximation: name + " without halogen interactions",
+			Approximation: name + withoutHalogenInteractions,
 			Note:          "polyhalogenated carbon: no geminal/vicinal halogen interaction correction at hand; errors of several kcal/mol are possible",
 		})
 	}

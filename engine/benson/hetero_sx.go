@@ -120,3 +120,16 @@ func (g *graph) orthoHalogen(a, b int) (int, bool) {
 	h := slices.IndexFunc(orthoHalogenKeys[:], func(k struct{ element, key, name string }) bool { return k.element == ea })
 	return h, h >= 0
 }
+
+// withoutHalogenInteractions ends the Approximation of the polyhalogenated
+// carbon flag (addHalogenFlags).
+const withoutHalogenInteractions = " without halogen interactions"
+
+// widenPolyhalogen (kcal/mol) widens the ΔHf° uncertainty per polyhalogenated
+// carbon flag: measured on the training rows of testdata/thermo/nsx.tsv
+// whose estimates carry k such flags and no other ΔHf° approximation, as
+// sqrt(mean(d²/k)) (10 rows, 1,1-dichloroethane … CH3CF3, 2026-12-03),
+// the way widenSystem is measured; TestPolyhalogenWidening recomputes it.
+// The general widenGroup (2 kcal/mol) understated these errors (CH3CF3
+// 10 kcal/mol off with ±2.3).
+const widenPolyhalogen = 4.0

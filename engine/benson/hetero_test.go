@@ -1,6 +1,7 @@
 package benson
 
 import (
+	"math"
 	"strings"
 	"testing"
 
@@ -8,6 +9,7 @@ import (
 	"github.com/stretchr/testify/require"
 
 	"kiln.dev/kiln/engine/molecule"
+	"kiln.dev/kiln/engine/reflib"
 )
 
 func heteroEstimate(t *testing.T, smi string) *Result {
@@ -248,4 +250,49 @@ func TestThiylRotorLoss(t *testing.T) {
 		}
 	}
 	assert.True(t, found, "%v", rad.Corrections)
+}
+
+// TestPolyhalogenWidening: widenPolyhalogen² is the mean of d²/k over the
+// training rows of nsx.tsv whose estimate carries k polyhalogenated-carbon
+// flags and no other ΔHf° approximation (d: ΔHf° error).
+func TestPolyhalogenWidening(t *testing.T) {
+	var sum float64
+	n := 0
+	for _, r := range readHeteroRef(t) {
+		// Rows marked uncertain (±2 kcal/mol) are included: their reference
+		// error is small against the errors measured here.
+		if r.split != "train" || math.IsNaN(r.hf) {
+			continue
+		}
+		m, err := molecule.ParseSMILES(r.smiles)
+		require.NoError(t, err)
+		if _, lib := reflib.New().Lookup(m, 0); lib {
+			continue
+		}
+		e, err := Estimate(m, Options{})
+		if err != nil || len(e.Missing) == 0 {
+			continue
+		}
+		flags, other := 0, false
+		for _, x := range e.Missing {
+			switch {
+			case strings.HasSuffix(x.Approximation, withoutHalogenInteractions):
+				flags++
+			case strings.HasPrefix(x.Group, "Cp(T)"): // a Cp note, ΔHf° untouched
+			default:
+				other = true
+			}
+		}
+		if flags == 0 || other {
+			continue
+		}
+		// k flags widen u² by k·w²: each row estimates w² as d²/k.
+		d := e.Hf298/calorie/1000 - r.hf
+		sum += d * d / float64(flags)
+		n++
+	}
+	require.GreaterOrEqual(t, n, 5)
+	rms := math.Sqrt(sum / float64(n))
+	t.Logf("polyhalogen-flagged training rows: %d, RMS ΔHf° error %.2f kcal/mol", n, rms)
+	assert.InDelta(t, rms, widenPolyhalogen, 0.3)
 }
