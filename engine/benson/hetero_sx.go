@@ -133,3 +133,10 @@ const withoutHalogenInteractions = " without halogen interactions"
 // The general widenGroup (2 kcal/mol) understated these errors (CH3CF3
 // 10 kcal/mol off with ±2.3).
 const widenPolyhalogen = 4.0
+
+// heteroarylSite names the approximation for a σ radical site on a carbon
+// of a five-membered heteroaromatic ring (2-furyl, 2-thienyl): its ring
+// carbons are typed Cd, so the vinylic D(R–H) is used, although the C–H
+// bonds of such rings are stronger than a vinylic one (furan's α C–H near
+// 120 kcal/mol against 110.7; from memory), so the estimate is flagged.
+const heteroarylSite = "σ radical on a heteroaromatic ring (vinylic increment used; the ring's C–H bond is stronger)"

@@ -161,6 +161,9 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"C[CH]F", "alpha-fluoro", false},
 		{"[CH2]CBr", "primary", false},
 		{"C[CH]Br", "alpha-chloro", true},
+		{"c1cc[c]s1", "vinylic", true},
+		{"c1cc[c]o1", "vinylic", true},
+		{"CC=[CH]", "vinylic", false},
 	}
 	for _, c := range cases {
 		e := heteroEstimate(t, c.smiles)
