@@ -8,11 +8,11 @@ import (
 	"kiln.dev/kiln/engine/benson"
 )
 
-// refusalReason words the estimator's refusal for a missing-thermo
+// RefusalReason words the estimator's refusal for a missing-thermo
 // diagnostic: the atom (numbered in the written SMILES) and the reason,
 // without the package prefix and without the engine's own advice, which
 // the diagnostic gives once in the file's terms.
-func refusalReason(err error) string {
+func RefusalReason(err error) string {
 	var ue *benson.UnsupportedError
 	if !errors.As(err, &ue) {
 		return strings.TrimPrefix(err.Error(), "benson: ")

@@ -31,3 +31,17 @@ func TestRefusalMessage(t *testing.T) {
 		assert.True(t, strings.HasSuffix(m, "; add a nasa7 or thermo-table block"), m)
 	}
 }
+
+// TestRefusalSpinState: a library structure in a spin state the library
+// does not hold is refused for that reason (not for a missing group).
+func TestRefusalSpinState(t *testing.T) {
+	res := analyzeText(t, "species O2s O=O\n  multiplicity 1\n")
+	var msgs []string
+	for _, d := range res.Diagnostics {
+		if d.Code == speciesfile.CodeMissingThermo {
+			msgs = append(msgs, d.Message)
+		}
+	}
+	require.Len(t, msgs, 1, "%v", res.Diagnostics)
+	assert.Contains(t, msgs[0], "multiplicity 1 has no data: the reference library holds this structure only as O2, multiplicity 3")
+}

@@ -145,7 +145,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 	r.MolarMass = ptr(jnum(m.MolarMass()))
 	est, err := ws.EstimateMolecule(m, opts)
 	if err != nil {
-		r.Error = &errorJSON{Message: err.Error()}
+		r.Error = &errorJSON{Message: "kiln cannot estimate it: " + analysis.RefusalReason(err)}
 		return r, nil
 	}
 	r.Hf298 = ptr(jnum(est.Hf298 / 1000))
