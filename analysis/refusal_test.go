@@ -45,3 +45,24 @@ func TestRefusalSpinState(t *testing.T) {
 	require.Len(t, msgs, 1, "%v", res.Diagnostics)
 	assert.Contains(t, msgs[0], "multiplicity 1 has no data: the reference library holds this structure only as O2, multiplicity 3")
 }
+
+// TestApproximationAdvice: a missing group is to be defined with a `group`
+// statement; an approximation that is not a group (a radical site without
+// an increment, an unknown ring system) is not, and the advice says what
+// does replace it.
+func TestApproximationAdvice(t *testing.T) {
+	res := analyzeText(t, "species P C=C[CH]C=C\nspecies V ClC(=C)C\n")
+	byName := map[string]string{}
+	for _, d := range res.Diagnostics {
+		if d.Code == speciesfile.CodeMissingGroup {
+			byName[strings.SplitN(d.Message, ":", 2)[0]] = d.Message
+		}
+	}
+	require.Contains(t, byName, "P", "%v", res.Diagnostics)
+	assert.NotContains(t, byName["P"], "`group` statement")
+	assert.Contains(t, byName["P"], "estimated with an approximation kiln has no data for: HBI: radical delocalised")
+	assert.Contains(t, byName["P"], "thermo block")
+	require.Contains(t, byName, "V", "%v", res.Diagnostics)
+	assert.Contains(t, byName["V"], "no value for group Cd-(Cl)(C)")
+	assert.Contains(t, byName["V"], "`group` statement")
+}
