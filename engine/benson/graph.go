@@ -104,6 +104,9 @@ func (g *graph) atomType(i int) string {
 		return g.nitrogenType(i) // hetero_n.go
 	}
 	if a.Element != "C" {
+		if t, ok := g.sulfurOxideType(i); ok { // SO, SO2: hetero_sx.go
+			return t
+		}
 		return a.Element
 	}
 	if g.benzAtom[i] >= 2 {

@@ -25,6 +25,7 @@ var centreLigands = map[string]int{
 	"C": 4, "Cd": 2, "Ct": 1, "Cb": 1, "Cbf": 3, "Ca": 0, "CO": 2, "O": 2, "S": 2, "N": 3,
 	"CN": 1, "Ck": 0, "CS": 2, // nitrile, ketene and thiocarbonyl carbons (hetero.go)
 	"NO2": 1, "NO": 1, "NA": 1, "Nb": 0, // nitro, nitroso, azo and azine nitrogen (hetero_n.go)
+	"SO": 2, "SO2": 2, // sulfoxide and sulfone sulfur (hetero_sx.go)
 }
 
 // impliedPartner names, per centre type, the element of a terminal
@@ -33,9 +34,9 @@ var centreLigands = map[string]int{
 // other centre is named by no group and the estimate is refused. The ≡N of
 // a nitrile carbon CN is the one triple-bonded implied partner. This is the one place where a new centre
 // type (say a thiocarbonyl) declares the terminal atom it carries.
-var impliedPartner = map[string]string{"CO": "O", "Ck": "O", "CS": "S", "CN": "N",
+var impliedPartner = map[string]string{"CO": "O", "Ck": "O", "CS": "S", "CN": "N", "SO": "O", "SO2": "O",
 	"NO2": "O", "NO": "O", // nitro (both =O) and nitroso nitrogen: hetero_n.go
-} // Ck, CS, CN: hetero.go
+} // Ck, CS, CN: hetero.go; SO, SO2: hetero_sx.go
 
 // ParseGroupName validates a group name in Benson notation, centre-(ligand)n…,
 // and returns it normalised: ligands merged and sorted (see ligandRank), counts
@@ -94,7 +95,7 @@ func ParseGroupName(s string) (string, error) {
 }
 
 // ligCounts counts neighbours by type, indexed by ligandRank.
-type ligCounts [22]int
+type ligCounts [24]int
 
 // groupName writes a normalised group name from a centre and neighbour counts.
 func groupName(centre string, counts ligCounts) string {
@@ -122,5 +123,5 @@ func groupName(centre string, counts ligCounts) string {
 
 // ligandOrder lists the neighbour types by ligandRank.
 // The nitrogen types of hetero_n.go (nitro NO2, nitroso NO, azo NA, imine
-// NI, azine Nb) follow N, and Nb follows Cb.
-var ligandOrder = []string{"O", "N", "NO2", "NO", "NA", "NI", "S", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Nb", "Ct", "Cd", "Ca", "C", "H"}
+// NI, azine Nb) follow N, and Nb follows Cb; SO, SO2 (hetero_sx.go) follow S.
+var ligandOrder = []string{"O", "N", "NO2", "NO", "NA", "NI", "S", "SO", "SO2", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Nb", "Ct", "Cd", "Ca", "C", "H"}

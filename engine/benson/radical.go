@@ -173,6 +173,9 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 		case "Cb", "Cbf":
 			return "phenyl", "", "", nil
 		case "Cd":
+			if g.m.Atoms[i].Aromatic { // furyl, thienyl: hetero_sx.go
+				return "vinylic", heteroarylSite, "", nil
+			}
 			return "vinylic", "", "", nil
 		case "CO":
 			return "acyl", "", "", nil

@@ -62,7 +62,12 @@ var builtin = sync.OnceValue(func() *tables {
 		t.groups[r.Name] = r
 		t.order = append(t.order, r.Name)
 	}
-	for _, v := range mustFill("corrections.tsv", append(mustParse("corrections.tsv", correctionsTSV), mustParse("corrections_n.tsv", correctionsNTSV)...)) {
+	corr := mustParse("corrections.tsv", correctionsTSV)
+	for _, x := range extraCorrectionTables { // hetero_sx.go
+		corr = append(corr, mustParse(x.file, x.text)...)
+	}
+	corr = append(corr, mustParse("corrections_n.tsv", correctionsNTSV)...) // hetero_n.go
+	for _, v := range mustFill("corrections.tsv", corr) {
 		t.corrections[v.Name] = v
 	}
 	sys, err := parseSystems(systemsTSV)
