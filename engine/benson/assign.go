@@ -28,7 +28,7 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 		skip = g.partner(i, 3)
 	case "CS":
 		skip = g.partnerElement(i, 2, "S")
-	case "Ca", "Ck", "Nb":
+	case "Ca", "Ck", "Nb", "Nbb":
 		return centre, counts, true
 	}
 	for k, j := range g.nbr[i] {

@@ -29,9 +29,13 @@ import (
 //     nitrogens (pyridine-type: two ring neighbours, no H). Such a ring is
 //     treated as benzenoid: its carbons are Cb with their ring neighbours
 //     implied, and Nb, with no written neighbour at all, stands for "=N–" in
-//     place of a Cb–H. Two adjacent Nb (pyridazine) carry an N–N interaction
-//     no table gives: flagged (addAzineFlags). A fused carbon next to Nb
-//     (quinoline) is approximated as next to Cb, flagged.
+//     place of a Cb–H. A fused carbon next to Nb (quinoline) is
+//     approximated as next to Cb, flagged.
+//   - Nbb: an azine nitrogen next to another one (pyridazine, cinnoline,
+//     1,2,4-triazine). The N–N interaction is large (pyridazine lies about
+//     20 kcal/mol above pyrazine and pyrimidine; Pedley et al. 1986, from
+//     memory) and no table gives it, so Nbb has no value: such species are
+//     refused naming the group Nbb, which a `group` statement can supply.
 //   - NA: an azo nitrogen (N=N), its =N partner implied as the =C of Cd.
 //     No azo group value is at hand: such species are refused naming the
 //     group (a `group` statement makes them estimable).
@@ -65,6 +69,11 @@ func azineN(m *molecule.Molecule, a int) bool {
 // comment): Nb, NO2, NO, NA, NI, or N for amine-type (and nitrile) nitrogen.
 func (g *graph) nitrogenType(i int) string {
 	if g.benzAtom[i] > 0 {
+		for _, j := range g.nbr[i] {
+			if g.benzAtom[j] > 0 && azineN(g.m, j) {
+				return "Nbb" // next to another ring N: no group value (see the file comment)
+			}
+		}
 		return "Nb"
 	}
 	toO, toN, toC := 0, 0, 0
@@ -160,13 +169,8 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d in a neutral charge-separated structure that no group describes (only a non-aromatic N⁺ bonded to a terminal O⁻, as in nitro and nitrate groups, is read as N=O) — give the species a thermo block", a.Element, a.Charge)}
 }
 
-// addAzineFlags flags each pair of adjacent azine nitrogens (pyridazine,
-// 1,2,3-triazine): the Nb group value comes from pyridine and leaves out the
-// N–N interaction, which is large (pyridazine lies about 20 kcal/mol above
-// pyrazine and pyrimidine; Pedley et al. 1986, from memory).
-//
-// It also handles substituents on a ring carbon next to Nb (the 2-position
-// of pyridine): an alkyl substituent there takes the correction
+// addAzineFlags handles substituents on a ring carbon next to Nb (the
+// 2-position of pyridine): an alkyl substituent there takes the correction
 // nni:azine-alpha-alkyl of corrections_n.tsv (the Cb-(C) group is that of
 // benzene, and the published azine groups put an alkyl group next to the
 // ring N 1.7 kcal/mol lower); any other substituent there is flagged, its
@@ -174,16 +178,6 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 func addAzineFlags(g *graph, l lookup, est *Result) {
 	if _, user := l.user["Nb"]; user {
 		return
-	}
-	for _, b := range g.m.Bonds {
-		if g.typ[b.A] == "Nb" && g.typ[b.B] == "Nb" {
-			est.Missing = append(est.Missing, Missing{
-				Group:         "Nb–Nb (adjacent aromatic nitrogens)",
-				Approximation: "Nb without an N–N interaction",
-				Note:          "no correction for adjacent ring nitrogens at hand; the estimate is likely too low by many kcal/mol",
-			})
-			break
-		}
 	}
 	alkyl := 0
 	var other []string
@@ -306,7 +300,7 @@ func (g *graph) inAzineRing(a int) bool {
 		has, hasN := false, false
 		for _, x := range r {
 			has = has || x == a
-			hasN = hasN || g.typ[x] == "Nb"
+			hasN = hasN || g.typ[x] == "Nb" || g.typ[x] == "Nbb"
 		}
 		if has && hasN {
 			return true

@@ -24,7 +24,7 @@ var ligandRank = func() map[string]int {
 var centreLigands = map[string]int{
 	"C": 4, "Cd": 2, "Ct": 1, "Cb": 1, "Cbf": 3, "Ca": 0, "CO": 2, "O": 2, "S": 2, "N": 3,
 	"CN": 1, "Ck": 0, "CS": 2, // nitrile, ketene and thiocarbonyl carbons (hetero.go)
-	"NO2": 1, "NO": 1, "NA": 1, "Nb": 0, // nitro, nitroso, azo and azine nitrogen (hetero_n.go)
+	"NO2": 1, "NO": 1, "NA": 1, "Nb": 0, "Nbb": 0, // nitro, nitroso, azo and azine nitrogen (hetero_n.go)
 	"SO": 2, "SO2": 2, // sulfoxide and sulfone sulfur (hetero_sx.go)
 }
 
@@ -95,7 +95,7 @@ func ParseGroupName(s string) (string, error) {
 }
 
 // ligCounts counts neighbours by type, indexed by ligandRank.
-type ligCounts [24]int
+type ligCounts [25]int
 
 // groupName writes a normalised group name from a centre and neighbour counts.
 func groupName(centre string, counts ligCounts) string {
@@ -123,5 +123,5 @@ func groupName(centre string, counts ligCounts) string {
 
 // ligandOrder lists the neighbour types by ligandRank.
 // The nitrogen types of hetero_n.go (nitro NO2, nitroso NO, azo NA, imine
-// NI, azine Nb) follow N, and Nb follows Cb; SO, SO2 (hetero_sx.go) follow S.
-var ligandOrder = []string{"O", "N", "NO2", "NO", "NA", "NI", "S", "SO", "SO2", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Nb", "Ct", "Cd", "Ca", "C", "H"}
+// NI, azine Nb and Nbb) follow N, and Nb, Nbb follow Cb; SO, SO2 (hetero_sx.go) follow S.
+var ligandOrder = []string{"O", "N", "NO2", "NO", "NA", "NI", "S", "SO", "SO2", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Nb", "Nbb", "Ct", "Cd", "Ca", "C", "H"}

@@ -43,6 +43,8 @@ func TestRefusals(t *testing.T) {
 		{"C/N=N/C", Options{}, "no value and no approximation for group NA-(C)"},
 		{"CCN=O", Options{}, "no value and no approximation for group C-(NO)(C)(H)2 (also missing: NO-(C))"},
 		{"c1cc[nH]c1", Options{}, "no value and no approximation for group Cd-(N)(H)"},
+		{"c1ccnnc1", Options{}, "no value and no approximation for group Nbb"},
+		{"c1ccc2nnccc2c1", Options{}, "no value and no approximation for group Nbb"},
 		{"O=O", Options{Multiplicity: 1}, "terminal atom"},
 		{"CC", Options{Multiplicity: 3}, "multiplicity 3"},
 		{"C[CH2]", Options{Multiplicity: 4}, "multiplicity 4"},
