@@ -90,7 +90,7 @@ func approximate(l lookup, centre string, counts ligCounts) (GroupValue, []strin
 				continue
 			}
 			r, ok := relative[lig]
-			if !ok {
+			if !ok || noStandIn(centre, lig) { // noStandIn: hetero_n.go
 				continue
 			}
 			next := s.counts

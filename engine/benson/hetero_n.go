@@ -308,3 +308,14 @@ func (g *graph) inAzineRing(a int) bool {
 	}
 	return false
 }
+
+// noStandIn reports whether neighbour type lig of a centre must not be
+// replaced by its relative when a group is approximated. An acyl group on
+// nitrogen (amide N) is not like an alkyl group: the tables' own amide and
+// amine groups differ by about 20 kcal/mol (N-(CO)(H)2 −14.9 against
+// N-(C)(H)2 +4.8, Benson 1976 Table A.3, groups_nsx.tsv), so an amide
+// nitrogen group without a value (N-(CO)(C)2 of N,N-dialkylamides) is
+// refused, naming it, rather than estimated as an amine nitrogen.
+func noStandIn(centre, lig string) bool {
+	return centre == "N" && lig == "CO"
+}

@@ -44,6 +44,7 @@ func TestRefusals(t *testing.T) {
 		{"CCN=O", Options{}, "no value and no approximation for group C-(NO)(C)(H)2 (also missing: NO-(C))"},
 		{"c1cc[nH]c1", Options{}, "no value and no approximation for group Cd-(N)(H)"},
 		{"c1ccnnc1", Options{}, "no value and no approximation for group Nbb"},
+		{"CN(C)C=O", Options{}, "no value and no approximation for group N-(CO)(C)2"},
 		{"c1ccc2nnccc2c1", Options{}, "no value and no approximation for group Nbb"},
 		{"O=O", Options{Multiplicity: 1}, "terminal atom"},
 		{"CC", Options{Multiplicity: 3}, "multiplicity 3"},
