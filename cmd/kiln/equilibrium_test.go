@@ -171,11 +171,3 @@ func TestEquilibriumErrors(t *testing.T) {
 		assert.Contains(t, stderr, c.msg, "%v", c.args)
 	}
 }
-
-func TestParsePressure(t *testing.T) {
-	for in, want := range map[string]float64{"1atm": 101325, "1 atm": 101325, "1bar": 1e5, "100kPa": 1e5, "760Torr": 101325, "101325Pa": 101325, "2.5e5 Pa": 2.5e5} {
-		got, err := parsePressure(in)
-		require.NoError(t, err, in)
-		assert.InEpsilon(t, want, got, 1e-12, in)
-	}
-}
