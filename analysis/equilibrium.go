@@ -30,14 +30,15 @@ type MixEntry struct {
 
 // InputError is a mistake in one input of an equilibrium request: Input
 // names it ("mix", "temperature", "pressure"; the CLI shows it as the flag
-// --mix …, the editor as written) and Msg says what is wrong, with the
-// column (1-based, in characters) of the offending mixture item.
+// --mix …, the editor as written) and Msg, which follows the name (it starts
+// with a blank or a colon), says what is wrong, with the column (1-based, in
+// characters) of the offending mixture item.
 type InputError struct {
 	Input string
 	Msg   string
 }
 
-func (e *InputError) Error() string { return e.Input + " " + e.Msg }
+func (e *InputError) Error() string { return e.Input + e.Msg }
 
 // MixExample is the mixture shown in messages and prompts.
 const MixExample = "CH4:1, O2:2, N2:7.52"
@@ -47,7 +48,7 @@ const MixExample = "CH4:1, O2:2, N2:7.52"
 // cannot contain commas. Amounts are positive numbers (mol, any scale).
 func ParseMix(s string) ([]MixEntry, error) {
 	if strings.TrimSpace(s) == "" {
-		return nil, &InputError{"mix", fmt.Sprintf("is required, e.g. %q", MixExample)}
+		return nil, &InputError{"mix", fmt.Sprintf(" is required, e.g. %q", MixExample)}
 	}
 	var out []MixEntry
 	seen := map[string]bool{}
@@ -70,22 +71,22 @@ func ParseMix(s string) ([]MixEntry, error) {
 		at := fmt.Sprintf("item %d (column %d)", item, col)
 		k := strings.LastIndexByte(text, ':')
 		if k <= 0 {
-			return nil, &InputError{"mix", fmt.Sprintf("%s %q must be NAME:AMOUNT", at, text)}
+			return nil, &InputError{"mix", fmt.Sprintf(" %s %q must be NAME:AMOUNT", at, text)}
 		}
 		name := strings.TrimSpace(text[:k])
 		num := strings.TrimSpace(text[k+1:])
 		v, err := strconv.ParseFloat(num, 64)
 		if err != nil || !(v > 0) || math.IsInf(v, 0) {
-			return nil, &InputError{"mix", fmt.Sprintf("%s: amount of %s must be a positive number, not %q", at, name, num)}
+			return nil, &InputError{"mix", fmt.Sprintf(" %s: amount of %s must be a positive number, not %q", at, name, num)}
 		}
 		if seen[name] {
-			return nil, &InputError{"mix", fmt.Sprintf("%s names %s twice", at, name)}
+			return nil, &InputError{"mix", fmt.Sprintf(" %s names %s twice", at, name)}
 		}
 		seen[name] = true
 		out = append(out, MixEntry{name, v})
 	}
 	if len(out) == 0 {
-		return nil, &InputError{"mix", "lists no species"}
+		return nil, &InputError{"mix", " lists no species"}
 	}
 	return out, nil
 }
@@ -102,33 +103,20 @@ const (
 func ParseEquilibriumTemperature(s string) (float64, error) {
 	v, err := strconv.ParseFloat(strings.TrimSpace(strings.TrimSuffix(strings.TrimSpace(s), "K")), 64)
 	if err != nil || v < equilibrium.TMin || v > equilibrium.TMax {
-		return 0, &InputError{"temperature", fmt.Sprintf("must be in K between %g and %g, not %q", equilibrium.TMin, equilibrium.TMax, s)}
+		return 0, &InputError{"temperature", fmt.Sprintf(" must be in K between %g and %g, not %q", equilibrium.TMin, equilibrium.TMax, s)}
 	}
 	return v, nil
 }
 
-// ParseEquilibriumPressure reads a number with a pressure unit, attached or
-// not: "1atm", "1 bar", "101.325kPa", "760 Torr", "101325Pa" (FORMAT.md §2
-// units), and returns Pa.
+// ParseEquilibriumPressure reads a number with its pressure unit attached,
+// "1atm", "10bar", "101.325kPa", "760Torr", "101325Pa", as every pressure
+// kiln reads (speciesfile.ParsePressure, FORMAT.md §2 units), and returns Pa.
 func ParseEquilibriumPressure(s string) (float64, error) {
-	t := strings.TrimSpace(s)
-	k := len(t)
-	for k > 0 && (t[k-1] >= 'a' && t[k-1] <= 'z' || t[k-1] >= 'A' && t[k-1] <= 'Z') {
-		k--
+	p, err := speciesfile.ParsePressure(strings.TrimSpace(s), "")
+	if err != nil {
+		return 0, &InputError{"pressure", ": " + err.Error()}
 	}
-	num, unit := strings.TrimSpace(t[:k]), t[k:]
-	if unit == "" {
-		return 0, &InputError{"pressure", fmt.Sprintf("%q needs a unit: atm, bar, Pa, kPa or Torr", s)}
-	}
-	f, ok := speciesfile.PressureUnit(unit)
-	if !ok {
-		return 0, &InputError{"pressure", fmt.Sprintf("unit %q is not one of atm, bar, Pa, kPa, Torr", unit)}
-	}
-	v, err := strconv.ParseFloat(num, 64)
-	if err != nil || !(v > 0) || math.IsInf(v, 0) {
-		return 0, &InputError{"pressure", fmt.Sprintf("must be a positive number with a unit, not %q", s)}
-	}
-	return v * f, nil
+	return p, nil
 }
 
 // EquilibriumRequest is one equilibrium question: the mixture, its initial
@@ -205,7 +193,7 @@ func (r *Result) Equilibrium(ctx context.Context, req EquilibriumRequest) (*Equi
 		InitialTemperature: req.T, InitialPressure: req.P,
 		Species: []EquilibriumAmount{}, Excluded: []EquilibriumNote{}, OutsideThermoRange: []EquilibriumNote{}}
 	if len(req.Mix) == 0 {
-		return nil, &InputError{"mix", fmt.Sprintf("is required, e.g. %q", MixExample)}
+		return nil, &InputError{"mix", fmt.Sprintf(" is required, e.g. %q", MixExample)}
 	}
 	var species []equilibrium.Species
 	used := map[string]*Species{}
@@ -279,6 +267,9 @@ func (r *Result) Equilibrium(ctx context.Context, req EquilibriumRequest) (*Equi
 	sort.SliceStable(out.Species, func(i, j int) bool { return out.Species[i].MoleFraction > out.Species[j].MoleFraction })
 	return out, nil
 }
+
+// ErrorCount is the number of error diagnostics of the analysed file.
+func (r *Result) ErrorCount() int { return countErrors(r.Diagnostics) }
 
 // position writes l as FILE:LINE:COL (1-based; columns in characters, as
 // `kiln check` writes them).

@@ -7,13 +7,16 @@ import (
 	"github.com/stretchr/testify/require"
 )
 
+// TestParseEquilibriumPressure: the pressure syntax of every kiln input
+// (speciesfile.ParsePressure): a number with its unit attached.
 func TestParseEquilibriumPressure(t *testing.T) {
-	for in, want := range map[string]float64{"1atm": 101325, "1 atm": 101325, "1bar": 1e5, "100kPa": 1e5, "760Torr": 101325, "101325Pa": 101325, "2.5e5 Pa": 2.5e5} {
+	for in, want := range map[string]float64{"1atm": 101325, " 1atm ": 101325, "1bar": 1e5, "100kPa": 1e5, "760Torr": 101325, "101325Pa": 101325, "2.5e5Pa": 2.5e5} {
 		got, err := ParseEquilibriumPressure(in)
 		require.NoError(t, err, in)
 		assert.InEpsilon(t, want, got, 1e-12, in)
 	}
-	for in, msg := range map[string]string{"1": "needs a unit", "1psi": `unit "psi" is not one of`, "-1atm": "positive number", "atm": "positive number"} {
+	for in, msg := range map[string]string{"1": `pressure: pressure "1" needs a unit`, "1psi": `unknown unit "psi"`,
+		"-1atm": "must be positive", "atm": "is not a pressure", "1 atm": `unknown unit " atm"`} {
 		_, err := ParseEquilibriumPressure(in)
 		require.Error(t, err, in)
 		assert.Contains(t, err.Error(), msg, in)

@@ -6,7 +6,6 @@ import (
 	"fmt"
 
 	"kiln.dev/kiln/analysis"
-	"kiln.dev/kiln/speciesfile"
 )
 
 // runEquilibrium is `kiln equilibrium`. The mixture syntax, the inputs, the
@@ -49,7 +48,7 @@ func runEquilibrium(e env, args []string) (int, error) {
 		fmt.Fprintf(e.stderr, "kiln equilibrium: %v\n", err)
 		return exitProblems, nil
 	}
-	if n := countErrorDiags(res.Diagnostics); n > 0 {
+	if n := res.ErrorCount(); n > 0 {
 		fmt.Fprintf(e.stderr, "kiln equilibrium: %s has %d error(s) (`kiln check` lists them); broken statements were left out\n", out.File, n)
 	}
 	if flags["json"] == "true" {
@@ -67,17 +66,7 @@ func runEquilibrium(e env, args []string) (int, error) {
 func inputUsage(err error) error {
 	var ie *analysis.InputError
 	if errors.As(err, &ie) {
-		return usagef("--%s %s", ie.Input, ie.Msg)
+		return usagef("--%s%s", ie.Input, ie.Msg)
 	}
 	return err
-}
-
-func countErrorDiags(ds []speciesfile.Diagnostic) int {
-	n := 0
-	for _, d := range ds {
-		if d.Severity == speciesfile.SeverityError {
-			n++
-		}
-	}
-	return n
 }

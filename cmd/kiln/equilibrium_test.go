@@ -160,7 +160,7 @@ func TestEquilibriumErrors(t *testing.T) {
 		{[]string{f, "--mix", "CH4:-1"}, exitUsage, "positive number"},
 		{[]string{f, "--mix", "CH4:1, CH4:2"}, exitUsage, "twice"},
 		{[]string{f, "--mix", "CH4:1", "--pressure", "1"}, exitUsage, "needs a unit"},
-		{[]string{f, "--mix", "CH4:1", "--pressure", "1psi"}, exitUsage, "not one of atm"},
+		{[]string{f, "--mix", "CH4:1", "--pressure", "1psi"}, exitUsage, `unknown unit "psi"`},
 		{[]string{f, "--mix", "CH4:1", "--temperature", "50"}, exitUsage, "--temperature"},
 		{[]string{f, "--mix", "C3H8:1, O2:5"}, exitProblems, "C3H8 is not declared"},
 		{[]string{f, "--mix", "soot-lump:1, O2:20"}, exitProblems, "soot-lump cannot take part"},
