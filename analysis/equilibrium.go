@@ -257,7 +257,9 @@ func (r *Result) Equilibrium(ctx context.Context, req EquilibriumRequest) (*Equi
 		out.Species = append(out.Species, EquilibriumAmount{Name: s.Name, MoleFraction: x, Moles: res.Moles[j]})
 		mass += x * used[s.Name].MolarMass
 		if x >= EquilibriumDisplayFraction {
-			if lo, hi, what := thermoRange(used[s.Name]); res.T < lo || res.T > hi {
+			// 298.15 K, where ΔHf°298 and S°298 are defined (and kiln's fits
+			// exact), counts as inside a range that starts at 300 K.
+			if lo, hi, what := thermoRange(used[s.Name]); res.T < math.Min(lo, 298.15) || res.T > hi {
 				out.OutsideThermoRange = append(out.OutsideThermoRange, EquilibriumNote{s.Name,
 					fmt.Sprintf("%s valid %g–%g K, used at %.0f K", what, lo, hi, res.T)})
 			}

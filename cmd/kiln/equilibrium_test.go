@@ -171,3 +171,19 @@ func TestEquilibriumErrors(t *testing.T) {
 		assert.Contains(t, stderr, c.msg, "%v", c.args)
 	}
 }
+
+// TestEquilibriumAt298NotFlagged: a nasa7 block from 300 K (as kiln fill
+// writes them) is not flagged at 298.15 K, where its ΔHf°298 and S°298 are
+// defined; nothing reacts, so the answer is the feed at its temperature.
+func TestEquilibriumAt298NotFlagged(t *testing.T) {
+	f := writeTemp(t, "e.kiln", `species ethanol CCO
+  nasa7 300 1000 5000
+    low   2.0805476184e-01  3.1539801723e-02 -2.5225516602e-05  1.6004279208e-08 -5.5541263436e-12 -2.9207914546e+04  2.7202689437e+01
+    high  5.7895732305e+00  1.6441737845e-02 -6.2929249280e-06  1.1072136207e-09 -7.3107020228e-14 -3.0999541016e+04 -3.1402546104e+00
+    source test block
+species ethane CC
+`)
+	o := equilibriumJSONOf(t, f, "--mix", "ethanol:1, ethane:1", "--adiabatic")
+	assert.InDelta(t, 298.15, o["temperature_k"].(float64), 1e-6)
+	assert.Empty(t, o["outside_thermo_range"])
+}
