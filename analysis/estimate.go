@@ -153,6 +153,14 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		}
 		return e, nil
 	}
+	if o.Multiplicity > 0 {
+		if sp, ok := lib.Lookup(m, 0); ok {
+			// A small species of the library in another spin state: the
+			// groups have no data for it either (engine/benson refuses
+			// non-ground multiplicities), so say what the library holds.
+			return nil, fmt.Errorf("multiplicity %d has no data: the reference library holds this structure only as %s, multiplicity %d, and group additivity has no data for other spin states", o.Multiplicity, sp.Name, sp.Multiplicity)
+		}
+	}
 	bo := benson.Options{
 		Multiplicity:   o.Multiplicity,
 		Symmetry:       o.Symmetry,

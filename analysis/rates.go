@@ -57,18 +57,17 @@ func (m *rateModel) reverseRate(T, P float64) (float64, bool) {
 	return kinetics.ReverseRate(m.forward(T, P), kc), true
 }
 
-// forward returns k_f(T) of d's rate lines where one pressure-independent
-// number per temperature is wanted (kiln compare): the high-pressure limit
-// of a falloff, a pressure table at 1 atm. Built from the same rate model.
-func forward(d *speciesfile.Reaction) (func(T float64) float64, bool) {
+// forwardAt returns k_f(T) of d's rate lines at the pressure P (Pa) where
+// one number per temperature is wanted (kiln compare): a falloff with the
+// N2 bath gas at the efficiency bathEff, a pressure table read at P. Built
+// from the same rate model as every other rate kiln shows.
+func forwardAt(d *speciesfile.Reaction, P, bathEff float64) (func(T float64) float64, bool) {
 	m, ok := baseRateModel(d)
 	if !ok {
 		return nil, false
 	}
-	if m.falloff != nil {
-		return m.falloff.High.Rate, true
-	}
-	return func(T float64) float64 { return m.forward(T, 101325) }, true
+	m.bathEff = bathEff
+	return func(T float64) float64 { return m.forward(T, P) }, true
 }
 
 // baseRateModel reads the forward rate lines of d (main line, falloff,
@@ -132,11 +131,17 @@ func (a *analysis) rateModelOf(d *speciesfile.Reaction, r *Reaction) (*rateModel
 // listed for the species whose composition is N2, else 1. A falloff with a
 // named collider (+AR) has that collider as its bath, efficiency 1.
 func (a *analysis) bathEfficiency(d *speciesfile.Reaction) float64 {
+	return bathEfficiency(d, func(name string) *Species { return a.res.ByName[name] })
+}
+
+// bathEfficiency finds the N2 efficiency of d with the species named as
+// species(name) resolves them.
+func bathEfficiency(d *speciesfile.Reaction, species func(name string) *Species) float64 {
 	if falloffCollider(d) != nil {
 		return 1
 	}
 	for _, e := range d.Efficiencies {
-		if sp := a.res.ByName[e.Name.Text]; sp != nil && len(sp.Composition) == 1 && sp.Composition["N"] == 2 {
+		if sp := species(e.Name.Text); sp != nil && len(sp.Composition) == 1 && sp.Composition["N"] == 2 {
 			return e.Value.SI
 		}
 	}

@@ -55,6 +55,29 @@ func TestEstimateJSONContract(t *testing.T) {
 	assert.Equal(t, []string{"count", "hf298_kj_mol", "name", "s298_j_mol_k", "source"}, keysOf(g0))
 }
 
+// TestEstimateLibraryJSON: a reference-library species is reported as
+// tabulated data: no group uncertainty (null, not a promise of ± 0), the
+// entry named, and σ and n of its structure (O2: D∞h, σ = 2).
+func TestEstimateLibraryJSON(t *testing.T) {
+	code, stdout, stderr := runKiln(t, "estimate", "--json", "O=O", "CCO")
+	require.Equal(t, exitOK, code, stderr)
+	var arr []map[string]any
+	require.NoError(t, json.Unmarshal([]byte(stdout), &arr))
+	require.Len(t, arr, 2)
+	o2, eth := arr[0], arr[1]
+	assert.Nil(t, o2["uncertainty_hf298_kj_mol"])
+	assert.Equal(t, "O2", o2["reference_library"])
+	assert.EqualValues(t, 2, o2["symmetry_number"])
+	assert.EqualValues(t, 1, o2["optical_isomers"])
+	assert.NotContains(t, eth, "reference_library")
+	assert.Greater(t, eth["uncertainty_hf298_kj_mol"].(float64), 0.0)
+
+	code, stdout, stderr = runKiln(t, "estimate", "O=O")
+	require.Equal(t, exitOK, code, stderr)
+	assert.Contains(t, stdout, "tabulated: its uncertainty is the source's")
+	assert.NotContains(t, stdout, "± 0.00")
+}
+
 // TestEstimateErrors: a bad input gets an error object with its position,
 // the others still get estimates, and the exit code is 1.
 func TestEstimateErrors(t *testing.T) {

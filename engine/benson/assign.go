@@ -32,7 +32,7 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 		return centre, counts, true
 	}
 	for k, j := range g.nbr[i] {
-		if j == skip {
+		if j == skip || g.impliedOxide(centre, g.nbrBond[i][k], j) { // impliedOxide: hetero_sx.go
 			continue
 		}
 		if centre == "Cb" && g.benzBond[g.nbrBond[i][k]] {

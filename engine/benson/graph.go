@@ -101,6 +101,9 @@ func (g *graph) bondBetween(a, c int) int {
 func (g *graph) atomType(i int) string {
 	a := g.m.Atoms[i]
 	if a.Element != "C" {
+		if t, ok := g.sulfurOxideType(i); ok { // SO, SO2: hetero_sx.go
+			return t
+		}
 		return a.Element
 	}
 	if g.benzAtom[i] >= 2 {

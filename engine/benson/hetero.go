@@ -48,6 +48,7 @@ var hbiNSXTSV string
 // a name present twice is a defect of the tables.
 var extraGroupTables = []struct{ file, text string }{
 	{"groups_nsx.tsv", groupsNSXTSV},
+	{"groups_sx.tsv", groupsSXTSV}, // hetero_sx.go
 }
 
 // heteroCarbonType returns CN for a nitrile carbon, CS for a thiocarbonyl
@@ -169,7 +170,7 @@ func addHalogenFlags(g *graph, l lookup, est *Result) {
 		}
 		est.Missing = append(est.Missing, Missing{
 			Group:         name,
-			Approximation: name + " without halogen interactions",
+			Approximation: name + withoutHalogenInteractions,
 			Note:          "polyhalogenated carbon: no geminal/vicinal halogen interaction correction at hand; errors of several kcal/mol are possible",
 		})
 	}

@@ -155,6 +155,9 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 			key = "1,4-dioxane"
 		}
 	}
+	if key == "" && oxy == 0 {
+		key = g.sulfurRingKey(r, nd, aromatic) // hetero_sx.go
+	}
 	if key == "" {
 		key = fmt.Sprintf("%d-membered ring with %d O, %d other heteroatoms, %d double bonds", n, oxy, other, nd)
 	}

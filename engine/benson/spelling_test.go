@@ -281,6 +281,8 @@ var spellingFixed = []string{
 	"C1CCC2CCCCC2C1", "c1ccc2ccccc2c1", "C1Cc2ccccc2C1", "c1ccc2c(c1)ccc1ccccc12", "CC12CCC(CC1)C(C)(C)O2",
 	"C1CC11CC1", "C12C3C1C4C2C34", "O=C1[CH]CCC1", "[O]C1=CCCC1", "c1ccoc1", "Cc1ccc(C)o1", "C1CCOC1",
 	"c1ccc2c(c1)oc1ccccc12", "CC1=CC(=O)CC(C)(C)C1", "[CH2]c1ccccc1", "C1=CC=CC1", "[CH]1C=CC=C1",
+	"Cc1cccs1", "CCc1ccsc1", "CCS(=O)C", "CS(=O)(=O)CC(C)C", "C1CCS1", "Clc1ccccc1Cl", "Fc1ccc(F)c(F)c1",
+	"C/C=C/Cl", "FC(F)=CC", "CC(C)(C)Br", "CCC(C)Br", "C=CSC",
 }
 
 // spellingRefused are refused structures added to the corpus: charged,

@@ -62,7 +62,11 @@ var builtin = sync.OnceValue(func() *tables {
 		t.groups[r.Name] = r
 		t.order = append(t.order, r.Name)
 	}
-	for _, v := range mustFill("corrections.tsv", mustParse("corrections.tsv", correctionsTSV)) {
+	corr := mustParse("corrections.tsv", correctionsTSV)
+	for _, x := range extraCorrectionTables { // hetero_sx.go
+		corr = append(corr, mustParse(x.file, x.text)...)
+	}
+	for _, v := range mustFill("corrections.tsv", corr) {
 		t.corrections[v.Name] = v
 	}
 	sys, err := parseSystems(systemsTSV)
