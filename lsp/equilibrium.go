@@ -7,7 +7,6 @@ import (
 	"errors"
 	"fmt"
 	"path/filepath"
-	"strconv"
 	"strings"
 
 	"go.lsp.dev/jsonrpc2"
@@ -73,9 +72,12 @@ func (s *server) executeCommand(ctx context.Context, raw json.RawMessage) (any, 
 		if err != nil {
 			return nil, jsonrpc2.NewError(jsonrpc2.InvalidParams, err.Error())
 		}
+		// A misspelt key is an error, not a default silently applied.
+		dec := json.NewDecoder(bytes.NewReader(b))
+		dec.DisallowUnknownFields()
 		var a equilibriumArgs
-		if err := decode(b, &a); err != nil {
-			return nil, err
+		if err := dec.Decode(&a); err != nil {
+			return nil, jsonrpc2.NewError(jsonrpc2.InvalidParams, fmt.Sprintf("%s argument: %v (keys: uri, mix, temperature, pressure, adiabatic, volume)", commandEquilibrium, err))
 		}
 		return s.equilibrium(ctx, a)
 	}
@@ -153,10 +155,7 @@ func jsonText(raw json.RawMessage) (string, bool) {
 	if err := json.Unmarshal(raw, &str); err == nil {
 		return str, true
 	}
-	if _, err := strconv.ParseFloat(t, 64); err == nil {
-		return t, true
-	}
-	return t, true // parsed (and refused with its message) by the caller
+	return t, true // a number's literal; anything else is refused by the caller's parser
 }
 
 // displayPath shows a file relative to the workspace root when it is inside

@@ -156,6 +156,8 @@ func TestEquilibriumCommandErrors(t *testing.T) {
 		{map[string]any{"uri": e.uri("flat.kiln"), "mix": "X:1", "adiabatic": true}, codeRequestFailed, "adiabatic temperature is above 6000 K"},
 		{map[string]any{"uri": e.uri("closed.kiln"), "mix": "X:1"}, jsonrpc2.InvalidParams, "not open"},
 		{map[string]any{"mix": "X:1"}, jsonrpc2.InvalidParams, "uri is required"},
+		{map[string]any{"uri": air, "mix": "CH4:1", "adiabtic": true}, jsonrpc2.InvalidParams, `unknown field "adiabtic"`},
+		{map[string]any{"uri": air, "mix": 3}, jsonrpc2.InvalidParams, "kiln.equilibrium argument"},
 	} {
 		_, err := e.equilibrium(c.args)
 		var werr *jsonrpc2.Error
