@@ -142,7 +142,8 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 	for _, m := range est.Missing {
 		w := 0.0
 		switch {
-		case strings.HasPrefix(m.Group, "HBI dS"):
+		case strings.HasPrefix(m.Group, "HBI dS"), m.Group == cpFallsGroup:
+			// Entropy/Cp-only approximations: ΔHf°298 is not affected.
 		case strings.HasPrefix(m.Group, "HBI"):
 			w = widenRadical
 		case strings.HasPrefix(m.Group, "ring system:"):
