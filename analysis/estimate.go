@@ -317,6 +317,12 @@ func (c *moleculeCache) parse(smiles string) parsed {
 		return p
 	}
 	m, err := molecule.ParseSMILES(smiles)
+	if err == nil {
+		// One structure for the charge-separated and the pentavalent
+		// spellings of a nitro or nitrate group (C[N+](=O)[O-], CN(=O)=O):
+		// duplicates, compare and estimates see the same molecule.
+		m = m.NeutralNO()
+	}
 	p = parsed{mol: m, err: err}
 	if err == nil {
 		p.formula, p.composition, p.charge, p.molarMass = m.Formula(), m.Composition(), m.Charge(), m.MolarMass()

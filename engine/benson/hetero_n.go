@@ -119,40 +119,10 @@ func (g *graph) impliedTerminal(i, k int, centre string) bool {
 	return ok && g.order(g.nbrBond[i][k]) >= 2 && g.m.Atoms[j].Element == p && g.terminal(j)
 }
 
-// neutralNO returns m with every charge-separated N⁺–O⁻ unit — a
-// non-aromatic N⁺ single-bonded to a terminal O⁻ (no H, no radical) — written
-// as N=O, the pentavalent neutral structure the nitro and nitrate groups
-// describe. m itself is returned when it has no such unit or when the
-// rewritten structure would break a valence rule (the charges are then
-// refused by Estimate).
-func neutralNO(m *molecule.Molecule) *molecule.Molecule {
-	var charges, orders map[int]int
-	for i, a := range m.Atoms {
-		if a.Element != "N" || a.Charge != 1 || a.Aromatic {
-			continue
-		}
-		for _, b := range m.Adj[i] {
-			j := m.Other(b, i)
-			o := m.Atoms[j]
-			if o.Element != "O" || o.Charge != -1 || m.Bonds[b].Order != 1 || len(m.Adj[j]) != 1 || o.HCount != 0 || o.Radical != 0 || o.Isotope != 0 {
-				continue
-			}
-			if charges == nil {
-				charges, orders = map[int]int{}, map[int]int{}
-			}
-			charges[i], charges[j], orders[b] = 0, 0, 2
-			break
-		}
-	}
-	if charges == nil {
-		return m
-	}
-	n, err := m.WithCharges(charges, orders)
-	if err != nil {
-		return m
-	}
-	return n
-}
+// neutralNO returns m with its charge-separated N⁺–O⁻ units written as
+// N=O (molecule.NeutralNO), the pentavalent neutral structure the nitro and
+// nitrate groups describe.
+func neutralNO(m *molecule.Molecule) *molecule.Molecule { return m.NeutralNO() }
 
 // chargeRefusal explains why charged atom i of m is refused: an ion (net
 // charge) or a charge-separated structure other than the N⁺–O⁻ units

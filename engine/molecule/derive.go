@@ -146,3 +146,39 @@ func (m *Molecule) WithCharges(charges map[int]int, orders map[int]int) (*Molecu
 	}
 	return m.derive(atoms, bonds), nil
 }
+
+// NeutralNO returns m with every charge-separated N⁺–O⁻ unit — a
+// non-aromatic N⁺ single-bonded to a terminal O⁻ (no H, no radical, no
+// isotope label) — written as N=O: the one structure for the
+// charge-separated and the pentavalent spellings of nitro, nitrate and
+// N-oxide groups (C[N+](=O)[O-] and CN(=O)=O). m itself is returned when it
+// has no such unit or when the rewritten structure would break a valence
+// rule. Atom indices are unchanged.
+func (m *Molecule) NeutralNO() *Molecule {
+	var charges, orders map[int]int
+	for i, a := range m.Atoms {
+		if a.Element != "N" || a.Charge != 1 || a.Aromatic {
+			continue
+		}
+		for _, b := range m.Adj[i] {
+			j := m.Other(b, i)
+			o := m.Atoms[j]
+			if o.Element != "O" || o.Charge != -1 || m.Bonds[b].Order != 1 || len(m.Adj[j]) != 1 || o.HCount != 0 || o.Radical != 0 || o.Isotope != 0 {
+				continue
+			}
+			if charges == nil {
+				charges, orders = map[int]int{}, map[int]int{}
+			}
+			charges[i], charges[j], orders[b] = 0, 0, 2
+			break
+		}
+	}
+	if charges == nil {
+		return m
+	}
+	n, err := m.WithCharges(charges, orders)
+	if err != nil {
+		return m
+	}
+	return n
+}
