@@ -613,6 +613,9 @@ func matchReactions(a, b *compareSide, mapB map[string]string) (pairs []Reaction
 				}
 			}
 		}
+		if n := efficiencyNote(x, y, mapped); n != "" {
+			p.Note = strings.TrimPrefix(p.Note+"; "+n, "; ")
+		}
 		pairs = append(pairs, p)
 	}
 	for _, k := range orderB {

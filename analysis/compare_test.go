@@ -338,3 +338,21 @@ func TestIncludeDuplicatesBounded(t *testing.T) {
 	assert.Equal(t, maxIncludeDupReports+1, n)
 	assert.Equal(t, 1, more)
 }
+
+// TestCompareEfficiencies: matched third-body reactions whose efficiencies
+// differ say so in the note, in A's names, an unlisted species counting 1.
+func TestCompareEfficiencies(t *testing.T) {
+	files := map[string]string{
+		"/w/a.kiln": "species H [H]\nspecies O2 O=O\nspecies HO2 [O]O\nspecies H2O O\nspecies CO2 O=C=O\n" +
+			"reaction H + O2 + M <=> HO2 + M   A=2.8e18 n=-0.86 Ea=0\n  efficiencies H2O=12 O2=0.78\n",
+		"/w/b.kiln": "species h [H]\nspecies o2 O=O\nspecies ho2 [O]O\nspecies water O\nspecies co2 O=C=O\n" +
+			"reaction h + o2 + M <=> ho2 + M   A=2.8e18 n=-0.86 Ea=0\n  efficiencies water=6 o2=0.78 co2=2\n",
+	}
+	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	require.Len(t, c.Reactions, 1)
+	assert.Equal(t, "third-body efficiencies differ (A → B): CO2 (1) → 2, H2O 12 → 6", c.Reactions[0].Note)
+	files["/w/b.kiln"] = strings.Replace(files["/w/b.kiln"], "water=6 o2=0.78 co2=2", "o2=0.78 water=12", 1)
+	c = compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	require.Len(t, c.Reactions, 1)
+	assert.Empty(t, c.Reactions[0].Note)
+}
