@@ -153,6 +153,16 @@ func displayPath(path string) string {
 
 // analyzeFile analyses the one file a command operates on.
 func analyzeFile(e env, file string, flags map[string]string) (*analysis.Result, analysis.Settings, error) {
+	results, set, err := analyzeFileScope(e, file, flags)
+	if err != nil {
+		return nil, set, err
+	}
+	return results[0], set, nil
+}
+
+// analyzeFileScope analyses the file a command operates on and the files it
+// includes (see analyzeScope); the first result is the file's.
+func analyzeFileScope(e env, file string, flags map[string]string) ([]*analysis.Result, analysis.Settings, error) {
 	set, err := settingsFrom(e, flags)
 	if err != nil {
 		return nil, set, err
@@ -161,6 +171,47 @@ func analyzeFile(e env, file string, flags map[string]string) (*analysis.Result,
 	if err != nil {
 		return nil, set, err
 	}
-	res, err := ws.Analyze(context.Background(), abs)
-	return res, set, err
+	results, err := analyzeScope(ws, abs, nil)
+	return results, set, err
+}
+
+// analyzeScope analyses path and, depth first, every file it includes that
+// done does not hold yet (each file once per run; done may be nil), path
+// first. Each file is analysed as check reports it: in its own scope. An
+// unreadable include is left out (its include line reports it). Every
+// command that counts a file's errors or lists its reactions uses this, so
+// that they agree with check.
+func analyzeScope(ws *analysis.Workspace, path string, done map[string]bool) ([]*analysis.Result, error) {
+	if done == nil {
+		done = map[string]bool{}
+	}
+	if done[path] {
+		return nil, nil
+	}
+	done[path] = true
+	res, err := ws.Analyze(context.Background(), path)
+	if err != nil {
+		return nil, err
+	}
+	out := []*analysis.Result{res}
+	for _, inc := range res.Includes {
+		if inc.Path == "" || done[inc.Path] {
+			continue
+		}
+		more, err := analyzeScope(ws, inc.Path, done)
+		if err != nil {
+			continue
+		}
+		out = append(out, more...)
+	}
+	return out, nil
+}
+
+// scopeErrors counts the errors of the analysed files, as check does.
+func scopeErrors(results []*analysis.Result) int {
+	n := 0
+	for _, res := range results {
+		n += res.ErrorCount()
+	}
+	return n
 }

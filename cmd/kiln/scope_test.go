@@ -1,0 +1,61 @@
+package main
+
+import (
+	"encoding/json"
+	"os"
+	"path/filepath"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+)
+
+// includeMechanism writes a mechanism whose main file includes a file with
+// species and a reaction of its own; it returns the main file's path.
+func includeMechanism(t *testing.T) string {
+	t.Helper()
+	main := writeTemp(t, "main.kiln", "include sub/core.kiln\nspecies C3H8 CCC\nreaction C3H8 + H <=> nC3H7 + H2   A=1.3e6 n=2.54 Ea=6.76\n")
+	dir := filepath.Join(filepath.Dir(main), "sub")
+	require.NoError(t, os.MkdirAll(dir, 0o755))
+	require.NoError(t, os.WriteFile(filepath.Join(dir, "core.kiln"), []byte(`units kJ/mol
+species H [H]
+species H2 [H][H]
+species nC3H7 [CH2]CC
+  thermo-table
+    hf298 100.0
+    s298 290
+    cp 300=75 400=95 500=112 600=126 800=148 1000=164 1500=188
+reaction H + H <=> H2  A=1e13 n=0 Ea=0
+`), 0o644))
+	return main
+}
+
+// TestSummaryIncludedReactions: summary lists the reactions of included
+// files (with their file) as well as their species, and counts agree with
+// compare.
+func TestSummaryIncludedReactions(t *testing.T) {
+	main := includeMechanism(t)
+	code, stdout, stderr := runKiln(t, "summary", "--json", main)
+	require.Equal(t, exitOK, code, stderr)
+	var s struct {
+		Species   []map[string]any `json:"species"`
+		Reactions []map[string]any `json:"reactions"`
+	}
+	require.NoError(t, json.Unmarshal([]byte(stdout), &s))
+	require.Len(t, s.Species, 4)
+	require.Len(t, s.Reactions, 2)
+	assert.NotContains(t, s.Reactions[0], "file") // the summarised file's own
+	assert.Equal(t, "H + H <=> H2", s.Reactions[1]["equation"])
+	assert.EqualValues(t, 9, s.Reactions[1]["line"])
+	assert.Equal(t, "core.kiln", filepath.Base(s.Reactions[1]["file"].(string)))
+	assert.NotNil(t, s.Reactions[1]["dh298_kj_mol"])
+
+	code, stdout, stderr = runKiln(t, "summary", main)
+	require.Equal(t, exitOK, code, stderr)
+	assert.Contains(t, stdout, "Reactions (2)")
+	assert.Contains(t, stdout, "core.kiln:9")
+
+	c := compareJSONOf(t, exitOK, main, main)
+	assert.Equal(t, len(s.Species), c.A.Species)
+	assert.Equal(t, len(s.Reactions), c.A.Reactions)
+}
