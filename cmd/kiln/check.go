@@ -100,10 +100,9 @@ func runCheck(e env, args []string) (int, error) {
 		for _, d := range out {
 			fmt.Fprintf(e.stdout, "%s:%d:%d: %s: %s [%s]\n", d.File, d.Line, d.Column, d.Severity, d.Message, d.Code)
 		}
-		if len(out) > 0 {
-			fmt.Fprintf(e.stderr, "kiln check: %d error(s), %d warning(s), %d information, %d hint(s)\n",
-				counts["error"], counts["warning"], counts["information"], counts["hint"])
-		}
+		// The count line is always written, also when nothing is shown.
+		fmt.Fprintf(e.stderr, "kiln check: %d error(s), %d warning(s), %d information, %d hint(s)\n",
+			counts["error"], counts["warning"], counts["information"], counts["hint"])
 	}
 	if errors > 0 {
 		return exitProblems, nil

@@ -59,3 +59,19 @@ func TestSummaryIncludedReactions(t *testing.T) {
 	assert.Equal(t, len(s.Species), c.A.Species)
 	assert.Equal(t, len(s.Reactions), c.A.Reactions)
 }
+
+// TestCheckCountLineAlways: the stderr count line is written also when no
+// diagnostic is shown (an empty file; errors filtered out of a clean one).
+func TestCheckCountLineAlways(t *testing.T) {
+	empty := writeTemp(t, "empty.kiln", "")
+	code, stdout, stderr := runKiln(t, "check", empty)
+	assert.Equal(t, exitOK, code)
+	assert.Empty(t, stdout)
+	assert.Equal(t, "kiln check: 0 error(s), 0 warning(s), 0 information, 0 hint(s)\n", stderr)
+
+	clean := writeTemp(t, "clean.kiln", "species C3H8 CCC\n")
+	code, stdout, stderr = runKiln(t, "check", "--min-severity", "error", clean)
+	assert.Equal(t, exitOK, code)
+	assert.Empty(t, stdout)
+	assert.Equal(t, "kiln check: 0 error(s), 0 warning(s), 0 information, 0 hint(s)\n", stderr)
+}
