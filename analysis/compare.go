@@ -55,9 +55,12 @@ type Comparison struct {
 
 // CompareSide describes one mechanism of a comparison.
 type CompareSide struct {
-	Path                string
-	Species, Reactions  int
-	Errors              int // syntax errors in the file and its includes, unreadable structures and includes of the file
+	Path               string
+	Species, Reactions int
+	// Errors is left 0 by Compare, which reads the files without the full
+	// checks: the caller counts them as `kiln check` does (every error of
+	// the file's and its includes' analyses), so that the counts agree.
+	Errors              int
 	UnreadableStructure []string
 }
 
@@ -338,12 +341,6 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 
 func (s *compareSide) summary() CompareSide {
 	out := CompareSide{Path: s.a.res.Path, Species: len(s.species), Reactions: len(s.reactions)}
-	out.Errors = countErrors(s.a.res.Diagnostics) // the file's syntax errors and the structure/include errors found here
-	for p, f := range s.a.res.Files {
-		if p != s.a.res.Path {
-			out.Errors += countErrors(f.Diags)
-		}
-	}
 	for _, sp := range s.species {
 		if sp.SMILESError != nil {
 			out.UnreadableStructure = append(out.UnreadableStructure, sp.Name)

@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"fmt"
 	"os"
 	"path/filepath"
 	"testing"
@@ -74,4 +75,48 @@ func TestCheckCountLineAlways(t *testing.T) {
 	assert.Equal(t, exitOK, code)
 	assert.Empty(t, stdout)
 	assert.Equal(t, "kiln check: 0 error(s), 0 warning(s), 0 information, 0 hint(s)\n", stderr)
+}
+
+// TestErrorCountsAgree: check, summary, compare and equilibrium count a
+// file's errors alike (structure, reaction and include errors, in the file
+// and in what it includes).
+func TestErrorCountsAgree(t *testing.T) {
+	main := includeMechanism(t)
+	require.NoError(t, os.WriteFile(main, []byte(`include sub/core.kiln
+include sub/missing.kiln
+species C3H8 CCC
+species Q Si
+species R C(C
+reaction C3H8 + H <=> nC3H7 + H2   A=1.3e6 n=2.54 Ea=6.76
+reaction C3H8 + H <=> nC3H7 + X   A=1.3e6 n=2.54 Ea=6.76
+reaction C3H8 => nC3H7   A=1e13 n=0 Ea=80
+reaction C3H8 + H <=> nC3H7 + H2   A=1.3e6 n=2.54 Ea=6.76 B=1
+`), 0o644))
+	sub := filepath.Join(filepath.Dir(main), "sub", "core.kiln")
+	text, err := os.ReadFile(sub)
+	require.NoError(t, err)
+	require.NoError(t, os.WriteFile(sub, append(text, "reaction H + H <=> OH  A=1e13 n=0 Ea=0\n"...), 0o644))
+
+	code, stdout, _ := runKiln(t, "check", "--format", "json", main)
+	require.Equal(t, exitProblems, code)
+	var diags []checkDiag
+	require.NoError(t, json.Unmarshal([]byte(stdout), &diags))
+	want := 0
+	for _, d := range diags {
+		if d.Severity == "error" {
+			want++
+		}
+	}
+	require.Greater(t, want, 4)
+
+	c := compareJSONOf(t, exitOK, main, main)
+	assert.Equal(t, want, c.A.Errors, "compare")
+	assert.Equal(t, want, c.B.Errors, "compare")
+
+	code, _, stderr := runKiln(t, "summary", main)
+	assert.Equal(t, exitProblems, code)
+	assert.Contains(t, stderr, fmt.Sprintf("has %d error(s)", want), "summary")
+
+	_, _, stderr = runKiln(t, "equilibrium", "--mix", "C3H8:1", main)
+	assert.Contains(t, stderr, fmt.Sprintf("has %d error(s)", want), "equilibrium")
 }
