@@ -585,7 +585,12 @@ func matchReactions(a, b *compareSide, mapB map[string]string) (pairs []Reaction
 		if m, ok := mapB[n]; ok {
 			return m
 		}
-		return "\x00B:" + n
+		if _, ok := a.byName[n]; !ok {
+			// Undeclared on both sides: the same text is the same name
+			// (nothing is known about it to tell otherwise).
+			return n
+		}
+		return "\x00B:" + n // undeclared in B, a declared species in A
 	}
 	ga, orderA := groupReactions(a, id)
 	gb, orderB := groupReactions(b, mapped)
