@@ -212,6 +212,15 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 	for i, sp := range need {
 		needSide[i].thermoOf(sp)
 	}
+	// The NASA-7 fits compareModel evaluates, on all cores (each estimate
+	// fits once).
+	if err := sa.a.parallel(len(need), 16, func(i int) {
+		if e := need[i].Estimate; e != nil && need[i].Source == SourceEstimate {
+			_, _, _ = e.NASA7()
+		}
+	}); err != nil {
+		return nil, err
+	}
 	for i, sp := range sa.species {
 		j := matchA[i]
 		if j < 0 {
@@ -483,18 +492,29 @@ func sameComposition(x, y map[string]int) bool {
 	return true
 }
 
-// cpOf returns Cp (J/(mol K)) at T of the thermo model the analysis uses.
-func cpOf(sp *Species, T float64) (float64, bool) {
-	type cp interface{ Cp(float64) float64 }
-	if th, ok := sp.Thermo().(cp); ok {
-		return th.Cp(T), true
+// compareModel returns the thermochemistry compare evaluates for sp: the
+// file's block, or for an estimate the NASA-7 polynomial kiln writes for it
+// (`kiln fill`, `kiln estimate --nasa`, the quick fix: Estimate.NASA7, with
+// its extrapolation past 1500 K), so that a file and the file `fill` makes
+// of it compare equal at every temperature. Only when that fit fails (fill
+// then writes nothing) is the estimate's group model used. nil when sp has
+// no thermochemistry.
+func compareModel(sp *Species) thermoCurve {
+	if sp.Source == SourceEstimate && sp.Estimate != nil {
+		if p, _, err := sp.Estimate.NASA7(); err == nil {
+			return &p
+		}
+		return sp.Estimate.curve()
 	}
-	return 0, false
+	if th, ok := sp.Thermo().(thermoCurve); ok {
+		return th
+	}
+	return nil
 }
 
 // thermoDiff compares the thermochemistry of a matched pair.
 func thermoDiff(a, b *Species, set Settings) *ThermoDiff {
-	ta, tb := a.Thermo(), b.Thermo()
+	ta, tb := compareModel(a), compareModel(b)
 	if ta == nil || tb == nil {
 		return nil
 	}
@@ -509,8 +529,8 @@ func thermoDiff(a, b *Species, set Settings) *ThermoDiff {
 	flag("hf298", d.Hf298A, d.Hf298B, set.MismatchHf298)
 	flag("s298", d.S298A, d.S298B, set.MismatchS298)
 	for k, t := range CompareThermoTemps {
-		d.CpA[k], _ = cpOf(a, t.T)
-		d.CpB[k], _ = cpOf(b, t.T)
+		d.CpA[k] = ta.Cp(t.T)
+		d.CpB[k] = tb.Cp(t.T)
 		d.GA[k] = ta.H(t.T) - t.T*ta.S(t.T)
 		d.GB[k] = tb.H(t.T) - t.T*tb.S(t.T)
 	}
@@ -684,7 +704,7 @@ func (s *compareSide) kc(d *speciesfile.Reaction, T float64) (float64, bool) {
 				return nil, false
 			}
 			s.thermoOf(sp)
-			th := sp.Thermo()
+			th := compareModel(sp)
 			if th == nil {
 				return nil, false
 			}

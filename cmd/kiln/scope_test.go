@@ -120,3 +120,55 @@ reaction C3H8 + H <=> nC3H7 + H2   A=1.3e6 n=2.54 Ea=6.76 B=1
 	_, _, stderr = runKiln(t, "equilibrium", "--mix", "C3H8:1", main)
 	assert.Contains(t, stderr, fmt.Sprintf("has %d error(s)", want), "equilibrium")
 }
+
+// TestCompareFillOutputEqual: a file and what `kiln fill` makes of it
+// compare equal: compare evaluates an estimate by the NASA-7 polynomial fill
+// writes (also past 1500 K), and rates converted by Kc agree.
+func TestCompareFillOutputEqual(t *testing.T) {
+	furnace, err := os.ReadFile(filepath.Join("..", "..", "examples", "furnace.kiln"))
+	require.NoError(t, err)
+	for name, text := range map[string]string{
+		"furnace.kiln": string(furnace),
+		"ethanol.kiln": `species ethanol CCO
+species H [H]
+species ethoxy CC[O]
+species H2 [H][H]
+species propene C=CC
+reaction ethanol + H <=> ethoxy + H2  A=1e13 n=0 Ea=5
+reaction ethoxy + H2 => ethanol + H  A=1e12 n=0 Ea=5
+`,
+	} {
+		t.Run(name, func(t *testing.T) {
+			a := writeTemp(t, name, text)
+			b := filepath.Join(filepath.Dir(a), "filled-"+name)
+			require.NoError(t, os.WriteFile(b, []byte(text), 0o644))
+			code, _, stderr := runKiln(t, "fill", b)
+			require.Equal(t, exitOK, code, stderr)
+			c := compareJSONOf(t, exitOK, a, b)
+			require.NotEmpty(t, c.Species)
+			compared := 0
+			for _, p := range c.Species {
+				require.NotNil(t, p.Thermo, p.A)
+				if p.Thermo.SameEstimate {
+					continue // a species fill could not fill
+				}
+				compared++
+				assert.Empty(t, p.Flags, p.A)
+				for k, v := range p.Thermo.Cp {
+					assert.InDelta(t, 0, v.Diff, 1e-4, "%s Cp%s", p.A, k)
+				}
+				for k, v := range p.Thermo.G {
+					assert.InDelta(t, 0, v.Diff, 1e-4, "%s G%s", p.A, k)
+				}
+			}
+			assert.Greater(t, compared, 3)
+			for _, r := range c.Reactions {
+				for k, v := range r.Ratio {
+					if v != nil {
+						assert.InDelta(t, 1, *v, 1e-6, "%s at %s K", r.EquationA, k)
+					}
+				}
+			}
+		})
+	}
+}
