@@ -163,12 +163,17 @@ func skipReason(sp *Species) string {
 	case sp.Decl.SMILES == nil:
 		return "no structure (SMILES) to estimate from; add a nasa7 or thermo-table block"
 	case sp.estimateErr != nil:
-		return "cannot estimate: " + sp.estimateErr.Error()
+		return "kiln cannot estimate it: " + RefusalReason(sp.estimateErr) // as check and estimate word it
 	case sp.Estimate == nil:
 		return "no estimate"
 	}
 	if _, _, err := sp.Estimate.NASA7(); err != nil {
-		return "no NASA-7 polynomial: " + err.Error()
+		// Without the engine's package prefix: no Go names in user text.
+		msg := err.Error()
+		for _, prefix := range []string{"nasa fit: ", "nasa: "} {
+			msg = strings.TrimPrefix(msg, prefix)
+		}
+		return "no NASA-7 polynomial: " + msg
 	}
 	return "no block can be inserted here"
 }

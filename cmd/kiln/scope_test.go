@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"os"
 	"path/filepath"
+	"regexp"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -170,5 +171,23 @@ reaction ethoxy + H2 => ethanol + H  A=1e12 n=0 Ea=5
 				}
 			}
 		})
+	}
+}
+
+// TestFillSkipWording: fill words a refusal exactly as check and estimate
+// do (atom and reason, no engine package prefix).
+func TestFillSkipWording(t *testing.T) {
+	path := writeTemp(t, "r.kiln", "species silane C[SiH3]\nspecies ion C[NH3+]\nspecies ethane CC\n")
+	_, checkOut, _ := runKiln(t, "check", path)
+	_, estOut, _ := runKiln(t, "estimate", "C[SiH3]", "C[NH3+]")
+	code, _, stderr := runKiln(t, "fill", "--dry-run", path)
+	assert.Equal(t, exitProblems, code)
+	assert.NotContains(t, stderr, "benson")
+	re := regexp.MustCompile(`(\w+) has no thermo block and kiln cannot estimate it: (.*); add a nasa7`)
+	ms := re.FindAllStringSubmatch(checkOut, -1)
+	require.Len(t, ms, 2, checkOut)
+	for _, m := range ms {
+		assert.Contains(t, stderr, "skipped "+m[1]+": kiln cannot estimate it: "+m[2]+"\n")
+		assert.Contains(t, estOut, "kiln cannot estimate it: "+m[2]+"\n")
 	}
 }
