@@ -19,18 +19,31 @@ type Edit struct {
 }
 
 // blockSource is the note written into an inserted block: where the numbers
-// came from.
+// came from (see Estimate.BlockSource).
 func (r *Result) blockSource(sp *Species) string {
-	stamp := r.Settings.Stamp
-	e := sp.Estimate
+	return sp.Estimate.BlockSource(r.Settings.Stamp)
+}
+
+// BlockSource is the `source` line of a nasa7 block kiln writes for the
+// estimate — the one wording for fill, the quick fixes and `kiln estimate
+// --nasa`. stamp ("kiln 0.1.0, 2026-12-01") says which kiln wrote it; it
+// may be empty. A reference-library species is tabulated data, not an
+// estimate, and is named as such with the library's source.
+func (e *Estimate) BlockSource(stamp string) string {
 	var b strings.Builder
+	if e.Library != "" {
+		fmt.Fprintf(&b, "reference library %s (tabulated data): %s", e.Library, e.LibrarySource)
+		if e.fit != nil {
+			fmt.Fprintf(&b, "; refitted to TMID %g K, THIGH %g K", e.tMid, e.tHigh)
+		}
+		if stamp != "" {
+			b.WriteString("; written by " + stamp)
+		}
+		return b.String()
+	}
 	b.WriteString("estimate")
 	if stamp != "" {
 		b.WriteString(", " + stamp)
-	}
-	if e.Library != "" {
-		fmt.Fprintf(&b, "; reference library %s: %s", e.Library, e.LibrarySource)
-		return b.String()
 	}
 	seen := map[string]bool{}
 	var srcs []string

@@ -113,7 +113,7 @@ func runEstimate(e env, args []string) (int, error) {
 		if i > 0 {
 			fmt.Fprintln(e.stdout)
 		}
-		writeEstimateText(e.stdout, r, est, analysis.UnitsFor(set, nil), withNASA, flags["sources"] == "true")
+		writeEstimateText(e.stdout, r, est, analysis.UnitsFor(set, nil), withNASA, flags["sources"] == "true", set.Stamp)
 	}
 	if flags["json"] == "true" {
 		if err := writeJSON(e.stdout, results); err != nil {
@@ -194,7 +194,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 // display units u (the other unit in parentheses for the totals). Group
 // sources are listed with --sources, one line per group, so that the table
 // stays narrow; --json always has them.
-func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u analysis.Units, withNASA, withSources bool) {
+func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u analysis.Units, withNASA, withSources bool, stamp string) {
 	fmt.Fprintf(w, "%s\n", r.Input)
 	if r.Error != nil {
 		if r.Error.Position != nil {
@@ -256,7 +256,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	fmt.Fprintln(w)
 	if p, fit, err := est.NASA7(); withNASA && err == nil {
 		fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %s):\n", u.Entropy(fit.MaxCpResidual))
-		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, "kiln "+Version+" estimate", "\n"))
+		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, est.BlockSource(stamp), "\n"))
 	}
 	writeWrapped(w, "  ", ide.Caution)
 }

@@ -191,3 +191,34 @@ func TestFillSkipWording(t *testing.T) {
 		assert.Contains(t, estOut, "kiln cannot estimate it: "+m[2]+"\n")
 	}
 }
+
+// TestBlockSourceOneWording: `estimate --nasa` and fill write the same
+// source line for a species; a reference-library species is named as
+// tabulated data, not as an estimate; no Go identifiers in either.
+func TestBlockSourceOneWording(t *testing.T) {
+	for _, tc := range []struct{ smiles, want string }{
+		{"C", "source reference library CH4 (tabulated data): "},
+		{"CCO", "source estimate, kiln 0.1.0, 2026-12-01; Benson group additivity"},
+	} {
+		_, est, _ := runKiln(t, "estimate", "--nasa", tc.smiles)
+		path := writeTemp(t, "s.kiln", "species X "+tc.smiles+"\n")
+		code, _, stderr := runKiln(t, "fill", path)
+		require.Equal(t, exitOK, code, stderr)
+		filled, err := os.ReadFile(path)
+		require.NoError(t, err)
+		src := regexp.MustCompile(`(?m)^\s*(source .*)$`)
+		fromFill := src.FindStringSubmatch(string(filled))
+		fromEst := src.FindStringSubmatch(est)
+		require.NotNil(t, fromFill, string(filled))
+		require.NotNil(t, fromEst, est)
+		assert.Equal(t, fromFill[1], fromEst[1])
+		assert.Contains(t, fromFill[1], tc.want)
+		assert.NotRegexp(t, `\b(nasa|benson|reflib)\.[A-Z]`, fromFill[1])
+		if tc.smiles == "C" {
+			assert.NotContains(t, fromFill[1], "estimate")
+		}
+		code, out, _ := runKiln(t, "check", "--min-severity", "warning", path)
+		assert.Equal(t, exitOK, code, out)
+		assert.Empty(t, out)
+	}
+}
