@@ -222,3 +222,38 @@ func TestBlockSourceOneWording(t *testing.T) {
 		assert.Empty(t, out)
 	}
 }
+
+// TestFillSymlinkAndReadOnly: fill writes through a symbolic link (the link
+// stays a link, its target gets the blocks and keeps its mode) and refuses a
+// file its owner may not write, leaving it unchanged.
+func TestFillSymlinkAndReadOnly(t *testing.T) {
+	target := writeTemp(t, "real.kiln", "species ethane CC\n")
+	require.NoError(t, os.Chmod(target, 0o640))
+	link := filepath.Join(t.TempDir(), "link.kiln")
+	require.NoError(t, os.Symlink(target, link))
+	code, _, stderr := runKiln(t, "fill", link)
+	require.Equal(t, exitOK, code, stderr)
+	fi, err := os.Lstat(link)
+	require.NoError(t, err)
+	assert.NotZero(t, fi.Mode()&os.ModeSymlink, "the link is still a link")
+	got, err := os.ReadFile(target)
+	require.NoError(t, err)
+	assert.Contains(t, string(got), "nasa7")
+	st, err := os.Stat(target)
+	require.NoError(t, err)
+	assert.Equal(t, os.FileMode(0o640), st.Mode().Perm())
+	entries, err := os.ReadDir(filepath.Dir(target))
+	require.NoError(t, err)
+	for _, e := range entries {
+		assert.NotContains(t, e.Name(), ".kiln-", "no temporary file left behind")
+	}
+
+	ro := writeTemp(t, "ro.kiln", "species ethane CC\n")
+	require.NoError(t, os.Chmod(ro, 0o444))
+	code, _, stderr = runKiln(t, "fill", ro)
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "read-only")
+	got, err = os.ReadFile(ro)
+	require.NoError(t, err)
+	assert.Equal(t, "species ethane CC\n", string(got))
+}
