@@ -7,6 +7,7 @@ import (
 	"os"
 	"path/filepath"
 	"strconv"
+	"strings"
 	"time"
 
 	"kiln.dev/kiln/analysis"
@@ -135,7 +136,34 @@ func newWorkspace(file string, flags map[string]string, s analysis.Settings) (*a
 	if err != nil {
 		return nil, "", fmt.Errorf("%s: %w", file, err)
 	}
+	if flags["root"] != "" {
+		if err := checkRoot(flags["root"], root, abs); err != nil {
+			return nil, "", err
+		}
+	}
 	return analysis.NewWorkspace(root, readFile, s), abs, nil
+}
+
+// checkRoot checks a --root given on the command line: an existing
+// directory that holds each file (absolute paths). Anything else is a usage
+// error, reported before any include is resolved against it.
+func checkRoot(flag, root string, files ...string) error {
+	st, err := os.Stat(root)
+	switch {
+	case err != nil && os.IsNotExist(err):
+		return usagef("--root %s: no such directory", flag)
+	case err != nil:
+		return usagef("--root %s: %v", flag, err)
+	case !st.IsDir():
+		return usagef("--root %s is not a directory", flag)
+	}
+	for _, f := range files {
+		rel, err := filepath.Rel(root, f)
+		if err != nil || rel == ".." || strings.HasPrefix(rel, ".."+string(filepath.Separator)) {
+			return usagef("--root %s does not contain %s: the workspace root must be a directory above the files", flag, displayPath(f))
+		}
+	}
+	return nil
 }
 
 // displayPath shows path relative to the working directory when it is below it.

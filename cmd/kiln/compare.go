@@ -172,6 +172,11 @@ func runCompare(e env, args []string) (int, error) {
 	if errA != nil || errB != nil {
 		return 0, fmt.Errorf("resolving paths: %v %v", errA, errB)
 	}
+	if flags["root"] != "" {
+		if err := checkRoot(flags["root"], root, absA, absB); err != nil {
+			return 0, err
+		}
+	}
 	ws := analysis.NewWorkspace(root, readFile, set)
 	c, err := ws.Compare(context.Background(), absA, absB, opts)
 	if err != nil {

@@ -257,3 +257,31 @@ func TestFillSymlinkAndReadOnly(t *testing.T) {
 	require.NoError(t, err)
 	assert.Equal(t, "species ethane CC\n", string(got))
 }
+
+// TestRootUsage: a --root that does not exist, is not a directory or does
+// not hold the file is a usage error that says so.
+func TestRootUsage(t *testing.T) {
+	main := includeMechanism(t)
+	dir := filepath.Dir(main)
+	for _, tc := range []struct {
+		root, want string
+	}{
+		{filepath.Join(dir, "nowhere"), "no such directory"},
+		{main, "is not a directory"},
+		{filepath.Join(dir, "sub"), "does not contain"},
+	} {
+		for _, args := range [][]string{
+			{"check", "--root", tc.root, main},
+			{"summary", "--root", tc.root, main},
+			{"compare", "--root", tc.root, main, main},
+		} {
+			code, _, stderr := runKiln(t, args...)
+			assert.Equal(t, exitUsage, code, args)
+			assert.Contains(t, stderr, "--root", args)
+			assert.Contains(t, stderr, tc.want, args)
+			assert.NotContains(t, stderr, "leaves the workspace", args)
+		}
+	}
+	code, _, stderr := runKiln(t, "check", "--root", dir, main)
+	assert.Equal(t, exitOK, code, stderr)
+}
