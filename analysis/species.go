@@ -53,6 +53,11 @@ func (a *analysis) species() error {
 			if err := a.ctx.Err(); err != nil {
 				return err
 			}
+			if !speciesfile.ValidName(d.Name.Text) {
+				// The reader reported the name (missing, a number, a
+				// reserved word): input that failed to parse is not data.
+				continue
+			}
 			sp := &Species{Name: d.Name.Text, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
 			if first, dup := a.res.ByName[sp.Name]; dup {
 				// An error: a simulator reading the file may take either
@@ -441,6 +446,9 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		}
 		if sp.SMILESError != nil || sp.rootReported {
 			return // bad-smiles or missing-group already says what to fix
+		}
+		if sp.Mol == nil && a.res.Files[path].ErrorIn(d.Name.Span) {
+			return // the reader's error on the declaration says what is missing
 		}
 		why := "it has no structure (SMILES) to estimate from"
 		if sp.estimateErr != nil {

@@ -680,6 +680,11 @@ func (p *parser) group(toks []Token, base StmtBase) Stmt {
 	return st
 }
 
+// ValidName reports whether text can name a species: not empty, not a
+// number and not a reserved word of the reaction syntax. A declaration
+// whose name is not valid is reported by the reader and is not data.
+func ValidName(text string) bool { return text != "" && nameProblem(text) == "" }
+
 // nameProblem returns why text cannot be a species name, or "".
 func nameProblem(text string) string {
 	switch text {
