@@ -5,6 +5,8 @@ import (
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/speciesfile"
 )
 
 // TestInvalidNamesAreNotData: a species statement without a name, or named
@@ -27,4 +29,26 @@ func TestInvalidNamesAreNotData(t *testing.T) {
 		assert.Equal(t, []string{"syntax"}, byLine[line], "line %d", line)
 	}
 	require.Len(t, byLine[1], 0)
+}
+
+// TestBrokenReactionsOnlySyntax: a reaction whose equation or rate lines
+// have a syntax error gets that error only — no unbalanced-reaction,
+// undeclared-species or duplicate-reaction, and it is no one's duplicate.
+func TestBrokenReactionsOnlySyntax(t *testing.T) {
+	res := analyzeText(t, `species H [H]
+species HO2 [O]O
+species H2O O
+species A CC
+reaction H + HO2 <=> H2O   A=1e13 n=0 Ea=1.5d3
+reaction H + HO2 <=> H2O + X   A=1e13 n=0
+reaction
+reaction A
+reaction A <=> B +
+reaction A <=> B +
+`)
+	for _, d := range res.Diagnostics {
+		if d.Severity == speciesfile.SeverityError || d.Severity == speciesfile.SeverityWarning {
+			assert.Equal(t, "syntax", d.Code, "%s", d.Message)
+		}
+	}
 }
