@@ -52,3 +52,30 @@ reaction A <=> B +
 		}
 	}
 }
+
+// TestNonphysicalRate: Troe parameters that make the falloff rate
+// impossible to evaluate are an error on the troe line, and the rate is
+// not used; usable ones are not flagged.
+func TestNonphysicalRate(t *testing.T) {
+	const head = "species CH3 [CH3]\nspecies C2H6 CC\nreaction CH3 + CH3 (+M) <=> C2H6 (+M)   A=2.1e16 n=-0.97 Ea=0.62\n  low-pressure A=1.27e41 n=-7.0 Ea=2.76\n"
+	for _, c := range []struct{ troe, want string }{
+		{"  troe alpha=5 T3=-73 T1=-1180\n", "troe T3=-73 K is negative"},
+		{"  troe alpha=5 T3=1e30 T1=73\n", "troe parameters give Fcent = -"},
+		{"  troe alpha=0.62 T3=73 T1=1180 T2=-10\n", "troe T2=-10 K is negative"},
+		{"  troe alpha=0.62 T3=73 T1=1180\n", ""},
+		{"  troe alpha=0.62 T3=0 T1=0 T2=0\n", ""},
+	} {
+		res := analyzeText(t, head+c.troe)
+		msgs := messagesWithCode(res, speciesfile.CodeNonphysicalRate)
+		r := res.Reactions[0]
+		if c.want == "" {
+			assert.Empty(t, msgs, c.troe)
+			assert.NotNil(t, r.ForwardRate1000, c.troe)
+			continue
+		}
+		require.Len(t, msgs, 1, c.troe)
+		assert.Contains(t, msgs[0], c.want)
+		assert.Nil(t, r.ForwardRate1000, "a rate that cannot be evaluated is not used")
+		assert.Nil(t, r.Collision)
+	}
+}

@@ -68,6 +68,7 @@ const (
 	CodeDuplicateGroup   = "duplicate-group"
 	CodeThermoOutOfRange = "thermo-out-of-range"
 	CodeGroupOverride    = "group-override"
+	CodeNonphysicalRate  = "nonphysical-rate"
 )
 
 // Codes lists every diagnostic code, in FORMAT.md's order: the one list
@@ -75,7 +76,7 @@ const (
 var Codes = []string{CodeSyntax, CodeUndeclaredSpecies, CodeDuplicateSpecies, CodeBadSMILES, CodeUnbalancedReaction,
 	CodeMissingGroup, CodeMissingThermo, CodeThermoDiscontinuity, CodeThermoMismatch, CodeNonphysicalThermo,
 	CodeNoRate, CodeCollisionLimit, CodeDuplicateReaction, CodeBadInclude, CodeDuplicateGroup, CodeThermoOutOfRange,
-	CodeGroupOverride}
+	CodeGroupOverride, CodeNonphysicalRate}
 
 // Related points at another place (possibly in another file) that explains a
 // diagnostic, e.g. the first declaration of a duplicated species.
