@@ -1,6 +1,10 @@
 package analysis
 
 import (
+	"context"
+	"fmt"
+	"os"
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -78,4 +82,25 @@ func TestNonphysicalRate(t *testing.T) {
 		assert.Nil(t, r.ForwardRate1000, "a rate that cannot be evaluated is not used")
 		assert.Nil(t, r.Collision)
 	}
+}
+
+// TestDeepIncludeReportedAtTop: includes nested deeper than the limit are
+// reported on the analysed file's include, not only in a file further down.
+func TestDeepIncludeReportedAtTop(t *testing.T) {
+	files := map[string]string{}
+	for i := 0; i < 20; i++ {
+		files[fmt.Sprintf("/w/f%d.kiln", i)] = fmt.Sprintf("include f%d.kiln\nspecies S%d %s\n", i+1, i, strings.Repeat("C", i+1))
+	}
+	files["/w/f20.kiln"] = "species LAST [H]\n"
+	ws := NewWorkspace("/w", func(p string) ([]byte, error) {
+		if s, ok := files[p]; ok {
+			return []byte(s), nil
+		}
+		return nil, os.ErrNotExist
+	}, DefaultSettings())
+	res, err := ws.Analyze(context.Background(), "/w/f0.kiln")
+	require.NoError(t, err)
+	msgs := messagesWithCode(res, CodeBadInclude)
+	require.Len(t, msgs, 1, "%v", res.Diagnostics)
+	assert.Equal(t, "includes nested deeper than 16 files, in f16.kiln (through f1.kiln)", msgs[0])
 }
