@@ -104,3 +104,33 @@ func TestDeepIncludeReportedAtTop(t *testing.T) {
 	require.Len(t, msgs, 1, "%v", res.Diagnostics)
 	assert.Equal(t, "includes nested deeper than 16 files, in f16.kiln (through f1.kiln)", msgs[0])
 }
+
+// TestOutOfRangeInclude: a thermo block in an included file that the
+// analysed file's reactions evaluate outside its range is reported on the
+// reaction that needs it.
+func TestOutOfRangeInclude(t *testing.T) {
+	const lib = `species CH4 C
+  nasa7 300 1000 2000
+    low   4.9167871967e+00 -1.1483891112e-02  4.2511392855e-05 -4.0608001400e-08  1.3281315423e-11 -1.0262275517e+04 -3.7460786362e+00
+    high -2.6391815710e-01  1.4154495153e-02 -6.6354702565e-06  1.4933874433e-09 -1.3089122051e-13 -9.3613814741e+03  2.0295266791e+01
+`
+	const top = "include lib.kiln\nspecies H [H]\nspecies CH3 [CH3]\nspecies H2 [H][H]\nreaction CH4 + H <=> CH3 + H2   A=6.6e8 n=1.62 Ea=10.84\n"
+	files := map[string]string{"/w/lib.kiln": lib, "/w/top.kiln": top}
+	ws := NewWorkspace("/w", func(p string) ([]byte, error) {
+		if s, ok := files[p]; ok {
+			return []byte(s), nil
+		}
+		return nil, os.ErrNotExist
+	}, DefaultSettings())
+	res, err := ws.Analyze(context.Background(), "/w/top.kiln")
+	require.NoError(t, err)
+	var got []speciesfile.Diagnostic
+	for _, d := range res.Diagnostics {
+		if d.Code == speciesfile.CodeThermoOutOfRange {
+			got = append(got, d)
+		}
+	}
+	require.Len(t, got, 1, "%v", res.Diagnostics)
+	assert.Equal(t, strings.Index(top, "CH4 + H"), got[0].Span.Start)
+	assert.Contains(t, got[0].Message, "CH4: its thermo block (lib.kiln:2) covers 300–2000 K, but this reaction needs it from 298 K to 2500 K")
+}
