@@ -134,3 +134,16 @@ func TestOutOfRangeInclude(t *testing.T) {
 	assert.Equal(t, strings.Index(top, "CH4 + H"), got[0].Span.Start)
 	assert.Contains(t, got[0].Message, "CH4: its thermo block (lib.kiln:2) covers 300–2000 K, but this reaction needs it from 298 K to 2500 K")
 }
+
+// TestCompositionChecks: a composition naming a non-element is an error
+// (and not data); one that disagrees with the SMILES is a warning, and the
+// SMILES is used.
+func TestCompositionChecks(t *testing.T) {
+	res := analyzeText(t, "species E CC\n  composition C2H4\nspecies F CC\n  composition H6C2\nspecies lump\n  composition C10H8X\n")
+	mm := messagesWithCode(res, speciesfile.CodeCompositionMismatch)
+	require.Len(t, mm, 1, "%v", res.Diagnostics)
+	assert.Contains(t, mm[0], "composition C2H4 disagrees with the SMILES, which gives C2H6")
+	assert.Equal(t, "C2H6", res.ByName["E"].Formula)
+	assert.Equal(t, []string{`composition C10H8X: "X" is not a chemical element symbol`}, messagesWithCode(res, speciesfile.CodeSyntax))
+	assert.Empty(t, res.ByName["lump"].Composition, "a composition with a non-element is not data")
+}

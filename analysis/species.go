@@ -146,13 +146,44 @@ func (a *analysis) species() error {
 	return nil
 }
 
+// compositionElements reports a composition line naming a symbol that is
+// not a chemical element; false when there is one.
+func (a *analysis) compositionElements(path string, d *speciesfile.Species) bool {
+	for _, ec := range d.Formula {
+		if _, ok := molecule.AtomicWeight(ec.Symbol); !ok {
+			a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
+				Message: fmt.Sprintf("composition %s: %q is not a chemical element symbol", d.Composition.Text, ec.Symbol)})
+			return false
+		}
+	}
+	return true
+}
+
+// compositionAgrees warns when a species has both a structure and a
+// composition line and they disagree: the structure is used.
+func (a *analysis) compositionAgrees(path string, sp *Species) {
+	d := sp.Decl
+	comp := map[string]int{}
+	for _, ec := range d.Formula {
+		comp[ec.Symbol] += ec.Count
+	}
+	if got := molecule.HillFormula(comp); got != sp.Formula {
+		a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCompositionMismatch,
+			Message: fmt.Sprintf("composition %s disagrees with the SMILES, which gives %s; kiln uses the SMILES (balance, molar mass, thermo)", got, sp.Formula)})
+	}
+}
+
 // speciesRules runs the rules of one species declaration that read nothing
 // but the declaration (and the settings and user groups): structure,
 // composition, estimate, given thermo and the checks comparing them.
 func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupValue) {
 	d := sp.Decl
 	a.structure(path, sp)
-	if sp.Mol == nil && len(d.Formula) > 0 {
+	if !a.compositionElements(path, d) {
+		// Not a formula of elements: the error says so, and it is not data.
+	} else if sp.Mol != nil && len(d.Formula) > 0 {
+		a.compositionAgrees(path, sp)
+	} else if sp.Mol == nil && len(d.Formula) > 0 {
 		// The parser reports a malformed composition line.
 		comp := map[string]int{}
 		for _, ec := range d.Formula {
