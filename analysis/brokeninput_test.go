@@ -147,3 +147,29 @@ func TestCompositionChecks(t *testing.T) {
 	assert.Equal(t, []string{`composition C10H8X: "X" is not a chemical element symbol`}, messagesWithCode(res, speciesfile.CodeSyntax))
 	assert.Empty(t, res.ByName["lump"].Composition, "a composition with a non-element is not data")
 }
+
+// TestCpFloor: a given Cp below the translational and rotational heat
+// capacity of the species' shape is nonphysical-thermo, for tables and
+// polynomials; H2's real Cp (below 7/2 R near 298 K) is not.
+func TestCpFloor(t *testing.T) {
+	res := analyzeText(t, `species lump
+  composition C4H10
+  thermo-table
+    hf298 -30
+    s298 74
+    cp 300=1 400=20 500=25
+species CH4 C
+  nasa7 300 1000 5000
+    low   0.1 0 0 0 0 -10000 0
+    high  0.1 0 0 0 0 -10000 0
+species hyd [H][H]
+  thermo-table
+    hf298 0
+    s298 31.2
+    cp 300=6.9 400=6.97 500=7.0 600=7.01 800=7.08 1000=7.21 1500=7.73
+`)
+	msgs := messagesWithCode(res, speciesfile.CodeNonphysicalThermo)
+	require.Len(t, msgs, 2, "%v", msgs)
+	assert.Contains(t, msgs[0], "lump: Cp at 300 K is 1.00 cal/(mol·K), below 7.95 cal/(mol·K)")
+	assert.Contains(t, msgs[1], "CH4: Cp at 300 K is 0.20 cal/(mol·K)")
+}
