@@ -152,11 +152,13 @@ func (a *analysis) includes(path string, f *speciesfile.File, stack []string, de
 		}
 		if msg != "" {
 			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude, Message: msg})
-			if top != nil && strings.HasPrefix(msg, "include cycle") {
-				// A cycle further down is otherwise reported only in files
-				// that may never be analysed on their own: say it here too.
+			if top != nil {
+				// A problem further down (a cycle, nesting too deep, a
+				// path outside the workspace) is otherwise reported only in
+				// files that may never be analysed on their own: say it on
+				// the analysed file's include too.
 				a.report(a.res.Path, speciesfile.Diagnostic{Span: top.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
-					Message: fmt.Sprintf("%s (through %s)", msg, top.Path.Text)})
+					Message: fmt.Sprintf("%s, in %s (through %s)", msg, shortPath(path), top.Path.Text)})
 			}
 			continue
 		}
@@ -245,7 +247,9 @@ func (a *analysis) groups() {
 					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first definition"}}})
 				continue
 			}
-			if b, ok := builtinGroup(name); ok {
+			if b, ok := builtinGroup(name); ok && g.Hf298 != nil && g.S298 != nil && len(g.Cp) > 0 {
+				// Only a complete statement replaces the value (userGroups
+				// skips the others; the reader names what is missing).
 				a.report(path, speciesfile.Diagnostic{Span: g.Name.Span, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeGroupOverride,
 					Message: fmt.Sprintf("group %s replaces kiln's built-in value (%s; %s) for every species in scope", name, a.thermoSummary(b.Hf298, b.S298), b.Source)})
 			}

@@ -176,6 +176,12 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 	if !ok {
 		return
 	}
+	if span, why := nonphysicalRate(d, m); why != "" {
+		// A rate no reaction can have is not used: no k_f, no k_r, no
+		// collision check built on it.
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeNonphysicalRate, Message: why})
+		return
+	}
 	r.model = m
 	r.ForwardOrder, r.ReverseOrder = m.fwdOrder, m.revOrder
 	P := a.set.pressure()
@@ -251,3 +257,36 @@ func (r *Reaction) RatesAt(T, P float64) (kf, kr float64, okF, okR bool) {
 func (r *Reaction) PressureDependent() bool { return r.model != nil && r.model.PressureDependent() }
 
 func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+
+// nonphysicalRate returns where and why the rate lines of d describe no
+// possible reaction ("" when they are usable): a Troe parameter that is a
+// negative temperature, a Troe centre Fcent(T) that is not positive and
+// finite, or k_f(T) that is not a positive finite number, anywhere on
+// 300–2500 K (the temperatures kiln evaluates rates at) at 1 atm.
+func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.Span, string) {
+	span := d.Equation
+	if d.Rate != nil {
+		span = d.Rate.Span
+	}
+	if tr := d.Troe; tr != nil && m.falloff != nil && m.falloff.Troe != nil {
+		for _, p := range []struct {
+			name string
+			v    *speciesfile.Number
+		}{{"T3", tr.T3}, {"T1", tr.T1}, {"T2", tr.T2}} {
+			if p.v != nil && p.v.SI < 0 {
+				return tr.Span, fmt.Sprintf("troe %s=%g K is negative: the broadening terms exp(−T/T3), exp(−T/T1), exp(−T2/T) then grow without bound; the falloff rate is not used", p.name, p.v.SI)
+			}
+		}
+		for T := 300.0; T <= 2500; T += 100 {
+			if fc := m.falloff.Troe.Fcent(T); !(fc > 0) || math.IsInf(fc, 0) {
+				return tr.Span, fmt.Sprintf("troe parameters give Fcent = %.3g at %g K: the broadening centre must be positive and finite, so the falloff rate cannot be evaluated and is not used", fc, T)
+			}
+		}
+	}
+	for T := 300.0; T <= 2500; T += 100 {
+		if k := m.forward(T, 101325); !(k > 0) || math.IsInf(k, 0) {
+			return span, fmt.Sprintf("the forward rate constant is %.3g at %g K (1 atm): a rate constant must be a positive finite number, so this rate is not used", k, T)
+		}
+	}
+	return span, ""
+}

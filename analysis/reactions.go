@@ -37,6 +37,14 @@ func (a *analysis) reactions() error {
 			}
 			rt := a.memo.reactionText(path, f, k)
 			key := rt.dupKey
+			if f.ErrorIn(d.Body()) {
+				// A reaction the reader could not read completely gets
+				// its syntax error only: not compared with others.
+				if path == a.res.Path {
+					a.res.Reactions = append(a.res.Reactions, a.reaction(path, d, rt.equation))
+				}
+				continue
+			}
 			if first, dup := seen[key]; dup {
 				if d.Duplicate == nil || first.Duplicate == nil {
 					line := a.res.Files[seenFile[key]].Lines.Position(first.Equation.Start).Line + 1
@@ -141,6 +149,7 @@ func (a *analysis) rangeChecks() {
 	type need struct {
 		tmax float64
 		line int
+		eq   speciesfile.Span // the equation of that reaction (analysed file)
 	}
 	needs := map[*Species]need{}
 	for _, r := range a.res.Reactions {
@@ -158,18 +167,27 @@ func (a *analysis) rangeChecks() {
 					continue
 				}
 				if n, ok := needs[sp]; !ok || tmax > n.tmax {
-					needs[sp] = need{tmax, r.Line}
+					needs[sp] = need{tmax, r.Line, r.Decl.Equation}
 				}
 			}
 		}
 	}
 	for _, sp := range a.res.Species {
 		n, ok := needs[sp]
-		if !ok || sp.Loc.File != a.res.Path {
+		if !ok {
 			continue
 		}
 		lo, hi := sp.Given.Range()
 		if lo <= T298+rangeSlack && hi >= n.tmax-rangeSlack {
+			continue
+		}
+		if sp.Loc.File != a.res.Path {
+			// The block is in an included file: say it on the reaction
+			// of this file that needs it.
+			where := a.where(Location{File: sp.Loc.File, Span: sp.Given.Span})
+			a.report(a.res.Path, speciesfile.Diagnostic{Span: n.eq, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+				Message: fmt.Sprintf("%s: its thermo block (%s) covers %g–%g K, but this reaction needs it from 298 K to %g K; values outside the block are extrapolated",
+					sp.Name, where, lo, hi, n.tmax)})
 			continue
 		}
 		span := sp.Given.Span
@@ -249,9 +267,9 @@ func reactionKey(d *speciesfile.Reaction) string {
 func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation string) *Reaction {
 	f := a.res.Files[path]
 	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equation, Resolved: true, Kp: map[string]*float64{}}
-	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Equation) {
-		// An equation the reader could not read is not data: the syntax
-		// error is the one diagnostic.
+	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Body()) {
+		// A reaction the reader could not read (equation or rate lines)
+		// is not data: the syntax error is the one diagnostic.
 		r.Resolved = false
 		return r
 	}
