@@ -213,6 +213,10 @@ func TestBlockSourceOneWording(t *testing.T) {
 		require.NotNil(t, fromEst, est)
 		assert.Equal(t, fromFill[1], fromEst[1])
 		assert.Contains(t, fromFill[1], tc.want)
+		_, js, _ := runKiln(t, "estimate", "--nasa", "--json", tc.smiles)
+		var arr []map[string]any
+		require.NoError(t, json.Unmarshal([]byte(js), &arr))
+		assert.Equal(t, "source "+arr[0]["nasa7"].(map[string]any)["source"].(string), fromFill[1])
 		assert.NotRegexp(t, `\b(nasa|benson|reflib)\.[A-Z]`, fromFill[1])
 		if tc.smiles == "C" {
 			assert.NotContains(t, fromFill[1], "estimate")
