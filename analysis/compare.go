@@ -157,6 +157,7 @@ type compareSide struct {
 	byName    map[string]*Species
 	pos       map[string]int // name → index in species
 	reactions []sideReaction
+	fits      *fitShare // shared by both sides of a comparison
 }
 
 type sideReaction struct {
@@ -183,6 +184,8 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 		return nil, err
 	}
 	c := &Comparison{A: sa.summary(), B: sb.summary(), Settings: w.Settings(), RateFactor: opts.RateFactor}
+	fits := &fitShare{rep: map[fitKey]*Estimate{}}
+	sa.fits, sb.fits = fits, fits
 	matchA, matchB := matchSpecies(sa, sb)
 	matchResonance(sa, sb, matchA, matchB)
 	// Thermochemistry for the matched species, estimated where not given.
@@ -212,13 +215,18 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 	for i, sp := range need {
 		needSide[i].thermoOf(sp)
 	}
-	// The NASA-7 fits compareModel evaluates, on all cores (each estimate
-	// fits once).
-	if err := sa.a.parallel(len(need), 16, func(i int) {
-		if e := need[i].Estimate; e != nil && need[i].Source == SourceEstimate {
-			_, _, _ = e.NASA7()
+	// The NASA-7 fits compareModel evaluates, on all cores: one per
+	// distinct set of fit inputs (two spellings of a structure have the
+	// same estimate values, and their fits are the same function of them).
+	var reps []*Estimate
+	for _, sp := range need {
+		if sp.Source == SourceEstimate && sp.Estimate != nil {
+			if e, fresh := fits.of(sp.Estimate); fresh {
+				reps = append(reps, e)
+			}
 		}
-	}); err != nil {
+	}
+	if err := sa.a.parallel(len(reps), 16, func(i int) { _, _, _ = reps[i].NASA7() }); err != nil {
 		return nil, err
 	}
 	for i, sp := range sa.species {
@@ -234,7 +242,7 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 		}
 		pair := SpeciesPair{A: sa.ref(sp), B: sb.ref(other), By: by, SameEstimate: sameEstimate[i]}
 		if !pair.SameEstimate {
-			pair.Thermo = thermoDiff(sp, other, c.Settings)
+			pair.Thermo = fits.thermoDiff(sp, other, c.Settings)
 		}
 		c.Species = append(c.Species, pair)
 	}
@@ -499,9 +507,10 @@ func sameComposition(x, y map[string]int) bool {
 // of it compare equal at every temperature. Only when that fit fails (fill
 // then writes nothing) is the estimate's group model used. nil when sp has
 // no thermochemistry.
-func compareModel(sp *Species) thermoCurve {
+func (f *fitShare) compareModel(sp *Species) thermoCurve {
 	if sp.Source == SourceEstimate && sp.Estimate != nil {
-		if p, _, err := sp.Estimate.NASA7(); err == nil {
+		e, _ := f.of(sp.Estimate)
+		if p, _, err := e.NASA7(); err == nil {
 			return &p
 		}
 		return sp.Estimate.curve()
@@ -512,9 +521,37 @@ func compareModel(sp *Species) thermoCurve {
 	return nil
 }
 
+// fitKey is everything an estimate's NASA-7 fit depends on.
+type fitKey struct {
+	hf, s, cp0, cpInf, tMid, tHigh float64
+	cp                             [7]float64
+}
+
+// fitShare maps estimates with the same fit inputs to one representative,
+// whose fit (made once) stands for all of them. Used by one goroutine at a
+// time; the representatives' fits may run in parallel.
+type fitShare struct {
+	rep map[fitKey]*Estimate
+}
+
+// of returns the representative of e (fresh: e itself, new in the share).
+// A reference-library estimate represents itself (its polynomial is the
+// library's, or refitted from it).
+func (f *fitShare) of(e *Estimate) (rep *Estimate, fresh bool) {
+	if e.Library != "" {
+		return e, false
+	}
+	k := fitKey{hf: e.Hf298, s: e.S298, cp0: e.cp0, cpInf: e.cpInf, tMid: e.tMid, tHigh: e.tHigh, cp: e.Cp}
+	if r, ok := f.rep[k]; ok {
+		return r, false
+	}
+	f.rep[k] = e
+	return e, true
+}
+
 // thermoDiff compares the thermochemistry of a matched pair.
-func thermoDiff(a, b *Species, set Settings) *ThermoDiff {
-	ta, tb := compareModel(a), compareModel(b)
+func (f *fitShare) thermoDiff(a, b *Species, set Settings) *ThermoDiff {
+	ta, tb := f.compareModel(a), f.compareModel(b)
 	if ta == nil || tb == nil {
 		return nil
 	}
@@ -704,7 +741,7 @@ func (s *compareSide) kc(d *speciesfile.Reaction, T float64) (float64, bool) {
 				return nil, false
 			}
 			s.thermoOf(sp)
-			th := compareModel(sp)
+			th := s.fits.compareModel(sp)
 			if th == nil {
 				return nil, false
 			}
