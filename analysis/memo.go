@@ -87,8 +87,39 @@ func (w *Workspace) SetIncremental(on bool) {
 	defer w.mu.Unlock()
 	w.incremental = on
 	if !on {
-		w.memos = nil
+		w.memos, w.parses = nil, nil
 	}
+}
+
+// parse returns the syntax tree of text, the file at path. An incremental
+// workspace reads only the statements that changed since the latest parse
+// of the file (speciesfile.Reparse: the same tree as a parse from scratch)
+// and keeps the result for the next parse.
+func (w *Workspace) parse(path string, text []byte) *speciesfile.File {
+	w.mu.Lock()
+	on, old := w.incremental, w.parses[path]
+	w.mu.Unlock()
+	if !on {
+		return speciesfile.Parse(path, text)
+	}
+	var f *speciesfile.File
+	switch {
+	case old == nil:
+		f = speciesfile.Parse(path, text)
+	case bytes.Equal(old.Src, text):
+		return old
+	default:
+		f = speciesfile.Reparse(old, text, speciesfile.DiffEdit(old.Src, text))
+	}
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	if w.incremental {
+		if w.parses == nil {
+			w.parses = map[string]*speciesfile.File{}
+		}
+		w.parses[path] = f
+	}
+	return f
 }
 
 // startMemo returns the memo state for an analysis of path with the given
@@ -129,6 +160,7 @@ func (w *Workspace) ForgetFile(path string) {
 	w.mu.Lock()
 	defer w.mu.Unlock()
 	delete(w.memos, path)
+	delete(w.parses, path)
 }
 
 // file returns the alignment of file f (at path) with its last analysis,
