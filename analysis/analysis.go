@@ -174,4 +174,5 @@ type Reaction struct {
 
 	reactants, products kinetics.Side // thermo of each side, nil when unknown
 	diags               []speciesfile.Diagnostic
+	unit                *reactionUnit // the memoized unit the reaction was made from
 }

@@ -47,12 +47,18 @@ type memoTables struct {
 }
 
 // fileMemo holds the units of one file's statements, aligned with the
-// file's species and reaction lists (nil where none was made).
+// file's species and reaction lists (nil where none was made), and the
+// Species and Reaction values made from them. A value is reused as it is by
+// the next analysis when its statement is the same syntax node (the reader
+// kept it: same text at the same offsets) and its unit is kept; values are
+// never modified once their analysis is finished.
 type fileMemo struct {
 	file    *speciesfile.File
 	species []*speciesUnit
 	rtext   []*reactionText
 	rx      []*reactionUnit
+	sps     []*Species  // by f.Species index; nil for repeated names
+	rxs     []*Reaction // by f.Reactions index (the analysed file only)
 }
 
 // memo is the memoization state of one analysis: the tables it reads (old,
@@ -174,6 +180,8 @@ func (m *memo) file(path string, f *speciesfile.File) *alignment {
 		species: make([]*speciesUnit, len(f.Species)),
 		rtext:   make([]*reactionText, len(f.Reactions)),
 		rx:      make([]*reactionUnit, len(f.Reactions)),
+		sps:     make([]*Species, len(f.Species)),
+		rxs:     make([]*Reaction, len(f.Reactions)),
 	}
 	al := &alignment{}
 	if m.old != nil {
@@ -346,12 +354,71 @@ func (m *memo) species(path string, f *speciesfile.File, k int) *speciesUnit {
 	return u
 }
 
-// keepSpecies records a newly computed unit of species declaration k of
-// the file at path.
-func (m *memo) keepSpecies(path string, k int, u *speciesUnit) {
+// keepSpecies records the unit of species declaration k of the file at
+// path and the Species made from it.
+func (m *memo) keepSpecies(path string, k int, u *speciesUnit, sp *Species) {
 	if m != nil {
 		m.next.files[path].species[k] = u
+		m.next.files[path].sps[k] = sp
 	}
+}
+
+// oldSpecies returns the Species the last analysis made from unit u for
+// declaration k of file f (at path), when the declaration is the same
+// syntax node; nil otherwise.
+func (m *memo) oldSpecies(path string, f *speciesfile.File, k int, u *speciesUnit) *Species {
+	if m == nil || u == nil {
+		return nil
+	}
+	al := m.file(path, f)
+	if al.old == nil || al.species[k] < 0 {
+		return nil
+	}
+	o := al.old.sps[al.species[k]]
+	if o == nil || o.Decl != f.Species[k] || o.unit != u {
+		return nil
+	}
+	return o
+}
+
+// oldReaction returns the Reaction the last analysis made for reaction k of
+// file f (at path), when the statement is the same syntax node, at the same
+// line, fully resolved then and now (every name it uses is declared), and
+// was made from a unit (computeReactions checks that the unit still holds).
+func (m *memo) oldReaction(a *analysis, path string, f *speciesfile.File, k int, equation string) *Reaction {
+	if m == nil {
+		return nil
+	}
+	al := m.file(path, f)
+	if al.old == nil || al.reactions[k] < 0 {
+		return nil
+	}
+	d := f.Reactions[k]
+	o := al.old.rxs[al.reactions[k]]
+	if o == nil || o.Decl != d || !o.Resolved || o.unit == nil || o.Equation != equation || o.File != path {
+		return nil
+	}
+	for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
+		for _, t := range ts {
+			if _, ok := a.res.ByName[t.Name.Text]; !ok {
+				return nil
+			}
+		}
+	}
+	for _, e := range d.Efficiencies {
+		if _, ok := a.res.ByName[e.Name.Text]; !ok {
+			return nil
+		}
+	}
+	if c := falloffCollider(d); c != nil {
+		if _, ok := a.res.ByName[c.Text]; !ok {
+			return nil
+		}
+	}
+	if f.ErrorIn(d.Equation) || o.Line != StmtLine(f, d) {
+		return nil
+	}
+	return o
 }
 
 // reactionText is what follows from a reaction statement's text alone.
@@ -480,17 +547,21 @@ func newReactionUnit(energyUnit string, deps []*speciesUnit, r *Reaction) *react
 }
 
 // apply copies the unit's computed fields into r (everything but what r
-// was made with: its statement, file, line, equation and resolution).
+// was made with: its statement, file, line, equation and resolution) and
+// records the unit in r.
 func (u *reactionUnit) apply(r *Reaction) {
 	decl, file, line, eq, resolved := r.Decl, r.File, r.Line, r.Equation, r.Resolved
 	*r = u.tmpl
 	r.Decl, r.File, r.Line, r.Equation, r.Resolved = decl, file, line, eq, resolved
+	r.unit = u
 }
 
-// keepReaction records a newly computed unit of reaction k of the file at path.
-func (m *memo) keepReaction(path string, k int, u *reactionUnit) {
+// keepReaction records the unit of reaction k of the file at path and the
+// Reaction made from it.
+func (m *memo) keepReaction(path string, k int, u *reactionUnit, r *Reaction) {
 	if m != nil {
 		m.next.files[path].rx[k] = u
+		m.next.files[path].rxs[k] = r
 	}
 }
 

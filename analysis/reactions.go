@@ -55,7 +55,11 @@ func (a *analysis) reactions() error {
 			if path != a.res.Path {
 				continue
 			}
-			a.res.Reactions = append(a.res.Reactions, a.reaction(path, d, rt.equation))
+			r := a.memo.oldReaction(a, path, f, k, rt.equation)
+			if r == nil {
+				r = a.reaction(path, d, rt.equation)
+			}
+			a.res.Reactions = append(a.res.Reactions, r)
 		}
 	}
 	return a.computeReactions()
@@ -75,7 +79,14 @@ func (a *analysis) computeReactions() error {
 		if !r.Resolved {
 			continue
 		}
-		if u := a.memo.reaction(a, a.res.Path, f, i); u != nil {
+		u := a.memo.reaction(a, a.res.Path, f, i)
+		if r.unit != nil && r.unit != u {
+			// the last analysis's value, whose unit does not hold any
+			// more: it is not modified, a new value is made
+			r = &Reaction{Decl: r.Decl, File: r.File, Line: r.Line, Equation: r.Equation, Resolved: true}
+			rs[i] = r
+		}
+		if u != nil {
 			units[i] = u
 			continue
 		}
@@ -84,6 +95,7 @@ func (a *analysis) computeReactions() error {
 	err := a.parallel(len(todo), 256, func(k int) {
 		i := todo[k]
 		r := rs[i]
+		initKp(r)
 		a.balance(r.Decl, r)
 		// Thermochemistry of a reaction that does not balance means
 		// nothing: it is neither shown nor used for reverse rates.
@@ -115,8 +127,10 @@ func (a *analysis) computeReactions() error {
 			r.diags = nil
 			continue
 		}
-		u.apply(r)
-		a.memo.keepReaction(a.res.Path, i, u)
+		if r.unit != u {
+			u.apply(r)
+		}
+		a.memo.keepReaction(a.res.Path, i, u, r)
 		a.res.Diagnostics = appendRelocated(a.res.Diagnostics, u.diags, r.File, r.Decl.Body().Start)
 	}
 	a.rangeChecks()
@@ -248,15 +262,13 @@ func reactionKey(d *speciesfile.Reaction) string {
 // blanks collapsed); computeReactions works out the rest.
 func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation string) *Reaction {
 	f := a.res.Files[path]
-	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equation, Resolved: true, Kp: map[string]*float64{}}
+	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equation, Resolved: true}
 	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Equation) {
 		// An equation the reader could not read is not data: the syntax
 		// error is the one diagnostic.
 		r.Resolved = false
+		r.Kp = map[string]*float64{}
 		return r
-	}
-	for _, k := range keqTemperatures {
-		r.Kp[k.Key] = nil
 	}
 	undeclared := func(t speciesfile.Token, what string) {
 		msg := fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)
@@ -273,6 +285,9 @@ func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation strin
 			}
 		}
 	}
+	if !r.Resolved {
+		initKp(r)
+	} // else computeReactions makes Kp (or takes it from a kept unit)
 	for _, e := range d.Efficiencies {
 		if _, ok := a.res.ByName[e.Name.Text]; !ok {
 			undeclared(e.Name, "third-body efficiency for")
@@ -284,6 +299,15 @@ func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation strin
 		}
 	}
 	return r
+}
+
+// initKp gives r the Kp entries of every reported temperature, unknown
+// (nil) until the thermochemistry is worked out.
+func initKp(r *Reaction) {
+	r.Kp = make(map[string]*float64, len(keqTemperatures))
+	for _, k := range keqTemperatures {
+		r.Kp[k.Key] = nil
+	}
 }
 
 // StmtLine returns the 1-based line of a statement as every command shows

@@ -41,6 +41,8 @@ func (a *analysis) species() error {
 		k    int // index in f.Species
 		sp   *Species
 		u    *speciesUnit
+		// reused: sp is the last analysis's value for the same unit
+		reused bool
 		// diags of the species' rules when there is no memo (no unit is
 		// made: nothing would reuse it).
 		diags []speciesfile.Diagnostic
@@ -53,22 +55,27 @@ func (a *analysis) species() error {
 			if err := a.ctx.Err(); err != nil {
 				return err
 			}
-			sp := &Species{Name: d.Name.Text, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
-			if first, dup := a.res.ByName[sp.Name]; dup {
+			name := d.Name.Text
+			if first, dup := a.res.ByName[name]; dup {
 				// An error: a simulator reading the file may take either
 				// declaration.
 				a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeDuplicateSpecies,
-					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", sp.Name, a.where(first.Loc)),
-					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first declaration of " + sp.Name}}})
+					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", name, a.where(first.Loc)),
+					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first declaration of " + name}}})
 				continue
 			}
-			a.res.ByName[sp.Name] = sp
-			a.res.Species = append(a.res.Species, sp)
 			u := a.memo.species(path, f, k)
+			sp := a.memo.oldSpecies(path, f, k, u)
+			reused := sp != nil
+			if !reused {
+				sp = &Species{Name: name, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
+			}
+			a.res.ByName[name] = sp
+			a.res.Species = append(a.res.Species, sp)
 			if u == nil {
 				todo = append(todo, len(items))
 			}
-			items = append(items, item{path: path, f: f, k: k, sp: sp, u: u})
+			items = append(items, item{path: path, f: f, k: k, sp: sp, u: u, reused: reused})
 		}
 	}
 	// The names whose unit is recomputed: every other declared name stands
@@ -112,8 +119,10 @@ func (a *analysis) species() error {
 	for _, it := range items {
 		sp := it.sp
 		if it.u != nil {
-			it.u.apply(sp, a.memo != nil)
-			a.memo.keepSpecies(it.path, it.k, it.u)
+			if !it.reused {
+				it.u.apply(sp, a.memo != nil)
+			}
+			a.memo.keepSpecies(it.path, it.k, it.u, sp)
 			if it.path == a.res.Path {
 				a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, sp.Decl.Body().Start)
 			}

@@ -194,9 +194,19 @@ func clamp(v, lo, hi int) int {
 	return v
 }
 
-// edited returns the index of src, which is li's text with e applied: the
-// lines before and after the edit are taken from li (those after moved by
-// the edit's length change), the lines around it are found again.
+// Edited returns the index of src, which must be li's text with e applied:
+// the lines before and after the edit are taken from li (those after moved
+// by the edit's length change), the lines around it are found again. The
+// result is the same as NewLineIndex(src); when src does not have the
+// length e implies, it is NewLineIndex(src).
+func (li *LineIndex) Edited(src []byte, e Edit) *LineIndex {
+	if e.Old.Start < 0 || e.Old.Start > e.Old.End || e.Old.End > len(li.src) || e.NewLen < 0 || len(src) != len(li.src)+e.Delta() {
+		return NewLineIndex(src)
+	}
+	return li.edited(src, e)
+}
+
+// edited is Edited for a consistent edit.
 func (li *LineIndex) edited(src []byte, e Edit) *LineIndex {
 	delta := e.Delta()
 	// Lines a-1 and b+1 around the edit are scanned again too: an edit next

@@ -107,6 +107,7 @@ func TestReparseMatchesScratch(t *testing.T) {
 					// larger than the smallest one
 					e = speciesfile.DiffEdit(cur, next)
 				}
+				require.Equal(t, speciesfile.NewLineIndex(next), f.Lines.Edited(next, e))
 				got := speciesfile.Reparse(f, next, e)
 				want := speciesfile.Parse(name, next)
 				if !reflect.DeepEqual(got, want) {
