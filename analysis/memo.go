@@ -113,7 +113,11 @@ func (w *Workspace) parse(path string, text []byte) *speciesfile.File {
 	case old == nil:
 		f = speciesfile.Parse(path, text)
 	case bytes.Equal(old.Src, text):
-		return old
+		// the same tree, but File.Src is the text given (callers compare
+		// the slice to tell which text a result is of)
+		same := *old
+		same.Src = text
+		f = &same
 	default:
 		f = speciesfile.Reparse(old, text, speciesfile.DiffEdit(old.Src, text))
 	}
