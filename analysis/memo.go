@@ -428,7 +428,13 @@ func (m *memo) oldReaction(a *analysis, path string, f *speciesfile.File, k int,
 // reactionText is what follows from a reaction statement's text alone.
 type reactionText struct {
 	dupKey   string // reactionKey
+	dupHash  uint64 // hashKey(dupKey)
 	equation string // equationText
+}
+
+func newReactionText(f *speciesfile.File, d *speciesfile.Reaction) *reactionText {
+	key := reactionKey(d)
+	return &reactionText{dupKey: key, dupHash: hashKey(key), equation: equationText(f, d)}
 }
 
 // reactionText returns the text unit of reaction k of file f (at path),
@@ -436,7 +442,7 @@ type reactionText struct {
 func (m *memo) reactionText(path string, f *speciesfile.File, k int) *reactionText {
 	d := f.Reactions[k]
 	if m == nil {
-		return &reactionText{dupKey: reactionKey(d), equation: equationText(f, d)}
+		return newReactionText(f, d)
 	}
 	al := m.file(path, f)
 	var u *reactionText
@@ -444,7 +450,7 @@ func (m *memo) reactionText(path string, f *speciesfile.File, k int) *reactionTe
 		u = al.old.rtext[al.reactions[k]]
 	}
 	if u == nil {
-		u = &reactionText{dupKey: reactionKey(d), equation: equationText(f, d)}
+		u = newReactionText(f, d)
 	}
 	m.next.files[path].rtext[k] = u
 	return u

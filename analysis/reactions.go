@@ -26,9 +26,17 @@ func (a *analysis) reactions() error {
 	for _, path := range a.order {
 		n += len(a.res.Files[path].Reactions)
 	}
-	seen := make(map[string]*speciesfile.Reaction, n)
-	seenFile := make(map[string]string, n)
-	a.res.Reactions = make([]*Reaction, 0, len(a.res.File.Reactions))
+	// First occurrences by duplicate key: the map is keyed by the key's
+	// hash (made once per reaction text unit) and chains entries of
+	// different keys sharing a hash.
+	type occurrence struct {
+		key  string
+		d    *speciesfile.Reaction
+		file string
+		next int32 // index of the next occurrence with the same hash, -1 for none
+	}
+	seen := make(map[uint64]int32, n)
+	occs := make([]occurrence, 0, n)
 	for _, path := range a.order {
 		f := a.res.Files[path]
 		for k, d := range f.Reactions {
@@ -37,20 +45,34 @@ func (a *analysis) reactions() error {
 			}
 			rt := a.memo.reactionText(path, f, k)
 			key := rt.dupKey
-			if first, dup := seen[key]; dup {
-				if d.Duplicate == nil || first.Duplicate == nil {
-					line := a.res.Files[seenFile[key]].Lines.Position(first.Equation.Start).Line + 1
+			var first *occurrence
+			head, hashed := seen[rt.dupHash]
+			if hashed {
+				for i := head; i >= 0; i = occs[i].next {
+					if occs[i].key == key {
+						first = &occs[i]
+						break
+					}
+				}
+			}
+			if first != nil {
+				if d.Duplicate == nil || first.d.Duplicate == nil {
+					line := a.res.Files[first.file].Lines.Position(first.d.Equation.Start).Line + 1
 					where := fmt.Sprintf("line %d", line)
-					if seenFile[key] != path {
-						where = fmt.Sprintf("%s:%d", shortPath(seenFile[key]), line)
+					if first.file != path {
+						where = fmt.Sprintf("%s:%d", shortPath(first.file), line)
 					}
 					a.report(path, speciesfile.Diagnostic{Span: d.Equation, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateReaction,
 						Message: fmt.Sprintf("this reaction repeats the one at %s; mark both with `duplicate` if both channels are intended", where),
-						Related: []speciesfile.Related{{File: seenFile[key], Span: first.Equation, Message: "first occurrence"}}})
+						Related: []speciesfile.Related{{File: first.file, Span: first.d.Equation, Message: "first occurrence"}}})
 				}
 			} else {
-				seen[key] = d
-				seenFile[key] = path
+				next := int32(-1)
+				if hashed {
+					next = head
+				}
+				seen[rt.dupHash] = int32(len(occs))
+				occs = append(occs, occurrence{key: key, d: d, file: path, next: next})
 			}
 			if path != a.res.Path {
 				continue
@@ -155,6 +177,16 @@ func (a *analysis) rangeChecks() {
 	type need struct {
 		tmax float64
 		line int
+	}
+	given := false // only blocks of the analysed file are checked
+	for _, sp := range a.res.Species {
+		if sp.Source == SourceFile && sp.Loc.File == a.res.Path {
+			given = true
+			break
+		}
+	}
+	if !given {
+		return
 	}
 	needs := map[*Species]need{}
 	for _, r := range a.res.Reactions {

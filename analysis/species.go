@@ -115,7 +115,7 @@ func (a *analysis) species() error {
 		}
 	}
 	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
-	byStructure := make(map[string][]*Species, len(items))
+	byStructure := make(map[uint64][]*Species, len(items))
 	for _, it := range items {
 		sp := it.sp
 		if it.u != nil {
@@ -177,6 +177,7 @@ func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupVal
 			// the same structure.
 			sp.structKey = resonanceKeyPrefix + e.Group.Form + "|m" + strconv.Itoa(effectiveMultiplicity(a.w.cache.lib, sp))
 		}
+		sp.structHash = hashKey(sp.structKey)
 	}
 	a.given(path, sp)
 	a.thermoChecks(path, sp)
@@ -191,19 +192,37 @@ const resonanceKeyPrefix = "resonance|"
 // multiplicity of sp, and records sp. Species are bucketed by a cheap graph
 // invariant first; canonical forms are computed only within a bucket, so
 // most species never need one.
-func sameStructure(seen map[string][]*Species, sp *Species) *Species {
+//
+// The map is keyed by a hash of the bucket key made once per unit (hashing
+// the long keys of every species on every analysis cost more than the rest
+// of the search); species of other keys sharing a hash are skipped.
+func sameStructure(seen map[uint64][]*Species, sp *Species) *Species {
 	k := sp.structKey
-	bucket := seen[k]
-	if len(bucket) > 0 && strings.HasPrefix(k, resonanceKeyPrefix) {
-		return bucket[0] // the key is the canonical representative itself
-	}
+	bucket := seen[sp.structHash]
+	resonance := strings.HasPrefix(k, resonanceKeyPrefix)
 	for _, other := range bucket {
+		if other.structKey != k {
+			continue
+		}
+		if resonance {
+			return other // the key is the canonical representative itself
+		}
 		if identity(other.Mol) == identity(sp.Mol) {
 			return other
 		}
 	}
-	seen[k] = append(bucket, sp)
+	seen[sp.structHash] = append(bucket, sp)
 	return nil
+}
+
+// hashKey is the 64-bit FNV-1a hash of s.
+func hashKey(s string) uint64 {
+	h := uint64(14695981039346656037)
+	for i := 0; i < len(s); i++ {
+		h ^= uint64(s[i])
+		h *= 1099511628211
+	}
+	return h
 }
 
 // invariant is a cheap fingerprint of a molecular graph that equal graphs
