@@ -71,6 +71,9 @@ type memo struct {
 	old, next *memoTables
 	align     map[string]*alignment
 	changed   map[string]bool // names of the species whose unit was recomputed
+	// the alignment asked for last (file is called once per statement)
+	lastPath string
+	lastAl   *alignment
 }
 
 // alignment maps a file's statements to those of its last analysis.
@@ -176,7 +179,11 @@ func (w *Workspace) ForgetFile(path string) {
 // file returns the alignment of file f (at path) with its last analysis,
 // creating its next tables on first use.
 func (m *memo) file(path string, f *speciesfile.File) *alignment {
+	if m.lastAl != nil && m.lastPath == path {
+		return m.lastAl
+	}
 	if al := m.align[path]; al != nil {
+		m.lastPath, m.lastAl = path, al
 		return al
 	}
 	m.next.files[path] = &fileMemo{
@@ -196,6 +203,7 @@ func (m *memo) file(path string, f *speciesfile.File) *alignment {
 		}
 	}
 	m.align[path] = al
+	m.lastPath, m.lastAl = path, al
 	return al
 }
 
