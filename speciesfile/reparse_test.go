@@ -156,3 +156,28 @@ func TestDiffEdit(t *testing.T) {
 type recorder struct{ msg string }
 
 func (r *recorder) Errorf(format string, args ...any) { r.msg = fmt.Sprintf(format, args...) }
+
+// FuzzReparse: for any text and any edit of it, reading the edited text
+// incrementally gives the same parse as reading it from scratch.
+func FuzzReparse(f *testing.F) {
+	base, err := os.ReadFile("../testdata/speciesfile/all-statements.kiln")
+	if err == nil {
+		f.Add(base, 40, 3, []byte("  note x\n"))
+		f.Add(base, 200, 0, []byte("\n  bogus 1\n"))
+	}
+	f.Add([]byte("species A C\nspecies B CC\n  multiplicity 2\nreaction A => B A=1 n=0 Ea=0\n"), 12, 1, []byte(" "))
+	f.Fuzz(func(t *testing.T, src []byte, at, n int, ins []byte) {
+		if len(src) == 0 || len(src) > 1<<16 || len(ins) > 1<<12 {
+			return
+		}
+		at = (at%len(src) + len(src)) % len(src)
+		n = min((n%64+64)%64, len(src)-at)
+		next := append(append(append([]byte{}, src[:at]...), ins...), src[at+n:]...)
+		old := speciesfile.Parse("fuzz.kiln", src)
+		got := speciesfile.Reparse(old, next, speciesfile.Edit{Old: speciesfile.Span{Start: at, End: at + n}, NewLen: len(ins)})
+		want := speciesfile.Parse("fuzz.kiln", next)
+		if !reflect.DeepEqual(got, want) {
+			t.Fatalf("incremental parse differs from scratch: %s", fileDiff(got, want))
+		}
+	})
+}
