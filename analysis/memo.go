@@ -427,7 +427,7 @@ func (m *memo) oldReaction(a *analysis, path string, f *speciesfile.File, k int,
 			return nil
 		}
 	}
-	if f.ErrorIn(d.Equation) || o.Line != StmtLine(f, d) {
+	if f.ErrorIn(d.Body()) || o.Line != StmtLine(f, d) {
 		return nil
 	}
 	return o
