@@ -192,7 +192,7 @@ func Reparse(old *File, src []byte, e Edit) *File {
 func (p *parser) readFrom(start, from int, stop func(end int) (int, bool)) (int, bool) {
 	f := p.f
 	nStmts, nDiags := len(f.Stmts), len(f.Diags)
-	for size := 16 << 10; ; size *= 4 {
+	for size := 4 << 10; ; size *= 4 {
 		hi := min(len(p.src), max(start, from)+size)
 		p.s, p.sBase, p.overflow = string(p.src[start:hi]), start, false
 		j, ok := p.readStmts(start, stop)

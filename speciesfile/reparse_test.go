@@ -50,7 +50,7 @@ var fragments = []string{
 	"reaction Q1 + H <=> Q2 + H2 A=1e13 n=0 Ea=5\n", "  A=1 n=0 Ea=1\n", "  duplicate\n",
 	"  nasa7 300 1000 5000\n    low 1 2 3 4 5 6 7\n    high 1 2 3 4 5 6 7\n",
 	"\xff", "\x00", "é", "  note hello\n", "\n\n", "    ",
-	// longer than the reader's first window of token text
+	// longer than the reader's first windows of token text (4 KiB, then 16 KiB)
 	"  note " + strings.Repeat("long ", 5000) + "\n",
 }
 
