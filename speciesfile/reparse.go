@@ -72,10 +72,14 @@ func DiffEdit(a, b []byte) Edit {
 // what it can of old (see the notes above). The result is the same as
 // Parse(old.Name, src). When src does not have the length e implies, it is
 // parsed from scratch; its unchanged parts are trusted, not compared (use
-// DiffEdit to make an edit from two texts).
+// DiffEdit to make an edit from two texts). A nil old parses src from
+// scratch under the name "".
 func Reparse(old *File, src []byte, e Edit) *File {
+	if old == nil {
+		return Parse("", src)
+	}
 	delta := e.Delta()
-	if old == nil || e.Old.Start < 4 || e.Old.Start > e.Old.End || e.Old.End > len(old.Src) || e.NewLen < 0 ||
+	if e.Old.Start < 4 || e.Old.Start > e.Old.End || e.Old.End > len(old.Src) || e.NewLen < 0 ||
 		len(src) != len(old.Src)+delta || len(src) > MaxFileSize || len(old.Src) > MaxFileSize || len(old.Stmts) < 2 {
 		return Parse(old.Name, src)
 	}

@@ -181,3 +181,21 @@ func FuzzReparse(f *testing.F) {
 		}
 	})
 }
+
+// TestReparseFallbacks: inconsistent edits and a missing old parse read the
+// text from scratch.
+func TestReparseFallbacks(t *testing.T) {
+	src := []byte("species A C\nspecies B CC\n")
+	next := []byte("species A C\nspecies B CCC\n")
+	old := speciesfile.Parse("f.kiln", src)
+	want := speciesfile.Parse("f.kiln", next)
+	for _, e := range []speciesfile.Edit{
+		{Old: speciesfile.Span{Start: 22, End: 22}, NewLen: 5},  // wrong length
+		{Old: speciesfile.Span{Start: 30, End: 20}, NewLen: 1},  // backwards
+		{Old: speciesfile.Span{Start: 22, End: 400}, NewLen: 1}, // past the end
+		{Old: speciesfile.Span{Start: 0, End: 0}, NewLen: 1},    // start of file
+	} {
+		require.True(t, reflect.DeepEqual(want, speciesfile.Reparse(old, next, e)), "%+v", e)
+	}
+	require.True(t, reflect.DeepEqual(speciesfile.Parse("", next), speciesfile.Reparse(nil, next, speciesfile.Edit{})))
+}
