@@ -111,6 +111,15 @@ func TestOpticalIsomersMolecule(t *testing.T) {
 	assert.Equal(t, 1, parse(t, "CC(C)CC(C)C").OpticalIsomers())
 	assert.Equal(t, 1, parse(t, "CCC(CC)C").OpticalIsomers())
 	assert.Equal(t, 1, parse(t, "C1C2CC3CC1CC(C2)C3").OpticalIsomers(), "adamantane bridgeheads have two alike ring paths")
+	// Configurationally stable heteroatom centres: a sulfoxide S with three
+	// different partners and its lone pair, a phosphine P; not a sulfone S
+	// (two alike O), not an amine N (fast inversion).
+	assert.Equal(t, 2, parse(t, "CCS(C)=O").OpticalIsomers(), "ethyl methyl sulfoxide")
+	assert.Equal(t, 1, parse(t, "CS(C)=O").OpticalIsomers())
+	assert.Equal(t, 1, parse(t, "CCS(C)(=O)=O").OpticalIsomers())
+	assert.Equal(t, 2, parse(t, "CCP(C)c1ccccc1").OpticalIsomers(), "ethylmethylphenylphosphine")
+	assert.Equal(t, 1, parse(t, "CCN(C)CCC").OpticalIsomers(), "amine N inverts")
+	assert.Equal(t, 4, parse(t, "CC(O)CS(C)=O").OpticalIsomers())
 }
 
 func TestCanonicalContext(t *testing.T) {
