@@ -152,11 +152,13 @@ func (a *analysis) includes(path string, f *speciesfile.File, stack []string, de
 		}
 		if msg != "" {
 			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude, Message: msg})
-			if top != nil && strings.HasPrefix(msg, "include cycle") {
-				// A cycle further down is otherwise reported only in files
-				// that may never be analysed on their own: say it here too.
+			if top != nil {
+				// A problem further down (a cycle, nesting too deep, a
+				// path outside the workspace) is otherwise reported only in
+				// files that may never be analysed on their own: say it on
+				// the analysed file's include too.
 				a.report(a.res.Path, speciesfile.Diagnostic{Span: top.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
-					Message: fmt.Sprintf("%s (through %s)", msg, top.Path.Text)})
+					Message: fmt.Sprintf("%s, in %s (through %s)", msg, shortPath(path), top.Path.Text)})
 			}
 			continue
 		}

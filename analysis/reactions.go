@@ -185,6 +185,7 @@ func (a *analysis) rangeChecks() {
 	type need struct {
 		tmax float64
 		line int
+		eq   speciesfile.Span // the equation of that reaction (analysed file)
 	}
 	given := false // only blocks of the analysed file are checked
 	for _, sp := range a.res.Species {
@@ -212,18 +213,27 @@ func (a *analysis) rangeChecks() {
 					continue
 				}
 				if n, ok := needs[sp]; !ok || tmax > n.tmax {
-					needs[sp] = need{tmax, r.Line}
+					needs[sp] = need{tmax, r.Line, r.Decl.Equation}
 				}
 			}
 		}
 	}
 	for _, sp := range a.res.Species {
 		n, ok := needs[sp]
-		if !ok || sp.Loc.File != a.res.Path {
+		if !ok {
 			continue
 		}
 		lo, hi := sp.Given.Range()
 		if lo <= T298+rangeSlack && hi >= n.tmax-rangeSlack {
+			continue
+		}
+		if sp.Loc.File != a.res.Path {
+			// The block is in an included file: say it on the reaction
+			// of this file that needs it.
+			where := a.where(Location{File: sp.Loc.File, Span: sp.Given.Span})
+			a.report(a.res.Path, speciesfile.Diagnostic{Span: n.eq, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+				Message: fmt.Sprintf("%s: its thermo block (%s) covers %g–%g K, but this reaction needs it from 298 K to %g K; values outside the block are extrapolated",
+					sp.Name, where, lo, hi, n.tmax)})
 			continue
 		}
 		span := sp.Given.Span

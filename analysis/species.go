@@ -155,13 +155,44 @@ func (a *analysis) species() error {
 	return nil
 }
 
+// compositionElements reports a composition line naming a symbol that is
+// not a chemical element; false when there is one.
+func (a *analysis) compositionElements(path string, d *speciesfile.Species) bool {
+	for _, ec := range d.Formula {
+		if _, ok := molecule.AtomicWeight(ec.Symbol); !ok {
+			a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
+				Message: fmt.Sprintf("composition %s: %q is not a chemical element symbol", d.Composition.Text, ec.Symbol)})
+			return false
+		}
+	}
+	return true
+}
+
+// compositionAgrees warns when a species has both a structure and a
+// composition line and they disagree: the structure is used.
+func (a *analysis) compositionAgrees(path string, sp *Species) {
+	d := sp.Decl
+	comp := map[string]int{}
+	for _, ec := range d.Formula {
+		comp[ec.Symbol] += ec.Count
+	}
+	if got := molecule.HillFormula(comp); got != sp.Formula {
+		a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCompositionMismatch,
+			Message: fmt.Sprintf("composition %s disagrees with the SMILES, which gives %s; kiln uses the SMILES (balance, molar mass, thermo)", got, sp.Formula)})
+	}
+}
+
 // speciesRules runs the rules of one species declaration that read nothing
 // but the declaration (and the settings and user groups): structure,
 // composition, estimate, given thermo and the checks comparing them.
 func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupValue) {
 	d := sp.Decl
 	a.structure(path, sp)
-	if sp.Mol == nil && len(d.Formula) > 0 {
+	if !a.compositionElements(path, d) {
+		// Not a formula of elements: the error says so, and it is not data.
+	} else if sp.Mol != nil && len(d.Formula) > 0 {
+		a.compositionAgrees(path, sp)
+	} else if sp.Mol == nil && len(d.Formula) > 0 {
 		// The parser reports a malformed composition line.
 		comp := map[string]int{}
 		for _, ec := range d.Formula {
@@ -518,6 +549,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 	if g.Table != nil {
 		a.tableChecks(path, sp)
 	}
+	a.cpFloor(path, sp)
 	defects := a.reported() > before
 	if sp.Estimate == nil {
 		return
@@ -608,7 +640,19 @@ func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.S
 		}
 	}
 	if math.Abs(worstCp) > a.set.MismatchCp {
-		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+		cpSpan := span
+		if t := sp.Decl.Table; t != nil && len(t.Cp) > 0 {
+			// A table's Cp mismatch points at the tabulated value nearest
+			// the worst temperature.
+			best := t.Cp[0]
+			for _, p := range t.Cp {
+				if math.Abs(p.T.SI-worstCpT) < math.Abs(best.T.SI-worstCpT) {
+					best = p
+				}
+			}
+			cpSpan = speciesfile.Span{Start: best.T.Tok.Span.Start, End: best.Cp.Tok.Span.End}
+		}
+		a.report(path, speciesfile.Diagnostic{Span: cpSpan, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
 			Message: fmt.Sprintf("%s: Cp at %g K given %s vs %s %s (difference %s, threshold %s)",
 				sp.Name, worstCpT, a.entropy(cpGiven), what, a.entropy(cpRef), a.entropy(worstCp), a.entropy(a.set.MismatchCp))})
 		return
@@ -639,6 +683,70 @@ func (a *analysis) problemMessage(p nasa.Problem) string {
 		return fmt.Sprintf("Cp = %s at %.0f K exceeds %s, the classical limit with the allowance for electronic states and anharmonicity", u.Entropy(p.Value), p.T, u.Entropy(p.Other))
 	}
 	return p.Message
+}
+
+// cpFloor reports given heat capacities below what every ideal-gas molecule
+// of the species' shape has from translation and rotation alone (5/2 R for
+// an atom, 7/2 R linear, 4 R non-linear; nasa.ClassicalLimits), from 298 K
+// up, with 5 % slack: vibrations and electronic states only add to it. (The
+// slack and the lower bound of 298 K leave room for H2, whose rotational
+// heat capacity is not classical at low temperature: 28.8 J/(mol K) at
+// 298 K against 7/2 R = 29.1, NIST-JANAF, common practice.)
+func (a *analysis) cpFloor(path string, sp *Species) {
+	if sp.Mol == nil && len(sp.Composition) == 0 {
+		return // shape unknown
+	}
+	n, lin, _ := a.shapeOf(sp)
+	cp0, _ := nasa.ClassicalLimits(n, lin, 0)
+	if cp0 <= 0 {
+		return
+	}
+	floor := 0.95 * cp0
+	d, g := sp.Decl, sp.Given
+	report := func(span speciesfile.Span, T, cp float64) {
+		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+			Message: fmt.Sprintf("%s: Cp at %g K is %s, below %s, the translational and rotational heat capacity of any %s of %d atoms", sp.Name, T, a.entropy(cp), a.entropy(cp0), shapeWord(n, lin), n)})
+	}
+	if t := d.Table; t != nil && g.Table != nil {
+		for _, p := range t.Cp {
+			if p.Cp.SI > 0 && p.Cp.SI < floor && p.T.SI >= T298-rangeSlack {
+				report(speciesfile.Span{Start: p.T.Tok.Span.Start, End: p.Cp.Tok.Span.End}, p.T.SI, p.Cp.SI)
+				return
+			}
+		}
+	}
+	if b := d.NASA7; b != nil && g.Poly != nil {
+		p := g.Poly
+		for _, r := range []struct {
+			lo, hi float64
+			span   speciesfile.Span
+		}{{p.TLow, p.TMid, b.LowSpan}, {p.TMid, p.THigh, b.HighSpan}} {
+			if !(r.lo > 0 && r.hi > r.lo) {
+				return // the ranges are reported by nasa.Check
+			}
+			for i := 0; i <= 50; i++ {
+				T := r.lo + (r.hi-r.lo)*float64(i)/50
+				if T < T298-rangeSlack {
+					continue
+				}
+				if c := p.Cp(T); c > 0 && c < floor {
+					report(r.span, T, c)
+					return
+				}
+			}
+		}
+	}
+}
+
+// shapeWord names a molecular shape for messages.
+func shapeWord(n int, linear bool) string {
+	switch {
+	case n == 1:
+		return "atom"
+	case linear:
+		return "linear molecule"
+	}
+	return "non-linear molecule"
 }
 
 // tableChecks reports unsound tabulated Cp values.
