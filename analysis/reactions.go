@@ -187,9 +187,9 @@ func (a *analysis) rangeChecks() {
 		line int
 		eq   speciesfile.Span // the equation of that reaction (analysed file)
 	}
-	given := false // only blocks of the analysed file are checked
+	given := false // nothing to check without a given block
 	for _, sp := range a.res.Species {
-		if sp.Source == SourceFile && sp.Loc.File == a.res.Path {
+		if sp.Source == SourceFile {
 			given = true
 			break
 		}
