@@ -67,7 +67,7 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 		Files:    map[string]*speciesfile.File{},
 		ByName:   map[string]*Species{},
 	}}
-	f := speciesfile.Parse(path, text)
+	f := w.parse(path, text)
 	a.res.File = f
 	a.res.Files[path] = f
 	a.res.Diagnostics = append(a.res.Diagnostics, f.Diags...)
@@ -176,7 +176,7 @@ func (a *analysis) includes(path string, f *speciesfile.File, stack []string, de
 				Message: fmt.Sprintf("included file %q is larger than the 64 MiB limit", inc.Path.Text)})
 			continue
 		}
-		g := speciesfile.Parse(target, text)
+		g := a.w.parse(target, text)
 		a.res.Files[target] = g
 		if n := countErrors(g.Diags); n > 0 {
 			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityWarning, Code: CodeBadInclude,

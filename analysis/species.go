@@ -41,6 +41,8 @@ func (a *analysis) species() error {
 		k    int // index in f.Species
 		sp   *Species
 		u    *speciesUnit
+		// reused: sp is the last analysis's value for the same unit
+		reused bool
 		// diags of the species' rules when there is no memo (no unit is
 		// made: nothing would reuse it).
 		diags []speciesfile.Diagnostic
@@ -58,22 +60,27 @@ func (a *analysis) species() error {
 				// reserved word): input that failed to parse is not data.
 				continue
 			}
-			sp := &Species{Name: d.Name.Text, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
-			if first, dup := a.res.ByName[sp.Name]; dup {
+			name := d.Name.Text
+			if first, dup := a.res.ByName[name]; dup {
 				// An error: a simulator reading the file may take either
 				// declaration.
 				a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeDuplicateSpecies,
-					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", sp.Name, a.where(first.Loc)),
-					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first declaration of " + sp.Name}}})
+					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", name, a.where(first.Loc)),
+					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first declaration of " + name}}})
 				continue
 			}
-			a.res.ByName[sp.Name] = sp
-			a.res.Species = append(a.res.Species, sp)
 			u := a.memo.species(path, f, k)
+			sp := a.memo.oldSpecies(path, f, k, u)
+			reused := sp != nil
+			if !reused {
+				sp = &Species{Name: name, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
+			}
+			a.res.ByName[name] = sp
+			a.res.Species = append(a.res.Species, sp)
 			if u == nil {
 				todo = append(todo, len(items))
 			}
-			items = append(items, item{path: path, f: f, k: k, sp: sp, u: u})
+			items = append(items, item{path: path, f: f, k: k, sp: sp, u: u, reused: reused})
 		}
 	}
 	// The names whose unit is recomputed: every other declared name stands
@@ -113,12 +120,14 @@ func (a *analysis) species() error {
 		}
 	}
 	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
-	byStructure := make(map[string][]*Species, len(items))
+	byStructure := make(map[uint64][]*Species, len(items))
 	for _, it := range items {
 		sp := it.sp
 		if it.u != nil {
-			it.u.apply(sp, a.memo != nil)
-			a.memo.keepSpecies(it.path, it.k, it.u)
+			if !it.reused {
+				it.u.apply(sp, a.memo != nil)
+			}
+			a.memo.keepSpecies(it.path, it.k, it.u, sp)
 			if it.path == a.res.Path {
 				a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, sp.Decl.Body().Start)
 			}
@@ -204,6 +213,7 @@ func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupVal
 			// the same structure.
 			sp.structKey = resonanceKeyPrefix + e.Group.Form + "|m" + strconv.Itoa(effectiveMultiplicity(a.w.cache.lib, sp))
 		}
+		sp.structHash = hashKey(sp.structKey)
 	}
 	a.given(path, sp)
 	a.thermoChecks(path, sp)
@@ -218,19 +228,37 @@ const resonanceKeyPrefix = "resonance|"
 // multiplicity of sp, and records sp. Species are bucketed by a cheap graph
 // invariant first; canonical forms are computed only within a bucket, so
 // most species never need one.
-func sameStructure(seen map[string][]*Species, sp *Species) *Species {
+//
+// The map is keyed by a hash of the bucket key made once per unit (hashing
+// the long keys of every species on every analysis cost more than the rest
+// of the search); species of other keys sharing a hash are skipped.
+func sameStructure(seen map[uint64][]*Species, sp *Species) *Species {
 	k := sp.structKey
-	bucket := seen[k]
-	if len(bucket) > 0 && strings.HasPrefix(k, resonanceKeyPrefix) {
-		return bucket[0] // the key is the canonical representative itself
-	}
+	bucket := seen[sp.structHash]
+	resonance := strings.HasPrefix(k, resonanceKeyPrefix)
 	for _, other := range bucket {
+		if other.structKey != k {
+			continue
+		}
+		if resonance {
+			return other // the key is the canonical representative itself
+		}
 		if identity(other.Mol) == identity(sp.Mol) {
 			return other
 		}
 	}
-	seen[k] = append(bucket, sp)
+	seen[sp.structHash] = append(bucket, sp)
 	return nil
+}
+
+// hashKey is the 64-bit FNV-1a hash of s.
+func hashKey(s string) uint64 {
+	h := uint64(14695981039346656037)
+	for i := 0; i < len(s); i++ {
+		h ^= uint64(s[i])
+		h *= 1099511628211
+	}
+	return h
 }
 
 // invariant is a cheap fingerprint of a molecular graph that equal graphs
