@@ -184,6 +184,9 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	if err := spinScope(m); err != nil {
 		return nil, err
 	}
+	if err := cumulatedKetene(m); err != nil {
+		return nil, err
+	}
 	unpaired := 0
 	for _, a := range m.Atoms {
 		unpaired += a.Radical
@@ -451,4 +454,50 @@ func spinScope(m *molecule.Molecule) error {
 		return &UnsupportedError{Atom: at, Reason: fmt.Sprintf("(%s) and its %s neighbour both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data — give the species a thermo block", first, second)}
 	}
 	return nil
+}
+
+// cumulatedKetene refuses a ketene-type carbon (C=C=O) whose other partner
+// is not a plain double-bonded carbon (one double bond): carbon suboxide
+// O=C=C=C=O, ethylenedione O=C=C=O. The Ck group describes the C=O end of
+// R2C=C=O and was derived from ketenes whose CR2 end is an ordinary Cd; it
+// does not describe a cumulated chain (carbon suboxide came out 21 kcal/mol
+// high, unflagged). The atom is chosen by canonical symmetry class, as for
+// other refusals.
+func cumulatedKetene(m *molecule.Molecule) error {
+	doubles := func(i int) (n int) {
+		for _, b := range m.Adj[i] {
+			if m.Bonds[b].Order == 2 && !m.Bonds[b].Aromatic {
+				n++
+			}
+		}
+		return n
+	}
+	var refusals []atomError
+	for i, a := range m.Atoms {
+		if a.Element != "C" || doubles(i) != 2 {
+			continue
+		}
+		toO, partner := false, -1
+		for _, b := range m.Adj[i] {
+			if m.Bonds[b].Order != 2 {
+				continue
+			}
+			j := m.Other(b, i)
+			if m.Atoms[j].Element == "O" {
+				toO = true
+			} else {
+				partner = j
+			}
+		}
+		if !toO || partner < 0 {
+			continue
+		}
+		if m.Atoms[partner].Element != "C" || doubles(partner) != 1 {
+			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(C) is a ketene carbon whose other partner (atom %d, %s) is itself cumulated or not a carbon: the ketene group Ck describes R2C=C=O with an ordinary C=C end only — give the species a thermo block", partner+1, m.Atoms[partner].Element)}})
+		}
+	}
+	if len(refusals) == 0 {
+		return nil
+	}
+	return canonicalRefusal(m, refusals)
 }

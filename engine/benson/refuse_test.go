@@ -25,6 +25,9 @@ func TestRefusals(t *testing.T) {
 		{"S=S", Options{}, "terminal atom"},
 		{"[Li][Li]", Options{}, "terminal atom"},
 		{"C$C", Options{}, "order 4"},
+		// cumulated ketenes: the Ck group needs an ordinary C=C end
+		{"O=C=C=C=O", Options{}, "ketene carbon whose other partner"},
+		{"O=C=C=O", Options{}, "ketene carbon whose other partner"},
 		// Nitrile (CN), thiocarbonyl (CS) carbons: nameable centres whose
 		// groups these molecules need are not in the tables (HCN, cyanogen
 		// and CS2 are reference-library species; see hetero.go).
