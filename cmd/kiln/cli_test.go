@@ -72,6 +72,17 @@ func TestEstimateLibraryJSON(t *testing.T) {
 	assert.NotContains(t, eth, "reference_library")
 	assert.Greater(t, eth["uncertainty_hf298_kj_mol"].(float64), 0.0)
 
+	// A delocalised radical's Lewis structure does not give its σ (NO2 is
+	// C2v, σ 2, whatever Lewis structure is written): null. Both spellings
+	// of HNO3 give one σ.
+	code, stdout, stderr = runKiln(t, "estimate", "--json", "[O]N=O", "O=[N+]([O-])O", "ON(=O)=O")
+	require.Equal(t, exitOK, code, stderr)
+	arr = nil
+	require.NoError(t, json.Unmarshal([]byte(stdout), &arr))
+	require.Len(t, arr, 3)
+	assert.Nil(t, arr[0]["symmetry_number"])
+	assert.Equal(t, arr[1]["symmetry_number"], arr[2]["symmetry_number"])
+
 	code, stdout, stderr = runKiln(t, "estimate", "O=O")
 	require.Equal(t, exitOK, code, stderr)
 	assert.Contains(t, stdout, "tabulated: its uncertainty is the source's")

@@ -176,10 +176,16 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		// the structure (the tabulated values already contain them).
 		r.Groups = append(r.Groups, groupJSON{Name: "reference: " + est.Library, Count: 1, Hf298: jnum(est.Hf298 / 1000), S298: jnum(est.S298), Source: est.LibrarySource})
 		r.ReferenceLibrary = est.Library
-		if sigma, err := m.SymmetryNumber(); err == nil {
-			r.SymmetryNumber = ptr(json.Number(sigma.String()))
+		// σ of a written Lewis structure describes the molecule only when
+		// it has one: a radical or charge-separated library species (NO2,
+		// NO3, OH…) is delocalised, and its σ is left null (the tabulated
+		// S° contains the true one).
+		if n := m.NeutralNO(); n.Charge() == 0 && n.UnpairedElectrons() == 0 && !anyCharge(n) {
+			if sigma, err := n.SymmetryNumber(); err == nil {
+				r.SymmetryNumber = ptr(json.Number(sigma.String()))
+				r.OpticalIsomers = ptr(n.OpticalIsomers())
+			}
 		}
-		r.OpticalIsomers = ptr(m.OpticalIsomers())
 	}
 	if withNASA {
 		p, fit, err := est.NASA7()
@@ -238,6 +244,8 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		fmt.Fprintf(w, "  reference library: %s (tabulated data, not a group estimate)\n", est.Library)
 		if r.SymmetryNumber != nil {
 			fmt.Fprintf(w, "  symmetry number σ = %s, optical isomers n = %d (already contained in the tabulated S°)\n", *r.SymmetryNumber, *r.OpticalIsomers)
+		} else {
+			fmt.Fprintln(w, "  symmetry number: not derived from this delocalised structure (the tabulated S° contains it)")
 		}
 		if withSources {
 			writeWrapped(w, "    ", "source: "+est.LibrarySource)
@@ -261,4 +269,14 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, est.BlockSource(stamp), "\n"))
 	}
 	writeWrapped(w, "  ", ide.Caution)
+}
+
+// anyCharge reports whether an atom of m carries a formal charge.
+func anyCharge(m *molecule.Molecule) bool {
+	for _, a := range m.Atoms {
+		if a.Charge != 0 {
+			return true
+		}
+	}
+	return false
 }
