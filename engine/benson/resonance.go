@@ -1,6 +1,7 @@
 package benson
 
 import (
+	"errors"
 	"fmt"
 	"math"
 	"slices"
@@ -247,7 +248,11 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 		for k, c := range cands[lo:hi] {
 			est, err := estimateForm(c.m, opts)
 			if err != nil {
-				if firstErr == nil {
+				// A missing group names what the user can supply; it is
+				// preferred to another form's structural refusal (a
+				// radical on a nitro O, an imine N of a resonance form).
+				var mg *MissingGroupError
+				if firstErr == nil || (errors.As(err, &mg) && !errors.As(firstErr, &mg)) {
 					firstErr = err
 				}
 				continue

@@ -306,3 +306,19 @@ func BenchmarkEstimateResonance(b *testing.B) {
 		}
 	})
 }
+
+// A radical none of whose resonance structures can be estimated is refused
+// with the missing group of a structure when one has it, not with another
+// structure's structural refusal (a radical on a nitro O, an imine N).
+func TestResonanceRefusalNamesGroup(t *testing.T) {
+	for smiles, group := range map[string]string{
+		"C=[C][N+](=O)[O-]":  "Cd-(NO2)(H)",
+		"N#C[CH]Cl":          "C-(Cl)(CN)(H)2",
+		"CC(Cl)(Br)C[CH]C#N": "C-(Cl)(Br)(C)2",
+	} {
+		_, err := Estimate(parse(t, smiles), Options{})
+		var mg *MissingGroupError
+		require.ErrorAs(t, err, &mg, smiles)
+		assert.Equal(t, group, mg.Group, smiles)
+	}
+}
