@@ -340,7 +340,7 @@ func uncovered(g *graph, i, c int) error {
 	}
 	if len(g.nbr[i]) == 0 {
 		if heavy <= 1 || len(g.m.Atoms) <= 2 {
-			return &UnsupportedError{Reason: fmt.Sprintf("%s has no polyvalent atom with two or more neighbours, so no group applies (small species belong in a reference library or a thermo block)", g.m.Formula())}
+			return &UnsupportedError{Reason: "the structure has no polyvalent atom with two or more neighbours, so no group applies (small species belong in a reference library or a thermo block)"}
 		}
 		return unsupported(g, i, "stands alone (no neighbours), so no group applies")
 	}
