@@ -112,6 +112,11 @@ const (
 	widenRing      = 3.0  // at least, per missing ring or ring-system correction
 	widenRingShare = 0.25 // × the ring strain that was approximated
 	widenRadical   = 1.5  // a radical site taken as its nearest site type
+	// widenStabiliser: a radical next to a conjugating neighbour (nitrile,
+	// sulfur) estimated without that neighbour's stabilisation, which is
+	// typically 5–9 kcal/mol against an alkyl site (radical stabilisation
+	// energies, common practice).
+	widenStabiliser = 5.0
 	// widenSystem is the RMS, over the whole-system values of systems.tsv,
 	// of the system strain beyond the sum of its component ring
 	// corrections (the "ring system strain" term of the matched estimate):
@@ -144,6 +149,8 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 		switch {
 		case strings.HasPrefix(m.Group, "HBI dS"), m.Group == cpFallsGroup:
 			// Entropy/Cp-only approximations: ΔHf°298 is not affected.
+		case strings.HasPrefix(m.Group, "HBI: "+unstabilisedSite):
+			w = widenStabiliser
 		case strings.HasPrefix(m.Group, "HBI"):
 			w = widenRadical
 		case strings.HasPrefix(m.Group, "ring system:"):

@@ -163,8 +163,10 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"[c]1ccncc1", "phenyl", true},
 		{"[CH2]c1ccccn1", "benzylic", true},
 		{"[CH2]c1ccccc1", "benzylic", false},
-		{"CC[CH]Cl", "alpha-chloro", false},
-		{"C[CH]F", "alpha-fluoro", false},
+		{"CC[CH]Cl", "alpha-chloro", true}, // substituted α-halo centre: XCH2–H increment
+		{"C[CH]F", "alpha-fluoro", true},
+		{"N#C[CH2]", "primary", true}, // α-cyano: no increment, stabilisation left out
+		{"CS[CH2]", "primary", true},  // α-thio likewise
 		{"[CH2]CBr", "primary", false},
 		{"C[CH]Br", "alpha-chloro", true},
 		{"c1cc[c]s1", "vinylic", true},

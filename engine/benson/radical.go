@@ -162,6 +162,12 @@ func severalStabilisers(several, site string) Missing {
 	}
 }
 
+// unstabilisedSite starts the note of a radical site next to a conjugating
+// neighbour without an increment of its own (nitrile, sulfur): the alkyl
+// increment is used, which leaves out the neighbour's stabilisation, and
+// class.go widens the uncertainty by widenStabiliser.
+const unstabilisedSite = "alkyl increment for a stabilised radical site: "
+
 // siteOf classifies radical site i (an atom of the parent graph g). missing
 // names the approximation when the site only resembles the increment used;
 // several describes the stabilising neighbours of a carbon centre that has
@@ -185,7 +191,18 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 		if g.typ[i] == "C" {
 			if best, several := g.stabilisation(i); best >= 0 {
 				s := stabilisers[best]
-				return s.site, s.missing, several, nil
+				missing := s.missing
+				if missing == "" && strings.HasPrefix(s.kind, "alpha-") && s.kind != "alpha-hydroxy" && s.kind != "alpha-alkoxy" && s.kind != "alpha-amino" {
+					// α-halo increments are measured on XCH2–H; alkyl
+					// substitution at the centre lowers D(R–H) further.
+					for _, j := range g.nbr[i] {
+						if g.isCarbon(j) {
+							missing = s.kind + " radical site on a substituted carbon (the XCH2–H increment is used; alkyl substitution lowers D(R–H) by a few kcal/mol)"
+							break
+						}
+					}
+				}
+				return s.site, missing, several, nil
 			}
 		}
 		carbons, carbonyl := 0, false
@@ -210,6 +227,14 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 		}
 		if carbonyl {
 			return alkyl, "alpha-carbonyl radical site (no resonance increment)", "", nil
+		}
+		for _, j := range g.nbr[i] {
+			switch {
+			case g.typ[j] == "CN":
+				return alkyl, unstabilisedSite + "alpha-cyano", "", nil
+			case g.m.Atoms[j].Element == "S":
+				return alkyl, unstabilisedSite + "alpha-thio", "", nil
+			}
 		}
 		if carbons == 0 {
 			return "primary", "methyl-type radical site", "", nil
