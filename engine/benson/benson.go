@@ -39,6 +39,7 @@ package benson
 
 import (
 	"cmp"
+	"context"
 	"fmt"
 	"math"
 	"slices"
@@ -248,13 +249,9 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 			S298: R * math.Log(float64(est.Multiplicity)), Source: "statistical mechanics",
 		})
 	}
-	sg := g // σ and n are properties of the species itself
-	if unpaired > 0 {
-		sg = newGraph(m)
-	}
-	var sy *sym
+	var sy *sym // σ and n are properties of the species itself, not of its parent
 	if opts.Symmetry == 0 || opts.OpticalIsomers == 0 {
-		sy = newSym(sg)
+		sy = symmetryOf(context.Background(), m)
 	}
 	est.SymmetryNumber, est.SymmetryExact = opts.Symmetry, strconv.Itoa(opts.Symmetry)
 	lnSigma := math.Log(float64(opts.Symmetry))

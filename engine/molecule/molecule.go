@@ -98,8 +98,12 @@ type derived struct {
 
 	once    sync.Once
 	info    symmetryInfo // symmetry(DefaultSearchWork, true)
-	canon   string
-	classes []int
+	classes []int        // orbitClasses of info
+
+	// The canonical string is written only when asked for: estimates
+	// need the symmetry, not the text.
+	canonOnce sync.Once
+	canon     string
 
 	stereoOnce  sync.Once
 	canonStereo string
@@ -126,10 +130,16 @@ func (m *Molecule) cache() *derived {
 	}
 	d.once.Do(func() {
 		d.info = m.symmetry(DefaultSearchWork, true)
-		d.canon = m.writeSMILES(d.info.labels, false)
 		d.classes = orbitClasses(len(m.Atoms), d.info.gens, d.info.labels)
 	})
 	return d
+}
+
+// canonical returns the canonical string of m from its cache d (see
+// Canonical), written on first use.
+func (m *Molecule) canonical(d *derived) string {
+	d.canonOnce.Do(func() { d.canon = m.writeSMILES(d.info.labels, false) })
+	return d.canon
 }
 
 // Other returns the atom at the other end of bond b from atom i.

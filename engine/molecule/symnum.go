@@ -124,7 +124,12 @@ func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, er
 	if err != nil {
 		return nil, err
 	}
-	classes := orbitClasses(len(m.Atoms), info.gens, info.labels)
+	var classes []int
+	if d := m.cache(); d != nil && budget == DefaultSearchWork {
+		classes = d.classes // read only, shared
+	} else {
+		classes = orbitClasses(len(m.Atoms), info.gens, info.labels)
+	}
 	sc := newSigmaCalc(ctx, m, classes)
 	sc.hybrid = hybrid
 	sc.budget = budget
@@ -289,9 +294,11 @@ func (sc *sigmaCalc) total() (*big.Int, error) {
 // component is σ of one connected component (atoms ascending).
 func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 	m := sc.m
-	// fragment tree of this component
+	nf := len(sc.frags)
+	// fragment tree of this component; per-fragment state in slices indexed
+	// by fragment (seen, degree, removed, visited)
 	var fr []int
-	seen := map[int]bool{}
+	seen := make([]bool, nf)
 	for _, a := range atoms {
 		if f := sc.frag[a]; !seen[f] {
 			seen[f] = true
@@ -299,7 +306,7 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 		}
 	}
 	type edge struct{ b, other int }
-	adj := map[int][]edge{}
+	adj := make([][]edge, nf)
 	for _, a := range atoms {
 		for _, b := range m.Adj[a] {
 			if sc.rot[b] && m.Bonds[b].A == a {
@@ -310,12 +317,12 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 		}
 	}
 	// centre by peeling leaves
-	deg := map[int]int{}
+	deg := make([]int, nf)
 	for _, f := range fr {
 		deg[f] = len(adj[f])
 	}
 	left := len(fr)
-	removed := map[int]bool{}
+	removed := make([]bool, nf)
 	var layer []int
 	for _, f := range fr {
 		if deg[f] <= 1 {
@@ -347,7 +354,8 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 	sigma := big.NewInt(1)
 	type item struct{ f, pAtom, pNbr int }
 	var queue []item
-	visited := map[int]bool{}
+	visited := seen // reused: every fragment of the component is seen
+	clear(visited)
 	if len(centre) == 1 {
 		queue = append(queue, item{centre[0], -1, -1})
 		visited[centre[0]] = true
@@ -395,7 +403,7 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 // by the partition with atom i singled out when two branches share a class.
 func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 	m := sc.m
-	var out []int
+	out := make([]int, 0, len(m.Adj[i])+m.Atoms[i].HCount+sc.lp[i])
 	var ranks []int
 	for _, b := range m.Adj[i] {
 		if !sc.rot[b] {
@@ -440,6 +448,25 @@ func (sc *sigmaCalc) branchColour(i, v int, ranks *[]int) int {
 		c += (*ranks)[v] + 1
 	}
 	return c
+}
+
+// factorials holds k! for k ≤ 20 (the largest that fits in a uint64).
+var factorials = func() (f [21]uint64) {
+	f[0] = 1
+	for k := 1; k < len(f); k++ {
+		f[k] = f[k-1] * uint64(k)
+	}
+	return f
+}()
+
+// mulFactorial sets z to z·k!.
+func mulFactorial(z *big.Int, k int) {
+	if k < len(factorials) {
+		var t big.Int
+		z.Mul(z, t.SetUint64(factorials[k]))
+		return
+	}
+	z.Mul(z, new(big.Int).MulRange(1, int64(k)))
 }
 
 // positionCode is the position code (see centrePositions) of neighbour v of
@@ -583,7 +610,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 			}
 			if e-k > 1 {
 				dup = true
-				static.Mul(static, new(big.Int).MulRange(1, int64(e-k)))
+				mulFactorial(static, e-k)
 			}
 			k = e
 		}
