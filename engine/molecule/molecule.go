@@ -96,6 +96,8 @@ type derived struct {
 	bonds  *Bond
 	nbonds int
 
+	inRing []bool // ringBondFlags, set when the molecule is built
+
 	once    sync.Once
 	info    symmetryInfo // symmetry(DefaultSearchWork, true)
 	classes []int        // orbitClasses of info

@@ -93,8 +93,10 @@ func ParseSMILES(s string) (*Molecule, error) {
 		return nil, err
 	}
 	m := p.build()
-	m.perceive()
+	inRing := m.computeRingBondFlags()
+	m.perceiveWith(inRing)
 	m.derived = newDerived(m)
+	m.derived.inRing = inRing
 	return m, nil
 }
 

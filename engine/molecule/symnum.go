@@ -5,6 +5,7 @@ import (
 	"errors"
 	"fmt"
 	"math/big"
+	"math/bits"
 	"slices"
 	"strconv"
 	"strings"
@@ -189,11 +190,13 @@ type sigmaCalc struct {
 
 func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 	n := len(m.Atoms)
-	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: make([]int, n), lp: make([]int, n), virtual: make([]bool, n)}
+	scratch := make([]int, 3*n)
+	flags := make([]bool, n+len(m.Bonds))
+	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: scratch[:n:n], lp: scratch[n : 2*n : 2*n], virtual: flags[:n:n]}
 	inRing := m.ringBondFlags()
 	sc.inRing = inRing
-	sc.rot = make([]bool, len(m.Bonds))
-	parent := make([]int, n)
+	sc.rot = flags[n:]
+	parent := scratch[2*n:]
 	for i := range parent {
 		parent[i] = i
 	}
@@ -203,17 +206,32 @@ func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 			union(parent, bd.A, bd.B)
 		}
 	}
-	sc.frag = make([]int, n)
-	id := map[int]int{}
+	// Fragments are numbered in order of their first atom; each lists its
+	// atoms ascending, all lists in one array.
+	ints := make([]int, 3*n)
+	id, members := ints[n:2*n:2*n], ints[2*n:]
+	sc.frag = ints[:n:n]
+	for i := range id {
+		id[i] = -1
+	}
+	var sizes []int
 	for i := 0; i < n; i++ {
 		r := find(parent, i)
-		f, ok := id[r]
-		if !ok {
-			f = len(sc.frags)
-			id[r] = f
-			sc.frags = append(sc.frags, nil)
+		if id[r] < 0 {
+			id[r] = len(sizes)
+			sizes = append(sizes, 0)
 		}
-		sc.frag[i] = f
+		sc.frag[i] = id[r]
+		sizes[id[r]]++
+	}
+	sc.frags = make([][]int, len(sizes))
+	start := 0
+	for f, k := range sizes {
+		sc.frags[f] = members[start : start : start+k]
+		start += k
+	}
+	for i := 0; i < n; i++ {
+		f := sc.frag[i]
 		sc.frags[f] = append(sc.frags[f], i)
 	}
 	for i := range m.Atoms {
@@ -266,18 +284,25 @@ func (sc *sigmaCalc) tetrahedral(i int) bool {
 func (sc *sigmaCalc) total() (*big.Int, error) {
 	m := sc.m
 	comps := m.components()
-	sigma := big.NewInt(1)
+	sigma := oneProd()
+	if len(comps) == 1 {
+		s, err := sc.component(comps[0])
+		if err != nil {
+			return nil, err
+		}
+		return s.int(), nil
+	}
 	// Identical components share orbit classes (the search joins them), and
 	// different ones share none: k copies multiply σ by k!.
 	copies := map[int]int{}
-	known := map[int]*big.Int{} // σ of a component, by its key
+	known := map[int]prod{} // σ of a component, by its key
 	for _, atoms := range comps {
 		key := sc.classes[atoms[0]]
 		for _, a := range atoms {
 			key = min(key, sc.classes[a])
 		}
 		copies[key]++
-		sigma.Mul(sigma, big.NewInt(int64(copies[key])))
+		sigma.mulUint(uint64(copies[key]))
 		s, ok := known[key]
 		if !ok {
 			var err error
@@ -286,13 +311,13 @@ func (sc *sigmaCalc) total() (*big.Int, error) {
 			}
 			known[key] = s
 		}
-		sigma.Mul(sigma, s)
+		sigma.mul(s)
 	}
-	return sigma, nil
+	return sigma.int(), nil
 }
 
 // component is σ of one connected component (atoms ascending).
-func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
+func (sc *sigmaCalc) component(atoms []int) (prod, error) {
 	m := sc.m
 	nf := len(sc.frags)
 	// fragment tree of this component; per-fragment state in slices indexed
@@ -306,21 +331,35 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 		}
 	}
 	type edge struct{ b, other int }
-	adj := make([][]edge, nf)
-	for _, a := range atoms {
-		for _, b := range m.Adj[a] {
-			if sc.rot[b] && m.Bonds[b].A == a {
-				fa, fb := sc.frag[m.Bonds[b].A], sc.frag[m.Bonds[b].B]
-				adj[fa] = append(adj[fa], edge{b, fb})
-				adj[fb] = append(adj[fb], edge{b, fa})
+	// adjacency of the fragment tree: adj[f] lists f's rotatable bonds in
+	// atom order, all lists in one array (counted first)
+	deg := make([]int, nf)
+	rotBonds := func(visit func(fa, fb, b int)) {
+		for _, a := range atoms {
+			for _, b := range m.Adj[a] {
+				if sc.rot[b] && m.Bonds[b].A == a {
+					visit(sc.frag[m.Bonds[b].A], sc.frag[m.Bonds[b].B], b)
+				}
 			}
 		}
 	}
-	// centre by peeling leaves
-	deg := make([]int, nf)
+	rotBonds(func(fa, fb, _ int) { deg[fa]++; deg[fb]++ })
+	adj := make([][]edge, nf)
+	total := 0
 	for _, f := range fr {
-		deg[f] = len(adj[f])
+		total += deg[f]
 	}
+	if total > 0 {
+		edges := make([]edge, total)
+		for _, f := range fr {
+			adj[f], edges = edges[:0:deg[f]], edges[deg[f]:]
+		}
+	}
+	rotBonds(func(fa, fb, b int) {
+		adj[fa] = append(adj[fa], edge{b, fb})
+		adj[fb] = append(adj[fb], edge{b, fa})
+	})
+	// centre by peeling leaves (deg holds len(adj[f]))
 	left := len(fr)
 	removed := make([]bool, nf)
 	var layer []int
@@ -351,7 +390,7 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 			centre = append(centre, f)
 		}
 	}
-	sigma := big.NewInt(1)
+	sigma := oneProd()
 	type item struct{ f, pAtom, pNbr int }
 	var queue []item
 	visited := seen // reused: every fragment of the component is seen
@@ -369,7 +408,7 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 		}
 		u, v := m.Bonds[cb].A, m.Bonds[cb].B
 		if sc.classes[u] == sc.classes[v] && sc.swapKeepsMarks(u, v) {
-			sigma.SetInt64(2)
+			sigma = prod{small: 2}
 		}
 		queue = append(queue, item{sc.frag[u], u, v}, item{sc.frag[v], v, u})
 		visited[sc.frag[u]], visited[sc.frag[v]] = true, true
@@ -378,9 +417,9 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 		it := queue[k]
 		s, err := sc.fragment(it.f, it.pAtom, it.pNbr)
 		if err != nil {
-			return nil, err
+			return prod{}, err
 		}
-		sigma.Mul(sigma, s)
+		sigma.mul(s)
 		for _, a := range sc.frags[it.f] {
 			for _, b := range m.Adj[a] {
 				if !sc.rot[b] {
@@ -459,14 +498,73 @@ var factorials = func() (f [21]uint64) {
 	return f
 }()
 
-// mulFactorial sets z to z·k!.
-func mulFactorial(z *big.Int, k int) {
-	if k < len(factorials) {
-		var t big.Int
-		z.Mul(z, t.SetUint64(factorials[k]))
+// prod is a non-negative integer product of symmetry factors: a uint64
+// while it fits (nearly always), exact as a big.Int beyond.
+type prod struct {
+	small uint64   // the value when big is nil
+	big   *big.Int // the value once it exceeds the uint64 range
+}
+
+func oneProd() prod { return prod{small: 1} }
+
+// mulUint multiplies p by k.
+func (p *prod) mulUint(k uint64) {
+	if p.big == nil {
+		if hi, lo := bits.Mul64(p.small, k); hi == 0 {
+			p.small = lo
+			return
+		}
+		p.big = new(big.Int).SetUint64(p.small)
+	}
+	p.big.Mul(p.big, new(big.Int).SetUint64(k))
+}
+
+// mul multiplies p by q.
+func (p *prod) mul(q prod) {
+	if q.big == nil {
+		p.mulUint(q.small)
 		return
 	}
-	z.Mul(z, new(big.Int).MulRange(1, int64(k)))
+	if p.big == nil {
+		p.big = new(big.Int).SetUint64(p.small)
+	}
+	p.big.Mul(p.big, q.big)
+}
+
+// mulFactorial multiplies p by k!.
+func (p *prod) mulFactorial(k int) {
+	if k < len(factorials) {
+		p.mulUint(factorials[k])
+		return
+	}
+	if p.big == nil {
+		p.big = new(big.Int).SetUint64(p.small)
+	}
+	p.big.Mul(p.big, new(big.Int).MulRange(1, int64(k)))
+}
+
+// halve divides p by 2, rounding down.
+func (p *prod) halve() {
+	if p.big == nil {
+		p.small >>= 1
+		return
+	}
+	p.big.Rsh(p.big, 1)
+}
+
+func (p prod) isZero() bool {
+	if p.big == nil {
+		return p.small == 0
+	}
+	return p.big.Sign() == 0
+}
+
+// int returns p as a new big.Int.
+func (p prod) int() *big.Int {
+	if p.big == nil {
+		return new(big.Int).SetUint64(p.small)
+	}
+	return new(big.Int).Set(p.big)
 }
 
 // positionCode is the position code (see centrePositions) of neighbour v of
@@ -577,14 +675,14 @@ type unit struct {
 
 // fragment returns the number of proper operations of fragment f (a top
 // rotating about the bond pAtom–pNbr when pAtom ≥ 0) times its static factor.
-func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
+func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (prod, error) {
 	if err := sc.ctx.Err(); err != nil {
-		return nil, fmt.Errorf("symmetry number: %w", err)
+		return prod{}, fmt.Errorf("symmetry number: %w", err)
 	}
 	m := sc.m
 	sc.pAtom, sc.pNbr = pAtom, pNbr
 	atoms := sc.frags[f]
-	static := big.NewInt(1)
+	static := oneProd()
 	halves := 0 // factors of 2 to divide out of static
 	// A cage (every atom with three or more fragment neighbours, three or
 	// more rings) is three-dimensional even where its atoms are sp2.
@@ -610,7 +708,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 			}
 			if e-k > 1 {
 				dup = true
-				mulFactorial(static, e-k)
+				static.mulFactorial(e - k)
 			}
 			k = e
 		}
@@ -695,10 +793,10 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 	}
 	for ; halves > 0; halves-- {
-		static.Rsh(static, 1)
+		static.halve()
 	}
-	if static.Sign() == 0 {
-		static.SetInt64(1)
+	if static.isZero() {
+		static = oneProd()
 	}
 	if len(atoms) == 1 {
 		return static, nil // one atom: only the identity (a checked centre passes)
@@ -739,32 +837,33 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 	root := g.refine(g.cell0)
 	s := &search{g: g, budget: sc.budget, root: root, ctx: sc.ctx}
 	defer func() { sc.budget -= s.steps }()
-	order := big.NewInt(1)
+	order := oneProd()
 	var labels []int
 	seenBuf := make([]bool, len(atoms))
 	if !discrete(root, seenBuf) {
 		sizes, exact := s.automorphisms()
 		if !exact {
-			return nil, sc.limitErr()
+			return prod{}, sc.limitErr()
 		}
 		for _, k := range sizes {
-			order.Mul(order, big.NewInt(int64(k)))
+			order.mulUint(uint64(k))
 		}
 	}
 	chair := sc.chairRing(atoms)
 	if len(units) == 0 && chair == nil {
-		return order.Mul(order, static), nil
+		order.mul(static)
+		return order, nil
 	}
-	if order.Cmp(big.NewInt(maxFragmentGroup)) > 0 {
-		return nil, fmt.Errorf("symmetry number of %q: %w (a rigid fragment of %d atoms has %s symmetry elements, more than %d)",
-			m.SMILES, ErrWorkLimit, len(atoms), order, maxFragmentGroup)
+	if order.big != nil || order.small > maxFragmentGroup {
+		return prod{}, fmt.Errorf("symmetry number of %q: %w (a rigid fragment of %d atoms has %s symmetry elements, more than %d)",
+			m.SMILES, ErrWorkLimit, len(atoms), order.int(), maxFragmentGroup)
 	}
-	if order.Int64() == 1 {
+	if order.small == 1 {
 		return static, nil
 	}
 	labels = s.canonical()
 	if s.exhausted || labels == nil {
-		return nil, sc.limitErr()
+		return prod{}, sc.limitErr()
 	}
 	elems := groupElements(s.gens, maxFragmentGroup+1)
 	// canonical order: each element as a permutation of canonical labels
@@ -869,7 +968,8 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 		best = max(best, count)
 	}
-	return static.Mul(static, big.NewInt(int64(max(best, 1)))), nil
+	static.mulUint(uint64(max(best, 1)))
+	return static, nil
 }
 
 func (sc *sigmaCalc) limitErr() error {
