@@ -184,6 +184,7 @@ type sigmaCalc struct {
 	elems   [][]int // its elements, enumerated on demand (at most 5001)
 	marked  []int   // atoms with a written tetrahedral mark, nil until known
 	hybrid  []bool  // per atom: in a conjugated radical (or cation) system, nil if none
+	outBuf  []int   // the list outside returns, reused
 	// parent bond of the fragment being analysed
 	pAtom, pNbr int
 }
@@ -440,9 +441,12 @@ func (sc *sigmaCalc) component(atoms []int) (prod, error) {
 // current fragment: rotatable-bond neighbours, hydrogens and (for
 // tetrahedral atoms) lone pairs. Branch colours are orbit classes, refined
 // by the partition with atom i singled out when two branches share a class.
+//
+// The list is valid until the next call (it reuses one buffer): every
+// caller reads it at once.
 func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 	m := sc.m
-	out := make([]int, 0, len(m.Adj[i])+m.Atoms[i].HCount+sc.lp[i])
+	out := sc.outBuf[:0]
 	var ranks []int
 	for _, b := range m.Adj[i] {
 		if !sc.rot[b] {
@@ -464,6 +468,7 @@ func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 		}
 	}
 	slices.Sort(out)
+	sc.outBuf = out[:0]
 	return out
 }
 
