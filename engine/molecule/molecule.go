@@ -72,7 +72,8 @@ type Molecule struct {
 	SMILES string
 
 	// nbrOrder[i], for atoms written with chirality, lists the neighbours in
-	// written order with -1 for a hydrogen (OpenSMILES chirality reference).
+	// written order with -1 for a hydrogen (OpenSMILES chirality reference);
+	// nil when no atom has a chirality mark.
 	nbrOrder [][]int
 	// rings is the SSSR (atom indices in ring order); cycles the relevant
 	// cycles used for aromaticity; ringSys the fused/bridged ring systems.
