@@ -80,7 +80,10 @@ func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []in
 		}
 		g.nbr[k], g.bt[k] = nb[s:len(nb):len(nb)], bt[s:len(bt):len(bt)]
 	}
-	keys := make([][8]int, n)
+	// Every key field is small (element number, mass number of at most
+	// three digits, charge, hydrogens, radical electrons, flags, degree,
+	// an extra colour numbered below the atom count): int32 keeps the order.
+	keys := make([][8]int32, n)
 	idx := ints[2*deg : 2*deg+n : 2*deg+n]
 	for k := range idx {
 		a := m.Atoms[atoms[k]]
@@ -93,7 +96,7 @@ func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []in
 		if extra != nil {
 			x = extra[atoms[k]]
 		}
-		keys[k] = [8]int{e.Z, a.Isotope, a.Charge, a.HCount, a.Radical, ar, len(m.Adj[atoms[k]]), x}
+		keys[k] = [8]int32{int32(e.Z), int32(a.Isotope), int32(a.Charge), int32(a.HCount), int32(a.Radical), int32(ar), int32(len(m.Adj[atoms[k]])), int32(x)}
 		idx[k] = k
 	}
 	slices.SortFunc(idx, func(x, y int) int { return slices.Compare(keys[x][:], keys[y][:]) })
@@ -827,7 +830,8 @@ func (m *Molecule) SymmetryClasses() []int {
 }
 
 func orbitClasses(n int, gens [][]int, labels []int) []int {
-	parent := make([]int, n)
+	scratch := make([]int, 3*n)
+	parent, byLabel, num := scratch[:n:n], scratch[n:2*n:2*n], scratch[2*n:]
 	for i := range parent {
 		parent[i] = i
 	}
@@ -838,11 +842,9 @@ func orbitClasses(n int, gens [][]int, labels []int) []int {
 	}
 	// byLabel[l] is the atom with canonical label l; walking labels upwards
 	// meets each orbit first at its smallest label.
-	byLabel := make([]int, n)
 	for a, l := range labels {
 		byLabel[l] = a
 	}
-	num := make([]int, n)
 	for i := range num {
 		num[i] = -1
 	}
