@@ -3,6 +3,7 @@ package main
 import (
 	"context"
 	"fmt"
+	"slices"
 	"sort"
 
 	"kiln.dev/kiln/analysis"
@@ -64,6 +65,7 @@ func runCheck(e env, args []string) (int, error) {
 		if err != nil {
 			return 0, err
 		}
+		out = slices.Grow(out, len(ds))
 		for _, d := range ds {
 			if severityRank(d.Severity) <= minSev {
 				out = append(out, d)

@@ -27,6 +27,7 @@ type cgraph struct {
 	ind       []int // scratch of child
 	tbuf      []int // scratch trace for comparisons
 	n         int
+	deg       int // Σ len(nbr[i])
 	nbr       [][]int
 	bt        [][]int
 	cell0     []int // initial partition: rank = start of the atom's colour class
@@ -66,7 +67,7 @@ func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []in
 		}
 	}
 	lists := make([][]int, 2*n)
-	g := &cgraph{n: n, nbr: lists[:n:n], bt: lists[n:]}
+	g := &cgraph{n: n, deg: deg, nbr: lists[:n:n], bt: lists[n:]}
 	ints := make([]int, 2*deg+2*n)
 	nb, bt := ints[:0:deg], ints[deg:deg:2*deg]
 	for k, i := range atoms {
@@ -281,11 +282,7 @@ func targetCell(rank []int) []int {
 // bond code) list of a member. For a discrete partition it is the labelled
 // graph itself (the certificate).
 func (g *cgraph) trace(rank []int) []int {
-	deg := 0
-	for _, nb := range g.nbr {
-		deg += len(nb)
-	}
-	return g.traceInto(rank, make([]int, 0, 3*g.n+deg))
+	return g.traceInto(rank, make([]int, 0, 3*g.n+g.deg))
 }
 
 // traceInto appends the trace of rank to dst[:0] (see trace).
@@ -306,6 +303,9 @@ func (g *cgraph) traceInto(rank []int, dst []int) []int {
 		size[r]++
 	}
 	out := dst[:0]
+	if cap(out) < 3*n+g.deg {
+		out = make([]int, 0, 3*n+g.deg) // a trace is at most this long
+	}
 	for r := 0; r < n; r++ {
 		if rep[r] < 0 {
 			continue

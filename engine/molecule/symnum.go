@@ -393,7 +393,7 @@ func (sc *sigmaCalc) component(atoms []int) (prod, error) {
 	}
 	sigma := oneProd()
 	type item struct{ f, pAtom, pNbr int }
-	var queue []item
+	queue := make([]item, 0, len(fr)) // every fragment is queued once
 	visited := seen // reused: every fragment of the component is seen
 	clear(visited)
 	if len(centre) == 1 {
