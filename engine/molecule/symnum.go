@@ -394,7 +394,7 @@ func (sc *sigmaCalc) component(atoms []int) (prod, error) {
 	sigma := oneProd()
 	type item struct{ f, pAtom, pNbr int }
 	queue := make([]item, 0, len(fr)) // every fragment is queued once
-	visited := seen // reused: every fragment of the component is seen
+	visited := seen                   // reused: every fragment of the component is seen
 	clear(visited)
 	if len(centre) == 1 {
 		queue = append(queue, item{centre[0], -1, -1})
