@@ -125,12 +125,7 @@ func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, er
 	if err != nil {
 		return nil, err
 	}
-	var classes []int
-	if d := m.cache(); d != nil && budget == DefaultSearchWork {
-		classes = d.classes // read only, shared
-	} else {
-		classes = orbitClasses(len(m.Atoms), info.gens, info.labels)
-	}
+	classes := m.classesOf(info, budget)
 	sc := newSigmaCalc(ctx, m, classes)
 	sc.hybrid = hybrid
 	sc.budget = budget
@@ -155,6 +150,16 @@ func (m *Molecule) symmetryInfo(ctx context.Context, budget int) (symmetryInfo, 
 		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, budget)
 	}
 	return info, nil
+}
+
+// classesOf returns the orbit classes of info, which symmetryInfo returned
+// for m and budget: the cached ones when info came from the cache (shared:
+// callers must not modify them).
+func (m *Molecule) classesOf(info symmetryInfo, budget int) []int {
+	if d := m.cache(); d != nil && budget == DefaultSearchWork {
+		return d.classes
+	}
+	return orbitClasses(len(m.Atoms), info.gens, info.labels)
 }
 
 // Ligand colours of the outside positions of a fragment atom.
