@@ -245,11 +245,27 @@ func (a *analysis) groups() {
 					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first definition"}}})
 				continue
 			}
+			if b, ok := builtinGroup(name); ok && g.Hf298 != nil && g.S298 != nil && len(g.Cp) > 0 {
+				// Only a complete statement replaces the value (userGroups
+				// skips the others; the reader names what is missing).
+				a.report(path, speciesfile.Diagnostic{Span: g.Name.Span, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeGroupOverride,
+					Message: fmt.Sprintf("group %s replaces kiln's built-in value (%s; %s) for every species in scope", name, a.thermoSummary(b.Hf298, b.S298), b.Source)})
+			}
 			gr := &Group{Name: name, Loc: Location{File: path, Span: g.Name.Span}, Decl: g}
 			seen[name] = gr
 			a.res.Groups = append(a.res.Groups, gr)
 		}
 	}
+}
+
+// builtinGroup returns kiln's own value of a group (canonical name).
+func builtinGroup(name string) (benson.GroupValue, bool) {
+	for _, g := range benson.GroupTable() {
+		if g.Name == name {
+			return g, true
+		}
+	}
+	return benson.GroupValue{}, false
 }
 
 // userGroups converts the visible group statements to engine values. Groups

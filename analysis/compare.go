@@ -128,8 +128,9 @@ type ReactionPair struct {
 	// Ratio is k_B/k_A at CompareRateTemps (nil where a rate or the
 	// thermochemistry to convert it is missing).
 	Ratio [3]*float64
-	// Note says what was compared when it is not the plain rate: "high-
-	// pressure limits", "rate table read at 1 atm".
+	// Note says what was compared when it is not the plain rate: falloff
+	// rates at the settings' pressure with the N2 bath gas, pressure tables
+	// read at that pressure.
 	Note string
 }
 
@@ -180,6 +181,7 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 	}
 	c := &Comparison{A: sa.summary(), B: sb.summary(), Settings: w.Settings(), RateFactor: opts.RateFactor}
 	matchA, matchB := matchSpecies(sa, sb)
+	matchResonance(sa, sb, matchA, matchB)
 	// Thermochemistry for the matched species, estimated where not given.
 	// A pair that both sides estimate from the same structure text with
 	// the same options has the same thermo by construction: not computed.
@@ -611,6 +613,9 @@ func matchReactions(a, b *compareSide, mapB map[string]string) (pairs []Reaction
 				}
 			}
 		}
+		if n := efficiencyNote(x, y, mapped); n != "" {
+			p.Note = strings.TrimPrefix(p.Note+"; "+n, "; ")
+		}
 		pairs = append(pairs, p)
 	}
 	for _, k := range orderB {
@@ -632,14 +637,19 @@ func (s *compareSide) rateOf(g *reactionGroup, left string, T float64) (float64,
 	total := 0.0
 	note := ""
 	for i, r := range g.rs {
-		kf, ok := forward(r.d)
+		P := s.a.set.pressure()
+		bath := 1.0
+		if r.d.Falloff != nil {
+			bath = bathEfficiency(r.d, func(name string) *Species { return s.byName[name] })
+		}
+		kf, ok := forwardAt(r.d, P, bath)
 		if !ok {
 			return 0, "", false
 		}
 		if r.d.Falloff != nil {
-			note = "high-pressure limits compared"
+			note = fmt.Sprintf("falloff rates at %g bar, N2 bath gas with each side's efficiency", P/1e5)
 		} else if len(r.d.Pressures) > 0 {
-			note = "rate tables read at 1 atm"
+			note = fmt.Sprintf("rate tables read at %g bar", P/1e5)
 		}
 		if g.lefts[i] == left {
 			total += kf(T)

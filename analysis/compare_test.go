@@ -3,6 +3,7 @@ package analysis
 import (
 	"context"
 	"fmt"
+	"math"
 	"regexp"
 	"strconv"
 	"strings"
@@ -101,6 +102,23 @@ species propanone O=C(C)C
 	}
 }
 
+// TestCompareResonance: one delocalised radical written as two resonance
+// structures on the two sides is one species (propargyl's structures are
+// different graphs; allyl's are the same graph), while radicals that only
+// share a skeleton (1- and 2-propyl) stay apart.
+func TestCompareResonance(t *testing.T) {
+	files := map[string]string{
+		"/w/a.kiln": "species C3H3 [CH2]C#C\nspecies allyl [CH2]C=C\nspecies npropyl CC[CH2]\nspecies CH2CHO [CH2]C=O\n",
+		"/w/b.kiln": "species propargyl C=C=[CH]\nspecies C3H5 C=C[CH2]\nspecies ipropyl C[CH]C\nspecies vinoxy C=C[O]\n",
+	}
+	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	assert.Equal(t, map[string]string{"C3H3": "propargyl", "allyl": "C3H5", "CH2CHO": "vinoxy"}, pairNames(c))
+	require.Len(t, c.OnlyA, 1)
+	assert.Equal(t, "npropyl", c.OnlyA[0].Name)
+	require.Len(t, c.OnlyB, 1)
+	assert.Equal(t, "ipropyl", c.OnlyB[0].Name)
+}
+
 // TestCompareReactions: duplicates are summed, third bodies must agree,
 // and an irreversible step written the other way has no ratio.
 func TestCompareReactions(t *testing.T) {
@@ -145,6 +163,51 @@ reaction oh + oh => ho2 + h   A=1e12 n=0 Ea=30
 	assert.Contains(t, c.ReactionsOnlyA[0].Equation, "(+M)")
 	require.Len(t, c.ReactionsOnlyB, 1)
 	assert.Contains(t, c.ReactionsOnlyB[0].Equation, "+ M")
+}
+
+// TestCompareFalloff: falloff reactions are compared at the settings'
+// pressure with the N2 bath gas, each side with its own N2 efficiency, so
+// two falloffs with one high-pressure limit but different low-pressure
+// limits (or efficiencies) differ; the note says what was compared. (H +
+// O2 at 1 atm is near its low-pressure limit, so the ratios are close to
+// the factors applied to k0.)
+func TestCompareFalloff(t *testing.T) {
+	base := `species H [H]
+species O2 O=O
+species HO2 [O]O
+species N2 N#N
+reaction H + O2 (+M) <=> HO2 (+M)   A=4.6e12 n=0.44 Ea=0
+  low-pressure A=%s n=-1.4 Ea=0
+  efficiencies N2=%s
+`
+	files := map[string]string{
+		"/w/a.kiln": fmt.Sprintf(base, "6.3e19", "1.0"),
+		"/w/b.kiln": fmt.Sprintf(base, "1.26e20", "1.0"),
+		"/w/c.kiln": fmt.Sprintf(base, "6.3e19", "0.5"),
+	}
+	low := kinetics.Arrhenius{A: 6.3e19, N: -1.4}
+	kf := func(lowFactor, eff, T float64) float64 {
+		l := low
+		l.A *= lowFactor
+		f := kinetics.Falloff{High: kinetics.Arrhenius{A: 4.6e12, N: 0.44}, Low: l}
+		return f.Rate(T, eff*kinetics.Concentration(T, 101325))
+	}
+	for _, c := range []struct {
+		b              string
+		lowFactor, eff float64
+	}{{"/w/b.kiln", 2, 1}, {"/w/c.kiln", 1, 0.5}} {
+		cmp := compareTexts(t, files, "/w/a.kiln", c.b)
+		require.Len(t, cmp.Reactions, 1, c.b)
+		p := cmp.Reactions[0]
+		assert.Contains(t, p.Note, "falloff rates at 1.01325 bar")
+		for i, tt := range CompareRateTemps {
+			require.NotNil(t, p.Ratio[i])
+			want := kf(c.lowFactor, c.eff, tt.T) / kf(1, 1, tt.T)
+			assert.InEpsilon(t, want, *p.Ratio[i], 1e-9, "%s at %g K", c.b, tt.T)
+			// Equal high-pressure limits: comparing those alone gave 1.
+			assert.Greater(t, math.Abs(*p.Ratio[i]-1), 0.1, "%s at %g K", c.b, tt.T)
+		}
+	}
 }
 
 func arr(a, eaKcal float64) kinetics.Arrhenius { return kinetics.Arrhenius{A: a, Ea: eaKcal * 4184} }
@@ -274,4 +337,22 @@ func TestIncludeDuplicatesBounded(t *testing.T) {
 	}
 	assert.Equal(t, maxIncludeDupReports+1, n)
 	assert.Equal(t, 1, more)
+}
+
+// TestCompareEfficiencies: matched third-body reactions whose efficiencies
+// differ say so in the note, in A's names, an unlisted species counting 1.
+func TestCompareEfficiencies(t *testing.T) {
+	files := map[string]string{
+		"/w/a.kiln": "species H [H]\nspecies O2 O=O\nspecies HO2 [O]O\nspecies H2O O\nspecies CO2 O=C=O\n" +
+			"reaction H + O2 + M <=> HO2 + M   A=2.8e18 n=-0.86 Ea=0\n  efficiencies H2O=12 O2=0.78\n",
+		"/w/b.kiln": "species h [H]\nspecies o2 O=O\nspecies ho2 [O]O\nspecies water O\nspecies co2 O=C=O\n" +
+			"reaction h + o2 + M <=> ho2 + M   A=2.8e18 n=-0.86 Ea=0\n  efficiencies water=6 o2=0.78 co2=2\n",
+	}
+	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	require.Len(t, c.Reactions, 1)
+	assert.Equal(t, "third-body efficiencies differ (A → B): CO2 (1) → 2, H2O 12 → 6", c.Reactions[0].Note)
+	files["/w/b.kiln"] = strings.Replace(files["/w/b.kiln"], "water=6 o2=0.78 co2=2", "o2=0.78 water=12", 1)
+	c = compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	require.Len(t, c.Reactions, 1)
+	assert.Empty(t, c.Reactions[0].Note)
 }

@@ -153,6 +153,14 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		}
 		return e, nil
 	}
+	if o.Multiplicity > 0 {
+		if sp, ok := lib.Lookup(m, 0); ok {
+			// A small species of the library in another spin state: the
+			// groups have no data for it either (engine/benson refuses
+			// non-ground multiplicities), so say what the library holds.
+			return nil, fmt.Errorf("multiplicity %d has no data: the reference library holds this structure only as %s, multiplicity %d, and group additivity has no data for other spin states", o.Multiplicity, sp.Name, sp.Multiplicity)
+		}
+	}
 	bo := benson.Options{
 		Multiplicity:   o.Multiplicity,
 		Symmetry:       o.Symmetry,
@@ -309,6 +317,12 @@ func (c *moleculeCache) parse(smiles string) parsed {
 		return p
 	}
 	m, err := molecule.ParseSMILES(smiles)
+	if err == nil {
+		// One structure for the charge-separated and the pentavalent
+		// spellings of a nitro or nitrate group (C[N+](=O)[O-], CN(=O)=O):
+		// duplicates, compare and estimates see the same molecule.
+		m = m.NeutralNO()
+	}
 	p = parsed{mol: m, err: err}
 	if err == nil {
 		p.formula, p.composition, p.charge, p.molarMass = m.Formula(), m.Composition(), m.Charge(), m.MolarMass()

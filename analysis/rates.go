@@ -57,18 +57,17 @@ func (m *rateModel) reverseRate(T, P float64) (float64, bool) {
 	return kinetics.ReverseRate(m.forward(T, P), kc), true
 }
 
-// forward returns k_f(T) of d's rate lines where one pressure-independent
-// number per temperature is wanted (kiln compare): the high-pressure limit
-// of a falloff, a pressure table at 1 atm. Built from the same rate model.
-func forward(d *speciesfile.Reaction) (func(T float64) float64, bool) {
+// forwardAt returns k_f(T) of d's rate lines at the pressure P (Pa) where
+// one number per temperature is wanted (kiln compare): a falloff with the
+// N2 bath gas at the efficiency bathEff, a pressure table read at P. Built
+// from the same rate model as every other rate kiln shows.
+func forwardAt(d *speciesfile.Reaction, P, bathEff float64) (func(T float64) float64, bool) {
 	m, ok := baseRateModel(d)
 	if !ok {
 		return nil, false
 	}
-	if m.falloff != nil {
-		return m.falloff.High.Rate, true
-	}
-	return func(T float64) float64 { return m.forward(T, 101325) }, true
+	m.bathEff = bathEff
+	return func(T float64) float64 { return m.forward(T, P) }, true
 }
 
 // baseRateModel reads the forward rate lines of d (main line, falloff,
@@ -132,11 +131,17 @@ func (a *analysis) rateModelOf(d *speciesfile.Reaction, r *Reaction) (*rateModel
 // listed for the species whose composition is N2, else 1. A falloff with a
 // named collider (+AR) has that collider as its bath, efficiency 1.
 func (a *analysis) bathEfficiency(d *speciesfile.Reaction) float64 {
+	return bathEfficiency(d, func(name string) *Species { return a.res.ByName[name] })
+}
+
+// bathEfficiency finds the N2 efficiency of d with the species named as
+// species(name) resolves them.
+func bathEfficiency(d *speciesfile.Reaction, species func(name string) *Species) float64 {
 	if falloffCollider(d) != nil {
 		return 1
 	}
 	for _, e := range d.Efficiencies {
-		if sp := a.res.ByName[e.Name.Text]; sp != nil && len(sp.Composition) == 1 && sp.Composition["N"] == 2 {
+		if sp := species(e.Name.Text); sp != nil && len(sp.Composition) == 1 && sp.Composition["N"] == 2 {
 			return e.Value.SI
 		}
 	}
@@ -169,6 +174,12 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 	}
 	m, ok := a.rateModelOf(d, r)
 	if !ok {
+		return
+	}
+	if span, why := nonphysicalRate(d, m); why != "" {
+		// A rate no reaction can have is not used: no k_f, no k_r, no
+		// collision check built on it.
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeNonphysicalRate, Message: why})
 		return
 	}
 	r.model = m
@@ -246,3 +257,36 @@ func (r *Reaction) RatesAt(T, P float64) (kf, kr float64, okF, okR bool) {
 func (r *Reaction) PressureDependent() bool { return r.model != nil && r.model.PressureDependent() }
 
 func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+
+// nonphysicalRate returns where and why the rate lines of d describe no
+// possible reaction ("" when they are usable): a Troe parameter that is a
+// negative temperature, a Troe centre Fcent(T) that is not positive and
+// finite, or k_f(T) that is not a positive finite number, anywhere on
+// 300–2500 K (the temperatures kiln evaluates rates at) at 1 atm.
+func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.Span, string) {
+	span := d.Equation
+	if d.Rate != nil {
+		span = d.Rate.Span
+	}
+	if tr := d.Troe; tr != nil && m.falloff != nil && m.falloff.Troe != nil {
+		for _, p := range []struct {
+			name string
+			v    *speciesfile.Number
+		}{{"T3", tr.T3}, {"T1", tr.T1}, {"T2", tr.T2}} {
+			if p.v != nil && p.v.SI < 0 {
+				return tr.Span, fmt.Sprintf("troe %s=%g K is negative: the broadening terms exp(−T/T3), exp(−T/T1), exp(−T2/T) then grow without bound; the falloff rate is not used", p.name, p.v.SI)
+			}
+		}
+		for T := 300.0; T <= 2500; T += 100 {
+			if fc := m.falloff.Troe.Fcent(T); !(fc > 0) || math.IsInf(fc, 0) {
+				return tr.Span, fmt.Sprintf("troe parameters give Fcent = %.3g at %g K: the broadening centre must be positive and finite, so the falloff rate cannot be evaluated and is not used", fc, T)
+			}
+		}
+	}
+	for T := 300.0; T <= 2500; T += 100 {
+		if k := m.forward(T, 101325); !(k > 0) || math.IsInf(k, 0) {
+			return span, fmt.Sprintf("the forward rate constant is %.3g at %g K (1 atm): a rate constant must be a positive finite number, so this rate is not used", k, T)
+		}
+	}
+	return span, ""
+}

@@ -37,6 +37,14 @@ func (a *analysis) reactions() error {
 			}
 			rt := a.memo.reactionText(path, f, k)
 			key := rt.dupKey
+			if f.ErrorIn(d.Body()) {
+				// A reaction the reader could not read completely gets
+				// its syntax error only: not compared with others.
+				if path == a.res.Path {
+					a.res.Reactions = append(a.res.Reactions, a.reaction(path, d, rt.equation))
+				}
+				continue
+			}
 			if first, dup := seen[key]; dup {
 				if d.Duplicate == nil || first.Duplicate == nil {
 					line := a.res.Files[seenFile[key]].Lines.Position(first.Equation.Start).Line + 1
@@ -249,9 +257,9 @@ func reactionKey(d *speciesfile.Reaction) string {
 func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation string) *Reaction {
 	f := a.res.Files[path]
 	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equation, Resolved: true, Kp: map[string]*float64{}}
-	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Equation) {
-		// An equation the reader could not read is not data: the syntax
-		// error is the one diagnostic.
+	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Body()) {
+		// A reaction the reader could not read (equation or rate lines)
+		// is not data: the syntax error is the one diagnostic.
 		r.Resolved = false
 		return r
 	}

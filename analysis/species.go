@@ -53,6 +53,11 @@ func (a *analysis) species() error {
 			if err := a.ctx.Err(); err != nil {
 				return err
 			}
+			if !speciesfile.ValidName(d.Name.Text) {
+				// The reader reported the name (missing, a number, a
+				// reserved word): input that failed to parse is not data.
+				continue
+			}
 			sp := &Species{Name: d.Name.Text, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
 			if first, dup := a.res.ByName[sp.Name]; dup {
 				// An error: a simulator reading the file may take either
@@ -346,7 +351,10 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 	}
 	sp.Estimate = e
 	if miss := sortedMissing(e.Group); len(miss) > 0 {
-		var parts []string
+		// Group values the user can supply with a `group` statement, and
+		// other approximations (radical sites, ring systems, delocalisation)
+		// that only a thermo block replaces.
+		var groups, others []string
 		for _, m := range miss {
 			if isHBINote(m) {
 				// Untabulated radical S/Cp increments are not a group the
@@ -361,11 +369,22 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 				}
 				s += ")"
 			}
-			parts = append(parts, s)
+			if _, err := benson.ParseGroupName(m.Group); err == nil {
+				groups = append(groups, s)
+			} else {
+				others = append(others, s)
+			}
 		}
-		if len(parts) > 0 {
+		var msg []string
+		if len(groups) > 0 {
+			msg = append(msg, fmt.Sprintf("no value for group %s; define it with a `group` statement to replace the approximation", strings.Join(groups, ", ")))
+		}
+		if len(others) > 0 {
+			msg = append(msg, fmt.Sprintf("estimated with an approximation kiln has no data for: %s; its uncertainty is widened (a thermo block with measured or computed values replaces the estimate)", strings.Join(others, ", ")))
+		}
+		if len(msg) > 0 {
 			a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
-				Message: fmt.Sprintf("%s: no value for group %s; define it with a `group` statement to replace the approximation", sp.Name, strings.Join(parts, ", "))})
+				Message: sp.Name + ": " + strings.Join(msg, "; also ")})
 		}
 	}
 }
@@ -461,9 +480,12 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		if sp.SMILESError != nil || sp.rootReported {
 			return // bad-smiles or missing-group already says what to fix
 		}
+		if sp.Mol == nil && a.res.Files[path].ErrorIn(d.Name.Span) {
+			return // the reader's error on the declaration says what is missing
+		}
 		why := "it has no structure (SMILES) to estimate from"
 		if sp.estimateErr != nil {
-			why = "kiln cannot estimate it: " + sp.estimateErr.Error()
+			why = "kiln cannot estimate it: " + RefusalReason(sp.estimateErr)
 		}
 		what := "has no thermo block"
 		if sp.brokenBlock {

@@ -31,6 +31,8 @@ var requestHandlers = map[string]handlerFunc{
 	"textDocument/foldingRange":   (*server).foldingRange,
 	"textDocument/formatting":     (*server).formatting,
 	"textDocument/codeAction":     (*server).codeAction,
+	"textDocument/codeLens":       (*server).codeLens,
+	"workspace/executeCommand":    (*server).executeCommand,
 }
 
 func decode(raw json.RawMessage, v any) error {

@@ -103,5 +103,7 @@ func serverCapabilities() map[string]any {
 		"foldingRangeProvider":       true,
 		"documentFormattingProvider": true,
 		"inlayHintProvider":          true,
+		"codeLensProvider":           map[string]any{"resolveProvider": false},
+		"executeCommandProvider":     map[string]any{"commands": []string{commandEquilibrium}},
 	}
 }

@@ -67,13 +67,16 @@ const (
 	CodeBadInclude       = "bad-include"
 	CodeDuplicateGroup   = "duplicate-group"
 	CodeThermoOutOfRange = "thermo-out-of-range"
+	CodeGroupOverride    = "group-override"
+	CodeNonphysicalRate  = "nonphysical-rate"
 )
 
 // Codes lists every diagnostic code, in FORMAT.md's order: the one list
 // (FORMAT.md's table is checked against it by a test).
 var Codes = []string{CodeSyntax, CodeUndeclaredSpecies, CodeDuplicateSpecies, CodeBadSMILES, CodeUnbalancedReaction,
 	CodeMissingGroup, CodeMissingThermo, CodeThermoDiscontinuity, CodeThermoMismatch, CodeNonphysicalThermo,
-	CodeNoRate, CodeCollisionLimit, CodeDuplicateReaction, CodeBadInclude, CodeDuplicateGroup, CodeThermoOutOfRange}
+	CodeNoRate, CodeCollisionLimit, CodeDuplicateReaction, CodeBadInclude, CodeDuplicateGroup, CodeThermoOutOfRange,
+	CodeGroupOverride, CodeNonphysicalRate}
 
 // Related points at another place (possibly in another file) that explains a
 // diagnostic, e.g. the first declaration of a duplicated species.

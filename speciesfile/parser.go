@@ -680,6 +680,11 @@ func (p *parser) group(toks []Token, base StmtBase) Stmt {
 	return st
 }
 
+// ValidName reports whether text can name a species: not empty, not a
+// number and not a reserved word of the reaction syntax. A declaration
+// whose name is not valid is reported by the reader and is not data.
+func ValidName(text string) bool { return text != "" && nameProblem(text) == "" }
+
 // nameProblem returns why text cannot be a species name, or "".
 func nameProblem(text string) string {
 	switch text {
@@ -1087,6 +1092,9 @@ func isArrowLike(s string) bool {
 	return false
 }
 
+// isRateKey reports whether text is the name of a rate parameter (A, n, Ea).
+func isRateKey(text string) bool { return text == "A" || text == "n" || text == "Ea" }
+
 // equation parses the equation tokens into st; it returns the falloff token
 // (ok true) for a well-formed falloff reaction.
 func (p *parser) equation(eq []Token, st *Reaction) (fall Token, isFalloff bool) {
@@ -1100,6 +1108,10 @@ func (p *parser) equation(eq []Token, st *Reaction) (fall Token, isFalloff bool)
 			}
 			arrow = i
 		case isArrowLike(t.Text):
+			if t.Text == "=" && i > 0 && i+1 < len(eq) && isRateKey(eq[i-1].Text) && scanNumber(eq[i+1].Text) == len(eq[i+1].Text) {
+				p.errAt(t.Span, "%q between %s and %s: rate parameters are written without blanks around =, e.g. A=1e13 n=0 Ea=0", t.Text, eq[i-1].Text, eq[i+1].Text)
+				return fall, false
+			}
 			p.errAt(t.Span, "%q is not an arrow: use <=> (reversible) or => (irreversible)", t.Text)
 			return fall, false
 		}

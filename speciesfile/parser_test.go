@@ -66,6 +66,7 @@ func TestSyntaxErrors(t *testing.T) {
 		{"reaction A + B C A=1 n=0 Ea=0\n", []wantDiag{{0, 9, 16, "syntax", "missing arrow: expected <=> or => between reactants and products"}}},
 		{"reaction A + B A=1 n=0 Ea=0\n", []wantDiag{{0, 9, 14, "syntax", "missing arrow: expected <=> or => between reactants and products"}}},
 		{"reaction A = B A=1 n=0 Ea=0\n", []wantDiag{{0, 11, 12, "syntax", "\"=\" is not an arrow: use <=> (reversible) or => (irreversible)"}}},
+		{"reaction OH + OH => H2O2 A = 1e13 n = 0 Ea = 0\n", []wantDiag{{0, 27, 28, "syntax", "\"=\" between A and 1e13: rate parameters are written without blanks around =, e.g. A=1e13 n=0 Ea=0"}}},
 		{"reaction A <=> B => C A=1 n=0 Ea=0\n", []wantDiag{{0, 17, 19, "syntax", "second arrow \"=>\": a reaction has exactly one arrow"}}},
 		{"reaction <=> B A=1 n=0 Ea=0\n", []wantDiag{{0, 9, 12, "syntax", "empty reactant side: expected a species before <=>"}}},
 		{"reaction A <=> A=1 n=0 Ea=0\n", []wantDiag{{0, 11, 14, "syntax", "empty product side: expected a species after <=>"}}},

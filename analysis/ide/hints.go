@@ -13,7 +13,7 @@ type Hint struct {
 
 // InlayHints returns the hints for the statements of file that start in
 // [start, end): at the end of each species line
-// "ΔHf°298 −56.2 kcal/mol · S° 67.5 cal/(mol·K) (estimated|given)" and at the
+// "ΔHf°298 −56.2 kcal/mol · S° 67.5 cal/(mol·K) (estimated|library|given)" and at the
 // end of each reaction line "ΔH°r −12.3 kcal/mol", in the display units.
 func InlayHints(x *Index, file string, start, end int, s analysis.Settings) []Hint {
 	f := x.File(file)

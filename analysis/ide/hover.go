@@ -198,6 +198,9 @@ func inUse(sp *analysis.Species) (*thermoValues, string) {
 		}
 	case analysis.SourceEstimate:
 		if v := estimateValues(sp.Estimate); v != nil {
+			if sp.Estimate.Library != "" {
+				return v, "library" // tabulated data, not a group estimate
+			}
 			return v, "estimated"
 		}
 	}
@@ -291,7 +294,7 @@ func (w *writer) species(sp *analysis.Species) {
 
 func (w *writer) estimateDetail(e *analysis.Estimate) {
 	if e.Library != "" {
-		w.line(fmt.Sprintf("Estimate from the reference library: %s (%s).", e.Library, e.LibrarySource))
+		w.line(fmt.Sprintf("Tabulated data from the reference library (not a group estimate): %s (%s).", e.Library, e.LibrarySource))
 	}
 	g := e.Group
 	if g != nil {

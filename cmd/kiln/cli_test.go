@@ -55,6 +55,29 @@ func TestEstimateJSONContract(t *testing.T) {
 	assert.Equal(t, []string{"count", "hf298_kj_mol", "name", "s298_j_mol_k", "source"}, keysOf(g0))
 }
 
+// TestEstimateLibraryJSON: a reference-library species is reported as
+// tabulated data: no group uncertainty (null, not a promise of ± 0), the
+// entry named, and σ and n of its structure (O2: D∞h, σ = 2).
+func TestEstimateLibraryJSON(t *testing.T) {
+	code, stdout, stderr := runKiln(t, "estimate", "--json", "O=O", "CCO")
+	require.Equal(t, exitOK, code, stderr)
+	var arr []map[string]any
+	require.NoError(t, json.Unmarshal([]byte(stdout), &arr))
+	require.Len(t, arr, 2)
+	o2, eth := arr[0], arr[1]
+	assert.Nil(t, o2["uncertainty_hf298_kj_mol"])
+	assert.Equal(t, "O2", o2["reference_library"])
+	assert.EqualValues(t, 2, o2["symmetry_number"])
+	assert.EqualValues(t, 1, o2["optical_isomers"])
+	assert.NotContains(t, eth, "reference_library")
+	assert.Greater(t, eth["uncertainty_hf298_kj_mol"].(float64), 0.0)
+
+	code, stdout, stderr = runKiln(t, "estimate", "O=O")
+	require.Equal(t, exitOK, code, stderr)
+	assert.Contains(t, stdout, "tabulated: its uncertainty is the source's")
+	assert.NotContains(t, stdout, "± 0.00")
+}
+
 // TestEstimateErrors: a bad input gets an error object with its position,
 // the others still get estimates, and the exit code is 1.
 func TestEstimateErrors(t *testing.T) {
@@ -136,7 +159,16 @@ func TestSummaryJSONContract(t *testing.T) {
 	require.NoError(t, json.Unmarshal([]byte(stdout), &s))
 	require.NotEmpty(t, s["species"])
 	require.NotEmpty(t, s["reactions"])
-	assert.Equal(t, []string{"cp_j_mol_k", "formula", "hf298_kj_mol", "name", "s298_j_mol_k", "smiles", "thermo_source"}, keysOf(s["species"][0]))
+	// The contract's keys, plus reference_library (an extension) where the
+	// thermo are a library entry's tabulated data.
+	for _, sp := range s["species"] {
+		want := []string{"cp_j_mol_k", "formula", "hf298_kj_mol", "name", "s298_j_mol_k", "smiles", "thermo_source"}
+		if _, ok := sp["reference_library"]; ok {
+			assert.Equal(t, "estimate", sp["thermo_source"], sp["name"])
+			want = append(want[:4:4], "reference_library", "s298_j_mol_k", "smiles", "thermo_source")
+		}
+		assert.Equal(t, want, keysOf(sp), sp["name"])
+	}
 	assert.Equal(t, []string{"balanced", "collision_limit", "dg298_kj_mol", "dh298_kj_mol", "ds298_j_mol_k", "equation", "forward_rate", "forward_rate_units",
 		"keq", "line", "rate_pressure_bar", "reverse_rate", "reverse_rate_factor", "reverse_rate_units"}, keysOf(s["reactions"][0]))
 	sources := map[string]string{}
@@ -144,6 +176,12 @@ func TestSummaryJSONContract(t *testing.T) {
 		sources[sp["name"].(string)] = sp["thermo_source"].(string)
 	}
 	assert.Equal(t, "estimate", sources["H"])
+	libs := map[string]any{}
+	for _, sp := range s["species"] {
+		libs[sp["name"].(string)] = sp["reference_library"]
+	}
+	assert.Equal(t, "H", libs["H"], "H atom: the library's entry")
+	assert.Nil(t, libs["CH4"], "thermo from the file")
 	assert.Equal(t, "file", sources["CH4"])
 	assert.Equal(t, "none", sources["lump"])
 	byEq := map[string]map[string]any{}

@@ -32,10 +32,14 @@ type estimateJSON struct {
 	MissingGroups  []string         `json:"missing_groups"`
 	// ResonanceForm is the canonical SMILES of the resonance structure
 	// estimated, for a radical with several (engine/benson/resonance.go).
-	ResonanceForm string     `json:"resonance_form,omitempty"`
-	Uncertainty   *float64   `json:"uncertainty_hf298_kj_mol"`
-	Error         *errorJSON `json:"error"`
-	NASA7         *nasaJSON  `json:"nasa7,omitempty"`
+	ResonanceForm string `json:"resonance_form,omitempty"`
+	// ReferenceLibrary names the reference entry whose tabulated data are
+	// given instead of an estimate (extension). Its uncertainty is that of
+	// the source, so uncertainty_hf298_kj_mol is null for it.
+	ReferenceLibrary string     `json:"reference_library,omitempty"`
+	Uncertainty      *float64   `json:"uncertainty_hf298_kj_mol"`
+	Error            *errorJSON `json:"error"`
+	NASA7            *nasaJSON  `json:"nasa7,omitempty"`
 }
 
 type groupJSON struct {
@@ -141,7 +145,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 	r.MolarMass = ptr(jnum(m.MolarMass()))
 	est, err := ws.EstimateMolecule(m, opts)
 	if err != nil {
-		r.Error = &errorJSON{Message: err.Error()}
+		r.Error = &errorJSON{Message: "kiln cannot estimate it: " + analysis.RefusalReason(err)}
 		return r, nil
 	}
 	r.Hf298 = ptr(jnum(est.Hf298 / 1000))
@@ -150,8 +154,8 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 	for i, k := range analysis.StdTempKeys {
 		r.Cp[k] = ptr(est.Cp[i])
 	}
-	r.Uncertainty = ptr(jnum(est.Uncertainty / 1000))
 	if g := est.Group; g != nil {
+		r.Uncertainty = ptr(jnum(est.Uncertainty / 1000))
 		for _, t := range g.Groups {
 			r.Groups = append(r.Groups, groupJSON{Name: t.Name, Count: t.Count, Hf298: jnum(t.Hf298 / 1000), S298: jnum(t.S298), Source: t.Source})
 		}
@@ -166,8 +170,14 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		r.ResonanceForm = g.Form
 	} else {
 		// A reference-library species: the whole value is one reference term,
-		// so that the breakdown still sums to the totals.
+		// so that the breakdown still sums to the totals. σ and n describe
+		// the structure (the tabulated values already contain them).
 		r.Groups = append(r.Groups, groupJSON{Name: "reference: " + est.Library, Count: 1, Hf298: jnum(est.Hf298 / 1000), S298: jnum(est.S298), Source: est.LibrarySource})
+		r.ReferenceLibrary = est.Library
+		if sigma, err := m.SymmetryNumber(); err == nil {
+			r.SymmetryNumber = ptr(json.Number(sigma.String()))
+		}
+		r.OpticalIsomers = ptr(m.OpticalIsomers())
 	}
 	if withNASA {
 		p, fit, err := est.NASA7()
@@ -223,14 +233,21 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 			fmt.Fprintln(w, "  (group sources: --sources or --json)")
 		}
 	} else {
-		fmt.Fprintf(w, "  reference library: %s\n", est.Library)
+		fmt.Fprintf(w, "  reference library: %s (tabulated data, not a group estimate)\n", est.Library)
+		if r.SymmetryNumber != nil {
+			fmt.Fprintf(w, "  symmetry number σ = %s, optical isomers n = %d (already contained in the tabulated S°)\n", *r.SymmetryNumber, *r.OpticalIsomers)
+		}
 		if withSources {
 			writeWrapped(w, "    ", "source: "+est.LibrarySource)
 		} else {
 			fmt.Fprintln(w, "  (source: --sources or --json)")
 		}
 	}
-	fmt.Fprintf(w, "  ΔHf°298 = %s (%s), ± %s, 1σ: class error widened by each approximation\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.Uncertainty))
+	if r.Uncertainty != nil {
+		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), ± %s, 1σ: class error widened by each approximation\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.Uncertainty))
+	} else {
+		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), tabulated: its uncertainty is the source's\n", u.Energy(est.Hf298), other.Energy(est.Hf298))
+	}
 	fmt.Fprintf(w, "  S°298   = %s (%s)\n", u.Entropy(est.S298), other.Entropy(est.S298))
 	fmt.Fprintf(w, "  Cp in %s:", u.EntropyName())
 	for i, T := range benson.StdTemps {

@@ -5,10 +5,10 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
-	"math"
 	"sort"
 	"strconv"
-	"strings"
+
+	"kiln.dev/kiln/internal/jsonnum"
 )
 
 // JSON output conventions shared by every command: numbers are rounded to
@@ -17,17 +17,8 @@ import (
 // significant digits); maps keyed by temperature or pressure list their keys
 // in numeric order.
 
-// jnum rounds v to 12 significant digits for output.
-func jnum(v float64) float64 {
-	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
-		return v
-	}
-	r, err := strconv.ParseFloat(strconv.FormatFloat(v, 'g', 12, 64), 64)
-	if err != nil {
-		return v
-	}
-	return r
-}
+// jnum rounds v to 12 significant digits for output (jsonnum.Round).
+func jnum(v float64) float64 { return jsonnum.Round(v) }
 
 // jptr is jnum for optional values.
 func jptr(p *float64) *float64 {
@@ -101,47 +92,6 @@ func writeJSON(w io.Writer, v any) error {
 	return nil
 }
 
-// roundNumbers rewrites every number literal of a JSON text (outside
-// strings) that has more than 12 significant digits, as jnum rounds it;
-// other numbers keep their spelling.
-func roundNumbers(in []byte) []byte {
-	out := make([]byte, 0, len(in))
-	inString, escaped := false, false
-	for i := 0; i < len(in); i++ {
-		c := in[i]
-		if inString {
-			out = append(out, c)
-			switch {
-			case escaped:
-				escaped = false
-			case c == '\\':
-				escaped = true
-			case c == '"':
-				inString = false
-			}
-			continue
-		}
-		if c == '"' {
-			inString = true
-			out = append(out, c)
-			continue
-		}
-		if c == '-' || (c >= '0' && c <= '9') {
-			j := i + 1
-			for j < len(in) && strings.IndexByte("0123456789.eE+-", in[j]) >= 0 {
-				j++
-			}
-			lit := string(in[i:j])
-			if v, err := strconv.ParseFloat(lit, 64); err == nil {
-				if r := jnum(v); r != v {
-					lit = strconv.FormatFloat(r, 'g', -1, 64)
-				}
-			}
-			out = append(out, lit...)
-			i = j - 1
-			continue
-		}
-		out = append(out, c)
-	}
-	return out
-}
+// roundNumbers rewrites the number literals of a JSON text as jnum rounds
+// them (jsonnum.RoundLiterals).
+func roundNumbers(in []byte) []byte { return jsonnum.RoundLiterals(in) }

@@ -19,13 +19,16 @@ type summaryJSON struct {
 }
 
 type summarySpecies struct {
-	Name         string     `json:"name"`
-	SMILES       *string    `json:"smiles"`
-	Formula      *string    `json:"formula"`
-	ThermoSource string     `json:"thermo_source"`
-	Hf298        *float64   `json:"hf298_kj_mol"`
-	S298         *float64   `json:"s298_j_mol_k"`
-	Cp           numericMap `json:"cp_j_mol_k"` // null where the block does not reach
+	Name         string  `json:"name"`
+	SMILES       *string `json:"smiles"`
+	Formula      *string `json:"formula"`
+	ThermoSource string  `json:"thermo_source"`
+	// ReferenceLibrary names the reference entry whose tabulated data an
+	// "estimate" species takes instead of groups (extension).
+	ReferenceLibrary string     `json:"reference_library,omitempty"`
+	Hf298            *float64   `json:"hf298_kj_mol"`
+	S298             *float64   `json:"s298_j_mol_k"`
+	Cp               numericMap `json:"cp_j_mol_k"` // null where the block does not reach
 }
 
 type summaryReaction struct {
@@ -102,6 +105,9 @@ func buildSummary(res *analysis.Result) summaryJSON {
 	s := summaryJSON{Species: []summarySpecies{}, Reactions: []summaryReaction{}}
 	for _, sp := range res.Species {
 		row := summarySpecies{Name: sp.Name, ThermoSource: string(sp.Source)}
+		if sp.Source == analysis.SourceEstimate && sp.Estimate != nil {
+			row.ReferenceLibrary = sp.Estimate.Library
+		}
 		if sp.Decl.SMILES != nil {
 			row.SMILES = ptr(sp.Decl.SMILES.Text)
 		}
@@ -182,7 +188,11 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		if sp.Formula != nil {
 			formula = *sp.Formula
 		}
-		rows = append(rows, []string{shorten(sp.Name, 24), formula, sp.ThermoSource, energy(sp.Hf298), entropy(sp.S298),
+		source := sp.ThermoSource
+		if sp.ReferenceLibrary != "" {
+			source = "library" // tabulated data, not a group estimate
+		}
+		rows = append(rows, []string{shorten(sp.Name, 24), formula, source, energy(sp.Hf298), entropy(sp.S298),
 			entropy(sp.Cp["300"]), entropy(sp.Cp["1000"]), entropy(sp.Cp["1500"])})
 	}
 	writeTable(w, "", []string{"name", "formula", "thermo", "ΔHf°298", "S°298", "Cp(300)", "Cp(1000)", "Cp(1500)"}, rows)

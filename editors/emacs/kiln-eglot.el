@@ -25,6 +25,16 @@
 ;;   in one pass over the buffer, and the events log is off by default
 ;;   (`kiln-eglot-events-buffer-size').
 ;;
+;; - Equilibrium: M-x kiln-equilibrium reads a mixture ("CH4:1, O2:2,
+;;   N2:7.52") and shows the equilibrium over the buffer's species, from
+;;   the file's own thermo, in the buffer *kiln equilibrium*: by default the
+;;   adiabatic flame temperature at constant pressure from 298.15 K and
+;;   1 atm (options `kiln-equilibrium-temperature', `-pressure',
+;;   `-adiabatic', `-volume'; `kiln-equilibrium-default-mix' is offered at
+;;   the prompt).  It runs the server's kiln.equilibrium command, the code of
+;;   `kiln equilibrium'.  eglot shows no code lenses, so the server's
+;;   "Equilibrium / flame temperature…" lens is not shown in Emacs.
+;;
 ;; Server settings go through `eglot-workspace-configuration', e.g.
 ;;   (setq-default eglot-workspace-configuration
 ;;                 '(:kiln (:units "kJ/mol" :estimateNotes :json-false)))
@@ -281,6 +291,86 @@ Does what eglot 1.9 does, in time linear in the buffer and the diagnostics."
   (dolist (buf (eglot--managed-buffers server))
     (kiln-eglot--schedule-hints buf))
   nil)
+
+;;;; Equilibrium and flame temperature
+
+(defcustom kiln-equilibrium-default-mix nil
+  "Mixture offered by `kiln-equilibrium', e.g. \"CH4:1, O2:2, N2:7.52\"."
+  :type '(choice (const :tag "None" nil) string))
+
+(defcustom kiln-equilibrium-temperature 298.15
+  "Initial temperature (K) of the mixture for `kiln-equilibrium'."
+  :type 'number)
+
+(defcustom kiln-equilibrium-pressure "1atm"
+  "Initial pressure for `kiln-equilibrium', a number with its unit (1atm, 10bar)."
+  :type 'string)
+
+(defcustom kiln-equilibrium-adiabatic t
+  "Non-nil: `kiln-equilibrium' finds the adiabatic (flame) temperature.
+nil holds the temperature."
+  :type 'boolean)
+
+(defcustom kiln-equilibrium-volume nil
+  "Non-nil: `kiln-equilibrium' holds the volume instead of the pressure."
+  :type 'boolean)
+
+(defvar kiln-equilibrium-history nil
+  "Mixtures given to `kiln-equilibrium'.")
+
+(defconst kiln-equilibrium-buffer-name "*kiln equilibrium*"
+  "Name of the buffer showing `kiln-equilibrium' results.")
+
+(defun kiln-eglot--error-message (err)
+  "The server's message in the jsonrpc error ERR (condition data)."
+  (or (cl-loop for x in (cdr err)
+               when (and (consp x) (eq (car x) 'jsonrpc-error-message))
+               return (cdr x))
+      (error-message-string err)))
+
+(defun kiln-eglot--show-equilibrium (mix answer)
+  "Show ANSWER of kiln.equilibrium for MIX in `kiln-equilibrium-buffer-name'.
+Returns the buffer."
+  (let ((buf (get-buffer-create kiln-equilibrium-buffer-name)))
+    (with-current-buffer buf
+      (let ((inhibit-read-only t))
+        (erase-buffer)
+        (insert "mix: " mix "\n" (or (plist-get answer :text) ""))
+        (seq-doseq (w (or (plist-get answer :warnings) []))
+          (insert "note: " w "\n")))
+      (goto-char (point-min))
+      (special-mode))
+    (display-buffer buf)
+    buf))
+
+(defun kiln-equilibrium (mix)
+  "Show the equilibrium of MIX over the species of the current kiln buffer.
+MIX is \"NAME:AMOUNT, NAME:AMOUNT, ...\" with the species names of the file.
+The species and their thermochemistry are the file's (as the language
+server last analysed it).  The initial state and constraint come from
+`kiln-equilibrium-temperature', `kiln-equilibrium-pressure',
+`kiln-equilibrium-adiabatic' and `kiln-equilibrium-volume'.  The result,
+as `kiln equilibrium' prints it, goes to the buffer *kiln equilibrium*."
+  (interactive
+   (list (read-string (if kiln-equilibrium-default-mix
+                          (format "Mixture (default %s): " kiln-equilibrium-default-mix)
+                        "Mixture (NAME:AMOUNT, ...): ")
+                      nil 'kiln-equilibrium-history kiln-equilibrium-default-mix)))
+  (let ((server (and (bound-and-true-p eglot--managed-mode) (eglot-current-server))))
+    (unless (cl-typep server 'kiln-eglot-server)
+      (user-error "kiln: no kiln language server manages this buffer (M-x eglot)"))
+    (let* ((args (list :uri (plist-get (eglot--TextDocumentIdentifier) :uri)
+                       :mix mix
+                       :temperature kiln-equilibrium-temperature
+                       :pressure kiln-equilibrium-pressure
+                       :adiabatic (if kiln-equilibrium-adiabatic t :json-false)
+                       :volume (if kiln-equilibrium-volume t :json-false)))
+           (answer (condition-case err
+                       (jsonrpc-request server :workspace/executeCommand
+                                        (list :command "kiln.equilibrium" :arguments (vector args)))
+                     (jsonrpc-error
+                      (user-error "kiln: %s" (kiln-eglot--error-message err))))))
+      (kiln-eglot--show-equilibrium mix answer))))
 
 (provide 'kiln-eglot)
 ;;; kiln-eglot.el ends here

@@ -301,6 +301,10 @@ For `electric-indent-functions'."
 ;;;###autoload
 (add-to-list 'auto-mode-alist '("\\.kiln\\'" . kiln-mode))
 
+;;;###autoload
+(autoload 'kiln-equilibrium "kiln-eglot"
+  "Show the equilibrium of a mixture over the current kiln buffer's species." t)
+
 
 
 (provide 'kiln-mode)

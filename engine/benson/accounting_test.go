@@ -17,15 +17,17 @@ var genElements = []genElement{
 
 // randomSMILES writes a random, valence-correct structure of 1–14 heavy
 // atoms: a random tree with multiple bonds, some ring closures, some radical
-// centres (a bracket atom with one H too few), now and then a benzene ring
-// or a charged atom. Every atom is a bracket atom with its H count, so the
+// centres (a bracket atom with one H too few), now and then a benzene or
+// azine ring, a nitro group or a charged atom. Every atom is a bracket atom with its H count, so the
 // reader adds nothing.
 func randomSMILES(r *rand.Rand) string {
 	s := randomTree(r, genElements, 1+r.IntN(14), false)
 	s.addClosures(r, r.IntN(3))
 	prefix := ""
 	if r.IntN(10) == 0 && s.free[0] > 0 {
-		prefix = "c1ccc(cc1)"
+		// a benzene, pyridine or pyrimidine ring, or a charge-separated
+		// nitro group, bonded to the first atom
+		prefix = [...]string{"c1ccc(cc1)", "c1ccc(cc1)", "c1ccc(nc1)", "c1cnc(nc1)", "[O-][N+](=O)"}[r.IntN(5)]
 		s.free[0]--
 	}
 	return s.write(prefix, func(i int) (int, string) {

@@ -22,17 +22,17 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 	counts[ligandRank["H"]] = a.HCount
 	skip := -1 // the implied partner: =C of Cd, ≡C of Ct, =O of CO
 	switch centre {
-	case "Cd", "CO":
+	case "Cd", "CO", "NA":
 		skip = g.partner(i, 2)
 	case "Ct", "CN":
 		skip = g.partner(i, 3)
 	case "CS":
 		skip = g.partnerElement(i, 2, "S")
-	case "Ca", "Ck":
+	case "Ca", "Ck", "Nb", "Nbb":
 		return centre, counts, true
 	}
 	for k, j := range g.nbr[i] {
-		if j == skip {
+		if j == skip || g.impliedTerminal(i, k, centre) || g.impliedOxide(centre, g.nbrBond[i][k], j) { // hetero_n.go, hetero_sx.go
 			continue
 		}
 		if centre == "Cb" && g.benzBond[g.nbrBond[i][k]] {
@@ -62,6 +62,7 @@ var relative = map[string]struct {
 }{
 	"Cbf": {"Cb", 1}, "Ca": {"Cd", 1}, "Cb": {"Cd", 1}, "Ct": {"Cd", 1},
 	"Cd": {"C", 1}, "CO": {"C", 1}, "O": {"C", 3},
+	"Nb": {"Cb", 2}, // azine N as a ring carbon (hetero_n.go): flagged, as every approximation
 }
 
 // approximate finds the cheapest table group reachable from (centre,
@@ -89,7 +90,7 @@ func approximate(l lookup, centre string, counts ligCounts) (GroupValue, []strin
 				continue
 			}
 			r, ok := relative[lig]
-			if !ok {
+			if !ok || noStandIn(centre, lig) { // noStandIn: hetero_n.go
 				continue
 			}
 			next := s.counts
@@ -177,7 +178,7 @@ atoms:
 		}
 		if !l.hasCentre(centre) {
 			if _, nameable := centreLigands[centre]; !nameable {
-				refuse(i, unsupported(g, i, fmt.Sprintf("no group in the tables has a centre of type %s", centre)))
+				refuse(i, unsupported(g, i, fmt.Sprintf("no group in the tables has a centre of type %s%s", centre, typeNote(centre))))
 				continue
 			}
 			// A group the user can define (a `group` statement) but no

@@ -161,11 +161,14 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	// Charged and isotope-labelled atoms: refused, naming the atom of lowest
 	// canonical symmetry class so that the reason does not depend on the
 	// atom order of the SMILES.
+	// Charge-separated nitro, nitrate and N-oxide units are read as N=O
+	// first (hetero_n.go).
+	m = neutralNO(m)
 	var refusals []atomError
 	for i, a := range m.Atoms {
 		switch {
 		case a.Charge != 0:
-			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d: charged species are outside group additivity — give the species a thermo block", a.Element, a.Charge)}})
+			refusals = append(refusals, atomError{i, chargeRefusal(m, i)})
 		case a.Isotope != 0:
 			// Group values are for natural isotopic composition; a label
 			// changes zero-point energies, masses and symmetry, which no
@@ -231,6 +234,7 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	addRingCorrections(g, tab, est)
 	addInteractions(g, tab, est)
 	addHalogenFlags(g, tab, est)
+	addAzineFlags(g, tab, est) // hetero_n.go
 	if unpaired > 0 {
 		if err := addHBI(m, g, tab, est); err != nil {
 			return nil, err

@@ -234,12 +234,15 @@ func TestHBIArithmetic(t *testing.T) {
 		assert.Less(t, lost, 0.0)
 		assert.Greater(t, lost, -1.0, "the lost stretch and bends hold little entropy at 298 K")
 	}
-	// Ethyl's centre also gains the inversion mode and frees its one C–C
-	// rotor (siteChanges).
+	// Ethyl's centre also turns a C–H bend into the inversion mode and
+	// frees its one C–C rotor (siteChanges).
 	site, ok := siteChanges(parse(t, "C[CH2]"), newGraph(parentOf(parse(t, "C[CH2]"))))
 	require.True(t, ok)
-	x := secondRadiation * inversionWavenumber / 298.15
-	inversion := R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
+	hoS := func(nu float64) float64 {
+		x := secondRadiation * nu / 298.15
+		return R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
+	}
+	inversion := hoS(inversionWavenumber) - hoS(lostCH[2])
 	assert.InDelta(t, inversion+freedRotorS*calorie, site.S298, 1e-9)
 	want := par.S298 + R*math.Log(18) + h.value.S298 + R*math.Log(2) - R*math.Log(6) + lost + site.S298
 	assert.InDelta(t, want, rad.S298, 1e-9)

@@ -22,7 +22,8 @@ func FuzzEstimate(f *testing.F) {
 		}
 		fh.Close()
 	}
-	for _, s := range []string{"C=C=O", "[CH2]C=O", "C=C[O]", "[CH2]CC[CH2]", "[C]", "C1CC2CCC1C2", "O=C1C=CC(=O)C=C1"} {
+	for _, s := range []string{"C=C=O", "[CH2]C=O", "C=C[O]", "[CH2]CC[CH2]", "[C]", "C1CC2CCC1C2", "O=C1C=CC(=O)C=C1",
+		"C[N+](=O)[O-]", "CO[N+](=O)[O-]", "CON=O", "Cc1ccccn1", "[O-][N+](=O)c1ccncc1"} {
 		f.Add(s)
 	}
 	f.Fuzz(func(t *testing.T, smi string) {

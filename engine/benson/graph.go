@@ -13,7 +13,7 @@ type graph struct {
 	rings    [][]int // m.Rings(): SSSR, each ring a cyclic atom sequence (shared, read only)
 	ringBond []bool  // bond is in some ring of rings
 	ringAtom []int   // number of rings containing the atom
-	benzRing []bool  // rings[i] is a six-membered all-carbon aromatic ring
+	benzRing []bool  // rings[i] is a six-membered aromatic ring of carbons and azine N (hetero_n.go)
 	benzAtom []int   // number of benzenoid rings containing the atom
 	benzBond []bool  // bond lies in a benzenoid ring
 	typ      []string
@@ -56,7 +56,7 @@ func newGraph(m *molecule.Molecule) *graph {
 			b := g.bondBetween(a, r[(k+1)%len(r)])
 			g.ringBond[b] = true
 			g.ringAtom[a]++
-			if m.Atoms[a].Element != "C" || !m.Atoms[a].Aromatic || !m.Bonds[b].Aromatic {
+			if (m.Atoms[a].Element != "C" && !azineN(m, a)) || !m.Atoms[a].Aromatic || !m.Bonds[b].Aromatic {
 				benz = false
 			}
 		}
@@ -100,7 +100,13 @@ func (g *graph) bondBetween(a, c int) int {
 // (ketene carbon, see hetero.go), or the element symbol.
 func (g *graph) atomType(i int) string {
 	a := g.m.Atoms[i]
+	if a.Element == "N" {
+		return g.nitrogenType(i) // hetero_n.go
+	}
 	if a.Element != "C" {
+		if t, ok := g.sulfurOxideType(i); ok { // SO, SO2: hetero_sx.go
+			return t
+		}
 		return a.Element
 	}
 	if g.benzAtom[i] >= 2 {

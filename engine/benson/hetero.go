@@ -17,7 +17,9 @@ import (
 // dissociation enthalpies of hbi_nsx.tsv (heteroSite), thiyl sites the loss
 // of the thiol's S–H rotor (heteroSiteChange). Carbons bearing two or more
 // halogens next to another heavy atom are flagged (addHalogenFlags).
-// Everything else with N, S or halogens is refused, naming the group.
+// Nitro, nitrate, nitrite and azine nitrogen, nitrogen rings and the azo,
+// imine and nitroso types are in hetero_n.go. Everything else with N, S or
+// halogens is refused, naming the group.
 //
 // Three carbon types are added to the Benson types of graph.go:
 //
@@ -48,6 +50,8 @@ var hbiNSXTSV string
 // a name present twice is a defect of the tables.
 var extraGroupTables = []struct{ file, text string }{
 	{"groups_nsx.tsv", groupsNSXTSV},
+	{"groups_n.tsv", groupsNTSV},   // hetero_n.go
+	{"groups_sx.tsv", groupsSXTSV}, // hetero_sx.go
 }
 
 // heteroCarbonType returns CN for a nitrile carbon, CS for a thiocarbonyl
@@ -169,7 +173,7 @@ func addHalogenFlags(g *graph, l lookup, est *Result) {
 		}
 		est.Missing = append(est.Missing, Missing{
 			Group:         name,
-			Approximation: name + " without halogen interactions",
+			Approximation: name + withoutHalogenInteractions,
 			Note:          "polyhalogenated carbon: no geminal/vicinal halogen interaction correction at hand; errors of several kcal/mol are possible",
 		})
 	}
@@ -190,6 +194,9 @@ func heteroSite(g *graph, i int) (site, missing string, ok bool) {
 			if g.isCarbon(j) {
 				carbons++
 			}
+		}
+		if site, ok := nitrogenSite(g, i, carbons); ok { // hetero_n.go
+			return site, "", true
 		}
 		if carbons > 1 || len(g.nbr[i]) != carbons {
 			return "aminyl", "aminyl site other than R–NH (CH3NH–H increment used)", true

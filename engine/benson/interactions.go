@@ -44,6 +44,7 @@ func (g *graph) carbonNeighbours(x, not int) int {
 func addInteractions(g *graph, l lookup, est *Result) {
 	m := g.m
 	gauche, syn, cis, ortho := 0, 0, 0, 0
+	var orthoHal [len(orthoHalogenKeys)]int // halogen pairs with their own correction (hetero_sx.go)
 	for e, b := range m.Bonds {
 		x, y := b.A, b.B
 		if g.ringBond[e] || g.order(e) != 1 || g.typ[x] != "C" || g.typ[y] != "C" {
@@ -96,6 +97,10 @@ func addInteractions(g *graph, l lookup, est *Result) {
 			if g.sameRing(p, q, sp, sq) {
 				continue
 			}
+			if h, ok := g.orthoHalogen(sp, sq); ok { // hetero_sx.go
+				orthoHal[h]++
+				continue
+			}
 			ortho++
 		}
 	}
@@ -113,6 +118,14 @@ func addInteractions(g *graph, l lookup, est *Result) {
 		}
 		t := term(l.corrections[c.key], c.n)
 		t.Name = c.name
+		est.Corrections = append(est.Corrections, t)
+	}
+	for h, n := range orthoHal {
+		if n == 0 {
+			continue
+		}
+		t := term(l.corrections[orthoHalogenKeys[h].key], n)
+		t.Name = orthoHalogenKeys[h].name
 		est.Corrections = append(est.Corrections, t)
 	}
 }

@@ -9,10 +9,13 @@ import (
 // ligandRank orders neighbour types in a normalised group name: heteroatoms
 // first, then carbonyl and unsaturated carbons, then sp3 carbon, then H
 // (so "C-(H)3(C)" normalises to "C-(C)(H)3", "C-(H)2(C)(O)" to "C-(O)(C)(H)2").
-var ligandRank = map[string]int{
-	"O": 0, "N": 1, "S": 2, "F": 3, "Cl": 4, "Br": 5, "I": 6,
-	"CO": 7, "CN": 8, "CS": 9, "Cbf": 10, "Cb": 11, "Ct": 12, "Cd": 13, "Ca": 14, "C": 15, "H": 16,
-}
+var ligandRank = func() map[string]int {
+	r := make(map[string]int, len(ligandOrder))
+	for i, t := range ligandOrder {
+		r[t] = i
+	}
+	return r
+}()
 
 // centreLigands is the number of written neighbours of each group centre:
 // partners of multiple bonds and ring members of aromatic carbon are implied
@@ -21,6 +24,8 @@ var ligandRank = map[string]int{
 var centreLigands = map[string]int{
 	"C": 4, "Cd": 2, "Ct": 1, "Cb": 1, "Cbf": 3, "Ca": 0, "CO": 2, "O": 2, "S": 2, "N": 3,
 	"CN": 1, "Ck": 0, "CS": 2, // nitrile, ketene and thiocarbonyl carbons (hetero.go)
+	"NO2": 1, "NO": 1, "NA": 1, "Nb": 0, "Nbb": 0, // nitro, nitroso, azo and azine nitrogen (hetero_n.go)
+	"SO": 2, "SO2": 2, // sulfoxide and sulfone sulfur (hetero_sx.go)
 }
 
 // impliedPartner names, per centre type, the element of a terminal
@@ -29,7 +34,9 @@ var centreLigands = map[string]int{
 // other centre is named by no group and the estimate is refused. The ≡N of
 // a nitrile carbon CN is the one triple-bonded implied partner. This is the one place where a new centre
 // type (say a thiocarbonyl) declares the terminal atom it carries.
-var impliedPartner = map[string]string{"CO": "O", "Ck": "O", "CS": "S", "CN": "N"} // Ck, CS, CN: hetero.go
+var impliedPartner = map[string]string{"CO": "O", "Ck": "O", "CS": "S", "CN": "N", "SO": "O", "SO2": "O",
+	"NO2": "O", "NO": "O", // nitro (both =O) and nitroso nitrogen: hetero_n.go
+} // Ck, CS, CN: hetero.go; SO, SO2: hetero_sx.go
 
 // ParseGroupName validates a group name in Benson notation, centre-(ligand)n…,
 // and returns it normalised: ligands merged and sorted (see ligandRank), counts
@@ -88,7 +95,7 @@ func ParseGroupName(s string) (string, error) {
 }
 
 // ligCounts counts neighbours by type, indexed by ligandRank.
-type ligCounts [17]int
+type ligCounts [25]int
 
 // groupName writes a normalised group name from a centre and neighbour counts.
 func groupName(centre string, counts ligCounts) string {
@@ -115,4 +122,6 @@ func groupName(centre string, counts ligCounts) string {
 }
 
 // ligandOrder lists the neighbour types by ligandRank.
-var ligandOrder = []string{"O", "N", "S", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Ct", "Cd", "Ca", "C", "H"}
+// The nitrogen types of hetero_n.go (nitro NO2, nitroso NO, azo NA, imine
+// NI, azine Nb and Nbb) follow N, and Nb, Nbb follow Cb; SO, SO2 (hetero_sx.go) follow S.
+var ligandOrder = []string{"O", "N", "NO2", "NO", "NA", "NI", "S", "SO", "SO2", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Nb", "Nbb", "Ct", "Cd", "Ca", "C", "H"}

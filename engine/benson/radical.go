@@ -173,6 +173,9 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 		case "Cb", "Cbf":
 			return "phenyl", "", "", nil
 		case "Cd":
+			if g.m.Atoms[i].Aromatic { // furyl, thienyl: hetero_sx.go
+				return "vinylic", heteroarylSite, "", nil
+			}
 			return "vinylic", "", "", nil
 		case "CO":
 			return "acyl", "", "", nil
@@ -265,6 +268,9 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 		if err != nil {
 			return fmt.Errorf("atom %d: %w", i+1, err)
 		}
+		if miss == "" {
+			miss = nitrogenSiteNote(g, i, site) // hetero_n.go
+		}
 		if several != "" {
 			est.Missing = append(est.Missing, severalStabilisers(several, site))
 		}
@@ -317,8 +323,10 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 //
 //   - Inversion: a non-conjugated carbon radical centre (alkyl,
 //     α-hydroxy, α-alkoxy) is planar or nearly so, with a soft out-of-plane
-//     (umbrella) vibration near inversionWavenumber that the sp3 parent
-//     lacks; it is added as a harmonic oscillator.
+//     (umbrella) vibration near inversionWavenumber where the sp3 parent
+//     has a C–H bend near 1150 cm⁻¹; the bend is replaced by the umbrella
+//     mode (harmonic oscillators), keeping the radical's mode count at
+//     three below its parent's.
 //   - Freed rotors: each single bond from such a centre to another carbon
 //     was an internal rotor with a threefold barrier near 3 kcal/mol in the
 //     parent and is nearly free next to the planar centre (barrier a few
@@ -411,6 +419,16 @@ func siteChange(g *graph, i int) (siteDelta, bool) {
 			d.cp[i] += sign * R * x * x * ex / ((ex - 1) * (ex - 1))
 		}
 	}
+	bend := func(nu float64) { // remove one harmonic mode of wavenumber nu
+		th := secondRadiation * nu
+		x := th / 298.15
+		d.s -= R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
+		for i, T := range StdTemps {
+			x := th / T
+			ex := math.Exp(x)
+			d.cp[i] -= R * x * x * ex / ((ex - 1) * (ex - 1))
+		}
+	}
 	a := g.m.Atoms[i]
 	site, _, _, err := siteOf(g, i)
 	if err != nil {
@@ -446,7 +464,12 @@ func siteChange(g *graph, i int) (siteDelta, bool) {
 		if len(g.nbr[i]) == 0 {
 			return d, false // methyl-type: no parent rotor, no sp3 skeleton
 		}
+		// The umbrella mode is one of the parent's bends at the centre
+		// softened, not a new mode: lostModes already takes out the three
+		// modes the H atom brings, so a C–H bend is replaced here (the
+		// radical has 3N−6 modes, three fewer than its parent).
 		vib(+1)
+		bend(lostCH[2])
 		for k, j := range g.nbr[i] {
 			if g.isCarbon(j) && g.order(g.nbrBond[i][k]) == 1 && len(g.nbr[j])+g.m.Atoms[j].HCount > 1 {
 				d.s += freedRotorS * calorie

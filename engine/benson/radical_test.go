@@ -86,13 +86,14 @@ func TestRadicalEntropy(t *testing.T) {
 }
 
 // radicalSAim and radicalCpAim are the S° and Cp(300 K) MAEs the radical
-// treatment must keep (cal/(mol K)): measured 0.52 and 0.69 (run of
-// 2026-12-03, 15 radicals each; the Cp bound was 0.62 when only 5 Cp values
-// were entered) plus a margin of 0.2. The aim for S° is 1.0, so the
-// tighter bound applies; it sets no Cp aim.
+// treatment must keep (cal/(mol K)): measured 0.51 and 0.63 (run of
+// 2026-12-03, 15 radicals each, after the umbrella mode was made to replace
+// a C–H bend instead of adding a mode; 0.52 and 0.69 before) plus a margin
+// of 0.2. The aim for S° is 1.0, so the tighter bound applies; it
+// sets no Cp aim.
 const (
-	radicalSAim  = 0.72
-	radicalCpAim = 0.89
+	radicalSAim  = 0.71
+	radicalCpAim = 0.83
 )
 
 // A radical centre with several stabilising neighbours takes the most

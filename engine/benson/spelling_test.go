@@ -281,14 +281,21 @@ var spellingFixed = []string{
 	"C1CCC2CCCCC2C1", "c1ccc2ccccc2c1", "C1Cc2ccccc2C1", "c1ccc2c(c1)ccc1ccccc12", "CC12CCC(CC1)C(C)(C)O2",
 	"C1CC11CC1", "C12C3C1C4C2C34", "O=C1[CH]CCC1", "[O]C1=CCCC1", "c1ccoc1", "Cc1ccc(C)o1", "C1CCOC1",
 	"c1ccc2c(c1)oc1ccccc12", "CC1=CC(=O)CC(C)(C)C1", "[CH2]c1ccccc1", "C1=CC=CC1", "[CH]1C=CC=C1",
+	"Cc1cccs1", "CCc1ccsc1", "CCS(=O)C", "CS(=O)(=O)CC(C)C", "C1CCS1", "Clc1ccccc1Cl", "Fc1ccc(F)c(F)c1",
+	"C/C=C/Cl", "FC(F)=CC", "CC(C)(C)Br", "CCC(C)Br", "C=CSC",
+	// nitrogen (hetero_n.go): charge-separated and pentavalent nitro, nitrate, nitrite, azines, N rings
+	"C[N+](=O)[O-]", "CCN(=O)=O", "[O-][N+](=O)c1ccccc1", "CCO[N+](=O)[O-]", "CC(C)ON=O",
+	"c1ccncc1", "Cc1ccccn1", "c1cnccn1", "c1ccc2ncccc2c1", "Cc1ccc2cccnc2c1", "C1CCNC1", "CN1CC1",
 }
 
 // spellingRefused are refused structures added to the corpus: charged,
 // isotope-labelled, several missing groups, Kekulé-dependent groups.
 var spellingRefused = []string{
-	"C[N+](=O)[O-]", "CC[NH3+].[Cl-]", "[2H]CC[13CH3]", "C[Si](C)CC[Li]", "CC(=S)C(=S)C", "OB(O)CCP",
-	// pyridine-type rings: groups follow the Kekulé structure (kekule.go)
-	"Cc1ccccn1", "c1ccc2ncccc2c1", "Cc1ccc2cccnc2c1", "Cc1nccs1",
+	"CC[NH3+].[Cl-]", "[2H]CC[13CH3]", "C[Si](C)CC[Li]", "CC(=S)C(=S)C", "OB(O)CCP",
+	// five-membered aromatic rings with N: groups follow the Kekulé structure (kekule.go)
+	"Cc1nccs1", "c1cc[nH]c1", "Cn1ccnc1",
+	// charges other than N⁺–O⁻ units, ions, imines, azo (hetero_n.go)
+	"C[N+]#[C-]", "C[NH3+]", "CC[N+](C)(C)C", "CC=NC", "C/N=N/C", "CCN=O",
 }
 
 // TestRandomSpellingsOneAnswer: ≥ 2,000 estimable random structures

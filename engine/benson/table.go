@@ -62,7 +62,12 @@ var builtin = sync.OnceValue(func() *tables {
 		t.groups[r.Name] = r
 		t.order = append(t.order, r.Name)
 	}
-	for _, v := range mustFill("corrections.tsv", mustParse("corrections.tsv", correctionsTSV)) {
+	corr := mustParse("corrections.tsv", correctionsTSV)
+	for _, x := range extraCorrectionTables { // hetero_sx.go
+		corr = append(corr, mustParse(x.file, x.text)...)
+	}
+	corr = append(corr, mustParse("corrections_n.tsv", correctionsNTSV)...) // hetero_n.go
+	for _, v := range mustFill("corrections.tsv", corr) {
 		t.corrections[v.Name] = v
 	}
 	sys, err := parseSystems(systemsTSV)
@@ -70,7 +75,7 @@ var builtin = sync.OnceValue(func() *tables {
 		panic(fmt.Sprintf("benson: systems.tsv: %v", err))
 	}
 	t.systems = sys
-	for _, r := range append(mustParse("hbi.tsv", hbiTSV), mustParse("hbi_nsx.tsv", hbiNSXTSV)...) {
+	for _, r := range append(append(mustParse("hbi.tsv", hbiTSV), mustParse("hbi_nsx.tsv", hbiNSXTSV)...), mustParse("hbi_n.tsv", hbiNTSV)...) {
 		// Column 2 holds D(R–H); the ΔHf increment is D − ΔHf(H).
 		v := r.GroupValue
 		bde := v.Hf298

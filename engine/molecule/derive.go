@@ -95,3 +95,93 @@ func (m *Molecule) derive(atoms []Atom, bonds []Bond) *Molecule {
 	d.derived.inRing = inRing
 	return d
 }
+
+// WithCharges returns a charge-shifted structure of m: atom i gets formal
+// charge charges[i] and bond b order orders[b] (1, 2 or 3), all other atoms
+// and bonds unchanged (C[N+](=O)[O-] → CN(=O)=O). The net charge must stay
+// the same, and every atom whose charge or bonds change must end on a normal
+// valence for its new charge (bond orders + hydrogens + radical electrons).
+// Changed bonds lose their cis/trans marks. Rings and aromaticity are
+// perceived afresh.
+func (m *Molecule) WithCharges(charges map[int]int, orders map[int]int) (*Molecule, error) {
+	atoms := slices.Clone(m.Atoms)
+	bonds := slices.Clone(m.Bonds)
+	net := 0
+	touched := map[int]bool{}
+	for i, q := range charges {
+		if i < 0 || i >= len(atoms) {
+			return nil, fmt.Errorf("charge-shifted structure: atom %d out of range (%d atoms)", i, len(atoms))
+		}
+		net += q - atoms[i].Charge
+		atoms[i].Charge = q
+		touched[i] = true
+	}
+	if net != 0 {
+		return nil, fmt.Errorf("charge-shifted structure: net charge would change by %+d", net)
+	}
+	for b, o := range orders {
+		if b < 0 || b >= len(bonds) {
+			return nil, fmt.Errorf("charge-shifted structure: bond %d out of range (%d bonds)", b, len(bonds))
+		}
+		if o < 1 || o > 3 {
+			return nil, fmt.Errorf("charge-shifted structure: bond order %d (want 1, 2 or 3)", o)
+		}
+		if bonds[b].Order != o {
+			bonds[b].Order = o
+			bonds[b].Stereo = 0
+			bonds[b].Aromatic = false
+		}
+		touched[bonds[b].A], touched[bonds[b].B] = true, true
+	}
+	for i := range touched {
+		e, ok := elementIndex(atoms[i].Element)
+		if !ok {
+			return nil, fmt.Errorf("charge-shifted structure: atom %d: unknown element %s", i, atoms[i].Element)
+		}
+		total := atoms[i].HCount + atoms[i].Radical
+		for _, b := range m.Adj[i] {
+			total += bonds[b].Order
+		}
+		vs, ok := valences(e, atoms[i].Charge)
+		if !ok || !slices.Contains(vs, total) {
+			return nil, fmt.Errorf("charge-shifted structure: atom %d (%s, charge %+d) would have valence %d", i, atoms[i].Element, atoms[i].Charge, total)
+		}
+	}
+	return m.derive(atoms, bonds), nil
+}
+
+// NeutralNO returns m with every charge-separated N⁺–O⁻ unit — a
+// non-aromatic N⁺ single-bonded to a terminal O⁻ (no H, no radical, no
+// isotope label) — written as N=O: the one structure for the
+// charge-separated and the pentavalent spellings of nitro, nitrate and
+// N-oxide groups (C[N+](=O)[O-] and CN(=O)=O). m itself is returned when it
+// has no such unit or when the rewritten structure would break a valence
+// rule. Atom indices are unchanged.
+func (m *Molecule) NeutralNO() *Molecule {
+	var charges, orders map[int]int
+	for i, a := range m.Atoms {
+		if a.Element != "N" || a.Charge != 1 || a.Aromatic {
+			continue
+		}
+		for _, b := range m.Adj[i] {
+			j := m.Other(b, i)
+			o := m.Atoms[j]
+			if o.Element != "O" || o.Charge != -1 || m.Bonds[b].Order != 1 || len(m.Adj[j]) != 1 || o.HCount != 0 || o.Radical != 0 || o.Isotope != 0 {
+				continue
+			}
+			if charges == nil {
+				charges, orders = map[int]int{}, map[int]int{}
+			}
+			charges[i], charges[j], orders[b] = 0, 0, 2
+			break
+		}
+	}
+	if charges == nil {
+		return m
+	}
+	n, err := m.WithCharges(charges, orders)
+	if err != nil {
+		return m
+	}
+	return n
+}

@@ -64,3 +64,36 @@ func TestResonanceKeepsRing(t *testing.T) {
 	_, err = m.WithBondOrders(map[int]int{99: 1}, nil)
 	assert.ErrorContains(t, err, "out of range")
 }
+
+// WithCharges rewrites a charge-separated unit as its neutral structure
+// (same canonical form as the neutral spelling) and refuses changes that
+// alter the net charge or break a valence.
+func TestWithCharges(t *testing.T) {
+	m, err := ParseSMILES("C[N+](=O)[O-]")
+	require.NoError(t, err)
+	n := -1
+	for i, a := range m.Atoms {
+		if a.Element == "N" {
+			n = i
+		}
+	}
+	var o, b = -1, -1
+	for _, bb := range m.Adj[n] {
+		j := m.Other(bb, n)
+		if m.Atoms[j].Charge == -1 {
+			o, b = j, bb
+		}
+	}
+	require.GreaterOrEqual(t, o, 0)
+	d, err := m.WithCharges(map[int]int{n: 0, o: 0}, map[int]int{b: 2})
+	require.NoError(t, err)
+	want, err := ParseSMILES("CN(=O)=O")
+	require.NoError(t, err)
+	assert.Equal(t, want.Canonical(), d.Canonical())
+	assert.Equal(t, 1, m.Atoms[n].Charge, "the original is unchanged")
+
+	_, err = m.WithCharges(map[int]int{n: 0}, nil)
+	assert.ErrorContains(t, err, "net charge")
+	_, err = m.WithCharges(map[int]int{n: 0, o: 0}, nil)
+	assert.ErrorContains(t, err, "valence")
+}

@@ -83,7 +83,9 @@ func build() *Library {
 			}
 			c := structureKey(m)
 			k := key(c, e.mult)
-			if prev, dup := l.index[k]; dup {
+			if prev, dup := l.index[k]; dup && prev == len(l.species)-1 {
+				continue // an alias that is the same structure as the entry's SMILES
+			} else if dup {
 				panic(fmt.Sprintf("reflib: %s and %s share structure and multiplicity (%s)", l.species[prev].Name, e.name, k))
 			}
 			l.index[k] = len(l.species) - 1
@@ -107,6 +109,9 @@ func key(canonical string, mult int) string { return canonical + "|" + strconv.I
 // ("H:2/0" for H2, "H:1/1" for the H atom). Isotope labels and charges keep
 // the canonical form, so [2H][2H] and [H+] find no protium entry.
 func structureKey(m *molecule.Molecule) string {
+	// Charge-separated and pentavalent spellings of an N–O unit are one
+	// structure (molecule.NeutralNO), as for the estimator.
+	m = m.NeutralNO()
 	for _, a := range m.Atoms {
 		if a.Element != "H" || a.Isotope != 0 || a.Charge != 0 {
 			return m.Canonical()

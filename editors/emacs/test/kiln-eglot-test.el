@@ -120,6 +120,57 @@
           (kill-buffer buf))
         (delete-directory dir t)))))
 
+(declare-function kiln-equilibrium "kiln-eglot")
+
+(ert-deftest kiln-eglot-live-equilibrium ()
+  ;; M-x kiln-equilibrium on a file of combustion products: the buffer
+  ;; *kiln equilibrium* shows the mixture and exactly what `kiln
+  ;; equilibrium' prints for it; a mistake is a user-error with the
+  ;; server's message.
+  (skip-unless (kiln-eglot-test--load))
+  (let ((binary (getenv "KILN_BINARY"))
+        (fixture (getenv "KILN_FIXTURE")))
+    (skip-unless (and binary (not (string-empty-p binary)) fixture))
+    (let* ((dir (make-temp-file "kiln-eglot" t))
+           (file (expand-file-name "flame.kiln" dir))
+           (eglot-server-programs (cons `(kiln-mode . (kiln-eglot-server ,binary "serve"))
+                                        eglot-server-programs))
+           (mix "CH4:1, O2:2, N2:7.52")
+           (buf nil))
+      (unwind-protect
+          (progn
+            (copy-file (expand-file-name "flame.kiln" (file-name-directory fixture)) file)
+            (setq buf (find-file-noselect file))
+            (switch-to-buffer buf)
+            (with-current-buffer buf
+              (apply #'eglot (eglot--guess-contact))
+              (should (kiln-eglot-test--wait #'eglot-current-server 20))
+              (let* ((out (kiln-equilibrium mix))
+                     (shown (with-current-buffer out (buffer-string)))
+                     (cli (with-temp-buffer
+                            (let ((default-directory (file-name-as-directory dir)))
+                              (should (= 0 (call-process binary nil t nil "equilibrium" "flame.kiln"
+                                                         "--adiabatic" "--mix" mix))))
+                            (buffer-string))))
+                (should (equal (buffer-name out) "*kiln equilibrium*"))
+                (should (get-buffer-window out))
+                (should (equal shown (concat "mix: " mix "\n" cli)))
+                ;; Stoichiometric methane-air from 298.15 K at 1 atm: about
+                ;; 2225 K (common practice).
+                (should (string-match "final    T = \\([0-9.]+\\) K" shown))
+                (should (< (abs (- (string-to-number (match-string 1 shown)) 2225)) 10)))
+              (let ((err (should-error (kiln-equilibrium "CH4:1, XY:2") :type 'user-error)))
+                (should (string-match-p "mix species XY is not declared in flame.kiln"
+                                        (error-message-string err))))
+              (let ((err (should-error (kiln-equilibrium "CH4:1, O2") :type 'user-error)))
+                (should (string-match-p "mix item 2 (column 8)" (error-message-string err))))))
+        (when buf
+          (with-current-buffer buf
+            (when (eglot-current-server)
+              (eglot-shutdown (eglot-current-server))))
+          (kill-buffer buf))
+        (delete-directory dir t)))))
+
 (declare-function kiln-eglot--points "kiln-eglot")
 (declare-function eglot--lsp-position-to-point "eglot")
 

@@ -21,7 +21,7 @@ here=$(cd "$(dirname "$0")" && pwd)
 plugin=$(dirname "$here")
 work=$(mktemp -d)
 trap 'rm -rf "$work"' EXIT
-cp "$here/fixture.kiln" "$here/syntax.kiln" "$here/severity.kiln" "$work/"
+cp "$here/fixture.kiln" "$here/syntax.kiln" "$here/severity.kiln" "$here/flame.kiln" "$work/"
 # A fresh LSP log (stdpath cache/state) for the stderr check.
 export XDG_CACHE_HOME="$work/cache" XDG_STATE_HOME="$work/state"
 

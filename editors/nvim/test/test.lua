@@ -433,6 +433,97 @@ if live_ok then
     vim.cmd('buffer ' .. bufnr)
   end)
 
+  -- Equilibrium: :KilnEquilibrium, the code lens, errors.
+  local flame_buf
+  local function result_lines(first)
+    for _, o in ipairs(vim.api.nvim_list_bufs()) do
+      if vim.api.nvim_buf_get_name(o):find('[kiln equilibrium]', 1, true) then
+        local ls = vim.api.nvim_buf_get_lines(o, 0, -1, false)
+        if ls[1] == first and #ls > 3 then
+          return ls, o
+        end
+      end
+    end
+    return nil
+  end
+  local function final_T(lines)
+    return tonumber(table.concat(lines, '\n'):match('final%s+T = ([%d.]+) K'))
+  end
+
+  check('equilibrium: :KilnEquilibrium MIX shows what kiln equilibrium prints', function()
+    vim.cmd('edit ' .. vim.fn.fnameescape(workdir .. '/flame.kiln'))
+    flame_buf = vim.api.nvim_get_current_buf()
+    expect(vim.wait(TIMEOUT, function() return vim.lsp.buf_is_attached(flame_buf, client_id) end, 50), 'flame.kiln not attached')
+    local mix = 'CH4:1, O2:2, N2:7.52'
+    vim.cmd('KilnEquilibrium ' .. mix)
+    local got, rb
+    expect(vim.wait(TIMEOUT, function()
+      got, rb = result_lines('mix: ' .. mix)
+      return got ~= nil
+    end, 50), 'no [kiln equilibrium] buffer with the result')
+    expect(vim.fn.bufwinid(rb) ~= -1, 'the result buffer is not shown')
+    expect(vim.api.nvim_get_current_buf() == flame_buf, 'the cursor left the kiln file')
+    local cli = vim.fn.systemlist('cd ' .. vim.fn.shellescape(workdir) .. ' && ' .. vim.fn.shellescape(binary)
+      .. ' equilibrium flame.kiln --adiabatic --mix ' .. vim.fn.shellescape(mix))
+    expect(vim.v.shell_error == 0, 'kiln equilibrium failed: ' .. table.concat(cli, '\n'))
+    local shown = { unpack(got, 2) }
+    expect(vim.deep_equal(shown, cli), 'buffer:\n' .. table.concat(shown, '\n') .. '\nCLI:\n' .. table.concat(cli, '\n'))
+    local T = final_T(got)
+    -- Stoichiometric methane-air from 298.15 K at 1 atm: about 2225 K (common practice).
+    expect(T and math.abs(T - 2225) < 10, 'flame temperature ' .. tostring(T))
+  end)
+
+  check('equilibrium: the code lens asks for the mixture and shows the result', function()
+    vim.cmd('buffer ' .. flame_buf)
+    local lens
+    expect(vim.wait(TIMEOUT, function()
+      vim.lsp.codelens.refresh()
+      for _, l in ipairs(vim.lsp.codelens.get(flame_buf) or {}) do
+        if l.command and l.command.command == 'kiln.showEquilibrium' then
+          lens = l
+          return true
+        end
+      end
+      return false
+    end, 200), 'no equilibrium code lens: ' .. vim.inspect(vim.lsp.codelens.get(flame_buf)))
+    expect(lens.range.start.line == line_of_buf(flame_buf, '^species CH4'), 'lens on line ' .. lens.range.start.line)
+    expect(lens.command.title == 'Equilibrium / flame temperature…', 'lens title ' .. lens.command.title)
+    local asked
+    local input = vim.ui.input
+    vim.ui.input = function(o, cb)
+      asked = o
+      cb('H2:2, O2:1')
+    end
+    vim.api.nvim_win_set_cursor(0, { lens.range.start.line + 1, 0 })
+    local ok, err = pcall(vim.lsp.codelens.run)
+    vim.ui.input = input
+    expect(ok, 'codelens.run: ' .. tostring(err))
+    expect(asked and asked.prompt:find('Mixture', 1, true), 'no mixture prompt: ' .. vim.inspect(asked))
+    local got
+    expect(vim.wait(TIMEOUT, function()
+      got = result_lines('mix: H2:2, O2:1')
+      return got ~= nil
+    end, 50), 'no result for the mixture typed at the prompt')
+    -- Hydrogen-oxygen from 298.15 K at 1 atm burns above 3000 K (README: 3075 K).
+    local T = final_T(got)
+    expect(T and T > 3000 and T < 3150, 'hydrogen-oxygen flame temperature ' .. tostring(T))
+  end)
+
+  check('equilibrium: an undeclared species is reported with the server message', function()
+    vim.cmd('buffer ' .. flame_buf)
+    local msgs = {}
+    local notify = vim.notify
+    vim.notify = function(m)
+      table.insert(msgs, m)
+    end
+    vim.cmd('KilnEquilibrium CH4:1, XY:2')
+    local ok = vim.wait(TIMEOUT, function() return #msgs > 0 end, 50)
+    vim.notify = notify
+    expect(ok, 'no message')
+    expect(msgs[1]:find('mix species XY is not declared in flame.kiln', 1, true), 'message: ' .. msgs[1])
+    vim.cmd('buffer ' .. bufnr)
+  end)
+
   check('restart after a crash: the buffer is in sync, later edits are sent', function()
     local has_code = function(code)
       for _, d in ipairs(vim.diagnostic.get(bufnr)) do

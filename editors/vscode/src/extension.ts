@@ -2,11 +2,20 @@
 import * as vscode from 'vscode';
 import {
   DidChangeConfigurationNotification,
+  ExecuteCommandRequest,
   LanguageClient,
   LanguageClientOptions,
   ServerOptions,
   TransportKind,
 } from 'vscode-languageclient/node';
+import {
+  EquilibriumAnswer,
+  defaultMix,
+  equilibriumArgs,
+  formatEquilibrium,
+  serverCommand as equilibriumCommand,
+  showCommand as showEquilibriumCommand,
+} from './equilibrium';
 import { reindentAfterKeyword } from './indent';
 import { restartKeys, serverCommand, toServerSettings } from './settings';
 
@@ -76,6 +85,12 @@ class KilnClient {
     }
   }
 
+  /** The running client, or undefined. */
+  running(): LanguageClient | undefined {
+    const client = this.client;
+    return client && client.isRunning() ? client : undefined;
+  }
+
   async stop(): Promise<void> {
     const client = this.client;
     this.client = undefined;
@@ -124,12 +139,74 @@ const keywordIndenter: vscode.OnTypeFormattingEditProvider = {
   },
 };
 
+/**
+ * The command behind "kiln: Equilibrium / flame temperature…" and the code
+ * lens: asks for the mixture, runs the server's kiln.equilibrium on the
+ * kiln document (the lens's, else the active editor's) and shows the
+ * answer — the text `kiln equilibrium` prints — in the "kiln equilibrium"
+ * output channel. Returns the answer (for tests and other extensions).
+ */
+async function showEquilibrium(
+  kiln: KilnClient,
+  results: vscode.OutputChannel,
+  memory: { last?: string },
+  arg?: { uri?: string; mix?: string },
+): Promise<EquilibriumAnswer | undefined> {
+  const uri = arg?.uri ?? vscode.window.activeTextEditor?.document.uri.toString();
+  const doc = uri ? vscode.workspace.textDocuments.find((d) => d.uri.toString() === uri) : undefined;
+  if (!uri || !doc || doc.languageId !== 'kiln') {
+    void vscode.window.showErrorMessage('kiln: open a kiln file to compute an equilibrium over its species.');
+    return undefined;
+  }
+  const client = kiln.running();
+  if (!client) {
+    void vscode.window.showErrorMessage('kiln: the language server is not running.');
+    return undefined;
+  }
+  const get = readConfig();
+  let mix = arg?.mix;
+  if (mix === undefined) {
+    mix = await vscode.window.showInputBox({
+      title: 'kiln: equilibrium / flame temperature',
+      prompt: 'Mixture as NAME:AMOUNT, … with the species names of the file',
+      placeHolder: 'CH4:1, O2:2, N2:7.52',
+      value: defaultMix(get, memory.last),
+      ignoreFocusOut: true,
+    });
+  }
+  if (mix === undefined || mix.trim() === '') {
+    return undefined;
+  }
+  memory.last = mix;
+  const args = equilibriumArgs(uri, mix, get);
+  try {
+    const answer = (await client.sendRequest(ExecuteCommandRequest.type, {
+      command: equilibriumCommand,
+      arguments: [args],
+    })) as EquilibriumAnswer;
+    results.clear();
+    results.append(formatEquilibrium(mix, answer));
+    results.show(true);
+    return answer;
+  } catch (err) {
+    const msg = err instanceof Error ? err.message : String(err);
+    void vscode.window.showErrorMessage(`kiln: ${msg}`);
+    return undefined;
+  }
+}
+
 export async function activate(context: vscode.ExtensionContext): Promise<void> {
   const output = vscode.window.createOutputChannel('kiln');
+  const results = vscode.window.createOutputChannel('kiln equilibrium');
   const kiln = new KilnClient(output);
   active = kiln;
+  const memory: { last?: string } = {};
   context.subscriptions.push(
     output,
+    results,
+    vscode.commands.registerCommand(showEquilibriumCommand, (arg?: { uri?: string; mix?: string }) =>
+      showEquilibrium(kiln, results, memory, arg),
+    ),
     vscode.languages.registerOnTypeFormattingEditProvider({ language: 'kiln' }, keywordIndenter, ' '),
     vscode.commands.registerCommand('kiln.restartServer', async () => {
       await kiln.restart();

@@ -7,8 +7,11 @@
 
 /** Settings understood by `kiln serve`, with the server's exact key names. */
 export interface KilnServerSettings {
-  /** Energy unit of hovers, hints and inserted blocks: "kcal/mol" or "kJ/mol". */
-  units: 'kcal/mol' | 'kJ/mol';
+  /**
+   * Energy unit of hovers, hints and inserted blocks: "kcal/mol" or "kJ/mol".
+   * Absent: each file's own `units` statement decides (the server's rule).
+   */
+  units?: 'kcal/mol' | 'kJ/mol';
   /** Common temperature of fitted NASA-7 polynomials, K. */
   tMid: number;
   /** Upper temperature of fitted NASA-7 polynomials, K. */
@@ -17,8 +20,12 @@ export interface KilnServerSettings {
   mismatchHf298: number;
   /** S°298 mismatch threshold, cal/(mol K). */
   mismatchS298: number;
+  /** Cp(T) mismatch threshold, cal/(mol K). */
+  mismatchCp: number;
   /** Multiple of the collision limit above which a rate is reported. */
   collisionFactor: number;
+  /** Pressure (bar) of pressure-dependent rates. Absent: 1 atm. */
+  pressure?: number;
   /**
    * Send the per-species "estimated …" information diagnostics. Absent: the
    * server decides (off for clients that show inlay hints).
@@ -28,11 +35,11 @@ export interface KilnServerSettings {
 
 /** Defaults; they equal the server's own defaults and the package.json defaults. */
 export const defaultServerSettings: Readonly<KilnServerSettings> = Object.freeze({
-  units: 'kcal/mol',
   tMid: 1000,
   tHigh: 5000,
   mismatchHf298: 3,
   mismatchS298: 3,
+  mismatchCp: 1.5,
   collisionFactor: 1,
 });
 
@@ -62,13 +69,20 @@ export function toServerSettings(get: SettingReader): KilnServerSettings {
     tHigh = d.tHigh;
   }
   const out: KilnServerSettings = {
-    units: units === 'kJ/mol' || units === 'kcal/mol' ? units : d.units,
     tMid,
     tHigh,
     mismatchHf298: positive(get('thresholds.hf298'), d.mismatchHf298),
     mismatchS298: positive(get('thresholds.s298'), d.mismatchS298),
+    mismatchCp: positive(get('thresholds.cp'), d.mismatchCp),
     collisionFactor: positive(get('thresholds.collisionFactor'), d.collisionFactor),
   };
+  if (units === 'kJ/mol' || units === 'kcal/mol') {
+    out.units = units;
+  }
+  const pressure = get('pressure');
+  if (typeof pressure === 'number' && Number.isFinite(pressure) && pressure > 0) {
+    out.pressure = pressure;
+  }
   const notes = get('estimateNotes');
   if (typeof notes === 'boolean') {
     out.estimateNotes = notes;

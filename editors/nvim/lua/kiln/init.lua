@@ -16,7 +16,22 @@
 --     debounce_ms = 50,                       -- optional: delay before sending changes
 --     diagnostics = { severity_sort = true }, -- optional: vim.diagnostic options for kiln
 --     on_attach = function(client, bufnr) end, -- optional
+--     code_lens = true,                       -- optional: show the equilibrium code lens
+--     equilibrium = {                         -- optional: :KilnEquilibrium defaults
+--       mix = 'CH4:1, O2:2, N2:7.52',         --   offered in the prompt (default none)
+--       temperature = 298.15, pressure = '1atm',
+--       adiabatic = true,                     --   flame temperature (false: T held)
+--       volume = false,                       --   constant volume instead of pressure
+--     },
 --   })
+--
+-- :KilnEquilibrium [MIX] computes the equilibrium (by default the adiabatic
+-- flame temperature at constant pressure) of the mixture over the current
+-- file's species from the file's own thermo, with the server's
+-- kiln.equilibrium command (the code of `kiln equilibrium`), and shows it in
+-- the scratch buffer [kiln equilibrium]. Without MIX it asks with
+-- vim.ui.input. The code lens "Equilibrium / flame temperature…" on the first
+-- species line runs the same command (vim.lsp.codelens.run()).
 --
 -- settings are sent as initializationOptions {kiln = settings} and as
 -- workspace/didChangeConfiguration {settings = {kiln = settings}}; the keys
@@ -39,6 +54,8 @@ local defaults = {
   debounce_ms = 50,
   diagnostics = { severity_sort = true },
   on_attach = nil,
+  code_lens = true,
+  equilibrium = { mix = nil, temperature = 298.15, pressure = '1atm', adiabatic = true, volume = false },
 }
 
 -- Per-Neovim-session state.
@@ -371,6 +388,125 @@ local function enable_hints(bufnr, cfg)
 end
 
 ------------------------------------------------------------------------
+-- Code lens and the equilibrium command.
+------------------------------------------------------------------------
+local function refresh_code_lens(bufnr)
+  -- 0.7-0.9 refresh the current buffer; 0.10+ take { bufnr = n }.
+  if not vim.api.nvim_buf_is_valid(bufnr) or vim.api.nvim_get_current_buf() ~= bufnr then
+    return
+  end
+  if kiln_client_for(bufnr) then
+    pcall(vim.lsp.codelens.refresh, { bufnr = bufnr })
+  end
+end
+
+local function enable_code_lens(bufnr, cfg)
+  if not cfg.code_lens or not vim.lsp.codelens then
+    return
+  end
+  vim.api.nvim_create_autocmd({ 'BufEnter', 'InsertLeave', 'BufWritePost' }, {
+    group = state.augroup,
+    buffer = bufnr,
+    callback = function()
+      refresh_code_lens(bufnr)
+    end,
+  })
+  vim.defer_fn(function()
+    refresh_code_lens(bufnr)
+  end, 100)
+end
+
+local result_name = '[kiln equilibrium]'
+
+-- The scratch buffer showing equilibrium results, shown in a window.
+local function result_buffer()
+  local b
+  for _, o in ipairs(vim.api.nvim_list_bufs()) do
+    if vim.api.nvim_buf_is_valid(o) and vim.fn.fnamemodify(vim.api.nvim_buf_get_name(o), ':t') == result_name then
+      b = o
+    end
+  end
+  if not b then
+    b = vim.api.nvim_create_buf(true, true) -- listed scratch buffer
+    vim.api.nvim_buf_set_name(b, result_name)
+    vim.bo[b].buftype = 'nofile'
+    vim.bo[b].bufhidden = 'hide'
+    vim.bo[b].swapfile = false
+  end
+  if vim.fn.bufwinid(b) == -1 then
+    local cur = vim.api.nvim_get_current_win()
+    vim.cmd('botright split')
+    vim.api.nvim_win_set_buf(0, b)
+    vim.api.nvim_set_current_win(cur)
+  end
+  return b
+end
+
+--- Shows an answer of kiln.equilibrium in the [kiln equilibrium] buffer:
+--- the mixture, the text `kiln equilibrium` prints, and the warnings.
+---@return number the buffer
+function M.show_equilibrium(mix, answer)
+  local lines = { 'mix: ' .. mix }
+  for _, l in ipairs(vim.split((answer.text or ''):gsub('\n$', ''), '\n', { plain = true })) do
+    table.insert(lines, l)
+  end
+  for _, w in ipairs(answer.warnings or {}) do
+    table.insert(lines, 'note: ' .. w)
+  end
+  local b = result_buffer()
+  vim.bo[b].modifiable = true
+  vim.api.nvim_buf_set_lines(b, 0, -1, false, lines)
+  vim.bo[b].modifiable = false
+  return b
+end
+
+--- Computes the equilibrium of `mix` over the species of kiln buffer
+--- `bufnr` (default current) with the server's kiln.equilibrium command and
+--- shows it; without `mix` asks for it (vim.ui.input). `opts` overrides the
+--- setup's `equilibrium` defaults (temperature, pressure, adiabatic, volume).
+--- `on_done(err, answer)`, when given, is called with the outcome.
+function M.equilibrium(mix, bufnr, opts, on_done)
+  bufnr = (bufnr == nil or bufnr == 0) and vim.api.nvim_get_current_buf() or bufnr
+  local cfg = state.config or merged(nil)
+  local eq = vim.tbl_extend('force', defaults.equilibrium, cfg.equilibrium or {}, opts or {})
+  local function fail(msg)
+    vim.notify('kiln: ' .. msg, vim.log.levels.ERROR)
+    if on_done then
+      on_done(msg, nil)
+    end
+  end
+  local client = kiln_client_for(bufnr)
+  if not client then
+    return fail('no kiln language server runs for this buffer')
+  end
+  if mix == nil or vim.trim(mix) == '' then
+    vim.ui.input({ prompt = 'Mixture (NAME:AMOUNT, …): ', default = eq.mix or '' }, function(input)
+      if input and vim.trim(input) ~= '' then
+        M.equilibrium(input, bufnr, opts, on_done)
+      end
+    end)
+    return
+  end
+  local args = {
+    uri = vim.uri_from_bufnr(bufnr),
+    mix = mix,
+    temperature = eq.temperature,
+    pressure = eq.pressure,
+    adiabatic = eq.adiabatic and true or false,
+    volume = eq.volume and true or false,
+  }
+  client.request('workspace/executeCommand', { command = 'kiln.equilibrium', arguments = { args } }, function(err, result)
+    if err then
+      return fail(err.message or vim.inspect(err))
+    end
+    M.show_equilibrium(mix, result)
+    if on_done then
+      on_done(nil, result)
+    end
+  end, bufnr)
+end
+
+------------------------------------------------------------------------
 -- Client.
 ------------------------------------------------------------------------
 local function capabilities(cfg)
@@ -437,6 +573,17 @@ local function start(root, cfg)
     settings = settings,
     capabilities = capabilities(cfg),
     handlers = handlers(cfg),
+    commands = {
+      -- The command of the server's code lens: ask for the mixture, then run.
+      ['kiln.showEquilibrium'] = function(command, ctx)
+        local arg = command.arguments and command.arguments[1] or {}
+        local b = ctx and ctx.bufnr or 0
+        if arg.uri then
+          b = vim.uri_to_bufnr(arg.uri)
+        end
+        M.equilibrium(nil, b)
+      end,
+    },
     flags = { debounce_text_changes = cfg.debounce_ms },
     on_init = function(client)
       if cfg.diagnostics and next(cfg.diagnostics) then
@@ -447,6 +594,7 @@ local function start(root, cfg)
     end,
     on_attach = function(client, bufnr)
       enable_hints(bufnr, cfg)
+      enable_code_lens(bufnr, cfg)
       if cfg.on_attach then
         cfg.on_attach(client, bufnr)
       end
@@ -552,6 +700,9 @@ function M.setup(opts)
   vim.api.nvim_create_user_command('KilnRestart', function()
     M.restart()
   end, { desc = 'Restart the kiln language server' })
+  vim.api.nvim_create_user_command('KilnEquilibrium', function(a)
+    M.equilibrium(a.args)
+  end, { nargs = '?', desc = 'Equilibrium / flame temperature of a mixture over this file\'s species' })
   for _, b in ipairs(kiln_buffers()) do
     M.attach(b)
   end

@@ -1,6 +1,7 @@
 // Drives VS Code (a code-server build) in headless Chromium with the kiln
 // extension installed: diagnostics, hover, inlay hints and the NASA-7 quick
-// fix on fixture.kiln, against the real server. Run by run.sh.
+// fix on fixture.kiln, and the equilibrium code lens, against the real
+// server. Run by run.sh.
 // Environment: PORT (code-server), WS (workspace folder), CHROMIUM, SHOTS
 // (directory for screenshots).
 import { chromium } from 'playwright-core';
@@ -97,6 +98,28 @@ await check('quick fix inserts a NASA-7 block under ethanol', async () => {
     { timeout: 30000 },
   );
   await page.screenshot({ path: `${shots}/after-fix.png` });
+});
+
+await check('code lens: Equilibrium / flame temperature… asks for the mixture and shows the result', async () => {
+  const lens = page.locator('.monaco-editor .codelens-decoration a', { hasText: 'Equilibrium / flame temperature' }).first();
+  await lens.waitFor({ timeout: 60000 });
+  await page.screenshot({ path: `${shots}/codelens.png` });
+  await lens.click();
+  // The input box has the focus.
+  await page.locator('.quick-input-widget', { hasText: 'Mixture as NAME:AMOUNT' }).waitFor({ state: 'visible', timeout: 30000 });
+  await page.keyboard.type('ethanol:1, ethane:1');
+  await page.keyboard.press('Enter');
+  // The "kiln equilibrium" output channel shows what `kiln equilibrium` prints.
+  await page.waitForFunction(
+    () => [...document.querySelectorAll('.part.panel .view-lines')]
+      .map((v) => v.textContent.replace(/\u00a0/g, ' '))
+      .some((t) => t.includes('mix: ethanol:1, ethane:1')
+        && t.includes('Equilibrium of fixture.kiln, adiabatic at constant pressure')
+        && /final\s+T = \d+\.\d\d K/.test(t)),
+    null,
+    { timeout: 60000 },
+  );
+  await page.screenshot({ path: `${shots}/equilibrium.png` });
 });
 
 await browser.close();

@@ -2,8 +2,9 @@
 # End-to-end test of the VS Code extension in a real VS Code: the code-server
 # build of VS Code (npm package code-server 4.96.4, VS Code 1.96.4; the last
 # release that runs on Node.js 20) driven headless by Debian's Chromium
-# through playwright-core. Checks diagnostics, inlay hints, hover and the
-# NASA-7 quick fix against the real server (drive.mjs).
+# through playwright-core. Checks diagnostics, inlay hints, hover, the
+# NASA-7 quick fix and the equilibrium code lens against the real server
+# (drive.mjs).
 #
 # Usage: editors/vscode/test/e2e/run.sh KILN_BINARY VSIX
 # Needs: node/npm, chromium (Debian), g++ and make (code-server's native

@@ -18,7 +18,9 @@ test('every kiln.* setting maps to its server key', () => {
       'fit.tHigh': 4000,
       'thresholds.hf298': 1.5,
       'thresholds.s298': 2.5,
+      'thresholds.cp': 0.8,
       'thresholds.collisionFactor': 10,
+      pressure: 10,
     }),
   );
   assert.deepEqual(s, {
@@ -27,17 +29,30 @@ test('every kiln.* setting maps to its server key', () => {
     tHigh: 4000,
     mismatchHf298: 1.5,
     mismatchS298: 2.5,
+    mismatchCp: 0.8,
     collisionFactor: 10,
+    pressure: 10,
   });
-  // The server reads exactly these keys; an extra or renamed key would be ignored silently.
+  // The server reads exactly these keys (analysis.SettingsInput); an extra or
+  // renamed key would be ignored silently.
   assert.deepEqual(Object.keys(s).sort(), [
     'collisionFactor',
+    'mismatchCp',
     'mismatchHf298',
     'mismatchS298',
+    'pressure',
     'tHigh',
     'tMid',
     'units',
   ]);
+});
+
+test('units and pressure are sent only when set, so the file units statement applies', () => {
+  assert.equal('units' in toServerSettings(reader({})), false);
+  assert.equal('units' in toServerSettings(reader({ units: null })), false);
+  assert.equal('pressure' in toServerSettings(reader({ pressure: null })), false);
+  assert.equal('pressure' in toServerSettings(reader({ pressure: -1 })), false);
+  assert.equal(toServerSettings(reader({ units: 'kcal/mol' })).units, 'kcal/mol');
 });
 
 test('estimateNotes is sent only when set, as a boolean', () => {
@@ -56,7 +71,9 @@ test('malformed values fall back to defaults', () => {
       'fit.tHigh': Number.POSITIVE_INFINITY,
       'thresholds.hf298': 0,
       'thresholds.s298': Number.NaN,
+      'thresholds.cp': -2,
       'thresholds.collisionFactor': null,
+      pressure: 'high',
     }),
   );
   assert.deepEqual(s, { ...defaultServerSettings });

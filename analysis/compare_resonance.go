@@ -1,0 +1,98 @@
+package analysis
+
+import (
+	"sort"
+	"strconv"
+	"strings"
+
+	"kiln.dev/kiln/engine/molecule"
+)
+
+// matchResonance pairs radicals that matchSpecies left unmatched when they
+// are two resonance structures of one delocalised radical (allyl written
+// [CH2]C=C on one side and C=C[CH2]… is the same graph; propargyl written
+// [CH2]C#C and C=C=[CH] is not). Such structures share their σ skeleton —
+// atoms, hydrogen counts and connectivity, bond orders and radical sites
+// aside — so only radicals with the same skeleton and multiplicity on both
+// sides are estimated, and they pair when the estimator picks the same
+// representative structure (engine/benson/resonance.go), the rule the
+// within-file duplicate check uses (species.go, resonanceKeyPrefix).
+func matchResonance(a, b *compareSide, matchA, matchB []int) {
+	key := func(s *compareSide, sp *Species) string {
+		if sp.Mol == nil || !hasRadicalSite(sp.Mol) {
+			return ""
+		}
+		return skeleton(sp.Mol) + "|m" + strconv.Itoa(effectiveMultiplicity(s.a.w.cache.lib, sp))
+	}
+	buckets := map[string][]int{}
+	for j, sp := range b.species {
+		if matchB[j] < 0 {
+			if k := key(b, sp); k != "" {
+				buckets[k] = append(buckets[k], j)
+			}
+		}
+	}
+	if len(buckets) == 0 {
+		return
+	}
+	for i, sp := range a.species {
+		if matchA[i] >= 0 {
+			continue
+		}
+		k := key(a, sp)
+		if k == "" || len(buckets[k]) == 0 {
+			continue
+		}
+		fa := a.resonanceForm(sp)
+		if fa == "" {
+			continue
+		}
+		for _, j := range buckets[k] {
+			if matchB[j] < 0 && b.resonanceForm(b.species[j]) == fa {
+				matchA[i], matchB[j] = j, i
+				break
+			}
+		}
+	}
+}
+
+// resonanceForm is the representative resonance structure the estimate of
+// sp chose ("" when it has a single structure or cannot be estimated).
+func (s *compareSide) resonanceForm(sp *Species) string {
+	e, err := s.a.w.cache.get(sp.ident, sp.Mol, s.a.estimateOptions(sp.Decl, s.user))
+	if err != nil || e == nil || e.Group == nil {
+		return ""
+	}
+	return e.Group.Form
+}
+
+func hasRadicalSite(m *molecule.Molecule) bool {
+	for _, at := range m.Atoms {
+		if at.Radical > 0 {
+			return true
+		}
+	}
+	return false
+}
+
+// skeleton is a fingerprint of the σ skeleton: like invariant, but without
+// bond orders, aromatic flags and radical electrons, which move between
+// resonance structures.
+func skeleton(m *molecule.Molecule) string {
+	base := make([]string, len(m.Atoms))
+	for i, at := range m.Atoms {
+		base[i] = at.Element + strconv.Itoa(at.Isotope) + "," + strconv.Itoa(at.Charge) + "," + strconv.Itoa(at.HCount)
+	}
+	refined := make([]string, len(m.Atoms))
+	var nb []string
+	for i := range m.Atoms {
+		nb = nb[:0]
+		for _, bd := range m.Adj[i] {
+			nb = append(nb, base[m.Other(bd, i)])
+		}
+		sort.Strings(nb)
+		refined[i] = base[i] + "(" + strings.Join(nb, " ") + ")"
+	}
+	sort.Strings(refined)
+	return strings.Join(refined, ";")
+}
