@@ -111,6 +111,7 @@ type Species struct {
 	ident        string       // estimate-cache key of the structure
 	inv          string       // invariant(Mol): a cheap fingerprint for duplicate search
 	structKey    string       // inv and multiplicity: the bucket of the duplicate-structure search
+	structHash   uint64       // hashKey(structKey), made with the unit
 	unit         *speciesUnit // the memoized unit the species was made from
 }
 
@@ -174,4 +175,5 @@ type Reaction struct {
 
 	reactants, products kinetics.Side // thermo of each side, nil when unknown
 	diags               []speciesfile.Diagnostic
+	unit                *reactionUnit // the memoized unit the reaction was made from
 }

@@ -67,7 +67,7 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 		Files:    map[string]*speciesfile.File{},
 		ByName:   map[string]*Species{},
 	}}
-	f := speciesfile.Parse(path, text)
+	f := w.parse(path, text)
 	a.res.File = f
 	a.res.Files[path] = f
 	a.res.Diagnostics = append(a.res.Diagnostics, f.Diags...)
@@ -152,11 +152,13 @@ func (a *analysis) includes(path string, f *speciesfile.File, stack []string, de
 		}
 		if msg != "" {
 			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude, Message: msg})
-			if top != nil && strings.HasPrefix(msg, "include cycle") {
-				// A cycle further down is otherwise reported only in files
-				// that may never be analysed on their own: say it here too.
+			if top != nil {
+				// A problem further down (a cycle, nesting too deep, a
+				// path outside the workspace) is otherwise reported only in
+				// files that may never be analysed on their own: say it on
+				// the analysed file's include too.
 				a.report(a.res.Path, speciesfile.Diagnostic{Span: top.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
-					Message: fmt.Sprintf("%s (through %s)", msg, top.Path.Text)})
+					Message: fmt.Sprintf("%s, in %s (through %s)", msg, shortPath(path), top.Path.Text)})
 			}
 			continue
 		}
@@ -174,7 +176,7 @@ func (a *analysis) includes(path string, f *speciesfile.File, stack []string, de
 				Message: fmt.Sprintf("included file %q is larger than the 64 MiB limit", inc.Path.Text)})
 			continue
 		}
-		g := speciesfile.Parse(target, text)
+		g := a.w.parse(target, text)
 		a.res.Files[target] = g
 		if n := countErrors(g.Diags); n > 0 {
 			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityWarning, Code: CodeBadInclude,

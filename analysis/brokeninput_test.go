@@ -1,6 +1,10 @@
 package analysis
 
 import (
+	"context"
+	"fmt"
+	"os"
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -78,4 +82,94 @@ func TestNonphysicalRate(t *testing.T) {
 		assert.Nil(t, r.ForwardRate1000, "a rate that cannot be evaluated is not used")
 		assert.Nil(t, r.Collision)
 	}
+}
+
+// TestDeepIncludeReportedAtTop: includes nested deeper than the limit are
+// reported on the analysed file's include, not only in a file further down.
+func TestDeepIncludeReportedAtTop(t *testing.T) {
+	files := map[string]string{}
+	for i := 0; i < 20; i++ {
+		files[fmt.Sprintf("/w/f%d.kiln", i)] = fmt.Sprintf("include f%d.kiln\nspecies S%d %s\n", i+1, i, strings.Repeat("C", i+1))
+	}
+	files["/w/f20.kiln"] = "species LAST [H]\n"
+	ws := NewWorkspace("/w", func(p string) ([]byte, error) {
+		if s, ok := files[p]; ok {
+			return []byte(s), nil
+		}
+		return nil, os.ErrNotExist
+	}, DefaultSettings())
+	res, err := ws.Analyze(context.Background(), "/w/f0.kiln")
+	require.NoError(t, err)
+	msgs := messagesWithCode(res, CodeBadInclude)
+	require.Len(t, msgs, 1, "%v", res.Diagnostics)
+	assert.Equal(t, "includes nested deeper than 16 files, in f16.kiln (through f1.kiln)", msgs[0])
+}
+
+// TestOutOfRangeInclude: a thermo block in an included file that the
+// analysed file's reactions evaluate outside its range is reported on the
+// reaction that needs it.
+func TestOutOfRangeInclude(t *testing.T) {
+	const lib = `species CH4 C
+  nasa7 300 1000 2000
+    low   4.9167871967e+00 -1.1483891112e-02  4.2511392855e-05 -4.0608001400e-08  1.3281315423e-11 -1.0262275517e+04 -3.7460786362e+00
+    high -2.6391815710e-01  1.4154495153e-02 -6.6354702565e-06  1.4933874433e-09 -1.3089122051e-13 -9.3613814741e+03  2.0295266791e+01
+`
+	const top = "include lib.kiln\nspecies H [H]\nspecies CH3 [CH3]\nspecies H2 [H][H]\nreaction CH4 + H <=> CH3 + H2   A=6.6e8 n=1.62 Ea=10.84\n"
+	files := map[string]string{"/w/lib.kiln": lib, "/w/top.kiln": top}
+	ws := NewWorkspace("/w", func(p string) ([]byte, error) {
+		if s, ok := files[p]; ok {
+			return []byte(s), nil
+		}
+		return nil, os.ErrNotExist
+	}, DefaultSettings())
+	res, err := ws.Analyze(context.Background(), "/w/top.kiln")
+	require.NoError(t, err)
+	var got []speciesfile.Diagnostic
+	for _, d := range res.Diagnostics {
+		if d.Code == speciesfile.CodeThermoOutOfRange {
+			got = append(got, d)
+		}
+	}
+	require.Len(t, got, 1, "%v", res.Diagnostics)
+	assert.Equal(t, strings.Index(top, "CH4 + H"), got[0].Span.Start)
+	assert.Contains(t, got[0].Message, "CH4: its thermo block (lib.kiln:2) covers 300–2000 K, but this reaction needs it from 298 K to 2500 K")
+}
+
+// TestCompositionChecks: a composition naming a non-element is an error
+// (and not data); one that disagrees with the SMILES is a warning, and the
+// SMILES is used.
+func TestCompositionChecks(t *testing.T) {
+	res := analyzeText(t, "species E CC\n  composition C2H4\nspecies F CC\n  composition H6C2\nspecies lump\n  composition C10H8X\n")
+	mm := messagesWithCode(res, speciesfile.CodeCompositionMismatch)
+	require.Len(t, mm, 1, "%v", res.Diagnostics)
+	assert.Contains(t, mm[0], "composition C2H4 disagrees with the SMILES, which gives C2H6")
+	assert.Equal(t, "C2H6", res.ByName["E"].Formula)
+	assert.Equal(t, []string{`composition C10H8X: "X" is not a chemical element symbol`}, messagesWithCode(res, speciesfile.CodeSyntax))
+	assert.Empty(t, res.ByName["lump"].Composition, "a composition with a non-element is not data")
+}
+
+// TestCpFloor: a given Cp below the translational and rotational heat
+// capacity of the species' shape is nonphysical-thermo, for tables and
+// polynomials; H2's real Cp (below 7/2 R near 298 K) is not.
+func TestCpFloor(t *testing.T) {
+	res := analyzeText(t, `species lump
+  composition C4H10
+  thermo-table
+    hf298 -30
+    s298 74
+    cp 300=1 400=20 500=25
+species CH4 C
+  nasa7 300 1000 5000
+    low   0.1 0 0 0 0 -10000 0
+    high  0.1 0 0 0 0 -10000 0
+species hyd [H][H]
+  thermo-table
+    hf298 0
+    s298 31.2
+    cp 300=6.9 400=6.97 500=7.0 600=7.01 800=7.08 1000=7.21 1500=7.73
+`)
+	msgs := messagesWithCode(res, speciesfile.CodeNonphysicalThermo)
+	require.Len(t, msgs, 2, "%v", msgs)
+	assert.Contains(t, msgs[0], "lump: Cp at 300 K is 1.00 cal/(mol·K), below 7.95 cal/(mol·K)")
+	assert.Contains(t, msgs[1], "CH4: Cp at 300 K is 0.20 cal/(mol·K)")
 }

@@ -55,9 +55,12 @@ type Comparison struct {
 
 // CompareSide describes one mechanism of a comparison.
 type CompareSide struct {
-	Path                string
-	Species, Reactions  int
-	Errors              int // syntax errors in the file and its includes, unreadable structures and includes of the file
+	Path               string
+	Species, Reactions int
+	// Errors is left 0 by Compare, which reads the files without the full
+	// checks: the caller counts them as `kiln check` does (every error of
+	// the file's and its includes' analyses), so that the counts agree.
+	Errors              int
 	UnreadableStructure []string
 }
 
@@ -154,6 +157,7 @@ type compareSide struct {
 	byName    map[string]*Species
 	pos       map[string]int // name → index in species
 	reactions []sideReaction
+	fits      *fitShare // shared by both sides of a comparison
 }
 
 type sideReaction struct {
@@ -180,6 +184,8 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 		return nil, err
 	}
 	c := &Comparison{A: sa.summary(), B: sb.summary(), Settings: w.Settings(), RateFactor: opts.RateFactor}
+	fits := &fitShare{rep: map[fitKey]*Estimate{}}
+	sa.fits, sb.fits = fits, fits
 	matchA, matchB := matchSpecies(sa, sb)
 	matchResonance(sa, sb, matchA, matchB)
 	// Thermochemistry for the matched species, estimated where not given.
@@ -209,6 +215,20 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 	for i, sp := range need {
 		needSide[i].thermoOf(sp)
 	}
+	// The NASA-7 fits compareModel evaluates, on all cores: one per
+	// distinct set of fit inputs (two spellings of a structure have the
+	// same estimate values, and their fits are the same function of them).
+	var reps []*Estimate
+	for _, sp := range need {
+		if sp.Source == SourceEstimate && sp.Estimate != nil {
+			if e, fresh := fits.of(sp.Estimate); fresh {
+				reps = append(reps, e)
+			}
+		}
+	}
+	if err := sa.a.parallel(len(reps), 16, func(i int) { _, _, _ = reps[i].NASA7() }); err != nil {
+		return nil, err
+	}
 	for i, sp := range sa.species {
 		j := matchA[i]
 		if j < 0 {
@@ -222,7 +242,7 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 		}
 		pair := SpeciesPair{A: sa.ref(sp), B: sb.ref(other), By: by, SameEstimate: sameEstimate[i]}
 		if !pair.SameEstimate {
-			pair.Thermo = thermoDiff(sp, other, c.Settings)
+			pair.Thermo = fits.thermoDiff(sp, other, c.Settings)
 		}
 		c.Species = append(c.Species, pair)
 	}
@@ -338,12 +358,6 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 
 func (s *compareSide) summary() CompareSide {
 	out := CompareSide{Path: s.a.res.Path, Species: len(s.species), Reactions: len(s.reactions)}
-	out.Errors = countErrors(s.a.res.Diagnostics) // the file's syntax errors and the structure/include errors found here
-	for p, f := range s.a.res.Files {
-		if p != s.a.res.Path {
-			out.Errors += countErrors(f.Diags)
-		}
-	}
 	for _, sp := range s.species {
 		if sp.SMILESError != nil {
 			out.UnreadableStructure = append(out.UnreadableStructure, sp.Name)
@@ -486,18 +500,58 @@ func sameComposition(x, y map[string]int) bool {
 	return true
 }
 
-// cpOf returns Cp (J/(mol K)) at T of the thermo model the analysis uses.
-func cpOf(sp *Species, T float64) (float64, bool) {
-	type cp interface{ Cp(float64) float64 }
-	if th, ok := sp.Thermo().(cp); ok {
-		return th.Cp(T), true
+// compareModel returns the thermochemistry compare evaluates for sp: the
+// file's block, or for an estimate the NASA-7 polynomial kiln writes for it
+// (`kiln fill`, `kiln estimate --nasa`, the quick fix: Estimate.NASA7, with
+// its extrapolation past 1500 K), so that a file and the file `fill` makes
+// of it compare equal at every temperature. Only when that fit fails (fill
+// then writes nothing) is the estimate's group model used. nil when sp has
+// no thermochemistry.
+func (f *fitShare) compareModel(sp *Species) thermoCurve {
+	if sp.Source == SourceEstimate && sp.Estimate != nil {
+		e, _ := f.of(sp.Estimate)
+		if p, _, err := e.NASA7(); err == nil {
+			return &p
+		}
+		return sp.Estimate.curve()
 	}
-	return 0, false
+	if th, ok := sp.Thermo().(thermoCurve); ok {
+		return th
+	}
+	return nil
+}
+
+// fitKey is everything an estimate's NASA-7 fit depends on.
+type fitKey struct {
+	hf, s, cp0, cpInf, tMid, tHigh float64
+	cp                             [7]float64
+}
+
+// fitShare maps estimates with the same fit inputs to one representative,
+// whose fit (made once) stands for all of them. Used by one goroutine at a
+// time; the representatives' fits may run in parallel.
+type fitShare struct {
+	rep map[fitKey]*Estimate
+}
+
+// of returns the representative of e (fresh: e itself, new in the share).
+// A reference-library estimate represents itself (its polynomial is the
+// library's, or refitted from it).
+func (f *fitShare) of(e *Estimate) (rep *Estimate, fresh bool) {
+	if e.Library != "" {
+		return e, false
+	}
+	k := fitKey{hf: e.Hf298, s: e.S298, cp0: e.cp0, cpInf: e.cpInf, tMid: e.tMid, tHigh: e.tHigh, cp: e.Cp}
+	if r, ok := f.rep[k]; ok {
+		return r, false
+	}
+	f.rep[k] = e
+	return e, true
 }
 
 // thermoDiff compares the thermochemistry of a matched pair.
-func thermoDiff(a, b *Species, set Settings) *ThermoDiff {
-	ta, tb := a.Thermo(), b.Thermo()
+func (f *fitShare) thermoDiff(a, b *Species, set Settings) *ThermoDiff {
+	ta, tb := f.compareModel(a), f.compareModel(b)
 	if ta == nil || tb == nil {
 		return nil
 	}
@@ -512,8 +566,8 @@ func thermoDiff(a, b *Species, set Settings) *ThermoDiff {
 	flag("hf298", d.Hf298A, d.Hf298B, set.MismatchHf298)
 	flag("s298", d.S298A, d.S298B, set.MismatchS298)
 	for k, t := range CompareThermoTemps {
-		d.CpA[k], _ = cpOf(a, t.T)
-		d.CpB[k], _ = cpOf(b, t.T)
+		d.CpA[k] = ta.Cp(t.T)
+		d.CpB[k] = tb.Cp(t.T)
 		d.GA[k] = ta.H(t.T) - t.T*ta.S(t.T)
 		d.GB[k] = tb.H(t.T) - t.T*tb.S(t.T)
 	}
@@ -588,7 +642,12 @@ func matchReactions(a, b *compareSide, mapB map[string]string) (pairs []Reaction
 		if m, ok := mapB[n]; ok {
 			return m
 		}
-		return "\x00B:" + n
+		if _, ok := a.byName[n]; !ok {
+			// Undeclared on both sides: the same text is the same name
+			// (nothing is known about it to tell otherwise).
+			return n
+		}
+		return "\x00B:" + n // undeclared in B, a declared species in A
 	}
 	ga, orderA := groupReactions(a, id)
 	gb, orderB := groupReactions(b, mapped)
@@ -682,7 +741,7 @@ func (s *compareSide) kc(d *speciesfile.Reaction, T float64) (float64, bool) {
 				return nil, false
 			}
 			s.thermoOf(sp)
-			th := sp.Thermo()
+			th := s.fits.compareModel(sp)
 			if th == nil {
 				return nil, false
 			}

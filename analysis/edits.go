@@ -19,18 +19,31 @@ type Edit struct {
 }
 
 // blockSource is the note written into an inserted block: where the numbers
-// came from.
+// came from (see Estimate.BlockSource).
 func (r *Result) blockSource(sp *Species) string {
-	stamp := r.Settings.Stamp
-	e := sp.Estimate
+	return sp.Estimate.BlockSource(r.Settings.Stamp)
+}
+
+// BlockSource is the `source` line of a nasa7 block kiln writes for the
+// estimate — the one wording for fill, the quick fixes and `kiln estimate
+// --nasa`. stamp ("kiln 0.1.0, 2026-12-01") says which kiln wrote it; it
+// may be empty. A reference-library species is tabulated data, not an
+// estimate, and is named as such with the library's source.
+func (e *Estimate) BlockSource(stamp string) string {
 	var b strings.Builder
+	if e.Library != "" {
+		fmt.Fprintf(&b, "reference library %s (tabulated data): %s", e.Library, e.LibrarySource)
+		if e.fit != nil {
+			fmt.Fprintf(&b, "; refitted to TMID %g K, THIGH %g K", e.tMid, e.tHigh)
+		}
+		if stamp != "" {
+			b.WriteString("; written by " + stamp)
+		}
+		return b.String()
+	}
 	b.WriteString("estimate")
 	if stamp != "" {
 		b.WriteString(", " + stamp)
-	}
-	if e.Library != "" {
-		fmt.Fprintf(&b, "; reference library %s: %s", e.Library, e.LibrarySource)
-		return b.String()
 	}
 	seen := map[string]bool{}
 	var srcs []string
@@ -163,12 +176,17 @@ func skipReason(sp *Species) string {
 	case sp.Decl.SMILES == nil:
 		return "no structure (SMILES) to estimate from; add a nasa7 or thermo-table block"
 	case sp.estimateErr != nil:
-		return "cannot estimate: " + sp.estimateErr.Error()
+		return "kiln cannot estimate it: " + RefusalReason(sp.estimateErr) // as check and estimate word it
 	case sp.Estimate == nil:
 		return "no estimate"
 	}
 	if _, _, err := sp.Estimate.NASA7(); err != nil {
-		return "no NASA-7 polynomial: " + err.Error()
+		// Without the engine's package prefix: no Go names in user text.
+		msg := err.Error()
+		for _, prefix := range []string{"nasa fit: ", "nasa: "} {
+			msg = strings.TrimPrefix(msg, prefix)
+		}
+		return "no NASA-7 polynomial: " + msg
 	}
 	return "no block can be inserted here"
 }

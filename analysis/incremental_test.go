@@ -211,6 +211,9 @@ func TestIncrementalMatchesScratch(t *testing.T) {
 			}
 			inc := NewWorkspace("/w", load, DefaultSettings())
 			inc.SetIncremental(true)
+			var prev *Result
+			prevDigest := ""
+			reusedSpecies, reusedReactions := 0, 0
 			for step := range 50 {
 				target := "/w/main.kiln"
 				if rng.IntN(6) == 0 {
@@ -244,7 +247,29 @@ func TestIncrementalMatchesScratch(t *testing.T) {
 				for _, sp := range got.Species {
 					require.Same(t, got.Files[sp.Loc.File].Species[indexOf(got.Files[sp.Loc.File].Species, sp.Decl)], sp.Decl)
 				}
+				// Values reused from the last analysis are shared, never
+				// modified: the last result still says what it said.
+				if prev != nil {
+					require.Equal(t, prevDigest, digest(prev), "step %d: the previous result changed", step)
+					for _, sp := range got.Species {
+						if prev.ByName[sp.Name] == sp {
+							reusedSpecies++
+						}
+					}
+					old := map[*Reaction]bool{}
+					for _, r := range prev.Reactions {
+						old[r] = true
+					}
+					for _, r := range got.Reactions {
+						if old[r] {
+							reusedReactions++
+						}
+					}
+				}
+				prev, prevDigest = got, digest(got)
 			}
+			require.Positive(t, reusedSpecies, "species values reused")
+			require.Positive(t, reusedReactions, "reaction values reused")
 		})
 	}
 }
@@ -304,6 +329,23 @@ func TestIncrementalReusesUnits(t *testing.T) {
 	at := strings.Index(src, "species M7 ")
 	after := analyse(src[:at] + "# a remark\n" + src[at:])
 	requireReused(t, before, after, map[string]bool{}, map[string]bool{})
+	// The statements before the comment (but the one just before, which is
+	// read again) are the same syntax nodes, so their values are the same
+	// too; those after it moved, so they are new values made from the same
+	// units.
+	kept := 0
+	for _, sp := range after.Species {
+		same := before.ByName[sp.Name].Decl == sp.Decl
+		require.Equal(t, same, before.ByName[sp.Name] == sp, "species %s: value reused", sp.Name)
+		if same {
+			kept++
+			require.Less(t, sp.Decl.Span().Start, at)
+		}
+	}
+	require.Equal(t, strings.Count(src[:at], "\nspecies ")-1, kept, "species values reused")
+	for i, r := range after.Reactions {
+		require.NotSame(t, before.Reactions[i], r, "reaction %s after the comment: a new value", r.Equation)
+	}
 
 	// A new SMILES for M7: its unit, and only the reactions naming M7.
 	line := src[at : at+strings.IndexByte(src[at:], '\n')]

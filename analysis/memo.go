@@ -47,12 +47,18 @@ type memoTables struct {
 }
 
 // fileMemo holds the units of one file's statements, aligned with the
-// file's species and reaction lists (nil where none was made).
+// file's species and reaction lists (nil where none was made), and the
+// Species and Reaction values made from them. A value is reused as it is by
+// the next analysis when its statement is the same syntax node (the reader
+// kept it: same text at the same offsets) and its unit is kept; values are
+// never modified once their analysis is finished.
 type fileMemo struct {
 	file    *speciesfile.File
 	species []*speciesUnit
 	rtext   []*reactionText
 	rx      []*reactionUnit
+	sps     []*Species  // by f.Species index; nil for repeated names
+	rxs     []*Reaction // by f.Reactions index (the analysed file only)
 }
 
 // memo is the memoization state of one analysis: the tables it reads (old,
@@ -65,6 +71,9 @@ type memo struct {
 	old, next *memoTables
 	align     map[string]*alignment
 	changed   map[string]bool // names of the species whose unit was recomputed
+	// the alignment asked for last (file is called once per statement)
+	lastPath string
+	lastAl   *alignment
 }
 
 // alignment maps a file's statements to those of its last analysis.
@@ -87,8 +96,43 @@ func (w *Workspace) SetIncremental(on bool) {
 	defer w.mu.Unlock()
 	w.incremental = on
 	if !on {
-		w.memos = nil
+		w.memos, w.parses = nil, nil
 	}
+}
+
+// parse returns the syntax tree of text, the file at path. An incremental
+// workspace reads only the statements that changed since the latest parse
+// of the file (speciesfile.Reparse: the same tree as a parse from scratch)
+// and keeps the result for the next parse.
+func (w *Workspace) parse(path string, text []byte) *speciesfile.File {
+	w.mu.Lock()
+	on, old := w.incremental, w.parses[path]
+	w.mu.Unlock()
+	if !on {
+		return speciesfile.Parse(path, text)
+	}
+	var f *speciesfile.File
+	switch {
+	case old == nil:
+		f = speciesfile.Parse(path, text)
+	case bytes.Equal(old.Src, text):
+		// the same tree, but File.Src is the text given (callers compare
+		// the slice to tell which text a result is of)
+		same := *old
+		same.Src = text
+		f = &same
+	default:
+		f = speciesfile.Reparse(old, text, speciesfile.DiffEdit(old.Src, text))
+	}
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	if w.incremental {
+		if w.parses == nil {
+			w.parses = map[string]*speciesfile.File{}
+		}
+		w.parses[path] = f
+	}
+	return f
 }
 
 // startMemo returns the memo state for an analysis of path with the given
@@ -129,12 +173,17 @@ func (w *Workspace) ForgetFile(path string) {
 	w.mu.Lock()
 	defer w.mu.Unlock()
 	delete(w.memos, path)
+	delete(w.parses, path)
 }
 
 // file returns the alignment of file f (at path) with its last analysis,
 // creating its next tables on first use.
 func (m *memo) file(path string, f *speciesfile.File) *alignment {
+	if m.lastAl != nil && m.lastPath == path {
+		return m.lastAl
+	}
 	if al := m.align[path]; al != nil {
+		m.lastPath, m.lastAl = path, al
 		return al
 	}
 	m.next.files[path] = &fileMemo{
@@ -142,6 +191,8 @@ func (m *memo) file(path string, f *speciesfile.File) *alignment {
 		species: make([]*speciesUnit, len(f.Species)),
 		rtext:   make([]*reactionText, len(f.Reactions)),
 		rx:      make([]*reactionUnit, len(f.Reactions)),
+		sps:     make([]*Species, len(f.Species)),
+		rxs:     make([]*Reaction, len(f.Reactions)),
 	}
 	al := &alignment{}
 	if m.old != nil {
@@ -152,6 +203,7 @@ func (m *memo) file(path string, f *speciesfile.File) *alignment {
 		}
 	}
 	m.align[path] = al
+	m.lastPath, m.lastAl = path, al
 	return al
 }
 
@@ -314,18 +366,83 @@ func (m *memo) species(path string, f *speciesfile.File, k int) *speciesUnit {
 	return u
 }
 
-// keepSpecies records a newly computed unit of species declaration k of
-// the file at path.
-func (m *memo) keepSpecies(path string, k int, u *speciesUnit) {
+// keepSpecies records the unit of species declaration k of the file at
+// path and the Species made from it.
+func (m *memo) keepSpecies(path string, k int, u *speciesUnit, sp *Species) {
 	if m != nil {
 		m.next.files[path].species[k] = u
+		m.next.files[path].sps[k] = sp
 	}
+}
+
+// oldSpecies returns the Species the last analysis made from unit u for
+// declaration k of file f (at path), when the declaration is the same
+// syntax node; nil otherwise.
+func (m *memo) oldSpecies(path string, f *speciesfile.File, k int, u *speciesUnit) *Species {
+	if m == nil || u == nil {
+		return nil
+	}
+	al := m.file(path, f)
+	if al.old == nil || al.species[k] < 0 {
+		return nil
+	}
+	o := al.old.sps[al.species[k]]
+	if o == nil || o.Decl != f.Species[k] || o.unit != u {
+		return nil
+	}
+	return o
+}
+
+// oldReaction returns the Reaction the last analysis made for reaction k of
+// file f (at path), when the statement is the same syntax node, at the same
+// line, fully resolved then and now (every name it uses is declared), and
+// was made from a unit (computeReactions checks that the unit still holds).
+func (m *memo) oldReaction(a *analysis, path string, f *speciesfile.File, k int, equation string) *Reaction {
+	if m == nil {
+		return nil
+	}
+	al := m.file(path, f)
+	if al.old == nil || al.reactions[k] < 0 {
+		return nil
+	}
+	d := f.Reactions[k]
+	o := al.old.rxs[al.reactions[k]]
+	if o == nil || o.Decl != d || !o.Resolved || o.unit == nil || o.Equation != equation || o.File != path {
+		return nil
+	}
+	for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
+		for _, t := range ts {
+			if _, ok := a.res.ByName[t.Name.Text]; !ok {
+				return nil
+			}
+		}
+	}
+	for _, e := range d.Efficiencies {
+		if _, ok := a.res.ByName[e.Name.Text]; !ok {
+			return nil
+		}
+	}
+	if c := falloffCollider(d); c != nil {
+		if _, ok := a.res.ByName[c.Text]; !ok {
+			return nil
+		}
+	}
+	if f.ErrorIn(d.Body()) || o.Line != StmtLine(f, d) {
+		return nil
+	}
+	return o
 }
 
 // reactionText is what follows from a reaction statement's text alone.
 type reactionText struct {
 	dupKey   string // reactionKey
+	dupHash  uint64 // hashKey(dupKey)
 	equation string // equationText
+}
+
+func newReactionText(f *speciesfile.File, d *speciesfile.Reaction) *reactionText {
+	key := reactionKey(d)
+	return &reactionText{dupKey: key, dupHash: hashKey(key), equation: equationText(f, d)}
 }
 
 // reactionText returns the text unit of reaction k of file f (at path),
@@ -333,7 +450,7 @@ type reactionText struct {
 func (m *memo) reactionText(path string, f *speciesfile.File, k int) *reactionText {
 	d := f.Reactions[k]
 	if m == nil {
-		return &reactionText{dupKey: reactionKey(d), equation: equationText(f, d)}
+		return newReactionText(f, d)
 	}
 	al := m.file(path, f)
 	var u *reactionText
@@ -341,7 +458,7 @@ func (m *memo) reactionText(path string, f *speciesfile.File, k int) *reactionTe
 		u = al.old.rtext[al.reactions[k]]
 	}
 	if u == nil {
-		u = &reactionText{dupKey: reactionKey(d), equation: equationText(f, d)}
+		u = newReactionText(f, d)
 	}
 	m.next.files[path].rtext[k] = u
 	return u
@@ -448,17 +565,21 @@ func newReactionUnit(energyUnit string, deps []*speciesUnit, r *Reaction) *react
 }
 
 // apply copies the unit's computed fields into r (everything but what r
-// was made with: its statement, file, line, equation and resolution).
+// was made with: its statement, file, line, equation and resolution) and
+// records the unit in r.
 func (u *reactionUnit) apply(r *Reaction) {
 	decl, file, line, eq, resolved := r.Decl, r.File, r.Line, r.Equation, r.Resolved
 	*r = u.tmpl
 	r.Decl, r.File, r.Line, r.Equation, r.Resolved = decl, file, line, eq, resolved
+	r.unit = u
 }
 
-// keepReaction records a newly computed unit of reaction k of the file at path.
-func (m *memo) keepReaction(path string, k int, u *reactionUnit) {
+// keepReaction records the unit of reaction k of the file at path and the
+// Reaction made from it.
+func (m *memo) keepReaction(path string, k int, u *reactionUnit, r *Reaction) {
 	if m != nil {
 		m.next.files[path].rx[k] = u
+		m.next.files[path].rxs[k] = r
 	}
 }
 

@@ -26,9 +26,17 @@ func (a *analysis) reactions() error {
 	for _, path := range a.order {
 		n += len(a.res.Files[path].Reactions)
 	}
-	seen := make(map[string]*speciesfile.Reaction, n)
-	seenFile := make(map[string]string, n)
-	a.res.Reactions = make([]*Reaction, 0, len(a.res.File.Reactions))
+	// First occurrences by duplicate key: the map is keyed by the key's
+	// hash (made once per reaction text unit) and chains entries of
+	// different keys sharing a hash.
+	type occurrence struct {
+		key  string
+		d    *speciesfile.Reaction
+		file string
+		next int32 // index of the next occurrence with the same hash, -1 for none
+	}
+	seen := make(map[uint64]int32, n)
+	occs := make([]occurrence, 0, n)
 	for _, path := range a.order {
 		f := a.res.Files[path]
 		for k, d := range f.Reactions {
@@ -45,25 +53,43 @@ func (a *analysis) reactions() error {
 				}
 				continue
 			}
-			if first, dup := seen[key]; dup {
-				if d.Duplicate == nil || first.Duplicate == nil {
-					line := a.res.Files[seenFile[key]].Lines.Position(first.Equation.Start).Line + 1
+			var first *occurrence
+			head, hashed := seen[rt.dupHash]
+			if hashed {
+				for i := head; i >= 0; i = occs[i].next {
+					if occs[i].key == key {
+						first = &occs[i]
+						break
+					}
+				}
+			}
+			if first != nil {
+				if d.Duplicate == nil || first.d.Duplicate == nil {
+					line := a.res.Files[first.file].Lines.Position(first.d.Equation.Start).Line + 1
 					where := fmt.Sprintf("line %d", line)
-					if seenFile[key] != path {
-						where = fmt.Sprintf("%s:%d", shortPath(seenFile[key]), line)
+					if first.file != path {
+						where = fmt.Sprintf("%s:%d", shortPath(first.file), line)
 					}
 					a.report(path, speciesfile.Diagnostic{Span: d.Equation, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateReaction,
 						Message: fmt.Sprintf("this reaction repeats the one at %s; mark both with `duplicate` if both channels are intended", where),
-						Related: []speciesfile.Related{{File: seenFile[key], Span: first.Equation, Message: "first occurrence"}}})
+						Related: []speciesfile.Related{{File: first.file, Span: first.d.Equation, Message: "first occurrence"}}})
 				}
 			} else {
-				seen[key] = d
-				seenFile[key] = path
+				next := int32(-1)
+				if hashed {
+					next = head
+				}
+				seen[rt.dupHash] = int32(len(occs))
+				occs = append(occs, occurrence{key: key, d: d, file: path, next: next})
 			}
 			if path != a.res.Path {
 				continue
 			}
-			a.res.Reactions = append(a.res.Reactions, a.reaction(path, d, rt.equation))
+			r := a.memo.oldReaction(a, path, f, k, rt.equation)
+			if r == nil {
+				r = a.reaction(path, d, rt.equation)
+			}
+			a.res.Reactions = append(a.res.Reactions, r)
 		}
 	}
 	return a.computeReactions()
@@ -83,7 +109,14 @@ func (a *analysis) computeReactions() error {
 		if !r.Resolved {
 			continue
 		}
-		if u := a.memo.reaction(a, a.res.Path, f, i); u != nil {
+		u := a.memo.reaction(a, a.res.Path, f, i)
+		if r.unit != nil && r.unit != u {
+			// the last analysis's value, whose unit does not hold any
+			// more: it is not modified, a new value is made
+			r = &Reaction{Decl: r.Decl, File: r.File, Line: r.Line, Equation: r.Equation, Resolved: true}
+			rs[i] = r
+		}
+		if u != nil {
 			units[i] = u
 			continue
 		}
@@ -92,6 +125,7 @@ func (a *analysis) computeReactions() error {
 	err := a.parallel(len(todo), 256, func(k int) {
 		i := todo[k]
 		r := rs[i]
+		initKp(r)
 		a.balance(r.Decl, r)
 		// Thermochemistry of a reaction that does not balance means
 		// nothing: it is neither shown nor used for reverse rates.
@@ -123,8 +157,10 @@ func (a *analysis) computeReactions() error {
 			r.diags = nil
 			continue
 		}
-		u.apply(r)
-		a.memo.keepReaction(a.res.Path, i, u)
+		if r.unit != u {
+			u.apply(r)
+		}
+		a.memo.keepReaction(a.res.Path, i, u, r)
 		a.res.Diagnostics = appendRelocated(a.res.Diagnostics, u.diags, r.File, r.Decl.Body().Start)
 	}
 	a.rangeChecks()
@@ -149,6 +185,17 @@ func (a *analysis) rangeChecks() {
 	type need struct {
 		tmax float64
 		line int
+		eq   speciesfile.Span // the equation of that reaction (analysed file)
+	}
+	given := false // nothing to check without a given block
+	for _, sp := range a.res.Species {
+		if sp.Source == SourceFile {
+			given = true
+			break
+		}
+	}
+	if !given {
+		return
 	}
 	needs := map[*Species]need{}
 	for _, r := range a.res.Reactions {
@@ -166,18 +213,27 @@ func (a *analysis) rangeChecks() {
 					continue
 				}
 				if n, ok := needs[sp]; !ok || tmax > n.tmax {
-					needs[sp] = need{tmax, r.Line}
+					needs[sp] = need{tmax, r.Line, r.Decl.Equation}
 				}
 			}
 		}
 	}
 	for _, sp := range a.res.Species {
 		n, ok := needs[sp]
-		if !ok || sp.Loc.File != a.res.Path {
+		if !ok {
 			continue
 		}
 		lo, hi := sp.Given.Range()
 		if lo <= T298+rangeSlack && hi >= n.tmax-rangeSlack {
+			continue
+		}
+		if sp.Loc.File != a.res.Path {
+			// The block is in an included file: say it on the reaction
+			// of this file that needs it.
+			where := a.where(Location{File: sp.Loc.File, Span: sp.Given.Span})
+			a.report(a.res.Path, speciesfile.Diagnostic{Span: n.eq, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+				Message: fmt.Sprintf("%s: its thermo block (%s) covers %g–%g K, but this reaction needs it from 298 K to %g K; values outside the block are extrapolated",
+					sp.Name, where, lo, hi, n.tmax)})
 			continue
 		}
 		span := sp.Given.Span
@@ -256,15 +312,13 @@ func reactionKey(d *speciesfile.Reaction) string {
 // blanks collapsed); computeReactions works out the rest.
 func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation string) *Reaction {
 	f := a.res.Files[path]
-	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equation, Resolved: true, Kp: map[string]*float64{}}
+	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equation, Resolved: true}
 	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Body()) {
 		// A reaction the reader could not read (equation or rate lines)
 		// is not data: the syntax error is the one diagnostic.
 		r.Resolved = false
+		r.Kp = map[string]*float64{}
 		return r
-	}
-	for _, k := range keqTemperatures {
-		r.Kp[k.Key] = nil
 	}
 	undeclared := func(t speciesfile.Token, what string) {
 		msg := fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)
@@ -281,6 +335,9 @@ func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation strin
 			}
 		}
 	}
+	if !r.Resolved {
+		initKp(r)
+	} // else computeReactions makes Kp (or takes it from a kept unit)
 	for _, e := range d.Efficiencies {
 		if _, ok := a.res.ByName[e.Name.Text]; !ok {
 			undeclared(e.Name, "third-body efficiency for")
@@ -292,6 +349,15 @@ func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation strin
 		}
 	}
 	return r
+}
+
+// initKp gives r the Kp entries of every reported temperature, unknown
+// (nil) until the thermochemistry is worked out.
+func initKp(r *Reaction) {
+	r.Kp = make(map[string]*float64, len(keqTemperatures))
+	for _, k := range keqTemperatures {
+		r.Kp[k.Key] = nil
+	}
 }
 
 // StmtLine returns the 1-based line of a statement as every command shows

@@ -28,5 +28,12 @@ func RefusalReason(err error) string {
 	if ue.Atom == 0 {
 		return r
 	}
-	return fmt.Sprintf("atom %d %s", ue.Atom, strings.Replace(r, "): ", ") ", 1))
+	// "(O): is a terminal atom…" reads "atom 4 (O) is a terminal atom…";
+	// only the colon right after the element is dropped.
+	if strings.HasPrefix(r, "(") {
+		if i := strings.Index(r, ")"); i > 0 && strings.HasPrefix(r[i:], "): ") {
+			r = r[:i+1] + r[i+2:]
+		}
+	}
+	return fmt.Sprintf("atom %d %s", ue.Atom, r)
 }

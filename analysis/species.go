@@ -41,6 +41,8 @@ func (a *analysis) species() error {
 		k    int // index in f.Species
 		sp   *Species
 		u    *speciesUnit
+		// reused: sp is the last analysis's value for the same unit
+		reused bool
 		// diags of the species' rules when there is no memo (no unit is
 		// made: nothing would reuse it).
 		diags []speciesfile.Diagnostic
@@ -58,22 +60,27 @@ func (a *analysis) species() error {
 				// reserved word): input that failed to parse is not data.
 				continue
 			}
-			sp := &Species{Name: d.Name.Text, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
-			if first, dup := a.res.ByName[sp.Name]; dup {
+			name := d.Name.Text
+			if first, dup := a.res.ByName[name]; dup {
 				// An error: a simulator reading the file may take either
 				// declaration.
 				a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeDuplicateSpecies,
-					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", sp.Name, a.where(first.Loc)),
-					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first declaration of " + sp.Name}}})
+					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", name, a.where(first.Loc)),
+					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first declaration of " + name}}})
 				continue
 			}
-			a.res.ByName[sp.Name] = sp
-			a.res.Species = append(a.res.Species, sp)
 			u := a.memo.species(path, f, k)
+			sp := a.memo.oldSpecies(path, f, k, u)
+			reused := sp != nil
+			if !reused {
+				sp = &Species{Name: name, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
+			}
+			a.res.ByName[name] = sp
+			a.res.Species = append(a.res.Species, sp)
 			if u == nil {
 				todo = append(todo, len(items))
 			}
-			items = append(items, item{path: path, f: f, k: k, sp: sp, u: u})
+			items = append(items, item{path: path, f: f, k: k, sp: sp, u: u, reused: reused})
 		}
 	}
 	// The names whose unit is recomputed: every other declared name stands
@@ -113,12 +120,14 @@ func (a *analysis) species() error {
 		}
 	}
 	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
-	byStructure := make(map[string][]*Species, len(items))
+	byStructure := make(map[uint64][]*Species, len(items))
 	for _, it := range items {
 		sp := it.sp
 		if it.u != nil {
-			it.u.apply(sp, a.memo != nil)
-			a.memo.keepSpecies(it.path, it.k, it.u)
+			if !it.reused {
+				it.u.apply(sp, a.memo != nil)
+			}
+			a.memo.keepSpecies(it.path, it.k, it.u, sp)
 			if it.path == a.res.Path {
 				a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, sp.Decl.Body().Start)
 			}
@@ -146,13 +155,44 @@ func (a *analysis) species() error {
 	return nil
 }
 
+// compositionElements reports a composition line naming a symbol that is
+// not a chemical element; false when there is one.
+func (a *analysis) compositionElements(path string, d *speciesfile.Species) bool {
+	for _, ec := range d.Formula {
+		if _, ok := molecule.AtomicWeight(ec.Symbol); !ok {
+			a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
+				Message: fmt.Sprintf("composition %s: %q is not a chemical element symbol", d.Composition.Text, ec.Symbol)})
+			return false
+		}
+	}
+	return true
+}
+
+// compositionAgrees warns when a species has both a structure and a
+// composition line and they disagree: the structure is used.
+func (a *analysis) compositionAgrees(path string, sp *Species) {
+	d := sp.Decl
+	comp := map[string]int{}
+	for _, ec := range d.Formula {
+		comp[ec.Symbol] += ec.Count
+	}
+	if got := molecule.HillFormula(comp); got != sp.Formula {
+		a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCompositionMismatch,
+			Message: fmt.Sprintf("composition %s disagrees with the SMILES, which gives %s; kiln uses the SMILES (balance, molar mass, thermo)", got, sp.Formula)})
+	}
+}
+
 // speciesRules runs the rules of one species declaration that read nothing
 // but the declaration (and the settings and user groups): structure,
 // composition, estimate, given thermo and the checks comparing them.
 func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupValue) {
 	d := sp.Decl
 	a.structure(path, sp)
-	if sp.Mol == nil && len(d.Formula) > 0 {
+	if !a.compositionElements(path, d) {
+		// Not a formula of elements: the error says so, and it is not data.
+	} else if sp.Mol != nil && len(d.Formula) > 0 {
+		a.compositionAgrees(path, sp)
+	} else if sp.Mol == nil && len(d.Formula) > 0 {
 		// The parser reports a malformed composition line.
 		comp := map[string]int{}
 		for _, ec := range d.Formula {
@@ -173,6 +213,7 @@ func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupVal
 			// the same structure.
 			sp.structKey = resonanceKeyPrefix + e.Group.Form + "|m" + strconv.Itoa(effectiveMultiplicity(a.w.cache.lib, sp))
 		}
+		sp.structHash = hashKey(sp.structKey)
 	}
 	a.given(path, sp)
 	a.thermoChecks(path, sp)
@@ -187,19 +228,37 @@ const resonanceKeyPrefix = "resonance|"
 // multiplicity of sp, and records sp. Species are bucketed by a cheap graph
 // invariant first; canonical forms are computed only within a bucket, so
 // most species never need one.
-func sameStructure(seen map[string][]*Species, sp *Species) *Species {
+//
+// The map is keyed by a hash of the bucket key made once per unit (hashing
+// the long keys of every species on every analysis cost more than the rest
+// of the search); species of other keys sharing a hash are skipped.
+func sameStructure(seen map[uint64][]*Species, sp *Species) *Species {
 	k := sp.structKey
-	bucket := seen[k]
-	if len(bucket) > 0 && strings.HasPrefix(k, resonanceKeyPrefix) {
-		return bucket[0] // the key is the canonical representative itself
-	}
+	bucket := seen[sp.structHash]
+	resonance := strings.HasPrefix(k, resonanceKeyPrefix)
 	for _, other := range bucket {
+		if other.structKey != k {
+			continue
+		}
+		if resonance {
+			return other // the key is the canonical representative itself
+		}
 		if identity(other.Mol) == identity(sp.Mol) {
 			return other
 		}
 	}
-	seen[k] = append(bucket, sp)
+	seen[sp.structHash] = append(bucket, sp)
 	return nil
+}
+
+// hashKey is the 64-bit FNV-1a hash of s.
+func hashKey(s string) uint64 {
+	h := uint64(14695981039346656037)
+	for i := 0; i < len(s); i++ {
+		h ^= uint64(s[i])
+		h *= 1099511628211
+	}
+	return h
 }
 
 // invariant is a cheap fingerprint of a molecular graph that equal graphs
@@ -523,6 +582,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 	if g.Table != nil {
 		a.tableChecks(path, sp)
 	}
+	a.cpFloor(path, sp)
 	defects := a.reported() > before
 	if sp.Estimate == nil {
 		return
@@ -613,7 +673,19 @@ func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.S
 		}
 	}
 	if math.Abs(worstCp) > a.set.MismatchCp {
-		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+		cpSpan := span
+		if t := sp.Decl.Table; t != nil && len(t.Cp) > 0 {
+			// A table's Cp mismatch points at the tabulated value nearest
+			// the worst temperature.
+			best := t.Cp[0]
+			for _, p := range t.Cp {
+				if math.Abs(p.T.SI-worstCpT) < math.Abs(best.T.SI-worstCpT) {
+					best = p
+				}
+			}
+			cpSpan = speciesfile.Span{Start: best.T.Tok.Span.Start, End: best.Cp.Tok.Span.End}
+		}
+		a.report(path, speciesfile.Diagnostic{Span: cpSpan, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
 			Message: fmt.Sprintf("%s: Cp at %g K given %s vs %s %s (difference %s, threshold %s)",
 				sp.Name, worstCpT, a.entropy(cpGiven), what, a.entropy(cpRef), a.entropy(worstCp), a.entropy(a.set.MismatchCp))})
 		return
@@ -644,6 +716,70 @@ func (a *analysis) problemMessage(p nasa.Problem) string {
 		return fmt.Sprintf("Cp = %s at %.0f K exceeds %s, the classical limit with the allowance for electronic states and anharmonicity", u.Entropy(p.Value), p.T, u.Entropy(p.Other))
 	}
 	return p.Message
+}
+
+// cpFloor reports given heat capacities below what every ideal-gas molecule
+// of the species' shape has from translation and rotation alone (5/2 R for
+// an atom, 7/2 R linear, 4 R non-linear; nasa.ClassicalLimits), from 298 K
+// up, with 5 % slack: vibrations and electronic states only add to it. (The
+// slack and the lower bound of 298 K leave room for H2, whose rotational
+// heat capacity is not classical at low temperature: 28.8 J/(mol K) at
+// 298 K against 7/2 R = 29.1, NIST-JANAF, common practice.)
+func (a *analysis) cpFloor(path string, sp *Species) {
+	if sp.Mol == nil && len(sp.Composition) == 0 {
+		return // shape unknown
+	}
+	n, lin, _ := a.shapeOf(sp)
+	cp0, _ := nasa.ClassicalLimits(n, lin, 0)
+	if cp0 <= 0 {
+		return
+	}
+	floor := 0.95 * cp0
+	d, g := sp.Decl, sp.Given
+	report := func(span speciesfile.Span, T, cp float64) {
+		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+			Message: fmt.Sprintf("%s: Cp at %g K is %s, below %s, the translational and rotational heat capacity of any %s of %d atoms", sp.Name, T, a.entropy(cp), a.entropy(cp0), shapeWord(n, lin), n)})
+	}
+	if t := d.Table; t != nil && g.Table != nil {
+		for _, p := range t.Cp {
+			if p.Cp.SI > 0 && p.Cp.SI < floor && p.T.SI >= T298-rangeSlack {
+				report(speciesfile.Span{Start: p.T.Tok.Span.Start, End: p.Cp.Tok.Span.End}, p.T.SI, p.Cp.SI)
+				return
+			}
+		}
+	}
+	if b := d.NASA7; b != nil && g.Poly != nil {
+		p := g.Poly
+		for _, r := range []struct {
+			lo, hi float64
+			span   speciesfile.Span
+		}{{p.TLow, p.TMid, b.LowSpan}, {p.TMid, p.THigh, b.HighSpan}} {
+			if !(r.lo > 0 && r.hi > r.lo) {
+				return // the ranges are reported by nasa.Check
+			}
+			for i := 0; i <= 50; i++ {
+				T := r.lo + (r.hi-r.lo)*float64(i)/50
+				if T < T298-rangeSlack {
+					continue
+				}
+				if c := p.Cp(T); c > 0 && c < floor {
+					report(r.span, T, c)
+					return
+				}
+			}
+		}
+	}
+}
+
+// shapeWord names a molecular shape for messages.
+func shapeWord(n int, linear bool) string {
+	switch {
+	case n == 1:
+		return "atom"
+	case linear:
+		return "linear molecule"
+	}
+	return "non-linear molecule"
 }
 
 // tableChecks reports unsound tabulated Cp values.

@@ -25,7 +25,8 @@ type Workspace struct {
 	mols     *moleculeCache
 
 	incremental bool
-	memos       map[string]*memoTables // by analysed path: units of its last finished analysis
+	memos       map[string]*memoTables       // by analysed path: units of its last finished analysis
+	parses      map[string]*speciesfile.File // by path: the latest parse, read again incrementally
 }
 
 // Result is the analysis of one file together with the files it includes.

@@ -182,7 +182,8 @@ func applyChange(text []byte, lines *speciesfile.LineIndex, c contentChange) ([]
 	out = append(out, text[:start]...)
 	out = append(out, c.Text...)
 	out = append(out, text[end:]...)
-	return out, speciesfile.NewLineIndex(out), textEdit{start: start, end: end, newLen: len(c.Text)}
+	e := speciesfile.Edit{Old: speciesfile.Span{Start: start, End: end}, NewLen: len(c.Text)}
+	return out, lines.Edited(out, e), textEdit{start: start, end: end, newLen: len(c.Text)}
 }
 
 func (s *server) didClose(raw json.RawMessage) error {

@@ -176,6 +176,19 @@ func TestSettings(t *testing.T) {
 		_, _, err := applySettings(base, json.RawMessage(bad))
 		assert.Error(t, err, bad)
 	}
+	// A pressure as text with its unit, as the CLI and files write it; a
+	// bare number is bar.
+	for in, want := range map[string]float64{`{"pressure": "10atm"}`: 1013250, `{"pressure": "1.5 bar"}`: 150000, `{"pressure": 2}`: 200000} {
+		s, _, err := applySettings(base, json.RawMessage(in))
+		require.NoError(t, err, in)
+		assert.InDelta(t, want, s.Pressure, 1e-6, in)
+	}
+	// Wrong types are named by key, all at once, without decoder jargon.
+	_, _, err = applySettings(base, json.RawMessage(`{"tMid": "hot", "pressure": "10 furlongs"}`))
+	require.Error(t, err)
+	assert.Contains(t, err.Error(), `tMid must be a number, got "hot"`)
+	assert.Contains(t, err.Error(), `unknown unit "furlongs"`)
+	assert.NotContains(t, err.Error(), "unmarshal")
 }
 
 func TestDidChangeConfiguration(t *testing.T) {

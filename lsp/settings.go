@@ -3,8 +3,10 @@ package lsp
 import (
 	"encoding/json"
 	"fmt"
+	"strings"
 
 	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/speciesfile"
 )
 
 // serverSettings are the settings only the language server reads (the
@@ -37,6 +39,10 @@ func applySettings(base analysis.Settings, raw json.RawMessage) (analysis.Settin
 	if len(wrapped.Kiln) > 0 && string(wrapped.Kiln) != "null" {
 		raw = wrapped.Kiln
 	}
+	raw, err := normalizeSettings(raw)
+	if err != nil {
+		return base, nil, err
+	}
 	var u analysis.SettingsInput
 	if err := json.Unmarshal(raw, &u); err != nil {
 		return base, nil, fmt.Errorf("settings: %w", err)
@@ -50,4 +56,48 @@ func applySettings(base analysis.Settings, raw json.RawMessage) (analysis.Settin
 		return base, nil, fmt.Errorf("settings: %w", err)
 	}
 	return s, ss.EstimateNotes, nil
+}
+
+// normalizeSettings checks the JSON types of the settings object and turns
+// a pressure given as text with its unit ("10atm", "1.5 bar", the syntax of
+// every kiln input) into the number of bar the analysis settings take. A
+// value of the wrong type is named by its key, all of them at once, instead
+// of the decoder's first complaint.
+func normalizeSettings(raw json.RawMessage) (json.RawMessage, error) {
+	var m map[string]json.RawMessage
+	if err := json.Unmarshal(raw, &m); err != nil {
+		return nil, fmt.Errorf("settings: must be a JSON object: %w", err)
+	}
+	var problems []string
+	for _, key := range []string{"tMid", "tHigh", "mismatchHf298", "mismatchS298", "mismatchCp", "collisionFactor", "pressure"} {
+		v, ok := m[key]
+		if !ok || string(v) == "null" {
+			continue
+		}
+		var f float64
+		if json.Unmarshal(v, &f) == nil {
+			continue
+		}
+		var text string
+		if key == "pressure" && json.Unmarshal(v, &text) == nil {
+			pa, err := speciesfile.ParsePressure(strings.Join(strings.Fields(text), ""), "bar")
+			if err != nil {
+				problems = append(problems, err.Error())
+				continue
+			}
+			m[key], _ = json.Marshal(pa / 1e5)
+			continue
+		}
+		problems = append(problems, fmt.Sprintf("%s must be a number, got %s", key, v))
+	}
+	if v, ok := m["units"]; ok && string(v) != "null" {
+		var text string
+		if json.Unmarshal(v, &text) != nil {
+			problems = append(problems, fmt.Sprintf("units must be \"kcal/mol\" or \"kJ/mol\", got %s", v))
+		}
+	}
+	if len(problems) > 0 {
+		return nil, fmt.Errorf("settings: %s", strings.Join(problems, "; "))
+	}
+	return json.Marshal(m)
 }

@@ -64,11 +64,12 @@ const (
 	CodeCollisionLimit      = "collision-limit"
 	CodeDuplicateReaction   = "duplicate-reaction"
 	// Extensions of the list in FORMAT.md (reported by the analysis layer).
-	CodeBadInclude       = "bad-include"
-	CodeDuplicateGroup   = "duplicate-group"
-	CodeThermoOutOfRange = "thermo-out-of-range"
-	CodeGroupOverride    = "group-override"
-	CodeNonphysicalRate  = "nonphysical-rate"
+	CodeBadInclude          = "bad-include"
+	CodeDuplicateGroup      = "duplicate-group"
+	CodeThermoOutOfRange    = "thermo-out-of-range"
+	CodeGroupOverride       = "group-override"
+	CodeNonphysicalRate     = "nonphysical-rate"
+	CodeCompositionMismatch = "composition-mismatch"
 )
 
 // Codes lists every diagnostic code, in FORMAT.md's order: the one list
@@ -76,7 +77,7 @@ const (
 var Codes = []string{CodeSyntax, CodeUndeclaredSpecies, CodeDuplicateSpecies, CodeBadSMILES, CodeUnbalancedReaction,
 	CodeMissingGroup, CodeMissingThermo, CodeThermoDiscontinuity, CodeThermoMismatch, CodeNonphysicalThermo,
 	CodeNoRate, CodeCollisionLimit, CodeDuplicateReaction, CodeBadInclude, CodeDuplicateGroup, CodeThermoOutOfRange,
-	CodeGroupOverride, CodeNonphysicalRate}
+	CodeGroupOverride, CodeNonphysicalRate, CodeCompositionMismatch}
 
 // Related points at another place (possibly in another file) that explains a
 // diagnostic, e.g. the first declaration of a duplicated species.

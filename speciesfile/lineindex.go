@@ -193,3 +193,76 @@ func clamp(v, lo, hi int) int {
 	}
 	return v
 }
+
+// Edited returns the index of src, which must be li's text with e applied:
+// the lines before and after the edit are taken from li (those after moved
+// by the edit's length change), the lines around it are found again. The
+// result is the same as NewLineIndex(src); when src does not have the
+// length e implies, it is NewLineIndex(src).
+func (li *LineIndex) Edited(src []byte, e Edit) *LineIndex {
+	if e.Old.Start < 0 || e.Old.Start > e.Old.End || e.Old.End > len(li.src) || e.NewLen < 0 || len(src) != len(li.src)+e.Delta() {
+		return NewLineIndex(src)
+	}
+	return li.edited(src, e)
+}
+
+// edited is Edited for a consistent edit.
+func (li *LineIndex) edited(src []byte, e Edit) *LineIndex {
+	delta := e.Delta()
+	// Lines a-1 and b+1 around the edit are scanned again too: an edit next
+	// to a line terminator can join or split a "\r\n".
+	a := max(li.Line(e.Old.Start)-1, 0)
+	b := li.Line(e.Old.End) + 2
+	from := li.starts[a]
+	to := len(src)
+	if b < len(li.starts) {
+		to = li.starts[b] + delta
+	}
+	out := &LineIndex{src: src, ascii: isASCII(src)}
+	out.starts = make([]int, a, len(li.starts)+8)
+	out.ends = make([]int, a, len(li.starts)+8)
+	copy(out.starts, li.starts[:a])
+	copy(out.ends, li.ends[:a])
+	start := from
+	for i := from; i < to; i++ {
+		switch src[i] {
+		case '\n':
+			out.starts = append(out.starts, start)
+			out.ends = append(out.ends, i)
+			start = i + 1
+		case '\r':
+			out.starts = append(out.starts, start)
+			out.ends = append(out.ends, i)
+			if i+1 < len(src) && src[i+1] == '\n' {
+				i++
+			}
+			start = i + 1
+		}
+	}
+	if b < len(li.starts) {
+		for k := b; k < len(li.starts); k++ {
+			out.starts = append(out.starts, li.starts[k]+delta)
+			out.ends = append(out.ends, li.ends[k]+delta)
+		}
+	} else {
+		out.starts = append(out.starts, start)
+		out.ends = append(out.ends, len(src))
+	}
+	return out
+}
+
+// newline returns the prevailing line terminator of the text, as File.Newline.
+func (li *LineIndex) newline() string {
+	crlf, lf := 0, 0
+	for k := 0; k+1 < len(li.starts); k++ {
+		if li.starts[k+1]-li.ends[k] == 2 {
+			crlf++
+		} else {
+			lf++
+		}
+	}
+	if crlf > lf {
+		return "\r\n"
+	}
+	return "\n"
+}

@@ -52,7 +52,11 @@ type srcLine struct {
 type parser struct {
 	f   *File
 	src []byte
-	s   string // string(src), shared by all token texts
+	s   string // src[sBase:sBase+len(s)] as a string, shared by all token texts
+	// sBase is the offset of s in src (0 but when reading again part of
+	// a file, see Reparse); overflow is set when a token lies outside s.
+	sBase    int
+	overflow bool
 
 	checkBytes bool // src has invalid UTF-8 or NUL bytes: check each line
 
@@ -336,7 +340,7 @@ func setExtentEnd(st Stmt, end int) {
 func (p *parser) tokenize(l srcLine) []Token {
 	toks := p.toks[:0]
 	p.comment = -1
-	line, s := p.src[:l.trimEnd], p.s
+	line := p.src[:l.trimEnd]
 	for i := l.text; i < len(line); {
 		c := line[i]
 		if c == ' ' || c == '\t' {
@@ -351,7 +355,7 @@ func (p *parser) tokenize(l srcLine) []Token {
 		for j < len(line) && line[j] != ' ' && line[j] != '\t' {
 			j++
 		}
-		toks = append(toks, Token{Span{i, j}, s[i:j]})
+		toks = append(toks, Token{Span{i, j}, p.text(i, j)})
 		i = j
 	}
 	p.toks = toks
@@ -372,7 +376,16 @@ func (p *parser) freeText(l srcLine, toks []Token, k int) (Token, bool) {
 		end--
 	}
 	start := toks[k].Span.Start
-	return Token{Span{start, end}, p.s[start:end]}, true
+	return Token{Span{start, end}, p.text(start, end)}, true
+}
+
+// text returns src[i:j] as a string sharing p.s.
+func (p *parser) text(i, j int) string {
+	if i < p.sBase || j-p.sBase > len(p.s) {
+		p.overflow = true
+		return string(p.src[i:j])
+	}
+	return p.s[i-p.sBase : j-p.sBase]
 }
 
 const keywordList = "species, reaction, units, include, group"
@@ -1168,13 +1181,11 @@ func (p *parser) equation(eq []Token, st *Reaction) (fall Token, isFalloff bool)
 }
 
 // copyTerms appends src to dst (which has room for it); it returns nil for
-// a nil src and an empty, non-nil slice for an empty one.
+// an empty src (whether the reused buffer src comes from was used before
+// must not show in the tree: a statement reads the same in any file).
 func copyTerms(dst, src []Term) []Term {
-	switch {
-	case src == nil:
+	if len(src) == 0 {
 		return nil
-	case len(src) == 0:
-		return []Term{}
 	}
 	return append(dst, src...)
 }

@@ -1,7 +1,11 @@
 package ide
 
 import (
+	"strconv"
+
 	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/engine/molecule"
+	"kiln.dev/kiln/engine/reflib"
 	"kiln.dev/kiln/speciesfile"
 )
 
@@ -22,10 +26,32 @@ type Action struct {
 	Preferred   bool
 }
 
-// Placeholder is the structure written by "Declare species NAME": `?` is not
-// SMILES, so the new line is reported as bad-smiles until the user replaces
-// it with the species' structure.
+// Placeholder is the structure written by "Declare species NAME" for a
+// name kiln does not know: `?` is not SMILES, so the new line is reported
+// as bad-smiles until the user replaces it with the species' structure.
 const Placeholder = "?"
+
+// declaredStructure returns what "Declare species NAME" writes after the
+// name: the reference library's SMILES when NAME is the name of one of its
+// species (with a multiplicity line, on a new line, for an entry that is
+// not the ground state of its structure, e.g. CH2(S)), else Placeholder.
+func declaredStructure(name, nl string) string {
+	lib := reflib.New()
+	for _, sp := range lib.All() {
+		if sp.Name != name {
+			continue
+		}
+		m, err := molecule.ParseSMILES(sp.SMILES)
+		if err != nil {
+			return Placeholder
+		}
+		if ground, ok := lib.Lookup(m, 0); ok && ground.Name == sp.Name {
+			return sp.SMILES
+		}
+		return sp.SMILES + nl + "  multiplicity " + strconv.Itoa(sp.Multiplicity)
+	}
+	return Placeholder
+}
 
 // CodeActions returns the actions for the byte range span of the analysed
 // file (x.Result().Path): quick fixes for the species statements and the
@@ -40,7 +66,9 @@ const Placeholder = "?"
 //     for one structure declared under two names (here or in an included
 //     file), see sameStructureRenames;
 //   - "Declare species NAME": on an undeclared-species diagnostic, inserting
-//     `species NAME ?` after the last species declaration of the file;
+//     `species NAME SMILES` after the last species declaration of the file,
+//     SMILES the reference library's for one of its species' names, else
+//     `?` (see DeclareEdit);
 //   - "Fill all missing thermo blocks": every species of the file that the
 //     first quick fix applies to.
 func CodeActions(x *Index, file string, span speciesfile.Span) []Action {
@@ -115,15 +143,17 @@ func CodeActions(x *Index, file string, span speciesfile.Span) []Action {
 	return out
 }
 
-// DeclareEdit returns the insertion of `species NAME ?` (see Placeholder) on
-// a new line after the last species statement of f; before the first
-// reaction when f declares no species; else at the end of f.
+// DeclareEdit returns the insertion of `species NAME SMILES` on a new line
+// after the last species statement of f; before the first reaction when f
+// declares no species; else at the end of f. SMILES is the reference
+// library's structure when NAME names one of its species (OH, HO2, CH3 …),
+// else Placeholder.
 func DeclareEdit(f *speciesfile.File, name string) analysis.Edit {
 	nl := f.Newline
 	if nl == "" {
 		nl = "\n"
 	}
-	text := "species " + name + " " + Placeholder
+	text := "species " + name + " " + declaredStructure(name, nl)
 	if n := len(f.Species); n > 0 {
 		end := f.Species[n-1].Body().End
 		return analysis.Edit{File: f.Name, Span: speciesfile.Span{Start: end, End: end}, NewText: nl + text}

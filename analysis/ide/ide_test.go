@@ -146,6 +146,28 @@ func TestDeclareEdit(t *testing.T) {
 	noSpecies := "reaction A <=> B\n"
 	f = speciesfile.Parse("/w/g.kiln", []byte(noSpecies))
 	assert.Equal(t, "species A ?\nreaction A <=> B\n", apply(t, noSpecies, []analysis.Edit{DeclareEdit(f, "A")}))
+	// A reference-library name gets the library's structure, and the
+	// declared species is then clean; a non-ground-state entry gets its
+	// multiplicity too.
+	lib := "species CH4 C\nreaction CH4 + OH <=> CH3 + H2O  A=1e7 n=1.8 Ea=2.8\nreaction CH2(S) + CH4 <=> CH3 + CH3  A=1e13 n=0 Ea=0\n"
+	f = speciesfile.Parse("/w/l.kiln", []byte(lib))
+	out = apply(t, lib, []analysis.Edit{DeclareEdit(f, "OH")})
+	assert.Equal(t, "species CH4 C\nspecies OH [OH]\n"+lib[len("species CH4 C\n"):], out)
+	f = speciesfile.Parse("/w/l.kiln", []byte(out))
+	out = apply(t, out, []analysis.Edit{DeclareEdit(f, "CH2(S)")})
+	assert.Contains(t, out, "species OH [OH]\nspecies CH2(S) [CH2]\n  multiplicity 1\nreaction")
+	for _, name := range []string{"CH3", "H2O"} {
+		f = speciesfile.Parse("/w/l.kiln", []byte(out))
+		out = apply(t, out, []analysis.Edit{DeclareEdit(f, name)})
+	}
+	x = analyse(t, map[string]string{"/w/l.kiln": out}, "/w/l.kiln")
+	for _, d := range x.Result().Diagnostics {
+		assert.NotEqual(t, speciesfile.SeverityError, d.Severity, "%s: %s", d.Code, d.Message)
+	}
+	for _, sp := range x.Result().Species {
+		require.NotNil(t, sp.Estimate, sp.Name)
+		assert.Equal(t, sp.Name, sp.Estimate.Library, "declared as the library's own species")
+	}
 }
 
 func TestFoldingRanges(t *testing.T) {

@@ -1,7 +1,6 @@
 package main
 
 import (
-	"context"
 	"fmt"
 	"slices"
 	"sort"
@@ -103,10 +102,9 @@ func runCheck(e env, args []string) (int, error) {
 		for _, d := range out {
 			fmt.Fprintf(e.stdout, "%s:%d:%d: %s: %s [%s]\n", d.File, d.Line, d.Column, d.Severity, d.Message, d.Code)
 		}
-		if len(out) > 0 {
-			fmt.Fprintf(e.stderr, "kiln check: %d error(s), %d warning(s), %d information, %d hint(s)\n",
-				counts["error"], counts["warning"], counts["information"], counts["hint"])
-		}
+		// The count line is always written, also when nothing is shown.
+		fmt.Fprintf(e.stderr, "kiln check: %d error(s), %d warning(s), %d information, %d hint(s)\n",
+			counts["error"], counts["warning"], counts["information"], counts["hint"])
 	}
 	if errors > 0 {
 		return exitProblems, nil
@@ -117,25 +115,13 @@ func runCheck(e env, args []string) (int, error) {
 // checkFile analyses path and every file it includes (each once per run) and
 // returns their diagnostics.
 func checkFile(ws *analysis.Workspace, path string, done map[string]bool) ([]checkDiag, error) {
-	if done[path] {
-		return nil, nil
-	}
-	done[path] = true
-	res, err := ws.Analyze(context.Background(), path)
+	results, err := analyzeScope(ws, path, done)
 	if err != nil {
 		return nil, err
 	}
-	out := diagsOf(res)
-	for _, inc := range res.Includes {
-		if inc.Path == "" || done[inc.Path] {
-			continue
-		}
-		// An unreadable include is reported on its include line already.
-		more, err := checkFile(ws, inc.Path, done)
-		if err != nil {
-			continue
-		}
-		out = append(out, more...)
+	var out []checkDiag
+	for _, res := range results {
+		out = append(out, diagsOf(res)...)
 	}
 	return out, nil
 }

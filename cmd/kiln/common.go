@@ -7,6 +7,7 @@ import (
 	"os"
 	"path/filepath"
 	"strconv"
+	"strings"
 	"time"
 
 	"kiln.dev/kiln/analysis"
@@ -135,7 +136,34 @@ func newWorkspace(file string, flags map[string]string, s analysis.Settings) (*a
 	if err != nil {
 		return nil, "", fmt.Errorf("%s: %w", file, err)
 	}
+	if flags["root"] != "" {
+		if err := checkRoot(flags["root"], root, abs); err != nil {
+			return nil, "", err
+		}
+	}
 	return analysis.NewWorkspace(root, readFile, s), abs, nil
+}
+
+// checkRoot checks a --root given on the command line: an existing
+// directory that holds each file (absolute paths). Anything else is a usage
+// error, reported before any include is resolved against it.
+func checkRoot(flag, root string, files ...string) error {
+	st, err := os.Stat(root)
+	switch {
+	case err != nil && os.IsNotExist(err):
+		return usagef("--root %s: no such directory", flag)
+	case err != nil:
+		return usagef("--root %s: %v", flag, err)
+	case !st.IsDir():
+		return usagef("--root %s is not a directory", flag)
+	}
+	for _, f := range files {
+		rel, err := filepath.Rel(root, f)
+		if err != nil || rel == ".." || strings.HasPrefix(rel, ".."+string(filepath.Separator)) {
+			return usagef("--root %s does not contain %s: the workspace root must be a directory above the files", flag, displayPath(f))
+		}
+	}
+	return nil
 }
 
 // displayPath shows path relative to the working directory when it is below it.
@@ -153,6 +181,16 @@ func displayPath(path string) string {
 
 // analyzeFile analyses the one file a command operates on.
 func analyzeFile(e env, file string, flags map[string]string) (*analysis.Result, analysis.Settings, error) {
+	results, set, err := analyzeFileScope(e, file, flags)
+	if err != nil {
+		return nil, set, err
+	}
+	return results[0], set, nil
+}
+
+// analyzeFileScope analyses the file a command operates on and the files it
+// includes (see analyzeScope); the first result is the file's.
+func analyzeFileScope(e env, file string, flags map[string]string) ([]*analysis.Result, analysis.Settings, error) {
 	set, err := settingsFrom(e, flags)
 	if err != nil {
 		return nil, set, err
@@ -161,6 +199,47 @@ func analyzeFile(e env, file string, flags map[string]string) (*analysis.Result,
 	if err != nil {
 		return nil, set, err
 	}
-	res, err := ws.Analyze(context.Background(), abs)
-	return res, set, err
+	results, err := analyzeScope(ws, abs, nil)
+	return results, set, err
+}
+
+// analyzeScope analyses path and, depth first, every file it includes that
+// done does not hold yet (each file once per run; done may be nil), path
+// first. Each file is analysed as check reports it: in its own scope. An
+// unreadable include is left out (its include line reports it). Every
+// command that counts a file's errors or lists its reactions uses this, so
+// that they agree with check.
+func analyzeScope(ws *analysis.Workspace, path string, done map[string]bool) ([]*analysis.Result, error) {
+	if done == nil {
+		done = map[string]bool{}
+	}
+	if done[path] {
+		return nil, nil
+	}
+	done[path] = true
+	res, err := ws.Analyze(context.Background(), path)
+	if err != nil {
+		return nil, err
+	}
+	out := []*analysis.Result{res}
+	for _, inc := range res.Includes {
+		if inc.Path == "" || done[inc.Path] {
+			continue
+		}
+		more, err := analyzeScope(ws, inc.Path, done)
+		if err != nil {
+			continue
+		}
+		out = append(out, more...)
+	}
+	return out, nil
+}
+
+// scopeErrors counts the errors of the analysed files, as check does.
+func scopeErrors(results []*analysis.Result) int {
+	n := 0
+	for _, res := range results {
+		n += res.ErrorCount()
+	}
+	return n
 }

@@ -35,10 +35,11 @@ func runEquilibrium(e env, args []string) (int, error) {
 			return 0, inputUsage(err)
 		}
 	}
-	res, _, err := analyzeFile(e, files[0], flags)
+	results, _, err := analyzeFileScope(e, files[0], flags)
 	if err != nil {
 		return 0, err
 	}
+	res := results[0]
 	out, err := res.Equilibrium(context.Background(), req)
 	if err != nil {
 		var ie *analysis.InputError
@@ -48,7 +49,7 @@ func runEquilibrium(e env, args []string) (int, error) {
 		fmt.Fprintf(e.stderr, "kiln equilibrium: %v\n", err)
 		return exitProblems, nil
 	}
-	if n := res.ErrorCount(); n > 0 {
+	if n := scopeErrors(results); n > 0 {
 		fmt.Fprintf(e.stderr, "kiln equilibrium: %s has %d error(s) (`kiln check` lists them); broken statements were left out\n", out.File, n)
 	}
 	if flags["json"] == "true" {

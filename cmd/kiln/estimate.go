@@ -72,6 +72,8 @@ type nasaJSON struct {
 	High  [7]float64 `json:"high"`
 	// MaxCpResidual is the fit's worst Cp residual in J/(mol K) (extension).
 	MaxCpResidual float64 `json:"max_cp_residual_j_mol_k"`
+	// Source is the block's source line as fill writes it (extension).
+	Source string `json:"source"`
 }
 
 func runEstimate(e env, args []string) (int, error) {
@@ -102,7 +104,7 @@ func runEstimate(e env, args []string) (int, error) {
 	failed := false
 	var results []estimateJSON
 	for i, in := range inputs {
-		r, est := estimateOne(ws, in, opts, withNASA)
+		r, est := estimateOne(ws, in, opts, withNASA, set.Stamp)
 		if r.Error != nil {
 			failed = true
 		}
@@ -113,7 +115,7 @@ func runEstimate(e env, args []string) (int, error) {
 		if i > 0 {
 			fmt.Fprintln(e.stdout)
 		}
-		writeEstimateText(e.stdout, r, est, analysis.UnitsFor(set, nil), withNASA, flags["sources"] == "true")
+		writeEstimateText(e.stdout, r, est, analysis.UnitsFor(set, nil), withNASA, flags["sources"] == "true", set.Stamp)
 	}
 	if flags["json"] == "true" {
 		if err := writeJSON(e.stdout, results); err != nil {
@@ -130,7 +132,7 @@ func ptr[T any](v T) *T { return &v }
 
 // estimateOne estimates one SMILES and fills the JSON record; on failure the
 // record carries the error and null values.
-func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOptions, withNASA bool) (estimateJSON, *analysis.Estimate) {
+func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOptions, withNASA bool, stamp string) (estimateJSON, *analysis.Estimate) {
 	r := estimateJSON{Input: in, Groups: []groupJSON{}, Corrections: []correctionJSON{}, MissingGroups: []string{}}
 	m, err := molecule.ParseSMILES(in)
 	if err != nil {
@@ -184,7 +186,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		if err != nil {
 			r.Error = &errorJSON{Message: "NASA-7 fit failed: " + err.Error()}
 		} else {
-			r.NASA7 = &nasaJSON{TLow: p.TLow, TMid: p.TMid, THigh: p.THigh, Low: p.Low, High: p.High, MaxCpResidual: jnum(fit.MaxCpResidual)}
+			r.NASA7 = &nasaJSON{TLow: p.TLow, TMid: p.TMid, THigh: p.THigh, Low: p.Low, High: p.High, MaxCpResidual: jnum(fit.MaxCpResidual), Source: est.BlockSource(stamp)}
 		}
 	}
 	return r, est
@@ -194,7 +196,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 // display units u (the other unit in parentheses for the totals). Group
 // sources are listed with --sources, one line per group, so that the table
 // stays narrow; --json always has them.
-func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u analysis.Units, withNASA, withSources bool) {
+func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u analysis.Units, withNASA, withSources bool, stamp string) {
 	fmt.Fprintf(w, "%s\n", r.Input)
 	if r.Error != nil {
 		if r.Error.Position != nil {
@@ -256,7 +258,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	fmt.Fprintln(w)
 	if p, fit, err := est.NASA7(); withNASA && err == nil {
 		fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %s):\n", u.Entropy(fit.MaxCpResidual))
-		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, "kiln "+Version+" estimate", "\n"))
+		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, est.BlockSource(stamp), "\n"))
 	}
 	writeWrapped(w, "  ", ide.Caution)
 }

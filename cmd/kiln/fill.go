@@ -90,12 +90,25 @@ func shiftedOffset(off int, edits []analysis.Edit) int {
 // writeAtomic replaces path by data: it writes a temporary file in the same
 // directory, syncs it and renames it over path, so readers see the old or the
 // new file and never a mixture. The temporary file is removed on failure and
-// the original keeps its permissions.
+// the original keeps its permissions. A symbolic link stays a link: the file
+// it points to is replaced (the temporary file goes into that file's
+// directory). A file its owner may not write is refused, not replaced.
 func writeAtomic(path string, data []byte) (err error) {
-	st, err := os.Stat(path)
+	target, err := filepath.EvalSymlinks(path)
 	if err != nil {
 		return fmt.Errorf("writing %s: %w", path, err)
 	}
+	st, err := os.Stat(target)
+	if err != nil {
+		return fmt.Errorf("writing %s: %w", path, err)
+	}
+	if !st.Mode().IsRegular() {
+		return fmt.Errorf("writing %s: not a regular file", path)
+	}
+	if st.Mode().Perm()&0o200 == 0 {
+		return fmt.Errorf("not writing %s: the file is read-only (its owner has no write permission); make it writable (chmod u+w %s) or use --dry-run", path, path)
+	}
+	path = target
 	tmp, err := os.CreateTemp(filepath.Dir(path), "."+filepath.Base(path)+".kiln-*")
 	if err != nil {
 		return fmt.Errorf("writing %s: %w", path, err)

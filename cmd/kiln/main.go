@@ -149,7 +149,9 @@ Usage:
         k_f, k_r at 1000 K with their units. --pressure sets where falloff and
         pressure-table rates are taken (with a unit: 10bar, 0.1atm, 50kPa;
         default 1atm). Values that need a reaction to
-        balance are left out when it does not. Exit 1 when the file has errors.
+        balance are left out when it does not. Species and reactions of included
+        files are listed too (a reaction with its FILE:LINE). Exit 1 when the
+        file or what it includes has errors.
         The k_r ×/÷ column is the factor exp(σ(ΔG°r)/RT) that k_r(1000 K)
         inherits from estimated thermo; --uncertain lists the largest first.
   kiln fill FILE [--dry-run] [--tmid K] [--thigh K]
@@ -158,6 +160,8 @@ Usage:
         (refitted; a THIGH beyond the reference data is refused). Species that
         get no block are listed on stderr with the reason, and the exit code is
         then 1. --dry-run prints a unified diff instead of writing the file.
+        The file is replaced atomically (through a symbolic link, its target),
+        keeping its permissions; a file its owner may not write is refused.
   kiln plot SPECIES --file FILE -o OUT.svg
         Draw Cp/R, H/RT and S/R against T: estimate, fit and the file's own block
         (drawn only over the block's temperature range).
@@ -165,7 +169,8 @@ Usage:
         Match species by structure and multiplicity (not by name) and report
         species only in A or B, one structure under two names (with a rename
         suggestion), one name for two structures, thermo differences B − A
-        (ΔHf°298, S°298, Cp and G at 300/1000/2000 K; flagged beyond
+        (ΔHf°298, S°298, Cp and G at 300/1000/2000 K, an estimate evaluated
+        by the NASA-7 polynomial fill writes; flagged beyond
         --mismatch-hf / --mismatch-s), and reactions matched by their species
         with k_B/k_A at 500/1000/2000 K (flagged outside 1/F–F, default F = 2).
         Exit 0 when nothing is flagged, 1 when a thermo or rate difference,
@@ -195,9 +200,10 @@ Common flags (every command; flags may stand before or after the operands):
   --mismatch-cp X           thermo-mismatch threshold on Cp(T), cal/(mol·K) (default 1.5)
   --collision-factor F      multiply the collision limit by F (default 1)
   --pressure P              pressure for displayed rates (see summary)
-  --root DIR                workspace root that includes must stay in (default: the
-                            nearest directory above the file holding .git, else
-                            the file's directory)
+  --root DIR                workspace root that includes must stay in: an existing
+                            directory above the file (default: the nearest
+                            directory above the file holding .git, else the
+                            file's directory)
 
 Estimates are group-additivity estimates: they typically err by 1–3 kcal/mol.
 Check them against measured data, licensed engineering practice and local

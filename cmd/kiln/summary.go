@@ -7,7 +7,6 @@ import (
 	"strconv"
 
 	"kiln.dev/kiln/analysis"
-	"kiln.dev/kiln/speciesfile"
 )
 
 // summaryJSON is the output of `kiln summary --json`; the keys are a public
@@ -32,7 +31,10 @@ type summarySpecies struct {
 }
 
 type summaryReaction struct {
-	Line        int        `json:"line"`
+	Line int `json:"line"`
+	// File is the included file that declares the reaction (extension;
+	// absent for the summarised file's own reactions).
+	File        string     `json:"file,omitempty"`
 	Equation    string     `json:"equation"`
 	Balanced    *bool      `json:"balanced"`
 	DH298       *float64   `json:"dh298_kj_mol"`
@@ -60,11 +62,12 @@ func runSummary(e env, args []string) (int, error) {
 	if len(files) != 1 {
 		return 0, usagef("summary needs exactly one FILE")
 	}
-	res, _, err := analyzeFile(e, files[0], flags)
+	results, _, err := analyzeFileScope(e, files[0], flags)
 	if err != nil {
 		return 0, err
 	}
-	s := buildSummary(res)
+	res := results[0]
+	s := buildSummary(results)
 	if flags["uncertain"] == "true" {
 		sortByReverseFactor(s.Reactions)
 	}
@@ -77,21 +80,11 @@ func runSummary(e env, args []string) (int, error) {
 	}
 	// Values of a file with errors are incomplete: say so in the exit code,
 	// as check does.
-	if n := countErrors(res.Diagnostics); n > 0 {
+	if n := scopeErrors(results); n > 0 {
 		fmt.Fprintf(e.stderr, "kiln summary: %s has %d error(s); values that depend on them are missing (run kiln check)\n", files[0], n)
 		return exitProblems, nil
 	}
 	return exitOK, nil
-}
-
-func countErrors(ds []speciesfile.Diagnostic) int {
-	n := 0
-	for _, d := range ds {
-		if d.Severity == speciesfile.SeverityError {
-			n++
-		}
-	}
-	return n
 }
 
 func kilo(p *float64) *float64 {
@@ -101,7 +94,10 @@ func kilo(p *float64) *float64 {
 	return ptr(jnum(*p / 1000))
 }
 
-func buildSummary(res *analysis.Result) summaryJSON {
+// buildSummary summarises results[0]: its species (those of its includes
+// among them) and the reactions of every file in results.
+func buildSummary(results []*analysis.Result) summaryJSON {
+	res := results[0]
 	s := summaryJSON{Species: []summarySpecies{}, Reactions: []summaryReaction{}}
 	for _, sp := range res.Species {
 		row := summarySpecies{Name: sp.Name, ThermoSource: string(sp.Source)}
@@ -133,29 +129,40 @@ func buildSummary(res *analysis.Result) summaryJSON {
 	if P == 0 {
 		P = 101325
 	}
-	for _, r := range res.Reactions {
-		row := summaryReaction{Line: r.Line, Equation: r.Equation, DH298: kilo(r.DH298), DS298: jptr(r.DS298), DG298: kilo(r.DG298),
-			Keq: numericMap(r.Kp), RatePressure: jnum(P / 1e5)}
-		if r.Balance != nil {
-			row.Balanced = ptr(r.Balance.Balanced)
+	for _, rr := range results {
+		for _, r := range rr.Reactions {
+			row := summaryReactionOf(rr, r, P)
+			if rr != res {
+				row.File = displayPath(rr.Path)
+			}
+			s.Reactions = append(s.Reactions, row)
 		}
-		if r.ForwardRate1000 != nil {
-			row.ForwardRate = numericMap{"1000": r.ForwardRate1000}
-			row.ForwardRateUnits = analysis.RateUnits(r.ForwardOrder)
-		}
-		if r.ReverseRate1000 != nil {
-			row.ReverseRate = numericMap{"1000": r.ReverseRate1000}
-			row.ReverseRateUnits = analysis.RateUnits(r.ReverseOrder)
-		}
-		if v := r.Collision; v != nil {
-			row.CollisionViolation = ptr(v.Message())
-		}
-		if u, ok := res.ReverseRateUncertainty(r, 1000); ok {
-			row.ReverseFactor = numericMap{"1000": ptr(u.Factor)}
-		}
-		s.Reactions = append(s.Reactions, row)
 	}
 	return s
+}
+
+// summaryReactionOf describes reaction r of the analysis res.
+func summaryReactionOf(res *analysis.Result, r *analysis.Reaction, P float64) summaryReaction {
+	row := summaryReaction{Line: r.Line, Equation: r.Equation, DH298: kilo(r.DH298), DS298: jptr(r.DS298), DG298: kilo(r.DG298),
+		Keq: numericMap(r.Kp), RatePressure: jnum(P / 1e5)}
+	if r.Balance != nil {
+		row.Balanced = ptr(r.Balance.Balanced)
+	}
+	if r.ForwardRate1000 != nil {
+		row.ForwardRate = numericMap{"1000": r.ForwardRate1000}
+		row.ForwardRateUnits = analysis.RateUnits(r.ForwardOrder)
+	}
+	if r.ReverseRate1000 != nil {
+		row.ReverseRate = numericMap{"1000": r.ReverseRate1000}
+		row.ReverseRateUnits = analysis.RateUnits(r.ReverseOrder)
+	}
+	if v := r.Collision; v != nil {
+		row.CollisionViolation = ptr(v.Message())
+	}
+	if u, ok := res.ReverseRateUncertainty(r, 1000); ok {
+		row.ReverseFactor = numericMap{"1000": ptr(u.Factor)}
+	}
+	return row
 }
 
 // sciText writes a value with 3 significant digits ("—" for none).
@@ -204,7 +211,7 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		if r.Balanced != nil {
 			bal = map[bool]string{true: "yes", false: "NO"}[*r.Balanced]
 		}
-		rows = append(rows, []string{strconv.Itoa(r.Line), shorten(r.Equation, 44), bal, energy(r.DH298), energy(r.DG298),
+		rows = append(rows, []string{reactionLine(r), shorten(r.Equation, 44), bal, energy(r.DH298), energy(r.DG298),
 			sciText(r.Keq["298"]), sciText(r.Keq["1000"]), sciText(r.Keq["1500"])})
 	}
 	writeTable(w, "", []string{"line", "equation", "balanced", "ΔH°r", "ΔG°r", "Kp(298)", "Kp(1000)", "Kp(1500)"}, rows)
@@ -231,9 +238,22 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		if f := reverseFactor(r); f != nil {
 			factor = strconv.FormatFloat(*f, 'f', 2, 64)
 		}
-		rows = append(rows, []string{strconv.Itoa(r.Line), shorten(r.Equation, 44), kf, kr, factor, limit})
+		rows = append(rows, []string{reactionLine(r), shorten(r.Equation, 44), kf, kr, factor, limit})
 	}
 	writeTable(w, "", []string{"line", "equation", "k_f", "k_r", "k_r ×/÷", "check"}, rows)
+}
+
+// reactionLine is a reaction's line, FILE:LINE when an included file
+// declares it.
+func reactionLine(r summaryReaction) string {
+	if r.File != "" {
+		f := []rune(r.File)
+		if len(f) > 24 { // keep the file name: cut the directories
+			f = append([]rune("…"), f[len(f)-23:]...)
+		}
+		return string(f) + ":" + strconv.Itoa(r.Line)
+	}
+	return strconv.Itoa(r.Line)
 }
 
 // reverseFactor is a reaction's k_r factor at 1000 K, nil when none.

@@ -35,9 +35,10 @@ import (
 //     sizes, which every minimum basis shares, each taken as the saturated
 //     carbocycle of that size.
 //  4. A monocycle, or an ortho-fused system (one block, unique minimum
-//     basis, rings sharing at most one bond, no ring smaller than five) is
-//     the sum of its ring corrections, Benson's practice (decalin, indane,
-//     tetralin), not flagged. Every other system without a table value —
+//     basis, rings sharing at most one bond, no ring smaller than five, no
+//     non-aromatic ring fused to two aromatic rings) is the sum of its ring
+//     corrections, Benson's practice (decalin, indane, tetralin), not
+//     flagged. Every other system without a table value —
 //     bridged, spiro, cage, or fused with a three- or four-membered ring —
 //     gets the sum of its component-ring corrections and is reported in
 //     Result.Missing as "ring system: …", which widens the uncertainty.
@@ -551,6 +552,10 @@ type ringTerm struct {
 // addRingCorrections adds the ring-strain terms of every ring system of g
 // by the rule at the top of this file, and reports every approximation in
 // est.Missing.
+// multiFusedKind describes an ortho-fused system with a non-aromatic ring
+// fused to two aromatic rings (fluorene, 9,10-dihydroanthracene).
+const multiFusedKind = "non-aromatic ring fused to two aromatic rings"
+
 func addRingCorrections(g *graph, l lookup, est *Result) {
 	counts := map[string]int{}
 	var order []string
@@ -567,7 +572,7 @@ func addRingCorrections(g *graph, l lookup, est *Result) {
 	for _, s := range g.ringSystems() {
 		// Component rings of every block.
 		var keys []string // "ring:…" corrections to apply (S, Cp; and ΔHf unless matched)
-		allUnique, minSize, maxShared := true, math.MaxInt, 0
+		allUnique, minSize, maxShared, multiFused := true, math.MaxInt, 0, false
 		for _, bl := range s.blocks {
 			rings, unique, sizes := g.blockRings(bl, &work)
 			if !unique {
@@ -579,6 +584,37 @@ func addRingCorrections(g *graph, l lookup, est *Result) {
 					}
 				}
 				continue
+			}
+			aromatic := func(r []int) bool {
+				for _, a := range r {
+					if !g.m.Atoms[a].Aromatic {
+						return false
+					}
+				}
+				return true
+			}
+			for _, r := range rings {
+				if aromatic(r) {
+					continue
+				}
+				fusedTo := 0
+				for _, q := range rings {
+					if !aromatic(q) {
+						continue
+					}
+					shared := 0
+					for _, a := range r {
+						if slices.Contains(q, a) {
+							shared++
+						}
+					}
+					if shared >= 2 {
+						fusedTo++
+					}
+				}
+				if fusedTo >= 2 {
+					multiFused = true
+				}
 			}
 			for i, r := range rings {
 				minSize = min(minSize, len(r))
@@ -651,9 +687,25 @@ func addRingCorrections(g *graph, l lookup, est *Result) {
 			kind = "bridged"
 		case minSize < 5:
 			kind = "small-ring fused"
+		case multiFused:
+			// The ring's correction was measured with localised double
+			// bonds (cyclopentadiene, cyclohexadiene), not between two
+			// aromatic rings (fluorene, 9,10-dihydroanthracene).
+			kind = multiFusedKind
 		}
 		if kind == "" {
 			continue // ortho-fused, rings ≥ 5: sum of rings (Benson practice)
+		}
+		if kind == multiFusedKind {
+			// Ortho-fused all the same: the ring corrections apply, but to
+			// a ring they were not measured on (class.go widens a "ring:"
+			// entry by widenRing, not by the whole-system RMS).
+			est.Missing = append(est.Missing, Missing{
+				Group:         "ring: " + g.describe(s, kind),
+				Approximation: "sum of component ring corrections",
+				Note:          "the correction of the ring between the aromatic rings was measured on the ring with localised double bonds; errors of several kcal/mol are possible",
+			})
+			continue
 		}
 		est.Missing = append(est.Missing, Missing{
 			Group:         "ring system: " + g.describe(s, kind),

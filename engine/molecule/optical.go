@@ -57,20 +57,51 @@ func (m *Molecule) OpticalIsomers() int {
 	return n
 }
 
-// stereoUnit reports whether atom i is a tetrahedral carbon stereo unit.
+// stereoUnit reports whether atom i is a tetrahedral stereo unit: an sp3
+// carbon, or a configurationally stable S, Se or P centre — a sulfoxide-type
+// S/Se with three partners and a lone pair, a phosphine P with three
+// partners and a lone pair, a P with four partners (inversion barriers of
+// 35–45 kcal/mol, common practice; amines invert fast and are not units).
 func (m *Molecule) stereoUnit(i int) bool {
 	a := m.Atoms[i]
-	return a.Element == "C" && !a.Aromatic && a.Radical == 0 && a.HCount <= 1 &&
-		len(m.Adj[i])+a.HCount == 4 && m.allSingle(i)
+	if a.Aromatic || a.Radical != 0 || a.HCount > 1 {
+		return false
+	}
+	switch a.Element {
+	case "C":
+		return len(m.Adj[i])+a.HCount == 4 && m.allSingle(i)
+	case "S", "Se", "P":
+		return a.HCount == 0 && len(m.Adj[i])+m.stereoLonePairs(i) == 4
+	}
+	return false
+}
+
+// stereoLonePairs is the number of lone pairs that take a position of a
+// stereo unit at a heavy atom (see stereoUnit): 1 or 0.
+func (m *Molecule) stereoLonePairs(i int) int {
+	a := m.Atoms[i]
+	if a.Element == "C" {
+		return 0
+	}
+	if lp, ok := m.hypervalentLonePairs(i); ok {
+		return lp
+	}
+	if a.Element == "P" && m.allSingle(i) && len(m.Adj[i])+a.HCount == 3 && a.Charge == 0 {
+		return 1 // phosphine
+	}
+	return 0
 }
 
 // stereoPositions lists the four positions of a stereo unit: neighbours in
-// Adj order, then -1 for a hydrogen.
+// Adj order, then -1 for a hydrogen or -2 for a lone pair.
 func (m *Molecule) stereoPositions(i int) []int {
 	out := m.Neighbors(i)
 	out = slices.Clone(out)
 	if m.Atoms[i].HCount == 1 {
 		out = append(out, -1)
+	}
+	if m.stereoLonePairs(i) == 1 {
+		out = append(out, -2)
 	}
 	return out
 }

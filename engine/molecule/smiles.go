@@ -401,7 +401,16 @@ func (p *parser) readAtom(i int) (Atom, int, bool, error) {
 		return Atom{Element: upperSymbol(s[i : i+1]), Aromatic: true, Pos: i, Len: 1}, 1, true, nil
 	}
 	if c >= 'A' && c <= 'Z' || c >= 'a' && c <= 'z' {
-		return Atom{}, 0, false, errAt(i, "element %q must be written in brackets", string(c))
+		for _, n := range []int{2, 1} {
+			if i+n > len(s) {
+				continue
+			}
+			sym := upperSymbol(s[i : i+n])
+			if _, ok := AtomicWeight(sym); ok && (n == 1 || s[i+1] >= 'a' && s[i+1] <= 'z') {
+				return Atom{}, 0, false, errAt(i, "element %q must be written in brackets, as [%s]", sym, sym)
+			}
+		}
+		return Atom{}, 0, false, errAt(i, "%q is not an element symbol: outside brackets only B, C, N, O, P, S, F, Cl, Br, I (and aromatic b, c, n, o, p, s) may be written", string(c))
 	}
 	return Atom{}, 0, false, errAt(i, "invalid character %q", rune(c))
 }

@@ -258,11 +258,20 @@ func (m *Molecule) allSingle(i int) bool {
 
 // lonePairLigands is the number of lone pairs counted as ligands of a
 // tetrahedral atom: 1 for N and P with three σ partners, 2 for O and S with
-// two, all bonds single, not a radical (common practice).
+// two, all bonds single, not a radical (common practice); and for S, Se and
+// P with double bonds (sulfoxide, sulfone, phosphine oxide), the lone pairs
+// their valence electrons leave (VSEPR, common practice), which makes a
+// sulfoxide's sulfur pyramidal and a sulfone's tetrahedral.
 func (m *Molecule) lonePairLigands(i int) int {
 	a := m.Atoms[i]
 	d := len(m.Adj[i])
-	if a.Radical != 0 || !m.allSingle(i) {
+	if a.Radical != 0 {
+		return 0
+	}
+	if !m.allSingle(i) {
+		if lp, ok := m.hypervalentLonePairs(i); ok {
+			return lp
+		}
 		return 0
 	}
 	switch a.Element {
@@ -278,11 +287,50 @@ func (m *Molecule) lonePairLigands(i int) int {
 	return 0
 }
 
+// hypervalentLonePairs returns the lone pairs of a non-aromatic S, Se or P
+// atom with double (no triple) bonds, from its valence electrons, when it has
+// four electron domains (σ partners + lone pairs): ok is false otherwise.
+func (m *Molecule) hypervalentLonePairs(i int) (int, bool) {
+	a := m.Atoms[i]
+	valence := 0
+	switch a.Element {
+	case "S", "Se":
+		valence = 6
+	case "P":
+		valence = 5
+	default:
+		return 0, false
+	}
+	if a.Aromatic || a.Radical != 0 {
+		return 0, false
+	}
+	bonds := a.HCount
+	for _, b := range m.Adj[i] {
+		o := m.Bonds[b].Order
+		if o > 2 || m.Bonds[b].Aromatic {
+			return 0, false
+		}
+		bonds += o
+	}
+	free := valence - a.Charge - bonds
+	if free < 0 || free%2 != 0 {
+		return 0, false
+	}
+	lp := free / 2
+	if len(m.Adj[i])+a.HCount+lp != 4 {
+		return 0, false
+	}
+	return lp, true
+}
+
 // tetrahedral reports whether atom i is a tetrahedral centre (see the rule).
 func (sc *sigmaCalc) tetrahedral(i int) bool {
 	m := sc.m
 	a := m.Atoms[i]
 	l := sc.lp[i]
+	if _, ok := m.hypervalentLonePairs(i); ok && !m.allSingle(i) {
+		return true
+	}
 	return m.allSingle(i) && a.Radical == 0 && len(m.Adj[i])+a.HCount+l == 4 && (a.Element != "C" || l == 0)
 }
 

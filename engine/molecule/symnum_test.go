@@ -27,6 +27,9 @@ var sigmaCases = []struct {
 	{"CC(C)=O", 18}, {"CO", 3}, {"CCO", 3}, {"COC", 18}, {"C=O", 2}, {"C#C", 2}, {"CC=C", 3},
 	{"c1ccc2ccccc2c1", 4}, {"C/C=C/C", 18}, {"C/C=C\\C", 18}, {"C=C=C", 4}, {"C1CC1", 6}, {"N", 3},
 	{"CN(C)C", 81}, {"Cc1ccc(C)cc1", 36}, {"C1COCCO1", 2}, {"C[CH2]", 6}, {"[CH3]", 6},
+	// sulfoxide S pyramidal (C_s: 1·3·3), sulfone S tetrahedral (C_2v: 2·3·3),
+	// phosphine oxide C_3v (3·3³): lone pairs from the valence electrons
+	{"CS(C)=O", 9}, {"O=S(C)C", 9}, {"CS(C)(=O)=O", 18}, {"CCS(=O)(=O)CC", 18}, {"CP(C)(C)=O", 81},
 	// rigid polycyclics and cages (rotational subgroup of the point group)
 	{"C1C2CC3CC1CC(C2)C3", 12}, // adamantane, T_d → T
 	{"C12C3C4C1C5C2C3C45", 24}, // cubane, O_h → O
@@ -108,6 +111,15 @@ func TestOpticalIsomersMolecule(t *testing.T) {
 	assert.Equal(t, 1, parse(t, "CC(C)CC(C)C").OpticalIsomers())
 	assert.Equal(t, 1, parse(t, "CCC(CC)C").OpticalIsomers())
 	assert.Equal(t, 1, parse(t, "C1C2CC3CC1CC(C2)C3").OpticalIsomers(), "adamantane bridgeheads have two alike ring paths")
+	// Configurationally stable heteroatom centres: a sulfoxide S with three
+	// different partners and its lone pair, a phosphine P; not a sulfone S
+	// (two alike O), not an amine N (fast inversion).
+	assert.Equal(t, 2, parse(t, "CCS(C)=O").OpticalIsomers(), "ethyl methyl sulfoxide")
+	assert.Equal(t, 1, parse(t, "CS(C)=O").OpticalIsomers())
+	assert.Equal(t, 1, parse(t, "CCS(C)(=O)=O").OpticalIsomers())
+	assert.Equal(t, 2, parse(t, "CCP(C)c1ccccc1").OpticalIsomers(), "ethylmethylphenylphosphine")
+	assert.Equal(t, 1, parse(t, "CCN(C)CCC").OpticalIsomers(), "amine N inverts")
+	assert.Equal(t, 4, parse(t, "CC(O)CS(C)=O").OpticalIsomers())
 }
 
 func TestCanonicalContext(t *testing.T) {

@@ -93,7 +93,7 @@ var entries = []entry{
 	// Cp column (300–3000 K) to better than 0.01 %.
 	{name: "CH4", smiles: "C", mult: 1, hf298: -74873, s298: 186.251, tLow: 200, tMid: 1000, tHigh: 3500,
 		freqs:  []float64{2917, 1534, 1534, 3019, 3019, 3019, 1306, 1306, 1306},
-		source: "Cp(T): rigid rotor, harmonic oscillator with the fundamentals of Shimanouchi, Tables of Molecular Vibrational Frequencies, NSRDS-NBS 39 (1972), from memory, fitted with nasa.FitPoly; ΔHf°298, S°298: " + srcJANAF},
+		source: "Cp(T): rigid rotor, harmonic oscillator with the fundamentals of Shimanouchi, Tables of Molecular Vibrational Frequencies, NSRDS-NBS 39 (1972), from memory, fitted to NASA-7 by kiln's polynomial fit; ΔHf°298, S°298: " + srcJANAF},
 	{name: "CH3", smiles: "[CH3]", mult: 2, hf298: 146899, s298: 194.008, tLow: 200, tMid: 1000, tHigh: 3500,
 		hi:     [7]float64{2.28571772e+00, 7.23990037e-03, -2.98714348e-06, 5.95684644e-10, -4.67154394e-14, 1.67755843e+04, 8.48007179e+00},
 		lo:     [7]float64{3.67359040e+00, 2.01095175e-03, 5.73021856e-06, -6.87117425e-09, 2.54385734e-12, 1.64449988e+04, 1.60456433e+00},

@@ -19,7 +19,7 @@ package reflib
 //     data set as published (Smith et al., 1999), with ΔHf°298 and S°298 those
 //     the coefficients imply.
 const (
-	srcNASA9 = "McBride, Zehe & Gordon, NASA Glenn coefficients for calculating thermodynamic properties of individual species, NASA/TP-2002-211556 (2002): NASA-9 coefficients and ΔHf°298 as published, Cp refitted to NASA-7 by nasa.FitPoly; S°298 from the NASA-9 coefficients"
+	srcNASA9 = "McBride, Zehe & Gordon, NASA Glenn coefficients for calculating thermodynamic properties of individual species, NASA/TP-2002-211556 (2002): NASA-9 coefficients and ΔHf°298 as published, Cp refitted to NASA-7 by kiln's polynomial fit; S°298 from the NASA-9 coefficients"
 	srcGRI30 = "NASA-7 coefficients of the GRI-Mech 3.0 thermodynamic data set (Smith, Golden, Frenklach, Moriarty, Eiteneer, Goldenberg, Bowman, Hanson, Song, Gardiner, Lissianski, Qin, 1999) as published; ΔHf°298 and S°298 as implied by the coefficients"
 )
 
