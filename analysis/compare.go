@@ -57,9 +57,10 @@ type Comparison struct {
 type CompareSide struct {
 	Path               string
 	Species, Reactions int
-	// Errors is left 0 by Compare, which reads the files without the full
-	// checks: the caller counts them as `kiln check` does (every error of
-	// the file's and its includes' analyses), so that the counts agree.
+	// Errors counts what a comparison finds while reading, without the
+	// full checks (which would estimate every species of both files): the
+	// syntax errors of the file and its includes, unreadable structures and
+	// include errors. `kiln check` reports these and the analysis problems.
 	Errors              int
 	UnreadableStructure []string
 }
@@ -358,6 +359,12 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 
 func (s *compareSide) summary() CompareSide {
 	out := CompareSide{Path: s.a.res.Path, Species: len(s.species), Reactions: len(s.reactions)}
+	out.Errors = countErrors(s.a.res.Diagnostics) // the file's syntax errors and the structure/include errors found here
+	for p, f := range s.a.res.Files {
+		if p != s.a.res.Path {
+			out.Errors += countErrors(f.Diags)
+		}
+	}
 	for _, sp := range s.species {
 		if sp.SMILESError != nil {
 			out.UnreadableStructure = append(out.UnreadableStructure, sp.Name)

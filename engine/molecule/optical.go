@@ -71,7 +71,9 @@ func (m *Molecule) stereoUnit(i int) bool {
 	case "C":
 		return len(m.Adj[i])+a.HCount == 4 && m.allSingle(i)
 	case "S", "Se", "P":
-		return a.HCount == 0 && len(m.Adj[i])+m.stereoLonePairs(i) == 4
+		// One lone pair at most: a sulfide S (two lone pairs) is no unit.
+		lp := m.stereoLonePairs(i)
+		return a.HCount == 0 && lp <= 1 && len(m.Adj[i])+lp == 4
 	}
 	return false
 }
@@ -83,7 +85,7 @@ func (m *Molecule) stereoLonePairs(i int) int {
 	if a.Element == "C" {
 		return 0
 	}
-	if lp, ok := m.hypervalentLonePairs(i); ok {
+	if lp, ok := m.hypervalentLonePairs(i); ok && !m.allSingle(i) {
 		return lp
 	}
 	if a.Element == "P" && m.allSingle(i) && len(m.Adj[i])+a.HCount == 3 && a.Charge == 0 {

@@ -120,6 +120,8 @@ func TestOpticalIsomersMolecule(t *testing.T) {
 	assert.Equal(t, 2, parse(t, "CCP(C)c1ccccc1").OpticalIsomers(), "ethylmethylphenylphosphine")
 	assert.Equal(t, 1, parse(t, "CCN(C)CCC").OpticalIsomers(), "amine N inverts")
 	assert.Equal(t, 4, parse(t, "CC(O)CS(C)=O").OpticalIsomers())
+	assert.Equal(t, 1, parse(t, "CSSC").OpticalIsomers(), "a sulfide S (two lone pairs) is no stereo unit")
+	assert.Equal(t, 1, parse(t, "CCSC").OpticalIsomers())
 }
 
 func TestCanonicalContext(t *testing.T) {
