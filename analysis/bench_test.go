@@ -19,6 +19,8 @@ func benchAnalyze(b *testing.B, n int) {
 	src := mechgen.Generate(mechgen.Options{Seed: 1, Molecules: n})
 	b.SetBytes(int64(len(src)))
 	b.ReportAllocs()
+	cpu0 := cpuTime()
+	defer func() { reportCPU(b, cpu0, b.N) }()
 	for i := 0; i < b.N; i++ {
 		ws := NewWorkspace("", func(string) ([]byte, error) { return nil, fmt.Errorf("no includes") }, DefaultSettings())
 		ws.SetOverlay("gen.kiln", src)
@@ -40,7 +42,10 @@ func BenchmarkTokenise10k(b *testing.B) {
 	src := mechgen.Generate(mechgen.Options{Seed: 1, Molecules: 10000})
 	b.SetBytes(int64(len(src)))
 	b.ReportAllocs()
+	cpu0, n := cpuTime(), 0
+	defer func() { reportCPU(b, cpu0, n) }()
 	for b.Loop() {
+		n++
 		text := bytes.Clone(src)
 		if f := speciesfile.Parse("gen.kiln", text); len(f.Species) < 20000 {
 			b.Fatal("short parse")

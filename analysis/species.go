@@ -262,22 +262,33 @@ func hashKey(s string) uint64 {
 }
 
 // invariant is a cheap fingerprint of a molecular graph that equal graphs
-// share: the sorted list of atom labels after one round of neighbour
-// refinement, where an atom's label is its (element, isotope, charge,
-// radical electrons, H count, aromatic flag) and the refined label adds the
-// sorted (bond order, neighbour label) pairs. Different graphs rarely share
-// it, so canonical forms are needed only when two species do.
+// share: a 128-bit hash of the multiset of atom labels after one round of
+// neighbour refinement, where an atom's label is its (element, isotope,
+// charge, radical electrons, H count, aromatic flag) and the refined label
+// adds the multiset of (bond order, neighbour label) pairs. Equal graphs
+// always share it; different graphs rarely do (a shared fingerprint only
+// costs a comparison of canonical forms), so canonical forms are needed only
+// when two species do. It starts with a zero byte, so it never begins like
+// a resonance key.
 func invariant(m *molecule.Molecule) string {
-	base := make([]string, len(m.Atoms))
+	n := len(m.Atoms)
+	codes := make([]uint64, 2*n)
+	base, refined := codes[:n:n], codes[n:]
 	for i, a := range m.Atoms {
-		ar := "a"
-		if !a.Aromatic {
-			ar = "s"
+		h := uint64(len(a.Element))
+		for k := 0; k < len(a.Element); k++ {
+			h = invMix(h<<8 ^ uint64(a.Element[k]))
 		}
-		base[i] = a.Element + ar + strconv.Itoa(a.Isotope) + "," + strconv.Itoa(a.Charge) + "," + strconv.Itoa(a.Radical) + "," + strconv.Itoa(a.HCount)
+		ar := uint64(0)
+		if a.Aromatic {
+			ar = 1
+		}
+		for _, v := range [...]uint64{ar, uint64(a.Isotope), uint64(a.Charge), uint64(a.Radical), uint64(a.HCount)} {
+			h = invMix(h ^ invMix(v))
+		}
+		base[i] = h
 	}
-	refined := make([]string, len(m.Atoms))
-	var nb []string
+	var nb []uint64
 	for i := range m.Atoms {
 		nb = nb[:0]
 		for _, b := range m.Adj[i] {
@@ -285,13 +296,35 @@ func invariant(m *molecule.Molecule) string {
 			if m.Bonds[b].Aromatic {
 				order = 4 // Kekulé orders differ between spellings of one ring
 			}
-			nb = append(nb, strconv.Itoa(order)+base[m.Other(b, i)])
+			nb = append(nb, invMix(uint64(order)^invMix(base[m.Other(b, i)])))
 		}
-		sort.Strings(nb)
-		refined[i] = base[i] + "(" + strings.Join(nb, " ") + ")"
+		slices.Sort(nb)
+		h := invMix(base[i] ^ uint64(len(nb)))
+		for _, x := range nb {
+			h = invMix(h ^ x)
+		}
+		refined[i] = h
 	}
-	sort.Strings(refined)
-	return strings.Join(refined, ";")
+	slices.Sort(refined)
+	// two independent running hashes of the sorted labels
+	h1, h2 := uint64(n), ^uint64(n)
+	for _, x := range refined {
+		h1 = invMix(h1 ^ x)
+		h2 = invMix(h2 + x*0x9e3779b97f4a7c15)
+	}
+	var key [17]byte
+	for k := 0; k < 8; k++ {
+		key[1+k], key[9+k] = byte(h1>>(8*k)), byte(h2>>(8*k))
+	}
+	return string(key[:])
+}
+
+// invMix is a 64-bit finaliser (splitmix64).
+func invMix(x uint64) uint64 {
+	x += 0x9e3779b97f4a7c15
+	x = (x ^ (x >> 30)) * 0xbf58476d1ce4e5b9
+	x = (x ^ (x >> 27)) * 0x94d049bb133111eb
+	return x ^ (x >> 31)
 }
 
 // parsed is a species declaration's structure, read ahead of the

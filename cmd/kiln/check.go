@@ -2,6 +2,7 @@ package main
 
 import (
 	"fmt"
+	"slices"
 	"sort"
 
 	"kiln.dev/kiln/analysis"
@@ -63,6 +64,7 @@ func runCheck(e env, args []string) (int, error) {
 		if err != nil {
 			return 0, err
 		}
+		out = slices.Grow(out, len(ds))
 		for _, d := range ds {
 			if severityRank(d.Severity) <= minSev {
 				out = append(out, d)

@@ -236,6 +236,17 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 		Species:    []compareSpecies{}, Renames: []compareRename{}, Clashes: []compareClash{},
 		OnlyA: []compareRef{}, OnlyB: []compareRef{}, Reactions: []compareRxn{}, RxnOnlyA: []compareRxnRef{}, RxnOnlyB: []compareRxnRef{},
 	}
+	// Tens of thousands of rows name one of a few files: each display path
+	// (a working-directory look-up) is worked out once.
+	shown := map[string]string{}
+	shownPath := func(path string) string {
+		d, ok := shown[path]
+		if !ok {
+			d = displayPath(path)
+			shown[path] = d
+		}
+		return d
+	}
 	val := func(a, b, scale float64) compareValue { return compareValue{a / scale, b / scale, (b - a) / scale} }
 	pval := func(a, b, scale float64) *compareValue { v := val(a, b, scale); return &v }
 	for _, p := range c.Species {
@@ -266,7 +277,7 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 		out.Clashes = append(out.Clashes, compareClash(n))
 	}
 	ref := func(r analysis.SpeciesRef) compareRef {
-		return compareRef{r.Name, displayPath(r.File), r.Line, optString(r.SMILES)}
+		return compareRef{r.Name, shownPath(r.File), r.Line, optString(r.SMILES)}
 	}
 	for _, r := range c.OnlyA {
 		out.OnlyA = append(out.OnlyA, ref(r))
@@ -286,7 +297,7 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 		out.Reactions = append(out.Reactions, row)
 	}
 	rref := func(r analysis.ReactionRef) compareRxnRef {
-		return compareRxnRef{r.Equation, displayPath(r.File), r.Line}
+		return compareRxnRef{r.Equation, shownPath(r.File), r.Line}
 	}
 	for _, r := range c.ReactionsOnlyA {
 		out.RxnOnlyA = append(out.RxnOnlyA, rref(r))

@@ -14,6 +14,7 @@
 package main
 
 import (
+	"bufio"
 	"errors"
 	"fmt"
 	"io"
@@ -40,7 +41,33 @@ type env struct {
 
 func main() {
 	e := env{stdin: os.Stdin, stdout: os.Stdout, stderr: os.Stderr, now: today}
-	os.Exit(run(e, os.Args[1:]))
+	if len(os.Args) > 1 && os.Args[1] == "serve" {
+		os.Exit(run(e, os.Args[1:]))
+	}
+	// One-shot commands write their reports through a buffer (a check of a
+	// large file prints tens of thousands of lines; one write each was
+	// ~1 s of system time). Anything written to stderr flushes stdout
+	// first, so the two streams keep their order on a terminal.
+	out := bufio.NewWriterSize(os.Stdout, 64<<10)
+	e.stdout, e.stderr = out, flushFirst{out, os.Stderr}
+	code := run(e, os.Args[1:])
+	if err := out.Flush(); err != nil && code == exitOK {
+		fmt.Fprintf(os.Stderr, "kiln: writing output: %v\n", err)
+		code = exitUsage
+	}
+	os.Exit(code)
+}
+
+// flushFirst is a writer (stderr) that flushes a buffered writer (stdout)
+// before each write.
+type flushFirst struct {
+	buf *bufio.Writer
+	w   io.Writer
+}
+
+func (f flushFirst) Write(p []byte) (int, error) {
+	_ = f.buf.Flush() // a failed flush is reported when main flushes at exit
+	return f.w.Write(p)
 }
 
 // usageError is a command-line mistake: reported with a hint to `kiln help`.

@@ -39,6 +39,7 @@ package benson
 
 import (
 	"cmp"
+	"context"
 	"fmt"
 	"math"
 	"slices"
@@ -249,19 +250,9 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	if est.Multiplicity == 0 {
 		est.Multiplicity = unpaired + 1
 	}
-	if est.Multiplicity > 1 {
-		est.Corrections = append(est.Corrections, Term{
-			Name: "spin degeneracy R ln " + strconv.Itoa(est.Multiplicity), Count: 1,
-			S298: R * math.Log(float64(est.Multiplicity)), Source: "statistical mechanics",
-		})
-	}
-	sg := g // σ and n are properties of the species itself
-	if unpaired > 0 {
-		sg = newGraph(m)
-	}
-	var sy *sym
+	var sy *sym // σ and n are properties of the species itself, not of its parent
 	if opts.Symmetry == 0 || opts.OpticalIsomers == 0 {
-		sy = newSym(sg)
+		sy = symmetryOf(context.Background(), m)
 	}
 	est.SymmetryNumber, est.SymmetryExact = opts.Symmetry, strconv.Itoa(opts.Symmetry)
 	lnSigma := math.Log(float64(opts.Symmetry))
@@ -271,12 +262,6 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 		}
 		est.SymmetryNumber, est.SymmetryExact, lnSigma = sy.number(), sy.exact.String(), lnBig(sy.exact)
 	}
-	if lnSigma > 0 {
-		est.Corrections = append(est.Corrections, Term{
-			Name: "symmetry -R ln " + est.SymmetryExact, Count: 1,
-			S298: -R * lnSigma, Source: "statistical mechanics",
-		})
-	}
 	est.OpticalIsomers = opts.OpticalIsomers
 	if est.OpticalIsomers == 0 {
 		n, err := sy.opticalIsomers()
@@ -284,6 +269,26 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 			return nil, err
 		}
 		est.OpticalIsomers = n
+	}
+	// the three terms, in this order, in one allocation
+	k := 0
+	for _, present := range []bool{est.Multiplicity > 1, lnSigma > 0, est.OpticalIsomers > 1} {
+		if present {
+			k++
+		}
+	}
+	est.Corrections = slices.Grow(est.Corrections, k)
+	if est.Multiplicity > 1 {
+		est.Corrections = append(est.Corrections, Term{
+			Name: "spin degeneracy R ln " + strconv.Itoa(est.Multiplicity), Count: 1,
+			S298: R * math.Log(float64(est.Multiplicity)), Source: "statistical mechanics",
+		})
+	}
+	if lnSigma > 0 {
+		est.Corrections = append(est.Corrections, Term{
+			Name: "symmetry -R ln " + est.SymmetryExact, Count: 1,
+			S298: -R * lnSigma, Source: "statistical mechanics",
+		})
 	}
 	if est.OpticalIsomers > 1 {
 		est.Corrections = append(est.Corrections, Term{

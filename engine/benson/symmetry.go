@@ -50,9 +50,6 @@ type sym struct {
 	err   error
 }
 
-// newSym computes σ of the molecule behind g.
-func newSym(g *graph) *sym { return symmetryOf(context.Background(), g.m) }
-
 func symmetryOf(ctx context.Context, m *molecule.Molecule) *sym {
 	s := &sym{m: m}
 	sigma, err := m.SymmetryNumberContext(ctx)

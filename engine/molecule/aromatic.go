@@ -23,10 +23,8 @@ func electronegativity(sym string) float64 {
 	return 2.0
 }
 
-// perceive computes rings, ring systems and aromaticity of a Kekulé graph.
-func (m *Molecule) perceive() { m.perceiveWith(m.ringBondFlags()) }
-
-// perceiveWith is perceive with the ring-bond flags already computed.
+// perceiveWith computes rings, ring systems and aromaticity of a Kekulé
+// graph whose ring bonds are flagged in inRing.
 func (m *Molecule) perceiveWith(inRing []bool) {
 	m.rings, m.cycles = m.findRings(inRing)
 	m.ringSys = ringSystems(len(m.Atoms), m.rings)

@@ -27,6 +27,7 @@ type cgraph struct {
 	ind       []int // scratch of child
 	tbuf      []int // scratch trace for comparisons
 	n         int
+	deg       int // Σ len(nbr[i])
 	nbr       [][]int
 	bt        [][]int
 	cell0     []int // initial partition: rank = start of the atom's colour class
@@ -66,7 +67,7 @@ func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []in
 		}
 	}
 	lists := make([][]int, 2*n)
-	g := &cgraph{n: n, nbr: lists[:n:n], bt: lists[n:]}
+	g := &cgraph{n: n, deg: deg, nbr: lists[:n:n], bt: lists[n:]}
 	ints := make([]int, 2*deg+2*n)
 	nb, bt := ints[:0:deg], ints[deg:deg:2*deg]
 	for k, i := range atoms {
@@ -80,7 +81,10 @@ func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []in
 		}
 		g.nbr[k], g.bt[k] = nb[s:len(nb):len(nb)], bt[s:len(bt):len(bt)]
 	}
-	keys := make([][8]int, n)
+	// Every key field is small (element number, mass number of at most
+	// three digits, charge, hydrogens, radical electrons, flags, degree,
+	// an extra colour numbered below the atom count): int32 keeps the order.
+	keys := make([][8]int32, n)
 	idx := ints[2*deg : 2*deg+n : 2*deg+n]
 	for k := range idx {
 		a := m.Atoms[atoms[k]]
@@ -93,7 +97,7 @@ func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []in
 		if extra != nil {
 			x = extra[atoms[k]]
 		}
-		keys[k] = [8]int{e.Z, a.Isotope, a.Charge, a.HCount, a.Radical, ar, len(m.Adj[atoms[k]]), x}
+		keys[k] = [8]int32{int32(e.Z), int32(a.Isotope), int32(a.Charge), int32(a.HCount), int32(a.Radical), int32(ar), int32(len(m.Adj[atoms[k]])), int32(x)}
 		idx[k] = k
 	}
 	slices.SortFunc(idx, func(x, y int) int { return slices.Compare(keys[x][:], keys[y][:]) })
@@ -278,11 +282,7 @@ func targetCell(rank []int) []int {
 // bond code) list of a member. For a discrete partition it is the labelled
 // graph itself (the certificate).
 func (g *cgraph) trace(rank []int) []int {
-	deg := 0
-	for _, nb := range g.nbr {
-		deg += len(nb)
-	}
-	return g.traceInto(rank, make([]int, 0, 3*g.n+deg))
+	return g.traceInto(rank, make([]int, 0, 3*g.n+g.deg))
 }
 
 // traceInto appends the trace of rank to dst[:0] (see trace).
@@ -303,6 +303,9 @@ func (g *cgraph) traceInto(rank []int, dst []int) []int {
 		size[r]++
 	}
 	out := dst[:0]
+	if cap(out) < 3*n+g.deg {
+		out = make([]int, 0, 3*n+g.deg) // a trace is at most this long
+	}
 	for r := 0; r < n; r++ {
 		if rep[r] < 0 {
 			continue
@@ -827,7 +830,8 @@ func (m *Molecule) SymmetryClasses() []int {
 }
 
 func orbitClasses(n int, gens [][]int, labels []int) []int {
-	parent := make([]int, n)
+	scratch := make([]int, 3*n)
+	parent, byLabel, num := scratch[:n:n], scratch[n:2*n:2*n], scratch[2*n:]
 	for i := range parent {
 		parent[i] = i
 	}
@@ -838,11 +842,9 @@ func orbitClasses(n int, gens [][]int, labels []int) []int {
 	}
 	// byLabel[l] is the atom with canonical label l; walking labels upwards
 	// meets each orbit first at its smallest label.
-	byLabel := make([]int, n)
 	for a, l := range labels {
 		byLabel[l] = a
 	}
-	num := make([]int, n)
 	for i := range num {
 		num[i] = -1
 	}

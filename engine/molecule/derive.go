@@ -88,8 +88,11 @@ func (m *Molecule) WithBondOrders(orders map[int]int, radicals map[int]int) (*Mo
 func (m *Molecule) derive(atoms []Atom, bonds []Bond) *Molecule {
 	d := &Molecule{Atoms: atoms, Bonds: bonds, Adj: m.Adj, SMILES: m.SMILES,
 		nbrOrder: m.nbrOrder, rings: m.rings, cycles: m.cycles, ringSys: m.ringSys}
-	d.perceiveAromaticity(d.ringBondFlags())
+	// The connectivity is m's: so are the ring bonds.
+	inRing := m.ringBondFlags()
+	d.perceiveAromaticity(inRing)
 	d.derived = newDerived(d)
+	d.derived.inRing = inRing
 	return d
 }
 

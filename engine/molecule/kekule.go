@@ -379,7 +379,15 @@ func (p *parser) build() *Molecule {
 	// Adj lists share one backing array (capacity-limited, so an append by a
 	// caller cannot run into the next atom's list).
 	na := len(m.Atoms)
-	lists := make([][]int, 2*na)
+	chiral := false // nbrOrder is kept only when some atom has a mark
+	for _, a := range m.Atoms {
+		chiral = chiral || a.Chirality != ""
+	}
+	nl := na
+	if chiral {
+		nl = 2 * na
+	}
+	lists := make([][]int, nl)
 	m.Adj = lists[:na:na]
 	cnt := scratch[3*n : 3*n+na+1]
 	for _, b := range m.Bonds {
@@ -396,6 +404,9 @@ func (p *parser) build() *Molecule {
 	for k, b := range m.Bonds {
 		m.Adj[b.A] = append(m.Adj[b.A], k)
 		m.Adj[b.B] = append(m.Adj[b.B], k)
+	}
+	if !chiral {
+		return m
 	}
 	m.nbrOrder = lists[na:]
 	for i := range p.atoms {

@@ -72,7 +72,8 @@ type Molecule struct {
 	SMILES string
 
 	// nbrOrder[i], for atoms written with chirality, lists the neighbours in
-	// written order with -1 for a hydrogen (OpenSMILES chirality reference).
+	// written order with -1 for a hydrogen (OpenSMILES chirality reference);
+	// nil when no atom has a chirality mark.
 	nbrOrder [][]int
 	// rings is the SSSR (atom indices in ring order); cycles the relevant
 	// cycles used for aromaticity; ringSys the fused/bridged ring systems.
@@ -96,10 +97,16 @@ type derived struct {
 	bonds  *Bond
 	nbonds int
 
+	inRing []bool // ringBondFlags, set when the molecule is built
+
 	once    sync.Once
 	info    symmetryInfo // symmetry(DefaultSearchWork, true)
-	canon   string
-	classes []int
+	classes []int        // orbitClasses of info
+
+	// The canonical string is written only when asked for: estimates
+	// need the symmetry, not the text.
+	canonOnce sync.Once
+	canon     string
 
 	stereoOnce  sync.Once
 	canonStereo string
@@ -126,10 +133,16 @@ func (m *Molecule) cache() *derived {
 	}
 	d.once.Do(func() {
 		d.info = m.symmetry(DefaultSearchWork, true)
-		d.canon = m.writeSMILES(d.info.labels, false)
 		d.classes = orbitClasses(len(m.Atoms), d.info.gens, d.info.labels)
 	})
 	return d
+}
+
+// canonical returns the canonical string of m from its cache d (see
+// Canonical), written on first use.
+func (m *Molecule) canonical(d *derived) string {
+	d.canonOnce.Do(func() { d.canon = m.writeSMILES(d.info.labels, false) })
+	return d.canon
 }
 
 // Other returns the atom at the other end of bond b from atom i.

@@ -504,13 +504,16 @@ func (m *Molecule) dropAlikeBranches(ctx context.Context, cand []bool) error {
 	if err != nil {
 		return fmt.Errorf("optical isomers: %w", err)
 	}
-	classes := orbitClasses(len(m.Atoms), info.gens, info.labels)
+	classes := m.classesOf(info, DefaultSearchWork)
 	inRing := m.ringBondFlags()
 	// hasUnit reports whether the branch entered from x through y holds a
 	// candidate unit (acyclic branches only: the bond x–y is on no ring).
+	seen := make([]bool, len(m.Atoms))
+	var stack []int
 	hasUnit := func(x, y int) bool {
-		seen := map[int]bool{x: true, y: true}
-		stack := []int{y}
+		clear(seen)
+		seen[x], seen[y] = true, true
+		stack = append(stack[:0], y)
 		for len(stack) > 0 {
 			a := stack[len(stack)-1]
 			stack = stack[:len(stack)-1]

@@ -10,12 +10,23 @@ import (
 const maxRelevantCycles = 2000
 
 // ringBondFlags marks the bonds that lie on a cycle (bonds that are not
-// bridges of the graph), found with Tarjan's low-link DFS (iterative).
+// bridges of the graph). The flags of a molecule made by ParseSMILES or a
+// constructor are computed once and shared: callers must not modify them.
 func (m *Molecule) ringBondFlags() []bool {
+	if d := m.derived; d != nil && d.inRing != nil && d.atoms == first(m.Atoms) && d.natoms == len(m.Atoms) &&
+		d.bonds == first(m.Bonds) && d.nbonds == len(m.Bonds) {
+		return d.inRing
+	}
+	return m.computeRingBondFlags()
+}
+
+// computeRingBondFlags finds the ring bonds with Tarjan's low-link DFS
+// (iterative).
+func (m *Molecule) computeRingBondFlags() []bool {
 	n := len(m.Atoms)
 	inRing := make([]bool, len(m.Bonds))
-	disc := make([]int, n)
-	low := make([]int, n)
+	ints := make([]int, 2*n)
+	disc, low := ints[:n:n], ints[n:]
 	for i := range disc {
 		disc[i] = -1
 	}

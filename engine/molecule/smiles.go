@@ -93,17 +93,30 @@ func ParseSMILES(s string) (*Molecule, error) {
 		return nil, err
 	}
 	m := p.build()
-	m.perceive()
+	inRing := m.computeRingBondFlags()
+	m.perceiveWith(inRing)
 	m.derived = newDerived(m)
+	m.derived.inRing = inRing
 	return m, nil
 }
 
-// newParser sizes the parser's per-atom and per-bond slices from an upper
-// bound of the atom count (letters in s), so reading does not regrow them.
+// newParser sizes the parser's per-atom and per-bond slices from the atom
+// count of a valid s (bracket atoms, organic-subset atoms and '*' outside
+// brackets), so reading a valid SMILES does not regrow them and the atoms
+// the molecule keeps have no unused capacity; an invalid s may need more,
+// which append handles.
 func newParser(s string) *parser {
 	n := 0
+	inBracket := false
 	for i := 0; i < len(s); i++ {
-		if c := s[i] | 0x20; c >= 'a' && c <= 'z' {
+		switch c := s[i]; {
+		case c == '[':
+			inBracket = true
+			n++
+		case c == ']':
+			inBracket = false
+		case inBracket:
+		case c >= 'A' && c <= 'Z', c == '*', c == 'b', c == 'c', c == 'n', c == 'o', c == 'p', c == 's':
 			n++
 		}
 	}

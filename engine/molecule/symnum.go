@@ -5,6 +5,7 @@ import (
 	"errors"
 	"fmt"
 	"math/big"
+	"math/bits"
 	"slices"
 	"strconv"
 	"strings"
@@ -124,7 +125,7 @@ func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, er
 	if err != nil {
 		return nil, err
 	}
-	classes := orbitClasses(len(m.Atoms), info.gens, info.labels)
+	classes := m.classesOf(info, budget)
 	sc := newSigmaCalc(ctx, m, classes)
 	sc.hybrid = hybrid
 	sc.budget = budget
@@ -149,6 +150,16 @@ func (m *Molecule) symmetryInfo(ctx context.Context, budget int) (symmetryInfo, 
 		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, budget)
 	}
 	return info, nil
+}
+
+// classesOf returns the orbit classes of info, which symmetryInfo returned
+// for m and budget: the cached ones when info came from the cache (shared:
+// callers must not modify them).
+func (m *Molecule) classesOf(info symmetryInfo, budget int) []int {
+	if d := m.cache(); d != nil && budget == DefaultSearchWork {
+		return d.classes
+	}
+	return orbitClasses(len(m.Atoms), info.gens, info.labels)
 }
 
 // Ligand colours of the outside positions of a fragment atom.
@@ -178,17 +189,20 @@ type sigmaCalc struct {
 	elems   [][]int // its elements, enumerated on demand (at most 5001)
 	marked  []int   // atoms with a written tetrahedral mark, nil until known
 	hybrid  []bool  // per atom: in a conjugated radical (or cation) system, nil if none
+	outBuf  []int   // the list outside returns, reused
 	// parent bond of the fragment being analysed
 	pAtom, pNbr int
 }
 
 func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 	n := len(m.Atoms)
-	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: make([]int, n), lp: make([]int, n), virtual: make([]bool, n)}
+	scratch := make([]int, 3*n)
+	flags := make([]bool, n+len(m.Bonds))
+	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: scratch[:n:n], lp: scratch[n : 2*n : 2*n], virtual: flags[:n:n]}
 	inRing := m.ringBondFlags()
 	sc.inRing = inRing
-	sc.rot = make([]bool, len(m.Bonds))
-	parent := make([]int, n)
+	sc.rot = flags[n:]
+	parent := scratch[2*n:]
 	for i := range parent {
 		parent[i] = i
 	}
@@ -198,17 +212,32 @@ func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 			union(parent, bd.A, bd.B)
 		}
 	}
-	sc.frag = make([]int, n)
-	id := map[int]int{}
+	// Fragments are numbered in order of their first atom; each lists its
+	// atoms ascending, all lists in one array.
+	ints := make([]int, 3*n)
+	id, members := ints[n:2*n:2*n], ints[2*n:]
+	sc.frag = ints[:n:n]
+	for i := range id {
+		id[i] = -1
+	}
+	var sizes []int
 	for i := 0; i < n; i++ {
 		r := find(parent, i)
-		f, ok := id[r]
-		if !ok {
-			f = len(sc.frags)
-			id[r] = f
-			sc.frags = append(sc.frags, nil)
+		if id[r] < 0 {
+			id[r] = len(sizes)
+			sizes = append(sizes, 0)
 		}
-		sc.frag[i] = f
+		sc.frag[i] = id[r]
+		sizes[id[r]]++
+	}
+	sc.frags = make([][]int, len(sizes))
+	start := 0
+	for f, k := range sizes {
+		sc.frags[f] = members[start : start : start+k]
+		start += k
+	}
+	for i := 0; i < n; i++ {
+		f := sc.frag[i]
 		sc.frags[f] = append(sc.frags[f], i)
 	}
 	for i := range m.Atoms {
@@ -309,18 +338,25 @@ func (sc *sigmaCalc) tetrahedral(i int) bool {
 func (sc *sigmaCalc) total() (*big.Int, error) {
 	m := sc.m
 	comps := m.components()
-	sigma := big.NewInt(1)
+	sigma := oneProd()
+	if len(comps) == 1 {
+		s, err := sc.component(comps[0])
+		if err != nil {
+			return nil, err
+		}
+		return s.int(), nil
+	}
 	// Identical components share orbit classes (the search joins them), and
 	// different ones share none: k copies multiply σ by k!.
 	copies := map[int]int{}
-	known := map[int]*big.Int{} // σ of a component, by its key
+	known := map[int]prod{} // σ of a component, by its key
 	for _, atoms := range comps {
 		key := sc.classes[atoms[0]]
 		for _, a := range atoms {
 			key = min(key, sc.classes[a])
 		}
 		copies[key]++
-		sigma.Mul(sigma, big.NewInt(int64(copies[key])))
+		sigma.mulUint(uint64(copies[key]))
 		s, ok := known[key]
 		if !ok {
 			var err error
@@ -329,17 +365,19 @@ func (sc *sigmaCalc) total() (*big.Int, error) {
 			}
 			known[key] = s
 		}
-		sigma.Mul(sigma, s)
+		sigma.mul(s)
 	}
-	return sigma, nil
+	return sigma.int(), nil
 }
 
 // component is σ of one connected component (atoms ascending).
-func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
+func (sc *sigmaCalc) component(atoms []int) (prod, error) {
 	m := sc.m
-	// fragment tree of this component
+	nf := len(sc.frags)
+	// fragment tree of this component; per-fragment state in slices indexed
+	// by fragment (seen, degree, removed, visited)
 	var fr []int
-	seen := map[int]bool{}
+	seen := make([]bool, nf)
 	for _, a := range atoms {
 		if f := sc.frag[a]; !seen[f] {
 			seen[f] = true
@@ -347,23 +385,37 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 		}
 	}
 	type edge struct{ b, other int }
-	adj := map[int][]edge{}
-	for _, a := range atoms {
-		for _, b := range m.Adj[a] {
-			if sc.rot[b] && m.Bonds[b].A == a {
-				fa, fb := sc.frag[m.Bonds[b].A], sc.frag[m.Bonds[b].B]
-				adj[fa] = append(adj[fa], edge{b, fb})
-				adj[fb] = append(adj[fb], edge{b, fa})
+	// adjacency of the fragment tree: adj[f] lists f's rotatable bonds in
+	// atom order, all lists in one array (counted first)
+	deg := make([]int, nf)
+	rotBonds := func(visit func(fa, fb, b int)) {
+		for _, a := range atoms {
+			for _, b := range m.Adj[a] {
+				if sc.rot[b] && m.Bonds[b].A == a {
+					visit(sc.frag[m.Bonds[b].A], sc.frag[m.Bonds[b].B], b)
+				}
 			}
 		}
 	}
-	// centre by peeling leaves
-	deg := map[int]int{}
+	rotBonds(func(fa, fb, _ int) { deg[fa]++; deg[fb]++ })
+	adj := make([][]edge, nf)
+	total := 0
 	for _, f := range fr {
-		deg[f] = len(adj[f])
+		total += deg[f]
 	}
+	if total > 0 {
+		edges := make([]edge, total)
+		for _, f := range fr {
+			adj[f], edges = edges[:0:deg[f]], edges[deg[f]:]
+		}
+	}
+	rotBonds(func(fa, fb, b int) {
+		adj[fa] = append(adj[fa], edge{b, fb})
+		adj[fb] = append(adj[fb], edge{b, fa})
+	})
+	// centre by peeling leaves (deg holds len(adj[f]))
 	left := len(fr)
-	removed := map[int]bool{}
+	removed := make([]bool, nf)
 	var layer []int
 	for _, f := range fr {
 		if deg[f] <= 1 {
@@ -392,10 +444,11 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 			centre = append(centre, f)
 		}
 	}
-	sigma := big.NewInt(1)
+	sigma := oneProd()
 	type item struct{ f, pAtom, pNbr int }
-	var queue []item
-	visited := map[int]bool{}
+	queue := make([]item, 0, len(fr)) // every fragment is queued once
+	visited := seen                   // reused: every fragment of the component is seen
+	clear(visited)
 	if len(centre) == 1 {
 		queue = append(queue, item{centre[0], -1, -1})
 		visited[centre[0]] = true
@@ -409,7 +462,7 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 		}
 		u, v := m.Bonds[cb].A, m.Bonds[cb].B
 		if sc.classes[u] == sc.classes[v] && sc.swapKeepsMarks(u, v) {
-			sigma.SetInt64(2)
+			sigma = prod{small: 2}
 		}
 		queue = append(queue, item{sc.frag[u], u, v}, item{sc.frag[v], v, u})
 		visited[sc.frag[u]], visited[sc.frag[v]] = true, true
@@ -418,9 +471,9 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 		it := queue[k]
 		s, err := sc.fragment(it.f, it.pAtom, it.pNbr)
 		if err != nil {
-			return nil, err
+			return prod{}, err
 		}
-		sigma.Mul(sigma, s)
+		sigma.mul(s)
 		for _, a := range sc.frags[it.f] {
 			for _, b := range m.Adj[a] {
 				if !sc.rot[b] {
@@ -441,9 +494,12 @@ func (sc *sigmaCalc) component(atoms []int) (*big.Int, error) {
 // current fragment: rotatable-bond neighbours, hydrogens and (for
 // tetrahedral atoms) lone pairs. Branch colours are orbit classes, refined
 // by the partition with atom i singled out when two branches share a class.
+//
+// The list is valid until the next call (it reuses one buffer): every
+// caller reads it at once.
 func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 	m := sc.m
-	var out []int
+	out := sc.outBuf[:0]
 	var ranks []int
 	for _, b := range m.Adj[i] {
 		if !sc.rot[b] {
@@ -465,6 +521,7 @@ func (sc *sigmaCalc) outside(i int, withLP bool) []int {
 		}
 	}
 	slices.Sort(out)
+	sc.outBuf = out[:0]
 	return out
 }
 
@@ -488,6 +545,84 @@ func (sc *sigmaCalc) branchColour(i, v int, ranks *[]int) int {
 		c += (*ranks)[v] + 1
 	}
 	return c
+}
+
+// factorials holds k! for k ≤ 20 (the largest that fits in a uint64).
+var factorials = func() (f [21]uint64) {
+	f[0] = 1
+	for k := 1; k < len(f); k++ {
+		f[k] = f[k-1] * uint64(k)
+	}
+	return f
+}()
+
+// prod is a non-negative integer product of symmetry factors: a uint64
+// while it fits (nearly always), exact as a big.Int beyond.
+type prod struct {
+	small uint64   // the value when big is nil
+	big   *big.Int // the value once it exceeds the uint64 range
+}
+
+func oneProd() prod { return prod{small: 1} }
+
+// mulUint multiplies p by k.
+func (p *prod) mulUint(k uint64) {
+	if p.big == nil {
+		if hi, lo := bits.Mul64(p.small, k); hi == 0 {
+			p.small = lo
+			return
+		}
+		p.big = new(big.Int).SetUint64(p.small)
+	}
+	p.big.Mul(p.big, new(big.Int).SetUint64(k))
+}
+
+// mul multiplies p by q.
+func (p *prod) mul(q prod) {
+	if q.big == nil {
+		p.mulUint(q.small)
+		return
+	}
+	if p.big == nil {
+		p.big = new(big.Int).SetUint64(p.small)
+	}
+	p.big.Mul(p.big, q.big)
+}
+
+// mulFactorial multiplies p by k!.
+func (p *prod) mulFactorial(k int) {
+	if k < len(factorials) {
+		p.mulUint(factorials[k])
+		return
+	}
+	if p.big == nil {
+		p.big = new(big.Int).SetUint64(p.small)
+	}
+	p.big.Mul(p.big, new(big.Int).MulRange(1, int64(k)))
+}
+
+// halve divides p by 2, rounding down.
+func (p *prod) halve() {
+	if p.big == nil {
+		p.small >>= 1
+		return
+	}
+	p.big.Rsh(p.big, 1)
+}
+
+func (p prod) isZero() bool {
+	if p.big == nil {
+		return p.small == 0
+	}
+	return p.big.Sign() == 0
+}
+
+// int returns p as a new big.Int.
+func (p prod) int() *big.Int {
+	if p.big == nil {
+		return new(big.Int).SetUint64(p.small)
+	}
+	return new(big.Int).Set(p.big)
 }
 
 // positionCode is the position code (see centrePositions) of neighbour v of
@@ -598,14 +733,14 @@ type unit struct {
 
 // fragment returns the number of proper operations of fragment f (a top
 // rotating about the bond pAtom–pNbr when pAtom ≥ 0) times its static factor.
-func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
+func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (prod, error) {
 	if err := sc.ctx.Err(); err != nil {
-		return nil, fmt.Errorf("symmetry number: %w", err)
+		return prod{}, fmt.Errorf("symmetry number: %w", err)
 	}
 	m := sc.m
 	sc.pAtom, sc.pNbr = pAtom, pNbr
 	atoms := sc.frags[f]
-	static := big.NewInt(1)
+	static := oneProd()
 	halves := 0 // factors of 2 to divide out of static
 	// A cage (every atom with three or more fragment neighbours, three or
 	// more rings) is three-dimensional even where its atoms are sp2.
@@ -631,7 +766,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 			}
 			if e-k > 1 {
 				dup = true
-				static.Mul(static, new(big.Int).MulRange(1, int64(e-k)))
+				static.mulFactorial(e - k)
 			}
 			k = e
 		}
@@ -716,10 +851,10 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 	}
 	for ; halves > 0; halves-- {
-		static.Rsh(static, 1)
+		static.halve()
 	}
-	if static.Sign() == 0 {
-		static.SetInt64(1)
+	if static.isZero() {
+		static = oneProd()
 	}
 	if len(atoms) == 1 {
 		return static, nil // one atom: only the identity (a checked centre passes)
@@ -760,32 +895,33 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 	root := g.refine(g.cell0)
 	s := &search{g: g, budget: sc.budget, root: root, ctx: sc.ctx}
 	defer func() { sc.budget -= s.steps }()
-	order := big.NewInt(1)
+	order := oneProd()
 	var labels []int
 	seenBuf := make([]bool, len(atoms))
 	if !discrete(root, seenBuf) {
 		sizes, exact := s.automorphisms()
 		if !exact {
-			return nil, sc.limitErr()
+			return prod{}, sc.limitErr()
 		}
 		for _, k := range sizes {
-			order.Mul(order, big.NewInt(int64(k)))
+			order.mulUint(uint64(k))
 		}
 	}
 	chair := sc.chairRing(atoms)
 	if len(units) == 0 && chair == nil {
-		return order.Mul(order, static), nil
+		order.mul(static)
+		return order, nil
 	}
-	if order.Cmp(big.NewInt(maxFragmentGroup)) > 0 {
-		return nil, fmt.Errorf("symmetry number of %q: %w (a rigid fragment of %d atoms has %s symmetry elements, more than %d)",
-			m.SMILES, ErrWorkLimit, len(atoms), order, maxFragmentGroup)
+	if order.big != nil || order.small > maxFragmentGroup {
+		return prod{}, fmt.Errorf("symmetry number of %q: %w (a rigid fragment of %d atoms has %s symmetry elements, more than %d)",
+			m.SMILES, ErrWorkLimit, len(atoms), order.int(), maxFragmentGroup)
 	}
-	if order.Int64() == 1 {
+	if order.small == 1 {
 		return static, nil
 	}
 	labels = s.canonical()
 	if s.exhausted || labels == nil {
-		return nil, sc.limitErr()
+		return prod{}, sc.limitErr()
 	}
 	elems := groupElements(s.gens, maxFragmentGroup+1)
 	// canonical order: each element as a permutation of canonical labels
@@ -890,7 +1026,8 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (*big.Int, error) {
 		}
 		best = max(best, count)
 	}
-	return static.Mul(static, big.NewInt(int64(max(best, 1)))), nil
+	static.mulUint(uint64(max(best, 1)))
+	return static, nil
 }
 
 func (sc *sigmaCalc) limitErr() error {

@@ -37,7 +37,7 @@ func (m *Molecule) Canonical() string {
 		return ""
 	}
 	if d := m.cache(); d != nil {
-		return d.canon
+		return m.canonical(d)
 	}
 	info := m.symmetry(DefaultSearchWork, false)
 	return m.writeSMILES(info.labels, false)
@@ -56,7 +56,7 @@ func (m *Molecule) CanonicalContext(ctx context.Context) (string, error) {
 		if !d.info.exact {
 			return "", fmt.Errorf("canonical form of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, DefaultSearchWork)
 		}
-		return d.canon, nil
+		return m.canonical(d), nil
 	}
 	info := m.symmetryCtx(ctx, DefaultSearchWork, false)
 	if err := ctx.Err(); err != nil {
