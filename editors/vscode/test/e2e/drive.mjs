@@ -64,16 +64,32 @@ await check('inlay hints: estimated ΔHf at the end of the ethane line', async (
 });
 
 await check('hover on a species name shows thermochemistry', async () => {
-  const word = lineWith('species ethanol').locator('span', { hasText: 'ethanol' }).last();
-  const bb = await word.boundingBox();
-  await page.mouse.move(bb.x + bb.width / 2 + 30, bb.y + bb.height / 2);
-  await page.mouse.move(bb.x + bb.width / 2, bb.y + bb.height / 2);
-  await page.waitForFunction(
-    () => [...document.querySelectorAll('.monaco-hover:not(.hidden)')].some((h) => h.textContent.includes('ΔHf°298')
-      && h.textContent.includes('46.07 g/mol')),
-    null,
-    { timeout: 30000 },
-  );
+  // The code lens above the first species line and the inlay hints can
+  // arrive after the word's box is measured and move the line; each try
+  // measures it afresh (a layout shift, not a missing hover, is retried).
+  let lastErr;
+  for (let attempt = 0; attempt < 4; attempt++) {
+    const word = lineWith('species ethanol').locator('span', { hasText: 'ethanol' }).last();
+    const bb = await word.boundingBox();
+    await page.mouse.move(5, 5);
+    await page.mouse.move(bb.x + bb.width / 2 + 30, bb.y + bb.height / 2);
+    await page.mouse.move(bb.x + bb.width / 2, bb.y + bb.height / 2);
+    try {
+      await page.waitForFunction(
+        () => [...document.querySelectorAll('.monaco-hover:not(.hidden)')].some((h) => h.textContent.includes('ΔHf°298')
+          && h.textContent.includes('46.07 g/mol')),
+        null,
+        { timeout: 15000 },
+      );
+      lastErr = undefined;
+      break;
+    } catch (err) {
+      lastErr = err;
+    }
+  }
+  if (lastErr) {
+    throw lastErr;
+  }
   await page.screenshot({ path: `${shots}/hover.png` });
   await page.mouse.move(5, 5);
   await page.keyboard.press('Escape');
