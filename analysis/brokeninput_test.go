@@ -173,3 +173,22 @@ species hyd [H][H]
 	assert.Contains(t, msgs[0], "lump: Cp at 300 K is 1.00 cal/(mol·K), below 7.95 cal/(mol·K)")
 	assert.Contains(t, msgs[1], "CH4: Cp at 300 K is 0.20 cal/(mol·K)")
 }
+
+// TestRateOutOfRange: rates shown at a pressure outside a reaction's
+// pressure table say that the edge row is used (no extrapolation); inside
+// the table, nothing is said.
+func TestRateOutOfRange(t *testing.T) {
+	const text = `species CH3 [CH3]
+species C2H6 CC
+reaction C2H6 <=> CH3 + CH3   A=1e16 n=0 Ea=88
+  pressure 0.1atm A=1e15 n=0 Ea=88
+  pressure 1atm A=5e15 n=0 Ea=88
+  pressure 10atm A=1e16 n=0 Ea=88
+`
+	set := DefaultSettings()
+	set.Pressure = 1013.25 // 0.01 atm
+	msgs := messagesWithCode(analyseWith(t, text, set), speciesfile.CodeRateOutOfRange)
+	require.Len(t, msgs, 1)
+	assert.Contains(t, msgs[0], "the rate at 0.101325 bar is used there")
+	assert.Empty(t, messagesWithCode(analyzeText(t, text), speciesfile.CodeRateOutOfRange))
+}

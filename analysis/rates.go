@@ -185,6 +185,20 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 	r.model = m
 	r.ForwardOrder, r.ReverseOrder = m.fwdOrder, m.revOrder
 	P := a.set.pressure()
+	if len(m.table) > 0 {
+		lo, hi := m.table[0].P, m.table[0].P
+		for _, row := range m.table {
+			lo, hi = math.Min(lo, row.P), math.Max(hi, row.P)
+		}
+		if P < lo*(1-1e-9) || P > hi*(1+1e-9) {
+			edge := lo
+			if P > hi {
+				edge = hi
+			}
+			r.diags = append(r.diags, speciesfile.Diagnostic{Span: d.Pressures[0].P.Tok.Span, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeRateOutOfRange,
+				Message: fmt.Sprintf("rates are shown at %g bar, outside this table's pressures (%g–%g bar): the rate at %g bar is used there (no extrapolation)", P/1e5, lo/1e5, hi/1e5, edge/1e5)})
+		}
+	}
 	if v := m.forward(1000, P); finite(v) {
 		r.ForwardRate1000 = &v
 	}

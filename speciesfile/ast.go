@@ -70,6 +70,7 @@ const (
 	CodeGroupOverride       = "group-override"
 	CodeNonphysicalRate     = "nonphysical-rate"
 	CodeCompositionMismatch = "composition-mismatch"
+	CodeRateOutOfRange      = "rate-out-of-range"
 )
 
 // Codes lists every diagnostic code, in FORMAT.md's order: the one list
@@ -77,7 +78,8 @@ const (
 var Codes = []string{CodeSyntax, CodeUndeclaredSpecies, CodeDuplicateSpecies, CodeBadSMILES, CodeUnbalancedReaction,
 	CodeMissingGroup, CodeMissingThermo, CodeThermoDiscontinuity, CodeThermoMismatch, CodeNonphysicalThermo,
 	CodeNoRate, CodeCollisionLimit, CodeDuplicateReaction, CodeBadInclude, CodeDuplicateGroup, CodeThermoOutOfRange,
-	CodeGroupOverride, CodeNonphysicalRate, CodeCompositionMismatch}
+	CodeGroupOverride, CodeNonphysicalRate, CodeCompositionMismatch,
+	CodeRateOutOfRange}
 
 // Related points at another place (possibly in another file) that explains a
 // diagnostic, e.g. the first declaration of a duplicated species.
