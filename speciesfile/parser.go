@@ -263,42 +263,11 @@ func (p *parser) run() {
 	extentStart := 0
 	var last Stmt
 	for {
-		var l srcLine
-		if p.hasPending {
-			l, p.hasPending = p.pending, false
-		} else {
-			var ok bool
-			if l, ok = p.readLine(); !ok {
-				break
-			}
+		st, next, ok := p.nextStatement(extentStart)
+		if !ok {
+			break
 		}
-		if l.kind == lineBlank || l.kind == lineComment {
-			continue
-		}
-		// l starts a statement (or is a stray indented line). Gather its
-		// continuation lines up to the next column-0 line.
-		p.body = p.body[:0]
-		lastOwn := l
-		for {
-			m, ok := p.readLine()
-			if !ok {
-				break
-			}
-			if m.kind == lineStmt {
-				p.pending, p.hasPending = m, true
-				break
-			}
-			if m.kind == lineCont {
-				p.body = append(p.body, m)
-				lastOwn = m
-			}
-		}
-		base := StmtBase{
-			Extent:   Span{extentStart, lastOwn.next},
-			BodySpan: Span{l.text, lastOwn.end},
-		}
-		extentStart = lastOwn.next
-		st := p.statement(l, base)
+		extentStart = next
 		f.Stmts = append(f.Stmts, st)
 		last = st
 	}
@@ -1742,4 +1711,44 @@ func Parse(name string, src []byte) *File {
 	p := newParser(name, src)
 	p.run()
 	return p.f
+}
+
+// nextStatement reads the next statement, skipping blank and comment lines:
+// its first line (or a stray indented line) and its continuation lines up
+// to the next column-0 line, which is kept pending. Its extent starts at
+// extentStart; next is where the following statement's extent starts. ok is
+// false at the end of the text.
+func (p *parser) nextStatement(extentStart int) (st Stmt, next int, ok bool) {
+	for {
+		var l srcLine
+		if p.hasPending {
+			l, p.hasPending = p.pending, false
+		} else if l, ok = p.readLine(); !ok {
+			return nil, extentStart, false
+		}
+		if l.kind == lineBlank || l.kind == lineComment {
+			continue
+		}
+		p.body = p.body[:0]
+		lastOwn := l
+		for {
+			m, more := p.readLine()
+			if !more {
+				break
+			}
+			if m.kind == lineStmt {
+				p.pending, p.hasPending = m, true
+				break
+			}
+			if m.kind == lineCont {
+				p.body = append(p.body, m)
+				lastOwn = m
+			}
+		}
+		base := StmtBase{
+			Extent:   Span{extentStart, lastOwn.next},
+			BodySpan: Span{l.text, lastOwn.end},
+		}
+		return p.statement(l, base), lastOwn.next, true
+	}
 }

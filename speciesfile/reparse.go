@@ -216,40 +216,11 @@ func (p *parser) readStmts(start int, stop func(end int) (int, bool)) (int, bool
 	var last Stmt
 	for {
 		iter := len(f.Diags)
-		var l srcLine
-		if p.hasPending {
-			l, p.hasPending = p.pending, false
-		} else {
-			var ok bool
-			if l, ok = p.readLine(); !ok {
-				break
-			}
+		st, next, ok := p.nextStatement(extentStart)
+		if !ok {
+			break
 		}
-		if l.kind == lineBlank || l.kind == lineComment {
-			continue
-		}
-		p.body = p.body[:0]
-		lastOwn := l
-		for {
-			m, ok := p.readLine()
-			if !ok {
-				break
-			}
-			if m.kind == lineStmt {
-				p.pending, p.hasPending = m, true
-				break
-			}
-			if m.kind == lineCont {
-				p.body = append(p.body, m)
-				lastOwn = m
-			}
-		}
-		base := StmtBase{
-			Extent:   Span{extentStart, lastOwn.next},
-			BodySpan: Span{l.text, lastOwn.end},
-		}
-		extentStart = lastOwn.next
-		st := p.statement(l, base)
+		extentStart = next
 		f.Stmts = append(f.Stmts, st)
 		last = st
 		if j, ok := stop(extentStart); ok && p.hasPending {
