@@ -183,23 +183,29 @@ func addAzineFlags(g *graph, l lookup, est *Result) {
 // nitrogenRingKey names the ring correction of a saturated ring whose only
 // heteroatom is one amine nitrogen (aziridine … piperidine), or "".
 func (g *graph) nitrogenRingKey(r []int, nd int) string {
-	nN := 0
-	for _, a := range r {
-		switch g.m.Atoms[a].Element {
-		case "C":
-		case "N":
-			if g.typ[a] != "N" {
-				return ""
-			}
-			nN++
-		default:
-			return ""
-		}
-	}
-	if nN != 1 || nd != 0 {
+	if !g.oneHeteroatom(r, "N") || nd != 0 {
 		return ""
 	}
 	return map[int]string{3: "aziridine", 4: "azetidine", 5: "pyrrolidine", 6: "piperidine"}[len(r)]
+}
+
+// oneHeteroatom reports whether ring r holds carbons and exactly one atom
+// of element el, of the plain type el (an amine N, a divalent S).
+func (g *graph) oneHeteroatom(r []int, el string) bool {
+	n := 0
+	for _, a := range r {
+		switch g.m.Atoms[a].Element {
+		case "C":
+		case el:
+			if g.typ[a] != el {
+				return false
+			}
+			n++
+		default:
+			return false
+		}
+	}
+	return n == 1
 }
 
 // typeNote describes a centre type that no table has and no user group can

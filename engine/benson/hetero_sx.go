@@ -73,20 +73,7 @@ func (g *graph) impliedOxide(centre string, b, j int) bool {
 // members, saturated) and thiophene (five aromatic members, two double
 // bonds); "" for any other ring.
 func (g *graph) sulfurRingKey(r []int, nd, aromatic int) string {
-	s := 0
-	for _, a := range r {
-		switch g.m.Atoms[a].Element {
-		case "C":
-		case "S":
-			if g.typ[a] != "S" {
-				return ""
-			}
-			s++
-		default:
-			return ""
-		}
-	}
-	if s != 1 {
+	if !g.oneHeteroatom(r, "S") {
 		return ""
 	}
 	switch {
