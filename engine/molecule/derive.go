@@ -152,7 +152,8 @@ func (m *Molecule) WithCharges(charges map[int]int, orders map[int]int) (*Molecu
 
 // NeutralNO returns m with every charge-separated N⁺–O⁻ unit — a
 // non-aromatic N⁺ single-bonded to a terminal O⁻ (no H, no radical, no
-// isotope label) — written as N=O: the one structure for the
+// isotope label) that also has a double bond to a terminal O — written as
+// N=O: the one structure for the
 // charge-separated and the pentavalent spellings of nitro, nitrate and
 // N-oxide groups (C[N+](=O)[O-] and CN(=O)=O). m itself is returned when it
 // has no such unit or when the rewritten structure would break a valence
@@ -161,6 +162,19 @@ func (m *Molecule) NeutralNO() *Molecule {
 	var charges, orders map[int]int
 	for i, a := range m.Atoms {
 		if a.Element != "N" || a.Charge != 1 || a.Aromatic {
+			continue
+		}
+		// Only nitro/nitrate-type units, where the N⁺ already has a double
+		// bond to a terminal O: an amine oxide or nitrone keeps its charges
+		// (and is refused as a charge-separated structure no group names).
+		oxo := false
+		for _, b := range m.Adj[i] {
+			j := m.Other(b, i)
+			if m.Atoms[j].Element == "O" && m.Bonds[b].Order == 2 && len(m.Adj[j]) == 1 && m.Atoms[j].Charge == 0 {
+				oxo = true
+			}
+		}
+		if !oxo {
 			continue
 		}
 		for _, b := range m.Adj[i] {
