@@ -5,6 +5,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"kiln.dev/kiln/engine/kinetics"
 	"math"
 	"sort"
 	"strconv"
@@ -214,7 +215,7 @@ func (r *Result) Equilibrium(ctx context.Context, req EquilibriumRequest) (*Equi
 			continue
 		}
 		used[sp.Name] = sp
-		species = append(species, equilibrium.Species{Name: sp.Name, Composition: sp.Composition, Thermo: sp.Thermo()})
+		species = append(species, equilibrium.Species{Name: sp.Name, Composition: sp.Composition, Thermo: equilibriumThermo(sp)})
 	}
 	for _, m := range req.Mix {
 		sp, ok := r.ByName[m.Name]
@@ -302,7 +303,7 @@ func thermoRange(sp *Species) (lo, hi float64, what string) {
 			p, _, _ := sp.Estimate.NASA7()
 			return p.TLow, p.THigh, "the reference-library polynomial is"
 		}
-		return 298.15, 1500, "the group-additivity estimate (Cp held at its 1500 K value above) is"
+		return 298.15, 1500, "the group-additivity estimate (its NASA-7 fit, as `kiln fill` writes it, extrapolated past the group values' 1500 K) is"
 	}
 	return 0, 0, "no thermochemistry"
 }
@@ -355,4 +356,20 @@ func (o *Equilibrium) Text() string {
 
 func pressureText(p float64) string {
 	return fmt.Sprintf("%.5g atm (%.6g Pa)", p/speciesfile.PascalsPerAtm, p)
+}
+
+// equilibriumThermo is the thermochemistry an equilibrium uses for sp: the
+// file's block, a library polynomial, or for a group estimate the NASA-7
+// polynomial kiln writes for it (`kiln fill`, the quick fix; its Wilhoit
+// extrapolation past 1500 K), so that a file and its filled version give
+// the same equilibrium, and flame temperatures above 1500 K do not rest on
+// a heat capacity held at its 1500 K value. The group model is the
+// fallback when the fit fails.
+func equilibriumThermo(sp *Species) kinetics.Thermo {
+	if e := sp.Estimate; sp.Source == SourceEstimate && e != nil && e.Library == "" {
+		if p, _, err := e.NASA7(); err == nil {
+			return &p
+		}
+	}
+	return sp.Thermo()
 }

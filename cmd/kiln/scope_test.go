@@ -297,3 +297,38 @@ func TestRootUsage(t *testing.T) {
 	code, _, stderr := runKiln(t, "check", "--root", dir, main)
 	assert.Equal(t, exitOK, code, stderr)
 }
+
+// TestEquilibriumFillOutputEqual: an equilibrium among estimated species
+// above 1500 K (C3H6 isomers at 2500 K, where only their own thermo
+// decides) gives the same composition for a file and for what `kiln fill`
+// makes of it: both use the NASA-7 polynomial fill writes (the group model
+// alone holds Cp at its 1500 K value).
+func TestEquilibriumFillOutputEqual(t *testing.T) {
+	const text = "species propene C=CC\nspecies cyclopropane C1CC1\nspecies allene C=C=C\nspecies H2 [H][H]\n"
+	a := writeTemp(t, "eq.kiln", text)
+	b := filepath.Join(filepath.Dir(a), "filled-eq.kiln")
+	require.NoError(t, os.WriteFile(b, []byte(text), 0o644))
+	code, _, stderr := runKiln(t, "fill", b)
+	require.Equal(t, exitOK, code, stderr)
+	fractions := func(path string) map[string]float64 {
+		code, stdout, stderr := runKiln(t, "equilibrium", "--json", "--temperature", "2500", "--mix", "propene:1", path)
+		require.Equal(t, exitOK, code, stderr)
+		var o struct {
+			Species []struct {
+				Name string  `json:"name"`
+				X    float64 `json:"mole_fraction"`
+			} `json:"species"`
+		}
+		require.NoError(t, json.Unmarshal([]byte(stdout), &o), stdout)
+		out := map[string]float64{}
+		for _, sp := range o.Species {
+			out[sp.Name] = sp.X
+		}
+		return out
+	}
+	xa, xb := fractions(a), fractions(b)
+	require.Greater(t, xa["cyclopropane"], 1e-7)
+	for _, name := range []string{"propene", "cyclopropane", "allene", "H2"} {
+		assert.InEpsilon(t, xb[name], xa[name], 1e-3, name)
+	}
+}
