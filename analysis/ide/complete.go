@@ -1,7 +1,6 @@
 package ide
 
 import (
-	"sort"
 	"strings"
 
 	"kiln.dev/kiln/speciesfile"
@@ -98,21 +97,24 @@ func words2(ws []string, k CompletionKind, detail string) []Completion {
 }
 
 func speciesCompletions(x *Index, thirdBody bool) []Completion {
+	// One list per analysis, shared by every request (callers only read
+	// it): species names in declaration order — the client sorts and
+	// filters; a server cutting a long list keeps that order — then the
+	// third-body words. A request neither copies nor sorts tens of
+	// thousands of names.
 	x.namesOnce.Do(func() {
-		names := make([]Completion, 0, len(x.r.Species))
+		names := make([]Completion, 0, len(x.r.Species)+2)
 		for _, sp := range x.r.Species {
 			names = append(names, Completion{Label: sp.Name, Detail: sp.Formula, Kind: CompletionConstant})
 		}
-		sort.Slice(names, func(i, j int) bool { return names[i].Label < names[j].Label })
+		names = append(names, Completion{Label: "M", Detail: "third body", Kind: CompletionKeyword},
+			Completion{Label: "(+M)", Detail: "falloff third body", Kind: CompletionKeyword})
 		x.names = names
 	})
-	out := make([]Completion, 0, len(x.names)+2)
-	out = append(out, x.names...)
 	if thirdBody {
-		out = append(out, Completion{Label: "M", Detail: "third body", Kind: CompletionKeyword},
-			Completion{Label: "(+M)", Detail: "falloff third body", Kind: CompletionKeyword})
+		return x.names
 	}
-	return out
+	return x.names[: len(x.names)-2 : len(x.names)-2]
 }
 
 // attrNames finds the statement (and block) above line l and returns the

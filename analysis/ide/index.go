@@ -72,7 +72,7 @@ type Index struct {
 	includes map[*speciesfile.Include]string
 
 	namesOnce sync.Once
-	names     []Completion // species names, sorted (built on first completion)
+	names     []Completion // species names in declaration order, then M and (+M) (built on first completion; read-only)
 }
 
 // NewIndex indexes r: every file it holds (the analysed file and its includes).
