@@ -394,3 +394,23 @@ func TestEstimateSpellingsEachOwn(t *testing.T) {
 	assert.Contains(t, parts[0], "atom 1 (C)")
 	assert.Contains(t, parts[1], "atom 2 (C)")
 }
+
+// TestSummaryLibraryLabel: the summary table labels a reference-library
+// species "library" (tabulated data) and a group estimate "estimate".
+func TestSummaryLibraryLabel(t *testing.T) {
+	path := writeTemp(t, "lib.kiln", "species H2 [H][H]\nspecies propane CCC\n")
+	code, stdout, stderr := runKiln(t, "summary", path)
+	require.Equal(t, exitOK, code, stderr)
+	var h2, propane string
+	for _, line := range strings.Split(stdout, "\n") {
+		f := strings.Fields(line)
+		if len(f) > 2 && f[0] == "H2" {
+			h2 = f[2]
+		}
+		if len(f) > 2 && f[0] == "propane" {
+			propane = f[2]
+		}
+	}
+	assert.Equal(t, "library", h2)
+	assert.Equal(t, "estimate", propane)
+}

@@ -116,7 +116,10 @@ func TestErrors(t *testing.T) {
 		{"C()C", 2, "empty branch"},
 		{"[C", 0, "unclosed '['"},
 		{"C.", 1, "ends with '.'"},
-		{"Xe", 0, "must be written in brackets"},
+		{"Xe", 0, "must be written in brackets, as [Xe]"},
+		{"CXe", 1, "must be written in brackets, as [Xe]"},
+		{"CCX", 2, `"X" is not an element symbol`},
+		{"xyz", 0, `"x" is not an element symbol`},
 	}
 	for _, c := range cases {
 		_, err := ParseSMILES(c.smiles)
