@@ -63,9 +63,10 @@ reaction A <=> B +
 func TestNonphysicalRate(t *testing.T) {
 	const head = "species CH3 [CH3]\nspecies C2H6 CC\nreaction CH3 + CH3 (+M) <=> C2H6 (+M)   A=2.1e16 n=-0.97 Ea=0.62\n  low-pressure A=1.27e41 n=-7.0 Ea=2.76\n"
 	for _, c := range []struct{ troe, want string }{
-		{"  troe alpha=5 T3=-73 T1=-1180\n", "troe T3=-73 K is negative"},
+		{"  troe alpha=5 T3=-73 T1=-1180\n", "troe parameters give Fcent = -"},
 		{"  troe alpha=5 T3=1e30 T1=73\n", "troe parameters give Fcent = -"},
-		{"  troe alpha=0.62 T3=73 T1=1180 T2=-10\n", "troe T2=-10 K is negative"},
+		{"  troe alpha=1.9816 T3=5383.7 T1=4.2932 T2=-0.0795\n", ""}, // a small negative T2 is harmless
+		{"  troe alpha=0.62 T3=73 T1=1180 T2=-10\n", ""},
 		{"  troe alpha=0.62 T3=73 T1=1180\n", ""},
 		{"  troe alpha=0.62 T3=0 T1=0 T2=0\n", ""},
 	} {
@@ -191,4 +192,43 @@ reaction C2H6 <=> CH3 + CH3   A=1e16 n=0 Ea=88
 	require.Len(t, msgs, 1)
 	assert.Contains(t, msgs[0], "the rate at 0.101325 bar is used there")
 	assert.Empty(t, messagesWithCode(analyzeText(t, text), speciesfile.CodeRateOutOfRange))
+}
+
+// TestNegativeDuplicate: one reaction of a duplicate pair may carry a
+// negative A (a pair fitted that way); without `duplicate` it is an error.
+func TestNegativeDuplicate(t *testing.T) {
+	const head = "species H [H]\nspecies O2 O=O\nspecies O [O]\nspecies OH [OH]\n"
+	res := analyzeText(t, head+"reaction H + O2 <=> O + OH   A=1e14 n=0 Ea=15\n  duplicate\nreaction H + O2 <=> O + OH   A=-2e13 n=0 Ea=20\n  duplicate\n")
+	assert.Empty(t, messagesWithCode(res, speciesfile.CodeNonphysicalRate))
+	res = analyzeText(t, head+"reaction H + O2 <=> O + OH   A=-2e13 n=0 Ea=20\n")
+	msgs := messagesWithCode(res, speciesfile.CodeNonphysicalRate)
+	require.Len(t, msgs, 1)
+	assert.NotContains(t, msgs[0], "1 atm", "a pressure-independent rate")
+}
+
+// TestAtomCpFallsAllowed: an atom's tabulated Cp that falls with T by
+// electronic contributions (O, Cl; NIST-JANAF-type values entered from
+// memory by a tester) is not nonphysical; a fall of several R is.
+func TestAtomCpFallsAllowed(t *testing.T) {
+	res := analyzeText(t, `units kJ/mol
+species O [O]
+  thermo-table
+    hf298 249.18
+    s298 161.06
+    cp 298.15=21.911 400=21.482 500=21.257 600=21.124 800=20.990 1000=20.915 1500=20.874
+species Cl [Cl]
+  thermo-table
+    hf298 121.30
+    s298 165.19
+    cp 298.15=21.838 400=22.467 500=22.744 600=22.781 800=22.550 1000=22.229 1500=21.650
+species lump
+  composition C4H10
+  thermo-table
+    hf298 -125
+    s298 310
+    cp 300=98 400=125 500=100
+`)
+	msgs := messagesWithCode(res, speciesfile.CodeNonphysicalThermo)
+	require.Len(t, msgs, 1, "%v", msgs)
+	assert.Contains(t, msgs[0], "lump: Cp falls")
 }

@@ -350,7 +350,11 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 	}
 	s.reactions = make([]sideReaction, 0, nr)
 	for _, p := range a.order {
-		for _, d := range a.res.Files[p].Reactions {
+		f := a.res.Files[p]
+		for _, d := range f.Reactions {
+			if f.ErrorIn(d.Body()) {
+				continue // a reaction the reader could not read is not data
+			}
 			s.reactions = append(s.reactions, sideReaction{d: d, file: p})
 		}
 	}
@@ -700,7 +704,7 @@ func ptrTo(v float64) *float64 { return &v }
 // explicit reverse rate or by k_f/Kc from its own side's thermochemistry.
 // Reactants are keyed with the group's name mapping.
 func (s *compareSide) rateOf(g *reactionGroup, left string, T float64) (float64, string, bool) {
-	total := 0.0
+	total, contributed := 0.0, false
 	note := ""
 	for i, r := range g.rs {
 		P := s.a.set.pressure()
@@ -719,11 +723,13 @@ func (s *compareSide) rateOf(g *reactionGroup, left string, T float64) (float64,
 		}
 		if g.lefts[i] == left {
 			total += kf(T)
+			contributed = true
 			continue
 		}
 		if !r.d.Reversible {
-			return 0, "", false // an irreversible step has no rate the other way
+			continue // an irreversible step written the other way adds nothing in this direction
 		}
+		contributed = true
 		if arr, ok := arrhenius(r.d.Reverse); ok {
 			total += arr.Rate(T)
 			continue
@@ -733,6 +739,9 @@ func (s *compareSide) rateOf(g *reactionGroup, left string, T float64) (float64,
 			return 0, "", false
 		}
 		total += kf(T) / kc
+	}
+	if !contributed {
+		return 0, "", false // only irreversible steps written the other way
 	}
 	return total, note, true
 }

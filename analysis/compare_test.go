@@ -356,3 +356,29 @@ func TestCompareEfficiencies(t *testing.T) {
 	require.Len(t, c.Reactions, 1)
 	assert.Empty(t, c.Reactions[0].Note)
 }
+
+// TestCompareSelfMixedDirections: a file compared with itself has ratio 1
+// for a group holding a reversible step and an irreversible step written
+// the other way (the latter adds nothing to the forward direction), and
+// reactions with a syntax error in their rate lines are left out.
+func TestCompareSelfMixedDirections(t *testing.T) {
+	text := `species H [H]
+species H2 [H][H]
+species Cl [Cl]
+species HCl Cl
+species C2H6 CC
+species CH3 [CH3]
+species C2H5 C[CH2]
+species CH4 C
+reaction H + HCl <=> H2 + Cl   A=2.3e13 n=0 Ea=3.5
+reaction Cl + H2 => HCl + H   A=4.8e13 n=0 Ea=5.5
+reaction C2H6 + CH3 <=> C2H5 + CH4   A=6e6 n=1.74 Ea=10 Ea=11
+`
+	c := compareTexts(t, map[string]string{"/w/a.kiln": text, "/w/b.kiln": text}, "/w/a.kiln", "/w/b.kiln")
+	require.Len(t, c.Reactions, 1, "the broken reaction is not data")
+	for i := range CompareRateTemps {
+		require.NotNil(t, c.Reactions[0].Ratio[i])
+		assert.InDelta(t, 1, *c.Reactions[0].Ratio[i], 1e-12)
+	}
+	assert.Empty(t, c.ReactionsOnlyA)
+}

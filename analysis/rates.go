@@ -273,33 +273,36 @@ func (r *Reaction) PressureDependent() bool { return r.model != nil && r.model.P
 func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 
 // nonphysicalRate returns where and why the rate lines of d describe no
-// possible reaction ("" when they are usable): a Troe parameter that is a
-// negative temperature, a Troe centre Fcent(T) that is not positive and
-// finite, or k_f(T) that is not a positive finite number, anywhere on
-// 300–2500 K (the temperatures kiln evaluates rates at) at 1 atm.
+// possible reaction ("" when they are usable): a Troe centre Fcent(T) that
+// is not positive and finite, or k_f(T) that is not a positive finite
+// number, anywhere on 300–2500 K (the temperatures kiln evaluates rates at;
+// pressure-dependent rates at 1 atm). A negative Troe temperature alone is
+// not an error (published sets carry a small negative T2, harmless there),
+// and one reaction of a `duplicate` pair may have a negative rate (pairs
+// fitted with a negative A): only a non-finite value is reported for those.
 func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.Span, string) {
 	span := d.Equation
 	if d.Rate != nil {
 		span = d.Rate.Span
 	}
 	if tr := d.Troe; tr != nil && m.falloff != nil && m.falloff.Troe != nil {
-		for _, p := range []struct {
-			name string
-			v    *speciesfile.Number
-		}{{"T3", tr.T3}, {"T1", tr.T1}, {"T2", tr.T2}} {
-			if p.v != nil && p.v.SI < 0 {
-				return tr.Span, fmt.Sprintf("troe %s=%g K is negative: the broadening terms exp(−T/T3), exp(−T/T1), exp(−T2/T) then grow without bound; the falloff rate is not used", p.name, p.v.SI)
-			}
-		}
 		for T := 300.0; T <= 2500; T += 100 {
 			if fc := m.falloff.Troe.Fcent(T); !(fc > 0) || math.IsInf(fc, 0) {
 				return tr.Span, fmt.Sprintf("troe parameters give Fcent = %.3g at %g K: the broadening centre must be positive and finite, so the falloff rate cannot be evaluated and is not used", fc, T)
 			}
 		}
 	}
+	at := ""
+	if m.PressureDependent() {
+		at = " (1 atm)"
+	}
 	for T := 300.0; T <= 2500; T += 100 {
-		if k := m.forward(T, 101325); !(k > 0) || math.IsInf(k, 0) {
-			return span, fmt.Sprintf("the forward rate constant is %.3g at %g K (1 atm): a rate constant must be a positive finite number, so this rate is not used", k, T)
+		k := m.forward(T, 101325)
+		if d.Duplicate != nil && !math.IsNaN(k) && !math.IsInf(k, 0) {
+			continue
+		}
+		if !(k > 0) || math.IsInf(k, 0) {
+			return span, fmt.Sprintf("the forward rate constant is %.3g at %g K%s: a rate constant must be a positive finite number, so this rate is not used", k, T, at)
 		}
 	}
 	return span, ""

@@ -796,7 +796,10 @@ func (a *analysis) tableChecks(path string, sp *Species) {
 			a.report(path, speciesfile.Diagnostic{Span: p.T.Tok.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
 				Message: fmt.Sprintf("%s: temperature %g K is not positive", sp.Name, p.T.SI)})
 		}
-		if i > 0 && p.Cp.SI < pts[i-1].Cp.SI-0.01*math.Abs(pts[i-1].Cp.SI) {
+		// A fall is allowed within the polynomials' allowance
+		// (nasa.DefaultTolerances().CpFall, 0.3 R): atoms and small radicals
+		// with low electronic states (O, Cl, F) have Cp falling with T.
+		if i > 0 && p.Cp.SI < pts[i-1].Cp.SI-nasa.DefaultTolerances().CpFall {
 			a.report(path, speciesfile.Diagnostic{Span: p.Cp.Tok.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
 				Message: fmt.Sprintf("%s: Cp falls from %s at %g K to %s at %g K", sp.Name, a.entropy(pts[i-1].Cp.SI), pts[i-1].T.SI, a.entropy(p.Cp.SI), p.T.SI)})
 		}

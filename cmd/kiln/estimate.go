@@ -176,10 +176,10 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		// the structure (the tabulated values already contain them).
 		r.Groups = append(r.Groups, groupJSON{Name: "reference: " + est.Library, Count: 1, Hf298: jnum(est.Hf298 / 1000), S298: jnum(est.S298), Source: est.LibrarySource})
 		r.ReferenceLibrary = est.Library
-		// σ of a written Lewis structure describes the molecule only when
-		// it has one: a radical or charge-separated library species (NO2,
-		// NO3, OH…) is delocalised, and its σ is left null (the tabulated
-		// S° contains the true one).
+		// σ of a written Lewis structure describes the molecule only for a
+		// closed-shell, uncharged one: for a radical or charge-separated
+		// library species (NO2 and NO3 are delocalised; OH, CH3 …) σ is
+		// left null (the tabulated S° contains the true one).
 		if n := m.NeutralNO(); n.Charge() == 0 && n.UnpairedElectrons() == 0 && !anyCharge(n) {
 			if sigma, err := n.SymmetryNumber(); err == nil {
 				r.SymmetryNumber = ptr(json.Number(sigma.String()))
@@ -245,7 +245,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		if r.SymmetryNumber != nil {
 			fmt.Fprintf(w, "  symmetry number σ = %s, optical isomers n = %d (already contained in the tabulated S°)\n", *r.SymmetryNumber, *r.OpticalIsomers)
 		} else {
-			fmt.Fprintln(w, "  symmetry number: not derived from this delocalised structure (the tabulated S° contains it)")
+			fmt.Fprintln(w, "  symmetry number: not derived from an open-shell or charge-separated structure (the tabulated S° contains it)")
 		}
 		if withSources {
 			writeWrapped(w, "    ", "source: "+est.LibrarySource)
