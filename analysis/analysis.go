@@ -170,6 +170,10 @@ type Reaction struct {
 	ForwardRate1000, ReverseRate1000 *float64
 	ForwardOrder, ReverseOrder       int
 	Collision                        *kinetics.Violation
+	// RateTableEdge is the tabulated pressure (Pa) whose rate stands for
+	// the settings' pressure when that lies outside the reaction's
+	// pressure table (no extrapolation); 0 otherwise.
+	RateTableEdge float64
 
 	model *rateModel // nil without usable rate parameters
 

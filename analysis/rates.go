@@ -195,6 +195,7 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 			if P > hi {
 				edge = hi
 			}
+			r.RateTableEdge = edge
 			r.diags = append(r.diags, speciesfile.Diagnostic{Span: d.Pressures[0].P.Tok.Span, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeRateOutOfRange,
 				Message: fmt.Sprintf("rates are shown at %g bar, outside this table's pressures (%g–%g bar): the rate at %g bar is used there (no extrapolation)", P/1e5, lo/1e5, hi/1e5, edge/1e5)})
 		}

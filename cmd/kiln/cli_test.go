@@ -414,3 +414,23 @@ func TestSummaryLibraryLabel(t *testing.T) {
 	assert.Equal(t, "library", h2)
 	assert.Equal(t, "estimate", propane)
 }
+
+// TestSummaryRateTableEdge: a rate shown at a pressure outside the
+// reaction's pressure table says which tabulated pressure's rate it is.
+func TestSummaryRateTableEdge(t *testing.T) {
+	path := writeTemp(t, "p.kiln", `species CH3 [CH3]
+species C2H6 CC
+reaction C2H6 <=> CH3 + CH3   A=1e16 n=0 Ea=88
+  pressure 0.1atm A=1e15 n=0 Ea=88
+  pressure 10atm A=1e16 n=0 Ea=88
+`)
+	code, stdout, stderr := runKiln(t, "summary", "--json", "--pressure", "100atm", path)
+	require.Equal(t, exitOK, code, stderr)
+	assert.Contains(t, stdout, `"rate_table_edge_bar": 10.1325`)
+	code, stdout, _ = runKiln(t, "summary", "--pressure", "100atm", path)
+	require.Equal(t, exitOK, code)
+	assert.Contains(t, stdout, "table's 10.13 bar rate")
+	code, stdout, _ = runKiln(t, "summary", "--json", path)
+	require.Equal(t, exitOK, code)
+	assert.NotContains(t, stdout, "rate_table_edge_bar")
+}

@@ -5,6 +5,7 @@ import (
 	"io"
 	"sort"
 	"strconv"
+	"strings"
 
 	"kiln.dev/kiln/analysis"
 )
@@ -52,6 +53,10 @@ type summaryReaction struct {
 	// ReverseFactor is the factor k_r inherits from estimated thermo,
 	// exp(σ(ΔG°r)/RT) at 1000 K (null when k_r does not come from thermo).
 	ReverseFactor numericMap `json:"reverse_rate_factor"`
+	// RateTableEdge is the tabulated pressure (bar) whose rate is shown
+	// when rate_pressure_bar lies outside the reaction's pressure table
+	// (extension; absent otherwise).
+	RateTableEdge *float64 `json:"rate_table_edge_bar,omitempty"`
 }
 
 func runSummary(e env, args []string) (int, error) {
@@ -162,6 +167,9 @@ func summaryReactionOf(res *analysis.Result, r *analysis.Reaction, P float64) su
 	if u, ok := res.ReverseRateUncertainty(r, 1000); ok {
 		row.ReverseFactor = numericMap{"1000": ptr(u.Factor)}
 	}
+	if r.RateTableEdge > 0 {
+		row.RateTableEdge = ptr(jnum(r.RateTableEdge / 1e5))
+	}
 	return row
 }
 
@@ -233,6 +241,9 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		limit := ""
 		if r.CollisionViolation != nil {
 			limit = "above collision limit"
+		}
+		if r.RateTableEdge != nil {
+			limit = strings.TrimPrefix(limit+"; table's "+strconv.FormatFloat(*r.RateTableEdge, 'g', 4, 64)+" bar rate", "; ")
 		}
 		factor := ""
 		if f := reverseFactor(r); f != nil {
