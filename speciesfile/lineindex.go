@@ -44,8 +44,18 @@ func NewLineIndex(src []byte) *LineIndex {
 		li.ends = append(li.ends, len(src))
 		return li
 	}
-	start := 0
-	for i := 0; i < len(src); i++ {
+	start := li.scan(src, 0, len(src))
+	li.starts = append(li.starts, start)
+	li.ends = append(li.ends, len(src))
+	return li
+}
+
+// scan appends the lines of src that end (at a "\n", "\r" or "\r\n") in
+// [from, to), the first one starting at from, and returns where the line
+// after them starts.
+func (li *LineIndex) scan(src []byte, from, to int) int {
+	start := from
+	for i := from; i < to; i++ {
 		switch src[i] {
 		case '\n':
 			li.starts = append(li.starts, start)
@@ -60,9 +70,7 @@ func NewLineIndex(src []byte) *LineIndex {
 			start = i + 1
 		}
 	}
-	li.starts = append(li.starts, start)
-	li.ends = append(li.ends, len(src))
-	return li
+	return start
 }
 
 // isASCII reports whether b has no byte >= 0x80 (eight bytes at a time).
@@ -223,22 +231,7 @@ func (li *LineIndex) edited(src []byte, e Edit) *LineIndex {
 	out.ends = make([]int, a, len(li.starts)+8)
 	copy(out.starts, li.starts[:a])
 	copy(out.ends, li.ends[:a])
-	start := from
-	for i := from; i < to; i++ {
-		switch src[i] {
-		case '\n':
-			out.starts = append(out.starts, start)
-			out.ends = append(out.ends, i)
-			start = i + 1
-		case '\r':
-			out.starts = append(out.starts, start)
-			out.ends = append(out.ends, i)
-			if i+1 < len(src) && src[i+1] == '\n' {
-				i++
-			}
-			start = i + 1
-		}
-	}
+	start := out.scan(src, from, to)
 	if b < len(li.starts) {
 		for k := b; k < len(li.starts); k++ {
 			out.starts = append(out.starts, li.starts[k]+delta)
