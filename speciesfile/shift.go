@@ -77,21 +77,18 @@ func movedCp(cp []CpPoint, d int) []CpPoint {
 
 // movedRate copies r into ra (whose numbers hold r's).
 func movedRate(ra *rateStore, r *Arrhenius, d int) {
-	ra.r = Arrhenius{Span: r.Span.moved(d)}
-	for i, src := range [3]*Number{r.A, r.N, r.Ea} {
-		if src == nil {
-			continue
-		}
-		ra.n[i] = src.moved(d)
-		switch i {
-		case 0:
-			ra.r.A = &ra.n[0]
-		case 1:
-			ra.r.N = &ra.n[1]
-		case 2:
-			ra.r.Ea = &ra.n[2]
-		}
+	ra.r = Arrhenius{Span: r.Span.moved(d),
+		A: movedInto(&ra.n[0], r.A, d), N: movedInto(&ra.n[1], r.N, d), Ea: movedInto(&ra.n[2], r.Ea, d)}
+}
+
+// movedInto stores src moved by d in dst and returns dst; nil for a nil src
+// (an absent number stays absent).
+func movedInto(dst, src *Number, d int) *Number {
+	if src == nil {
+		return nil
 	}
+	*dst = src.moved(d)
+	return dst
 }
 
 func (p *parser) movedArrhenius(r *Arrhenius, d int) *Arrhenius {
@@ -176,23 +173,9 @@ func (p *parser) shifted(st Stmt, d int) Stmt {
 		c.LowPressure = p.movedArrhenius(s.LowPressure, d)
 		if t := s.Troe; t != nil {
 			tn := p.troes.new()
-			tn.t = Troe{Span: t.Span.moved(d)}
-			for i, src := range [4]*Number{t.Alpha, t.T3, t.T1, t.T2} {
-				if src == nil {
-					continue
-				}
-				tn.n[i] = src.moved(d)
-				switch i {
-				case 0:
-					tn.t.Alpha = &tn.n[0]
-				case 1:
-					tn.t.T3 = &tn.n[1]
-				case 2:
-					tn.t.T1 = &tn.n[2]
-				case 3:
-					tn.t.T2 = &tn.n[3]
-				}
-			}
+			tn.t = Troe{Span: t.Span.moved(d),
+				Alpha: movedInto(&tn.n[0], t.Alpha, d), T3: movedInto(&tn.n[1], t.T3, d),
+				T1: movedInto(&tn.n[2], t.T1, d), T2: movedInto(&tn.n[3], t.T2, d)}
 			c.Troe = &tn.t
 		}
 		if s.Efficiencies != nil {
