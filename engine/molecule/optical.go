@@ -131,29 +131,17 @@ func (m *Molecule) OpticalIsomersContext(ctx context.Context) (int, error) {
 	}
 	k := len(units)
 	ground := k // node fixed at 0: written configurations
-	par := make([]int, k+1)
-	bits := make([]int, k+1)
-	for i := range par {
-		par[i] = i
-	}
-	findP := func(x int) (int, int) {
-		p := 0
-		for par[x] != x {
-			p ^= bits[x]
-			x = par[x]
-		}
-		return x, p
-	}
+	rel := newParityRelations(k + 1)
 	relate := func(u, v, e int) bool {
-		ru, pu := findP(u)
-		rv, pv := findP(v)
+		ru, pu := rel.find(u)
+		rv, pv := rel.find(v)
 		if ru == rv {
 			return pu^pv == e
 		}
 		if ru == ground { // keep the ground a root
 			ru, rv, pu, pv = rv, ru, pv, pu
 		}
-		par[ru], bits[ru] = rv, pu^pv^e
+		rel.par[ru], rel.bits[ru] = rv, pu^pv^e
 		return true
 	}
 	// written marks
@@ -191,7 +179,7 @@ func (m *Molecule) OpticalIsomersContext(ctx context.Context) (int, error) {
 	// free bits: roots other than the ground
 	var free []int
 	for u := 0; u < k; u++ {
-		if r, _ := findP(u); r == u {
+		if r, _ := rel.find(u); r == u {
 			free = append(free, u)
 		}
 	}
@@ -236,7 +224,7 @@ func (m *Molecule) OpticalIsomersContext(ctx context.Context) (int, error) {
 	out := make([]int, k)
 	valid := func(c []int) bool {
 		for u := 0; u < k; u++ {
-			r, p := findP(u)
+			r, p := rel.find(u)
 			if r == ground {
 				if c[u] != p {
 					return false
@@ -261,7 +249,7 @@ func (m *Molecule) OpticalIsomersContext(ctx context.Context) (int, error) {
 			cfg[u] = (mask >> j) & 1
 		}
 		for u := 0; u < k; u++ {
-			r, p := findP(u)
+			r, p := rel.find(u)
 			if r == ground {
 				cfg[u] = p
 			} else {

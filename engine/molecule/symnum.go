@@ -977,39 +977,28 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (prod, error) {
 	}
 	best := 0
 	nu := len(units) + 1 // the last node is the ground of written configurations
-	par := make([]int, nu)
-	bits := make([]int, nu)
+	rel := newParityRelations(nu)
 	save := make([]int, 2*nu)
-	findP := func(x int) (int, int) {
-		p := 0
-		for par[x] != x {
-			p ^= bits[x]
-			x = par[x]
-		}
-		return x, p
-	}
 	fixed := append(sc.writtenStereo(units, len(units)), sc.cisFusions(units)...)
 	for seed := 0; seed < len(cands) && seed < maxSeeds; seed++ {
-		for i := range par {
-			par[i], bits[i] = i, 0
-		}
+		rel.reset()
 		count := 0
 		var try func(eqs []eq) bool
 		try = func(eqs []eq) bool {
-			copy(save, par)
-			copy(save[nu:], bits)
+			copy(save, rel.par)
+			copy(save[nu:], rel.bits)
 			for _, q := range eqs {
-				ru, pu := findP(q.u)
-				rv, pv := findP(q.v)
+				ru, pu := rel.find(q.u)
+				rv, pv := rel.find(q.v)
 				if ru == rv {
 					if pu^pv != q.e {
-						copy(par, save[:nu])
-						copy(bits, save[nu:])
+						copy(rel.par, save[:nu])
+						copy(rel.bits, save[nu:])
 						return false
 					}
 					continue
 				}
-				par[ru], bits[ru] = rv, pu^pv^q.e
+				rel.par[ru], rel.bits[ru] = rv, pu^pv^q.e
 			}
 			return true
 		}
@@ -1603,4 +1592,32 @@ func (m *Molecule) hybridForm(atoms, bonds []bool) *Molecule {
 		}
 	}
 	return &h
+}
+
+// parityRelations is a union–find over configuration bits whose edges carry
+// a parity: find(x) returns x's root and the parity of x relative to it
+// (shared by the σ configuration search and the optical-isomer count).
+type parityRelations struct {
+	par, bits []int
+}
+
+func newParityRelations(n int) *parityRelations {
+	r := &parityRelations{par: make([]int, n), bits: make([]int, n)}
+	r.reset()
+	return r
+}
+
+// reset makes every node its own root with parity 0.
+func (r *parityRelations) reset() {
+	for i := range r.par {
+		r.par[i], r.bits[i] = i, 0
+	}
+}
+
+func (r *parityRelations) find(x int) (root, parity int) {
+	for r.par[x] != x {
+		parity ^= r.bits[x]
+		x = r.par[x]
+	}
+	return x, parity
 }
