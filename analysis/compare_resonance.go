@@ -1,9 +1,7 @@
 package analysis
 
 import (
-	"sort"
 	"strconv"
-	"strings"
 
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -22,7 +20,7 @@ func matchResonance(a, b *compareSide, matchA, matchB []int) {
 		if sp.Mol == nil || !hasRadicalSite(sp.Mol) {
 			return ""
 		}
-		return skeleton(sp.Mol) + "|m" + strconv.Itoa(effectiveMultiplicity(s.a.w.cache.lib, sp))
+		return fingerprint(sp.Mol, true) + "|m" + strconv.Itoa(effectiveMultiplicity(s.a.w.cache.lib, sp))
 	}
 	buckets := map[string][]int{}
 	for j, sp := range b.species {
@@ -73,26 +71,4 @@ func hasRadicalSite(m *molecule.Molecule) bool {
 		}
 	}
 	return false
-}
-
-// skeleton is a fingerprint of the σ skeleton: like invariant, but without
-// bond orders, aromatic flags and radical electrons, which move between
-// resonance structures.
-func skeleton(m *molecule.Molecule) string {
-	base := make([]string, len(m.Atoms))
-	for i, at := range m.Atoms {
-		base[i] = at.Element + strconv.Itoa(at.Isotope) + "," + strconv.Itoa(at.Charge) + "," + strconv.Itoa(at.HCount)
-	}
-	refined := make([]string, len(m.Atoms))
-	var nb []string
-	for i := range m.Atoms {
-		nb = nb[:0]
-		for _, bd := range m.Adj[i] {
-			nb = append(nb, base[m.Other(bd, i)])
-		}
-		sort.Strings(nb)
-		refined[i] = base[i] + "(" + strings.Join(nb, " ") + ")"
-	}
-	sort.Strings(refined)
-	return strings.Join(refined, ";")
 }

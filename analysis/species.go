@@ -270,7 +270,13 @@ func hashKey(s string) uint64 {
 // costs a comparison of canonical forms), so canonical forms are needed only
 // when two species do. It starts with a zero byte, so it never begins like
 // a resonance key.
-func invariant(m *molecule.Molecule) string {
+func invariant(m *molecule.Molecule) string { return fingerprint(m, false) }
+
+// fingerprint is invariant's hash; with sigmaOnly it leaves out what moves
+// between resonance structures — aromatic flags, radical electrons and bond
+// orders — and so fingerprints the σ skeleton (atoms, hydrogen counts,
+// charges, connectivity).
+func fingerprint(m *molecule.Molecule, sigmaOnly bool) string {
 	n := len(m.Atoms)
 	codes := make([]uint64, 2*n)
 	base, refined := codes[:n:n], codes[n:]
@@ -279,11 +285,14 @@ func invariant(m *molecule.Molecule) string {
 		for k := 0; k < len(a.Element); k++ {
 			h = invMix(h<<8 ^ uint64(a.Element[k]))
 		}
-		ar := uint64(0)
+		ar, rad := uint64(0), uint64(a.Radical)
 		if a.Aromatic {
 			ar = 1
 		}
-		for _, v := range [...]uint64{ar, uint64(a.Isotope), uint64(a.Charge), uint64(a.Radical), uint64(a.HCount)} {
+		if sigmaOnly {
+			ar, rad = 0, 0
+		}
+		for _, v := range [...]uint64{ar, uint64(a.Isotope), uint64(a.Charge), rad, uint64(a.HCount)} {
 			h = invMix(h ^ invMix(v))
 		}
 		base[i] = h
@@ -293,7 +302,10 @@ func invariant(m *molecule.Molecule) string {
 		nb = nb[:0]
 		for _, b := range m.Adj[i] {
 			order := m.Bonds[b].Order
-			if m.Bonds[b].Aromatic {
+			switch {
+			case sigmaOnly:
+				order = 0
+			case m.Bonds[b].Aromatic:
 				order = 4 // Kekulé orders differ between spellings of one ring
 			}
 			nb = append(nb, invMix(uint64(order)^invMix(base[m.Other(b, i)])))
