@@ -335,12 +335,8 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 	}
 	for i, sp := range s.species {
 		a.structure(files[i], sp)
-		if sp.Mol == nil && len(sp.Decl.Formula) > 0 {
-			comp := map[string]int{}
-			for _, ec := range sp.Decl.Formula {
-				comp[ec.Symbol] += ec.Count
-			}
-			sp.Composition = comp
+		if sp.Mol == nil {
+			sp.Composition, _ = compositionOf(sp.Decl) // nil when not a formula of elements
 		}
 		a.given(files[i], sp)
 	}

@@ -155,30 +155,44 @@ func (a *analysis) species() error {
 	return nil
 }
 
-// compositionElements reports a composition line naming a symbol that is
-// not a chemical element; false when there is one.
-func (a *analysis) compositionElements(path string, d *speciesfile.Species) bool {
+// compositionOf returns the element counts of d's composition line, with
+// the first symbol that is not a chemical element ("" when all are); nil
+// without a (valid) composition line.
+func compositionOf(d *speciesfile.Species) (comp map[string]int, notElement string) {
+	if len(d.Formula) == 0 {
+		return nil, ""
+	}
+	comp = make(map[string]int, len(d.Formula))
 	for _, ec := range d.Formula {
 		if _, ok := molecule.AtomicWeight(ec.Symbol); !ok {
-			a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
-				Message: fmt.Sprintf("composition %s: %q is not a chemical element symbol", d.Composition.Text, ec.Symbol)})
-			return false
+			return nil, ec.Symbol
 		}
-	}
-	return true
-}
-
-// compositionAgrees warns when a species has both a structure and a
-// composition line and they disagree: the structure is used.
-func (a *analysis) compositionAgrees(path string, sp *Species) {
-	d := sp.Decl
-	comp := map[string]int{}
-	for _, ec := range d.Formula {
 		comp[ec.Symbol] += ec.Count
 	}
-	if got := molecule.HillFormula(comp); got != sp.Formula {
-		a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCompositionMismatch,
-			Message: fmt.Sprintf("composition %s disagrees with the SMILES, which gives %s; kiln uses the SMILES (balance, molar mass, thermo)", got, sp.Formula)})
+	return comp, ""
+}
+
+// composition reads d's composition line: an error for a symbol that is not
+// a chemical element (the line is then not data), a warning when the
+// species also has a structure and the two formulas disagree (the structure
+// is used), else the composition of a lumped species.
+func (a *analysis) composition(path string, sp *Species) {
+	d := sp.Decl
+	comp, bad := compositionOf(d)
+	switch {
+	case bad != "":
+		a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
+			Message: fmt.Sprintf("composition %s: %q is not a chemical element symbol", d.Composition.Text, bad)})
+	case comp == nil:
+	case sp.Mol != nil:
+		if got := molecule.HillFormula(comp); got != sp.Formula {
+			a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCompositionMismatch,
+				Message: fmt.Sprintf("composition %s disagrees with the SMILES, which gives %s; kiln uses the SMILES (balance, molar mass, thermo)", got, sp.Formula)})
+		}
+	default:
+		sp.Composition = comp
+		sp.Formula = molecule.HillFormula(comp)
+		sp.MolarMass = MolarMassOf(comp)
 	}
 }
 
@@ -186,22 +200,8 @@ func (a *analysis) compositionAgrees(path string, sp *Species) {
 // but the declaration (and the settings and user groups): structure,
 // composition, estimate, given thermo and the checks comparing them.
 func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupValue) {
-	d := sp.Decl
 	a.structure(path, sp)
-	if !a.compositionElements(path, d) {
-		// Not a formula of elements: the error says so, and it is not data.
-	} else if sp.Mol != nil && len(d.Formula) > 0 {
-		a.compositionAgrees(path, sp)
-	} else if sp.Mol == nil && len(d.Formula) > 0 {
-		// The parser reports a malformed composition line.
-		comp := map[string]int{}
-		for _, ec := range d.Formula {
-			comp[ec.Symbol] += ec.Count
-		}
-		sp.Composition = comp
-		sp.Formula = molecule.HillFormula(comp)
-		sp.MolarMass = MolarMassOf(comp)
-	}
+	a.composition(path, sp) // the parser reports a malformed composition line
 	if sp.Mol != nil {
 		sp.structKey = sp.inv + "|m" + strconv.Itoa(effectiveMultiplicity(a.w.cache.lib, sp))
 		a.estimateSpecies(path, sp, user)
