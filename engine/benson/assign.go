@@ -313,7 +313,7 @@ func (g *graph) terminal(j int) bool {
 // without groups, a molecule too small to have groups). Nothing is estimated.
 type UnsupportedError struct {
 	Atom   int    // 1-based atom number in the structure, 0 for the whole molecule
-	Reason string // why, in words
+	Reason string // why, in words (no advice: callers say what to do in their own terms)
 }
 
 func (e *UnsupportedError) Error() string {
@@ -324,7 +324,7 @@ func (e *UnsupportedError) Error() string {
 }
 
 func unsupported(g *graph, i int, why string) error {
-	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s): %s; group additivity cannot estimate this species — give it a thermo block", g.m.Atoms[i].Element, why)}
+	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) %s", g.m.Atoms[i].Element, why)}
 }
 
 // uncovered explains why atom i is named by c groups instead of one.

@@ -173,7 +173,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 			// Group values are for natural isotopic composition; a label
 			// changes zero-point energies, masses and symmetry, which no
 			// table here covers.
-			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%d%s) is isotope-labelled: the reference library holds no labelled species and group values are for natural isotopic composition — give the species a thermo block", a.Isotope, a.Element)}})
+			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%d%s) is isotope-labelled: the reference library holds no labelled species and group values are for natural isotopic composition", a.Isotope, a.Element)}})
 		}
 	}
 	if len(refusals) > 0 {
@@ -196,7 +196,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		// The method (parent + HBI + R ln(2S+1)) describes the high-spin
 		// state the structure's unpaired electrons imply; another spin state
 		// has a different energy that no table here gives.
-		return nil, &UnsupportedError{Reason: fmt.Sprintf("multiplicity %d is not the one the structure implies (%d unpaired electrons: multiplicity %d); group additivity has no data for other spin states — give the species a thermo block", opts.Multiplicity, unpaired, unpaired+1)}
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("multiplicity %d is not the one the structure implies (%d unpaired electrons: multiplicity %d); group additivity has no data for other spin states", opts.Multiplicity, unpaired, unpaired+1)}
 	}
 	forms, bounded := kekuleForms(m)
 	if len(forms) > 1 {
@@ -439,7 +439,7 @@ func spinScope(m *molecule.Molecule) error {
 	}
 	if best >= 0 {
 		a := m.Atoms[best]
-		return &UnsupportedError{Atom: best + 1, Reason: fmt.Sprintf("(%s) carries %d unpaired electrons (a carbene- or vinylidene-type centre): its spin states have no hydrogen-bond-increment data — give the species a thermo block", a.Element, a.Radical)}
+		return &UnsupportedError{Atom: best + 1, Reason: fmt.Sprintf("(%s) carries %d unpaired electrons (a carbene- or vinylidene-type centre): its spin states have no hydrogen-bond-increment data", a.Element, a.Radical)}
 	}
 	pair, at, first, second := "", 0, "", ""
 	for _, b := range m.Bonds {
@@ -456,7 +456,7 @@ func spinScope(m *molecule.Molecule) error {
 		}
 	}
 	if pair != "" {
-		return &UnsupportedError{Atom: at, Reason: fmt.Sprintf("(%s) and its %s neighbour both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data — give the species a thermo block", first, second)}
+		return &UnsupportedError{Atom: at, Reason: fmt.Sprintf("(%s) and its %s neighbour both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data", first, second)}
 	}
 	return nil
 }
@@ -498,7 +498,7 @@ func cumulatedKetene(m *molecule.Molecule) error {
 			continue
 		}
 		if m.Atoms[partner].Element != "C" || doubles(partner) != 1 {
-			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(C) is a ketene carbon whose other partner (atom %d, %s) is itself cumulated or not a carbon: the ketene group Ck describes R2C=C=O with an ordinary C=C end only — give the species a thermo block", partner+1, m.Atoms[partner].Element)}})
+			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(C) is a ketene carbon whose other partner (atom %d, %s) is itself cumulated or not a carbon: the ketene group Ck describes R2C=C=O with an ordinary C=C end only", partner+1, m.Atoms[partner].Element)}})
 		}
 	}
 	if len(refusals) == 0 {

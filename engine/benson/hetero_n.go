@@ -134,9 +134,9 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 	}
 	a := m.Atoms[i]
 	if net != 0 {
-		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d and the species has net charge %+d: ions are outside group additivity — give the species a thermo block", a.Element, a.Charge, net)}
+		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d and the species has net charge %+d: ions are outside group additivity", a.Element, a.Charge, net)}
 	}
-	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d in a neutral charge-separated structure that no group describes (only a non-aromatic N⁺ with a terminal O⁻ and a terminal =O, as in nitro and nitrate groups, is read as N(=O)=O; amine oxides and nitrones have no groups) — give the species a thermo block", a.Element, a.Charge)}
+	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d in a neutral charge-separated structure that no group describes (only a non-aromatic N⁺ with a terminal O⁻ and a terminal =O, as in nitro and nitrate groups, is read as N(=O)=O; amine oxides and nitrones have no groups)", a.Element, a.Charge)}
 }
 
 // addAzineFlags handles substituents on a ring carbon next to Nb (the
