@@ -517,10 +517,7 @@ func sameComposition(x, y map[string]int) bool {
 func (f *fitShare) compareModel(sp *Species) thermoCurve {
 	if sp.Source == SourceEstimate && sp.Estimate != nil {
 		e, _ := f.of(sp.Estimate)
-		if p, _, err := e.NASA7(); err == nil {
-			return &p
-		}
-		return sp.Estimate.curve()
+		return e.written()
 	}
 	if th, ok := sp.Thermo().(thermoCurve); ok {
 		return th

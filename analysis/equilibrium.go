@@ -359,17 +359,13 @@ func pressureText(p float64) string {
 }
 
 // equilibriumThermo is the thermochemistry an equilibrium uses for sp: the
-// file's block, a library polynomial, or for a group estimate the NASA-7
-// polynomial kiln writes for it (`kiln fill`, the quick fix; its Wilhoit
-// extrapolation past 1500 K), so that a file and its filled version give
-// the same equilibrium, and flame temperatures above 1500 K do not rest on
-// a heat capacity held at its 1500 K value. The group model is the
-// fallback when the fit fails.
+// file's block, a library polynomial as tabulated, or a group estimate as
+// kiln writes it (Estimate.written), so
+// that flame temperatures above 1500 K do not rest on a heat capacity held
+// at its 1500 K value.
 func equilibriumThermo(sp *Species) kinetics.Thermo {
 	if e := sp.Estimate; sp.Source == SourceEstimate && e != nil && e.Library == "" {
-		if p, _, err := e.NASA7(); err == nil {
-			return &p
-		}
+		return e.written()
 	}
 	return sp.Thermo()
 }

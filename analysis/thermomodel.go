@@ -180,6 +180,19 @@ type thermoCurve interface {
 	S(T float64) float64
 }
 
+// written returns the thermochemistry kiln writes for the estimate: its
+// NASA-7 polynomial (`kiln fill`, `estimate --nasa`, the quick fix; the
+// library polynomial, or for group values the fit with its Wilhoit
+// extrapolation past 1500 K), or the group model when the fit fails (fill
+// then writes nothing). `compare` and `equilibrium` evaluate estimates by
+// it, so that a file and its fill output give the same results.
+func (e *Estimate) written() thermoCurve {
+	if p, _, err := e.NASA7(); err == nil {
+		return &p
+	}
+	return e.curve()
+}
+
 // curve returns the same model as Thermo, with Cp.
 func (e *Estimate) curve() thermoCurve {
 	if e.Library != "" {
