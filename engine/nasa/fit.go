@@ -75,7 +75,9 @@ type sample struct{ T, Cp, W float64 }
 // (J/(mol K)) at 298.15 K and the classical limits cp0 and cpInf (J/(mol K),
 // see ClassicalLimits).
 //
-// Method. A Wilhoit curve (FitWilhoit) is fitted to the points. The least-
+// Method. A Wilhoit curve (FitWilhoit) is fitted to the points (EstimateTail
+// continues the points along the same curve for callers that evaluate an
+// estimate without fitting it). The least-
 // squares targets are the input points inside [TLow−2 K, THigh+2 K] (weight 3)
 // and the Wilhoit value at every 50 K grid temperature of [TLow, THigh] lying
 // farther than 50 K from every input point (weight 1): this fills gaps in the
