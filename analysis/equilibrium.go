@@ -360,9 +360,9 @@ func pressureText(p float64) string {
 
 // equilibriumThermo is the thermochemistry an equilibrium uses for sp: the
 // file's block, a library polynomial as tabulated, or a group estimate as
-// kiln writes it (Estimate.written), so
-// that flame temperatures above 1500 K do not rest on a heat capacity held
-// at its 1500 K value.
+// kiln writes it (Estimate.written), so that a file and its fill output
+// give the same equilibrium (the reaction checks' model of an estimate,
+// groupThermo, agrees with the fit to within its residuals).
 func equilibriumThermo(sp *Species) kinetics.Thermo {
 	if e := sp.Estimate; sp.Source == SourceEstimate && e != nil && e.Library == "" {
 		return e.written()

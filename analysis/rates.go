@@ -233,7 +233,19 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 		return k
 	}
 	ms, hs = a.sizes(d.Products)
-	if v := worstCollision(m.revOrder, ms, hs, kr, pressures, m.PressureDependent() && m.reverse == nil, set); v != nil {
+	dependent := m.PressureDependent() && m.reverse == nil
+	// Screened first with an upper bound of k_r that needs no Wilhoit fit
+	// (reverseBound): the answer stands when the bound finds no violation,
+	// or its worst at a temperature where it is exact.
+	var v *kinetics.Violation
+	krHi, exactTo, screened := reverseBound(m, r)
+	if screened {
+		v = worstCollision(m.revOrder, ms, hs, krHi, pressures, dependent, set)
+	}
+	if !screened || (v != nil && v.T > exactTo) {
+		v = worstCollision(m.revOrder, ms, hs, kr, pressures, dependent, set)
+	}
+	if v != nil {
 		v.Reverse = true
 		r.Collision = v
 		what := "reverse rate implied by thermochemistry"
@@ -243,6 +255,40 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
 			Message: fmt.Sprintf("%s, %.3g, exceeds the collision limit %.3g (%s) at %.0f K%s", what, v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v))})
 	}
+}
+
+// reverseBound returns an upper bound of m's k_r(T, P) derived from the
+// thermochemistry of r, equal to it up to exactTo (K), when some species of
+// r is an estimate whose Kc above its last point would need a Wilhoit fit
+// (boundingThermo): k_r = k_f/Kc with ΔG°r bounded from above by the
+// products' upper and the reactants' lower G. ok is false when k_r is not
+// derived from Kc or needs no fit.
+func reverseBound(m *rateModel, r *Reaction) (kr func(T, P float64) float64, exactTo float64, ok bool) {
+	if m.reverse != nil || m.kc == nil || r.reactants == nil {
+		return nil, 0, false
+	}
+	exactTo = math.Inf(1)
+	bound := func(side kinetics.Side, upper bool) kinetics.Side {
+		out := make(kinetics.Side, len(side))
+		for i, t := range side {
+			hi, lo, to := boundingThermo(t.Thermo)
+			out[i] = kinetics.Term{Coeff: t.Coeff, Thermo: lo}
+			if upper {
+				out[i].Thermo = hi
+			}
+			exactTo = math.Min(exactTo, to)
+		}
+		return out
+	}
+	re, pr := bound(r.reactants, false), bound(r.products, true)
+	if math.IsInf(exactTo, 1) {
+		return nil, 0, false
+	}
+	dn := kinetics.DeltaN(r.reactants, r.products)
+	return func(T, P float64) float64 {
+		_, _, g := kinetics.Delta(re, pr, T)
+		return kinetics.ReverseRate(m.forward(T, P), kinetics.Kc(kinetics.Kp(g, T), dn, T))
+	}, exactTo, true
 }
 
 // atPressure is ", 0.1 bar (N2 bath)" for a pressure-dependent violation.

@@ -7,7 +7,8 @@ import (
 	"github.com/stretchr/testify/assert"
 )
 
-// TestGroupThermo checks the integrated model against closed forms: with a
+// TestGroupThermo checks the integrated model (as for a thermo table, no
+// tail: Cp held above the last point) against closed forms: with a
 // constant Cp, H(T) = H298 + Cp (T − 298.15) and S(T) = S298 + Cp ln(T/298.15);
 // with Cp linear in T the integrals are exact too.
 func TestGroupThermo(t *testing.T) {
