@@ -220,8 +220,14 @@ func (e *Estimate) NASA7() (nasa.NASA7, nasa.FitReport, error) {
 		return f.poly, f.report, f.err
 	}
 	f.once.Do(func() {
-		f.poly, f.report, f.err = nasa.Fit(e.Hf298, e.S298, benson.StdTemps[:], e.Cp[:], e.cp0, e.cpInf,
-			nasa.FitOptions{TLow: 300, TMid: e.tMid, THigh: e.tHigh})
+		// One Wilhoit curve per estimate: the fit extrapolates with the
+		// curve the reaction checks' model continues along (nasa.Fit
+		// ignores it when the range leaves out group temperatures).
+		opt := nasa.FitOptions{TLow: 300, TMid: e.tMid, THigh: e.tHigh}
+		if t := e.model.above(); t.W.CpInf > 0 {
+			opt.Wilhoit = &t.W
+		}
+		f.poly, f.report, f.err = nasa.Fit(e.Hf298, e.S298, benson.StdTemps[:], e.Cp[:], e.cp0, e.cpInf, opt)
 	})
 	return f.poly, f.report, f.err
 }

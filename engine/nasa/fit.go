@@ -9,7 +9,15 @@ import (
 
 // FitOptions sets the temperature ranges of a fitted polynomial in K. Zero
 // values mean TLow = 300, TMid = 1000, THigh = 5000.
-type FitOptions struct{ TLow, TMid, THigh float64 }
+type FitOptions struct {
+	TLow, TMid, THigh float64
+	// Wilhoit, when set, is FitWilhoit of the same points and limits (the
+	// W of EstimateTail), made once and shared: Fit then extrapolates with
+	// it instead of fitting it again. It is used only when every point lies
+	// inside the range in ascending order and its limits are Fit's (so that
+	// it is the curve Fit would fit); otherwise it is ignored.
+	Wilhoit *Wilhoit
+}
 
 // withDefaults fills zero fields and validates the order TLow < TMid < THigh.
 func (o FitOptions) withDefaults() (FitOptions, error) {
@@ -129,8 +137,10 @@ func Fit(hf298, s298 float64, T, Cp []float64, cp0, cpInf float64, opt FitOption
 		ts[i], cps[i] = p.T, p.Cp
 		pts[i].W = pointWeight
 	}
-	w, err := FitWilhoit(ts, cps, cp0, cpInf)
-	if err != nil {
+	var w Wilhoit
+	if sw := opt.Wilhoit; sw != nil && sw.Cp0 == cp0 && sw.CpInf == cpInf && slices.Equal(ts, T) && slices.Equal(cps, Cp) {
+		w = *sw
+	} else if w, err = FitWilhoit(ts, cps, cp0, cpInf); err != nil {
 		return NASA7{}, FitReport{}, fmt.Errorf("nasa fit: %w", err)
 	}
 	samples := append([]sample(nil), pts...)

@@ -72,3 +72,33 @@ func TestTailHeld(t *testing.T) {
 	assert.InDelta(t, 14*R*1500, tail.DH(3000), 1e-9)
 	assert.InDelta(t, 14*R*math.Log(2), tail.DS(3000), 1e-12)
 }
+
+// TestFitSharedWilhoit: Fit given the Tail's Wilhoit curve of the same
+// points makes the same polynomial, to the last bit, as Fit fitting the
+// curve itself; a curve with other limits, or points outside the range,
+// make it fit its own.
+func TestFitSharedWilhoit(t *testing.T) {
+	for _, m := range tenSpecies {
+		cps := make([]float64, len(benson))
+		for i, T := range benson {
+			cps[i] = m.cp(T)
+		}
+		cp0, cpInf := ClassicalLimits(m.nAtoms, m.linear, m.rotors)
+		tail, err := EstimateTail(benson, cps, cp0, cpInf)
+		require.NoError(t, err)
+		for _, opt := range []FitOptions{{}, {TMid: 1200, THigh: 3000}, {THigh: 1200}} {
+			own, rep, err := Fit(m.hf, m.s, benson, cps, cp0, cpInf, opt)
+			require.NoError(t, err)
+			opt.Wilhoit = &tail.W
+			shared, rep2, err := Fit(m.hf, m.s, benson, cps, cp0, cpInf, opt)
+			require.NoError(t, err)
+			assert.Equal(t, own, shared, "%s %+v", m.name, opt)
+			assert.Equal(t, rep, rep2)
+		}
+		other := tail.W
+		other.CpInf *= 1.5
+		own, _, _ := Fit(m.hf, m.s, benson, cps, cp0, cpInf, FitOptions{})
+		shared, _, _ := Fit(m.hf, m.s, benson, cps, cp0, cpInf, FitOptions{Wilhoit: &other})
+		assert.Equal(t, own, shared, "%s: a curve with other limits is not used", m.name)
+	}
+}
