@@ -730,23 +730,21 @@ func (a *analysis) problemMessage(p nasa.Problem) string {
 	return p.Message
 }
 
-// cpFloor reports given heat capacities below what every ideal-gas molecule
-// of the species' shape has from translation and rotation alone (5/2 R for
-// an atom, 7/2 R linear, 4 R non-linear; nasa.ClassicalLimits), from 298 K
-// up, with 5 % slack: vibrations and electronic states only add to it. (The
-// slack and the lower bound of 298 K leave room for H2, whose rotational
-// heat capacity is not classical at low temperature: 28.8 J/(mol K) at
-// 298 K against 7/2 R = 29.1, NIST-JANAF, common practice.)
+// cpFloor reports given heat capacities below nasa.CpFloor, what every
+// ideal-gas molecule of the species' shape has from translation and
+// rotation alone (with its slack), from nasa.FloorFrom up: the first
+// tabulated point below it, else the first sampled point of a polynomial
+// (nasa.BelowFloor).
 func (a *analysis) cpFloor(path string, sp *Species) {
 	if sp.Mol == nil && len(sp.Composition) == 0 {
 		return // shape unknown
 	}
 	n, lin, _ := a.shapeOf(sp)
-	cp0, _ := nasa.ClassicalLimits(n, lin, 0)
-	if cp0 <= 0 {
+	floor := nasa.CpFloor(n, lin)
+	if floor <= 0 {
 		return
 	}
-	floor := 0.95 * cp0
+	cp0, _ := nasa.ClassicalLimits(n, lin, 0)
 	d, g := sp.Decl, sp.Given
 	report := func(span speciesfile.Span, T, cp float64) {
 		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
@@ -754,31 +752,19 @@ func (a *analysis) cpFloor(path string, sp *Species) {
 	}
 	if t := d.Table; t != nil && g.Table != nil {
 		for _, p := range t.Cp {
-			if p.Cp.SI > 0 && p.Cp.SI < floor && p.T.SI >= T298-rangeSlack {
+			if p.Cp.SI > 0 && p.Cp.SI < floor && p.T.SI >= nasa.FloorFrom {
 				report(speciesfile.Span{Start: p.T.Tok.Span.Start, End: p.Cp.Tok.Span.End}, p.T.SI, p.Cp.SI)
 				return
 			}
 		}
 	}
 	if b := d.NASA7; b != nil && g.Poly != nil {
-		p := g.Poly
-		for _, r := range []struct {
-			lo, hi float64
-			span   speciesfile.Span
-		}{{p.TLow, p.TMid, b.LowSpan}, {p.TMid, p.THigh, b.HighSpan}} {
-			if !(r.lo > 0 && r.hi > r.lo) {
-				return // the ranges are reported by nasa.Check
+		if part, T, c, ok := nasa.BelowFloor(*g.Poly, floor); ok {
+			span := b.LowSpan
+			if part == "high" {
+				span = b.HighSpan
 			}
-			for i := 0; i <= 50; i++ {
-				T := r.lo + (r.hi-r.lo)*float64(i)/50
-				if T < T298-rangeSlack {
-					continue
-				}
-				if c := p.Cp(T); c > 0 && c < floor {
-					report(r.span, T, c)
-					return
-				}
-			}
+			report(span, T, c)
 		}
 	}
 }

@@ -82,6 +82,54 @@ func CpCeiling(nAtoms int, linear bool) float64 {
 	return cpInf + ExcessCpAllowance
 }
 
+// CpFloor returns the lowest Cp (J/(mol K)) a molecule of nAtoms atoms may
+// have from FloorFrom up: 95 % of the translational and rotational heat
+// capacity Cp0 of ClassicalLimits (5/2 R for an atom, 7/2 R linear, 4 R
+// non-linear), which vibrations and electronic states only add to. The 5 %
+// slack and the lower end of 296.15 K leave room for H2, whose rotational
+// heat capacity is not classical at low temperature: 28.8 J/(mol K) at
+// 298 K against 7/2 R = 29.1 (NIST-JANAF, common practice). It is the
+// counterpart of CpCeiling; nAtoms < 1 returns 0 (no floor).
+func CpFloor(nAtoms int, linear bool) float64 {
+	cp0, _ := ClassicalLimits(nAtoms, linear, 0)
+	return 0.95 * cp0
+}
+
+// FloorFrom (K) is where CpFloor starts to apply: 298.15 K, less the 2 K
+// by which a range starting at 300 K counts as covering it.
+const FloorFrom = Tref - 2
+
+// floorPoints is the number of intervals per block at which BelowFloor
+// samples Cp.
+const floorPoints = 50
+
+// BelowFloor returns the first temperature (K) at or above FloorFrom where
+// p's Cp is positive but below floor (J/(mol K); CpFloor), with that Cp and
+// the block ("low" or "high"), sampling each block's range at 51 evenly
+// spaced temperatures; found is false when there is none. A Cp that is not
+// positive is Check's to report (cp-nonpositive), as are ranges out of
+// order (no block is then sampled).
+func BelowFloor(p NASA7, floor float64) (part string, T, cp float64, found bool) {
+	for _, r := range []struct {
+		part   string
+		lo, hi float64
+	}{{"low", p.TLow, p.TMid}, {"high", p.TMid, p.THigh}} {
+		if !(r.lo > 0 && r.hi > r.lo) {
+			return "", 0, 0, false
+		}
+		for i := 0; i <= floorPoints; i++ {
+			T := r.lo + (r.hi-r.lo)*float64(i)/floorPoints
+			if T < FloorFrom {
+				continue
+			}
+			if c := p.Cp(T); c > 0 && c < floor {
+				return r.part, T, c, true
+			}
+		}
+	}
+	return "", 0, 0, false
+}
+
 const (
 	// KindDiscontinuity marks a jump of Cp, H or S at TMid.
 	KindDiscontinuity = "discontinuity"

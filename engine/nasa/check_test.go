@@ -73,3 +73,32 @@ func TestCheckBroken(t *testing.T) {
 	p.Low[5] += 5 / R
 	assert.Empty(t, Check(p, DefaultTolerances(), cpInf), "%v", kinds(Check(p, DefaultTolerances(), cpInf)))
 }
+
+// TestCpFloor: the floor is 95 % of the classical Cp0 (exact multiples of
+// R), and BelowFloor finds the first sampled point under it from 296.15 K up.
+func TestCpFloor(t *testing.T) {
+	assert.InDelta(t, 0.95*2.5*R, CpFloor(1, false), 1e-12)
+	assert.InDelta(t, 0.95*3.5*R, CpFloor(2, true), 1e-12)
+	assert.InDelta(t, 0.95*4*R, CpFloor(3, false), 1e-12)
+	assert.Zero(t, CpFloor(0, false))
+	// Cp/R = 3 + 0.001 T: 3.3 R at 300 K, under the 3.8 R floor of a
+	// non-linear molecule until 800 K; the low block is sampled every 16 K
+	// from 200 K, and 296 K lies below 296.15 K, so 312 K is the first.
+	p := NASA7{TLow: 200, TMid: 1000, THigh: 3000, Low: [7]float64{3, 1e-3}, High: [7]float64{3, 1e-3}}
+	part, T, cp, ok := BelowFloor(p, CpFloor(3, false))
+	require.True(t, ok)
+	assert.Equal(t, "low", part)
+	assert.InDelta(t, 312, T, 1e-9)
+	assert.InDelta(t, R*(3+0.312), cp, 1e-9)
+	// Above the floor everywhere: nothing.
+	p.Low[0], p.High[0] = 4, 4
+	_, _, _, ok = BelowFloor(p, CpFloor(3, false))
+	assert.False(t, ok)
+	// Only in the high block: Cp/R = 4.2 − 2e-4 T falls under 3.8 above
+	// 2000 K; samples every 40 K from 1000 K, so 2040 K.
+	p.High = [7]float64{4.2, -2e-4}
+	part, T, _, ok = BelowFloor(p, CpFloor(3, false))
+	require.True(t, ok)
+	assert.Equal(t, "high", part)
+	assert.InDelta(t, 2040, T, 1e-9)
+}
