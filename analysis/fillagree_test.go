@@ -154,7 +154,7 @@ func TestReverseScreenExact(t *testing.T) {
 				k, _ := m.reverseRate(T, P)
 				return k
 			}
-			set := kinetics.CollisionSettings{Factor: DefaultSettings().CollisionFactor, TMin: 300, TMax: 2500}
+			set := rateGrid(DefaultSettings().CollisionFactor)
 			v := worstCollision(m.revOrder, ms, hs, kr, []float64{DefaultSettings().pressure()}, false, set)
 			if v != nil {
 				v.Reverse = true

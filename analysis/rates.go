@@ -165,8 +165,20 @@ func worstCollision(order int, masses []float64, heavy []int, rate func(T, P flo
 	return worst
 }
 
+// rateTMin (K) is the lowest temperature kiln evaluates rate constants at;
+// the highest is tmaxReverse.
+const rateTMin = 300
+
+// rateGrid is the one temperature grid of the rate checks (nonphysicalRate,
+// the collision test), with the collision factor factor: 20 temperatures
+// evenly spaced in ln T over rateTMin–tmaxReverse, 300–2500 K
+// (kinetics.CollisionSettings.Temperatures).
+func rateGrid(factor float64) kinetics.CollisionSettings {
+	return kinetics.CollisionSettings{Factor: factor, TMin: rateTMin, TMax: tmaxReverse}
+}
+
 // rates computes k_f and k_r at 1000 K and the settings' pressure, and
-// checks both against the collision limit over 300–2500 K and, for
+// checks both against the collision limit over rateGrid and, for
 // pressure-dependent rates, over kinetics.CheckPressures (N2 bath gas).
 func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 	if a.res.Files[r.File].ErrorIn(d.Body()) {
@@ -210,7 +222,7 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 	if m.PressureDependent() {
 		pressures = kinetics.CheckPressures()
 	}
-	set := kinetics.CollisionSettings{Factor: a.set.CollisionFactor, TMin: 300, TMax: 2500}
+	set := rateGrid(a.set.CollisionFactor)
 	span := d.Equation
 	if d.Rate != nil {
 		span = d.Rate.Span
@@ -322,8 +334,7 @@ func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 // nonphysicalRate returns where and why the rate lines of d describe no
 // possible reaction ("" when they are usable): a Troe centre Fcent(T) that
 // is not positive and finite, or k_f(T) that is not a positive finite
-// number, anywhere on 300–2500 K (the temperatures kiln evaluates rates at;
-// pressure-dependent rates at 1 atm). A negative Troe temperature alone is
+// number, at any temperature of rateGrid (pressure-dependent rates at 1 atm). A negative Troe temperature alone is
 // not an error (published sets carry a small negative T2, harmless there),
 // and one reaction of a `duplicate` pair may have a negative rate (pairs
 // fitted with a negative A): only a non-finite value is reported for those.
@@ -332,10 +343,11 @@ func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.Span, s
 	if d.Rate != nil {
 		span = d.Rate.Span
 	}
+	grid := rateGrid(0).Temperatures()
 	if tr := d.Troe; tr != nil && m.falloff != nil && m.falloff.Troe != nil {
-		for T := 300.0; T <= 2500; T += 100 {
+		for _, T := range grid {
 			if fc := m.falloff.Troe.Fcent(T); !(fc > 0) || math.IsInf(fc, 0) {
-				return tr.Span, fmt.Sprintf("troe parameters give Fcent = %.3g at %g K: the broadening centre must be positive and finite, so the falloff rate cannot be evaluated and is not used", fc, T)
+				return tr.Span, fmt.Sprintf("troe parameters give Fcent = %.3g at %.0f K: the broadening centre must be positive and finite, so the falloff rate cannot be evaluated and is not used", fc, T)
 			}
 		}
 	}
@@ -343,13 +355,13 @@ func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.Span, s
 	if m.PressureDependent() {
 		at = " (1 atm)"
 	}
-	for T := 300.0; T <= 2500; T += 100 {
+	for _, T := range grid {
 		k := m.forward(T, 101325)
 		if d.Duplicate != nil && !math.IsNaN(k) && !math.IsInf(k, 0) {
 			continue
 		}
 		if !(k > 0) || math.IsInf(k, 0) {
-			return span, fmt.Sprintf("the forward rate constant is %.3g at %g K%s: a rate constant must be a positive finite number, so this rate is not used", k, T, at)
+			return span, fmt.Sprintf("the forward rate constant is %.3g at %.0f K%s: a rate constant must be a positive finite number, so this rate is not used", k, T, at)
 		}
 	}
 	return span, ""

@@ -164,16 +164,8 @@ func CollisionLimit(order int, masses []float64, heavyAtoms []int, T float64, s 
 // products for the reverse, coefficients counted, third body included as one
 // molecule); the returned Violation has Reverse false.
 func CollisionCheck(order int, masses []float64, heavyAtoms []int, rate func(T float64) float64, s CollisionSettings) *Violation {
-	tmin, tmax := s.TMin, s.TMax
-	if tmin <= 0 {
-		tmin = DefaultCollisionTMin
-	}
-	if tmax <= 0 {
-		tmax = DefaultCollisionTMax
-	}
-	if tmin > tmax {
-		tmin, tmax = tmax, tmin
-	}
+	grid := s.Temperatures()
+	tmin := grid[0]
 	// The bound scales as T (unimolecular) or √T (bimolecular): evaluate it
 	// once and scale it along the grid.
 	lim0, ok := CollisionLimit(order, masses, heavyAtoms, tmin, s)
@@ -185,21 +177,43 @@ func CollisionCheck(order int, masses []float64, heavyAtoms []int, rate func(T f
 		power = 1
 	}
 	var worst *Violation
-	step := math.Pow(tmax/tmin, 1/float64(CollisionGridPoints-1))
-	T := tmin
-	for i := range CollisionGridPoints {
-		if i == CollisionGridPoints-1 {
-			T = tmax // no drift at the end of the grid
-		}
+	for _, T := range grid {
 		lim := lim0 * math.Pow(T/tmin, power)
 		if k := rate(T); k > lim { // also skips NaN
 			if worst == nil || k/lim > worst.Rate/worst.Limit {
 				worst = &Violation{T: T, Rate: k, Limit: lim, Order: order}
 			}
 		}
-		T *= step
 	}
 	return worst
+}
+
+// Temperatures returns the temperatures (K) CollisionCheck scans for s:
+// CollisionGridPoints of them evenly spaced in ln T from TMin to TMax
+// (defaults for zero values, swapped when out of order), the last exactly
+// TMax. Other checks of a rate over the same range use the same grid.
+func (s CollisionSettings) Temperatures() [CollisionGridPoints]float64 {
+	tmin, tmax := s.TMin, s.TMax
+	if tmin <= 0 {
+		tmin = DefaultCollisionTMin
+	}
+	if tmax <= 0 {
+		tmax = DefaultCollisionTMax
+	}
+	if tmin > tmax {
+		tmin, tmax = tmax, tmin
+	}
+	var out [CollisionGridPoints]float64
+	step := math.Pow(tmax/tmin, 1/float64(CollisionGridPoints-1))
+	T := tmin
+	for i := range out {
+		if i == CollisionGridPoints-1 {
+			T = tmax // no drift at the end of the grid
+		}
+		out[i] = T
+		T *= step
+	}
+	return out
 }
 
 // RateUnits names the units of a rate constant of the given order in the
