@@ -28,6 +28,43 @@ type SettingsInput struct {
 	Pressure        *float64 `json:"pressure"`
 }
 
+// numberSetting is one numeric field of SettingsInput: its json key, the
+// field, the factor from the unit people give it in to SI, and the field of
+// Settings it sets.
+type numberSetting struct {
+	key   string
+	v     *float64
+	scale float64
+	dst   *float64
+}
+
+// numbers lists the numeric fields of in with their destinations in s: the
+// one table of numeric settings (Apply validates them in this order;
+// NumberSettingKeys gives their keys to other readers of the same input).
+func (in SettingsInput) numbers(s *Settings) []numberSetting {
+	return []numberSetting{
+		{"tMid", in.TMid, 1, &s.TMid},
+		{"tHigh", in.THigh, 1, &s.THigh},
+		{"mismatchHf298", in.MismatchHf298, 1000 * JoulesPerCalorie, &s.MismatchHf298},
+		{"mismatchS298", in.MismatchS298, JoulesPerCalorie, &s.MismatchS298},
+		{"mismatchCp", in.MismatchCp, JoulesPerCalorie, &s.MismatchCp},
+		{"collisionFactor", in.CollisionFactor, 1, &s.CollisionFactor},
+		{"pressure", in.Pressure, 1e5, &s.Pressure},
+	}
+}
+
+// NumberSettingKeys returns the json keys of the numeric settings of
+// SettingsInput (every key but "units"), in the order Apply checks them.
+func NumberSettingKeys() []string {
+	var s Settings
+	ns := SettingsInput{}.numbers(&s)
+	out := make([]string, len(ns))
+	for i, n := range ns {
+		out[i] = n.key
+	}
+	return out
+}
+
 // MaxTHigh (K) is the highest THIGH kiln fits to: the upper end of the
 // NASA TM-4513 tables' usual range.
 const MaxTHigh = 6000
@@ -53,20 +90,7 @@ func (in SettingsInput) Apply(base Settings) (Settings, error) {
 			return base, &SettingError{"units", fmt.Sprintf("must be \"kcal/mol\" or \"kJ/mol\", got %q", *in.Units)}
 		}
 	}
-	for _, f := range []struct {
-		key   string
-		v     *float64
-		scale float64
-		dst   *float64
-	}{
-		{"tMid", in.TMid, 1, &s.TMid},
-		{"tHigh", in.THigh, 1, &s.THigh},
-		{"mismatchHf298", in.MismatchHf298, 1000 * JoulesPerCalorie, &s.MismatchHf298},
-		{"mismatchS298", in.MismatchS298, JoulesPerCalorie, &s.MismatchS298},
-		{"mismatchCp", in.MismatchCp, JoulesPerCalorie, &s.MismatchCp},
-		{"collisionFactor", in.CollisionFactor, 1, &s.CollisionFactor},
-		{"pressure", in.Pressure, 1e5, &s.Pressure},
-	} {
+	for _, f := range in.numbers(&s) {
 		if f.v == nil {
 			continue
 		}

@@ -69,7 +69,7 @@ func normalizeSettings(raw json.RawMessage) (json.RawMessage, error) {
 		return nil, fmt.Errorf("settings: must be a JSON object: %w", err)
 	}
 	var problems []string
-	for _, key := range []string{"tMid", "tHigh", "mismatchHf298", "mismatchS298", "mismatchCp", "collisionFactor", "pressure"} {
+	for _, key := range analysis.NumberSettingKeys() {
 		v, ok := m[key]
 		if !ok || string(v) == "null" {
 			continue
