@@ -141,11 +141,7 @@ func TestSolvePolyMatchesReference(t *testing.T) {
 	opt, err := FitOptions{}.withDefaults()
 	require.NoError(t, err)
 	for _, m := range tenSpecies {
-		cps := make([]float64, len(benson))
-		for i, T := range benson {
-			cps[i] = m.cp(T)
-		}
-		cp0, cpInf := ClassicalLimits(m.nAtoms, m.linear, m.rotors)
+		cps, cp0, cpInf := m.points()
 		w, err := FitWilhoit(benson, cps, cp0, cpInf)
 		require.NoError(t, err)
 		var samples []sample
@@ -180,11 +176,7 @@ func TestFitWilhoitMatchesReference(t *testing.T) {
 		return s
 	}
 	for _, m := range tenSpecies {
-		cps := make([]float64, len(benson))
-		for i, T := range benson {
-			cps[i] = m.cp(T)
-		}
-		cp0, cpInf := ClassicalLimits(m.nAtoms, m.linear, m.rotors)
+		cps, cp0, cpInf := m.points()
 		got, err := FitWilhoit(benson, cps, cp0, cpInf)
 		require.NoError(t, err, m.name)
 		want, err := refFitWilhoit(benson, cps, cp0, cpInf)
@@ -283,11 +275,7 @@ func BenchmarkFitTenSpecies(b *testing.B) {
 	}
 	var ins []in
 	for _, m := range tenSpecies {
-		cps := make([]float64, len(benson))
-		for i, T := range benson {
-			cps[i] = m.cp(T)
-		}
-		cp0, cpInf := ClassicalLimits(m.nAtoms, m.linear, m.rotors)
+		cps, cp0, cpInf := m.points()
 		ins = append(ins, in{cp: cps, cp0: cp0, cpInf: cpInf, hf: m.hf, s298: m.s})
 	}
 	for b.Loop() {

@@ -417,20 +417,7 @@ func solvePoly(hf298, s298 float64, samples []sample, opt FitOptions, monotone b
 		}
 		b[i] = s.W
 	}
-	// Unit-length columns, so that the rank test sees collinearity only.
-	for k := range cs {
-		if !(cs[k] > 0) || math.IsInf(cs[k], 0) {
-			return NASA7{}, errors.New("constrained least squares: too few independent data for the unknowns")
-		}
-		cs[k] = 1 / math.Sqrt(cs[k])
-	}
-	for i := range m {
-		for k := range n {
-			a[i*n+k] *= cs[k]
-		}
-	}
-	householderQR(a, m, n, b)
-	if !triRank(a, n, n, 1e-12) {
+	if !scaledQR(a, m, n, b, cs[:], 1e-12) {
 		return NASA7{}, errors.New("constrained least squares: too few independent data for the unknowns")
 	}
 	fam := scaledFamily{inner: newPolyIneq(opt, monotone, cpMax), scale: cs[:]}

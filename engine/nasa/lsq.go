@@ -369,3 +369,26 @@ func dot(a, b []float64) float64 {
 	}
 	return s
 }
+
+// scaledQR scales the columns of the m×n row-major matrix a to unit length,
+// given their sums of squares in cs (replaced by the factors 1/‖column‖, so
+// that the solution of the scaled problem times cs is the solution of the
+// original), reduces a and b by Householder QR, and reports whether the
+// triangular factor has full rank to tol (triRank): with unit columns the
+// test sees collinearity only. False also when a column is zero or not
+// finite.
+func scaledQR(a []float64, m, n int, b, cs []float64, tol float64) bool {
+	for k := range n {
+		if !(cs[k] > 0) || math.IsInf(cs[k], 0) {
+			return false
+		}
+		cs[k] = 1 / math.Sqrt(cs[k])
+	}
+	for i := range m {
+		for k := range n {
+			a[i*n+k] *= cs[k]
+		}
+	}
+	householderQR(a, m, n, b)
+	return triRank(a, n, n, tol)
+}

@@ -20,6 +20,17 @@ type rrhoSpecies struct {
 	comment string
 }
 
+// points returns m's heat capacities (J/(mol K)) at the benson
+// temperatures and its classical limits, the inputs of a fit.
+func (m rrhoSpecies) points() (cps []float64, cp0, cpInf float64) {
+	cps = make([]float64, len(benson))
+	for i, T := range benson {
+		cps[i] = m.cp(T)
+	}
+	cp0, cpInf = ClassicalLimits(m.nAtoms, m.linear, m.rotors)
+	return cps, cp0, cpInf
+}
+
 // cp returns the RRHO heat capacity in J/(mol K) at T (K).
 func (m rrhoSpecies) cp(T float64) float64 {
 	c := 4.0

@@ -107,11 +107,7 @@ func TestFitRoundTrip(t *testing.T) {
 func TestFitTenSpecies(t *testing.T) {
 	for _, m := range tenSpecies {
 		t.Run(m.name, func(t *testing.T) {
-			cps := make([]float64, len(benson))
-			for i, T := range benson {
-				cps[i] = m.cp(T)
-			}
-			cp0, cpInf := ClassicalLimits(m.nAtoms, m.linear, m.rotors)
+			cps, cp0, cpInf := m.points()
 			p, rep, err := Fit(m.hf, m.s, benson, cps, cp0, cpInf, FitOptions{})
 			require.NoError(t, err)
 			assert.True(t, rep.Extrapolated, "Benson points end at 1500 K, THigh is 5000 K")
@@ -206,11 +202,7 @@ func TestFitRejectsInvalid(t *testing.T) {
 
 func BenchmarkFit(b *testing.B) {
 	m := tenSpecies[8] // C2H6
-	cps := make([]float64, len(benson))
-	for i, T := range benson {
-		cps[i] = m.cp(T)
-	}
-	cp0, cpInf := ClassicalLimits(m.nAtoms, m.linear, m.rotors)
+	cps, cp0, cpInf := m.points()
 	for b.Loop() {
 		if _, _, err := Fit(m.hf, m.s, benson, cps, cp0, cpInf, FitOptions{}); err != nil {
 			b.Fatal(err)

@@ -23,11 +23,7 @@ func TestTail(t *testing.T) {
 		return s * h / 3
 	}
 	for _, m := range tenSpecies {
-		cps := make([]float64, len(benson))
-		for i, T := range benson {
-			cps[i] = m.cp(T)
-		}
-		cp0, cpInf := ClassicalLimits(m.nAtoms, m.linear, m.rotors)
+		cps, cp0, cpInf := m.points()
 		tail, err := EstimateTail(benson, cps, cp0, cpInf)
 		require.NoError(t, err, m.name)
 		cp1 := cps[len(cps)-1]
@@ -79,11 +75,7 @@ func TestTailHeld(t *testing.T) {
 // make it fit its own.
 func TestFitSharedWilhoit(t *testing.T) {
 	for _, m := range tenSpecies {
-		cps := make([]float64, len(benson))
-		for i, T := range benson {
-			cps[i] = m.cp(T)
-		}
-		cp0, cpInf := ClassicalLimits(m.nAtoms, m.linear, m.rotors)
+		cps, cp0, cpInf := m.points()
 		tail, err := EstimateTail(benson, cps, cp0, cpInf)
 		require.NoError(t, err)
 		for _, opt := range []FitOptions{{}, {TMid: 1200, THigh: 3000}, {THigh: 1200}} {

@@ -468,22 +468,10 @@ func (ws *wilhoitWork) reduce(T, Cp []float64, cp0, cpInf, B float64, nA int) (f
 		}
 		b[i] = (Cp[i] - cp0 - d*y*y) / Cp[i]
 	}
-	// Scale the columns to unit length: the rank test then measures
-	// collinearity rather than the size of yᵏ.
-	for k := range nA {
-		if !(cs[k] > 0) || math.IsInf(cs[k], 0) {
-			return 0, false
-		}
-		cs[k] = 1 / math.Sqrt(cs[k])
-	}
-	for i := range m {
-		for k := range nA {
-			a[i*nA+k] *= cs[k]
-		}
-	}
-	householderQR(a, m, nA, b)
-	// R is the upper triangle of the first nA rows (stride nA): contiguous.
-	if !triRank(a, nA, nA, 1e-10) {
+	// Unit-length columns: the rank test then measures collinearity rather
+	// than the size of yᵏ. R is the upper triangle of the first nA rows
+	// (stride nA): contiguous.
+	if !scaledQR(a, m, nA, b, cs, 1e-10) {
 		return 0, false
 	}
 	rss := 0.0

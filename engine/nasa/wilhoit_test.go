@@ -36,11 +36,7 @@ func TestClassicalLimits(t *testing.T) {
 
 func TestWilhoitFit(t *testing.T) {
 	for _, m := range tenSpecies {
-		cps := make([]float64, len(benson))
-		for i, T := range benson {
-			cps[i] = m.cp(T)
-		}
-		cp0, cpInf := ClassicalLimits(m.nAtoms, m.linear, m.rotors)
+		cps, cp0, cpInf := m.points()
 		w, err := FitWilhoit(benson, cps, cp0, cpInf)
 		require.NoError(t, err, m.name)
 		// Limits hold by construction of the form; tolerances are rounding
