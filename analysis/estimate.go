@@ -196,7 +196,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 	nAtoms, linear, rotors := shape(m)
 	e.cp0, e.cpInf = nasa.ClassicalLimits(nAtoms, linear, rotors)
 	e.model = newGroupThermo(g.Hf298, g.S298, benson.StdTemps[:], g.Cp[:])
-	e.model.extrapolate(e.cp0, e.cpInf)
+	e.model.continueAlongTail(e.cp0, e.cpInf)
 	return e, nil
 }
 

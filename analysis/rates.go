@@ -270,36 +270,41 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 }
 
 // reverseBound returns an upper bound of m's k_r(T, P) derived from the
-// thermochemistry of r, equal to it up to exactTo (K), when some species of
-// r is an estimate whose Kc above its last point would need a Wilhoit fit
-// (boundingThermo): k_r = k_f/Kc with ΔG°r bounded from above by the
-// products' upper and the reactants' lower G. ok is false when k_r is not
-// derived from Kc or needs no fit.
+// thermochemistry of r that needs no Wilhoit fit, equal to k_r up to
+// exactTo (K), when some species of r is an estimate whose Kc above its
+// last group temperature would need one (tailFrom): k_r = k_f/Kc with ΔG°r
+// bounded from above by the products' upper and the reactants' lower G
+// (gBound). ok is false when k_r is not derived from Kc or needs no fit.
 func reverseBound(m *rateModel, r *Reaction) (kr func(T, P float64) float64, exactTo float64, ok bool) {
 	if m.reverse != nil || m.kc == nil || r.reactants == nil {
 		return nil, 0, false
 	}
 	exactTo = math.Inf(1)
-	bound := func(side kinetics.Side, upper bool) kinetics.Side {
-		out := make(kinetics.Side, len(side))
-		for i, t := range side {
-			hi, lo, to := boundingThermo(t.Thermo)
-			out[i] = kinetics.Term{Coeff: t.Coeff, Thermo: lo}
-			if upper {
-				out[i].Thermo = hi
-			}
-			exactTo = math.Min(exactTo, to)
+	for _, side := range []kinetics.Side{r.reactants, r.products} {
+		for _, t := range side {
+			exactTo = math.Min(exactTo, tailFrom(t.Thermo))
 		}
-		return out
 	}
-	re, pr := bound(r.reactants, false), bound(r.products, true)
 	if math.IsInf(exactTo, 1) {
 		return nil, 0, false
 	}
-	dn := kinetics.DeltaN(r.reactants, r.products)
+	re, pr, to := r.reactants, r.products, exactTo
+	dn := kinetics.DeltaN(re, pr)
 	return func(T, P float64) float64 {
-		_, _, g := kinetics.Delta(re, pr, T)
-		return kinetics.ReverseRate(m.forward(T, P), kinetics.Kc(kinetics.Kp(g, T), dn, T))
+		if T <= to {
+			if k, ok := m.reverseRate(T, P); ok {
+				return k
+			}
+			return math.NaN()
+		}
+		dg := 0.0
+		for _, t := range pr {
+			dg += t.Coeff * gBound(t.Thermo, T, true)
+		}
+		for _, t := range re {
+			dg -= t.Coeff * gBound(t.Thermo, T, false)
+		}
+		return kinetics.ReverseRate(m.forward(T, P), kinetics.Kc(kinetics.Kp(dg, T), dn, T))
 	}, exactTo, true
 }
 

@@ -19,44 +19,46 @@ import (
 // Below the first point the first segment is extended. Above the last point
 // an estimate (group values, 300…1500 K) continues along nasa.Tail, the
 // Wilhoit curve its NASA-7 fit extrapolates with, fitted on first use (see
-// extrapolate); a thermo-table block of a file holds Cp at its last value.
+// continueAlongTail); a thermo-table block of a file holds Cp at its last value.
 // It needs no NASA-7 fit, so a mechanism's reactions can be checked without
 // fitting a polynomial to every species, and it agrees with the fit kiln
 // writes to within the fit's residuals at every temperature.
 type groupThermo struct {
 	t, cp, h, s []float64 // knots (K), Cp at the knots, H and S at the knots
-	tail        *lazyTail // nil: Cp held above the last knot
+	extrapolate bool      // above the last knot: tail (else Cp held)
+	tail        lazyTail
 }
 
 // lazyTail is the nasa.Tail of an estimate, fitted on first use: the
 // Wilhoit fit costs about 0.1 ms, and most species are never evaluated
-// above their last point (see boundingThermo).
+// above their last point (see gBound).
 type lazyTail struct {
 	cp0, cpInf float64 // classical limits, J/(mol K)
 	once       sync.Once
-	tail       nasa.Tail
+	tail       *nasa.Tail // allocated when fitted: most never are
 }
 
-// extrapolate makes g continue above its last knot along the Wilhoit curve
-// of its knots between the classical limits cp0 and cpInf (J/(mol K)).
-func (g *groupThermo) extrapolate(cp0, cpInf float64) {
-	g.tail = &lazyTail{cp0: cp0, cpInf: cpInf}
+// continueAlongTail makes g continue above its last knot along the Wilhoit
+// curve of its knots between the classical limits cp0 and cpInf
+// (J/(mol K)).
+func (g *groupThermo) continueAlongTail(cp0, cpInf float64) {
+	g.extrapolate, g.tail.cp0, g.tail.cpInf = true, cp0, cpInf
 }
 
 // above returns the tail above the last knot, fitting it on first use. When
 // the Wilhoit fit fails (the NASA-7 fit then fails too, and kiln writes
 // nothing) Cp is held at its last value.
 func (g *groupThermo) above() *nasa.Tail {
-	l := g.tail
+	l := &g.tail
 	l.once.Do(func() {
 		n := len(g.t)
 		tail, err := nasa.EstimateTail(g.t, g.cp, l.cp0, l.cpInf)
 		if err != nil {
 			tail = nasa.NewTail(nasa.Wilhoit{}, g.t[n-1], g.cp[n-1])
 		}
-		l.tail = tail
+		l.tail = &tail
 	})
-	return &l.tail
+	return l.tail
 }
 
 func newGroupThermo(hf298, s298 float64, T, cp []float64) *groupThermo {
@@ -119,7 +121,7 @@ func (g *groupThermo) knot(T float64) int {
 // Cp returns the heat capacity in J/(mol K).
 func (g *groupThermo) Cp(T float64) float64 {
 	k := g.knot(T)
-	if g.tail != nil && k == len(g.t)-1 {
+	if g.extrapolate && k == len(g.t)-1 {
 		return g.above().Cp(T)
 	}
 	a, b := g.segment(k)
@@ -132,7 +134,7 @@ func (g *groupThermo) H(T float64) float64 {
 	switch {
 	case k < 0:
 		return g.h[0] - g.dh(0, T, g.t[0])
-	case g.tail != nil && k == len(g.t)-1:
+	case g.extrapolate && k == len(g.t)-1:
 		return g.h[k] + g.above().DH(T)
 	}
 	return g.h[k] + g.dh(k, g.t[k], T)
@@ -144,52 +146,39 @@ func (g *groupThermo) S(T float64) float64 {
 	switch {
 	case k < 0:
 		return g.s[0] - g.ds(0, T, g.t[0])
-	case g.tail != nil && k == len(g.t)-1:
+	case g.extrapolate && k == len(g.t)-1:
 		return g.s[k] + g.above().DS(T)
 	}
 	return g.s[k] + g.ds(k, g.t[k], T)
 }
 
-// heldAbove is g with Cp held at cp above g's last knot (and g itself up to
-// it): with cp from nasa.TailRange, a bound on G(T) = H − T S of g's tail
-// that needs no Wilhoit fit (see boundingThermo).
-type heldAbove struct {
-	g  *groupThermo
-	cp float64 // J/(mol K)
+// tailFrom returns the temperature (K) above which th needs an estimate's
+// Wilhoit tail (fitted on first use): its last group temperature; +Inf for
+// every other model.
+func tailFrom(th kinetics.Thermo) float64 {
+	if g, ok := th.(*groupThermo); ok && g.extrapolate {
+		return g.t[len(g.t)-1]
+	}
+	return math.Inf(1)
 }
 
-// H returns the enthalpy in J/mol (see groupThermo.H).
-func (b heldAbove) H(T float64) float64 {
-	n := len(b.g.t) - 1
-	if T <= b.g.t[n] {
-		return b.g.H(T)
+// gBound returns a bound on th's G(T) = H − T S (J/mol) that needs no
+// Wilhoit fit: from above (upper) or below. Above tailFrom(th) Cp is held
+// at the low (upper) or high end of nasa.TailRange from the last knot;
+// elsewhere it is G itself.
+func gBound(th kinetics.Thermo, T float64, upper bool) float64 {
+	if g, ok := th.(*groupThermo); ok && g.extrapolate {
+		n := len(g.t) - 1
+		if t1 := g.t[n]; T > t1 {
+			lo, hi := nasa.TailRange(g.cp[n], g.tail.cp0, g.tail.cpInf)
+			cp := hi
+			if upper {
+				cp = lo
+			}
+			return g.h[n] + cp*(T-t1) - T*(g.s[n]+cp*math.Log(T/t1))
+		}
 	}
-	return b.g.h[n] + b.cp*(T-b.g.t[n])
-}
-
-// S returns the entropy in J/(mol K) (see groupThermo.S).
-func (b heldAbove) S(T float64) float64 {
-	n := len(b.g.t) - 1
-	if T <= b.g.t[n] {
-		return b.g.S(T)
-	}
-	return b.g.s[n] + b.cp*math.Log(T/b.g.t[n])
-}
-
-// boundingThermo returns models whose G(T) bounds th's from above (upper)
-// and below (lower) at every T and equals it, to the last bit, up to
-// exactTo (K): for an estimate's extrapolated model, Cp held above its last
-// point at the ends of nasa.TailRange; for every other model th itself
-// (exactTo = +Inf). A check that is decided by the bounds needs no Wilhoit
-// fit, and decides as the exact model would.
-func boundingThermo(th kinetics.Thermo) (upper, lower kinetics.Thermo, exactTo float64) {
-	g, ok := th.(*groupThermo)
-	if !ok || g.tail == nil {
-		return th, th, math.Inf(1)
-	}
-	n := len(g.t) - 1
-	lo, hi := nasa.TailRange(g.cp[n], g.tail.cp0, g.tail.cpInf)
-	return heldAbove{g, lo}, heldAbove{g, hi}, g.t[n]
+	return th.H(T) - T*th.S(T)
 }
 
 // fitResult is a NASA-7 fit made on first use.
