@@ -339,10 +339,11 @@ func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 // nonphysicalRate returns where and why the rate lines of d describe no
 // possible reaction ("" when they are usable): a Troe centre Fcent(T) that
 // is not positive and finite, or k_f(T) that is not a positive finite
-// number, at any temperature of rateGrid (pressure-dependent rates at 1 atm). A negative Troe temperature alone is
-// not an error (published sets carry a small negative T2, harmless there),
-// and one reaction of a `duplicate` pair may have a negative rate (pairs
-// fitted with a negative A): only a non-finite value is reported for those.
+// number, at any temperature of rateGrid (pressure-dependent rates at
+// 1 atm). A negative Troe temperature alone is not an error (published sets
+// carry a small negative T2, harmless there), and one reaction of a
+// `duplicate` pair may have a negative rate (pairs fitted with a negative
+// A): only a non-finite value is reported for those.
 func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.Span, string) {
 	span := d.Equation
 	if d.Rate != nil {
