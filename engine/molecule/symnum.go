@@ -130,7 +130,16 @@ func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, er
 	sc.hybrid = hybrid
 	sc.budget = budget
 	sc.gens = info.gens
+	defer sc.release()
 	return sc.total()
+}
+
+// release recycles the whole-molecule graph of sc, if one was built.
+func (sc *sigmaCalc) release() {
+	if sc.g != nil {
+		sc.g.release()
+		sc.g = nil
+	}
 }
 
 // symmetryInfo returns the full symmetry analysis of m (cached when m came
@@ -892,6 +901,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (prod, error) {
 		extra[x] = renum[extra[x]]
 	}
 	g := m.cgraphOfSub(atoms, sc.local, sc.rot, extra)
+	defer g.release()
 	root := g.refine(g.cell0)
 	s := &search{g: g, budget: sc.budget, root: root, ctx: sc.ctx}
 	defer func() { sc.budget -= s.steps }()
