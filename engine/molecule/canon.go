@@ -27,9 +27,10 @@ type cgraph struct {
 	rbuf      []int // backing array of idx, next and cnt
 	// backing arrays of nbr/bt, their lists and the initial colour keys,
 	// kept when the graph is recycled (see cgraphs)
-	lists     []([]int)
+	lists     [][]int
 	ints      []int
 	ckeys     [][8]int32
+	tarena    []int // holds the traces made by trace (see there)
 	rep, size []int // scratch of traceInto
 	ind       []int // scratch of child
 	tbuf      []int // scratch trace for comparisons
@@ -78,6 +79,7 @@ func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []in
 	g.ints = grow(g.ints, 2*deg+2*n)
 	g.ckeys = grow(g.ckeys, n)
 	g.n, g.deg = n, deg
+	g.tarena = g.tarena[:0]
 	lists, ints := g.lists, g.ints
 	g.nbr, g.bt = lists[:n:n], lists[n:]
 	nb, bt := ints[:0:deg], ints[deg:deg:2*deg]
@@ -314,8 +316,18 @@ func targetCell(rank []int) []int {
 // partition: for each cell in order, its start, size and the (neighbour cell,
 // bond code) list of a member. For a discrete partition it is the labelled
 // graph itself (the certificate).
+//
+// Traces are cut from an arena that lives as long as the graph: they stay
+// valid until g is released.
 func (g *cgraph) trace(rank []int) []int {
-	return g.traceInto(rank, make([]int, 0, 3*g.n+g.deg))
+	need := 3*g.n + g.deg
+	if cap(g.tarena)-len(g.tarena) < need {
+		g.tarena = make([]int, 0, max(8*need, 512))
+	}
+	k := len(g.tarena)
+	out := g.traceInto(rank, g.tarena[k:k:k+need])
+	g.tarena = g.tarena[:k+len(out)]
+	return out[:len(out):len(out)]
 }
 
 // traceInto appends the trace of rank to dst[:0] (see trace).
