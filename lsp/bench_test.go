@@ -248,9 +248,13 @@ func BenchmarkServerRSS20k(b *testing.B) {
 	}
 }
 
-// buildKiln builds cmd/kiln into a temporary directory.
+// buildKiln builds cmd/kiln into a temporary directory, or returns the
+// binary named by KILN_BENCH_BIN (to measure another build, e.g. main's).
 func buildKiln(b *testing.B) string {
 	b.Helper()
+	if bin := os.Getenv("KILN_BENCH_BIN"); bin != "" {
+		return bin
+	}
 	bin := filepath.Join(b.TempDir(), "kiln")
 	out, err := exec.Command("go", "build", "-o", bin, "kiln.dev/kiln/cmd/kiln").CombinedOutput()
 	if err != nil {
