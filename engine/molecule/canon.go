@@ -669,9 +669,9 @@ func (s *search) canonical() []int {
 
 // symmetryInfo is the result of a full symmetry analysis.
 type symmetryInfo struct {
-	labels []int   // canonical label per atom
-	gens   [][]int // generators of the automorphism group (atom permutations)
-	order  *big.Int
+	labels []int    // canonical label per atom
+	gens   [][]int  // generators of the automorphism group (atom permutations)
+	order  *big.Int // group order; nil for 1 (most molecules: no big.Int kept)
 	exact  bool
 	steps  int // largest search work spent on one component
 	comps  int // number of connected components
@@ -725,7 +725,7 @@ func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) sy
 		labels []int // local canonical labels
 		text   string
 	}
-	info := symmetryInfo{labels: make([]int, n), order: big.NewInt(1), exact: true, comps: len(comps)}
+	info := symmetryInfo{labels: make([]int, n), exact: true, comps: len(comps)}
 	cis := make([]compInfo, len(comps))
 	per := budget / max(1, len(comps))
 	local := make([]int, n)
@@ -763,7 +763,7 @@ func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) sy
 		}
 		for _, k := range sizes {
 			if k > 1 {
-				info.order.Mul(info.order, big.NewInt(int64(k)))
+				info.order = mulOrder(info.order, big.NewInt(int64(k)))
 			}
 		}
 		for _, gm := range s.gens {
@@ -818,7 +818,7 @@ func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) sy
 			d++
 		}
 		if d-c > 1 {
-			info.order.Mul(info.order, new(big.Int).MulRange(1, int64(d-c)))
+			info.order = mulOrder(info.order, new(big.Int).MulRange(1, int64(d-c)))
 		}
 		for e := c + 1; e < d; e++ {
 			// swap component c and e atom by atom through their labels
@@ -842,6 +842,14 @@ func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) sy
 		c = d
 	}
 	return info
+}
+
+// mulOrder returns order × k, where a nil order stands for 1.
+func mulOrder(order, k *big.Int) *big.Int {
+	if order == nil {
+		return k
+	}
+	return order.Mul(order, k)
 }
 
 // tieBreak turns a partition (ranks = cell starts) into a labelling by atom
@@ -931,9 +939,9 @@ func (m *Molecule) AutomorphismCount(maxSteps int) (*big.Int, bool) {
 	} else {
 		info = m.symmetry(budget, true)
 	}
-	n := new(big.Int).Set(info.order)
-	if !info.exact {
-		n.SetInt64(1)
+	n := big.NewInt(1)
+	if info.exact && info.order != nil {
+		n.Set(info.order)
 	}
 	for _, a := range m.Atoms {
 		if a.HCount > 1 {
