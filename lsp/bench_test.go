@@ -1,10 +1,14 @@
 package lsp
 
 import (
+	"bytes"
 	"context"
 	"fmt"
+	"io"
 	"math/rand/v2"
 	"os"
+	"os/exec"
+	"path/filepath"
 	"runtime"
 	"sort"
 	"strconv"
@@ -14,9 +18,14 @@ import (
 	"testing"
 	"time"
 
+	"go.lsp.dev/jsonrpc2"
+	"go.lsp.dev/protocol"
+	"go.lsp.dev/uri"
+
 	"kiln.dev/kiln/analysis"
 	"kiln.dev/kiln/analysis/ide"
 	"kiln.dev/kiln/internal/mechgen"
+	"kiln.dev/kiln/speciesfile"
 )
 
 // The server benchmarks run on the generated 10k-molecule mechanism
@@ -205,37 +214,172 @@ func BenchmarkCommentEdit20k(b *testing.B) {
 	})
 }
 
-// BenchmarkServerRSS20k opens the 20,000-species file, makes 20 SMILES
-// edits (each awaited), and reports the process's resident set size (peak
-// and current) and the live heap. Run it alone (-run '^$' -bench ServerRSS
-// -benchtime 1x): RSS is per process.
+// BenchmarkServerRSS20k measures the memory of the real server: it builds
+// the kiln binary, starts `kiln serve` as a child process, opens the
+// 20,000-species file over stdio, makes 20 SMILES edits (each awaited: a
+// prepareRename request is answered only from the analysis of the current
+// text) and reads the child's peak and current resident set size (VmHWM,
+// VmRSS) from /proc. The client (this process) is not counted. It also
+// reports the server's CPU time per edit and the time to the first
+// analysis. Sub-benchmarks run the server as `kiln serve` starts by
+// default and with a soft memory limit (--memory-limit 600MiB); the
+// server inherits the environment, so GOGC or GOMEMLIMIT set for the
+// benchmark apply to it.
 func BenchmarkServerRSS20k(b *testing.B) {
-	text := benchText()
-	for b.Loop() {
-		e := newFakeEditor(b, map[string]string{"big.kiln": text}, fakeOptions{inlayHints: true})
-		e.open("big.kiln")
-		for i := range 20 {
-			editSMILES(e, 1+i*37, i)
-			e.waitDiagnostics("big.kiln")
-		}
-		b.StopTimer()
-		runtime.GC()
-		var ms runtime.MemStats
-		runtime.ReadMemStats(&ms)
-		b.ReportMetric(float64(ms.HeapInuse)/(1<<20), "heap-MiB")
-		hwm, rss := procRSS()
-		b.ReportMetric(hwm, "peak-RSS-MiB")
-		b.ReportMetric(rss, "RSS-MiB")
-		if err := e.shutdown(); err != nil {
-			b.Fatal(err)
-		}
-		b.StartTimer()
+	if runtime.GOOS != "linux" {
+		b.Skip("reads /proc")
+	}
+	bin := buildKiln(b)
+	dir := b.TempDir()
+	file := filepath.Join(dir, "big.kiln")
+	if err := os.WriteFile(file, []byte(benchText()), 0o644); err != nil {
+		b.Fatal(err)
+	}
+	for _, c := range []struct{ name, limit string }{{"default", ""}, {"limit600MiB", "600MiB"}} {
+		b.Run(c.name, func(b *testing.B) {
+			for b.Loop() {
+				args := []string{"serve"}
+				if c.limit != "" {
+					args = append(args, "--memory-limit", c.limit)
+				}
+				serveAndEdit(b, bin, args, dir, file)
+			}
+		})
 	}
 }
 
-// procRSS returns VmHWM and VmRSS of this process in MiB (0 where unknown).
-func procRSS() (hwm, rss float64) {
-	data, err := os.ReadFile("/proc/self/status")
+// buildKiln builds cmd/kiln into a temporary directory, or returns the
+// binary named by KILN_BENCH_BIN (to measure another build, e.g. main's).
+func buildKiln(b *testing.B) string {
+	b.Helper()
+	if bin := os.Getenv("KILN_BENCH_BIN"); bin != "" {
+		return bin
+	}
+	bin := filepath.Join(b.TempDir(), "kiln")
+	out, err := exec.Command("go", "build", "-o", bin, "kiln.dev/kiln/cmd/kiln").CombinedOutput()
+	if err != nil {
+		b.Fatalf("building kiln: %v\n%s", err, out)
+	}
+	return bin
+}
+
+// serveAndEdit runs one server session: open file, 20 awaited edits, then
+// the measurements, shutdown and exit.
+func serveAndEdit(b *testing.B, bin string, args []string, dir, file string) {
+	b.Helper()
+	cmd := exec.Command(bin, args...)
+	cmd.Env = os.Environ()
+	stdin, err := cmd.StdinPipe()
+	if err != nil {
+		b.Fatal(err)
+	}
+	stdout, err := cmd.StdoutPipe()
+	if err != nil {
+		b.Fatal(err)
+	}
+	cmd.Stderr = os.Stderr
+	if err := cmd.Start(); err != nil {
+		b.Fatal(err)
+	}
+	defer cmd.Process.Kill()
+	ctx := context.Background()
+	conn := jsonrpc2.NewConn(jsonrpc2.NewStream(pipeConn{stdout, stdin}))
+	conn.Go(ctx, func(ctx context.Context, reply jsonrpc2.Replier, req jsonrpc2.Request) error {
+		if _, ok := req.(*jsonrpc2.Call); ok {
+			return reply(ctx, nil, nil)
+		}
+		return nil // publications and messages are not decoded
+	})
+	defer conn.Close()
+	call := func(method string, params any) {
+		c, cancel := context.WithTimeout(ctx, 2*time.Minute)
+		defer cancel()
+		// An error answer (no name to rename at the position) still comes
+		// after the analysis of the current text.
+		if _, err := conn.Call(c, method, params, nil); err != nil && c.Err() != nil {
+			b.Fatalf("%s: %v", method, err)
+		}
+	}
+	notify := func(method string, params any) {
+		if err := conn.Notify(ctx, method, params); err != nil {
+			b.Fatalf("%s: %v", method, err)
+		}
+	}
+	call("initialize", map[string]any{"processId": os.Getpid(), "rootUri": string(uri.File(dir)),
+		"capabilities": map[string]any{"textDocument": map[string]any{"inlayHint": map[string]any{"dynamicRegistration": false}}}})
+	notify("initialized", map[string]any{})
+	u := uri.File(file)
+	text := []byte(benchText())
+	lines := speciesfile.NewLineIndex(text)
+	await := func() {
+		call("textDocument/prepareRename", protocol.TextDocumentPositionParams{TextDocument: protocol.TextDocumentIdentifier{URI: u}})
+	}
+	t0 := time.Now()
+	notify("textDocument/didOpen", protocol.DidOpenTextDocumentParams{
+		TextDocument: protocol.TextDocumentItem{URI: u, LanguageID: "kiln", Version: 1, Text: string(text)},
+	})
+	await()
+	open := time.Since(t0)
+	cpu0 := childCPU(cmd.Process.Pid)
+	for k := range 20 {
+		decl := fmt.Sprintf("\nspecies M%d ", 1+k*37)
+		at := bytes.Index(text, []byte(decl)) + len(decl)
+		end := at + bytes.IndexByte(text[at:], '\n')
+		ps, pe := lines.Position(at), lines.Position(end)
+		c := contentChange{
+			Range: &protocol.Range{Start: protocol.Position{Line: uint32(ps.Line), Character: uint32(ps.UTF16)},
+				End: protocol.Position{Line: uint32(pe.Line), Character: uint32(pe.UTF16)}},
+			Text: "CCCC" + strings.Repeat("C", k%9) + "O" + strings.Repeat("C", k%5),
+		}
+		text, lines, _ = applyChange(text, lines, c)
+		notify("textDocument/didChange", didChangeParams{
+			TextDocument:   protocol.VersionedTextDocumentIdentifier{TextDocumentIdentifier: protocol.TextDocumentIdentifier{URI: u}, Version: int32(k + 2)},
+			ContentChanges: []contentChange{c},
+		})
+		await()
+	}
+	editCPU := childCPU(cmd.Process.Pid) - cpu0
+	b.StopTimer()
+	hwm, rss := procRSSOf(fmt.Sprintf("/proc/%d/status", cmd.Process.Pid))
+	b.ReportMetric(hwm, "peak-RSS-MiB")
+	b.ReportMetric(rss, "RSS-MiB")
+	b.ReportMetric(float64(open)/float64(time.Millisecond), "open-ms")
+	b.ReportMetric(float64(editCPU)/float64(time.Millisecond)/20, "server-cpu-ms/edit")
+	call("shutdown", nil)
+	notify("exit", nil)
+	if err := cmd.Wait(); err != nil {
+		b.Fatalf("kiln serve: %v", err)
+	}
+	b.StartTimer()
+}
+
+// pipeConn joins a child's stdout and stdin into one stream.
+type pipeConn struct {
+	io.Reader
+	io.WriteCloser
+}
+
+// childCPU returns the user and system CPU time of process pid so far, from
+// /proc/PID/stat (fields 14 and 15, in clock ticks of 1/100 s, the value
+// of USER_HZ on Linux).
+func childCPU(pid int) time.Duration {
+	data, err := os.ReadFile(fmt.Sprintf("/proc/%d/stat", pid))
+	if err != nil {
+		return 0
+	}
+	// The command name (field 2) is in parentheses and may hold spaces.
+	f := strings.Fields(string(data[bytes.LastIndexByte(data, ')')+1:]))
+	if len(f) < 13 {
+		return 0
+	}
+	ut, _ := strconv.ParseInt(f[11], 10, 64)
+	st, _ := strconv.ParseInt(f[12], 10, 64)
+	return time.Duration(ut+st) * 10 * time.Millisecond
+}
+
+// procRSSOf returns VmHWM and VmRSS in MiB from a /proc status file.
+func procRSSOf(status string) (hwm, rss float64) {
+	data, err := os.ReadFile(status)
 	if err != nil {
 		return 0, 0
 	}

@@ -9,7 +9,7 @@
 //	kiln plot SPECIES --file FILE -o OUT.svg
 //	kiln compare A.kiln B.kiln [--json] [--all] [--rate-factor F]
 //	kiln equilibrium FILE --mix "NAME:AMOUNT, …" [--temperature K] [--pressure P] [--adiabatic] [--volume] [--json]
-//	kiln serve [--log FILE]
+//	kiln serve [--log FILE] [--memory-limit SIZE]
 //	kiln version | help
 package main
 
@@ -185,8 +185,12 @@ Usage:
         --volume holds the mix's volume instead of the pressure.
         Exit 0 when computed, 1 when the file cannot give an equilibrium
         (a mix species without thermo, no convergence), 2 on usage or I/O.
-  kiln serve [--log FILE]
-        Run the language server on stdin/stdout.
+  kiln serve [--log FILE] [--memory-limit SIZE]
+        Run the language server on stdin/stdout. --memory-limit sets a soft
+        limit on the server's Go heap (600MiB, 1GiB, 800MB; off for none;
+        default: none, GOGC and GOMEMLIMIT apply as for any Go program);
+        near the limit the garbage collector runs more often, which costs
+        CPU time per edit.
   kiln version
   kiln help          (or --help / -h after any command)
 

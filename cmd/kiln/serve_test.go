@@ -5,6 +5,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
+	"math"
 	"testing"
 	"time"
 
@@ -51,5 +52,35 @@ func TestServeExits(t *testing.T) {
 			t.Fatalf("serve did not exit (shutdown=%v)", shutdown)
 		}
 		inW.Close()
+	}
+}
+
+// TestServeMemoryLimit: --memory-limit reads sizes with decimal and binary
+// units, "off" lifts any limit, no flag sets nothing, and anything else is a
+// usage error.
+func TestServeMemoryLimit(t *testing.T) {
+	for _, c := range []struct {
+		flag string
+		want int64
+		set  bool
+	}{
+		{"", 0, false},
+		{"off", math.MaxInt64, true},
+		{"600MiB", 600 << 20, true},
+		{"1GiB", 1 << 30, true},
+		{"800MB", 800e6, true},
+		{"512 KiB", 512 << 10, true},
+		{"123456789", 123456789, true},
+		{"300B", 300, true},
+	} {
+		got, set, err := serveMemoryLimit(c.flag)
+		require.NoError(t, err, c.flag)
+		assert.Equal(t, c.want, got, c.flag)
+		assert.Equal(t, c.set, set, c.flag)
+	}
+	for _, bad := range []string{"lots", "-5MiB", "0", "1.5GiB", "MiB", "9999999999GiB"} {
+		_, _, err := serveMemoryLimit(bad)
+		var u usageError
+		assert.ErrorAs(t, err, &u, bad)
 	}
 }

@@ -19,7 +19,7 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 	if len(g.nbr[i])+a.HCount < 2 {
 		return "", counts, false
 	}
-	counts[ligandRank["H"]] = a.HCount
+	counts[ligandRank["H"]] = int32(a.HCount)
 	skip := -1 // the implied partner: =C of Cd, ≡C of Ct, =O of CO
 	switch centre {
 	case "Cd", "CO", "NA":
@@ -142,7 +142,7 @@ func addGroups(g *graph, l lookup, est *Result) error {
 	n := len(g.m.Atoms)
 	// A molecule has few distinct groups: a linear scan of list is cheaper
 	// than a map keyed by (centre, counts).
-	list := make([]acc, 0, 8)
+	list := make([]acc, 0, 16)
 	// owner[i] is the list index of the group that accounts for atom i
 	// (-1: none yet); a second claim is an error.
 	owner := make([]int, n)

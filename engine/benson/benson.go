@@ -280,19 +280,19 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	est.Corrections = slices.Grow(est.Corrections, k)
 	if est.Multiplicity > 1 {
 		est.Corrections = append(est.Corrections, Term{
-			Name: "spin degeneracy R ln " + strconv.Itoa(est.Multiplicity), Count: 1,
+			Name: statTermName(spinTermNames[:], "spin degeneracy R ln ", est.Multiplicity), Count: 1,
 			S298: R * math.Log(float64(est.Multiplicity)), Source: "statistical mechanics",
 		})
 	}
 	if lnSigma > 0 {
 		est.Corrections = append(est.Corrections, Term{
-			Name: "symmetry -R ln " + est.SymmetryExact, Count: 1,
+			Name: symmetryTermName(est.SymmetryNumber, est.SymmetryExact), Count: 1,
 			S298: -R * lnSigma, Source: "statistical mechanics",
 		})
 	}
 	if est.OpticalIsomers > 1 {
 		est.Corrections = append(est.Corrections, Term{
-			Name: "optical isomers R ln " + strconv.Itoa(est.OpticalIsomers), Count: 1,
+			Name: statTermName(opticalTermNames[:], "optical isomers R ln ", est.OpticalIsomers), Count: 1,
 			S298: R * math.Log(float64(est.OpticalIsomers)), Source: "statistical mechanics",
 		})
 	}
@@ -300,6 +300,37 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	est.Class = classify(m, g)
 	est.finish()
 	return est, nil
+}
+
+// Names of the statistical-mechanics terms for the common small values,
+// made once and shared by every estimate (read only).
+var (
+	spinTermNames     = statTermNames("spin degeneracy R ln ")
+	symmetryTermNames = statTermNames("symmetry -R ln ")
+	opticalTermNames  = statTermNames("optical isomers R ln ")
+)
+
+func statTermNames(prefix string) (out [65]string) {
+	for k := range out {
+		out[k] = prefix + strconv.Itoa(k)
+	}
+	return out
+}
+
+// statTermName is prefix followed by n, from names when n is small.
+func statTermName(names []string, prefix string, n int) string {
+	if n >= 0 && n < len(names) {
+		return names[n]
+	}
+	return prefix + strconv.Itoa(n)
+}
+
+// symmetryTermName names the symmetry term of σ (exact: σ in decimal).
+func symmetryTermName(sigma int, exact string) string {
+	if sigma > 0 && sigma < len(symmetryTermNames) && exact == strconv.Itoa(sigma) {
+		return symmetryTermNames[sigma]
+	}
+	return "symmetry -R ln " + exact
 }
 
 // finish puts the groups and flags of e in their canonical order and sets

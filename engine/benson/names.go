@@ -85,7 +85,7 @@ func ParseGroupName(s string) (string, error) {
 			}
 			rest = rest[j:]
 		}
-		counts[li] += n
+		counts[li] += int32(n) // a count past the int32 range fails the total check below
 		total += n
 	}
 	if total != want {
@@ -94,8 +94,9 @@ func ParseGroupName(s string) (string, error) {
 	return groupName(centre, counts), nil
 }
 
-// ligCounts counts neighbours by type, indexed by ligandRank.
-type ligCounts [25]int
+// ligCounts counts neighbours by type, indexed by ligandRank (int32: an
+// accumulator of a group is copied and compared per atom).
+type ligCounts [25]int32
 
 // groupName writes a normalised group name from a centre and neighbour counts.
 func groupName(centre string, counts ligCounts) string {
@@ -115,7 +116,7 @@ func groupName(centre string, counts ligCounts) string {
 		b.WriteString(lig)
 		b.WriteByte(')')
 		if n > 1 {
-			b.WriteString(strconv.Itoa(n))
+			b.WriteString(strconv.Itoa(int(n)))
 		}
 	}
 	return b.String()

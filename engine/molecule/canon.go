@@ -5,6 +5,7 @@ import (
 	"math/big"
 	"slices"
 	"strings"
+	"sync"
 )
 
 // DefaultSearchWork is the work budget of the symmetry search used by
@@ -23,6 +24,13 @@ type cgraph struct {
 	keys      []uint64
 	idx, next []int
 	cnt       []int
+	rbuf      []int // backing array of idx, next and cnt
+	// backing arrays of nbr/bt, their lists and the initial colour keys,
+	// kept when the graph is recycled (see cgraphs)
+	lists     [][]int
+	ints      []int
+	ckeys     [][8]int32
+	tarena    []int // holds the traces made by trace (see there)
 	rep, size []int // scratch of traceInto
 	ind       []int // scratch of child
 	tbuf      []int // scratch trace for comparisons
@@ -66,9 +74,14 @@ func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []in
 			}
 		}
 	}
-	lists := make([][]int, 2*n)
-	g := &cgraph{n: n, deg: deg, nbr: lists[:n:n], bt: lists[n:]}
-	ints := make([]int, 2*deg+2*n)
+	g := cgraphs.Get().(*cgraph)
+	g.lists = grow(g.lists, 2*n)
+	g.ints = grow(g.ints, 2*deg+2*n)
+	g.ckeys = grow(g.ckeys, n)
+	g.n, g.deg = n, deg
+	g.tarena = g.tarena[:0]
+	lists, ints := g.lists, g.ints
+	g.nbr, g.bt = lists[:n:n], lists[n:]
 	nb, bt := ints[:0:deg], ints[deg:deg:2*deg]
 	for k, i := range atoms {
 		s := len(nb)
@@ -84,7 +97,7 @@ func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []in
 	// Every key field is small (element number, mass number of at most
 	// three digits, charge, hydrogens, radical electrons, flags, degree,
 	// an extra colour numbered below the atom count): int32 keeps the order.
-	keys := make([][8]int32, n)
+	keys := g.ckeys
 	idx := ints[2*deg : 2*deg+n : 2*deg+n]
 	for k := range idx {
 		a := m.Atoms[atoms[k]]
@@ -112,6 +125,29 @@ func (m *Molecule) cgraphOfSub(atoms []int, local []int, skip []bool, extra []in
 	return g
 }
 
+// cgraphs recycles coloured graphs with their scratch buffers: a symmetry
+// analysis builds one for the molecule and one for every rigid fragment,
+// each used for one search and then released (release). Only the
+// buffers are shared; a graph in use belongs to one goroutine.
+var cgraphs = sync.Pool{New: func() any { return new(cgraph) }}
+
+// grow returns s resliced to length n, reallocated when its capacity is
+// short (contents are not kept).
+func grow[T any](s []T, n int) []T {
+	if cap(s) < n {
+		return make([]T, n)
+	}
+	return s[:n]
+}
+
+// release returns g to the pool; neither g nor any slice of it (nbr, bt,
+// cell0) may be used afterwards. Partitions returned by refine and
+// traces returned by trace are the caller's and stay valid.
+func (g *cgraph) release() {
+	g.nbr, g.bt, g.cell0 = nil, nil, nil
+	cgraphs.Put(g)
+}
+
 // mix is a 64-bit finaliser (splitmix64) used to hash neighbour codes.
 func mix(x uint64) uint64 {
 	x += 0x9e3779b97f4a7c15
@@ -134,10 +170,9 @@ func (g *cgraph) refine(rank []int) []int {
 	if n == 0 {
 		return out
 	}
-	if g.keys == nil {
-		ints := make([]int, 3*n+1)
-		g.keys, g.idx, g.next = make([]uint64, n), ints[:n:n], ints[n:2*n:2*n]
-		g.cnt = ints[2*n:]
+	if len(g.keys) != n {
+		g.keys, g.rbuf = grow(g.keys, n), grow(g.rbuf, 3*n+1)
+		g.idx, g.next, g.cnt = g.rbuf[:n:n], g.rbuf[n:2*n:2*n], g.rbuf[2*n:3*n+1]
 	}
 	keys, order, cnt := g.keys, g.idx, g.cnt
 	cur, next := out, g.next
@@ -281,8 +316,18 @@ func targetCell(rank []int) []int {
 // partition: for each cell in order, its start, size and the (neighbour cell,
 // bond code) list of a member. For a discrete partition it is the labelled
 // graph itself (the certificate).
+//
+// Traces are cut from an arena that lives as long as the graph: they stay
+// valid until g is released.
 func (g *cgraph) trace(rank []int) []int {
-	return g.traceInto(rank, make([]int, 0, 3*g.n+g.deg))
+	need := 3*g.n + g.deg
+	if cap(g.tarena)-len(g.tarena) < need {
+		g.tarena = make([]int, 0, max(8*need, 512))
+	}
+	k := len(g.tarena)
+	out := g.traceInto(rank, g.tarena[k:k:k+need])
+	g.tarena = g.tarena[:k+len(out)]
+	return out[:len(out):len(out)]
 }
 
 // traceInto appends the trace of rank to dst[:0] (see trace).
@@ -624,9 +669,9 @@ func (s *search) canonical() []int {
 
 // symmetryInfo is the result of a full symmetry analysis.
 type symmetryInfo struct {
-	labels []int   // canonical label per atom
-	gens   [][]int // generators of the automorphism group (atom permutations)
-	order  *big.Int
+	labels []int    // canonical label per atom
+	gens   [][]int  // generators of the automorphism group (atom permutations)
+	order  *big.Int // group order; nil for 1 (most molecules: no big.Int kept)
 	exact  bool
 	steps  int // largest search work spent on one component
 	comps  int // number of connected components
@@ -680,7 +725,7 @@ func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) sy
 		labels []int // local canonical labels
 		text   string
 	}
-	info := symmetryInfo{labels: make([]int, n), order: big.NewInt(1), exact: true, comps: len(comps)}
+	info := symmetryInfo{labels: make([]int, n), exact: true, comps: len(comps)}
 	cis := make([]compInfo, len(comps))
 	per := budget / max(1, len(comps))
 	local := make([]int, n)
@@ -694,6 +739,7 @@ func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) sy
 		if discrete(root, seen[:len(atoms)]) {
 			// Refinement alone told every atom apart: the refined partition
 			// is the only leaf of the search, and the group is trivial.
+			g.release()
 			for k, a := range atoms {
 				info.labels[a] = root[k]
 			}
@@ -707,6 +753,7 @@ func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) sy
 			sizes, exact = s.automorphisms()
 		}
 		labels := s.canonical()
+		g.release()
 		if labels == nil { // budget ran out before any leaf: use the refined partition order
 			labels = tieBreak(root)
 		}
@@ -716,7 +763,7 @@ func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) sy
 		}
 		for _, k := range sizes {
 			if k > 1 {
-				info.order.Mul(info.order, big.NewInt(int64(k)))
+				info.order = mulOrder(info.order, big.NewInt(int64(k)))
 			}
 		}
 		for _, gm := range s.gens {
@@ -771,7 +818,7 @@ func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) sy
 			d++
 		}
 		if d-c > 1 {
-			info.order.Mul(info.order, new(big.Int).MulRange(1, int64(d-c)))
+			info.order = mulOrder(info.order, new(big.Int).MulRange(1, int64(d-c)))
 		}
 		for e := c + 1; e < d; e++ {
 			// swap component c and e atom by atom through their labels
@@ -795,6 +842,14 @@ func (m *Molecule) symmetryCtx(ctx context.Context, budget int, withAut bool) sy
 		c = d
 	}
 	return info
+}
+
+// mulOrder returns order × k, where a nil order stands for 1.
+func mulOrder(order, k *big.Int) *big.Int {
+	if order == nil {
+		return k
+	}
+	return order.Mul(order, k)
 }
 
 // tieBreak turns a partition (ranks = cell starts) into a labelling by atom
@@ -884,9 +939,9 @@ func (m *Molecule) AutomorphismCount(maxSteps int) (*big.Int, bool) {
 	} else {
 		info = m.symmetry(budget, true)
 	}
-	n := new(big.Int).Set(info.order)
-	if !info.exact {
-		n.SetInt64(1)
+	n := big.NewInt(1)
+	if info.exact && info.order != nil {
+		n.Set(info.order)
 	}
 	for _, a := range m.Atoms {
 		if a.HCount > 1 {

@@ -25,13 +25,21 @@ func (m *Molecule) ringBondFlags() []bool {
 func (m *Molecule) computeRingBondFlags() []bool {
 	n := len(m.Atoms)
 	inRing := make([]bool, len(m.Bonds))
-	ints := make([]int, 2*n)
+	type frame struct{ v, parentBond, next int }
+	// Scratch on the stack for molecules of up to 32 atoms (nearly all).
+	var (
+		intBuf   [64]int
+		frameBuf [32]frame
+	)
+	ints, stack := intBuf[:0], frameBuf[:0]
+	if 2*n > len(intBuf) {
+		ints, stack = make([]int, 0, 2*n), make([]frame, 0, n)
+	}
+	ints = ints[:2*n]
 	disc, low := ints[:n:n], ints[n:]
 	for i := range disc {
 		disc[i] = -1
 	}
-	type frame struct{ v, parentBond, next int }
-	stack := make([]frame, 0, n)
 	t := 0
 	for root := 0; root < n; root++ {
 		if disc[root] >= 0 {

@@ -101,12 +101,12 @@ func ParseSMILES(s string) (*Molecule, error) {
 }
 
 // newParser sizes the parser's per-atom and per-bond slices from the atom
-// count of a valid s (bracket atoms, organic-subset atoms and '*' outside
+// and ring-closure counts of a valid s (bracket atoms, organic-subset atoms and '*' outside
 // brackets), so reading a valid SMILES does not regrow them and the atoms
 // the molecule keeps have no unused capacity; an invalid s may need more,
 // which append handles.
 func newParser(s string) *parser {
-	n := 0
+	n, rc := 0, 0 // atoms, ring-closure digits and %nn labels
 	inBracket := false
 	for i := 0; i < len(s); i++ {
 		switch c := s[i]; {
@@ -118,16 +118,24 @@ func newParser(s string) *parser {
 		case inBracket:
 		case c >= 'A' && c <= 'Z', c == '*', c == 'b', c == 'c', c == 'n', c == 'o', c == 'p', c == 's':
 			n++
+		case c >= '0' && c <= '9':
+			rc++
+		case c == '%':
+			rc++
+			i += 2
 		}
 	}
 	n = min(n, MaxHeavyAtoms+1)
+	// Every atom but the first of each part is bonded to the atom before
+	// it, and every ring closure (a label written twice) adds one bond.
+	nb := max(n-1+(rc+1)/2, 0)
 	// The bool and [][]int slices share one backing array each; their
 	// capacities are limited, so an append past the estimate reallocates
 	// only that slice.
 	bools := make([]bool, 3*n+4)
 	lists := make([][]int, n)
 	return &parser{s: s,
-		atoms: make([]Atom, 0, n), bonds: make([]Bond, 0, n+4),
+		atoms: make([]Atom, 0, n), bonds: make([]Bond, 0, nb),
 		organic: bools[:0:n], hadPrev: bools[n : n : 2*n], aromIn: bools[2*n : 2*n : 3*n+4],
 		nbr:      lists[:0:n],
 		bracketH: make([]int, 0, n)}

@@ -9,6 +9,7 @@ import (
 	"slices"
 	"strconv"
 	"strings"
+	"sync"
 )
 
 // ErrWorkLimit is wrapped by every error a per-structure computation
@@ -130,7 +131,19 @@ func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, er
 	sc.hybrid = hybrid
 	sc.budget = budget
 	sc.gens = info.gens
+	defer sc.release()
 	return sc.total()
+}
+
+// release recycles sc and the whole-molecule graph it built, if any;
+// nothing of sc may be used afterwards.
+func (sc *sigmaCalc) release() {
+	if sc.g != nil {
+		sc.g.release()
+	}
+	bufs, out := sc.bufs, sc.outBuf
+	*sc = sigmaCalc{bufs: bufs, outBuf: out}
+	sigmaCalcs.Put(sc)
 }
 
 // symmetryInfo returns the full symmetry analysis of m (cached when m came
@@ -190,15 +203,34 @@ type sigmaCalc struct {
 	marked  []int   // atoms with a written tetrahedral mark, nil until known
 	hybrid  []bool  // per atom: in a conjugated radical (or cation) system, nil if none
 	outBuf  []int   // the list outside returns, reused
+	bufs    sigmaBufs
 	// parent bond of the fragment being analysed
 	pAtom, pNbr int
 }
 
+// sigmaBufs are the backing arrays of a sigmaCalc, kept when it is
+// recycled (see sigmaCalcs).
+type sigmaBufs struct {
+	scratch, ints []int
+	flags         []bool
+	frags         [][]int
+}
+
+// sigmaCalcs recycles the per-molecule state of σ (released by release):
+// every estimate computes one σ.
+var sigmaCalcs = sync.Pool{New: func() any { return new(sigmaCalc) }}
+
 func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 	n := len(m.Atoms)
-	scratch := make([]int, 3*n)
-	flags := make([]bool, n+len(m.Bonds))
-	sc := &sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: scratch[:n:n], lp: scratch[n : 2*n : 2*n], virtual: flags[:n:n]}
+	sc := sigmaCalcs.Get().(*sigmaCalc)
+	bufs, out := sc.bufs, sc.outBuf
+	bufs.scratch = grow(bufs.scratch, 3*n)
+	bufs.flags = grow(bufs.flags, n+len(m.Bonds))
+	bufs.ints = grow(bufs.ints, 3*n)
+	scratch, flags := bufs.scratch, bufs.flags
+	clear(flags)
+	*sc = sigmaCalc{ctx: ctx, m: m, n: n, classes: classes, local: scratch[:n:n], lp: scratch[n : 2*n : 2*n], virtual: flags[:n:n],
+		outBuf: out[:0], bufs: bufs}
 	inRing := m.ringBondFlags()
 	sc.inRing = inRing
 	sc.rot = flags[n:]
@@ -214,7 +246,7 @@ func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 	}
 	// Fragments are numbered in order of their first atom; each lists its
 	// atoms ascending, all lists in one array.
-	ints := make([]int, 3*n)
+	ints := bufs.ints
 	id, members := ints[n:2*n:2*n], ints[2*n:]
 	sc.frag = ints[:n:n]
 	for i := range id {
@@ -230,7 +262,8 @@ func newSigmaCalc(ctx context.Context, m *Molecule, classes []int) *sigmaCalc {
 		sc.frag[i] = id[r]
 		sizes[id[r]]++
 	}
-	sc.frags = make([][]int, len(sizes))
+	sc.frags = grow(sc.bufs.frags, len(sizes))
+	sc.bufs.frags = sc.frags
 	start := 0
 	for f, k := range sizes {
 		sc.frags[f] = members[start : start : start+k]
@@ -892,6 +925,7 @@ func (sc *sigmaCalc) fragment(f, pAtom, pNbr int) (prod, error) {
 		extra[x] = renum[extra[x]]
 	}
 	g := m.cgraphOfSub(atoms, sc.local, sc.rot, extra)
+	defer g.release()
 	root := g.refine(g.cell0)
 	s := &search{g: g, budget: sc.budget, root: root, ctx: sc.ctx}
 	defer func() { sc.budget -= s.steps }()
