@@ -84,7 +84,7 @@ func TestKeteneFromGroups(t *testing.T) {
 // Structures whose groups are not in the tables are refused with the group
 // named, never estimated without it.
 func TestHeteroRefusals(t *testing.T) {
-	for _, smi := range []string{"CNCl", "c1cc[nH]c1", "C/N=N/C", "CCN=O", "NC#CC#N", "CC(Cl)=O", "ClC(Cl)Cl", "ClC(Cl)(Cl)Cl",
+	for _, smi := range []string{"CNCl", "c1cc[nH]c1", "C/N=N/C", "CCN=O", "NC#CC#N", "CC(Cl)=O", "ClC(Cl)(Cl)Cl",
 		"CC(C)S(=O)C(C)C", "C=S", "CC(C)=S", "C=C=S", "CC(=S)OC", "C=NC", "CC#CC#N"} {
 		m, err := molecule.ParseSMILES(smi)
 		require.NoError(t, err)
@@ -172,6 +172,12 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"CS[CH2]", "primary", true},  // α-thio likewise
 		{"[CH2]CBr", "primary", false},
 		{"C[CH]Br", "alpha-chloro", true},
+		{"[C](Cl)(Cl)Cl", "alpha-trichloro", false},
+		{"[CH](Cl)Cl", "alpha-dichloro", false},
+		{"[C](F)(F)F", "alpha-trifluoro", false},
+		{"[CH](F)F", "alpha-difluoro", false},
+		{"C[C](Cl)Cl", "alpha-dichloro", true}, // substituted centre: the halomethane's increment
+		{"C=C[C](Cl)Cl", "allylic", true},      // a further stabiliser: the general rule
 		{"c1cc[c]s1", "vinylic", true},
 		{"c1cc[c]o1", "vinylic", true},
 		{"CC=[CH]", "vinylic", false},
