@@ -127,3 +127,46 @@ const widenPolyhalogen = 4.0
 // bonds of such rings are stronger than a vinylic one (furan's α C–H near
 // 120 kcal/mol against 110.7; from memory), so the estimate is flagged.
 const heteroarylSite = "σ radical on a heteroaromatic ring (vinylic increment used; the ring's C–H bond is stronger)"
+
+// polyhaloSites are the bond-dissociation increments (hbi_nsx.tsv) of
+// radical centres bearing two or three halogens of one element, measured on
+// the halomethanes X2CH–H and X3C–H.
+var polyhaloSites = map[string][4]string{
+	"Cl": {2: "alpha-dichloro", 3: "alpha-trichloro"},
+	"F":  {2: "alpha-difluoro", 3: "alpha-trifluoro"},
+}
+
+// polyhaloSite classifies an sp3 carbon radical centre i bearing two or
+// three halogens of one element (Cl or F) and no other stabilising
+// neighbour: its site is the X2CH–H or X3C–H increment. missing notes a
+// centre that also has another heavy neighbour (CH3CCl2•): the increment is
+// the halomethane's, and substitution lowers D(R–H) by a few kcal/mol. ok is
+// false for any other centre (mixed halogens, bromine, a further stabilising
+// neighbour), which the general stabiliser rule of radical.go handles.
+func (g *graph) polyhaloSite(i int) (site, missing string, ok bool) {
+	element, n, others := "", 0, 0
+	for _, j := range g.nbr[i] {
+		switch e := g.m.Atoms[j].Element; e {
+		case "F", "Cl", "Br", "I":
+			if element != "" && e != element {
+				return "", "", false
+			}
+			element = e
+			n++
+		default:
+			if g.stabiliserOf(j) >= 0 {
+				return "", "", false
+			}
+			others++
+		}
+	}
+	sites, known := polyhaloSites[element]
+	if !known || n < 2 || n > 3 {
+		return "", "", false
+	}
+	site = sites[n]
+	if others > 0 {
+		missing = site + " radical site on a substituted carbon (the halomethane's increment is used; substitution lowers D(R–H) by a few kcal/mol)"
+	}
+	return site, missing, true
+}

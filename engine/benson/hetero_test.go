@@ -58,6 +58,9 @@ func TestHeteroGroupsAssigned(t *testing.T) {
 		{"C=CBr", []string{"Cd-(H)2", "Cd-(Br)(H)"}},
 		{"CC(C)Br", []string{"C-(C)(H)3", "C-(Br)(C)2(H)"}},
 		{"CC(C)(C)Br", []string{"C-(C)(H)3", "C-(Br)(C)3"}},
+		{"Sc1ccccc1", []string{"Cb-(H)", "Cb-(S)", "S-(Cb)(H)"}},
+		{"CSc1ccccc1", []string{"Cb-(H)", "Cb-(S)", "S-(Cb)(C)", "C-(S)(H)3"}},
+		{"c1ccc(cc1)Sc1ccccc1", []string{"Cb-(H)", "Cb-(S)", "S-(Cb)2"}},
 	}
 	for _, c := range cases {
 		if c.groups == nil {
@@ -81,7 +84,7 @@ func TestKeteneFromGroups(t *testing.T) {
 // Structures whose groups are not in the tables are refused with the group
 // named, never estimated without it.
 func TestHeteroRefusals(t *testing.T) {
-	for _, smi := range []string{"CNCl", "c1cc[nH]c1", "C/N=N/C", "CCN=O", "NC#CC#N", "CC(Cl)=O", "ClC(Cl)Cl", "ClC(Cl)(Cl)Cl", "Sc1ccccc1",
+	for _, smi := range []string{"CNCl", "c1cc[nH]c1", "C/N=N/C", "CCN=O", "NC#CC#N", "CC(F)=O", "ClC(Cl)(Cl)Cl",
 		"CC(C)S(=O)C(C)C", "C=S", "CC(C)=S", "C=C=S", "CC(=S)OC", "C=NC", "CC#CC#N"} {
 		m, err := molecule.ParseSMILES(smi)
 		require.NoError(t, err)
@@ -169,6 +172,12 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"CS[CH2]", "primary", true},  // α-thio likewise
 		{"[CH2]CBr", "primary", false},
 		{"C[CH]Br", "alpha-chloro", true},
+		{"[C](Cl)(Cl)Cl", "alpha-trichloro", false},
+		{"[CH](Cl)Cl", "alpha-dichloro", false},
+		{"[C](F)(F)F", "alpha-trifluoro", false},
+		{"[CH](F)F", "alpha-difluoro", false},
+		{"C[C](Cl)Cl", "alpha-dichloro", true}, // substituted centre: the halomethane's increment
+		{"C=C[C](Cl)Cl", "allylic", true},      // a further stabiliser: the general rule
 		{"c1cc[c]s1", "vinylic", true},
 		{"c1cc[c]o1", "vinylic", true},
 		{"CC=[CH]", "vinylic", false},

@@ -29,7 +29,9 @@ import (
 // neighbours), allylic (next to Cd, Ca or Ct), benzylic (next to Cb), vinylic
 // (on Cd), phenyl (on Cb), acyl (on CO), α-hydroxy and α-alkoxy (sp3 carbon
 // next to O bearing H or not), α-amino, α-chloro and α-fluoro (next to N, Cl
-// or F, see hetero.go), alkoxy (on O), phenoxy (O on Cb), peroxy (O on O).
+// or F, see hetero.go), α,α-dichloro, -trichloro, -difluoro and -trifluoro
+// (two or three halogens of one element, hetero_sx.go), alkoxy (on O),
+// phenoxy (O on Cb), peroxy (O on O).
 // Sites outside this list use the nearest one and are reported in Missing.
 //
 // One answer per molecule: the site type is a function of the graph, never
@@ -189,6 +191,9 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 			return "vinylic", "ethynyl/allenyl radical site", "", nil
 		}
 		if g.typ[i] == "C" {
+			if site, missing, ok := g.polyhaloSite(i); ok { // hetero_sx.go
+				return site, missing, "", nil
+			}
 			if best, several := g.stabilisation(i); best >= 0 {
 				s := stabilisers[best]
 				missing := s.missing

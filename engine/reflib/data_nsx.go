@@ -19,8 +19,9 @@ package reflib
 //     data set as published (Smith et al., 1999), with ΔHf°298 and S°298 those
 //     the coefficients imply.
 const (
-	srcNASA9 = "McBride, Zehe & Gordon, NASA Glenn coefficients for calculating thermodynamic properties of individual species, NASA/TP-2002-211556 (2002): NASA-9 coefficients and ΔHf°298 as published, Cp refitted to NASA-7 by kiln's polynomial fit; S°298 from the NASA-9 coefficients"
-	srcGRI30 = "NASA-7 coefficients of the GRI-Mech 3.0 thermodynamic data set (Smith, Golden, Frenklach, Moriarty, Eiteneer, Goldenberg, Bowman, Hanson, Song, Gardiner, Lissianski, Qin, 1999) as published; ΔHf°298 and S°298 as implied by the coefficients"
+	srcNASA9  = "McBride, Zehe & Gordon, NASA Glenn coefficients for calculating thermodynamic properties of individual species, NASA/TP-2002-211556 (2002): NASA-9 coefficients and ΔHf°298 as published, Cp refitted to NASA-7 by kiln's polynomial fit; S°298 from the NASA-9 coefficients"
+	srcTM4513 = "McBride, Gordon & Reno, Coefficients for calculating thermodynamic and transport properties of individual species, NASA TM-4513 (1993): NASA-7 coefficients (298.15–1000–5000 K) as published, used to 3500 K; ΔHf°298 and S°298 as implied by the coefficients"
+	srcGRI30  = "NASA-7 coefficients of the GRI-Mech 3.0 thermodynamic data set (Smith, Golden, Frenklach, Moriarty, Eiteneer, Goldenberg, Bowman, Hanson, Song, Gardiner, Lissianski, Qin, 1999) as published; ΔHf°298 and S°298 as implied by the coefficients"
 )
 
 // nasa9 holds the two NASA-9 blocks of a species: a1…a7, b1, b2 for
@@ -275,6 +276,17 @@ var nsxEntries = []entry{
 			hi: [9]float64{1.529279337e+06, -6.976954760e+03, 1.694154931e+01, -1.265053995e-03, 2.344766734e-07, -2.333227421e-11, 9.632834730e-16, 2.806318171e+04, -7.949453510e+01},
 		},
 		source: srcNASA9},
+	// CHCl3 from the NASA-7 blocks of NASA TM-4513 (read from a stored copy of
+	// that compilation), not from the NASA/TP-2002-211556 blocks entered
+	// earlier, whose high range as entered gave Cp rising without bound. The
+	// coefficients imply ΔHf°298 −102.91 kJ/mol and S°298 295.66 J/(mol K);
+	// their Cp levels off at 25.5 cal/(mol K) by 3500 K (12.8 R, under the
+	// classical 13 R of five atoms), and the blocks meet at 1000 K in Cp, H
+	// and S (TestNASA7Entered).
+	{name: "CHCl3", smiles: "ClC(Cl)Cl", mult: 1, tLow: 300, tMid: 1000, tHigh: 3500, implied: true,
+		lo:     [7]float64{3.6819801e+00, 1.6611021e-02, -6.6180801e-06, -8.129156e-09, 5.9433135e-12, -1.4141844e+04, 9.98349958e+00},
+		hi:     [7]float64{8.993803e+00, 3.5652192e-03, -1.2537648e-06, 1.9479131e-10, -1.1032021e-14, -1.5609e+04, -1.76316998e+01},
+		source: srcTM4513},
 	{name: "CH3F", smiles: "CF", mult: 1, hf298: -237700, tLow: 300, tMid: 1000, tHigh: 3500,
 		n9: &nasa9{
 			lo: [9]float64{-2.029821878e+05, 3.447331130e+03, -1.768994275e+01, 5.945275800e-02, -6.469528250e-05, 3.859418040e-08, -9.626541530e-12, -4.577926220e+04, 1.228382176e+02},

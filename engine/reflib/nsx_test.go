@@ -12,6 +12,7 @@ import (
 	"github.com/stretchr/testify/require"
 
 	"kiln.dev/kiln/engine/molecule"
+	"kiln.dev/kiln/engine/nasa"
 )
 
 // TestNASA9Entered checks every NASA-9 entry against itself, which catches
@@ -35,6 +36,28 @@ func TestNASA9Entered(t *testing.T) {
 		assert.InDelta(t, lo.s(1000), hi.s(1000), 0.01, "%s: S at 1000 K", e.name)
 	}
 	assert.Greater(t, n, 20)
+}
+
+// TestNASA7Entered checks the NASA-7 entries taken from NASA TM-4513
+// against themselves, which catches a mistyped coefficient: the published
+// low and high blocks must meet at 1000 K in Cp (0.05 %) and S (0.01
+// J/(mol K)). H is held to 0.1 kJ/mol only: CHCl3's high-range a6 is
+// printed to six digits in the copy read and leaves the blocks 0.09 kJ/mol
+// apart at 1000 K, which the library's continuity step (entry.poly) removes.
+func TestNASA7Entered(t *testing.T) {
+	n := 0
+	for _, e := range nsxEntries {
+		if e.source != srcTM4513 {
+			continue
+		}
+		n++
+		lo := nasa.NASA7{TLow: e.tLow, TMid: 5000, THigh: 6000, Low: e.lo, High: e.lo}
+		hi := nasa.NASA7{TLow: 200, TMid: 300, THigh: e.tHigh, Low: e.hi, High: e.hi}
+		assert.InEpsilon(t, lo.Cp(1000), hi.Cp(1000), 5e-4, "%s: Cp at 1000 K", e.name)
+		assert.InDelta(t, lo.S(1000), hi.S(1000), 0.01, "%s: S at 1000 K", e.name)
+		assert.InDelta(t, lo.H(1000), hi.H(1000), 100, "%s: H at 1000 K", e.name)
+	}
+	assert.Positive(t, n)
 }
 
 // TestNASA9Refit checks the NASA-7 refit of every NASA-9 entry against the
