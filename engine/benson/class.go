@@ -127,6 +127,12 @@ const (
 	maeToSigma  = 1.25 // σ = √(π/2) × MAE for normally distributed errors
 )
 
+// entropyOnly reports whether approximation m concerns S° and Cp only,
+// leaving ΔHf°298 as the groups give it.
+func entropyOnly(m Missing) bool {
+	return strings.HasPrefix(m.Group, "HBI dS") || m.Group == cpFallsGroup || m.Group == pyrroleEntropyGroup
+}
+
 // uncertainty returns the standard uncertainty (1σ, J/mol) of the ΔHf° of
 // an estimate of class c with the approximations in est:
 //
@@ -147,7 +153,7 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 	for _, m := range est.Missing {
 		w := 0.0
 		switch {
-		case strings.HasPrefix(m.Group, "HBI dS"), m.Group == cpFallsGroup:
+		case entropyOnly(m):
 			// Entropy/Cp-only approximations: ΔHf°298 is not affected.
 		case strings.HasPrefix(m.Group, "HBI: "+unstabilisedSite):
 			w = widenStabiliser

@@ -146,6 +146,7 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 // ring N 1.7 kcal/mol lower); any other substituent there is flagged, its
 // benzene group being used.
 func addAzineFlags(g *graph, l lookup, est *Result) {
+	addPyrroleFlag(l, est)
 	if _, user := l.user["Nb"]; user {
 		return
 	}
@@ -180,10 +181,45 @@ func addAzineFlags(g *graph, l lookup, est *Result) {
 	}
 }
 
-// nitrogenRingKey names the ring correction of a saturated ring whose only
-// heteroatom is one amine nitrogen (aziridine … piperidine), or "".
-func (g *graph) nitrogenRingKey(r []int, nd int) string {
-	if !g.oneHeteroatom(r, "N") || nd != 0 {
+// pyrroleEntropyGroup names the flag of the pyrrole ring correction's S°
+// and Cp, which are carried over from furan (corrections_n.tsv): ΔHf° is
+// not approximated by it, so uncertainty (class.go) does not widen ΔHf°.
+const pyrroleEntropyGroup = "ring S, Cp: pyrrole"
+
+// addPyrroleFlag flags the S° and Cp of an estimate that took the pyrrole
+// ring correction (unless a group statement supplies ring:pyrrole): no S° or
+// Cp of a pyrrole was used to obtain it, and the aromatic five-membered rings
+// at hand disagree by several cal/(mol K) when carried over (with kiln's
+// groups: furan's correction gives pyrrole 3.9 cal/(mol K) below the
+// handbook S°, thiophene's 5.7 below).
+func addPyrroleFlag(l lookup, est *Result) {
+	if _, user := l.user["ring:pyrrole"]; user {
+		return
+	}
+	for _, c := range est.Corrections {
+		if c.Name == "ring strain: pyrrole" {
+			est.Missing = append(est.Missing, Missing{
+				Group:         pyrroleEntropyGroup,
+				Approximation: "S and Cp of the furan ring correction",
+				Note:          "no S° or Cp of a pyrrole ring correction is at hand; the furan ring's are used (ΔHf° is not affected; S° uncertain by several cal/(mol K))",
+			})
+			return
+		}
+	}
+}
+
+// nitrogenRingKey names the ring correction of a ring whose only
+// heteroatom is one amine-type nitrogen: saturated (aziridine … piperidine)
+// or the pyrrole ring (five aromatic members, two double bonds: pyrrole,
+// 1-alkylpyrroles); "" for any other ring.
+func (g *graph) nitrogenRingKey(r []int, nd, aromatic int) string {
+	if !g.oneHeteroatom(r, "N") {
+		return ""
+	}
+	if len(r) == 5 && nd == 2 && aromatic == 5 {
+		return "pyrrole"
+	}
+	if nd != 0 {
 		return ""
 	}
 	return map[int]string{3: "aziridine", 4: "azetidine", 5: "pyrrolidine", 6: "piperidine"}[len(r)]
