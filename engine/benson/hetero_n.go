@@ -246,9 +246,12 @@ func (g *graph) oneHeteroatom(r []int, el string) bool {
 
 // typeNote describes a centre type that no table has and no user group can
 // name, for the refusal message; "" for others.
-func typeNote(centre string) string {
+func (g *graph) typeNote(i int, centre string) string {
+	if centre == "NI" && g.m.Atoms[i].Aromatic {
+		return " (an azole ring nitrogen, the \"=N–\" of imidazole, pyrazole, oxazole or thiazole rings: no group value and no ring correction for these rings is at hand)"
+	}
 	if centre == "NI" {
-		return " (an imine nitrogen, C=N: the tables have no imine groups, and the imine carbon cannot be told from an alkene carbon by the group notation)"
+		return " (an imine nitrogen, C=N: kiln's tables have no imine groups — the published imine-N values go with imine-carbon groups of their own, which the group notation cannot tell from an alkene carbon's)"
 	}
 	return ""
 }

@@ -70,9 +70,9 @@ func TestPyrroleRing(t *testing.T) {
 // azole "=N–" (imidazole, pyrazole) and an amide N bonded to two acyl groups.
 func TestNitrogenStillRefused(t *testing.T) {
 	for smi, want := range map[string]string{
-		"c1cnc[nH]1":        "imine nitrogen",
-		"c1cc[nH]n1":        "imine nitrogen",
-		"Cn1ccnc1":          "imine nitrogen",
+		"c1cnc[nH]1":        "azole ring nitrogen",
+		"c1cc[nH]n1":        "azole ring nitrogen",
+		"Cn1ccnc1":          "azole ring nitrogen",
 		"CN(C=O)C=O":        "N-(CO)2(C)",
 		"C/N=N/C":           "NA-(C)",
 		"O=Nc1ccccc1":       "NO-(Cb)",
