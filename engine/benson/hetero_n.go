@@ -211,12 +211,17 @@ func addPyrroleFlag(l lookup, est *Result) {
 // nitrogenRingKey names the ring correction of a ring whose only
 // heteroatom is one amine-type nitrogen: saturated (aziridine … piperidine)
 // or the pyrrole ring (five aromatic members, two double bonds: pyrrole,
-// 1-alkylpyrroles); "" for any other ring.
+// 1-alkylpyrroles; not fused to a benzene ring); "" for any other ring.
 func (g *graph) nitrogenRingKey(r []int, nd, aromatic int) string {
 	if !g.oneHeteroatom(r, "N") {
 		return ""
 	}
 	if len(r) == 5 && nd == 2 && aromatic == 5 {
+		for _, a := range r {
+			if g.benzAtom[a] > 0 {
+				return "" // fused to a benzene ring (indole, carbazole): not the ring the correction was derived from
+			}
+		}
 		return "pyrrole"
 	}
 	if nd != 0 {

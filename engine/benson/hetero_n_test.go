@@ -57,6 +57,18 @@ func TestPyrroleRing(t *testing.T) {
 		assert.InDelta(t, e.S298, o.S298, 1e-6, smi)
 	}
 
+	// A pyrrole ring fused to a benzene ring (indole) is not the ring the
+	// correction was derived from: the ring is flagged as approximated.
+	ind := heteroEstimate(t, "c1ccc2[nH]ccc2c1")
+	for _, c := range ind.Corrections {
+		assert.NotEqual(t, "ring strain: pyrrole", c.Name, "indole")
+	}
+	ringFlag := false
+	for _, x := range ind.Missing {
+		ringFlag = ringFlag || strings.HasPrefix(x.Group, "ring:")
+	}
+	assert.True(t, ringFlag, "indole's five-membered ring is flagged: %+v", ind.Missing)
+
 	// A user-supplied ring:pyrrole replaces the correction and its flag.
 	m := parse(t, "c1cc[nH]c1")
 	u, err := Estimate(m, Options{UserGroups: []GroupValue{{Name: "ring:pyrrole", Hf298: -9.5 * calorie * 1000, S298: 25 * calorie, Source: "test"}}})
