@@ -124,6 +124,43 @@ func (g *graph) impliedTerminal(i, k int, centre string) bool {
 // nitrate groups describe.
 func neutralNO(m *molecule.Molecule) *molecule.Molecule { return m.NeutralNO() }
 
+// isocyanide reports whether atom i of m is the N⁺ or the terminal C⁻ of an
+// isocyanide group, R–N⁺≡C⁻.
+func isocyanide(m *molecule.Molecule, i int) bool {
+	n, c := -1, -1
+	switch a := m.Atoms[i]; {
+	case a.Element == "N" && a.Charge == 1:
+		n = i
+	case a.Element == "C" && a.Charge == -1:
+		c = i
+	default:
+		return false
+	}
+	for _, b := range m.Bonds {
+		if b.Order != 3 {
+			continue
+		}
+		j := -1
+		switch i {
+		case b.A:
+			j = b.B
+		case b.B:
+			j = b.A
+		default:
+			continue
+		}
+		if n < 0 {
+			n = j
+		} else {
+			c = j
+		}
+	}
+	if n < 0 || c < 0 || m.Atoms[n].Element != "N" || m.Atoms[n].Charge != 1 || m.Atoms[c].Element != "C" || m.Atoms[c].Charge != -1 {
+		return false
+	}
+	return len(m.Adj[c]) == 1 && m.Atoms[c].HCount == 0 && len(m.Adj[n]) == 2
+}
+
 // chargeRefusal explains why charged atom i of m is refused: an ion (net
 // charge) or a charge-separated structure other than the N⁺–O⁻ units
 // neutralNO rewrites.
@@ -133,6 +170,9 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 		net += a.Charge
 	}
 	a := m.Atoms[i]
+	if net == 0 && isocyanide(m, i) {
+		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) belongs to an isocyanide group, R–N⁺≡C⁻: no group value for isocyanides is at hand", a.Element)}
+	}
 	if net != 0 {
 		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d and the species has net charge %+d: ions are outside group additivity", a.Element, a.Charge, net)}
 	}

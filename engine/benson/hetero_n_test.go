@@ -88,7 +88,7 @@ func TestNitrogenStillRefused(t *testing.T) {
 		"CN(C=O)C=O":        "N-(CO)2(C)",
 		"C/N=N/C":           "NA-(C)",
 		"O=Nc1ccccc1":       "NO-(Cb)",
-		"C[N+]#[C-]":        "charge",
+		"C[N+]#[C-]":        "isocyanide",
 		"CN(C)[N+](=O)[O-]": "NO2-(N)",
 		"C=C[N+](=O)[O-]":   "Cd-(NO2)(H)",
 		"c1ccnnc1":          "Nbb",

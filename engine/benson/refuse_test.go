@@ -40,7 +40,7 @@ func TestRefusals(t *testing.T) {
 		{"C[NH3+]", Options{}, "net charge +1"},
 		// nitrogen (hetero_n.go): only N⁺–O⁻ units are read as N=O; other
 		// charge separation, imines and azo compounds are refused.
-		{"C[N+]#[C-]", Options{}, "charge-separated structure"},
+		{"C[N+]#[C-]", Options{}, "isocyanide"},
 		{"C[N+](C)(C)C.[Cl-]", Options{}, "charge"},
 		{"CC=NC", Options{}, "imine nitrogen"},
 		{"C/N=N/C", Options{}, "no value and no approximation for group NA-(C)"},
