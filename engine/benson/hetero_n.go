@@ -241,7 +241,7 @@ func addPyrroleFlag(l lookup, est *Result) {
 			est.Missing = append(est.Missing, Missing{
 				Group:         pyrroleEntropyGroup,
 				Approximation: "S and Cp of the furan ring correction",
-				Note:          "no S° or Cp of a pyrrole ring correction is at hand; the furan ring's are used (ΔHf° is not affected; S° uncertain by several cal/(mol K))",
+				Note:          "no S° or Cp of a pyrrole ring correction is at hand; ΔHf° is not affected, S° is uncertain by several cal/(mol K)",
 			})
 			return
 		}
