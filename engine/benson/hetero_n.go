@@ -334,6 +334,24 @@ func nitrogenSiteNote(g *graph, i int, site string) string {
 			}
 		}
 		return ""
+	case "alpha-amino":
+		// The increment was measured next to an amine N, whose lone pair
+		// stabilises the site; an amide N or a pyrrole-type ring N shares
+		// its lone pair with the C=O or the ring.
+		for _, j := range g.nbr[i] {
+			if g.typ[j] != "N" {
+				continue
+			}
+			if g.m.Atoms[j].Aromatic {
+				return "radical site next to a pyrrole-type ring N (α-amino increment used)"
+			}
+			for _, k := range g.nbr[j] {
+				if g.typ[k] == "CO" {
+					return "radical site next to an amide N (α-amino increment used)"
+				}
+			}
+		}
+		return ""
 	}
 	for _, j := range g.nbr[i] {
 		switch g.typ[j] {

@@ -140,3 +140,24 @@ func TestNitrogenSymmetry(t *testing.T) {
 	}
 	assert.True(t, found, "DMF has a symmetry correction")
 }
+
+// A carbon radical site next to an amide N or a pyrrole-type ring N takes
+// the α-amino increment, measured next to an amine N, and says so.
+func TestNitrogenRadicalSiteNotes(t *testing.T) {
+	for smi, want := range map[string]string{
+		"[CH2]N(C)C=O": "amide N",
+		"[CH2]n1cccc1": "pyrrole-type ring N",
+		"CC(=O)N[CH2]": "amide N",
+	} {
+		e := heteroEstimate(t, smi)
+		found := false
+		for _, m := range e.Missing {
+			found = found || strings.Contains(m.Group, want)
+		}
+		assert.True(t, found, "%s: %+v", smi, e.Missing)
+	}
+	e := heteroEstimate(t, "CN(C)[CH2]") // amine: the increment's own kind of site
+	for _, m := range e.Missing {
+		assert.True(t, entropyOnly(m), "%+v", m)
+	}
+}
