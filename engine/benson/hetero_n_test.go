@@ -21,6 +21,7 @@ func TestNitrogenGroupsAssigned(t *testing.T) {
 		{"Cc1ccc[nH]1", []string{"C-(Cd)(H)3", "Cd-(N)(C)", "Cd-(N)(H)", "Cd-(Cd)(H)", "N-(Cd)2(H)"}},
 		{"C=CNC", []string{"Cd-(H)2", "Cd-(N)(H)", "N-(Cd)(C)(H)", "C-(N)(H)3"}},
 		{"C=CN", []string{"Cd-(H)2", "Cd-(N)(H)", "N-(Cd)(H)2"}},
+		{"C=CN(C)C", []string{"Cd-(H)2", "Cd-(N)(H)", "N-(Cd)(C)2", "C-(N)(H)3"}},
 		{"CN(C)C=O", []string{"C-(N)(H)3", "CO-(N)(H)", "N-(CO)(C)2"}},
 		{"CNC(C)=O", []string{"C-(N)(H)3", "CO-(N)(C)", "N-(CO)(C)(H)", "C-(CO)(H)3"}},
 	}
