@@ -160,7 +160,7 @@ func TestFillRangesAndSkips(t *testing.T) {
   multiplicity 3
 species OH [OH]
 species ethanol CCO
-species pyrrole c1cc[nH]c1
+species imide CN(C=O)C=O
 species lump
   composition C2
 `)
@@ -168,7 +168,7 @@ species lump
 	assert.Equal(t, exitProblems, code, stderr)
 	// Positions are those of the written file, where check reports the
 	// same species (three blocks were inserted above them).
-	assert.Regexp(t, `f.kiln:17:9: skipped pyrrole: kiln cannot estimate it: .*no value .*group`, stderr)
+	assert.Regexp(t, `f.kiln:17:9: skipped imide: kiln cannot estimate it: .*no value .*group`, stderr)
 	assert.Regexp(t, `f.kiln:18:9: skipped lump: no structure`, stderr)
 	assert.Contains(t, stderr, "inserted 3 thermo block(s), skipped 2 species")
 	out, err := os.ReadFile(path)

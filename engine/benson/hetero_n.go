@@ -124,6 +124,43 @@ func (g *graph) impliedTerminal(i, k int, centre string) bool {
 // nitrate groups describe.
 func neutralNO(m *molecule.Molecule) *molecule.Molecule { return m.NeutralNO() }
 
+// isocyanide reports whether atom i of m is the N⁺ or the terminal C⁻ of an
+// isocyanide group, R–N⁺≡C⁻.
+func isocyanide(m *molecule.Molecule, i int) bool {
+	n, c := -1, -1
+	switch a := m.Atoms[i]; {
+	case a.Element == "N" && a.Charge == 1:
+		n = i
+	case a.Element == "C" && a.Charge == -1:
+		c = i
+	default:
+		return false
+	}
+	for _, b := range m.Bonds {
+		if b.Order != 3 {
+			continue
+		}
+		j := -1
+		switch i {
+		case b.A:
+			j = b.B
+		case b.B:
+			j = b.A
+		default:
+			continue
+		}
+		if n < 0 {
+			n = j
+		} else {
+			c = j
+		}
+	}
+	if n < 0 || c < 0 || m.Atoms[n].Element != "N" || m.Atoms[n].Charge != 1 || m.Atoms[c].Element != "C" || m.Atoms[c].Charge != -1 {
+		return false
+	}
+	return len(m.Adj[c]) == 1 && m.Atoms[c].HCount == 0 && len(m.Adj[n]) == 2
+}
+
 // chargeRefusal explains why charged atom i of m is refused: an ion (net
 // charge) or a charge-separated structure other than the N⁺–O⁻ units
 // neutralNO rewrites.
@@ -133,6 +170,9 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 		net += a.Charge
 	}
 	a := m.Atoms[i]
+	if net == 0 && isocyanide(m, i) {
+		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) belongs to an isocyanide group, R–N⁺≡C⁻: no group value for isocyanides is at hand", a.Element)}
+	}
 	if net != 0 {
 		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d and the species has net charge %+d: ions are outside group additivity", a.Element, a.Charge, net)}
 	}
@@ -146,6 +186,7 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 // ring N 1.7 kcal/mol lower); any other substituent there is flagged, its
 // benzene group being used.
 func addAzineFlags(g *graph, l lookup, est *Result) {
+	addPyrroleFlag(l, est)
 	if _, user := l.user["Nb"]; user {
 		return
 	}
@@ -180,10 +221,50 @@ func addAzineFlags(g *graph, l lookup, est *Result) {
 	}
 }
 
-// nitrogenRingKey names the ring correction of a saturated ring whose only
-// heteroatom is one amine nitrogen (aziridine … piperidine), or "".
-func (g *graph) nitrogenRingKey(r []int, nd int) string {
-	if !g.oneHeteroatom(r, "N") || nd != 0 {
+// pyrroleEntropyGroup names the flag of the pyrrole ring correction's S°
+// and Cp, which are carried over from furan (corrections_n.tsv): ΔHf° is
+// not approximated by it, so uncertainty (class.go) does not widen ΔHf°.
+const pyrroleEntropyGroup = "ring S, Cp: pyrrole"
+
+// addPyrroleFlag flags the S° and Cp of an estimate that took the pyrrole
+// ring correction (unless a group statement supplies ring:pyrrole): no S° or
+// Cp of a pyrrole was used to obtain it, and the aromatic five-membered rings
+// at hand disagree by several cal/(mol K) when carried over (with kiln's
+// groups: furan's correction gives pyrrole 3.9 cal/(mol K) below the
+// handbook S°, thiophene's 5.7 below).
+func addPyrroleFlag(l lookup, est *Result) {
+	if _, user := l.user["ring:pyrrole"]; user {
+		return
+	}
+	for _, c := range est.Corrections {
+		if c.Name == "ring strain: pyrrole" {
+			est.Missing = append(est.Missing, Missing{
+				Group:         pyrroleEntropyGroup,
+				Approximation: "S and Cp of the furan ring correction",
+				Note:          "no S° or Cp of a pyrrole ring correction is at hand; ΔHf° is not affected, S° is uncertain by several cal/(mol K)",
+			})
+			return
+		}
+	}
+}
+
+// nitrogenRingKey names the ring correction of a ring whose only
+// heteroatom is one amine-type nitrogen: saturated (aziridine … piperidine)
+// or the pyrrole ring (five aromatic members, two double bonds: pyrrole,
+// 1-alkylpyrroles; not fused to a benzene ring); "" for any other ring.
+func (g *graph) nitrogenRingKey(r []int, nd, aromatic int) string {
+	if !g.oneHeteroatom(r, "N") {
+		return ""
+	}
+	if len(r) == 5 && nd == 2 && aromatic == 5 {
+		for _, a := range r {
+			if g.benzAtom[a] > 0 {
+				return "" // fused to a benzene ring (indole, carbazole): not the ring the correction was derived from
+			}
+		}
+		return "pyrrole"
+	}
+	if nd != 0 {
 		return ""
 	}
 	return map[int]string{3: "aziridine", 4: "azetidine", 5: "pyrrolidine", 6: "piperidine"}[len(r)]
@@ -210,9 +291,12 @@ func (g *graph) oneHeteroatom(r []int, el string) bool {
 
 // typeNote describes a centre type that no table has and no user group can
 // name, for the refusal message; "" for others.
-func typeNote(centre string) string {
+func (g *graph) typeNote(i int, centre string) string {
+	if centre == "NI" && g.m.Atoms[i].Aromatic {
+		return " (an azole ring nitrogen, the \"=N–\" of imidazole, pyrazole, oxazole or thiazole rings: no group value and no ring correction for these rings is at hand)"
+	}
 	if centre == "NI" {
-		return " (an imine nitrogen, C=N: the tables have no imine groups, and the imine carbon cannot be told from an alkene carbon by the group notation)"
+		return " (an imine nitrogen, C=N: kiln's tables have no imine groups — the published imine-N values go with imine-carbon groups of their own, which the group notation cannot tell from an alkene carbon's)"
 	}
 	return ""
 }
@@ -247,6 +331,24 @@ func nitrogenSiteNote(g *graph, i int, site string) string {
 		for _, j := range g.nbr[i] {
 			if g.typ[j] == "Cb" && g.inAzineRing(j) {
 				return "radical site next to an azine ring (benzylic increment used)"
+			}
+		}
+		return ""
+	case "alpha-amino":
+		// The increment was measured next to an amine N, whose lone pair
+		// stabilises the site; an amide N or a pyrrole-type ring N shares
+		// its lone pair with the C=O or the ring.
+		for _, j := range g.nbr[i] {
+			if g.typ[j] != "N" {
+				continue
+			}
+			if g.m.Atoms[j].Aromatic {
+				return "radical site next to a pyrrole-type ring N (α-amino increment used)"
+			}
+			for _, k := range g.nbr[j] {
+				if g.typ[k] == "CO" {
+					return "radical site next to an amide N (α-amino increment used)"
+				}
 			}
 		}
 		return ""

@@ -40,14 +40,15 @@ func TestRefusals(t *testing.T) {
 		{"C[NH3+]", Options{}, "net charge +1"},
 		// nitrogen (hetero_n.go): only N⁺–O⁻ units are read as N=O; other
 		// charge separation, imines and azo compounds are refused.
-		{"C[N+]#[C-]", Options{}, "charge-separated structure"},
+		{"C[N+]#[C-]", Options{}, "isocyanide"},
 		{"C[N+](C)(C)C.[Cl-]", Options{}, "charge"},
 		{"CC=NC", Options{}, "imine nitrogen"},
 		{"C/N=N/C", Options{}, "no value and no approximation for group NA-(C)"},
 		{"CCN=O", Options{}, "no value and no approximation for group C-(NO)(C)(H)2 (also missing: NO-(C))"},
-		{"c1cc[nH]c1", Options{}, "no value and no approximation for group Cd-(N)(H)"},
+		{"c1cnc[nH]1", Options{}, "azole ring nitrogen"},
+		{"c1cc[nH]n1", Options{}, "azole ring nitrogen"},
 		{"c1ccnnc1", Options{}, "no value and no approximation for group Nbb"},
-		{"CN(C)C=O", Options{}, "no value and no approximation for group N-(CO)(C)2"},
+		{"CN(C=O)C=O", Options{}, "no value and no approximation for group N-(CO)2(C)"},
 		{"c1ccc2nnccc2c1", Options{}, "no value and no approximation for group Nbb"},
 		{"O=O", Options{Multiplicity: 1}, "terminal atom"},
 		{"CC", Options{Multiplicity: 3}, "multiplicity 3"},

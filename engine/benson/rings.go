@@ -159,7 +159,7 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 		key = g.sulfurRingKey(r, nd, aromatic) // hetero_sx.go
 	}
 	if key == "" && oxy == 0 && carbonyl == 0 {
-		key = g.nitrogenRingKey(r, nd) // hetero_n.go
+		key = g.nitrogenRingKey(r, nd, aromatic) // hetero_n.go
 	}
 	if key == "" {
 		key = fmt.Sprintf("%d-membered ring with %d O, %d other heteroatoms, %d double bonds", n, oxy, other, nd)

@@ -286,6 +286,8 @@ var spellingFixed = []string{
 	// nitrogen (hetero_n.go): charge-separated and pentavalent nitro, nitrate, nitrite, azines, N rings
 	"C[N+](=O)[O-]", "CCN(=O)=O", "[O-][N+](=O)c1ccccc1", "CCO[N+](=O)[O-]", "CC(C)ON=O",
 	"c1ccncc1", "Cc1ccccn1", "c1cnccn1", "c1ccc2ncccc2c1", "Cc1ccc2cccnc2c1", "C1CCNC1", "CN1CC1",
+	// pyrrole-type ring N and N-substituted amides (hetero_n.go)
+	"c1cc[nH]c1", "Cn1cccc1", "Cc1ccc(C)[nH]1", "CCn1cccc1C", "CN(C)C=O", "CNC(C)=O", "CCN(CC)C(=O)CC",
 }
 
 // spellingRefused are refused structures added to the corpus: charged,
@@ -293,7 +295,7 @@ var spellingFixed = []string{
 var spellingRefused = []string{
 	"CC[NH3+].[Cl-]", "[2H]CC[13CH3]", "C[Si](C)CC[Li]", "CC(=S)C(=S)C", "OB(O)CCP",
 	// five-membered aromatic rings with N: groups follow the Kekulé structure (kekule.go)
-	"Cc1nccs1", "c1cc[nH]c1", "Cn1ccnc1",
+	"Cc1nccs1", "c1cc[nH]n1", "Cn1ccnc1",
 	// charges other than N⁺–O⁻ units, ions, imines, azo (hetero_n.go)
 	"C[N+]#[C-]", "C[NH3+]", "CC[N+](C)(C)C", "CC=NC", "C/N=N/C", "CCN=O",
 }
