@@ -34,7 +34,7 @@ func (a *analysis) reactions() error {
 		d     *speciesfile.Reaction
 		start int // where d starts in file
 		file  string
-		next int32 // index of the next occurrence with the same hash, -1 for none
+		next  int32 // index of the next occurrence with the same hash, -1 for none
 	}
 	seen := make(map[uint64]int32, n)
 	occs := make([]occurrence, 0, n)
