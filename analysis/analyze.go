@@ -55,6 +55,9 @@ type analysis struct {
 	// stmtStart is where that statement starts in its file (stmtBase
 	// when the rules report absolute spans).
 	stmtStart int
+	// spStart holds where the declaration of each species of res.Species
+	// starts in its file.
+	spStart []int
 	// via maps each included file to the include statement of the analysed
 	// file through which it is reached (where its problems are reported).
 	via map[string]*speciesfile.Include

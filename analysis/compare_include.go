@@ -35,12 +35,13 @@ const maxIncludeDupReports = 20
 // put together. Both declarations are related: the first (as before), then
 // sp's. The code is duplicate-species either way (FORMAT.md §4).
 //
-// start is where sp's declaration starts in path.
-func (a *analysis) reportSameStructure(path string, sp, first *Species, start int) {
-	related := []speciesfile.Related{{File: first.File, Span: a.res.SpeciesLoc(first).Span, Message: first.Name + " has this structure"}}
+// start is where sp's declaration starts in path, firstLoc the name of
+// first's declaration.
+func (a *analysis) reportSameStructure(path string, sp, first *Species, start int, firstLoc Location) {
+	related := []speciesfile.Related{{File: firstLoc.File, Span: firstLoc.Span, Message: first.Name + " has this structure"}}
 	if path == a.res.Path {
 		a.report(path, speciesfile.Diagnostic{Span: sp.Decl.SMILES.Span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
-			Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(a.res.SpeciesLoc(first))),
+			Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(firstLoc)),
 			Related: related})
 		return
 	}
@@ -62,6 +63,6 @@ func (a *analysis) reportSameStructure(path string, sp, first *Species, start in
 	}
 	a.report(a.res.Path, speciesfile.Diagnostic{Span: a.res.File.Abs(inc, inc.Path.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
 		Message: fmt.Sprintf("included file %s declares %s with the same structure as %s (%s); rename one to the other",
-			shortPath(path), sp.Name, first.Name, a.where(a.res.SpeciesLoc(first))),
+			shortPath(path), sp.Name, first.Name, a.where(firstLoc)),
 		Related: append(related, speciesfile.Related{File: path, Span: sp.Decl.Name.Span.At(start), Message: sp.Name + " has the same structure"})})
 }

@@ -223,11 +223,12 @@ func (a *analysis) rangeChecks() {
 			}
 		}
 	}
-	for _, sp := range a.res.Species {
+	for i, sp := range a.res.Species {
 		n, ok := needs[sp]
 		if !ok {
 			continue
 		}
+		start := a.spStart[i]
 		lo, hi := sp.Given.Range()
 		if lo <= T298+rangeSlack && hi >= n.tmax-rangeSlack {
 			continue
@@ -235,7 +236,7 @@ func (a *analysis) rangeChecks() {
 		if sp.File != a.res.Path {
 			// The block is in an included file: say it on the reaction
 			// of this file that needs it.
-			where := a.where(Location{File: sp.File, Span: sp.Given.Span.At(a.res.declStart(sp))})
+			where := a.where(Location{File: sp.File, Span: sp.Given.Span.At(start)})
 			a.report(a.res.Path, speciesfile.Diagnostic{Span: n.eq, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
 				Message: fmt.Sprintf("%s: its thermo block (%s) covers %g–%g K, but this reaction needs it from 298 K to %g K; values outside the block are extrapolated",
 					sp.Name, where, lo, hi, n.tmax)})
@@ -247,7 +248,7 @@ func (a *analysis) rangeChecks() {
 		} else if d := sp.Decl.Table; d != nil {
 			span = d.Header.Span
 		}
-		a.report(sp.File, speciesfile.Diagnostic{Span: span.At(a.res.declStart(sp)), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+		a.report(sp.File, speciesfile.Diagnostic{Span: span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
 			Message: fmt.Sprintf("%s: the block covers %g–%g K, but the reaction on line %d needs it from 298 K to %g K; values outside the block are extrapolated",
 				sp.Name, lo, hi, n.line, n.tmax)})
 	}

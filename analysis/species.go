@@ -34,6 +34,7 @@ func (a *analysis) species() error {
 	a.memo = a.w.startMemo(a.res.Path, a.set, a.userKey+"|"+a.res.Units().EnergyName())
 	a.res.ByName = make(map[string]*Species, nSpecies)
 	a.res.Species = make([]*Species, 0, nSpecies)
+	a.spStart = make([]int, 0, nSpecies)
 
 	type item struct {
 		path string
@@ -78,6 +79,7 @@ func (a *analysis) species() error {
 			}
 			a.res.ByName[name] = sp
 			a.res.Species = append(a.res.Species, sp)
+			a.spStart = append(a.spStart, f.SpeciesStart(k))
 			if u == nil {
 				todo = append(todo, len(items))
 			}
@@ -127,8 +129,9 @@ func (a *analysis) species() error {
 		}
 	}
 	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
-	byStructure := make(map[uint64][]*Species, len(items))
-	for _, it := range items {
+	byStructure := make(map[uint64][]int32, len(items))
+	spAt := func(i int32) *Species { return items[i].sp }
+	for i, it := range items {
 		sp := it.sp
 		if it.u != nil {
 			if !it.reused {
@@ -142,8 +145,10 @@ func (a *analysis) species() error {
 			a.res.Diagnostics = append(a.res.Diagnostics, it.diags...)
 		}
 		if sp.Mol != nil {
-			if first := sameStructure(byStructure, sp); first != nil {
-				a.reportSameStructure(it.path, sp, first, it.f.SpeciesStart(it.k))
+			if j := sameStructure(byStructure, spAt, int32(i)); j >= 0 {
+				first := items[j]
+				a.reportSameStructure(it.path, sp, first.sp, it.f.SpeciesStart(it.k),
+					Location{File: first.path, Span: first.sp.Decl.Name.Span.At(first.f.SpeciesStart(first.k))})
 			}
 		}
 	}
@@ -239,23 +244,28 @@ const resonanceKeyPrefix = "resonance|"
 // The map is keyed by a hash of the bucket key made once per unit (hashing
 // the long keys of every species on every analysis cost more than the rest
 // of the search); species of other keys sharing a hash are skipped.
-func sameStructure(seen map[uint64][]*Species, sp *Species) *Species {
+//
+// Species are named by their index i in a list (spAt gives the species);
+// the result is the index of the first, -1 when there is none.
+func sameStructure(seen map[uint64][]int32, spAt func(int32) *Species, i int32) int32 {
+	sp := spAt(i)
 	k := sp.structKey
 	bucket := seen[sp.structHash]
 	resonance := strings.HasPrefix(k, resonanceKeyPrefix)
-	for _, other := range bucket {
+	for _, j := range bucket {
+		other := spAt(j)
 		if other.structKey != k {
 			continue
 		}
 		if resonance {
-			return other // the key is the canonical representative itself
+			return j // the key is the canonical representative itself
 		}
 		if identity(other.Mol) == identity(sp.Mol) {
-			return other
+			return j
 		}
 	}
-	seen[sp.structHash] = append(bucket, sp)
-	return nil
+	seen[sp.structHash] = append(bucket, i)
+	return -1
 }
 
 // hashKey is the 64-bit FNV-1a hash of s.
