@@ -396,7 +396,7 @@ func (s *server) publish(d *document, snap *snapshot, gen uint64, force bool) {
 		return
 	}
 	d.published, d.hasPub = params.Diagnostics, true
-	if err := s.conn.Notify(s.ctx, "textDocument/publishDiagnostics", params); err != nil {
+	if err := s.out.notify("textDocument/publishDiagnostics", params); err != nil {
 		s.logger.Debug("publishDiagnostics failed", zap.Error(err))
 	}
 	s.settled(d, snap, true)
