@@ -186,4 +186,7 @@ type Reaction struct {
 	reactants, products kinetics.Side // thermo of each side, nil when unknown
 	diags               []speciesfile.Diagnostic
 	unit                *reactionUnit // the memoized unit the reaction was made from
+	// declared: every name the reaction uses (terms, efficiencies, falloff
+	// collider) was declared when it was resolved.
+	declared bool
 }

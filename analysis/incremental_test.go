@@ -396,3 +396,25 @@ func requireReused(t *testing.T, a, b *Result, species, reactions map[string]boo
 		require.Equal(t, !reactions[r.Equation], same, "reaction %s: unit reused", r.Equation)
 	}
 }
+
+// TestIncrementalLeadingComment: a comment typed just before a declaration
+// with a thermo block changes the statement's leading lines, not its body:
+// its unit is reused and every position (the block's too) must come out as
+// from scratch.
+func TestIncrementalLeadingComment(t *testing.T) {
+	at := strings.Index(incrementalBase, "species POLY ")
+	require.Positive(t, at)
+	ws := NewWorkspace("", func(string) ([]byte, error) { return nil, fs.ErrNotExist }, DefaultSettings())
+	ws.SetIncremental(true)
+	for _, text := range []string{incrementalBase, incrementalBase[:at] + "# a remark\n# and another\n" + incrementalBase[at:]} {
+		ws.SetOverlay("m.kiln", []byte(text))
+		got, err := ws.Analyze(context.Background(), "m.kiln")
+		require.NoError(t, err)
+		scratch := NewWorkspace("", func(string) ([]byte, error) { return nil, fs.ErrNotExist }, DefaultSettings())
+		scratch.SetOverlay("m.kiln", []byte(text))
+		want, err := scratch.Analyze(context.Background(), "m.kiln")
+		require.NoError(t, err)
+		require.Equal(t, stripPointers(digest(want)), stripPointers(digest(got)))
+		require.NotNil(t, got.ByName["POLY"].Given)
+	}
+}

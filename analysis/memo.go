@@ -72,6 +72,7 @@ type memo struct {
 	old, next *memoTables
 	align     map[string]*alignment
 	changed   map[string]bool // names of the species whose unit was recomputed
+	namesKept bool            // the same species names are declared as in the last analysis (sameNames)
 	// the alignment asked for last (file is called once per statement)
 	lastPath string
 	lastAl   *alignment
@@ -81,6 +82,10 @@ type memo struct {
 type alignment struct {
 	old                *fileMemo // nil: nothing to reuse
 	species, reactions []int32   // index in the old lists, -1 for none
+	// sameSpecies: every species statement matches a different old one of
+	// the same text and none is left over (so the names declared are the
+	// same).
+	sameSpecies bool
 }
 
 // memoKey identifies the inputs shared by every unit of an analysis.
@@ -201,6 +206,7 @@ func (m *memo) file(path string, f *speciesfile.File) *alignment {
 			of := old.file
 			al.old = old
 			al.species = alignLists(of, f, of.Species, f.Species, of.SpeciesStart, f.SpeciesStart)
+			al.sameSpecies = bijective(al.species, len(of.Species))
 			al.reactions = alignLists(of, f, of.Reactions, f.Reactions, of.ReactionStart, f.ReactionStart)
 		}
 	}
@@ -248,6 +254,52 @@ func alignLists[T comparable](of, nf *speciesfile.File, olds, news []T, ostart, 
 		}
 	}
 	return out
+}
+
+// bijective reports whether match (an alignment with n old statements)
+// pairs every new statement with a different old one and leaves none over.
+func bijective(match []int32, n int) bool {
+	if len(match) != n {
+		return false
+	}
+	used := make([]bool, n)
+	for _, i := range match {
+		if i < 0 || used[i] {
+			return false
+		}
+		used[i] = true
+	}
+	return true
+}
+
+// sameNames reports whether the analysis declares the same species names
+// as the last one: every file in scope (order) that declares species is
+// aligned one to one with that file's species in the last analysis, and
+// the last analysis had no other file declaring species. (Aligned
+// statements have the same text, so the same names.) Called after the
+// species pass, which aligned every file declaring species.
+func (m *memo) sameNames(order []string, files map[string]*speciesfile.File) bool {
+	if m == nil || m.old == nil {
+		return false
+	}
+	n := 0
+	for _, path := range order {
+		f := files[path]
+		if len(f.Species) == 0 {
+			continue
+		}
+		n++
+		al := m.align[path]
+		if al == nil || al.old == nil || !al.sameSpecies {
+			return false
+		}
+	}
+	for _, fm := range m.old.files {
+		if len(fm.file.Species) > 0 {
+			n--
+		}
+	}
+	return n == 0
 }
 
 // bodyText returns the text of the body of statement st, which starts at
@@ -336,7 +388,19 @@ func newSpeciesUnit(energyUnit string, sp *Species, diags []speciesfile.Diagnost
 		u.pinned = bodyStart
 	}
 	u.tmpl.Name, u.tmpl.File, u.tmpl.Decl, u.tmpl.unit = "", "", nil, nil
+	if g := sp.Given; g != nil {
+		// kept relative to the body: the unit may stand for the same text
+		// after other leading comment lines
+		c := *g
+		c.Span = moveRel(c.Span, -sp.Decl.Body().From)
+		u.tmpl.Given = &c
+	}
 	return u
+}
+
+// moveRel returns r moved by d bytes.
+func moveRel(r speciesfile.RelSpan, d int) speciesfile.RelSpan {
+	return speciesfile.RelSpan{From: r.From + d, To: r.To + d}
 }
 
 // fits reports whether u can stand for a declaration of file f whose body
@@ -353,6 +417,11 @@ func (u *speciesUnit) apply(sp *Species, keep bool) {
 	sp.Name, sp.File, sp.Decl = name, file, decl
 	if keep {
 		sp.unit = u
+	}
+	if g := u.tmpl.Given; g != nil {
+		c := *g
+		c.Span = moveRel(c.Span, decl.Body().From)
+		sp.Given = &c
 	}
 }
 
@@ -420,21 +489,25 @@ func (m *memo) oldReaction(a *analysis, path string, f *speciesfile.File, k int,
 	if o == nil || o.Decl != d || !o.Resolved || o.unit == nil || o.Equation != equation || o.File != path {
 		return nil
 	}
-	for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
-		for _, t := range ts {
-			if _, ok := a.res.ByName[t.Name.Text]; !ok {
+	if !m.namesKept || !o.declared {
+		// (With the same names declared as when o was made with every
+		// name it uses declared, they still are.)
+		for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
+			for _, t := range ts {
+				if _, ok := a.res.ByName[t.Name.Text]; !ok {
+					return nil
+				}
+			}
+		}
+		for _, e := range d.Efficiencies {
+			if _, ok := a.res.ByName[e.Name.Text]; !ok {
 				return nil
 			}
 		}
-	}
-	for _, e := range d.Efficiencies {
-		if _, ok := a.res.ByName[e.Name.Text]; !ok {
-			return nil
-		}
-	}
-	if c := falloffCollider(d); c != nil {
-		if _, ok := a.res.ByName[c.Text]; !ok {
-			return nil
+		if c := falloffCollider(d); c != nil {
+			if _, ok := a.res.ByName[c.Text]; !ok {
+				return nil
+			}
 		}
 	}
 	if f.ErrorIn(d.Body().At(f.ReactionStart(k))) {
@@ -581,9 +654,9 @@ func newReactionUnit(energyUnit string, deps []*speciesUnit, r *Reaction, start 
 // was made with: its statement, file, line, equation and resolution) and
 // records the unit in r.
 func (u *reactionUnit) apply(r *Reaction) {
-	decl, file, eq, resolved := r.Decl, r.File, r.Equation, r.Resolved
+	decl, file, eq, resolved, declared := r.Decl, r.File, r.Equation, r.Resolved, r.declared
 	*r = u.tmpl
-	r.Decl, r.File, r.Equation, r.Resolved = decl, file, eq, resolved
+	r.Decl, r.File, r.Equation, r.Resolved, r.declared = decl, file, eq, resolved, declared
 	r.unit = u
 }
 

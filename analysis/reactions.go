@@ -116,7 +116,7 @@ func (a *analysis) computeReactions() error {
 		if r.unit != nil && r.unit != u {
 			// the last analysis's value, whose unit does not hold any
 			// more: it is not modified, a new value is made
-			r = &Reaction{Decl: r.Decl, File: r.File, Equation: r.Equation, Resolved: true}
+			r = &Reaction{Decl: r.Decl, File: r.File, Equation: r.Equation, Resolved: true, declared: r.declared}
 			rs[i] = r
 		}
 		if u != nil {
@@ -326,7 +326,9 @@ func (a *analysis) reaction(path string, d *speciesfile.Reaction, start int, equ
 		r.Kp = map[string]*float64{}
 		return r
 	}
+	r.declared = true
 	undeclared := func(t speciesfile.Token, what string) {
+		r.declared = false
 		msg := fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)
 		if parts := strings.Split(t.Text, "+"); len(parts) > 1 && !strings.HasPrefix(t.Text, "(+") {
 			msg = fmt.Sprintf("%s %s is not declared; if you meant %s, put blanks around each +", what, t.Text, strings.Join(parts, " + "))

@@ -95,6 +95,7 @@ func (a *analysis) species() error {
 		for _, k := range todo {
 			a.memo.changed[items[k].sp.Name] = true
 		}
+		a.memo.namesKept = a.memo.sameNames(a.order, a.res.Files)
 	}
 	// Units not kept from the last analysis are computed on all cores: each
 	// reads only its own declaration and the (concurrency-safe) caches.
