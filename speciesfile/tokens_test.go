@@ -3,6 +3,8 @@ package speciesfile
 import (
 	"fmt"
 	"reflect"
+	"strings"
+	"testing"
 )
 
 // tokenProblems walks every statement node of f by reflection and returns a
@@ -58,4 +60,34 @@ func tokenProblems(f *File) []string {
 		out = append(out, fmt.Sprintf("statements cover %d of %d bytes", pos, len(f.Src)))
 	}
 	return out
+}
+
+// TestStmtIndex: the node lookup gives every statement's index and start,
+// by scanning for the first lookups and by its map after them, and -1 for a
+// node of another parse.
+func TestStmtIndex(t *testing.T) {
+	var b strings.Builder
+	for i := range 100 {
+		fmt.Fprintf(&b, "# c%d\nspecies S%d C\nreaction S%d => S%d A=1 n=0 Ea=0\n", i, i, i, i)
+	}
+	f := Parse("x.kiln", []byte(b.String()))
+	other := Parse("x.kiln", []byte(b.String()))
+	for round := range 2 { // the second round uses the map
+		for i, st := range f.Stmts {
+			if got := f.StmtIndex(st); got != i {
+				t.Fatalf("round %d: StmtIndex of statement %d = %d", round, i, got)
+			}
+			if got := f.Start(st); got != f.Starts[i] {
+				t.Fatalf("round %d: Start of statement %d = %d, want %d", round, i, got, f.Starts[i])
+			}
+		}
+		if got := f.StmtIndex(other.Stmts[3]); got != -1 {
+			t.Fatalf("round %d: a node of another parse has index %d", round, got)
+		}
+	}
+	for k, r := range f.Reactions {
+		if f.ReactionStart(k) != f.Start(r) || f.Stmts[f.ReactionStmt(k)] != Stmt(r) {
+			t.Fatalf("reaction %d: list index and node lookup disagree", k)
+		}
+	}
 }
