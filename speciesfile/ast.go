@@ -1,6 +1,7 @@
 // Package speciesfile reads the kiln mechanism format (.kiln files): it turns
 // the text of one file into a lossless syntax tree whose every token carries
-// byte offsets, resolves units to SI, reports local problems as diagnostics,
+// byte offsets (relative to its statement, whose start the File holds: see
+// RelSpan and File.Starts), resolves units to SI, reports local problems as diagnostics,
 // converts byte offsets to line/column positions (LineIndex), and formats the
 // small pieces of text that tools insert into files (FormatNASA7Block,
 // FormatNumber, File.ThermoInsertion). It does no I/O and never follows
