@@ -87,7 +87,10 @@ type Location struct {
 // Species is a resolved species declaration.
 type Species struct {
 	Name string
-	Loc  Location // the name token of the declaration
+	// File is the file declaring the species, Decl its declaration there.
+	// A Species holds no position: a declaration moved by an edit
+	// elsewhere keeps its value. Result.SpeciesLoc gives where it is.
+	File string
 	Decl *speciesfile.Species
 
 	Mol         *molecule.Molecule // nil without a (valid) structure
@@ -139,7 +142,9 @@ type Estimate struct {
 type GivenThermo struct {
 	Poly  *nasa.NASA7 // from a nasa7 block
 	Table *Table      // from a thermo-table block
-	Span  speciesfile.Span
+	// Span is the block, relative to the start of the declaration
+	// (Species.Decl) in its file.
+	Span  speciesfile.RelSpan
 	model *groupThermo // the table integrated, for reaction thermochemistry
 }
 
@@ -152,9 +157,10 @@ type Table struct {
 // Reaction is a resolved reaction with everything kiln can compute about it.
 // Pointer fields are nil when the value cannot be computed.
 type Reaction struct {
-	Decl     *speciesfile.Reaction
-	File     string
-	Line     int // 1-based line of the statement
+	Decl *speciesfile.Reaction
+	File string
+	// (A Reaction holds no position: a statement moved by an edit
+	// elsewhere keeps its value. Result.ReactionLine gives its line.)
 	Equation string
 	// Resolved is false when a species of the equation is undeclared.
 	Resolved bool
@@ -180,4 +186,7 @@ type Reaction struct {
 	reactants, products kinetics.Side // thermo of each side, nil when unknown
 	diags               []speciesfile.Diagnostic
 	unit                *reactionUnit // the memoized unit the reaction was made from
+	// declared: every name the reaction uses (terms, efficiencies, falloff
+	// collider) was declared when it was resolved.
+	declared bool
 }

@@ -47,6 +47,17 @@ type analysis struct {
 	// result: the rules of one statement run with their own sink so that
 	// their diagnostics can be kept with the statement's unit.
 	sink *[]speciesfile.Diagnostic
+	// stmtBase is where the statement whose rules run starts: the rules
+	// report the spans of their statement at stmtBase (a.at). Rules whose
+	// diagnostics are kept in a unit run with stmtBase 0, so that the unit
+	// holds spans relative to the statement (see memo.go).
+	stmtBase int
+	// stmtStart is where that statement starts in its file (stmtBase
+	// when the rules report absolute spans).
+	stmtStart int
+	// spStart holds where the declaration of each species of res.Species
+	// starts in its file.
+	spStart []int
 	// via maps each included file to the include statement of the analysed
 	// file through which it is reached (where its problems are reported).
 	via map[string]*speciesfile.Include
@@ -116,6 +127,16 @@ func (a *analysis) parallel(n, grain int, fn func(i int)) error {
 	return a.ctx.Err()
 }
 
+// at returns the span of the statement whose rules run for r, one of its
+// relative spans.
+func (a *analysis) at(r speciesfile.RelSpan) speciesfile.Span { return r.At(a.stmtBase) }
+
+// errorIn reports whether the reader found an error in r, a span of the
+// statement (of the file at path) whose rules run.
+func (a *analysis) errorIn(path string, r speciesfile.RelSpan) bool {
+	return a.res.Files[path].ErrorIn(r.At(a.stmtStart))
+}
+
 // reported returns the number of diagnostics reported so far (to the sink
 // while one is set): a rule compares counts to learn whether an earlier
 // check of the same declaration found something.
@@ -145,19 +166,20 @@ func (a *analysis) report(file string, d speciesfile.Diagnostic) {
 // reached (nil for the analysed file itself).
 func (a *analysis) includes(path string, f *speciesfile.File, stack []string, depth int, top *speciesfile.Include) {
 	a.order = append(a.order, path)
-	for _, inc := range f.Includes {
+	for k, inc := range f.Includes {
+		incSpan := inc.Path.Span.At(f.IncludeStart(k))
 		target, msg := a.resolveInclude(path, inc, stack, depth)
 		if path == a.res.Path {
 			a.res.Includes = append(a.res.Includes, ResolvedInclude{Decl: inc, Path: target})
 		}
 		if msg != "" {
-			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude, Message: msg})
+			a.report(path, speciesfile.Diagnostic{Span: incSpan, Severity: speciesfile.SeverityError, Code: CodeBadInclude, Message: msg})
 			if top != nil {
 				// A problem further down (a cycle, nesting too deep, a
 				// path outside the workspace) is otherwise reported only in
 				// files that may never be analysed on their own: say it on
 				// the analysed file's include too.
-				a.report(a.res.Path, speciesfile.Diagnostic{Span: top.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
+				a.report(a.res.Path, speciesfile.Diagnostic{Span: a.res.File.Abs(top, top.Path.Span), Severity: speciesfile.SeverityError, Code: CodeBadInclude,
 					Message: fmt.Sprintf("%s, in %s (through %s)", msg, shortPath(path), top.Path.Text)})
 			}
 			continue
@@ -167,19 +189,19 @@ func (a *analysis) includes(path string, f *speciesfile.File, stack []string, de
 		}
 		text, err := a.w.read(target)
 		if err != nil {
-			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
+			a.report(path, speciesfile.Diagnostic{Span: incSpan, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
 				Message: fmt.Sprintf("cannot read included file %q: %v", inc.Path.Text, unwrapPathError(err))})
 			continue
 		}
 		if len(text) > maxFileSize {
-			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
+			a.report(path, speciesfile.Diagnostic{Span: incSpan, Severity: speciesfile.SeverityError, Code: CodeBadInclude,
 				Message: fmt.Sprintf("included file %q is larger than the 64 MiB limit", inc.Path.Text)})
 			continue
 		}
 		g := a.w.parse(target, text)
 		a.res.Files[target] = g
 		if n := countErrors(g.Diags); n > 0 {
-			a.report(path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityWarning, Code: CodeBadInclude,
+			a.report(path, speciesfile.Diagnostic{Span: incSpan, Severity: speciesfile.SeverityWarning, Code: CodeBadInclude,
 				Message: fmt.Sprintf("included file %q has %d syntax error(s); its broken statements are ignored", inc.Path.Text, n)})
 		}
 		next := top
@@ -234,15 +256,17 @@ func cycleText(stack []string, target string) string {
 func (a *analysis) groups() {
 	seen := map[string]*Group{}
 	for _, path := range a.order {
-		for _, g := range a.res.Files[path].Groups {
+		f := a.res.Files[path]
+		for k, g := range f.Groups {
+			nameSpan := g.Name.Span.At(f.GroupStart(k))
 			name, err := benson.ParseGroupName(g.Name.Text)
 			if err != nil {
-				a.report(path, speciesfile.Diagnostic{Span: g.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
+				a.report(path, speciesfile.Diagnostic{Span: nameSpan, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
 					Message: fmt.Sprintf("group name %q is not Benson notation: %v", g.Name.Text, err)})
 				continue
 			}
 			if first, dup := seen[name]; dup {
-				a.report(path, speciesfile.Diagnostic{Span: g.Name.Span, Severity: speciesfile.SeverityWarning, Code: CodeDuplicateGroup,
+				a.report(path, speciesfile.Diagnostic{Span: nameSpan, Severity: speciesfile.SeverityWarning, Code: CodeDuplicateGroup,
 					Message: fmt.Sprintf("group %s is already defined; this definition is ignored", name),
 					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first definition"}}})
 				continue
@@ -250,10 +274,10 @@ func (a *analysis) groups() {
 			if b, ok := builtinGroup(name); ok && g.Hf298 != nil && g.S298 != nil && len(g.Cp) > 0 {
 				// Only a complete statement replaces the value (userGroups
 				// skips the others; the reader names what is missing).
-				a.report(path, speciesfile.Diagnostic{Span: g.Name.Span, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeGroupOverride,
+				a.report(path, speciesfile.Diagnostic{Span: nameSpan, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeGroupOverride,
 					Message: fmt.Sprintf("group %s replaces kiln's built-in value (%s; %s) for every species in scope", name, a.thermoSummary(b.Hf298, b.S298), b.Source)})
 			}
-			gr := &Group{Name: name, Loc: Location{File: path, Span: g.Name.Span}, Decl: g}
+			gr := &Group{Name: name, Loc: Location{File: path, Span: nameSpan}, Decl: g}
 			seen[name] = gr
 			a.res.Groups = append(a.res.Groups, gr)
 		}
@@ -355,13 +379,14 @@ func (a *analysis) structure(path string, sp *Species) {
 	m, err := p.mol, p.err
 	if err != nil {
 		sp.SMILESError = err
-		start, end := tok.Span.Start, tok.Span.End
+		ts := a.at(tok.Span)
+		start, end := ts.Start, ts.End
 		if se, ok := err.(*molecule.SMILESError); ok {
-			start = tok.Span.Start + min(max(se.Pos, 0), len(tok.Text))
+			start = ts.Start + min(max(se.Pos, 0), len(tok.Text))
 			end = start + 1
-			if end > tok.Span.End {
-				end = tok.Span.End
-				if start == end && start > tok.Span.Start {
+			if end > ts.End {
+				end = ts.End
+				if start == end && start > ts.Start {
 					start--
 				}
 			}

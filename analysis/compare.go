@@ -162,8 +162,9 @@ type compareSide struct {
 }
 
 type sideReaction struct {
-	d    *speciesfile.Reaction
-	file string
+	d     *speciesfile.Reaction
+	file  string
+	start int // where d starts in file
 }
 
 // Compare reads mechanisms A and B (each with its includes) and matches
@@ -310,18 +311,22 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 	}
 	decls := make([]*speciesfile.Species, 0, nd)
 	files := make([]string, 0, nd)
+	starts := make([]int, 0, nd)
 	s.species = make([]*Species, 0, nd)
 	for _, p := range a.order {
-		for _, d := range a.res.Files[p].Species {
+		f := a.res.Files[p]
+		for k, d := range f.Species {
 			if _, dup := s.byName[d.Name.Text]; dup {
 				continue
 			}
-			sp := &Species{Name: d.Name.Text, Loc: Location{File: p, Span: d.Name.Span}, Decl: d, Source: SourceNone}
+			start := f.SpeciesStart(k)
+			sp := &Species{Name: d.Name.Text, File: p, Decl: d, Source: SourceNone}
 			s.byName[sp.Name] = sp
 			s.pos[sp.Name] = len(s.species)
 			s.species = append(s.species, sp)
 			decls = append(decls, d)
 			files = append(files, p)
+			starts = append(starts, start)
 		}
 	}
 	// Read the structures on all cores; structure() below finds them in
@@ -334,6 +339,7 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 		return nil, err
 	}
 	for i, sp := range s.species {
+		a.stmtBase, a.stmtStart = starts[i], starts[i]
 		a.structure(files[i], sp)
 		if sp.Mol == nil {
 			sp.Composition, _ = compositionOf(sp.Decl) // nil when not a formula of elements
@@ -347,11 +353,11 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 	s.reactions = make([]sideReaction, 0, nr)
 	for _, p := range a.order {
 		f := a.res.Files[p]
-		for _, d := range f.Reactions {
-			if f.ErrorIn(d.Body()) {
+		for k, d := range f.Reactions {
+			if f.ErrorIn(d.Body().At(f.ReactionStart(k))) {
 				continue // a reaction the reader could not read is not data
 			}
-			s.reactions = append(s.reactions, sideReaction{d: d, file: p})
+			s.reactions = append(s.reactions, sideReaction{d: d, file: p, start: f.ReactionStart(k)})
 		}
 	}
 	return s, nil
@@ -376,12 +382,12 @@ func (s *compareSide) summary() CompareSide {
 // rref describes a reaction of this side.
 func (s *compareSide) rref(r sideReaction) ReactionRef {
 	f := s.a.res.Files[r.file]
-	return ReactionRef{Equation: equationText(f, r.d), File: r.file, Line: StmtLine(f, r.d)}
+	return ReactionRef{Equation: equationText(f, r.d, r.start), File: r.file, Line: stmtLineAt(f, r.d, r.start)}
 }
 
 func (s *compareSide) ref(sp *Species) SpeciesRef {
-	f := s.a.res.Files[sp.Loc.File]
-	r := SpeciesRef{Name: sp.Name, File: sp.Loc.File, Line: f.Lines.Position(sp.Loc.Span.Start).Line + 1, SMILES: smilesOf(sp), Formula: sp.Formula}
+	f := s.a.res.Files[sp.File]
+	r := SpeciesRef{Name: sp.Name, File: sp.File, Line: f.Lines.Line(s.a.res.SpeciesLoc(sp).Span.Start) + 1, SMILES: smilesOf(sp), Formula: sp.Formula}
 	return r
 }
 
@@ -398,7 +404,9 @@ func (s *compareSide) thermoOf(sp *Species) {
 	if sp.Given != nil || sp.Mol == nil || sp.Estimate != nil {
 		return
 	}
-	s.a.estimateSpecies(sp.Loc.File, sp, s.user)
+	start := s.a.res.declStart(sp)
+	s.a.stmtBase, s.a.stmtStart = start, start
+	s.a.estimateSpecies(sp.File, sp, s.user)
 	if sp.Estimate != nil {
 		sp.Source = SourceEstimate
 	}

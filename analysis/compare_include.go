@@ -34,11 +34,14 @@ const maxIncludeDupReports = 20
 // included file declares under a second name is seen where the files are
 // put together. Both declarations are related: the first (as before), then
 // sp's. The code is duplicate-species either way (FORMAT.md §4).
-func (a *analysis) reportSameStructure(path string, sp, first *Species) {
-	related := []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: first.Name + " has this structure"}}
+//
+// start is where sp's declaration starts in path, firstLoc the name of
+// first's declaration.
+func (a *analysis) reportSameStructure(path string, sp, first *Species, start int, firstLoc Location) {
+	related := []speciesfile.Related{{File: firstLoc.File, Span: firstLoc.Span, Message: first.Name + " has this structure"}}
 	if path == a.res.Path {
-		a.report(path, speciesfile.Diagnostic{Span: sp.Decl.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
-			Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(first.Loc)),
+		a.report(path, speciesfile.Diagnostic{Span: sp.Decl.SMILES.Span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
+			Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(firstLoc)),
 			Related: related})
 		return
 	}
@@ -52,14 +55,14 @@ func (a *analysis) reportSameStructure(path string, sp, first *Species) {
 	a.viaDups[inc]++
 	switch n := a.viaDups[inc]; {
 	case n == maxIncludeDupReports+1:
-		a.report(a.res.Path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
+		a.report(a.res.Path, speciesfile.Diagnostic{Span: a.res.File.Abs(inc, inc.Path.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
 			Message: fmt.Sprintf("more structures brought in by %s are declared under two names; `kiln compare` lists them all", inc.Path.Text)})
 		return
 	case n > maxIncludeDupReports:
 		return
 	}
-	a.report(a.res.Path, speciesfile.Diagnostic{Span: inc.Path.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
+	a.report(a.res.Path, speciesfile.Diagnostic{Span: a.res.File.Abs(inc, inc.Path.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
 		Message: fmt.Sprintf("included file %s declares %s with the same structure as %s (%s); rename one to the other",
-			shortPath(path), sp.Name, first.Name, a.where(first.Loc)),
-		Related: append(related, speciesfile.Related{File: path, Span: sp.Loc.Span, Message: sp.Name + " has the same structure"})})
+			shortPath(path), sp.Name, first.Name, a.where(firstLoc)),
+		Related: append(related, speciesfile.Related{File: path, Span: sp.Decl.Name.Span.At(start), Message: sp.Name + " has the same structure"})})
 }

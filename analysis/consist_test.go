@@ -105,7 +105,7 @@ func TestFillThenCheckIsClean(t *testing.T) {
 		var blocks []speciesfile.Span
 		for _, sp := range res2.Species {
 			if b := sp.Decl.NASA7; b != nil {
-				blocks = append(blocks, b.Span)
+				blocks = append(blocks, b.Span.At(res2.declStart(sp)))
 				if set.ExplicitFitRange {
 					assert.Equal(t, set.TMid, b.TMid.Value, sp.Name)
 					assert.Equal(t, set.THigh, b.THigh.Value, sp.Name)

@@ -69,7 +69,7 @@ func (e *Estimate) BlockSource(stamp string) string {
 // InsertThermoEdit returns the insertion of an estimated nasa7 block under
 // species sp, which must be declared in the analysed file and have no block.
 func (r *Result) InsertThermoEdit(sp *Species) (Edit, bool) {
-	if sp == nil || sp.Loc.File != r.Path || sp.Decl.NASA7 != nil || sp.Decl.Table != nil || sp.Estimate == nil {
+	if sp == nil || sp.File != r.Path || sp.Decl.NASA7 != nil || sp.Decl.Table != nil || sp.Estimate == nil {
 		return Edit{}, false
 	}
 	if _, _, err := sp.Estimate.NASA7(); err != nil {
@@ -95,13 +95,13 @@ func (r *Result) blockText(sp *Species, indent, nl string) string {
 // ReplaceThermoEdit returns the replacement of species sp's own thermo block
 // by the estimated nasa7 block.
 func (r *Result) ReplaceThermoEdit(sp *Species) (Edit, bool) {
-	if sp == nil || sp.Loc.File != r.Path || sp.Given == nil || sp.Estimate == nil {
+	if sp == nil || sp.File != r.Path || sp.Given == nil || sp.Estimate == nil {
 		return Edit{}, false
 	}
 	if _, _, err := sp.Estimate.NASA7(); err != nil {
 		return Edit{}, false
 	}
-	span := sp.Given.Span
+	span := sp.Given.Span.At(r.declStart(sp))
 	src := r.File.Src
 	// The block span covers its lines; replace from the start of its first
 	// line so that the new block carries its own indentation.
@@ -154,7 +154,7 @@ func (r *Result) FillPlan() ([]Edit, []Skip) {
 	var out []Edit
 	var skips []Skip
 	for _, sp := range r.Species {
-		if sp.Loc.File != r.Path || sp.Given != nil {
+		if sp.File != r.Path || sp.Given != nil {
 			continue
 		}
 		if e, ok := r.InsertThermoEdit(sp); ok {

@@ -223,7 +223,7 @@ func (r *Result) Equilibrium(ctx context.Context, req EquilibriumRequest) (*Equi
 			return nil, fmt.Errorf("mix species %s is not declared in %s", m.Name, out.File)
 		}
 		if used[m.Name] == nil {
-			return nil, fmt.Errorf("mix species %s cannot take part: %s (declared at %s)", m.Name, reasons[m.Name], r.position(sp.Loc, display))
+			return nil, fmt.Errorf("mix species %s cannot take part: %s (declared at %s)", m.Name, reasons[m.Name], r.position(r.SpeciesLoc(sp), display))
 		}
 	}
 	if len(species) == 0 {

@@ -162,9 +162,9 @@ func digest(r *Result) string {
 	}
 	for _, sp := range r.Species {
 		hf, s, ok := sp.Hf298S298()
-		fmt.Fprintf(&b, "S %s %s %v %s %s %v %v %v %v", sp.Name, sp.Loc.File, sp.Loc.Span, sp.Formula, sp.Source, hf, s, ok, sp.MolarMass)
+		fmt.Fprintf(&b, "S %s %s %v %s %s %v %v %v %v", sp.Name, sp.File, r.SpeciesLoc(sp).Span, sp.Formula, sp.Source, hf, s, ok, sp.MolarMass)
 		if sp.Given != nil {
-			fmt.Fprintf(&b, " given %v", sp.Given.Span)
+			fmt.Fprintf(&b, " given %v", sp.Given.Span.At(r.declStart(sp)))
 		}
 		if sp.Estimate != nil {
 			fmt.Fprintf(&b, " est %v %v %v", sp.Estimate.Hf298, sp.Estimate.S298, sp.Estimate.Cp)
@@ -178,7 +178,7 @@ func digest(r *Result) string {
 		return fmt.Sprint(*p)
 	}
 	for _, rx := range r.Reactions {
-		fmt.Fprintf(&b, "R %d %q %v %s %s %s %v %v %v", rx.Line, rx.Equation, rx.Resolved, f(rx.DH298), f(rx.DS298), f(rx.DG298),
+		fmt.Fprintf(&b, "R %d %q %v %s %s %s %v %v %v", r.ReactionLine(rx), rx.Equation, rx.Resolved, f(rx.DH298), f(rx.DS298), f(rx.DG298),
 			rx.Balance, rx.Collision, f(rx.ReverseRate1000))
 		for _, k := range keqTemperatures {
 			fmt.Fprintf(&b, " %s=%s", k.Key, f(rx.Kp[k.Key]))
@@ -245,7 +245,7 @@ func TestIncrementalMatchesScratch(t *testing.T) {
 					t.Fatalf("step %d: incremental result differs from scratch\n%s", step, firstDifference(gd, wd))
 				}
 				for _, sp := range got.Species {
-					require.Same(t, got.Files[sp.Loc.File].Species[indexOf(got.Files[sp.Loc.File].Species, sp.Decl)], sp.Decl)
+					require.Same(t, got.Files[sp.File].Species[indexOf(got.Files[sp.File].Species, sp.Decl)], sp.Decl)
 				}
 				// Values reused from the last analysis are shared, never
 				// modified: the last result still says what it said.
@@ -329,23 +329,36 @@ func TestIncrementalReusesUnits(t *testing.T) {
 	at := strings.Index(src, "species M7 ")
 	after := analyse(src[:at] + "# a remark\n" + src[at:])
 	requireReused(t, before, after, map[string]bool{}, map[string]bool{})
-	// The statements before the comment (but the one just before, which is
-	// read again) are the same syntax nodes, so their values are the same
-	// too; those after it moved, so they are new values made from the same
-	// units.
+	// Every statement but the two read again (the one holding the comment
+	// and the one before it) is the same syntax node, moved or not, so its
+	// value is the same too: values hold no positions.
 	kept := 0
 	for _, sp := range after.Species {
 		same := before.ByName[sp.Name].Decl == sp.Decl
 		require.Equal(t, same, before.ByName[sp.Name] == sp, "species %s: value reused", sp.Name)
 		if same {
 			kept++
-			require.Less(t, sp.Decl.Span().Start, at)
 		}
 	}
-	require.Equal(t, strings.Count(src[:at], "\nspecies ")-1, kept, "species values reused")
+	require.GreaterOrEqual(t, kept, len(after.Species)-2, "species values reused")
+	require.NotSame(t, before.ByName["M7"], after.ByName["M7"], "M7 was read again")
+	keptRx := 0
 	for i, r := range after.Reactions {
-		require.NotSame(t, before.Reactions[i], r, "reaction %s after the comment: a new value", r.Equation)
+		if before.Reactions[i] == r {
+			keptRx++
+			require.Same(t, before.Reactions[i].Decl, r.Decl)
+		}
 	}
+	require.GreaterOrEqual(t, keptRx, len(after.Reactions)-2, "reaction values reused")
+	// the values and positions of the moved statements are right: the
+	// result equals an analysis from scratch (TestIncrementalMatchesScratch
+	// checks that on random edits)
+	m7 := after.SpeciesLoc(after.ByName["M7"])
+	require.Equal(t, "M7", string(after.File.Src[m7.Span.Start:m7.Span.End]))
+	last := after.Species[len(after.Species)-1]
+	loc := after.SpeciesLoc(last)
+	require.Equal(t, last.Name, string(after.File.Src[loc.Span.Start:loc.Span.End]))
+	require.Equal(t, before.SpeciesLoc(last).Span.Start+len("# a remark\n"), loc.Span.Start)
 
 	// A new SMILES for M7: its unit, and only the reactions naming M7.
 	line := src[at : at+strings.IndexByte(src[at:], '\n')]
@@ -381,5 +394,27 @@ func requireReused(t *testing.T, a, b *Result, species, reactions map[string]boo
 		require.NotNil(t, old)
 		same := old.DH298 == r.DH298 // units share their computed values
 		require.Equal(t, !reactions[r.Equation], same, "reaction %s: unit reused", r.Equation)
+	}
+}
+
+// TestIncrementalLeadingComment: a comment typed just before a declaration
+// with a thermo block changes the statement's leading lines, not its body:
+// its unit is reused and every position (the block's too) must come out as
+// from scratch.
+func TestIncrementalLeadingComment(t *testing.T) {
+	at := strings.Index(incrementalBase, "species POLY ")
+	require.Positive(t, at)
+	ws := NewWorkspace("", func(string) ([]byte, error) { return nil, fs.ErrNotExist }, DefaultSettings())
+	ws.SetIncremental(true)
+	for _, text := range []string{incrementalBase, incrementalBase[:at] + "# a remark\n# and another\n" + incrementalBase[at:]} {
+		ws.SetOverlay("m.kiln", []byte(text))
+		got, err := ws.Analyze(context.Background(), "m.kiln")
+		require.NoError(t, err)
+		scratch := NewWorkspace("", func(string) ([]byte, error) { return nil, fs.ErrNotExist }, DefaultSettings())
+		scratch.SetOverlay("m.kiln", []byte(text))
+		want, err := scratch.Analyze(context.Background(), "m.kiln")
+		require.NoError(t, err)
+		require.Equal(t, stripPointers(digest(want)), stripPointers(digest(got)))
+		require.NotNil(t, got.ByName["POLY"].Given)
 	}
 }

@@ -50,8 +50,9 @@ type memoTables struct {
 // file's species and reaction lists (nil where none was made), and the
 // Species and Reaction values made from them. A value is reused as it is by
 // the next analysis when its statement is the same syntax node (the reader
-// kept it: same text at the same offsets) and its unit is kept; values are
-// never modified once their analysis is finished.
+// kept it: the same text, moved by an edit elsewhere or not — values hold
+// no positions) and its unit is kept; values are never modified once their
+// analysis is finished.
 type fileMemo struct {
 	file    *speciesfile.File
 	species []*speciesUnit
@@ -71,6 +72,7 @@ type memo struct {
 	old, next *memoTables
 	align     map[string]*alignment
 	changed   map[string]bool // names of the species whose unit was recomputed
+	namesKept bool            // the same species names are declared as in the last analysis (sameNames)
 	// the alignment asked for last (file is called once per statement)
 	lastPath string
 	lastAl   *alignment
@@ -80,6 +82,10 @@ type memo struct {
 type alignment struct {
 	old                *fileMemo // nil: nothing to reuse
 	species, reactions []int32   // index in the old lists, -1 for none
+	// sameSpecies: every species statement matches a different old one of
+	// the same text and none is left over (so the names declared are the
+	// same).
+	sameSpecies bool
 }
 
 // memoKey identifies the inputs shared by every unit of an analysis.
@@ -197,9 +203,11 @@ func (m *memo) file(path string, f *speciesfile.File) *alignment {
 	al := &alignment{}
 	if m.old != nil {
 		if old := m.old.files[path]; old != nil && old.file.EnergyUnit == f.EnergyUnit {
+			of := old.file
 			al.old = old
-			al.species = alignLists(old.file, f, old.file.Species, f.Species)
-			al.reactions = alignLists(old.file, f, old.file.Reactions, f.Reactions)
+			al.species = alignLists(of, f, of.Species, f.Species, of.SpeciesStart, f.SpeciesStart)
+			al.sameSpecies = bijective(al.species, len(of.Species))
+			al.reactions = alignLists(of, f, of.Reactions, f.Reactions, of.ReactionStart, f.ReactionStart)
 		}
 	}
 	m.align[path] = al
@@ -209,13 +217,20 @@ func (m *memo) file(path string, f *speciesfile.File) *alignment {
 
 // alignLists matches the statements of news (of file nf) with those of olds
 // (of file of) that have the same text: it returns, per new statement, the
-// index of an old one or -1.
-func alignLists[T speciesfile.Stmt](of, nf *speciesfile.File, olds, news []T) []int32 {
+// index of an old one or -1. ostart and nstart give where each statement
+// starts. A statement the reader kept (the same node, moved or not) has
+// the same text without comparing it.
+func alignLists[T comparable](of, nf *speciesfile.File, olds, news []T, ostart, nstart func(int) int) []int32 {
 	out := make([]int32, len(news))
 	for i := range out {
 		out[i] = -1
 	}
-	same := func(i, j int) bool { return bytes.Equal(bodyText(of, olds[i]), bodyText(nf, news[j])) }
+	text := func(f *speciesfile.File, st T, start int) []byte {
+		return bodyText(f, any(st).(speciesfile.Stmt), start)
+	}
+	same := func(i, j int) bool {
+		return olds[i] == news[j] || bytes.Equal(text(of, olds[i], ostart(i)), text(nf, news[j], nstart(j)))
+	}
 	p := 0
 	for p < len(olds) && p < len(news) && same(p, p) {
 		out[p] = int32(p)
@@ -231,19 +246,66 @@ func alignLists[T speciesfile.Stmt](of, nf *speciesfile.File, olds, news []T) []
 	}
 	region := make(map[string]int32, len(olds)-p-q)
 	for i := p; i < len(olds)-q; i++ {
-		region[string(bodyText(of, olds[i]))] = int32(i)
+		region[string(text(of, olds[i], ostart(i)))] = int32(i)
 	}
 	for j := p; j < len(news)-q; j++ {
-		if i, ok := region[string(bodyText(nf, news[j]))]; ok {
+		if i, ok := region[string(text(nf, news[j], nstart(j)))]; ok {
 			out[j] = i
 		}
 	}
 	return out
 }
 
-// bodyText returns the text of a statement's body (shared with the source).
-func bodyText(f *speciesfile.File, st speciesfile.Stmt) []byte {
-	b := st.Body()
+// bijective reports whether match (an alignment with n old statements)
+// pairs every new statement with a different old one and leaves none over.
+func bijective(match []int32, n int) bool {
+	if len(match) != n {
+		return false
+	}
+	used := make([]bool, n)
+	for _, i := range match {
+		if i < 0 || used[i] {
+			return false
+		}
+		used[i] = true
+	}
+	return true
+}
+
+// sameNames reports whether the analysis declares the same species names
+// as the last one: every file in scope (order) that declares species is
+// aligned one to one with that file's species in the last analysis, and
+// the last analysis had no other file declaring species. (Aligned
+// statements have the same text, so the same names.) Called after the
+// species pass, which aligned every file declaring species.
+func (m *memo) sameNames(order []string, files map[string]*speciesfile.File) bool {
+	if m == nil || m.old == nil {
+		return false
+	}
+	n := 0
+	for _, path := range order {
+		f := files[path]
+		if len(f.Species) == 0 {
+			continue
+		}
+		n++
+		al := m.align[path]
+		if al == nil || al.old == nil || !al.sameSpecies {
+			return false
+		}
+	}
+	for _, fm := range m.old.files {
+		if len(fm.file.Species) > 0 {
+			n--
+		}
+	}
+	return n == 0
+}
+
+// bodyText returns the text of the body of statement st, which starts at
+// start (shared with the source).
+func bodyText(f *speciesfile.File, st speciesfile.Stmt, start int) []byte {
+	b := st.Body().At(start)
 	if b.Start < 0 || b.End > len(f.Src) || b.Start > b.End {
 		return nil
 	}
@@ -255,9 +317,15 @@ func shift(sp speciesfile.Span, delta int) speciesfile.Span {
 	return speciesfile.Span{Start: sp.Start + delta, End: sp.End + delta}
 }
 
-// pinned reports whether a diagnostic of ds lies outside the statement body
-// [start, end]: such a unit cannot be moved and is reused only in place.
-func pinned(ds []speciesfile.Diagnostic, start, end int) bool {
+// inStmt returns r, a span of a statement, as a diagnostic span relative
+// to the statement (appendRelocated moves it to the statement's place).
+func inStmt(r speciesfile.RelSpan) speciesfile.Span { return r.At(0) }
+
+// pinned reports whether a diagnostic of ds (spans relative to the
+// statement's body) lies outside the body [0, n]: such a unit cannot be
+// moved and is reused only in place.
+func pinned(ds []speciesfile.Diagnostic, n int) bool {
+	start, end := 0, n
 	for _, d := range ds {
 		if d.Span.Start < start || d.Span.End > end {
 			return true
@@ -302,48 +370,58 @@ func relocate(ds []speciesfile.Diagnostic, file string, delta int) []speciesfile
 
 // speciesUnit is the result of the per-statement rules of one species
 // declaration: everything in Species but its name, location and syntax
-// node, and its diagnostics with spans relative to the statement body.
+// node, and its diagnostics with spans relative to the start of the
+// statement's body (a statement's leading comment lines may change while
+// the unit is kept).
 type speciesUnit struct {
 	energyUnit string // the file's energy unit the statement was read with
-	pinned     int    // body offset the unit is bound to, -1 when it can move
+	pinned     int    // body start the unit is bound to, -1 when it can move
 	tmpl       Species
 	diags      []speciesfile.Diagnostic
 }
 
-func newSpeciesUnit(energyUnit string, sp *Species, diags []speciesfile.Diagnostic, file string) *speciesUnit {
-	body := sp.Decl.Body()
-	base := body.Start
-	u := &speciesUnit{energyUnit: energyUnit, pinned: -1, tmpl: *sp, diags: relocate(diags, file, -base)}
-	if pinned(diags, body.Start, body.End) {
-		u.pinned = base
+// newSpeciesUnit makes the unit of sp, a declaration whose body starts at
+// bodyStart and whose rules reported diags (spans relative to the body).
+func newSpeciesUnit(energyUnit string, sp *Species, diags []speciesfile.Diagnostic, bodyStart int) *speciesUnit {
+	u := &speciesUnit{energyUnit: energyUnit, pinned: -1, tmpl: *sp, diags: diags}
+	if pinned(diags, sp.Decl.Body().Len()) {
+		u.pinned = bodyStart
 	}
-	u.tmpl.Name, u.tmpl.Loc, u.tmpl.Decl, u.tmpl.unit = "", Location{}, nil, nil
-	if sp.Given != nil {
-		g := *sp.Given
-		g.Span = shift(g.Span, -base)
-		u.tmpl.Given = &g
+	u.tmpl.Name, u.tmpl.File, u.tmpl.Decl, u.tmpl.unit = "", "", nil, nil
+	if g := sp.Given; g != nil {
+		// kept relative to the body: the unit may stand for the same text
+		// after other leading comment lines
+		c := *g
+		c.Span = moveRel(c.Span, -sp.Decl.Body().From)
+		u.tmpl.Given = &c
 	}
 	return u
 }
 
-// fits reports whether u can stand for statement st of file f.
-func (u *speciesUnit) fits(f *speciesfile.File, st speciesfile.Stmt) bool {
-	return u != nil && u.energyUnit == f.EnergyUnit && (u.pinned < 0 || u.pinned == st.Body().Start)
+// moveRel returns r moved by d bytes.
+func moveRel(r speciesfile.RelSpan, d int) speciesfile.RelSpan {
+	return speciesfile.RelSpan{From: r.From + d, To: r.To + d}
 }
 
-// apply fills sp (whose Name, Loc and Decl are set) from the unit; keep
+// fits reports whether u can stand for a declaration of file f whose body
+// starts at bodyStart.
+func (u *speciesUnit) fits(f *speciesfile.File, bodyStart int) bool {
+	return u != nil && u.energyUnit == f.EnergyUnit && (u.pinned < 0 || u.pinned == bodyStart)
+}
+
+// apply fills sp (whose Name, File and Decl are set) from the unit; keep
 // records the unit in sp (incremental analyses compare units).
 func (u *speciesUnit) apply(sp *Species, keep bool) {
-	name, loc, decl := sp.Name, sp.Loc, sp.Decl
+	name, file, decl := sp.Name, sp.File, sp.Decl
 	*sp = u.tmpl
-	sp.Name, sp.Loc, sp.Decl = name, loc, decl
+	sp.Name, sp.File, sp.Decl = name, file, decl
 	if keep {
 		sp.unit = u
 	}
-	if u.tmpl.Given != nil {
-		g := *u.tmpl.Given
-		g.Span = shift(g.Span, decl.Body().Start)
-		sp.Given = &g
+	if g := u.tmpl.Given; g != nil {
+		c := *g
+		c.Span = moveRel(c.Span, decl.Body().From)
+		sp.Given = &c
 	}
 }
 
@@ -359,7 +437,7 @@ func (m *memo) species(path string, f *speciesfile.File, k int) *speciesUnit {
 		return nil
 	}
 	u := al.old.species[al.species[k]]
-	if !u.fits(f, f.Species[k]) {
+	if !u.fits(f, f.SpeciesStart(k)+f.Species[k].Body().From) {
 		return nil
 	}
 	m.next.files[path].species[k] = u
@@ -377,7 +455,8 @@ func (m *memo) keepSpecies(path string, k int, u *speciesUnit, sp *Species) {
 
 // oldSpecies returns the Species the last analysis made from unit u for
 // declaration k of file f (at path), when the declaration is the same
-// syntax node; nil otherwise.
+// syntax node, moved by an edit elsewhere or not (a Species holds no
+// position); nil otherwise.
 func (m *memo) oldSpecies(path string, f *speciesfile.File, k int, u *speciesUnit) *Species {
 	if m == nil || u == nil {
 		return nil
@@ -387,15 +466,15 @@ func (m *memo) oldSpecies(path string, f *speciesfile.File, k int, u *speciesUni
 		return nil
 	}
 	o := al.old.sps[al.species[k]]
-	if o == nil || o.Decl != f.Species[k] || o.unit != u {
+	if o == nil || o.Decl != f.Species[k] || o.unit != u || o.File != path {
 		return nil
 	}
 	return o
 }
 
 // oldReaction returns the Reaction the last analysis made for reaction k of
-// file f (at path), when the statement is the same syntax node, at the same
-// line, fully resolved then and now (every name it uses is declared), and
+// file f (at path), when the statement is the same syntax node (moved or
+// not), fully resolved then and now (every name it uses is declared), and
 // was made from a unit (computeReactions checks that the unit still holds).
 func (m *memo) oldReaction(a *analysis, path string, f *speciesfile.File, k int, equation string) *Reaction {
 	if m == nil {
@@ -410,24 +489,28 @@ func (m *memo) oldReaction(a *analysis, path string, f *speciesfile.File, k int,
 	if o == nil || o.Decl != d || !o.Resolved || o.unit == nil || o.Equation != equation || o.File != path {
 		return nil
 	}
-	for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
-		for _, t := range ts {
-			if _, ok := a.res.ByName[t.Name.Text]; !ok {
+	if !m.namesKept || !o.declared {
+		// (With the same names declared as when o was made with every
+		// name it uses declared, they still are.)
+		for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
+			for _, t := range ts {
+				if _, ok := a.res.ByName[t.Name.Text]; !ok {
+					return nil
+				}
+			}
+		}
+		for _, e := range d.Efficiencies {
+			if _, ok := a.res.ByName[e.Name.Text]; !ok {
+				return nil
+			}
+		}
+		if c := falloffCollider(d); c != nil {
+			if _, ok := a.res.ByName[c.Text]; !ok {
 				return nil
 			}
 		}
 	}
-	for _, e := range d.Efficiencies {
-		if _, ok := a.res.ByName[e.Name.Text]; !ok {
-			return nil
-		}
-	}
-	if c := falloffCollider(d); c != nil {
-		if _, ok := a.res.ByName[c.Text]; !ok {
-			return nil
-		}
-	}
-	if f.ErrorIn(d.Body()) || o.Line != StmtLine(f, d) {
+	if f.ErrorIn(d.Body().At(f.ReactionStart(k))) {
 		return nil
 	}
 	return o
@@ -440,9 +523,9 @@ type reactionText struct {
 	equation string // equationText
 }
 
-func newReactionText(f *speciesfile.File, d *speciesfile.Reaction) *reactionText {
+func newReactionText(f *speciesfile.File, d *speciesfile.Reaction, start int) *reactionText {
 	key := reactionKey(d)
-	return &reactionText{dupKey: key, dupHash: hashKey(key), equation: equationText(f, d)}
+	return &reactionText{dupKey: key, dupHash: hashKey(key), equation: equationText(f, d, start)}
 }
 
 // reactionText returns the text unit of reaction k of file f (at path),
@@ -450,7 +533,7 @@ func newReactionText(f *speciesfile.File, d *speciesfile.Reaction) *reactionText
 func (m *memo) reactionText(path string, f *speciesfile.File, k int) *reactionText {
 	d := f.Reactions[k]
 	if m == nil {
-		return newReactionText(f, d)
+		return newReactionText(f, d, f.ReactionStart(k))
 	}
 	al := m.file(path, f)
 	var u *reactionText
@@ -458,7 +541,7 @@ func (m *memo) reactionText(path string, f *speciesfile.File, k int) *reactionTe
 		u = al.old.rtext[al.reactions[k]]
 	}
 	if u == nil {
-		u = newReactionText(f, d)
+		u = newReactionText(f, d, f.ReactionStart(k))
 	}
 	m.next.files[path].rtext[k] = u
 	return u
@@ -537,21 +620,24 @@ func (m *memo) reaction(a *analysis, path string, f *speciesfile.File, k int) *r
 	}
 	d := f.Reactions[k]
 	u := al.old.rx[al.reactions[k]]
-	if u == nil || u.energyUnit != f.EnergyUnit || (u.pinned >= 0 && u.pinned != d.Body().Start) || !m.depsValid(a, d, u.deps) {
+	if u == nil || u.energyUnit != f.EnergyUnit || (u.pinned >= 0 && u.pinned != f.ReactionStart(k)+d.Body().From) || !m.depsValid(a, d, u.deps) {
 		return nil
 	}
 	m.next.files[path].rx[k] = u
 	return u
 }
 
-func newReactionUnit(energyUnit string, deps []*speciesUnit, r *Reaction) *reactionUnit {
+// newReactionUnit makes the unit of r, a reaction starting at start whose
+// rules reported r.diags (spans relative to the statement); the unit keeps
+// them relative to the statement's body.
+func newReactionUnit(energyUnit string, deps []*speciesUnit, r *Reaction, start int) *reactionUnit {
 	body := r.Decl.Body()
-	base := body.Start
-	u := &reactionUnit{energyUnit: energyUnit, pinned: -1, deps: deps, diags: relocate(r.diags, r.File, -base), tmpl: *r}
-	if pinned(r.diags, body.Start, body.End) {
-		u.pinned = base
+	diags := relocate(r.diags, r.File, -body.From)
+	u := &reactionUnit{energyUnit: energyUnit, pinned: -1, deps: deps, diags: diags, tmpl: *r}
+	if pinned(diags, body.Len()) {
+		u.pinned = start + body.From
 	}
-	u.tmpl.Decl, u.tmpl.File, u.tmpl.Line, u.tmpl.Equation, u.tmpl.diags = nil, "", 0, "", nil
+	u.tmpl.Decl, u.tmpl.File, u.tmpl.Equation, u.tmpl.diags = nil, "", "", nil
 	if r.model != nil && r.model.kc != nil {
 		// The model's Kc is bound to r, which holds its syntax node (and
 		// through it the whole parse of its file): bind it to a reaction
@@ -568,9 +654,9 @@ func newReactionUnit(energyUnit string, deps []*speciesUnit, r *Reaction) *react
 // was made with: its statement, file, line, equation and resolution) and
 // records the unit in r.
 func (u *reactionUnit) apply(r *Reaction) {
-	decl, file, line, eq, resolved := r.Decl, r.File, r.Line, r.Equation, r.Resolved
+	decl, file, eq, resolved, declared := r.Decl, r.File, r.Equation, r.Resolved, r.declared
 	*r = u.tmpl
-	r.Decl, r.File, r.Line, r.Equation, r.Resolved = decl, file, line, eq, resolved
+	r.Decl, r.File, r.Equation, r.Resolved, r.declared = decl, file, eq, resolved, declared
 	r.unit = u
 }
 

@@ -180,8 +180,10 @@ func rateGrid(factor float64) kinetics.CollisionSettings {
 // rates computes k_f and k_r at 1000 K and the settings' pressure, and
 // checks both against the collision limit over rateGrid and, for
 // pressure-dependent rates, over kinetics.CheckPressures (N2 bath gas).
-func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
-	if a.res.Files[r.File].ErrorIn(d.Body()) {
+// The diagnostics go to r.diags with spans relative to the statement, which
+// starts at start.
+func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction, start int) {
+	if a.res.Files[r.File].ErrorIn(d.Body().At(start)) {
 		return // rate parameters with a syntax error are not data
 	}
 	m, ok := a.rateModelOf(d, r)
@@ -191,7 +193,7 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 	if span, why := nonphysicalRate(d, m); why != "" {
 		// A rate no reaction can have is not used: no k_f, no k_r, no
 		// collision check built on it.
-		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeNonphysicalRate, Message: why})
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: inStmt(span), Severity: speciesfile.SeverityError, Code: speciesfile.CodeNonphysicalRate, Message: why})
 		return
 	}
 	r.model = m
@@ -208,7 +210,7 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 				edge = hi
 			}
 			r.RateTableEdge = edge
-			r.diags = append(r.diags, speciesfile.Diagnostic{Span: d.Pressures[0].P.Tok.Span, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeRateOutOfRange,
+			r.diags = append(r.diags, speciesfile.Diagnostic{Span: inStmt(d.Pressures[0].P.Tok.Span), Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeRateOutOfRange,
 				Message: fmt.Sprintf("rates are shown at %g bar, outside this table's pressures (%g–%g bar): the rate at %g bar is used there (no extrapolation)", P/1e5, lo/1e5, hi/1e5, edge/1e5)})
 		}
 	}
@@ -230,7 +232,7 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 	ms, hs := a.sizes(d.Reactants)
 	if v := worstCollision(m.fwdOrder, ms, hs, m.forward, pressures, m.PressureDependent(), set); v != nil {
 		r.Collision = v
-		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: inStmt(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
 			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K%s", v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v))})
 		return
 	}
@@ -264,7 +266,7 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction) {
 		if m.reverse != nil {
 			what = "reverse rate"
 		}
-		r.diags = append(r.diags, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: inStmt(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
 			Message: fmt.Sprintf("%s, %.3g, exceeds the collision limit %.3g (%s) at %.0f K%s", what, v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v))})
 	}
 }
@@ -344,7 +346,7 @@ func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 // carry a small negative T2, harmless there), and one reaction of a
 // `duplicate` pair may have a negative rate (pairs fitted with a negative
 // A): only a non-finite value is reported for those.
-func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.Span, string) {
+func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.RelSpan, string) {
 	span := d.Equation
 	if d.Rate != nil {
 		span = d.Rate.Span

@@ -30,10 +30,11 @@ func (a *analysis) reactions() error {
 	// hash (made once per reaction text unit) and chains entries of
 	// different keys sharing a hash.
 	type occurrence struct {
-		key  string
-		d    *speciesfile.Reaction
-		file string
-		next int32 // index of the next occurrence with the same hash, -1 for none
+		key   string
+		d     *speciesfile.Reaction
+		start int // where d starts in file
+		file  string
+		next  int32 // index of the next occurrence with the same hash, -1 for none
 	}
 	seen := make(map[uint64]int32, n)
 	occs := make([]occurrence, 0, n)
@@ -45,11 +46,12 @@ func (a *analysis) reactions() error {
 			}
 			rt := a.memo.reactionText(path, f, k)
 			key := rt.dupKey
-			if f.ErrorIn(d.Body()) {
+			start := f.ReactionStart(k)
+			if f.ErrorIn(d.Body().At(start)) {
 				// A reaction the reader could not read completely gets
 				// its syntax error only: not compared with others.
 				if path == a.res.Path {
-					a.res.Reactions = append(a.res.Reactions, a.reaction(path, d, rt.equation))
+					a.res.Reactions = append(a.res.Reactions, a.reaction(path, d, start, rt.equation))
 				}
 				continue
 			}
@@ -65,14 +67,15 @@ func (a *analysis) reactions() error {
 			}
 			if first != nil {
 				if d.Duplicate == nil || first.d.Duplicate == nil {
-					line := a.res.Files[first.file].Lines.Position(first.d.Equation.Start).Line + 1
+					firstEq := first.d.Equation.At(first.start)
+					line := a.res.Files[first.file].Lines.Position(firstEq.Start).Line + 1
 					where := fmt.Sprintf("line %d", line)
 					if first.file != path {
 						where = fmt.Sprintf("%s:%d", shortPath(first.file), line)
 					}
-					a.report(path, speciesfile.Diagnostic{Span: d.Equation, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateReaction,
+					a.report(path, speciesfile.Diagnostic{Span: d.Equation.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateReaction,
 						Message: fmt.Sprintf("this reaction repeats the one at %s; mark both with `duplicate` if both channels are intended", where),
-						Related: []speciesfile.Related{{File: first.file, Span: first.d.Equation, Message: "first occurrence"}}})
+						Related: []speciesfile.Related{{File: first.file, Span: firstEq, Message: "first occurrence"}}})
 				}
 			} else {
 				next := int32(-1)
@@ -80,14 +83,14 @@ func (a *analysis) reactions() error {
 					next = head
 				}
 				seen[rt.dupHash] = int32(len(occs))
-				occs = append(occs, occurrence{key: key, d: d, file: path, next: next})
+				occs = append(occs, occurrence{key: key, d: d, start: start, file: path, next: next})
 			}
 			if path != a.res.Path {
 				continue
 			}
 			r := a.memo.oldReaction(a, path, f, k, rt.equation)
 			if r == nil {
-				r = a.reaction(path, d, rt.equation)
+				r = a.reaction(path, d, start, rt.equation)
 			}
 			a.res.Reactions = append(a.res.Reactions, r)
 		}
@@ -113,7 +116,7 @@ func (a *analysis) computeReactions() error {
 		if r.unit != nil && r.unit != u {
 			// the last analysis's value, whose unit does not hold any
 			// more: it is not modified, a new value is made
-			r = &Reaction{Decl: r.Decl, File: r.File, Line: r.Line, Equation: r.Equation, Resolved: true}
+			r = &Reaction{Decl: r.Decl, File: r.File, Equation: r.Equation, Resolved: true, declared: r.declared}
 			rs[i] = r
 		}
 		if u != nil {
@@ -132,9 +135,9 @@ func (a *analysis) computeReactions() error {
 		if r.Balance != nil && r.Balance.Balanced {
 			a.thermo(r.Decl, r)
 		}
-		a.rates(r.Decl, r)
+		a.rates(r.Decl, r, f.ReactionStart(i))
 		if a.memo != nil {
-			units[i] = newReactionUnit(f.EnergyUnit, a.reactionDeps(r.Decl), r)
+			units[i] = newReactionUnit(f.EnergyUnit, a.reactionDeps(r.Decl), r, f.ReactionStart(i))
 			r.diags = nil
 		}
 	})
@@ -152,8 +155,9 @@ func (a *analysis) computeReactions() error {
 	for i, r := range rs {
 		u := units[i]
 		if u == nil {
-			// Not incremental: the diagnostics were reported into r.
-			a.res.Diagnostics = append(a.res.Diagnostics, r.diags...)
+			// Not incremental: the diagnostics were reported into r
+			// (spans relative to the statement).
+			a.res.Diagnostics = appendRelocated(a.res.Diagnostics, r.diags, r.File, f.ReactionStart(i))
 			r.diags = nil
 			continue
 		}
@@ -161,7 +165,7 @@ func (a *analysis) computeReactions() error {
 			u.apply(r)
 		}
 		a.memo.keepReaction(a.res.Path, i, u, r)
-		a.res.Diagnostics = appendRelocated(a.res.Diagnostics, u.diags, r.File, r.Decl.Body().Start)
+		a.res.Diagnostics = appendRelocated(a.res.Diagnostics, u.diags, r.File, f.ReactionStart(i)+r.Decl.Body().From)
 	}
 	a.rangeChecks()
 	return nil
@@ -198,7 +202,7 @@ func (a *analysis) rangeChecks() {
 		return
 	}
 	needs := map[*Species]need{}
-	for _, r := range a.res.Reactions {
+	for i, r := range a.res.Reactions {
 		if r.reactants == nil {
 			continue // no thermochemistry computed
 		}
@@ -213,24 +217,26 @@ func (a *analysis) rangeChecks() {
 					continue
 				}
 				if n, ok := needs[sp]; !ok || tmax > n.tmax {
-					needs[sp] = need{tmax, r.Line, r.Decl.Equation}
+					start := a.res.File.ReactionStart(i)
+					needs[sp] = need{tmax, stmtLineAt(a.res.File, r.Decl, start), r.Decl.Equation.At(start)}
 				}
 			}
 		}
 	}
-	for _, sp := range a.res.Species {
+	for i, sp := range a.res.Species {
 		n, ok := needs[sp]
 		if !ok {
 			continue
 		}
+		start := a.spStart[i]
 		lo, hi := sp.Given.Range()
 		if lo <= T298+rangeSlack && hi >= n.tmax-rangeSlack {
 			continue
 		}
-		if sp.Loc.File != a.res.Path {
+		if sp.File != a.res.Path {
 			// The block is in an included file: say it on the reaction
 			// of this file that needs it.
-			where := a.where(Location{File: sp.Loc.File, Span: sp.Given.Span})
+			where := a.where(Location{File: sp.File, Span: sp.Given.Span.At(start)})
 			a.report(a.res.Path, speciesfile.Diagnostic{Span: n.eq, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
 				Message: fmt.Sprintf("%s: its thermo block (%s) covers %g–%g K, but this reaction needs it from 298 K to %g K; values outside the block are extrapolated",
 					sp.Name, where, lo, hi, n.tmax)})
@@ -242,15 +248,15 @@ func (a *analysis) rangeChecks() {
 		} else if d := sp.Decl.Table; d != nil {
 			span = d.Header.Span
 		}
-		a.report(sp.Loc.File, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+		a.report(sp.File, speciesfile.Diagnostic{Span: span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
 			Message: fmt.Sprintf("%s: the block covers %g–%g K, but the reaction on line %d needs it from 298 K to %g K; values outside the block are extrapolated",
 				sp.Name, lo, hi, n.line, n.tmax)})
 	}
 }
 
-func recordUses(uses map[string][]Location, path string, d *speciesfile.Reaction) {
+func recordUses(uses map[string][]Location, path string, d *speciesfile.Reaction, start int) {
 	add := func(t speciesfile.Token) {
-		uses[t.Text] = append(uses[t.Text], Location{File: path, Span: t.Span})
+		uses[t.Text] = append(uses[t.Text], Location{File: path, Span: t.Span.At(start)})
 	}
 	for _, t := range d.Reactants {
 		add(t.Name)
@@ -280,8 +286,8 @@ func falloffCollider(d *speciesfile.Reaction) *speciesfile.Token {
 	if name == "M" || name == "" {
 		return nil
 	}
-	start := d.Falloff.Span.Start + 2
-	return &speciesfile.Token{Span: speciesfile.Span{Start: start, End: start + len(name)}, Text: name}
+	start := d.Falloff.Span.From + 2
+	return &speciesfile.Token{Span: speciesfile.RelSpan{From: start, To: start + len(name)}, Text: name}
 }
 
 // reactionKey identifies a reaction regardless of direction and term order.
@@ -310,22 +316,24 @@ func reactionKey(d *speciesfile.Reaction) string {
 
 // reaction resolves the names of one reaction (equation is its text with
 // blanks collapsed); computeReactions works out the rest.
-func (a *analysis) reaction(path string, d *speciesfile.Reaction, equation string) *Reaction {
+func (a *analysis) reaction(path string, d *speciesfile.Reaction, start int, equation string) *Reaction {
 	f := a.res.Files[path]
-	r := &Reaction{Decl: d, File: path, Line: StmtLine(f, d), Equation: equation, Resolved: true}
-	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Body()) {
+	r := &Reaction{Decl: d, File: path, Equation: equation, Resolved: true}
+	if len(d.Reactants) == 0 || len(d.Products) == 0 || f.ErrorIn(d.Body().At(start)) {
 		// A reaction the reader could not read (equation or rate lines)
 		// is not data: the syntax error is the one diagnostic.
 		r.Resolved = false
 		r.Kp = map[string]*float64{}
 		return r
 	}
+	r.declared = true
 	undeclared := func(t speciesfile.Token, what string) {
+		r.declared = false
 		msg := fmt.Sprintf("%s %s is not declared; add a `species %s SMILES` line", what, t.Text, t.Text)
 		if parts := strings.Split(t.Text, "+"); len(parts) > 1 && !strings.HasPrefix(t.Text, "(+") {
 			msg = fmt.Sprintf("%s %s is not declared; if you meant %s, put blanks around each +", what, t.Text, strings.Join(parts, " + "))
 		}
-		a.report(path, speciesfile.Diagnostic{Span: t.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUndeclaredSpecies, Message: msg})
+		a.report(path, speciesfile.Diagnostic{Span: t.Span.At(start), Severity: speciesfile.SeverityError, Code: speciesfile.CodeUndeclaredSpecies, Message: msg})
 	}
 	for _, ts := range [][]speciesfile.Term{d.Reactants, d.Products} {
 		for _, t := range ts {
@@ -364,12 +372,19 @@ func initKp(r *Reaction) {
 // it: the line of its keyword, not of the comment and blank lines that
 // precede it (they belong to the statement's span).
 func StmtLine(f *speciesfile.File, st speciesfile.Stmt) int {
-	return f.Lines.Position(st.Keyword().Span.Start).Line + 1
+	return stmtLineAt(f, st, f.Start(st))
 }
 
-// equationText is the equation as written with runs of blanks collapsed.
-func equationText(f *speciesfile.File, d *speciesfile.Reaction) string {
-	return strings.Join(strings.Fields(string(f.Src[d.Equation.Start:d.Equation.End])), " ")
+// stmtLineAt is StmtLine for a statement known to start at start.
+func stmtLineAt(f *speciesfile.File, st speciesfile.Stmt, start int) int {
+	return f.Lines.Line(st.Keyword().Span.At(start).Start) + 1
+}
+
+// equationText is the equation as written with runs of blanks collapsed;
+// d starts at start in f.
+func equationText(f *speciesfile.File, d *speciesfile.Reaction, start int) string {
+	eq := d.Equation.At(start)
+	return strings.Join(strings.Fields(string(f.Src[eq.Start:eq.End])), " ")
 }
 
 func (a *analysis) weighted(ts []speciesfile.Term) ([]kinetics.Weighted, bool) {
@@ -393,7 +408,7 @@ func (a *analysis) balance(d *speciesfile.Reaction, r *Reaction) {
 	b := kinetics.CheckBalance(re, pr)
 	r.Balance = &b
 	if !b.Balanced {
-		r.diags = append(r.diags, speciesfile.Diagnostic{Span: d.Equation, Severity: speciesfile.SeverityError, Code: speciesfile.CodeUnbalancedReaction,
+		r.diags = append(r.diags, speciesfile.Diagnostic{Span: inStmt(d.Equation), Severity: speciesfile.SeverityError, Code: speciesfile.CodeUnbalancedReaction,
 			Message: "unbalanced reaction: " + b.Message()})
 	}
 }

@@ -34,6 +34,7 @@ func (a *analysis) species() error {
 	a.memo = a.w.startMemo(a.res.Path, a.set, a.userKey+"|"+a.res.Units().EnergyName())
 	a.res.ByName = make(map[string]*Species, nSpecies)
 	a.res.Species = make([]*Species, 0, nSpecies)
+	a.spStart = make([]int, 0, nSpecies)
 
 	type item struct {
 		path string
@@ -61,22 +62,24 @@ func (a *analysis) species() error {
 				continue
 			}
 			name := d.Name.Text
+			nameSpan := d.Name.Span.At(f.SpeciesStart(k))
 			if first, dup := a.res.ByName[name]; dup {
 				// An error: a simulator reading the file may take either
 				// declaration.
-				a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeDuplicateSpecies,
-					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", name, a.where(first.Loc)),
-					Related: []speciesfile.Related{{File: first.Loc.File, Span: first.Loc.Span, Message: "first declaration of " + name}}})
+				a.report(path, speciesfile.Diagnostic{Span: nameSpan, Severity: speciesfile.SeverityError, Code: speciesfile.CodeDuplicateSpecies,
+					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", name, a.where(a.res.SpeciesLoc(first))),
+					Related: []speciesfile.Related{{File: first.File, Span: a.res.SpeciesLoc(first).Span, Message: "first declaration of " + name}}})
 				continue
 			}
 			u := a.memo.species(path, f, k)
 			sp := a.memo.oldSpecies(path, f, k, u)
 			reused := sp != nil
 			if !reused {
-				sp = &Species{Name: name, Loc: Location{File: path, Span: d.Name.Span}, Decl: d, Source: SourceNone}
+				sp = &Species{Name: name, File: path, Decl: d, Source: SourceNone}
 			}
 			a.res.ByName[name] = sp
 			a.res.Species = append(a.res.Species, sp)
+			a.spStart = append(a.spStart, f.SpeciesStart(k))
 			if u == nil {
 				todo = append(todo, len(items))
 			}
@@ -92,6 +95,7 @@ func (a *analysis) species() error {
 		for _, k := range todo {
 			a.memo.changed[items[k].sp.Name] = true
 		}
+		a.memo.namesKept = a.memo.sameNames(a.order, a.res.Files)
 	}
 	// Units not kept from the last analysis are computed on all cores: each
 	// reads only its own declaration and the (concurrency-safe) caches.
@@ -100,12 +104,18 @@ func (a *analysis) species() error {
 		var diags []speciesfile.Diagnostic
 		unit := *a
 		unit.sink = &diags
+		unit.stmtStart = it.f.SpeciesStart(it.k)
+		unit.stmtBase = unit.stmtStart
+		if a.memo != nil {
+			// the unit keeps spans relative to the statement's body
+			unit.stmtBase = -it.sp.Decl.Body().From
+		}
 		unit.speciesRules(it.path, it.sp, user)
 		if a.memo == nil {
 			it.diags = diags
 			return
 		}
-		it.u = newSpeciesUnit(it.f.EnergyUnit, it.sp, diags, it.path)
+		it.u = newSpeciesUnit(it.f.EnergyUnit, it.sp, diags, unit.stmtStart+it.sp.Decl.Body().From)
 	})
 	if err != nil {
 		return err
@@ -120,8 +130,9 @@ func (a *analysis) species() error {
 		}
 	}
 	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
-	byStructure := make(map[uint64][]*Species, len(items))
-	for _, it := range items {
+	byStructure := make(map[uint64][]int32, len(items))
+	spAt := func(i int32) *Species { return items[i].sp }
+	for i, it := range items {
 		sp := it.sp
 		if it.u != nil {
 			if !it.reused {
@@ -129,14 +140,16 @@ func (a *analysis) species() error {
 			}
 			a.memo.keepSpecies(it.path, it.k, it.u, sp)
 			if it.path == a.res.Path {
-				a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, sp.Decl.Body().Start)
+				a.res.Diagnostics = appendRelocated(a.res.Diagnostics, it.u.diags, it.path, it.f.SpeciesStart(it.k)+sp.Decl.Body().From)
 			}
 		} else if it.path == a.res.Path {
 			a.res.Diagnostics = append(a.res.Diagnostics, it.diags...)
 		}
 		if sp.Mol != nil {
-			if first := sameStructure(byStructure, sp); first != nil {
-				a.reportSameStructure(it.path, sp, first)
+			if j := sameStructure(byStructure, spAt, int32(i)); j >= 0 {
+				first := items[j]
+				a.reportSameStructure(it.path, sp, first.sp, it.f.SpeciesStart(it.k),
+					Location{File: first.path, Span: first.sp.Decl.Name.Span.At(first.f.SpeciesStart(first.k))})
 			}
 		}
 	}
@@ -181,12 +194,12 @@ func (a *analysis) composition(path string, sp *Species) {
 	comp, bad := compositionOf(d)
 	switch {
 	case bad != "":
-		a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
+		a.report(path, speciesfile.Diagnostic{Span: a.at(d.Composition.Span), Severity: speciesfile.SeverityError, Code: speciesfile.CodeSyntax,
 			Message: fmt.Sprintf("composition %s: %q is not a chemical element symbol", d.Composition.Text, bad)})
 	case comp == nil:
 	case sp.Mol != nil:
 		if got := molecule.HillFormula(comp); got != sp.Formula {
-			a.report(path, speciesfile.Diagnostic{Span: d.Composition.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCompositionMismatch,
+			a.report(path, speciesfile.Diagnostic{Span: a.at(d.Composition.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCompositionMismatch,
 				Message: fmt.Sprintf("composition %s disagrees with the SMILES, which gives %s; kiln uses the SMILES (balance, molar mass, thermo)", got, sp.Formula)})
 		}
 	default:
@@ -232,23 +245,28 @@ const resonanceKeyPrefix = "resonance|"
 // The map is keyed by a hash of the bucket key made once per unit (hashing
 // the long keys of every species on every analysis cost more than the rest
 // of the search); species of other keys sharing a hash are skipped.
-func sameStructure(seen map[uint64][]*Species, sp *Species) *Species {
+//
+// Species are named by their index i in a list (spAt gives the species);
+// the result is the index of the first, -1 when there is none.
+func sameStructure(seen map[uint64][]int32, spAt func(int32) *Species, i int32) int32 {
+	sp := spAt(i)
 	k := sp.structKey
 	bucket := seen[sp.structHash]
 	resonance := strings.HasPrefix(k, resonanceKeyPrefix)
-	for _, other := range bucket {
+	for _, j := range bucket {
+		other := spAt(j)
 		if other.structKey != k {
 			continue
 		}
 		if resonance {
-			return other // the key is the canonical representative itself
+			return j // the key is the canonical representative itself
 		}
 		if identity(other.Mol) == identity(sp.Mol) {
-			return other
+			return j
 		}
 	}
-	seen[sp.structHash] = append(bucket, sp)
-	return nil
+	seen[sp.structHash] = append(bucket, i)
+	return -1
 }
 
 // hashKey is the 64-bit FNV-1a hash of s.
@@ -415,7 +433,7 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 				sev, then = speciesfile.SeverityError, ", so its thermo cannot be estimated; define the group with a `group` statement or add a nasa7 or thermo-table block"
 			}
 			sp.rootReported = true
-			a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: sev, Code: speciesfile.CodeMissingGroup,
+			a.report(path, speciesfile.Diagnostic{Span: a.at(d.SMILES.Span), Severity: sev, Code: speciesfile.CodeMissingGroup,
 				Message: fmt.Sprintf("%s: no value for group %s and no group close enough to stand in%s%s", sp.Name, mg.Group, alsoMissing(mg), then)})
 		}
 		return
@@ -454,7 +472,7 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 			msg = append(msg, fmt.Sprintf("estimated with an approximation kiln has no data for: %s; its uncertainty is widened (a thermo block with measured or computed values replaces the estimate)", strings.Join(others, ", ")))
 		}
 		if len(msg) > 0 {
-			a.report(path, speciesfile.Diagnostic{Span: d.SMILES.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
+			a.report(path, speciesfile.Diagnostic{Span: a.at(d.SMILES.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
 				Message: sp.Name + ": " + strings.Join(msg, "; also ")})
 		}
 	}
@@ -467,12 +485,11 @@ func isHBINote(m benson.Missing) bool { return strings.HasPrefix(m.Group, "HBI "
 // hasUsableBlock reports whether declaration d has a thermo block without
 // syntax errors: a block the reader could not read completely is not data.
 func (a *analysis) hasUsableBlock(path string, d *speciesfile.Species) bool {
-	f := a.res.Files[path]
 	switch {
 	case d.NASA7 != nil:
-		return !f.ErrorIn(d.NASA7.Span)
+		return !a.errorIn(path, d.NASA7.Span)
 	case d.Table != nil:
-		return !f.ErrorIn(d.Table.Span)
+		return !a.errorIn(path, d.Table.Span)
 	}
 	return false
 }
@@ -544,14 +561,14 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		}
 		if sp.Estimate != nil {
 			sp.Source = SourceEstimate
-			a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeMissingThermo,
+			a.report(path, speciesfile.Diagnostic{Span: a.at(d.Name.Span), Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeMissingThermo,
 				Message: fmt.Sprintf("%s: %s; estimated %s", sp.Name, block, a.thermoSummary(sp.Estimate.Hf298, sp.Estimate.S298))})
 			return
 		}
 		if sp.SMILESError != nil || sp.rootReported {
 			return // bad-smiles or missing-group already says what to fix
 		}
-		if sp.Mol == nil && a.res.Files[path].ErrorIn(d.Name.Span) {
+		if sp.Mol == nil && a.errorIn(path, d.Name.Span) {
 			return // the reader's error on the declaration says what is missing
 		}
 		why := "it has no structure (SMILES) to estimate from"
@@ -562,7 +579,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		if sp.brokenBlock {
 			what = "has no usable thermo block (the syntax error above)"
 		}
-		a.report(path, speciesfile.Diagnostic{Span: d.Name.Span, Severity: speciesfile.SeverityError, Code: speciesfile.CodeMissingThermo,
+		a.report(path, speciesfile.Diagnostic{Span: a.at(d.Name.Span), Severity: speciesfile.SeverityError, Code: speciesfile.CodeMissingThermo,
 			Message: fmt.Sprintf("%s %s and %s; add a nasa7 or thermo-table block", sp.Name, what, why)})
 		return
 	}
@@ -586,9 +603,9 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 			case "high":
 				span = d.NASA7.HighSpan
 			case "ranges":
-				span = speciesfile.Span{Start: d.NASA7.TLow.Tok.Span.Start, End: d.NASA7.THigh.Tok.Span.End}
+				span = speciesfile.RelSpan{From: d.NASA7.TLow.Tok.Span.From, To: d.NASA7.THigh.Tok.Span.To}
 			}
-			a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: code, Message: sp.Name + ": " + a.problemMessage(p)})
+			a.report(path, speciesfile.Diagnostic{Span: a.at(span), Severity: speciesfile.SeverityWarning, Code: code, Message: sp.Name + ": " + a.problemMessage(p)})
 		}
 	}
 	if g.Table != nil {
@@ -614,12 +631,12 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		sSpan = hfSpan
 	}
 	if math.Abs(dh) > a.set.MismatchHf298 {
-		a.report(path, speciesfile.Diagnostic{Span: hfSpan, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+		a.report(path, speciesfile.Diagnostic{Span: a.at(hfSpan), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
 			Message: fmt.Sprintf("%s: ΔHf°298 given %s vs estimated %s (difference %s, threshold %s)",
 				sp.Name, a.energy(hf), a.energy(sp.Estimate.Hf298), a.energy(dh), a.energy(a.set.MismatchHf298))})
 	}
 	if math.Abs(ds) > a.set.MismatchS298 {
-		a.report(path, speciesfile.Diagnostic{Span: sSpan, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+		a.report(path, speciesfile.Diagnostic{Span: a.at(sSpan), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
 			Message: fmt.Sprintf("%s: S°298 given %s vs estimated %s (difference %s, threshold %s)",
 				sp.Name, a.entropy(s), a.entropy(sp.Estimate.S298), a.entropy(ds), a.entropy(a.set.MismatchS298))})
 	}
@@ -641,7 +658,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 // them it is an extrapolation, not data), a library species its polynomial's
 // range. Temperatures: the estimate's points for group values, every 50 K
 // for a library polynomial.
-func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.Span) {
+func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.RelSpan) {
 	g, e := sp.Given, sp.Estimate
 	lo, hi := g.Range()
 	var temps []float64
@@ -695,15 +712,15 @@ func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.S
 					best = p
 				}
 			}
-			cpSpan = speciesfile.Span{Start: best.T.Tok.Span.Start, End: best.Cp.Tok.Span.End}
+			cpSpan = speciesfile.RelSpan{From: best.T.Tok.Span.From, To: best.Cp.Tok.Span.To}
 		}
-		a.report(path, speciesfile.Diagnostic{Span: cpSpan, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+		a.report(path, speciesfile.Diagnostic{Span: a.at(cpSpan), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
 			Message: fmt.Sprintf("%s: Cp at %g K given %s vs %s %s (difference %s, threshold %s)",
 				sp.Name, worstCpT, a.entropy(cpGiven), what, a.entropy(cpRef), a.entropy(worstCp), a.entropy(a.set.MismatchCp))})
 		return
 	}
 	if math.Abs(worstH) > a.set.MismatchHf298 {
-		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+		a.report(path, speciesfile.Diagnostic{Span: a.at(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
 			Message: fmt.Sprintf("%s: H(%g K) − H(298 K) given %s vs %s %s (difference %s, threshold %s)",
 				sp.Name, worstHT, a.energy(hGiven), what, a.energy(hRef), a.energy(worstH), a.energy(a.set.MismatchHf298))})
 	}
@@ -746,14 +763,14 @@ func (a *analysis) cpFloor(path string, sp *Species) {
 	}
 	cp0, _ := nasa.ClassicalLimits(n, lin, 0)
 	d, g := sp.Decl, sp.Given
-	report := func(span speciesfile.Span, T, cp float64) {
-		a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+	report := func(span speciesfile.RelSpan, T, cp float64) {
+		a.report(path, speciesfile.Diagnostic{Span: a.at(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
 			Message: fmt.Sprintf("%s: Cp at %g K is %s, below %s, the translational and rotational heat capacity of any %s of %d atoms", sp.Name, T, a.entropy(cp), a.entropy(cp0), shapeWord(n, lin), n)})
 	}
 	if t := d.Table; t != nil && g.Table != nil {
 		for _, p := range t.Cp {
 			if p.Cp.SI > 0 && p.Cp.SI < floor && p.T.SI >= nasa.FloorFrom {
-				report(speciesfile.Span{Start: p.T.Tok.Span.Start, End: p.Cp.Tok.Span.End}, p.T.SI, p.Cp.SI)
+				report(speciesfile.RelSpan{From: p.T.Tok.Span.From, To: p.Cp.Tok.Span.To}, p.T.SI, p.Cp.SI)
 				return
 			}
 		}
@@ -787,23 +804,23 @@ func (a *analysis) tableChecks(path string, sp *Species) {
 	sort.SliceStable(pts, func(i, j int) bool { return pts[i].T.SI < pts[j].T.SI })
 	for i, p := range pts {
 		if p.Cp.SI <= 0 {
-			a.report(path, speciesfile.Diagnostic{Span: p.Cp.Tok.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+			a.report(path, speciesfile.Diagnostic{Span: a.at(p.Cp.Tok.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
 				Message: fmt.Sprintf("%s: Cp at %g K is not positive", sp.Name, p.T.SI)})
 		}
 		if p.T.SI <= 0 {
-			a.report(path, speciesfile.Diagnostic{Span: p.T.Tok.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+			a.report(path, speciesfile.Diagnostic{Span: a.at(p.T.Tok.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
 				Message: fmt.Sprintf("%s: temperature %g K is not positive", sp.Name, p.T.SI)})
 		}
 		// A fall is allowed within the polynomials' allowance
 		// (nasa.DefaultTolerances().CpFall, 0.3 R): atoms and small radicals
 		// with low electronic states (O, Cl, F) have Cp falling with T.
 		if i > 0 && p.Cp.SI < pts[i-1].Cp.SI-nasa.DefaultTolerances().CpFall {
-			a.report(path, speciesfile.Diagnostic{Span: p.Cp.Tok.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+			a.report(path, speciesfile.Diagnostic{Span: a.at(p.Cp.Tok.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
 				Message: fmt.Sprintf("%s: Cp falls from %s at %g K to %s at %g K", sp.Name, a.entropy(pts[i-1].Cp.SI), pts[i-1].T.SI, a.entropy(p.Cp.SI), p.T.SI)})
 		}
 	}
 	if t.S298 != nil && t.S298.SI <= 0 {
-		a.report(path, speciesfile.Diagnostic{Span: t.S298.Tok.Span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
+		a.report(path, speciesfile.Diagnostic{Span: a.at(t.S298.Tok.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
 			Message: fmt.Sprintf("%s: S°298 must be positive", sp.Name)})
 	}
 }

@@ -62,12 +62,30 @@ func (r *Result) Uses() map[string][]Location {
 	r.usesOnce.Do(func() {
 		r.uses = map[string][]Location{}
 		for _, path := range r.order {
-			for _, d := range r.Files[path].Reactions {
-				recordUses(r.uses, path, d)
+			f := r.Files[path]
+			for k, d := range f.Reactions {
+				recordUses(r.uses, path, d, f.ReactionStart(k))
 			}
 		}
 	})
 	return r.uses
+}
+
+// declStart returns where the declaration of sp starts in its file.
+func (r *Result) declStart(sp *Species) int {
+	return r.Files[sp.File].Start(sp.Decl)
+}
+
+// SpeciesLoc returns the location of the name in the declaration of sp (a
+// species of r).
+func (r *Result) SpeciesLoc(sp *Species) Location {
+	return Location{File: sp.File, Span: sp.Decl.Name.Span.At(r.declStart(sp))}
+}
+
+// ReactionLine returns the 1-based line of reaction rx (a reaction of r), as
+// StmtLine.
+func (r *Result) ReactionLine(rx *Reaction) int {
+	return StmtLine(r.Files[rx.File], rx.Decl)
 }
 
 // ResolvedInclude is an include statement and the path it resolved to.

@@ -36,6 +36,7 @@ type document struct {
 	publishMu sync.Mutex // orders diagnostics publications; guards the fields below
 	published []protocol.Diagnostic
 	hasPub    bool
+	pubBytes  int             // size of the last publication's encoding (to size the next)
 	noteNames map[string]bool // species changed since open (estimate notes of large files)
 
 	mu          sync.Mutex // guards the analysis state below
@@ -396,7 +397,9 @@ func (s *server) publish(d *document, snap *snapshot, gen uint64, force bool) {
 		return
 	}
 	d.published, d.hasPub = params.Diagnostics, true
-	if err := s.conn.Notify(s.ctx, "textDocument/publishDiagnostics", params); err != nil {
+	n, err := s.out.notify("textDocument/publishDiagnostics", params, d.pubBytes)
+	d.pubBytes = n
+	if err != nil {
 		s.logger.Debug("publishDiagnostics failed", zap.Error(err))
 	}
 	s.settled(d, snap, true)

@@ -69,6 +69,7 @@ type server struct {
 	logger *zap.Logger
 	opts   Options
 	conn   jsonrpc2.Conn
+	out    *stream         // conn's stream, for notifications encoded here (notify)
 	ctx    context.Context // lifetime of background work
 	wg     sync.WaitGroup
 
@@ -117,7 +118,8 @@ func Serve(ctx context.Context, stream io.ReadWriteCloser, logger *zap.Logger, o
 	if opts.Settings != nil {
 		s.settings = *opts.Settings
 	}
-	s.conn = jsonrpc2.NewConn(newStream(stream, logger))
+	s.out = newStream(stream, logger)
+	s.conn = jsonrpc2.NewConn(s.out)
 	s.conn.Go(bg, s.handle)
 
 	var err error

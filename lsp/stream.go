@@ -11,6 +11,7 @@ import (
 	"strings"
 	"sync"
 
+	segjson "github.com/segmentio/encoding/json"
 	"go.lsp.dev/jsonrpc2"
 	"go.uber.org/zap"
 )
@@ -146,6 +147,28 @@ func (s *stream) writeRaw(data []byte) error {
 		return fmt.Errorf("writing message body: %w", err)
 	}
 	return nil
+}
+
+// notification is a JSON-RPC notification with its parameters as a value.
+type notification struct {
+	JSONRPC string `json:"jsonrpc"`
+	Method  string `json:"method"`
+	Params  any    `json:"params"`
+}
+
+// notify sends a notification, encoding params once, and returns the size
+// of the encoding. (conn.Notify encodes params, then the message holding
+// them again, which re-reads and compacts the encoded parameters: for a
+// large publishDiagnostics a second pass over ~1.5 MB.) sizeHint is the
+// expected size (the last one of the same kind), so that the buffer is not
+// grown by doubling. Writes are serialised with the connection's.
+func (s *stream) notify(method string, params any, sizeHint int) (int, error) {
+	buf := make([]byte, 0, max(sizeHint+sizeHint/8, 512))
+	data, err := segjson.Append(buf, notification{JSONRPC: "2.0", Method: method, Params: params}, segjson.EscapeHTML|segjson.SortMapKeys)
+	if err != nil {
+		return 0, fmt.Errorf("marshaling %s: %w", method, err)
+	}
+	return len(data), s.writeRaw(data)
 }
 
 // Close closes the underlying connection.

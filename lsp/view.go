@@ -193,7 +193,7 @@ func (s *server) noteChanges(d *document, prev, snap *snapshot) {
 		if len(d.noteNames) >= maxNoteNames {
 			return
 		}
-		if sp.Loc.File == d.path && !sp.SameUnit(prev.result.ByName[sp.Name]) {
+		if sp.File == d.path && !sp.SameUnit(prev.result.ByName[sp.Name]) {
 			if d.noteNames == nil {
 				d.noteNames = map[string]bool{}
 			}

@@ -1,6 +1,7 @@
 // Package speciesfile reads the kiln mechanism format (.kiln files): it turns
 // the text of one file into a lossless syntax tree whose every token carries
-// byte offsets, resolves units to SI, reports local problems as diagnostics,
+// byte offsets (relative to its statement, whose start the File holds: see
+// RelSpan and File.Starts), resolves units to SI, reports local problems as diagnostics,
 // converts byte offsets to line/column positions (LineIndex), and formats the
 // small pieces of text that tools insert into files (FormatNASA7Block,
 // FormatNumber, File.ThermoInsertion). It does no I/O and never follows
@@ -17,6 +18,27 @@ func (s Span) Len() int { return s.End - s.Start }
 
 // Contains reports whether off lies in [Start, End).
 func (s Span) Contains(off int) bool { return off >= s.Start && off < s.End }
+
+// Rel returns s relative to a statement starting at base.
+func (s Span) Rel(base int) RelSpan { return RelSpan{s.Start - base, s.End - base} }
+
+// RelSpan is a half-open byte range [From, To) relative to the start of
+// the statement that holds it (the start of its extent, File.Starts). Every
+// span inside a statement node is a RelSpan, so that a statement moved by
+// an edit elsewhere in the file is the same node in the old and the new
+// parse (see Reparse); File.Abs and RelSpan.At give the absolute span.
+// (Its fields are named apart from Span's so that no relative offset is
+// used as an absolute one by mistake.)
+type RelSpan struct{ From, To int }
+
+// At returns the absolute span of r in a statement starting at base.
+func (r RelSpan) At(base int) Span { return Span{r.From + base, r.To + base} }
+
+// Len returns To-From.
+func (r RelSpan) Len() int { return r.To - r.From }
+
+// IsZero reports whether r is the zero RelSpan (a missing part).
+func (r RelSpan) IsZero() bool { return r == RelSpan{} }
 
 // Severity is the severity of a diagnostic; the values match the LSP
 // DiagnosticSeverity numbering (1 = error … 4 = hint).
@@ -98,10 +120,11 @@ type Diagnostic struct {
 	Related  []Related
 }
 
-// Token is a run of source bytes. Text is src[Span.Start:Span.End] (shared
-// with the file's source string, not a copy per token).
+// Token is a run of source bytes. Span is relative to the start of the
+// statement holding the token; Text is the source bytes of the span (shared
+// with a string of the source, not a copy per token).
 type Token struct {
-	Span Span
+	Span RelSpan
 	Text string
 }
 
@@ -125,12 +148,19 @@ type Number struct {
 }
 
 // File is the parse result for one .kiln file.
+//
+// Statement nodes hold positions relative to their own start (RelSpan), and
+// the file holds where each statement starts (Starts): a statement moved by
+// an edit elsewhere is shared, unchanged, by the parses before and after the
+// edit. A File and its nodes are never modified once returned.
 type File struct {
 	Name  string // as passed to Parse (used in messages only)
 	Src   []byte // the source, unmodified
-	Stmts []Stmt // every statement in order; their Spans tile Src exactly
-	Diags []Diagnostic
-	Lines *LineIndex
+	Stmts []Stmt // every statement in order; their extents tile Src exactly
+	// Starts[i] is the offset in Src where the extent of Stmts[i] begins.
+	Starts []int
+	Diags  []Diagnostic
+	Lines  *LineIndex
 
 	// EnergyUnit is the file's energy unit: "kcal/mol" (default), "kJ/mol",
 	// "cal/mol" or "J/mol". EntropyUnit follows from it: "cal/mol/K" for
@@ -150,39 +180,47 @@ type File struct {
 	Reactions []*Reaction
 	Includes  []*Include
 	Groups    []*Group
+
+	// speciesAt, reactionsAt, includesAt and groupsAt give the index in
+	// Stmts of each element of the lists above.
+	speciesAt, reactionsAt, includesAt, groupsAt []int32
+	// index maps a statement node to its index in Stmts (made on first
+	// use by Start; shared by shallow copies of the File).
+	index *stmtIndex
 }
 
 // Stmt is one top-level statement: *Units, *Include, *Group, *Species,
-// *Reaction, *BadStmt or *Trivia.
+// *Reaction, *BadStmt or *Trivia. Its positions are relative to its start
+// (see File.Starts, File.Start, File.Abs).
 type Stmt interface {
-	// Span is the statement's full extent: its leading blank/comment lines,
-	// its keyword line, its continuation lines and the final line terminator
-	// (the last statement also owns trailing trivia up to end of file).
-	// Concatenating Span() over File.Stmts reproduces File.Src.
-	Span() Span
+	// Len is the length of the statement's full extent: its leading
+	// blank/comment lines, its keyword line, its continuation lines and the
+	// final line terminator (the last statement also owns trailing trivia
+	// up to end of file). The extents of File.Stmts tile File.Src.
+	Len() int
 	// Keyword is the statement keyword token (empty for *Trivia).
 	Keyword() Token
 	// Body is the statement without leading trivia: from the keyword to the
 	// end of its last own line, excluding the line terminator and trailing
 	// comment/blank lines.
-	Body() Span
+	Body() RelSpan
 }
 
 // StmtBase holds the fields every statement has.
 type StmtBase struct {
-	Extent     Span  // see Stmt.Span
-	BodySpan   Span  // see Stmt.Body
-	KeywordTok Token // see Stmt.Keyword
+	Size       int     // see Stmt.Len
+	BodySpan   RelSpan // see Stmt.Body
+	KeywordTok Token   // see Stmt.Keyword
 }
 
-// Span implements Stmt.
-func (b *StmtBase) Span() Span { return b.Extent }
+// Len implements Stmt.
+func (b *StmtBase) Len() int { return b.Size }
 
 // Keyword implements Stmt.
 func (b *StmtBase) Keyword() Token { return b.KeywordTok }
 
 // Body implements Stmt.
-func (b *StmtBase) Body() Span { return b.BodySpan }
+func (b *StmtBase) Body() RelSpan { return b.BodySpan }
 
 // Units is `units UNIT`.
 type Units struct {
@@ -233,11 +271,11 @@ type IntAttr struct {
 // S/R = a1 ln T + a2 T + a3 T^2/2 + a4 T^3/3 + a5 T^4/4 + a7.
 // Low applies on [TLow, TMid], High on [TMid, THigh] (T in K).
 type NASA7Block struct {
-	Span              Span // header line through last block line (no terminator)
+	Span              RelSpan // header line through last block line (no terminator)
 	Header            Token
 	TLow, TMid, THigh Number
 	Low, High         [7]Number
-	LowSpan, HighSpan Span // the low/high lines (empty when missing)
+	LowSpan, HighSpan RelSpan // the low/high lines (empty when missing)
 	Source            *Token
 }
 
@@ -252,7 +290,7 @@ func (b *NASA7Block) Coeffs() (low, high [7]float64) {
 
 // ThermoTable is a `thermo-table` block: tabulated ΔHf°298, S°298 and Cp(T).
 type ThermoTable struct {
-	Span   Span // header line through last block line (no terminator)
+	Span   RelSpan // header line through last block line (no terminator)
 	Header Token
 	Hf298  *Number // SI J/mol
 	S298   *Number // SI J/(mol K)
@@ -289,13 +327,13 @@ type Term struct {
 // A is in cm3, mol, s units (SI == Value), n is dimensionless and Ea.SI is
 // in J/mol. A field is nil when absent (only possible after a syntax error).
 type Arrhenius struct {
-	Span     Span // from the first parameter to the last
+	Span     RelSpan // from the first parameter to the last
 	A, N, Ea *Number
 }
 
 // Troe holds `troe alpha=… T3=… T1=… [T2=…]`; T3, T1, T2 in K.
 type Troe struct {
-	Span              Span
+	Span              RelSpan
 	Alpha, T3, T1, T2 *Number
 }
 
@@ -314,7 +352,7 @@ type PressureRate struct {
 // Reaction is `reaction EQUATION [A=… n=… Ea=…]` with its attribute lines.
 type Reaction struct {
 	StmtBase
-	Equation            Span // the equation text, from the first term to the last
+	Equation            RelSpan // the equation text, from the first term to the last
 	Reactants, Products []Term
 	Reversible          bool
 	Arrow               Token
@@ -344,7 +382,7 @@ func (r *Reaction) FalloffCollider() string {
 // block lines).
 type Attr struct {
 	Key  Token
-	Span Span // the whole attribute line(s) incl. block, excluding the final terminator
+	Span RelSpan // the whole attribute line(s) incl. block, excluding the final terminator
 }
 
 // BadStmt is a statement that could not be parsed (unknown keyword, or

@@ -166,6 +166,7 @@ func (p *parser) presize() {
 		stmts++
 	}
 	p.f.Stmts = make([]Stmt, 0, stmts)
+	p.f.Starts = make([]int, 0, stmts)
 	if species > 0 {
 		p.f.Species = make([]*Species, 0, species)
 	}
@@ -181,9 +182,11 @@ func hasWord(line []byte, word string) bool {
 		(len(line) == len(word) || line[len(word)] == ' ' || line[len(word)] == '\t')
 }
 
-// errAt records a syntax error.
-func (p *parser) errAt(sp Span, format string, args ...any) {
-	p.f.Diags = append(p.f.Diags, Diagnostic{Span: sp, Severity: SeverityError, Code: CodeSyntax, Message: fmt.Sprintf(format, args...)})
+// errAt records a syntax error. While a statement is read its spans hold
+// absolute offsets (they are made relative when it is complete, see
+// relativize), so sp is absolute.
+func (p *parser) errAt(sp RelSpan, format string, args ...any) {
+	p.f.Diags = append(p.f.Diags, Diagnostic{Span: sp.At(0), Severity: SeverityError, Code: CodeSyntax, Message: fmt.Sprintf(format, args...)})
 }
 
 // readLine reads the next line (the line boundaries come from the file's
@@ -229,7 +232,7 @@ func (p *parser) readLine() (srcLine, bool) {
 		l.kind = lineCont
 	}
 	if l.end-l.start > MaxLineSize {
-		p.errAt(Span{l.start, l.start + 1}, "line too long: %d bytes (limit %d)", l.end-l.start, MaxLineSize)
+		p.errAt(RelSpan{l.start, l.start + 1}, "line too long: %d bytes (limit %d)", l.end-l.start, MaxLineSize)
 	}
 	if p.checkBytes {
 		p.checkLineBytes(l)
@@ -242,12 +245,12 @@ func (p *parser) readLine() (srcLine, bool) {
 func (p *parser) checkLineBytes(l srcLine) {
 	line := p.src[l.start:l.end]
 	if i := bytes.IndexByte(line, 0); i >= 0 {
-		p.errAt(Span{l.start + i, l.start + i + 1}, "NUL byte in text")
+		p.errAt(RelSpan{l.start + i, l.start + i + 1}, "NUL byte in text")
 	}
 	for i := 0; i < len(line); {
 		r, size := utf8.DecodeRune(line[i:])
 		if r == utf8.RuneError && size == 1 {
-			p.errAt(Span{l.start + i, l.start + i + 1}, "invalid UTF-8 byte 0x%02X", line[i])
+			p.errAt(RelSpan{l.start + i, l.start + i + 1}, "invalid UTF-8 byte 0x%02X", line[i])
 			return
 		}
 		i += size
@@ -258,7 +261,7 @@ func (p *parser) checkLineBytes(l srcLine) {
 func (p *parser) run() {
 	f := p.f
 	if len(p.src) > MaxFileSize {
-		p.errAt(Span{0, 0}, "file too large: %d bytes (limit %d)", len(p.src), MaxFileSize)
+		p.errAt(RelSpan{0, 0}, "file too large: %d bytes (limit %d)", len(p.src), MaxFileSize)
 	}
 	extentStart := 0
 	var last Stmt
@@ -267,17 +270,20 @@ func (p *parser) run() {
 		if !ok {
 			break
 		}
-		extentStart = next
 		f.Stmts = append(f.Stmts, st)
+		f.Starts = append(f.Starts, extentStart)
+		extentStart = next
 		last = st
 	}
 	if len(p.src) > 0 {
 		if last == nil {
-			f.Stmts = append(f.Stmts, &Trivia{StmtBase{Extent: Span{0, len(p.src)}, BodySpan: Span{len(p.src), len(p.src)}}})
+			f.Stmts = append(f.Stmts, &Trivia{StmtBase{Size: len(p.src), BodySpan: RelSpan{len(p.src), len(p.src)}}})
+			f.Starts = append(f.Starts, 0)
 		} else {
-			setExtentEnd(last, len(p.src))
+			setExtentEnd(last, f.Starts[len(f.Starts)-1], len(p.src))
 		}
 	}
+	f.finishLists()
 	if p.crlf > p.lf {
 		f.Newline = "\r\n"
 	}
@@ -285,23 +291,31 @@ func (p *parser) run() {
 	slices.SortStableFunc(f.Diags, func(a, b Diagnostic) int { return cmp.Compare(a.Span.Start, b.Span.Start) })
 }
 
-func setExtentEnd(st Stmt, end int) {
+// setExtentEnd makes the extent of st, a statement just read that starts
+// at start, end at end.
+func setExtentEnd(st Stmt, start, end int) {
+	stmtBase(st).Size = end - start
+}
+
+// stmtBase returns the StmtBase of st.
+func stmtBase(st Stmt) *StmtBase {
 	switch s := st.(type) {
 	case *Units:
-		s.Extent.End = end
+		return &s.StmtBase
 	case *Include:
-		s.Extent.End = end
+		return &s.StmtBase
 	case *Group:
-		s.Extent.End = end
+		return &s.StmtBase
 	case *Species:
-		s.Extent.End = end
+		return &s.StmtBase
 	case *Reaction:
-		s.Extent.End = end
+		return &s.StmtBase
 	case *BadStmt:
-		s.Extent.End = end
+		return &s.StmtBase
 	case *Trivia:
-		s.Extent.End = end
+		return &s.StmtBase
 	}
+	panic("speciesfile: unknown statement type")
 }
 
 // tokenize splits the line [l.text, l.trimEnd) into p.toks at blanks and
@@ -324,7 +338,7 @@ func (p *parser) tokenize(l srcLine) []Token {
 		for j < len(line) && line[j] != ' ' && line[j] != '\t' {
 			j++
 		}
-		toks = append(toks, Token{Span{i, j}, p.text(i, j)})
+		toks = append(toks, Token{RelSpan{i, j}, p.text(i, j)})
 		i = j
 	}
 	p.toks = toks
@@ -341,11 +355,11 @@ func (p *parser) freeText(l srcLine, toks []Token, k int) (Token, bool) {
 	if p.comment >= 0 {
 		end = p.comment
 	}
-	for end > toks[k].Span.Start && (p.src[end-1] == ' ' || p.src[end-1] == '\t') {
+	for end > toks[k].Span.From && (p.src[end-1] == ' ' || p.src[end-1] == '\t') {
 		end--
 	}
-	start := toks[k].Span.Start
-	return Token{Span{start, end}, p.text(start, end)}, true
+	start := toks[k].Span.From
+	return Token{RelSpan{start, end}, p.text(start, end)}, true
 }
 
 // text returns src[i:j] as a string sharing p.s.
@@ -419,7 +433,7 @@ func (p *parser) extraAfterValue(toks []Token, key Token) {
 
 // endOf returns an empty span at the end of token t (for "expected X" errors
 // at the end of a line).
-func endOf(t Token) Span { return Span{t.Span.End, t.Span.End} }
+func endOf(t Token) RelSpan { return RelSpan{t.Span.To, t.Span.To} }
 
 // energyUnit returns J/mol per unit u of energy per mole.
 func energyUnit(u string) (float64, bool) {
@@ -450,7 +464,7 @@ func (p *parser) units(toks []Token, base StmtBase) Stmt {
 	case !ok:
 		p.errAt(toks[1].Span, "unknown energy unit %q: expected kcal/mol, kJ/mol, cal/mol or J/mol", toks[1].Text)
 	case p.unitsTok != nil:
-		p.errAt(toks[0].Span, "units declared twice (first on line %d)", p.f.Lines.Line(p.unitsTok.Span.Start)+1)
+		p.errAt(toks[0].Span, "units declared twice (first on line %d)", p.f.Lines.Line(p.unitsTok.Span.From)+1)
 	case p.sawDecl:
 		p.errAt(toks[0].Span, "units must come before any species, reaction or group statement")
 	default:
@@ -475,7 +489,6 @@ func (p *parser) include(toks []Token, base StmtBase) Stmt {
 	}
 	st.Path = toks[1]
 	p.extra(toks[2:], "the path (a path has no blanks)")
-	p.f.Includes = append(p.f.Includes, st)
 	return st
 }
 
@@ -490,7 +503,7 @@ type attrSet struct {
 // attribute was already given.
 func (p *parser) first(a *attrSet, id int, key Token) bool {
 	if a.has&(1<<id) != 0 {
-		p.errAt(key.Span, "duplicate attribute %q (first given on line %d)", key.Text, p.f.Lines.Line(a.seen[id].Span.Start)+1)
+		p.errAt(key.Span, "duplicate attribute %q (first given on line %d)", key.Text, p.f.Lines.Line(a.seen[id].Span.From)+1)
 		return false
 	}
 	a.has |= 1 << id
@@ -500,7 +513,7 @@ func (p *parser) first(a *attrSet, id int, key Token) bool {
 
 // lineSpan is the span of an attribute line from its key to its last
 // non-blank byte.
-func lineSpan(l srcLine) Span { return Span{l.text, l.trimEnd} }
+func lineSpan(l srcLine) RelSpan { return RelSpan{l.text, l.trimEnd} }
 
 // ---- thermo lines shared by group and thermo-table ----
 
@@ -602,9 +615,9 @@ func splitPair(tk Token) (k, v Token, ok bool) {
 	if i <= 0 {
 		return k, v, false
 	}
-	s := tk.Span.Start
-	k = Token{Span{s, s + i}, tk.Text[:i]}
-	v = Token{Span{s + i + 1, tk.Span.End}, tk.Text[i+1:]}
+	s := tk.Span.From
+	k = Token{RelSpan{s, s + i}, tk.Text[:i]}
+	v = Token{RelSpan{s + i + 1, tk.Span.To}, tk.Text[i+1:]}
 	return k, v, true
 }
 
@@ -618,7 +631,7 @@ func linesList(keys []string) string {
 }
 
 // missingThermo reports which of hf298/s298/cp are missing.
-func (p *parser) missingThermo(at Span, what string, t *thermoLines) {
+func (p *parser) missingThermo(at RelSpan, what string, t *thermoLines) {
 	var miss []string
 	if t.set.has&(1<<tHf) == 0 {
 		miss = append(miss, "hf298")
@@ -658,7 +671,6 @@ func (p *parser) group(toks []Token, base StmtBase) Stmt {
 	if len(toks) > 1 {
 		p.missingThermo(toks[1].Span, "group "+toks[1].Text, &t)
 	}
-	p.f.Groups = append(p.f.Groups, st)
 	return st
 }
 
@@ -736,14 +748,14 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 		case blockNASA:
 			if key.Text == "low" || key.Text == "high" || key.Text == "source" {
 				p.nasaLine(l, lt, nasa, &nasaSet)
-				nasa.Span.End = l.trimEnd
-				attrs[blockAttr].Span.End = l.trimEnd
+				nasa.Span.To = l.trimEnd
+				attrs[blockAttr].Span.To = l.trimEnd
 				continue
 			}
 		case blockTable:
 			if p.thermoLine(l, lt, &table) {
-				st.Table.Span.End = l.trimEnd
-				attrs[blockAttr].Span.End = l.trimEnd
+				st.Table.Span.To = l.trimEnd
+				attrs[blockAttr].Span.To = l.trimEnd
 				continue
 			}
 		}
@@ -860,7 +872,6 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 	if len(toks) >= 2 && st.SMILES == nil && st.Composition == nil {
 		p.errAt(toks[1].Span, "species %s has no SMILES, so it needs a composition line", toks[1].Text)
 	}
-	p.f.Species = append(p.f.Species, st)
 	return st
 }
 
@@ -895,7 +906,7 @@ func (p *parser) nasaHeader(lt []Token, b *NASA7Block) {
 	}
 	b.TLow, b.TMid, b.THigh = ts[0], ts[1], ts[2]
 	if !(ts[0].SI > 0 && ts[0].SI < ts[1].SI && ts[1].SI < ts[2].SI) {
-		p.errAt(Span{lt[1].Span.Start, lt[3].Span.End}, "nasa7 temperatures must satisfy 0 < TLOW < TMID < THIGH")
+		p.errAt(RelSpan{lt[1].Span.From, lt[3].Span.To}, "nasa7 temperatures must satisfy 0 < TLOW < TMID < THIGH")
 	}
 }
 
@@ -970,7 +981,6 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 	if len(p.body) > 0 {
 		st.Attrs = p.attrs.take(len(p.body))
 	}
-	p.f.Reactions = append(p.f.Reactions, st)
 	eqEnd := len(toks)
 	for i := 1; i < len(toks); i++ {
 		if isRateToken(toks[i].Text) {
@@ -983,7 +993,7 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 	if len(eq) == 0 {
 		p.errAt(endOf(toks[0]), "expected a reaction equation after reaction, e.g. H + O2 <=> O + OH")
 	} else {
-		st.Equation = Span{eq[0].Span.Start, eq[len(eq)-1].Span.End}
+		st.Equation = RelSpan{eq[0].Span.From, eq[len(eq)-1].Span.To}
 		if fall, ok := p.equation(eq, st); ok {
 			st.Falloff = p.newToken(fall)
 		}
@@ -1054,13 +1064,13 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 	}
 	eqBroken := false
 	for _, d := range p.f.Diags[diagsBefore:] {
-		if d.Span.Start >= st.Equation.Start && d.Span.Start <= st.Equation.End {
+		if d.Span.Start >= st.Equation.From && d.Span.Start <= st.Equation.To {
 			eqBroken = true
 		}
 	}
 	if eqEnd == len(toks) && !sawPressure && len(eq) > 0 && !eqBroken {
 		// (An equation with a syntax error gets that error only.)
-		p.f.Diags = append(p.f.Diags, Diagnostic{Span: st.Equation, Severity: SeverityWarning, Code: CodeNoRate,
+		p.f.Diags = append(p.f.Diags, Diagnostic{Span: st.Equation.At(0), Severity: SeverityWarning, Code: CodeNoRate,
 			Message: "reaction has no rate parameters (A=, n=, Ea=)"})
 	}
 	return st
@@ -1292,7 +1302,7 @@ func (p *parser) rateInto(ra *rateStore, key Token, toks []Token, what string) *
 		return nil
 	}
 	r := &ra.r
-	r.Span = Span{toks[0].Span.Start, toks[len(toks)-1].Span.End}
+	r.Span = RelSpan{toks[0].Span.From, toks[len(toks)-1].Span.To}
 	for _, tk := range toks {
 		k, v, ok := splitPair(tk)
 		var dst **Number
@@ -1355,10 +1365,10 @@ func (p *parser) missingRate(r *Arrhenius, miss []string, ctx string) {
 	// Do not pile a "missing" error on a token that already has an error.
 	for i := len(p.f.Diags) - 1; i >= 0; i-- {
 		d := p.f.Diags[i]
-		if d.Span.Start < r.Span.Start {
+		if d.Span.Start < r.Span.From {
 			break
 		}
-		if d.Span.End <= r.Span.End {
+		if d.Span.End <= r.Span.To {
 			return
 		}
 	}
@@ -1373,7 +1383,7 @@ func (p *parser) troe(lt []Token) *Troe {
 	}
 	ta := p.troes.new()
 	tr := &ta.t
-	tr.Span = Span{lt[1].Span.Start, lt[len(lt)-1].Span.End}
+	tr.Span = RelSpan{lt[1].Span.From, lt[len(lt)-1].Span.To}
 	for _, tk := range lt[1:] {
 		k, v, ok := splitPair(tk)
 		var dst **Number
@@ -1423,10 +1433,10 @@ func (p *parser) troe(lt []Token) *Troe {
 func (p *parser) missingTroe(tr *Troe, miss []string) {
 	for i := len(p.f.Diags) - 1; i >= 0; i-- {
 		d := p.f.Diags[i]
-		if d.Span.Start < tr.Span.Start {
+		if d.Span.Start < tr.Span.From {
 			break
 		}
-		if d.Span.End <= tr.Span.End {
+		if d.Span.End <= tr.Span.To {
 			return
 		}
 	}
@@ -1746,9 +1756,11 @@ func (p *parser) nextStatement(extentStart int) (st Stmt, next int, ok bool) {
 			}
 		}
 		base := StmtBase{
-			Extent:   Span{extentStart, lastOwn.next},
-			BodySpan: Span{l.text, lastOwn.end},
+			Size:     lastOwn.next - extentStart,
+			BodySpan: RelSpan{l.text, lastOwn.end},
 		}
-		return p.statement(l, base), lastOwn.next, true
+		st := p.statement(l, base)
+		relativize(st, extentStart)
+		return st, lastOwn.next, true
 	}
 }

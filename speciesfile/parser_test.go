@@ -132,16 +132,17 @@ func assertLossless(t *testing.T, f *File) {
 	t.Helper()
 	var sb strings.Builder
 	prev := 0
-	for _, s := range f.Stmts {
-		sp := s.Span()
+	for i := range f.Stmts {
+		sp := f.StmtSpan(i)
 		require.Equal(t, prev, sp.Start, "statements must be contiguous")
 		require.LessOrEqual(t, sp.Start, sp.End)
-		b := s.Body()
+		b := f.StmtBody(i)
 		require.True(t, sp.Start <= b.Start && b.Start <= b.End && b.End <= sp.End, "body %v inside span %v", b, sp)
 		sb.Write(f.Src[sp.Start:sp.End])
 		prev = sp.End
 	}
 	require.Equal(t, string(f.Src), sb.String())
+	require.Empty(t, tokenProblems(f))
 	for _, d := range f.Diags {
 		require.True(t, 0 <= d.Span.Start && d.Span.Start <= d.Span.End && d.Span.End <= len(f.Src), "diagnostic span %v in [0,%d]", d.Span, len(f.Src))
 	}
@@ -168,7 +169,10 @@ func TestAllStatements(t *testing.T) {
 	f := parseFile(t, "../testdata/speciesfile/all-statements.kiln")
 	require.Empty(t, f.Diags)
 	assertLossless(t, f)
-	tok := func(tk Token) string { return string(f.Src[tk.Span.Start:tk.Span.End]) }
+	// (assertLossless checked every token's text against the source)
+	tok := func(tk Token) string { return tk.Text }
+	// text returns the source of span r of statement st
+	text := func(st Stmt, r RelSpan) string { a := f.Abs(st, r); return string(f.Src[a.Start:a.End]) }
 
 	assert.Equal(t, "kJ/mol", f.EnergyUnit)
 	assert.Equal(t, "J/mol/K", f.EntropyUnit)
@@ -208,9 +212,9 @@ func TestAllStatements(t *testing.T) {
 	assert.Equal(t, 4.8586957, et.NASA7.Low[0].Value)
 	assert.Equal(t, -9.4730202, et.NASA7.High[6].Value)
 	assert.Equal(t, "demo block", et.NASA7.Source.Text)
-	assert.True(t, strings.HasPrefix(tok(Token{Span: et.NASA7.LowSpan}), "low "))
-	assert.True(t, strings.HasPrefix(tok(Token{Span: et.NASA7.Span}), "nasa7 300"))
-	assert.True(t, strings.HasSuffix(tok(Token{Span: et.NASA7.Span}), "source demo block"))
+	assert.True(t, strings.HasPrefix(text(et, et.NASA7.LowSpan), "low "))
+	assert.True(t, strings.HasPrefix(text(et, et.NASA7.Span), "nasa7 300"))
+	assert.True(t, strings.HasSuffix(text(et, et.NASA7.Span), "source demo block"))
 	require.Len(t, et.Attrs, 5)
 	assert.Equal(t, "nasa7", et.Attrs[4].Key.Text)
 	assert.Equal(t, et.NASA7.Span, et.Attrs[4].Span, "a block attribute spans its block lines")
@@ -227,7 +231,7 @@ func TestAllStatements(t *testing.T) {
 
 	require.Len(t, f.Reactions, 6)
 	r0 := f.Reactions[0]
-	assert.Equal(t, "H + O2 <=> O + OH", tok(Token{Span: r0.Equation}))
+	assert.Equal(t, "H + O2 <=> O + OH", text(r0, r0.Equation))
 	assert.True(t, r0.Reversible)
 	assert.Equal(t, "<=>", r0.Arrow.Text)
 	assert.Equal(t, []string{"H", "O2"}, termNames(r0.Reactants))
@@ -383,11 +387,11 @@ func TestTrivia(t *testing.T) {
 	require.Empty(t, f.Diags)
 	assertLossless(t, f)
 	require.Len(t, f.Stmts, 2)
-	a, b := f.Stmts[0], f.Stmts[1]
-	assert.Equal(t, "species A C   # trailing\n  # inside\n\n  symmetry 2", src[a.Body().Start:a.Body().End])
+	a, b := f.StmtBody(0), f.StmtSpan(1)
+	assert.Equal(t, "species A C   # trailing\n  # inside\n\n  symmetry 2", src[a.Start:a.End])
 	assert.Equal(t, 2, f.Species[0].Symmetry.Value, "blank and comment lines do not end a statement")
-	assert.True(t, strings.HasPrefix(src[b.Span().Start:], "# before B"), "leading comments belong to the next statement")
-	assert.True(t, strings.HasSuffix(src[:b.Span().End], "# tail\n"), "trailing trivia belongs to the last statement")
+	assert.True(t, strings.HasPrefix(src[b.Start:], "# before B"), "leading comments belong to the next statement")
+	assert.True(t, strings.HasSuffix(src[:b.End], "# tail\n"), "trailing trivia belongs to the last statement")
 	assert.Equal(t, "x", f.Species[1].Note.Text)
 
 	for _, s := range []string{"", "\n", "# only a comment", "\xef\xbb\xbf", "\r\n\r\n  # x\r"} {
@@ -424,7 +428,7 @@ func TestLineEndingsAndBOM(t *testing.T) {
 			assert.Equal(t, 6, f.Species[0].Symmetry.Value)
 			assert.Equal(t, 7.0, f.Species[0].NASA7.High[6].Value)
 			assert.Equal(t, "B", f.Reactions[0].Products[0].Name.Text)
-			assert.Equal(t, 0, f.Stmts[0].Span().Start, "the BOM belongs to the first statement")
+			assert.Equal(t, 0, f.StmtSpan(0).Start, "the BOM belongs to the first statement")
 		})
 	}
 }
@@ -519,7 +523,7 @@ func TestErrorIn(t *testing.T) {
 	f := Parse("t.kiln", []byte(b.String()))
 	require.NotEmpty(t, f.Diags)
 	for _, sp := range f.Species[:5] {
-		assert.True(t, f.ErrorIn(sp.NASA7.Span), "missing low/high lines")
-		assert.False(t, f.ErrorIn(sp.Name.Span))
+		assert.True(t, f.ErrorIn(f.Abs(sp, sp.NASA7.Span)), "missing low/high lines")
+		assert.False(t, f.ErrorIn(f.Abs(sp, sp.Name.Span)))
 	}
 }

@@ -23,8 +23,8 @@ import (
 //     where a statement of the old parse started (the following text is the
 //     same, so the following statements read the same);
 //   - reuses the statements after that point, moved by the edit's length
-//     change (copies with shifted spans; the nodes themselves when the
-//     length is unchanged), except statements with syntax diagnostics,
+//     change: the same nodes (a node's spans are relative to its start, and
+//     only File.Starts moves), except statements with syntax diagnostics,
 //     whose messages may name line numbers: those are read again.
 //
 // It falls back to a whole parse where the shortcut would be unsound or
@@ -83,9 +83,10 @@ func Reparse(old *File, src []byte, e Edit) *File {
 		len(src) != len(old.Src)+delta || len(src) > MaxFileSize || len(old.Src) > MaxFileSize || len(old.Stmts) < 2 {
 		return Parse(old.Name, src)
 	}
-	stmts := old.Stmts
+	stmts, starts := old.Stmts, old.Starts
 	n := len(stmts)
-	k := sort.Search(n, func(i int) bool { return stmts[i].Span().End > e.Old.Start })
+	end := func(i int) int { return starts[i] + stmts[i].Len() }
+	k := sort.Search(n, func(i int) bool { return end(i) > e.Old.Start })
 	k = min(k, n-1)
 	i0 := max(k-1, 0)
 	for _, st := range stmts[i0:] {
@@ -99,10 +100,10 @@ func Reparse(old *File, src []byte, e Edit) *File {
 	diagAt := map[int]bool{}
 	for _, d := range old.Diags {
 		s := d.Span.Start
-		i := sort.Search(n, func(i int) bool { return stmts[i].Span().End > s })
+		i := sort.Search(n, func(i int) bool { return end(i) > s })
 		i = min(i, n-1)
 		diagAt[i] = true
-		if i > 0 && s <= stmts[i].Span().Start {
+		if i > 0 && s <= starts[i] {
 			diagAt[i-1] = true
 		}
 	}
@@ -112,7 +113,11 @@ func Reparse(old *File, src []byte, e Edit) *File {
 		Name: old.Name, Src: src, Lines: lines,
 		EnergyUnit: old.EnergyUnit, EntropyUnit: old.EntropyUnit,
 		Newline: lines.newline(), BOM: old.BOM,
-		Stmts: make([]Stmt, 0, n+8),
+		Stmts:  make([]Stmt, 0, n+8),
+		Starts: make([]int, 0, n+8),
+		// the lists keep their capacity through finishLists
+		Species:   make([]*Species, 0, len(old.Species)+4),
+		Reactions: make([]*Reaction, 0, len(old.Reactions)+4),
 	}
 	factor, _ := energyUnit(old.EnergyUnit)
 	p := &parser{
@@ -122,8 +127,9 @@ func Reparse(old *File, src []byte, e Edit) *File {
 	if factor == 1000 || factor == 1 {
 		p.entropyFactor = 1
 	}
-	b0 := stmts[i0].Span().Start
+	b0 := starts[i0]
 	f.Stmts = append(f.Stmts, stmts[:i0]...)
+	f.Starts = append(f.Starts, starts[:i0]...)
 	nd := sort.Search(len(old.Diags), func(i int) bool { return old.Diags[i].Span.Start >= b0 })
 	f.Diags = append(f.Diags, old.Diags[:nd]...)
 
@@ -135,25 +141,22 @@ func Reparse(old *File, src []byte, e Edit) *File {
 			return 0, false
 		}
 		o := end - delta
-		j := sort.Search(n, func(i int) bool { return stmts[i].Span().Start >= o })
-		return j, j < n && stmts[j].Span().Start == o
+		j := sort.Search(n, func(i int) bool { return starts[i] >= o })
+		return j, j < n && starts[j] == o
 	}
 	j, ok := p.readFrom(b0, newEnd, resync)
 	if !ok && len(f.Stmts) == i0 {
 		return Parse(old.Name, src) // the edited region holds no statement
 	}
 	for ok && j < n {
-		st := stmts[j]
-		switch {
-		case diagAt[j]:
-			start := st.Span().Start + delta
+		if diagAt[j] {
+			start := starts[j] + delta
 			j, ok = p.readFrom(start, start, resync)
 			continue
-		case delta == 0:
-			f.Stmts = append(f.Stmts, st)
-		default:
-			f.Stmts = append(f.Stmts, p.shifted(st, delta))
 		}
+		// a moved statement is the same node: its spans are relative
+		f.Stmts = append(f.Stmts, stmts[j])
+		f.Starts = append(f.Starts, starts[j]+delta)
 		j++
 	}
 	for _, st := range f.Stmts[i0:] {
@@ -161,23 +164,7 @@ func Reparse(old *File, src []byte, e Edit) *File {
 			return Parse(old.Name, src)
 		}
 	}
-	// the statements read again appended themselves to these lists: make
-	// them again from the whole list
-	f.Species, f.Reactions, f.Includes, f.Groups = nil, nil, nil, nil
-	for _, st := range f.Stmts {
-		switch s := st.(type) {
-		case *Species:
-			f.Species = append(f.Species, s)
-		case *Reaction:
-			f.Reactions = append(f.Reactions, s)
-		case *Include:
-			if s.Path != (Token{}) { // as in include: only with a path
-				f.Includes = append(f.Includes, s)
-			}
-		case *Group:
-			f.Groups = append(f.Groups, s)
-		}
-	}
+	f.finishLists()
 	slices.SortStableFunc(f.Diags, func(a, b Diagnostic) int { return cmp.Compare(a.Span.Start, b.Span.Start) })
 	return f
 }
@@ -203,7 +190,7 @@ func (p *parser) readFrom(start, from int, stop func(end int) (int, bool)) (int,
 		if !p.overflow || hi == len(p.src) {
 			return j, ok
 		}
-		f.Stmts, f.Diags = f.Stmts[:nStmts], f.Diags[:nDiags]
+		f.Stmts, f.Starts, f.Diags = f.Stmts[:nStmts], f.Starts[:nStmts], f.Diags[:nDiags]
 	}
 }
 
@@ -220,8 +207,9 @@ func (p *parser) readStmts(start int, stop func(end int) (int, bool)) (int, bool
 		if !ok {
 			break
 		}
-		extentStart = next
 		f.Stmts = append(f.Stmts, st)
+		f.Starts = append(f.Starts, extentStart)
+		extentStart = next
 		last = st
 		if j, ok := stop(extentStart); ok && p.hasPending {
 			// Reading ahead checked the lines of the statement that
@@ -234,7 +222,7 @@ func (p *parser) readStmts(start int, stop func(end int) (int, bool)) (int, bool
 		}
 	}
 	if last != nil {
-		setExtentEnd(last, len(p.src))
+		setExtentEnd(last, f.Starts[len(f.Starts)-1], len(p.src))
 	}
 	return 0, false
 }

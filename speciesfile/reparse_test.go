@@ -113,6 +113,13 @@ func TestReparseMatchesScratch(t *testing.T) {
 				if !reflect.DeepEqual(got, want) {
 					t.Fatalf("%s seed %d edit %d (%+v): incremental parse differs from scratch: %s", name, seed, k, e, fileDiff(got, want))
 				}
+				// the old parse shares its moved statements with the new
+				// one and must still be the parse of the old text
+				if k%4 == 0 {
+					if before := speciesfile.Parse(name, cur); !reflect.DeepEqual(f, before) {
+						t.Fatalf("%s seed %d edit %d: Reparse changed the old parse: %s", name, seed, k, fileDiff(f, before))
+					}
+				}
 				f, cur = got, next
 			}
 		}
@@ -179,6 +186,9 @@ func FuzzReparse(f *testing.F) {
 		if !reflect.DeepEqual(got, want) {
 			t.Fatalf("incremental parse differs from scratch: %s", fileDiff(got, want))
 		}
+		if before := speciesfile.Parse("fuzz.kiln", src); !reflect.DeepEqual(old, before) {
+			t.Fatalf("Reparse changed the old parse: %s", fileDiff(old, before))
+		}
 	})
 }
 
@@ -198,4 +208,28 @@ func TestReparseFallbacks(t *testing.T) {
 		require.True(t, reflect.DeepEqual(want, speciesfile.Reparse(old, next, e)), "%+v", e)
 	}
 	require.True(t, reflect.DeepEqual(speciesfile.Parse("", next), speciesfile.Reparse(nil, next, speciesfile.Edit{})))
+}
+
+// TestReparseSharesMoved: statements after an edit that changes the text's
+// length are the same nodes in the old and the new parse (only their
+// starts move), and both parses read their own text correctly.
+func TestReparseSharesMoved(t *testing.T) {
+	src := []byte("species A C\nspecies B CC\n  multiplicity 2\n# c\nreaction A => B A=1 n=0 Ea=0\nspecies D CCC\n")
+	old := speciesfile.Parse("s.kiln", src)
+	require.Empty(t, old.Diags)
+	at := len("species A C")
+	next := append(append(append([]byte{}, src[:at]...), "C(O)"...), src[at:]...)
+	got := speciesfile.Reparse(old, next, speciesfile.Edit{Old: speciesfile.Span{Start: at, End: at}, NewLen: 4})
+	require.True(t, reflect.DeepEqual(speciesfile.Parse("s.kiln", next), got))
+	require.Len(t, got.Stmts, 4)
+	for i := 2; i < 4; i++ {
+		assert.Same(t, old.Stmts[i], got.Stmts[i], "statement %d is shared", i)
+		assert.Equal(t, old.Starts[i]+4, got.Starts[i])
+	}
+	r := got.Reactions[0]
+	eq := got.Abs(r, r.Equation)
+	assert.Equal(t, "A => B", string(next[eq.Start:eq.End]))
+	eq = old.Abs(r, r.Equation)
+	assert.Equal(t, "A => B", string(src[eq.Start:eq.End]), "the old parse reads the shared node at its old start")
+	assert.Equal(t, "CC(O)", got.Species[0].SMILES.Text)
 }

@@ -1,223 +1,152 @@
 package speciesfile
 
-// Copies of statements moved by an edit elsewhere (see Reparse). A copy has
-// every span moved by delta bytes and the same token texts; it shares no
-// mutable storage with the original (only the immutable Formula lists and
-// token strings).
+// Relative positions. While a statement is read its spans hold absolute
+// offsets (the reader checks them against the text and reports diagnostics
+// at them); relativize then moves every span of the new node, in place, to
+// be relative to the start of the statement's extent. A node is never
+// changed after that, so parses share moved statements (see Reparse).
 
-// moved returns s moved by d; the zero Span (which marks a missing part:
-// no statement that can be moved starts at offset 0) stays as it is.
-func (s Span) moved(d int) Span {
-	if s == (Span{}) {
-		return s
+// rel moves s by -base in place; the zero span (which marks a missing part)
+// stays as it is.
+func (s *RelSpan) rel(base int) {
+	if *s != (RelSpan{}) {
+		s.From -= base
+		s.To -= base
 	}
-	return Span{s.Start + d, s.End + d}
 }
 
-func (t Token) moved(d int) Token { return Token{t.Span.moved(d), t.Text} }
+func (t *Token) rel(base int) { t.Span.rel(base) }
 
-func (n Number) moved(d int) Number {
-	n.Tok = n.Tok.moved(d)
-	return n
+func (n *Number) rel(base int) { n.Tok.rel(base) }
+
+func tokenRel(t *Token, base int) {
+	if t != nil {
+		t.rel(base)
+	}
 }
 
-func (b StmtBase) moved(d int) StmtBase {
-	return StmtBase{Extent: b.Extent.moved(d), BodySpan: b.BodySpan.moved(d), KeywordTok: b.KeywordTok.moved(d)}
+func numberRel(n *Number, base int) {
+	if n != nil {
+		n.rel(base)
+	}
 }
 
-func (p *parser) movedToken(t *Token, d int) *Token {
-	if t == nil {
-		return nil
+func intAttrRel(a *IntAttr, base int) {
+	if a != nil {
+		a.Key.rel(base)
+		a.Tok.rel(base)
 	}
-	return p.newToken(t.moved(d))
 }
 
-func (p *parser) movedNumber(n *Number, d int) *Number {
-	if n == nil {
-		return nil
+func attrsRel(as []Attr, base int) {
+	for i := range as {
+		as[i].Key.rel(base)
+		as[i].Span.rel(base)
 	}
-	np := p.numbers.new()
-	*np = n.moved(d)
-	return np
 }
 
-func (p *parser) movedIntAttr(a *IntAttr, d int) *IntAttr {
-	if a == nil {
-		return nil
+func cpRel(cp []CpPoint, base int) {
+	for i := range cp {
+		cp[i].T.rel(base)
+		cp[i].Cp.rel(base)
 	}
-	ap := p.intAttrs.new()
-	*ap = IntAttr{Key: a.Key.moved(d), Value: a.Value, Tok: a.Tok.moved(d)}
-	return ap
 }
 
-func (p *parser) movedAttrs(as []Attr, d int) []Attr {
-	if as == nil {
-		return nil
+func arrheniusRel(r *Arrhenius, base int) {
+	if r != nil {
+		r.Span.rel(base)
+		numberRel(r.A, base)
+		numberRel(r.N, base)
+		numberRel(r.Ea, base)
 	}
-	out := p.attrs.take(len(as))
-	if out == nil {
-		out = []Attr{}
-	}
-	for _, a := range as {
-		out = append(out, Attr{Key: a.Key.moved(d), Span: a.Span.moved(d)})
-	}
-	return out
 }
 
-func movedCp(cp []CpPoint, d int) []CpPoint {
-	if cp == nil {
-		return nil
+func termsRel(ts []Term, base int) {
+	for i := range ts {
+		tokenRel(ts[i].CoeffTok, base)
+		ts[i].Name.rel(base)
 	}
-	out := make([]CpPoint, len(cp))
-	for i, c := range cp {
-		out[i] = CpPoint{T: c.T.moved(d), Cp: c.Cp.moved(d)}
-	}
-	return out
 }
 
-// movedRate copies r into ra (whose numbers hold r's).
-func movedRate(ra *rateStore, r *Arrhenius, d int) {
-	ra.r = Arrhenius{Span: r.Span.moved(d),
-		A: movedInto(&ra.n[0], r.A, d), N: movedInto(&ra.n[1], r.N, d), Ea: movedInto(&ra.n[2], r.Ea, d)}
-}
-
-// movedInto stores src moved by d in dst and returns dst; nil for a nil src
-// (an absent number stays absent).
-func movedInto(dst, src *Number, d int) *Number {
-	if src == nil {
-		return nil
+// relativize makes every span of st, a statement just read whose extent
+// starts at base, relative to base. Every part of a new node is its own
+// storage (no token or number is reachable twice), so each moves once.
+func relativize(st Stmt, base int) {
+	if base == 0 {
+		return
 	}
-	*dst = src.moved(d)
-	return dst
-}
-
-func (p *parser) movedArrhenius(r *Arrhenius, d int) *Arrhenius {
-	if r == nil {
-		return nil
-	}
-	ra := p.rates.new()
-	movedRate(ra, r, d)
-	return &ra.r
-}
-
-func (p *parser) movedTerms(ts []Term, d int) []Term {
-	if ts == nil {
-		return nil
-	}
-	out := p.terms.take(len(ts))
-	if out == nil {
-		out = []Term{}
-	}
-	for _, t := range ts {
-		t.CoeffTok = p.movedToken(t.CoeffTok, d)
-		t.Name = t.Name.moved(d)
-		out = append(out, t)
-	}
-	return out
-}
-
-// shifted returns a copy of st with every span moved by d bytes.
-func (p *parser) shifted(st Stmt, d int) Stmt {
+	b := stmtBase(st)
+	b.BodySpan.rel(base)
+	b.KeywordTok.rel(base)
 	switch s := st.(type) {
 	case *Species:
-		n := p.speciesNodes.new()
-		c := &n.sp
-		*c = *s
-		c.StmtBase = s.StmtBase.moved(d)
-		c.Name = s.Name.moved(d)
-		if s.SMILES != nil {
-			n.smiles = s.SMILES.moved(d)
-			c.SMILES = &n.smiles
-		}
-		c.Multiplicity = p.movedIntAttr(s.Multiplicity, d)
-		c.Symmetry = p.movedIntAttr(s.Symmetry, d)
-		c.OpticalIsomers = p.movedIntAttr(s.OpticalIsomers, d)
-		c.Composition = p.movedToken(s.Composition, d)
-		c.Note = p.movedToken(s.Note, d)
-		if b := s.NASA7; b != nil {
-			nb := p.nasaBlocks.new()
-			*nb = NASA7Block{
-				Span: b.Span.moved(d), Header: b.Header.moved(d),
-				TLow: b.TLow.moved(d), TMid: b.TMid.moved(d), THigh: b.THigh.moved(d),
-				LowSpan: b.LowSpan.moved(d), HighSpan: b.HighSpan.moved(d),
-				Source: p.movedToken(b.Source, d),
-			}
+		s.Name.rel(base)
+		tokenRel(s.SMILES, base)
+		intAttrRel(s.Multiplicity, base)
+		intAttrRel(s.Symmetry, base)
+		intAttrRel(s.OpticalIsomers, base)
+		tokenRel(s.Composition, base)
+		tokenRel(s.Note, base)
+		if nb := s.NASA7; nb != nil {
+			nb.Span.rel(base)
+			nb.Header.rel(base)
+			nb.TLow.rel(base)
+			nb.TMid.rel(base)
+			nb.THigh.rel(base)
+			nb.LowSpan.rel(base)
+			nb.HighSpan.rel(base)
+			tokenRel(nb.Source, base)
 			for i := range 7 {
-				nb.Low[i], nb.High[i] = b.Low[i].moved(d), b.High[i].moved(d)
+				nb.Low[i].rel(base)
+				nb.High[i].rel(base)
 			}
-			c.NASA7 = nb
 		}
 		if t := s.Table; t != nil {
-			c.Table = &ThermoTable{
-				Span: t.Span.moved(d), Header: t.Header.moved(d),
-				Hf298: p.movedNumber(t.Hf298, d), S298: p.movedNumber(t.S298, d),
-				Cp: movedCp(t.Cp, d), Source: p.movedToken(t.Source, d),
-			}
+			t.Span.rel(base)
+			t.Header.rel(base)
+			numberRel(t.Hf298, base)
+			numberRel(t.S298, base)
+			cpRel(t.Cp, base)
+			tokenRel(t.Source, base)
 		}
-		c.Attrs = p.movedAttrs(s.Attrs, d)
-		return c
+		attrsRel(s.Attrs, base)
 	case *Reaction:
-		n := p.reactionNodes.new()
-		c := &n.r
-		*c = *s
-		c.StmtBase = s.StmtBase.moved(d)
-		c.Equation = s.Equation.moved(d)
-		c.Reactants = p.movedTerms(s.Reactants, d)
-		c.Products = p.movedTerms(s.Products, d)
-		c.Arrow = s.Arrow.moved(d)
-		c.Falloff = p.movedToken(s.Falloff, d)
-		if s.Rate != nil {
-			movedRate(&n.rate, s.Rate, d)
-			c.Rate = &n.rate.r
-		}
-		c.LowPressure = p.movedArrhenius(s.LowPressure, d)
+		s.Equation.rel(base)
+		termsRel(s.Reactants, base)
+		termsRel(s.Products, base)
+		s.Arrow.rel(base)
+		tokenRel(s.Falloff, base)
+		arrheniusRel(s.Rate, base)
+		arrheniusRel(s.LowPressure, base)
 		if t := s.Troe; t != nil {
-			tn := p.troes.new()
-			tn.t = Troe{Span: t.Span.moved(d),
-				Alpha: movedInto(&tn.n[0], t.Alpha, d), T3: movedInto(&tn.n[1], t.T3, d),
-				T1: movedInto(&tn.n[2], t.T1, d), T2: movedInto(&tn.n[3], t.T2, d)}
-			c.Troe = &tn.t
+			t.Span.rel(base)
+			numberRel(t.Alpha, base)
+			numberRel(t.T3, base)
+			numberRel(t.T1, base)
+			numberRel(t.T2, base)
 		}
-		if s.Efficiencies != nil {
-			c.Efficiencies = p.effs.take(len(s.Efficiencies))
-			if c.Efficiencies == nil {
-				c.Efficiencies = []Efficiency{}
-			}
-			for _, e := range s.Efficiencies {
-				c.Efficiencies = append(c.Efficiencies, Efficiency{Name: e.Name.moved(d), Value: e.Value.moved(d)})
-			}
+		for i := range s.Efficiencies {
+			s.Efficiencies[i].Name.rel(base)
+			s.Efficiencies[i].Value.rel(base)
 		}
-		if s.Pressures != nil {
-			c.Pressures = make([]PressureRate, len(s.Pressures))
-			for i, pr := range s.Pressures {
-				ra := p.rates.new()
-				movedRate(ra, &pr.Rate, d)
-				c.Pressures[i] = PressureRate{P: pr.P.moved(d), Rate: ra.r}
-			}
+		for i := range s.Pressures {
+			s.Pressures[i].P.rel(base)
+			arrheniusRel(&s.Pressures[i].Rate, base)
 		}
-		c.Duplicate = p.movedToken(s.Duplicate, d)
-		c.Reverse = p.movedArrhenius(s.Reverse, d)
-		c.Note = p.movedToken(s.Note, d)
-		c.Attrs = p.movedAttrs(s.Attrs, d)
-		return c
+		tokenRel(s.Duplicate, base)
+		arrheniusRel(s.Reverse, base)
+		tokenRel(s.Note, base)
+		attrsRel(s.Attrs, base)
 	case *Group:
-		c := *s
-		c.StmtBase = s.StmtBase.moved(d)
-		c.Name = s.Name.moved(d)
-		c.Hf298 = p.movedNumber(s.Hf298, d)
-		c.S298 = p.movedNumber(s.S298, d)
-		c.Cp = movedCp(s.Cp, d)
-		c.Source = p.movedToken(s.Source, d)
-		c.Attrs = p.movedAttrs(s.Attrs, d)
-		return &c
+		s.Name.rel(base)
+		numberRel(s.Hf298, base)
+		numberRel(s.S298, base)
+		cpRel(s.Cp, base)
+		tokenRel(s.Source, base)
+		attrsRel(s.Attrs, base)
 	case *Include:
-		return &Include{StmtBase: s.StmtBase.moved(d), Path: s.Path.moved(d)}
+		s.Path.rel(base)
 	case *Units:
-		return &Units{StmtBase: s.StmtBase.moved(d), Unit: s.Unit.moved(d)}
-	case *BadStmt:
-		return &BadStmt{s.StmtBase.moved(d)}
-	case *Trivia:
-		return &Trivia{s.StmtBase.moved(d)}
+		s.Unit.rel(base)
 	}
-	panic("speciesfile: unknown statement type")
 }

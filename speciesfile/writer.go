@@ -101,7 +101,8 @@ func cleanFreeText(s string) string {
 // inserted text must begin with newline. NeedsNewlineAt(offset) reports
 // exactly this case; ThermoInsertionText applies it.
 func (f *File) ThermoInsertion(s *Species) (offset int, indent string, newline string) {
-	end := s.BodySpan.End
+	base := f.Start(s)
+	end := s.BodySpan.At(base).End
 	switch {
 	case end < len(f.Src) && f.Src[end] == '\r' && end+1 < len(f.Src) && f.Src[end+1] == '\n':
 		offset = end + 2
@@ -112,7 +113,7 @@ func (f *File) ThermoInsertion(s *Species) (offset int, indent string, newline s
 	}
 	indent = "  "
 	if len(s.Attrs) > 0 {
-		k := s.Attrs[0].Key.Span.Start
+		k := s.Attrs[0].Key.Span.At(base).Start
 		ls := f.Lines.LineStart(f.Lines.Line(k))
 		if ls < k {
 			indent = string(f.Src[ls:k])

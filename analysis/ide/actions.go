@@ -155,11 +155,11 @@ func DeclareEdit(f *speciesfile.File, name string) analysis.Edit {
 	}
 	text := "species " + name + " " + declaredStructure(name, nl)
 	if n := len(f.Species); n > 0 {
-		end := f.Species[n-1].Body().End
+		end := f.Species[n-1].Body().At(f.SpeciesStart(n - 1)).End
 		return analysis.Edit{File: f.Name, Span: speciesfile.Span{Start: end, End: end}, NewText: nl + text}
 	}
 	if len(f.Reactions) > 0 {
-		at := f.Reactions[0].Keyword().Span.Start
+		at := f.Reactions[0].Keyword().Span.At(f.ReactionStart(0)).Start
 		return analysis.Edit{File: f.Name, Span: speciesfile.Span{Start: at, End: at}, NewText: text + nl}
 	}
 	end := len(f.Src)

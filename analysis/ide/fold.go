@@ -22,10 +22,11 @@ func FoldingRanges(f *speciesfile.File) []Fold {
 			out = append(out, Fold{Start: s.Start, End: s.End, Kind: kind})
 		}
 	}
-	for _, st := range f.Stmts {
-		body := st.Body()
+	for i, st := range f.Stmts {
+		base := f.Starts[i]
+		body := st.Body().At(base)
 		// Leading comment lines: the part of the statement span before its body.
-		if lead := (speciesfile.Span{Start: st.Span().Start, End: body.Start}); lead.End > lead.Start {
+		if lead := (speciesfile.Span{Start: base, End: body.Start}); lead.End > lead.Start {
 			first, last := -1, -1
 			for l := f.Lines.Line(lead.Start); l <= f.Lines.Line(lead.End) && l < f.Lines.LineCount(); l++ {
 				ls, le := f.Lines.LineStart(l), f.Lines.LineEnd(l)
@@ -52,10 +53,10 @@ func FoldingRanges(f *speciesfile.File) []Fold {
 		add(body, "region")
 		if sp, ok := st.(*speciesfile.Species); ok {
 			if sp.NASA7 != nil {
-				add(sp.NASA7.Span, "region")
+				add(sp.NASA7.Span.At(base), "region")
 			}
 			if sp.Table != nil {
-				add(sp.Table.Span, "region")
+				add(sp.Table.Span.At(base), "region")
 			}
 		}
 	}

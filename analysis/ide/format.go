@@ -96,22 +96,24 @@ func (fm *formatter) collect() {
 			fm.syntax = append(fm.syntax, d)
 		}
 	}
-	for _, st := range f.Stmts {
+	for i, st := range f.Stmts {
 		switch st.(type) {
 		case *speciesfile.BadStmt, *speciesfile.Trivia:
 			fm.broken[st] = true
 			continue
 		}
-		span := st.Span()
-		body := st.Body()
+		base := f.Starts[i]
+		span := f.StmtSpan(i)
+		body := st.Body().At(base)
 		if body.End <= body.Start || fm.isBroken(span) {
 			fm.broken[st] = true
 			continue
 		}
 		blockLines := map[int]bool{}
 		if sp, ok := st.(*speciesfile.Species); ok {
-			for _, b := range []*speciesfile.Span{nasaSpan(sp), tableSpan(sp)} {
-				if b != nil {
+			for _, rb := range []*speciesfile.RelSpan{nasaSpan(sp), tableSpan(sp)} {
+				if rb != nil {
+					b := rb.At(base)
 					for l := f.Lines.Line(b.Start) + 1; l <= f.Lines.Line(b.End); l++ {
 						blockLines[l] = true
 					}
@@ -206,7 +208,7 @@ func (fm *formatter) group() {
 	var run *colGroup
 	var runKind string
 	prevLine := -1
-	for _, st := range f.Stmts {
+	for i, st := range f.Stmts {
 		kind := ""
 		switch st.(type) {
 		case *speciesfile.Species:
@@ -214,7 +216,7 @@ func (fm *formatter) group() {
 		case *speciesfile.Reaction:
 			kind = "reaction"
 		}
-		l := f.Lines.Line(st.Body().Start)
+		l := f.Lines.Line(f.StmtBody(i).Start)
 		if kind == "" || fm.broken[st] || fm.rows[l] == nil {
 			run, runKind = nil, ""
 			continue
@@ -231,20 +233,22 @@ func (fm *formatter) group() {
 		prevLine = l
 	}
 	// Blocks inside statements.
-	for _, st := range f.Stmts {
+	for i, st := range f.Stmts {
 		if fm.broken[st] {
 			continue
 		}
+		base := f.Starts[i]
 		switch st := st.(type) {
 		case *speciesfile.Species:
 			if b := st.NASA7; b != nil {
 				g := &colGroup{aligned: -1, decimal: true}
-				add(g, f.Lines.Line(b.LowSpan.Start))
-				add(g, f.Lines.Line(b.HighSpan.Start))
+				add(g, f.Lines.Line(b.LowSpan.At(base).Start))
+				add(g, f.Lines.Line(b.HighSpan.At(base).Start))
 			}
 			if b := st.Table; b != nil {
 				g := &colGroup{aligned: 1}
-				for l := f.Lines.Line(b.Span.Start) + 1; l <= f.Lines.Line(b.Span.End); l++ {
+				bs := b.Span.At(base)
+				for l := f.Lines.Line(bs.Start) + 1; l <= f.Lines.Line(bs.End); l++ {
 					if r := fm.rows[l]; r != nil && len(r.cells) > 0 && isThermoKey(r.cells[0]) {
 						add(g, l)
 					}
@@ -254,14 +258,14 @@ func (fm *formatter) group() {
 			g := &colGroup{aligned: 1}
 			for _, a := range st.Attrs {
 				if isThermoKey(a.Key.Text) {
-					add(g, f.Lines.Line(a.Key.Span.Start))
+					add(g, f.Lines.Line(a.Key.Span.At(base).Start))
 				}
 			}
 		case *speciesfile.Reaction:
 			var g *colGroup
 			prev := -1
 			for _, a := range st.Attrs {
-				l := f.Lines.Line(a.Key.Span.Start)
+				l := f.Lines.Line(a.Key.Span.At(base).Start)
 				if a.Key.Text != "pressure" {
 					g = nil
 					continue
@@ -395,14 +399,14 @@ func (fm *formatter) render() []analysis.Edit {
 	return out
 }
 
-func nasaSpan(sp *speciesfile.Species) *speciesfile.Span {
+func nasaSpan(sp *speciesfile.Species) *speciesfile.RelSpan {
 	if sp.NASA7 == nil {
 		return nil
 	}
 	return &sp.NASA7.Span
 }
 
-func tableSpan(sp *speciesfile.Species) *speciesfile.Span {
+func tableSpan(sp *speciesfile.Species) *speciesfile.RelSpan {
 	if sp.Table == nil {
 		return nil
 	}

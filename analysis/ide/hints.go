@@ -36,14 +36,14 @@ func InlayHints(x *Index, file string, start, end int, s analysis.Settings) []Hi
 			if v == nil {
 				continue
 			}
-			out = append(out, Hint{Offset: lineEnd(f, o.SpeciesDecl.Name.Span.Start),
+			out = append(out, Hint{Offset: lineEnd(f, o.SpeciesDecl.Name.Span.At(o.Base).Start),
 				Label: "ΔHf°298 " + u.energy(v.hf) + " · S° " + u.entropy(v.s) + " (" + word + ")"})
 		case KindReactionStmt:
 			r := o.Reaction
 			if r == nil || r.DH298 == nil {
 				continue
 			}
-			out = append(out, Hint{Offset: lineEnd(f, o.ReactionDec.Keyword().Span.Start), Label: "ΔH°r " + u.energy(*r.DH298)})
+			out = append(out, Hint{Offset: lineEnd(f, o.ReactionDec.Keyword().Span.At(o.Base).Start), Label: "ΔH°r " + u.energy(*r.DH298)})
 		}
 	}
 	return out

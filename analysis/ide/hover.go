@@ -43,7 +43,7 @@ func Hover(x *Index, file string, off int, s analysis.Settings, markdown bool) (
 		}
 		if o.Kind == KindSpeciesStmt {
 			// Point at the name so the editor highlights something sensible.
-			o.Span = o.SpeciesDecl.Name.Span
+			o.Span = o.SpeciesDecl.Name.Span.At(o.Base)
 		}
 	case KindReactionStmt:
 		if o.Reaction == nil {

@@ -46,6 +46,9 @@ type Occurrence struct {
 	Kind Kind
 	File string
 	Span speciesfile.Span
+	// Base is where the statement holding the occurrence starts in File
+	// (the relative spans of the syntax nodes below are read from it).
+	Base int
 	// Name is the species or group name (raw text for groups), the include
 	// path, or the equation text for reactions.
 	Name string
@@ -87,43 +90,49 @@ func NewIndex(r *analysis.Result) *Index {
 	return x
 }
 
-// reaction returns the resolved reaction of statement d (analysed file only).
-func (x *Index) reaction(path string, d *speciesfile.Reaction) *analysis.Reaction {
+// reaction returns the resolved reaction of statement d, which starts at
+// start (analysed file only).
+func (x *Index) reaction(path string, d *speciesfile.Reaction, start int) *analysis.Reaction {
 	if path != x.r.Path {
 		return nil
 	}
-	rs := x.r.Reactions // in file order
-	start := d.Span().Start
-	i := sort.Search(len(rs), func(i int) bool { return rs[i].Decl.Span().Start >= start })
+	rs := x.r.Reactions // in file order, one per reaction statement
+	f := x.r.File
+	if len(rs) != len(f.Reactions) {
+		return nil
+	}
+	i := sort.Search(len(rs), func(i int) bool { return f.ReactionStart(i) >= start })
 	if i < len(rs) && rs[i].Decl == d {
 		return rs[i]
 	}
 	return nil
 }
 
-// stmtOccurrences appends the occurrences of statement st of file path to
-// out: the statement, then its tokens in offset order.
-func (x *Index) stmtOccurrences(out []Occurrence, path string, f *speciesfile.File, st speciesfile.Stmt) []Occurrence {
+// stmtOccurrences appends the occurrences of statement i of file f (at
+// path) to out: the statement, then its tokens in offset order.
+func (x *Index) stmtOccurrences(out []Occurrence, path string, f *speciesfile.File, i int) []Occurrence {
 	r := x.r
-	switch s := st.(type) {
+	base := f.Starts[i]
+	at := func(s speciesfile.RelSpan) speciesfile.Span { return s.At(base) }
+	switch s := f.Stmts[i].(type) {
 	case *speciesfile.Species:
 		sp := r.ByName[s.Name.Text]
 		out = append(out,
-			Occurrence{Kind: KindSpeciesStmt, File: path, Span: s.Body(), Name: s.Name.Text, Species: sp, SpeciesDecl: s},
-			Occurrence{Kind: KindSpeciesDecl, File: path, Span: s.Name.Span, Name: s.Name.Text, Species: sp, SpeciesDecl: s})
+			Occurrence{Kind: KindSpeciesStmt, File: path, Base: base, Span: at(s.Body()), Name: s.Name.Text, Species: sp, SpeciesDecl: s},
+			Occurrence{Kind: KindSpeciesDecl, File: path, Base: base, Span: at(s.Name.Span), Name: s.Name.Text, Species: sp, SpeciesDecl: s})
 	case *speciesfile.Reaction:
-		rx := x.reaction(path, s)
-		out = append(out, Occurrence{Kind: KindReactionStmt, File: path, Span: s.Body(), Name: equationText(f, s), Reaction: rx, ReactionDec: s})
+		rx := x.reaction(path, s, base)
+		out = append(out, Occurrence{Kind: KindReactionStmt, File: path, Base: base, Span: at(s.Body()), Name: equationText(f, s, base), Reaction: rx, ReactionDec: s})
 		for _, u := range reactionUses(s) {
-			out = append(out, Occurrence{Kind: KindSpeciesUse, File: path, Span: u.Span, Name: u.Text, Species: r.ByName[u.Text], ReactionDec: s, Reaction: rx})
+			out = append(out, Occurrence{Kind: KindSpeciesUse, File: path, Base: base, Span: at(u.Span), Name: u.Text, Species: r.ByName[u.Text], ReactionDec: s, Reaction: rx})
 		}
 	case *speciesfile.Group:
 		g := x.groups[s]
 		out = append(out,
-			Occurrence{Kind: KindGroupStmt, File: path, Span: s.Body(), Name: s.Name.Text, Group: g, GroupDecl: s},
-			Occurrence{Kind: KindGroupDecl, File: path, Span: s.Name.Span, Name: s.Name.Text, Group: g, GroupDecl: s})
+			Occurrence{Kind: KindGroupStmt, File: path, Base: base, Span: at(s.Body()), Name: s.Name.Text, Group: g, GroupDecl: s},
+			Occurrence{Kind: KindGroupDecl, File: path, Base: base, Span: at(s.Name.Span), Name: s.Name.Text, Group: g, GroupDecl: s})
 	case *speciesfile.Include:
-		out = append(out, Occurrence{Kind: KindIncludePath, File: path, Span: s.Path.Span, Name: s.Path.Text, Include: s, IncludePath: x.includes[s]})
+		out = append(out, Occurrence{Kind: KindIncludePath, File: path, Base: base, Span: at(s.Path.Span), Name: s.Path.Text, Include: s, IncludePath: x.includes[s]})
 	}
 	return out
 }
@@ -152,8 +161,8 @@ func (x *Index) Occurrences(path string) []Occurrence {
 		return nil
 	}
 	var out []Occurrence
-	for _, st := range f.Stmts {
-		out = x.stmtOccurrences(out, path, f, st)
+	for i := range f.Stmts {
+		out = x.stmtOccurrences(out, path, f, i)
 	}
 	return out
 }
@@ -166,10 +175,10 @@ func (x *Index) OccurrencesIn(path string, start, end int) []Occurrence {
 		return nil
 	}
 	st := f.Stmts
-	i := sort.Search(len(st), func(i int) bool { return st[i].Span().End >= start })
+	i := sort.Search(len(st), func(i int) bool { return f.Starts[i]+st[i].Len() >= start })
 	var out []Occurrence
-	for ; i < len(st) && st[i].Span().Start <= end; i++ {
-		out = x.stmtOccurrences(out, path, f, st[i])
+	for ; i < len(st) && f.Starts[i] <= end; i++ {
+		out = x.stmtOccurrences(out, path, f, i)
 	}
 	return out
 }
@@ -184,13 +193,13 @@ func (x *Index) At(path string, off int) (Occurrence, bool) {
 	st := f.Stmts
 	// The statement whose extent holds off, and the one before it (a token
 	// may end exactly where the next statement's extent begins).
-	k := sort.Search(len(st), func(i int) bool { return st[i].Span().Start > off }) - 1
+	k := sort.Search(len(st), func(i int) bool { return f.Starts[i] > off }) - 1
 	var buf [16]Occurrence
 	for _, j := range [2]int{k, k - 1} {
 		if j < 0 || j >= len(st) {
 			continue
 		}
-		occ := x.stmtOccurrences(buf[:0], path, f, st[j])
+		occ := x.stmtOccurrences(buf[:0], path, f, j)
 		i := sort.Search(len(occ), func(i int) bool { return occ[i].Span.Start > off }) - 1
 		for ; i >= 0; i-- {
 			o := occ[i]
@@ -207,7 +216,8 @@ func (x *Index) At(path string, off int) (Occurrence, bool) {
 type use = speciesfile.Token
 
 // reactionUses lists the species names a reaction uses: terms (not the third
-// body M), efficiency names and a specific falloff collider "(+AR)".
+// body M), efficiency names and a specific falloff collider "(+AR)"; spans
+// relative to the statement.
 func reactionUses(r *speciesfile.Reaction) []use {
 	var out []use
 	for _, t := range r.Reactants {
@@ -218,20 +228,20 @@ func reactionUses(r *speciesfile.Reaction) []use {
 	}
 	if r.Falloff != nil {
 		if c := r.FalloffCollider(); c != "" && c != "M" {
-			st := r.Falloff.Span.Start + 2
-			out = append(out, speciesfile.Token{Span: speciesfile.Span{Start: st, End: st + len(c)}, Text: c})
+			st := r.Falloff.Span.From + 2
+			out = append(out, speciesfile.Token{Span: speciesfile.RelSpan{From: st, To: st + len(c)}, Text: c})
 		}
 	}
 	for _, e := range r.Efficiencies {
 		out = append(out, e.Name)
 	}
-	sort.Slice(out, func(i, j int) bool { return out[i].Span.Start < out[j].Span.Start })
+	sort.Slice(out, func(i, j int) bool { return out[i].Span.From < out[j].Span.From })
 	return out
 }
 
-// equationText returns the equation as written.
-func equationText(f *speciesfile.File, r *speciesfile.Reaction) string {
-	e := r.Equation
+// equationText returns the equation as written (r starts at start).
+func equationText(f *speciesfile.File, r *speciesfile.Reaction, start int) string {
+	e := r.Equation.At(start)
 	if e.Start < 0 || e.End > len(f.Src) || e.Start >= e.End {
 		return "reaction"
 	}

@@ -14,10 +14,10 @@ func EquilibriumLens(f *speciesfile.File) (speciesfile.Span, bool) {
 		return speciesfile.Span{}, false
 	}
 	if len(f.Species) > 0 {
-		return f.Species[0].Keyword().Span, true
+		return f.Species[0].Keyword().Span.At(f.SpeciesStart(0)), true
 	}
 	if len(f.Includes) > 0 {
-		return f.Includes[0].Keyword().Span, true
+		return f.Includes[0].Keyword().Span.At(f.IncludeStart(0)), true
 	}
 	return speciesfile.Span{}, false
 }

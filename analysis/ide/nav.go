@@ -23,7 +23,7 @@ func Definition(x *Index, file string, off int) []analysis.Location {
 	switch o.Kind {
 	case KindSpeciesDecl, KindSpeciesUse:
 		if o.Species != nil {
-			return []analysis.Location{o.Species.Loc}
+			return []analysis.Location{x.r.SpeciesLoc(o.Species)}
 		}
 	case KindGroupDecl:
 		if o.Group != nil {
@@ -119,7 +119,7 @@ func Rename(xs []*Index, oldName, newName string) ([]analysis.Edit, error) {
 	var out []analysis.Edit
 	for _, x := range xs {
 		if sp := x.r.ByName[newName]; sp != nil {
-			return nil, fmt.Errorf("species %s already exists (%s)", newName, sp.Loc.File)
+			return nil, fmt.Errorf("species %s already exists (%s)", newName, sp.File)
 		}
 		for _, l := range NameReferences(x, oldName, true) {
 			if !seen[l] {
@@ -171,15 +171,15 @@ func DocumentSymbols(x *Index, file string) []Symbol {
 			if o.Species != nil && o.Species.Formula != "" {
 				detail = strings.TrimSpace(detail + " " + o.Species.Formula)
 			}
-			out = append(out, Symbol{Name: o.Name, Detail: detail, Kind: SymbolConstant, File: file, Span: o.Span, Selection: o.SpeciesDecl.Name.Span})
+			out = append(out, Symbol{Name: o.Name, Detail: detail, Kind: SymbolConstant, File: file, Span: o.Span, Selection: o.SpeciesDecl.Name.Span.At(o.Base)})
 		case KindReactionStmt:
-			sel := o.ReactionDec.Equation
+			sel := o.ReactionDec.Equation.At(o.Base)
 			if sel.End <= sel.Start {
-				sel = o.ReactionDec.Keyword().Span
+				sel = o.ReactionDec.Keyword().Span.At(o.Base)
 			}
 			out = append(out, Symbol{Name: o.Name, Detail: "reaction", Kind: SymbolEvent, File: file, Span: o.Span, Selection: sel})
 		case KindGroupStmt:
-			out = append(out, Symbol{Name: o.Name, Detail: "group", Kind: SymbolClass, File: file, Span: o.Span, Selection: o.GroupDecl.Name.Span})
+			out = append(out, Symbol{Name: o.Name, Detail: "group", Kind: SymbolClass, File: file, Span: o.Span, Selection: o.GroupDecl.Name.Span.At(o.Base)})
 		}
 	}
 	return out

@@ -41,7 +41,7 @@ func runFill(e env, args []string) (int, error) {
 	}
 	code := exitOK
 	for _, sk := range skips {
-		off := sk.Species.Loc.Span.Start
+		off := res.SpeciesLoc(sk.Species).Span.Start
 		if shifted {
 			off = shiftedOffset(off, edits)
 		}

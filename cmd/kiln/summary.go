@@ -148,7 +148,7 @@ func buildSummary(results []*analysis.Result) summaryJSON {
 
 // summaryReactionOf describes reaction r of the analysis res.
 func summaryReactionOf(res *analysis.Result, r *analysis.Reaction, P float64) summaryReaction {
-	row := summaryReaction{Line: r.Line, Equation: r.Equation, DH298: kilo(r.DH298), DS298: jptr(r.DS298), DG298: kilo(r.DG298),
+	row := summaryReaction{Line: res.ReactionLine(r), Equation: r.Equation, DH298: kilo(r.DH298), DS298: jptr(r.DS298), DG298: kilo(r.DG298),
 		Keq: numericMap(r.Kp), RatePressure: jnum(P / 1e5)}
 	if r.Balance != nil {
 		row.Balanced = ptr(r.Balance.Balanced)
