@@ -79,6 +79,9 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 		ByName:   map[string]*Species{},
 	}}
 	f := w.parse(path, text)
+	if r := w.movedResult(path, f, set); r != nil {
+		return r, nil
+	}
 	a.res.File = f
 	a.res.Files[path] = f
 	a.res.Diagnostics = append(a.res.Diagnostics, f.Diags...)
@@ -95,7 +98,7 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 		return nil, err
 	}
 	sortDiagnostics(a.res.Diagnostics)
-	w.finishMemo(path, a.memo)
+	w.finishMemo(path, a.memo, a.res)
 	return a.res, nil
 }
 

@@ -102,7 +102,7 @@ func (w *Workspace) SetIncremental(on bool) {
 	defer w.mu.Unlock()
 	w.incremental = on
 	if !on {
-		w.memos, w.parses = nil, nil
+		w.memos, w.parses, w.results = nil, nil, nil
 	}
 }
 
@@ -158,8 +158,9 @@ func (w *Workspace) startMemo(path string, s Settings, userKey string) *memo {
 	return m
 }
 
-// finishMemo publishes the tables of a completed analysis of path.
-func (w *Workspace) finishMemo(path string, m *memo) {
+// finishMemo publishes the tables of a completed analysis of path and its
+// result.
+func (w *Workspace) finishMemo(path string, m *memo, res *Result) {
 	if m == nil {
 		return
 	}
@@ -172,6 +173,10 @@ func (w *Workspace) finishMemo(path string, m *memo) {
 		w.memos = map[string]*memoTables{}
 	}
 	w.memos[path] = m.next
+	if w.results == nil {
+		w.results = map[string]*Result{}
+	}
+	w.results[path] = res
 }
 
 // ForgetFile drops the units kept for analyses of path (a closed document).
@@ -180,6 +185,7 @@ func (w *Workspace) ForgetFile(path string) {
 	defer w.mu.Unlock()
 	delete(w.memos, path)
 	delete(w.parses, path)
+	delete(w.results, path)
 }
 
 // file returns the alignment of file f (at path) with its last analysis,

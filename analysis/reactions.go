@@ -69,6 +69,7 @@ func (a *analysis) reactions() error {
 				if d.Duplicate == nil || first.d.Duplicate == nil {
 					firstEq := first.d.Equation.At(first.start)
 					line := a.res.Files[first.file].Lines.Position(firstEq.Start).Line + 1
+					a.res.namesLines = true
 					where := fmt.Sprintf("line %d", line)
 					if first.file != path {
 						where = fmt.Sprintf("%s:%d", shortPath(first.file), line)
@@ -248,6 +249,7 @@ func (a *analysis) rangeChecks() {
 		} else if d := sp.Decl.Table; d != nil {
 			span = d.Header.Span
 		}
+		a.res.namesLines = true
 		a.report(sp.File, speciesfile.Diagnostic{Span: span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
 			Message: fmt.Sprintf("%s: the block covers %g–%g K, but the reaction on line %d needs it from 298 K to %g K; values outside the block are extrapolated",
 				sp.Name, lo, hi, n.line, n.tmax)})

@@ -399,6 +399,7 @@ func (a *analysis) where(l Location) string {
 		return l.File
 	}
 	line := f.Lines.Position(l.Span.Start).Line + 1
+	a.res.namesLines = true
 	if l.File == a.res.Path {
 		return fmt.Sprintf("line %d", line)
 	}

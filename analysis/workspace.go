@@ -26,6 +26,8 @@ type Workspace struct {
 
 	incremental bool
 	memos       map[string]*memoTables       // by analysed path: units of its last finished analysis
+	results     map[string]*Result           // by analysed path: its last finished analysis (with memos)
+	moved       int                          // results made by movedResult (read by tests)
 	parses      map[string]*speciesfile.File // by path: the latest parse, read again incrementally
 }
 
@@ -50,9 +52,14 @@ type Result struct {
 	// ("" when unresolved).
 	Includes []ResolvedInclude
 
-	order    []string // files in resolution order
-	usesOnce sync.Once
-	uses     map[string][]Location
+	order []string // files in resolution order
+	// namesLines: a diagnostic message names a line (of a statement, such
+	// as the first declaration of a repeated name), so the diagnostics
+	// change when lines are added or removed before it. Set from the
+	// analysis's serial passes by every message that names a line.
+	namesLines bool
+	usesOnce   sync.Once
+	uses       map[string][]Location
 }
 
 // Uses lists, per species name, every place a name is used in a reaction

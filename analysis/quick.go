@@ -1,0 +1,295 @@
+package analysis
+
+import (
+	"bytes"
+	"context"
+	"maps"
+	"path/filepath"
+	"slices"
+
+	"kiln.dev/kiln/speciesfile"
+)
+
+// Edits that move positions only.
+//
+// An edit that touches only blank and comment lines between statements (a
+// comment typed, changed or deleted, a blank line added) leaves every
+// statement's body text as it was. Every unit then stands as it is, and so
+// does every cross-statement check: the analysis of the new text is the
+// last one with the positions after the edit moved by the edit's length
+// change. An incremental workspace recognises such an edit against the
+// last finished analysis of the file and makes the new result that way
+// (movedResult) instead of running the passes: no unit is looked up, no
+// name, structure or duplicate map is built, no diagnostic is assembled
+// from units.
+//
+// The shortcut is taken only where that is certainly the analysis from
+// scratch; otherwise the full (incremental) analysis runs:
+//
+//   - the same settings, and the file includes nothing (included texts are
+//     not compared);
+//   - the reader reports the same problems at the same places (moved) in
+//     both texts: errors decide which statements are data; its messages,
+//     which may name lines, are taken from the new parse;
+//   - the same statements in the same order: each one the same syntax node
+//     (the reader kept it) or a species, reaction or trivia node of the same
+//     body text (the reader read it again because the edit touched its
+//     leading comment lines), and the same energy unit, newline and byte
+//     order mark;
+//   - the edited bytes lie outside every statement body and every
+//     diagnostic span (a span ending where the edit starts stays, one
+//     starting where it ends moves; an empty span at either end is
+//     ambiguous and stops the shortcut);
+//   - when the edit adds or removes lines, no diagnostic message names a
+//     line (duplicate declarations and structures, repeated reactions and
+//     range checks do: Result.namesLines).
+
+// Quick returns the analysis of path when its current text differs from the
+// text of its last finished analysis (in an incremental workspace) only by
+// an edit that moves positions (see above), made without running the
+// passes; nil when the edit needs a full analysis (Analyze) or ctx is done.
+// The result is the one Analyze returns. The language server calls it
+// before waiting for more typing: such an analysis costs little.
+func (w *Workspace) Quick(ctx context.Context, path string) *Result {
+	path = filepath.Clean(path)
+	w.mu.Lock()
+	on := w.incremental && w.results[path] != nil
+	w.mu.Unlock()
+	if !on || ctx.Err() != nil {
+		return nil
+	}
+	text, err := w.read(path)
+	if err != nil {
+		return nil
+	}
+	return w.movedResult(path, w.parse(path, text), w.Settings())
+}
+
+// movedResult returns the analysis of f (the new parse of the file at
+// path, analysed with settings set) made from the last finished analysis
+// of path by moving positions, or nil when the shortcut does not apply. The
+// result and its tables replace the last ones when no other analysis
+// finished meanwhile.
+func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) *Result {
+	w.mu.Lock()
+	r0, t0 := w.results[path], w.memos[path]
+	w.mu.Unlock()
+	if r0 == nil || t0 == nil || r0.Settings != set || len(r0.Files) != 1 || len(t0.files) != 1 {
+		return nil
+	}
+	f0 := r0.File
+	fm := t0.files[path]
+	if fm == nil || fm.file != f0 || f0 == nil || len(f.Diags) != len(f0.Diags) ||
+		len(f.Stmts) != len(f0.Stmts) || len(f.Includes) > 0 || len(f0.Includes) > 0 ||
+		f.EnergyUnit != f0.EnergyUnit || f.EntropyUnit != f0.EntropyUnit || f.Newline != f0.Newline || f.BOM != f0.BOM ||
+		len(f.Species) != len(f0.Species) || len(f.Reactions) != len(f0.Reactions) || len(f.Groups) != len(f0.Groups) {
+		return nil
+	}
+	e := speciesfile.DiffEdit(f0.Src, f.Src)
+	delta := e.Delta()
+	newEnd := e.Old.Start + e.NewLen
+	// The statements: the same nodes, or re-read ones of the same body.
+	var changed []int // indexes in Stmts of re-read nodes
+	for i, st := range f.Stmts {
+		o := f0.Stmts[i]
+		if st == o {
+			continue
+		}
+		switch st.(type) {
+		case *speciesfile.Species:
+			if _, ok := o.(*speciesfile.Species); !ok {
+				return nil
+			}
+		case *speciesfile.Reaction:
+			if _, ok := o.(*speciesfile.Reaction); !ok {
+				return nil
+			}
+		case *speciesfile.Trivia:
+			if _, ok := o.(*speciesfile.Trivia); !ok {
+				return nil
+			}
+		default:
+			return nil // units, include, group statements and broken ones: not shortcut
+		}
+		ob, nb := o.Body().At(f0.Starts[i]), st.Body().At(f.Starts[i])
+		if !bytes.Equal(bodyText(f0, o, f0.Starts[i]), bodyText(f, st, f.Starts[i])) ||
+			(e.Old.End > ob.Start && e.Old.Start < ob.End) || (newEnd > nb.Start && e.Old.Start < nb.End) {
+			return nil
+		}
+		changed = append(changed, i)
+	}
+	if delta != 0 || e.NewLen > 0 {
+		// Lines after the edit move when it adds or removes line breaks.
+		moved := f.Lines.LineCount() != f0.Lines.LineCount() ||
+			f.Lines.Line(e.Old.End+delta) != f0.Lines.Line(e.Old.End)
+		if moved && r0.namesLines {
+			return nil
+		}
+	}
+	// where a span of the old text goes: kept, moved by delta, or unknown
+	place := func(s speciesfile.Span) (speciesfile.Span, bool) {
+		switch {
+		case s.Start > s.End:
+			return s, false
+		case s.Start == s.End && s.Start < e.Old.Start, s.Start < s.End && s.End <= e.Old.Start:
+			return s, true
+		case s.Start == s.End && s.Start > e.Old.End, s.Start < s.End && s.Start >= e.Old.End:
+			return shift(s, delta), true
+		}
+		return s, false
+	}
+	// The reader's diagnostics are those of the new parse; they must say
+	// the same of the same places (which statements hold errors).
+	for k, d := range f0.Diags {
+		sp, ok := place(d.Span)
+		if n := f.Diags[k]; !ok || sp != n.Span || d.Severity != n.Severity || d.Code != n.Code {
+			return nil
+		}
+	}
+	// The analysis's own diagnostics: r0's without the reader's, which
+	// came first before the (stable) sort, so they lead their group of
+	// equal (offset, code) and come in the order of a stable sort of their
+	// own.
+	var pd []speciesfile.Diagnostic
+	if len(f0.Diags) > 0 {
+		pd = slices.Clone(f0.Diags)
+		sortDiagnostics(pd)
+	}
+	ds := make([]speciesfile.Diagnostic, len(f.Diags), len(r0.Diagnostics))
+	copy(ds, f.Diags)
+	j := 0
+	for _, d := range r0.Diagnostics {
+		if j < len(pd) && pd[j].Span.Start == d.Span.Start && pd[j].Code == d.Code {
+			j++
+			continue
+		}
+		sp, ok := place(d.Span)
+		if !ok {
+			return nil
+		}
+		d.Span = sp
+		if len(d.Related) > 0 {
+			var rel []speciesfile.Related
+			for j, r := range d.Related {
+				if r.File != path {
+					return nil // (no other file is in scope)
+				}
+				sp, ok := place(r.Span)
+				if !ok {
+					return nil
+				}
+				if sp != r.Span {
+					if rel == nil {
+						rel = slices.Clone(d.Related)
+					}
+					rel[j].Span = sp
+				}
+			}
+			if rel != nil {
+				d.Related = rel
+			}
+		}
+		ds = append(ds, d)
+	}
+	if j != len(pd) || len(ds) != len(r0.Diagnostics) {
+		return nil
+	}
+	if len(f.Diags) > 0 {
+		sortDiagnostics(ds)
+	}
+	groups := r0.Groups
+	if delta != 0 && len(groups) > 0 {
+		groups = make([]*Group, len(r0.Groups))
+		for k, g := range r0.Groups {
+			sp, ok := place(g.Loc.Span)
+			if !ok {
+				return nil
+			}
+			c := *g
+			c.Loc.Span = sp
+			groups[k] = &c
+		}
+	}
+	res := &Result{
+		Path:        path,
+		Settings:    set,
+		File:        f,
+		Files:       map[string]*speciesfile.File{path: f},
+		Diagnostics: ds,
+		Species:     r0.Species,
+		ByName:      r0.ByName,
+		Reactions:   r0.Reactions,
+		Groups:      groups,
+		Includes:    r0.Includes,
+		order:       r0.order,
+		namesLines:  r0.namesLines,
+	}
+	next := &fileMemo{file: f, species: fm.species, rtext: fm.rtext, rx: fm.rx, sps: fm.sps, rxs: fm.rxs}
+	// Values of re-read statements are remade for the new nodes (a value
+	// names its syntax node); everything else is shared.
+	for _, i := range changed {
+		switch d := f.Stmts[i].(type) {
+		case *speciesfile.Species:
+			od := f0.Stmts[i].(*speciesfile.Species)
+			j := slices.IndexFunc(res.Species, func(sp *Species) bool { return sp.Decl == od })
+			if j < 0 {
+				continue // a repeated or invalid name: no value
+			}
+			old := res.Species[j]
+			sp := *old
+			sp.Decl = d
+			if g := old.Given; g != nil {
+				c := *g
+				c.Span = moveRel(g.Span, d.Body().From-od.Body().From)
+				sp.Given = &c
+			}
+			if sameBacking(res.Species, r0.Species) {
+				res.Species = slices.Clone(r0.Species)
+				res.ByName = maps.Clone(r0.ByName)
+			}
+			res.Species[j] = &sp
+			if res.ByName[sp.Name] == old {
+				res.ByName[sp.Name] = &sp
+			}
+			if x := slices.Index(f.Species, d); x >= 0 && x < len(next.sps) && next.sps[x] == old {
+				if sameBacking(next.sps, fm.sps) {
+					next.sps = slices.Clone(fm.sps)
+				}
+				next.sps[x] = &sp
+			}
+		case *speciesfile.Reaction:
+			od := f0.Stmts[i].(*speciesfile.Reaction)
+			x := slices.Index(f.Reactions, d)
+			if x < 0 || x >= len(res.Reactions) || res.Reactions[x].Decl != od {
+				return nil
+			}
+			old := res.Reactions[x]
+			r := *old
+			r.Decl = d
+			if sameBacking(res.Reactions, r0.Reactions) {
+				res.Reactions = slices.Clone(r0.Reactions)
+			}
+			res.Reactions[x] = &r
+			if x < len(next.rxs) && next.rxs[x] == old {
+				if sameBacking(next.rxs, fm.rxs) {
+					next.rxs = slices.Clone(fm.rxs)
+				}
+				next.rxs[x] = &r
+			}
+		}
+	}
+	w.mu.Lock()
+	defer w.mu.Unlock()
+	w.moved++
+	if w.incremental && w.results[path] == r0 && w.memos[path] == t0 {
+		w.results[path] = res
+		w.memos[path] = &memoTables{key: t0.key, files: map[string]*fileMemo{path: next}}
+	}
+	return res
+}
+
+// sameBacking reports whether two slices share their first element (one is
+// still the other, not yet copied).
+func sameBacking[T any](a, b []T) bool {
+	return len(a) > 0 && len(b) > 0 && &a[0] == &b[0]
+}
