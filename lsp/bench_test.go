@@ -166,7 +166,7 @@ func benchEdits(b *testing.B, o fakeOptions, edit func(e *fakeEditor, i int)) {
 	text := benchText()
 	e := newFakeEditor(b, map[string]string{"big.kiln": text}, o)
 	e.open("big.kiln")
-	var lat []time.Duration
+	var lat, srv []time.Duration
 	b.ReportAllocs()
 	b.ResetTimer()
 	i := 0
@@ -177,12 +177,22 @@ func benchEdits(b *testing.B, o fakeOptions, edit func(e *fakeEditor, i int)) {
 		edit(e, i)
 		e.waitDiagnostics("big.kiln")
 		lat = append(lat, time.Since(t0))
+		u := e.uri("big.kiln")
+		e.mu.Lock()
+		if s := e.settledAt[u]; s.version == e.versions[u] {
+			srv = append(srv, s.at.Sub(t0))
+		}
+		e.mu.Unlock()
 		i++
 	}
 	b.StopTimer()
 	b.ReportMetric(float64(cpuTime()-cpu0)/float64(time.Millisecond)/float64(max(i, 1)), "cpu-ms/edit")
 	reportPercentile(b, lat, 0.95, "p95-ms")
 	reportPercentile(b, lat, 0.5, "p50-ms")
+	// the same up to the server's publication having been read by the
+	// client (or found unchanged), before the client decodes it
+	reportPercentile(b, srv, 0.95, "server-p95-ms")
+	reportPercentile(b, srv, 0.5, "server-p50-ms")
 	b.ReportMetric(float64(e.publications()-pubs)/float64(i), "publishes/edit")
 	b.ReportMetric(float64(len(e.diagnostics("big.kiln"))), "diags/publish")
 	if err := e.shutdown(); err != nil {

@@ -299,7 +299,14 @@ func (s *server) schedule(d *document, delay time.Duration, propagate bool) {
 				s.finish(d, gen, &snapshot{version: version, seq: seq})
 			}
 		}()
+		// An edit of blank and comment lines only moves positions: its
+		// analysis costs little, so it does not wait for more typing.
+		var res *analysis.Result
+		var err error
 		if delay > 0 {
+			res = ws.Quick(ctx, d.path)
+		}
+		if res == nil && delay > 0 {
 			t := time.NewTimer(delay)
 			select {
 			case <-ctx.Done():
@@ -308,7 +315,9 @@ func (s *server) schedule(d *document, delay time.Duration, propagate bool) {
 			case <-t.C:
 			}
 		}
-		res, err := ws.Analyze(ctx, d.path)
+		if res == nil {
+			res, err = ws.Analyze(ctx, d.path)
+		}
 		if ctx.Err() != nil {
 			return // superseded or shutting down
 		}

@@ -41,11 +41,19 @@ type fakeEditor struct {
 	versions map[protocol.DocumentURI]int32
 	diags    map[protocol.DocumentURI]protocol.PublishDiagnosticsParams
 	settled  map[protocol.DocumentURI]int32 // latest version whose analysis changed no diagnostics
-	pubs     int                            // publications received
-	notify   chan struct{}                  // closed and replaced on every publication or settled analysis
-	liText   string                         // the text liCache indexes
-	liCache  *speciesfile.LineIndex
-	messages []string // window/showMessage texts
+	// settledAt says when the server last settled a version (published, the
+	// publication's bytes read by this client, or found unchanged).
+	settledAt map[protocol.DocumentURI]settledAt
+	pubs      int           // publications received
+	notify    chan struct{} // closed and replaced on every publication or settled analysis
+	liText    string        // the text liCache indexes
+	liCache   *speciesfile.LineIndex
+	messages  []string // window/showMessage texts
+}
+
+type settledAt struct {
+	version int32
+	at      time.Time
 }
 
 type fakeOptions struct {
@@ -66,7 +74,7 @@ func newFakeEditor(t testing.TB, files map[string]string, o fakeOptions) *fakeEd
 		t: t, disk: disk, done: make(chan error, 1),
 		texts: map[protocol.DocumentURI]string{}, versions: map[protocol.DocumentURI]int32{},
 		diags: map[protocol.DocumentURI]protocol.PublishDiagnosticsParams{}, notify: make(chan struct{}),
-		settled: map[protocol.DocumentURI]int32{},
+		settled: map[protocol.DocumentURI]int32{}, settledAt: map[protocol.DocumentURI]settledAt{},
 	}
 	serverSide, clientSide := net.Pipe()
 	loader := func(p string) ([]byte, error) {
@@ -144,11 +152,12 @@ func (e *fakeEditor) handle(ctx context.Context, reply jsonrpc2.Replier, req jso
 // onSettled is the server's test hook: the analysis of version v of u is
 // published (the publication is on its way) or changed nothing.
 func (e *fakeEditor) onSettled(u protocol.DocumentURI, v int32, published bool) {
+	e.mu.Lock()
+	defer e.mu.Unlock()
+	e.settledAt[u] = settledAt{v, time.Now()}
 	if published {
 		return
 	}
-	e.mu.Lock()
-	defer e.mu.Unlock()
 	e.settled[u] = v
 	close(e.notify)
 	e.notify = make(chan struct{})

@@ -133,7 +133,9 @@ func TestCancelRequest(t *testing.T) {
 	// Rename waits for the analysis of the current text (it edits text).
 	e := newFakeEditor(t, map[string]string{"a.kiln": smokeFile}, fakeOptions{debounce: time.Hour})
 	e.open("a.kiln")
-	e.typeAt("a.kiln", 0, "# edit\n") // schedules an analysis an hour away
+	// schedules an analysis an hour away (a new statement: an edit of
+	// comment lines only would be analysed at once, see Workspace.Quick)
+	e.typeAt("a.kiln", 0, "species EDITED C\n")
 	errc := make(chan error, 1)
 	go func() {
 		errc <- e.callErr("textDocument/prepareRename", protocol.TextDocumentPositionParams{TextDocument: textDoc(e, "a.kiln")}, nil)
@@ -228,5 +230,39 @@ func TestRelatedInformation(t *testing.T) {
 	assert.Equal(t, e.uri("d.kiln"), rel.Location.URI)
 	// The first declaration's name: line 0, UTF-16 columns 8–15.
 	assert.Equal(t, protocol.Range{Start: protocol.Position{Line: 0, Character: 8}, End: protocol.Position{Line: 0, Character: 15}}, rel.Location.Range)
+	require.NoError(t, e.shutdown())
+}
+
+func TestCommentEditPublishesAtOnce(t *testing.T) {
+	// A comment line typed between statements only moves positions: it is
+	// analysed without waiting for the debounce (an hour here), and the
+	// diagnostics after it move down a line. Typing inside that comment
+	// then changes no diagnostic: nothing is published.
+	src := smokeFile + "species CH3 [CH3]\nspecies ME [CH3]\nreaction H + XY <=> H2   A=1e13 n=0 Ea=0\n"
+	e := newFakeEditor(t, map[string]string{"a.kiln": src}, fakeOptions{debounce: time.Hour})
+	before := e.open("a.kiln")
+	require.NotEmpty(t, before)
+	at := strings.Index(src, "species CH3")
+	e.typeAt("a.kiln", at, "# a remark\n")
+	after := e.waitDiagnostics("a.kiln")
+	require.Len(t, after, len(before))
+	line := protocol.Position{Line: uint32(strings.Count(src[:at], "\n"))}
+	for i, d := range before {
+		if d.Range.Start.Line >= line.Line {
+			d.Range.Start.Line++
+			d.Range.End.Line++
+			// a message naming a line after the comment names the moved one
+		}
+		require.Equal(t, d.Range, after[i].Range, "%s", d.Message)
+		require.Equal(t, d.Code, after[i].Code)
+	}
+	// the same as a fresh analysis of the new text
+	fresh := newFakeEditor(t, map[string]string{"a.kiln": e.text("a.kiln")}, fakeOptions{})
+	require.Equal(t, diagSummary(fresh.open("a.kiln")), diagSummary(after))
+	require.NoError(t, fresh.shutdown())
+	pubs := e.publications()
+	e.typeAt("a.kiln", at+len("# a"), "nother")
+	require.Equal(t, diagSummary(after), diagSummary(e.waitDiagnostics("a.kiln")))
+	require.Equal(t, pubs, e.publications(), "unchanged diagnostics are not published again")
 	require.NoError(t, e.shutdown())
 }
