@@ -40,9 +40,10 @@ const maxIncludeDupReports = 20
 func (a *analysis) reportSameStructure(path string, sp, first *Species, start int, firstLoc Location) {
 	related := []speciesfile.Related{{File: firstLoc.File, Span: firstLoc.Span, Message: first.Name + " has this structure"}}
 	if path == a.res.Path {
-		a.report(path, speciesfile.Diagnostic{Span: sp.Decl.SMILES.Span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
-			Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, a.where(firstLoc)),
-			Related: related})
+		where := a.where(firstLoc)
+		a.reportNamingLine(path, speciesfile.Diagnostic{Span: sp.Decl.SMILES.Span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
+			Message: fmt.Sprintf("%s has the same structure as %s (%s)", sp.Name, first.Name, where),
+			Related: related}, firstLoc, where)
 		return
 	}
 	inc := a.via[path]
@@ -61,8 +62,9 @@ func (a *analysis) reportSameStructure(path string, sp, first *Species, start in
 	case n > maxIncludeDupReports:
 		return
 	}
-	a.report(a.res.Path, speciesfile.Diagnostic{Span: a.res.File.Abs(inc, inc.Path.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
+	where := a.where(firstLoc)
+	a.reportNamingLine(a.res.Path, speciesfile.Diagnostic{Span: a.res.File.Abs(inc, inc.Path.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateSpecies,
 		Message: fmt.Sprintf("included file %s declares %s with the same structure as %s (%s); rename one to the other",
-			shortPath(path), sp.Name, first.Name, a.where(firstLoc)),
-		Related: append(related, speciesfile.Related{File: path, Span: sp.Decl.Name.Span.At(start), Message: sp.Name + " has the same structure"})})
+			shortPath(path), sp.Name, first.Name, where),
+		Related: append(related, speciesfile.Related{File: path, Span: sp.Decl.Name.Span.At(start), Message: sp.Name + " has the same structure"})}, firstLoc, where)
 }

@@ -72,6 +72,10 @@ type memo struct {
 	old, next *memoTables
 	align     map[string]*alignment
 	changed   map[string]bool // names of the species whose unit was recomputed
+	// changedList holds the names of changed when they are few (a typical
+	// edit): comparing a name with one or two others is cheaper than
+	// hashing it, and every term of every reaction is looked up.
+	changedList []string
 	namesKept bool            // the same species names are declared as in the last analysis (sameNames)
 	// the alignment asked for last (file is called once per statement)
 	lastPath string
@@ -605,7 +609,7 @@ func (m *memo) depsValid(a *analysis, d *speciesfile.Reaction, deps []*speciesUn
 	if len(m.changed) > 0 {
 		for _, ts := range [2][]speciesfile.Term{d.Reactants, d.Products} {
 			for _, t := range ts {
-				if m.changed[t.Name.Text] {
+				if m.isChanged(t.Name.Text) {
 					return a.depsMatch(d, deps)
 				}
 			}
@@ -613,6 +617,22 @@ func (m *memo) depsValid(a *analysis, d *speciesfile.Reaction, deps []*speciesUn
 	}
 	return true
 }
+
+// isChanged reports whether the unit of species name was recomputed.
+func (m *memo) isChanged(name string) bool {
+	if m.changedList != nil {
+		for _, c := range m.changedList {
+			if c == name {
+				return true
+			}
+		}
+		return false
+	}
+	return m.changed[name]
+}
+
+// maxChangedList bounds memo.changedList.
+const maxChangedList = 8
 
 // reaction returns the kept unit of resolved reaction k of file f (at
 // path), or nil.

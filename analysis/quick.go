@@ -6,6 +6,8 @@ import (
 	"maps"
 	"path/filepath"
 	"slices"
+	"strconv"
+	"strings"
 
 	"kiln.dev/kiln/speciesfile"
 )
@@ -40,9 +42,36 @@ import (
 //     diagnostic span (a span ending where the edit starts stays, one
 //     starting where it ends moves; an empty span at either end is
 //     ambiguous and stops the shortcut);
-//   - when the edit adds or removes lines, no diagnostic message names a
-//     line (duplicate declarations and structures, repeated reactions and
-//     range checks do: Result.namesLines).
+//   - a message naming a line of the file (repeated names, structures and
+//     reactions, range checks: reportNamingLine) is renumbered; one naming
+//     a line of another file stops the shortcut when lines move
+//     (Result.namesLines).
+
+// lineName records a diagnostic of the analysed file whose message names
+// the line of offset at as "line N": the number is Message[num:numEnd].
+type lineName struct {
+	start       int    // the diagnostic's Span.Start
+	code, msg   string // its code and message
+	at          int
+	num, numEnd int
+}
+
+// reportNamingLine reports d (see report), whose message names the line of
+// loc, written as where (as a.where writes it), and records where the line
+// number is so that an edit that moves lines can renumber it.
+func (a *analysis) reportNamingLine(file string, d speciesfile.Diagnostic, loc Location, where string) {
+	a.report(file, d)
+	if file != a.res.Path || a.sink != nil {
+		return
+	}
+	k := strings.Index(d.Message, where)
+	if loc.File != a.res.Path || !strings.HasPrefix(where, "line ") || k < 0 {
+		a.res.namesLines = true
+		return
+	}
+	a.res.lineNames = append(a.res.lineNames, lineName{start: d.Span.Start, code: d.Code, msg: d.Message, at: loc.Span.Start,
+		num: k + len("line "), numEnd: k + len(where)})
+}
 
 // Quick returns the analysis of path when its current text differs from the
 // text of its last finished analysis (in an incremental workspace) only by
@@ -118,13 +147,11 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 		}
 		changed = append(changed, i)
 	}
-	if delta != 0 || e.NewLen > 0 {
-		// Lines after the edit move when it adds or removes line breaks.
-		moved := f.Lines.LineCount() != f0.Lines.LineCount() ||
-			f.Lines.Line(e.Old.End+delta) != f0.Lines.Line(e.Old.End)
-		if moved && r0.namesLines {
-			return nil
-		}
+	// Lines after the edit move when it adds or removes line breaks.
+	linesMoved := f.Lines.LineCount() != f0.Lines.LineCount() ||
+		f.Lines.Line(e.Old.End+delta) != f0.Lines.Line(e.Old.End)
+	if linesMoved && r0.namesLines {
+		return nil
 	}
 	// where a span of the old text goes: kept, moved by delta, or unknown
 	place := func(s speciesfile.Span) (speciesfile.Span, bool) {
@@ -157,6 +184,16 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 	}
 	ds := make([]speciesfile.Diagnostic, len(f.Diags), len(r0.Diagnostics))
 	copy(ds, f.Diags)
+	// messages naming lines, by the diagnostic's offset
+	var named map[int][]int
+	var lineNames []lineName
+	if len(r0.lineNames) > 0 {
+		named = make(map[int][]int, len(r0.lineNames))
+		for k, ln := range r0.lineNames {
+			named[ln.start] = append(named[ln.start], k)
+		}
+		lineNames = make([]lineName, 0, len(r0.lineNames))
+	}
 	j := 0
 	for _, d := range r0.Diagnostics {
 		if j < len(pd) && pd[j].Span.Start == d.Span.Start && pd[j].Code == d.Code {
@@ -166,6 +203,26 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 		sp, ok := place(d.Span)
 		if !ok {
 			return nil
+		}
+		if ks := named[d.Span.Start]; len(ks) > 0 {
+			for x, k := range ks {
+				ln := r0.lineNames[k]
+				if ln.code != d.Code || ln.msg != d.Message {
+					continue
+				}
+				at, ok := place(speciesfile.Span{Start: ln.at, End: ln.at + 1})
+				if !ok {
+					return nil
+				}
+				num := strconv.Itoa(f.Lines.Line(at.Start) + 1)
+				ln.msg = ln.msg[:ln.num] + num + ln.msg[ln.numEnd:]
+				ln.numEnd = ln.num + len(num)
+				ln.start, ln.at = sp.Start, at.Start
+				d.Message = ln.msg
+				lineNames = append(lineNames, ln)
+				named[d.Span.Start] = append(ks[:x:x], ks[x+1:]...)
+				break
+			}
 		}
 		d.Span = sp
 		if len(d.Related) > 0 {
@@ -191,7 +248,7 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 		}
 		ds = append(ds, d)
 	}
-	if j != len(pd) || len(ds) != len(r0.Diagnostics) {
+	if j != len(pd) || len(ds) != len(r0.Diagnostics) || len(lineNames) != len(r0.lineNames) {
 		return nil
 	}
 	if len(f.Diags) > 0 {
@@ -223,6 +280,7 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 		Includes:    r0.Includes,
 		order:       r0.order,
 		namesLines:  r0.namesLines,
+		lineNames:   lineNames,
 	}
 	next := &fileMemo{file: f, species: fm.species, rtext: fm.rtext, rx: fm.rx, sps: fm.sps, rxs: fm.rxs}
 	// Values of re-read statements are remade for the new nodes (a value

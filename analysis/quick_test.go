@@ -1,10 +1,12 @@
 package analysis
 
 import (
+	"cmp"
 	"context"
 	"fmt"
 	"io/fs"
 	"math/rand/v2"
+	"slices"
 	"strings"
 	"testing"
 
@@ -117,6 +119,7 @@ func TestMovedMatchesScratch(t *testing.T) {
 						t.Fatalf("step %d: result differs from scratch\n%s", step, firstDifference(gd, wd))
 					}
 					require.Equal(t, want.namesLines, got.namesLines, "step %d", step)
+					require.Equal(t, sortedNames(want.lineNames), sortedNames(got.lineNames), "step %d", step)
 					for _, sp := range got.Species {
 						require.Same(t, got.Files[sp.File].Species[indexOf(got.Files[sp.File].Species, sp.Decl)], sp.Decl)
 						require.Same(t, sp, got.ByName[sp.Name])
@@ -134,6 +137,16 @@ func TestMovedMatchesScratch(t *testing.T) {
 			})
 		}
 	}
+}
+
+// sortedNames returns names in order of offset, code and message (the
+// analysis records them as it reports, movedResult in offset order).
+func sortedNames(names []lineName) []lineName {
+	out := slices.Clone(names)
+	slices.SortFunc(out, func(x, y lineName) int {
+		return cmp.Or(cmp.Compare(x.start, y.start), strings.Compare(x.code, y.code), strings.Compare(x.msg, y.msg))
+	})
+	return out
 }
 
 // TestMovedCommentLine: a comment line typed between statements of a file

@@ -38,6 +38,9 @@ func (a *analysis) reactions() error {
 	}
 	seen := make(map[uint64]int32, n)
 	occs := make([]occurrence, 0, n)
+	if k := len(a.res.File.Reactions); k > 0 && a.res.Reactions == nil {
+		a.res.Reactions = make([]*Reaction, 0, k) // one per reaction of the file
+	}
 	for _, path := range a.order {
 		f := a.res.Files[path]
 		for k, d := range f.Reactions {
@@ -69,14 +72,13 @@ func (a *analysis) reactions() error {
 				if d.Duplicate == nil || first.d.Duplicate == nil {
 					firstEq := first.d.Equation.At(first.start)
 					line := a.res.Files[first.file].Lines.Position(firstEq.Start).Line + 1
-					a.res.namesLines = true
 					where := fmt.Sprintf("line %d", line)
 					if first.file != path {
 						where = fmt.Sprintf("%s:%d", shortPath(first.file), line)
 					}
-					a.report(path, speciesfile.Diagnostic{Span: d.Equation.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateReaction,
+					a.reportNamingLine(path, speciesfile.Diagnostic{Span: d.Equation.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeDuplicateReaction,
 						Message: fmt.Sprintf("this reaction repeats the one at %s; mark both with `duplicate` if both channels are intended", where),
-						Related: []speciesfile.Related{{File: first.file, Span: firstEq, Message: "first occurrence"}}})
+						Related: []speciesfile.Related{{File: first.file, Span: firstEq, Message: "first occurrence"}}}, Location{File: first.file, Span: firstEq}, where)
 				}
 			} else {
 				next := int32(-1)
@@ -190,6 +192,7 @@ func (a *analysis) rangeChecks() {
 	type need struct {
 		tmax float64
 		line int
+		at   int              // where that reaction's keyword is (its line)
 		eq   speciesfile.Span // the equation of that reaction (analysed file)
 	}
 	given := false // nothing to check without a given block
@@ -219,7 +222,7 @@ func (a *analysis) rangeChecks() {
 				}
 				if n, ok := needs[sp]; !ok || tmax > n.tmax {
 					start := a.res.File.ReactionStart(i)
-					needs[sp] = need{tmax, stmtLineAt(a.res.File, r.Decl, start), r.Decl.Equation.At(start)}
+					needs[sp] = need{tmax, stmtLineAt(a.res.File, r.Decl, start), r.Decl.Keyword().Span.At(start).Start, r.Decl.Equation.At(start)}
 				}
 			}
 		}
@@ -237,10 +240,11 @@ func (a *analysis) rangeChecks() {
 		if sp.File != a.res.Path {
 			// The block is in an included file: say it on the reaction
 			// of this file that needs it.
-			where := a.where(Location{File: sp.File, Span: sp.Given.Span.At(start)})
-			a.report(a.res.Path, speciesfile.Diagnostic{Span: n.eq, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+			loc := Location{File: sp.File, Span: sp.Given.Span.At(start)}
+			where := a.where(loc)
+			a.reportNamingLine(a.res.Path, speciesfile.Diagnostic{Span: n.eq, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
 				Message: fmt.Sprintf("%s: its thermo block (%s) covers %g–%g K, but this reaction needs it from 298 K to %g K; values outside the block are extrapolated",
-					sp.Name, where, lo, hi, n.tmax)})
+					sp.Name, where, lo, hi, n.tmax)}, loc, where)
 			continue
 		}
 		span := sp.Given.Span
@@ -249,10 +253,10 @@ func (a *analysis) rangeChecks() {
 		} else if d := sp.Decl.Table; d != nil {
 			span = d.Header.Span
 		}
-		a.res.namesLines = true
-		a.report(sp.File, speciesfile.Diagnostic{Span: span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
-			Message: fmt.Sprintf("%s: the block covers %g–%g K, but the reaction on line %d needs it from 298 K to %g K; values outside the block are extrapolated",
-				sp.Name, lo, hi, n.line, n.tmax)})
+		where := fmt.Sprintf("line %d", n.line)
+		a.reportNamingLine(sp.File, speciesfile.Diagnostic{Span: span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+			Message: fmt.Sprintf("%s: the block covers %g–%g K, but the reaction on %s needs it from 298 K to %g K; values outside the block are extrapolated",
+				sp.Name, lo, hi, where, n.tmax)}, Location{File: a.res.Path, Span: speciesfile.Span{Start: n.at, End: n.at}}, where)
 	}
 }
 

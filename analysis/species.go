@@ -66,9 +66,11 @@ func (a *analysis) species() error {
 			if first, dup := a.res.ByName[name]; dup {
 				// An error: a simulator reading the file may take either
 				// declaration.
-				a.report(path, speciesfile.Diagnostic{Span: nameSpan, Severity: speciesfile.SeverityError, Code: speciesfile.CodeDuplicateSpecies,
-					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", name, a.where(a.res.SpeciesLoc(first))),
-					Related: []speciesfile.Related{{File: first.File, Span: a.res.SpeciesLoc(first).Span, Message: "first declaration of " + name}}})
+				loc := a.res.SpeciesLoc(first)
+				where := a.where(loc)
+				a.reportNamingLine(path, speciesfile.Diagnostic{Span: nameSpan, Severity: speciesfile.SeverityError, Code: speciesfile.CodeDuplicateSpecies,
+					Message: fmt.Sprintf("species %s is already declared (%s); a name may be declared once (kiln ignores this declaration, other programs may not)", name, where),
+					Related: []speciesfile.Related{{File: first.File, Span: loc.Span, Message: "first declaration of " + name}}}, loc, where)
 				continue
 			}
 			u := a.memo.species(path, f, k)
@@ -94,6 +96,12 @@ func (a *analysis) species() error {
 		a.memo.changed = make(map[string]bool, len(todo))
 		for _, k := range todo {
 			a.memo.changed[items[k].sp.Name] = true
+		}
+		if len(a.memo.changed) <= maxChangedList {
+			a.memo.changedList = make([]string, 0, len(a.memo.changed))
+			for name := range a.memo.changed {
+				a.memo.changedList = append(a.memo.changedList, name)
+			}
 		}
 		a.memo.namesKept = a.memo.sameNames(a.order, a.res.Files)
 	}
@@ -399,7 +407,6 @@ func (a *analysis) where(l Location) string {
 		return l.File
 	}
 	line := f.Lines.Position(l.Span.Start).Line + 1
-	a.res.namesLines = true
 	if l.File == a.res.Path {
 		return fmt.Sprintf("line %d", line)
 	}

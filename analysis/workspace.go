@@ -53,10 +53,13 @@ type Result struct {
 	Includes []ResolvedInclude
 
 	order []string // files in resolution order
-	// namesLines: a diagnostic message names a line (of a statement, such
-	// as the first declaration of a repeated name), so the diagnostics
-	// change when lines are added or removed before it. Set from the
-	// analysis's serial passes by every message that names a line.
+	// lineNames are the diagnostics whose message names a line of the
+	// analysed file (such as the first declaration of a repeated name),
+	// which an edit adding or removing lines renumbers (movedResult);
+	// namesLines is set when a message names a line some other way (of
+	// another file). Both are written by reportNamingLine only, from the
+	// serial passes.
+	lineNames  []lineName
 	namesLines bool
 	usesOnce   sync.Once
 	uses       map[string][]Location

@@ -106,7 +106,18 @@ func (s *server) location(l analysis.Location, snaps ...*snapshot) (protocol.Loc
 // toDiagnostics converts the diagnostics of r's file that keep accepts (all
 // when keep is nil).
 func (s *server) toDiagnostics(r *analysis.Result, keep func(speciesfile.Diagnostic) bool) []protocol.Diagnostic {
-	out := make([]protocol.Diagnostic, 0, len(r.Diagnostics))
+	n := len(r.Diagnostics)
+	if keep != nil {
+		// sized exactly: most of a large file's diagnostics may be
+		// estimate notes left out
+		n = 0
+		for _, d := range r.Diagnostics {
+			if keep(d) {
+				n++
+			}
+		}
+	}
+	out := make([]protocol.Diagnostic, 0, n)
 	for _, d := range r.Diagnostics {
 		if keep == nil || keep(d) {
 			out = append(out, s.toDiagnostic(r, d))

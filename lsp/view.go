@@ -187,6 +187,9 @@ func (s *server) noteChanges(d *document, prev, snap *snapshot) {
 		prev.result.Settings != snap.result.Settings {
 		return
 	}
+	if ps, ss := prev.result.Species, snap.result.Species; len(ps) == len(ss) && len(ps) > 0 && &ps[0] == &ss[0] {
+		return // the same values (an edit of comment lines): nothing changed
+	}
 	d.publishMu.Lock()
 	defer d.publishMu.Unlock()
 	for _, sp := range snap.result.Species {
