@@ -76,7 +76,7 @@ type memo struct {
 	// edit): comparing a name with one or two others is cheaper than
 	// hashing it, and every term of every reaction is looked up.
 	changedList []string
-	namesKept bool            // the same species names are declared as in the last analysis (sameNames)
+	namesKept   bool // the same species names are declared as in the last analysis (sameNames)
 	// the alignment asked for last (file is called once per statement)
 	lastPath string
 	lastAl   *alignment
