@@ -29,15 +29,12 @@ func (a *analysis) reactions() error {
 	// First occurrences by duplicate key: the map is keyed by the key's
 	// hash (made once per reaction text unit) and chains entries of
 	// different keys sharing a hash.
-	type occurrence struct {
-		key   string
-		d     *speciesfile.Reaction
-		start int // where d starts in file
-		file  string
-		next  int32 // index of the next occurrence with the same hash, -1 for none
-	}
-	seen := make(map[uint64]int32, n)
-	occs := make([]occurrence, 0, n)
+	type occurrence = dupOccurrence
+	sc := a.w.scratch()
+	defer a.w.release(sc)
+	seen := sc.seen
+	occs := slices.Grow(sc.occs[:0], n)
+	defer func() { sc.occs = occs }()
 	if k := len(a.res.File.Reactions); k > 0 && a.res.Reactions == nil {
 		a.res.Reactions = make([]*Reaction, 0, k) // one per reaction of the file
 	}

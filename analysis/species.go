@@ -36,19 +36,11 @@ func (a *analysis) species() error {
 	a.res.Species = make([]*Species, 0, nSpecies)
 	a.spStart = make([]int, 0, nSpecies)
 
-	type item struct {
-		path string
-		f    *speciesfile.File
-		k    int // index in f.Species
-		sp   *Species
-		u    *speciesUnit
-		// reused: sp is the last analysis's value for the same unit
-		reused bool
-		// diags of the species' rules when there is no memo (no unit is
-		// made: nothing would reuse it).
-		diags []speciesfile.Diagnostic
-	}
-	items := make([]item, 0, nSpecies)
+	type item = speciesItem
+	sc := a.w.scratch()
+	defer a.w.release(sc)
+	items := slices.Grow(sc.items[:0], nSpecies)
+	defer func() { sc.items = items }()
 	var todo []int
 	for _, path := range a.order {
 		f := a.res.Files[path]
@@ -138,7 +130,7 @@ func (a *analysis) species() error {
 		}
 	}
 	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
-	byStructure := make(map[uint64][]int32, len(items))
+	byStructure := sc.byStructure
 	spAt := func(i int32) *Species { return items[i].sp }
 	for i, it := range items {
 		sp := it.sp

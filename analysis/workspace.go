@@ -28,6 +28,7 @@ type Workspace struct {
 	memos       map[string]*memoTables       // by analysed path: units of its last finished analysis
 	results     map[string]*Result           // by analysed path: its last finished analysis (with memos)
 	moved       int                          // results made by movedResult (read by tests)
+	scratches   sync.Pool                    // of *passScratch
 	parses      map[string]*speciesfile.File // by path: the latest parse, read again incrementally
 }
 
@@ -175,4 +176,57 @@ func (w *Workspace) read(path string) ([]byte, error) {
 // It returns an error only when path itself cannot be read or ctx is done.
 func (w *Workspace) Analyze(ctx context.Context, path string) (*Result, error) {
 	return w.analyze(ctx, path)
+}
+
+// passScratch holds the temporary tables of the species and reaction passes
+// of one analysis. They are recycled between analyses (each one takes its
+// own, emptied) so that an edit of a large file does not allocate them
+// again: garbage is what costs an edit most.
+type passScratch struct {
+	items       []speciesItem
+	byStructure map[uint64][]int32
+	seen        map[uint64]int32
+	occs        []dupOccurrence
+}
+
+// speciesItem is a species declaration in the species pass.
+type speciesItem struct {
+	path string
+	f    *speciesfile.File
+	k    int // index in f.Species
+	sp   *Species
+	u    *speciesUnit
+	// reused: sp is the last analysis's value for the same unit
+	reused bool
+	// diags of the species' rules when there is no memo (no unit is
+	// made: nothing would reuse it).
+	diags []speciesfile.Diagnostic
+}
+
+// dupOccurrence is the first occurrence of a reaction's duplicate key in the
+// reaction pass.
+type dupOccurrence struct {
+	key   string
+	d     *speciesfile.Reaction
+	start int // where d starts in file
+	file  string
+	next  int32 // index of the next occurrence with the same hash, -1 for none
+}
+
+// scratch returns empty tables for a pass.
+func (w *Workspace) scratch() *passScratch {
+	if sc, ok := w.scratches.Get().(*passScratch); ok {
+		return sc
+	}
+	return &passScratch{byStructure: map[uint64][]int32{}, seen: map[uint64]int32{}}
+}
+
+// release empties sc (it holds no value of the analysis any more) and
+// keeps it for the next analysis.
+func (w *Workspace) release(sc *passScratch) {
+	clear(sc.items[:cap(sc.items)])
+	clear(sc.occs[:cap(sc.occs)])
+	clear(sc.byStructure)
+	clear(sc.seen)
+	w.scratches.Put(sc)
 }

@@ -252,7 +252,7 @@ func BenchmarkServerRSS20k(b *testing.B) {
 				if c.limit != "" {
 					args = append(args, "--memory-limit", c.limit)
 				}
-				serveAndEdit(b, bin, args, dir, file)
+				serveAndEdit(b, bin, args, dir, file, 20, smilesEdit)
 			}
 		})
 	}
@@ -273,9 +273,41 @@ func buildKiln(b *testing.B) string {
 	return bin
 }
 
-// serveAndEdit runs one server session: open file, 20 awaited edits, then
+// BenchmarkServerCommentEdit20k measures the real server (as
+// BenchmarkServerRSS20k) on 50 awaited edits that each type a comment line
+// between two statements in the middle of the file: the server's CPU time
+// per edit (no client work is counted) and the wall time per edit from the
+// change to the answer of a request that waits for its analysis.
+func BenchmarkServerCommentEdit20k(b *testing.B) {
+	if runtime.GOOS != "linux" {
+		b.Skip("reads /proc")
+	}
+	bin := buildKiln(b)
+	dir := b.TempDir()
+	file := filepath.Join(dir, "big.kiln")
+	if err := os.WriteFile(file, []byte(benchText()), 0o644); err != nil {
+		b.Fatal(err)
+	}
+	for b.Loop() {
+		serveAndEdit(b, bin, []string{"serve"}, dir, file, 50, func(text []byte, k int) (int, int, string) {
+			at := bytes.Index(text, []byte("\nreaction M5000 + ")) + 1
+			return at, at, "# remark " + strconv.Itoa(k) + "\n"
+		})
+	}
+}
+
+// smilesEdit replaces the structure of species M(1+37k): the edits of
+// BenchmarkServerRSS20k.
+func smilesEdit(text []byte, k int) (start, end int, repl string) {
+	decl := fmt.Sprintf("\nspecies M%d ", 1+k*37)
+	at := bytes.Index(text, []byte(decl)) + len(decl)
+	return at, at + bytes.IndexByte(text[at:], '\n'), "CCCC" + strings.Repeat("C", k%9) + "O" + strings.Repeat("C", k%5)
+}
+
+// serveAndEdit runs one server session: open file, n awaited edits (edit
+// gives the bytes of the current text to replace, and by what), then
 // the measurements, shutdown and exit.
-func serveAndEdit(b *testing.B, bin string, args []string, dir, file string) {
+func serveAndEdit(b *testing.B, bin string, args []string, dir, file string, n int, edit func(text []byte, k int) (start, end int, repl string)) {
 	b.Helper()
 	cmd := exec.Command(bin, args...)
 	cmd.Env = os.Environ()
@@ -331,30 +363,36 @@ func serveAndEdit(b *testing.B, bin string, args []string, dir, file string) {
 	await()
 	open := time.Since(t0)
 	cpu0 := childCPU(cmd.Process.Pid)
-	for k := range 20 {
-		decl := fmt.Sprintf("\nspecies M%d ", 1+k*37)
-		at := bytes.Index(text, []byte(decl)) + len(decl)
-		end := at + bytes.IndexByte(text[at:], '\n')
+	t1 := time.Now()
+	var lat []time.Duration
+	for k := range n {
+		at, end, repl := edit(text, k)
 		ps, pe := lines.Position(at), lines.Position(end)
 		c := contentChange{
 			Range: &protocol.Range{Start: protocol.Position{Line: uint32(ps.Line), Character: uint32(ps.UTF16)},
 				End: protocol.Position{Line: uint32(pe.Line), Character: uint32(pe.UTF16)}},
-			Text: "CCCC" + strings.Repeat("C", k%9) + "O" + strings.Repeat("C", k%5),
+			Text: repl,
 		}
+		t0 := time.Now()
 		text, lines, _ = applyChange(text, lines, c)
 		notify("textDocument/didChange", didChangeParams{
 			TextDocument:   protocol.VersionedTextDocumentIdentifier{TextDocumentIdentifier: protocol.TextDocumentIdentifier{URI: u}, Version: int32(k + 2)},
 			ContentChanges: []contentChange{c},
 		})
 		await()
+		lat = append(lat, time.Since(t0))
 	}
 	editCPU := childCPU(cmd.Process.Pid) - cpu0
+	editWall := time.Since(t1)
 	b.StopTimer()
 	hwm, rss := procRSSOf(fmt.Sprintf("/proc/%d/status", cmd.Process.Pid))
 	b.ReportMetric(hwm, "peak-RSS-MiB")
 	b.ReportMetric(rss, "RSS-MiB")
 	b.ReportMetric(float64(open)/float64(time.Millisecond), "open-ms")
-	b.ReportMetric(float64(editCPU)/float64(time.Millisecond)/20, "server-cpu-ms/edit")
+	b.ReportMetric(float64(editCPU)/float64(time.Millisecond)/float64(n), "server-cpu-ms/edit")
+	b.ReportMetric(float64(editWall)/float64(time.Millisecond)/float64(n), "ms/edit")
+	reportPercentile(b, lat, 0.5, "p50-ms")
+	reportPercentile(b, lat, 0.95, "p95-ms")
 	call("shutdown", nil)
 	notify("exit", nil)
 	if err := cmd.Wait(); err != nil {
