@@ -118,9 +118,22 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 	delta := e.Delta()
 	newEnd := e.Old.Start + e.NewLen
 	// The statements: the same nodes, or re-read ones of the same body.
-	var changed []int // indexes in Stmts of re-read nodes
+	if len(r0.Reactions) != len(f0.Reactions) {
+		return nil // (one value per reaction statement)
+	}
+	// re-read nodes, old → new, and the reactions' by index
+	var spNew map[*speciesfile.Species]*speciesfile.Species
+	var spIdx []int // indexes in f.Species of re-read species
+	var rxIdx []int // indexes in f.Reactions of re-read reactions
+	nsp, nrx := 0, 0
 	for i, st := range f.Stmts {
 		o := f0.Stmts[i]
+		switch st.(type) {
+		case *speciesfile.Species:
+			nsp++
+		case *speciesfile.Reaction:
+			nrx++
+		}
 		if st == o {
 			continue
 		}
@@ -145,7 +158,16 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 			(e.Old.End > ob.Start && e.Old.Start < ob.End) || (newEnd > nb.Start && e.Old.Start < nb.End) {
 			return nil
 		}
-		changed = append(changed, i)
+		switch d := st.(type) {
+		case *speciesfile.Species:
+			if spNew == nil {
+				spNew = map[*speciesfile.Species]*speciesfile.Species{}
+			}
+			spNew[o.(*speciesfile.Species)] = d
+			spIdx = append(spIdx, nsp-1)
+		case *speciesfile.Reaction:
+			rxIdx = append(rxIdx, nrx-1)
+		}
 	}
 	// Lines after the edit move when it adds or removes line breaks.
 	linesMoved := f.Lines.LineCount() != f0.Lines.LineCount() ||
@@ -284,54 +306,53 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 	}
 	next := &fileMemo{file: f, species: fm.species, rtext: fm.rtext, rx: fm.rx, sps: fm.sps, rxs: fm.rxs}
 	// Values of re-read statements are remade for the new nodes (a value
-	// names its syntax node); everything else is shared.
-	for _, i := range changed {
-		switch d := f.Stmts[i].(type) {
-		case *speciesfile.Species:
-			od := f0.Stmts[i].(*speciesfile.Species)
-			j := slices.IndexFunc(res.Species, func(sp *Species) bool { return sp.Decl == od })
-			if j < 0 {
-				continue // a repeated or invalid name: no value
+	// names its syntax node); everything else is shared. (One pass each:
+	// an edit in a file's first bytes reads the whole file again.)
+	if len(spNew) > 0 {
+		res.Species = slices.Clone(r0.Species)
+		res.ByName = maps.Clone(r0.ByName)
+		made := make(map[*Species]*Species, len(spNew))
+		for j, old := range res.Species {
+			d, ok := spNew[old.Decl]
+			if !ok {
+				continue
 			}
-			old := res.Species[j]
 			sp := *old
 			sp.Decl = d
 			if g := old.Given; g != nil {
 				c := *g
-				c.Span = moveRel(g.Span, d.Body().From-od.Body().From)
+				c.Span = moveRel(g.Span, d.Body().From-old.Decl.Body().From)
 				sp.Given = &c
 			}
-			if sameBacking(res.Species, r0.Species) {
-				res.Species = slices.Clone(r0.Species)
-				res.ByName = maps.Clone(r0.ByName)
-			}
 			res.Species[j] = &sp
+			made[old] = &sp
 			if res.ByName[sp.Name] == old {
 				res.ByName[sp.Name] = &sp
 			}
-			if x := slices.Index(f.Species, d); x >= 0 && x < len(next.sps) && next.sps[x] == old {
-				if sameBacking(next.sps, fm.sps) {
-					next.sps = slices.Clone(fm.sps)
+		}
+		next.sps = slices.Clone(fm.sps)
+		for _, k := range spIdx {
+			if k < len(next.sps) && next.sps[k] != nil {
+				nv := made[next.sps[k]]
+				if nv == nil || nv.Decl != f.Species[k] {
+					return nil
 				}
-				next.sps[x] = &sp
+				next.sps[k] = nv
 			}
-		case *speciesfile.Reaction:
-			od := f0.Stmts[i].(*speciesfile.Reaction)
-			x := slices.Index(f.Reactions, d)
-			if x < 0 || x >= len(res.Reactions) || res.Reactions[x].Decl != od {
+		}
+	}
+	if len(rxIdx) > 0 {
+		res.Reactions = slices.Clone(r0.Reactions)
+		next.rxs = slices.Clone(fm.rxs)
+		for _, x := range rxIdx {
+			old := res.Reactions[x]
+			if old.Decl != f0.Reactions[x] {
 				return nil
 			}
-			old := res.Reactions[x]
 			r := *old
-			r.Decl = d
-			if sameBacking(res.Reactions, r0.Reactions) {
-				res.Reactions = slices.Clone(r0.Reactions)
-			}
+			r.Decl = f.Reactions[x]
 			res.Reactions[x] = &r
 			if x < len(next.rxs) && next.rxs[x] == old {
-				if sameBacking(next.rxs, fm.rxs) {
-					next.rxs = slices.Clone(fm.rxs)
-				}
 				next.rxs[x] = &r
 			}
 		}
@@ -344,10 +365,4 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 		w.memos[path] = &memoTables{key: t0.key, files: map[string]*fileMemo{path: next}}
 	}
 	return res
-}
-
-// sameBacking reports whether two slices share their first element (one is
-// still the other, not yet copied).
-func sameBacking[T any](a, b []T) bool {
-	return len(a) > 0 && len(b) > 0 && &a[0] == &b[0]
 }
