@@ -28,16 +28,17 @@ import (
 // The shortcut is taken only where that is certainly the analysis from
 // scratch; otherwise the full (incremental) analysis runs:
 //
-//   - the same settings, and the file includes nothing (included texts are
-//     not compared);
+//   - the same settings, and the files the file includes (read again)
+//     have the texts read then; every include that named a file then named
+//     one that could be read (includesSame);
 //   - the reader reports the same problems at the same places (moved) in
 //     both texts: errors decide which statements are data; its messages,
 //     which may name lines, are taken from the new parse;
 //   - the same statements in the same order: each one the same syntax node
-//     (the reader kept it) or a species, reaction or trivia node of the same
-//     body text (the reader read it again because the edit touched its
-//     leading comment lines), and the same energy unit, newline and byte
-//     order mark;
+//     (the reader kept it) or a node of the same kind and body text (the
+//     reader read it again because the edit touched its leading comment
+//     lines; units statements and broken ones excepted), and the same energy
+//     unit, newline and byte order mark;
 //   - the edited bytes lie outside every statement body and every
 //     diagnostic span (a span ending where the edit starts stays, one
 //     starting where it ends moves; an empty span at either end is
@@ -103,15 +104,18 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 	w.mu.Lock()
 	r0, t0 := w.results[path], w.memos[path]
 	w.mu.Unlock()
-	if r0 == nil || t0 == nil || r0.Settings != set || len(r0.Files) != 1 || len(t0.files) != 1 {
+	if r0 == nil || t0 == nil || r0.Settings != set {
 		return nil
 	}
 	f0 := r0.File
 	fm := t0.files[path]
 	if fm == nil || fm.file != f0 || f0 == nil || len(f.Diags) != len(f0.Diags) ||
-		len(f.Stmts) != len(f0.Stmts) || len(f.Includes) > 0 || len(f0.Includes) > 0 ||
+		len(f.Stmts) != len(f0.Stmts) || len(f.Includes) != len(f0.Includes) ||
 		f.EnergyUnit != f0.EnergyUnit || f.EntropyUnit != f0.EntropyUnit || f.Newline != f0.Newline || f.BOM != f0.BOM ||
 		len(f.Species) != len(f0.Species) || len(f.Reactions) != len(f0.Reactions) || len(f.Groups) != len(f0.Groups) {
+		return nil
+	}
+	if (len(r0.Files) > 1 || len(f0.Includes) > 0) && !w.includesSame(r0, path) {
 		return nil
 	}
 	e := speciesfile.DiffEdit(f0.Src, f.Src)
@@ -123,8 +127,9 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 	}
 	// re-read nodes, old → new, and the reactions' by index
 	var spNew map[*speciesfile.Species]*speciesfile.Species
-	var spIdx []int // indexes in f.Species of re-read species
-	var rxIdx []int // indexes in f.Reactions of re-read reactions
+	var spIdx []int                                  // indexes in f.Species of re-read species
+	var rxIdx []int                                  // indexes in f.Reactions of re-read reactions
+	var reread map[speciesfile.Stmt]speciesfile.Stmt // re-read include and group statements, old → new
 	nsp, nrx := 0, 0
 	for i, st := range f.Stmts {
 		o := f0.Stmts[i]
@@ -150,8 +155,16 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 			if _, ok := o.(*speciesfile.Trivia); !ok {
 				return nil
 			}
+		case *speciesfile.Include:
+			if _, ok := o.(*speciesfile.Include); !ok {
+				return nil
+			}
+		case *speciesfile.Group:
+			if _, ok := o.(*speciesfile.Group); !ok {
+				return nil
+			}
 		default:
-			return nil // units, include, group statements and broken ones: not shortcut
+			return nil // units statements and broken ones: not shortcut
 		}
 		ob, nb := o.Body().At(f0.Starts[i]), st.Body().At(f.Starts[i])
 		if !bytes.Equal(bodyText(f0, o, f0.Starts[i]), bodyText(f, st, f.Starts[i])) ||
@@ -167,6 +180,11 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 			spIdx = append(spIdx, nsp-1)
 		case *speciesfile.Reaction:
 			rxIdx = append(rxIdx, nrx-1)
+		case *speciesfile.Include, *speciesfile.Group:
+			if reread == nil {
+				reread = map[speciesfile.Stmt]speciesfile.Stmt{}
+			}
+			reread[o] = st
 		}
 	}
 	// Lines after the edit move when it adds or removes line breaks.
@@ -251,7 +269,7 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 			var rel []speciesfile.Related
 			for j, r := range d.Related {
 				if r.File != path {
-					return nil // (no other file is in scope)
+					continue // another file, read again unchanged
 				}
 				sp, ok := place(r.Span)
 				if !ok {
@@ -277,15 +295,22 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 		sortDiagnostics(ds)
 	}
 	groups := r0.Groups
-	if delta != 0 && len(groups) > 0 {
+	if (delta != 0 || len(reread) > 0) && len(groups) > 0 {
 		groups = make([]*Group, len(r0.Groups))
 		for k, g := range r0.Groups {
+			if g.Loc.File != path {
+				groups[k] = g
+				continue
+			}
 			sp, ok := place(g.Loc.Span)
 			if !ok {
 				return nil
 			}
 			c := *g
 			c.Loc.Span = sp
+			if d, ok := reread[g.Decl]; ok {
+				c.Decl = d.(*speciesfile.Group)
+			}
 			groups[k] = &c
 		}
 	}
@@ -293,7 +318,7 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 		Path:        path,
 		Settings:    set,
 		File:        f,
-		Files:       map[string]*speciesfile.File{path: f},
+		Files:       maps.Clone(r0.Files),
 		Diagnostics: ds,
 		Species:     r0.Species,
 		ByName:      r0.ByName,
@@ -303,6 +328,15 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 		order:       r0.order,
 		namesLines:  r0.namesLines,
 		lineNames:   lineNames,
+	}
+	res.Files[path] = f
+	if len(reread) > 0 && len(r0.Includes) > 0 {
+		res.Includes = slices.Clone(r0.Includes)
+		for k, ri := range res.Includes {
+			if d, ok := reread[ri.Decl]; ok {
+				res.Includes[k].Decl = d.(*speciesfile.Include)
+			}
+		}
 	}
 	next := &fileMemo{file: f, species: fm.species, rtext: fm.rtext, rx: fm.rx, sps: fm.sps, rxs: fm.rxs}
 	// Values of re-read statements are remade for the new nodes (a value
@@ -362,7 +396,49 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 	w.moved++
 	if w.incremental && w.results[path] == r0 && w.memos[path] == t0 {
 		w.results[path] = res
-		w.memos[path] = &memoTables{key: t0.key, files: map[string]*fileMemo{path: next}}
+		files := maps.Clone(t0.files)
+		files[path] = next
+		w.memos[path] = &memoTables{key: t0.key, files: files}
 	}
 	return res
+}
+
+// includesSame reports whether the files r0 (the analysis of path) read
+// besides path still have the texts it read, and whether every include
+// statement in scope that resolved to a file then resolved to one that
+// could be read (a file that could not be read then may be readable now).
+// The include statements of path are those of r0 (movedResult checks
+// that they are the same nodes). Includes are walked as analysis.includes
+// walks them, so that each is resolved with the same chain of files.
+func (w *Workspace) includesSame(r0 *Result, path string) bool {
+	for p, g := range r0.Files {
+		if p == path {
+			continue
+		}
+		text, err := w.read(p)
+		if err != nil || !bytes.Equal(text, g.Src) {
+			return false
+		}
+	}
+	a := &analysis{w: w, res: r0}
+	seen := map[string]bool{path: true}
+	var walk func(p string, g *speciesfile.File, stack []string, depth int) bool
+	walk = func(p string, g *speciesfile.File, stack []string, depth int) bool {
+		for _, inc := range g.Includes {
+			target, msg := a.resolveInclude(p, inc, stack, depth)
+			if msg != "" || seen[target] {
+				continue
+			}
+			h, ok := r0.Files[target]
+			if !ok {
+				return false
+			}
+			seen[target] = true
+			if !walk(target, h, append(stack[:len(stack):len(stack)], target), depth+1) {
+				return false
+			}
+		}
+		return true
+	}
+	return walk(path, r0.File, []string{path}, 0) && len(seen) == len(r0.Files)
 }

@@ -8,6 +8,7 @@ import (
 	"math/rand/v2"
 	"slices"
 	"strings"
+	"sync"
 	"testing"
 
 	"github.com/stretchr/testify/require"
@@ -77,18 +78,37 @@ func TestMovedMatchesScratch(t *testing.T) {
 		"    low  2.35677352e+00 8.98459677e-03 -7.12356269e-06 2.45919022e-09 -1.43699548e-13 -4.83719697e+04 9.90105222e+00\n" +
 		"    high 3.85746029e+00 4.41437026e-03 -2.21481404e-06 5.23490188e-10 -4.72084164e-14 -4.87591660e+04 2.27163806e+00\n" +
 		"\n" + gen + "reaction POLY + H <=> M1 + OH   A=1e13 n=0 Ea=5\n"
-	load := func(p string) ([]byte, error) { return nil, &fs.PathError{Op: "open", Path: p, Err: fs.ErrNotExist} }
-	for name, base := range map[string]string{"dups": withDups, "clean": clean} {
+	// and with an included file, edited now and then
+	withInclude := incrementalBase + gen
+	for name, base := range map[string]string{"dups": withDups, "clean": clean, "include": withInclude} {
 		for seed := uint64(1); seed <= 4; seed++ {
 			t.Run(fmt.Sprint(name, "/seed", seed), func(t *testing.T) {
 				rng := rand.New(rand.NewPCG(seed, 7))
 				text := base
+				shared := incrementalShared
+				var mu sync.Mutex
+				load := func(p string) ([]byte, error) {
+					mu.Lock()
+					defer mu.Unlock()
+					if p == "/w/shared.kiln" {
+						return []byte(shared), nil
+					}
+					return nil, &fs.PathError{Op: "open", Path: p, Err: fs.ErrNotExist}
+				}
 				inc := NewWorkspace("/w", load, DefaultSettings())
 				inc.SetIncremental(true)
 				var prev *Result
 				prevDigest := ""
 				for step := range 60 {
-					if step > 0 {
+					if step > 0 && name == "include" && rng.IntN(8) == 0 {
+						mu.Lock()
+						if rng.IntN(2) == 0 {
+							shared = triviaEdit(rng, shared, step)
+						} else {
+							shared = randomEdit(rng, shared, step)
+						}
+						mu.Unlock()
+					} else if step > 0 {
 						if rng.IntN(8) == 0 {
 							text = randomEdit(rng, text, step)
 						} else {
@@ -187,4 +207,47 @@ func TestMovedCommentLine(t *testing.T) {
 	k := strings.Index(text, "species M3 ") + len("species M3 ")
 	ws.SetOverlay("m.kiln", []byte(text[:k]+"CCCCO\n"+text[k+strings.IndexByte(text[k:], '\n')+1:]))
 	require.Nil(t, ws.Quick(context.Background(), "m.kiln"))
+}
+
+// TestMovedIncludeAppears: a file that could not be read when the last
+// analysis ran may be readable now; a comment edit then needs the full
+// analysis (the included species are declared now).
+func TestMovedIncludeAppears(t *testing.T) {
+	files := map[string]string{}
+	var mu sync.Mutex
+	load := func(p string) ([]byte, error) {
+		mu.Lock()
+		defer mu.Unlock()
+		if s, ok := files[p]; ok {
+			return []byte(s), nil
+		}
+		return nil, &fs.PathError{Op: "open", Path: p, Err: fs.ErrNotExist}
+	}
+	ws := NewWorkspace("/w", load, DefaultSettings())
+	ws.SetIncremental(true)
+	main := "include extra.kiln\n# notes\nreaction H + H <=> H2   A=1e13 n=0 Ea=0\n"
+	ws.SetOverlay("/w/main.kiln", []byte(main))
+	before, err := ws.Analyze(context.Background(), "/w/main.kiln")
+	require.NoError(t, err)
+	require.Contains(t, diagCodes(before), "undeclared-species")
+	mu.Lock()
+	files["/w/extra.kiln"] = "species H [H]\nspecies H2 [H][H]\n"
+	mu.Unlock()
+	main = strings.Replace(main, "# notes", "# more notes\n", 1)
+	ws.SetOverlay("/w/main.kiln", []byte(main))
+	require.Nil(t, ws.Quick(context.Background(), "/w/main.kiln"))
+	after, err := ws.Analyze(context.Background(), "/w/main.kiln")
+	require.NoError(t, err)
+	require.NotContains(t, diagCodes(after), "undeclared-species")
+	// now a comment edit with the include unchanged is a move
+	ws.SetOverlay("/w/main.kiln", []byte(strings.Replace(main, "# more", "# many more", 1)))
+	require.NotNil(t, ws.Quick(context.Background(), "/w/main.kiln"))
+}
+
+func diagCodes(r *Result) []string {
+	var out []string
+	for _, d := range r.Diagnostics {
+		out = append(out, d.Code)
+	}
+	return out
 }
