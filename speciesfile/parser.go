@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"cmp"
 	"fmt"
+	"math"
 	"slices"
 	"strconv"
 	"strings"
@@ -1666,7 +1667,24 @@ func (p *parser) number(tok Token, kind unitKind) (Number, bool) {
 		return Number{}, false
 	}
 	num.SI = v * factor
+	if math.IsInf(num.SI, 0) || math.IsNaN(num.SI) {
+		// 1e306 kcal/mol is a float64, its value in J/mol is not: a
+		// number kiln cannot compute with is refused here, where its
+		// token is, and never reaches the analysis as infinity.
+		p.errAt(tok.Span, "number out of range: %q overflows when converted to %s", s, siNames[kind])
+		return Number{}, false
+	}
 	return num, true
+}
+
+// siNames names the SI unit each kind of number is converted to.
+var siNames = [...]string{
+	kDimless:  "a plain number",
+	kEnergy:   "J/mol",
+	kEa:       "J/mol",
+	kEntropy:  "J/(mol K)",
+	kTemp:     "K",
+	kPressure: "Pa",
 }
 
 // ParseFormula parses an element formula such as "C10H8" or "CH3O" into
