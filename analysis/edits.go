@@ -170,7 +170,7 @@ func (r *Result) FillPlan() ([]Edit, []Skip) {
 func skipReason(sp *Species) string {
 	switch {
 	case sp.brokenBlock:
-		return "its thermo block has a syntax error; fix or delete the block"
+		return "its thermo block has " + sp.blockFault() + "; fix or delete the block"
 	case sp.SMILESError != nil:
 		return "bad SMILES: " + smilesReason(sp.SMILESError)
 	case sp.Decl.SMILES == nil:

@@ -424,7 +424,7 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 				flagged[f] = true
 			}
 			cell := func(v, scale float64, key string) string {
-				c := fmt.Sprintf("%+.2f", v/scale)
+				c := analysis.FormatSigned(v/scale, 2)
 				if flagged[key] {
 					c += "*"
 				} else {

@@ -214,7 +214,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		return
 	}
 	other := analysis.Units{KJ: !u.KJ}
-	f2 := func(v float64) string { return strconv.FormatFloat(v, 'f', 2, 64) }
+	f2 := func(v float64) string { return analysis.FormatFixed(v, 2) }
 	fmt.Fprintf(w, "  formula %s, molar mass %.3f g/mol\n", *r.Formula, *r.MolarMass)
 	if g := est.Group; g != nil {
 		var rows [][]string
