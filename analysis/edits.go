@@ -172,6 +172,9 @@ func skipReason(sp *Species) string {
 	case sp.brokenBlock:
 		return "its thermo block has " + sp.blockFault() + "; fix or delete the block"
 	case sp.SMILESError != nil:
+		if sp.SMILESError == ErrStructurePending {
+			return ErrStructurePending.Error()
+		}
 		return "bad SMILES: " + smilesReason(sp.SMILESError)
 	case sp.Decl.SMILES == nil:
 		return "no structure (SMILES) to estimate from; add a nasa7 or thermo-table block"

@@ -52,6 +52,9 @@ func TestSyntaxErrors(t *testing.T) {
 		{"species X C\n  low 1 2 3 4 5 6 7\n", []wantDiag{{1, 2, 5, "syntax", "\"low\" is only valid inside a nasa7 block"}}},
 		{"species X C\n  hf298 1\n", []wantDiag{{1, 2, 7, "syntax", "\"hf298\" is only valid inside a thermo-table block"}}},
 		{"species X C\n  source x\n", []wantDiag{{1, 2, 8, "syntax", "\"source\" is only valid inside a nasa7 or thermo-table block"}}},
+		{"species X C\n species Y CC\n", []wantDiag{{1, 1, 8, "syntax", "\"species\" is a statement keyword, but this line is indented, so it is read as part of the statement above: a statement keyword belongs in column 0 (remove the leading blanks)"}}},
+		{"reaction A <=> B A=1 n=0 Ea=0\n\treaction B <=> C A=1 n=0 Ea=0\n", []wantDiag{{1, 1, 9, "syntax", "\"reaction\" is a statement keyword, but this line is indented, so it is read as part of the statement above: a statement keyword belongs in column 0 (remove the leading blanks)"}}},
+		{"group C-(C)(H)3\n  hf298 1\n  s298 2\n  cp 300=1\n  units kJ/mol\n", []wantDiag{{4, 2, 7, "syntax", "\"units\" is a statement keyword, but this line is indented, so it is read as part of the statement above: a statement keyword belongs in column 0 (remove the leading blanks)"}}},
 		{"species X C\n  colour red\n", []wantDiag{{1, 2, 8, "syntax", "unknown species attribute \"colour\": expected one of multiplicity, symmetry, optical-isomers, composition, note, nasa7, thermo-table"}}},
 		{"species X C\n  nasa7 300 1000 5000\n    low 1 2 3 4 5 6 7\n", []wantDiag{{1, 2, 7, "syntax", "nasa7 block is missing its high line"}}},
 		{"species X C\n  nasa7 300 1000 5000\n    low 1 2 3 4 5 6\n    high 1 2 3 4 5 6 7\n", []wantDiag{{2, 19, 19, "syntax", "expected 7 coefficients after low, found 6"}}},
@@ -107,7 +110,9 @@ func TestSyntaxErrors(t *testing.T) {
 		{"reaction A <=> B A=1 n=0 Ea=0\n  duplicate now\n  duplicate\n", []wantDiag{{1, 12, 15, "syntax", "unexpected \"now\" after duplicate"}, {2, 2, 11, "syntax", "duplicate attribute \"duplicate\" (first given on line 2)"}}},
 		{"reaction A <=> B A=1 n=0 Ea=0\n  frob 1\n", []wantDiag{{1, 2, 6, "syntax", "unknown reaction attribute \"frob\": expected one of low-pressure, troe, efficiencies, pressure, duplicate, reverse, note"}}},
 		{"reaction A <=> B A=1 n=0 Ea=0\n  reverse\n", []wantDiag{{1, 9, 9, "syntax", "expected A=, n= and Ea= after reverse"}}},
-		{"x\xffy\n", []wantDiag{{0, 0, 3, "syntax", "unknown keyword \"x\\xffy\": expected one of species, reaction, units, include, group"}, {0, 1, 2, "syntax", "invalid UTF-8 byte 0xFF"}}},
+		{"x\xffy\n", []wantDiag{{0, 0, 3, "syntax", "unknown keyword \"x\\xffy\": expected one of species, reaction, units, include, group"}, {0, 1, 2, "syntax", "invalid UTF-8 byte 0xFF (ÿ in Latin-1): a .kiln file is UTF-8 text; re-save it as UTF-8"}}},
+		{"species X CC\n  note caf\xe9\n", []wantDiag{{1, 10, 11, "syntax", "invalid UTF-8 byte 0xE9 (é in Latin-1): a .kiln file is UTF-8 text; re-save it as UTF-8"}}},
+		{"species X CC\n  note \x93x\x94\n", []wantDiag{{1, 7, 8, "syntax", "invalid UTF-8 byte 0x93: a .kiln file is UTF-8 text; re-save it as UTF-8"}}},
 		{"species X C\x00\n", []wantDiag{{0, 11, 12, "syntax", "NUL byte in text"}}},
 	}
 	for _, c := range cases {

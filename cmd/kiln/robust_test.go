@@ -135,3 +135,46 @@ func TestNoNegativeZero(t *testing.T) {
 	assert.Contains(t, stdout, "0.00")
 	assert.NotContains(t, stdout, "-0.00")
 }
+
+// TestClearRefusals: an unsupported element is named as such with the way
+// to give thermo; a hypervalent atom is named with its bonds; the `?`
+// placeholder is a structure still to be written, at its position.
+func TestClearRefusals(t *testing.T) {
+	path := writeTemp(t, "m.kiln", "species Si [Si]\nspecies X N#N=O\nspecies Y ?\n")
+	_, stdout, _ := runKiln(t, "check", path)
+	assert.Contains(t, stdout, "m.kiln:1:9: error: Si has no thermo block and kiln cannot estimate it: atom 1 (Si): unsupported element Si")
+	assert.Contains(t, stdout, "; add a nasa7 or thermo-table block [missing-thermo]")
+	assert.NotContains(t, stdout, "carbene")
+	assert.Contains(t, stdout, "m.kiln:2:9: error: X has no thermo block and kiln cannot estimate it: atom 2 (N) exceeds its valence: 5 bonds (triple bond to atom 1 (N), double bond to atom 3 (O))")
+	assert.Contains(t, stdout, "m.kiln:3:11: error: Y: structure not given yet: replace ? with the species' SMILES")
+	assert.NotContains(t, stdout, "invalid character")
+
+	_, stdout, _ = runKiln(t, "estimate", "[Si]")
+	assert.Contains(t, stdout, "unsupported element Si")
+	assert.Contains(t, stdout, "nasa7 or thermo-table block")
+	_, _, stderr := runKiln(t, "fill", "--dry-run", path)
+	assert.Contains(t, stderr, "skipped Y: structure not given yet")
+}
+
+// TestMixSeparators: --mix takes blanks as well as commas between items,
+// and a malformed item is shown with the expected form.
+func TestMixSeparators(t *testing.T) {
+	path := writeTemp(t, "mix.kiln", "species CH4 C\nspecies O2 O=O\nspecies H2O O\nspecies CO2 O=C=O\n")
+	code, spaced, stderr := runKiln(t, "equilibrium", path, "--mix", "CH4:1 O2:2", "--temperature", "1500")
+	require.Equal(t, exitOK, code, stderr)
+	code, commas, stderr := runKiln(t, "equilibrium", path, "--mix", "CH4:1, O2:2", "--temperature", "1500")
+	require.Equal(t, exitOK, code, stderr)
+	assert.Equal(t, commas, spaced)
+	code, _, stderr = runKiln(t, "equilibrium", path, "--mix", "CH4=1 O2=2")
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, `--mix item 1 (column 1) "CH4=1" must be NAME:AMOUNT (items separated by commas or blanks, e.g. "CH4:1, O2:2, N2:7.52")`)
+}
+
+// TestCountWording: a count of one takes the singular.
+func TestCountWording(t *testing.T) {
+	a := writeTemp(t, "a.kiln", "species H [H]\nspecies H2 [H][H]\nreaction H + H <=> H2 A=1e13 n=0 Ea=0\n")
+	_, stdout, _ := runKiln(t, "compare", a, a)
+	assert.Contains(t, stdout, "(2 species, 1 reaction)")
+	_, stdout, _ = runKiln(t, "estimate", "--multiplicity", "4", "C[CH2]")
+	assert.Contains(t, stdout, "(1 unpaired electron: multiplicity 2)")
+}
