@@ -178,3 +178,14 @@ func TestCountWording(t *testing.T) {
 	_, stdout, _ = runKiln(t, "estimate", "--multiplicity", "4", "C[CH2]")
 	assert.Contains(t, stdout, "(1 unpaired electron: multiplicity 2)")
 }
+
+// TestRateOverflowWording: a rate constant that overflows is refused in
+// words, not as "+Inf".
+func TestRateOverflowWording(t *testing.T) {
+	path := writeTemp(t, "r.kiln", "species H [H]\nspecies H2 [H][H]\nreaction H + H <=> H2 A=1e300 n=30 Ea=0\n")
+	_, stdout, _ := runKiln(t, "check", path)
+	assert.Contains(t, stdout, "r.kiln:3:23: error: the forward rate constant is too large for a 64-bit float (it overflows) at 300 K")
+	assert.NotContains(t, stdout, "Inf")
+	_, stdout, _ = runKiln(t, "summary", "--json", path)
+	assertFiniteJSON(t, stdout)
+}
