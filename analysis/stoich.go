@@ -30,7 +30,10 @@ func normalSide(ts []speciesfile.Term, names func(string) string) string {
 	sort.Strings(order)
 	parts := make([]string, len(order))
 	for i, n := range order {
-		parts[i] = strconv.FormatFloat(coeff[n], 'g', -1, 64) + " " + n
+		// 12 significant digits: sums of decimal coefficients written
+		// differently (0.1 + 0.2 and 0.3) compare equal; coefficients
+		// are at most 1000, so no two a user can mean differently merge.
+		parts[i] = strconv.FormatFloat(coeff[n], 'g', 12, 64) + " " + n
 	}
 	return strings.Join(parts, " + ")
 }

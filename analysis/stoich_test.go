@@ -26,6 +26,8 @@ func TestDuplicateReactionStoichiometry(t *testing.T) {
 		{"H2O2 <=> OH + OH", "2 OH <=> H2O2", true},
 		{"OH + H + OH <=> H + H2O2", "H + 2 OH <=> H2O2 + H", true},
 		{"1 OH + 1 OH <=> H2O2", "2.0 OH <=> 1 H2O2", true},
+		{"0.1 OH + 0.2 OH <=> 0.15 H2O2", "0.3 OH <=> 0.15 H2O2", true},
+		{"0.3 OH <=> 0.15 H2O2", "0.31 OH <=> 0.15 H2O2", false},
 		{"2 OH <=> H2O2", "OH <=> H2O2", false},
 		{"2 OH <=> H2O2", "2 OH + M <=> H2O2 + M", false},
 		{"OH + OH + M <=> H2O2 + M", "2 OH + M <=> H2O2 + M", true},
