@@ -654,8 +654,9 @@ func matchReactions(a, b *compareSide, mapB map[string]string) (pairs []Reaction
 			onlyA = append(onlyA, a.rrefs(x)...)
 			continue
 		}
-		p := ReactionPair{A: a.rref(x.rs[0]), B: b.rref(y.rs[0]), Reversed: x.left != y.left,
-			AllA: a.rrefs(x), AllB: b.rrefs(y), RepeatA: x.repeat(), RepeatB: y.repeat()}
+		allA, allB := a.rrefs(x), b.rrefs(y)
+		p := ReactionPair{A: allA[0], B: allB[0], Reversed: x.left != y.left,
+			AllA: allA, AllB: allB, RepeatA: x.repeat(), RepeatB: y.repeat()}
 		for i, t := range CompareRateTemps {
 			ka, noteA, okA := a.rateOf(x, x.left, t.T)
 			kb, noteB, okB := b.rateOf(y, x.left, t.T)
