@@ -52,8 +52,9 @@ func encode(v any) ([]byte, error) {
 const sentinel = -1.2345678901234567e+307
 
 // withSentinels returns a deep copy of v with every float that is not
-// finite replaced by sentinel. Unexported struct fields are left zero
-// (encoding/json does not write them).
+// finite replaced by sentinel. Unexported struct fields are left zero:
+// encoding/json does not write them, except the promoted fields of an
+// embedded unexported struct, which kiln's JSON types do not use.
 func withSentinels(v reflect.Value) reflect.Value {
 	if !v.IsValid() {
 		return v
