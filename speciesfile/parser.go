@@ -1087,6 +1087,10 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 			if p.indentedKeyword(key) {
 				continue
 			}
+			if rateParamLike(key.Text) {
+				p.errAt(key.Span, "%q on a line of its own: the forward rate parameters (A=, n=, Ea=) belong on the reaction line, after the equation", key.Text)
+				continue
+			}
 			p.errAt(key.Span, "unknown reaction attribute %q: %sexpected one of %s", key.Text, didYouMean(key.Text, strings.Split(reactionAttrList, ", ")), reactionAttrList)
 		}
 	}
@@ -1811,4 +1815,15 @@ func (p *parser) nextStatement(extentStart int) (st Stmt, next int, ok bool) {
 		relativize(st, extentStart)
 		return st, lastOwn.next, true
 	}
+}
+
+// rateParamLike reports whether word starts like a forward rate parameter
+// (A=…, n=…, Ea=…), which is written on the reaction line itself.
+func rateParamLike(word string) bool {
+	for _, k := range []string{"A=", "n=", "Ea="} {
+		if strings.HasPrefix(word, k) {
+			return true
+		}
+	}
+	return false
 }

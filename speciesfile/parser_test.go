@@ -109,6 +109,7 @@ func TestSyntaxErrors(t *testing.T) {
 		{"reaction A => B A=1 n=0 Ea=0\n  reverse A=1 n=0 Ea=0\n", []wantDiag{{1, 2, 9, "syntax", "reverse needs a reversible (<=>) reaction"}}},
 		{"reaction A <=> B A=1 n=0 Ea=0\n  duplicate now\n  duplicate\n", []wantDiag{{1, 12, 15, "syntax", "unexpected \"now\" after duplicate"}, {2, 2, 11, "syntax", "duplicate attribute \"duplicate\" (first given on line 2)"}}},
 		{"reaction A <=> B A=1 n=0 Ea=0\n  frob 1\n", []wantDiag{{1, 2, 6, "syntax", "unknown reaction attribute \"frob\": expected one of low-pressure, troe, efficiencies, pressure, duplicate, reverse, note"}}},
+		{"reaction A <=> B\n  A=1e13 n=0 Ea=0\n", []wantDiag{{0, 9, 16, "no-rate", "reaction has no rate parameters (A=, n=, Ea=)"}, {1, 2, 8, "syntax", "\"A=1e13\" on a line of its own: the forward rate parameters (A=, n=, Ea=) belong on the reaction line, after the equation"}}},
 		{"reaction A <=> B A=1 n=0 Ea=0\n  reverse\n", []wantDiag{{1, 9, 9, "syntax", "expected A=, n= and Ea= after reverse"}}},
 		{"x\xffy\n", []wantDiag{{0, 0, 3, "syntax", "unknown keyword \"x\\xffy\": expected one of species, reaction, units, include, group"}, {0, 1, 2, "syntax", "invalid UTF-8 byte 0xFF (ÿ in Latin-1): a .kiln file is UTF-8 text; re-save it as UTF-8"}}},
 		{"species X CC\n  note caf\xe9\n", []wantDiag{{1, 10, 11, "syntax", "invalid UTF-8 byte 0xE9 (é in Latin-1): a .kiln file is UTF-8 text; re-save it as UTF-8"}}},
