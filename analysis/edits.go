@@ -161,13 +161,14 @@ func (r *Result) FillPlan() ([]Edit, []Skip) {
 			out = append(out, e)
 			continue
 		}
-		skips = append(skips, Skip{Species: sp, Reason: skipReason(sp)})
+		skips = append(skips, Skip{Species: sp, Reason: skipReason(sp, r.Units())})
 	}
 	return out, skips
 }
 
-// skipReason says why no block can be inserted for sp.
-func skipReason(sp *Species) string {
+// skipReason says why no block can be inserted for sp, with numbers in the
+// display units u.
+func skipReason(sp *Species, u Units) string {
 	switch {
 	case sp.brokenBlock:
 		return "its thermo block has a syntax error; fix or delete the block"
@@ -181,12 +182,7 @@ func skipReason(sp *Species) string {
 		return "no estimate"
 	}
 	if _, _, err := sp.Estimate.NASA7(); err != nil {
-		// Without the engine's package prefix: no Go names in user text.
-		msg := err.Error()
-		for _, prefix := range []string{"nasa fit: ", "nasa: "} {
-			msg = strings.TrimPrefix(msg, prefix)
-		}
-		return "no NASA-7 polynomial: " + msg
+		return "no NASA-7 polynomial: " + FitRefusal(err, u)
 	}
 	return "no block can be inserted here"
 }

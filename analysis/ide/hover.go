@@ -334,7 +334,7 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		w.line(unc)
 	}
 	if _, fit, err := e.NASA7(); err != nil {
-		w.line("NASA-7 fit failed: " + err.Error())
+		w.line("NASA-7 fit failed: " + analysis.FitRefusal(err, analysis.Units{KJ: !w.u.kcal}))
 	} else if fit.MaxCpResidual > 0 {
 		w.line("NASA-7 fit: worst Cp residual " + w.u.entropy(fit.MaxCpResidual))
 	}
