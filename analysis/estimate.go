@@ -193,7 +193,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 	}
 	e := &Estimate{Group: g, Hf298: g.Hf298, S298: g.S298, Cp: g.Cp, Uncertainty: g.Uncertainty,
 		fit: &fitResult{}, tMid: o.TMid, tHigh: o.THigh}
-	nAtoms, linear, rotors := shape(m)
+	nAtoms, linear, rotors := shape(shapeStructure(m, g))
 	e.cp0, e.cpInf = nasa.ClassicalLimits(nAtoms, linear, rotors)
 	e.model = newGroupThermo(g.Hf298, g.S298, benson.StdTemps[:], g.Cp[:])
 	e.model.continueAlongTail(e.cp0, e.cpInf)
@@ -214,6 +214,29 @@ func physical(g *benson.Result) error {
 		}
 	}
 	return nil
+}
+
+// shapeStructure returns the structure whose shape gives the classical Cp
+// limits of estimate g of m: the resonance structure that was estimated
+// (g.Form, engine/benson's representative, chosen the same way whatever the
+// spelling) when the radical has several, else m. The rotor count of shape
+// depends on where a structure puts its single bonds: vinoxy spelled
+// [CH2]C=O has a C–C rotor, spelled C=C[O] none, and benzyl spelled
+// [CH2]c1ccccc1 a ring–CH2 rotor that C=C1C=CC=C[CH]1 lacks. Taken from the
+// spelling, the limits, and with them the Wilhoit tail above 1500 K and the
+// NASA-7 fit, differed between spellings of one species although its
+// ΔHf°298, S°298 and Cp(T) did not. The representative structure is a
+// convention (common practice: the most stable Lewis structure); it makes
+// every valid spelling give the same thermochemistry.
+func shapeStructure(m *molecule.Molecule, g *benson.Result) *molecule.Molecule {
+	if g.Form == "" {
+		return m
+	}
+	f, err := molecule.ParseSMILES(g.Form)
+	if err != nil || f.Formula() != m.Formula() {
+		return m // not reached: Form is a canonical SMILES of m's species
+	}
+	return f
 }
 
 // shape returns the total atom count (with hydrogens), whether the molecule
