@@ -82,3 +82,30 @@ func TestResonanceSpellingsOneFit(t *testing.T) {
 		}
 	}
 }
+
+// TestResonanceRotors: a bond is an internal rotor only if it is single in
+// every resonance structure of the species; one that is double in some
+// structure (allylic, benzylic, enoxy C–C) is a stiff torsion. Closed-shell
+// molecules and radicals with one structure count as before.
+func TestResonanceRotors(t *testing.T) {
+	for _, c := range []struct {
+		smi    string
+		rotors int
+	}{
+		{"[CH2]C=C", 0},      // allyl: both C–C bonds are double in one structure
+		{"C=C[O]", 0},        // vinoxy
+		{"[CH2]c1ccccc1", 0}, // benzyl: ring–CH2 is double in the quinoid structures
+		{"C[CH]C=C", 1},      // 1-methylallyl: the CH3–CH bond is single throughout
+		{"CC[CH]C=C", 2},     // 1-ethylallyl: CH3–CH2 and CH2–CH
+		{"[CH2]C(=O)C", 1},   // acetonyl: CH3–C only
+		{"CCC", 2},           // propane: two methyl tops
+		{"CC[CH2]", 2},       // propyl: one structure
+		{"Cc1ccccc1", 1},     // toluene
+		{"C=CC=C", 1},        // butadiene: closed shell, counted as before
+	} {
+		m, err := molecule.ParseSMILES(c.smi)
+		require.NoError(t, err)
+		_, _, rotors := shape(m)
+		assert.Equal(t, c.rotors, rotors, c.smi)
+	}
+}
