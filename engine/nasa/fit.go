@@ -70,7 +70,8 @@ const (
 	// polyBasis): slopes are d(Cp/R)/dT per 1000 K.
 	tauScale = 1000.0
 	// nLowGrid and nHighGrid are the numbers of points in each range at which
-	// monotonicity and the Cp ceiling are imposed.
+	// monotonicity and the Cp ceiling are imposed; monotonicity also holds
+	// between them (see polyIneq).
 	nLowGrid, nHighGrid = 120, 240
 )
 
@@ -358,7 +359,8 @@ func (pb polyBasis) slopeBern(T float64, high bool, delta float64, g []float64) 
 // Rajan, Comput. Aided Geom. Des. 5 (1988)). All bᵢ ≥ 0 is therefore a
 // linear, sufficient condition for Cp to be non-decreasing everywhere in
 // [TLow, THigh], not only at the grid; it is conservative by O(h²) q″, which
-// on pieces of 6–17 K is far below the precision of the data. With Cp
+// on pieces of 6–17 K (300/1000/5000 K; some 20 K for the widest ranges
+// allowed) is far below the precision of the data. With Cp
 // non-decreasing, its largest value on a piece is at the piece's right end,
 // a grid point, so the ceiling of 3. holds everywhere too.
 type polyIneq struct {
