@@ -90,7 +90,9 @@ type sample struct{ T, Cp, W float64 }
 // squares targets are the input points inside [TLow−2 K, THigh+2 K] (weight 3)
 // and the Wilhoit value at every 50 K grid temperature of [TLow, THigh] lying
 // farther than 50 K from every input point (weight 1): this fills gaps in the
-// data and extrapolates above the last point. The objective is the weighted sum
+// data and extrapolates above the last point; a block left with fewer than four
+// distinct temperatures (a TMID at or below 500 K) gets Wilhoit values at five
+// more (fillThinBlocks). The objective is the weighted sum
 // of squared relative residuals of Cp. The ten Cp coefficients a1…a5 of both
 // ranges are solved by constrained least squares under
 //
@@ -171,6 +173,7 @@ func Fit(hf298, s298 float64, T, Cp []float64, cp0, cpInf float64, opt FitOption
 			break
 		}
 	}
+	samples = fillThinBlocks(samples, w, opt)
 	p, err := solvePoly(hf298, s298, samples, opt, true, cpInf)
 	if err != nil {
 		return NASA7{}, FitReport{}, fmt.Errorf("nasa fit: %w", err)
@@ -181,6 +184,42 @@ func Fit(hf298, s298 float64, T, Cp []float64, cp0, cpInf float64, opt FitOption
 	rep := report(p, pts)
 	rep.Extrapolated = extrapolated
 	return p, rep, nil
+}
+
+// minBlockTemps is the fewest distinct sample temperatures Fit lets a block
+// have: each block has three coefficients of its own (the value and slope at
+// TMid are shared, see polyBasis), so three determine them and the fourth
+// leaves one degree of freedom to least squares.
+const minBlockTemps = 4
+
+// fillThinBlocks adds Wilhoit samples (weight 1, from w) to a block of Fit's
+// samples that has fewer than minBlockTemps distinct temperatures: the
+// low block of a TMID at or below 500 K holds only the 300 and 400 K group
+// values, and a range narrower than the 50 K fill grid may hold none. The
+// added samples lie at the centres of minBlockTemps+1 equal parts of the
+// block. Blocks as for solvePoly: low T < TMid, high T ≥ TMid.
+func fillThinBlocks(samples []sample, w Wilhoit, opt FitOptions) []sample {
+	for _, high := range []bool{false, true} {
+		lo, hi := opt.TLow, opt.TMid
+		if high {
+			lo, hi = opt.TMid, opt.THigh
+		}
+		seen := map[float64]bool{}
+		for _, s := range samples {
+			if (s.T >= opt.TMid) == high {
+				seen[s.T] = true
+			}
+		}
+		if len(seen) >= minBlockTemps {
+			continue
+		}
+		const m = minBlockTemps + 1
+		for k := range m {
+			t := lo + (hi-lo)*(float64(k)+0.5)/m
+			samples = append(samples, sample{T: t, Cp: w.Cp(t), W: 1})
+		}
+	}
+	return samples
 }
 
 // FitPoly fits a two-range NASA7 polynomial directly to dense heat-capacity

@@ -135,3 +135,28 @@ func TestFitAboveLimitIsShapeError(t *testing.T) {
 	assert.Equal(t, cpInf+1, se.Cp)
 	assert.Equal(t, cpInf, se.Other)
 }
+
+// TestFitLowTMid: a TMID at or below 500 K leaves only the 300 and 400 K
+// group values in the low block, which has three coefficients of its own;
+// the fit used to fail there ("too few independent data"), refusing every
+// species for `--tmid 450`. The block is now filled from the Wilhoit curve:
+// every TMID from 310 to 700 K and a narrow high range must fit, follow the
+// input within 3 %, and stay monotone. (With a low TMID one quartic spans
+// TMID–5000 K, where Cp turns from steep to flat; it follows the group
+// values to 1–2.3 %, as it did for the TMIDs of 510–700 K that fitted
+// before, against 0.45 % at the default 1000 K.)
+func TestFitLowTMid(t *testing.T) {
+	cp := []float64{194.93256, 245.43344, 287.73368, 323.13032, 380.45112, 421.62168, 482.206}
+	cp0, cpInf := ClassicalLimits(25, false, 4)
+	opts := []FitOptions{{TMid: 1400, THigh: 1450}}
+	for tm := 310.0; tm <= 700; tm += 15 {
+		opts = append(opts, FitOptions{TMid: tm, THigh: 5000})
+	}
+	for _, opt := range opts {
+		p, rep, err := Fit(-479151.68, 491.663927583, benson, cp, cp0, cpInf, opt)
+		require.NoError(t, err, "%+v", opt)
+		assert.Less(t, rep.MaxCpRelResidual, 0.03, "%+v", opt)
+		fall, at := scanFall(p)
+		assert.Less(t, fall, 1e-9, "%+v: Cp falls by %g J/(mol K) at %g K", opt, fall, at)
+	}
+}
