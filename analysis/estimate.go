@@ -226,9 +226,9 @@ func physical(g *benson.Result) error {
 // substituent (a methyl top counts; a bond to a terminal atom without
 // substituents does not).
 //
-// A radical with several resonance structures is one species, whichever structure was written: shape looks at all of its
-// Lewis structures (benson.ResonanceStructures, a set that does not depend
-// on the spelling). It is linear only if every structure is, and a bond is
+// A radical with several resonance structures is one species, whichever
+// structure was written: shape looks at all of its Lewis structures
+// (benson.ResonanceStructures, a set that does not depend on the spelling). It is linear only if every structure is, and a bond is
 // a rotor only if it is single in every structure: a bond that is double in
 // some structure has partial double-bond character and a torsion barrier of
 // 10–16 kcal/mol (allyl about 15–16, benzyl about 11–14; from memory), a
