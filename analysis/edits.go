@@ -161,7 +161,7 @@ func (r *Result) FillPlan() ([]Edit, []Skip) {
 			out = append(out, e)
 			continue
 		}
-		skips = append(skips, Skip{Species: sp, Reason: skipReason(sp)})
+		skips = append(skips, Skip{Species: sp, Reason: skipReason(sp, r.Units())})
 	}
 	return out, skips
 }
@@ -178,7 +178,7 @@ func (r *Result) IncludedWithoutThermo() []Skip {
 		}
 		reason := "declared in an included file: fill writes only the file it is given; run kiln fill on that file to insert its block"
 		if !fillable(sp) {
-			reason = "declared in an included file (fill writes only the file it is given), and it cannot be filled there either: " + skipReason(sp)
+			reason = "declared in an included file (fill writes only the file it is given), and it cannot be filled there either: " + skipReason(sp, r.Units())
 		}
 		out = append(out, Skip{Species: sp, Reason: reason})
 	}
@@ -194,8 +194,9 @@ func fillable(sp *Species) bool {
 	return err == nil
 }
 
-// skipReason says why no block can be inserted for sp.
-func skipReason(sp *Species) string {
+// skipReason says why no block can be inserted for sp, with numbers in the
+// display units u.
+func skipReason(sp *Species, u Units) string {
 	switch {
 	case sp.brokenBlock:
 		return "its thermo block has " + sp.blockFault() + "; fix or delete the block"
@@ -212,12 +213,7 @@ func skipReason(sp *Species) string {
 		return "no estimate"
 	}
 	if _, _, err := sp.Estimate.NASA7(); err != nil {
-		// Without the engine's package prefix: no Go names in user text.
-		msg := err.Error()
-		for _, prefix := range []string{"nasa fit: ", "nasa: "} {
-			msg = strings.TrimPrefix(msg, prefix)
-		}
-		return "no NASA-7 polynomial: " + msg
+		return "no NASA-7 polynomial: " + FitRefusal(err, u)
 	}
 	return "no block can be inserted here"
 }

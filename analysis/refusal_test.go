@@ -1,12 +1,14 @@
 package analysis
 
 import (
+	"fmt"
 	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
 
+	"kiln.dev/kiln/engine/nasa"
 	"kiln.dev/kiln/speciesfile"
 )
 
@@ -64,4 +66,46 @@ func messagesWithCode(res *Result, code string) []string {
 		}
 	}
 	return out
+}
+
+// TestFitRefusalInFileUnits: a species whose NASA-7 fit is refused is
+// listed by fill with the numbers in the file's units, the temperature of
+// the defect and what to do, without the engine's package name or raw
+// floats. The refusal is provoked independently of the group tables: a
+// `group` statement gives C-(C)(H)3 a heat capacity that puts ethane's
+// estimated Cp above its classical limit, (3·8 − 2) R − R/2 = 21.5 R
+// = 42.72 cal/(mol·K), at 1000 K.
+func TestFitRefusalInFileUnits(t *testing.T) {
+	const groups = "group C-(C)(H)3\n  hf298 -10\n  s298 30\n  cp 300=12 400=14 500=16 600=18 800=20 1000=22 1500=23\n"
+	for _, c := range []struct{ units, cpUnit, value, limit string }{
+		{"kcal/mol", "cal/(mol·K)", "44.00 cal/(mol·K)", "42.72 cal/(mol·K)"},
+		{"kJ/mol", "J/(mol·K)", "184.1 J/(mol·K)", "178.8 J/(mol·K)"},
+	} {
+		src := "units " + c.units + "\n" + groups + "species E CC\n"
+		if c.units == "kJ/mol" {
+			// The same group values in J/(mol K).
+			src = "units kJ/mol\ngroup C-(C)(H)3\n  hf298 -41.84\n  s298 125.52\n  cp 300=50.208 400=58.576 500=66.944 600=75.312 800=83.68 1000=92.048 1500=96.232\nspecies E CC\n"
+		}
+		res := analyzeText(t, src)
+		_, skips := res.FillPlan()
+		require.Len(t, skips, 1, c.units)
+		msg := skips[0].Reason
+		assert.Contains(t, msg, "at 1000 K, "+c.value+", is not below "+c.limit, c.units)
+		assert.Contains(t, msg, "give the species a nasa7 or thermo-table block", c.units)
+		assert.NotContains(t, msg, "nasa fit", c.units)
+		assert.NotContains(t, msg, "J/(mol K)", c.units) // the engine's SI wording
+	}
+}
+
+// TestFitRefusalFalls words a falling fitted Cp (a ShapeError the fit
+// returns only if its constraints fail) in the display units, with both
+// temperatures, the size of the fall and the remedies.
+func TestFitRefusalFalls(t *testing.T) {
+	err := fmt.Errorf("nasa fit: %w", &nasa.ShapeError{Test: nasa.ShapeFalls, T: 3376.6, Cp: 525.95, Other: 526.10, OtherT: 3300.2})
+	kcal := FitRefusal(err, Units{})
+	assert.Equal(t, "the fitted Cp falls with temperature, by 0.036 cal/(mol·K) from 125.74 cal/(mol·K) at 3300 K "+
+		"to 125.71 cal/(mol·K) at 3377 K; try another TMID or THIGH (--tmid/--thigh, or tMid/tHigh in the editor's "+
+		"settings), or give the species a nasa7 or thermo-table block", kcal)
+	kj := FitRefusal(err, Units{KJ: true})
+	assert.Contains(t, kj, "by 0.15 J/(mol·K) from 526.1 J/(mol·K) at 3300 K to 526.0 J/(mol·K) at 3377 K")
 }

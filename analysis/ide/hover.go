@@ -338,7 +338,7 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		w.line(unc)
 	}
 	if _, fit, err := e.NASA7(); err != nil {
-		w.line("NASA-7 fit failed: " + err.Error())
+		w.line("NASA-7 fit failed: " + analysis.FitRefusal(err, analysis.Units{KJ: !w.u.kcal}))
 	} else if fit.MaxCpResidual > 0 {
 		w.line("NASA-7 fit: worst Cp residual " + w.u.entropy(fit.MaxCpResidual))
 	}
@@ -456,16 +456,26 @@ func (w *writer) group(o Occurrence) {
 // estimated thermochemistry, e.g. "×/÷ 1.50 (σ(ΔG°r) = 0.81 kcal/mol from the
 // estimates of propane, propyl)".
 func reverseFactorText(u analysis.ReverseUncertainty, un units) string {
+	given := ""
+	if len(u.Given) > 0 {
+		given = strings.Join(u.Given, ", ") + " from the file's own thermo blocks, which state no uncertainty"
+	}
 	if len(u.Estimated) == 0 {
-		return "×/÷ 1 (no estimated thermo: all from the file or the reference library)"
+		if given != "" {
+			return "not known (" + given + ")"
+		}
+		return "×/÷ 1 (no estimated thermo: all from the reference library)"
 	}
 	ge := ""
-	if len(u.Unmeasured) > 0 {
+	if len(u.Unmeasured) > 0 || len(u.Given) > 0 {
 		ge = "≥ "
 	}
 	s := fmt.Sprintf("%s×/÷ %.2f (σ(ΔG°r) = %s from the estimates of %s", ge, u.Factor, un.energy(u.Sigma), strings.Join(u.Estimated, ", "))
 	if len(u.Unmeasured) > 0 {
 		s += "; no measured error for " + strings.Join(u.Unmeasured, ", ")
+	}
+	if given != "" {
+		s += "; " + given
 	}
 	return s + ")"
 }

@@ -198,7 +198,8 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 	if withNASA {
 		p, fit, err := est.NASA7()
 		if err != nil {
-			r.Error = &errorJSON{Message: "NASA-7 fit failed: " + err.Error()}
+			// SI in JSON, like its keys.
+			r.Error = &errorJSON{Message: "NASA-7 fit failed: " + analysis.FitRefusal(err, analysis.Units{KJ: true})}
 		} else {
 			r.NASA7 = &nasaJSON{TLow: p.TLow, TMid: p.TMid, THigh: p.THigh, Low: p.Low, High: p.High, MaxCpResidual: jnum(fit.MaxCpResidual), Source: est.BlockSource(stamp)}
 		}
@@ -212,7 +213,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 // stays narrow; --json always has them.
 func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u analysis.Units, withNASA, withSources bool, stamp string) {
 	fmt.Fprintf(w, "%s\n", r.Input)
-	if r.Error != nil {
+	if r.Error != nil && est == nil { // with an estimate, the error is its refused fit (below)
 		if r.Error.Position != nil {
 			fmt.Fprintf(w, "  error at position %d: %s\n", *r.Error.Position, r.Error.Message)
 			fmt.Fprintf(w, "    %s\n    %s^\n", r.Input, strings.Repeat(" ", *r.Error.Position-1))
@@ -278,6 +279,8 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	if p, fit, err := est.NASA7(); withNASA && err == nil {
 		fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %s):\n", u.Entropy(fit.MaxCpResidual))
 		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, est.BlockSource(stamp), "\n"))
+	} else if withNASA {
+		writeWrapped(w, "  ", "NASA-7 fit refused: "+analysis.FitRefusal(err, u))
 	}
 	writeWrapped(w, "  ", ide.Caution)
 }

@@ -54,6 +54,15 @@ type summaryReaction struct {
 	// ReverseFactor is the factor k_r inherits from estimated thermo,
 	// exp(σ(ΔG°r)/RT) at 1000 K (null when k_r does not come from thermo).
 	ReverseFactor numericMap `json:"reverse_rate_factor"`
+	// ReverseGiven names the species whose thermo is the file's own block
+	// with no stated uncertainty (extension; absent when none): the factor
+	// covers only the estimates and is then a lower bound, and with no
+	// estimate involved it is 1 by construction, not a measured certainty.
+	ReverseGiven []string `json:"reverse_rate_given,omitempty"`
+	// ReverseLowerBound is true when the factor is a lower bound: some
+	// species' uncertainty is unknown (given blocks or classes without a
+	// measured error; extension, absent when false).
+	ReverseLowerBound bool `json:"reverse_rate_factor_lower_bound,omitempty"`
 	// RateTableEdge is the tabulated pressure (bar) whose rate is shown
 	// when rate_pressure_bar lies outside the reaction's pressure table
 	// (extension; absent otherwise).
@@ -167,6 +176,8 @@ func summaryReactionOf(res *analysis.Result, r *analysis.Reaction, P float64) su
 	}
 	if u, ok := res.ReverseRateUncertainty(r, 1000); ok {
 		row.ReverseFactor = numericMap{"1000": ptr(u.Factor)}
+		row.ReverseGiven = u.Given
+		row.ReverseLowerBound = len(u.Given) > 0 || len(u.Unmeasured) > 0
 	}
 	if r.RateTableEdge > 0 {
 		row.RateTableEdge = ptr(jnum(r.RateTableEdge / 1e5))
@@ -250,6 +261,12 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		factor := ""
 		if f := reverseFactor(r); f != nil {
 			factor = analysis.FormatFixed(*f, 2)
+			switch {
+			case len(r.ReverseGiven) > 0 && *f == 1:
+				factor = "given" // only given blocks: no uncertainty stated
+			case r.ReverseLowerBound:
+				factor = "≥" + factor
+			}
 		}
 		rows = append(rows, []string{reactionLine(r), shorten(r.Equation, 44), kf, kr, factor, limit})
 	}
