@@ -439,25 +439,15 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 		return
 	}
 	sp.Estimate = e
-	if miss := sortedMissing(e.Group); len(miss) > 0 {
+	if miss := e.Flags(); len(miss) > 0 {
 		// Group values the user can supply with a `group` statement, and
-		// other approximations (radical sites, ring systems, delocalisation)
-		// that only a thermo block replaces.
+		// other approximations (radical sites and their S°/Cp increments,
+		// ring systems, delocalisation, S° below its physical bound) that
+		// only a thermo block replaces. Every flag of the estimate is
+		// reported, worded as estimate, summary and hover word it.
 		var groups, others []string
 		for _, m := range miss {
-			if isHBINote(m) {
-				// Untabulated radical S/Cp increments are not a group the
-				// user can supply: the hover and estimate output list them.
-				continue
-			}
-			s := m.Group
-			if m.Approximation != "" {
-				s += " (approximated by " + m.Approximation
-				if m.Note != "" {
-					s += ": " + m.Note
-				}
-				s += ")"
-			}
+			s := FlagText(m)
 			if _, err := benson.ParseGroupName(m.Group); err == nil {
 				groups = append(groups, s)
 			} else {
@@ -477,10 +467,6 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 		}
 	}
 }
-
-// isHBINote reports whether a missing entry is the note that a radical
-// site's entropy and heat-capacity increments are not tabulated.
-func isHBINote(m benson.Missing) bool { return strings.HasPrefix(m.Group, "HBI ") }
 
 // hasUsableBlock reports whether declaration d has a thermo block without
 // syntax errors: a block the reader could not read completely is not data.

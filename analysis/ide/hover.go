@@ -318,12 +318,8 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 			facts = append(facts, fmt.Sprintf("multiplicity = %d", g.Multiplicity))
 		}
 		w.line(strings.Join(facts, " · "))
-		for _, m := range g.Missing {
-			msg := "Missing group " + w.code(m.Group) + " approximated by " + w.code(m.Approximation)
-			if m.Note != "" {
-				msg += " (" + m.Note + ")"
-			}
-			w.line(msg)
+		for _, m := range e.Flags() {
+			w.line("Missing group " + w.code(analysis.FlagText(m)))
 		}
 	}
 	if e.Uncertainty > 0 {
