@@ -166,6 +166,34 @@ func (r *Result) FillPlan() ([]Edit, []Skip) {
 	return out, skips
 }
 
+// IncludedWithoutThermo returns the species declared in included files (not
+// the analysed file) that have no usable thermo block, in analysis order,
+// with what fill on their own file would do: fill writes only the file it is
+// given, so these stay without a block.
+func (r *Result) IncludedWithoutThermo() []Skip {
+	var out []Skip
+	for _, sp := range r.Species {
+		if sp.File == r.Path || sp.Given != nil {
+			continue
+		}
+		reason := "declared in an included file: fill writes only the file it is given; run kiln fill on that file to insert its block"
+		if !fillable(sp) {
+			reason = "declared in an included file (fill writes only the file it is given), and it cannot be filled there either: " + skipReason(sp)
+		}
+		out = append(out, Skip{Species: sp, Reason: reason})
+	}
+	return out
+}
+
+// fillable reports whether an estimated nasa7 block can be written for sp.
+func fillable(sp *Species) bool {
+	if sp.Estimate == nil || sp.brokenBlock || sp.SMILESError != nil || sp.Decl.SMILES == nil || sp.estimateErr != nil {
+		return false
+	}
+	_, _, err := sp.Estimate.NASA7()
+	return err == nil
+}
+
 // skipReason says why no block can be inserted for sp.
 func skipReason(sp *Species) string {
 	switch {

@@ -233,7 +233,7 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction, start int) {
 	if v := worstCollision(m.fwdOrder, ms, hs, m.forward, pressures, m.PressureDependent(), set); v != nil {
 		r.Collision = v
 		r.diags = append(r.diags, speciesfile.Diagnostic{Span: inStmt(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
-			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K%s", v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v))})
+			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K%s%s", v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v), termolecularNote(v, d.Reactants))})
 		return
 	}
 	if !d.Reversible || (m.reverse == nil && m.kc == nil) {
@@ -267,7 +267,7 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction, start int) {
 			what = "reverse rate"
 		}
 		r.diags = append(r.diags, speciesfile.Diagnostic{Span: inStmt(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
-			Message: fmt.Sprintf("%s, %.3g, exceeds the collision limit %.3g (%s) at %.0f K%s", what, v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v))})
+			Message: fmt.Sprintf("%s, %.3g, exceeds the collision limit %.3g (%s) at %.0f K%s%s", what, v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v), termolecularNote(v, d.Products))})
 	}
 }
 
@@ -311,6 +311,26 @@ func reverseBound(m *rateModel, r *Reaction) (kr func(T, P float64) float64, exa
 }
 
 // atPressure is ", 0.1 bar (N2 bath)" for a pressure-dependent violation.
+// termolecularNote explains a termolecular bound (kinetics.CollisionLimit)
+// in a message, naming the two molecules of ts (the side checked, as
+// sizes expands it) whose collision rate bounds it; "" for other orders.
+func termolecularNote(v *kinetics.Violation, ts []speciesfile.Term) string {
+	if v.Order != 3 {
+		return ""
+	}
+	var names []string
+	for _, t := range ts {
+		for k := 0; k < int(math.Round(t.Coeff)); k++ {
+			names = append(names, t.Name.Text)
+		}
+	}
+	pair := "two partners"
+	if v.Pair[0] < len(names) && v.Pair[1] < len(names) {
+		pair = names[v.Pair[0]] + " + " + names[v.Pair[1]]
+	}
+	return fmt.Sprintf(" (termolecular sanity bound: at 1 bar, k·[M] would outrun the %s collision rate; use a falloff form if the rate is a low-pressure limit)", pair)
+}
+
 func atPressure(v *kinetics.Violation) string {
 	if v.P == 0 {
 		return ""

@@ -399,6 +399,8 @@ func (w *writer) reaction(x *Index, r *analysis.Reaction) {
 	switch {
 	case r.Collision != nil:
 		w.line("Collision limit: exceeded — " + r.Collision.Message())
+	case r.Decl != nil && r.Decl.Rate != nil && (r.ForwardOrder > 3 || (r.Decl.Reversible && r.ReverseOrder > 3)):
+		w.line("Collision limit: not checked (no bound for steps of more than three molecules).")
 	case r.Decl != nil && r.Decl.Rate != nil:
 		w.line("Collision limit: within the bound at 300–2500 K.")
 	default:

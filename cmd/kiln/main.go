@@ -159,7 +159,10 @@ Usage:
         --tmid/--thigh apply to every block, reference-library species included
         (refitted; a THIGH beyond the reference data is refused). Species that
         get no block are listed on stderr with the reason, and the exit code is
-        then 1. --dry-run prints a unified diff instead of writing the file.
+        then 1; positions are those of the filled file, with or without
+        --dry-run. Species of included files without thermo are listed as not
+        filled (fill only writes FILE). --dry-run prints a unified diff
+        instead of writing the file.
         The file is replaced atomically (through a symbolic link, its target),
         keeping its permissions; a file its owner may not write is refused.
   kiln plot SPECIES --file FILE -o OUT.svg
