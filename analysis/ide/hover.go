@@ -329,6 +329,9 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		}
 		w.line(unc)
 	}
+	if g != nil && g.UncertaintyS298 > 0 {
+		w.line("S°298 uncertainty at least ±" + w.u.entropy(g.UncertaintyS298) + " (approximations that change S°)")
+	}
 	if _, fit, err := e.NASA7(); err != nil {
 		w.line("NASA-7 fit failed: " + err.Error())
 	} else if fit.MaxCpResidual > 0 {

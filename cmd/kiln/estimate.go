@@ -269,7 +269,11 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	} else {
 		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), tabulated: its uncertainty is the source's\n", u.Energy(est.Hf298), other.Energy(est.Hf298))
 	}
-	fmt.Fprintf(w, "  S°298   = %s (%s)\n", u.Entropy(est.S298), other.Entropy(est.S298))
+	if g := est.Group; g != nil && g.UncertaintyS298 > 0 {
+		fmt.Fprintf(w, "  S°298   = %s (%s), ± %s at least, 1σ: from the approximations that change S°\n", u.Entropy(est.S298), other.Entropy(est.S298), u.Entropy(g.UncertaintyS298))
+	} else {
+		fmt.Fprintf(w, "  S°298   = %s (%s)\n", u.Entropy(est.S298), other.Entropy(est.S298))
+	}
 	fmt.Fprintf(w, "  Cp in %s:", u.EntropyName())
 	for i, T := range benson.StdTemps {
 		fmt.Fprintf(w, " %gK %s", T, f2(u.EntropyValue(est.Cp[i])))
