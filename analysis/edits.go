@@ -198,8 +198,11 @@ func fillable(sp *Species) bool {
 func skipReason(sp *Species) string {
 	switch {
 	case sp.brokenBlock:
-		return "its thermo block has a syntax error; fix or delete the block"
+		return "its thermo block has " + sp.blockFault() + "; fix or delete the block"
 	case sp.SMILESError != nil:
+		if sp.SMILESError == ErrStructurePending {
+			return ErrStructurePending.Error()
+		}
 		return "bad SMILES: " + smilesReason(sp.SMILESError)
 	case sp.Decl.SMILES == nil:
 		return "no structure (SMILES) to estimate from; add a nasa7 or thermo-table block"

@@ -3,6 +3,7 @@ package analysis
 import (
 	"context"
 	"fmt"
+	"math"
 	"sort"
 	"strconv"
 	"strings"
@@ -205,6 +206,15 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 // an override such as `symmetry 99999999999999` (S falls by R ln σ) does,
 // and a number that cannot be true is not reported as an estimate.
 func physical(g *benson.Result) error {
+	finite := !math.IsInf(g.Hf298, 0) && !math.IsNaN(g.Hf298) && !math.IsInf(g.S298, 0)
+	for _, cp := range g.Cp {
+		finite = finite && !math.IsInf(cp, 0)
+	}
+	if !finite {
+		// Only a `group` statement with an enormous value gets here: the
+		// sum overflows, and an infinity is never reported as a value.
+		return fmt.Errorf("the estimate is not a finite number (its group values add up to more than a float64 holds: check the `group` statements it uses)")
+	}
 	if !(g.S298 > 0) {
 		return fmt.Errorf("the estimate is not physical: S°298 = %.2f J/(mol K) ≤ 0 (symmetry number %s, optical isomers %d: check any symmetry or optical-isomers override)", g.S298, g.Sigma(), g.OpticalIsomers)
 	}

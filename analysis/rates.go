@@ -3,6 +3,7 @@ package analysis
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"kiln.dev/kiln/engine/kinetics"
 	"kiln.dev/kiln/speciesfile"
@@ -375,7 +376,7 @@ func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.RelSpan
 	if tr := d.Troe; tr != nil && m.falloff != nil && m.falloff.Troe != nil {
 		for _, T := range grid {
 			if fc := m.falloff.Troe.Fcent(T); !(fc > 0) || math.IsInf(fc, 0) {
-				return tr.Span, fmt.Sprintf("troe parameters give Fcent = %.3g at %.0f K: the broadening centre must be positive and finite, so the falloff rate cannot be evaluated and is not used", fc, T)
+				return tr.Span, fmt.Sprintf("troe parameters give Fcent = %s at %.0f K: the broadening centre must be positive and finite, so the falloff rate cannot be evaluated and is not used", rateText(fc), T)
 			}
 		}
 	}
@@ -389,8 +390,21 @@ func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.RelSpan
 			continue
 		}
 		if !(k > 0) || math.IsInf(k, 0) {
-			return span, fmt.Sprintf("the forward rate constant is %.3g at %.0f K%s: a rate constant must be a positive finite number, so this rate is not used", k, T, at)
+			return span, fmt.Sprintf("the forward rate constant is %s at %.0f K%s: a rate constant must be a positive finite number, so this rate is not used", rateText(k), T, at)
 		}
 	}
 	return span, ""
+}
+
+// rateText writes a rate constant or falloff parameter in a message with 3
+// significant digits, and words one that is not a finite number ("+Inf" is
+// not for people).
+func rateText(v float64) string {
+	switch {
+	case math.IsInf(v, 0):
+		return "too large for a 64-bit float (it overflows)"
+	case math.IsNaN(v):
+		return "not a number (its parameters overflow)"
+	}
+	return strconv.FormatFloat(v, 'g', 3, 64)
 }

@@ -18,7 +18,7 @@ func TestRefusalMessage(t *testing.T) {
 	res := analyzeText(t, "species Z C[Si](C)(C)C\nspecies W CC[N+](C)(C)C\n")
 	msgs := messagesWithCode(res, speciesfile.CodeMissingThermo)
 	require.Len(t, msgs, 2, "%v", res.Diagnostics)
-	assert.Contains(t, msgs[0], "Z has no thermo block and kiln cannot estimate it: atom 1 (C) has a neighbour of type Si")
+	assert.Contains(t, msgs[0], "Z has no thermo block and kiln cannot estimate it: atom 2 (Si): unsupported element Si")
 	assert.Contains(t, msgs[1], "atom 3 (N) has charge +1")
 	for _, m := range msgs {
 		assert.NotContains(t, m, "benson")

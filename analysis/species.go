@@ -469,15 +469,22 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 }
 
 // hasUsableBlock reports whether declaration d has a thermo block without
-// syntax errors: a block the reader could not read completely is not data.
+// syntax errors and without values that overflow (overflowSpan): a block the
+// reader could not read completely, or that kiln cannot evaluate, is not data.
 func (a *analysis) hasUsableBlock(path string, d *speciesfile.Species) bool {
-	switch {
-	case d.NASA7 != nil:
-		return !a.errorIn(path, d.NASA7.Span)
-	case d.Table != nil:
-		return !a.errorIn(path, d.Table.Span)
+	if d.NASA7 == nil && d.Table == nil {
+		return false
 	}
-	return false
+	_, _, finite := overflowSpan(d)
+	return finite && !a.errorIn(path, blockSpan(d))
+}
+
+// blockSpan is the span of d's thermo block (d has one).
+func blockSpan(d *speciesfile.Species) speciesfile.RelSpan {
+	if d.NASA7 != nil {
+		return d.NASA7.Span
+	}
+	return d.Table.Span
 }
 
 // given converts the species' own thermo block, if any. A block with a
@@ -487,6 +494,11 @@ func (a *analysis) given(path string, sp *Species) {
 	d := sp.Decl
 	if (d.NASA7 != nil || d.Table != nil) && !a.hasUsableBlock(path, d) {
 		sp.brokenBlock = true
+		if tok, msg, ok := overflowSpan(d); !ok && !a.errorIn(path, blockSpan(d)) {
+			a.report(path, speciesfile.Diagnostic{Span: a.at(tok.Span), Severity: speciesfile.SeverityError, Code: speciesfile.CodeNonphysicalThermo,
+				Message: sp.Name + ": " + msg})
+			sp.overflowBlock = true
+		}
 		return
 	}
 	switch {
@@ -543,7 +555,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 	if sp.Given == nil {
 		block := "no thermo block"
 		if sp.brokenBlock {
-			block = "its thermo block has a syntax error and is ignored"
+			block = "its thermo block has " + sp.blockFault() + " and is ignored"
 		}
 		if sp.Estimate != nil {
 			sp.Source = SourceEstimate
@@ -563,7 +575,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		}
 		what := "has no thermo block"
 		if sp.brokenBlock {
-			what = "has no usable thermo block (the syntax error above)"
+			what = "has no usable thermo block (" + sp.blockFault() + ", reported above)"
 		}
 		a.report(path, speciesfile.Diagnostic{Span: a.at(d.Name.Span), Severity: speciesfile.SeverityError, Code: speciesfile.CodeMissingThermo,
 			Message: fmt.Sprintf("%s %s and %s; add a nasa7 or thermo-table block", sp.Name, what, why)})

@@ -10,6 +10,7 @@ import (
 	"kiln.dev/kiln/analysis"
 	"kiln.dev/kiln/engine/benson"
 	"kiln.dev/kiln/engine/nasa"
+	"kiln.dev/kiln/internal/wording"
 	"kiln.dev/kiln/speciesfile"
 )
 
@@ -61,7 +62,7 @@ func Hover(x *Index, file string, off int, s analysis.Settings, markdown bool) (
 			f := x.File(o.IncludePath)
 			w.line("include " + w.code(o.Name) + " → " + o.IncludePath)
 			if f != nil {
-				w.line(fmt.Sprintf("%d species, %d reactions, %d groups", len(f.Species), len(f.Reactions), len(f.Groups)))
+				w.line(wording.CountAs(len(f.Species), "species", "species") + ", " + wording.Count(len(f.Reactions), "reaction") + ", " + wording.Count(len(f.Groups), "group"))
 			}
 		}
 	default:
@@ -226,7 +227,10 @@ func (w *writer) species(sp *analysis.Species) {
 	if len(facts) > 0 {
 		w.line(strings.Join(facts, " · "))
 	}
-	if sp.SMILESError != nil {
+	switch {
+	case sp.SMILESError == analysis.ErrStructurePending:
+		w.line("S" + strings.TrimPrefix(sp.SMILESError.Error(), "s")) // "Structure not given yet: …"
+	case sp.SMILESError != nil:
 		w.line("Structure not readable: " + sp.SMILESError.Error())
 	}
 	est, giv := estimateValues(sp.Estimate), givenValues(sp.Given)

@@ -14,6 +14,7 @@ import (
 	"unicode/utf8"
 
 	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/internal/wording"
 )
 
 // compareJSON is the output of `kiln compare --json`; the keys are a public
@@ -428,8 +429,8 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 		}
 	}
 	s := o.Summary
-	fmt.Fprintf(w, "A: %s (%d species, %d reactions)\n", o.A.File, o.A.Species, o.A.Reactions)
-	fmt.Fprintf(w, "B: %s (%d species, %d reactions)\n", o.B.File, o.B.Species, o.B.Reactions)
+	fmt.Fprintf(w, "A: %s (%d species, %s)\n", o.A.File, o.A.Species, wording.Count(o.A.Reactions, "reaction"))
+	fmt.Fprintf(w, "B: %s (%d species, %s)\n", o.B.File, o.B.Species, wording.Count(o.B.Reactions, "reaction"))
 	for _, f := range []compareFile{o.A, o.B} {
 		if f.Errors > 0 {
 			fmt.Fprintf(w, "note: %s has %d syntax or structure error(s); broken statements were left out (`kiln check` lists every problem)\n", clip(filepath.Base(f.File), 40), f.Errors)
@@ -494,7 +495,7 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 				flagged[f] = true
 			}
 			cell := func(v, scale float64, key string) string {
-				c := fmt.Sprintf("%+.2f", v/scale)
+				c := analysis.FormatSigned(v/scale, 2)
 				if flagged[key] {
 					c += "*"
 				} else {

@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -69,6 +70,9 @@ type correctionJSON struct {
 type errorJSON struct {
 	Message  string `json:"message"`
 	Position *int   `json:"position"`
+	// hint is a line of advice for the text output (the message itself
+	// is worded as check words it).
+	hint string
 }
 
 type nasaJSON struct {
@@ -155,6 +159,10 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 	est, err := ws.EstimateMolecule(m, opts)
 	if err != nil {
 		r.Error = &errorJSON{Message: "kiln cannot estimate it: " + analysis.RefusalReason(err)}
+		if ue := (*benson.UnsupportedError)(nil); errors.As(err, &ue) && ue.Element != "" {
+			// Nothing kiln can do: say where the thermo has to come from.
+			r.Error.hint = "a species with " + ue.Element + " needs its thermo given in a nasa7 or thermo-table block of its .kiln file"
+		}
 		return r, nil
 	}
 	r.Hf298 = ptr(jnum(est.Hf298 / 1000))
@@ -221,11 +229,14 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 			fmt.Fprintf(w, "    %s\n    %s^\n", r.Input, strings.Repeat(" ", *r.Error.Position-1))
 		} else {
 			fmt.Fprintf(w, "  error: %s\n", r.Error.Message)
+			if r.Error.hint != "" {
+				fmt.Fprintf(w, "  %s\n", r.Error.hint)
+			}
 		}
 		return
 	}
 	other := analysis.Units{KJ: !u.KJ}
-	f2 := func(v float64) string { return strconv.FormatFloat(v, 'f', 2, 64) }
+	f2 := func(v float64) string { return analysis.FormatFixed(v, 2) }
 	fmt.Fprintf(w, "  formula %s, molar mass %.3f g/mol\n", *r.Formula, *r.MolarMass)
 	if g := est.Group; g != nil {
 		var rows [][]string

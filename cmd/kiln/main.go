@@ -181,7 +181,9 @@ Usage:
   kiln equilibrium FILE --mix "NAME:AMOUNT, ..." [--temperature K] [--pressure P]
                    [--adiabatic] [--volume] [--json]
         Equilibrium composition over the file's species by Gibbs-energy
-        minimisation, from the file's own thermo. --temperature (default
+        minimisation, from the file's own thermo. --mix lists species and
+        amounts (mol, any scale), items separated by commas or blanks:
+        "CH4:1, O2:2, N2:7.52" or "CH4:1 O2:2 N2:7.52". --temperature (default
         298.15 K) and --pressure (default 1atm; units atm, bar, Pa, kPa, Torr)
         give the state of the mix; --adiabatic finds the flame temperature
         (constant enthalpy, or constant internal energy with --volume);

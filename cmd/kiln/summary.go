@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"io"
+	"math"
 	"sort"
 	"strconv"
 	"strings"
@@ -182,9 +183,10 @@ func summaryReactionOf(res *analysis.Result, r *analysis.Reaction, P float64) su
 	return row
 }
 
-// sciText writes a value with 3 significant digits ("—" for none).
+// sciText writes a value with 3 significant digits ("—" for none, and
+// for a value that is not a finite number, as FormatFixed does).
 func sciText(p *float64) string {
-	if p == nil {
+	if p == nil || math.IsInf(*p, 0) || math.IsNaN(*p) {
 		return "—"
 	}
 	return strconv.FormatFloat(*p, 'g', 3, 64)
@@ -199,7 +201,7 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		if p == nil {
 			return "—"
 		}
-		return strconv.FormatFloat(conv(*p), 'f', 2, 64)
+		return analysis.FormatFixed(conv(*p), 2)
 	}
 	energy := func(kj *float64) string {
 		return fixed(kj, func(v float64) float64 { return u.EnergyValue(v * 1000) })
@@ -261,7 +263,7 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		}
 		factor := ""
 		if f := reverseFactor(r); f != nil {
-			factor = strconv.FormatFloat(*f, 'f', 2, 64)
+			factor = analysis.FormatFixed(*f, 2)
 		}
 		rows = append(rows, []string{reactionLine(r), shorten(r.Equation, 44), kf, kr, factor, limit})
 	}
