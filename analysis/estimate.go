@@ -304,6 +304,35 @@ func chainLinear(m *molecule.Molecule) bool {
 	return true
 }
 
+// Flags returns the approximations an estimate carries (missing groups,
+// radical-site increments without S°/Cp data, ring systems without
+// whole-system values, sums below the physical S° bound …), sorted by name:
+// the one list that check, estimate, summary and hover show, each entry
+// worded by FlagText. A reference-library species has none.
+func (e *Estimate) Flags() []benson.Missing {
+	if e == nil {
+		return nil
+	}
+	return sortedMissing(e.Group)
+}
+
+// FlagText words one approximation the same way in every command: the
+// group or quantity, what stands in for it and why.
+func FlagText(m benson.Missing) string {
+	s := m.Group
+	if m.Approximation != "" {
+		s += " (approximated by " + m.Approximation
+		if m.Note != "" {
+			s += ": " + m.Note
+		}
+		return s + ")"
+	}
+	if m.Note != "" {
+		s += " (" + m.Note + ")"
+	}
+	return s
+}
+
 // sortedMissing lists the missing groups of an estimate by name.
 func sortedMissing(g *benson.Result) []benson.Missing {
 	if g == nil || len(g.Missing) == 0 {

@@ -439,25 +439,15 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 		return
 	}
 	sp.Estimate = e
-	if miss := sortedMissing(e.Group); len(miss) > 0 {
+	if miss := e.Flags(); len(miss) > 0 {
 		// Group values the user can supply with a `group` statement, and
-		// other approximations (radical sites, ring systems, delocalisation)
-		// that only a thermo block replaces.
+		// other approximations (radical sites and their S°/Cp increments,
+		// ring systems, delocalisation, S° below its physical bound) that
+		// only a thermo block replaces. Every flag of the estimate is
+		// reported, worded as estimate, summary and hover word it.
 		var groups, others []string
 		for _, m := range miss {
-			if isHBINote(m) {
-				// Untabulated radical S/Cp increments are not a group the
-				// user can supply: the hover and estimate output list them.
-				continue
-			}
-			s := m.Group
-			if m.Approximation != "" {
-				s += " (approximated by " + m.Approximation
-				if m.Note != "" {
-					s += ": " + m.Note
-				}
-				s += ")"
-			}
+			s := FlagText(m)
 			if _, err := benson.ParseGroupName(m.Group); err == nil {
 				groups = append(groups, s)
 			} else {
@@ -477,10 +467,6 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 		}
 	}
 }
-
-// isHBINote reports whether a missing entry is the note that a radical
-// site's entropy and heat-capacity increments are not tabulated.
-func isHBINote(m benson.Missing) bool { return strings.HasPrefix(m.Group, "HBI ") }
 
 // hasUsableBlock reports whether declaration d has a thermo block without
 // syntax errors and without values that overflow (overflowSpan): a block the
@@ -674,7 +660,6 @@ func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.R
 	g, e := sp.Given, sp.Estimate
 	lo, hi := g.Range()
 	var temps []float64
-	ref := e.curve()
 	what := "estimated"
 	if e.Library != "" {
 		what = "reference"
@@ -689,6 +674,62 @@ func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.R
 			}
 		}
 	}
+	m := a.worstMismatch(g, e.curve(), temps)
+	if !m.cpOver(a.set) && !m.hOver(a.set) {
+		return
+	}
+	if e.Library == "" {
+		// kiln's estimate exists in two evaluations: its group values
+		// (above) and the NASA-7 polynomial it writes for them (`fill`, the
+		// quick fix, `estimate --nasa`), which departs from them by the
+		// fit's residual. A block within the thresholds of the polynomial
+		// kiln itself writes is accepted: what fill writes, check accepts.
+		if w, ok := e.written().(*nasa.NASA7); ok {
+			if f := a.worstMismatch(g, w, temps); !f.cpOver(a.set) && !f.hOver(a.set) {
+				return
+			}
+		}
+	}
+	if m.cpOver(a.set) {
+		cpSpan := span
+		if t := sp.Decl.Table; t != nil && len(t.Cp) > 0 {
+			// A table's Cp mismatch points at the tabulated value nearest
+			// the worst temperature.
+			best := t.Cp[0]
+			for _, p := range t.Cp {
+				if math.Abs(p.T.SI-m.cpT) < math.Abs(best.T.SI-m.cpT) {
+					best = p
+				}
+			}
+			cpSpan = speciesfile.RelSpan{From: best.T.Tok.Span.From, To: best.Cp.Tok.Span.To}
+		}
+		a.report(path, speciesfile.Diagnostic{Span: a.at(cpSpan), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+			Message: fmt.Sprintf("%s: Cp at %g K given %s vs %s %s (difference %s, threshold %s)",
+				sp.Name, m.cpT, a.entropy(m.cpGiven), what, a.entropy(m.cpRef), a.entropy(m.cp), a.entropy(a.set.MismatchCp))})
+		return
+	}
+	a.report(path, speciesfile.Diagnostic{Span: a.at(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+		Message: fmt.Sprintf("%s: H(%g K) − H(298 K) given %s vs %s %s (difference %s, threshold %s)",
+			sp.Name, m.hT, a.energy(m.hGiven), what, a.energy(m.hRef), a.energy(m.h), a.energy(a.set.MismatchHf298))})
+}
+
+// mismatch is the worst difference between a given block and a reference
+// curve over a set of temperatures: Cp, and H(T) − H(298.15 K).
+type mismatch struct {
+	cp, cpT, cpGiven, cpRef float64
+	h, hT, hGiven, hRef     float64
+}
+
+// cpOver and hOver report whether the worst Cp or H difference is above its
+// threshold (H is reported only when Cp is within its own: a Cp difference
+// is the root cause).
+func (m mismatch) cpOver(s Settings) bool { return math.Abs(m.cp) > s.MismatchCp }
+func (m mismatch) hOver(s Settings) bool {
+	return !m.cpOver(s) && math.Abs(m.h) > s.MismatchHf298
+}
+
+// worstMismatch compares given block g with ref at temps.
+func (a *analysis) worstMismatch(g *GivenThermo, ref thermoCurve, temps []float64) mismatch {
 	givenH := func(T float64) (float64, bool) {
 		switch {
 		case g.Poly != nil:
@@ -698,44 +739,21 @@ func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.R
 		}
 		return 0, false
 	}
-	var worstCp, worstCpT, cpGiven, cpRef float64
-	var worstH, worstHT, hGiven, hRef float64
+	var m mismatch
 	for _, T := range temps {
 		if c, ok := g.CpAt(T); ok {
-			if d := c - ref.Cp(T); math.Abs(d) > math.Abs(worstCp) {
-				worstCp, worstCpT, cpGiven, cpRef = d, T, c, ref.Cp(T)
+			if d := c - ref.Cp(T); math.Abs(d) > math.Abs(m.cp) {
+				m.cp, m.cpT, m.cpGiven, m.cpRef = d, T, c, ref.Cp(T)
 			}
 		}
 		if h, ok := givenH(T); ok && T > T298 {
 			r := ref.H(T) - ref.H(T298)
-			if d := h - r; math.Abs(d) > math.Abs(worstH) {
-				worstH, worstHT, hGiven, hRef = d, T, h, r
+			if d := h - r; math.Abs(d) > math.Abs(m.h) {
+				m.h, m.hT, m.hGiven, m.hRef = d, T, h, r
 			}
 		}
 	}
-	if math.Abs(worstCp) > a.set.MismatchCp {
-		cpSpan := span
-		if t := sp.Decl.Table; t != nil && len(t.Cp) > 0 {
-			// A table's Cp mismatch points at the tabulated value nearest
-			// the worst temperature.
-			best := t.Cp[0]
-			for _, p := range t.Cp {
-				if math.Abs(p.T.SI-worstCpT) < math.Abs(best.T.SI-worstCpT) {
-					best = p
-				}
-			}
-			cpSpan = speciesfile.RelSpan{From: best.T.Tok.Span.From, To: best.Cp.Tok.Span.To}
-		}
-		a.report(path, speciesfile.Diagnostic{Span: a.at(cpSpan), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
-			Message: fmt.Sprintf("%s: Cp at %g K given %s vs %s %s (difference %s, threshold %s)",
-				sp.Name, worstCpT, a.entropy(cpGiven), what, a.entropy(cpRef), a.entropy(worstCp), a.entropy(a.set.MismatchCp))})
-		return
-	}
-	if math.Abs(worstH) > a.set.MismatchHf298 {
-		a.report(path, speciesfile.Diagnostic{Span: a.at(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
-			Message: fmt.Sprintf("%s: H(%g K) − H(298 K) given %s vs %s %s (difference %s, threshold %s)",
-				sp.Name, worstHT, a.energy(hGiven), what, a.energy(hRef), a.energy(worstH), a.energy(a.set.MismatchHf298))})
-	}
+	return m
 }
 
 // problemMessage describes a defect of a polynomial in the display units,

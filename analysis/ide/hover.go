@@ -322,12 +322,8 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 			facts = append(facts, fmt.Sprintf("multiplicity = %d", g.Multiplicity))
 		}
 		w.line(strings.Join(facts, " · "))
-		for _, m := range g.Missing {
-			msg := "Missing group " + w.code(m.Group) + " approximated by " + w.code(m.Approximation)
-			if m.Note != "" {
-				msg += " (" + m.Note + ")"
-			}
-			w.line(msg)
+		for _, m := range e.Flags() {
+			w.line("Missing group " + w.code(analysis.FlagText(m)))
 		}
 	}
 	if e.Uncertainty > 0 {
@@ -336,6 +332,9 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 			unc += " (class " + g.Class + ")"
 		}
 		w.line(unc)
+	}
+	if g != nil && g.UncertaintyS298 > 0 {
+		w.line("S°298 uncertainty at least ±" + w.u.entropy(g.UncertaintyS298) + " (approximations that change S°)")
 	}
 	if _, fit, err := e.NASA7(); err != nil {
 		w.line("NASA-7 fit failed: " + analysis.FitRefusal(err, analysis.Units{KJ: !w.u.kcal}))

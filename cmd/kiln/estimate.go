@@ -31,6 +31,13 @@ type estimateJSON struct {
 	SymmetryNumber *json.Number     `json:"symmetry_number"` // exact integer of any size
 	OpticalIsomers *int             `json:"optical_isomers"`
 	MissingGroups  []string         `json:"missing_groups"`
+	// Flags words each entry of missing_groups as check, summary and hover
+	// word it (extension; analysis.FlagText).
+	Flags []string `json:"flags,omitempty"`
+	// UncertaintyS298 is the lower bound on the standard uncertainty of
+	// S°298 from approximations that change it (extension; absent when
+	// none does).
+	UncertaintyS298 *float64 `json:"uncertainty_s298_j_mol_k,omitempty"`
 	// ResonanceForm is the canonical SMILES of the resonance structure
 	// estimated, for a radical with several (engine/benson/resonance.go).
 	ResonanceForm string `json:"resonance_form,omitempty"`
@@ -172,8 +179,12 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		for _, t := range g.Corrections {
 			r.Corrections = append(r.Corrections, correctionJSON{Name: t.Name, Count: t.Count, Hf298: jnum(t.Hf298 / 1000), S298: jnum(t.S298)})
 		}
-		for _, ms := range g.Missing {
+		for _, ms := range est.Flags() {
 			r.MissingGroups = append(r.MissingGroups, ms.Group)
+			r.Flags = append(r.Flags, analysis.FlagText(ms))
+		}
+		if g.UncertaintyS298 > 0 {
+			r.UncertaintyS298 = ptr(jnum(g.UncertaintyS298))
 		}
 		r.SymmetryNumber = ptr(json.Number(g.Sigma()))
 		r.OpticalIsomers = ptr(g.OpticalIsomers)
@@ -241,8 +252,8 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		if g.Form != "" {
 			fmt.Fprintf(w, "  estimated as the resonance structure %s (most stable of %d)\n", g.Form, g.ResonanceForms)
 		}
-		for _, ms := range g.Missing {
-			fmt.Fprintf(w, "  MISSING group %s: approximated by %s (%s)\n", ms.Group, ms.Approximation, ms.Note)
+		for _, ms := range est.Flags() {
+			fmt.Fprintf(w, "  MISSING group %s\n", analysis.FlagText(ms))
 		}
 		if withSources {
 			fmt.Fprintln(w, "  sources:")
@@ -270,7 +281,11 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	} else {
 		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), tabulated: its uncertainty is the source's\n", u.Energy(est.Hf298), other.Energy(est.Hf298))
 	}
-	fmt.Fprintf(w, "  S°298   = %s (%s)\n", u.Entropy(est.S298), other.Entropy(est.S298))
+	if g := est.Group; g != nil && g.UncertaintyS298 > 0 {
+		fmt.Fprintf(w, "  S°298   = %s (%s), ± %s at least, 1σ: from the approximations that change S°\n", u.Entropy(est.S298), other.Entropy(est.S298), u.Entropy(g.UncertaintyS298))
+	} else {
+		fmt.Fprintf(w, "  S°298   = %s (%s)\n", u.Entropy(est.S298), other.Entropy(est.S298))
+	}
 	fmt.Fprintf(w, "  Cp in %s:", u.EntropyName())
 	for i, T := range benson.StdTemps {
 		fmt.Fprintf(w, " %gK %s", T, f2(u.EntropyValue(est.Cp[i])))

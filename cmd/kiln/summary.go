@@ -30,6 +30,10 @@ type summarySpecies struct {
 	Hf298            *float64   `json:"hf298_kj_mol"`
 	S298             *float64   `json:"s298_j_mol_k"`
 	Cp               numericMap `json:"cp_j_mol_k"` // null where the block does not reach
+	// Flags are the approximations of an estimated species, worded as
+	// check, estimate and hover word them (extension; absent when none or
+	// when the thermo comes from the file).
+	Flags []string `json:"flags,omitempty"`
 }
 
 type summaryReaction struct {
@@ -118,6 +122,11 @@ func buildSummary(results []*analysis.Result) summaryJSON {
 		row := summarySpecies{Name: sp.Name, ThermoSource: string(sp.Source)}
 		if sp.Source == analysis.SourceEstimate && sp.Estimate != nil {
 			row.ReferenceLibrary = sp.Estimate.Library
+		}
+		// The estimate's flags whenever kiln estimated the species, as
+		// check reports them (its missing-group diagnostic).
+		for _, m := range sp.Estimate.Flags() {
+			row.Flags = append(row.Flags, analysis.FlagText(m))
 		}
 		if sp.Decl.SMILES != nil {
 			row.SMILES = ptr(sp.Decl.SMILES.Text)
@@ -224,6 +233,11 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 			entropy(sp.Cp["300"]), entropy(sp.Cp["1000"]), entropy(sp.Cp["1500"])})
 	}
 	writeTable(w, "", []string{"name", "formula", "thermo", "ΔHf°298", "S°298", "Cp(300)", "Cp(1000)", "Cp(1500)"}, rows)
+	for _, sp := range s.Species {
+		for _, f := range sp.Flags {
+			writeWrapped(w, "  ", sp.Name+": MISSING group "+f)
+		}
+	}
 
 	fmt.Fprintf(w, "\nReactions (%d); ΔH°r and ΔG°r at 298 K in %s, Kp at 1 bar\n", len(s.Reactions), u.EnergyName())
 	rows = rows[:0]

@@ -138,6 +138,16 @@ type Result struct {
 	// there is only one).
 	Form           string
 	ResonanceForms int
+
+	// UncertaintyS298 is a lower bound on the standard uncertainty (1σ) of
+	// S°298 in J/(mol K) from the approximations that change S° (ring
+	// systems without a whole-system S°; see addRingCorrections); 0 when
+	// none does. kiln has no measured class error for S°, so 0 is not a
+	// claim of exactness.
+	UncertaintyS298 float64
+
+	// sFloor is the physical lower bound on S°298 (sfloor.go), J/(mol K).
+	sFloor float64
 }
 
 // Sigma returns σ in decimal, exact for any size.
@@ -305,6 +315,7 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 
 	est.Class = classify(m, g)
+	est.sFloor = entropyFloor(m, lnSigma, est.Multiplicity)
 	est.finish()
 	return est, nil
 }
@@ -360,8 +371,14 @@ func (e *Result) finish() {
 	for _, t := range e.Corrections {
 		e.add(t)
 	}
+	added := false
 	if f, ok := cpFalls(e); ok && !slices.ContainsFunc(e.Missing, func(m Missing) bool { return m.Group == cpFallsGroup }) {
-		e.Missing = append(e.Missing, f)
+		e.Missing, added = append(e.Missing, f), true
+	}
+	if f, ok := entropyFloorFlag(e); ok && !slices.ContainsFunc(e.Missing, func(m Missing) bool { return m.Group == entropyFloorGroup }) {
+		e.Missing, added = append(e.Missing, f), true
+	}
+	if added {
 		slices.SortStableFunc(e.Missing, func(a, b Missing) int {
 			return cmp.Or(strings.Compare(a.Group, b.Group), strings.Compare(a.Approximation, b.Approximation), strings.Compare(a.Note, b.Note))
 		})

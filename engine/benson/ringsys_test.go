@@ -96,7 +96,11 @@ func TestStrainedSystems(t *testing.T) {
 	} {
 		e := estimate(t, c.smiles, Options{})
 		assert.InDelta(t, c.hf, e.Hf298/4184, 0.5, c.name)
-		assert.Empty(t, e.Missing, c.name)
+		for _, m := range e.Missing {
+			// ΔHf° from the table: only S°/Cp flags (no whole-system S°
+			// or Cp; cubane's group sum below the entropy bound).
+			assert.True(t, entropyOnly(m), "%s: %+v", c.name, m)
+		}
 	}
 }
 
