@@ -316,12 +316,27 @@ func (e *Estimate) Flags() []benson.Missing {
 	return sortedMissing(e.Group)
 }
 
+// FlagHeading is the word every command puts before FlagText: "MISSING
+// group" for an approximation, "MODELLED" for a quantity computed by a
+// validated model instead of a table (benson.Missing.Modelled), which check
+// does not warn about.
+func FlagHeading(m benson.Missing) string {
+	if m.Modelled() {
+		return "MODELLED"
+	}
+	return "MISSING group"
+}
+
 // FlagText words one approximation the same way in every command: the
 // group or quantity, what stands in for it and why.
 func FlagText(m benson.Missing) string {
 	s := m.Group
 	if m.Approximation != "" {
-		s += " (approximated by " + m.Approximation
+		verb := " (approximated by "
+		if m.Modelled() {
+			verb = " (computed by the "
+		}
+		s += verb + m.Approximation
 		if m.Note != "" {
 			s += ": " + m.Note
 		}

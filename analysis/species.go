@@ -441,12 +441,16 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 	sp.Estimate = e
 	if miss := e.Flags(); len(miss) > 0 {
 		// Group values the user can supply with a `group` statement, and
-		// other approximations (radical sites and their S°/Cp increments,
-		// ring systems, delocalisation, S° below its physical bound) that
-		// only a thermo block replaces. Every flag of the estimate is
-		// reported, worded as estimate, summary and hover word it.
+		// other approximations (radical sites, ring systems, delocalisation,
+		// S° below its physical bound) that only a thermo block replaces.
+		// Every approximation of the estimate is reported, worded as
+		// estimate, summary and hover word it; what a validated model
+		// computes (a radical site's S°/Cp change) is shown there, not here.
 		var groups, others []string
 		for _, m := range miss {
+			if m.Modelled() {
+				continue // a validated model, shown with the estimate, not a warning
+			}
 			s := FlagText(m)
 			if _, err := benson.ParseGroupName(m.Group); err == nil {
 				groups = append(groups, s)

@@ -323,7 +323,11 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		}
 		w.line(strings.Join(facts, " · "))
 		for _, m := range e.Flags() {
-			w.line("Missing group " + w.code(analysis.FlagText(m)))
+			heading := "Missing group "
+			if m.Modelled() {
+				heading = "Modelled: "
+			}
+			w.line(heading + w.code(analysis.FlagText(m)))
 		}
 	}
 	if e.Uncertainty > 0 {

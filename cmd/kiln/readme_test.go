@@ -36,7 +36,7 @@ func TestReadmeExamples(t *testing.T) {
 	tour := writeTemp(t, "tour.kiln", readmeBlock(t, "## A short tour of the format"))
 	code, stdout, stderr := runKiln(t, "check", tour)
 	assert.Equal(t, exitOK, code, stdout)
-	assert.Contains(t, stderr, "kiln check: 0 error(s), 1 warning(s)", "ethoxy's approximated S°/Cp increment")
+	assert.Contains(t, stderr, "kiln check: 0 error(s), 0 warning(s)")
 
 	// "What it looks like": the file, its diagnostics, the inserted block.
 	file := writeTemp(t, "ethanol.kiln", readmeBlock(t, "The examples below use this file"))

@@ -33,7 +33,8 @@ type summarySpecies struct {
 	// Flags are the approximations of an estimated species, worded as
 	// check, estimate and hover word them (extension; absent when none or
 	// when the thermo comes from the file).
-	Flags []string `json:"flags,omitempty"`
+	Flags    []string `json:"flags,omitempty"`
+	headings []string // FlagHeading of each flag, for the text output
 }
 
 type summaryReaction struct {
@@ -127,6 +128,7 @@ func buildSummary(results []*analysis.Result) summaryJSON {
 		// check reports them (its missing-group diagnostic).
 		for _, m := range sp.Estimate.Flags() {
 			row.Flags = append(row.Flags, analysis.FlagText(m))
+			row.headings = append(row.headings, analysis.FlagHeading(m))
 		}
 		if sp.Decl.SMILES != nil {
 			row.SMILES = ptr(sp.Decl.SMILES.Text)
@@ -234,8 +236,8 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 	}
 	writeTable(w, "", []string{"name", "formula", "thermo", "ΔHf°298", "S°298", "Cp(300)", "Cp(1000)", "Cp(1500)"}, rows)
 	for _, sp := range s.Species {
-		for _, f := range sp.Flags {
-			writeWrapped(w, "  ", sp.Name+": MISSING group "+f)
+		for i, f := range sp.Flags {
+			writeWrapped(w, "  ", sp.Name+": "+sp.headings[i]+" "+f)
 		}
 	}
 

@@ -103,6 +103,17 @@ type Missing struct {
 	Note          string // how it approximates
 }
 
+// siteModel is the Approximation of a radical site whose S°/Cp increment is
+// computed by the statistical-mechanics site model (radical.go).
+const siteModel = "statistical-mechanics site model"
+
+// Modelled reports whether m is not a missing value but a quantity kiln
+// computes by a validated model in place of a tabulated increment: the S°
+// and Cp change at a radical site (tested against published radical
+// entropies and heat capacities, testdata/thermo/radicals.tsv). Such an
+// entry is shown with the estimate but is not an approximation to warn about.
+func (m Missing) Modelled() bool { return m.Approximation == siteModel }
+
 // Result is the outcome of Estimate. Hf298, S298 and every Cp equal exactly
 // the sum of Groups and Corrections. (Go does not allow a type and a function
 // of the same name in one package, so the result type is Result.)
