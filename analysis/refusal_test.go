@@ -109,3 +109,26 @@ func TestFitRefusalFalls(t *testing.T) {
 	kj := FitRefusal(err, Units{KJ: true})
 	assert.Contains(t, kj, "by 0.15 J/(mol·K) from 526.1 J/(mol·K) at 3300 K to 526.0 J/(mol·K) at 3377 K")
 }
+
+// TestApproximationWithBlock: a species with a thermo block of its own
+// whose estimate is approximated gets the approximation as information (the
+// block is what kiln uses); without the block it is a warning.
+func TestApproximationWithBlock(t *testing.T) {
+	const smiles = "species V ClC=C(Cl)Cl\n"
+	const block = "  thermo-table\n    hf298 -4.5\n    s298 77.5\n    cp 300=19.2 400=21.6 500=23.3 600=24.5 800=26.1 1000=27.0 1500=28.0\n    source demo values\n"
+	for _, tc := range []struct {
+		text string
+		sev  speciesfile.Severity
+	}{{smiles, speciesfile.SeverityWarning}, {smiles + block, speciesfile.SeverityInformation}} {
+		res := analyzeText(t, tc.text)
+		var got []speciesfile.Diagnostic
+		for _, d := range res.Diagnostics {
+			if d.Code == speciesfile.CodeMissingGroup {
+				got = append(got, d)
+			}
+		}
+		require.Len(t, got, 1, "%v", res.Diagnostics)
+		assert.Equal(t, tc.sev, got[0].Severity, got[0].Message)
+		assert.Contains(t, got[0].Message, "Cd-(Cl)2 without halogen interactions")
+	}
+}

@@ -466,8 +466,16 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 			msg = append(msg, fmt.Sprintf("estimated with an approximation kiln has no data for: %s; its uncertainty is widened (a thermo block with measured or computed values replaces the estimate)", strings.Join(others, ", ")))
 		}
 		if len(msg) > 0 {
-			a.report(path, speciesfile.Diagnostic{Span: a.at(d.SMILES.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
-				Message: sp.Name + ": " + strings.Join(msg, "; also ")})
+			// With a usable thermo block of its own the species' thermo is
+			// the file's; the approximate estimate only serves the
+			// comparison with the block, which is worth knowing, not a
+			// warning.
+			sev, used := speciesfile.SeverityWarning, ""
+			if a.hasUsableBlock(path, d) {
+				sev, used = speciesfile.SeverityInformation, " (the file's thermo block is used; the estimate serves only the comparison with it)"
+			}
+			a.report(path, speciesfile.Diagnostic{Span: a.at(d.SMILES.Span), Severity: sev, Code: speciesfile.CodeMissingGroup,
+				Message: sp.Name + ": " + strings.Join(msg, "; also ") + used})
 		}
 	}
 }
