@@ -37,8 +37,8 @@ import (
 //   - the same statements in the same order: each one the same syntax node
 //     (the reader kept it) or a node of the same kind and body text (the
 //     reader read it again because the edit touched its leading comment
-//     lines; units statements and broken ones excepted), and the same energy
-//     unit, newline and byte order mark;
+//     lines; broken statements excepted), and the same energy unit, newline
+//     and byte order mark;
 //   - the edited bytes lie outside every statement body and every
 //     diagnostic span (a span ending where the edit starts stays, one
 //     starting where it ends moves; an empty span at either end is
@@ -163,8 +163,13 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 			if _, ok := o.(*speciesfile.Group); !ok {
 				return nil
 			}
+		case *speciesfile.Units:
+			// (read only for the file's units, compared above)
+			if _, ok := o.(*speciesfile.Units); !ok {
+				return nil
+			}
 		default:
-			return nil // units statements and broken ones: not shortcut
+			return nil // broken statements: not shortcut
 		}
 		ob, nb := o.Body().At(f0.Starts[i]), st.Body().At(f.Starts[i])
 		if !bytes.Equal(bodyText(f0, o, f0.Starts[i]), bodyText(f, st, f.Starts[i])) ||

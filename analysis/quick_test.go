@@ -203,6 +203,20 @@ func TestMovedCommentLine(t *testing.T) {
 	require.NoError(t, err)
 	require.Equal(t, 2, ws.moved)
 	require.Equal(t, digest(after), digest(again))
+	// the header comment above the units statement: the whole file is
+	// read again (every node is new), still a move
+	hdr := strings.IndexByte(text, '\n')
+	header := text[:hdr] + " (edited)" + text[hdr:]
+	ws.SetOverlay("m.kiln", []byte(header))
+	hdrMoved := ws.Quick(context.Background(), "m.kiln")
+	require.NotNil(t, hdrMoved)
+	scratch := NewWorkspace("", func(string) ([]byte, error) { return nil, fs.ErrNotExist }, DefaultSettings())
+	scratch.SetOverlay("m.kiln", []byte(header))
+	want, err := scratch.Analyze(context.Background(), "m.kiln")
+	require.NoError(t, err)
+	require.Equal(t, stripPointers(digest(want)), stripPointers(digest(hdrMoved)))
+	ws.SetOverlay("m.kiln", []byte(text))
+	require.NotNil(t, ws.Quick(context.Background(), "m.kiln"))
 	// a SMILES edit is not a move
 	k := strings.Index(text, "species M3 ") + len("species M3 ")
 	ws.SetOverlay("m.kiln", []byte(text[:k]+"CCCCO\n"+text[k+strings.IndexByte(text[k:], '\n')+1:]))
