@@ -36,7 +36,7 @@ type document struct {
 	publishMu sync.Mutex // orders diagnostics publications; guards the fields below
 	published []protocol.Diagnostic
 	hasPub    bool
-	pubBytes  int             // size of the last publication's encoding (to size the next)
+	pubBuf    []byte          // the last publication's encoding (its array encodes the next)
 	noteNames map[string]bool // species changed since open (estimate notes of large files)
 
 	mu          sync.Mutex // guards the analysis state below
@@ -406,8 +406,11 @@ func (s *server) publish(d *document, snap *snapshot, gen uint64, force bool) {
 		return
 	}
 	d.published, d.hasPub = params.Diagnostics, true
-	n, err := s.out.notify("textDocument/publishDiagnostics", params, d.pubBytes)
-	d.pubBytes = n
+	buf, err := s.out.notify("textDocument/publishDiagnostics", params, d.pubBuf)
+	d.pubBuf = buf
+	if len(params.Diagnostics) == 0 {
+		d.pubBuf = nil // (a closed document, or none to show: keep no large array)
+	}
 	if err != nil {
 		s.logger.Debug("publishDiagnostics failed", zap.Error(err))
 	}

@@ -156,19 +156,23 @@ type notification struct {
 	Params  any    `json:"params"`
 }
 
-// notify sends a notification, encoding params once, and returns the size
-// of the encoding. (conn.Notify encodes params, then the message holding
-// them again, which re-reads and compacts the encoded parameters: for a
-// large publishDiagnostics a second pass over ~1.5 MB.) sizeHint is the
-// expected size (the last one of the same kind), so that the buffer is not
-// grown by doubling. Writes are serialised with the connection's.
-func (s *stream) notify(method string, params any, sizeHint int) (int, error) {
-	buf := make([]byte, 0, max(sizeHint+sizeHint/8, 512))
-	data, err := segjson.Append(buf, notification{JSONRPC: "2.0", Method: method, Params: params}, segjson.EscapeHTML|segjson.SortMapKeys)
-	if err != nil {
-		return 0, fmt.Errorf("marshaling %s: %w", method, err)
+// notify sends a notification, encoding params once, and returns the
+// encoding. (conn.Notify encodes params, then the message holding them
+// again, which re-reads and compacts the encoded parameters: for a large
+// publishDiagnostics a second pass over ~1.5 MB.) The encoding is made in
+// buf's array (the last one of the same kind, written and no longer used),
+// grown by an eighth beyond its length when it is too small, so that a
+// publication of ~1.5 MB neither allocates again nor grows by doubling.
+// Writes are serialised with the connection's (and done when it returns).
+func (s *stream) notify(method string, params any, buf []byte) ([]byte, error) {
+	if n := len(buf); cap(buf) < n+n/8 || cap(buf) < 512 {
+		buf = make([]byte, 0, max(n+n/8, 512))
 	}
-	return len(data), s.writeRaw(data)
+	data, err := segjson.Append(buf[:0], notification{JSONRPC: "2.0", Method: method, Params: params}, segjson.EscapeHTML|segjson.SortMapKeys)
+	if err != nil {
+		return buf[:0], fmt.Errorf("marshaling %s: %w", method, err)
+	}
+	return data, s.writeRaw(data)
 }
 
 // Close closes the underlying connection.
