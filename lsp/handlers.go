@@ -106,20 +106,26 @@ func (s *server) location(l analysis.Location, snaps ...*snapshot) (protocol.Loc
 // toDiagnostics converts the diagnostics of r's file that keep accepts (all
 // when keep is nil).
 func (s *server) toDiagnostics(r *analysis.Result, keep func(speciesfile.Diagnostic) bool) []protocol.Diagnostic {
-	n := len(r.Diagnostics)
-	if keep != nil {
-		// sized exactly: most of a large file's diagnostics may be
-		// estimate notes left out
-		n = 0
+	if keep == nil {
+		out := make([]protocol.Diagnostic, 0, len(r.Diagnostics))
 		for _, d := range r.Diagnostics {
-			if keep(d) {
-				n++
-			}
+			out = append(out, s.toDiagnostic(r, d))
+		}
+		return out
+	}
+	// sized exactly: most of a large file's diagnostics may be estimate
+	// notes left out
+	kept := make([]bool, len(r.Diagnostics))
+	n := 0
+	for i, d := range r.Diagnostics {
+		if keep(d) {
+			kept[i] = true
+			n++
 		}
 	}
 	out := make([]protocol.Diagnostic, 0, n)
-	for _, d := range r.Diagnostics {
-		if keep == nil || keep(d) {
+	for i, d := range r.Diagnostics {
+		if kept[i] {
 			out = append(out, s.toDiagnostic(r, d))
 		}
 	}
