@@ -163,7 +163,11 @@ func editSMILES(e *fakeEditor, i, k int) {
 // benchEdits measures edits made by edit to the settled diagnostics of the
 // new version (published, or found unchanged), including the debounce.
 func benchEdits(b *testing.B, o fakeOptions, edit func(e *fakeEditor, i int)) {
-	text := benchText()
+	benchEditsOf(b, benchText(), o, edit)
+}
+
+// benchEditsOf is benchEdits on another text.
+func benchEditsOf(b *testing.B, text string, o fakeOptions, edit func(e *fakeEditor, i int)) {
 	e := newFakeEditor(b, map[string]string{"big.kiln": text}, o)
 	e.open("big.kiln")
 	var lat, srv []time.Duration
@@ -221,6 +225,18 @@ func BenchmarkCommentEdit20k(b *testing.B) {
 	benchEdits(b, fakeOptions{inlayHints: true}, func(e *fakeEditor, i int) {
 		at := strings.Index(e.text("big.kiln"), "\nreaction M5000 + ") + 1
 		e.typeAt("big.kiln", at, "# remark "+strconv.Itoa(i)+"\n")
+	})
+}
+
+// BenchmarkCommentTyping20k: a character typed into a comment line in the
+// middle of the file (no line is added, so no diagnostic changes and
+// nothing is published: the analysis settles unchanged).
+func BenchmarkCommentTyping20k(b *testing.B) {
+	text := benchText()
+	at := strings.Index(text, "\nreaction M5000 + ") + 1
+	text = text[:at] + "# remark \n" + text[at:]
+	benchEditsOf(b, text, fakeOptions{inlayHints: true}, func(e *fakeEditor, i int) {
+		e.typeAt("big.kiln", at+len("# remark "), string(rune('a'+i%26)))
 	})
 }
 
