@@ -192,9 +192,13 @@ func (s *server) noteChanges(d *document, prev, snap *snapshot) {
 	}
 	d.publishMu.Lock()
 	defer d.publishMu.Unlock()
-	for _, sp := range snap.result.Species {
+	ps := prev.result.Species
+	for i, sp := range snap.result.Species {
 		if len(d.noteNames) >= maxNoteNames {
 			return
+		}
+		if i < len(ps) && ps[i] == sp {
+			continue // the same value (reused by the analysis): the same unit
 		}
 		if sp.File == d.path && !sp.SameUnit(prev.result.ByName[sp.Name]) {
 			if d.noteNames == nil {
