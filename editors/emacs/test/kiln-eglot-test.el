@@ -212,8 +212,111 @@
               (kiln-bigfile-report copy r)
               (should (null (plist-get r :failures)))
               (should (= (length (plist-get r :edits)) 2))
-              (should (> (plist-get r :diagnostics) 0))))
+              (should (> (plist-get r :diagnostics) 0))
+              ;; Handed to Flymake a block at a time: each exactly once.
+              (should (= (plist-get r :diagnostics) (plist-get r :published)))))
         (delete-file copy)))))
+
+;; Diagnostics handed to Flymake a block of lines at a time.
+
+(defvar eglot--current-flymake-report-fn)
+(defvar kiln-eglot--todo)
+(defvar kiln-eglot-diagnostics-chunk-lines)
+(declare-function kiln-eglot--store-diagnostics "kiln-eglot")
+(declare-function kiln-eglot--show-diagnostics "kiln-eglot")
+(declare-function kiln-eglot--flymake-backend "kiln-eglot")
+(declare-function kiln-eglot--own-diagnostics-p "kiln-eglot")
+(declare-function flymake-diagnostic-beg "flymake")
+(declare-function flymake-diagnostic-end "flymake")
+(declare-function flymake-diagnostic-text "flymake")
+
+(defun kiln-eglot-test--diag (l0 c0 l1 c1 msg)
+  "An LSP diagnostic from L0:C0 to L1:C1 with message MSG."
+  (list :range (list :start (list :line l0 :character c0)
+                     :end (list :line l1 :character c1))
+        :severity 2 :source "kiln" :message msg))
+
+(defun kiln-eglot-test--run-timers (pred seconds)
+  "Let timers run until PRED holds or SECONDS pass."
+  (let ((deadline (+ (float-time) seconds)))
+    (while (and (not (funcall pred)) (< (float-time) deadline))
+      (accept-process-output nil 0.01)
+      (sit-for 0))
+    (funcall pred)))
+
+(ert-deftest kiln-eglot-diagnostics-in-blocks ()
+  ;; 1,000 lines, a diagnostic on every third line, some spanning lines
+  ;; across where blocks of 50 lines would end, one past the end of the
+  ;; buffer: the lines in the window are reported at once, the rest from
+  ;; timers; every diagnostic is reported once, inside its report's region;
+  ;; the regions do not overlap and cover the buffer.
+  (skip-unless (kiln-eglot-test--load))
+  (require 'kiln-eglot)
+  (with-temp-buffer
+    (dotimes (i 1000) (insert (format "species s%d CCO\n" i)))
+    (switch-to-buffer (current-buffer))
+    (goto-char (point-min))
+    (forward-line 500)
+    (set-window-start (selected-window) (point))
+    (let* ((reports nil)
+           (kiln-eglot-diagnostics-chunk-lines 50)
+           (eglot--current-flymake-report-fn
+            (lambda (diags &rest args)
+              (push (cons (plist-get args :region) diags) reports)))
+           (lsp (vconcat
+                 (cl-loop for l from 0 below 1000 by 3
+                          collect (if (= 0 (% l 49))
+                                      (kiln-eglot-test--diag l 2 (+ l 3) 4 (format "m%d" l))
+                                    (kiln-eglot-test--diag l 8 l 10 (format "m%d" l))))
+                 (list (kiln-eglot-test--diag 1200 0 1200 1 "beyond")))))
+      (kiln-eglot--store-diagnostics lsp)
+      (kiln-eglot--show-diagnostics)
+      ;; At once: one report, for the lines around the window start.
+      (should (= (length reports) 1))
+      (let ((first (car reports))
+            (wstart (window-start)))
+        (should (<= (car (car first)) wstart))
+        (should (> (cdr (car first)) wstart))
+        (should (cl-some (lambda (d) (equal (flymake-diagnostic-text d) "kiln: m501"))
+                         (cdr first))))
+      (should (kiln-eglot-test--run-timers (lambda () (null kiln-eglot--todo)) 10))
+      (should (> (length reports) 10))
+      (let ((seen (make-hash-table :test #'equal))
+            (regions nil))
+        (dolist (r reports)
+          (push (car r) regions)
+          (dolist (d (cdr r))
+            (should-not (gethash (flymake-diagnostic-text d) seen))
+            (puthash (flymake-diagnostic-text d) t seen)
+            (should (<= (car (car r)) (flymake-diagnostic-beg d)))
+            (should (or (< (flymake-diagnostic-end d) (cdr (car r)))
+                        (= (cdr (car r)) (point-max))))))
+        (should (= (hash-table-count seen) (length lsp)))
+        (setq regions (sort regions (lambda (a b) (< (car a) (car b)))))
+        (should (= (car (car regions)) (point-min)))
+        (should (= (cdr (car (last regions))) (point-max)))
+        (cl-loop for (a b) on regions while b
+                 do (should (= (cdr a) (car b))))))))
+
+(ert-deftest kiln-eglot-diagnostics-not-resent-after-a-change ()
+  ;; Flymake's check after a change does not get the diagnostics of the
+  ;; text before it (the server's answer to the change follows); without a
+  ;; change since they came, it gets them.
+  (skip-unless (kiln-eglot-test--load))
+  (require 'kiln-eglot)
+  (with-temp-buffer
+    (dotimes (i 20) (insert (format "species s%d CCO\n" i)))
+    (switch-to-buffer (current-buffer))
+    (let ((eglot--current-flymake-report-fn nil)
+          (reports 0))
+      (cl-letf (((symbol-function 'kiln-eglot--own-diagnostics-p) (lambda () t)))
+        (kiln-eglot--store-diagnostics (vector (kiln-eglot-test--diag 3 0 3 5 "m")))
+        (kiln-eglot--flymake-backend #'ignore (lambda (&rest _) (cl-incf reports)))
+        (should (= reports 1))
+        (goto-char (point-max))
+        (insert "species x C\n")
+        (kiln-eglot--flymake-backend #'ignore (lambda (&rest _) (cl-incf reports)))
+        (should (= reports 1))))))
 
 (provide 'kiln-eglot-test)
 ;;; kiln-eglot-test.el ends here
