@@ -227,6 +227,8 @@ read with the garbage collector held back (`kiln-eglot-gc-cons-threshold')."
 (defvar kiln-eglot--diags)
 (defvar kiln-eglot--diag-lines)
 (defvar kiln-eglot--diags-tick)
+(defvar kiln-eglot--shown)
+(defvar kiln-eglot--paused)
 
 (defvar-local kiln-eglot--scroll-timer nil
   "Pending display of the diagnostics of lines scrolled into view.")
@@ -275,7 +277,9 @@ Diagnostics not yet handed to Flymake are shown for the new lines."
             kiln-eglot--todo nil
             kiln-eglot--diags nil
             kiln-eglot--diag-lines nil
-            kiln-eglot--diags-tick nil)
+            kiln-eglot--diags-tick nil
+            kiln-eglot--shown nil
+            kiln-eglot--paused nil)
       (kiln-eglot--clear-hints))))
 
 (add-hook 'eglot-managed-mode-hook #'kiln-eglot--managed)
@@ -364,6 +368,17 @@ Returns a hash table from each plist (by `eq') to its point."
 
 (defvar-local kiln-eglot--render-timer nil
   "Timer handing the next block of diagnostics to Flymake.")
+
+(defvar-local kiln-eglot--shown nil
+  "Non-nil once `kiln-eglot--diags' have been handed to Flymake (or are being).")
+
+(defvar-local kiln-eglot--paused nil
+  "(TICK . TIME): blocks wait since TIME for the text to stay at TICK.")
+
+(defconst kiln-eglot--resume-after 1.5
+  "Seconds the text must stay unchanged before waiting blocks are shown.
+The server sends no publication when an analysis finds the diagnostics
+it sent last: then these are the diagnostics of the text as it is.")
 
 (defun kiln-eglot--own-diagnostics-p ()
   "Non-nil if the current buffer's diagnostics go through kiln-eglot."
@@ -501,10 +516,23 @@ lines outside the block VISIBLE, in order, snapped."
     (with-current-buffer buffer
       (setq kiln-eglot--render-timer nil)
       (cond
-       ((or (null kiln-eglot--todo) (not (kiln-eglot--current-p))
-            (null eglot--current-flymake-report-fn))
-        ;; Done, or the text moved on: the answer to the change follows.
+       ((or (null kiln-eglot--todo) (null eglot--current-flymake-report-fn))
         (setq kiln-eglot--todo nil))
+       ((not (kiln-eglot--current-p))
+        ;; The text moved on.  A publication for it restarts the blocks;
+        ;; if none comes, the server found the same diagnostics, which then
+        ;; describe the text once it has stayed as it is for a while.
+        (let ((tick (buffer-chars-modified-tick)))
+          (cond
+           ((not (eql (car kiln-eglot--paused) tick))
+            (setq kiln-eglot--paused (cons tick (float-time)))
+            (kiln-eglot--schedule-rest 0.5))
+           ((< (- (float-time) (cdr kiln-eglot--paused)) kiln-eglot--resume-after)
+            (kiln-eglot--schedule-rest 0.5))
+           (t
+            (setq kiln-eglot--diags-tick tick
+                  kiln-eglot--paused nil)
+            (kiln-eglot--schedule-rest 0.01)))))
        ((input-pending-p)
         (kiln-eglot--schedule-rest 0.05))
        (t
@@ -523,6 +551,7 @@ lines outside the block VISIBLE, in order, snapped."
 (defun kiln-eglot--show-diagnostics ()
   "Hand the stored diagnostics to Flymake: visible lines now, the rest later."
   (when (and kiln-eglot--diags eglot--current-flymake-report-fn)
+    (setq kiln-eglot--shown t)
     (let* ((nlines (kiln-eglot--line-count))
            (visible (or (kiln-eglot--render-visible) (cons 0 0))))
       (setq kiln-eglot--todo (kiln-eglot--plan visible nlines))
@@ -552,6 +581,8 @@ lines outside the block VISIBLE, in order, snapped."
                            sorted))
           kiln-eglot--inner-lines inner
           kiln-eglot--diags-tick (buffer-chars-modified-tick)
+          kiln-eglot--shown nil
+          kiln-eglot--paused nil
           kiln-eglot--todo nil)))
 
 (cl-defmethod eglot-handle-notification
@@ -568,16 +599,17 @@ lines outside the block VISIBLE, in order, snapped."
 
 (defun kiln-eglot--flymake-backend (fn report-fn &rest more)
   "Around `eglot-flymake-backend' (FN, REPORT-FN, MORE) in kiln buffers.
-With diagnostics for the text as it is, show them (those already being
-shown: just the visible lines, which also tells Flymake the check is
-answered).  After a change, wait: the server's answer to it follows."
+Diagnostics not yet shown are shown.  Otherwise Flymake's check changes
+nothing: the diagnostics shown move with the text, and the server's
+answer to a change (if it changes them) follows as a publication.  The
+empty report only tells Flymake that the check is answered: its region
+lies before the buffer, so that no diagnostic shown is removed."
   (if (not (kiln-eglot--own-diagnostics-p))
       (apply fn report-fn more)
     (setq eglot--current-flymake-report-fn report-fn)
-    (when (kiln-eglot--current-p)
-      (if (or kiln-eglot--todo (timerp kiln-eglot--render-timer))
-          (kiln-eglot--render-visible)
-        (kiln-eglot--show-diagnostics)))))
+    (if (and kiln-eglot--diags (not kiln-eglot--shown) (kiln-eglot--current-p))
+        (kiln-eglot--show-diagnostics)
+      (funcall report-fn nil :region (cons 0 0)))))
 
 (advice-add 'eglot-flymake-backend :around #'kiln-eglot--flymake-backend)
 

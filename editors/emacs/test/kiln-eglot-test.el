@@ -298,25 +298,60 @@
         (cl-loop for (a b) on regions while b
                  do (should (= (cdr a) (car b))))))))
 
+;; An ERT test of `kiln-eglot--flymake-backend' (Flymake's check).
 (ert-deftest kiln-eglot-diagnostics-not-resent-after-a-change ()
-  ;; Flymake's check after a change does not get the diagnostics of the
-  ;; text before it (the server's answer to the change follows); without a
-  ;; change since they came, it gets them.
+  ;; Flymake's check shows diagnostics not yet shown; otherwise it answers
+  ;; with an empty report whose region no diagnostic can touch: after a
+  ;; change the shown diagnostics stay (they move with the text) until the
+  ;; server's answer, and the old ones are not redrawn at old positions.
   (skip-unless (kiln-eglot-test--load))
   (require 'kiln-eglot)
   (with-temp-buffer
     (dotimes (i 20) (insert (format "species s%d CCO\n" i)))
     (switch-to-buffer (current-buffer))
     (let ((eglot--current-flymake-report-fn nil)
-          (reports 0))
+          (reports nil))
       (cl-letf (((symbol-function 'kiln-eglot--own-diagnostics-p) (lambda () t)))
         (kiln-eglot--store-diagnostics (vector (kiln-eglot-test--diag 3 0 3 5 "m")))
-        (kiln-eglot--flymake-backend #'ignore (lambda (&rest _) (cl-incf reports)))
-        (should (= reports 1))
+        (kiln-eglot--flymake-backend #'ignore (lambda (d &rest a) (push (cons d a) reports)))
+        (should (= (length reports) 1))
+        (should (= (length (car (car reports))) 1))
         (goto-char (point-max))
         (insert "species x C\n")
-        (kiln-eglot--flymake-backend #'ignore (lambda (&rest _) (cl-incf reports)))
-        (should (= reports 1))))))
+        (kiln-eglot--flymake-backend #'ignore (lambda (d &rest a) (push (cons d a) reports)))
+        (should (= (length reports) 2))
+        (should (null (car (car reports))))
+        (let ((region (plist-get (cdr (car reports)) :region)))
+          (should (and (< (car region) (point-min)) (< (cdr region) (point-min)))))))))
+
+(ert-deftest kiln-eglot-diagnostics-blocks-resume-when-text-settles ()
+  ;; Blocks pause while the text changes; a publication restarts them; if
+  ;; none comes (the server found the same diagnostics), they resume once
+  ;; the text has stayed unchanged for `kiln-eglot--resume-after'.
+  (skip-unless (kiln-eglot-test--load))
+  (require 'kiln-eglot)
+  (with-temp-buffer
+    (dotimes (i 600) (insert (format "species s%d CCO\n" i)))
+    (switch-to-buffer (current-buffer))
+    (goto-char (point-min))
+    (set-window-start (selected-window) (point))
+    (let* ((reports 0)
+           (kiln-eglot-diagnostics-chunk-lines 50)
+           (kiln-eglot--resume-after 0.3)
+           (eglot--current-flymake-report-fn (lambda (&rest _) (cl-incf reports))))
+      (kiln-eglot--store-diagnostics
+       (vconcat (cl-loop for l from 0 below 600 by 7
+                         collect (kiln-eglot-test--diag l 0 l 3 (format "m%d" l)))))
+      (kiln-eglot--show-diagnostics)
+      (should kiln-eglot--todo)
+      (goto-char (point-max))
+      (insert "# typed\n")
+      (let ((n reports))
+        (kiln-eglot-test--run-timers #'ignore 0.2)
+        (should (= reports n))          ; paused
+        (should kiln-eglot--todo))
+      (should (kiln-eglot-test--run-timers (lambda () (null kiln-eglot--todo)) 10))
+      (should (> reports 10)))))
 
 (provide 'kiln-eglot-test)
 ;;; kiln-eglot-test.el ends here
