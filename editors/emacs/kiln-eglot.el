@@ -541,12 +541,25 @@ lines outside the block VISIBLE, in order, snapped."
         (when kiln-eglot--todo
           (kiln-eglot--schedule-rest 0.01)))))))
 
+(defconst kiln-eglot--block-idle 0.15
+  "Idle seconds before a block of diagnostics outside the windows is shown.
+Keys typed faster than this are never held up by those blocks.")
+
 (defun kiln-eglot--schedule-rest (delay)
-  "Run `kiln-eglot--render-rest' for the current buffer after DELAY seconds."
+  "Run `kiln-eglot--render-rest' for the current buffer after DELAY seconds.
+Interactively only once Emacs has been idle `kiln-eglot--block-idle'
+seconds (counted on, when idle already); in batch after DELAY."
   (when (timerp kiln-eglot--render-timer)
     (cancel-timer kiln-eglot--render-timer))
   (setq kiln-eglot--render-timer
-        (run-with-timer delay nil #'kiln-eglot--render-rest (current-buffer))))
+        (if noninteractive
+            (run-with-timer delay nil #'kiln-eglot--render-rest (current-buffer))
+          (let ((idle (current-idle-time)))
+            (run-with-idle-timer
+             (if idle
+                 (time-add idle (max delay (- kiln-eglot--block-idle (float-time idle))))
+               (max delay kiln-eglot--block-idle))
+             nil #'kiln-eglot--render-rest (current-buffer))))))
 
 (defun kiln-eglot--show-diagnostics ()
   "Hand the stored diagnostics to Flymake: visible lines now, the rest later."

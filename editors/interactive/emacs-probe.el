@@ -5,7 +5,7 @@
 ;; Environment: KILN_EMACS_DIR (the plugin), KILN_BINARY, KILN_PROBE_LOG.
 ;; Logs, after every Flymake report, the seconds since the last buffer change
 ;; and whether the line of point has an error, and once per publication the
-;; end of eglot's handler (a line "publication").
+;; start of eglot's handler (a line "publication").
 
 ;;; Code:
 
@@ -41,9 +41,9 @@
                            (line-number-at-pos))))))
 (advice-add 'flymake--handle-report :after #'probe-report)
 
-(cl-defmethod eglot-handle-notification :after
+(cl-defmethod eglot-handle-notification :before
   (_server (_method (eql textDocument/publishDiagnostics)) &rest _)
-  "Log the end of a publication's handler."
+  "Log the start of a publication's handler."
   (when probe-t0
     (probe-write (format "%.3f publication\n" (- (float-time) probe-t0)))))
 
