@@ -108,14 +108,15 @@ type Species struct {
 	// Source tells which of Given or Estimate the analysis uses.
 	Source ThermoSource
 
-	estimateErr  error        // why a structure could not be estimated
-	rootReported bool         // a diagnostic already names why there is no thermo
-	brokenBlock  bool         // the declaration's thermo block has a syntax error
-	ident        string       // estimate-cache key of the structure
-	inv          string       // invariant(Mol): a cheap fingerprint for duplicate search
-	structKey    string       // inv and multiplicity: the bucket of the duplicate-structure search
-	structHash   uint64       // hashKey(structKey), made with the unit
-	unit         *speciesUnit // the memoized unit the species was made from
+	estimateErr   error        // why a structure could not be estimated
+	rootReported  bool         // a diagnostic already names why there is no thermo
+	brokenBlock   bool         // the declaration's thermo block has a syntax error or overflows
+	overflowBlock bool         // … and the fault is values that overflow (see overflowSpan)
+	ident         string       // estimate-cache key of the structure
+	inv           string       // invariant(Mol): a cheap fingerprint for duplicate search
+	structKey     string       // inv and multiplicity: the bucket of the duplicate-structure search
+	structHash    uint64       // hashKey(structKey), made with the unit
+	unit          *speciesUnit // the memoized unit the species was made from
 }
 
 // Estimate is the thermochemistry kiln computes for a structure.

@@ -3,6 +3,7 @@ package analysis
 import (
 	"cmp"
 	"context"
+	"errors"
 	"fmt"
 	"path/filepath"
 	"runtime"
@@ -375,6 +376,14 @@ func (a *analysis) structure(path string, sp *Species) {
 	if tok == nil {
 		return
 	}
+	if tok.Text == StructurePlaceholder {
+		// "Declare species NAME" wrote `?` for a structure it could not
+		// know: not a SMILES error, a structure still to be written.
+		sp.SMILESError = ErrStructurePending
+		a.report(path, speciesfile.Diagnostic{Span: a.at(tok.Span), Severity: speciesfile.SeverityError,
+			Code: speciesfile.CodeBadSMILES, Message: sp.Name + ": " + ErrStructurePending.Error()})
+		return
+	}
 	p := a.w.mols.parse(tok.Text)
 	m, err := p.mol, p.err
 	if err != nil {
@@ -403,6 +412,15 @@ func (a *analysis) structure(path string, sp *Species) {
 	sp.ident = p.ident
 	sp.inv = p.inv
 }
+
+// StructurePlaceholder is the structure "Declare species NAME" writes for a
+// name kiln does not know (ide.Placeholder): `?` is not SMILES, and a species
+// holding it is reported as ErrStructurePending until the user replaces it.
+const StructurePlaceholder = "?"
+
+// ErrStructurePending is the SMILES error of a species whose structure is
+// StructurePlaceholder.
+var ErrStructurePending = errors.New("structure not given yet: replace ? with the species' SMILES (a lumped species has none: delete the ? and give a composition line and a thermo block)")
 
 // smilesReason strips the position prefix of a SMILES error (the diagnostic
 // carries the position).

@@ -5,7 +5,6 @@ import (
 	"fmt"
 	"math"
 	"path/filepath"
-	"sort"
 	"strconv"
 	"strings"
 
@@ -121,10 +120,25 @@ type ReactionRef struct {
 	Line     int
 }
 
-// ReactionPair is a reaction of A and its counterpart in B (duplicates of
+// Repeat says whether a matched reaction is written more than once on one
+// side, and whether those reactions are declared `duplicate`.
+type Repeat string
+
+const (
+	RepeatNone       Repeat = ""           // written once
+	RepeatDeclared   Repeat = "declared"   // several reactions, each marked `duplicate`
+	RepeatUndeclared Repeat = "undeclared" // several reactions, not all marked `duplicate` (check warns)
+)
+
+// ReactionPair is a reaction of A and its counterpart in B (reactions of
 // one equation are summed on each side).
 type ReactionPair struct {
-	A, B ReactionRef
+	A, B ReactionRef // the first reaction of the equation on each side
+	// AllA and AllB are every reaction of the equation on each side, in
+	// file order (A and B are their first); RepeatA and RepeatB say whether
+	// there are several and whether they are declared `duplicate`.
+	AllA, AllB       []ReactionRef
+	RepeatA, RepeatB Repeat
 	// Reversed is true when B writes the reaction in the other direction;
 	// B's rate is then converted with B's own equilibrium constant (or its
 	// explicit reverse rate).
@@ -592,31 +606,6 @@ func (f *fitShare) thermoDiff(a, b *Species, set Settings) *ThermoDiff {
 	return d
 }
 
-// directedKey writes a side of a reaction with mapped names, sorted.
-func directedKey(ts []speciesfile.Term, names func(string) string) string {
-	parts := make([]string, 0, len(ts))
-	for _, t := range ts {
-		parts = append(parts, strconv.FormatFloat(t.Coeff, 'g', -1, 64)+" "+names(t.Name.Text))
-	}
-	sort.Strings(parts)
-	return strings.Join(parts, " + ")
-}
-
-// thirdBodyKey names the third body of a reaction with mapped names.
-func thirdBodyKey(d *speciesfile.Reaction, names func(string) string) string {
-	switch {
-	case d.Falloff != nil:
-		c := d.FalloffCollider()
-		if c != "M" {
-			c = names(c)
-		}
-		return "(+" + c + ")"
-	case d.ThirdBody:
-		return "+M"
-	}
-	return ""
-}
-
 type reactionGroup struct {
 	left, right string // directed sides of the first reaction of the key
 	rs          []sideReaction
@@ -629,12 +618,7 @@ func groupReactions(s *compareSide, names func(string) string) (map[string]*reac
 	groups := make(map[string]*reactionGroup, len(s.reactions))
 	order := make([]string, 0, len(s.reactions))
 	for _, r := range s.reactions {
-		l, rt := directedKey(r.d.Reactants, names), directedKey(r.d.Products, names)
-		k := l + " = " + rt
-		if rt < l {
-			k = rt + " = " + l
-		}
-		k += " " + thirdBodyKey(r.d, names)
+		k, l, rt := equationKey(r.d, names)
 		g, ok := groups[k]
 		if !ok {
 			g = &reactionGroup{left: l, right: rt}
@@ -667,10 +651,12 @@ func matchReactions(a, b *compareSide, mapB map[string]string) (pairs []Reaction
 		x := ga[k]
 		y, ok := gb[k]
 		if !ok {
-			onlyA = append(onlyA, a.rref(x.rs[0]))
+			onlyA = append(onlyA, a.rrefs(x)...)
 			continue
 		}
-		p := ReactionPair{A: a.rref(x.rs[0]), B: b.rref(y.rs[0]), Reversed: x.left != y.left}
+		allA, allB := a.rrefs(x), b.rrefs(y)
+		p := ReactionPair{A: allA[0], B: allB[0], Reversed: x.left != y.left,
+			AllA: allA, AllB: allB, RepeatA: x.repeat(), RepeatB: y.repeat()}
 		for i, t := range CompareRateTemps {
 			ka, noteA, okA := a.rateOf(x, x.left, t.T)
 			kb, noteB, okB := b.rateOf(y, x.left, t.T)
@@ -691,13 +677,69 @@ func matchReactions(a, b *compareSide, mapB map[string]string) (pairs []Reaction
 	}
 	for _, k := range orderB {
 		if _, ok := ga[k]; !ok {
-			onlyB = append(onlyB, b.rref(gb[k].rs[0]))
+			onlyB = append(onlyB, b.rrefs(gb[k])...)
 		}
 	}
 	return pairs, onlyA, onlyB
 }
 
 func ptrTo(v float64) *float64 { return &v }
+
+// repeat says whether the group holds several reactions and whether each is
+// declared `duplicate`.
+func (g *reactionGroup) repeat() Repeat {
+	if len(g.rs) < 2 {
+		return RepeatNone
+	}
+	for _, r := range g.rs {
+		if r.d.Duplicate == nil {
+			return RepeatUndeclared
+		}
+	}
+	return RepeatDeclared
+}
+
+// rrefs describes every reaction of a group, in file order.
+func (s *compareSide) rrefs(g *reactionGroup) []ReactionRef {
+	out := make([]ReactionRef, len(g.rs))
+	for i, r := range g.rs {
+		out[i] = s.rref(r)
+	}
+	return out
+}
+
+// RepeatNote says which side's rate is a sum of several reactions of the
+// equation, and whether they are declared `duplicate`, e.g. "2 reactions
+// declared duplicate in A (lines 6, 8), rates summed"; "" when each side
+// writes the equation once.
+func (p ReactionPair) RepeatNote() string {
+	var parts []string
+	for _, n := range []string{repeatNote("A", p.RepeatA, p.AllA), repeatNote("B", p.RepeatB, p.AllB)} {
+		if n != "" {
+			parts = append(parts, n)
+		}
+	}
+	return strings.Join(parts, "; ")
+}
+
+// repeatNote says that a side's rate is the sum of several reactions, e.g.
+// "2 reactions declared duplicate in A (lines 6, 8), rates summed".
+func repeatNote(side string, rep Repeat, rs []ReactionRef) string {
+	if rep == RepeatNone {
+		return ""
+	}
+	lines := make([]string, len(rs))
+	for i, r := range rs {
+		lines[i] = strconv.Itoa(r.Line)
+		if r.File != rs[0].File {
+			lines[i] = filepath.Base(r.File) + ":" + lines[i]
+		}
+	}
+	if rep == RepeatUndeclared {
+		return fmt.Sprintf("%d reactions in %s repeat one equation without `duplicate` on each (lines %s), rates summed", len(rs), side, strings.Join(lines, ", "))
+	}
+	return fmt.Sprintf("%d reactions declared duplicate in %s (lines %s), rates summed", len(rs), side, strings.Join(lines, ", "))
+}
 
 // rateOf returns the summed rate constant (cm3, mol, s) at T of a group's
 // reactions in the direction whose reactant side is `left` (keyed with the

@@ -161,17 +161,49 @@ func (r *Result) FillPlan() ([]Edit, []Skip) {
 			out = append(out, e)
 			continue
 		}
-		skips = append(skips, Skip{Species: sp, Reason: skipReason(sp)})
+		skips = append(skips, Skip{Species: sp, Reason: skipReason(sp, r.Units())})
 	}
 	return out, skips
 }
 
-// skipReason says why no block can be inserted for sp.
-func skipReason(sp *Species) string {
+// IncludedWithoutThermo returns the species declared in included files (not
+// the analysed file) that have no usable thermo block, in analysis order,
+// with what fill on their own file would do: fill writes only the file it is
+// given, so these stay without a block.
+func (r *Result) IncludedWithoutThermo() []Skip {
+	var out []Skip
+	for _, sp := range r.Species {
+		if sp.File == r.Path || sp.Given != nil {
+			continue
+		}
+		reason := "declared in an included file: fill writes only the file it is given; run kiln fill on that file to insert its block"
+		if !fillable(sp) {
+			reason = "declared in an included file (fill writes only the file it is given), and it cannot be filled there either: " + skipReason(sp, r.Units())
+		}
+		out = append(out, Skip{Species: sp, Reason: reason})
+	}
+	return out
+}
+
+// fillable reports whether an estimated nasa7 block can be written for sp.
+func fillable(sp *Species) bool {
+	if sp.Estimate == nil || sp.brokenBlock || sp.SMILESError != nil || sp.Decl.SMILES == nil || sp.estimateErr != nil {
+		return false
+	}
+	_, _, err := sp.Estimate.NASA7()
+	return err == nil
+}
+
+// skipReason says why no block can be inserted for sp, with numbers in the
+// display units u.
+func skipReason(sp *Species, u Units) string {
 	switch {
 	case sp.brokenBlock:
-		return "its thermo block has a syntax error; fix or delete the block"
+		return "its thermo block has " + sp.blockFault() + "; fix or delete the block"
 	case sp.SMILESError != nil:
+		if sp.SMILESError == ErrStructurePending {
+			return ErrStructurePending.Error()
+		}
 		return "bad SMILES: " + smilesReason(sp.SMILESError)
 	case sp.Decl.SMILES == nil:
 		return "no structure (SMILES) to estimate from; add a nasa7 or thermo-table block"
@@ -181,12 +213,7 @@ func skipReason(sp *Species) string {
 		return "no estimate"
 	}
 	if _, _, err := sp.Estimate.NASA7(); err != nil {
-		// Without the engine's package prefix: no Go names in user text.
-		msg := err.Error()
-		for _, prefix := range []string{"nasa fit: ", "nasa: "} {
-			msg = strings.TrimPrefix(msg, prefix)
-		}
-		return "no NASA-7 polynomial: " + msg
+		return "no NASA-7 polynomial: " + FitRefusal(err, u)
 	}
 	return "no block can be inserted here"
 }

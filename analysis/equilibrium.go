@@ -44,38 +44,26 @@ func (e *InputError) Error() string { return e.Input + e.Msg }
 // MixExample is the mixture shown in messages and prompts.
 const MixExample = "CH4:1, O2:2, N2:7.52"
 
-// ParseMix reads a mixture "NAME:AMOUNT, NAME:AMOUNT, …". The amount
-// follows the last colon of an item, so names may contain colons; they
-// cannot contain commas. Amounts are positive numbers (mol, any scale).
+// ParseMix reads a mixture "NAME:AMOUNT, NAME:AMOUNT, …": items are
+// separated by commas, blanks or both ("CH4:1 O2:2" is read as
+// "CH4:1, O2:2"); blanks next to a colon do not separate ("CH4: 1"). The
+// amount follows the last colon of an item, so names may contain colons;
+// they cannot contain commas or blanks (a species name is one token).
+// Amounts are positive numbers (mol, any scale).
 func ParseMix(s string) ([]MixEntry, error) {
 	if strings.TrimSpace(s) == "" {
 		return nil, &InputError{"mix", fmt.Sprintf(" is required, e.g. %q", MixExample)}
 	}
 	var out []MixEntry
 	seen := map[string]bool{}
-	start, item := 0, 0
-	for start <= len(s) {
-		end := strings.IndexByte(s[start:], ',')
-		if end < 0 {
-			end = len(s)
-		} else {
-			end += start
-		}
-		raw := s[start:end]
-		text := strings.TrimSpace(raw)
-		col := utf8.RuneCountInString(s[:start+strings.Index(raw, text)]) + 1
-		start = end + 1
-		if text == "" {
-			continue
-		}
-		item++
-		at := fmt.Sprintf("item %d (column %d)", item, col)
+	for item, it := range mixItems(s) {
+		text := it.text
+		at := fmt.Sprintf("item %d (column %d)", item+1, utf8.RuneCountInString(s[:it.at])+1)
 		k := strings.LastIndexByte(text, ':')
 		if k <= 0 {
-			return nil, &InputError{"mix", fmt.Sprintf(" %s %q must be NAME:AMOUNT", at, text)}
+			return nil, &InputError{"mix", fmt.Sprintf(" %s %q must be NAME:AMOUNT (items separated by commas or blanks, e.g. %q)", at, text, MixExample)}
 		}
-		name := strings.TrimSpace(text[:k])
-		num := strings.TrimSpace(text[k+1:])
+		name, num := text[:k], text[k+1:]
 		v, err := strconv.ParseFloat(num, 64)
 		if err != nil || !(v > 0) || math.IsInf(v, 0) {
 			return nil, &InputError{"mix", fmt.Sprintf(" %s: amount of %s must be a positive number, not %q", at, name, num)}
@@ -90,6 +78,48 @@ func ParseMix(s string) ([]MixEntry, error) {
 		return nil, &InputError{"mix", " lists no species"}
 	}
 	return out, nil
+}
+
+// mixItem is one item of a mixture text without blanks, and the byte
+// offset in the text where it starts.
+type mixItem struct {
+	text string
+	at   int
+}
+
+// mixItems splits a mixture text into items: at commas, and at blanks
+// except those next to a colon.
+func mixItems(s string) []mixItem {
+	var items []mixItem
+	for start := 0; start <= len(s); {
+		end := strings.IndexByte(s[start:], ',')
+		if end < 0 {
+			end = len(s)
+		} else {
+			end += start
+		}
+		var cur *mixItem
+		for i := start; i < end; {
+			if s[i] == ' ' || s[i] == '\t' {
+				i++
+				continue
+			}
+			j := i
+			for j < end && s[j] != ' ' && s[j] != '\t' {
+				j++
+			}
+			field := s[i:j]
+			if cur != nil && (strings.HasSuffix(cur.text, ":") || field[0] == ':') {
+				cur.text += field // "CH4: 1", "CH4 :1"
+			} else {
+				items = append(items, mixItem{field, i})
+				cur = &items[len(items)-1]
+			}
+			i = j
+		}
+		start = end + 1
+	}
+	return items
 }
 
 // DefaultEquilibriumTemperature (K) and DefaultEquilibriumPressure (Pa) are

@@ -30,6 +30,21 @@ func TestParseMix(t *testing.T) {
 	got, err := ParseMix(" CH4:1, O2:2 ,N2:7.52,, C:weird:0.5")
 	require.NoError(t, err)
 	assert.Equal(t, []MixEntry{{"CH4", 1}, {"O2", 2}, {"N2", 7.52}, {"C:weird", 0.5}}, got)
+	// Blanks separate items as commas do, except next to a colon.
+	for _, in := range []string{"CH4:1 O2:2 N2:7.52", "CH4:1  O2:2,N2:7.52", "CH4: 1, O2 :2 N2 : 7.52", "\tCH4:1\tO2:2, N2:7.52 "} {
+		got, err := ParseMix(in)
+		require.NoError(t, err, in)
+		assert.Equal(t, []MixEntry{{"CH4", 1}, {"O2", 2}, {"N2", 7.52}}, got, in)
+	}
+	for in, msg := range map[string]string{
+		"CH4=1 O2=2": `mix item 1 (column 1) "CH4=1" must be NAME:AMOUNT (items separated by commas or blanks, e.g. "CH4:1, O2:2, N2:7.52")`,
+		"CH4 1":      `mix item 1 (column 1) "CH4" must be NAME:AMOUNT`,
+		"CH4:1 O2":   `mix item 2 (column 7) "O2" must be NAME:AMOUNT`,
+	} {
+		_, err := ParseMix(in)
+		require.Error(t, err, in)
+		assert.Contains(t, err.Error(), msg, in)
+	}
 	for in, msg := range map[string]string{
 		"":                `mix is required, e.g. "CH4:1, O2:2, N2:7.52"`,
 		" , ":             "mix lists no species",

@@ -3,6 +3,7 @@ package analysis
 import (
 	"context"
 	"fmt"
+	"math"
 	"sort"
 	"strconv"
 	"strings"
@@ -205,6 +206,15 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 // an override such as `symmetry 99999999999999` (S falls by R ln σ) does,
 // and a number that cannot be true is not reported as an estimate.
 func physical(g *benson.Result) error {
+	finite := !math.IsInf(g.Hf298, 0) && !math.IsNaN(g.Hf298) && !math.IsInf(g.S298, 0)
+	for _, cp := range g.Cp {
+		finite = finite && !math.IsInf(cp, 0)
+	}
+	if !finite {
+		// Only a `group` statement with an enormous value gets here: the
+		// sum overflows, and an infinity is never reported as a value.
+		return fmt.Errorf("the estimate is not a finite number (its group values add up to more than a float64 holds: check the `group` statements it uses)")
+	}
 	if !(g.S298 > 0) {
 		return fmt.Errorf("the estimate is not physical: S°298 = %.2f J/(mol K) ≤ 0 (symmetry number %s, optical isomers %d: check any symmetry or optical-isomers override)", g.S298, g.Sigma(), g.OpticalIsomers)
 	}
@@ -217,14 +227,28 @@ func physical(g *benson.Result) error {
 }
 
 // shape returns the total atom count (with hydrogens), whether the molecule
-// is linear and its number of internal rotors, as the classical Cp limit needs.
+// is linear and its number of internal rotors, as the classical Cp limit
+// needs, for the species of m.
 //
 // Linear: one or two atoms, or every heavy atom sp-hybridised in a chain
 // (X≡C–H, O=C=O, HC≡C–C≡CH) — common practice. Internal rotors: single,
 // non-ring bonds between two heavy atoms that each carry at least one other
 // substituent (a methyl top counts; a bond to a terminal atom without
 // substituents does not).
+//
+// A radical with several resonance structures is one species, whichever
+// structure was written: shape looks at all of its Lewis structures
+// (benson.ResonanceStructures, a set that does not depend on the spelling). It is linear only if every structure is, and a bond is
+// a rotor only if it is single in every structure: a bond that is double in
+// some structure has partial double-bond character and a torsion barrier of
+// 10–16 kcal/mol (allyl about 15–16, benzyl about 11–14; from memory), a
+// stiff torsional vibration, not a free rotor, at the temperatures the
+// classical limit governs. Taken from the written structure instead, vinoxy
+// [CH2]C=O got a C–C rotor that C=C[O] lacks, and benzyl [CH2]c1ccccc1 a
+// ring–CH2 rotor that C=C1C=CC=C[CH]1 lacks: different limits, Wilhoit
+// tails and NASA-7 fits for one species.
 func shape(m *molecule.Molecule) (nAtoms int, linear bool, rotors int) {
+	forms, _ := benson.ResonanceStructures(m) // just m for a closed shell
 	heavy := len(m.Atoms)
 	h := 0
 	for _, a := range m.Atoms {
@@ -232,43 +256,96 @@ func shape(m *molecule.Molecule) (nAtoms int, linear bool, rotors int) {
 	}
 	nAtoms = heavy + h
 	degree := func(i int) int { return len(m.Adj[i]) + m.Atoms[i].HCount }
-	switch {
-	case nAtoms <= 2:
-		linear = true
-	default:
-		linear = true
-		for i := range m.Atoms {
-			d := degree(i)
-			if d <= 1 {
-				continue
-			}
-			// An inner atom keeps a molecule linear only with two neighbours
-			// joined through a triple bond or two double bonds (sp centre).
-			if d != 2 {
-				linear = false
-				break
-			}
-			orders := 0
-			for _, b := range m.Adj[i] {
-				orders += m.Bonds[b].Order
-			}
-			orders += m.Atoms[i].HCount
-			if orders < 4 {
-				linear = false
-				break
-			}
+	linear = true
+	if nAtoms > 2 {
+		for _, f := range forms {
+			linear = linear && chainLinear(f)
 		}
 	}
 	inRing := ringBonds(m)
 	for bi, b := range m.Bonds {
-		if b.Order != 1 || b.Aromatic || inRing[bi] {
+		if inRing[bi] || degree(b.A) <= 1 || degree(b.B) <= 1 {
 			continue
 		}
-		if degree(b.A) > 1 && degree(b.B) > 1 {
+		single := true
+		for _, f := range forms {
+			if fb := f.Bonds[bi]; fb.Order != 1 || fb.Aromatic {
+				single = false
+				break
+			}
+		}
+		if single {
 			rotors++
 		}
 	}
 	return nAtoms, linear, rotors
+}
+
+// chainLinear reports whether every inner atom of m (two or more
+// neighbours, hydrogens counted) has exactly two, joined through a triple
+// bond or two double bonds (an sp centre).
+func chainLinear(m *molecule.Molecule) bool {
+	for i := range m.Atoms {
+		d := len(m.Adj[i]) + m.Atoms[i].HCount
+		if d <= 1 {
+			continue
+		}
+		if d != 2 {
+			return false
+		}
+		orders := m.Atoms[i].HCount
+		for _, b := range m.Adj[i] {
+			orders += m.Bonds[b].Order
+		}
+		if orders < 4 {
+			return false
+		}
+	}
+	return true
+}
+
+// Flags returns the approximations an estimate carries (missing groups,
+// radical-site increments without S°/Cp data, ring systems without
+// whole-system values, sums below the physical S° bound …), sorted by name:
+// the one list that check, estimate, summary and hover show, each entry
+// worded by FlagText. A reference-library species has none.
+func (e *Estimate) Flags() []benson.Missing {
+	if e == nil {
+		return nil
+	}
+	return sortedMissing(e.Group)
+}
+
+// FlagHeading is the word every command puts before FlagText: "MISSING
+// group" for an approximation, "MODELLED" for a quantity computed by a
+// validated model instead of a table (benson.Missing.Modelled), which check
+// does not warn about.
+func FlagHeading(m benson.Missing) string {
+	if m.Modelled() {
+		return "MODELLED"
+	}
+	return "MISSING group"
+}
+
+// FlagText words one approximation the same way in every command: the
+// group or quantity, what stands in for it and why.
+func FlagText(m benson.Missing) string {
+	s := m.Group
+	if m.Approximation != "" {
+		verb := " (approximated by "
+		if m.Modelled() {
+			verb = " (computed by the "
+		}
+		s += verb + m.Approximation
+		if m.Note != "" {
+			s += ": " + m.Note
+		}
+		return s + ")"
+	}
+	if m.Note != "" {
+		s += " (" + m.Note + ")"
+	}
+	return s
 }
 
 // sortedMissing lists the missing groups of an estimate by name.

@@ -3,6 +3,7 @@ package analysis
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"kiln.dev/kiln/engine/kinetics"
 	"kiln.dev/kiln/speciesfile"
@@ -233,7 +234,7 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction, start int) {
 	if v := worstCollision(m.fwdOrder, ms, hs, m.forward, pressures, m.PressureDependent(), set); v != nil {
 		r.Collision = v
 		r.diags = append(r.diags, speciesfile.Diagnostic{Span: inStmt(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
-			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K%s", v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v))})
+			Message: fmt.Sprintf("forward rate %.3g exceeds the collision limit %.3g (%s) at %.0f K%s%s", v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v), termolecularNote(v, d.Reactants))})
 		return
 	}
 	if !d.Reversible || (m.reverse == nil && m.kc == nil) {
@@ -267,7 +268,7 @@ func (a *analysis) rates(d *speciesfile.Reaction, r *Reaction, start int) {
 			what = "reverse rate"
 		}
 		r.diags = append(r.diags, speciesfile.Diagnostic{Span: inStmt(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeCollisionLimit,
-			Message: fmt.Sprintf("%s, %.3g, exceeds the collision limit %.3g (%s) at %.0f K%s", what, v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v))})
+			Message: fmt.Sprintf("%s, %.3g, exceeds the collision limit %.3g (%s) at %.0f K%s%s", what, v.Rate, v.Limit, RateUnits(v.Order), v.T, atPressure(v), termolecularNote(v, d.Products))})
 	}
 }
 
@@ -311,6 +312,26 @@ func reverseBound(m *rateModel, r *Reaction) (kr func(T, P float64) float64, exa
 }
 
 // atPressure is ", 0.1 bar (N2 bath)" for a pressure-dependent violation.
+// termolecularNote explains a termolecular bound (kinetics.CollisionLimit)
+// in a message, naming the two molecules of ts (the side checked, as
+// sizes expands it) whose collision rate bounds it; "" for other orders.
+func termolecularNote(v *kinetics.Violation, ts []speciesfile.Term) string {
+	if v.Order != 3 {
+		return ""
+	}
+	var names []string
+	for _, t := range ts {
+		for k := 0; k < int(math.Round(t.Coeff)); k++ {
+			names = append(names, t.Name.Text)
+		}
+	}
+	pair := "two partners"
+	if v.Pair[0] < len(names) && v.Pair[1] < len(names) {
+		pair = names[v.Pair[0]] + " + " + names[v.Pair[1]]
+	}
+	return fmt.Sprintf(" (termolecular sanity bound: at 1 bar, k·[M] would outrun the %s collision rate; use a falloff form if the rate is a low-pressure limit)", pair)
+}
+
 func atPressure(v *kinetics.Violation) string {
 	if v.P == 0 {
 		return ""
@@ -355,7 +376,7 @@ func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.RelSpan
 	if tr := d.Troe; tr != nil && m.falloff != nil && m.falloff.Troe != nil {
 		for _, T := range grid {
 			if fc := m.falloff.Troe.Fcent(T); !(fc > 0) || math.IsInf(fc, 0) {
-				return tr.Span, fmt.Sprintf("troe parameters give Fcent = %.3g at %.0f K: the broadening centre must be positive and finite, so the falloff rate cannot be evaluated and is not used", fc, T)
+				return tr.Span, fmt.Sprintf("troe parameters give Fcent = %s at %.0f K: the broadening centre must be positive and finite, so the falloff rate cannot be evaluated and is not used", rateText(fc), T)
 			}
 		}
 	}
@@ -369,8 +390,21 @@ func nonphysicalRate(d *speciesfile.Reaction, m *rateModel) (speciesfile.RelSpan
 			continue
 		}
 		if !(k > 0) || math.IsInf(k, 0) {
-			return span, fmt.Sprintf("the forward rate constant is %.3g at %.0f K%s: a rate constant must be a positive finite number, so this rate is not used", k, T, at)
+			return span, fmt.Sprintf("the forward rate constant is %s at %.0f K%s: a rate constant must be a positive finite number, so this rate is not used", rateText(k), T, at)
 		}
 	}
 	return span, ""
+}
+
+// rateText writes a rate constant or falloff parameter in a message with 3
+// significant digits, and words one that is not a finite number ("+Inf" is
+// not for people).
+func rateText(v float64) string {
+	switch {
+	case math.IsInf(v, 0):
+		return "too large for a 64-bit float (it overflows)"
+	case math.IsNaN(v):
+		return "not a number (its parameters overflow)"
+	}
+	return strconv.FormatFloat(v, 'g', 3, 64)
 }

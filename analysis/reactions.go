@@ -4,8 +4,6 @@ import (
 	"fmt"
 	"math"
 	"slices"
-	"sort"
-	"strconv"
 	"strings"
 
 	"kiln.dev/kiln/engine/kinetics"
@@ -288,30 +286,6 @@ func falloffCollider(d *speciesfile.Reaction) *speciesfile.Token {
 	}
 	start := d.Falloff.Span.From + 2
 	return &speciesfile.Token{Span: speciesfile.RelSpan{From: start, To: start + len(name)}, Text: name}
-}
-
-// reactionKey identifies a reaction regardless of direction and term order.
-func reactionKey(d *speciesfile.Reaction) string {
-	side := func(ts []speciesfile.Term) string {
-		var parts []string
-		for _, t := range ts {
-			parts = append(parts, strconv.FormatFloat(t.Coeff, 'g', -1, 64)+" "+t.Name.Text)
-		}
-		sort.Strings(parts)
-		return strings.Join(parts, " + ")
-	}
-	l, r := side(d.Reactants), side(d.Products)
-	if r < l {
-		l, r = r, l
-	}
-	tb := ""
-	if d.ThirdBody {
-		tb = "+M"
-	}
-	if d.Falloff != nil {
-		tb = d.Falloff.Text
-	}
-	return l + " = " + r + " " + tb
 }
 
 // reaction resolves the names of one reaction (equation is its text with

@@ -6,6 +6,7 @@ import (
 	"strings"
 
 	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/nasa"
 )
 
 // RefusalReason words the estimator's refusal for the user: the atom
@@ -20,4 +21,32 @@ func RefusalReason(err error) string {
 		return ue.Reason
 	}
 	return fmt.Sprintf("atom %d %s", ue.Atom, ue.Reason)
+}
+
+// FitRefusal words a refused NASA-7 fit (the error of Estimate.NASA7) for
+// the user in the display units u, with the temperature of the defect and
+// what to do, without the engine's package prefix. Every caller that shows
+// a fit refusal to people (fill's skip list, hover, estimate) uses it.
+func FitRefusal(err error, u Units) string {
+	const block = "give the species a nasa7 or thermo-table block"
+	var se *nasa.ShapeError
+	if errors.As(err, &se) {
+		switch se.Test {
+		case nasa.ShapeFalls:
+			drop := u.EntropyValue(se.Other - se.Cp)
+			return fmt.Sprintf("the fitted Cp falls with temperature, by %.2g %s from %s at %.0f K to %s at %.0f K; "+
+				"try another TMID or THIGH (--tmid/--thigh, or tMid/tHigh in the editor's settings), or "+block,
+				drop, u.EntropyName(), u.Entropy(se.Other), se.OtherT, u.Entropy(se.Cp), se.T)
+		case nasa.ShapeAboveLimit:
+			return fmt.Sprintf("the estimated Cp at %.0f K, %s, is not below %s, the most a molecule of these atoms "+
+				"can hold with every vibration excited (internal rotors counted as free), so no sound polynomial "+
+				"follows it; check the structure and any approximated or user-supplied group values, or "+block,
+				se.T, u.Entropy(se.Cp), u.Entropy(se.Other))
+		}
+	}
+	msg := err.Error()
+	for _, prefix := range []string{"nasa fit: ", "nasa fit poly: ", "nasa: "} {
+		msg = strings.TrimPrefix(msg, prefix)
+	}
+	return msg + "; " + block
 }

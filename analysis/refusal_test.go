@@ -1,12 +1,14 @@
 package analysis
 
 import (
+	"fmt"
 	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
 
+	"kiln.dev/kiln/engine/nasa"
 	"kiln.dev/kiln/speciesfile"
 )
 
@@ -18,7 +20,7 @@ func TestRefusalMessage(t *testing.T) {
 	res := analyzeText(t, "species Z C[Si](C)(C)C\nspecies W CC[N+](C)(C)C\n")
 	msgs := messagesWithCode(res, speciesfile.CodeMissingThermo)
 	require.Len(t, msgs, 2, "%v", res.Diagnostics)
-	assert.Contains(t, msgs[0], "Z has no thermo block and kiln cannot estimate it: atom 1 (C) has a neighbour of type Si")
+	assert.Contains(t, msgs[0], "Z has no thermo block and kiln cannot estimate it: atom 2 (Si): unsupported element Si")
 	assert.Contains(t, msgs[1], "atom 3 (N) has charge +1")
 	for _, m := range msgs {
 		assert.NotContains(t, m, "benson")
@@ -64,4 +66,69 @@ func messagesWithCode(res *Result, code string) []string {
 		}
 	}
 	return out
+}
+
+// TestFitRefusalInFileUnits: a species whose NASA-7 fit is refused is
+// listed by fill with the numbers in the file's units, the temperature of
+// the defect and what to do, without the engine's package name or raw
+// floats. The refusal is provoked independently of the group tables: a
+// `group` statement gives C-(C)(H)3 a heat capacity that puts ethane's
+// estimated Cp above its classical limit, (3·8 − 2) R − R/2 = 21.5 R
+// = 42.72 cal/(mol·K), at 1000 K.
+func TestFitRefusalInFileUnits(t *testing.T) {
+	const groups = "group C-(C)(H)3\n  hf298 -10\n  s298 30\n  cp 300=12 400=14 500=16 600=18 800=20 1000=22 1500=23\n"
+	for _, c := range []struct{ units, cpUnit, value, limit string }{
+		{"kcal/mol", "cal/(mol·K)", "44.00 cal/(mol·K)", "42.72 cal/(mol·K)"},
+		{"kJ/mol", "J/(mol·K)", "184.1 J/(mol·K)", "178.8 J/(mol·K)"},
+	} {
+		src := "units " + c.units + "\n" + groups + "species E CC\n"
+		if c.units == "kJ/mol" {
+			// The same group values in J/(mol K).
+			src = "units kJ/mol\ngroup C-(C)(H)3\n  hf298 -41.84\n  s298 125.52\n  cp 300=50.208 400=58.576 500=66.944 600=75.312 800=83.68 1000=92.048 1500=96.232\nspecies E CC\n"
+		}
+		res := analyzeText(t, src)
+		_, skips := res.FillPlan()
+		require.Len(t, skips, 1, c.units)
+		msg := skips[0].Reason
+		assert.Contains(t, msg, "at 1000 K, "+c.value+", is not below "+c.limit, c.units)
+		assert.Contains(t, msg, "give the species a nasa7 or thermo-table block", c.units)
+		assert.NotContains(t, msg, "nasa fit", c.units)
+		assert.NotContains(t, msg, "J/(mol K)", c.units) // the engine's SI wording
+	}
+}
+
+// TestFitRefusalFalls words a falling fitted Cp (a ShapeError the fit
+// returns only if its constraints fail) in the display units, with both
+// temperatures, the size of the fall and the remedies.
+func TestFitRefusalFalls(t *testing.T) {
+	err := fmt.Errorf("nasa fit: %w", &nasa.ShapeError{Test: nasa.ShapeFalls, T: 3376.6, Cp: 525.95, Other: 526.10, OtherT: 3300.2})
+	kcal := FitRefusal(err, Units{})
+	assert.Equal(t, "the fitted Cp falls with temperature, by 0.036 cal/(mol·K) from 125.74 cal/(mol·K) at 3300 K "+
+		"to 125.71 cal/(mol·K) at 3377 K; try another TMID or THIGH (--tmid/--thigh, or tMid/tHigh in the editor's "+
+		"settings), or give the species a nasa7 or thermo-table block", kcal)
+	kj := FitRefusal(err, Units{KJ: true})
+	assert.Contains(t, kj, "by 0.15 J/(mol·K) from 526.1 J/(mol·K) at 3300 K to 526.0 J/(mol·K) at 3377 K")
+}
+
+// TestApproximationWithBlock: a species with a thermo block of its own
+// whose estimate is approximated gets the approximation as information (the
+// block is what kiln uses); without the block it is a warning.
+func TestApproximationWithBlock(t *testing.T) {
+	const smiles = "species V ClC=C(Cl)Cl\n"
+	const block = "  thermo-table\n    hf298 -4.5\n    s298 77.5\n    cp 300=19.2 400=21.6 500=23.3 600=24.5 800=26.1 1000=27.0 1500=28.0\n    source demo values\n"
+	for _, tc := range []struct {
+		text string
+		sev  speciesfile.Severity
+	}{{smiles, speciesfile.SeverityWarning}, {smiles + block, speciesfile.SeverityInformation}} {
+		res := analyzeText(t, tc.text)
+		var got []speciesfile.Diagnostic
+		for _, d := range res.Diagnostics {
+			if d.Code == speciesfile.CodeMissingGroup {
+				got = append(got, d)
+			}
+		}
+		require.Len(t, got, 1, "%v", res.Diagnostics)
+		assert.Equal(t, tc.sev, got[0].Severity, got[0].Message)
+		assert.Contains(t, got[0].Message, "Cd-(Cl)2 without halogen interactions")
+	}
 }

@@ -439,25 +439,19 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 		return
 	}
 	sp.Estimate = e
-	if miss := sortedMissing(e.Group); len(miss) > 0 {
+	if miss := e.Flags(); len(miss) > 0 {
 		// Group values the user can supply with a `group` statement, and
-		// other approximations (radical sites, ring systems, delocalisation)
-		// that only a thermo block replaces.
+		// other approximations (radical sites, ring systems, delocalisation,
+		// S° below its physical bound) that only a thermo block replaces.
+		// Every approximation of the estimate is reported, worded as
+		// estimate, summary and hover word it; what a validated model
+		// computes (a radical site's S°/Cp change) is shown there, not here.
 		var groups, others []string
 		for _, m := range miss {
-			if isHBINote(m) {
-				// Untabulated radical S/Cp increments are not a group the
-				// user can supply: the hover and estimate output list them.
-				continue
+			if m.Modelled() {
+				continue // a validated model, shown with the estimate, not a warning
 			}
-			s := m.Group
-			if m.Approximation != "" {
-				s += " (approximated by " + m.Approximation
-				if m.Note != "" {
-					s += ": " + m.Note
-				}
-				s += ")"
-			}
+			s := FlagText(m)
 			if _, err := benson.ParseGroupName(m.Group); err == nil {
 				groups = append(groups, s)
 			} else {
@@ -472,26 +466,37 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 			msg = append(msg, fmt.Sprintf("estimated with an approximation kiln has no data for: %s; its uncertainty is widened (a thermo block with measured or computed values replaces the estimate)", strings.Join(others, ", ")))
 		}
 		if len(msg) > 0 {
-			a.report(path, speciesfile.Diagnostic{Span: a.at(d.SMILES.Span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
-				Message: sp.Name + ": " + strings.Join(msg, "; also ")})
+			// With a usable thermo block of its own the species' thermo is
+			// the file's; the approximate estimate only serves the
+			// comparison with the block, which is worth knowing, not a
+			// warning.
+			sev, used := speciesfile.SeverityWarning, ""
+			if a.hasUsableBlock(path, d) {
+				sev, used = speciesfile.SeverityInformation, " (the file's thermo block is used; the estimate serves only the comparison with it)"
+			}
+			a.report(path, speciesfile.Diagnostic{Span: a.at(d.SMILES.Span), Severity: sev, Code: speciesfile.CodeMissingGroup,
+				Message: sp.Name + ": " + strings.Join(msg, "; also ") + used})
 		}
 	}
 }
 
-// isHBINote reports whether a missing entry is the note that a radical
-// site's entropy and heat-capacity increments are not tabulated.
-func isHBINote(m benson.Missing) bool { return strings.HasPrefix(m.Group, "HBI ") }
-
 // hasUsableBlock reports whether declaration d has a thermo block without
-// syntax errors: a block the reader could not read completely is not data.
+// syntax errors and without values that overflow (overflowSpan): a block the
+// reader could not read completely, or that kiln cannot evaluate, is not data.
 func (a *analysis) hasUsableBlock(path string, d *speciesfile.Species) bool {
-	switch {
-	case d.NASA7 != nil:
-		return !a.errorIn(path, d.NASA7.Span)
-	case d.Table != nil:
-		return !a.errorIn(path, d.Table.Span)
+	if d.NASA7 == nil && d.Table == nil {
+		return false
 	}
-	return false
+	_, _, finite := overflowSpan(d)
+	return finite && !a.errorIn(path, blockSpan(d))
+}
+
+// blockSpan is the span of d's thermo block (d has one).
+func blockSpan(d *speciesfile.Species) speciesfile.RelSpan {
+	if d.NASA7 != nil {
+		return d.NASA7.Span
+	}
+	return d.Table.Span
 }
 
 // given converts the species' own thermo block, if any. A block with a
@@ -501,6 +506,11 @@ func (a *analysis) given(path string, sp *Species) {
 	d := sp.Decl
 	if (d.NASA7 != nil || d.Table != nil) && !a.hasUsableBlock(path, d) {
 		sp.brokenBlock = true
+		if tok, msg, ok := overflowSpan(d); !ok && !a.errorIn(path, blockSpan(d)) {
+			a.report(path, speciesfile.Diagnostic{Span: a.at(tok.Span), Severity: speciesfile.SeverityError, Code: speciesfile.CodeNonphysicalThermo,
+				Message: sp.Name + ": " + msg})
+			sp.overflowBlock = true
+		}
 		return
 	}
 	switch {
@@ -557,7 +567,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 	if sp.Given == nil {
 		block := "no thermo block"
 		if sp.brokenBlock {
-			block = "its thermo block has a syntax error and is ignored"
+			block = "its thermo block has " + sp.blockFault() + " and is ignored"
 		}
 		if sp.Estimate != nil {
 			sp.Source = SourceEstimate
@@ -577,7 +587,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		}
 		what := "has no thermo block"
 		if sp.brokenBlock {
-			what = "has no usable thermo block (the syntax error above)"
+			what = "has no usable thermo block (" + sp.blockFault() + ", reported above)"
 		}
 		a.report(path, speciesfile.Diagnostic{Span: a.at(d.Name.Span), Severity: speciesfile.SeverityError, Code: speciesfile.CodeMissingThermo,
 			Message: fmt.Sprintf("%s %s and %s; add a nasa7 or thermo-table block", sp.Name, what, why)})
@@ -662,7 +672,6 @@ func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.R
 	g, e := sp.Given, sp.Estimate
 	lo, hi := g.Range()
 	var temps []float64
-	ref := e.curve()
 	what := "estimated"
 	if e.Library != "" {
 		what = "reference"
@@ -677,6 +686,62 @@ func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.R
 			}
 		}
 	}
+	m := a.worstMismatch(g, e.curve(), temps)
+	if !m.cpOver(a.set) && !m.hOver(a.set) {
+		return
+	}
+	if e.Library == "" {
+		// kiln's estimate exists in two evaluations: its group values
+		// (above) and the NASA-7 polynomial it writes for them (`fill`, the
+		// quick fix, `estimate --nasa`), which departs from them by the
+		// fit's residual. A block within the thresholds of the polynomial
+		// kiln itself writes is accepted: what fill writes, check accepts.
+		if w, ok := e.written().(*nasa.NASA7); ok {
+			if f := a.worstMismatch(g, w, temps); !f.cpOver(a.set) && !f.hOver(a.set) {
+				return
+			}
+		}
+	}
+	if m.cpOver(a.set) {
+		cpSpan := span
+		if t := sp.Decl.Table; t != nil && len(t.Cp) > 0 {
+			// A table's Cp mismatch points at the tabulated value nearest
+			// the worst temperature.
+			best := t.Cp[0]
+			for _, p := range t.Cp {
+				if math.Abs(p.T.SI-m.cpT) < math.Abs(best.T.SI-m.cpT) {
+					best = p
+				}
+			}
+			cpSpan = speciesfile.RelSpan{From: best.T.Tok.Span.From, To: best.Cp.Tok.Span.To}
+		}
+		a.report(path, speciesfile.Diagnostic{Span: a.at(cpSpan), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+			Message: fmt.Sprintf("%s: Cp at %g K given %s vs %s %s (difference %s, threshold %s)",
+				sp.Name, m.cpT, a.entropy(m.cpGiven), what, a.entropy(m.cpRef), a.entropy(m.cp), a.entropy(a.set.MismatchCp))})
+		return
+	}
+	a.report(path, speciesfile.Diagnostic{Span: a.at(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
+		Message: fmt.Sprintf("%s: H(%g K) − H(298 K) given %s vs %s %s (difference %s, threshold %s)",
+			sp.Name, m.hT, a.energy(m.hGiven), what, a.energy(m.hRef), a.energy(m.h), a.energy(a.set.MismatchHf298))})
+}
+
+// mismatch is the worst difference between a given block and a reference
+// curve over a set of temperatures: Cp, and H(T) − H(298.15 K).
+type mismatch struct {
+	cp, cpT, cpGiven, cpRef float64
+	h, hT, hGiven, hRef     float64
+}
+
+// cpOver and hOver report whether the worst Cp or H difference is above its
+// threshold (H is reported only when Cp is within its own: a Cp difference
+// is the root cause).
+func (m mismatch) cpOver(s Settings) bool { return math.Abs(m.cp) > s.MismatchCp }
+func (m mismatch) hOver(s Settings) bool {
+	return !m.cpOver(s) && math.Abs(m.h) > s.MismatchHf298
+}
+
+// worstMismatch compares given block g with ref at temps.
+func (a *analysis) worstMismatch(g *GivenThermo, ref thermoCurve, temps []float64) mismatch {
 	givenH := func(T float64) (float64, bool) {
 		switch {
 		case g.Poly != nil:
@@ -686,44 +751,21 @@ func (a *analysis) compareOverRange(path string, sp *Species, span speciesfile.R
 		}
 		return 0, false
 	}
-	var worstCp, worstCpT, cpGiven, cpRef float64
-	var worstH, worstHT, hGiven, hRef float64
+	var m mismatch
 	for _, T := range temps {
 		if c, ok := g.CpAt(T); ok {
-			if d := c - ref.Cp(T); math.Abs(d) > math.Abs(worstCp) {
-				worstCp, worstCpT, cpGiven, cpRef = d, T, c, ref.Cp(T)
+			if d := c - ref.Cp(T); math.Abs(d) > math.Abs(m.cp) {
+				m.cp, m.cpT, m.cpGiven, m.cpRef = d, T, c, ref.Cp(T)
 			}
 		}
 		if h, ok := givenH(T); ok && T > T298 {
 			r := ref.H(T) - ref.H(T298)
-			if d := h - r; math.Abs(d) > math.Abs(worstH) {
-				worstH, worstHT, hGiven, hRef = d, T, h, r
+			if d := h - r; math.Abs(d) > math.Abs(m.h) {
+				m.h, m.hT, m.hGiven, m.hRef = d, T, h, r
 			}
 		}
 	}
-	if math.Abs(worstCp) > a.set.MismatchCp {
-		cpSpan := span
-		if t := sp.Decl.Table; t != nil && len(t.Cp) > 0 {
-			// A table's Cp mismatch points at the tabulated value nearest
-			// the worst temperature.
-			best := t.Cp[0]
-			for _, p := range t.Cp {
-				if math.Abs(p.T.SI-worstCpT) < math.Abs(best.T.SI-worstCpT) {
-					best = p
-				}
-			}
-			cpSpan = speciesfile.RelSpan{From: best.T.Tok.Span.From, To: best.Cp.Tok.Span.To}
-		}
-		a.report(path, speciesfile.Diagnostic{Span: a.at(cpSpan), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
-			Message: fmt.Sprintf("%s: Cp at %g K given %s vs %s %s (difference %s, threshold %s)",
-				sp.Name, worstCpT, a.entropy(cpGiven), what, a.entropy(cpRef), a.entropy(worstCp), a.entropy(a.set.MismatchCp))})
-		return
-	}
-	if math.Abs(worstH) > a.set.MismatchHf298 {
-		a.report(path, speciesfile.Diagnostic{Span: a.at(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
-			Message: fmt.Sprintf("%s: H(%g K) − H(298 K) given %s vs %s %s (difference %s, threshold %s)",
-				sp.Name, worstHT, a.energy(hGiven), what, a.energy(hRef), a.energy(worstH), a.energy(a.set.MismatchHf298))})
-	}
+	return m
 }
 
 // problemMessage describes a defect of a polynomial in the display units,

@@ -2,6 +2,8 @@ package analysis
 
 import (
 	"math"
+	"strconv"
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -55,6 +57,7 @@ reaction ethoxy + H2 <=> ethanol + H   A=1e12 n=0 Ea=10
 	require.True(t, ok)
 	assert.InDelta(t, sig("ethoxy"), u.Sigma, 1e-9)
 	assert.Equal(t, []string{"ethoxy"}, u.Estimated)
+	assert.Equal(t, []string{"ethanol"}, u.Given, "a table states no uncertainty")
 
 	// A species on both sides cancels.
 	u, ok = res.ReverseRateUncertainty(res.Reactions[3], 1000)
@@ -64,4 +67,57 @@ reaction ethoxy + H2 <=> ethanol + H   A=1e12 n=0 Ea=10
 
 	_, ok = res.ReverseRateUncertainty(res.Reactions[4], 1000)
 	assert.False(t, ok, "an explicit reverse rate does not come from thermo")
+}
+
+// TestReverseUncertaintyAfterFill: `kiln fill` writes each estimate's
+// numbers into a nasa7 block, which states no uncertainty. The blocks still
+// hold the estimates' ΔHf°298 and S°298, so the reverse-rate uncertainty is
+// the same after fill as before (it was 1, "exact", when file blocks all
+// counted as exact). A block whose numbers were changed by hand is no longer
+// the estimate: its uncertainty is unknown and it is listed in Given.
+func TestReverseUncertaintyAfterFill(t *testing.T) {
+	src := `species H [H]
+species H2 [H][H]
+species propane CCC
+species propyl CC[CH2]
+reaction propane + H <=> propyl + H2   A=1e14 n=0 Ea=9
+`
+	before := analyzeText(t, src)
+	ub, ok := before.ReverseRateUncertainty(before.Reactions[0], 1000)
+	require.True(t, ok)
+	require.Greater(t, ub.Factor, 1.1)
+	assert.Empty(t, ub.Given)
+
+	edits, skips := before.FillPlan()
+	require.Empty(t, skips)
+	require.Len(t, edits, 4)
+	filled, err := ApplyEdits([]byte(src), edits)
+	require.NoError(t, err)
+	after := analyzeText(t, string(filled))
+	for _, n := range []string{"H", "H2", "propane", "propyl"} {
+		require.Equal(t, SourceFile, after.ByName[n].Source, n)
+	}
+	ua, ok := after.ReverseRateUncertainty(after.Reactions[0], 1000)
+	require.True(t, ok)
+	assert.Equal(t, ub.Estimated, ua.Estimated)
+	assert.InDelta(t, ub.Sigma, ua.Sigma, 1e-9)
+	assert.InDelta(t, ub.Factor, ua.Factor, 1e-12)
+	assert.Empty(t, ua.Given)
+
+	// Change propyl's a6 (ΔHf°298 moves by about 0.8 kJ/mol): its block is
+	// no longer the estimate. Only propane's estimate is left in the factor.
+	text := string(filled)
+	i := strings.Index(text, "species propyl")
+	require.Positive(t, i)
+	j := i + strings.Index(text[i:], "low ")
+	fields := strings.Fields(text[j : j+strings.IndexByte(text[j:], '\n')])
+	a6, err := strconv.ParseFloat(fields[6], 64)
+	require.NoError(t, err)
+	edited := text[:j] + strings.Replace(text[j:], fields[6], strconv.FormatFloat(a6+100, 'e', 10, 64), 1)
+	res := analyzeText(t, edited)
+	ue, ok := res.ReverseRateUncertainty(res.Reactions[0], 1000)
+	require.True(t, ok)
+	assert.Equal(t, []string{"propane"}, ue.Estimated)
+	assert.Equal(t, []string{"propyl"}, ue.Given)
+	assert.Less(t, ue.Factor, ua.Factor)
 }

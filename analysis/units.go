@@ -1,7 +1,9 @@
 package analysis
 
 import (
-	"fmt"
+	"math"
+	"strconv"
+	"strings"
 
 	"kiln.dev/kiln/speciesfile"
 )
@@ -77,18 +79,18 @@ func (u Units) EntropyValue(v float64) float64 {
 // "-235.2 kJ/mol" (about 10 J/mol resolution in both).
 func (u Units) Energy(j float64) string {
 	if u.KJ {
-		return fmt.Sprintf("%.1f kJ/mol", u.EnergyValue(j))
+		return FormatFixed(u.EnergyValue(j), 1) + " kJ/mol"
 	}
-	return fmt.Sprintf("%.2f kcal/mol", u.EnergyValue(j))
+	return FormatFixed(u.EnergyValue(j), 2) + " kcal/mol"
 }
 
 // Entropy writes an entropy or heat capacity (J/(mol K)) for people:
 // "67.54 cal/(mol·K)" or "282.6 J/(mol·K)".
 func (u Units) Entropy(v float64) string {
 	if u.KJ {
-		return fmt.Sprintf("%.1f J/(mol·K)", v)
+		return FormatFixed(v, 1) + " J/(mol·K)"
 	}
-	return fmt.Sprintf("%.2f cal/(mol·K)", u.EntropyValue(v))
+	return FormatFixed(u.EntropyValue(v), 2) + " cal/(mol·K)"
 }
 
 // FormatEnergy writes v (J/mol) in the named display unit ("kcal/mol" or
@@ -101,4 +103,40 @@ func FormatEnergy(v float64, units string) string {
 // named energy unit; see Units.Entropy.
 func FormatEntropy(v float64, units string) string {
 	return Units{KJ: units == "kJ/mol"}.Entropy(v)
+}
+
+// Number formatting for people: the one home of how kiln writes a value
+// with a fixed number of decimals in messages, hovers and text tables.
+
+// FixedLimit is the magnitude from which FormatFixed switches to
+// exponent notation: a value of 1e200 written with all its digits would be
+// 200 characters wide and break every table column.
+const FixedLimit = 1e9
+
+// FormatFixed writes v with prec decimals ("-56.21"), never as "-0.00" (a
+// value that rounds to zero has no sign), in exponent notation with prec
+// decimals ("1.00e+200") from FixedLimit up, and as "—" when v is not a
+// finite number (kiln never computes with one: see analysis/finite.go).
+// FormatSigned is the same with a sign on every non-zero value.
+func FormatFixed(v float64, prec int) string { return formatFixed(v, prec, false) }
+
+// FormatSigned is FormatFixed with "+" before positive values ("+3.25").
+func FormatSigned(v float64, prec int) string { return formatFixed(v, prec, true) }
+
+func formatFixed(v float64, prec int, sign bool) string {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return "—"
+	}
+	format := byte('f')
+	if math.Abs(v) >= FixedLimit {
+		format = 'e'
+	}
+	s := strconv.FormatFloat(v, format, prec, 64)
+	if strings.Trim(s, "-0.") == "" {
+		return strings.TrimPrefix(s, "-") // zero after rounding: no sign
+	}
+	if sign && s[0] != '-' {
+		s = "+" + s
+	}
+	return s
 }

@@ -128,13 +128,11 @@ func (s *server) equilibrium(ctx context.Context, a equilibriumArgs) (any, error
 		}
 		return nil, jsonrpc2.NewError(codeRequestFailed, "kiln equilibrium: "+err.Error())
 	}
-	var js bytes.Buffer
-	enc := json.NewEncoder(&js)
-	enc.SetIndent("", "  ")
-	if err := enc.Encode(out); err != nil {
+	js, err := jsonnum.Marshal(out)
+	if err != nil {
 		return nil, fmt.Errorf("equilibrium result: %w", err)
 	}
-	ans := equilibriumAnswer{Text: out.Text(), Result: json.RawMessage(jsonnum.RoundLiterals(bytes.TrimSpace(js.Bytes()))), Warnings: []string{}}
+	ans := equilibriumAnswer{Text: out.Text(), Result: json.RawMessage(js), Warnings: []string{}}
 	if n := res.ErrorCount(); n > 0 {
 		ans.Warnings = append(ans.Warnings, fmt.Sprintf("%s has %d error(s); broken statements were left out", out.File, n))
 	}

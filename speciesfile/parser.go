@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"cmp"
 	"fmt"
+	"math"
 	"slices"
 	"strconv"
 	"strings"
@@ -250,11 +251,21 @@ func (p *parser) checkLineBytes(l srcLine) {
 	for i := 0; i < len(line); {
 		r, size := utf8.DecodeRune(line[i:])
 		if r == utf8.RuneError && size == 1 {
-			p.errAt(RelSpan{l.start + i, l.start + i + 1}, "invalid UTF-8 byte 0x%02X", line[i])
+			p.errAt(RelSpan{l.start + i, l.start + i + 1}, "invalid UTF-8 byte 0x%02X%s: a .kiln file is UTF-8 text; re-save it as UTF-8", line[i], latin1Guess(line[i]))
 			return
 		}
 		i += size
 	}
+}
+
+// latin1Guess says what an invalid UTF-8 byte is in Latin-1 (ISO 8859-1),
+// the usual other encoding of a file with accented letters: " (é in
+// Latin-1)". Bytes that are control codes there get "".
+func latin1Guess(b byte) string {
+	if b < 0xA0 {
+		return ""
+	}
+	return fmt.Sprintf(" (%c in Latin-1)", rune(b))
 }
 
 // run parses the whole file.
@@ -374,6 +385,18 @@ func (p *parser) text(i, j int) string {
 const keywordList = "species, reaction, units, include, group"
 
 var keywords = []string{"species", "reaction", "units", "include", "group"}
+
+// indentedKeyword reports, when the first token of an indented line is a
+// statement keyword (" species X C"), that the line is read as part of the
+// statement above and that statement keywords belong in column 0; it
+// returns whether it did.
+func (p *parser) indentedKeyword(key Token) bool {
+	if !slices.Contains(keywords, key.Text) {
+		return false
+	}
+	p.errAt(key.Span, "%q is a statement keyword, but this line is indented, so it is read as part of the statement above: a statement keyword belongs in column 0 (remove the leading blanks)", key.Text)
+	return true
+}
 
 // statement dispatches on the keyword of line l.
 func (p *parser) statement(l srcLine, base StmtBase) Stmt {
@@ -664,7 +687,9 @@ func (p *parser) group(toks []Token, base StmtBase) Stmt {
 		lt := p.tokenize(l)
 		st.Attrs = append(st.Attrs, Attr{Key: lt[0], Span: lineSpan(l)})
 		if !p.thermoLine(l, lt, &t) {
-			p.errAt(lt[0].Span, "unknown group attribute %q: %sexpected one of hf298, s298, cp, source", lt[0].Text, didYouMean(lt[0].Text, []string{"hf298", "s298", "cp", "source"}))
+			if !p.indentedKeyword(lt[0]) {
+				p.errAt(lt[0].Span, "unknown group attribute %q: %sexpected one of hf298, s298, cp, source", lt[0].Text, didYouMean(lt[0].Text, []string{"hf298", "s298", "cp", "source"}))
+			}
 		}
 	}
 	st.Hf298, st.S298, st.Cp, st.Source = t.hf, t.s, t.cp, t.source
@@ -844,6 +869,9 @@ func (p *parser) species(toks []Token, base StmtBase) Stmt {
 		case "source":
 			p.errAt(key.Span, "\"source\" is only valid inside a nasa7 or thermo-table block")
 		default:
+			if p.indentedKeyword(key) {
+				continue
+			}
 			p.errAt(key.Span, "unknown species attribute %q: %sexpected one of %s", key.Text, didYouMean(key.Text, strings.Split(speciesAttrList, ", ")), speciesAttrList)
 		}
 	}
@@ -1056,6 +1084,13 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 				p.errAt(endOf(key), "expected text after note")
 			}
 		default:
+			if p.indentedKeyword(key) {
+				continue
+			}
+			if rateParamLike(key.Text) {
+				p.errAt(key.Span, "%q on a line of its own: the forward rate parameters (A=, n=, Ea=) belong on the reaction line, after the equation", key.Text)
+				continue
+			}
 			p.errAt(key.Span, "unknown reaction attribute %q: %sexpected one of %s", key.Text, didYouMean(key.Text, strings.Split(reactionAttrList, ", ")), reactionAttrList)
 		}
 	}
@@ -1666,7 +1701,24 @@ func (p *parser) number(tok Token, kind unitKind) (Number, bool) {
 		return Number{}, false
 	}
 	num.SI = v * factor
+	if math.IsInf(num.SI, 0) || math.IsNaN(num.SI) {
+		// 1e306 kcal/mol is a float64, its value in J/mol is not: a
+		// number kiln cannot compute with is refused here, where its
+		// token is, and never reaches the analysis as infinity.
+		p.errAt(tok.Span, "number out of range: %q overflows when converted to %s", s, siNames[kind])
+		return Number{}, false
+	}
 	return num, true
+}
+
+// siNames names the SI unit each kind of number is converted to.
+var siNames = [...]string{
+	kDimless:  "a plain number",
+	kEnergy:   "J/mol",
+	kEa:       "J/mol",
+	kEntropy:  "J/(mol K)",
+	kTemp:     "K",
+	kPressure: "Pa",
 }
 
 // ParseFormula parses an element formula such as "C10H8" or "CH3O" into
@@ -1763,4 +1815,15 @@ func (p *parser) nextStatement(extentStart int) (st Stmt, next int, ok bool) {
 		relativize(st, extentStart)
 		return st, lastOwn.next, true
 	}
+}
+
+// rateParamLike reports whether word starts like a forward rate parameter
+// (A=…, n=…, Ea=…), which is written on the reaction line itself.
+func rateParamLike(word string) bool {
+	for _, k := range []string{"A=", "n=", "Ea="} {
+		if strings.HasPrefix(word, k) {
+			return true
+		}
+	}
+	return false
 }

@@ -7,16 +7,22 @@ import (
 
 // FormatNumber returns the shortest text that the parser reads back as
 // exactly v (strconv 'g' format with the minimal number of digits, e.g.
-// "300", "0.62", "1.5e+13"). NaN and ±Inf give "NaN", "+Inf", "-Inf", which
-// the format does not accept.
+// "300", "0.62", "1.5e+13"); negative zero is written "0". NaN and ±Inf
+// give "NaN", "+Inf", "-Inf", which the format does not accept.
 func FormatNumber(v float64) string {
+	if v == 0 {
+		v = 0 // no "-0"
+	}
 	return strconv.FormatFloat(v, 'g', -1, 64)
 }
 
 // formatCoeff formats a NASA coefficient with 11 significant digits
 // (relative rounding error ≤ 5e-11), with a leading blank for non-negative
-// values so that columns line up.
+// values so that columns line up; negative zero is written as zero.
 func formatCoeff(b []byte, v float64) []byte {
+	if v == 0 {
+		v = 0 // no "-0.0000000000e+00"
+	}
 	if !(v < 0) {
 		b = append(b, ' ')
 	}

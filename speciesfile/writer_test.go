@@ -30,6 +30,14 @@ func TestFormatNASA7Block(t *testing.T) {
 		"    source kiln 0.1.0 estimate 3\n"
 	assert.Equal(t, want, got)
 	assert.NotContains(t, FormatNASA7Block("", 300, 1000, 5000, low, high, "  ", "\r\n"), "source")
+
+	// Negative zero is written as zero, aligned as any non-negative value.
+	negZero := math.Copysign(0, -1)
+	low[4], high[4] = negZero, negZero
+	got = FormatNASA7Block("", 300, 1000, 5000, low, high, "", "\n")
+	assert.NotContains(t, got, "-0.0000000000e+00")
+	assert.Contains(t, got, "  0.0000000000e+00")
+	assert.Equal(t, "0", FormatNumber(negZero))
 }
 
 // TestThermoInsertionRoundTrip inserts a block produced by FormatNASA7Block

@@ -28,8 +28,9 @@ type Action struct {
 
 // Placeholder is the structure written by "Declare species NAME" for a
 // name kiln does not know: `?` is not SMILES, so the new line is reported
-// as bad-smiles until the user replaces it with the species' structure.
-const Placeholder = "?"
+// as bad-smiles ("structure not given yet", analysis.ErrStructurePending)
+// until the user replaces it with the species' structure.
+const Placeholder = analysis.StructurePlaceholder
 
 // declaredStructure returns what "Declare species NAME" writes after the
 // name: the reference library's SMILES when NAME is the name of one of its

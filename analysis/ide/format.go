@@ -31,7 +31,11 @@ const (
 //     to the widest one of the block and align the rate parameters in
 //     columns; a run of `pressure` lines is aligned the same way;
 //   - the low/high lines of a nasa7 block put each coefficient in a column,
-//     aligned on its decimal point (the number's text is never changed);
+//     aligned on its decimal point (the number's text is never changed),
+//     with one place before the digits kept for a sign whether or not a
+//     number of the column has one: the layout speciesfile.FormatNASA7Block
+//     writes (kiln fill, quick fixes, estimate --nasa), so a block kiln
+//     wrote is already formatted;
 //   - the hf298/s298/cp rows of a thermo-table block or a group put their
 //     values in one column;
 //   - trailing blanks are removed, and blank lines become empty;
@@ -320,7 +324,7 @@ func (g *colGroup) measure() {
 			}
 			if g.decimal && i > 0 {
 				left, right := splitDecimal(r.cells[i])
-				g.w[i] = max(g.w[i], width(left))
+				g.w[i] = max(g.w[i], signedWidth(left))
 				g.r[i] = max(g.r[i], width(right))
 			} else if i < len(r.cells)-1 || g.decimal {
 				g.w[i] = max(g.w[i], width(r.cells[i]))
@@ -342,6 +346,15 @@ func splitDecimal(s string) (string, string) {
 }
 
 func width(s string) int { return utf8.RuneCountInString(s) }
+
+// signedWidth is the width the integer part left of a coefficient takes in
+// its column: its digits plus one place for a sign, written or not.
+func signedWidth(left string) int {
+	if strings.HasPrefix(left, "-") || strings.HasPrefix(left, "+") {
+		return width(left)
+	}
+	return width(left) + 1
+}
 
 func pad(n int) string {
 	if n <= 0 {

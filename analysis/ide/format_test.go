@@ -95,12 +95,13 @@ func TestFormatExamplesKeepDiagnostics(t *testing.T) {
 }
 
 // Each coefficient column is aligned on the decimal point (on the exponent
-// when a number has no point); the numbers' text is kept.
+// when a number has no point), with one place kept for a sign; the numbers'
+// text is kept.
 func TestFormatNASA7Columns(t *testing.T) {
 	src := "species x C\n  nasa7 300 1000 5000\n    low 3.5 0.01 0 -1.5e-8 5 -29000 5.\n    high   -6.5   1.2E+3 0.5 1e5 .5 -2.9e4 -5.0   # fitted\n"
 	want := "species x C\n  nasa7 300 1000 5000\n" +
-		"    low   3.5 0.01   0   -1.5e-8 5   -29000      5.\n" +
-		"    high -6.5 1.2E+3 0.5  1e5     .5     -2.9e4 -5.0   # fitted\n"
+		"    low   3.5  0.01    0   -1.5e-8  5   -29000      5.\n" +
+		"    high -6.5  1.2E+3  0.5  1e5      .5     -2.9e4 -5.0   # fitted\n"
 	assert.Equal(t, want, formatText(t, "/w/f.kiln", src))
 }
 
@@ -205,6 +206,6 @@ func TestFormatRandomBlanks(t *testing.T) {
 
 func TestFormatAlignsCRLF(t *testing.T) {
 	src := "species a C\r\nspecies bbb CC\r\n  nasa7 300 1000 5000\r\n    low 1 2 3 4 5 6 7\r\n  high -1 2 3 4 5 6 7\r\nreaction a <=> bbb A=1 n=0 Ea=0\r\nreaction bbb <=> a A=10 n=0 Ea=0\r\n"
-	want := "species a   C\r\nspecies bbb CC\r\n  nasa7 300 1000 5000\r\n    low   1 2 3 4 5 6 7\r\n    high -1 2 3 4 5 6 7\r\nreaction a <=> bbb   A=1  n=0 Ea=0\r\nreaction bbb <=> a   A=10 n=0 Ea=0\r\n"
+	want := "species a   C\r\nspecies bbb CC\r\n  nasa7 300 1000 5000\r\n    low   1  2  3  4  5  6  7\r\n    high -1  2  3  4  5  6  7\r\nreaction a <=> bbb   A=1  n=0 Ea=0\r\nreaction bbb <=> a   A=10 n=0 Ea=0\r\n"
 	assert.Equal(t, want, formatText(t, "/w/f.kiln", src))
 }

@@ -66,15 +66,10 @@ func (u units) entropyValue(v float64) string {
 
 // num formats v with prec decimals, using the Unicode minus sign U+2212
 // (typographic convention for displayed numbers) and never "-0.0".
+// analysis.FormatFixed decides the digits (and exponent notation for huge
+// values).
 func num(v float64, prec int) string {
-	if math.IsNaN(v) || math.IsInf(v, 0) {
-		return "—"
-	}
-	s := strconv.FormatFloat(v, 'f', prec, 64)
-	if strings.Trim(s, "-0.") == "" {
-		s = strings.TrimPrefix(s, "-")
-	}
-	return strings.Replace(s, "-", "−", 1)
+	return strings.Replace(analysis.FormatFixed(v, prec), "-", "−", 1)
 }
 
 // sci formats v with 3 significant digits in scientific notation ("1.23e+13").

@@ -10,6 +10,7 @@ import (
 	"kiln.dev/kiln/analysis"
 	"kiln.dev/kiln/engine/benson"
 	"kiln.dev/kiln/engine/nasa"
+	"kiln.dev/kiln/internal/wording"
 	"kiln.dev/kiln/speciesfile"
 )
 
@@ -61,7 +62,7 @@ func Hover(x *Index, file string, off int, s analysis.Settings, markdown bool) (
 			f := x.File(o.IncludePath)
 			w.line("include " + w.code(o.Name) + " → " + o.IncludePath)
 			if f != nil {
-				w.line(fmt.Sprintf("%d species, %d reactions, %d groups", len(f.Species), len(f.Reactions), len(f.Groups)))
+				w.line(wording.CountAs(len(f.Species), "species", "species") + ", " + wording.Count(len(f.Reactions), "reaction") + ", " + wording.Count(len(f.Groups), "group"))
 			}
 		}
 	default:
@@ -226,7 +227,10 @@ func (w *writer) species(sp *analysis.Species) {
 	if len(facts) > 0 {
 		w.line(strings.Join(facts, " · "))
 	}
-	if sp.SMILESError != nil {
+	switch {
+	case sp.SMILESError == analysis.ErrStructurePending:
+		w.line("S" + strings.TrimPrefix(sp.SMILESError.Error(), "s")) // "Structure not given yet: …"
+	case sp.SMILESError != nil:
 		w.line("Structure not readable: " + sp.SMILESError.Error())
 	}
 	est, giv := estimateValues(sp.Estimate), givenValues(sp.Given)
@@ -318,12 +322,12 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 			facts = append(facts, fmt.Sprintf("multiplicity = %d", g.Multiplicity))
 		}
 		w.line(strings.Join(facts, " · "))
-		for _, m := range g.Missing {
-			msg := "Missing group " + w.code(m.Group) + " approximated by " + w.code(m.Approximation)
-			if m.Note != "" {
-				msg += " (" + m.Note + ")"
+		for _, m := range e.Flags() {
+			heading := "Missing group "
+			if m.Modelled() {
+				heading = "Modelled: "
 			}
-			w.line(msg)
+			w.line(heading + w.code(analysis.FlagText(m)))
 		}
 	}
 	if e.Uncertainty > 0 {
@@ -333,8 +337,11 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		}
 		w.line(unc)
 	}
+	if g != nil && g.UncertaintyS298 > 0 {
+		w.line("S°298 uncertainty at least ±" + w.u.entropy(g.UncertaintyS298) + " (approximations that change S°)")
+	}
 	if _, fit, err := e.NASA7(); err != nil {
-		w.line("NASA-7 fit failed: " + err.Error())
+		w.line("NASA-7 fit failed: " + analysis.FitRefusal(err, analysis.Units{KJ: !w.u.kcal}))
 	} else if fit.MaxCpResidual > 0 {
 		w.line("NASA-7 fit: worst Cp residual " + w.u.entropy(fit.MaxCpResidual))
 	}
@@ -403,6 +410,8 @@ func (w *writer) reaction(x *Index, r *analysis.Reaction) {
 	switch {
 	case r.Collision != nil:
 		w.line("Collision limit: exceeded — " + r.Collision.Message())
+	case r.Decl != nil && r.Decl.Rate != nil && (r.ForwardOrder > 3 || (r.Decl.Reversible && r.ReverseOrder > 3)):
+		w.line("Collision limit: not checked (no bound for steps of more than three molecules).")
 	case r.Decl != nil && r.Decl.Rate != nil:
 		w.line("Collision limit: within the bound at 300–2500 K.")
 	default:
@@ -450,16 +459,26 @@ func (w *writer) group(o Occurrence) {
 // estimated thermochemistry, e.g. "×/÷ 1.50 (σ(ΔG°r) = 0.81 kcal/mol from the
 // estimates of propane, propyl)".
 func reverseFactorText(u analysis.ReverseUncertainty, un units) string {
+	given := ""
+	if len(u.Given) > 0 {
+		given = strings.Join(u.Given, ", ") + " from the file's own thermo blocks, which state no uncertainty"
+	}
 	if len(u.Estimated) == 0 {
-		return "×/÷ 1 (no estimated thermo: all from the file or the reference library)"
+		if given != "" {
+			return "not known (" + given + ")"
+		}
+		return "×/÷ 1 (no estimated thermo: all from the reference library)"
 	}
 	ge := ""
-	if len(u.Unmeasured) > 0 {
+	if len(u.Unmeasured) > 0 || len(u.Given) > 0 {
 		ge = "≥ "
 	}
 	s := fmt.Sprintf("%s×/÷ %.2f (σ(ΔG°r) = %s from the estimates of %s", ge, u.Factor, un.energy(u.Sigma), strings.Join(u.Estimated, ", "))
 	if len(u.Unmeasured) > 0 {
 		s += "; no measured error for " + strings.Join(u.Unmeasured, ", ")
+	}
+	if given != "" {
+		s += "; " + given
 	}
 	return s + ")"
 }

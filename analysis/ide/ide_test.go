@@ -60,7 +60,7 @@ func TestFormatKeepsTokensAndIsIdempotent(t *testing.T) {
 func TestFormatLayout(t *testing.T) {
 	src := "species  x   C   # c\n      symmetry  2\n nasa7 300 1000 5000\n low 1 2 3 4 5 6 7\n high 1 2 3 4 5 6 7\n"
 	f := speciesfile.Parse("/w/f.kiln", []byte(src))
-	want := "species x C   # c\n  symmetry 2\n  nasa7 300 1000 5000\n    low  1 2 3 4 5 6 7\n    high 1 2 3 4 5 6 7\n"
+	want := "species x C   # c\n  symmetry 2\n  nasa7 300 1000 5000\n    low   1  2  3  4  5  6  7\n    high  1  2  3  4  5  6  7\n"
 	assert.Equal(t, want, apply(t, src, Format(f)))
 }
 

@@ -14,6 +14,7 @@ import (
 	"unicode/utf8"
 
 	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/internal/wording"
 )
 
 // compareJSON is the output of `kiln compare --json`; the keys are a public
@@ -58,9 +59,15 @@ type compareSummary struct {
 	OnlyA            int `json:"only_in_a"`
 	OnlyB            int `json:"only_in_b"`
 	MatchedReactions int `json:"matched_reactions"`
-	RateFlagged      int `json:"rate_flagged"`
-	ReactionsOnlyA   int `json:"reactions_only_in_a"`
-	ReactionsOnlyB   int `json:"reactions_only_in_b"`
+	// Reactions of each file in the matched pairs: a pair holds every
+	// reaction of its equation on each side (a duplicate pair is one match
+	// of two reactions), so a file's reactions are these plus its
+	// reactions_only_in_… (an extension).
+	MatchedReactionsA int `json:"matched_reactions_a"`
+	MatchedReactionsB int `json:"matched_reactions_b"`
+	RateFlagged       int `json:"rate_flagged"`
+	ReactionsOnlyA    int `json:"reactions_only_in_a"`
+	ReactionsOnlyB    int `json:"reactions_only_in_b"`
 }
 
 type compareRef struct {
@@ -123,6 +130,15 @@ type compareRxn struct {
 	Ratio     numericMap `json:"rate_ratio"`
 	Flagged   bool       `json:"flagged"`
 	Note      *string    `json:"note"`
+	// Every reaction of the equation on each side (line_a/line_b is the
+	// first) and whether they repeat it: "" (written once), "declared"
+	// (each marked duplicate) or "undeclared" (an extension).
+	LinesA  []int  `json:"lines_a"`
+	LinesB  []int  `json:"lines_b"`
+	RepeatA string `json:"repeat_a"`
+	RepeatB string `json:"repeat_b"`
+
+	rateNote string // the note without the repeat notes, for the text table
 }
 
 type compareRxnRef struct {
@@ -287,7 +303,10 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 	}
 	for _, p := range c.Reactions {
 		row := compareRxn{EquationA: p.A.Equation, LineA: p.A.Line, EquationB: p.B.Equation, LineB: p.B.Line, Reversed: p.Reversed,
-			Ratio: numericMap{}, Flagged: p.Flagged(c.RateFactor), Note: optString(p.Note)}
+			Ratio: numericMap{}, Flagged: p.Flagged(c.RateFactor), Note: optString(joinNotes(p.Note, p.RepeatNote())), rateNote: p.Note,
+			LinesA: refLines(p.AllA), LinesB: refLines(p.AllB), RepeatA: string(p.RepeatA), RepeatB: string(p.RepeatB)}
+		out.Summary.MatchedReactionsA += len(p.AllA)
+		out.Summary.MatchedReactionsB += len(p.AllB)
 		for k, tt := range analysis.CompareRateTemps {
 			row.Ratio[tt.Key] = p.Ratio[k]
 		}
@@ -310,6 +329,54 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 	out.Summary.MatchedReactions = len(out.Reactions)
 	out.Summary.ReactionsOnlyA, out.Summary.ReactionsOnlyB = len(out.RxnOnlyA), len(out.RxnOnlyB)
 	return out
+}
+
+// joinNotes joins the non-empty notes with "; ".
+func joinNotes(a, b string) string {
+	switch {
+	case a == "":
+		return b
+	case b == "":
+		return a
+	}
+	return a + "; " + b
+}
+
+// refLines lists the lines of reactions.
+func refLines(rs []analysis.ReactionRef) []int {
+	out := make([]int, len(rs))
+	for i, r := range rs {
+		out[i] = r.Line
+	}
+	return out
+}
+
+// repeatedMatches counts the matched equations written more than once on
+// a side, e.g. "1 duplicate pair in A, 1 in B"; "" when there are none.
+func repeatedMatches(rs []compareRxn) string {
+	var declA, declB, undA, undB int
+	for _, r := range rs {
+		switch r.RepeatA {
+		case string(analysis.RepeatDeclared):
+			declA++
+		case string(analysis.RepeatUndeclared):
+			undA++
+		}
+		switch r.RepeatB {
+		case string(analysis.RepeatDeclared):
+			declB++
+		case string(analysis.RepeatUndeclared):
+			undB++
+		}
+	}
+	var parts []string
+	if declA+declB > 0 {
+		parts = append(parts, fmt.Sprintf("%d equation(s) declared duplicate in A, %d in B", declA, declB))
+	}
+	if undA+undB > 0 {
+		parts = append(parts, fmt.Sprintf("%d equation(s) repeated without `duplicate` in A, %d in B", undA, undB))
+	}
+	return strings.Join(parts, "; ")
 }
 
 // clip shortens s to at most n characters, marking the cut with "…".
@@ -362,8 +429,8 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 		}
 	}
 	s := o.Summary
-	fmt.Fprintf(w, "A: %s (%d species, %d reactions)\n", o.A.File, o.A.Species, o.A.Reactions)
-	fmt.Fprintf(w, "B: %s (%d species, %d reactions)\n", o.B.File, o.B.Species, o.B.Reactions)
+	fmt.Fprintf(w, "A: %s (%d species, %s)\n", o.A.File, o.A.Species, wording.Count(o.A.Reactions, "reaction"))
+	fmt.Fprintf(w, "B: %s (%d species, %s)\n", o.B.File, o.B.Species, wording.Count(o.B.Reactions, "reaction"))
 	for _, f := range []compareFile{o.A, o.B} {
 		if f.Errors > 0 {
 			fmt.Fprintf(w, "note: %s has %d syntax or structure error(s); broken statements were left out (`kiln check` lists every problem)\n", clip(filepath.Base(f.File), 40), f.Errors)
@@ -374,7 +441,11 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 	}
 	fmt.Fprintf(w, "Species: %d matched by structure (%d under different names), %d only in A, %d only in B, %d name clash(es)\n",
 		s.Matched, s.Renamed, s.OnlyA, s.OnlyB, s.NameClashes)
-	fmt.Fprintf(w, "Reactions: %d matched, %d only in A, %d only in B\n", s.MatchedReactions, s.ReactionsOnlyA, s.ReactionsOnlyB)
+	fmt.Fprintf(w, "Reactions: %d matched (%d of A's %d reactions, %d of B's %d), %d only in A, %d only in B\n", s.MatchedReactions,
+		s.MatchedReactionsA, o.A.Reactions, s.MatchedReactionsB, o.B.Reactions, s.ReactionsOnlyA, s.ReactionsOnlyB)
+	if n := repeatedMatches(o.Reactions); n != "" {
+		fmt.Fprintf(w, "  %s: each is one match, its rates summed\n", n)
+	}
 
 	if len(o.Renames) > 0 {
 		fmt.Fprintf(w, "\nSame structure under different names (%d)\n", len(o.Renames))
@@ -424,7 +495,7 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 				flagged[f] = true
 			}
 			cell := func(v, scale float64, key string) string {
-				c := fmt.Sprintf("%+.2f", v/scale)
+				c := analysis.FormatSigned(v/scale, 2)
 				if flagged[key] {
 					c += "*"
 				} else {
@@ -497,10 +568,31 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 			if r.Reversed {
 				note = "B writes it reversed"
 			}
-			if r.Note != nil {
-				note = strings.TrimPrefix(note+"; "+*r.Note, "; ")
+			// Reactions of one equation on a side (their lines in the
+			// first column) are summed; the JSON note says more.
+			repeats := []struct{ side, how string }{{"A: ", r.RepeatA}, {"B: ", r.RepeatB}}
+			if r.RepeatA == r.RepeatB {
+				repeats = repeats[:1]
+				repeats[0].side = ""
 			}
-			fmt.Fprintf(tw, "%d\t%s\t%s\t%s\t%s\t%s\n", r.LineA, clip(r.EquationA, 44), cells[0], cells[1], cells[2], clip(note, 28))
+			for _, rep := range repeats {
+				switch rep.how {
+				case string(analysis.RepeatDeclared):
+					note = joinNotes(note, rep.side+"duplicates summed")
+				case string(analysis.RepeatUndeclared):
+					note = joinNotes(note, rep.side+"repeats summed")
+				}
+			}
+			note = joinNotes(note, r.rateNote)
+			lines := strconv.Itoa(r.LineA)
+			if len(r.LinesA) > 1 {
+				ls := make([]string, len(r.LinesA))
+				for i, l := range r.LinesA {
+					ls[i] = strconv.Itoa(l)
+				}
+				lines = clip(strings.Join(ls, ","), 16)
+			}
+			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", lines, clip(r.EquationA, 44), cells[0], cells[1], cells[2], clip(note, 28))
 		}
 		tw.Flush()
 		more(limit(len(rx)), len(rx))

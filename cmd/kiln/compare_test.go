@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"math"
+	"os"
 	"path/filepath"
 	"strconv"
 	"strings"
@@ -192,4 +193,44 @@ func TestCompareUnreadable(t *testing.T) {
 	code, stdout, _ := runKiln(t, "compare", a, b)
 	assert.Equal(t, exitOK, code)
 	assert.Contains(t, stdout, "2 species with an unreadable SMILES match nothing (bad, worse)")
+}
+
+// TestCompareCountsDuplicates: tester3's kelp.kiln against a copy with one
+// rate changed. Its HO2 + HO2 pair declared `duplicate` is one match of two
+// reactions on each side: the counts say so, and every reaction of each file
+// is in a match or listed as only on its side.
+func TestCompareCountsDuplicates(t *testing.T) {
+	src, err := os.ReadFile(filepath.Join("..", "..", "testdata", "tester3", "kelp.kiln"))
+	require.NoError(t, err)
+	dir := t.TempDir()
+	a, b := filepath.Join(dir, "a.kiln"), filepath.Join(dir, "b.kiln")
+	require.NoError(t, os.WriteFile(a, src, 0o644))
+	changed := strings.Replace(string(src), "A=3.66e14", "A=7.32e14", 1)
+	require.NotEqual(t, string(src), changed)
+	require.NoError(t, os.WriteFile(b, []byte(changed), 0o644))
+	statements := strings.Count("\n"+string(src), "\nreaction ")
+
+	o := compareJSONOf(t, exitOK, a, b)
+	assert.Equal(t, statements, o.A.Reactions)
+	assert.Equal(t, o.A.Reactions, o.Summary.MatchedReactionsA+o.Summary.ReactionsOnlyA)
+	assert.Equal(t, o.B.Reactions, o.Summary.MatchedReactionsB+o.Summary.ReactionsOnlyB)
+	assert.Equal(t, statements-1, o.Summary.MatchedReactions, "one duplicate pair is one match")
+	var dup []compareRxn
+	for _, r := range o.Reactions {
+		if r.RepeatA != "" || r.RepeatB != "" {
+			dup = append(dup, r)
+		}
+	}
+	require.Len(t, dup, 1)
+	assert.Equal(t, "declared", dup[0].RepeatA)
+	assert.Equal(t, "declared", dup[0].RepeatB)
+	assert.Len(t, dup[0].LinesA, 2)
+	require.NotNil(t, dup[0].Note)
+	assert.Contains(t, *dup[0].Note, "2 reactions declared duplicate in A")
+
+	_, stdout, _ := runKiln(t, "compare", a, b)
+	assert.Contains(t, stdout, fmt.Sprintf("Reactions: %d matched (%d of A's %d reactions, %d of B's %d)", statements-1,
+		statements, statements, statements, statements))
+	assert.Contains(t, stdout, "1 equation(s) declared duplicate in A, 1 in B")
+	assert.Regexp(t, `\n\d+,\d+ +HO2 \+ HO2 <=> H2O2 \+ O2 .*duplicates summed`, stdout)
 }

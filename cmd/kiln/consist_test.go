@@ -202,7 +202,7 @@ species lump
 	assert.Equal(t, exitOK, code, stderr)
 	code, _, stderr = runKiln(t, "fill", path)
 	assert.Equal(t, exitOK, code, stderr)
-	assert.Contains(t, stderr, "every species already has thermo")
+	assert.Contains(t, stderr, "every species of this file already has thermo")
 }
 
 // TestHelpEverywhere (case 14): --help and -h work on every command.

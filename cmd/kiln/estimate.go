@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -30,6 +31,13 @@ type estimateJSON struct {
 	SymmetryNumber *json.Number     `json:"symmetry_number"` // exact integer of any size
 	OpticalIsomers *int             `json:"optical_isomers"`
 	MissingGroups  []string         `json:"missing_groups"`
+	// Flags words each entry of missing_groups as check, summary and hover
+	// word it (extension; analysis.FlagText).
+	Flags []string `json:"flags,omitempty"`
+	// UncertaintyS298 is the lower bound on the standard uncertainty of
+	// S°298 from approximations that change it (extension; absent when
+	// none does).
+	UncertaintyS298 *float64 `json:"uncertainty_s298_j_mol_k,omitempty"`
 	// ResonanceForm is the canonical SMILES of the resonance structure
 	// estimated, for a radical with several (engine/benson/resonance.go).
 	ResonanceForm string `json:"resonance_form,omitempty"`
@@ -62,6 +70,9 @@ type correctionJSON struct {
 type errorJSON struct {
 	Message  string `json:"message"`
 	Position *int   `json:"position"`
+	// hint is a line of advice for the text output (the message itself
+	// is worded as check words it).
+	hint string
 }
 
 type nasaJSON struct {
@@ -148,6 +159,10 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 	est, err := ws.EstimateMolecule(m, opts)
 	if err != nil {
 		r.Error = &errorJSON{Message: "kiln cannot estimate it: " + analysis.RefusalReason(err)}
+		if ue := (*benson.UnsupportedError)(nil); errors.As(err, &ue) && ue.Element != "" {
+			// Nothing kiln can do: say where the thermo has to come from.
+			r.Error.hint = "a species with " + ue.Element + " needs its thermo given in a nasa7 or thermo-table block of its .kiln file"
+		}
 		return r, nil
 	}
 	r.Hf298 = ptr(jnum(est.Hf298 / 1000))
@@ -164,8 +179,12 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		for _, t := range g.Corrections {
 			r.Corrections = append(r.Corrections, correctionJSON{Name: t.Name, Count: t.Count, Hf298: jnum(t.Hf298 / 1000), S298: jnum(t.S298)})
 		}
-		for _, ms := range g.Missing {
+		for _, ms := range est.Flags() {
 			r.MissingGroups = append(r.MissingGroups, ms.Group)
+			r.Flags = append(r.Flags, analysis.FlagText(ms))
+		}
+		if g.UncertaintyS298 > 0 {
+			r.UncertaintyS298 = ptr(jnum(g.UncertaintyS298))
 		}
 		r.SymmetryNumber = ptr(json.Number(g.Sigma()))
 		r.OpticalIsomers = ptr(g.OpticalIsomers)
@@ -190,7 +209,8 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 	if withNASA {
 		p, fit, err := est.NASA7()
 		if err != nil {
-			r.Error = &errorJSON{Message: "NASA-7 fit failed: " + err.Error()}
+			// SI in JSON, like its keys.
+			r.Error = &errorJSON{Message: "NASA-7 fit failed: " + analysis.FitRefusal(err, analysis.Units{KJ: true})}
 		} else {
 			r.NASA7 = &nasaJSON{TLow: p.TLow, TMid: p.TMid, THigh: p.THigh, Low: p.Low, High: p.High, MaxCpResidual: jnum(fit.MaxCpResidual), Source: est.BlockSource(stamp)}
 		}
@@ -204,17 +224,20 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 // stays narrow; --json always has them.
 func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u analysis.Units, withNASA, withSources bool, stamp string) {
 	fmt.Fprintf(w, "%s\n", r.Input)
-	if r.Error != nil {
+	if r.Error != nil && est == nil { // with an estimate, the error is its refused fit (below)
 		if r.Error.Position != nil {
 			fmt.Fprintf(w, "  error at position %d: %s\n", *r.Error.Position, r.Error.Message)
 			fmt.Fprintf(w, "    %s\n    %s^\n", r.Input, strings.Repeat(" ", *r.Error.Position-1))
 		} else {
 			fmt.Fprintf(w, "  error: %s\n", r.Error.Message)
+			if r.Error.hint != "" {
+				fmt.Fprintf(w, "  %s\n", r.Error.hint)
+			}
 		}
 		return
 	}
 	other := analysis.Units{KJ: !u.KJ}
-	f2 := func(v float64) string { return strconv.FormatFloat(v, 'f', 2, 64) }
+	f2 := func(v float64) string { return analysis.FormatFixed(v, 2) }
 	fmt.Fprintf(w, "  formula %s, molar mass %.3f g/mol\n", *r.Formula, *r.MolarMass)
 	if g := est.Group; g != nil {
 		var rows [][]string
@@ -229,8 +252,8 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		if g.Form != "" {
 			fmt.Fprintf(w, "  estimated as the resonance structure %s (most stable of %d)\n", g.Form, g.ResonanceForms)
 		}
-		for _, ms := range g.Missing {
-			fmt.Fprintf(w, "  MISSING group %s: approximated by %s (%s)\n", ms.Group, ms.Approximation, ms.Note)
+		for _, ms := range est.Flags() {
+			fmt.Fprintf(w, "  %s %s\n", analysis.FlagHeading(ms), analysis.FlagText(ms))
 		}
 		if withSources {
 			fmt.Fprintln(w, "  sources:")
@@ -258,7 +281,11 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	} else {
 		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), tabulated: its uncertainty is the source's\n", u.Energy(est.Hf298), other.Energy(est.Hf298))
 	}
-	fmt.Fprintf(w, "  S°298   = %s (%s)\n", u.Entropy(est.S298), other.Entropy(est.S298))
+	if g := est.Group; g != nil && g.UncertaintyS298 > 0 {
+		fmt.Fprintf(w, "  S°298   = %s (%s), ± %s at least, 1σ: from the approximations that change S°\n", u.Entropy(est.S298), other.Entropy(est.S298), u.Entropy(g.UncertaintyS298))
+	} else {
+		fmt.Fprintf(w, "  S°298   = %s (%s)\n", u.Entropy(est.S298), other.Entropy(est.S298))
+	}
 	fmt.Fprintf(w, "  Cp in %s:", u.EntropyName())
 	for i, T := range benson.StdTemps {
 		fmt.Fprintf(w, " %gK %s", T, f2(u.EntropyValue(est.Cp[i])))
@@ -267,6 +294,8 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	if p, fit, err := est.NASA7(); withNASA && err == nil {
 		fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %s):\n", u.Entropy(fit.MaxCpResidual))
 		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, est.BlockSource(stamp), "\n"))
+	} else if withNASA {
+		writeWrapped(w, "  ", "NASA-7 fit refused: "+analysis.FitRefusal(err, u))
 	}
 	writeWrapped(w, "  ", ide.Caution)
 }

@@ -33,27 +33,41 @@ func runFill(e env, args []string) (int, error) {
 	}
 	// Every species left without thermo is listed with its reason, and makes
 	// the exit code 1 (documented in kiln help). Positions are those of the
-	// file as it is on disk afterwards (the written file, or the unchanged
-	// one with --dry-run), where kiln check then reports the same species.
-	lines, shifted := res.File.Lines, len(edits) > 0 && flags["dry-run"] != "true"
-	if shifted {
-		lines = speciesfile.NewLineIndex(out)
-	}
+	// file as fill writes it, with or without --dry-run (the + side of the
+	// dry-run diff), where kiln check then reports the same species; when
+	// insertions above it moved a species, its line before them follows.
+	lines := speciesfile.NewLineIndex(out)
 	code := exitOK
 	for _, sk := range skips {
 		off := res.SpeciesLoc(sk.Species).Span.Start
-		if shifted {
-			off = shiftedOffset(off, edits)
+		before := res.File.Lines.Position(off)
+		pos := lines.Position(shiftedOffset(off, edits))
+		moved := ""
+		if pos.Line != before.Line {
+			moved = fmt.Sprintf(" (line %d before fill)", before.Line+1)
 		}
-		pos := lines.Position(off)
-		fmt.Fprintf(e.stderr, "%s:%d:%d: skipped %s: %s\n", displayPath(abs), pos.Line+1, pos.Char+1, sk.Species.Name, sk.Reason)
+		fmt.Fprintf(e.stderr, "%s:%d:%d: skipped %s: %s%s\n", displayPath(abs), pos.Line+1, pos.Char+1, sk.Species.Name, sk.Reason, moved)
 		code = exitProblems
+	}
+	// Species of included files are not filled (fill writes only the file
+	// it is given); those without thermo are listed where they are declared.
+	// They do not change the exit code: fill on their own file is the step
+	// that fills them.
+	included := res.IncludedWithoutThermo()
+	for _, sk := range included {
+		f := res.Files[sk.Species.File]
+		pos := f.Lines.Position(res.SpeciesLoc(sk.Species).Span.Start)
+		fmt.Fprintf(e.stderr, "%s:%d:%d: not filled %s: %s\n", displayPath(sk.Species.File), pos.Line+1, pos.Char+1, sk.Species.Name, sk.Reason)
+	}
+	notFilled := ""
+	if len(included) > 0 {
+		notFilled = fmt.Sprintf(", %d species of included files not filled (listed above)", len(included))
 	}
 	if len(edits) == 0 {
 		if len(skips) == 0 {
-			fmt.Fprintf(e.stderr, "kiln fill: %s: every species already has thermo\n", files[0])
+			fmt.Fprintf(e.stderr, "kiln fill: %s: every species of this file already has thermo%s\n", files[0], notFilled)
 		} else {
-			fmt.Fprintf(e.stderr, "kiln fill: %s: nothing inserted, %d species skipped\n", files[0], len(skips))
+			fmt.Fprintf(e.stderr, "kiln fill: %s: nothing inserted, %d species skipped%s\n", files[0], len(skips), notFilled)
 		}
 		return code, nil
 	}
@@ -69,6 +83,7 @@ func runFill(e env, args []string) (int, error) {
 	if len(skips) > 0 {
 		msg += fmt.Sprintf(", skipped %d species (listed above)", len(skips))
 	}
+	msg += notFilled
 	fmt.Fprintf(e.stderr, "kiln fill: %s: %s\n", files[0], msg)
 	return code, nil
 }

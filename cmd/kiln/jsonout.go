@@ -14,8 +14,8 @@ import (
 // JSON output conventions shared by every command: numbers are rounded to
 // 12 significant digits, so that binary float noise never shows
 // (68.664, not 68.66400000000003: the data behind them carry at most 6
-// significant digits); maps keyed by temperature or pressure list their keys
-// in numeric order.
+// significant digits); a value that is not a finite number is null; maps
+// keyed by temperature or pressure list their keys in numeric order.
 
 // jnum rounds v to 12 significant digits for output (jsonnum.Round).
 func jnum(v float64) float64 { return jsonnum.Round(v) }
@@ -76,22 +76,17 @@ func (m numericKeys[V]) MarshalJSON() ([]byte, error) {
 	return buf.Bytes(), nil
 }
 
-// writeJSON writes v indented, as every --json output is, with every number
-// rounded to 12 significant digits (see jnum): the one place that decides
-// how kiln's JSON numbers look.
+// writeJSON writes v indented, as every --json output is, through
+// jsonnum.Marshal: every number rounded to 12 significant digits (see jnum)
+// and every float that is not finite written as null, the one place that
+// decides how kiln's JSON numbers look.
 func writeJSON(w io.Writer, v any) error {
-	var buf bytes.Buffer
-	enc := json.NewEncoder(&buf)
-	enc.SetIndent("", "  ")
-	if err := enc.Encode(v); err != nil {
+	out, err := jsonnum.Marshal(v)
+	if err != nil {
 		return fmt.Errorf("writing output: %w", err)
 	}
-	if _, err := w.Write(roundNumbers(buf.Bytes())); err != nil {
+	if _, err := w.Write(append(out, '\n')); err != nil {
 		return fmt.Errorf("writing output: %w", err)
 	}
 	return nil
 }
-
-// roundNumbers rewrites the number literals of a JSON text as jnum rounds
-// them (jsonnum.RoundLiterals).
-func roundNumbers(in []byte) []byte { return jsonnum.RoundLiterals(in) }

@@ -56,3 +56,44 @@ func TestDenoxExampleClean(t *testing.T) {
 		assert.Equal(t, "information", d.Severity, "%+v", d)
 	}
 }
+
+// TestFillCheckCages: `kiln fill` then `kiln check` on cage and bridged
+// ring systems (the tester's cage.kiln and every parent of the ring-system
+// table): what fill writes, check accepts (no thermo-mismatch), and a
+// species whose estimate kiln knows to be impossible (cubane's S° below the
+// translational + rotational bound) is skipped with that reason, not
+// written.
+func TestFillCheckCages(t *testing.T) {
+	src, err := os.ReadFile("../../testdata/tester3/cage.kiln")
+	require.NoError(t, err)
+	text := string(src) + strings.Join([]string{
+		"species norbornane C1CC2CCC1C2",
+		"species norbornene C1=CC2CCC1C2",
+		"species norbornadiene C1=CC2C=CC1C2",
+		"species bco C1CC2CCC1CC2",
+		"species bcpentane C1CC2CC12",
+		"species spiropentane C1CC11CC1",
+		"",
+	}, "\n")
+	path := filepath.Join(t.TempDir(), "cage.kiln")
+	require.NoError(t, os.WriteFile(path, []byte(text), 0o644))
+	code, _, stderr := runKiln(t, "fill", path)
+	assert.Equal(t, exitProblems, code, "cubane is skipped")
+	assert.Contains(t, stderr, "skipped cubane: no NASA-7 polynomial: the estimated S°298")
+	assert.Contains(t, stderr, "is below")
+	assert.NotContains(t, stderr, "skipped adamantane")
+	filled, err := os.ReadFile(path)
+	require.NoError(t, err)
+	assert.Equal(t, strings.Count(text, "species ")-1, strings.Count(string(filled), "nasa7 "), "every species but cubane gets a block")
+
+	_, stdout, stderr := runKiln(t, "check", "--format", "json", path)
+	var diags []checkDiag
+	require.NoError(t, json.Unmarshal([]byte(stdout), &diags), stderr)
+	for _, d := range diags {
+		assert.NotEqual(t, "thermo-mismatch", d.Code, "%+v", d)
+		assert.NotEqual(t, "error", d.Severity, "%+v", d)
+		if d.Severity == "warning" {
+			assert.Equal(t, "missing-group", d.Code, "only the estimate's own flags: %+v", d)
+		}
+	}
+}

@@ -159,7 +159,10 @@ Usage:
         --tmid/--thigh apply to every block, reference-library species included
         (refitted; a THIGH beyond the reference data is refused). Species that
         get no block are listed on stderr with the reason, and the exit code is
-        then 1. --dry-run prints a unified diff instead of writing the file.
+        then 1; positions are those of the filled file, with or without
+        --dry-run. Species of included files without thermo are listed as not
+        filled (fill only writes FILE). --dry-run prints a unified diff
+        instead of writing the file.
         The file is replaced atomically (through a symbolic link, its target),
         keeping its permissions; a file its owner may not write is refused.
   kiln plot SPECIES --file FILE -o OUT.svg
@@ -178,7 +181,9 @@ Usage:
   kiln equilibrium FILE --mix "NAME:AMOUNT, ..." [--temperature K] [--pressure P]
                    [--adiabatic] [--volume] [--json]
         Equilibrium composition over the file's species by Gibbs-energy
-        minimisation, from the file's own thermo. --temperature (default
+        minimisation, from the file's own thermo. --mix lists species and
+        amounts (mol, any scale), items separated by commas or blanks:
+        "CH4:1, O2:2, N2:7.52" or "CH4:1 O2:2 N2:7.52". --temperature (default
         298.15 K) and --pressure (default 1atm; units atm, bar, Pa, kPa, Torr)
         give the state of the mix; --adiabatic finds the flame temperature
         (constant enthalpy, or constant internal energy with --volume);

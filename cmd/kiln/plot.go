@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 
+	"kiln.dev/kiln/analysis"
 	"kiln.dev/kiln/engine/benson"
 	"kiln.dev/kiln/engine/nasa"
 	"kiln.dev/kiln/internal/thermoplot"
@@ -42,7 +43,7 @@ func runPlot(e env, args []string) (int, error) {
 	if est := sp.Estimate; est != nil {
 		poly, _, err := est.NASA7()
 		if err != nil {
-			return 0, fmt.Errorf("fitting %s: %w", sp.Name, err)
+			return 0, fmt.Errorf("%s: no NASA-7 polynomial for %s: %s", file, sp.Name, analysis.FitRefusal(err, res.Units()))
 		}
 		cp := est.Cp
 		series = append(series,

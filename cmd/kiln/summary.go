@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"io"
+	"math"
 	"sort"
 	"strconv"
 	"strings"
@@ -29,6 +30,11 @@ type summarySpecies struct {
 	Hf298            *float64   `json:"hf298_kj_mol"`
 	S298             *float64   `json:"s298_j_mol_k"`
 	Cp               numericMap `json:"cp_j_mol_k"` // null where the block does not reach
+	// Flags are the approximations of an estimated species, worded as
+	// check, estimate and hover word them (extension; absent when none or
+	// when the thermo comes from the file).
+	Flags    []string `json:"flags,omitempty"`
+	headings []string // FlagHeading of each flag, for the text output
 }
 
 type summaryReaction struct {
@@ -53,6 +59,15 @@ type summaryReaction struct {
 	// ReverseFactor is the factor k_r inherits from estimated thermo,
 	// exp(σ(ΔG°r)/RT) at 1000 K (null when k_r does not come from thermo).
 	ReverseFactor numericMap `json:"reverse_rate_factor"`
+	// ReverseGiven names the species whose thermo is the file's own block
+	// with no stated uncertainty (extension; absent when none): the factor
+	// covers only the estimates and is then a lower bound, and with no
+	// estimate involved it is 1 by construction, not a measured certainty.
+	ReverseGiven []string `json:"reverse_rate_given,omitempty"`
+	// ReverseLowerBound is true when the factor is a lower bound: some
+	// species' uncertainty is unknown (given blocks or classes without a
+	// measured error; extension, absent when false).
+	ReverseLowerBound bool `json:"reverse_rate_factor_lower_bound,omitempty"`
 	// RateTableEdge is the tabulated pressure (bar) whose rate is shown
 	// when rate_pressure_bar lies outside the reaction's pressure table
 	// (extension; absent otherwise).
@@ -108,6 +123,12 @@ func buildSummary(results []*analysis.Result) summaryJSON {
 		row := summarySpecies{Name: sp.Name, ThermoSource: string(sp.Source)}
 		if sp.Source == analysis.SourceEstimate && sp.Estimate != nil {
 			row.ReferenceLibrary = sp.Estimate.Library
+		}
+		// The estimate's flags whenever kiln estimated the species, as
+		// check reports them (its missing-group diagnostic).
+		for _, m := range sp.Estimate.Flags() {
+			row.Flags = append(row.Flags, analysis.FlagText(m))
+			row.headings = append(row.headings, analysis.FlagHeading(m))
 		}
 		if sp.Decl.SMILES != nil {
 			row.SMILES = ptr(sp.Decl.SMILES.Text)
@@ -166,6 +187,8 @@ func summaryReactionOf(res *analysis.Result, r *analysis.Reaction, P float64) su
 	}
 	if u, ok := res.ReverseRateUncertainty(r, 1000); ok {
 		row.ReverseFactor = numericMap{"1000": ptr(u.Factor)}
+		row.ReverseGiven = u.Given
+		row.ReverseLowerBound = len(u.Given) > 0 || len(u.Unmeasured) > 0
 	}
 	if r.RateTableEdge > 0 {
 		row.RateTableEdge = ptr(jnum(r.RateTableEdge / 1e5))
@@ -173,9 +196,10 @@ func summaryReactionOf(res *analysis.Result, r *analysis.Reaction, P float64) su
 	return row
 }
 
-// sciText writes a value with 3 significant digits ("—" for none).
+// sciText writes a value with 3 significant digits ("—" for none, and
+// for a value that is not a finite number, as FormatFixed does).
 func sciText(p *float64) string {
-	if p == nil {
+	if p == nil || math.IsInf(*p, 0) || math.IsNaN(*p) {
 		return "—"
 	}
 	return strconv.FormatFloat(*p, 'g', 3, 64)
@@ -190,7 +214,7 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		if p == nil {
 			return "—"
 		}
-		return strconv.FormatFloat(conv(*p), 'f', 2, 64)
+		return analysis.FormatFixed(conv(*p), 2)
 	}
 	energy := func(kj *float64) string {
 		return fixed(kj, func(v float64) float64 { return u.EnergyValue(v * 1000) })
@@ -211,6 +235,11 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 			entropy(sp.Cp["300"]), entropy(sp.Cp["1000"]), entropy(sp.Cp["1500"])})
 	}
 	writeTable(w, "", []string{"name", "formula", "thermo", "ΔHf°298", "S°298", "Cp(300)", "Cp(1000)", "Cp(1500)"}, rows)
+	for _, sp := range s.Species {
+		for i, f := range sp.Flags {
+			writeWrapped(w, "  ", sp.Name+": "+sp.headings[i]+" "+f)
+		}
+	}
 
 	fmt.Fprintf(w, "\nReactions (%d); ΔH°r and ΔG°r at 298 K in %s, Kp at 1 bar\n", len(s.Reactions), u.EnergyName())
 	rows = rows[:0]
@@ -247,7 +276,13 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		}
 		factor := ""
 		if f := reverseFactor(r); f != nil {
-			factor = strconv.FormatFloat(*f, 'f', 2, 64)
+			factor = analysis.FormatFixed(*f, 2)
+			switch {
+			case len(r.ReverseGiven) > 0 && *f == 1:
+				factor = "given" // only given blocks: no uncertainty stated
+			case r.ReverseLowerBound:
+				factor = "≥" + factor
+			}
 		}
 		rows = append(rows, []string{reactionLine(r), shorten(r.Equation, 44), kf, kr, factor, limit})
 	}

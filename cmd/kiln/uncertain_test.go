@@ -64,3 +64,70 @@ reaction propyl + H => propane   A=1e13 n=0 Ea=0
 	require.Equal(t, exitOK, code)
 	assert.Contains(t, stdout, "k_r ×/÷")
 }
+
+// TestSummaryReverseFactorGiven: a file's own thermo blocks state no
+// uncertainty. After `kiln fill`, whose blocks hold the estimates' numbers,
+// summary shows the same k_r factor as before; a reaction whose species all
+// have hand-made blocks shows "given" (not 1.00), and one that mixes them
+// with estimates shows its factor as a lower bound; JSON lists the given
+// species and keeps the factor's key.
+func TestSummaryReverseFactorGiven(t *testing.T) {
+	src := `species H [H]
+species H2 [H][H]
+species propane CCC
+species propyl CC[CH2]
+reaction propane + H <=> propyl + H2   A=1e14 n=0 Ea=9
+`
+	factorText := func(out, eq string) string {
+		for _, line := range strings.Split(out, "\n") {
+			if strings.Contains(line, eq) && strings.Contains(line, "cm³") {
+				f := strings.Fields(line)
+				return f[len(f)-1]
+			}
+		}
+		t.Fatalf("no rate row for %q in\n%s", eq, out)
+		return ""
+	}
+	f := writeTemp(t, "f.kiln", src)
+	_, before, _ := runKiln(t, "summary", f)
+	code, _, stderr := runKiln(t, "fill", f)
+	require.Equal(t, exitOK, code, stderr)
+	_, after, _ := runKiln(t, "summary", f)
+	fb := factorText(before, "propane + H <=> propyl + H2")
+	assert.NotEqual(t, "1.00", fb)
+	assert.Equal(t, fb, factorText(after, "propane + H <=> propyl + H2"), "fill must not change the factor")
+
+	g := writeTemp(t, "g.kiln", `species H [H]
+species H2 [H][H]
+species ethanol CCO
+  thermo-table
+    hf298 -56.2
+    s298 67.5
+    cp 300=15.7 1000=33.4
+species ethoxy CC[O]
+  thermo-table
+    hf298 -3.9
+    s298 65.6
+    cp 300=16.0 1000=30.0
+species propane CCC
+species propyl CC[CH2]
+reaction ethanol + H <=> ethoxy + H2   A=1e13 n=0 Ea=8
+reaction ethanol + propyl <=> ethoxy + propane   A=1e11 n=0 Ea=8
+`)
+	code, out, stderr := runKiln(t, "summary", g)
+	require.Equal(t, exitOK, code, stderr)
+	assert.Equal(t, "given", factorText(out, "ethanol + H <=> ethoxy + H2"))
+	assert.True(t, strings.HasPrefix(factorText(out, "ethanol + propyl <=> ethoxy + propane"), "≥"))
+
+	_, js, _ := runKiln(t, "summary", "--json", g)
+	var s struct {
+		Reactions []summaryReaction `json:"reactions"`
+	}
+	require.NoError(t, json.Unmarshal([]byte(js), &s))
+	require.Len(t, s.Reactions, 2)
+	assert.Equal(t, []string{"ethanol", "ethoxy"}, s.Reactions[0].ReverseGiven)
+	assert.True(t, s.Reactions[0].ReverseLowerBound)
+	require.NotNil(t, reverseFactor(s.Reactions[0]))
+	assert.Equal(t, 1.0, *reverseFactor(s.Reactions[0]))
+	assert.Greater(t, *reverseFactor(s.Reactions[1]), 1.0)
+}

@@ -314,6 +314,9 @@ func (g *graph) terminal(j int) bool {
 type UnsupportedError struct {
 	Atom   int    // 1-based atom number in the structure, 0 for the whole molecule
 	Reason string // why, in words (no advice: callers say what to do in their own terms)
+	// Element is the element of Atom when the refusal is that no group
+	// holds it at all (Si, P, metals); "" for other refusals.
+	Element string
 }
 
 func (e *UnsupportedError) Error() string {

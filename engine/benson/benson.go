@@ -47,6 +47,7 @@ import (
 	"strings"
 
 	"kiln.dev/kiln/engine/molecule"
+	"kiln.dev/kiln/internal/wording"
 )
 
 // R is the molar gas constant in J/(mol K) (CODATA 2018, exact).
@@ -102,6 +103,17 @@ type Missing struct {
 	Note          string // how it approximates
 }
 
+// siteModel is the Approximation of a radical site whose S°/Cp increment is
+// computed by the statistical-mechanics site model (radical.go).
+const siteModel = "statistical-mechanics site model"
+
+// Modelled reports whether m is not a missing value but a quantity kiln
+// computes by a validated model in place of a tabulated increment: the S°
+// and Cp change at a radical site (tested against published radical
+// entropies and heat capacities, testdata/thermo/radicals.tsv). Such an
+// entry is shown with the estimate but is not an approximation to warn about.
+func (m Missing) Modelled() bool { return m.Approximation == siteModel }
+
 // Result is the outcome of Estimate. Hf298, S298 and every Cp equal exactly
 // the sum of Groups and Corrections. (Go does not allow a type and a function
 // of the same name in one package, so the result type is Result.)
@@ -137,6 +149,16 @@ type Result struct {
 	// there is only one).
 	Form           string
 	ResonanceForms int
+
+	// UncertaintyS298 is a lower bound on the standard uncertainty (1σ) of
+	// S°298 in J/(mol K) from the approximations that change S° (ring
+	// systems without a whole-system S°; see addRingCorrections); 0 when
+	// none does. kiln has no measured class error for S°, so 0 is not a
+	// claim of exactness.
+	UncertaintyS298 float64
+
+	// sFloor is the physical lower bound on S°298 (sfloor.go), J/(mol K).
+	sFloor float64
 }
 
 // Sigma returns σ in decimal, exact for any size.
@@ -161,6 +183,12 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	// Charged and isotope-labelled atoms: refused, naming the atom of lowest
 	// canonical symmetry class so that the reason does not depend on the
 	// atom order of the SMILES.
+	if err := elementScope(m); err != nil {
+		return nil, err
+	}
+	if err := valenceScope(m); err != nil {
+		return nil, err
+	}
 	// Charge-separated nitro, nitrate and N-oxide units are read as N=O
 	// first (hetero_n.go).
 	m = neutralNO(m)
@@ -196,7 +224,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 		// The method (parent + HBI + R ln(2S+1)) describes the high-spin
 		// state the structure's unpaired electrons imply; another spin state
 		// has a different energy that no table here gives.
-		return nil, &UnsupportedError{Reason: fmt.Sprintf("multiplicity %d is not the one the structure implies (%d unpaired electrons: multiplicity %d); group additivity has no data for other spin states", opts.Multiplicity, unpaired, unpaired+1)}
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("multiplicity %d is not the one the structure implies (%s: multiplicity %d); group additivity has no data for other spin states", opts.Multiplicity, wording.Count(unpaired, "unpaired electron"), unpaired+1)}
 	}
 	forms, bounded := kekuleForms(m)
 	if len(forms) > 1 {
@@ -298,6 +326,7 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 
 	est.Class = classify(m, g)
+	est.sFloor = entropyFloor(m, lnSigma, est.Multiplicity)
 	est.finish()
 	return est, nil
 }
@@ -353,8 +382,14 @@ func (e *Result) finish() {
 	for _, t := range e.Corrections {
 		e.add(t)
 	}
+	added := false
 	if f, ok := cpFalls(e); ok && !slices.ContainsFunc(e.Missing, func(m Missing) bool { return m.Group == cpFallsGroup }) {
-		e.Missing = append(e.Missing, f)
+		e.Missing, added = append(e.Missing, f), true
+	}
+	if f, ok := entropyFloorFlag(e); ok && !slices.ContainsFunc(e.Missing, func(m Missing) bool { return m.Group == entropyFloorGroup }) {
+		e.Missing, added = append(e.Missing, f), true
+	}
+	if added {
 		slices.SortStableFunc(e.Missing, func(a, b Missing) int {
 			return cmp.Or(strings.Compare(a.Group, b.Group), strings.Compare(a.Approximation, b.Approximation), strings.Compare(a.Note, b.Note))
 		})
@@ -458,6 +493,87 @@ func components(m *molecule.Molecule) int {
 //
 // Such species need a thermo block (or are in the reference library, which
 // is consulted before this package).
+// groupElements are the elements the group tables know: centres or
+// ligands of tabulated groups, and I as a ligand a user can give values
+// for (`group C-(I)(H)3`).
+var groupElements = map[string]bool{"C": true, "H": true, "O": true, "N": true, "S": true, "F": true, "Cl": true, "Br": true, "I": true}
+
+// elementScope refuses a structure with an element no group can hold
+// (Si, P, metals, noble gases not in the reference library …), naming the
+// element before anything else is said about the atom: [Si] is not a
+// carbene-type centre to kiln, it is an element without groups. The atom
+// named is the first of the alphabetically first such element.
+func elementScope(m *molecule.Molecule) error {
+	best := -1
+	for i, a := range m.Atoms {
+		if !groupElements[a.Element] && (best < 0 || a.Element < m.Atoms[best].Element) {
+			best = i
+		}
+	}
+	if best < 0 {
+		return nil
+	}
+	el := m.Atoms[best].Element
+	return &UnsupportedError{Atom: best + 1, Element: el, Reason: fmt.Sprintf("(%s): unsupported element %s (kiln's group tables cover C, H, O, N, S, F, Cl and Br; I only with `group` values you supply)", el, el)}
+}
+
+// ordinaryValence is the valence of a neutral atom whose extended valences
+// (allowed by SMILES: N 5, Cl 3, 5, 7 …) no group describes, with the one
+// exception valenceScope allows.
+var ordinaryValence = map[string]int{"N": 3, "F": 1, "Cl": 1, "Br": 1, "I": 1}
+
+// valenceScope refuses a neutral atom written with more bonds than its
+// ordinary valence (N#N=O: five bonds on the middle N), naming the atom and
+// its bonds, before any group is looked for. The one extended valence the
+// groups describe is the nitro/nitrate nitrogen N(=O)=O; charge-separated
+// structures ([N+], [O-]) are read by neutralNO and chargeRefusal, not here.
+// It runs on the structure as written.
+func valenceScope(m *molecule.Molecule) error {
+	for i, a := range m.Atoms {
+		max, ok := ordinaryValence[a.Element]
+		if !ok || a.Charge != 0 {
+			continue
+		}
+		total, doubleO := a.HCount, 0
+		var bonds []string
+		for _, b := range m.Adj[i] {
+			j := m.Other(b, i)
+			order := m.Bonds[b].Order
+			total += order
+			if order == 2 && m.Atoms[j].Element == "O" {
+				doubleO++
+			}
+			bonds = append(bonds, fmt.Sprintf("%s bond to atom %d (%s)", bondWord(order), j+1, m.Atoms[j].Element))
+		}
+		if a.HCount > 0 {
+			bonds = append(bonds, fmt.Sprintf("%d H", a.HCount))
+		}
+		if total <= max || a.Element == "N" && total == 5 && doubleO == 2 {
+			continue
+		}
+		why := "no group describes a halogen with more than one bond"
+		if a.Element == "N" {
+			why = "the only five-bond N kiln's groups describe is the nitro/nitrate N(=O)=O (N-oxides are written with formal charges, e.g. N#[N+][O-])"
+		}
+		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) exceeds its valence: %d bonds (%s) where a neutral %s has %d; %s",
+			a.Element, total, strings.Join(bonds, ", "), a.Element, max, why)}
+	}
+	return nil
+}
+
+// bondWord names a bond order.
+func bondWord(order int) string {
+	switch order {
+	case 1:
+		return "single"
+	case 2:
+		return "double"
+	case 3:
+		return "triple"
+	}
+	return fmt.Sprintf("order-%d", order)
+}
+
 func spinScope(m *molecule.Molecule) error {
 	// The atom named is chosen by element (then electron count), never by
 	// atom order, so that every spelling gets the same message.

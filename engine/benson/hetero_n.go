@@ -257,10 +257,8 @@ func (g *graph) nitrogenRingKey(r []int, nd, aromatic int) string {
 		return ""
 	}
 	if len(r) == 5 && nd == 2 && aromatic == 5 {
-		for _, a := range r {
-			if g.benzAtom[a] > 0 {
-				return "" // fused to a benzene ring (indole, carbazole): not the ring the correction was derived from
-			}
+		if g.fusedToBenzene(r) {
+			return "" // fused to a benzene ring (indole, carbazole): not the ring the correction was derived from
 		}
 		return "pyrrole"
 	}

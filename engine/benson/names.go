@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"strconv"
 	"strings"
+
+	"kiln.dev/kiln/internal/wording"
 )
 
 // ligandRank orders neighbour types in a normalised group name: heteroatoms
@@ -53,7 +55,7 @@ func ParseGroupName(s string) (string, error) {
 	}
 	if !hasDash {
 		if want != 0 {
-			return "", fmt.Errorf("group %q: centre %s needs %d neighbours", s, centre, want)
+			return "", fmt.Errorf("group %q: centre %s needs %s", s, centre, wording.Count(want, "neighbour"))
 		}
 		return centre, nil
 	}
@@ -89,7 +91,7 @@ func ParseGroupName(s string) (string, error) {
 		total += n
 	}
 	if total != want {
-		return "", fmt.Errorf("group %q: %d neighbours, centre %s takes %d", s, total, centre, want)
+		return "", fmt.Errorf("group %q: %s, centre %s takes %d", s, wording.Count(total, "neighbour"), centre, want)
 	}
 	return groupName(centre, counts), nil
 }

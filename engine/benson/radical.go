@@ -334,8 +334,8 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 			est.Corrections = append(est.Corrections, lostModes(site, count[site]))
 			est.Missing = append(est.Missing, Missing{
 				Group:         "HBI dS, dCp: " + site,
-				Approximation: "statistical-mechanics site model",
-				Note:          "no published entropy and heat-capacity increment at hand: the removed H's stretch and bends are taken out as harmonic oscillators, and the radical centre's inversion mode and changed internal rotors are added (radical.go)",
+				Approximation: siteModel,
+				Note:          "no published entropy and heat-capacity increment at hand: the removed H's stretch and bends are taken out as harmonic oscillators, and the radical centre's inversion mode and changed internal rotors are added",
 			})
 		}
 	}

@@ -305,3 +305,27 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 // structures count as equally stable (far above rounding, far below any
 // group value).
 const hfTie = 1.0
+
+// ResonanceStructures returns the Lewis structures of m's species reachable
+// by the one-electron shifts described at the top of this file (all of the
+// explored structures when none is a Lewis structure), m's own spelling
+// among them when it qualifies; capped reports that maxResonanceForms was
+// hit, when the set may depend on the spelling. Atom and bond indices are
+// m's in every structure. A species with one structure gives just m.
+// Callers use it for properties of the species rather than of one spelling,
+// such as which bonds are single in every structure.
+func ResonanceStructures(m *molecule.Molecule) (forms []*molecule.Molecule, capped bool) {
+	if m.UnpairedElectrons() == 0 {
+		return []*molecule.Molecule{m}, false
+	}
+	all, capped := resonanceForms(m, maxResonanceForms)
+	for _, f := range all {
+		if lewisAdmissible(f) {
+			forms = append(forms, f)
+		}
+	}
+	if len(forms) == 0 {
+		forms = all
+	}
+	return forms, capped
+}

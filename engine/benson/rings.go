@@ -161,10 +161,27 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 	if key == "" && oxy == 0 && carbonyl == 0 {
 		key = g.nitrogenRingKey(r, nd, aromatic) // hetero_n.go
 	}
+	if (key == "furan" || key == "thiophene") && g.fusedToBenzene(r) {
+		// Benzofuran, benzothiophene, dibenzofuran: the single ring's
+		// correction holds its own aromatic stabilisation, which the fused
+		// benzene ring changes; it is used as an approximation, flagged.
+		return key + " fused to a benzene ring", key
+	}
 	if key == "" {
 		key = fmt.Sprintf("%d-membered ring with %d O, %d other heteroatoms, %d double bonds", n, oxy, other, nd)
 	}
 	return key, carbo
+}
+
+// fusedToBenzene reports whether a member of ring r also lies in a
+// benzenoid ring.
+func (g *graph) fusedToBenzene(r []int) bool {
+	for _, a := range r {
+		if g.benzAtom[a] > 0 {
+			return true
+		}
+	}
+	return false
 }
 
 // sameRing reports whether atoms a and b lie together in some ring.

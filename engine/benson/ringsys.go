@@ -544,6 +544,23 @@ func saturatedRing(n int) string {
 	return ""
 }
 
+// ringSystemEntropyGroup begins the flag of a ring system whose S° or Cp
+// is the sum of its component rings' corrections (a polycyclic system whose
+// table row has no S°, and no row has Cp). It concerns S° and Cp only.
+const ringSystemEntropyGroup = "ring system S°, Cp: "
+
+// ringSystemEntropyNote explains the flag of a ring system whose S° or Cp
+// (what) is summed from its rings (sRings: their S° corrections, J/(mol K));
+// withS adds the S° uncertainty it implies (widenRingShare of the summed
+// correction, the same share as for an approximated strain).
+func ringSystemEntropyNote(what string, sRings float64, withS bool) string {
+	n := fmt.Sprintf("no whole-system %s is tabulated: the sum of the corrections of the component rings is used, which does not account for the modes a polycyclic system loses beyond its single rings", what)
+	if withS {
+		n += fmt.Sprintf("; S°298 uncertain by at least ±%.0f J/(mol K) (%.1f cal/(mol K))", widenRingShare*math.Abs(sRings), widenRingShare*math.Abs(sRings)/calorie)
+	}
+	return n
+}
+
 // ringTerm is one component ring's correction as chosen for an estimate.
 type ringTerm struct {
 	name string // "ring:…" key of corrections.tsv
@@ -653,13 +670,25 @@ func addRingCorrections(g *graph, l lookup, est *Result) {
 			}
 			t.Count++
 			t.Hf298 += matched.value.Hf298 - hfRings
-			if matched.hasS {
-				s := 0.0
-				for _, k := range keys {
-					s += l.corrections[k].S298
-				}
-				t.S298 += matched.value.S298 - s
+			sRings := 0.0
+			for _, k := range keys {
+				sRings += l.corrections[k].S298
 			}
+			if matched.hasS {
+				t.S298 += matched.value.S298 - sRings
+			}
+			// Cp is never tabulated for a whole system, S° seldom: what
+			// the table lacks is the sum of the component rings, flagged.
+			what := "Cp"
+			if !matched.hasS {
+				what = "S° and Cp"
+				est.UncertaintyS298 = math.Hypot(est.UncertaintyS298, widenRingShare*math.Abs(sRings))
+			}
+			est.Missing = append(est.Missing, Missing{
+				Group:         ringSystemEntropyGroup + matched.name,
+				Approximation: "sum of component ring corrections",
+				Note:          ringSystemEntropyNote(what, sRings, !matched.hasS),
+			})
 			sysVal[name] = t
 			if sysCounts[name] == 0 {
 				sysOrder = append(sysOrder, name)
@@ -707,10 +736,15 @@ func addRingCorrections(g *graph, l lookup, est *Result) {
 			})
 			continue
 		}
+		sRings := 0.0
+		for _, k := range keys {
+			sRings += l.corrections[k].S298
+		}
+		est.UncertaintyS298 = math.Hypot(est.UncertaintyS298, widenRingShare*math.Abs(sRings))
 		est.Missing = append(est.Missing, Missing{
 			Group:         "ring system: " + g.describe(s, kind),
 			Approximation: "sum of component ring corrections",
-			Note:          "no strain correction for this polycyclic system is tabulated; the sum of the corrections of its component rings is used and the uncertainty widened",
+			Note:          "no strain correction for this polycyclic system is tabulated; the sum of the corrections of its component rings is used and the uncertainty widened; " + ringSystemEntropyNote("S° and Cp", sRings, true),
 		})
 	}
 	// Terms in a canonical order (by name), whatever the atom order.

@@ -47,6 +47,9 @@ type Violation struct {
 	// P is the pressure (Pa) of the worst point of a pressure-dependent
 	// rate, 0 when the rate does not depend on pressure (set by the caller).
 	P float64
+	// Pair holds, for a termolecular bound, the indices (in the masses
+	// checked) of the two molecules whose collision rate bounds it.
+	Pair [2]int
 }
 
 // CheckPressures returns the pressures (Pa) at which a pressure-dependent
@@ -74,9 +77,13 @@ func (v Violation) Message() string {
 	if v.P > 0 {
 		at += fmt.Sprintf(", %s bar", strconv.FormatFloat(v.P/1e5, 'g', 3, 64))
 	}
-	return fmt.Sprintf("%s(%s) = %s %s exceeds the %s collision limit %s %s by a factor of %s",
+	msg := fmt.Sprintf("%s(%s) = %s %s exceeds the %s collision limit %s %s by a factor of %s",
 		dir, at, sci(v.Rate), RateUnits(v.Order), molecularity(v.Order),
 		sci(v.Limit), RateUnits(v.Order), strconv.FormatFloat(v.Ratio(), 'g', 3, 64))
+	if v.Order == 3 {
+		msg += " (" + TermolecularBasis + ")"
+	}
+	return msg
 }
 
 // DefaultDiameter estimates a collision diameter in Å from the heavy-atom
@@ -121,38 +128,95 @@ func DefaultDiameter(massAmu float64, heavyAtoms int) float64 {
 // that of the rate constant checked: the high-pressure limit of a falloff
 // reaction A (+M) is unimolecular, not bimolecular.
 //
-// Termolecular and higher orders have no bound (ok = false): a three-body
-// rate constant is a capture rate times the lifetime of the energised
-// complex times its stabilising collision rate, and that lifetime grows
-// without a general ceiling with the complex's size, so no single formula
-// bounds it without also flagging sound low-pressure limits of large
-// molecules.
+// Termolecular (order 3), cm6/(mol2 s): no collision rate bounds a
+// three-body rate constant by itself (it is a capture rate times the
+// lifetime of the energised complex times its stabilising collision rate,
+// and that lifetime has no general ceiling). What does hold is that the
+// effective second-order rate k·[M] of the two partners that form the
+// complex cannot outrun their collisions. kiln applies it at one generous
+// bath concentration, the ideal gas at TermolecularPressure (1 bar):
+//
+//	k ≤ k_coll(A, B) / [M],   [M] = P/(R T) × 1e-6 mol/cm3, P = 1e5 Pa
+//
+// (2.46e19 cm6/(mol2 s) for H + O2 at 300 K, growing as T^1.5). This is a
+// sanity bound of common practice, not a physical limit of the rate
+// constant: a sound low-pressure limit of a large molecule may exceed it,
+// but then k·[M] outruns collisions at 1 bar and the reaction needs a
+// falloff form. masses and heavyAtoms hold two molecules (A + B + M: A and
+// B collide) or three (A + B + C, any of them may be the third body; the
+// pair with the fastest collision rate is taken, which keeps the bound
+// generous). Orders above 3 have no bound (ok = false).
 func CollisionLimit(order int, masses []float64, heavyAtoms []int, T float64, s CollisionSettings) (limit float64, ok bool) {
+	limit, _, ok = collisionLimit(order, masses, heavyAtoms, T, s)
+	return limit, ok
+}
+
+// TermolecularBasis says in words what the termolecular bound is, for
+// messages.
+const TermolecularBasis = "a sanity bound: at 1 bar, k·[M] would outrun the collision rate of the two partners"
+
+// TermolecularPressure (Pa) is the bath pressure of the termolecular bound
+// (see CollisionLimit): 1 bar, the standard-state pressure, low enough that
+// a three-body rate expression is commonly still used there.
+const TermolecularPressure = 1e5
+
+// collisionLimit is CollisionLimit, also returning, for order 3, the
+// indices in masses of the pair whose collision rate bounds the rate.
+func collisionLimit(order int, masses []float64, heavyAtoms []int, T float64, s CollisionSettings) (limit float64, pair [2]int, ok bool) {
 	factor := s.Factor
 	if factor == 0 {
 		factor = 1
 	}
 	switch order {
 	case 1:
-		return factor * Kb * T / H, true
+		return factor * Kb * T / H, pair, true
 	case 2:
 		if len(masses) == 1 && len(heavyAtoms) == 1 {
 			masses = []float64{masses[0], BathGasMass}
 			heavyAtoms = []int{heavyAtoms[0], BathGasHeavyAtoms}
 		}
-		if len(masses) != 2 || len(heavyAtoms) != 2 || !(masses[0] > 0 && masses[1] > 0) {
-			return 0, false
+		if len(masses) != 2 || len(heavyAtoms) != 2 {
+			return 0, pair, false
 		}
-		diam := s.Diameter
-		if diam == nil {
-			diam = DefaultDiameter
+		k, ok := hardSphere(masses[0], masses[1], heavyAtoms[0], heavyAtoms[1], T, s)
+		return factor * k, [2]int{0, 1}, ok
+	case 3:
+		if len(masses) != len(heavyAtoms) || len(masses) < 2 || len(masses) > 3 {
+			return 0, pair, false
 		}
-		d := 0.5 * (diam(masses[0], heavyAtoms[0]) + diam(masses[1], heavyAtoms[1])) * 1e-10 // m
-		mu := masses[0] * masses[1] / (masses[0] + masses[1]) * Amu                          // kg
-		v := math.Sqrt(8 * Kb * T / (math.Pi * mu))                                          // m/s, mean relative speed
-		return factor * NA * math.Pi * d * d * v * 1e6, true                                 // cm3/(mol s)
+		best := 0.0
+		for i := 0; i < len(masses); i++ {
+			for j := i + 1; j < len(masses); j++ {
+				k, ok := hardSphere(masses[i], masses[j], heavyAtoms[i], heavyAtoms[j], T, s)
+				if !ok {
+					return 0, pair, false
+				}
+				if k > best {
+					best, pair = k, [2]int{i, j}
+				}
+			}
+		}
+		conc := TermolecularPressure / (R * T) * 1e-6 // mol/cm3
+		return factor * best / conc, pair, true
 	}
-	return 0, false
+	return 0, pair, false
+}
+
+// hardSphere is the hard-sphere collision rate constant of two molecules
+// (masses in amu, diameters from their heavy atoms), cm3/(mol s); ok is
+// false for a mass that is not positive.
+func hardSphere(m1, m2 float64, h1, h2 int, T float64, s CollisionSettings) (float64, bool) {
+	if !(m1 > 0 && m2 > 0) {
+		return 0, false
+	}
+	diam := s.Diameter
+	if diam == nil {
+		diam = DefaultDiameter
+	}
+	d := 0.5 * (diam(m1, h1) + diam(m2, h2)) * 1e-10 // m
+	mu := m1 * m2 / (m1 + m2) * Amu                  // kg
+	v := math.Sqrt(8 * Kb * T / (math.Pi * mu))      // m/s, mean relative speed
+	return NA * math.Pi * d * d * v * 1e6, true      // cm3/(mol s)
 }
 
 // CollisionCheck evaluates rate on CollisionGridPoints temperatures spaced
@@ -166,22 +230,26 @@ func CollisionLimit(order int, masses []float64, heavyAtoms []int, T float64, s 
 func CollisionCheck(order int, masses []float64, heavyAtoms []int, rate func(T float64) float64, s CollisionSettings) *Violation {
 	grid := s.Temperatures()
 	tmin := grid[0]
-	// The bound scales as T (unimolecular) or √T (bimolecular): evaluate it
-	// once and scale it along the grid.
-	lim0, ok := CollisionLimit(order, masses, heavyAtoms, tmin, s)
+	// Evaluate the bound once and scale it along the grid.
+	lim0, pair, ok := collisionLimit(order, masses, heavyAtoms, tmin, s)
 	if !ok {
 		return nil
 	}
+	// The bound scales as T (unimolecular), √T (bimolecular) or T^1.5
+	// (termolecular: √T over a concentration ∝ 1/T).
 	power := 0.5
-	if order == 1 {
+	switch order {
+	case 1:
 		power = 1
+	case 3:
+		power = 1.5
 	}
 	var worst *Violation
 	for _, T := range grid {
 		lim := lim0 * math.Pow(T/tmin, power)
 		if k := rate(T); k > lim { // also skips NaN
 			if worst == nil || k/lim > worst.Rate/worst.Limit {
-				worst = &Violation{T: T, Rate: k, Limit: lim, Order: order}
+				worst = &Violation{T: T, Rate: k, Limit: lim, Order: order, Pair: pair}
 			}
 		}
 	}

@@ -40,8 +40,23 @@ func TestCollisionLimitValues(t *testing.T) {
 	k2d, _ := CollisionLimit(2, []float64{mH, mO2}, []int{0, 2}, 300, fixed)
 	assert.InEpsilon(t, k2*25/(4.519842*4.519842), k2d, 1e-6)
 
-	// No bound for termolecular or malformed input.
-	_, ok = CollisionLimit(3, []float64{1, 1, 1}, []int{0, 0, 0}, 300, s)
+	// Termolecular H + O2 + M at 300 K: the H + O2 collision rate over the
+	// ideal-gas concentration at 1 bar,
+	//   [M] = 1e5/(8.314462618·300) mol/m3 = 4.009077e-5 mol/cm3
+	//   k3 ≤ 9.8537e14/4.009077e-5 = 2.45785e19 cm6/(mol2 s).
+	k3, ok := CollisionLimit(3, []float64{mH, mO2}, []int{0, 2}, 300, s)
+	require.True(t, ok)
+	assert.InEpsilon(t, 2.45785e19, k3, 1e-4)
+	// Three molecules (H + H + O2): the pair that collides fastest bounds
+	// it, here H + O2 again (H + H: d = 4 Å, μ = 0.504 amu gives
+	// 6.02214076e23·π·(4e-10)²·3549.0·1e6 = 1.0744e15, larger).
+	k3h, ok := CollisionLimit(3, []float64{mH, mH, mO2}, []int{0, 0, 2}, 300, s)
+	require.True(t, ok)
+	assert.InEpsilon(t, 1.0744e15/4.009077e-5, k3h, 1e-3)
+	// No bound above order 3 or for malformed input.
+	_, ok = CollisionLimit(4, []float64{1, 1, 1, 1}, []int{0, 0, 0, 0}, 300, s)
+	assert.False(t, ok)
+	_, ok = CollisionLimit(3, []float64{mH}, []int{0}, 300, s)
 	assert.False(t, ok)
 	_, ok = CollisionLimit(2, []float64{mH, mH, mH}, []int{0, 0, 0}, 300, s)
 	assert.False(t, ok)
@@ -131,9 +146,37 @@ func TestCollisionCheckFindsWorstPoint(t *testing.T) {
 	assert.InEpsilon(t, 15.998, u.Ratio(), 1e-4)
 	assert.Equal(t, "k(300 K) = 1e14 s⁻¹ exceeds the unimolecular collision limit 6.25e12 s⁻¹ by a factor of 16", u.Message())
 
-	// NaN rates are skipped; termolecular has no bound.
+	// NaN rates are skipped; above termolecular there is no bound.
 	assert.Nil(t, CollisionCheck(1, nil, nil, func(float64) float64 { return math.NaN() }, CollisionSettings{}))
-	assert.Nil(t, CollisionCheck(3, []float64{1, 1, 28}, []int{0, 0, 2}, Arrhenius{A: 1e30}.Rate, CollisionSettings{}))
+	assert.Nil(t, CollisionCheck(4, []float64{1, 1, 1, 28}, []int{0, 0, 0, 2}, Arrhenius{A: 1e30}.Rate, CollisionSettings{}))
+}
+
+// TestTermolecularBound: the bound grows as T^1.5, fires for an absurd
+// three-body rate and not for sound ones.
+func TestTermolecularBound(t *testing.T) {
+	s := CollisionSettings{}
+	lo, _ := CollisionLimit(3, []float64{mH, mO2}, []int{0, 2}, 300, s)
+	hi, _ := CollisionLimit(3, []float64{mH, mO2}, []int{0, 2}, 1200, s)
+	assert.InEpsilon(t, 8, hi/lo, 1e-9, "(1200/300)^1.5")
+
+	// H + H + O2 with a constant 1e25 cm6/(mol2 s): worst at 300 K against
+	// 1.0744e15/4.009077e-5 = 2.680e19 (the H + H pair).
+	v := CollisionCheck(3, []float64{mH, mH, mO2}, []int{0, 0, 2}, Arrhenius{A: 1e25}.Rate, s)
+	require.NotNil(t, v)
+	assert.InDelta(t, 300, v.T, 1e-9)
+	assert.InEpsilon(t, 2.680e19, v.Limit, 1e-3)
+	assert.Equal(t, [2]int{0, 1}, v.Pair)
+	assert.Equal(t, 3, v.Order)
+	assert.Contains(t, v.Message(), "exceeds the termolecular collision limit 2.68e19 cm⁶/(mol²·s)")
+	assert.Contains(t, v.Message(), "at 1 bar, k·[M] would outrun the collision rate")
+
+	// Sound three-body rates of small radicals (illustrative magnitudes of
+	// the usual size, from memory): H + O2 + M 2.8e18 T^-0.86 (1.9e16 at
+	// 300 K), H + OH + M 3.8e22 T^-2 (4.2e17 at 300 K), O + O + M
+	// 6.2e15 T^-0.5: all well below the bound everywhere.
+	assert.Nil(t, CollisionCheck(3, []float64{mH, mO2}, []int{0, 2}, Arrhenius{A: 2.8e18, N: -0.86}.Rate, s))
+	assert.Nil(t, CollisionCheck(3, []float64{mH, 17.007}, []int{0, 1}, Arrhenius{A: 3.8e22, N: -2}.Rate, s))
+	assert.Nil(t, CollisionCheck(3, []float64{15.999, 15.999}, []int{1, 1}, Arrhenius{A: 6.2e15, N: -0.5}.Rate, s))
 }
 
 func TestSci(t *testing.T) {

@@ -499,6 +499,23 @@ func refSolvePoly(hf298, s298 float64, samples []sample, opt FitOptions, monoton
 				}
 				ineq = append(ineq, refRow{c: row})
 			}
+			if monotone && j > 0 {
+				// Inner Bernstein coefficients of the cubic slope q(τ) on
+				// the piece [τ₀, τ], width h: q(τ₀) + h q′(τ₀)/3 ≥ 0 and
+				// q(τ) − h q′(τ)/3 ≥ 0, written in the monomial basis.
+				t0 := (lo + (hi-lo)*float64(j-1)/float64(m-1)) / tauScale
+				h := tau - t0
+				for _, e := range []struct{ at, d float64 }{{t0, h / 3}, {tau, -h / 3}} {
+					row := make([]float64, n)
+					for k := 1; k < 5; k++ {
+						row[off+k] = float64(k) * math.Pow(e.at, float64(k-1))
+						if k > 1 {
+							row[off+k] += e.d * float64(k*(k-1)) * math.Pow(e.at, float64(k-2))
+						}
+					}
+					ineq = append(ineq, refRow{c: row})
+				}
+			}
 			if cpMax > 0 {
 				row := make([]float64, n)
 				for k := range 5 {

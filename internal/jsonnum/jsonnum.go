@@ -8,7 +8,6 @@ package jsonnum
 import (
 	"math"
 	"strconv"
-	"strings"
 )
 
 // Round rounds v to 12 significant digits; 0, NaN and ±Inf are returned as
@@ -28,43 +27,12 @@ func Round(v float64) float64 {
 // strings) that has more than 12 significant digits, as Round rounds it;
 // other numbers keep their spelling.
 func RoundLiterals(in []byte) []byte {
-	out := make([]byte, 0, len(in))
-	inString, escaped := false, false
-	for i := 0; i < len(in); i++ {
-		c := in[i]
-		if inString {
-			out = append(out, c)
-			switch {
-			case escaped:
-				escaped = false
-			case c == '\\':
-				escaped = true
-			case c == '"':
-				inString = false
+	return mapLiterals(in, func(lit string) string {
+		if v, err := strconv.ParseFloat(lit, 64); err == nil {
+			if r := Round(v); r != v {
+				return strconv.FormatFloat(r, 'g', -1, 64)
 			}
-			continue
 		}
-		if c == '"' {
-			inString = true
-			out = append(out, c)
-			continue
-		}
-		if c == '-' || (c >= '0' && c <= '9') {
-			j := i + 1
-			for j < len(in) && strings.IndexByte("0123456789.eE+-", in[j]) >= 0 {
-				j++
-			}
-			lit := string(in[i:j])
-			if v, err := strconv.ParseFloat(lit, 64); err == nil {
-				if r := Round(v); r != v {
-					lit = strconv.FormatFloat(r, 'g', -1, 64)
-				}
-			}
-			out = append(out, lit...)
-			i = j - 1
-			continue
-		}
-		out = append(out, c)
-	}
-	return out
+		return lit
+	})
 }

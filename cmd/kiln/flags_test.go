@@ -1,0 +1,135 @@
+package main
+
+import (
+	"encoding/json"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/analysis/ide"
+)
+
+// TestFlagsAgreeAcrossCommands: the approximations an estimate carries are
+// the same, worded the same, in check (its missing-group diagnostic),
+// estimate (text and --json), summary (--json) and hover. Radicals whose
+// site increment has no S°/Cp data, ring systems without whole-system
+// values, a group sum below the S° bound and a stand-in group are all there.
+func TestFlagsAgreeAcrossCommands(t *testing.T) {
+	species := [][2]string{
+		{"ethyl", "C[CH2]"},
+		{"tbutyl", "C[C](C)C"},
+		{"cubane", "C12C3C4C1C5C2C3C45"},
+		{"adamantane", "C1C2CC3CC1CC(C2)C3"},
+		{"octane", "C1CC2CCC(C1)C2"}, // bicyclo[3.2.1]octane: no system value
+		{"butane", "CCCC"},           // no flag
+	}
+	var src strings.Builder
+	for _, s := range species {
+		src.WriteString("species " + s[0] + " " + s[1] + "\n")
+	}
+	path := filepath.Join(t.TempDir(), "flags.kiln")
+	require.NoError(t, os.WriteFile(path, []byte(src.String()), 0o644))
+
+	// estimate --json: the reference list, per SMILES.
+	args := []string{"estimate", "--json"}
+	for _, s := range species {
+		args = append(args, s[1])
+	}
+	_, stdout, stderr := runKiln(t, args...)
+	var est []estimateJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &est), stderr)
+	require.Len(t, est, len(species))
+	want := map[string][]string{}
+	for i, s := range species {
+		require.Nil(t, est[i].Error, s[0])
+		require.Len(t, est[i].Flags, len(est[i].MissingGroups), s[0])
+		want[s[0]] = est[i].Flags
+	}
+	assert.Empty(t, want["butane"])
+	for _, name := range []string{"ethyl", "tbutyl", "cubane", "adamantane", "octane"} {
+		assert.NotEmpty(t, want[name], name)
+	}
+	joined := strings.Join(want["cubane"], "\n")
+	assert.Contains(t, joined, "S°298 below the physical lower bound")
+	assert.Contains(t, joined, "ring system S°, Cp: cubane")
+	assert.Contains(t, strings.Join(want["ethyl"], "\n"), "HBI dS, dCp: primary")
+
+	// estimate text: one line per flag, same words; the radical site's
+	// S°/Cp change is computed by a validated model, headed MODELLED.
+	_, text, _ := runKiln(t, "estimate", "C[CH2]", "C12C3C4C1C5C2C3C45")
+	for _, name := range []string{"ethyl", "cubane"} {
+		for _, f := range want[name] {
+			heading := "MISSING group "
+			if modelled(f) {
+				heading = "MODELLED "
+			}
+			assert.Contains(t, text, heading+f, name)
+		}
+	}
+	assert.Contains(t, text, "MODELLED HBI dS, dCp: primary (computed by the statistical-mechanics site model")
+
+	// check: one missing-group warning per species with an approximation,
+	// holding every approximation; none for a species whose only flag is a
+	// modelled quantity (ethyl, tbutyl) or that has none (butane).
+	_, stdout, stderr = runKiln(t, "check", "--format", "json", path)
+	var diags []checkDiag
+	require.NoError(t, json.Unmarshal([]byte(stdout), &diags), stderr)
+	got := map[string]string{}
+	for _, d := range diags {
+		if d.Code == "missing-group" {
+			assert.Equal(t, "warning", d.Severity, "%+v", d)
+			name, _, _ := strings.Cut(d.Message, ":")
+			got[name] += d.Message
+		}
+	}
+	for _, s := range species {
+		var approx []string
+		for _, f := range want[s[0]] {
+			if !modelled(f) {
+				approx = append(approx, f)
+			}
+		}
+		if len(approx) == 0 {
+			assert.NotContains(t, got, s[0])
+			continue
+		}
+		for _, f := range approx {
+			assert.Contains(t, got[s[0]], f, s[0])
+		}
+	}
+	assert.NotContains(t, got, "ethyl")
+	assert.Contains(t, got, "cubane")
+
+	// summary --json: the same list.
+	_, stdout, stderr = runKiln(t, "summary", "--json", path)
+	var sum summaryJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &sum), stderr)
+	for _, sp := range sum.Species {
+		assert.Equal(t, want[sp.Name], sp.Flags, sp.Name)
+	}
+
+	// hover on each declaration: every flag.
+	ws := analysis.NewWorkspace(filepath.Dir(path), os.ReadFile, analysis.DefaultSettings())
+	res, err := ws.Analyze(t.Context(), path)
+	require.NoError(t, err)
+	x := ide.NewIndex(res)
+	for _, s := range species {
+		h, ok := ide.Hover(x, path, strings.Index(src.String(), "species "+s[0]+" ")+9, analysis.DefaultSettings(), false)
+		require.True(t, ok, s[0])
+		for _, f := range want[s[0]] {
+			assert.Contains(t, h.Text, f, s[0])
+		}
+		if len(want[s[0]]) == 0 {
+			assert.NotContains(t, h.Text, "Missing group", s[0])
+		}
+	}
+}
+
+// modelled reports whether a flag, as FlagText words it, is a quantity a
+// validated model computes rather than an approximation.
+func modelled(flag string) bool { return strings.Contains(flag, "(computed by the ") }

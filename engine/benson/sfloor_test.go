@@ -1,0 +1,124 @@
+package benson
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/engine/molecule"
+)
+
+// The bound must be a bound: no measured S°298 of the reference sets lies
+// below it (σ from the structure, multiplicity from its unpaired electrons).
+func TestEntropyFloorBelowReference(t *testing.T) {
+	n := 0
+	margin, closest := math.Inf(1), ""
+	defer func() { t.Logf("%d rows; smallest margin S° − floor %.1f J/(mol K) (%s)", n, margin, closest) }()
+	for _, file := range []string{"train", "heldout"} {
+		for _, r := range readRef(t, "../../testdata/thermo/"+file+".tsv") {
+			if math.IsNaN(r.s) {
+				continue
+			}
+			m, err := molecule.ParseSMILES(r.smiles)
+			require.NoError(t, err, r.name)
+			sy := symmetryOf(t.Context(), m)
+			require.NoError(t, sy.err, r.name)
+			floor := entropyFloor(m, lnBig(sy.exact), m.UnpairedElectrons()+1)
+			assert.LessOrEqual(t, floor, r.s*calorie, "%s (%s): floor %.1f above the measured S° %.1f J/(mol K)", r.name, r.smiles, floor, r.s*calorie)
+			if d := r.s*calorie - floor; d < margin {
+				margin, closest = d, r.name
+			}
+			n++
+		}
+	}
+	for _, r := range readRadicals(t) {
+		if math.IsNaN(r.s) {
+			continue
+		}
+		m, err := molecule.ParseSMILES(r.smiles)
+		require.NoError(t, err, r.name)
+		sy := symmetryOf(t.Context(), m)
+		require.NoError(t, sy.err, r.name)
+		floor := entropyFloor(m, lnBig(sy.exact), m.UnpairedElectrons()+1)
+		assert.LessOrEqual(t, floor, r.s*calorie, "%s (%s): floor %.1f above the measured S° %.1f J/(mol K)", r.name, r.smiles, floor, r.s*calorie)
+		if d := r.s*calorie - floor; d < margin {
+			margin, closest = d, r.name
+		}
+		n++
+	}
+	assert.GreaterOrEqual(t, n, 55, "reference rows with S°")
+}
+
+// The Sackur–Tetrode entropy of a bare atom is its whole S° (argon: 154.85
+// J/(mol K) at 1 bar, NIST-JANAF, from memory).
+func TestTranslationalEntropy(t *testing.T) {
+	assert.InDelta(t, 154.85, translationalEntropy(39.948), 0.05)
+}
+
+// A cage whose ring system has no whole-system S° or Cp is flagged for both,
+// with a widened S° uncertainty; a group sum below the physical bound is
+// flagged as unusable. The rule holds for every table row without S°, not
+// for one species.
+func TestRingSystemEntropyFlags(t *testing.T) {
+	l := lookupTable(nil)
+	for _, sys := range l.systems {
+		if sys.hasS {
+			continue
+		}
+		t.Run(sys.name, func(t *testing.T) {
+			// The parent with every ring hydrogen kept: the table's SMILES.
+			m, err := molecule.ParseSMILES(sys.parent.m.Canonical())
+			require.NoError(t, err)
+			e, err := Estimate(m, Options{})
+			require.NoError(t, err)
+			var groups []string
+			for _, ms := range e.Missing {
+				groups = append(groups, ms.Group)
+			}
+			assert.Contains(t, groups, ringSystemEntropyGroup+sys.name)
+			assert.Greater(t, e.UncertaintyS298, 0.0)
+			floor, below := e.EntropyFloor()
+			assert.Greater(t, floor, 0.0)
+			assert.Equal(t, below, e.S298 < floor-0.01)
+			if below {
+				assert.Contains(t, groups, EntropyFloorGroup)
+			}
+		})
+	}
+}
+
+// Cubane's group sum (8 C-(C)3(H) and five cyclobutane rings) gives S°298
+// below what translation and rotation alone give; it must be flagged.
+func TestCubaneEntropyFlagged(t *testing.T) {
+	m, err := molecule.ParseSMILES("C12C3C4C1C5C2C3C45")
+	require.NoError(t, err)
+	e, err := Estimate(m, Options{})
+	require.NoError(t, err)
+	floor, below := e.EntropyFloor()
+	require.True(t, below, "S° %.1f, floor %.1f", e.S298, floor)
+	found := false
+	for _, ms := range e.Missing {
+		if ms.Group == EntropyFloorGroup {
+			found = true
+			assert.True(t, strings.Contains(ms.Note, "Sackur–Tetrode"))
+		}
+	}
+	assert.True(t, found)
+}
+
+// An ordinary estimate is not flagged, and ΔHf°'s uncertainty is not
+// widened by the S°/Cp-only flags.
+func TestEntropyFlagsLeaveHfUncertainty(t *testing.T) {
+	m, err := molecule.ParseSMILES("CCCC")
+	require.NoError(t, err)
+	e, err := Estimate(m, Options{})
+	require.NoError(t, err)
+	_, below := e.EntropyFloor()
+	assert.False(t, below)
+	assert.Zero(t, e.UncertaintyS298)
+	assert.True(t, entropyOnly(Missing{Group: ringSystemEntropyGroup + "adamantane"}))
+	assert.True(t, entropyOnly(Missing{Group: EntropyFloorGroup}))
+}
