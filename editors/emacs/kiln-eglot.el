@@ -536,8 +536,15 @@ lines outside the block VISIBLE, in order, snapped."
        ((input-pending-p)
         (kiln-eglot--schedule-rest 0.05))
        (t
-        (kiln-eglot--with-gc-threshold
-          (kiln-eglot--render-block (pop kiln-eglot--todo) (kiln-eglot--line-count)))
+        (condition-case err
+            (kiln-eglot--with-gc-threshold
+              (kiln-eglot--render-block (pop kiln-eglot--todo) (kiln-eglot--line-count)))
+          ;; Flymake refuses the report (turned off, or a newer check
+          ;; started without eglot's backend): the next check shows them.
+          (error
+           (setq kiln-eglot--todo nil
+                 kiln-eglot--shown nil)
+           (message "kiln-eglot: diagnostics not shown: %s" (error-message-string err))))
         (when kiln-eglot--todo
           (kiln-eglot--schedule-rest 0.01)))))))
 
