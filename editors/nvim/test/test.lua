@@ -622,6 +622,30 @@ if live_ok then
     expect(rok and asked, 'codelens.run after restart: ' .. tostring(rerr))
   end)
 
+  check(':KilnRestart of a running server: one lens, from the new server', function()
+    vim.cmd('buffer ' .. bufnr)
+    local old = kiln_client_for_test(bufnr)
+    expect(old, 'no running kiln client')
+    vim.cmd('KilnRestart')
+    local new
+    local ok = vim.wait(TIMEOUT, function()
+      new = kiln_client_for_test(bufnr)
+      local shown = shown_lenses(bufnr)
+      return new ~= nil and new.id ~= old.id and #shown == 1 and shown[1].client_id == new.id
+        and #(vim.lsp.codelens.get(bufnr) or {}) == 1 and #vim.diagnostic.get(bufnr) > 0
+    end, 50)
+    expect(ok, string.format('after :KilnRestart: lenses shown %s, lenses kept %s, diagnostics %d',
+      vim.inspect(shown_lenses(bufnr)), vim.inspect(lens_clients(bufnr)), #vim.diagnostic.get(bufnr)))
+    client_id = new.id
+    -- The old server's exit, which comes later, takes nothing of the new one's.
+    expect(vim.wait(TIMEOUT, function() return vim.lsp.get_client_by_id(old.id) == nil end, 50), 'old server still runs')
+    vim.wait(300, function() return false end)
+    local shown = shown_lenses(bufnr)
+    expect(#shown == 1 and shown[1].client_id == new.id, 'after the old exit: ' .. vim.inspect(shown))
+    expect(not require('kiln').native_inlay_hints() and #hint_marks(bufnr) > 0 or require('kiln').native_inlay_hints(),
+      'inlay hints gone after the old server exited')
+  end)
+
   check('restart after a crash: the buffer is in sync, later edits are sent', function()
     local has_code = function(code)
       for _, d in ipairs(vim.diagnostic.get(bufnr)) do

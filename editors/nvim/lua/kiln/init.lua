@@ -474,9 +474,13 @@ local function forget_client(client_id, bufnr)
   end
 end
 
-local function forget_client_everywhere(client_id)
+-- keep: the client still runs (a restart stops it); its on_exit cleans up
+-- again, removing what it may still answer meanwhile.
+local function forget_client_everywhere(client_id, keep)
   local bufs = state.attached[client_id] or {}
-  state.attached[client_id] = nil
+  if not keep then
+    state.attached[client_id] = nil
+  end
   for b in pairs(bufs) do
     forget_client(client_id, b)
   end
@@ -765,7 +769,7 @@ function M.restart()
       c.stop()
     end
     state.clients[root] = nil
-    forget_client_everywhere(id)
+    forget_client_everywhere(id, c ~= nil)
   end
   -- Clients that have exited already were cleaned up by their on_exit.
   local bufs = kiln_buffers()
