@@ -130,7 +130,7 @@ func (a *analysis) species() error {
 		}
 	}
 	a.res.Diagnostics = slices.Grow(a.res.Diagnostics, n-len(a.res.Diagnostics)+len(a.res.Species)/8)
-	byStructure := sc.byStructure
+	byStructure := &sc.structs
 	spAt := func(i int32) *Species { return items[i].sp }
 	for i, it := range items {
 		sp := it.sp
@@ -249,25 +249,45 @@ const resonanceKeyPrefix = "resonance|"
 //
 // Species are named by their index i in a list (spAt gives the species);
 // the result is the index of the first, -1 when there is none.
-func sameStructure(seen map[uint64][]int32, spAt func(int32) *Species, i int32) int32 {
+func sameStructure(seen *structBuckets, spAt func(int32) *Species, i int32) int32 {
 	sp := spAt(i)
 	k := sp.structKey
-	bucket := seen[sp.structHash]
-	resonance := strings.HasPrefix(k, resonanceKeyPrefix)
-	for _, j := range bucket {
-		other := spAt(j)
-		if other.structKey != k {
-			continue
-		}
-		if resonance {
-			return j // the key is the canonical representative itself
-		}
-		if identity(other.Mol) == identity(sp.Mol) {
-			return j
+	ends, hashed := seen.ends[sp.structHash]
+	if hashed {
+		resonance := strings.HasPrefix(k, resonanceKeyPrefix)
+		for j := ends[0]; j >= 0; j = seen.next[j] {
+			other := spAt(j)
+			if other.structKey != k {
+				continue
+			}
+			if resonance {
+				return j // the key is the canonical representative itself
+			}
+			if identity(other.Mol) == identity(sp.Mol) {
+				return j
+			}
 		}
 	}
-	seen[sp.structHash] = append(bucket, i)
+	for len(seen.next) <= int(i) {
+		seen.next = append(seen.next, -1)
+	}
+	seen.next[i] = -1
+	if hashed {
+		seen.next[ends[1]] = i
+		ends[1] = i
+	} else {
+		ends = [2]int32{i, i}
+	}
+	seen.ends[sp.structHash] = ends
 	return -1
+}
+
+// structBuckets are the buckets of the duplicate-structure search: species
+// indexes by structure hash, each bucket in the order the species were
+// recorded (a chain through next; no slice per bucket).
+type structBuckets struct {
+	ends map[uint64][2]int32 // the first and last index of each bucket
+	next []int32             // next[i]: the index after i in its bucket, -1 for none
 }
 
 // hashKey is the 64-bit FNV-1a hash of s.

@@ -183,10 +183,10 @@ func (w *Workspace) Analyze(ctx context.Context, path string) (*Result, error) {
 // own, emptied) so that an edit of a large file does not allocate them
 // again: garbage is what costs an edit most.
 type passScratch struct {
-	items       []speciesItem
-	byStructure map[uint64][]int32
-	seen        map[uint64]int32
-	occs        []dupOccurrence
+	items   []speciesItem
+	structs structBuckets
+	seen    map[uint64]int32
+	occs    []dupOccurrence
 }
 
 // speciesItem is a species declaration in the species pass.
@@ -218,7 +218,7 @@ func (w *Workspace) scratch() *passScratch {
 	if sc, ok := w.scratches.Get().(*passScratch); ok {
 		return sc
 	}
-	return &passScratch{byStructure: map[uint64][]int32{}, seen: map[uint64]int32{}}
+	return &passScratch{structs: structBuckets{ends: map[uint64][2]int32{}}, seen: map[uint64]int32{}}
 }
 
 // release empties sc (it holds no value of the analysis any more) and
@@ -226,7 +226,8 @@ func (w *Workspace) scratch() *passScratch {
 func (w *Workspace) release(sc *passScratch) {
 	clear(sc.items[:cap(sc.items)])
 	clear(sc.occs[:cap(sc.occs)])
-	clear(sc.byStructure)
+	clear(sc.structs.ends)
+	sc.structs.next = sc.structs.next[:0]
 	clear(sc.seen)
 	w.scratches.Put(sc)
 }
