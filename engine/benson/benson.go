@@ -258,6 +258,9 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 		parent = parentOf(m)
 	}
 	g := newGraph(parent)
+	if err := ringTriple(g); err != nil { // rings.go
+		return nil, err
+	}
 
 	if err := addGroups(g, tab, est); err != nil {
 		return nil, err
