@@ -157,7 +157,7 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 		switch {
 		case entropyOnly(m):
 			// Entropy/Cp-only approximations: ΔHf°298 is not affected.
-		case strings.HasPrefix(m.Group, "HBI: "+unstabilisedSite):
+		case strings.HasPrefix(m.Group, "HBI: "+unstabilisedSite), m.Group == "HBI: "+ketenylSite:
 			w = widenStabiliser
 		case strings.HasPrefix(m.Group, "HBI"):
 			w = widenRadical
