@@ -165,6 +165,8 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 			w = max(widenSystem, widenRingShare*math.Abs(ringStrain))
 		case strings.HasSuffix(m.Approximation, withoutHalogenInteractions):
 			w = widenPolyhalogen // hetero_sx.go
+		case strings.HasSuffix(m.Approximation, olderChloroethyleneData):
+			w = widenVinylChloride // hetero_sx.go
 		case strings.HasPrefix(m.Group, "ring"):
 			w = max(widenRing, widenRingShare*math.Abs(ringStrain))
 		default:
