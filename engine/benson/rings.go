@@ -263,3 +263,33 @@ func (g *graph) smallestRingThrough(b int) int {
 	}
 	return 0 // not a ring bond
 }
+
+// furanEntropyGroup names the flag of the furan ring correction's S° and
+// Cp (corrections.tsv: S from Benson 1976 from memory, Cp taken as
+// cyclopentene's): ΔHf° is not approximated by it, so uncertainty
+// (class.go) does not widen ΔHf°.
+const furanEntropyGroup = "ring S, Cp: furan"
+
+// addFuranFlag flags the S° and Cp of an estimate that took the furan ring
+// correction (unless a group statement supplies ring:furan). With it,
+// furan's Cp is above the handbook values of testdata/thermo/train.tsv
+// (Dorofeeva 1992) by 0.1 at 300 K and 1.5–2.2 cal/(mol K) from 400 to
+// 1500 K (500 K: 27.9 against 25.8), and its S° of 58.5 cal/(mol K) is
+// about 5 below the handbook value (about 63.9, from memory; train.tsv has
+// no S° for furan). The correction is kept until a source for a better
+// one is at hand.
+func addFuranFlag(l lookup, est *Result) {
+	if _, user := l.user["ring:furan"]; user {
+		return
+	}
+	for _, c := range est.Corrections {
+		if c.Name == "ring strain: furan" {
+			est.Missing = append(est.Missing, Missing{
+				Group:         furanEntropyGroup,
+				Approximation: "S and Cp of the tabulated furan ring correction (Cp as cyclopentene's)",
+				Note:          "furan's own Cp comes out 1.5–2.2 cal/(mol K) above the handbook values from 400 to 1500 K and its S° about 5 cal/(mol K) low; ΔHf° is not affected",
+			})
+			return
+		}
+	}
+}
