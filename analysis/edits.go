@@ -54,14 +54,20 @@ func (e *Estimate) BlockSource(stamp string) string {
 		}
 	}
 	sort.Strings(srcs)
-	fmt.Fprintf(&b, "; Benson group additivity (groups: %s)", strings.Join(srcs, "; "))
-	if len(e.Group.Missing) > 0 {
-		b.WriteString("; approximated groups: ")
-		var ms []string
-		for _, m := range sortedMissing(e.Group) {
-			ms = append(ms, m.Group+"≈"+m.Approximation)
+	fmt.Fprintf(&b, "; Benson group additivity (group values from: %s)", strings.Join(srcs, "; "))
+	var approx, modelled []string
+	for _, m := range sortedMissing(e.Group) {
+		if m.Modelled() {
+			modelled = append(modelled, m.Group+" by the "+m.Approximation)
+		} else {
+			approx = append(approx, m.Group+"≈"+m.Approximation)
 		}
-		b.WriteString(strings.Join(ms, ", "))
+	}
+	if len(approx) > 0 {
+		b.WriteString("; approximated groups: " + strings.Join(approx, ", "))
+	}
+	if len(modelled) > 0 {
+		b.WriteString("; modelled: " + strings.Join(modelled, ", "))
 	}
 	return b.String()
 }

@@ -229,6 +229,7 @@ func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupVal
 		sp.structHash = hashKey(sp.structKey)
 	}
 	a.given(path, sp)
+	a.reportApproximations(path, sp)
 	a.thermoChecks(path, sp)
 }
 
@@ -439,6 +440,18 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 		return
 	}
 	sp.Estimate = e
+}
+
+// reportApproximations reports the approximations of sp's estimate (after
+// the given block is read): a warning, or information when the species has
+// a usable block of its own that is not simply the estimate as `kiln fill`
+// wrote it (givenIsEstimate) — such a block replaces the estimate, which
+// then serves only the comparison with it.
+func (a *analysis) reportApproximations(path string, sp *Species) {
+	e, d := sp.Estimate, sp.Decl
+	if e == nil {
+		return
+	}
 	if miss := e.Flags(); len(miss) > 0 {
 		// Group values the user can supply with a `group` statement, and
 		// other approximations (radical sites, ring systems, delocalisation,
@@ -466,12 +479,13 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 			msg = append(msg, fmt.Sprintf("estimated with an approximation kiln has no data for: %s; its uncertainty is widened (a thermo block with measured or computed values replaces the estimate)", strings.Join(others, ", ")))
 		}
 		if len(msg) > 0 {
-			// With a usable thermo block of its own the species' thermo is
+			// With a usable thermo block of its own (other than the
+			// estimate itself, as fill writes it) the species' thermo is
 			// the file's; the approximate estimate only serves the
 			// comparison with the block, which is worth knowing, not a
 			// warning.
 			sev, used := speciesfile.SeverityWarning, ""
-			if a.hasUsableBlock(path, d) {
+			if a.hasUsableBlock(path, d) && !sp.givenIsEstimate() {
 				sev, used = speciesfile.SeverityInformation, " (the file's thermo block is used; the estimate serves only the comparison with it)"
 			}
 			a.report(path, speciesfile.Diagnostic{Span: a.at(d.SMILES.Span), Severity: sev, Code: speciesfile.CodeMissingGroup,

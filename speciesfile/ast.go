@@ -93,6 +93,7 @@ const (
 	CodeNonphysicalRate     = "nonphysical-rate"
 	CodeCompositionMismatch = "composition-mismatch"
 	CodeRateOutOfRange      = "rate-out-of-range"
+	CodeUnusedRate          = "unused-rate"
 )
 
 // Codes lists every diagnostic code, in FORMAT.md's order: the one list
@@ -101,7 +102,7 @@ var Codes = []string{CodeSyntax, CodeUndeclaredSpecies, CodeDuplicateSpecies, Co
 	CodeMissingGroup, CodeMissingThermo, CodeThermoDiscontinuity, CodeThermoMismatch, CodeNonphysicalThermo,
 	CodeNoRate, CodeCollisionLimit, CodeDuplicateReaction, CodeBadInclude, CodeDuplicateGroup, CodeThermoOutOfRange,
 	CodeGroupOverride, CodeNonphysicalRate, CodeCompositionMismatch,
-	CodeRateOutOfRange}
+	CodeRateOutOfRange, CodeUnusedRate}
 
 // Related points at another place (possibly in another file) that explains a
 // diagnostic, e.g. the first declaration of a duplicated species.

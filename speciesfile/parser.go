@@ -1097,6 +1097,22 @@ func (p *parser) reaction(toks []Token, base StmtBase) Stmt {
 	if st.Troe != nil && st.LowPressure == nil {
 		p.errAt(st.Troe.Span, "troe needs a low-pressure line")
 	}
+	if len(st.Pressures) > 0 {
+		// A pressure table is the whole forward rate: another rate form
+		// beside it would be silently ignored, so it is refused.
+		first := st.Pressures[0]
+		table := RelSpan{From: first.P.Tok.Span.From, To: max(first.P.Tok.Span.To, first.Rate.Span.To)}
+		switch {
+		case st.ThirdBody:
+			p.errAt(table, "pressure lines give the rate at each pressure and do not combine with a third body M: remove M from the equation or the pressure lines")
+		case st.Falloff != nil:
+			p.errAt(table, "pressure lines give the rate at each pressure and do not combine with a falloff %s: use either the falloff form (low-pressure, troe) or the pressure lines", st.Falloff.Text)
+		}
+		if st.Rate != nil {
+			p.f.Diags = append(p.f.Diags, Diagnostic{Span: st.Rate.Span.At(0), Severity: SeverityWarning, Code: CodeUnusedRate,
+				Message: "these rate parameters are not used: with pressure lines the rate comes from them (remove these, or the pressure lines)"})
+		}
+	}
 	eqBroken := false
 	for _, d := range p.f.Diags[diagsBefore:] {
 		if d.Span.Start >= st.Equation.From && d.Span.Start <= st.Equation.To {

@@ -109,6 +109,9 @@ func TestSyntaxErrors(t *testing.T) {
 		{"reaction A => B A=1 n=0 Ea=0\n  reverse A=1 n=0 Ea=0\n", []wantDiag{{1, 2, 9, "syntax", "reverse needs a reversible (<=>) reaction"}}},
 		{"reaction A <=> B A=1 n=0 Ea=0\n  duplicate now\n  duplicate\n", []wantDiag{{1, 12, 15, "syntax", "unexpected \"now\" after duplicate"}, {2, 2, 11, "syntax", "duplicate attribute \"duplicate\" (first given on line 2)"}}},
 		{"reaction A <=> B A=1 n=0 Ea=0\n  frob 1\n", []wantDiag{{1, 2, 6, "syntax", "unknown reaction attribute \"frob\": expected one of low-pressure, troe, efficiencies, pressure, duplicate, reverse, note"}}},
+		{"reaction A + M <=> B + M\n  pressure 1atm A=1 n=0 Ea=0\n", []wantDiag{{1, 11, 28, "syntax", "pressure lines give the rate at each pressure and do not combine with a third body M: remove M from the equation or the pressure lines"}}},
+		{"reaction A (+M) <=> B (+M)\n  pressure 1atm A=1 n=0 Ea=0\n", []wantDiag{{1, 11, 28, "syntax", "pressure lines give the rate at each pressure and do not combine with a falloff (+M): use either the falloff form (low-pressure, troe) or the pressure lines"}}},
+		{"reaction A <=> B A=1 n=0 Ea=0\n  pressure 1atm A=1 n=0 Ea=0\n", []wantDiag{{0, 17, 29, "unused-rate", "these rate parameters are not used: with pressure lines the rate comes from them (remove these, or the pressure lines)"}}},
 		{"reaction A <=> B\n  A=1e13 n=0 Ea=0\n", []wantDiag{{0, 9, 16, "no-rate", "reaction has no rate parameters (A=, n=, Ea=)"}, {1, 2, 8, "syntax", "\"A=1e13\" on a line of its own: the forward rate parameters (A=, n=, Ea=) belong on the reaction line, after the equation"}}},
 		{"reaction A <=> B A=1 n=0 Ea=0\n  reverse\n", []wantDiag{{1, 9, 9, "syntax", "expected A=, n= and Ea= after reverse"}}},
 		{"x\xffy\n", []wantDiag{{0, 0, 3, "syntax", "unknown keyword \"x\\xffy\": expected one of species, reaction, units, include, group"}, {0, 1, 2, "syntax", "invalid UTF-8 byte 0xFF (ÿ in Latin-1): a .kiln file is UTF-8 text; re-save it as UTF-8"}}},
@@ -125,7 +128,7 @@ func TestSyntaxErrors(t *testing.T) {
 				require.Equal(t, s.Line, e.Line, "diagnostic spans one line")
 				got[i] = wantDiag{s.Line, s.Col, e.Col, d.Code, d.Message}
 				wantSev := SeverityError
-				if d.Code == CodeNoRate {
+				if d.Code == CodeNoRate || d.Code == CodeUnusedRate {
 					wantSev = SeverityWarning
 				}
 				assert.Equal(t, wantSev, d.Severity)

@@ -11,7 +11,6 @@ import (
 	"strconv"
 	"strings"
 	"text/tabwriter"
-	"unicode/utf8"
 
 	"kiln.dev/kiln/analysis"
 	"kiln.dev/kiln/internal/wording"
@@ -379,15 +378,6 @@ func repeatedMatches(rs []compareRxn) string {
 	return strings.Join(parts, "; ")
 }
 
-// clip shortens s to at most n characters, marking the cut with "…".
-func clip(s string, n int) string {
-	if utf8.RuneCountInString(s) <= n {
-		return s
-	}
-	r := []rune(s)
-	return string(r[:n-1]) + "…"
-}
-
 // table is a tabwriter whose output reaches w, on flush, without the
 // blanks tabwriter leaves before line ends.
 type table struct {
@@ -433,10 +423,10 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 	fmt.Fprintf(w, "B: %s (%d species, %s)\n", o.B.File, o.B.Species, wording.Count(o.B.Reactions, "reaction"))
 	for _, f := range []compareFile{o.A, o.B} {
 		if f.Errors > 0 {
-			fmt.Fprintf(w, "note: %s has %d syntax or structure error(s); broken statements were left out (`kiln check` lists every problem)\n", clip(filepath.Base(f.File), 40), f.Errors)
+			fmt.Fprintf(w, "note: %s has %d syntax or structure error(s); broken statements were left out (`kiln check` lists every problem)\n", shorten(filepath.Base(f.File), 40), f.Errors)
 		}
 		if n := len(f.Unreadable); n > 0 {
-			fmt.Fprintf(w, "note: %s: %d species with an unreadable SMILES match nothing (%s)\n", f.File, n, clip(strings.Join(f.Unreadable, ", "), 50))
+			fmt.Fprintf(w, "note: %s: %d species with an unreadable SMILES match nothing (%s)\n", f.File, n, shorten(strings.Join(f.Unreadable, ", "), 50))
 		}
 	}
 	fmt.Fprintf(w, "Species: %d matched by structure (%d under different names), %d only in A, %d only in B, %d name clash(es)\n",
@@ -452,7 +442,7 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 		tw := newTable(w, 2, 0)
 		fmt.Fprintf(tw, "  A\tB\tsuggestion\n")
 		for _, r := range o.Renames[:limit(len(o.Renames))] {
-			fmt.Fprintf(tw, "  %s\t%s\t%s\n", clip(r.A, 24), clip(r.B, 24), clip(r.Suggestion, 64))
+			fmt.Fprintf(tw, "  %s\t%s\t%s\n", shorten(r.A, 24), shorten(r.B, 24), shorten(r.Suggestion, 64))
 		}
 		tw.Flush()
 		more(limit(len(o.Renames)), len(o.Renames))
@@ -462,7 +452,7 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 		tw := newTable(w, 2, 0)
 		fmt.Fprintf(tw, "  name\tSMILES in A\tSMILES in B\n")
 		for _, c := range o.Clashes[:limit(len(o.Clashes))] {
-			fmt.Fprintf(tw, "  %s\t%s\t%s\n", clip(c.Name, 24), clip(c.SMILESA, 40), clip(c.SMILESB, 40))
+			fmt.Fprintf(tw, "  %s\t%s\t%s\n", shorten(c.Name, 24), shorten(c.SMILESA, 40), shorten(c.SMILESB, 40))
 		}
 		tw.Flush()
 		more(limit(len(o.Clashes)), len(o.Clashes))
@@ -503,7 +493,7 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 				}
 				return c
 			}
-			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t\n", clip(p.A, 18),
+			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t\n", shorten(p.A, 18),
 				cell(t.Hf298.Diff*1000, ef*1000, "hf298"), cell(t.S298.Diff, sf, "s298"),
 				cell(t.Cp["300"].Diff, sf, "cp300"), cell(t.Cp["1000"].Diff, sf, "cp1000"), cell(t.Cp["2000"].Diff, sf, "cp2000"),
 				cell(t.G["300"].Diff*1000, ef*1000, "g300"), cell(t.G["1000"].Diff*1000, ef*1000, "g1000"), cell(t.G["2000"].Diff*1000, ef*1000, "g2000"))
@@ -522,9 +512,9 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 		for _, r := range rs[:limit(len(rs))] {
 			smi := ""
 			if r.SMILES != nil {
-				smi = "  " + clip(*r.SMILES, 60)
+				smi = "  " + shorten(*r.SMILES, 60)
 			}
-			fmt.Fprintf(w, "  %s:%d  %s%s\n", filepath.Base(r.File), r.Line, clip(r.Name, 30), smi)
+			fmt.Fprintf(w, "  %s:%d  %s%s\n", filepath.Base(r.File), r.Line, shorten(r.Name, 30), smi)
 		}
 		more(limit(len(rs)), len(rs))
 	}
@@ -590,9 +580,9 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 				for i, l := range r.LinesA {
 					ls[i] = strconv.Itoa(l)
 				}
-				lines = clip(strings.Join(ls, ","), 16)
+				lines = shorten(strings.Join(ls, ","), 16)
 			}
-			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", lines, clip(r.EquationA, 44), cells[0], cells[1], cells[2], clip(note, 28))
+			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", lines, shorten(r.EquationA, 44), cells[0], cells[1], cells[2], note)
 		}
 		tw.Flush()
 		more(limit(len(rx)), len(rx))
@@ -606,7 +596,7 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 		}
 		fmt.Fprintf(w, "\n%s (%d)\n", title, len(rs))
 		for _, r := range rs[:limit(len(rs))] {
-			fmt.Fprintf(w, "  %s:%d  %s\n", filepath.Base(r.File), r.Line, clip(r.Equation, 90))
+			fmt.Fprintf(w, "  %s:%d  %s\n", filepath.Base(r.File), r.Line, shorten(r.Equation, 90))
 		}
 		more(limit(len(rs)), len(rs))
 	}

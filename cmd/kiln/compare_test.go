@@ -234,3 +234,20 @@ func TestCompareCountsDuplicates(t *testing.T) {
 	assert.Contains(t, stdout, "1 equation(s) declared duplicate in A, 1 in B")
 	assert.Regexp(t, `\n\d+,\d+ +HO2 \+ HO2 <=> H2O2 \+ O2 .*duplicates summed`, stdout)
 }
+
+// TestCompareNoteUncut: the note column of the rate table is printed whole
+// (it is the last column; the JSON is not the only place to read it).
+func TestCompareNoteUncut(t *testing.T) {
+	a := writeTemp(t, "a.kiln", `species CH3 [CH3]
+species C2H6 CC
+reaction CH3 + CH3 (+M) <=> C2H6 (+M)  A=6.77e16 n=-1.18 Ea=0.654
+  low-pressure A=3.4e41 n=-7.03 Ea=2.762
+`)
+	b := writeTemp(t, "b.kiln", `species CH3 [CH3]
+species C2H6 CC
+reaction C2H6 (+M) <=> CH3 + CH3 (+M)  A=1.8e21 n=-1.24 Ea=90.0
+  low-pressure A=3.4e41 n=-7.03 Ea=2.762
+`)
+	_, stdout, stderr := runKiln(t, "compare", a, b)
+	assert.Contains(t, stdout, "B writes it reversed; falloff rates at 1.01325 bar, N2 bath gas with each side's efficiency", stderr)
+}

@@ -56,3 +56,22 @@ species lump
 	assert.Contains(t, stderr, "every species of this file already has thermo, 2 species of included files not filled")
 	assert.Equal(t, 2, strings.Count(stderr, ": not filled "), stderr)
 }
+
+// TestFillKeepsApproximationWarning: a block fill wrote from an approximated
+// estimate is that approximation, so check still warns about it after fill
+// (a block of other values turns the note into information: see
+// analysis.TestApproximationWithBlock).
+func TestFillKeepsApproximationWarning(t *testing.T) {
+	path := writeTemp(t, "v.kiln", "species C2HCl3 ClC=C(Cl)Cl\n")
+	warned := func() bool {
+		_, stdout, _ := runKiln(t, "check", "--min-severity", "warning", path)
+		return strings.Contains(stdout, "warning: C2HCl3: no value for group Cd-(Cl)2")
+	}
+	require.True(t, warned(), "before fill")
+	code, _, stderr := runKiln(t, "fill", path)
+	require.Equal(t, exitOK, code, stderr)
+	b, err := os.ReadFile(path)
+	require.NoError(t, err)
+	require.Contains(t, string(b), "nasa7")
+	assert.True(t, warned(), "after fill")
+}

@@ -212,8 +212,146 @@
               (kiln-bigfile-report copy r)
               (should (null (plist-get r :failures)))
               (should (= (length (plist-get r :edits)) 2))
-              (should (> (plist-get r :diagnostics) 0))))
+              (should (> (plist-get r :diagnostics) 0))
+              ;; Handed to Flymake a block at a time: each exactly once.
+              (should (= (plist-get r :diagnostics) (plist-get r :published)))))
         (delete-file copy)))))
+
+;; Diagnostics handed to Flymake a block of lines at a time.
+
+(defvar eglot--current-flymake-report-fn)
+(defvar kiln-eglot--todo)
+(defvar kiln-eglot-diagnostics-chunk-lines)
+(declare-function kiln-eglot--store-diagnostics "kiln-eglot")
+(declare-function kiln-eglot--show-diagnostics "kiln-eglot")
+(declare-function kiln-eglot--flymake-backend "kiln-eglot")
+(declare-function kiln-eglot--own-diagnostics-p "kiln-eglot")
+(declare-function flymake-diagnostic-beg "flymake")
+(declare-function flymake-diagnostic-end "flymake")
+(declare-function flymake-diagnostic-text "flymake")
+
+(defun kiln-eglot-test--diag (l0 c0 l1 c1 msg)
+  "An LSP diagnostic from L0:C0 to L1:C1 with message MSG."
+  (list :range (list :start (list :line l0 :character c0)
+                     :end (list :line l1 :character c1))
+        :severity 2 :source "kiln" :message msg))
+
+(defun kiln-eglot-test--run-timers (pred seconds)
+  "Let timers run until PRED holds or SECONDS pass."
+  (let ((deadline (+ (float-time) seconds)))
+    (while (and (not (funcall pred)) (< (float-time) deadline))
+      (accept-process-output nil 0.01)
+      (sit-for 0))
+    (funcall pred)))
+
+(ert-deftest kiln-eglot-diagnostics-in-blocks ()
+  ;; 1,000 lines, a diagnostic on every third line, some spanning lines
+  ;; across where blocks of 50 lines would end, one past the end of the
+  ;; buffer: the lines in the window are reported at once, the rest from
+  ;; timers; every diagnostic is reported once, inside its report's region;
+  ;; the regions do not overlap and cover the buffer.
+  (skip-unless (kiln-eglot-test--load))
+  (require 'kiln-eglot)
+  (with-temp-buffer
+    (dotimes (i 1000) (insert (format "species s%d CCO\n" i)))
+    (switch-to-buffer (current-buffer))
+    (goto-char (point-min))
+    (forward-line 500)
+    (set-window-start (selected-window) (point))
+    (let* ((reports nil)
+           (kiln-eglot-diagnostics-chunk-lines 50)
+           (eglot--current-flymake-report-fn
+            (lambda (diags &rest args)
+              (push (cons (plist-get args :region) diags) reports)))
+           (lsp (vconcat
+                 (cl-loop for l from 0 below 1000 by 3
+                          collect (if (= 0 (% l 49))
+                                      (kiln-eglot-test--diag l 2 (+ l 3) 4 (format "m%d" l))
+                                    (kiln-eglot-test--diag l 8 l 10 (format "m%d" l))))
+                 (list (kiln-eglot-test--diag 1200 0 1200 1 "beyond")))))
+      (kiln-eglot--store-diagnostics lsp)
+      (kiln-eglot--show-diagnostics)
+      ;; At once: one report, for the lines around the window start.
+      (should (= (length reports) 1))
+      (let ((first (car reports))
+            (wstart (window-start)))
+        (should (<= (car (car first)) wstart))
+        (should (> (cdr (car first)) wstart))
+        (should (cl-some (lambda (d) (equal (flymake-diagnostic-text d) "kiln: m501"))
+                         (cdr first))))
+      (should (kiln-eglot-test--run-timers (lambda () (null kiln-eglot--todo)) 10))
+      (should (> (length reports) 10))
+      (let ((seen (make-hash-table :test #'equal))
+            (regions nil))
+        (dolist (r reports)
+          (push (car r) regions)
+          (dolist (d (cdr r))
+            (should-not (gethash (flymake-diagnostic-text d) seen))
+            (puthash (flymake-diagnostic-text d) t seen)
+            (should (<= (car (car r)) (flymake-diagnostic-beg d)))
+            (should (or (< (flymake-diagnostic-end d) (cdr (car r)))
+                        (= (cdr (car r)) (point-max))))))
+        (should (= (hash-table-count seen) (length lsp)))
+        (setq regions (sort regions (lambda (a b) (< (car a) (car b)))))
+        (should (= (car (car regions)) (point-min)))
+        (should (= (cdr (car (last regions))) (point-max)))
+        (cl-loop for (a b) on regions while b
+                 do (should (= (cdr a) (car b))))))))
+
+;; An ERT test of `kiln-eglot--flymake-backend' (Flymake's check).
+(ert-deftest kiln-eglot-diagnostics-not-resent-after-a-change ()
+  ;; Flymake's check shows diagnostics not yet shown; otherwise it answers
+  ;; with an empty report whose region no diagnostic can touch: after a
+  ;; change the shown diagnostics stay (they move with the text) until the
+  ;; server's answer, and the old ones are not redrawn at old positions.
+  (skip-unless (kiln-eglot-test--load))
+  (require 'kiln-eglot)
+  (with-temp-buffer
+    (dotimes (i 20) (insert (format "species s%d CCO\n" i)))
+    (switch-to-buffer (current-buffer))
+    (let ((eglot--current-flymake-report-fn nil)
+          (reports nil))
+      (cl-letf (((symbol-function 'kiln-eglot--own-diagnostics-p) (lambda () t)))
+        (kiln-eglot--store-diagnostics (vector (kiln-eglot-test--diag 3 0 3 5 "m")))
+        (kiln-eglot--flymake-backend #'ignore (lambda (d &rest a) (push (cons d a) reports)))
+        (should (= (length reports) 1))
+        (should (= (length (car (car reports))) 1))
+        (goto-char (point-max))
+        (insert "species x C\n")
+        (kiln-eglot--flymake-backend #'ignore (lambda (d &rest a) (push (cons d a) reports)))
+        (should (= (length reports) 2))
+        (should (null (car (car reports))))
+        (let ((region (plist-get (cdr (car reports)) :region)))
+          (should (and (< (car region) (point-min)) (< (cdr region) (point-min)))))))))
+
+(ert-deftest kiln-eglot-diagnostics-blocks-resume-when-text-settles ()
+  ;; Blocks pause while the text changes; a publication restarts them; if
+  ;; none comes (the server found the same diagnostics), they resume once
+  ;; the text has stayed unchanged for `kiln-eglot--resume-after'.
+  (skip-unless (kiln-eglot-test--load))
+  (require 'kiln-eglot)
+  (with-temp-buffer
+    (dotimes (i 600) (insert (format "species s%d CCO\n" i)))
+    (switch-to-buffer (current-buffer))
+    (goto-char (point-min))
+    (set-window-start (selected-window) (point))
+    (let* ((reports 0)
+           (kiln-eglot-diagnostics-chunk-lines 50)
+           (kiln-eglot--resume-after 0.3)
+           (eglot--current-flymake-report-fn (lambda (&rest _) (cl-incf reports))))
+      (kiln-eglot--store-diagnostics
+       (vconcat (cl-loop for l from 0 below 600 by 7
+                         collect (kiln-eglot-test--diag l 0 l 3 (format "m%d" l)))))
+      (kiln-eglot--show-diagnostics)
+      (should kiln-eglot--todo)
+      (goto-char (point-max))
+      (insert "# typed\n")
+      (let ((n reports))
+        (kiln-eglot-test--run-timers #'ignore 0.2)
+        (should (= reports n))          ; paused
+        (should kiln-eglot--todo))
+      (should (kiln-eglot-test--run-timers (lambda () (null kiln-eglot--todo)) 10))
+      (should (> reports 10)))))
 
 (provide 'kiln-eglot-test)
 ;;; kiln-eglot-test.el ends here

@@ -216,6 +216,16 @@ local function line_of(pattern)
   error('no line matches ' .. pattern)
 end
 
+-- The live kiln client attached to buffer b, or nil.
+local function kiln_client_for_test(b)
+  for _, c in pairs(vim.lsp.buf_get_clients(b)) do
+    if c.name == 'kiln' and c.initialized and not c.is_stopped() then
+      return c
+    end
+  end
+  return nil
+end
+
 local function line_of_buf(b, pattern)
   for i, l in ipairs(vim.api.nvim_buf_get_lines(b, 0, -1, false)) do
     if l:find(pattern) then
@@ -522,6 +532,118 @@ if live_ok then
     expect(ok, 'no message')
     expect(msgs[1]:find('mix species XY is not declared in flame.kiln', 1, true), 'message: ' .. msgs[1])
     vim.cmd('buffer ' .. bufnr)
+  end)
+
+  -- Code lenses shown in bufnr: { client_id = n, title = s } per extmark
+  -- in the code-lens namespaces of vim.lsp.
+  local function shown_lenses(b)
+    local out = {}
+    for name, ns in pairs(vim.api.nvim_get_namespaces()) do
+      local id = tonumber(name:match('^vim_lsp_codelens:(%d+)$'))
+      if id then
+        for _, m in ipairs(vim.api.nvim_buf_get_extmarks(b, ns, 0, -1, { details = true })) do
+          for _, chunk in ipairs(m[4].virt_text or {}) do
+            if chunk[2] == 'LspCodeLens' then
+              table.insert(out, { client_id = id, title = chunk[1], line = m[2] })
+            end
+          end
+        end
+      end
+    end
+    return out
+  end
+  local function hint_marks(b)
+    return vim.api.nvim_buf_get_extmarks(b, require('kiln').hint_namespace, 0, -1, {})
+  end
+  local function lens_clients(b)
+    local ids = {}
+    for _, l in ipairs(vim.lsp.codelens.get(b) or {}) do
+      ids[#ids + 1] = l.command and l.command.title or '?'
+    end
+    return ids
+  end
+
+  check('restart after a crash: lenses, hints and diagnostics of the dead server go, new ones come', function()
+    vim.cmd('buffer ' .. bufnr)
+    local old = kiln_client()
+    local own_hints = not require('kiln').native_inlay_hints()
+    local function lenses_of(id)
+      local n = 0
+      for _, l in ipairs(shown_lenses(bufnr)) do
+        if l.client_id == id then
+          n = n + 1
+        end
+      end
+      return n
+    end
+    expect(vim.wait(TIMEOUT, function()
+      vim.lsp.codelens.refresh()
+      return lenses_of(old.id) == 1 and (not own_hints or #hint_marks(bufnr) > 0)
+        and #vim.diagnostic.get(bufnr) > 0
+    end, 200), 'before the crash: lenses ' .. vim.inspect(shown_lenses(bufnr)) .. ', hints ' .. #hint_marks(bufnr))
+    -- The server dies while a code-lens request is in flight.
+    vim.lsp.codelens.refresh()
+    vim.loop.kill(old.rpc.pid, 9)
+    expect(vim.wait(TIMEOUT, function() return vim.lsp.get_client_by_id(old.id) == nil end, 50), 'client did not notice the crash')
+    -- A refresh asked while no server runs (as the autocmd suggested by
+    -- :help vim.lsp.codelens.refresh() does) gets no answer.
+    vim.lsp.codelens.refresh()
+    -- Nothing the dead server computed stays on screen.
+    expect(vim.wait(2000, function()
+      return #shown_lenses(bufnr) == 0 and #hint_marks(bufnr) == 0 and #vim.diagnostic.get(bufnr) == 0
+        and #(vim.lsp.codelens.get(bufnr) or {}) == 0
+    end, 50), string.format('after the crash: lenses shown %s, lenses kept %s, hints %d, diagnostics %d',
+      vim.inspect(shown_lenses(bufnr)), vim.inspect(lens_clients(bufnr)), #hint_marks(bufnr), #vim.diagnostic.get(bufnr)))
+    vim.cmd('KilnRestart')
+    local new
+    expect(vim.wait(TIMEOUT, function()
+      new = kiln_client_for_test(bufnr)
+      return new ~= nil and new.id ~= old.id
+    end, 50), 'no kiln client after :KilnRestart')
+    client_id = new.id
+    -- The new server's lens (once), hints and diagnostics are shown without
+    -- any action of the user.
+    local ok = vim.wait(TIMEOUT, function()
+      local shown = shown_lenses(bufnr)
+      return #shown == 1 and shown[1].client_id == new.id and #(vim.lsp.codelens.get(bufnr) or {}) == 1
+        and (not own_hints or #hint_marks(bufnr) > 0) and #vim.diagnostic.get(bufnr) > 0
+    end, 50)
+    expect(ok, string.format('after :KilnRestart: lenses shown %s, lenses kept %s, hints %d, diagnostics %d',
+      vim.inspect(shown_lenses(bufnr)), vim.inspect(lens_clients(bufnr)), #hint_marks(bufnr), #vim.diagnostic.get(bufnr)))
+    -- Running the lens reaches the new server (the dead one would raise).
+    local asked
+    local input = vim.ui.input
+    vim.ui.input = function(o, cb)
+      asked = o
+    end
+    vim.api.nvim_win_set_cursor(0, { shown_lenses(bufnr)[1].line + 1, 0 })
+    local rok, rerr = pcall(vim.lsp.codelens.run)
+    vim.ui.input = input
+    expect(rok and asked, 'codelens.run after restart: ' .. tostring(rerr))
+  end)
+
+  check(':KilnRestart of a running server: one lens, from the new server', function()
+    vim.cmd('buffer ' .. bufnr)
+    local old = kiln_client_for_test(bufnr)
+    expect(old, 'no running kiln client')
+    vim.cmd('KilnRestart')
+    local new
+    local ok = vim.wait(TIMEOUT, function()
+      new = kiln_client_for_test(bufnr)
+      local shown = shown_lenses(bufnr)
+      return new ~= nil and new.id ~= old.id and #shown == 1 and shown[1].client_id == new.id
+        and #(vim.lsp.codelens.get(bufnr) or {}) == 1 and #vim.diagnostic.get(bufnr) > 0
+    end, 50)
+    expect(ok, string.format('after :KilnRestart: lenses shown %s, lenses kept %s, diagnostics %d',
+      vim.inspect(shown_lenses(bufnr)), vim.inspect(lens_clients(bufnr)), #vim.diagnostic.get(bufnr)))
+    client_id = new.id
+    -- The old server's exit, which comes later, takes nothing of the new one's.
+    expect(vim.wait(TIMEOUT, function() return vim.lsp.get_client_by_id(old.id) == nil end, 50), 'old server still runs')
+    vim.wait(300, function() return false end)
+    local shown = shown_lenses(bufnr)
+    expect(#shown == 1 and shown[1].client_id == new.id, 'after the old exit: ' .. vim.inspect(shown))
+    expect(not require('kiln').native_inlay_hints() and #hint_marks(bufnr) > 0 or require('kiln').native_inlay_hints(),
+      'inlay hints gone after the old server exited')
   end)
 
   check('restart after a crash: the buffer is in sync, later edits are sent', function()

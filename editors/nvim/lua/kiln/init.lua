@@ -66,6 +66,8 @@ local state = {
   watched = {}, -- buffers whose changes this plugin follows (see watch)
   orphaned = {}, -- buffers changed while no language client was attached
   hint_timers = {}, -- pending inlay-hint refresh per buffer
+  attached = {}, -- buffers (set) per client id, for clean-up when it exits
+  set_up = {}, -- per buffer: { hints = true, lens = true } once autocmds exist
 }
 
 local hint_ns = vim.api.nvim_create_namespace('kiln_inlay_hints')
@@ -366,6 +368,13 @@ local function own_hints(cfg)
   return cfg.inlay_hints and not M.native_inlay_hints()
 end
 
+local function buffer_set_up(bufnr, what)
+  state.set_up[bufnr] = state.set_up[bufnr] or {}
+  local done = state.set_up[bufnr][what]
+  state.set_up[bufnr][what] = true
+  return done
+end
+
 local function enable_hints(bufnr, cfg)
   if not cfg.inlay_hints then
     return
@@ -375,6 +384,11 @@ local function enable_hints(bufnr, cfg)
     if not pcall(vim.lsp.inlay_hint.enable, true, { bufnr = bufnr }) then
       pcall(vim.lsp.inlay_hint.enable, bufnr, true)
     end
+    return
+  end
+  -- A client attached after a restart reuses the autocmds of the first.
+  if buffer_set_up(bufnr, 'hints') then
+    schedule_hints(bufnr, 0)
     return
   end
   vim.api.nvim_create_autocmd({ 'WinScrolled', 'BufWinEnter' }, {
@@ -390,18 +404,96 @@ end
 ------------------------------------------------------------------------
 -- Code lens and the equilibrium command.
 ------------------------------------------------------------------------
-local function refresh_code_lens(bufnr)
+-- vim.lsp.codelens (0.7-0.9) runs one refresh per buffer at a time and
+-- marks it in a private table until the answer comes. A request whose
+-- server died, or a refresh asked while no client was attached, never
+-- answers, and that buffer's lenses would never be refreshed again.
+local function codelens_refreshes()
+  local f = vim.lsp.codelens and vim.lsp.codelens.refresh
+  for i = 1, 50 do
+    local name, val = debug.getupvalue(f, i)
+    if name == nil then
+      return nil
+    end
+    if name == 'active_refreshes' and type(val) == 'table' then
+      return val
+    end
+  end
+  return nil
+end
+
+local function refresh_code_lens(bufnr, fresh)
   -- 0.7-0.9 refresh the current buffer; 0.10+ take { bufnr = n }.
   if not vim.api.nvim_buf_is_valid(bufnr) or vim.api.nvim_get_current_buf() ~= bufnr then
     return
   end
   if kiln_client_for(bufnr) then
+    if fresh then
+      local pending = codelens_refreshes()
+      if pending then
+        pending[bufnr] = nil
+      end
+    end
     pcall(vim.lsp.codelens.refresh, { bufnr = bufnr })
+  end
+end
+
+-- Removes from bufnr what client_id showed: its code lenses (vim.lsp
+-- keeps and shows those of a client that has exited), its diagnostics and,
+-- unless another kiln client now serves the buffer, the inlay hints.
+local function forget_client(client_id, bufnr)
+  if not vim.api.nvim_buf_is_valid(bufnr) then
+    return
+  end
+  local cl = vim.lsp.codelens
+  if cl then
+    if type(cl.clear) == 'function' then
+      pcall(cl.clear, client_id, bufnr) -- 0.10+
+    else
+      if cl.__namespaces then
+        vim.api.nvim_buf_clear_namespace(bufnr, cl.__namespaces[client_id], 0, -1)
+      end
+      if next(cl.get(bufnr) or {}) ~= nil then
+        cl.save(nil, bufnr, client_id)
+      end
+    end
+    local pending = codelens_refreshes()
+    if pending then
+      pending[bufnr] = nil
+    end
+  end
+  pcall(vim.diagnostic.reset, vim.lsp.diagnostic.get_namespace(client_id), bufnr)
+  local other = kiln_client_for(bufnr)
+  if other == nil or other.id == client_id then
+    if state.hint_timers[bufnr] then
+      state.hint_timers[bufnr]:stop()
+      state.hint_timers[bufnr]:close()
+      state.hint_timers[bufnr] = nil
+    end
+    vim.api.nvim_buf_clear_namespace(bufnr, hint_ns, 0, -1)
+  end
+end
+
+-- keep: the client still runs (a restart stops it); its on_exit cleans up
+-- again, removing what it may still answer meanwhile.
+local function forget_client_everywhere(client_id, keep)
+  local bufs = state.attached[client_id] or {}
+  if not keep then
+    state.attached[client_id] = nil
+  end
+  for b in pairs(bufs) do
+    forget_client(client_id, b)
   end
 end
 
 local function enable_code_lens(bufnr, cfg)
   if not cfg.code_lens or not vim.lsp.codelens then
+    return
+  end
+  if buffer_set_up(bufnr, 'lens') then
+    vim.defer_fn(function()
+      refresh_code_lens(bufnr, true)
+    end, 100)
     return
   end
   vim.api.nvim_create_autocmd({ 'BufEnter', 'InsertLeave', 'BufWritePost' }, {
@@ -412,7 +504,7 @@ local function enable_code_lens(bufnr, cfg)
     end,
   })
   vim.defer_fn(function()
-    refresh_code_lens(bufnr)
+    refresh_code_lens(bufnr, true)
   end, 100)
 end
 
@@ -593,17 +685,20 @@ local function start(root, cfg)
       return true
     end,
     on_attach = function(client, bufnr)
+      state.attached[client.id] = state.attached[client.id] or {}
+      state.attached[client.id][bufnr] = true
       enable_hints(bufnr, cfg)
       enable_code_lens(bufnr, cfg)
       if cfg.on_attach then
         cfg.on_attach(client, bufnr)
       end
     end,
-    on_exit = function()
+    on_exit = function(_, _, client_id)
       vim.schedule(function()
         if state.clients[root] and not client_alive(state.clients[root]) then
           state.clients[root] = nil
         end
+        forget_client_everywhere(client_id)
       end)
     end,
   })
@@ -665,6 +760,8 @@ end
 
 --- Stops all kiln servers and starts them again for the open kiln buffers.
 --- Each buffer is opened in the new server with its full current text.
+--- What the old servers showed (code lenses, inlay hints, diagnostics) is
+--- removed at once; the new server's are shown once it has analysed.
 function M.restart()
   for root, id in pairs(state.clients) do
     local c = vim.lsp.get_client_by_id(id)
@@ -672,7 +769,9 @@ function M.restart()
       c.stop()
     end
     state.clients[root] = nil
+    forget_client_everywhere(id, c ~= nil)
   end
+  -- Clients that have exited already were cleaned up by their on_exit.
   local bufs = kiln_buffers()
   -- Give the old processes a moment to exit before starting new ones.
   vim.defer_fn(function()
