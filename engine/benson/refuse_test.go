@@ -41,6 +41,13 @@ func TestRefusals(t *testing.T) {
 		{"C1#CC2=C1O2", Options{}, "inside a ring of 4 atoms"},
 		{"C1CCCCCC#CCCC1", Options{}, "inside a ring of 11 atoms"},
 		{"C1=CC#CC=C1", Options{}, "inside a ring of 6 atoms"},
+		// likewise a cumulated (allene) centre inside a ring, and a ring
+		// radical whose every resonance structure has one
+		{"C1=C=CCCC1", Options{}, "atom 2 (C) is a cumulated centre (double bonds to atoms 1 and 3) inside a ring of 6 atoms"},
+		{"C1CC=C=C1", Options{}, "inside a ring of 5 atoms"},
+		{"C1=C=CCCCCCC1", Options{}, "inside a ring of 9 atoms"},
+		{"[CH]1C#CCCC1", Options{}, "inside a ring of 6 atoms"},
+		{"[C]1=C=CCCC1", Options{}, "inside a ring of 6 atoms"},
 		// cumulated ketenes: the Ck group needs an ordinary C=C end
 		{"O=C=C=C=O", Options{}, "ketene carbon whose other partner"},
 		{"O=C=C=O", Options{}, "ketene carbon whose other partner"},

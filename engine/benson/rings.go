@@ -209,7 +209,9 @@ func (g *graph) sameRing(atoms ...int) bool {
 }
 
 // ringTriple refuses a triple bond that lies in a ring (cyclohexyne
-// C1#CCCCC1, benzyne c1ccc#cc1, cyclopropyne C1#CC1). The Ct groups were
+// C1#CCCCC1, benzyne c1ccc#cc1, cyclopropyne C1#CC1), and a cumulated
+// centre both of whose double bonds lie in a ring (1,2-cyclohexadiene
+// C1=C=CCCC1). The Ct groups were
 // derived from linear acetylenes, and the ring-strain corrections are those
 // of rings without a triple bond: no table here describes a bent C≡C or the
 // strain of a cycloalkyne or aryne (benzyne came out about 16 kcal/mol low
@@ -229,6 +231,24 @@ func ringTriple(g *graph) error {
 				"(%s) is triple-bonded to atom %d (%s) inside a ring of %d atoms: kiln's tables hold no ring correction for a ring containing a triple bond (cycloalkyne, aryne) and no group for a bent triple bond",
 				g.m.Atoms[i].Element, j+1, g.m.Atoms[j].Element, n)}})
 		}
+	}
+	// A cumulated carbon (allene centre) in a ring is bent the same way:
+	// 1,2-cyclohexadiene took the 1,4-cyclohexadiene correction unflagged.
+	for i, a := range g.m.Atoms {
+		var ring []int // its double bonds, both in a ring
+		for k, b := range g.nbrBond[i] {
+			if bd := g.m.Bonds[b]; bd.Order == 2 && !bd.Aromatic && g.ringBond[b] {
+				ring = append(ring, k)
+			}
+		}
+		if len(ring) != 2 {
+			continue
+		}
+		n := g.smallestRingThrough(g.nbrBond[i][ring[0]])
+		x, y := g.nbr[i][ring[0]], g.nbr[i][ring[1]]
+		refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf(
+			"(%s) is a cumulated centre (double bonds to atoms %d and %d) inside a ring of %d atoms: kiln's tables hold no ring correction for a ring containing a cumulated double bond (cyclic allene) and no group for a bent allene",
+			a.Element, min(x, y)+1, max(x, y)+1, n)}})
 	}
 	if len(refusals) == 0 {
 		return nil
