@@ -479,21 +479,29 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 		// Every approximation of the estimate is reported, worded as
 		// estimate, summary and hover word it; what a validated model
 		// computes (a radical site's S°/Cp change) is shown there, not here.
-		var groups, others []string
+		var groups, kept, others []string
 		for _, m := range miss {
 			if m.Modelled() {
 				continue // a validated model, shown with the estimate, not a warning
 			}
 			s := FlagText(m)
-			if _, err := benson.ParseGroupName(m.Group); err == nil {
-				groups = append(groups, s)
-			} else {
+			switch _, err := benson.ParseGroupName(m.Group); {
+			case err != nil:
 				others = append(others, s)
+			case strings.HasPrefix(m.Approximation, m.Group):
+				// The group's own value, used with a known shortcoming
+				// (no interaction term, a biased published value).
+				kept = append(kept, s)
+			default:
+				groups = append(groups, s)
 			}
 		}
 		var msg []string
 		if len(groups) > 0 {
 			msg = append(msg, fmt.Sprintf("no value for group %s; define it with a `group` statement to replace the approximation", strings.Join(groups, ", ")))
+		}
+		if len(kept) > 0 {
+			msg = append(msg, fmt.Sprintf("group value used as an approximation: %s; a `group` statement replaces it", strings.Join(kept, ", ")))
 		}
 		if len(others) > 0 {
 			msg = append(msg, fmt.Sprintf("estimated with an approximation kiln has no data for: %s; its uncertainty is widened (a thermo block with measured or computed values replaces the estimate)", strings.Join(others, ", ")))

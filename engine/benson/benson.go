@@ -213,9 +213,6 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	if err := spinScope(m); err != nil {
 		return nil, err
 	}
-	if err := cumulatedKetene(m); err != nil {
-		return nil, err
-	}
 	unpaired := 0
 	for _, a := range m.Atoms {
 		unpaired += a.Radical
@@ -248,6 +245,12 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 // one resonance structure (resonance.go); m has passed Estimate's checks of
 // charge, isotopes, connectivity, spin and multiplicity.
 func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
+	// A cumulated ketene is refused per structure, so that a radical
+	// spelled as one (O=C=C=C1[CH]C=CC=C1, [CH]=C=C=C=O) is estimated
+	// through its other resonance structures, as when spelled otherwise.
+	if err := cumulatedKetene(m); err != nil {
+		return nil, err
+	}
 	unpaired := m.UnpairedElectrons()
 	tab := lookupTable(opts.UserGroups)
 	est := &Result{Formula: m.Formula(), MolarMass: m.MolarMass()}
@@ -258,11 +261,15 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 		parent = parentOf(m)
 	}
 	g := newGraph(parent)
+	if err := ringTriple(g); err != nil { // rings.go
+		return nil, err
+	}
 
 	if err := addGroups(g, tab, est); err != nil {
 		return nil, err
 	}
 	addRingCorrections(g, tab, est)
+	addFuranFlag(tab, est) // rings.go
 	addInteractions(g, tab, est)
 	addHalogenFlags(g, tab, est)
 	addAzineFlags(g, tab, est) // hetero_n.go

@@ -103,8 +103,9 @@ func TestGroupAssignment(t *testing.T) {
 			e := estimate(t, c.smiles, Options{})
 			assert.Equal(t, c.want, groupCounts(e))
 			for _, m := range e.Missing {
-				// radicals report the HBI entropy/Cp increments that are not tabulated
-				assert.True(t, strings.HasPrefix(m.Group, "HBI dS, dCp: "), "unexpected missing %+v", m)
+				// radicals report the HBI entropy/Cp increments that are not
+				// tabulated; furan its ring's S/Cp (TestFuranRingFlag)
+				assert.True(t, strings.HasPrefix(m.Group, "HBI dS, dCp: ") || m.Group == furanEntropyGroup, "unexpected missing %+v", m)
 			}
 		})
 	}

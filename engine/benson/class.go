@@ -131,7 +131,7 @@ const (
 // entropyOnly reports whether approximation m concerns S° and Cp only,
 // leaving ΔHf°298 as the groups give it.
 func entropyOnly(m Missing) bool {
-	return strings.HasPrefix(m.Group, "HBI dS") || m.Group == cpFallsGroup || m.Group == pyrroleEntropyGroup ||
+	return strings.HasPrefix(m.Group, "HBI dS") || m.Group == cpFallsGroup || m.Group == pyrroleEntropyGroup || m.Group == furanEntropyGroup ||
 		m.Group == entropyFloorGroup || strings.HasPrefix(m.Group, ringSystemEntropyGroup)
 }
 
@@ -157,7 +157,7 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 		switch {
 		case entropyOnly(m):
 			// Entropy/Cp-only approximations: ΔHf°298 is not affected.
-		case strings.HasPrefix(m.Group, "HBI: "+unstabilisedSite):
+		case strings.HasPrefix(m.Group, "HBI: "+unstabilisedSite), m.Group == "HBI: "+ketenylSite:
 			w = widenStabiliser
 		case strings.HasPrefix(m.Group, "HBI"):
 			w = widenRadical
@@ -165,6 +165,8 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 			w = max(widenSystem, widenRingShare*math.Abs(ringStrain))
 		case strings.HasSuffix(m.Approximation, withoutHalogenInteractions):
 			w = widenPolyhalogen // hetero_sx.go
+		case strings.HasSuffix(m.Approximation, olderChloroethyleneData):
+			w = widenVinylChloride // hetero_sx.go
 		case strings.HasPrefix(m.Group, "ring"):
 			w = max(widenRing, widenRingShare*math.Abs(ringStrain))
 		default:

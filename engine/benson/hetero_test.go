@@ -2,6 +2,7 @@ package benson
 
 import (
 	"math"
+	"slices"
 	"strings"
 	"testing"
 
@@ -68,7 +69,12 @@ func TestHeteroGroupsAssigned(t *testing.T) {
 		}
 		e := heteroEstimate(t, c.smiles)
 		assert.ElementsMatch(t, c.groups, groupNames(e), c.smiles)
-		assert.Empty(t, e.Missing, c.smiles)
+		// the published-but-biased Cd-(Cl)(H) is the one flag a group
+		// assigned from the tables may carry (TestVinylChlorideWidening)
+		missing := slices.DeleteFunc(slices.Clone(e.Missing), func(m Missing) bool {
+			return strings.HasSuffix(m.Approximation, olderChloroethyleneData)
+		})
+		assert.Empty(t, missing, c.smiles)
 	}
 }
 
@@ -335,4 +341,69 @@ func TestPolyhalogenWidening(t *testing.T) {
 	rms := math.Sqrt(sum / float64(n))
 	t.Logf("polyhalogen-flagged training rows: %d, RMS ΔHf° error %.2f kcal/mol", n, rms)
 	assert.InDelta(t, rms, widenPolyhalogen, 0.3)
+}
+
+// Vinyl chlorides: the published Cd-(Cl)(H) value rests on older data, and
+// the estimates that use it say so, with a widening that is the error the
+// validation rows show (recomputed here as widenPolyhalogen is).
+func TestVinylChlorideWidening(t *testing.T) {
+	for _, smi := range []string{"C=CCl", "Cl/C=C/Cl", "ClC=Cc1ccccc1"} {
+		e := heteroEstimate(t, smi)
+		n := 0
+		for _, x := range e.Missing {
+			if x.Group == "Cd-(Cl)(H)" && strings.HasSuffix(x.Approximation, olderChloroethyleneData) {
+				n++
+			}
+		}
+		assert.Equal(t, correctionCountGroups(e, "Cd-(Cl)(H)"), n, "%s: %v", smi, e.Missing)
+		assert.GreaterOrEqual(t, e.Uncertainty/calorie/1000, widenVinylChloride, smi)
+	}
+	var sum float64
+	n := 0
+	for _, r := range readHeteroRef(t) {
+		if r.split != "train" || math.IsNaN(r.hf) {
+			continue
+		}
+		m, err := molecule.ParseSMILES(r.smiles)
+		require.NoError(t, err)
+		if _, lib := reflib.New().Lookup(m, 0); lib {
+			continue
+		}
+		e, err := Estimate(m, Options{})
+		if err != nil || len(e.Missing) == 0 {
+			continue
+		}
+		flags, other := 0, false
+		for _, x := range e.Missing {
+			switch {
+			case strings.HasSuffix(x.Approximation, olderChloroethyleneData):
+				flags++
+			case strings.HasPrefix(x.Group, "Cp(T)"):
+			default:
+				other = true
+			}
+		}
+		if flags == 0 || other {
+			continue
+		}
+		d := e.Hf298/calorie/1000 - r.hf
+		t.Logf("%s: %+.2f kcal/mol, %d flag(s)", r.smiles, d, flags)
+		sum += d * d / float64(flags)
+		n++
+	}
+	require.GreaterOrEqual(t, n, 3)
+	rms := math.Sqrt(sum / float64(n))
+	t.Logf("vinyl-chloride-flagged training rows: %d, RMS ΔHf° error %.2f kcal/mol", n, rms)
+	assert.InDelta(t, rms, widenVinylChloride, 0.1)
+}
+
+// correctionCountGroups returns the count of group term name in e (0 when
+// absent).
+func correctionCountGroups(e *Result, name string) int {
+	for _, g := range e.Groups {
+		if g.Name == name {
+			return g.Count
+		}
+	}
+	return 0
 }

@@ -33,6 +33,21 @@ func TestRefusals(t *testing.T) {
 		{"S=S", Options{}, "terminal atom"},
 		{"[Li][Li]", Options{}, "unsupported element Li"},
 		{"C$C", Options{}, "order 4"},
+		// a triple bond inside a ring: no bent-C≡C group, no cycloalkyne or
+		// aryne ring correction (the ring is named by its smallest size)
+		{"C1#CCCCC1", Options{}, "atom 1 (C) is triple-bonded to atom 2 (C) inside a ring of 6 atoms"},
+		{"c1ccc#cc1", Options{}, "inside a ring of 6 atoms"},
+		{"C1#CC1", Options{}, "inside a ring of 3 atoms"},
+		{"C1#CC2=C1O2", Options{}, "inside a ring of 4 atoms"},
+		{"C1CCCCCC#CCCC1", Options{}, "inside a ring of 11 atoms"},
+		{"C1=CC#CC=C1", Options{}, "inside a ring of 6 atoms"},
+		// likewise a cumulated (allene) centre inside a ring, and a ring
+		// radical whose every resonance structure has one
+		{"C1=C=CCCC1", Options{}, "atom 2 (C) is a cumulated centre (double bonds to atoms 1 and 3) inside a ring of 6 atoms"},
+		{"C1CC=C=C1", Options{}, "inside a ring of 5 atoms"},
+		{"C1=C=CCCCCCC1", Options{}, "inside a ring of 9 atoms"},
+		{"[CH]1C#CCCC1", Options{}, "inside a ring of 6 atoms"},
+		{"[C]1=C=CCCC1", Options{}, "inside a ring of 6 atoms"},
 		// cumulated ketenes: the Ck group needs an ordinary C=C end
 		{"O=C=C=C=O", Options{}, "ketene carbon whose other partner"},
 		{"O=C=C=O", Options{}, "ketene carbon whose other partner"},

@@ -207,3 +207,109 @@ func (g *graph) sameRing(atoms ...int) bool {
 	}
 	return false
 }
+
+// ringTriple refuses a triple bond that lies in a ring (cyclohexyne
+// C1#CCCCC1, benzyne c1ccc#cc1, cyclopropyne C1#CC1), and a cumulated
+// centre both of whose double bonds lie in a ring (1,2-cyclohexadiene
+// C1=C=CCCC1). The Ct groups were
+// derived from linear acetylenes, and the ring-strain corrections are those
+// of rings without a triple bond: no table here describes a bent C≡C or the
+// strain of a cycloalkyne or aryne (benzyne came out about 16 kcal/mol low
+// with the 1,3-cyclohexadiene correction and an ordinary uncertainty). The
+// ring is named by its size, the smallest ring through the bond, which does
+// not depend on the spelling; the atom by canonical symmetry class.
+func ringTriple(g *graph) error {
+	var refusals []atomError
+	for b, bond := range g.m.Bonds {
+		if bond.Order != 3 || !g.ringBond[b] {
+			continue
+		}
+		n := g.smallestRingThrough(b)
+		for _, pair := range [][2]int{{bond.A, bond.B}, {bond.B, bond.A}} {
+			i, j := pair[0], pair[1]
+			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf(
+				"(%s) is triple-bonded to atom %d (%s) inside a ring of %d atoms: kiln's tables hold no ring correction for a ring containing a triple bond (cycloalkyne, aryne) and no group for a bent triple bond",
+				g.m.Atoms[i].Element, j+1, g.m.Atoms[j].Element, n)}})
+		}
+	}
+	// A cumulated carbon (allene centre) in a ring is bent the same way:
+	// 1,2-cyclohexadiene took the 1,4-cyclohexadiene correction unflagged.
+	for i, a := range g.m.Atoms {
+		var ring []int // its double bonds, both in a ring
+		for k, b := range g.nbrBond[i] {
+			if bd := g.m.Bonds[b]; bd.Order == 2 && !bd.Aromatic && g.ringBond[b] {
+				ring = append(ring, k)
+			}
+		}
+		if len(ring) != 2 {
+			continue
+		}
+		n := g.smallestRingThrough(g.nbrBond[i][ring[0]])
+		x, y := g.nbr[i][ring[0]], g.nbr[i][ring[1]]
+		refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf(
+			"(%s) is a cumulated centre (double bonds to atoms %d and %d) inside a ring of %d atoms: kiln's tables hold no ring correction for a ring containing a cumulated double bond (cyclic allene) and no group for a bent allene",
+			a.Element, min(x, y)+1, max(x, y)+1, n)}})
+	}
+	if len(refusals) == 0 {
+		return nil
+	}
+	return canonicalRefusal(g.m, refusals)
+}
+
+// smallestRingThrough returns the size of the smallest ring containing bond
+// b (a ring bond): one more than the shortest path between its ends that
+// avoids b.
+func (g *graph) smallestRingThrough(b int) int {
+	from, to := g.m.Bonds[b].A, g.m.Bonds[b].B
+	dist := make([]int, len(g.m.Atoms))
+	for i := range dist {
+		dist[i] = -1
+	}
+	dist[from] = 0
+	queue := []int{from}
+	for len(queue) > 0 {
+		a := queue[0]
+		queue = queue[1:]
+		for k, c := range g.nbr[a] {
+			if g.nbrBond[a][k] == b || dist[c] >= 0 {
+				continue
+			}
+			dist[c] = dist[a] + 1
+			if c == to {
+				return dist[c] + 1
+			}
+			queue = append(queue, c)
+		}
+	}
+	return 0 // not a ring bond
+}
+
+// furanEntropyGroup names the flag of the furan ring correction's S° and
+// Cp (corrections.tsv: S from Benson 1976 from memory, Cp taken as
+// cyclopentene's): ΔHf° is not approximated by it, so uncertainty
+// (class.go) does not widen ΔHf°.
+const furanEntropyGroup = "ring S, Cp: furan"
+
+// addFuranFlag flags the S° and Cp of an estimate that took the furan ring
+// correction (unless a group statement supplies ring:furan). With it,
+// furan's Cp is above the handbook values of testdata/thermo/train.tsv
+// (Dorofeeva 1992) by 0.1 at 300 K and 1.5–2.2 cal/(mol K) from 400 to
+// 1500 K (500 K: 27.9 against 25.8), and its S° of 58.5 cal/(mol K) is
+// about 5 below the handbook value (about 63.9, from memory; train.tsv has
+// no S° for furan). The correction is kept until a source for a better
+// one is at hand.
+func addFuranFlag(l lookup, est *Result) {
+	if _, user := l.user["ring:furan"]; user {
+		return
+	}
+	for _, c := range est.Corrections {
+		if c.Name == "ring strain: furan" {
+			est.Missing = append(est.Missing, Missing{
+				Group:         furanEntropyGroup,
+				Approximation: "S and Cp of the tabulated furan ring correction (Cp as cyclopentene's)",
+				Note:          "furan's own Cp comes out 1.5–2.2 cal/(mol K) above the handbook values from 400 to 1500 K and its S° about 5 cal/(mol K) low; ΔHf° is not affected",
+			})
+			return
+		}
+	}
+}
