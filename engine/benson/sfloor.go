@@ -102,58 +102,54 @@ func translationalEntropy(M float64) float64 {
 // massMoment returns a lower bound on J = Σ m_i r_i² about the centre of
 // mass (amu Å²) of m with its hydrogens, by rule 4 above, and the total
 // mass (amu).
+//
+// J·M = Σ_{i<k} m_i m_k d_ik² with d_ik the bound of the pair. Every pair
+// first takes the non-bonded bound (s_i + s_k)², s the single-bond radius,
+// which sums in closed form from Σm, Σms and Σms²; the bonded pairs (a bond
+// of the graph, an implicit H and its atom) are then corrected one by one.
+// The work is linear in the atoms and bonds, not quadratic.
 func massMoment(m *molecule.Molecule) (j, total float64) {
-	type at struct {
-		el     string
-		mass   float64
-		parent int // heavy atom an implicit H is bound to, else -1
-	}
-	var atoms []at
 	hw, _ := molecule.AtomicWeight("H")
-	for _, a := range m.Atoms {
+	hs := radius("H", 1)
+	mass := make([]float64, len(m.Atoms))
+	var s0, s1, s2, self float64 // Σm, Σms, Σms², Σm²s²
+	add := func(w, r float64, k int) {
+		fk := float64(k)
+		s0 += fk * w
+		s1 += fk * w * r
+		s2 += fk * w * r * r
+		self += fk * w * w * r * r
+	}
+	for i, a := range m.Atoms {
 		w, ok := molecule.AtomicWeight(a.Element)
 		if !ok {
 			w = 1
 		}
-		atoms = append(atoms, at{a.Element, w, -1})
+		mass[i] = w
+		add(w, radius(a.Element, 1), 1)
+		add(hw, hs, a.HCount)
+	}
+	total = s0
+	// Σ_{i<k} m_i m_k (s_i+s_k)² = (Σ_{i,k} … − Σ_i m_i² (2 s_i)²) / 2.
+	jm := s0*s2 + s1*s1 - 2*self
+	pair := func(wa, wb, bonded, free float64) {
+		jm += wa * wb * (bonded*bonded - free*free)
 	}
 	for i, a := range m.Atoms {
-		for range a.HCount {
-			atoms = append(atoms, at{"H", hw, i})
+		if a.HCount > 0 {
+			r := radius(a.Element, 1)
+			pair(mass[i]*float64(a.HCount), hw, 0.9*(r+hs), r+hs)
 		}
 	}
-	n := len(m.Atoms)
-	order := make(map[[2]int]int, len(m.Bonds))
 	for _, b := range m.Bonds {
 		o := b.Order
 		if b.Aromatic {
 			o = 2 // between single and double: the double radius bounds it
 		}
-		order[[2]int{min(b.A, b.B), max(b.A, b.B)}] = o
+		ea, eb := m.Atoms[b.A].Element, m.Atoms[b.B].Element
+		pair(mass[b.A], mass[b.B], 0.9*(radius(ea, o)+radius(eb, o)), radius(ea, 1)+radius(eb, 1))
 	}
-	for i := range atoms {
-		total += atoms[i].mass
-	}
-	for i := range atoms {
-		for k := i + 1; k < len(atoms); k++ {
-			a, b := atoms[i], atoms[k]
-			var d float64
-			switch {
-			case i < n && k < n:
-				if o, ok := order[[2]int{i, k}]; ok {
-					d = 0.9 * (radius(a.el, o) + radius(b.el, o))
-				} else {
-					d = radius(a.el, 1) + radius(b.el, 1)
-				}
-			case k >= n && b.parent == i:
-				d = 0.9 * (radius(a.el, 1) + radius(b.el, 1))
-			default:
-				d = radius(a.el, 1) + radius(b.el, 1)
-			}
-			j += a.mass * b.mass * d * d
-		}
-	}
-	return j / total, total
+	return jm / total, total
 }
 
 // entropyFloor returns the lower bound on S°298 (J/(mol K)) of m with

@@ -122,3 +122,74 @@ func TestEntropyFlagsLeaveHfUncertainty(t *testing.T) {
 	assert.True(t, entropyOnly(Missing{Group: ringSystemEntropyGroup + "adamantane"}))
 	assert.True(t, entropyOnly(Missing{Group: EntropyFloorGroup}))
 }
+
+// massMomentPairs is the pair-by-pair form of massMoment (quadratic), the
+// reference the closed form is tested against.
+func massMomentPairs(m *molecule.Molecule) (j, total float64) {
+	type at struct {
+		el     string
+		mass   float64
+		parent int // heavy atom an implicit H is bound to, else -1
+	}
+	var atoms []at
+	hw, _ := molecule.AtomicWeight("H")
+	for _, a := range m.Atoms {
+		w, ok := molecule.AtomicWeight(a.Element)
+		if !ok {
+			w = 1
+		}
+		atoms = append(atoms, at{a.Element, w, -1})
+	}
+	for i, a := range m.Atoms {
+		for range a.HCount {
+			atoms = append(atoms, at{"H", hw, i})
+		}
+	}
+	n := len(m.Atoms)
+	order := make(map[[2]int]int, len(m.Bonds))
+	for _, b := range m.Bonds {
+		o := b.Order
+		if b.Aromatic {
+			o = 2 // between single and double: the double radius bounds it
+		}
+		order[[2]int{min(b.A, b.B), max(b.A, b.B)}] = o
+	}
+	for i := range atoms {
+		total += atoms[i].mass
+	}
+	for i := range atoms {
+		for k := i + 1; k < len(atoms); k++ {
+			a, b := atoms[i], atoms[k]
+			var d float64
+			switch {
+			case i < n && k < n:
+				if o, ok := order[[2]int{i, k}]; ok {
+					d = 0.9 * (radius(a.el, o) + radius(b.el, o))
+				} else {
+					d = radius(a.el, 1) + radius(b.el, 1)
+				}
+			case k >= n && b.parent == i:
+				d = 0.9 * (radius(a.el, 1) + radius(b.el, 1))
+			default:
+				d = radius(a.el, 1) + radius(b.el, 1)
+			}
+			j += a.mass * b.mass * d * d
+		}
+	}
+	return j / total, total
+}
+
+// TestMassMomentClosedForm: the linear-time massMoment equals the
+// pair-by-pair sum on molecules with rings, aromatic bonds, multiple bonds,
+// explicit hydrogens, heteroatoms and an element without a radius.
+func TestMassMomentClosedForm(t *testing.T) {
+	for _, smi := range []string{"[H][H]", "C", "CCO", "c1ccccc1", "C#CC=C", "C12C3C4C1C5C2C3C45", "ClC(Cl)=C(F)Br",
+		"CC(=O)N(C)c1ccncc1", "O=S(=O)(C)C", "[2H]C([2H])([2H])O", "C[Si](C)(C)C", "[CH2]C=CC[O]", "CCCCCCCCCCCCCCCCCCCC"} {
+		m, err := molecule.ParseSMILES(smi)
+		require.NoError(t, err, smi)
+		j, total := massMoment(m)
+		wantJ, wantTotal := massMomentPairs(m)
+		assert.InDelta(t, wantTotal, total, 1e-9*wantTotal, smi)
+		assert.InDelta(t, wantJ, j, 1e-9*wantJ, smi)
+	}
+}
