@@ -10,6 +10,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -271,4 +272,38 @@ func orNaN(e *errStat) string {
 		return "nan"
 	}
 	return fmt.Sprintf("%.2f", e.mae()+0.15)
+}
+
+// TestValidatedGroups: validatedGroups is the largest group count of the
+// training molecules (the size up to which the class errors were measured).
+func TestValidatedGroups(t *testing.T) {
+	largest, name := 0, ""
+	for _, r := range readRef(t, "../../testdata/thermo/train.tsv") {
+		mol, err := molecule.ParseSMILES(r.smiles)
+		require.NoError(t, err, r.name)
+		if smallSpecies[mol.Formula()] {
+			continue
+		}
+		est, err := Estimate(mol, Options{})
+		require.NoError(t, err, r.name)
+		if n := groupCount(est); n > largest {
+			largest, name = n, r.name
+		}
+	}
+	t.Logf("largest training molecule: %s, %d group centres", name, largest)
+	assert.Equal(t, largest, validatedGroups, "update validatedGroups in class.go")
+}
+
+// TestUncertaintyGrowsWithSize: within the validated size the class error
+// is the class's; beyond it the variance grows with the group count.
+func TestUncertaintyGrowsWithSize(t *testing.T) {
+	u := func(n int) float64 {
+		mol, err := molecule.ParseSMILES(strings.Repeat("C", n))
+		require.NoError(t, err)
+		est, err := Estimate(mol, Options{})
+		require.NoError(t, err)
+		return est.Uncertainty
+	}
+	assert.Equal(t, u(6), u(validatedGroups))
+	assert.InDelta(t, u(6)*math.Sqrt(500.0/validatedGroups), u(500), 1e-9*u(500))
 }
