@@ -54,3 +54,29 @@ func TestFuranRingFlag(t *testing.T) {
 		assert.LessOrEqual(t, d, 2.3, "%.0f K: the flag's note is out of date", T)
 	}
 }
+
+// The thiophene ring correction's Cp, taken as furan's, is flagged (Cp
+// only), unless ring:thiophene is supplied; a saturated S ring is not.
+func TestThiopheneCpFlag(t *testing.T) {
+	count := func(e *Result) int {
+		n := 0
+		for _, m := range e.Missing {
+			if m.Group == thiopheneCpGroup {
+				n++
+				assert.True(t, entropyOnly(m))
+			}
+		}
+		return n
+	}
+	for _, smi := range []string{"c1ccsc1", "Cc1cccs1"} {
+		e := estimate(t, smi, Options{})
+		assert.Equal(t, 1, count(e), "%s: %v", smi, e.Missing)
+		if len(e.Missing) == 1 {
+			assert.InDelta(t, maeToSigma*classMAE[e.Class]*calorie*1000, e.Uncertainty, 1e-6, smi)
+		}
+	}
+	assert.Zero(t, count(estimate(t, "C1CCSC1", Options{})))
+	u, err := Estimate(parse(t, "c1ccsc1"), Options{UserGroups: []GroupValue{{Name: "ring:thiophene", Hf298: 1.36 * calorie * 1000, S298: 22.84 * calorie, Source: "test"}}})
+	require.NoError(t, err)
+	assert.Zero(t, count(u))
+}
