@@ -269,7 +269,7 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 		return nil, err
 	}
 	addRingCorrections(g, tab, est)
-	addFuranFlag(tab, est) // rings.go
+	addRingEntropyFlags(tab, est) // rings.go
 	addInteractions(g, tab, est)
 	addHalogenFlags(g, tab, est)
 	addAzineFlags(g, tab, est) // hetero_n.go

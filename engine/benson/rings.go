@@ -290,7 +290,7 @@ func (g *graph) smallestRingThrough(b int) int {
 // (class.go) does not widen ΔHf°.
 const furanEntropyGroup = "ring S, Cp: furan"
 
-// addFuranFlag flags the S° and Cp of an estimate that took the furan ring
+// addRingEntropyFlags flags the S° and Cp of an estimate that took the furan ring
 // correction (unless a group statement supplies ring:furan). With it,
 // furan's Cp is above the handbook values of testdata/thermo/train.tsv
 // (Dorofeeva 1992) by 0.1 at 300 K and 1.5–2.2 cal/(mol K) from 400 to
@@ -303,7 +303,7 @@ const furanEntropyGroup = "ring S, Cp: furan"
 // same cyclopentene values (its ΔHf° and S° are derived from thiophene
 // itself), so its Cp is flagged too (thiopheneCpGroup); no reference Cp of
 // thiophene is at hand to measure it.
-func addFuranFlag(l lookup, est *Result) {
+func addRingEntropyFlags(l lookup, est *Result) {
 	flags := []struct {
 		correction, group, approximation, note string
 	}{
@@ -326,5 +326,5 @@ func addFuranFlag(l lookup, est *Result) {
 }
 
 // thiopheneCpGroup names the flag of the thiophene ring correction's Cp
-// (addFuranFlag); like furanEntropyGroup it leaves ΔHf° alone.
+// (addRingEntropyFlags); like furanEntropyGroup it leaves ΔHf° alone.
 const thiopheneCpGroup = "ring Cp: thiophene"
