@@ -92,7 +92,11 @@ func (w *Workspace) Quick(ctx context.Context, path string) *Result {
 	if err != nil {
 		return nil
 	}
-	return w.movedResult(path, w.parse(path, text), w.Settings())
+	f := w.parse(path, text) // kept: the analysis after the debounce reuses it
+	if ctx.Err() != nil {
+		return nil
+	}
+	return w.movedResult(path, f, w.Settings())
 }
 
 // movedResult returns the analysis of f (the new parse of the file at
@@ -113,9 +117,6 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 		len(f.Stmts) != len(f0.Stmts) || len(f.Includes) != len(f0.Includes) ||
 		f.EnergyUnit != f0.EnergyUnit || f.EntropyUnit != f0.EntropyUnit || f.Newline != f0.Newline || f.BOM != f0.BOM ||
 		len(f.Species) != len(f0.Species) || len(f.Reactions) != len(f0.Reactions) || len(f.Groups) != len(f0.Groups) {
-		return nil
-	}
-	if (len(r0.Files) > 1 || len(f0.Includes) > 0) && !w.includesSame(r0, path) {
 		return nil
 	}
 	e := speciesfile.DiffEdit(f0.Src, f.Src)
@@ -196,6 +197,12 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 	linesMoved := f.Lines.LineCount() != f0.Lines.LineCount() ||
 		f.Lines.Line(e.Old.End+delta) != f0.Lines.Line(e.Old.End)
 	if linesMoved && r0.namesLines {
+		return nil
+	}
+	// Included files are compared only now, when the edit has proved to
+	// move positions only: reading them (from disk when not open) for
+	// every keystroke in a statement would cost more than it saves.
+	if (len(r0.Files) > 1 || len(f0.Includes) > 0) && !w.includesSame(r0, path) {
 		return nil
 	}
 	// where a span of the old text goes: kept, moved by delta, or unknown
