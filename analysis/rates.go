@@ -325,11 +325,11 @@ func termolecularNote(v *kinetics.Violation, ts []speciesfile.Term) string {
 			names = append(names, t.Name.Text)
 		}
 	}
-	pair := "two partners"
+	pair := ""
 	if v.Pair[0] < len(names) && v.Pair[1] < len(names) {
 		pair = names[v.Pair[0]] + " + " + names[v.Pair[1]]
 	}
-	return fmt.Sprintf(" (termolecular sanity bound: at 1 bar, k·[M] would outrun the %s collision rate; use a falloff form if the rate is a low-pressure limit)", pair)
+	return " (" + kinetics.TermolecularBasis(pair) + "; use a falloff form if the rate is a low-pressure limit)"
 }
 
 func atPressure(v *kinetics.Violation) string {

@@ -81,7 +81,7 @@ func (v Violation) Message() string {
 		dir, at, sci(v.Rate), RateUnits(v.Order), molecularity(v.Order),
 		sci(v.Limit), RateUnits(v.Order), strconv.FormatFloat(v.Ratio(), 'g', 3, 64))
 	if v.Order == 3 {
-		msg += " (" + TermolecularBasis + ")"
+		msg += " (" + TermolecularBasis("") + ")"
 	}
 	return msg
 }
@@ -152,8 +152,14 @@ func CollisionLimit(order int, masses []float64, heavyAtoms []int, T float64, s 
 }
 
 // TermolecularBasis says in words what the termolecular bound is, for
-// messages.
-const TermolecularBasis = "a sanity bound: at 1 bar, k·[M] would outrun the collision rate of the two partners"
+// every message about it; pair names the colliding pair ("A + B"), or is
+// empty when the names are not at hand.
+func TermolecularBasis(pair string) string {
+	if pair == "" {
+		pair = "two partners'"
+	}
+	return "termolecular sanity bound: at 1 bar, k·[M] would outrun the " + pair + " collision rate"
+}
 
 // TermolecularPressure (Pa) is the bath pressure of the termolecular bound
 // (see CollisionLimit): 1 bar, the standard-state pressure, low enough that

@@ -168,7 +168,7 @@ func TestTermolecularBound(t *testing.T) {
 	assert.Equal(t, [2]int{0, 1}, v.Pair)
 	assert.Equal(t, 3, v.Order)
 	assert.Contains(t, v.Message(), "exceeds the termolecular collision limit 2.68e19 cm⁶/(mol²·s)")
-	assert.Contains(t, v.Message(), "at 1 bar, k·[M] would outrun the collision rate")
+	assert.Contains(t, v.Message(), "termolecular sanity bound: at 1 bar, k·[M] would outrun the two partners' collision rate")
 
 	// Sound three-body rates of small radicals (illustrative magnitudes of
 	// the usual size, from memory): H + O2 + M 2.8e18 T^-0.86 (1.9e16 at
