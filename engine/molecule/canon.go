@@ -141,8 +141,9 @@ func grow[T any](s []T, n int) []T {
 }
 
 // release returns g to the pool; neither g nor any slice of it (nbr, bt,
-// cell0) may be used afterwards. Partitions returned by refine and
-// traces returned by trace are the caller's and stay valid.
+// cell0) may be used afterwards. Partitions returned by refine are the
+// caller's and stay valid; traces returned by trace are cut from g's arena
+// and must not be used after release (copy one that has to outlive g).
 func (g *cgraph) release() {
 	g.nbr, g.bt, g.cell0 = nil, nil, nil
 	cgraphs.Put(g)
