@@ -52,9 +52,10 @@ func encode(v any) ([]byte, error) {
 const sentinel = -1.2345678901234567e+307
 
 // withSentinels returns a deep copy of v with every float that is not
-// finite replaced by sentinel. Unexported struct fields are left zero:
-// encoding/json does not write them, except the promoted fields of an
-// embedded unexported struct, which kiln's JSON types do not use.
+// finite replaced by sentinel. Values that encode themselves are copied
+// too (kiln's numericKeys holds floats), so a struct is copied whole before
+// its exported fields are replaced: what a MarshalJSON method reads from
+// unexported state is kept.
 func withSentinels(v reflect.Value) reflect.Value {
 	if !v.IsValid() {
 		return v
@@ -85,6 +86,7 @@ func withSentinels(v reflect.Value) reflect.Value {
 		return out
 	case reflect.Struct:
 		out := reflect.New(t).Elem()
+		out.Set(v)
 		for i := 0; i < t.NumField(); i++ {
 			if t.Field(i).IsExported() {
 				out.Field(i).Set(withSentinels(v.Field(i)))
