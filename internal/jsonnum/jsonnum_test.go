@@ -1,6 +1,7 @@
 package jsonnum
 
 import (
+	"encoding/json"
 	"math"
 	"testing"
 
@@ -65,4 +66,25 @@ func TestMarshalNonFinite(t *testing.T) {
 	// The value itself is not modified.
 	assert.True(t, math.IsInf(v.A, 1))
 	assert.True(t, math.IsNaN(v.C.M["x"]))
+}
+
+// labelled encodes itself from an unexported field.
+type labelled struct {
+	label string
+	V     float64
+}
+
+func (l labelled) MarshalJSON() ([]byte, error) {
+	return json.Marshal(map[string]any{"label": l.label, "v": l.V})
+}
+
+// TestMarshalKeepsUnexported: with a non-finite float somewhere in the
+// value, a type that encodes itself from unexported state still sees it.
+func TestMarshalKeepsUnexported(t *testing.T) {
+	b, err := Marshal(struct {
+		A labelled
+		B float64
+	}{labelled{"kept", 1}, math.Inf(1)})
+	require.NoError(t, err)
+	assert.JSONEq(t, `{"A": {"label": "kept", "v": 1}, "B": null}`, string(b))
 }
