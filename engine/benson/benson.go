@@ -500,10 +500,16 @@ func components(m *molecule.Molecule) int {
 //
 // Such species need a thermo block (or are in the reference library, which
 // is consulted before this package).
-// groupElements are the elements the group tables know: centres or
-// ligands of tabulated groups, and I as a ligand a user can give values
+// groupElement reports whether the group tables know element el: centres
+// or ligands of tabulated groups, and I as a ligand a user can give values
 // for (`group C-(I)(H)3`).
-var groupElements = map[string]bool{"C": true, "H": true, "O": true, "N": true, "S": true, "F": true, "Cl": true, "Br": true, "I": true}
+func groupElement(el string) bool {
+	switch el {
+	case "C", "H", "O", "N", "S", "F", "Cl", "Br", "I":
+		return true
+	}
+	return false
+}
 
 // elementScope refuses a structure with an element no group can hold
 // (Si, P, metals, noble gases not in the reference library …), naming the
@@ -513,7 +519,7 @@ var groupElements = map[string]bool{"C": true, "H": true, "O": true, "N": true, 
 func elementScope(m *molecule.Molecule) error {
 	best := -1
 	for i, a := range m.Atoms {
-		if !groupElements[a.Element] && (best < 0 || a.Element < m.Atoms[best].Element) {
+		if !groupElement(a.Element) && (best < 0 || a.Element < m.Atoms[best].Element) {
 			best = i
 		}
 	}
@@ -524,10 +530,19 @@ func elementScope(m *molecule.Molecule) error {
 	return &UnsupportedError{Atom: best + 1, Element: el, Reason: fmt.Sprintf("(%s): unsupported element %s (kiln's group tables cover C, H, O, N, S, F, Cl and Br; I only with `group` values you supply)", el, el)}
 }
 
-// ordinaryValence is the valence of a neutral atom whose extended valences
-// (allowed by SMILES: N 5, Cl 3, 5, 7 …) no group describes, with the one
-// exception valenceScope allows.
-var ordinaryValence = map[string]int{"N": 3, "F": 1, "Cl": 1, "Br": 1, "I": 1}
+// ordinaryValence returns the valence of a neutral atom of element el
+// whose extended valences (allowed by SMILES: N 5, Cl 3, 5, 7 …) no group
+// describes, with the one exception valenceScope allows; ok is false for
+// other elements.
+func ordinaryValence(el string) (valence int, ok bool) {
+	switch el {
+	case "N":
+		return 3, true
+	case "F", "Cl", "Br", "I":
+		return 1, true
+	}
+	return 0, false
+}
 
 // valenceScope refuses a neutral atom written with more bonds than its
 // ordinary valence (N#N=O: five bonds on the middle N), naming the atom and
@@ -537,7 +552,7 @@ var ordinaryValence = map[string]int{"N": 3, "F": 1, "Cl": 1, "Br": 1, "I": 1}
 // It runs on the structure as written.
 func valenceScope(m *molecule.Molecule) error {
 	for i, a := range m.Atoms {
-		max, ok := ordinaryValence[a.Element]
+		max, ok := ordinaryValence(a.Element)
 		if !ok || a.Charge != 0 {
 			continue
 		}

@@ -45,20 +45,36 @@ import (
 // entropyFloorGroup names the flag of an estimate below the lower bound.
 const entropyFloorGroup = "S°298 below the physical lower bound"
 
-// covalentRadius holds single, double and triple bond radii in Å (0: none).
-var covalentRadius = map[string][3]float64{
-	"H":  {0.32, 0, 0},
-	"B":  {0.85, 0.78, 0.73},
-	"C":  {0.75, 0.67, 0.60},
-	"N":  {0.71, 0.60, 0.54},
-	"O":  {0.63, 0.57, 0.53},
-	"F":  {0.64, 0.59, 0.53},
-	"Si": {1.16, 1.07, 1.02},
-	"P":  {1.11, 1.02, 0.94},
-	"S":  {1.03, 0.94, 0.95},
-	"Cl": {0.99, 0.95, 0.93},
-	"Br": {1.14, 1.09, 1.10},
-	"I":  {1.33, 1.29, 1.25},
+// covalentRadius returns the single, double and triple bond radii of el
+// in Å (0: none); ok is false for an element without radii here.
+func covalentRadius(el string) (r [3]float64, ok bool) {
+	switch el {
+	case "H":
+		return [3]float64{0.32, 0, 0}, true
+	case "B":
+		return [3]float64{0.85, 0.78, 0.73}, true
+	case "C":
+		return [3]float64{0.75, 0.67, 0.60}, true
+	case "N":
+		return [3]float64{0.71, 0.60, 0.54}, true
+	case "O":
+		return [3]float64{0.63, 0.57, 0.53}, true
+	case "F":
+		return [3]float64{0.64, 0.59, 0.53}, true
+	case "Si":
+		return [3]float64{1.16, 1.07, 1.02}, true
+	case "P":
+		return [3]float64{1.11, 1.02, 0.94}, true
+	case "S":
+		return [3]float64{1.03, 0.94, 0.95}, true
+	case "Cl":
+		return [3]float64{0.99, 0.95, 0.93}, true
+	case "Br":
+		return [3]float64{1.14, 1.09, 1.10}, true
+	case "I":
+		return [3]float64{1.33, 1.29, 1.25}, true
+	}
+	return r, false
 }
 
 // minRadius is the smallest radius of covalentRadius, used for elements
@@ -66,7 +82,7 @@ var covalentRadius = map[string][3]float64{
 const minRadius = 0.32
 
 func radius(el string, order int) float64 {
-	r, ok := covalentRadius[el]
+	r, ok := covalentRadius(el)
 	if !ok {
 		return minRadius
 	}
