@@ -301,12 +301,13 @@ func TestAzineAlphaSubstituents(t *testing.T) {
 	}
 }
 
-// TestPolyhalogenWidening: widenPolyhalogen² is the mean of d²/k over the
-// training rows of nsx.tsv whose estimate carries k polyhalogenated-carbon
-// flags and no other ΔHf° approximation (d: ΔHf° error).
-func TestPolyhalogenWidening(t *testing.T) {
+// flaggedWidening returns the RMS over the training rows of nsx.tsv whose
+// estimate carries k ≥ 1 flags with an Approximation ending in suffix and no
+// other ΔHf° approximation of d²/k (d: ΔHf° error; k flags widen u² by
+// k·w², so each row estimates w² as d²/k), and the number of such rows.
+func flaggedWidening(t *testing.T, suffix string) (rms float64, n int) {
+	t.Helper()
 	var sum float64
-	n := 0
 	for _, r := range readHeteroRef(t) {
 		// Rows marked uncertain (±2 kcal/mol) are included: their reference
 		// error is small against the errors measured here.
@@ -325,7 +326,7 @@ func TestPolyhalogenWidening(t *testing.T) {
 		flags, other := 0, false
 		for _, x := range e.Missing {
 			switch {
-			case strings.HasSuffix(x.Approximation, withoutHalogenInteractions):
+			case strings.HasSuffix(x.Approximation, suffix):
 				flags++
 			case strings.HasPrefix(x.Group, "Cp(T)"): // a Cp note, ΔHf° untouched
 			default:
@@ -335,13 +336,23 @@ func TestPolyhalogenWidening(t *testing.T) {
 		if flags == 0 || other {
 			continue
 		}
-		// k flags widen u² by k·w²: each row estimates w² as d²/k.
 		d := e.Hf298/calorie/1000 - r.hf
+		t.Logf("%s: %+.2f kcal/mol, %d flag(s)", r.smiles, d, flags)
 		sum += d * d / float64(flags)
 		n++
 	}
+	if n == 0 {
+		return 0, 0
+	}
+	return math.Sqrt(sum / float64(n)), n
+}
+
+// TestPolyhalogenWidening: widenPolyhalogen² is the mean of d²/k over the
+// training rows of nsx.tsv whose estimate carries k polyhalogenated-carbon
+// flags and no other ΔHf° approximation (d: ΔHf° error).
+func TestPolyhalogenWidening(t *testing.T) {
+	rms, n := flaggedWidening(t, withoutHalogenInteractions)
 	require.GreaterOrEqual(t, n, 5)
-	rms := math.Sqrt(sum / float64(n))
 	t.Logf("polyhalogen-flagged training rows: %d, RMS ΔHf° error %.2f kcal/mol", n, rms)
 	assert.InDelta(t, rms, widenPolyhalogen, 0.3)
 }
@@ -361,41 +372,8 @@ func TestVinylChlorideWidening(t *testing.T) {
 		assert.Equal(t, correctionCountGroups(e, "Cd-(Cl)(H)"), n, "%s: %v", smi, e.Missing)
 		assert.GreaterOrEqual(t, e.Uncertainty/calorie/1000, widenVinylChloride, smi)
 	}
-	var sum float64
-	n := 0
-	for _, r := range readHeteroRef(t) {
-		if r.split != "train" || math.IsNaN(r.hf) {
-			continue
-		}
-		m, err := molecule.ParseSMILES(r.smiles)
-		require.NoError(t, err)
-		if _, lib := reflib.New().Lookup(m, 0); lib {
-			continue
-		}
-		e, err := Estimate(m, Options{})
-		if err != nil || len(e.Missing) == 0 {
-			continue
-		}
-		flags, other := 0, false
-		for _, x := range e.Missing {
-			switch {
-			case strings.HasSuffix(x.Approximation, olderChloroethyleneData):
-				flags++
-			case strings.HasPrefix(x.Group, "Cp(T)"):
-			default:
-				other = true
-			}
-		}
-		if flags == 0 || other {
-			continue
-		}
-		d := e.Hf298/calorie/1000 - r.hf
-		t.Logf("%s: %+.2f kcal/mol, %d flag(s)", r.smiles, d, flags)
-		sum += d * d / float64(flags)
-		n++
-	}
+	rms, n := flaggedWidening(t, olderChloroethyleneData)
 	require.GreaterOrEqual(t, n, 3)
-	rms := math.Sqrt(sum / float64(n))
 	t.Logf("vinyl-chloride-flagged training rows: %d, RMS ΔHf° error %.2f kcal/mol", n, rms)
 	assert.InDelta(t, rms, widenVinylChloride, 0.1)
 }
