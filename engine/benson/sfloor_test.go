@@ -17,37 +17,28 @@ func TestEntropyFloorBelowReference(t *testing.T) {
 	n := 0
 	margin, closest := math.Inf(1), ""
 	defer func() { t.Logf("%d rows; smallest margin S° − floor %.1f J/(mol K) (%s)", n, margin, closest) }()
+	check := func(name, smiles string, sRef float64) {
+		if math.IsNaN(sRef) {
+			return
+		}
+		m, err := molecule.ParseSMILES(smiles)
+		require.NoError(t, err, name)
+		sy := symmetryOf(t.Context(), m)
+		require.NoError(t, sy.err, name)
+		floor := entropyFloor(m, lnBig(sy.exact), m.UnpairedElectrons()+1)
+		assert.LessOrEqual(t, floor, sRef*calorie, "%s (%s): floor %.1f above the measured S° %.1f J/(mol K)", name, smiles, floor, sRef*calorie)
+		if d := sRef*calorie - floor; d < margin {
+			margin, closest = d, name
+		}
+		n++
+	}
 	for _, file := range []string{"train", "heldout"} {
 		for _, r := range readRef(t, "../../testdata/thermo/"+file+".tsv") {
-			if math.IsNaN(r.s) {
-				continue
-			}
-			m, err := molecule.ParseSMILES(r.smiles)
-			require.NoError(t, err, r.name)
-			sy := symmetryOf(t.Context(), m)
-			require.NoError(t, sy.err, r.name)
-			floor := entropyFloor(m, lnBig(sy.exact), m.UnpairedElectrons()+1)
-			assert.LessOrEqual(t, floor, r.s*calorie, "%s (%s): floor %.1f above the measured S° %.1f J/(mol K)", r.name, r.smiles, floor, r.s*calorie)
-			if d := r.s*calorie - floor; d < margin {
-				margin, closest = d, r.name
-			}
-			n++
+			check(r.name, r.smiles, r.s)
 		}
 	}
 	for _, r := range readRadicals(t) {
-		if math.IsNaN(r.s) {
-			continue
-		}
-		m, err := molecule.ParseSMILES(r.smiles)
-		require.NoError(t, err, r.name)
-		sy := symmetryOf(t.Context(), m)
-		require.NoError(t, sy.err, r.name)
-		floor := entropyFloor(m, lnBig(sy.exact), m.UnpairedElectrons()+1)
-		assert.LessOrEqual(t, floor, r.s*calorie, "%s (%s): floor %.1f above the measured S° %.1f J/(mol K)", r.name, r.smiles, floor, r.s*calorie)
-		if d := r.s*calorie - floor; d < margin {
-			margin, closest = d, r.name
-		}
-		n++
+		check(r.name, r.smiles, r.s)
 	}
 	assert.GreaterOrEqual(t, n, 55, "reference rows with S°")
 }
