@@ -252,15 +252,7 @@ func BenchmarkCommentTyping20k(b *testing.B) {
 // server inherits the environment, so GOGC or GOMEMLIMIT set for the
 // benchmark apply to it.
 func BenchmarkServerRSS20k(b *testing.B) {
-	if runtime.GOOS != "linux" {
-		b.Skip("reads /proc")
-	}
-	bin := buildKiln(b)
-	dir := b.TempDir()
-	file := filepath.Join(dir, "big.kiln")
-	if err := os.WriteFile(file, []byte(benchText()), 0o644); err != nil {
-		b.Fatal(err)
-	}
+	bin, dir, file := serverBenchSetup(b)
 	for _, c := range []struct{ name, limit string }{{"default", ""}, {"limit600MiB", "600MiB"}} {
 		b.Run(c.name, func(b *testing.B) {
 			for b.Loop() {
@@ -272,6 +264,23 @@ func BenchmarkServerRSS20k(b *testing.B) {
 			}
 		})
 	}
+}
+
+// serverBenchSetup skips off Linux (the server benchmarks read /proc) and
+// returns the kiln binary (buildKiln) and the 20,000-species benchmark file
+// written into a temporary directory.
+func serverBenchSetup(b *testing.B) (bin, dir, file string) {
+	b.Helper()
+	if runtime.GOOS != "linux" {
+		b.Skip("reads /proc")
+	}
+	bin = buildKiln(b)
+	dir = b.TempDir()
+	file = filepath.Join(dir, "big.kiln")
+	if err := os.WriteFile(file, []byte(benchText()), 0o644); err != nil {
+		b.Fatal(err)
+	}
+	return bin, dir, file
 }
 
 // buildKiln builds cmd/kiln into a temporary directory, or returns the
@@ -295,15 +304,7 @@ func buildKiln(b *testing.B) string {
 // per edit (no client work is counted) and the wall time per edit from the
 // change to the answer of a request that waits for its analysis.
 func BenchmarkServerCommentEdit20k(b *testing.B) {
-	if runtime.GOOS != "linux" {
-		b.Skip("reads /proc")
-	}
-	bin := buildKiln(b)
-	dir := b.TempDir()
-	file := filepath.Join(dir, "big.kiln")
-	if err := os.WriteFile(file, []byte(benchText()), 0o644); err != nil {
-		b.Fatal(err)
-	}
+	bin, dir, file := serverBenchSetup(b)
 	for b.Loop() {
 		serveAndEdit(b, bin, []string{"serve"}, dir, file, 50, func(text []byte, k int) (int, int, string) {
 			at := bytes.Index(text, []byte("\nreaction M5000 + ")) + 1
