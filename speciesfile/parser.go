@@ -1836,10 +1836,6 @@ func (p *parser) nextStatement(extentStart int) (st Stmt, next int, ok bool) {
 // rateParamLike reports whether word starts like a forward rate parameter
 // (A=…, n=…, Ea=…), which is written on the reaction line itself.
 func rateParamLike(word string) bool {
-	for _, k := range []string{"A=", "n=", "Ea="} {
-		if strings.HasPrefix(word, k) {
-			return true
-		}
-	}
-	return false
+	key, _, ok := strings.Cut(word, "=")
+	return ok && isRateKey(key)
 }
