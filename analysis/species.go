@@ -513,7 +513,7 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 			// comparison with the block, which is worth knowing, not a
 			// warning.
 			sev, used := speciesfile.SeverityWarning, ""
-			if a.hasUsableBlock(path, d) && !sp.givenIsEstimate() {
+			if sp.Given != nil && !sp.givenIsEstimate() { // given has read the usable block
 				sev, used = speciesfile.SeverityInformation, " (the file's thermo block is used; the estimate serves only the comparison with it)"
 			}
 			a.report(path, speciesfile.Diagnostic{Span: a.at(d.SMILES.Span), Severity: sev, Code: speciesfile.CodeMissingGroup,
