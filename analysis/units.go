@@ -75,35 +75,43 @@ func (u Units) EntropyValue(v float64) float64 {
 	return v / JoulesPerCalorie
 }
 
-// Energy writes an energy (J/mol) for people: "-56.21 kcal/mol" or
-// "-235.2 kJ/mol" (about 10 J/mol resolution in both).
-func (u Units) Energy(j float64) string {
+// Other is the other pair of display units (kJ/mol for kcal/mol and back):
+// totals are shown in both, the display unit first.
+func (u Units) Other() Units { return Units{KJ: !u.KJ} }
+
+// EnergyNumber writes an energy (J/mol) in the display unit without its
+// name, with the unit's decimals: "-56.21" (kcal/mol, 0.01 kcal/mol = 42
+// J/mol) or "-235.2" (kJ/mol, 100 J/mol). Every text that shows an energy
+// to people (messages, hovers, inlay hints, text tables) takes its digits
+// from here; tables name the unit once in their header.
+func (u Units) EnergyNumber(j float64) string {
 	if u.KJ {
-		return FormatFixed(u.EnergyValue(j), 1) + " kJ/mol"
+		return FormatFixed(u.EnergyValue(j), 1)
 	}
-	return FormatFixed(u.EnergyValue(j), 2) + " kcal/mol"
+	return FormatFixed(u.EnergyValue(j), 2)
 }
 
-// Entropy writes an entropy or heat capacity (J/(mol K)) for people:
-// "67.54 cal/(mol·K)" or "282.6 J/(mol·K)".
-func (u Units) Entropy(v float64) string {
+// EntropyNumber writes an entropy or heat capacity (J/(mol K)) in the
+// display unit without its name: "67.54" (cal/(mol·K)) or "282.6"
+// (J/(mol·K)); see EnergyNumber.
+func (u Units) EntropyNumber(v float64) string {
 	if u.KJ {
-		return FormatFixed(v, 1) + " J/(mol·K)"
+		return FormatFixed(u.EntropyValue(v), 1)
 	}
-	return FormatFixed(u.EntropyValue(v), 2) + " cal/(mol·K)"
+	return FormatFixed(u.EntropyValue(v), 2)
 }
 
-// FormatEnergy writes v (J/mol) in the named display unit ("kcal/mol" or
-// "kJ/mol"); see Units.Energy.
-func FormatEnergy(v float64, units string) string {
-	return Units{KJ: units == "kJ/mol"}.Energy(v)
-}
+// Energy writes an energy (J/mol) for people with its unit: "-56.21
+// kcal/mol" or "-235.2 kJ/mol" (digits: EnergyNumber).
+func (u Units) Energy(j float64) string { return u.EnergyNumber(j) + " " + u.EnergyName() }
 
-// FormatEntropy writes v (J/(mol K)) in the entropy unit that goes with the
-// named energy unit; see Units.Entropy.
-func FormatEntropy(v float64, units string) string {
-	return Units{KJ: units == "kJ/mol"}.Entropy(v)
-}
+// Entropy writes an entropy or heat capacity (J/(mol K)) for people with
+// its unit: "67.54 cal/(mol·K)" or "282.6 J/(mol·K)" (digits:
+// EntropyNumber).
+func (u Units) Entropy(v float64) string { return u.EntropyNumber(v) + " " + u.EntropyName() }
+
+// FormatMolarMass writes a molar mass (g/mol) for people: "46.069 g/mol".
+func FormatMolarMass(m float64) string { return FormatFixed(m, 3) + " g/mol" }
 
 // Number formatting for people: the one home of how kiln writes a value
 // with a fixed number of decimals in messages, hovers and text tables.
@@ -122,6 +130,16 @@ func FormatFixed(v float64, prec int) string { return formatFixed(v, prec, false
 
 // FormatSigned is FormatFixed with "+" before positive values ("+3.25").
 func FormatSigned(v float64, prec int) string { return formatFixed(v, prec, true) }
+
+// FormatSig writes a rate constant or an equilibrium constant, values that
+// span hundreds of decades, with three significant digits ("1.8e+13",
+// "0.00123", "4.5e-07"), and as "—" when v is not a finite number.
+func FormatSig(v float64) string {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return "—"
+	}
+	return strconv.FormatFloat(v, 'g', 3, 64)
+}
 
 func formatFixed(v float64, prec int, sign bool) string {
 	if math.IsNaN(v) || math.IsInf(v, 0) {

@@ -13,14 +13,15 @@ type Hint struct {
 
 // InlayHints returns the hints for the statements of file that start in
 // [start, end): at the end of each species line
-// "ΔHf°298 −56.2 kcal/mol · S° 67.5 cal/(mol·K) (estimated|library|given)" and at the
-// end of each reaction line "ΔH°r −12.3 kcal/mol", in the display units.
+// "ΔHf°298 -56.21 kcal/mol · S° 67.54 cal/(mol·K) (estimated|library|given)" and at the
+// end of each reaction line "ΔH°r -12.30 kcal/mol", in the display units
+// (analysis.Units: the digits of check, estimate and summary).
 func InlayHints(x *Index, file string, start, end int, s analysis.Settings) []Hint {
 	f := x.File(file)
 	if f == nil {
 		return nil
 	}
-	u := displayUnits(s, f)
+	u := analysis.UnitsFor(s, f)
 	var out []Hint
 	for _, o := range x.OccurrencesIn(file, start, end) {
 		if o.Span.Start < start || o.Span.Start >= end {
@@ -37,13 +38,13 @@ func InlayHints(x *Index, file string, start, end int, s analysis.Settings) []Hi
 				continue
 			}
 			out = append(out, Hint{Offset: lineEnd(f, o.SpeciesDecl.Name.Span.At(o.Base).Start),
-				Label: "ΔHf°298 " + u.energy(v.hf) + " · S° " + u.entropy(v.s) + " (" + word + ")"})
+				Label: "ΔHf°298 " + u.Energy(v.hf) + " · S° " + u.Entropy(v.s) + " (" + word + ")"})
 		case KindReactionStmt:
 			r := o.Reaction
 			if r == nil || r.DH298 == nil {
 				continue
 			}
-			out = append(out, Hint{Offset: lineEnd(f, o.ReactionDec.Keyword().Span.At(o.Base).Start), Label: "ΔH°r " + u.energy(*r.DH298)})
+			out = append(out, Hint{Offset: lineEnd(f, o.ReactionDec.Keyword().Span.At(o.Base).Start), Label: "ΔH°r " + u.Energy(*r.DH298)})
 		}
 	}
 	return out

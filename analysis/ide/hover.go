@@ -34,7 +34,7 @@ func Hover(x *Index, file string, off int, s analysis.Settings, markdown bool) (
 	if !ok {
 		return HoverResult{}, false
 	}
-	w := &writer{md: markdown, u: displayUnits(s, x.File(file))}
+	w := &writer{md: markdown, u: analysis.UnitsFor(s, x.File(file))}
 	switch o.Kind {
 	case KindSpeciesStmt, KindSpeciesDecl, KindSpeciesUse:
 		if o.Species == nil {
@@ -75,7 +75,7 @@ func Hover(x *Index, file string, off int, s analysis.Settings, markdown bool) (
 type writer struct {
 	b  strings.Builder
 	md bool
-	u  units
+	u  analysis.Units
 }
 
 func (w *writer) line(s string) { w.b.WriteString(s); w.b.WriteString("\n\n") }
@@ -219,7 +219,7 @@ func (w *writer) species(sp *analysis.Species) {
 		facts = append(facts, sp.Formula)
 	}
 	if sp.MolarMass > 0 {
-		facts = append(facts, num(sp.MolarMass, 2)+" g/mol")
+		facts = append(facts, analysis.FormatMolarMass(sp.MolarMass))
 	}
 	if sp.Charge != 0 {
 		facts = append(facts, fmt.Sprintf("charge %+d", sp.Charge))
@@ -238,8 +238,6 @@ func (w *writer) species(sp *analysis.Species) {
 		w.line("No thermochemistry: no thermo block in the file and no estimate for this structure.")
 		return
 	}
-	kj := units{kcal: false}
-	kc := units{kcal: true}
 	cols := []string{""}
 	var srcs []*thermoValues
 	if giv != nil {
@@ -265,16 +263,16 @@ func (w *writer) species(sp *analysis.Species) {
 	}
 	var rows [][]string
 	rows = append(rows, row("ΔHf°298",
-		func(v *thermoValues) string { return kc.energy(v.hf) + " (" + kj.energy(v.hf) + ")" },
-		func(a, b *thermoValues) string { return w.u.energy(a.hf - b.hf) }))
+		func(v *thermoValues) string { return w.u.Energy(v.hf) + " (" + w.u.Other().Energy(v.hf) + ")" },
+		func(a, b *thermoValues) string { return w.u.Energy(a.hf - b.hf) }))
 	rows = append(rows, row("S°298",
-		func(v *thermoValues) string { return w.u.entropy(v.s) },
-		func(a, b *thermoValues) string { return w.u.entropy(a.s - b.s) }))
+		func(v *thermoValues) string { return w.u.Entropy(v.s) },
+		func(a, b *thermoValues) string { return w.u.Entropy(a.s - b.s) }))
 	for i, T := range benson.StdTemps {
 		i := i
 		rows = append(rows, row(fmt.Sprintf("Cp %g K", T),
-			func(v *thermoValues) string { return w.u.entropy(v.cp[i]) },
-			func(a, b *thermoValues) string { return w.u.entropy(a.cp[i] - b.cp[i]) }))
+			func(v *thermoValues) string { return w.u.Entropy(v.cp[i]) },
+			func(a, b *thermoValues) string { return w.u.Entropy(a.cp[i] - b.cp[i]) }))
 	}
 	w.table(cols, rows)
 
@@ -288,7 +286,7 @@ func (w *writer) species(sp *analysis.Species) {
 			vs[i] = p.Cp(T)
 			lo, hi = math.Min(lo, vs[i]), math.Max(hi, vs[i])
 		}
-		w.line(fmt.Sprintf("Cp(T) %s K–%s K (%s polynomial): %s  %s … %s", num(300, 0), num(p.THigh, 0), word, sparkline(vs), w.u.entropy(lo), w.u.entropy(hi)))
+		w.line(fmt.Sprintf("Cp(T) %s K–%s K (%s polynomial): %s  %s … %s", analysis.FormatFixed(300, 0), analysis.FormatFixed(p.THigh, 0), word, sparkline(vs), w.u.Entropy(lo), w.u.Entropy(hi)))
 	}
 	if e := sp.Estimate; e != nil {
 		w.estimateDetail(e)
@@ -305,7 +303,7 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		terms := func(ts []benson.Term) [][]string {
 			var rows [][]string
 			for _, t := range ts {
-				rows = append(rows, []string{t.Name, fmt.Sprint(t.Count), w.u.energy(t.Hf298), w.u.entropy(t.S298), t.Source})
+				rows = append(rows, []string{t.Name, fmt.Sprint(t.Count), w.u.Energy(t.Hf298), w.u.Entropy(t.S298), t.Source})
 			}
 			return rows
 		}
@@ -331,19 +329,19 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		}
 	}
 	if e.Uncertainty > 0 {
-		unc := "Uncertainty ±" + w.u.energy(e.Uncertainty)
+		unc := "Uncertainty ±" + w.u.Energy(e.Uncertainty)
 		if g != nil && g.Class != "" {
 			unc += " (class " + g.Class + ")"
 		}
 		w.line(unc)
 	}
 	if g != nil && g.UncertaintyS298 > 0 {
-		w.line("S°298 uncertainty at least ±" + w.u.entropy(g.UncertaintyS298) + " (approximations that change S°)")
+		w.line("S°298 uncertainty at least ±" + w.u.Entropy(g.UncertaintyS298) + " (approximations that change S°)")
 	}
 	if _, fit, err := e.NASA7(); err != nil {
-		w.line("NASA-7 fit failed: " + analysis.FitRefusal(err, analysis.Units{KJ: !w.u.kcal}))
+		w.line("NASA-7 fit failed: " + analysis.FitRefusal(err, w.u))
 	} else if fit.MaxCpResidual > 0 {
-		w.line("NASA-7 fit: worst Cp residual " + w.u.entropy(fit.MaxCpResidual))
+		w.line("NASA-7 fit: worst Cp residual " + w.u.Entropy(fit.MaxCpResidual))
 	}
 }
 
@@ -362,13 +360,13 @@ func (w *writer) reaction(x *Index, r *analysis.Reaction) {
 	}
 	var rows [][]string
 	if r.DH298 != nil {
-		rows = append(rows, []string{"ΔH°r(298 K)", w.u.energy(*r.DH298)})
+		rows = append(rows, []string{"ΔH°r(298 K)", w.u.Energy(*r.DH298)})
 	}
 	if r.DS298 != nil {
-		rows = append(rows, []string{"ΔS°r(298 K)", w.u.entropy(*r.DS298)})
+		rows = append(rows, []string{"ΔS°r(298 K)", w.u.Entropy(*r.DS298)})
 	}
 	if r.DG298 != nil {
-		rows = append(rows, []string{"ΔG°r(298 K)", w.u.energy(*r.DG298)})
+		rows = append(rows, []string{"ΔG°r(298 K)", w.u.Energy(*r.DG298)})
 	}
 	keys := make([]string, 0, len(r.Kp))
 	for k := range r.Kp {
@@ -383,7 +381,7 @@ func (w *writer) reaction(x *Index, r *analysis.Reaction) {
 	for _, k := range keys {
 		v := "—"
 		if p := r.Kp[k]; p != nil {
-			v = sci(*p)
+			v = analysis.FormatSig(*p)
 		}
 		rows = append(rows, []string{"Kp(" + k + " K)", v})
 	}
@@ -396,10 +394,10 @@ func (w *writer) reaction(x *Index, r *analysis.Reaction) {
 		at = " at " + strconv.FormatFloat(p/1e5, 'g', 4, 64) + " bar"
 	}
 	if r.ForwardRate1000 != nil {
-		rows = append(rows, []string{"k_f(1000 K)", sci(*r.ForwardRate1000) + " " + analysis.RateUnits(r.ForwardOrder) + at})
+		rows = append(rows, []string{"k_f(1000 K)", analysis.FormatSig(*r.ForwardRate1000) + " " + analysis.RateUnits(r.ForwardOrder) + at})
 	}
 	if r.ReverseRate1000 != nil {
-		rows = append(rows, []string{"k_r(1000 K)", sci(*r.ReverseRate1000) + " " + analysis.RateUnits(r.ReverseOrder) + at})
+		rows = append(rows, []string{"k_r(1000 K)", analysis.FormatSig(*r.ReverseRate1000) + " " + analysis.RateUnits(r.ReverseOrder) + at})
 	}
 	if u, ok := x.Result().ReverseRateUncertainty(r, 1000); ok {
 		rows = append(rows, []string{"k_r uncertainty (1000 K)", reverseFactorText(u, w.u)})
@@ -431,13 +429,13 @@ func (w *writer) group(o Occurrence) {
 	}
 	var rows [][]string
 	if d.Hf298 != nil {
-		rows = append(rows, []string{"ΔHf°298", w.u.energy(d.Hf298.SI)})
+		rows = append(rows, []string{"ΔHf°298", w.u.Energy(d.Hf298.SI)})
 	}
 	if d.S298 != nil {
-		rows = append(rows, []string{"S°298", w.u.entropy(d.S298.SI)})
+		rows = append(rows, []string{"S°298", w.u.Entropy(d.S298.SI)})
 	}
 	for _, p := range d.Cp {
-		rows = append(rows, []string{"Cp " + num(p.T.SI, 0) + " K", w.u.entropy(p.Cp.SI)})
+		rows = append(rows, []string{"Cp " + analysis.FormatFixed(p.T.SI, 0) + " K", w.u.Entropy(p.Cp.SI)})
 	}
 	if len(rows) > 0 {
 		w.table([]string{"quantity", "value"}, rows)
@@ -458,7 +456,7 @@ func (w *writer) group(o Occurrence) {
 // reverseFactorText describes the factor a reverse rate inherits from
 // estimated thermochemistry, e.g. "×/÷ 1.50 (σ(ΔG°r) = 0.81 kcal/mol from the
 // estimates of propane, propyl)".
-func reverseFactorText(u analysis.ReverseUncertainty, un units) string {
+func reverseFactorText(u analysis.ReverseUncertainty, un analysis.Units) string {
 	given := ""
 	if len(u.Given) > 0 {
 		given = strings.Join(u.Given, ", ") + " from the file's own thermo blocks, which state no uncertainty"
@@ -473,7 +471,7 @@ func reverseFactorText(u analysis.ReverseUncertainty, un units) string {
 	if len(u.Unmeasured) > 0 || len(u.Given) > 0 {
 		ge = "≥ "
 	}
-	s := fmt.Sprintf("%s×/÷ %.2f (σ(ΔG°r) = %s from the estimates of %s", ge, u.Factor, un.energy(u.Sigma), strings.Join(u.Estimated, ", "))
+	s := fmt.Sprintf("%s×/÷ %.2f (σ(ΔG°r) = %s from the estimates of %s", ge, u.Factor, un.Energy(u.Sigma), strings.Join(u.Estimated, ", "))
 	if len(u.Unmeasured) > 0 {
 		s += "; no measured error for " + strings.Join(u.Unmeasured, ", ")
 	}
@@ -481,4 +479,24 @@ func reverseFactorText(u analysis.ReverseUncertainty, un units) string {
 		s += "; " + given
 	}
 	return s + ")"
+}
+
+// sparkline draws values as one line of the eight block characters ▁…█,
+// scaled from the smallest to the largest value (all the same → "▄…").
+func sparkline(vs []float64) string {
+	const bars = "▁▂▃▄▅▆▇█"
+	runes := []rune(bars)
+	lo, hi := math.Inf(1), math.Inf(-1)
+	for _, v := range vs {
+		lo, hi = math.Min(lo, v), math.Max(hi, v)
+	}
+	var b strings.Builder
+	for _, v := range vs {
+		i := 3
+		if hi > lo {
+			i = int(math.Round((v - lo) / (hi - lo) * 7))
+		}
+		b.WriteRune(runes[max(0, min(7, i))])
+	}
+	return b.String()
 }

@@ -403,10 +403,9 @@ func (t *table) Flush() {
 }
 
 func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all bool) {
-	eu, su, ef, sf := "kcal/mol", "cal/(mol·K)", 4.184, 4.184
-	if set.DisplayUnits == "kJ/mol" {
-		eu, su, ef, sf = "kJ/mol", "J/(mol·K)", 1, 1
-	}
+	// The two files may state different units: the setting, else kcal/mol.
+	u := analysis.UnitsFor(set, nil)
+	eu, su := u.EnergyName(), u.EntropyName()
 	limit := func(n int) int {
 		if all {
 			return n
@@ -475,7 +474,7 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 	}
 	if len(differ) > 0 {
 		fmt.Fprintf(w, "\nThermo differences B − A in %s and %s; * beyond the thresholds (%.2f %s, %.2f %s)\n",
-			eu, su, o.Thresholds.Hf298/ef, eu, o.Thresholds.S298/sf, su)
+			eu, su, u.EnergyValue(o.Thresholds.Hf298*1000), eu, u.EntropyValue(o.Thresholds.S298), su)
 		tw := newTable(w, 1, tabwriter.AlignRight)
 		fmt.Fprintf(tw, "species\tΔHf°298\tS°298\tCp300\tCp1000\tCp2000\tG300\tG1000\tG2000\t\n")
 		for _, p := range differ[:limit(len(differ))] {
@@ -484,8 +483,8 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 			for _, f := range p.Flags {
 				flagged[f] = true
 			}
-			cell := func(v, scale float64, key string) string {
-				c := analysis.FormatSigned(v/scale, 2)
+			cell := func(v float64, key string) string {
+				c := analysis.FormatSigned(v, 2)
 				if flagged[key] {
 					c += "*"
 				} else {
@@ -494,9 +493,9 @@ func writeCompareText(w io.Writer, o compareJSON, set analysis.Settings, all boo
 				return c
 			}
 			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t\n", shorten(p.A, 18),
-				cell(t.Hf298.Diff*1000, ef*1000, "hf298"), cell(t.S298.Diff, sf, "s298"),
-				cell(t.Cp["300"].Diff, sf, "cp300"), cell(t.Cp["1000"].Diff, sf, "cp1000"), cell(t.Cp["2000"].Diff, sf, "cp2000"),
-				cell(t.G["300"].Diff*1000, ef*1000, "g300"), cell(t.G["1000"].Diff*1000, ef*1000, "g1000"), cell(t.G["2000"].Diff*1000, ef*1000, "g2000"))
+				cell(u.EnergyValue(t.Hf298.Diff*1000), "hf298"), cell(u.EntropyValue(t.S298.Diff), "s298"),
+				cell(u.EntropyValue(t.Cp["300"].Diff), "cp300"), cell(u.EntropyValue(t.Cp["1000"].Diff), "cp1000"), cell(u.EntropyValue(t.Cp["2000"].Diff), "cp2000"),
+				cell(u.EnergyValue(t.G["300"].Diff*1000), "g300"), cell(u.EnergyValue(t.G["1000"].Diff*1000), "g1000"), cell(u.EnergyValue(t.G["2000"].Diff*1000), "g2000"))
 		}
 		tw.Flush()
 		more(limit(len(differ)), len(differ))

@@ -236,16 +236,15 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		}
 		return
 	}
-	other := analysis.Units{KJ: !u.KJ}
-	f2 := func(v float64) string { return analysis.FormatFixed(v, 2) }
-	fmt.Fprintf(w, "  formula %s, molar mass %.3f g/mol\n", *r.Formula, *r.MolarMass)
+	other := u.Other()
+	fmt.Fprintf(w, "  formula %s, molar mass %s\n", *r.Formula, analysis.FormatMolarMass(*r.MolarMass))
 	if g := est.Group; g != nil {
 		var rows [][]string
 		for _, t := range g.Groups {
-			rows = append(rows, []string{t.Name, strconv.Itoa(t.Count), f2(u.EnergyValue(t.Hf298)), f2(u.EntropyValue(t.S298))})
+			rows = append(rows, []string{t.Name, strconv.Itoa(t.Count), u.EnergyNumber(t.Hf298), u.EntropyNumber(t.S298)})
 		}
 		for _, t := range g.Corrections {
-			rows = append(rows, []string{t.Name + " (correction)", strconv.Itoa(t.Count), f2(u.EnergyValue(t.Hf298)), f2(u.EntropyValue(t.S298))})
+			rows = append(rows, []string{t.Name + " (correction)", strconv.Itoa(t.Count), u.EnergyNumber(t.Hf298), u.EntropyNumber(t.S298)})
 		}
 		writeTable(w, "  ", []string{"group", "count", "ΔHf°298 " + u.EnergyName(), "S°298 " + u.EntropyName()}, rows)
 		fmt.Fprintf(w, "  symmetry number σ = %s, optical isomers n = %d, multiplicity %d\n", g.Sigma(), g.OpticalIsomers, g.Multiplicity)
@@ -288,7 +287,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	}
 	fmt.Fprintf(w, "  Cp in %s:", u.EntropyName())
 	for i, T := range benson.StdTemps {
-		fmt.Fprintf(w, " %gK %s", T, f2(u.EntropyValue(est.Cp[i])))
+		fmt.Fprintf(w, " %gK %s", T, u.EntropyNumber(est.Cp[i]))
 	}
 	fmt.Fprintln(w)
 	if p, fit, err := est.NASA7(); withNASA && err == nil {

@@ -8,6 +8,9 @@ import (
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
+
+	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/analysis/ide"
 )
 
 // readmeBlock returns the first fenced block of README.md after the line
@@ -58,4 +61,26 @@ func TestReadmeExamples(t *testing.T) {
 		}
 	}
 	assert.Equal(t, 3, checked, "the README shows the nasa7 block:\n%s", block)
+
+	// The hover it shows (kJ/mol setting, shortened where a line ends in
+	// "...") is what the server answers now.
+	src := readmeBlock(t, "The examples below use this file")
+	file = writeTemp(t, "ethanol.kiln", src) // the one fill wrote to has a block now
+	set := analysis.DefaultSettings()
+	set.DisplayUnits = "kJ/mol"
+	ws := analysis.NewWorkspace(filepath.Dir(file), os.ReadFile, set)
+	res, err := ws.Analyze(t.Context(), file)
+	require.NoError(t, err)
+	h, ok := ide.Hover(ide.NewIndex(res), file, strings.Index(src, "ethanol"), set, true)
+	require.True(t, ok)
+	shown := 0
+	for _, line := range strings.Split(readmeBlock(t, "Hover on `ethanol`"), "\n") {
+		if line == "" || line == "..." {
+			continue
+		}
+		line, _, _ = strings.Cut(line, "...")
+		assert.Contains(t, h.Text, line)
+		shown++
+	}
+	assert.Greater(t, shown, 10, "the README shows the hover")
 }

@@ -3,7 +3,6 @@ package main
 import (
 	"fmt"
 	"io"
-	"math"
 	"sort"
 	"strconv"
 	"strings"
@@ -199,10 +198,10 @@ func summaryReactionOf(res *analysis.Result, r *analysis.Reaction, P float64) su
 // sciText writes a value with 3 significant digits ("—" for none, and
 // for a value that is not a finite number, as FormatFixed does).
 func sciText(p *float64) string {
-	if p == nil || math.IsInf(*p, 0) || math.IsNaN(*p) {
+	if p == nil {
 		return "—"
 	}
-	return strconv.FormatFloat(*p, 'g', 3, 64)
+	return analysis.FormatSig(*p)
 }
 
 // writeSummaryText prints three tables (species; reaction thermochemistry;
@@ -210,16 +209,18 @@ func sciText(p *float64) string {
 // in the display units; long equations are shortened (--json has them
 // whole).
 func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
-	fixed := func(p *float64, conv func(float64) float64) string {
+	energy := func(kj *float64) string {
+		if kj == nil {
+			return "—"
+		}
+		return u.EnergyNumber(*kj * 1000)
+	}
+	entropy := func(p *float64) string {
 		if p == nil {
 			return "—"
 		}
-		return analysis.FormatFixed(conv(*p), 2)
+		return u.EntropyNumber(*p)
 	}
-	energy := func(kj *float64) string {
-		return fixed(kj, func(v float64) float64 { return u.EnergyValue(v * 1000) })
-	}
-	entropy := func(p *float64) string { return fixed(p, u.EntropyValue) }
 	fmt.Fprintf(w, "Species (%d); ΔHf°298 in %s, S°298 and Cp in %s\n", len(s.Species), u.EnergyName(), u.EntropyName())
 	var rows [][]string
 	for _, sp := range s.Species {
