@@ -316,8 +316,8 @@ func (e *Estimate) Flags() []benson.Missing {
 	return sortedMissing(e.Group)
 }
 
-// FlagHeading is the word every command puts before FlagText: "MISSING
-// group" for an approximation, "MODELLED" for a quantity computed by a
+// FlagHeading is the word every command and the hover put before
+// FlagText: "MISSING group" for an approximation, "MODELLED" for a quantity computed by a
 // validated model instead of a table (benson.Missing.Modelled), which check
 // does not warn about.
 func FlagHeading(m benson.Missing) string {
@@ -326,6 +326,11 @@ func FlagHeading(m benson.Missing) string {
 	}
 	return "MISSING group"
 }
+
+// FlagLine is a flag as a line of text: FlagHeading, a blank, FlagText
+// ("MISSING group C-(Cl)(C)(H)2 (approximated by …)"). A surface that
+// styles the parts (hover's Markdown) puts the same two together.
+func FlagLine(m benson.Missing) string { return FlagHeading(m) + " " + FlagText(m) }
 
 // FlagText words one approximation the same way in every command: the
 // group or quantity, what stands in for it and why.

@@ -321,11 +321,8 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		}
 		w.line(strings.Join(facts, " · "))
 		for _, m := range e.Flags() {
-			heading := "Missing group "
-			if m.Modelled() {
-				heading = "Modelled: "
-			}
-			w.line(heading + w.code(analysis.FlagText(m)))
+			// The words of estimate and summary (analysis.FlagLine), styled.
+			w.line(w.bold(analysis.FlagHeading(m)) + " " + w.code(analysis.FlagText(m)))
 		}
 	}
 	if e.Uncertainty > 0 {

@@ -252,7 +252,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 			fmt.Fprintf(w, "  estimated as the resonance structure %s (most stable of %d)\n", g.Form, g.ResonanceForms)
 		}
 		for _, ms := range est.Flags() {
-			fmt.Fprintf(w, "  %s %s\n", analysis.FlagHeading(ms), analysis.FlagText(ms))
+			fmt.Fprintf(w, "  %s\n", analysis.FlagLine(ms))
 		}
 		if withSources {
 			fmt.Fprintln(w, "  sources:")

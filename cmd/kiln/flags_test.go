@@ -64,11 +64,7 @@ func TestFlagsAgreeAcrossCommands(t *testing.T) {
 	_, text, _ := runKiln(t, "estimate", "C[CH2]", "C12C3C4C1C5C2C3C45")
 	for _, name := range []string{"ethyl", "cubane"} {
 		for _, f := range want[name] {
-			heading := "MISSING group "
-			if modelled(f) {
-				heading = "MODELLED "
-			}
-			assert.Contains(t, text, heading+f, name)
+			assert.Contains(t, text, headed(f), name)
 		}
 	}
 	assert.Contains(t, text, "MODELLED HBI dS, dCp: primary (computed by the statistical-mechanics site model")
@@ -113,7 +109,18 @@ func TestFlagsAgreeAcrossCommands(t *testing.T) {
 		assert.Equal(t, want[sp.Name], sp.Flags, sp.Name)
 	}
 
-	// hover on each declaration: every flag.
+	// summary text: every flag under the same heading, after the name
+	// (lines are wrapped: compare with the blanks collapsed).
+	_, text, _ = runKiln(t, "summary", path)
+	text = strings.Join(strings.Fields(text), " ")
+	for _, s := range species {
+		for _, f := range want[s[0]] {
+			assert.Contains(t, text, s[0]+": "+headed(f), s[0])
+		}
+	}
+
+	// hover on each declaration: every flag, under the same heading (plain
+	// text; Markdown styles the same words).
 	ws := analysis.NewWorkspace(filepath.Dir(path), os.ReadFile, analysis.DefaultSettings())
 	res, err := ws.Analyze(t.Context(), path)
 	require.NoError(t, err)
@@ -122,12 +129,27 @@ func TestFlagsAgreeAcrossCommands(t *testing.T) {
 		h, ok := ide.Hover(x, path, strings.Index(src.String(), "species "+s[0]+" ")+9, analysis.DefaultSettings(), false)
 		require.True(t, ok, s[0])
 		for _, f := range want[s[0]] {
-			assert.Contains(t, h.Text, f, s[0])
+			assert.Contains(t, h.Text, headed(f), s[0])
 		}
 		if len(want[s[0]]) == 0 {
-			assert.NotContains(t, h.Text, "Missing group", s[0])
+			assert.NotContains(t, h.Text, "MISSING group", s[0])
+		}
+		md, ok := ide.Hover(x, path, strings.Index(src.String(), "species "+s[0]+" ")+9, analysis.DefaultSettings(), true)
+		require.True(t, ok, s[0])
+		for _, f := range want[s[0]] {
+			heading, _, _ := strings.Cut(headed(f), " "+f)
+			assert.Contains(t, md.Text, "**"+heading+"** `"+f+"`", s[0])
 		}
 	}
+}
+
+// headed is a flag under the heading every surface gives it (FlagHeading):
+// MODELLED for a quantity a validated model computes, else MISSING group.
+func headed(flag string) string {
+	if modelled(flag) {
+		return "MODELLED " + flag
+	}
+	return "MISSING group " + flag
 }
 
 // modelled reports whether a flag, as FlagText words it, is a quantity a

@@ -8,6 +8,7 @@ import (
 	"strings"
 
 	"kiln.dev/kiln/analysis"
+	"kiln.dev/kiln/engine/benson"
 )
 
 // summaryJSON is the output of `kiln summary --json`; the keys are a public
@@ -32,8 +33,10 @@ type summarySpecies struct {
 	// Flags are the approximations of an estimated species, worded as
 	// check, estimate and hover word them (extension; absent when none or
 	// when the thermo comes from the file).
-	Flags    []string `json:"flags,omitempty"`
-	headings []string // FlagHeading of each flag, for the text output
+	Flags []string `json:"flags,omitempty"`
+	// flags are the approximations Flags words, for the text output
+	// (analysis.FlagLine: heading and words together).
+	flags []benson.Missing
 }
 
 type summaryReaction struct {
@@ -127,7 +130,7 @@ func buildSummary(results []*analysis.Result) summaryJSON {
 		// check reports them (its missing-group diagnostic).
 		for _, m := range sp.Estimate.Flags() {
 			row.Flags = append(row.Flags, analysis.FlagText(m))
-			row.headings = append(row.headings, analysis.FlagHeading(m))
+			row.flags = append(row.flags, m)
 		}
 		if sp.Decl.SMILES != nil {
 			row.SMILES = ptr(sp.Decl.SMILES.Text)
@@ -237,8 +240,8 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 	}
 	writeTable(w, "", []string{"name", "formula", "thermo", "ΔHf°298", "S°298", "Cp(300)", "Cp(1000)", "Cp(1500)"}, rows)
 	for _, sp := range s.Species {
-		for i, f := range sp.Flags {
-			writeWrapped(w, "  ", sp.Name+": "+sp.headings[i]+" "+f)
+		for _, m := range sp.flags {
+			writeWrapped(w, "  ", sp.Name+": "+analysis.FlagLine(m))
 		}
 	}
 
