@@ -1,21 +1,20 @@
 #!/usr/bin/python3
 """Differential test of `kiln estimate --json` against RDKit (Debian python3-rdkit).
 
-Run by hand, not by CI. See README.md in this directory.
-
-Modes:
-  random N   generate N random molecules, compare kiln to RDKit (formula, mass,
-             atom accounting, radicals, spelling invariance, sanity, timing)
-  fuzz N     mutate SMILES strings; compare acceptance by RDKit and kiln
-  order      same molecules in one call, in two orders, vs one call each
+Run by hand, not by CI. See README.md in this directory; --help lists the
+modes and options.
 """
-import json, math, random, subprocess, sys, time, re, collections
+import argparse, json, math, os, random, subprocess, sys, time, re, collections
 from concurrent.futures import ThreadPoolExecutor
 from rdkit import Chem, RDLogger
 from rdkit.Chem import Descriptors, rdMolDescriptors
 
 RDLogger.DisableLog('rdApp.*')
-KILN = '/tmp/kiln-tester'
+# The kiln binary: --kiln, else the KILN environment variable, else this.
+KILN = os.environ.get('KILN', '/tmp/kiln-tester')
+# The repository the in-process helper is built against (random mode's REPO
+# argument overrides it): the one this script is in.
+REPO = os.path.normpath(os.path.join(os.path.dirname(os.path.abspath(__file__)), '..', '..'))
 SLOW_MS = 100.0
 
 def run_kiln(smiles, extra=()):
@@ -261,7 +260,9 @@ def check_one(m, res):
         return probs
     hf, s, cp, u, sig = res['hf298_kj_mol'], res['s298_j_mol_k'], res['cp_j_mol_k'], res['uncertainty_hf298_kj_mol'], res['symmetry_number']
     lib = len(res['groups']) == 1 and res['groups'][0]['name'].startswith('reference:')
-    for name, v in (('hf', hf), ('s', s), ('u', u)):
+    # A reference-library species has no uncertainty of kiln's (null): the
+    # tabulated source's own applies.
+    for name, v in (('hf', hf), ('s', s)) + ((('u', u),) if not lib else ()):
         if v is None or not math.isfinite(v):
             probs.append(('nonfinite', '%s=%r' % (name, v)))
     if s is not None and s <= 0: probs.append(('S<=0', s))
@@ -278,8 +279,13 @@ def check_one(m, res):
     groups = res.get('groups') or []
     cen = collections.Counter()
     for g in groups:
-        for e in (['C', 'O'] if centre_elem(g['name']) == 'CO' else [centre_elem(g['name'])]):
+        # A carbonyl group CO-… and a ketene carbon Ck (C=C=O) each count
+        # their C and their O.
+        for e in (['C', 'O'] if centre_elem(g['name']) == 'CO' or g['name'].startswith('Ck') else [centre_elem(g['name'])]):
             cen[e] += g['count']
+    # Halogens are ligands in Benson groups (C-(Cl)(C)(H)2): no group is
+    # centred on them.
+    heavy = collections.Counter({k: v for k, v in heavy.items() if k not in ('F', 'Cl', 'Br', 'I')})
     lib = len(groups) == 1 and groups[0]['name'].startswith('reference:')
     if not lib and +cen != +heavy:
         probs.append(('atom-accounting', 'centres %s vs heavy %s' % (dict(cen), dict(heavy))))
@@ -292,7 +298,13 @@ def check_one(m, res):
         pass
     return probs
 
-def mode_random(n, seed=1, repo='/work/wt/tester'):
+def aromatic_atoms(smiles):
+    """Number of aromatic (lower-case) atoms in a SMILES: bare c, n, o, s and
+    bracket atoms whose element is lower case ([nH], [c]); Cl is not c."""
+    return sum(1 for t in re.findall(r'\[[^\]]*\]|Cl|Br|[A-Za-z]', smiles)
+               if (t[0] == '[' and len(t) > 1 and t[1] in 'cnos' and t[1:3] != 'cl') or t in ('c', 'n', 'o', 's'))
+
+def mode_random(n, seed=1, repo=REPO, aromatic=False):
     rng = random.Random(seed)
     mols, seen = [], set()
     while len(mols) < n:
@@ -373,6 +385,11 @@ def mode_random(n, seed=1, repo='/work/wt/tester'):
             cm = Chem.MolFromSmiles(c)
             if cm is None or Chem.MolToSmiles(cm) != x:
                 bad['kiln-canonical-is-other-molecule'].append((x, c, cm and Chem.MolToSmiles(cm)))
+            if aromatic:
+                # aromaticity: lower-case atoms of kiln's canonical form vs RDKit's aromatic atoms
+                ka, ra = aromatic_atoms(c), sum(1 for a in m.GetAtoms() if a.GetIsAromatic())
+                if ka != ra:
+                    bad['aromatic-atom-count'].append((x, c, ka, ra))
     return stats, bad, refusals, slow
 
 def mode_fuzz(n, seed=2):
@@ -605,16 +622,46 @@ def mode_resonance(n=3000, seed=5):
     return stats, bad
 
 
+def parse_args(argv):
+    p = argparse.ArgumentParser(
+        description='Differential test of `kiln estimate --json` against RDKit (run with /usr/bin/python3; '
+                    'see internal/difftest/README.md). Prints JSON (random, fuzz, resonance, order) or lines (sigma, exp).',
+        formatter_class=argparse.RawDescriptionHelpFormatter,
+        epilog='modes:\n'
+               '  random N [SEED [REPO]]  N random molecules: formula, mass, atom accounting, radicals, sanity,\n'
+               '                          order and spelling invariance, canonical SMILES, timing (builds an\n'
+               '                          in-process helper against REPO, default: this repository)\n'
+               '  fuzz N                  mutated SMILES: acceptance by RDKit vs kiln\n'
+               '  resonance [N]           radicals and their resonance forms give one answer (default 3000)\n'
+               '  order                   one call in two orders vs one call per molecule\n'
+               '  sigma                   textbook symmetry numbers over random spellings\n'
+               '  exp                     handbook values entered from memory (for spotting confident wrong numbers)\n')
+    p.add_argument('mode', choices=['random', 'fuzz', 'resonance', 'order', 'sigma', 'exp'])
+    p.add_argument('args', nargs='*', help='the mode\'s arguments (see modes below)')
+    p.add_argument('--kiln', default=KILN, metavar='PATH',
+                   help='kiln binary (default: $KILN, else /tmp/kiln-tester; now %(default)s)')
+    p.add_argument('--aromatic', action='store_true',
+                   help='random: also compare the number of aromatic atoms of kiln\'s canonical SMILES with RDKit\'s '
+                        '(differences may be aromaticity-model differences, not bugs)')
+    a = p.parse_args(argv)
+    want = {'random': (1, 3), 'fuzz': (1, 1), 'resonance': (0, 1), 'order': (0, 0), 'sigma': (0, 0), 'exp': (0, 0)}[a.mode]
+    if not want[0] <= len(a.args) <= want[1]:
+        p.error('%s takes %d to %d argument(s), not %d' % (a.mode, want[0], want[1], len(a.args)))
+    return a
+
+
 if __name__ == '__main__':
-    mode = sys.argv[1]
+    opts = parse_args(sys.argv[1:])
+    KILN = opts.kiln
+    mode, args = opts.mode, opts.args
     if mode == 'random':
-        n = int(sys.argv[2]); seed = int(sys.argv[3]) if len(sys.argv) > 3 else 1
-        stats, bad, refusals, slow = mode_random(n, seed, sys.argv[4] if len(sys.argv) > 4 else '/work/wt/tester')
+        n = int(args[0]); seed = int(args[1]) if len(args) > 1 else 1
+        stats, bad, refusals, slow = mode_random(n, seed, args[2] if len(args) > 2 else REPO, aromatic=opts.aromatic)
         print(json.dumps({'stats': stats, 'problem_counts': {k: len(v) for k, v in bad.items()},
                           'refusal_messages': refusals.most_common(40), 'slow_count': len(slow), 'slow': sorted(slow, reverse=True)[:40],
                           'examples': {k: v[:25] for k, v in bad.items()}}, indent=1, default=str))
     elif mode == 'fuzz':
-        out, dis = mode_fuzz(int(sys.argv[2]))
+        out, dis = mode_fuzz(int(args[0]))
         print(json.dumps({'classes': {' / '.join(k): v for k, v in out.items()},
                           'disagreements': {(' / '.join(k) if isinstance(k, tuple) else k): v[:40] for k, v in dis.items()},
                           'disagreement_counts': {(' / '.join(k) if isinstance(k, tuple) else k): len(v) for k, v in dis.items()}}, indent=1, default=str))
@@ -623,7 +670,7 @@ if __name__ == '__main__':
     elif mode == 'exp':
         for r in mode_exp(): print(*r, sep=' | ')
     elif mode == 'resonance':
-        stats, bad = mode_resonance(int(sys.argv[2]) if len(sys.argv) > 2 else 3000)
+        stats, bad = mode_resonance(int(args[0]) if args else 3000)
         print(json.dumps({'stats': stats, 'worst': bad[:40]}, indent=1, ensure_ascii=False))
     elif mode == 'order':
         n, bad = mode_order()
