@@ -5,6 +5,7 @@ import (
 	"context"
 	"maps"
 	"path/filepath"
+	"reflect"
 	"slices"
 	"strconv"
 	"strings"
@@ -143,34 +144,8 @@ func (w *Workspace) movedResult(path string, f *speciesfile.File, set Settings) 
 		if st == o {
 			continue
 		}
-		switch st.(type) {
-		case *speciesfile.Species:
-			if _, ok := o.(*speciesfile.Species); !ok {
-				return nil
-			}
-		case *speciesfile.Reaction:
-			if _, ok := o.(*speciesfile.Reaction); !ok {
-				return nil
-			}
-		case *speciesfile.Trivia:
-			if _, ok := o.(*speciesfile.Trivia); !ok {
-				return nil
-			}
-		case *speciesfile.Include:
-			if _, ok := o.(*speciesfile.Include); !ok {
-				return nil
-			}
-		case *speciesfile.Group:
-			if _, ok := o.(*speciesfile.Group); !ok {
-				return nil
-			}
-		case *speciesfile.Units:
-			// (read only for the file's units, compared above)
-			if _, ok := o.(*speciesfile.Units); !ok {
-				return nil
-			}
-		default:
-			return nil // broken statements: not shortcut
+		if !sameQuickKind(st, o) {
+			return nil
 		}
 		ob, nb := o.Body().At(f0.Starts[i]), st.Body().At(f.Starts[i])
 		if !bytes.Equal(bodyText(f0, o, f0.Starts[i]), bodyText(f, st, f.Starts[i])) ||
@@ -453,4 +428,17 @@ func (w *Workspace) includesSame(r0 *Result, path string) bool {
 		return true
 	}
 	return walk(path, r0.File, []string{path}, 0) && len(seen) == len(r0.Files)
+}
+
+// sameQuickKind reports whether statement st, re-read, is of the kind of
+// o, the node it replaces, and of a kind the quick path takes: species,
+// reaction, trivia, include, group or units (read only for the file's
+// units, compared with the whole file). Broken statements are not shortcut.
+func sameQuickKind(st, o speciesfile.Stmt) bool {
+	switch st.(type) {
+	case *speciesfile.Species, *speciesfile.Reaction, *speciesfile.Trivia,
+		*speciesfile.Include, *speciesfile.Group, *speciesfile.Units:
+		return reflect.TypeOf(st) == reflect.TypeOf(o)
+	}
+	return false
 }
