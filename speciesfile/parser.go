@@ -274,25 +274,13 @@ func (p *parser) run() {
 	if len(p.src) > MaxFileSize {
 		p.errAt(RelSpan{0, 0}, "file too large: %d bytes (limit %d)", len(p.src), MaxFileSize)
 	}
-	extentStart := 0
-	var last Stmt
-	for {
-		st, next, ok := p.nextStatement(extentStart)
-		if !ok {
-			break
-		}
-		f.Stmts = append(f.Stmts, st)
-		f.Starts = append(f.Starts, extentStart)
-		extentStart = next
-		last = st
-	}
-	if len(p.src) > 0 {
-		if last == nil {
-			f.Stmts = append(f.Stmts, &Trivia{StmtBase{Size: len(p.src), BodySpan: RelSpan{len(p.src), len(p.src)}}})
-			f.Starts = append(f.Starts, 0)
-		} else {
-			setExtentEnd(last, f.Starts[len(f.Starts)-1], len(p.src))
-		}
+	// Every statement to the end of the text (the last one owns the
+	// trailing lines); a text of blank and comment lines only is one trivia
+	// statement.
+	p.readStmts(0, nil)
+	if len(p.src) > 0 && len(f.Stmts) == 0 {
+		f.Stmts = append(f.Stmts, &Trivia{StmtBase{Size: len(p.src), BodySpan: RelSpan{len(p.src), len(p.src)}}})
+		f.Starts = append(f.Starts, 0)
 	}
 	f.finishLists()
 	if p.crlf > p.lf {

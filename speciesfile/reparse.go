@@ -194,7 +194,8 @@ func (p *parser) readFrom(start, from int, stop func(end int) (int, bool)) (int,
 	}
 }
 
-// readStmts is readFrom with the token window set.
+// readStmts is readFrom with the token window set; with stop nil it reads
+// to the end of the text (a whole parse: run).
 func (p *parser) readStmts(start int, stop func(end int) (int, bool)) (int, bool) {
 	f := p.f
 	p.line = p.lines.Line(start)
@@ -211,6 +212,9 @@ func (p *parser) readStmts(start int, stop func(end int) (int, bool)) (int, bool
 		f.Starts = append(f.Starts, extentStart)
 		extentStart = next
 		last = st
+		if stop == nil {
+			continue
+		}
 		if j, ok := stop(extentStart); ok && p.hasPending {
 			// Reading ahead checked the lines of the statement that
 			// follows (too long, bad bytes): those diagnostics belong to
