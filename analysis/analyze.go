@@ -73,21 +73,12 @@ func (w *Workspace) analyze(ctx context.Context, path string) (*Result, error) {
 		return nil, fmt.Errorf("analysing %s: %w", path, err)
 	}
 	set := w.Settings()
-	a := &analysis{w: w, ctx: ctx, set: set, res: &Result{
-		Path:     path,
-		Settings: set,
-		Files:    map[string]*speciesfile.File{},
-		ByName:   map[string]*Species{},
-	}}
 	f := w.parse(path, text)
 	if r := w.movedResult(path, f, set); r != nil {
 		return r, nil
 	}
-	a.res.File = f
-	a.res.Files[path] = f
-	a.res.Diagnostics = append(a.res.Diagnostics, f.Diags...)
-	a.includes(path, f, []string{path}, 0, nil)
-	if err := ctx.Err(); err != nil {
+	a, err := w.startAnalysis(ctx, set, path, f)
+	if err != nil {
 		return nil, err
 	}
 	a.res.order = a.order
@@ -162,6 +153,22 @@ func (a *analysis) report(file string, d speciesfile.Diagnostic) {
 		return
 	}
 	a.res.Diagnostics = append(a.res.Diagnostics, d)
+}
+
+// startAnalysis starts an analysis of f, the file at path, with settings
+// set: its result holds f, f's diagnostics and the files f includes, read
+// depth first (a.order lists them). Analyze and compare both start so.
+func (w *Workspace) startAnalysis(ctx context.Context, set Settings, path string, f *speciesfile.File) (*analysis, error) {
+	a := &analysis{w: w, ctx: ctx, set: set, res: &Result{
+		Path:     path,
+		Settings: set,
+		File:     f,
+		Files:    map[string]*speciesfile.File{path: f},
+		ByName:   map[string]*Species{},
+	}}
+	a.res.Diagnostics = append(a.res.Diagnostics, f.Diags...)
+	a.includes(path, f, []string{path}, 0, nil)
+	return a, ctx.Err()
 }
 
 // includes resolves the include statements of f (a file at path), parsing

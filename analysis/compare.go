@@ -303,15 +303,8 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 	if err != nil {
 		return nil, fmt.Errorf("reading %s: %w", path, err)
 	}
-	set := w.Settings()
-	a := &analysis{w: w, ctx: ctx, set: set, res: &Result{Path: path, Settings: set, Files: map[string]*speciesfile.File{},
-		ByName: map[string]*Species{}}}
-	f := speciesfile.Parse(path, text)
-	a.res.File = f
-	a.res.Files[path] = f
-	a.res.Diagnostics = append(a.res.Diagnostics, f.Diags...)
-	a.includes(path, f, []string{path}, 0, nil)
-	if err := ctx.Err(); err != nil {
+	a, err := w.startAnalysis(ctx, w.Settings(), path, speciesfile.Parse(path, text))
+	if err != nil {
 		return nil, err
 	}
 	a.groups()
