@@ -113,6 +113,10 @@ func (u Units) Entropy(v float64) string { return u.EntropyNumber(v) + " " + u.E
 // FormatMolarMass writes a molar mass (g/mol) for people: "46.069 g/mol".
 func FormatMolarMass(m float64) string { return FormatFixed(m, 3) + " g/mol" }
 
+// FormatBar writes a pressure given in bar for people, with up to six
+// significant digits: "1.01325 bar", "10 bar".
+func FormatBar(bar float64) string { return strconv.FormatFloat(bar, 'g', 6, 64) + " bar" }
+
 // Number formatting for people: the one home of how kiln writes a value
 // with a fixed number of decimals in messages, hovers and text tables.
 

@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"math"
 	"sort"
-	"strconv"
 	"strings"
 
 	"kiln.dev/kiln/analysis"
@@ -388,7 +387,7 @@ func (w *writer) reaction(x *Index, r *analysis.Reaction) {
 		if p == 0 {
 			p = 101325
 		}
-		at = " at " + strconv.FormatFloat(p/1e5, 'g', 4, 64) + " bar"
+		at = " at " + analysis.FormatBar(p/1e5)
 	}
 	if r.ForwardRate1000 != nil {
 		rows = append(rows, []string{"k_f(1000 K)", analysis.FormatSig(*r.ForwardRate1000) + " " + analysis.RateUnits(r.ForwardOrder) + at})

@@ -430,7 +430,7 @@ reaction C2H6 <=> CH3 + CH3   A=1e16 n=0 Ea=88
 	assert.Contains(t, stdout, `"rate_table_edge_bar": 10.1325`)
 	code, stdout, _ = runKiln(t, "summary", "--pressure", "100atm", path)
 	require.Equal(t, exitOK, code)
-	assert.Contains(t, stdout, "table's 10.13 bar rate")
+	assert.Contains(t, stdout, "table's 10.1325 bar rate", "the digits of the header's pressure and of the JSON")
 	code, stdout, _ = runKiln(t, "summary", "--json", path)
 	require.Equal(t, exitOK, code)
 	assert.NotContains(t, stdout, "rate_table_edge_bar")

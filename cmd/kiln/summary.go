@@ -261,7 +261,7 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 	if len(s.Reactions) > 0 {
 		P = s.Reactions[0].RatePressure
 	}
-	fmt.Fprintf(w, "\nRates at 1000 K and %s bar (cm, mol, s units; k_r from k_f/Kc unless given)\n", strconv.FormatFloat(P, 'g', 6, 64))
+	fmt.Fprintf(w, "\nRates at 1000 K and %s (cm, mol, s units; k_r from k_f/Kc unless given)\n", analysis.FormatBar(P))
 	rows = rows[:0]
 	for _, r := range s.Reactions {
 		kf, kr := sciText(r.ForwardRate["1000"]), sciText(r.ReverseRate["1000"])
@@ -276,7 +276,7 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 			limit = "above collision limit"
 		}
 		if r.RateTableEdge != nil {
-			limit = strings.TrimPrefix(limit+"; table's "+strconv.FormatFloat(*r.RateTableEdge, 'g', 4, 64)+" bar rate", "; ")
+			limit = strings.TrimPrefix(limit+"; table's "+analysis.FormatBar(*r.RateTableEdge)+" rate", "; ")
 		}
 		factor := ""
 		if f := reverseFactor(r); f != nil {
