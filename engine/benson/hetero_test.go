@@ -179,7 +179,8 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"N#C[CH2]", "primary", true}, // α-cyano: no increment, stabilisation left out
 		{"CS[CH2]", "primary", true},  // α-thio likewise
 		{"[CH2]CBr", "primary", false},
-		{"C[CH]Br", "alpha-chloro", true},
+		{"C[CH]Br", "alpha-bromo", true}, // substituted: the BrCH2–H increment, flagged as for Cl and F
+		{"[CH2]Br", "alpha-bromo", false},
 		{"[C](Cl)(Cl)Cl", "alpha-trichloro", false},
 		{"[CH](Cl)Cl", "alpha-dichloro", false},
 		{"[C](F)(F)F", "alpha-trifluoro", false},
