@@ -16,8 +16,9 @@ import (
 // carbon next to carbon, Br on primary carbon, F, Cl, Br on benzene rings;
 // ketenes. Radical sites on N and S and next to N, Cl and F take the bond
 // dissociation enthalpies of hbi_nsx.tsv (heteroSite), thiyl sites the loss
-// of the thiol's S–H rotor (heteroSiteChange). Carbons bearing two or more
-// halogens next to another heavy atom are flagged (addHalogenFlags).
+// of the thiol's S–H rotor (heteroSiteChange). Halogens on adjacent
+// carbons take interaction corrections, and polyhalogenated carbons whose
+// group no handbook molecule checks are flagged (addHalogenFlags).
 // Nitro, nitrate, nitrite and azine nitrogen, nitrogen rings and the azo,
 // imine and nitroso types are in hetero_n.go. Everything else with N, S or
 // halogens is refused, naming the group.

@@ -146,18 +146,19 @@ func TestHalogenInteractionFit(t *testing.T) {
 func TestRederivedHalogenGroups(t *testing.T) {
 	rows := halogenRows(t)
 	for group, name := range map[string]string{
-		"C-(F)3(C)":     "1,1,1-trifluoroethane",
-		"C-(Cl)3(C)":    "1,1,1-trichloroethane",
-		"C-(Cl)2(C)(H)": "1,1-dichloroethane",
-		"C-(Cl)2(C)2":   "2,2-dichloropropane",
-		"C-(F)3(Cb)":    "benzotrifluoride",
-		"Cd-(Cl)(H)":    "vinyl chloride",
-		"Cd-(F)2":       "tetrafluoroethylene",
-		"Cd-(Cl)(C)":    "2-chloropropene",
-		"CO-(F)(C)":     "acetyl fluoride",
-		"CO-(Br)(C)":    "acetyl bromide",
-		"C-(F)(Cl)3":    "trichlorofluoromethane",
-		"C-(F)2(Cl)2":   "dichlorodifluoromethane",
+		"C-(F)3(C)":      "1,1,1-trifluoroethane",
+		"C-(Cl)3(C)":     "1,1,1-trichloroethane",
+		"C-(Cl)2(C)(H)":  "1,1-dichloroethane",
+		"C-(Cl)2(C)2":    "2,2-dichloropropane",
+		"C-(F)3(Cb)":     "benzotrifluoride",
+		"Cd-(Cl)(H)":     "vinyl chloride",
+		"Cd-(F)2":        "tetrafluoroethylene",
+		"Cd-(Cl)(C)":     "2-chloropropene",
+		"CO-(F)(C)":      "acetyl fluoride",
+		"CO-(Br)(C)":     "acetyl bromide",
+		"C-(Cl)(Cd)(H)2": "allyl chloride",
+		"C-(F)(Cl)3":     "trichlorofluoromethane",
+		"C-(F)2(Cl)2":    "dichlorodifluoromethane",
 	} {
 		r, ok := rows[name]
 		require.True(t, ok, name)
