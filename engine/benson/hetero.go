@@ -16,8 +16,9 @@ import (
 // carbon next to carbon, Br on primary carbon, F, Cl, Br on benzene rings;
 // ketenes. Radical sites on N and S and next to N, Cl and F take the bond
 // dissociation enthalpies of hbi_nsx.tsv (heteroSite), thiyl sites the loss
-// of the thiol's S–H rotor (heteroSiteChange). Carbons bearing two or more
-// halogens next to another heavy atom are flagged (addHalogenFlags).
+// of the thiol's S–H rotor (heteroSiteChange). Halogens on adjacent
+// carbons take interaction corrections, and polyhalogenated carbons whose
+// group no handbook molecule checks are flagged (addHalogenFlags).
 // Nitro, nitrate, nitrite and azine nitrogen, nitrogen rings and the azo,
 // imine and nitroso types are in hetero_n.go. Everything else with N, S or
 // halogens is refused, naming the group.
@@ -138,16 +139,20 @@ func ketene(m *molecule.Molecule) bool {
 	return false
 }
 
-// addHalogenFlags flags every group of a carbon that bears two or more
-// halogens and is bonded to another heavy atom (CHCl2–R, CCl3–R, CF3–R,
-// CF2<): such group values are those of the tables, which leave out the
-// halogen–halogen interactions across the C–R bond that make
+// addHalogenFlags adds the halogen interaction corrections
+// (addHalogenInteractions, hetero_sx.go) and flags every group of a carbon
+// that bears two or more halogens and is bonded to another heavy atom
+// (CF2<, CF2Cl–R …) unless its value was derived from or checked against
+// a molecule in which the carbon has the same neighbours
+// (checkedPolyhaloGroups): the other tabulated values leave out, or were
+// never checked for, the halogen–halogen interactions that make
 // polyhalogenated molecules non-additive (Cohen & Benson, Chem. Rev. 93
-// (1993), from memory); the validation set shows errors of 2–10 kcal/mol
-// for CCl3–, CF3– and C2Cl6 with them. The estimate is kept but flagged,
-// unless the user supplied the group (a `group` statement), which then
-// carries its own interactions.
+// (1993), from memory). A Cd-(F)2 carbon outside CF2=CF2 is flagged too
+// (vinylFluorineContext). The estimate is kept but flagged, unless the user
+// supplied the group (a `group` statement), which then carries its own
+// interactions.
 func addHalogenFlags(g *graph, l lookup, est *Result) {
+	addHalogenInteractions(g, l, est)
 	for i, a := range g.m.Atoms {
 		if a.Element != "C" {
 			continue
@@ -161,7 +166,7 @@ func addHalogenFlags(g *graph, l lookup, est *Result) {
 				others++
 			}
 		}
-		if halogens == 0 {
+		if halogens < 2 || others == 0 {
 			continue
 		}
 		centre, counts, ok := g.groupOf(i)
@@ -172,20 +177,21 @@ func addHalogenFlags(g *graph, l lookup, est *Result) {
 		if _, user := l.user[name]; user {
 			continue
 		}
-		if halogens < 2 || others == 0 {
-			if slices.Contains(olderChloroethyleneGroups[:], name) {
-				est.Missing = append(est.Missing, Missing{
-					Group:         name,
-					Approximation: name + olderChloroethyleneData,
-					Note:          "the tabulated value rests on older chloroethylene data and comes out 2–4 kcal/mol above today's handbook values (vinyl chloride, 1,2-dichloroethylene); kept as published, uncertainty widened",
-				})
-			}
+		if name == "Cd-(F)2" && !g.cf2Partner(i) {
+			est.Missing = append(est.Missing, Missing{
+				Group:         name,
+				Approximation: name + vinylFluorineContext,
+				Note:          "Cd-(F)2 was derived from CF2=CF2 alone; next to a carbon without two fluorines its F/F interaction is not there, and errors of several kcal/mol are possible",
+			})
+			continue
+		}
+		if slices.Contains(checkedPolyhaloGroups[:], name) {
 			continue
 		}
 		est.Missing = append(est.Missing, Missing{
 			Group:         name,
 			Approximation: name + withoutHalogenInteractions,
-			Note:          "polyhalogenated carbon: no geminal/vicinal halogen interaction correction at hand; errors of several kcal/mol are possible",
+			Note:          "polyhalogenated carbon whose tabulated group value no handbook molecule checks: its geminal/vicinal halogen interactions are not known; errors of several kcal/mol are possible",
 		})
 	}
 }

@@ -69,11 +69,10 @@ func TestHeteroGroupsAssigned(t *testing.T) {
 		}
 		e := heteroEstimate(t, c.smiles)
 		assert.ElementsMatch(t, c.groups, groupNames(e), c.smiles)
-		// the published-but-biased Cd-(Cl)(H) (TestVinylChlorideWidening)
-		// and thiophene's borrowed ring Cp (TestThiopheneCpFlag) are the
-		// flags an estimate from the tables may carry
+		// thiophene's borrowed ring Cp (TestThiopheneCpFlag) is the flag
+		// an estimate from the tables may carry
 		missing := slices.DeleteFunc(slices.Clone(e.Missing), func(m Missing) bool {
-			return strings.HasSuffix(m.Approximation, olderChloroethyleneData) || m.Group == thiopheneCpGroup
+			return m.Group == thiopheneCpGroup
 		})
 		assert.Empty(t, missing, c.smiles)
 	}
@@ -91,7 +90,7 @@ func TestKeteneFromGroups(t *testing.T) {
 // Structures whose groups are not in the tables are refused with the group
 // named, never estimated without it.
 func TestHeteroRefusals(t *testing.T) {
-	for _, smi := range []string{"CNCl", "c1cnc[nH]1", "C/N=N/C", "CCN=O", "NC#CC#N", "CC(F)=O", "ClC(Cl)(Cl)Cl",
+	for _, smi := range []string{"CNCl", "c1cnc[nH]1", "C/N=N/C", "CCN=O", "NC#CC#N", "O=CF", "BrC(Br)Br",
 		"CC(C)S(=O)C(C)C", "C=S", "CC(C)=S", "C=C=S", "CC(=S)OC", "C=NC", "CC#CC#N"} {
 		m, err := molecule.ParseSMILES(smi)
 		require.NoError(t, err)
@@ -180,13 +179,18 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"N#C[CH2]", "primary", true}, // α-cyano: no increment, stabilisation left out
 		{"CS[CH2]", "primary", true},  // α-thio likewise
 		{"[CH2]CBr", "primary", false},
-		{"C[CH]Br", "alpha-chloro", true},
+		{"C[CH]Br", "alpha-bromo", true}, // substituted: the BrCH2–H increment, flagged as for Cl and F
+		{"[CH2]Br", "alpha-bromo", false},
 		{"[C](Cl)(Cl)Cl", "alpha-trichloro", false},
 		{"[CH](Cl)Cl", "alpha-dichloro", false},
 		{"[C](F)(F)F", "alpha-trifluoro", false},
 		{"[CH](F)F", "alpha-difluoro", false},
-		{"C[C](Cl)Cl", "alpha-dichloro", true}, // substituted centre: the halomethane's increment
-		{"C=C[C](Cl)Cl", "allylic", true},      // a further stabiliser: the general rule
+		{"C[C](Cl)Cl", "alpha-dichloro", true},  // substituted centre: the halomethane's increment
+		{"c1ccccc1[C](Cl)Cl", "benzylic", true}, // a further stabiliser: the general rule
+		// C=C[C](Cl)Cl is estimated through its resonance structure
+		// ClC(Cl)=C[CH2]• (a plain allylic site) since Cd-(Cl)2 rests on
+		// today's chloroethylene data
+		{"C=C[C](Cl)Cl", "allylic", false},
 		{"c1cc[c]s1", "vinylic", true},
 		{"c1cc[c]o1", "vinylic", true},
 		{"CC=[CH]", "vinylic", false},
@@ -347,35 +351,36 @@ func flaggedWidening(t *testing.T, suffix string) (rms float64, n int) {
 	return math.Sqrt(sum / float64(n)), n
 }
 
-// TestPolyhalogenWidening: widenPolyhalogen² is the mean of d²/k over the
-// training rows of nsx.tsv whose estimate carries k polyhalogenated-carbon
-// flags and no other ΔHf° approximation (d: ΔHf° error).
+// TestPolyhalogenWidening: widenPolyhalogen was measured (2026-12-03) as
+// sqrt(mean(d²/k)) over the training rows whose estimates carried k
+// polyhalogen flags, when every polyhalogenated group was the published
+// one. Those groups are now re-derived or checked (checkedPolyhaloGroups)
+// and no training row carries the flag, so the widening cannot be
+// re-measured: the test keeps it no narrower than the largest error the
+// published, unchecked groups showed on a row (CH3CF3, 10.3 kcal/mol, over
+// the k = 1 flag and the class term), and checks that the species whose
+// groups no row checks are still flagged and widened by it.
 func TestPolyhalogenWidening(t *testing.T) {
 	rms, n := flaggedWidening(t, withoutHalogenInteractions)
-	require.GreaterOrEqual(t, n, 5)
-	t.Logf("polyhalogen-flagged training rows: %d, RMS ΔHf° error %.2f kcal/mol", n, rms)
-	assert.InDelta(t, rms, widenPolyhalogen, 0.3)
-}
-
-// Vinyl chlorides: the published Cd-(Cl)(H) value rests on older data, and
-// the estimates that use it say so, with a widening that is the error the
-// validation rows show (recomputed here as widenPolyhalogen is).
-func TestVinylChlorideWidening(t *testing.T) {
-	for _, smi := range []string{"C=CCl", "Cl/C=C/Cl", "ClC=Cc1ccccc1"} {
+	assert.Zero(t, n, "training rows still flagged (RMS %.2f): re-measure widenPolyhalogen from them", rms)
+	for _, smi := range []string{
+		"CC(C)(F)F",          // C-(F)2(C)2: published, no row checks it
+		"FC(F)(Cl)C(F)(F)Cl", // Cl/F gauche pairs: no mixed correction
+		"FCC(Cl)(Cl)Cl",      // F/Cl gauche pairs on a CH2F-CCl3 bond
+		"C=C(F)F",            // Cd-(F)2 outside CF2=CF2
+		"ClC=CF",             // F/Cl across C=C
+	} {
 		e := heteroEstimate(t, smi)
-		n := 0
+		k := 0
 		for _, x := range e.Missing {
-			if x.Group == "Cd-(Cl)(H)" && strings.HasSuffix(x.Approximation, olderChloroethyleneData) {
-				n++
+			if strings.HasSuffix(x.Approximation, withoutHalogenInteractions) {
+				k++
 			}
 		}
-		assert.Equal(t, correctionCountGroups(e, "Cd-(Cl)(H)"), n, "%s: %v", smi, e.Missing)
-		assert.GreaterOrEqual(t, e.Uncertainty/calorie/1000, widenVinylChloride, smi)
+		if assert.Positive(t, k, "%s: %v", smi, e.Missing) {
+			assert.GreaterOrEqual(t, e.Uncertainty/calorie/1000, math.Sqrt(float64(k))*widenPolyhalogen, smi)
+		}
 	}
-	rms, n := flaggedWidening(t, olderChloroethyleneData)
-	require.GreaterOrEqual(t, n, 3)
-	t.Logf("vinyl-chloride-flagged training rows: %d, RMS ΔHf° error %.2f kcal/mol", n, rms)
-	assert.InDelta(t, rms, widenVinylChloride, 0.1)
 }
 
 // correctionCountGroups returns the count of group term name in e (0 when

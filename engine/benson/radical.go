@@ -46,7 +46,7 @@ import (
 //     stabilisers, which is ordered by increasing D(R–H) of the tables
 //     (allylic 88.8 < propargylic, allylic value < benzylic 89.7 <
 //     α-amino 93.9 < α-hydroxy = α-alkoxy 96.1 < α-chloro 100.1 <
-//     α-bromo, chloro value < α-fluoro 101.3 kcal/mol; TestStabiliserOrder
+//     α-fluoro 101.3 < α-bromo 101.5 kcal/mol; TestStabiliserOrder
 //     keeps the order and the tables in step).
 //  2. A centre with two or more stabilising neighbours (of one kind or of
 //     several: pentadienyl, allylic and α-hydroxy, …) is flagged in Missing
@@ -77,8 +77,9 @@ var stabilisers = []stabiliser{
 	{"alpha-hydroxy", "alpha-hydroxy", ""},
 	{"alpha-alkoxy", "alpha-alkoxy", ""},
 	{"alpha-chloro", "alpha-chloro", ""},
-	{"alpha-bromo", "alpha-chloro", "α-bromo or α-iodo radical site (ClCH2–H increment used)"},
 	{"alpha-fluoro", "alpha-fluoro", ""},
+	{"alpha-bromo", "alpha-bromo", ""},
+	{"alpha-iodo", "alpha-bromo", "α-iodo radical site (BrCH2–H increment used)"},
 }
 
 // stabiliserOf returns the index in stabilisers of neighbour j of an sp3
@@ -101,8 +102,10 @@ func (g *graph) stabiliserOf(j int) int {
 		kind = "alpha-amino"
 	case "Cl":
 		kind = "alpha-chloro"
-	case "Br", "I":
+	case "Br":
 		kind = "alpha-bromo"
+	case "I":
+		kind = "alpha-iodo"
 	case "F":
 		kind = "alpha-fluoro"
 	}
