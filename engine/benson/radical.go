@@ -348,7 +348,7 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 	for _, site := range order {
 		h, ok := l.hbi[site]
 		if !ok {
-			return fmt.Errorf("benson: no HBI value for site %s", site)
+			return &UnsupportedError{Reason: fmt.Sprintf("no hydrogen-bond increment is at hand for a radical site of type %s", site)}
 		}
 		t := term(h.value, count[site])
 		t.Name = "HBI: " + site
