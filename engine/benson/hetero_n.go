@@ -24,8 +24,10 @@ import (
 //     NO2); they are split by the convention hetero.go uses for the nitrile:
 //     C-(NO2)(X)… = C-(C)(X)…, O-(NO2)(C) = O-(C)2, NO2-(X) = the rest.
 //   - NO: a nitroso nitrogen, X–N=O, with its =O implied: NO-(O) for a
-//     nitrite ester, split from the composite O-(NO)(C) in the same way.
-//     C-nitroso compounds have no group value (NO-(C) is missing).
+//     nitrite ester, split from the composite O-(NO)(C) in the same way;
+//     NO-(Cb) for nitrosoarenes, derived from nitrosobenzene with
+//     Cb-(NO) = Cb-(N). Alkyl C-nitroso compounds have no group value
+//     (NO-(C) is missing).
 //   - Nb: the nitrogen of a six-membered aromatic ring of carbons and
 //     nitrogens (pyridine-type: two ring neighbours, no H). Such a ring is
 //     treated as benzenoid: its carbons are Cb with their ring neighbours
@@ -37,12 +39,25 @@ import (
 //     20 kcal/mol above pyrazine and pyrimidine; Pedley et al. 1986, from
 //     memory) and no table gives it, so Nbb has no value: such species are
 //     refused naming the group Nbb, which a `group` statement can supply.
-//   - NA: an azo nitrogen (N=N), its =N partner implied as the =C of Cd.
-//     No azo group value is at hand: such species are refused naming the
-//     group (a `group` statement makes them estimable).
-//   - NI: an imine nitrogen (C=N). The imine carbon would be typed as an
-//     alkene carbon, so NI is deliberately not a nameable centre: imines are
-//     refused, never estimated with the C=N taken as C=C.
+//   - NA: an azo nitrogen (N=N), its =N partner implied as the =C of Cd:
+//     NA-(C), NA-(Cb), each derived from one molecule (groups_n.tsv) with
+//     C-(NA)(X) = C-(N)(X) and Cb-(NA) = Cb-(N), and flagged for it. The
+//     groups describe trans azo compounds; an azo N written cis (C/N=N\C)
+//     is typed NAcis, which no group names: cis azo compounds are refused
+//     (a cis isomer lies several kcal/mol above its trans isomer and no cis
+//     correction is at hand). Unmarked azo compounds are taken as trans.
+//   - NI and CdN: the imine C=N. The imine carbon is typed CdN (imineCarbon:
+//     a non-aromatic carbon whose one double bond goes to a two-coordinate,
+//     non-aromatic, neutral N), never Cd, so no alkene group, cis term,
+//     allylic site or alkene ring count ever applies to it; its =N partner
+//     is implied (CdN-(C)(H)), as the imine N's =C partner is (NI-(C)).
+//     Neighbours name them as ligands: C-(NI)(H)3, C-(CdN)(H)3. E/Z imines
+//     are not told apart (the groups are those of the stable isomer).
+//   - Naz, Nk: an aromatic ring "=N–" outside a benzenoid ring (azole
+//     rings: imidazole, pyrazole, oxazole, thiazole) is Naz, and the N of a
+//     cumulated C=N (ketenimine, isocyanate, carbodiimide) is Nk. Neither
+//     is nameable: such species are refused, whichever spelling (Kekulé or
+//     aromatic) is used.
 //
 // A nitro, nitrate or N-oxide unit written charge-separated (C[N+](=O)[O-],
 // the usual SMILES) is read as the neutral pentavalent structure
