@@ -43,9 +43,10 @@ import (
 //     NA-(C), NA-(Cb), each derived from one molecule (groups_n.tsv) with
 //     C-(NA)(X) = C-(N)(X) and Cb-(NA) = Cb-(N), and flagged for it. The
 //     groups describe trans azo compounds; an azo N written cis (C/N=N\C)
-//     is typed NAcis, which no group names: cis azo compounds are refused
-//     (a cis isomer lies several kcal/mol above its trans isomer and no cis
-//     correction is at hand). Unmarked azo compounds are taken as trans.
+//     or in a ring is typed NAcis, which no group names: cis azo compounds
+//     are refused (a cis isomer lies several kcal/mol above its trans
+//     isomer and no cis correction is at hand). Unmarked open-chain azo
+//     compounds are taken as trans.
 //   - NI and CdN: the imine C=N. The imine carbon is typed CdN (imineCarbon:
 //     a non-aromatic carbon whose one double bond goes to a two-coordinate,
 //     non-aromatic, neutral N), never Cd, so no alkene group, cis term,
@@ -169,12 +170,16 @@ func (g *graph) imineCarbon(i int) bool {
 	return true
 }
 
-// cisAzo reports whether azo nitrogen i (N=N) is written cis: both
-// nitrogens carry a heavy substituent and the / \ marks put them on the same
-// side. Unmarked azo compounds are taken as trans, the stable isomer the
-// azo groups describe.
+// cisAzo reports whether azo nitrogen i (N=N) is cis: the N=N lies in a
+// ring (cyclic azo compounds, 1-pyrazolines, are cis), or both nitrogens
+// carry a heavy substituent and the / \ marks put them on the same side.
+// Unmarked open-chain azo compounds are taken as trans, the stable isomer
+// the azo groups describe.
 func (g *graph) cisAzo(i int) bool {
 	j := g.partner(i, 2)
+	if j >= 0 && g.ringBond[g.bondBetween(i, j)] {
+		return true
+	}
 	if j < 0 || len(g.ligands(i, j)) != 1 || len(g.ligands(j, i)) != 1 {
 		return false
 	}
@@ -438,8 +443,8 @@ func nitrogenSite(g *graph, i, carbons int) (string, bool) {
 	switch g.typ[i] {
 	case "NI", "NA":
 		// Iminyl (R2C=N•) and azo-N sites: no increment at hand, and the
-		// aminyl one is far off (the N–H of an imine is some 10 kcal/mol
-		// weaker than an amine's, common practice). The site names have
+		// aminyl one is far off (H2C=N–H is about 90 kcal/mol against
+		// about 100 for CH3NH–H, from memory). The site names have
 		// no row in the HBI tables, so the estimate is refused naming them.
 		return map[string]string{"NI": "iminyl", "NA": "diazenyl"}[g.typ[i]], true
 	}
