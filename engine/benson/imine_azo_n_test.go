@@ -165,3 +165,27 @@ func TestImineAzoSpellings(t *testing.T) {
 		}
 	}
 }
+
+// Radicals: a carbon site next to an imine (aza-allyl) is flagged as a
+// stabilised site without its increment, whatever else its note would be
+// (the CH2 on N is otherwise a "methyl-type" site); iminyl and diazenyl
+// sites have no increment and are refused.
+func TestImineRadicalSites(t *testing.T) {
+	for _, smi := range []string{"[CH2]N=C", "[CH2]C=N", "C[CH]N=CC"} {
+		est, err := Estimate(parse(t, smi), Options{})
+		require.NoError(t, err, smi)
+		found := false
+		for _, m := range est.Missing {
+			found = found || m.Group == "HBI: "+unstabilisedSite+"next to an imine C=N"
+		}
+		assert.True(t, found, "%s: %+v", smi, est.Missing)
+		want := maeToSigma * classMAE["nitrogen"]
+		assert.GreaterOrEqual(t, est.Uncertainty, 4184*math.Sqrt(want*want+widenStabiliser*widenStabiliser)-1e-6, smi)
+	}
+	for smi, want := range map[string]string{"CC(C)=[N]": "iminyl", "C/N=[N]": "NA-(H)", "CC/N=[N]": "NA-(H)"} {
+		_, err := Estimate(parse(t, smi), Options{})
+		if assert.Error(t, err, smi) {
+			assert.Contains(t, err.Error(), want, smi)
+		}
+	}
+}
