@@ -22,7 +22,7 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 	counts[ligandRank["H"]] = int32(a.HCount)
 	skip := -1 // the implied partner: =C of Cd, ≡C of Ct, =O of CO
 	switch centre {
-	case "Cd", "CO", "NA":
+	case "Cd", "CO", "NA", "NI", "CdN": // NI, CdN: the imine C=N (hetero_n.go)
 		skip = g.partner(i, 2)
 	case "Ct", "CN":
 		skip = g.partner(i, 3)
@@ -172,13 +172,13 @@ atoms:
 		centre, counts, ok := g.groupOf(i)
 		if !ok {
 			if centre != "" {
-				refuse(i, unsupported(g, i, fmt.Sprintf("has a neighbour of type %s, and no group in the tables can name it", centre)))
+				refuse(i, unsupported(g, i, fmt.Sprintf("has a neighbour of type %s%s, and no group in the tables can name it", centre, typeNote(centre)))) // typeNote: hetero_n.go
 			}
 			continue // terminal atom: claimed by its neighbour below, or refused
 		}
 		if !l.hasCentre(centre) {
 			if _, nameable := centreLigands[centre]; !nameable {
-				refuse(i, unsupported(g, i, fmt.Sprintf("no group in the tables has a centre of type %s%s", centre, g.typeNote(i, centre))))
+				refuse(i, unsupported(g, i, fmt.Sprintf("no group in the tables has a centre of type %s%s", centre, typeNote(centre))))
 				continue
 			}
 			// A group the user can define (a `group` statement) but no

@@ -150,7 +150,8 @@ func groupCount(est *Result) int {
 // leaving ΔHf°298 as the groups give it.
 func entropyOnly(m Missing) bool {
 	return strings.HasPrefix(m.Group, "HBI dS") || m.Group == cpFallsGroup || m.Group == pyrroleEntropyGroup || m.Group == furanEntropyGroup || m.Group == thiopheneCpGroup ||
-		m.Group == entropyFloorGroup || strings.HasPrefix(m.Group, ringSystemEntropyGroup)
+		m.Group == entropyFloorGroup || strings.HasPrefix(m.Group, ringSystemEntropyGroup) ||
+		strings.HasPrefix(m.Group, analogSCpGroup) // hetero_n.go
 }
 
 // uncertainty returns the standard uncertainty (1σ, J/mol) of the ΔHf° of

@@ -118,6 +118,9 @@ func (g *graph) atomType(i int) string {
 	if t, ok := g.heteroCarbonType(i); ok {
 		return t
 	}
+	if g.imineCarbon(i) { // CdN: hetero_n.go
+		return "CdN"
+	}
 	doubles, triples, toO := 0, 0, false
 	for k, b := range g.nbrBond[i] {
 		switch g.order(b) {

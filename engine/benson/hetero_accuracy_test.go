@@ -258,6 +258,12 @@ func nitrogenKind(est *Result) string {
 		return false
 	}
 	switch {
+	case has("CdN-("):
+		return "imine"
+	case has("NA-("):
+		return "azo"
+	case has("NO-(Cb)"):
+		return "C-nitroso"
 	case has("N-(Cd)2"):
 		return "pyrrole-type ring N"
 	case has("N-(CO)(C)"):

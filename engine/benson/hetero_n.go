@@ -3,6 +3,7 @@ package benson
 import (
 	_ "embed"
 	"fmt"
+	"strings"
 
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -23,8 +24,10 @@ import (
 //     NO2); they are split by the convention hetero.go uses for the nitrile:
 //     C-(NO2)(X)… = C-(C)(X)…, O-(NO2)(C) = O-(C)2, NO2-(X) = the rest.
 //   - NO: a nitroso nitrogen, X–N=O, with its =O implied: NO-(O) for a
-//     nitrite ester, split from the composite O-(NO)(C) in the same way.
-//     C-nitroso compounds have no group value (NO-(C) is missing).
+//     nitrite ester, split from the composite O-(NO)(C) in the same way;
+//     NO-(Cb) for nitrosoarenes, derived from nitrosobenzene with
+//     Cb-(NO) = Cb-(N). Alkyl C-nitroso compounds have no group value
+//     (NO-(C) is missing).
 //   - Nb: the nitrogen of a six-membered aromatic ring of carbons and
 //     nitrogens (pyridine-type: two ring neighbours, no H). Such a ring is
 //     treated as benzenoid: its carbons are Cb with their ring neighbours
@@ -36,12 +39,26 @@ import (
 //     20 kcal/mol above pyrazine and pyrimidine; Pedley et al. 1986, from
 //     memory) and no table gives it, so Nbb has no value: such species are
 //     refused naming the group Nbb, which a `group` statement can supply.
-//   - NA: an azo nitrogen (N=N), its =N partner implied as the =C of Cd.
-//     No azo group value is at hand: such species are refused naming the
-//     group (a `group` statement makes them estimable).
-//   - NI: an imine nitrogen (C=N). The imine carbon would be typed as an
-//     alkene carbon, so NI is deliberately not a nameable centre: imines are
-//     refused, never estimated with the C=N taken as C=C.
+//   - NA: an azo nitrogen (N=N), its =N partner implied as the =C of Cd:
+//     NA-(C), NA-(Cb), each derived from one molecule (groups_n.tsv) with
+//     C-(NA)(X) = C-(N)(X) and Cb-(NA) = Cb-(N), and flagged for it. The
+//     groups describe trans azo compounds; an azo N written cis (C/N=N\C)
+//     or in a ring is typed NAcis, which no group names: cis azo compounds
+//     are refused (a cis isomer lies several kcal/mol above its trans
+//     isomer and no cis correction is at hand). Unmarked open-chain azo
+//     compounds are taken as trans.
+//   - NI and CdN: the imine C=N. The imine carbon is typed CdN (imineCarbon:
+//     a non-aromatic carbon whose one double bond goes to a two-coordinate,
+//     non-aromatic, neutral N), never Cd, so no alkene group, cis term,
+//     allylic site or alkene ring count ever applies to it; its =N partner
+//     is implied (CdN-(C)(H)), as the imine N's =C partner is (NI-(C)).
+//     Neighbours name them as ligands: C-(NI)(H)3, C-(CdN)(H)3. E/Z imines
+//     are not told apart (the groups are those of the stable isomer).
+//   - Naz, Nk: an aromatic ring "=N–" outside a benzenoid ring (azole
+//     rings: imidazole, pyrazole, oxazole, thiazole) is Naz, and the N of a
+//     cumulated C=N (ketenimine, isocyanate, carbodiimide) is Nk. Neither
+//     is nameable: such species are refused, whichever spelling (Kekulé or
+//     aromatic) is used.
 //
 // A nitro, nitrate or N-oxide unit written charge-separated (C[N+](=O)[O-],
 // the usual SMILES) is read as the neutral pentavalent structure
@@ -100,11 +117,75 @@ func (g *graph) nitrogenType(i int) string {
 	case toO == 1 && toN == 0 && toC == 0 && deg == 2:
 		return "NO"
 	case toN == 1 && toO == 0 && toC == 0 && deg == 2:
+		if g.cisAzo(i) {
+			return "NAcis" // no group: see the file comment
+		}
 		return "NA"
 	case toC == 1 && toO == 0 && toN == 0 && deg == 2:
+		switch {
+		case g.m.Atoms[i].Aromatic:
+			return "Naz" // azole ring "=N–": no group (see the file comment)
+		case !g.imineCarbon(g.partner(i, 2)):
+			return "Nk" // cumulated C=N (ketenimine, isocyanate, carbodiimide): no group
+		}
 		return "NI"
 	}
 	return "N"
+}
+
+// imineCarbon reports whether atom i is the carbon of an open-chain or
+// non-aromatic-ring imine C=N: a non-aromatic, neutral carbon whose only
+// multiple bond is one double bond to a non-aromatic, neutral, two-coordinate
+// nitrogen (C=NH, C=N–R) whose other bond is single. Such a carbon is typed
+// CdN, never Cd (see the file comment).
+func (g *graph) imineCarbon(i int) bool {
+	if i < 0 || g.m.Atoms[i].Element != "C" || g.m.Atoms[i].Aromatic || g.m.Atoms[i].Charge != 0 || g.benzAtom[i] > 0 {
+		return false
+	}
+	n, doubles := -1, 0
+	for k, b := range g.nbrBond[i] {
+		switch g.order(b) {
+		case 1:
+		case 2:
+			doubles++
+			if j := g.nbr[i][k]; g.m.Atoms[j].Element == "N" {
+				n = j
+			}
+		default:
+			return false
+		}
+	}
+	if doubles != 1 || n < 0 {
+		return false
+	}
+	a := g.m.Atoms[n]
+	if a.Aromatic || a.Charge != 0 || len(g.nbr[n])+a.HCount != 2 {
+		return false
+	}
+	for _, b := range g.nbrBond[n] {
+		if o := g.order(b); o != 1 && b != g.bondBetween(i, n) {
+			return false
+		}
+	}
+	return true
+}
+
+// cisAzo reports whether azo nitrogen i (N=N) is cis: the N=N lies in a
+// ring (cyclic azo compounds, 1-pyrazolines, are cis), or both nitrogens
+// carry a heavy substituent and the / \ marks put them on the same side.
+// Unmarked open-chain azo compounds are taken as trans, the stable isomer
+// the azo groups describe.
+func (g *graph) cisAzo(i int) bool {
+	j := g.partner(i, 2)
+	if j >= 0 && g.ringBond[g.bondBetween(i, j)] {
+		return true
+	}
+	if j < 0 || len(g.ligands(i, j)) != 1 || len(g.ligands(j, i)) != 1 {
+		return false
+	}
+	si, oki := g.sides(i, j)
+	sj, okj := g.sides(j, i)
+	return oki && okj && si[0] == sj[0]
 }
 
 // impliedTerminal reports whether neighbour k of centre i is a terminal
@@ -187,6 +268,7 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 // benzene group being used.
 func addAzineFlags(g *graph, l lookup, est *Result) {
 	addPyrroleFlag(l, est)
+	addNitrogenTableFlags(l, est)
 	if _, user := l.user["Nb"]; user {
 		return
 	}
@@ -218,6 +300,55 @@ func addAzineFlags(g *graph, l lookup, est *Result) {
 			Approximation: o + " of benzene",
 			Note:          "no group for this substituent next to an azine nitrogen; the benzene group is used (the published azine groups differ from the benzene ones by up to about 2.5 kcal/mol)",
 		})
+	}
+}
+
+// Marks in the source column of groups_n.tsv that make every estimate
+// using the group flagged (addNitrogenTableFlags):
+//
+//   - analogSCpMark: no S° or Cp of any molecule with the group was at
+//     hand; they are those of the analogous group the source names. ΔHf° is
+//     not affected (an entropy-only flag, class.go entropyOnly).
+//   - oneMoleculeMark: ΔHf° derived from a single molecule with a
+//     convention for its neighbours, not checked against a second
+//     molecule of the class: the estimate's ΔHf° uncertainty is widened as
+//     for a stand-in group (widenGroup, class.go).
+const (
+	analogSCpMark   = "S and Cp by analogy (flagged)"
+	oneMoleculeMark = "from one molecule (flagged)"
+)
+
+// analogSCpGroup prefixes the flag of a group whose S° and Cp are carried
+// over from an analogous group (analogSCpMark).
+const analogSCpGroup = "S, Cp by analogy: "
+
+// oneMoleculeNote ends the Approximation of the flag of a group derived
+// from one molecule (oneMoleculeMark).
+const oneMoleculeNote = " (derived from one molecule)"
+
+// addNitrogenTableFlags flags the groups of est whose built-in value carries
+// analogSCpMark or oneMoleculeMark in its source (a group the user supplied
+// carries its own). One flag per group and mark.
+func addNitrogenTableFlags(l lookup, est *Result) {
+	for _, t := range est.Groups {
+		name, _, _ := strings.Cut(t.Name, " ≈ ")
+		if _, user := l.user[name]; user {
+			continue
+		}
+		if strings.Contains(t.Source, oneMoleculeMark) {
+			est.Missing = append(est.Missing, Missing{
+				Group:         name,
+				Approximation: name + oneMoleculeNote,
+				Note:          "ΔHf° rests on one molecule and a convention for its neighbours; source: " + t.Source,
+			})
+		}
+		if strings.Contains(t.Source, analogSCpMark) {
+			est.Missing = append(est.Missing, Missing{
+				Group:         analogSCpGroup + name,
+				Approximation: "S° and Cp of an analogous group",
+				Note:          "no S° or Cp of a molecule with this group is at hand; ΔHf° is not affected; source: " + t.Source,
+			})
+		}
 	}
 }
 
@@ -287,14 +418,17 @@ func (g *graph) oneHeteroatom(r []int, el string) bool {
 	return n == 1
 }
 
-// typeNote describes a centre type that no table has and no user group can
-// name, for the refusal message; "" for others.
-func (g *graph) typeNote(i int, centre string) string {
-	if centre == "NI" && g.m.Atoms[i].Aromatic {
+// typeNote describes an atom type that no table has and no user group can
+// name (as a centre or as a neighbour), for the refusal message; "" for
+// others.
+func typeNote(centre string) string {
+	switch centre {
+	case "Naz":
 		return " (an azole ring nitrogen, the \"=N–\" of imidazole, pyrazole, oxazole or thiazole rings: no group value and no ring correction for these rings is at hand)"
-	}
-	if centre == "NI" {
-		return " (an imine nitrogen, C=N: kiln's tables have no imine groups — the published imine-N values go with imine-carbon groups of their own, which the group notation cannot tell from an alkene carbon's)"
+	case "Nk":
+		return " (the nitrogen of a cumulated C=N, as in ketenimines, isocyanates and carbodiimides: no group value is at hand)"
+	case "NAcis":
+		return " (a cis azo nitrogen: the azo groups describe trans azo compounds and no cis correction is at hand — a cis isomer lies several kcal/mol above its trans isomer; give the species a thermo block)"
 	}
 	return ""
 }
@@ -305,6 +439,14 @@ func (g *graph) typeNote(i int, centre string) string {
 func nitrogenSite(g *graph, i, carbons int) (string, bool) {
 	if carbons == 1 && len(g.nbr[i]) == 1 && g.typ[g.nbr[i][0]] == "Cb" { // g is the parent graph: the N carries NH2 there
 		return "anilino", true
+	}
+	switch g.typ[i] {
+	case "NI", "NA":
+		// Iminyl (R2C=N•) and azo-N sites: no increment at hand, and the
+		// aminyl one is far off (H2C=N–H is about 90 kcal/mol against
+		// about 100 for CH3NH–H, from memory). The site names have
+		// no row in the HBI tables, so the estimate is refused naming them.
+		return map[string]string{"NI": "iminyl", "NA": "diazenyl"}[g.typ[i]], true
 	}
 	return "", false
 }
@@ -353,6 +495,11 @@ func nitrogenSiteNote(g *graph, i int, site string) string {
 	}
 	for _, j := range g.nbr[i] {
 		switch g.typ[j] {
+		case "CdN", "NI":
+			// An aza-allyl site (•C–C=N, •C–N=C), delocalised as an
+			// allyl radical is: flagged as a stabilised site without its
+			// increment (widened as such, class.go).
+			return unstabilisedSite + "next to an imine C=N"
 		case "NO2", "NO", "NA":
 			return "radical site next to a " + g.typ[j] + " nitrogen (alkyl increment used)"
 		case "O":

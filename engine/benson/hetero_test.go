@@ -90,8 +90,8 @@ func TestKeteneFromGroups(t *testing.T) {
 // Structures whose groups are not in the tables are refused with the group
 // named, never estimated without it.
 func TestHeteroRefusals(t *testing.T) {
-	for _, smi := range []string{"CNCl", "c1cnc[nH]1", "C/N=N/C", "CCN=O", "NC#CC#N", "O=CF", "BrC(Br)Br",
-		"CC(C)S(=O)C(C)C", "C=S", "CC(C)=S", "C=C=S", "CC(=S)OC", "C=NC", "CC#CC#N"} {
+	for _, smi := range []string{"CNCl", "c1cnc[nH]1", "C/N=N\\C", "CCN=O", "NC#CC#N", "O=CF", "BrC(Br)Br",
+		"CC(C)S(=O)C(C)C", "C=S", "CC(C)=S", "C=C=S", "CC(=S)OC", "C=NO", "CC#CC#N"} {
 		m, err := molecule.ParseSMILES(smi)
 		require.NoError(t, err)
 		_, err = Estimate(m, Options{})

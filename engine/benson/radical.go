@@ -324,8 +324,10 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 		if err != nil {
 			return fmt.Errorf("atom %d: %w", i+1, err)
 		}
-		if miss == "" {
-			miss = nitrogenSiteNote(g, i, site) // hetero_n.go
+		// hetero_n.go; a stabilised site left without its increment (an
+		// aza-allyl site) outranks the generic methyl-type note.
+		if note := nitrogenSiteNote(g, i, site); note != "" && (miss == "" || strings.HasPrefix(note, unstabilisedSite)) {
+			miss = note
 		}
 		if several != "" {
 			est.Missing = append(est.Missing, severalStabilisers(several, site))
@@ -351,7 +353,7 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 	for _, site := range order {
 		h, ok := l.hbi[site]
 		if !ok {
-			return fmt.Errorf("benson: no HBI value for site %s", site)
+			return &UnsupportedError{Reason: fmt.Sprintf("no hydrogen-bond increment is at hand for a radical site of type %s", site)}
 		}
 		t := term(h.value, count[site])
 		t.Name = "HBI: " + site

@@ -62,11 +62,12 @@ func TestRefusals(t *testing.T) {
 		{"C[SiH3]", Options{}, "unsupported element Si"},
 		{"C[NH3+]", Options{}, "net charge +1"},
 		// nitrogen (hetero_n.go): only N⁺–O⁻ units are read as N=O; other
-		// charge separation, imines and azo compounds are refused.
+		// charge separation, cis azo compounds and imines without a group
+		// (oximes here) are refused.
 		{"C[N+]#[C-]", Options{}, "isocyanide"},
 		{"C[N+](C)(C)C.[Cl-]", Options{}, "charge"},
-		{"CC=NC", Options{}, "imine nitrogen"},
-		{"C/N=N/C", Options{}, "no value and no approximation for group NA-(C)"},
+		{"CC=NO", Options{}, "no value and no approximation for group O-(NI)(H)"},
+		{"C/N=N\\C", Options{}, "cis azo nitrogen"},
 		{"CCN=O", Options{}, "no value and no approximation for group C-(NO)(C)(H)2 (also missing: NO-(C))"},
 		{"c1cnc[nH]1", Options{}, "azole ring nitrogen"},
 		{"c1cc[nH]n1", Options{}, "azole ring nitrogen"},
