@@ -258,6 +258,8 @@ func nitrogenKind(est *Result) string {
 		return false
 	}
 	switch {
+	case has("Naz"):
+		return "azole ring N"
 	case has("N-(Cd)2"):
 		return "pyrrole-type ring N"
 	case has("N-(CO)(C)"):

@@ -76,6 +76,9 @@ func (g *graph) nitrogenType(i int) string {
 		}
 		return "Nb"
 	}
+	if t, ok := g.azoleNType(i); ok { // the "=N–" of an azole ring: azole.go
+		return t
+	}
 	toO, toN, toC := 0, 0, 0
 	for k, b := range g.nbrBond[i] {
 		j := g.nbr[i][k]
@@ -290,6 +293,9 @@ func (g *graph) oneHeteroatom(r []int, el string) bool {
 // typeNote describes a centre type that no table has and no user group can
 // name, for the refusal message; "" for others.
 func (g *graph) typeNote(i int, centre string) string {
+	if n := g.azoleNote(centre); n != "" { // azole.go
+		return n
+	}
 	if centre == "NI" && g.m.Atoms[i].Aromatic {
 		return " (an azole ring nitrogen, the \"=N–\" of imidazole, pyrazole, oxazole or thiazole rings: no group value and no ring correction for these rings is at hand)"
 	}

@@ -28,6 +28,7 @@ var centreLigands = map[string]int{
 	"CN": 1, "Ck": 0, "CS": 2, // nitrile, ketene and thiocarbonyl carbons (hetero.go)
 	"NO2": 1, "NO": 1, "NA": 1, "Nb": 0, "Nbb": 0, // nitro, nitroso, azo and azine nitrogen (hetero_n.go)
 	"SO": 2, "SO2": 2, // sulfoxide and sulfone sulfur (hetero_sx.go)
+	"Naz": 1, // azole ring "=N–", its double-bond partner implied (azole.go)
 }
 
 // impliedPartner names, per centre type, the element of a terminal
@@ -98,7 +99,7 @@ func ParseGroupName(s string) (string, error) {
 
 // ligCounts counts neighbours by type, indexed by ligandRank (int32: an
 // accumulator of a group is copied and compared per atom).
-type ligCounts [25]int32
+type ligCounts [27]int32
 
 // groupName writes a normalised group name from a centre and neighbour counts.
 func groupName(centre string, counts ligCounts) string {
@@ -126,5 +127,6 @@ func groupName(centre string, counts ligCounts) string {
 
 // ligandOrder lists the neighbour types by ligandRank.
 // The nitrogen types of hetero_n.go (nitro NO2, nitroso NO, azo NA, imine
-// NI, azine Nb and Nbb) follow N, and Nb, Nbb follow Cb; SO, SO2 (hetero_sx.go) follow S.
-var ligandOrder = []string{"O", "N", "NO2", "NO", "NA", "NI", "S", "SO", "SO2", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Nb", "Nbb", "Ct", "Cd", "Ca", "C", "H"}
+// NI, azine Nb and Nbb) follow N, and Nb, Nbb follow Cb; the azole ring nitrogens Naz, NazN (azole.go)
+// follow NI; SO, SO2 (hetero_sx.go) follow S.
+var ligandOrder = []string{"O", "N", "NO2", "NO", "NA", "NI", "Naz", "NazN", "S", "SO", "SO2", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Nb", "Nbb", "Ct", "Cd", "Ca", "C", "H"}

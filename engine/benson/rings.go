@@ -155,6 +155,9 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 			key = "1,4-dioxane"
 		}
 	}
+	if key == "" {
+		key = g.azoleRingKey(r, nd, aromatic) // azole.go
+	}
 	if key == "" && oxy == 0 {
 		key = g.sulfurRingKey(r, nd, aromatic) // hetero_sx.go
 	}

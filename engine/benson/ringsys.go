@@ -758,6 +758,7 @@ func addRingCorrections(g *graph, l lookup, est *Result) {
 	for _, name := range sysOrder {
 		est.Corrections = append(est.Corrections, sysVal[name])
 	}
+	addAzoleFlags(g, l, est) // azole.go
 }
 
 // ringCorrection returns the "ring:…" key of corrections.tsv used for ring
