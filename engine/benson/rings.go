@@ -287,33 +287,20 @@ func (g *graph) smallestRingThrough(b int) int {
 	return 0 // not a ring bond
 }
 
-// furanEntropyGroup names the flag of the furan ring correction's S° and
-// Cp (corrections.tsv: S from Benson 1976 from memory, Cp taken as
-// cyclopentene's): ΔHf° is not approximated by it, so uncertainty
-// (class.go) does not widen ΔHf°.
-const furanEntropyGroup = "ring S, Cp: furan"
-
-// addRingEntropyFlags flags the S° and Cp of an estimate that took the furan ring
-// correction (unless a group statement supplies ring:furan). With it,
-// furan's Cp is above the handbook values of testdata/thermo/train.tsv
-// (Dorofeeva 1992) by 0.1 at 300 K and 1.5–2.2 cal/(mol K) from 400 to
-// 1500 K (500 K: 27.9 against 25.8), and its S° of 58.5 cal/(mol K) is
-// about 5 below the handbook value (about 63.9, from memory; train.tsv has
-// no S° for furan). The correction is kept until a source for a better
-// one is at hand.
-//
-// The thiophene ring correction (corrections_sx.tsv) takes its Cp from the
-// same cyclopentene values (its ΔHf° and S° are derived from thiophene
-// itself), so its Cp is flagged too (thiopheneCpGroup); no reference Cp of
-// thiophene is at hand to measure it.
+// addRingEntropyFlags flags the Cp of an estimate that took the thiophene
+// ring correction (corrections_sx.tsv), unless a group statement supplies
+// ring:thiophene: its ΔHf° and S° are derived from thiophene itself, its Cp
+// is cyclopentene's (thiopheneCpGroup), and no reference Cp of thiophene is
+// at hand to measure it. (The furan ring correction took cyclopentene's Cp
+// too, which put furan's Cp 1.5–2.2 cal/(mol K) high from 400 to 1500 K;
+// its Cp and S° are now derived from furan's measured values,
+// corrections.tsv, and carry no flag.)
 func addRingEntropyFlags(l lookup, est *Result) {
 	flags := []struct {
 		correction, group, approximation, note string
 	}{
-		{"ring strain: furan", furanEntropyGroup, "S and Cp of the tabulated furan ring correction (Cp as cyclopentene's)",
-			"furan's own Cp comes out 1.5–2.2 cal/(mol K) above the handbook values from 400 to 1500 K and its S° about 5 cal/(mol K) low; ΔHf° is not affected"},
-		{"ring strain: thiophene", thiopheneCpGroup, "Cp of the thiophene ring correction taken as cyclopentene's (as furan's)",
-			"no reference Cp of thiophene at hand; furan's Cp, made the same way, comes out 1.5–2.2 cal/(mol K) high from 400 to 1500 K; ΔHf° and S° are not affected"},
+		{"ring strain: thiophene", thiopheneCpGroup, "Cp of the thiophene ring correction taken as cyclopentene's",
+			"no reference Cp of thiophene at hand; furan's Cp, made the same way, came out 1.5–2.2 cal/(mol K) high from 400 to 1500 K; ΔHf° and S° are not affected"},
 	}
 	for _, f := range flags {
 		if _, user := l.user["ring:"+strings.TrimPrefix(f.correction, "ring strain: ")]; user {
@@ -329,5 +316,6 @@ func addRingEntropyFlags(l lookup, est *Result) {
 }
 
 // thiopheneCpGroup names the flag of the thiophene ring correction's Cp
-// (addRingEntropyFlags); like furanEntropyGroup it leaves ΔHf° alone.
+// (addRingEntropyFlags); it concerns Cp only and leaves ΔHf° alone
+// (class.go, entropyOnly).
 const thiopheneCpGroup = "ring Cp: thiophene"
