@@ -291,7 +291,8 @@ func (g *graph) smallestRingThrough(b int) int {
 // ring correction (corrections_sx.tsv), unless a group statement supplies
 // ring:thiophene: its ΔHf° and S° are derived from thiophene itself, its Cp
 // is cyclopentene's (thiopheneCpGroup), and no reference Cp of thiophene is
-// at hand to measure it. (The furan ring correction took cyclopentene's Cp
+// at hand to measure it. Likewise the S° and Cp of the thiane ring
+// correction, whose ΔHf° is derived from thiane (thianeEntropyGroup). (The furan ring correction took cyclopentene's Cp
 // too, which put furan's Cp 1.5–2.2 cal/(mol K) high from 400 to 1500 K;
 // its Cp and S° are now derived from furan's measured values,
 // corrections.tsv, and carry no flag.)
@@ -301,6 +302,8 @@ func addRingEntropyFlags(l lookup, est *Result) {
 	}{
 		{"ring strain: thiophene", thiopheneCpGroup, "Cp of the thiophene ring correction taken as cyclopentene's",
 			"no reference Cp of thiophene at hand; furan's Cp, made the same way, came out 1.5–2.2 cal/(mol K) high from 400 to 1500 K; ΔHf° and S° are not affected"},
+		{"ring strain: thiane", thianeEntropyGroup, "S and Cp of the thiane ring correction taken as tetrahydropyran's",
+			"no S° or Cp of thiane at hand; the six-membered rings with one heteroatom at hand differ in ring S by up to 2.5 cal/(mol K) (tetrahydropyran 16.3, cyclohexane 18.8); ΔHf° is not affected"},
 	}
 	for _, f := range flags {
 		if _, user := l.user["ring:"+strings.TrimPrefix(f.correction, "ring strain: ")]; user {
@@ -319,3 +322,8 @@ func addRingEntropyFlags(l lookup, est *Result) {
 // (addRingEntropyFlags); it concerns Cp only and leaves ΔHf° alone
 // (class.go, entropyOnly).
 const thiopheneCpGroup = "ring Cp: thiophene"
+
+// thianeEntropyGroup names the flag of the thiane ring correction's S° and
+// Cp (tetrahydropyran's; its ΔHf° is derived from thiane, corrections_sx.tsv);
+// it concerns S° and Cp only.
+const thianeEntropyGroup = "ring S, Cp: thiane"
