@@ -45,3 +45,38 @@ func TestThianeRing(t *testing.T) {
 	require.NoError(t, err)
 	assert.Zero(t, count(u))
 }
+
+// A benzene ring fused to two others across opposite bonds (anthracene's
+// middle ring) is flagged, in any spelling: the Cbf groups cannot tell it
+// from naphthalene's fusion and anthracene comes out about 3 kcal/mol low.
+// Angular and peri fusion (phenanthrene, chrysene, triphenylene, pyrene)
+// are not flagged. The flag widens ΔHf° by at least widenRing.
+func TestAceneFlag(t *testing.T) {
+	flags := func(smi string) int {
+		n := 0
+		for _, m := range estimate(t, smi, Options{}).Missing {
+			if m.Group == aceneGroup {
+				n++
+			}
+		}
+		return n
+	}
+	for _, smi := range []string{
+		"c1ccc2cc3ccccc3cc2c1", "c1cc2cc3ccccc3cc2cc1", "C1=CC=C2C=C3C=CC=CC3=CC2=C1", // anthracene
+		"c1ccc2cc3cc4ccccc4cc3cc2c1",   // tetracene
+		"c1ccc2c(c1)ccc1cc3ccccc3cc12", // benz[a]anthracene
+		"Cc1c2ccccc2cc2ccccc12",        // 9-methylanthracene
+	} {
+		assert.Equal(t, 1, flags(smi), smi)
+	}
+	for _, smi := range []string{
+		"c1ccc2ccccc2c1", "c1ccc2c(c1)ccc1ccccc12", "c1ccc2c(c1)ccc1c2ccc2ccccc21",
+		"c1ccc2c(c1)c1ccccc1c1ccccc21", "c1cc2ccc3cccc4ccc(c1)c2c34", "c1ccc(cc1)-c1ccccc1",
+	} {
+		assert.Zero(t, flags(smi), smi)
+	}
+	a := estimate(t, "c1ccc2cc3ccccc3cc2c1", Options{})
+	p := estimate(t, "c1ccc2c(c1)ccc1ccccc12", Options{})
+	assert.GreaterOrEqual(t, a.Uncertainty, widenRing*calorie*1000, "the acene flag widens ΔHf°")
+	assert.Less(t, p.Uncertainty, widenRing*calorie*1000)
+}
