@@ -297,7 +297,7 @@ func (g *graph) typeNote(i int, centre string) string {
 		return n
 	}
 	if centre == "NI" && g.m.Atoms[i].Aromatic {
-		return " (an azole ring nitrogen, the \"=N–\" of imidazole, pyrazole, oxazole or thiazole rings: no group value and no ring correction for these rings is at hand)"
+		return " (an aromatic ring nitrogen \"=N–\" outside six-membered azine and five-membered azole rings: no group value and no ring correction for its ring is at hand)"
 	}
 	if centre == "NI" {
 		return " (an imine nitrogen, C=N: kiln's tables have no imine groups — the published imine-N values go with imine-carbon groups of their own, which the group notation cannot tell from an alkene carbon's)"
