@@ -51,9 +51,10 @@ var hbiNSXTSV string
 // a name present twice is a defect of the tables.
 var extraGroupTables = []struct{ file, text string }{
 	{"groups_nsx.tsv", groupsNSXTSV},
-	{"groups_n.tsv", groupsNTSV},         // hetero_n.go
-	{"groups_sx.tsv", groupsSXTSV},       // hetero_sx.go
-	{"groups_azole.tsv", groupsAzoleTSV}, // azole.go
+	{"groups_n.tsv", groupsNTSV},   // hetero_n.go
+	{"groups_sx.tsv", groupsSXTSV}, // hetero_sx.go
+	// azole.go
+	{"groups_azole.tsv", groupsAzoleTSV},
 }
 
 // heteroCarbonType returns CN for a nitrile carbon, CS for a thiocarbonyl
