@@ -779,6 +779,15 @@ const aceneGroup = "ring: linear (acene) fusion of benzene rings"
 // et al. 1986, from memory; angular phenanthrene, whose fused carbons are
 // typed Cbf-(Cbf)2(Cb), is not affected). The estimate is kept, flagged.
 func addAceneFlag(g *graph, est *Result) {
+	benz := 0
+	for _, b := range g.benzRing {
+		if b {
+			benz++
+		}
+	}
+	if benz < 3 {
+		return // linear fusion needs three benzenoid rings
+	}
 	shared := map[int]int{} // benzenoid rings per bond
 	for ri, r := range g.rings {
 		if !g.benzRing[ri] {
