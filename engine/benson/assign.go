@@ -22,7 +22,7 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 	counts[ligandRank["H"]] = int32(a.HCount)
 	skip := -1 // the implied partner: =C of Cd, ≡C of Ct, =O of CO
 	switch centre {
-	case "Cd", "CO", "NA", "NI", "CdN": // NI, CdN: the imine C=N (hetero_n.go)
+	case "Cd", "CO", "NA", "NI", "CdN", "Naz": // NI, CdN: the imine C=N (hetero_n.go); Naz: azole.go
 		skip = g.partner(i, 2)
 	case "Ct", "CN":
 		skip = g.partner(i, 3)

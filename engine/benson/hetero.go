@@ -54,6 +54,8 @@ var extraGroupTables = []struct{ file, text string }{
 	{"groups_nsx.tsv", groupsNSXTSV},
 	{"groups_n.tsv", groupsNTSV},   // hetero_n.go
 	{"groups_sx.tsv", groupsSXTSV}, // hetero_sx.go
+	// azole.go
+	{"groups_azole.tsv", groupsAzoleTSV},
 }
 
 // heteroCarbonType returns CN for a nitrile carbon, CS for a thiocarbonyl

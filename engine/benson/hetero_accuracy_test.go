@@ -258,6 +258,8 @@ func nitrogenKind(est *Result) string {
 		return false
 	}
 	switch {
+	case has("Naz"):
+		return "azole ring N"
 	case has("CdN-("):
 		return "imine"
 	case has("NA-("):

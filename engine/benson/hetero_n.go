@@ -54,8 +54,9 @@ import (
 //     is implied (CdN-(C)(H)), as the imine N's =C partner is (NI-(C)).
 //     Neighbours name them as ligands: C-(NI)(H)3, C-(CdN)(H)3. E/Z imines
 //     are not told apart (the groups are those of the stable isomer).
-//   - Naz, Nk: an aromatic ring "=N–" outside a benzenoid ring (azole
-//     rings: imidazole, pyrazole, oxazole, thiazole) is Naz, and the N of a
+//   - Naz, NazN (azole.go) are the "=N–" of five-membered aromatic azole
+//     rings (imidazole, pyrazole, oxazole, thiazole). Nar, Nk: any other
+//     aromatic ring "=N–" outside a benzenoid ring is Nar, and the N of a
 //     cumulated C=N (ketenimine, isocyanate, carbodiimide) is Nk. Neither
 //     is nameable: such species are refused, whichever spelling (Kekulé or
 //     aromatic) is used.
@@ -93,6 +94,9 @@ func (g *graph) nitrogenType(i int) string {
 		}
 		return "Nb"
 	}
+	if t, ok := g.azoleNType(i); ok { // the "=N–" of an azole ring: azole.go
+		return t
+	}
 	toO, toN, toC := 0, 0, 0
 	for k, b := range g.nbrBond[i] {
 		j := g.nbr[i][k]
@@ -124,7 +128,7 @@ func (g *graph) nitrogenType(i int) string {
 	case toC == 1 && toO == 0 && toN == 0 && deg == 2:
 		switch {
 		case g.m.Atoms[i].Aromatic:
-			return "Naz" // azole ring "=N–": no group (see the file comment)
+			return "Nar" // aromatic ring "=N–" outside azine and azole rings: no group (see the file comment)
 		case !g.imineCarbon(g.partner(i, 2)):
 			return "Nk" // cumulated C=N (ketenimine, isocyanate, carbodiimide): no group
 		}
@@ -361,8 +365,8 @@ const pyrroleEntropyGroup = "ring S, Cp: pyrrole"
 // ring correction (unless a group statement supplies ring:pyrrole): no S° or
 // Cp of a pyrrole was used to obtain it, and the aromatic five-membered rings
 // at hand disagree by several cal/(mol K) when carried over (with kiln's
-// groups: furan's correction gives pyrrole 3.9 cal/(mol K) below the
-// handbook S°, thiophene's 5.7 below).
+// groups: furan's correction, derived from furan's S° and Cp, gives pyrrole
+// 1.4 cal/(mol K) above the handbook S°, thiophene's 5.7 below).
 func addPyrroleFlag(l lookup, est *Result) {
 	if _, user := l.user["ring:pyrrole"]; user {
 		return
@@ -423,8 +427,10 @@ func (g *graph) oneHeteroatom(r []int, el string) bool {
 // others.
 func typeNote(centre string) string {
 	switch centre {
-	case "Naz":
-		return " (an azole ring nitrogen, the \"=N–\" of imidazole, pyrazole, oxazole or thiazole rings: no group value and no ring correction for these rings is at hand)"
+	case "NazN":
+		return azoleNazNNote // azole.go
+	case "Nar":
+		return " (an aromatic ring nitrogen \"=N–\" outside six-membered azine and five-membered azole rings: no group value and no ring correction for its ring is at hand)"
 	case "Nk":
 		return " (the nitrogen of a cumulated C=N, as in ketenimines, isocyanates and carbodiimides: no group value is at hand)"
 	case "NAcis":

@@ -72,8 +72,8 @@ func (g *graph) impliedOxide(centre string, b, j int) bool {
 }
 
 // sulfurRingKey names the ring correction of a ring whose only heteroatom
-// is one divalent sulfur (type S): thiirane, thietane, thiolane (3, 4, 5
-// members, saturated) and thiophene (five aromatic members, two double
+// is one divalent sulfur (type S): thiirane, thietane, thiolane, thiane (3,
+// 4, 5, 6 members, saturated) and thiophene (five aromatic members, two double
 // bonds); "" for any other ring.
 func (g *graph) sulfurRingKey(r []int, nd, aromatic int) string {
 	if !g.oneHeteroatom(r, "S") {
@@ -86,6 +86,8 @@ func (g *graph) sulfurRingKey(r []int, nd, aromatic int) string {
 		return "thietane"
 	case len(r) == 5 && nd == 0:
 		return "thiolane"
+	case len(r) == 6 && nd == 0:
+		return "thiane"
 	case len(r) == 5 && nd == 2 && aromatic == 5:
 		return "thiophene"
 	}

@@ -29,6 +29,7 @@ var centreLigands = map[string]int{
 	"NO2": 1, "NO": 1, "NA": 1, "Nb": 0, "Nbb": 0, // nitro, nitroso, azo and azine nitrogen (hetero_n.go)
 	"NI": 1, "CdN": 2, // imine nitrogen and imine carbon (hetero_n.go)
 	"SO": 2, "SO2": 2, // sulfoxide and sulfone sulfur (hetero_sx.go)
+	"Naz": 1, // azole ring "=N–", its double-bond partner implied (azole.go)
 }
 
 // impliedPartner names, per centre type, the element of a terminal
@@ -99,7 +100,7 @@ func ParseGroupName(s string) (string, error) {
 
 // ligCounts counts neighbours by type, indexed by ligandRank (int32: an
 // accumulator of a group is copied and compared per atom).
-type ligCounts [26]int32
+type ligCounts [28]int32
 
 // groupName writes a normalised group name from a centre and neighbour counts.
 func groupName(centre string, counts ligCounts) string {
@@ -127,6 +128,7 @@ func groupName(centre string, counts ligCounts) string {
 
 // ligandOrder lists the neighbour types by ligandRank.
 // The nitrogen types of hetero_n.go (nitro NO2, nitroso NO, azo NA, imine
-// NI, azine Nb and Nbb) follow N, and Nb, Nbb follow Cb; the imine carbon CdN
-// follows Cd; SO, SO2 (hetero_sx.go) follow S.
-var ligandOrder = []string{"O", "N", "NO2", "NO", "NA", "NI", "S", "SO", "SO2", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Nb", "Nbb", "Ct", "Cd", "CdN", "Ca", "C", "H"}
+// NI, azine Nb and Nbb) follow N, and Nb, Nbb follow Cb; the azole ring nitrogens
+// Naz, NazN (azole.go) follow NI; the imine carbon CdN follows Cd; SO, SO2
+// (hetero_sx.go) follow S.
+var ligandOrder = []string{"O", "N", "NO2", "NO", "NA", "NI", "Naz", "NazN", "S", "SO", "SO2", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Nb", "Nbb", "Ct", "Cd", "CdN", "Ca", "C", "H"}

@@ -155,6 +155,9 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 			key = "1,4-dioxane"
 		}
 	}
+	if key == "" {
+		key = g.azoleRingKey(r, nd, aromatic) // azole.go
+	}
 	if key == "" && oxy == 0 {
 		key = g.sulfurRingKey(r, nd, aromatic) // hetero_sx.go
 	}
@@ -284,33 +287,20 @@ func (g *graph) smallestRingThrough(b int) int {
 	return 0 // not a ring bond
 }
 
-// furanEntropyGroup names the flag of the furan ring correction's S° and
-// Cp (corrections.tsv: S from Benson 1976 from memory, Cp taken as
-// cyclopentene's): ΔHf° is not approximated by it, so uncertainty
-// (class.go) does not widen ΔHf°.
-const furanEntropyGroup = "ring S, Cp: furan"
-
-// addRingEntropyFlags flags the S° and Cp of an estimate that took the furan ring
-// correction (unless a group statement supplies ring:furan). With it,
-// furan's Cp is above the handbook values of testdata/thermo/train.tsv
-// (Dorofeeva 1992) by 0.1 at 300 K and 1.5–2.2 cal/(mol K) from 400 to
-// 1500 K (500 K: 27.9 against 25.8), and its S° of 58.5 cal/(mol K) is
-// about 5 below the handbook value (about 63.9, from memory; train.tsv has
-// no S° for furan). The correction is kept until a source for a better
-// one is at hand.
-//
-// The thiophene ring correction (corrections_sx.tsv) takes its Cp from the
-// same cyclopentene values (its ΔHf° and S° are derived from thiophene
-// itself), so its Cp is flagged too (thiopheneCpGroup); no reference Cp of
-// thiophene is at hand to measure it.
+// addRingEntropyFlags flags the S° and Cp of an estimate that took the
+// thiane ring correction (corrections_sx.tsv), unless a group statement
+// supplies ring:thiane: its ΔHf° is derived from thiane itself, its S° and
+// Cp are tetrahydropyran's (thianeEntropyGroup), and no S° or Cp of thiane
+// is at hand. (The furan and thiophene ring corrections took cyclopentene's
+// Cp, which put furan's Cp 1.5–2.2 cal/(mol K) high from 400 to 1500 K and
+// thiophene's 1.3–1.7 low from 300 to 600 K; their Cp, and furan's S°, are
+// now derived from the molecules' own values, and carry no flag.)
 func addRingEntropyFlags(l lookup, est *Result) {
 	flags := []struct {
 		correction, group, approximation, note string
 	}{
-		{"ring strain: furan", furanEntropyGroup, "S and Cp of the tabulated furan ring correction (Cp as cyclopentene's)",
-			"furan's own Cp comes out 1.5–2.2 cal/(mol K) above the handbook values from 400 to 1500 K and its S° about 5 cal/(mol K) low; ΔHf° is not affected"},
-		{"ring strain: thiophene", thiopheneCpGroup, "Cp of the thiophene ring correction taken as cyclopentene's (as furan's)",
-			"no reference Cp of thiophene at hand; furan's Cp, made the same way, comes out 1.5–2.2 cal/(mol K) high from 400 to 1500 K; ΔHf° and S° are not affected"},
+		{"ring strain: thiane", thianeEntropyGroup, "S and Cp of the thiane ring correction taken as tetrahydropyran's",
+			"no S° or Cp of thiane at hand; the six-membered rings with one heteroatom at hand differ in ring S by up to 2.5 cal/(mol K) (tetrahydropyran 16.3, cyclohexane 18.8); ΔHf° is not affected"},
 	}
 	for _, f := range flags {
 		if _, user := l.user["ring:"+strings.TrimPrefix(f.correction, "ring strain: ")]; user {
@@ -325,6 +315,7 @@ func addRingEntropyFlags(l lookup, est *Result) {
 	}
 }
 
-// thiopheneCpGroup names the flag of the thiophene ring correction's Cp
-// (addRingEntropyFlags); like furanEntropyGroup it leaves ΔHf° alone.
-const thiopheneCpGroup = "ring Cp: thiophene"
+// thianeEntropyGroup names the flag of the thiane ring correction's S° and
+// Cp (tetrahydropyran's; its ΔHf° is derived from thiane, corrections_sx.tsv);
+// it concerns S° and Cp only.
+const thianeEntropyGroup = "ring S, Cp: thiane"

@@ -279,6 +279,7 @@ var spellingFixed = []string{
 	"C=CC(C=O)[CH]C(C)=O", "[CH2]C(=C)C(=C)[CH2]", "c1ccccc1[CH]C=C", "OCC[CH]Cl", "FCC(O)[CH]F", "C[C](N)OC",
 	"C1CC2CCC1CC2", "C1C2CC3CC1CC(C2)C3", "C12C3C4C1C5C2C3C45", "C1=CC2CCC1C2", "C1CC2CCC1C2",
 	"C1CCC2CCCCC2C1", "c1ccc2ccccc2c1", "C1Cc2ccccc2C1", "c1ccc2c(c1)ccc1ccccc12", "CC12CCC(CC1)C(C)(C)O2",
+	"Cc1nccs1", "c1cc[nH]n1", "Cn1ccnc1", "Cc1nc[nH]n1", // azoles (azole.go; typed from the Kekulé structure)
 	"C1CC11CC1", "C12C3C1C4C2C34", "O=C1[CH]CCC1", "[O]C1=CCCC1", "c1ccoc1", "Cc1ccc(C)o1", "C1CCOC1",
 	"c1ccc2c(c1)oc1ccccc12", "CC1=CC(=O)CC(C)(C)C1", "[CH2]c1ccccc1", "C1=CC=CC1", "[CH]1C=CC=C1",
 	"Cc1cccs1", "CCc1ccsc1", "CCS(=O)C", "CS(=O)(=O)CC(C)C", "C1CCS1", "Clc1ccccc1Cl", "Fc1ccc(F)c(F)c1",
@@ -294,8 +295,8 @@ var spellingFixed = []string{
 // isotope-labelled, several missing groups, Kekulé-dependent groups.
 var spellingRefused = []string{
 	"CC[NH3+].[Cl-]", "[2H]CC[13CH3]", "C[Si](C)CC[Li]", "CC(=S)C(=S)C", "OB(O)CCP",
-	// five-membered aromatic rings with N: groups follow the Kekulé structure (kekule.go)
-	"Cc1nccs1", "c1cc[nH]n1", "Cn1ccnc1",
+	// azoles outside the derived groups (azole.go): N=N in the ring, =N– next to the donor O
+	"Cc1c[nH]nn1", "Cc1cnoc1",
 	// charges other than N⁺–O⁻ units, ions, imines, azo (hetero_n.go)
 	"C[N+]#[C-]", "C[NH3+]", "CC[N+](C)(C)C", "CC=NO", "N=Cc1ccccc1", "CCN=O",
 }
