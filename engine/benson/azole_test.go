@@ -110,7 +110,7 @@ func TestAzoleFlags(t *testing.T) {
 	for smi, want := range map[string][]string{
 		"c1cnc[nH]1": {pyrroleEntropyGroup},
 		"c1cocn1":    nil,
-		"c1cscn1":    {thiazoleGroup},
+		"c1cscn1":    {thiazoleGroup, thiopheneCpGroup},
 	} {
 		e := estimate(t, smi, Options{})
 		var got []string

@@ -287,18 +287,21 @@ func (g *graph) smallestRingThrough(b int) int {
 	return 0 // not a ring bond
 }
 
-// addRingEntropyFlags flags the S° and Cp of an estimate that took the
-// thiane ring correction (corrections_sx.tsv), unless a group statement
-// supplies ring:thiane: its ΔHf° is derived from thiane itself, its S° and
-// Cp are tetrahydropyran's (thianeEntropyGroup), and no S° or Cp of thiane
-// is at hand. (The furan and thiophene ring corrections took cyclopentene's
-// Cp, which put furan's Cp 1.5–2.2 cal/(mol K) high from 400 to 1500 K and
-// thiophene's 1.3–1.7 low from 300 to 600 K; their Cp, and furan's S°, are
-// now derived from the molecules' own values, and carry no flag.)
+// addRingEntropyFlags flags the Cp of an estimate that took the thiophene
+// ring correction (corrections_sx.tsv), unless a group statement supplies
+// ring:thiophene: its ΔHf° and S° are derived from thiophene itself, its Cp
+// is cyclopentene's (thiopheneCpGroup), and no reference Cp of thiophene is
+// at hand to measure it. Likewise the S° and Cp of the thiane ring
+// correction, whose ΔHf° is derived from thiane (thianeEntropyGroup). (The furan ring correction took cyclopentene's Cp
+// too, which put furan's Cp 1.5–2.2 cal/(mol K) high from 400 to 1500 K;
+// its Cp and S° are now derived from furan's measured values,
+// corrections.tsv, and carry no flag.)
 func addRingEntropyFlags(l lookup, est *Result) {
 	flags := []struct {
 		correction, group, approximation, note string
 	}{
+		{"ring strain: thiophene", thiopheneCpGroup, "Cp of the thiophene ring correction taken as cyclopentene's",
+			"no reference Cp of thiophene at hand; furan's Cp, made the same way, came out 1.5–2.2 cal/(mol K) high from 400 to 1500 K; ΔHf° and S° are not affected"},
 		{"ring strain: thiane", thianeEntropyGroup, "S and Cp of the thiane ring correction taken as tetrahydropyran's",
 			"no S° or Cp of thiane at hand; the six-membered rings with one heteroatom at hand differ in ring S by up to 2.5 cal/(mol K) (tetrahydropyran 16.3, cyclohexane 18.8); ΔHf° is not affected"},
 	}
@@ -314,6 +317,11 @@ func addRingEntropyFlags(l lookup, est *Result) {
 		}
 	}
 }
+
+// thiopheneCpGroup names the flag of the thiophene ring correction's Cp
+// (addRingEntropyFlags); it concerns Cp only and leaves ΔHf° alone
+// (class.go, entropyOnly).
+const thiopheneCpGroup = "ring Cp: thiophene"
 
 // thianeEntropyGroup names the flag of the thiane ring correction's S° and
 // Cp (tetrahydropyran's; its ΔHf° is derived from thiane, corrections_sx.tsv);
