@@ -45,16 +45,7 @@ func (e *Estimate) BlockSource(stamp string) string {
 	if stamp != "" {
 		b.WriteString(", " + stamp)
 	}
-	seen := map[string]bool{}
-	var srcs []string
-	for _, g := range e.Group.Groups {
-		if g.Source != "" && !seen[g.Source] {
-			seen[g.Source] = true
-			srcs = append(srcs, g.Source)
-		}
-	}
-	sort.Strings(srcs)
-	fmt.Fprintf(&b, "; Benson group additivity (group values from: %s)", strings.Join(srcs, "; "))
+	fmt.Fprintf(&b, "; Benson group additivity (group values from: %s)", strings.Join(groupSources(e.Group.Groups), "; "))
 	var approx, modelled []string
 	for _, m := range sortedMissing(e.Group) {
 		if m.Modelled() {
@@ -70,6 +61,32 @@ func (e *Estimate) BlockSource(stamp string) string {
 		b.WriteString("; modelled: " + strings.Join(modelled, ", "))
 	}
 	return b.String()
+}
+
+// groupSources lists the sources of the group terms for a block's source
+// line: each distinct source once, sorted. A term's source may itself be a
+// list joined by "; " (a value and the analogy its 1500 K Cp rests on):
+// the list is split so that a reference two terms share is named once,
+// in the order the sorted sources first give it.
+func groupSources(terms []benson.Term) []string {
+	var whole []string
+	for _, g := range terms {
+		if g.Source != "" {
+			whole = append(whole, g.Source)
+		}
+	}
+	sort.Strings(whole)
+	seen := map[string]bool{}
+	var out []string
+	for _, s := range whole {
+		for _, part := range strings.Split(s, "; ") {
+			if part = strings.TrimSpace(part); part != "" && !seen[part] {
+				seen[part] = true
+				out = append(out, part)
+			}
+		}
+	}
+	return out
 }
 
 // InsertThermoEdit returns the insertion of an estimated nasa7 block under
