@@ -46,16 +46,22 @@ func (e *Estimate) BlockSource(stamp string) string {
 		b.WriteString(", " + stamp)
 	}
 	fmt.Fprintf(&b, "; Benson group additivity (group values from: %s)", strings.Join(groupSources(e.Group.Groups), "; "))
-	var approx, modelled []string
-	for _, m := range sortedMissing(e.Group) {
-		if m.Modelled() {
+	var approx, flagged, modelled []string
+	for _, f := range e.Flags() {
+		switch m := f.Missing; {
+		case m.Modelled():
 			modelled = append(modelled, m.Group+" by the "+m.Approximation)
-		} else {
+		case UsedAsItStands(m):
+			flagged = append(flagged, m.Approximation) // the group and what it lacks
+		default:
 			approx = append(approx, m.Group+"≈"+m.Approximation)
 		}
 	}
 	if len(approx) > 0 {
 		b.WriteString("; approximated groups: " + strings.Join(approx, ", "))
+	}
+	if len(flagged) > 0 {
+		b.WriteString("; flagged groups: " + strings.Join(flagged, ", "))
 	}
 	if len(modelled) > 0 {
 		b.WriteString("; modelled: " + strings.Join(modelled, ", "))

@@ -304,25 +304,65 @@ func chainLinear(m *molecule.Molecule) bool {
 	return true
 }
 
+// Flag is one distinct approximation of an estimate and the number of
+// times the estimate makes it (a group flagged on two atoms is one Flag
+// with Count 2).
+type Flag struct {
+	benson.Missing
+	Count int
+}
+
 // Flags returns the approximations an estimate carries (missing groups,
 // radical-site increments without S°/Cp data, ring systems without
-// whole-system values, sums below the physical S° bound …), sorted by name:
-// the one list that check, estimate, summary and hover show, each entry
-// worded by FlagText. A reference-library species has none.
-func (e *Estimate) Flags() []benson.Missing {
+// whole-system values, sums below the physical S° bound …), sorted by name,
+// each distinct approximation once with its count: the one list that check,
+// estimate, summary and hover show, each entry worded by FlagText. A
+// reference-library species has none.
+func (e *Estimate) Flags() []Flag {
 	if e == nil {
 		return nil
 	}
-	return sortedMissing(e.Group)
+	return distinctFlags(sortedMissing(e.Group))
+}
+
+// distinctFlags merges identical entries of ms (the engine lists a flag
+// once per atom it applies to), keeping the order of first appearance.
+func distinctFlags(ms []benson.Missing) []Flag {
+	if len(ms) == 0 {
+		return nil
+	}
+	out := make([]Flag, 0, len(ms))
+	at := make(map[benson.Missing]int, len(ms))
+	for _, m := range ms {
+		if i, ok := at[m]; ok {
+			out[i].Count++
+			continue
+		}
+		at[m] = len(out)
+		out = append(out, Flag{Missing: m, Count: 1})
+	}
+	return out
+}
+
+// UsedAsItStands reports whether m flags a group kiln has and uses as it
+// stands, with a known shortcoming (no interaction term, a value resting on
+// one molecule), rather than a group approximated by another: its
+// Approximation is the group itself followed by what it lacks.
+func UsedAsItStands(m benson.Missing) bool {
+	return m.Approximation == m.Group || strings.HasPrefix(m.Approximation, m.Group+" ")
 }
 
 // FlagHeading is the word every command and the hover put before
-// FlagText: "MISSING group" for an approximation, "MODELLED" for a quantity computed by a
-// validated model instead of a table (benson.Missing.Modelled), which check
-// does not warn about.
-func FlagHeading(m benson.Missing) string {
-	if m.Modelled() {
+// FlagText: "MISSING group" for an approximation, "FLAGGED group" for a
+// group used as it stands with a known shortcoming (UsedAsItStands),
+// "MODELLED" for a quantity computed by a validated model instead of a
+// table (benson.Missing.Modelled), which check does not warn about.
+func FlagHeading(f Flag) string {
+	switch {
+	case f.Modelled():
 		return "MODELLED"
+	case UsedAsItStands(f.Missing):
+		return "FLAGGED group"
 	}
 	return "MISSING group"
 }
@@ -330,12 +370,28 @@ func FlagHeading(m benson.Missing) string {
 // FlagLine is a flag as a line of text: FlagHeading, a blank, FlagText
 // ("MISSING group C-(Cl)(C)(H)2 (approximated by …)"). A surface that
 // styles the parts (hover's Markdown) puts the same two together.
-func FlagLine(m benson.Missing) string { return FlagHeading(m) + " " + FlagText(m) }
+func FlagLine(f Flag) string { return FlagHeading(f) + " " + FlagText(f) }
 
 // FlagText words one approximation the same way in every command: the
-// group or quantity, what stands in for it and why.
-func FlagText(m benson.Missing) string {
+// group or quantity, "×N" when the estimate makes it N > 1 times, what
+// stands in for it and why. A group used as it stands is not "approximated
+// by" itself: the text says what its value lacks.
+func FlagText(f Flag) string {
+	m := f.Missing
 	s := m.Group
+	if f.Count > 1 {
+		s += fmt.Sprintf(" ×%d", f.Count)
+	}
+	if UsedAsItStands(m) {
+		s += " (used as it stands"
+		if rest := unparenthesise(strings.TrimSpace(strings.TrimPrefix(m.Approximation, m.Group))); rest != "" {
+			s += ", " + rest
+		}
+		if m.Note != "" {
+			s += ": " + m.Note
+		}
+		return s + ")"
+	}
 	if m.Approximation != "" {
 		verb := " (approximated by "
 		if m.Modelled() {
@@ -349,6 +405,32 @@ func FlagText(m benson.Missing) string {
 	}
 	if m.Note != "" {
 		s += " (" + m.Note + ")"
+	}
+	return s
+}
+
+// unparenthesise turns a leading parenthesised remark into a clause of
+// its own: "(value from X) without Y" → "value from X, without Y",
+// "(derived from one molecule)" → "derived from one molecule".
+func unparenthesise(s string) string {
+	if !strings.HasPrefix(s, "(") {
+		return s
+	}
+	depth := 0
+	for i, r := range s {
+		switch r {
+		case '(':
+			depth++
+		case ')':
+			depth--
+			if depth == 0 {
+				inner, rest := s[1:i], strings.TrimSpace(s[i+1:])
+				if rest == "" {
+					return inner
+				}
+				return inner + ", " + rest
+			}
+		}
 	}
 	return s
 }

@@ -129,6 +129,6 @@ func TestApproximationWithBlock(t *testing.T) {
 		}
 		require.Len(t, got, 1, "%v", res.Diagnostics)
 		assert.Equal(t, tc.sev, got[0].Severity, got[0].Message)
-		assert.Contains(t, got[0].Message, "Cd-(F)2 (value from CF2=CF2")
+		assert.Contains(t, got[0].Message, "Cd-(F)2 (used as it stands, value from CF2=CF2")
 	}
 }

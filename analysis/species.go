@@ -488,7 +488,7 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 			switch _, err := benson.ParseGroupName(m.Group); {
 			case err != nil:
 				others = append(others, s)
-			case strings.HasPrefix(m.Approximation, m.Group):
+			case UsedAsItStands(m.Missing):
 				// The group's own value, used with a known shortcoming
 				// (no interaction term, a biased published value).
 				kept = append(kept, s)
@@ -501,7 +501,7 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 			msg = append(msg, fmt.Sprintf("no value for group %s; define it with a `group` statement to replace the approximation", strings.Join(groups, ", ")))
 		}
 		if len(kept) > 0 {
-			msg = append(msg, fmt.Sprintf("group value used as an approximation: %s; a `group` statement replaces it", strings.Join(kept, ", ")))
+			msg = append(msg, fmt.Sprintf("flagged group value: %s; a `group` statement replaces it", strings.Join(kept, ", ")))
 		}
 		if len(others) > 0 {
 			msg = append(msg, fmt.Sprintf("estimated with an approximation kiln has no data for: %s; its uncertainty is widened (a thermo block with measured or computed values replaces the estimate)", strings.Join(others, ", ")))

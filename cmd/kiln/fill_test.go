@@ -65,7 +65,7 @@ func TestFillKeepsApproximationWarning(t *testing.T) {
 	path := writeTemp(t, "v.kiln", "species C2H2F2 C=C(F)F\n")
 	warned := func() bool {
 		_, stdout, _ := runKiln(t, "check", "--min-severity", "warning", path)
-		return strings.Contains(stdout, "warning: C2H2F2: group value used as an approximation: Cd-(F)2") // Cd-(F)2 outside CF2=CF2
+		return strings.Contains(stdout, "warning: C2H2F2: flagged group value: Cd-(F)2") // Cd-(F)2 outside CF2=CF2
 	}
 	require.True(t, warned(), "before fill")
 	code, _, stderr := runKiln(t, "fill", path)

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"encoding/json"
 	"os"
 	"regexp"
 	"strings"
@@ -36,4 +37,46 @@ func TestFillSourceNamesEachReferenceOnce(t *testing.T) {
 	// The file fill wrote is what check accepts.
 	code, stdout, _ := runKiln(t, "check", "--min-severity", "warning", path)
 	assert.Equal(t, exitOK, code, stdout)
+}
+
+// TestFlagOncePerDistinctApproximation: a flag the engine makes on two
+// atoms is one line with its count, in check, estimate (text and JSON) and
+// summary; a group kiln has and uses as it stands is "FLAGGED", never
+// "approximated by" itself. Diagnostic codes stay as they were.
+func TestFlagOncePerDistinctApproximation(t *testing.T) {
+	const smiles = "FC(F)=CC=C(F)F" // Cd-(F)2 twice, each next to a CH carbon
+	_, text, _ := runKiln(t, "estimate", smiles)
+	assert.Equal(t, 1, strings.Count(text, "Cd-(F)2 ×2 (used as it stands"), text)
+	assert.Contains(t, text, "FLAGGED group Cd-(F)2 ×2 (used as it stands, value from CF2=CF2")
+	assert.NotContains(t, text, "approximated by Cd-(F)2")
+	assert.NotContains(t, text, "MISSING group Cd-(F)2")
+
+	_, stdout, stderr := runKiln(t, "estimate", "--json", smiles)
+	var est []estimateJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &est), stderr)
+	require.Len(t, est, 1)
+	assert.Equal(t, []string{"Cd-(F)2"}, est[0].MissingGroups)
+	require.Len(t, est[0].Flags, 1)
+	assert.True(t, strings.HasPrefix(est[0].Flags[0], "Cd-(F)2 ×2 (used as it stands"), est[0].Flags[0])
+
+	path := writeTemp(t, "f.kiln", "species diene "+smiles+"\nspecies vdf C=C(F)F\n")
+	_, stdout, _ = runKiln(t, "check", "--format", "json", path)
+	var diags []checkDiag
+	require.NoError(t, json.Unmarshal([]byte(stdout), &diags))
+	var warned []string
+	for _, d := range diags {
+		if d.Severity == "warning" {
+			assert.Equal(t, "missing-group", d.Code, d.Message)
+			warned = append(warned, d.Message)
+		}
+	}
+	require.Len(t, warned, 2, "one warning per species")
+	assert.Equal(t, 1, strings.Count(warned[0], "(used as it stands"), warned[0])
+	assert.Contains(t, warned[0], "diene: flagged group value: Cd-(F)2 ×2 (used as it stands")
+	assert.Contains(t, warned[1], "vdf: flagged group value: Cd-(F)2 (used as it stands")
+	assert.NotContains(t, warned[1], "×", "a flag made once has no count")
+
+	_, text, _ = runKiln(t, "summary", path)
+	text = strings.Join(strings.Fields(text), " ")
+	assert.Equal(t, 1, strings.Count(text, "diene: FLAGGED group Cd-(F)2 ×2"), text)
 }

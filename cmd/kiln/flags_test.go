@@ -144,10 +144,14 @@ func TestFlagsAgreeAcrossCommands(t *testing.T) {
 }
 
 // headed is a flag under the heading every surface gives it (FlagHeading):
-// MODELLED for a quantity a validated model computes, else MISSING group.
+// MODELLED for a quantity a validated model computes, FLAGGED group for a
+// group used as it stands, else MISSING group.
 func headed(flag string) string {
-	if modelled(flag) {
+	switch {
+	case modelled(flag):
 		return "MODELLED " + flag
+	case strings.Contains(flag, " (used as it stands"):
+		return "FLAGGED group " + flag
 	}
 	return "MISSING group " + flag
 }

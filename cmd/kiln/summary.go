@@ -8,7 +8,6 @@ import (
 	"strings"
 
 	"kiln.dev/kiln/analysis"
-	"kiln.dev/kiln/engine/benson"
 )
 
 // summaryJSON is the output of `kiln summary --json`; the keys are a public
@@ -36,7 +35,7 @@ type summarySpecies struct {
 	Flags []string `json:"flags,omitempty"`
 	// flags are the approximations Flags words, for the text output
 	// (analysis.FlagLine: heading and words together).
-	flags []benson.Missing
+	flags []analysis.Flag
 }
 
 type summaryReaction struct {
