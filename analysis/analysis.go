@@ -137,6 +137,11 @@ type Estimate struct {
 	cp0, cpInf float64 // classical limits for the fit (J/(mol K))
 	tMid       float64
 	tHigh      float64
+	// flags are approximations analysis adds to the engine's (Group.Missing):
+	// a Cp below the ideal-gas floor (cpfloor.go).
+	flags []benson.Missing
+	// cpFloor, when set, refuses the NASA-7 fit (Cp below the floor).
+	cpFloor *cpFloorError
 }
 
 // GivenThermo is the thermochemistry written in the file for a species.

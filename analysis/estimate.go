@@ -196,6 +196,9 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		fit: &fitResult{}, tMid: o.TMid, tHigh: o.THigh}
 	nAtoms, linear, rotors := shape(m)
 	e.cp0, e.cpInf = nasa.ClassicalLimits(nAtoms, linear, rotors)
+	if f, refuse, below := cpFloorCheck(g.Cp, nAtoms, linear); below {
+		e.flags, e.cpFloor = append(e.flags, f), refuse
+	}
 	e.model = newGroupThermo(g.Hf298, g.S298, benson.StdTemps[:], g.Cp[:])
 	e.model.continueAlongTail(e.cp0, e.cpInf)
 	return e, nil
@@ -322,7 +325,12 @@ func (e *Estimate) Flags() []Flag {
 	if e == nil {
 		return nil
 	}
-	return distinctFlags(sortedMissing(e.Group))
+	ms := sortedMissing(e.Group)
+	if len(e.flags) > 0 {
+		ms = append(ms, e.flags...)
+		sort.SliceStable(ms, func(i, j int) bool { return ms[i].Group < ms[j].Group })
+	}
+	return distinctFlags(ms)
 }
 
 // distinctFlags merges identical entries of ms (the engine lists a flag

@@ -29,6 +29,10 @@ func RefusalReason(err error) string {
 // a fit refusal to people (fill's skip list, hover, estimate) uses it.
 func FitRefusal(err error, u Units) string {
 	const block = "give the species a nasa7 or thermo-table block"
+	var fe *cpFloorError
+	if errors.As(err, &fe) {
+		return fe.words(u) + "; " + block
+	}
 	var se *nasa.ShapeError
 	if errors.As(err, &se) {
 		switch se.Test {

@@ -479,13 +479,15 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 		// Every approximation of the estimate is reported, worded as
 		// estimate, summary and hover word it; what a validated model
 		// computes (a radical site's S°/Cp change) is shown there, not here.
-		var groups, kept, others []string
+		var groups, kept, others, unsound []string
 		for _, m := range miss {
 			if m.Modelled() {
 				continue // a validated model, shown with the estimate, not a warning
 			}
 			s := FlagText(m)
 			switch _, err := benson.ParseGroupName(m.Group); {
+			case m.Group == benson.EntropyFloorGroup || m.Group == CpFloorGroup:
+				unsound = append(unsound, s)
 			case err != nil:
 				others = append(others, s)
 			case UsedAsItStands(m.Missing):
@@ -505,6 +507,11 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 		}
 		if len(others) > 0 {
 			msg = append(msg, fmt.Sprintf("estimated with an approximation kiln has no data for: %s; its uncertainty is widened (a thermo block with measured or computed values replaces the estimate)", strings.Join(others, ", ")))
+		}
+		if len(unsound) > 0 {
+			// Below a physical bound: fill writes no block from it
+			// (Estimate.NASA7 refuses), so check says so before fill.
+			msg = append(msg, fmt.Sprintf("the estimate is below a physical bound: %s; kiln writes no NASA-7 block from it (a thermo block with measured or computed values replaces the estimate)", strings.Join(unsound, ", ")))
 		}
 		if len(msg) > 0 {
 			// With a usable thermo block of its own (other than the
@@ -845,18 +852,20 @@ func (a *analysis) cpFloor(path string, sp *Species) {
 	if floor <= 0 {
 		return
 	}
-	cp0, _ := nasa.ClassicalLimits(n, lin, 0)
 	d, g := sp.Decl, sp.Given
 	report := func(span speciesfile.RelSpan, T, cp float64) {
 		a.report(path, speciesfile.Diagnostic{Span: a.at(span), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeNonphysicalThermo,
-			Message: fmt.Sprintf("%s: Cp at %g K is %s, below %s, the translational and rotational heat capacity of any %s of %d atoms", sp.Name, T, a.entropy(cp), a.entropy(cp0), shapeWord(n, lin), n)})
+			Message: sp.Name + ": " + cpFloorMessage(a.res.Units(), T, cp, n, lin)})
 	}
 	if t := d.Table; t != nil && g.Table != nil {
-		for _, p := range t.Cp {
-			if p.Cp.SI > 0 && p.Cp.SI < floor && p.T.SI >= nasa.FloorFrom {
-				report(speciesfile.RelSpan{From: p.T.Tok.Span.From, To: p.Cp.Tok.Span.To}, p.T.SI, p.Cp.SI)
-				return
-			}
+		T, cp := make([]float64, len(t.Cp)), make([]float64, len(t.Cp))
+		for i, p := range t.Cp {
+			T[i], cp[i] = p.T.SI, p.Cp.SI
+		}
+		if i, ok := cpBelowFloor(n, lin, T, cp); ok {
+			p := t.Cp[i]
+			report(speciesfile.RelSpan{From: p.T.Tok.Span.From, To: p.Cp.Tok.Span.To}, p.T.SI, p.Cp.SI)
+			return
 		}
 	}
 	if b := d.NASA7; b != nil && g.Poly != nil {

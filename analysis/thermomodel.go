@@ -214,9 +214,15 @@ func (e *Estimate) NASA7() (nasa.NASA7, nasa.FitReport, error) {
 			// is not written as data (fill, the quick fix, estimate
 			// --nasa all come here).
 			if floor, below := g.EntropyFloor(); below {
-				f.err = fmt.Errorf("the estimated S°298 %.1f J/(mol K) is below %.1f J/(mol K), the translational plus least rotational entropy of any structure of this mass, so the group values do not add up for this structure; kiln writes no polynomial from it (give the species a thermo block with measured or computed values)", g.S298, floor)
+				f.err = fmt.Errorf("the estimated S°298 %.1f J/(mol K) is below %.1f J/(mol K), the translational plus least rotational entropy of any structure of this mass, so the group values do not add up for this structure; kiln writes no polynomial from it", g.S298, floor)
 				return
 			}
+		}
+		if e.cpFloor != nil {
+			// Nor a Cp below the translational and rotational heat
+			// capacity (the bound nonphysical-thermo applies to blocks).
+			f.err = e.cpFloor
+			return
 		}
 		// One Wilhoit curve per estimate: the fit extrapolates with the
 		// curve the reaction checks' model continues along (nasa.Fit

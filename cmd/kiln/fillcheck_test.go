@@ -80,3 +80,69 @@ func TestFlagOncePerDistinctApproximation(t *testing.T) {
 	text = strings.Join(strings.Fields(text), " ")
 	assert.Equal(t, 1, strings.Count(text, "diene: FLAGGED group Cd-(F)2 ×2"), text)
 }
+
+// lowCpGroup is a group statement whose Cp lies below what any molecule of
+// CCl4's shape has from translation and rotation alone (4 R = 7.95
+// cal/(mol·K) for 5 atoms, non-linear); test values, not data.
+const lowCpGroup = `units kcal/mol
+group C-(Cl)4
+  hf298 -22.9
+  s298 78.97
+  cp 300=2.0 400=2.2 500=2.3 600=2.4 800=2.5 1000=2.5 1500=2.6
+  source deliberately too low Cp test
+species CCl4 ClC(Cl)(Cl)Cl
+`
+
+// TestCpFloorFillCheckAgree: an estimate whose Cp is below the ideal-gas
+// floor is flagged by check before fill (missing-group, on the species),
+// fill writes no block from it (as for an S°298 below its bound), and
+// check of the file after fill says the same, with no nonphysical-thermo
+// from a block fill should not have written. The bound is the one
+// nonphysical-thermo applies to blocks: a table with the same numbers gets
+// that warning.
+func TestCpFloorFillCheckAgree(t *testing.T) {
+	path := writeTemp(t, "cp.kiln", lowCpGroup)
+	checkWarnings := func() []checkDiag {
+		_, stdout, stderr := runKiln(t, "check", "--format", "json", "--min-severity", "warning", path)
+		var diags []checkDiag
+		require.NoError(t, json.Unmarshal([]byte(stdout), &diags), stderr)
+		return diags
+	}
+	before := checkWarnings()
+	require.Len(t, before, 1, "%+v", before)
+	assert.Equal(t, "missing-group", before[0].Code)
+	assert.Equal(t, 7, before[0].Line)
+	assert.Contains(t, before[0].Message, "CCl4: the estimate is below a physical bound: Cp below the ideal-gas lower bound")
+	assert.Contains(t, before[0].Message, "Cp at 300 K is 8.4 J/(mol·K), below 33.3 J/(mol·K), the translational and rotational heat capacity of any non-linear molecule of 5 atoms")
+
+	code, _, stderr := runKiln(t, "fill", path)
+	assert.Equal(t, exitProblems, code, stderr)
+	assert.Contains(t, stderr, "skipped CCl4: no NASA-7 polynomial: the estimated Cp at 300 K is 2.00 cal/(mol·K), below 7.95 cal/(mol·K)")
+	src, err := os.ReadFile(path)
+	require.NoError(t, err)
+	assert.Equal(t, lowCpGroup, string(src), "fill wrote nothing")
+	assert.Equal(t, before, checkWarnings(), "check after fill says what it said before")
+
+	// summary --json carries the same flag.
+	summary := func(args ...string) summaryJSON {
+		_, stdout, stderr := runKiln(t, append([]string{"summary", "--json"}, args...)...)
+		var s summaryJSON
+		require.NoError(t, json.Unmarshal([]byte(stdout), &s), stderr)
+		return s
+	}
+	s := summary(path)
+	require.Len(t, s.Species, 1)
+	require.Len(t, s.Species[0].Flags, 1)
+	assert.Contains(t, s.Species[0].Flags[0], "Cp below the ideal-gas lower bound")
+
+	// The same numbers as a block are nonphysical-thermo: one bound.
+	block := writeTemp(t, "t.kiln", `units kcal/mol
+species CCl4 ClC(Cl)(Cl)Cl
+  thermo-table
+    hf298 -22.9
+    s298 74.0
+    cp 300=2.0 400=2.2 500=2.3 600=2.4 800=2.5 1000=2.5 1500=2.6
+`)
+	_, stdout, _ := runKiln(t, "check", "--min-severity", "warning", block)
+	assert.Contains(t, stdout, "warning: CCl4: Cp at 300 K is 2.00 cal/(mol·K), below 7.95 cal/(mol·K), the translational and rotational heat capacity of any non-linear molecule of 5 atoms [nonphysical-thermo]")
+}

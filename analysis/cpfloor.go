@@ -1,0 +1,80 @@
+package analysis
+
+import (
+	"fmt"
+
+	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/nasa"
+)
+
+// The heat-capacity floor, one rule for given blocks and estimates.
+//
+// Every ideal-gas molecule has at least its translational and rotational
+// heat capacity; nasa.CpFloor (with its slack) is that bound, applied from
+// nasa.FloorFrom up. A given block below it is nonphysical-thermo (cpFloor
+// in species.go); an estimate below it — only user-supplied group values
+// get there — carries the flag CpFloorGroup, which check reports as
+// missing-group, and gets no NASA-7 polynomial (Estimate.NASA7), as an
+// estimate below the S°298 bound does (benson.EntropyFloorGroup). So what
+// fill writes, check accepts.
+
+// CpFloorGroup is the Missing.Group of an estimate whose Cp lies below the
+// translational and rotational heat capacity of its shape.
+const CpFloorGroup = "Cp below the ideal-gas lower bound"
+
+// cpBelowFloor returns the index of the first temperature T[i] ≥
+// nasa.FloorFrom whose cp[i] (J/(mol K)) is positive but below
+// nasa.CpFloor(n, linear); ok is false when there is none (or n < 1). A Cp
+// that is not positive is reported by other checks.
+func cpBelowFloor(n int, linear bool, T, cp []float64) (i int, ok bool) {
+	floor := nasa.CpFloor(n, linear)
+	if floor <= 0 {
+		return 0, false
+	}
+	for i := range T {
+		if T[i] >= nasa.FloorFrom && cp[i] > 0 && cp[i] < floor {
+			return i, true
+		}
+	}
+	return 0, false
+}
+
+// cpFloorMessage words a Cp below the floor in the units u: the value,
+// and Cp0 of nasa.ClassicalLimits, the translational and rotational heat
+// capacity of the shape (the floor is 95 % of it).
+func cpFloorMessage(u Units, T, cp float64, n int, linear bool) string {
+	cp0, _ := nasa.ClassicalLimits(n, linear, 0)
+	return fmt.Sprintf("Cp at %g K is %s, below %s, the translational and rotational heat capacity of any %s of %d atoms",
+		T, u.Entropy(cp), u.Entropy(cp0), shapeWord(n, linear), n)
+}
+
+// cpFloorError is the refusal of a NASA-7 fit to an estimate whose Cp lies
+// below the floor; FitRefusal words it in the display units.
+type cpFloorError struct {
+	T, Cp  float64 // K, J/(mol K)
+	N      int
+	Linear bool
+}
+
+func (e *cpFloorError) Error() string { return e.words(Units{KJ: true}) }
+
+func (e *cpFloorError) words(u Units) string {
+	return "the estimated " + cpFloorMessage(u, e.T, e.Cp, e.N, e.Linear) +
+		", so the group values do not add up for this structure (check any user-supplied `group` values); kiln writes no polynomial from it"
+}
+
+// cpFloorCheck tests an estimate's Cp at the group temperatures against
+// the floor for a molecule of n atoms: the flag and the fit refusal, or ok
+// false.
+func cpFloorCheck(cp [7]float64, n int, linear bool) (benson.Missing, *cpFloorError, bool) {
+	i, below := cpBelowFloor(n, linear, benson.StdTemps[:], cp[:])
+	if !below {
+		return benson.Missing{}, nil, false
+	}
+	e := &cpFloorError{T: benson.StdTemps[i], Cp: cp[i], N: n, Linear: linear}
+	return benson.Missing{
+		Group:         CpFloorGroup,
+		Approximation: "the group sum as it stands",
+		Note:          cpFloorMessage(Units{KJ: true}, e.T, e.Cp, n, linear) + "; the group values do not add up for this structure (check any user-supplied `group` values, or give it a thermo block)",
+	}, e, true
+}
