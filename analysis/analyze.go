@@ -41,6 +41,9 @@ type analysis struct {
 	order []string
 	// userKey identifies the user-defined groups in estimate cache keys.
 	userKey string
+	// userFlags are the approximations of user-defined groups (a Cp not
+	// given at every group temperature, groupcp.go), one per group.
+	userFlags []benson.Missing
 	// memo holds the per-statement units kept between analyses (nil when
 	// the workspace is not incremental).
 	memo *memo
@@ -288,6 +291,18 @@ func (a *analysis) groups() {
 				a.report(path, speciesfile.Diagnostic{Span: nameSpan, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeGroupOverride,
 					Message: fmt.Sprintf("group %s replaces kiln's built-in value (%s; %s) for every species in scope", name, a.thermoSummary(b.Hf298, b.S298), b.Source)})
 			}
+			if g.Hf298 != nil && g.S298 != nil && len(g.Cp) > 0 {
+				if gap := groupCpGap(g.Cp); gap != "" {
+					span := nameSpan
+					for _, at := range g.Attrs {
+						if at.Key.Text == "cp" {
+							span = at.Span.At(f.GroupStart(k))
+						}
+					}
+					a.report(path, speciesfile.Diagnostic{Span: span, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeMissingGroup,
+						Message: fmt.Sprintf("group %s: %s, and estimates that use the group are flagged; %s", name, gap, giveAllSeven())})
+				}
+			}
 			gr := &Group{Name: name, Loc: Location{File: path, Span: nameSpan}, Decl: g}
 			seen[name] = gr
 			a.res.Groups = append(a.res.Groups, gr)
@@ -303,6 +318,28 @@ func builtinGroup(name string) (benson.GroupValue, bool) {
 		}
 	}
 	return benson.GroupValue{}, false
+}
+
+// setUserGroups converts the visible group statements to engine values
+// (userGroups), and sets what estimates need besides them: the flags of
+// their approximations and the cache key of both.
+func (a *analysis) setUserGroups() []benson.GroupValue {
+	user := a.userGroups()
+	a.userFlags = nil
+	for _, g := range a.res.Groups {
+		if d := g.Decl; d.Hf298 != nil && d.S298 != nil && len(d.Cp) > 0 {
+			if gap := groupCpGap(d.Cp); gap != "" {
+				a.userFlags = append(a.userFlags, userCpFlag(g.Name, gap))
+			}
+		}
+	}
+	if len(user) > 0 {
+		a.userKey = groupsKey(user)
+		for _, f := range a.userFlags {
+			a.userKey += "|" + f.Group + ":" + f.Note
+		}
+	}
+	return user
 }
 
 // userGroups converts the visible group statements to engine values. Groups

@@ -308,10 +308,7 @@ func (w *Workspace) loadSide(ctx context.Context, path string) (*compareSide, er
 		return nil, err
 	}
 	a.groups()
-	s := &compareSide{a: a, user: a.userGroups(), byName: map[string]*Species{}, pos: map[string]int{}}
-	if len(s.user) > 0 {
-		a.userKey = groupsKey(s.user)
-	}
+	s := &compareSide{a: a, user: a.setUserGroups(), byName: map[string]*Species{}, pos: map[string]int{}}
 	nd := 0
 	for _, p := range a.order {
 		nd += len(a.res.Files[p].Species)

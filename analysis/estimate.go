@@ -26,6 +26,9 @@ type EstimateOptions struct {
 	ExplicitRange bool
 
 	userKey string // groupsKey(UserGroups), computed once per analysis
+	// userFlags are the approximations of the user groups (groupcp.go): an
+	// estimate that uses one carries it. userKey covers them.
+	userFlags []benson.Missing
 }
 
 // key identifies an estimate in the cache: the canonical structure and every
@@ -196,6 +199,11 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		fit: &fitResult{}, tMid: o.TMid, tHigh: o.THigh}
 	nAtoms, linear, rotors := shape(m)
 	e.cp0, e.cpInf = nasa.ClassicalLimits(nAtoms, linear, rotors)
+	for _, f := range o.userFlags {
+		if usesGroup(g, f.Group) {
+			e.flags = append(e.flags, f)
+		}
+	}
 	if f, refuse, below := cpFloorCheck(g.Cp, nAtoms, linear); below {
 		e.flags, e.cpFloor = append(e.flags, f), refuse
 	}
@@ -305,6 +313,18 @@ func chainLinear(m *molecule.Molecule) bool {
 		}
 	}
 	return true
+}
+
+// usesGroup reports whether the estimate g has a term for group name, or
+// a term approximated by it ("X ≈ name").
+func usesGroup(g *benson.Result, name string) bool {
+	for _, t := range g.Groups {
+		own, by, _ := strings.Cut(t.Name, " ≈ ")
+		if own == name || by == name {
+			return true
+		}
+	}
+	return false
 }
 
 // Flag is one distinct approximation of an estimate and the number of

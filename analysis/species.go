@@ -22,10 +22,7 @@ import (
 // declaration (speciesRules) form one memoized unit; duplicate names and
 // structures are checked across declarations on every analysis.
 func (a *analysis) species() error {
-	user := a.userGroups()
-	if len(user) > 0 {
-		a.userKey = groupsKey(user) // before the workers read it
-	}
+	user := a.setUserGroups() // before the workers read userKey and userFlags
 	nSpecies := 0
 	for _, path := range a.order {
 		nSpecies += len(a.res.Files[path].Species)
@@ -395,6 +392,7 @@ type parsed struct {
 func (a *analysis) estimateOptions(d *speciesfile.Species, user []benson.GroupValue) EstimateOptions {
 	return EstimateOptions{
 		userKey:        a.userKey,
+		userFlags:      a.userFlags,
 		Multiplicity:   intAttr(d.Multiplicity),
 		Symmetry:       intAttr(d.Symmetry),
 		OpticalIsomers: intAttr(d.OpticalIsomers),
@@ -483,6 +481,9 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 		for _, m := range miss {
 			if m.Modelled() {
 				continue // a validated model, shown with the estimate, not a warning
+			}
+			if isUserCpFlag(m.Missing) {
+				continue // reported once, on the group's `cp` line
 			}
 			s := FlagText(m)
 			switch _, err := benson.ParseGroupName(m.Group); {

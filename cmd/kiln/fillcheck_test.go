@@ -146,3 +146,58 @@ species CCl4 ClC(Cl)(Cl)Cl
 	_, stdout, _ := runKiln(t, "check", "--min-severity", "warning", block)
 	assert.Contains(t, stdout, "warning: CCl4: Cp at 300 K is 2.00 cal/(mol·K), below 7.95 cal/(mol·K), the translational and rotational heat capacity of any non-linear molecule of 5 atoms [nonphysical-thermo]")
 }
+
+// TestGroupCpAtFewerTemperatures: a `group` whose cp line does not give
+// the seven group temperatures is reported on that line, saying which
+// temperatures are held constant and which interpolated; estimates that
+// use it carry the flag (summary text and JSON, the source line fill
+// writes), and check of the filled file reports the group again, not the
+// block fill wrote.
+func TestGroupCpAtFewerTemperatures(t *testing.T) {
+	const head = "group C-(Cl)4\n  hf298 -22.9\n  s298 78.97\n"
+	for _, tc := range []struct {
+		cp, want string
+	}{
+		{"300=20.0", "group C-(Cl)4: Cp given at 300 K only; 400–1500 K held at the 300 K value, and estimates that use the group are flagged; give all seven temperatures 300 400 500 600 800 1000 1500 K"},
+		{"300=20.0 1000=25.4", "group C-(Cl)4: Cp given at 300 and 1000 K only; 400–800 K interpolated linearly and 1500 K held at the 1000 K value"},
+		{"300=20.0 500=23.0 1000=25.4 1500=25.8", "group C-(Cl)4: Cp given at 300, 500, 1000 and 1500 K; 400, 600 and 800 K interpolated linearly"},
+		{"400=21.0 1500=25.8", "Cp given at 400 and 1500 K only; 300 K held at the 400 K value and 500–1000 K interpolated linearly"},
+	} {
+		src := head + "  cp " + tc.cp + "\n  source test values\nspecies CCl4 ClC(Cl)(Cl)Cl\n"
+		path := writeTemp(t, "g.kiln", src)
+		_, stdout, stderr := runKiln(t, "check", "--format", "json", "--min-severity", "warning", path)
+		var diags []checkDiag
+		require.NoError(t, json.Unmarshal([]byte(stdout), &diags), stderr)
+		require.Len(t, diags, 1, "one warning, on the group's cp line: %+v", diags)
+		assert.Equal(t, "missing-group", diags[0].Code)
+		assert.Equal(t, "warning", diags[0].Severity)
+		assert.Equal(t, 4, diags[0].Line, "the cp line")
+		assert.Equal(t, 3, diags[0].Column)
+		assert.Contains(t, diags[0].Message, tc.want)
+
+		_, stdout, stderr = runKiln(t, "summary", "--json", path)
+		var s summaryJSON
+		require.NoError(t, json.Unmarshal([]byte(stdout), &s), stderr)
+		require.Len(t, s.Species, 1)
+		require.Len(t, s.Species[0].Flags, 1, tc.cp)
+		assert.True(t, strings.HasPrefix(s.Species[0].Flags[0], "C-(Cl)4 (used as it stands, with Cp filled in from the temperatures its `group` statement gives: Cp given at"), s.Species[0].Flags[0])
+
+		code, _, stderr := runKiln(t, "fill", path)
+		require.Equal(t, exitOK, code, stderr)
+		b, err := os.ReadFile(path)
+		require.NoError(t, err)
+		assert.Contains(t, string(b), "flagged groups: C-(Cl)4 with Cp filled in from the temperatures its `group` statement gives")
+		_, stdout, stderr = runKiln(t, "check", "--format", "json", "--min-severity", "warning", path)
+		var after []checkDiag
+		require.NoError(t, json.Unmarshal([]byte(stdout), &after), stderr)
+		assert.Equal(t, diags, after, "after fill, the same one warning")
+	}
+
+	// All seven temperatures: nothing to report, no flag.
+	path := writeTemp(t, "g7.kiln", head+"  cp 300=20.0 400=22.0 500=23.3 600=24.1 800=25.0 1000=25.4 1500=25.8\nspecies CCl4 ClC(Cl)(Cl)Cl\n")
+	code, stdout, _ := runKiln(t, "check", "--min-severity", "warning", path)
+	assert.Equal(t, exitOK, code)
+	assert.Empty(t, stdout)
+	_, stdout, _ = runKiln(t, "summary", path)
+	assert.NotContains(t, stdout, "FLAGGED")
+}
