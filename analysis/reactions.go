@@ -333,7 +333,28 @@ func (a *analysis) reaction(path string, d *speciesfile.Reaction, start int, equ
 			undeclared(*c, "falloff collider")
 		}
 	}
+	if !r.Resolved {
+		a.forwardOnly(d, r)
+	}
 	return r
+}
+
+// forwardOnly gives a reaction that names an undeclared species its k_f at
+// 1000 K and the settings' pressure, which needs only the rate parameters
+// (and the bath gas's efficiency, 1 for an undeclared one). Balance,
+// thermochemistry, k_r and the collision check need the species and are
+// not computed; a rate no reaction can have (nonphysicalRate) gives no k_f.
+func (a *analysis) forwardOnly(d *speciesfile.Reaction, r *Reaction) {
+	m, ok := a.rateModelOf(d, r)
+	if !ok {
+		return
+	}
+	if _, why := nonphysicalRate(d, m); why != "" {
+		return
+	}
+	if v := m.forward(1000, a.set.pressure()); finite(v) {
+		r.ForwardRate1000, r.ForwardOrder = &v, m.fwdOrder
+	}
 }
 
 // initKp gives r the Kp entries of every reported temperature, unknown

@@ -201,3 +201,37 @@ func TestGroupCpAtFewerTemperatures(t *testing.T) {
 	_, stdout, _ = runKiln(t, "summary", path)
 	assert.NotContains(t, stdout, "FLAGGED")
 }
+
+// TestSummaryForwardRateWithUndeclaredSpecies: k_f needs only the rate
+// parameters, so summary shows it for a reaction that names an undeclared
+// species (plain and falloff), while balance, thermochemistry and k_r,
+// which need the species, stay empty.
+func TestSummaryForwardRateWithUndeclaredSpecies(t *testing.T) {
+	path := writeTemp(t, "r.kiln", `species NH2 [NH2]
+species NO [N]=O
+species OH [OH]
+reaction NH2 + NO <=> NNH + OH  A=9.3e11 n=0 Ea=0
+reaction NNH + NO (+M) <=> OH + OH (+M)  A=1e12 n=0 Ea=0
+  low-pressure A=1e15 n=0 Ea=0
+`)
+	code, stdout, stderr := runKiln(t, "summary", "--json", path)
+	assert.Equal(t, exitProblems, code, "the file has errors")
+	var s summaryJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &s), stderr)
+	require.Len(t, s.Reactions, 2)
+	r := s.Reactions[0]
+	require.NotNil(t, r.ForwardRate["1000"], "k_f of line 4")
+	assert.InDelta(t, 9.3e11, *r.ForwardRate["1000"], 1)
+	assert.Equal(t, "cm³/(mol·s)", r.ForwardRateUnits)
+	assert.Nil(t, r.ReverseRate["1000"])
+	assert.Nil(t, r.Balanced)
+	assert.Nil(t, r.DH298)
+	// Falloff at 1 atm, 1000 K: [M] = P/RT = 1.2187e-5 mol/cm3, Pr = k0[M]/k∞
+	// = 0.012187, k = k∞ Pr/(1+Pr) (Lindemann) = 1.2040e10.
+	f := s.Reactions[1]
+	require.NotNil(t, f.ForwardRate["1000"], "k_f of line 5")
+	assert.InEpsilon(t, 1.2040e10, *f.ForwardRate["1000"], 1e-3)
+
+	_, text, _ := runKiln(t, "summary", path)
+	assert.Regexp(t, `(?m)^4 +NH2 \+ NO <=> NNH \+ OH +9\.3e\+11 cm³/\(mol·s\)`, text)
+}
