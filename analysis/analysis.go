@@ -71,12 +71,36 @@ func (s Settings) pressure() float64 {
 // ThermoSource says where the thermochemistry of a species comes from.
 type ThermoSource string
 
-// Thermo sources; the strings are part of the summary JSON contract.
+// Thermo sources; the strings are part of the summary JSON contract
+// (thermo_source: "file", "estimate" or "none", nothing else). Kiln's
+// reference-library data are not a fourth value: such a species is
+// SourceEstimate, refined by Species.ReferenceLibrary (the JSON key
+// reference_library, the word "library" in text; ThermoWord).
 const (
 	SourceFile     ThermoSource = "file"
 	SourceEstimate ThermoSource = "estimate"
 	SourceNone     ThermoSource = "none"
 )
+
+// ReferenceLibrary names the reference-library entry whose tabulated data
+// are the thermo the analysis uses for sp; "" when that is the file's
+// block, a group-additivity estimate or nothing.
+func (sp *Species) ReferenceLibrary() string {
+	if sp.Source != SourceEstimate || sp.Estimate == nil {
+		return ""
+	}
+	return sp.Estimate.Library
+}
+
+// ThermoWord is sp's thermo source as text shows it: the JSON value
+// (Source), except "library" for reference-library data (ReferenceLibrary),
+// which are tabulated, not estimated.
+func (sp *Species) ThermoWord() string {
+	if sp.ReferenceLibrary() != "" {
+		return "library"
+	}
+	return string(sp.Source)
+}
 
 // Location is a span in a file of the workspace.
 type Location struct {

@@ -198,8 +198,8 @@ func inUse(sp *analysis.Species) (*thermoValues, string) {
 		}
 	case analysis.SourceEstimate:
 		if v := estimateValues(sp.Estimate); v != nil {
-			if sp.Estimate.Library != "" {
-				return v, "library" // tabulated data, not a group estimate
+			if sp.ReferenceLibrary() != "" {
+				return v, sp.ThermoWord() // tabulated data, not a group estimate
 			}
 			return v, "estimated"
 		}

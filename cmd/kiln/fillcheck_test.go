@@ -235,3 +235,48 @@ reaction NNH + NO (+M) <=> OH + OH (+M)  A=1e12 n=0 Ea=0
 	_, text, _ := runKiln(t, "summary", path)
 	assert.Regexp(t, `(?m)^4 +NH2 \+ NO <=> NNH \+ OH +9\.3e\+11 cm³/\(mol·s\)`, text)
 }
+
+// TestLibrarySourceOneValue: thermo_source keeps the contract's three
+// values; reference-library data are "estimate" refined by
+// reference_library, which estimate --json gives too, and which the text
+// table shows as "library" — for the same species, from one definition
+// (analysis.Species.ReferenceLibrary).
+func TestLibrarySourceOneValue(t *testing.T) {
+	path := writeTemp(t, "lib.kiln", `species NH2 [NH2]
+species ethanol CCO
+species lump
+  composition C2
+species propane CCC
+  thermo-table
+    hf298 -25.0
+    s298 64.6
+    cp 300=17.7 400=22.5 500=26.9 600=30.7 800=36.9 1000=41.4 1500=48.6
+    source test values
+`)
+	_, stdout, stderr := runKiln(t, "summary", "--json", path)
+	var s summaryJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &s), stderr)
+	got := map[string][2]string{}
+	for _, sp := range s.Species {
+		assert.Contains(t, []string{"file", "estimate", "none"}, sp.ThermoSource, sp.Name)
+		got[sp.Name] = [2]string{sp.ThermoSource, sp.ReferenceLibrary}
+	}
+	assert.Equal(t, map[string][2]string{
+		"NH2":     {"estimate", "NH2"},
+		"ethanol": {"estimate", ""},
+		"lump":    {"none", ""},
+		"propane": {"file", ""},
+	}, got)
+
+	_, text, _ := runKiln(t, "summary", path)
+	assert.Regexp(t, `(?m)^NH2 +H2N +library `, text)
+	assert.Regexp(t, `(?m)^ethanol +C2H6O +estimate `, text)
+	assert.Regexp(t, `(?m)^propane +C3H8 +file `, text)
+
+	_, stdout, stderr = runKiln(t, "estimate", "--json", "[NH2]", "CCO")
+	var est []estimateJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &est), stderr)
+	require.Len(t, est, 2)
+	assert.Equal(t, "NH2", est[0].ReferenceLibrary)
+	assert.Empty(t, est[1].ReferenceLibrary)
+}

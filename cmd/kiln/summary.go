@@ -24,11 +24,15 @@ type summarySpecies struct {
 	Formula      *string `json:"formula"`
 	ThermoSource string  `json:"thermo_source"`
 	// ReferenceLibrary names the reference entry whose tabulated data an
-	// "estimate" species takes instead of groups (extension).
-	ReferenceLibrary string     `json:"reference_library,omitempty"`
-	Hf298            *float64   `json:"hf298_kj_mol"`
-	S298             *float64   `json:"s298_j_mol_k"`
-	Cp               numericMap `json:"cp_j_mol_k"` // null where the block does not reach
+	// "estimate" species takes instead of groups (extension): it refines
+	// thermo_source, whose values the contract fixes
+	// (analysis.Species.ReferenceLibrary).
+	ReferenceLibrary string `json:"reference_library,omitempty"`
+	// word is the source as the text table shows it (analysis.Species.ThermoWord).
+	word  string
+	Hf298 *float64   `json:"hf298_kj_mol"`
+	S298  *float64   `json:"s298_j_mol_k"`
+	Cp    numericMap `json:"cp_j_mol_k"` // null where the block does not reach
 	// Flags are the approximations of an estimated species, worded as
 	// check, estimate and hover word them (extension; absent when none or
 	// when the thermo comes from the file).
@@ -121,10 +125,7 @@ func buildSummary(results []*analysis.Result) summaryJSON {
 	res := results[0]
 	s := summaryJSON{Species: []summarySpecies{}, Reactions: []summaryReaction{}}
 	for _, sp := range res.Species {
-		row := summarySpecies{Name: sp.Name, ThermoSource: string(sp.Source)}
-		if sp.Source == analysis.SourceEstimate && sp.Estimate != nil {
-			row.ReferenceLibrary = sp.Estimate.Library
-		}
+		row := summarySpecies{Name: sp.Name, ThermoSource: string(sp.Source), ReferenceLibrary: sp.ReferenceLibrary(), word: sp.ThermoWord()}
 		// The estimate's flags whenever kiln estimated the species, as
 		// check reports them (its missing-group diagnostic).
 		for _, m := range sp.Estimate.Flags() {
@@ -230,11 +231,7 @@ func writeSummaryText(w io.Writer, s summaryJSON, u analysis.Units) {
 		if sp.Formula != nil {
 			formula = *sp.Formula
 		}
-		source := sp.ThermoSource
-		if sp.ReferenceLibrary != "" {
-			source = "library" // tabulated data, not a group estimate
-		}
-		rows = append(rows, []string{shorten(sp.Name, 24), formula, source, energy(sp.Hf298), entropy(sp.S298),
+		rows = append(rows, []string{shorten(sp.Name, 24), formula, sp.word, energy(sp.Hf298), entropy(sp.S298),
 			entropy(sp.Cp["300"]), entropy(sp.Cp["1000"]), entropy(sp.Cp["1500"])})
 	}
 	writeTable(w, "", []string{"name", "formula", "thermo", "ΔHf°298", "S°298", "Cp(300)", "Cp(1000)", "Cp(1500)"}, rows)
