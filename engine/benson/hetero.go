@@ -275,6 +275,8 @@ func (g *graph) partnerElement(i, order int, element string) int {
 // 1.6 cal/(mol K) at 300 K to the free-rotor R/2 at high temperature
 // (common practice). The lost X–H vibrations (radical.go, lostModes) carry
 // no torsion, so the rotor is removed here, as the O–H rotor is for alkoxy.
+// An arylthiyl site (C6H5S•) loses thiophenol's S–H torsion, also a low
+// barrier (about 1 kcal/mol, from memory); CH3SH's rotor values stand in.
 const thiolRotorS = 4.2 // cal/(mol K)
 
 var thiolRotorCp = [7]float64{1.6, 1.4, 1.3, 1.2, 1.1, 1.05, 1.0} // cal/(mol K) at StdTemps

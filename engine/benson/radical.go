@@ -31,8 +31,21 @@ import (
 // next to O bearing H or not), α-amino, α-chloro and α-fluoro (next to N, Cl
 // or F, see hetero.go), α,α-dichloro, -trichloro, -difluoro and -trifluoro
 // (two or three halogens of one element, hetero_sx.go), alkoxy (on O),
-// phenoxy (O on Cb), peroxy (O on O).
-// Sites outside this list use the nearest one and are reported in Missing.
+// phenoxy (O on Cb), peroxy (O on O); on N and S (hetero.go, hetero_n.go):
+// aminyl (R–NH•), dialkylaminyl (R2N•), anilino (Ar–NH•), thiyl (R–S•),
+// arylthiyl (Ar–S•).
+// Sites that only resemble one of these use the nearest one and are
+// reported in Missing; where the direction and size of the error are known
+// (an α-halo centre with an alkyl substituent, an N-substituted anilino
+// site, a thiyl site on an unsaturated carbon) or the published bond
+// enthalpies disagree (dialkylaminyl, arylthiyl), class.go widens the
+// uncertainty by at least that size. Sites for which no increment is at
+// hand and the nearest one is far off — an N• bonded to N, O, S or a
+// halogen (hydrazinyl: N2H3), amidyl, iminyl and diazenyl, an O• bonded to
+// N or S (aminoxyl), an S• bonded to S (perthiyl) — are given a site name
+// with no row in the HBI tables, so addHBI refuses the estimate naming the
+// site and the route (a thermo block: a `group` statement cannot supply an
+// increment).
 //
 // One answer per molecule: the site type is a function of the graph, never
 // of the order in which atoms or neighbours were written. An sp3 carbon
@@ -286,7 +299,9 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 		// type in this order would decide.
 		best := ""
 		for _, j := range g.nbr[i] {
-			if g.m.Atoms[j].Element == "N" {
+			switch el := g.m.Atoms[j].Element; el {
+			case "C", "O":
+			case "N":
 				// Aminoxyl (nitroxide, R2N–O•) and iminoxyl sites: the
 				// N lone pair makes the O–H bond of the parent
 				// hydroxylamine or oxime some 30 kcal/mol weaker than an
@@ -294,6 +309,10 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 				// from memory); no increment at hand, so the site is
 				// named without an HBI row and refused (addHBI).
 				return "aminoxyl (O• bonded to N)", "", "", nil
+			default:
+				// O• on S (HSO-type), on a halogen …: no increment at
+				// hand either; refused alike.
+				return "oxyl bonded to " + el, "", "", nil
 			}
 			switch g.typ[j] {
 			case "CdN":

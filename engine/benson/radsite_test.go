@@ -68,6 +68,7 @@ func TestRadicalSitesWithoutIncrement(t *testing.T) {
 		"O[NH]":       "oxyaminyl",
 		"CN(C)[O]":    "aminoxyl",
 		"[O]N":        "aminoxyl",
+		"CS[O]":       "oxyl bonded to S",
 		"CC(=O)[NH]":  "amidyl",
 		"CC(=N)[O]":   "amidyl",
 		"CS[NH]":      "thioaminyl",
