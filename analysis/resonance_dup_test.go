@@ -27,3 +27,32 @@ species isopropyl C[CH]C
 	}
 	assert.Equal(t, map[int]bool{2: true, 4: true}, lines, "%v", res.Diagnostics)
 }
+
+// TestLibrarySpellingsAreOneSpecies: two spellings that the reference
+// library knows as one species (its entry's SMILES and an alias, or an N–O
+// unit charge-separated) are one structure for the duplicate check and for
+// compare; a different species of the library is not.
+func TestLibrarySpellingsAreOneSpecies(t *testing.T) {
+	res := analyseWith(t, `species HCCO [CH]=C=O
+species HCCO-b C#C[O]
+species NO2 [O]N=O
+species NO2-b O=[N+][O-]
+species NCO [N]=C=O
+species NCO-b N#C[O]
+species HOCN N#CO
+`, DefaultSettings())
+	lines := map[int]bool{}
+	for _, d := range res.Diagnostics {
+		if d.Code == speciesfile.CodeDuplicateSpecies {
+			lines[res.File.Lines.Position(d.Span.Start).Line+1] = true
+		}
+	}
+	assert.Equal(t, map[int]bool{2: true, 4: true, 6: true}, lines, "%v", res.Diagnostics)
+
+	files := map[string]string{
+		"/w/a.kiln": "species HCCO [CH]=C=O\nspecies NO2 [O]N=O\nspecies NCO [N]=C=O\nspecies HOCN N#CO\n",
+		"/w/b.kiln": "species ketenyl C#C[O]\nspecies nitrogen-dioxide O=[N+][O-]\nspecies cyanato N#C[O]\nspecies HNCO O=C=N\n",
+	}
+	c := compareTexts(t, files, "/w/a.kiln", "/w/b.kiln")
+	assert.Equal(t, map[string]string{"HCCO": "ketenyl", "NO2": "nitrogen-dioxide", "NCO": "cyanato"}, pairNames(c))
+}
