@@ -148,6 +148,31 @@ const (
 	// typically 5–9 kcal/mol against an alkyl site (radical stabilisation
 	// energies, common practice).
 	widenStabiliser = 5.0
+	// Radical sites whose increment is known to be biased, or rests on
+	// published bond enthalpies that disagree: widened by at least the size
+	// of the bias or the disagreement (kcal/mol).
+	//
+	// widenSubstitutedHalo: an α-halo centre with a carbon substituent
+	// (CH3CH•Cl, CH3C•Cl2) takes the halomethane's increment. In the alkane
+	// series one alkyl group on the centre lowers D(C–H) by 2.5 and two by
+	// 4.6 kcal/mol (101.1, 98.6, 96.5: Blanksby & Ellison 2003, hbi.tsv);
+	// for chlorine, CH3CHCl–H is about 96.5 against ClCH2–H 100.1
+	// (ΔHf°(CH3CHCl) ≈ 17.6 kcal/mol, Seetula 1996, from memory, uncertain),
+	// a bias of 3.5–4.6 kcal/mol, which 5 covers.
+	widenSubstitutedHalo = 5.0
+	// widenDialkylaminyl: the two published (CH3)2N–H bond enthalpies at
+	// hand, 95.0 (Luo 2007) and 91.5 (McMillen & Golden 1982), both from
+	// memory (hbi_n.tsv), differ by 3.5 kcal/mol.
+	widenDialkylaminyl = 3.5
+	// widenSubstitutedNSite: an N-substituted anilino site (Ar–N•–R) takes
+	// C6H5NH–H; a substituent on the N lowers D(N–H) by as much as from
+	// CH3NH–H 100.0 to (CH3)2N–H 95.0 or 91.5 (hbi_nsx.tsv, hbi_n.tsv):
+	// up to 8.5 kcal/mol.
+	widenSubstitutedNSite = 8.5
+	// widenArylthiyl: published C6H5S–H bond enthalpies, 83.5 (Borges dos
+	// Santos et al. 2002) against about 79 (earlier solution-derived
+	// values), differ by about 4.5 kcal/mol (hbi_n.tsv).
+	widenArylthiyl = 4.5
 	// widenSystem is the RMS, over the whole-system values of systems.tsv,
 	// of the system strain beyond the sum of its component ring
 	// corrections (the "ring system strain" term of the matched estimate):
@@ -207,6 +232,14 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 			// Entropy/Cp-only approximations: ΔHf°298 is not affected.
 		case strings.HasPrefix(m.Group, "HBI: "+unstabilisedSite), m.Group == "HBI: "+ketenylSite:
 			w = widenStabiliser
+		case strings.HasPrefix(m.Group, "HBI: "+substitutedHaloSite): // radical.go
+			w = widenSubstitutedHalo
+		case m.Group == "HBI: "+dialkylaminylSite: // hetero_n.go
+			w = widenDialkylaminyl
+		case m.Group == "HBI: "+substitutedAnilinoSite: // hetero_n.go
+			w = widenSubstitutedNSite
+		case m.Group == "HBI: "+arylthiylSite: // hetero.go
+			w = widenArylthiyl
 		case strings.HasPrefix(m.Group, "HBI"):
 			w = widenRadical
 		case strings.HasPrefix(m.Group, "ring system:"):
