@@ -641,8 +641,12 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		if sp.brokenBlock {
 			what = "has no usable thermo block (" + sp.blockFault() + ", reported above)"
 		}
+		route := "; add a nasa7 or thermo-table block"
+		if strings.HasSuffix(strings.TrimRight(why, ")"), "give the species a thermo block") || strings.HasSuffix(why, "give it a thermo block from a published table") {
+			route = "" // the reason already gives the route
+		}
 		a.report(path, speciesfile.Diagnostic{Span: a.at(d.Name.Span), Severity: speciesfile.SeverityError, Code: speciesfile.CodeMissingThermo,
-			Message: fmt.Sprintf("%s %s and %s; add a nasa7 or thermo-table block", sp.Name, what, why)})
+			Message: fmt.Sprintf("%s %s and %s%s", sp.Name, what, why, route)})
 		return
 	}
 	g := sp.Given
