@@ -60,6 +60,9 @@ func groupCpGap(pts []speciesfile.CpPoint) string {
 		only = " only"
 	}
 	var parts []string
+	if lo == hi { // one temperature: every other one is held at it
+		below, above = append(below, above...), nil
+	}
 	if len(below) > 0 {
 		parts = append(parts, fmt.Sprintf("%s held at the %s K value", tempList(below), num(lo)))
 	}
