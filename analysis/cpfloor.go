@@ -16,7 +16,9 @@ import (
 // get there — carries the flag CpFloorGroup, which check reports as
 // missing-group, and gets no NASA-7 polynomial (Estimate.NASA7), as an
 // estimate below the S°298 bound does (benson.EntropyFloorGroup). So what
-// fill writes, check accepts.
+// fill writes, check accepts. A Cp at or above the classical limit, which
+// nasa.Fit refuses, is flagged the same way (CpCeilingGroup), so that check
+// says before fill what fill will refuse.
 
 // CpFloorGroup is the Missing.Group of an estimate whose Cp lies below the
 // translational and rotational heat capacity of its shape.
@@ -77,4 +79,32 @@ func cpFloorCheck(cp [7]float64, n int, linear bool) (benson.Missing, *cpFloorEr
 		Approximation: "the group sum as it stands",
 		Note:          cpFloorMessage(Units{KJ: true}, e.T, e.Cp, n, linear) + "; the group values do not add up for this structure (check any user-supplied `group` values, or give it a thermo block)",
 	}, e, true
+}
+
+// CpCeilingGroup is the Missing.Group of an estimate with a Cp at or above
+// the classical all-vibration limit Cp∞ (internal rotors counted as free):
+// nasa.Fit refuses such a curve (nasa.ShapeAboveLimit), so check flags it
+// before fill, as it flags a Cp below the floor.
+const CpCeilingGroup = "Cp at or above the classical limit"
+
+// aboveLimitWords words a Cp at or above the classical limit cpInf in the
+// units u (the fit refusal and the flag say the same).
+func aboveLimitWords(u Units, T, cp, cpInf float64) string {
+	return fmt.Sprintf("Cp at %.0f K, %s, is not below %s, the most a molecule of these atoms "+
+		"can hold with every vibration excited (internal rotors counted as free)", T, u.Entropy(cp), u.Entropy(cpInf))
+}
+
+// cpCeilingCheck tests an estimate's Cp at the group temperatures up to
+// tHigh (those nasa.Fit uses) against cpInf, as nasa.Fit does.
+func cpCeilingCheck(cp [7]float64, cpInf, tHigh float64) (benson.Missing, bool) {
+	for i, T := range benson.StdTemps {
+		if T <= tHigh && cpInf > 0 && cp[i] >= cpInf {
+			return benson.Missing{
+				Group:         CpCeilingGroup,
+				Approximation: "the group sum as it stands",
+				Note:          aboveLimitWords(Units{KJ: true}, T, cp[i], cpInf) + "; the group values do not add up for this structure (check any user-supplied `group` values, or give it a thermo block)",
+			}, true
+		}
+	}
+	return benson.Missing{}, false
 }

@@ -207,6 +207,9 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 	if f, refuse, below := cpFloorCheck(g.Cp, nAtoms, linear); below {
 		e.flags, e.cpFloor = append(e.flags, f), refuse
 	}
+	if f, above := cpCeilingCheck(g.Cp, e.cpInf, o.THigh); above {
+		e.flags = append(e.flags, f) // nasa.Fit refuses it (ShapeAboveLimit)
+	}
 	e.model = newGroupThermo(g.Hf298, g.S298, benson.StdTemps[:], g.Cp[:])
 	e.model.continueAlongTail(e.cp0, e.cpInf)
 	return e, nil

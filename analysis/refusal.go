@@ -42,10 +42,8 @@ func FitRefusal(err error, u Units) string {
 				"try another TMID or THIGH (--tmid/--thigh, or tMid/tHigh in the editor's settings), or "+block,
 				drop, u.EntropyName(), u.Entropy(se.Other), se.OtherT, u.Entropy(se.Cp), se.T)
 		case nasa.ShapeAboveLimit:
-			return fmt.Sprintf("the estimated Cp at %.0f K, %s, is not below %s, the most a molecule of these atoms "+
-				"can hold with every vibration excited (internal rotors counted as free), so no sound polynomial "+
-				"follows it; check the structure and any approximated or user-supplied group values, or "+block,
-				se.T, u.Entropy(se.Cp), u.Entropy(se.Other))
+			return "the estimated " + aboveLimitWords(u, se.T, se.Cp, se.Other) + ", so no sound polynomial " +
+				"follows it; check the structure and any approximated or user-supplied group values, or " + block
 		}
 	}
 	msg := err.Error()

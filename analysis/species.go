@@ -497,7 +497,7 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 			}
 			s := FlagText(m)
 			switch _, err := benson.ParseGroupName(m.Group); {
-			case m.Group == benson.EntropyFloorGroup || m.Group == CpFloorGroup:
+			case m.Group == benson.EntropyFloorGroup || m.Group == CpFloorGroup || m.Group == CpCeilingGroup:
 				unsound = append(unsound, s)
 			case err != nil:
 				others = append(others, s)
@@ -520,9 +520,9 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 			msg = append(msg, fmt.Sprintf("estimated with an approximation kiln has no data for: %s; its uncertainty is widened (a thermo block with measured or computed values replaces the estimate)", strings.Join(others, ", ")))
 		}
 		if len(unsound) > 0 {
-			// Below a physical bound: fill writes no block from it
+			// Beyond a physical bound: fill writes no block from it
 			// (Estimate.NASA7 refuses), so check says so before fill.
-			msg = append(msg, fmt.Sprintf("the estimate is below a physical bound: %s; kiln writes no NASA-7 block from it (a thermo block with measured or computed values replaces the estimate)", strings.Join(unsound, ", ")))
+			msg = append(msg, fmt.Sprintf("the estimate is beyond a physical bound: %s; kiln writes no NASA-7 block from it (a thermo block with measured or computed values replaces the estimate)", strings.Join(unsound, ", ")))
 		}
 		if len(msg) > 0 {
 			// With a usable thermo block of its own (other than the

@@ -112,7 +112,7 @@ func TestCpFloorFillCheckAgree(t *testing.T) {
 	require.Len(t, before, 1, "%+v", before)
 	assert.Equal(t, "missing-group", before[0].Code)
 	assert.Equal(t, 7, before[0].Line)
-	assert.Contains(t, before[0].Message, "CCl4: the estimate is below a physical bound: Cp below the ideal-gas lower bound")
+	assert.Contains(t, before[0].Message, "CCl4: the estimate is beyond a physical bound: Cp below the ideal-gas lower bound")
 	assert.Contains(t, before[0].Message, "Cp at 300 K is 8.4 J/(mol·K), below 33.3 J/(mol·K), the translational and rotational heat capacity of any non-linear molecule of 5 atoms")
 
 	code, _, stderr := runKiln(t, "fill", path)
@@ -194,7 +194,7 @@ func TestGroupCpAtFewerTemperatures(t *testing.T) {
 	}
 
 	// All seven temperatures: nothing to report, no flag.
-	path := writeTemp(t, "g7.kiln", head+"  cp 300=20.0 400=22.0 500=23.3 600=24.1 800=25.0 1000=25.4 1500=25.8\nspecies CCl4 ClC(Cl)(Cl)Cl\n")
+	path := writeTemp(t, "g7.kiln", head+"  cp 300=20.0 400=22.0 500=23.3 600=24.1 800=25.0 1000=25.4 1500=25.7\nspecies CCl4 ClC(Cl)(Cl)Cl\n")
 	code, stdout, _ := runKiln(t, "check", "--min-severity", "warning", path)
 	assert.Equal(t, exitOK, code)
 	assert.Empty(t, stdout)
@@ -279,4 +279,27 @@ species propane CCC
 	require.Len(t, est, 2)
 	assert.Equal(t, "NH2", est[0].ReferenceLibrary)
 	assert.Empty(t, est[1].ReferenceLibrary)
+}
+
+// TestCpCeilingFillCheckAgree: an estimate with a Cp at or above the
+// classical all-vibration limit, which fill has always refused to fit, is
+// flagged by check before fill too, and the flag and the refusal quote the
+// same numbers.
+func TestCpCeilingFillCheckAgree(t *testing.T) {
+	src := strings.Replace(lowCpGroup, "cp 300=2.0 400=2.2 500=2.3 600=2.4 800=2.5 1000=2.5 1500=2.6", "cp 300=50.0 400=52.2 500=53.3 600=54.4 800=55.5 1000=56.5 1500=57.6", 1)
+	path := writeTemp(t, "hi.kiln", src)
+	_, stdout, stderr := runKiln(t, "check", "--format", "json", "--min-severity", "warning", path)
+	var diags []checkDiag
+	require.NoError(t, json.Unmarshal([]byte(stdout), &diags), stderr)
+	require.Len(t, diags, 1, "%+v", diags)
+	assert.Equal(t, "missing-group", diags[0].Code)
+	assert.Contains(t, diags[0].Message, "CCl4: the estimate is beyond a physical bound: Cp at or above the classical limit")
+	assert.Contains(t, diags[0].Message, "Cp at 300 K, 209.2 J/(mol·K), is not below 108.1 J/(mol·K), the most a molecule of these atoms can hold")
+
+	code, _, stderr := runKiln(t, "fill", path)
+	assert.Equal(t, exitProblems, code, stderr)
+	assert.Contains(t, stderr, "skipped CCl4: no NASA-7 polynomial: the estimated Cp at 300 K, 50.00 cal/(mol·K), is not below 25.83 cal/(mol·K), the most a molecule of these atoms can hold")
+	b, err := os.ReadFile(path)
+	require.NoError(t, err)
+	assert.Equal(t, src, string(b))
 }
