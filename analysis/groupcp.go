@@ -64,13 +64,13 @@ func groupCpGap(pts []speciesfile.CpPoint) string {
 		below, above = append(below, above...), nil
 	}
 	if len(below) > 0 {
-		parts = append(parts, fmt.Sprintf("%s held at the %s K value", tempList(below), num(lo)))
+		parts = append(parts, fmt.Sprintf("%s held at the %s K value", tempList(below), tempNum(lo)))
 	}
 	if len(between) > 0 {
 		parts = append(parts, tempList(between)+" interpolated linearly")
 	}
 	if len(above) > 0 {
-		parts = append(parts, fmt.Sprintf("%s held at the %s K value", tempList(above), num(hi)))
+		parts = append(parts, fmt.Sprintf("%s held at the %s K value", tempList(above), tempNum(hi)))
 	}
 	return fmt.Sprintf("Cp given at %s%s; %s", tempList(slices.Sorted(slices.Values(given))), only, andList(parts))
 }
@@ -79,7 +79,7 @@ func groupCpGap(pts []speciesfile.CpPoint) string {
 func giveAllSeven() string {
 	var std []string
 	for _, T := range benson.StdTemps {
-		std = append(std, num(T))
+		std = append(std, tempNum(T))
 	}
 	return "give all seven temperatures " + strings.Join(std, " ") + " K"
 }
@@ -112,12 +112,12 @@ func tempList(ts []float64) string {
 			run = benson.StdTemps[first+k] == ts[k]
 		}
 		if run {
-			return num(ts[0]) + "–" + num(ts[len(ts)-1]) + " K"
+			return tempNum(ts[0]) + "–" + tempNum(ts[len(ts)-1]) + " K"
 		}
 	}
 	s := make([]string, len(ts))
 	for i, T := range ts {
-		s[i] = num(T)
+		s[i] = tempNum(T)
 	}
 	return andList(s) + " K"
 }
@@ -130,4 +130,4 @@ func andList(s []string) string {
 	return strings.Join(s[:len(s)-1], ", ") + " and " + s[len(s)-1]
 }
 
-func num(T float64) string { return strconv.FormatFloat(T, 'g', -1, 64) }
+func tempNum(T float64) string { return strconv.FormatFloat(T, 'g', -1, 64) }
