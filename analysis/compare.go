@@ -98,10 +98,13 @@ func (p SpeciesPair) Flagged() bool { return p.Thermo != nil && len(p.Thermo.Fla
 // arrays follow CompareThermoTemps.
 type ThermoDiff struct {
 	SourceA, SourceB ThermoSource
-	Hf298A, Hf298B   float64
-	S298A, S298B     float64
-	CpA, CpB         [3]float64
-	GA, GB           [3]float64
+	// LibraryA and LibraryB refine an "estimate" source that is kiln's
+	// reference-library data (Species.ReferenceLibrary; "" otherwise).
+	LibraryA, LibraryB string
+	Hf298A, Hf298B     float64
+	S298A, S298B       float64
+	CpA, CpB           [3]float64
+	GA, GB             [3]float64
 	// Flags lists what differs beyond its threshold: "hf298", "s298",
 	// "cp300", "cp1000", "cp2000", "g300", "g1000", "g2000".
 	Flags []string
@@ -572,7 +575,7 @@ func (f *fitShare) thermoDiff(a, b *Species, set Settings) *ThermoDiff {
 	if ta == nil || tb == nil {
 		return nil
 	}
-	d := &ThermoDiff{SourceA: a.Source, SourceB: b.Source}
+	d := &ThermoDiff{SourceA: a.Source, SourceB: b.Source, LibraryA: a.ReferenceLibrary(), LibraryB: b.ReferenceLibrary()}
 	d.Hf298A, d.S298A, _ = a.Hf298S298()
 	d.Hf298B, d.S298B, _ = b.Hf298S298()
 	flag := func(name string, x, y, limit float64) {

@@ -87,8 +87,13 @@ type compareValue struct {
 // and the values are omitted (identical on both sides, or missing on both when kiln cannot
 // estimate the structure).
 type compareThermo struct {
-	SourceA      string                    `json:"source_a"`
-	SourceB      string                    `json:"source_b"`
+	SourceA string `json:"source_a"`
+	SourceB string `json:"source_b"`
+	// LibraryA and LibraryB name the reference-library entry whose data
+	// an "estimate" side takes (extension, as reference_library in
+	// summary and estimate --json; absent otherwise).
+	LibraryA     string                    `json:"reference_library_a,omitempty"`
+	LibraryB     string                    `json:"reference_library_b,omitempty"`
 	SameEstimate bool                      `json:"same_estimate"`
 	Hf298        *compareValue             `json:"hf298_kj_mol,omitempty"`
 	S298         *compareValue             `json:"s298_j_mol_k,omitempty"`
@@ -268,7 +273,7 @@ func buildCompare(c *analysis.Comparison) compareJSON {
 		row := compareSpecies{A: p.A.Name, B: p.B.Name, LineA: p.A.Line, LineB: p.B.Line, SMILESA: optString(p.A.SMILES),
 			SMILESB: optString(p.B.SMILES), MatchedBy: p.By, Flags: []string{}}
 		if t := p.Thermo; t != nil {
-			th := &compareThermo{SourceA: string(t.SourceA), SourceB: string(t.SourceB), Hf298: pval(t.Hf298A, t.Hf298B, 1000),
+			th := &compareThermo{SourceA: string(t.SourceA), SourceB: string(t.SourceB), LibraryA: t.LibraryA, LibraryB: t.LibraryB, Hf298: pval(t.Hf298A, t.Hf298B, 1000),
 				S298: pval(t.S298A, t.S298B, 1), Cp: numericKeys[compareValue]{}, G: numericKeys[compareValue]{}}
 			for k, tt := range analysis.CompareThermoTemps {
 				th.Cp[tt.Key] = val(t.CpA[k], t.CpB[k], 1)

@@ -279,6 +279,28 @@ species propane CCC
 	require.Len(t, est, 2)
 	assert.Equal(t, "NH2", est[0].ReferenceLibrary)
 	assert.Empty(t, est[1].ReferenceLibrary)
+
+	// compare: source_a stays "estimate", refined the same way.
+	other := writeTemp(t, "other.kiln", "species NH2 [NH2]\n  thermo-table\n    hf298 45.0\n    s298 46.5\n    cp 300=8.1 400=8.5 500=8.9 600=9.3 800=9.9 1000=10.4 1500=11.8\n")
+	_, stdout, stderr = runKiln(t, "compare", "--json", "--all", path, other)
+	var cmp struct {
+		Species []struct {
+			A      string `json:"a"`
+			Thermo *struct {
+				SourceA  string `json:"source_a"`
+				SourceB  string `json:"source_b"`
+				LibraryA string `json:"reference_library_a"`
+				LibraryB string `json:"reference_library_b"`
+			} `json:"thermo"`
+		} `json:"species"`
+	}
+	require.NoError(t, json.Unmarshal([]byte(stdout), &cmp), stderr)
+	require.Len(t, cmp.Species, 1)
+	require.NotNil(t, cmp.Species[0].Thermo)
+	assert.Equal(t, "estimate", cmp.Species[0].Thermo.SourceA)
+	assert.Equal(t, "NH2", cmp.Species[0].Thermo.LibraryA)
+	assert.Equal(t, "file", cmp.Species[0].Thermo.SourceB)
+	assert.Empty(t, cmp.Species[0].Thermo.LibraryB)
 }
 
 // TestCpCeilingFillCheckAgree: an estimate with a Cp at or above the
