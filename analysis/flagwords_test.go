@@ -46,7 +46,8 @@ func TestGroupCpGapWords(t *testing.T) {
 		want string
 	}{
 		{[]float64{300, 400, 500, 600, 800, 1000, 1500}, ""},
-		{[]float64{298, 400, 500, 600, 700, 800, 1000, 1200, 1500}, "Cp given at 298, 400, 500, 600, 700, 800, 1000, 1200 and 1500 K; 300 K interpolated linearly"},
+		{[]float64{298.15, 400, 500, 600, 700, 800, 1000, 1200, 1500}, ""},
+		{[]float64{290, 400, 500, 600, 700, 800, 1000, 1200, 1500}, "Cp given at 290, 400, 500, 600, 700, 800, 1000, 1200 and 1500 K; 300 K interpolated linearly"},
 		{[]float64{300}, "Cp given at 300 K only; 400–1500 K held at the 300 K value"},
 		{[]float64{1000}, "Cp given at 1000 K only; 300, 400, 500, 600, 800 and 1500 K held at the 1000 K value"},
 		{[]float64{300, 1000}, "Cp given at 300 and 1000 K only; 400–800 K interpolated linearly and 1500 K held at the 1000 K value"},

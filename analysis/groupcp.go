@@ -25,7 +25,8 @@ import (
 const userCpApprox = " with Cp filled in from the temperatures its `group` statement gives"
 
 // groupCpGap describes the standard temperatures pts does not give, or ""
-// when it gives all seven (a point within 0.5 K of one counts).
+// when it gives all seven (a point within rangeSlack of one counts: Cp at
+// 298.15 K stands for 300 K, as a block from 300 K covers 298.15 K).
 func groupCpGap(pts []speciesfile.CpPoint) string {
 	if len(pts) == 0 {
 		return ""
@@ -40,7 +41,7 @@ func groupCpGap(pts []speciesfile.CpPoint) string {
 	for _, T := range benson.StdTemps {
 		has := false
 		for _, g := range given {
-			has = has || math.Abs(g-T) <= 0.5
+			has = has || math.Abs(g-T) <= rangeSlack
 		}
 		switch {
 		case has:
