@@ -383,15 +383,26 @@ func UsedAsItStands(m benson.Missing) bool {
 	return m.Approximation == m.Group || strings.HasPrefix(m.Approximation, m.Group+" ")
 }
 
+// BeyondBound reports whether m flags an estimate beyond a physical bound
+// (S°298 or Cp below what any molecule of the structure has, Cp at or above
+// the classical limit): not an approximation but a sum that cannot be
+// true, from which kiln writes no NASA-7 block.
+func BeyondBound(m benson.Missing) bool {
+	return m.Group == benson.EntropyFloorGroup || m.Group == CpFloorGroup || m.Group == CpCeilingGroup
+}
+
 // FlagHeading is the word every command and the hover put before
 // FlagText: "MISSING group" for an approximation, "FLAGGED group" for a
 // group used as it stands with a known shortcoming (UsedAsItStands),
+// "UNPHYSICAL" for a sum beyond a physical bound (BeyondBound),
 // "MODELLED" for a quantity computed by a validated model instead of a
 // table (benson.Missing.Modelled), which check does not warn about.
 func FlagHeading(f Flag) string {
 	switch {
 	case f.Modelled():
 		return "MODELLED"
+	case BeyondBound(f.Missing):
+		return "UNPHYSICAL"
 	case UsedAsItStands(f.Missing):
 		return "FLAGGED group"
 	}
@@ -412,6 +423,9 @@ func FlagText(f Flag) string {
 	s := m.Group
 	if f.Count > 1 {
 		s += fmt.Sprintf(" ×%d", f.Count)
+	}
+	if BeyondBound(m) && m.Note != "" {
+		return s + " (" + m.Note + ")" // nothing stands in: the sum as it is
 	}
 	if UsedAsItStands(m) {
 		s += " (used as it stands"

@@ -497,7 +497,7 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 			}
 			s := FlagText(m)
 			switch _, err := benson.ParseGroupName(m.Group); {
-			case m.Group == benson.EntropyFloorGroup || m.Group == CpFloorGroup || m.Group == CpCeilingGroup:
+			case BeyondBound(m.Missing):
 				unsound = append(unsound, s)
 			case err != nil:
 				others = append(others, s)

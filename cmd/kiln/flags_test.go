@@ -144,12 +144,16 @@ func TestFlagsAgreeAcrossCommands(t *testing.T) {
 }
 
 // headed is a flag under the heading every surface gives it (FlagHeading):
-// MODELLED for a quantity a validated model computes, FLAGGED group for a
-// group used as it stands, else MISSING group.
+// MODELLED for a quantity a validated model computes, UNPHYSICAL for a sum
+// beyond a physical bound, FLAGGED group for a group used as it stands, else
+// MISSING group.
 func headed(flag string) string {
 	switch {
 	case modelled(flag):
 		return "MODELLED " + flag
+	case strings.HasPrefix(flag, "S°298 below the physical lower bound"), strings.HasPrefix(flag, "Cp below the ideal-gas lower bound"),
+		strings.HasPrefix(flag, "Cp at or above the classical limit"):
+		return "UNPHYSICAL " + flag
 	case strings.Contains(flag, " (used as it stands"):
 		return "FLAGGED group " + flag
 	}
