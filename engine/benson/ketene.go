@@ -82,8 +82,9 @@ func flagCount(group, suffix string) (int, bool) {
 // sizes the uncertainty only; no group value was changed to match them.
 const widenKeteneEnd = 3.0
 
-// thermoBlockRoute ends a refusal for which no group statement can help.
-const thermoBlockRoute = "give the species a thermo block (nasa7 or thermo-table)"
+// thermoBlockRoute ends a refusal for which no group statement can help
+// (issue 13: every refusal says how to supply what is missing).
+const thermoBlockRoute = "no `group` statement can name this carbon, so the species needs a thermo block (nasa7 or thermo-table)"
 
 // keteneRefusal refuses a C=C=O carbon that the ketene group Ck cannot
 // describe: one whose other partner is cumulated or not a carbon, and one
