@@ -286,7 +286,7 @@ func (a *analysis) groups() {
 				// Only a complete statement replaces the value (userGroups
 				// skips the others; the reader names what is missing).
 				a.report(path, speciesfile.Diagnostic{Span: nameSpan, Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeGroupOverride,
-					Message: fmt.Sprintf("group %s replaces kiln's built-in value (%s; %s) for every species in scope", name, a.thermoSummary(b.Hf298, b.S298), b.Source)})
+					Message: overrideMessage(name, a.thermoSummary(b.Hf298, b.S298), b.Source)})
 			}
 			gr := &Group{Name: name, Loc: Location{File: path, Span: nameSpan}, Decl: g}
 			seen[name] = gr
@@ -439,4 +439,18 @@ func smilesReason(err error) string {
 		return se.Msg
 	}
 	return err.Error()
+}
+
+// overrideMessage is the group-override information on a group statement
+// replacing built-in group name (value and source as shown). Species of the
+// reference library never take group values, so the statement does not
+// change them; when the built-in value was derived from a library species
+// (its source names the library), estimates from the new value — that
+// species' radicals among them — no longer agree with the species itself.
+func overrideMessage(name, value, source string) string {
+	msg := fmt.Sprintf("group %s replaces kiln's built-in value (%s; %s) for every species in scope estimated from groups; reference-library species keep the library's data", name, value, source)
+	if strings.Contains(source, "(library") {
+		msg += "; the built-in value was derived from a library species, which this statement does not change: species estimated from the new value (its radicals among them) no longer agree with it"
+	}
+	return msg
 }

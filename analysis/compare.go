@@ -204,6 +204,7 @@ func (w *Workspace) Compare(ctx context.Context, pathA, pathB string, opts Compa
 	sa.fits, sb.fits = fits, fits
 	matchA, matchB := matchSpecies(sa, sb)
 	matchResonance(sa, sb, matchA, matchB)
+	matchLibrary(sa, sb, matchA, matchB)
 	// Thermochemistry for the matched species, estimated where not given.
 	// A pair that both sides estimate from the same structure text with
 	// the same options has the same thermo by construction: not computed.

@@ -23,6 +23,21 @@ func effectiveMultiplicity(lib *reflib.Library, sp *Species) int {
 	return sp.Mol.DefaultMultiplicity()
 }
 
+// libraryEntry names the reference-library entry whose data a species with
+// a structure takes ("" for none or without a structure): the entry of its
+// structure and effective multiplicity, the lookup estimate makes. Two
+// spellings that find one entry are one species (HCCO as [CH]=C=O and as
+// C#C[O]; NO2 as [O]N=O and as O=[N+][O-]).
+func libraryEntry(lib *reflib.Library, sp *Species) string {
+	if sp.Mol == nil {
+		return ""
+	}
+	if e, ok := lib.Lookup(sp.Mol, effectiveMultiplicity(lib, sp)); ok {
+		return e.Name
+	}
+	return ""
+}
+
 // maxIncludeDupReports bounds the same-structure warnings on one include
 // statement; one more says that there are more.
 const maxIncludeDupReports = 20

@@ -72,3 +72,42 @@ func hasRadicalSite(m *molecule.Molecule) bool {
 	}
 	return false
 }
+
+// matchLibrary pairs species that matchSpecies and matchResonance left
+// unmatched when both take their thermochemistry from the same
+// reference-library entry: two spellings the library knows as one species
+// (HCCO written [CH]=C=O and C#C[O], NO2 written [O]N=O and O=[N+][O-]),
+// the rule the within-file duplicate check uses (species.go,
+// libraryKeyPrefix).
+func matchLibrary(a, b *compareSide, matchA, matchB []int) {
+	buckets := map[string][]int{}
+	for j, sp := range b.species {
+		if matchB[j] < 0 {
+			if k := b.libraryEntry(sp); k != "" {
+				buckets[k] = append(buckets[k], j)
+			}
+		}
+	}
+	if len(buckets) == 0 {
+		return
+	}
+	for i, sp := range a.species {
+		if matchA[i] >= 0 {
+			continue
+		}
+		k := a.libraryEntry(sp)
+		for _, j := range buckets[k] {
+			if k != "" && matchB[j] < 0 {
+				matchA[i], matchB[j] = j, i
+				break
+			}
+		}
+	}
+}
+
+// libraryEntry names the reference-library entry whose data sp takes ("" for
+// none): the entry of its structure and effective multiplicity, as the
+// estimate finds it (estimate.go).
+func (s *compareSide) libraryEntry(sp *Species) string {
+	return libraryEntry(s.a.w.cache.lib, sp)
+}

@@ -226,6 +226,11 @@ func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupVal
 			// the same structure.
 			sp.structKey = resonanceKeyPrefix + e.Group.Form + "|m" + strconv.Itoa(effectiveMultiplicity(a.w.cache.lib, sp))
 		}
+		if name := libraryEntry(a.w.cache.lib, sp); name != "" {
+			// Spellings of one reference-library species are one species
+			// (compare_include.go libraryEntry).
+			sp.structKey = libraryKeyPrefix + name
+		}
 		sp.structHash = hashKey(sp.structKey)
 	}
 	a.given(path, sp)
@@ -237,6 +242,11 @@ func (a *analysis) speciesRules(path string, sp *Species, user []benson.GroupVal
 // representative resonance structure (a canonical SMILES) rather than from a
 // graph invariant.
 const resonanceKeyPrefix = "resonance|"
+
+// libraryKeyPrefix marks a duplicate-search key made from the name of the
+// reference-library entry a species takes its data from (an entry is one
+// structure and multiplicity).
+const libraryKeyPrefix = "library|"
 
 // sameStructure returns the first species in seen with the structure and
 // multiplicity of sp, and records sp. Species are bucketed by a cheap graph
@@ -254,7 +264,7 @@ func sameStructure(seen *structBuckets, spAt func(int32) *Species, i int32) int3
 	k := sp.structKey
 	ends, hashed := seen.ends[sp.structHash]
 	if hashed {
-		resonance := strings.HasPrefix(k, resonanceKeyPrefix)
+		resonance := strings.HasPrefix(k, resonanceKeyPrefix) || strings.HasPrefix(k, libraryKeyPrefix)
 		for j := ends[0]; j >= 0; j = seen.next[j] {
 			other := spAt(j)
 			if other.structKey != k {
@@ -631,8 +641,12 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		if sp.brokenBlock {
 			what = "has no usable thermo block (" + sp.blockFault() + ", reported above)"
 		}
+		route := "; add a nasa7 or thermo-table block"
+		if strings.HasSuffix(strings.TrimRight(why, ")"), "give the species a thermo block") || strings.HasSuffix(why, "give it a thermo block from a published table") {
+			route = "" // the reason already gives the route
+		}
 		a.report(path, speciesfile.Diagnostic{Span: a.at(d.Name.Span), Severity: speciesfile.SeverityError, Code: speciesfile.CodeMissingThermo,
-			Message: fmt.Sprintf("%s %s and %s; add a nasa7 or thermo-table block", sp.Name, what, why)})
+			Message: fmt.Sprintf("%s %s and %s%s", sp.Name, what, why, route)})
 		return
 	}
 	g := sp.Given

@@ -119,22 +119,39 @@ func checkFile(ws *analysis.Workspace, path string, done map[string]bool) ([]che
 	if err != nil {
 		return nil, err
 	}
+	// includer[p] is the first analysed file that includes p.
+	includer := map[string]*analysis.Result{}
+	for _, res := range results {
+		for _, inc := range res.Includes {
+			if _, seen := includer[inc.Path]; inc.Path != "" && !seen {
+				includer[inc.Path] = res
+			}
+		}
+	}
 	var out []checkDiag
 	for _, res := range results {
-		out = append(out, diagsOf(res)...)
+		out = append(out, diagsOf(res, includer[res.Path])...)
 	}
 	return out, nil
 }
 
-func diagsOf(res *analysis.Result) []checkDiag {
+// diagsOf lists the diagnostics of res. includer (nil for none) is a file
+// including res's file: an undeclared name it declares gets a note saying
+// that an included file does not see its includer's declarations.
+func diagsOf(res *analysis.Result, includer *analysis.Result) []checkDiag {
 	lines := res.File.Lines
 	name := displayPath(res.Path)
 	out := make([]checkDiag, 0, len(res.Diagnostics))
 	for _, d := range res.Diagnostics {
 		s, t := lines.Position(d.Span.Start), lines.Position(d.Span.End)
+		msg := d.Message
+		if loc, ok := analysis.DeclaredByIncluder(res, includer, d); ok {
+			msg += fmt.Sprintf(" (%s:%d, which includes this file, declares it, but a file sees only its own declarations and those of the files it includes)",
+				displayPath(loc.File), includer.Files[loc.File].Lines.Position(loc.Span.Start).Line+1)
+		}
 		out = append(out, checkDiag{
 			File: name, Line: s.Line + 1, Column: s.Char + 1, EndLine: t.Line + 1, EndColumn: t.Char + 1,
-			Severity: d.Severity.String(), Code: d.Code, Message: d.Message,
+			Severity: d.Severity.String(), Code: d.Code, Message: msg,
 		})
 	}
 	return out

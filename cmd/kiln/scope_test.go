@@ -332,3 +332,26 @@ func TestEquilibriumFillOutputEqual(t *testing.T) {
 		assert.InEpsilon(t, xb[name], xa[name], 1e-3, name)
 	}
 }
+
+// TestCheckIncluderDeclares: a reaction of an included file naming a
+// species only its includer declares is undeclared there (a file sees only
+// itself and what it includes), and check says where the includer declares
+// it; a name nobody declares gets no such note.
+func TestCheckIncluderDeclares(t *testing.T) {
+	main := writeTemp(t, "main.kiln", "species O2 O=O\ninclude sub/nox.kiln\n")
+	dir := filepath.Join(filepath.Dir(main), "sub")
+	require.NoError(t, os.MkdirAll(dir, 0o755))
+	require.NoError(t, os.WriteFile(filepath.Join(dir, "nox.kiln"), []byte(`species NO2 [O]N=O
+species NO [N]=O
+species O [O]
+reaction NO2 + O <=> NO + O2   A=1e13 n=0 Ea=0
+reaction NO + O <=> NO2 + X   A=1e13 n=0 Ea=0
+`), 0o644))
+	_, stdout, _ := runKiln(t, "check", main)
+	o2 := regexp.MustCompile(`nox\.kiln:4:\d+: error: species O2 is not declared.*main\.kiln:1, which includes this file, declares it`)
+	assert.Regexp(t, o2, stdout)
+	x := regexp.MustCompile(`nox\.kiln:5:\d+: error: species X is not declared[^\n]*\[undeclared-species\]`)
+	if assert.Regexp(t, x, stdout) {
+		assert.NotContains(t, x.FindString(stdout), "which includes this file")
+	}
+}

@@ -155,6 +155,7 @@ func TestAccuracy(t *testing.T) {
 			hf := map[string]*errStat{}
 			s := map[string]*errStat{}
 			cp := map[string]*errStat{}
+			hfClean := map[string]*errStat{} // rows without a ΔHf°-changing flag, per class
 			get := func(m map[string]*errStat, k string) *errStat {
 				if m[k] == nil {
 					m[k] = &errStat{}
@@ -171,6 +172,9 @@ func TestAccuracy(t *testing.T) {
 				require.NoError(t, err, "%s %s", r.name, r.smiles)
 				kcal := est.Hf298 / calorie / 1000
 				cal := est.S298 / calorie
+				if !math.IsNaN(r.hf) && onlyEntropyFlags(est) {
+					get(hfClean, r.class).add(kcal-r.hf, r.name)
+				}
 				for _, k := range []string{r.class, "all"} {
 					get(hf, k).add(kcal-r.hf, r.name)
 					get(s, k).add(cal-r.s, r.name)
@@ -244,6 +248,21 @@ func TestAccuracy(t *testing.T) {
 			}
 			if v := get(cp, "all").mae(); v > 0.6 {
 				t.Errorf("%s: Cp MAE %.2f cal/(mol K) > 0.6", file, v)
+			}
+			if file == "heldout" {
+				// The held-out half of the uncertainty basis likewise.
+				for _, c := range classes {
+					got := get(hfClean, c)
+					want, ok := heldoutMAE[c]
+					switch {
+					case got.n == 0 && ok:
+						t.Errorf("heldoutMAE has %s but no unflagged held-out row of it", c)
+					case got.n > 0 && !ok:
+						t.Errorf("heldoutMAE has no entry for %s (held-out measures %.2f)", c, got.mae())
+					case got.n > 0 && math.Abs(got.mae()-want) > 0.05:
+						t.Errorf("heldoutMAE[%s] = %.2f but held-out measures %.2f (n=%d): update class.go", c, want, got.mae(), got.n)
+					}
+				}
 			}
 			if file == "train" {
 				// The uncertainty table must be what this test measures.

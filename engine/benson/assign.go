@@ -353,7 +353,12 @@ func uncovered(g *graph, i, c int) error {
 	if bond == "" {
 		bond = fmt.Sprintf("order-%d", o)
 	}
-	return unsupported(g, i, fmt.Sprintf("is a terminal atom (%s bond to atom %d, %s, type %s) that no group in the tables accounts for", bond, j+1, g.m.Atoms[j].Element, g.typ[j]))
+	if heavy <= 2 {
+		// A diatomic (Br2, ClF, S2): no atom has two heavy neighbours, so
+		// no group can be named for it, by the tables or by a user.
+		return unsupported(g, i, fmt.Sprintf("is a terminal atom (%s bond to atom %d, %s) and the species has no atom with two heavy neighbours, so no group applies: give it a thermo block from a published table", bond, j+1, g.m.Atoms[j].Element))
+	}
+	return unsupported(g, i, fmt.Sprintf("is a terminal atom (%s bond to atom %d, %s, type %s) that no group in the tables accounts for, and no group can name it: give the species a thermo block", bond, j+1, g.m.Atoms[j].Element, g.typ[j]))
 }
 
 // MissingGroupError reports a group with neither a value nor an

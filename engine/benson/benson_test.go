@@ -407,7 +407,7 @@ func BenchmarkEstimateC10Aromatic(b *testing.B) {
 func TestUncertaintyFromClass(t *testing.T) {
 	e := estimate(t, "CCCC", Options{})
 	assert.Equal(t, "alkane", e.Class)
-	assert.InDelta(t, maeToSigma*classMAE["alkane"]*4184, e.Uncertainty, 1e-9)
+	assert.InDelta(t, maeToSigma*classError("alkane")*4184, e.Uncertainty, 1e-9)
 	assert.Positive(t, e.Uncertainty)
 	// Every approximation widens the uncertainty: a bridged system without
 	// a correction, a missing group, an unknown ring.

@@ -70,7 +70,7 @@ func TestThiopheneCpFlag(t *testing.T) {
 		e := estimate(t, smi, Options{})
 		assert.Equal(t, 1, count(e), "%s: %v", smi, e.Missing)
 		if len(e.Missing) == 1 {
-			assert.InDelta(t, maeToSigma*classMAE[e.Class]*calorie*1000, e.Uncertainty, 1e-6, smi)
+			assert.InDelta(t, maeToSigma*classError(e.Class)*calorie*1000, e.Uncertainty, 1e-6, smi)
 		}
 	}
 	assert.Zero(t, count(estimate(t, "C1CCSC1", Options{})))

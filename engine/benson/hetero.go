@@ -3,6 +3,7 @@ package benson
 import (
 	_ "embed"
 	"slices"
+	"strconv"
 
 	"kiln.dev/kiln/engine/molecule"
 )
@@ -200,37 +201,62 @@ func addHalogenFlags(g *graph, l lookup, est *Result) {
 	}
 }
 
-// heteroSite classifies a radical site on a heteroatom other than O:
-// aminyl (on N), thiyl (on S). missing names the approximation when the site
-// only resembles the increment used (a secondary aminyl). ok is false for any
-// other site. Carbon sites next to N, Cl, F, Br or I (alpha-amino,
-// alpha-chloro, alpha-fluoro) are classified with the other stabilising
-// neighbours of a carbon centre, by one priority rule (radical.go,
-// stabilisers).
+// heteroSite classifies a radical site on a heteroatom other than O: on N
+// (nitrogenSite, hetero_n.go) and on S (sulfurSite). missing names the
+// approximation when the site only resembles the increment used; a site
+// with no increment at hand gets a name with no row in the HBI tables, so
+// addHBI refuses the estimate naming it. ok is false for any other element.
+// Carbon sites next to N, Cl, F, Br or I (alpha-amino, alpha-chloro,
+// alpha-fluoro) are classified with the other stabilising neighbours of a
+// carbon centre, by one priority rule (radical.go, stabilisers).
 func heteroSite(g *graph, i int) (site, missing string, ok bool) {
 	switch g.m.Atoms[i].Element {
 	case "N":
-		carbons := 0
-		for _, j := range g.nbr[i] {
-			if g.isCarbon(j) {
-				carbons++
-			}
-		}
-		if site, ok := nitrogenSite(g, i, carbons); ok { // hetero_n.go
-			return site, "", true
-		}
-		if carbons > 1 || len(g.nbr[i]) != carbons {
-			return "aminyl", "aminyl site other than R–NH (CH3NH–H increment used)", true
-		}
-		return "aminyl", "", true
+		site, missing := nitrogenSite(g, i) // hetero_n.go
+		return site, missing, true
 	case "S":
-		if len(g.nbr[i]) == 1 && g.isCarbon(g.nbr[i][0]) {
-			return "thiyl", "", true
-		}
-		return "thiyl", "thiyl site other than R–S (CH3S–H increment used)", true
+		return sulfurSite(g, i)
 	}
 	return "", "", false
 }
+
+// sulfurSite classifies S-centred radical site i (g is the parent graph):
+//
+//   - thiyl: R–S•, one sp3 carbon neighbour (CH3S–H, hbi_nsx.tsv).
+//   - arylthiyl: Ar–S•, on a benzene-ring carbon (C6H5S–H, hbi_n.tsv). The
+//     published PhS–H bond enthalpies disagree by about 4.5 kcal/mol (83.5
+//     against about 79), so the site is flagged (arylthiylSite) and widened
+//     by that spread (class.go); the alkyl CH3S–H increment, 87.4, would put
+//     PhS• 4–8 kcal/mol too high.
+//   - on another unsaturated carbon (vinyl, acyl, alkynyl: S• conjugated
+//     with a π bond): the CH3S–H increment, flagged as a stabilised site
+//     without its increment (unstabilisedSite, widened by widenStabiliser).
+//   - perthiyl (S• bonded to S, RSS•) and S• bonded to N, O or a halogen,
+//     or with no or several neighbours: no increment at hand — RSS–H is
+//     roughly 15 kcal/mol weaker than CH3S–H (about 70 against 87.4, from
+//     memory) — so the site gets a name with no HBI row and is refused.
+func sulfurSite(g *graph, i int) (site, missing string, ok bool) {
+	if len(g.nbr[i]) != 1 {
+		return "thiyl site with " + strconv.Itoa(len(g.nbr[i])) + " neighbours", "", true
+	}
+	j := g.nbr[i][0]
+	switch t := g.typ[j]; {
+	case t == "C":
+		return "thiyl", "", true
+	case t == "Cb" || t == "Cbf":
+		return "arylthiyl", arylthiylSite, true
+	case g.isCarbon(j):
+		return "thiyl", unstabilisedSite + "thiyl on a " + t + " carbon (CH3S–H increment used; conjugation weakens the S–H bond)", true
+	case g.m.Atoms[j].Element == "S":
+		return "perthiyl (S• bonded to S)", "", true
+	}
+	return "thiyl bonded to " + g.m.Atoms[j].Element, "", true
+}
+
+// arylthiylSite flags an arylthiyl site (Ar–S•): its increment rests on
+// published C6H5S–H bond enthalpies that disagree by about 4.5 kcal/mol
+// (hbi_n.tsv); class.go widens the uncertainty by widenArylthiyl.
+const arylthiylSite = "arylthiyl radical site (Ar–S•): published C6H5S–H bond enthalpies disagree by about 4.5 kcal/mol"
 
 // partnerElement returns the neighbour of i of the given element joined by a
 // bond of the given order, or -1.
@@ -251,6 +277,8 @@ func (g *graph) partnerElement(i, order int, element string) int {
 // 1.6 cal/(mol K) at 300 K to the free-rotor R/2 at high temperature
 // (common practice). The lost X–H vibrations (radical.go, lostModes) carry
 // no torsion, so the rotor is removed here, as the O–H rotor is for alkoxy.
+// An arylthiyl site (C6H5S•) loses thiophenol's S–H torsion, also a low
+// barrier (about 1 kcal/mol, from memory); CH3SH's rotor values stand in.
 const thiolRotorS = 4.2 // cal/(mol K)
 
 var thiolRotorCp = [7]float64{1.6, 1.4, 1.3, 1.2, 1.1, 1.05, 1.0} // cal/(mol K) at StdTemps
@@ -260,7 +288,7 @@ var thiolRotorCp = [7]float64{1.6, 1.4, 1.3, 1.2, 1.1, 1.05, 1.0} // cal/(mol K)
 // with none.
 func heteroSiteChange(g *graph, i int, site string) (float64, [7]float64, bool) {
 	var cp [7]float64
-	if site != "thiyl" || g.m.Atoms[i].Element != "S" || len(g.nbr[i]) != 1 {
+	if (site != "thiyl" && site != "arylthiyl") || g.m.Atoms[i].Element != "S" || len(g.nbr[i]) != 1 {
 		return 0, cp, false
 	}
 	for k := range cp {

@@ -207,6 +207,7 @@ func TestHeteroAccuracy(t *testing.T) {
 			assert.Greater(t, st.hf.n, 0, "%s/%s: no unflagged estimate", class, split)
 			assert.LessOrEqual(t, st.s.mae(), 1.0, "%s/%s S° MAE (cal/(mol K))", class, split)
 			if split == "heldout" {
+				assert.InDelta(t, st.hf.mae(), heldoutMAE[class], 0.05, "heldoutMAE[%q] drifted from the measured held-out MAE", class)
 				pooled.n += st.hf.n
 				pooled.sum += st.hf.sum
 				if st.hf.n < minHeldOut {

@@ -439,23 +439,91 @@ func typeNote(centre string) string {
 	return ""
 }
 
-// nitrogenSite classifies the N-centred radical sites that have their own
-// increment in hbi_n.tsv: anilino (C6H5NH•, an NH next to a benzene ring).
-// Other N sites take the aminyl increment (hetero.go, heteroSite).
-func nitrogenSite(g *graph, i, carbons int) (string, bool) {
-	if carbons == 1 && len(g.nbr[i]) == 1 && g.typ[g.nbr[i][0]] == "Cb" { // g is the parent graph: the N carries NH2 there
-		return "anilino", true
-	}
+// nitrogenSite classifies N-centred radical site i (g is the parent graph,
+// where the N carries its H back). Increments (hbi_nsx.tsv, hbi_n.tsv):
+//
+//   - aminyl: R–NH•, one sp3 carbon neighbour (CH3NH–H).
+//   - dialkylaminyl: R2N•, two sp3 carbon neighbours ((CH3)2N–H). The
+//     published values disagree ((CH3)2N–H 95 against 91.5 kcal/mol, see
+//     hbi_n.tsv), so the site is flagged (dialkylaminylSite) and its
+//     uncertainty widened by that spread (class.go).
+//   - anilino: Ar–NH•, one benzene-ring neighbour (C6H5NH–H). With a further
+//     neighbour (N-alkyl or N-aryl anilino, Ar–N•–R) the C6H5NH–H increment
+//     is used and flagged (substitutedAnilinoSite): a substituent on the N
+//     lowers the N–H bond as it does from CH3NH–H to (CH3)2N–H.
+//
+// Every other N site has no increment at hand and is given a site name with
+// no row in the HBI tables, so the estimate is refused naming it (addHBI):
+//
+//   - iminyl (R2C=N•) and diazenyl (R–N=N•): H2C=N–H is about 90 kcal/mol
+//     against about 100 for CH3NH–H (from memory).
+//   - hydrazinyl (an N• bonded to another N: H2N–NH•, the N2H3 radical):
+//     the lone pair of the neighbouring N weakens the N–H bond by roughly
+//     15–25 kcal/mol (published N–H bond enthalpies of hydrazine range over
+//     about 76–87 kcal/mol against 100 for CH3NH–H, from memory), and no
+//     hydrazine N–H increment is at hand to enter with its source.
+//   - oxyaminyl (an N• bonded to O: HO–NH•, RO–NR•) and thioaminyl (bonded
+//     to S), haloaminyl (bonded to a halogen): no increment, and the
+//     heteroatom's lone pair changes the N–H bond strength by an amount of
+//     the size of the hydrazinyl case.
+//   - amidyl (next to a C=O: R–C(=O)–NH•): amide N–H bonds are several
+//     kcal/mol stronger than amine ones (from memory); no increment at hand.
+//   - an N• next to any other unsaturated or hetero neighbour (vinyl, a
+//     nitrile or alkyne carbon, an imine carbon, a nitro N …) and the bare
+//     NH2• (H2N–H is 107.6 kcal/mol, not 100; NH2 is a reference-library
+//     species): no increment at hand. A vinyl-type site is still estimated
+//     through its other resonance structure (•C–C=N, aza-allyl) when that
+//     one has its groups.
+func nitrogenSite(g *graph, i int) (site, missing string) {
 	switch g.typ[i] {
 	case "NI", "NA":
-		// Iminyl (R2C=N•) and azo-N sites: no increment at hand, and the
-		// aminyl one is far off (H2C=N–H is about 90 kcal/mol against
-		// about 100 for CH3NH–H, from memory). The site names have
-		// no row in the HBI tables, so the estimate is refused naming them.
-		return map[string]string{"NI": "iminyl", "NA": "diazenyl"}[g.typ[i]], true
+		return map[string]string{"NI": "iminyl", "NA": "diazenyl"}[g.typ[i]], ""
 	}
-	return "", false
+	if len(g.nbr[i]) == 0 {
+		return "amidogen (NH2•)", ""
+	}
+	alkyl, aryl := 0, 0
+	for _, j := range g.nbr[i] {
+		switch t := g.typ[j]; {
+		case t == "C":
+			alkyl++
+		case t == "Cb" || t == "Cbf":
+			aryl++
+		case t == "CO":
+			return "amidyl (N• next to C=O)", ""
+		case g.m.Atoms[j].Element == "N":
+			return "hydrazinyl (N• bonded to N)", ""
+		case g.m.Atoms[j].Element == "O":
+			return "oxyaminyl (N• bonded to O)", ""
+		case g.m.Atoms[j].Element == "S":
+			return "thioaminyl (N• bonded to S)", ""
+		case g.m.Atoms[j].Element != "C":
+			return "haloaminyl (N• bonded to " + g.m.Atoms[j].Element + ")", ""
+		default:
+			return "aminyl next to a " + t + " carbon", ""
+		}
+	}
+	switch {
+	case aryl == 1 && alkyl == 0:
+		return "anilino", ""
+	case aryl > 0:
+		return "anilino", substitutedAnilinoSite
+	case alkyl == 1:
+		return "aminyl", ""
+	}
+	return "dialkylaminyl", dialkylaminylSite
 }
+
+// dialkylaminylSite flags a dialkylaminyl site (R2N•): its increment rests
+// on published (CH3)2N–H bond enthalpies that disagree by 3.5 kcal/mol
+// (hbi_n.tsv); class.go widens the uncertainty by widenDialkylaminyl.
+const dialkylaminylSite = "dialkylaminyl radical site (R2N•): published (CH3)2N–H bond enthalpies disagree by 3.5 kcal/mol"
+
+// substitutedAnilinoSite flags an anilino site whose N carries a further
+// substituent (Ar–N•–R): the C6H5NH–H increment is used, and the
+// substituent lowers D(N–H) by about as much as from CH3NH–H to (CH3)2N–H
+// (5–8.5 kcal/mol); class.go widens the uncertainty by widenSubstitutedNSite.
+const substitutedAnilinoSite = "N-substituted anilino radical site (Ar–N•–R): C6H5NH–H increment used; the N substituent lowers D(N–H) by several kcal/mol"
 
 // nitrogenSiteNote names the approximation made for a carbon radical site
 // whose increment was measured without the nitrogen group next to it: a

@@ -322,7 +322,8 @@ var polyhaloSites = map[string][4]string{
 // three halogens of one element (Cl or F) and no other stabilising
 // neighbour: its site is the X2CH–H or X3C–H increment. missing notes a
 // centre that also has another heavy neighbour (CH3CCl2•): the increment is
-// the halomethane's, and substitution lowers D(R–H) by a few kcal/mol. ok is
+// the halomethane's, and substitution lowers D(R–H) by several kcal/mol
+// (substitutedHaloSite, widened in class.go). ok is
 // false for any other centre (mixed halogens, bromine, a further stabilising
 // neighbour), which the general stabiliser rule of radical.go handles.
 func (g *graph) polyhaloSite(i int) (site, missing string, ok bool) {
@@ -348,7 +349,7 @@ func (g *graph) polyhaloSite(i int) (site, missing string, ok bool) {
 	}
 	site = sites[n]
 	if others > 0 {
-		missing = site + " radical site on a substituted carbon (the halomethane's increment is used; substitution lowers D(R–H) by a few kcal/mol)"
+		missing = substitutedHaloSite + site + " (the halomethane's increment is used)" // radical.go
 	}
 	return site, missing, true
 }

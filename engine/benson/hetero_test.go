@@ -167,7 +167,7 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"C[S]", "thiyl", false},
 		{"CC[S]", "thiyl", false},
 		{"C[NH]", "aminyl", false},
-		{"C[N]C", "aminyl", true},
+		{"C[N]C", "dialkylaminyl", true},
 		{"[CH2]N", "alpha-amino", false},
 		{"c1ccccc1[NH]", "anilino", false}, // hbi_n.tsv
 		{"C[CH][N+](=O)[O-]", "primary", true},

@@ -99,12 +99,12 @@ func TestImineAzoFlags(t *testing.T) {
 	require.NoError(t, err)
 	require.NotEmpty(t, im.Missing)
 	assert.True(t, onlyEntropyFlags(im), "%+v", im.Missing)
-	assert.InDelta(t, maeToSigma*classMAE["nitrogen"]*4184, im.Uncertainty, 1e-6)
+	assert.InDelta(t, maeToSigma*classError("nitrogen")*4184, im.Uncertainty, 1e-6)
 
 	az, err := Estimate(parse(t, "C/N=N/C"), Options{})
 	require.NoError(t, err)
 	assert.False(t, onlyEntropyFlags(az))
-	want := maeToSigma * classMAE["nitrogen"]
+	want := maeToSigma * classError("nitrogen")
 	assert.InDelta(t, 4184*math.Sqrt(want*want+widenGroup*widenGroup), az.Uncertainty, 1e-6)
 
 	// A user group replaces the flagged value and its flag.
@@ -189,7 +189,7 @@ func TestImineRadicalSites(t *testing.T) {
 			found = found || m.Group == "HBI: "+unstabilisedSite+"next to an imine C=N"
 		}
 		assert.True(t, found, "%s: %+v", smi, est.Missing)
-		want := maeToSigma * classMAE["nitrogen"]
+		want := maeToSigma * classError(est.Class)
 		assert.GreaterOrEqual(t, est.Uncertainty, 4184*math.Sqrt(want*want+widenStabiliser*widenStabiliser)-1e-6, smi)
 	}
 	for smi, want := range map[string]string{"CC(C)=[N]": "iminyl", "C/N=[N]": "NA-(H)", "CC/N=[N]": "NA-(H)"} {

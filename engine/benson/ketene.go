@@ -84,7 +84,7 @@ const widenKeteneEnd = 3.0
 
 // thermoBlockRoute ends a refusal for which no group statement can help
 // (issue 13: every refusal says how to supply what is missing).
-const thermoBlockRoute = "no `group` statement can name this carbon, so the species needs a thermo block (nasa7 or thermo-table)"
+const thermoBlockRoute = "no `group` statement can name this carbon: give the species a thermo block"
 
 // keteneRefusal refuses a C=C=O carbon that the ketene group Ck cannot
 // describe: one whose other partner is cumulated or not a carbon, and one

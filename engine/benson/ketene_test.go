@@ -56,7 +56,7 @@ func TestSubstitutedKeteneFlag(t *testing.T) {
 				assert.Equal(t, c.group+" (the alkene value)", flags[0].Approximation, smi)
 				assert.Equal(t, keteneEndFlag(c.subs), flags[0].Group, smi)
 			}
-			base := maeToSigma * classMAE[e.Class]
+			base := maeToSigma * classError(e.Class)
 			want := math.Hypot(base, widenKeteneEnd*float64(c.subs))
 			assert.InDelta(t, want, e.Uncertainty/calorie/1000, 1e-9, "%s: class σ and %d × %.1f kcal/mol", smi, c.subs, widenKeteneEnd)
 			if c.subs > 0 {
@@ -149,7 +149,7 @@ func TestCumuleneFlag(t *testing.T) {
 				assert.True(t, strings.HasPrefix(f.Approximation, "Ca, "), "%s: %s", smi, f.Approximation)
 			}
 			assert.Len(t, e.Missing, len(flags), "%s: no other flag: %v", smi, e.Missing)
-			want := math.Sqrt(math.Pow(maeToSigma*classMAE[e.Class], 2) + float64(n)*widenGroup*widenGroup)
+			want := math.Sqrt(math.Pow(maeToSigma*classError(e.Class), 2) + float64(n)*widenGroup*widenGroup)
 			assert.InDelta(t, want, e.Uncertainty/calorie/1000, 1e-9, smi)
 			for _, g := range e.Groups {
 				if g.Name == "Ca" {

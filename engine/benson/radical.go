@@ -31,8 +31,21 @@ import (
 // next to O bearing H or not), α-amino, α-chloro and α-fluoro (next to N, Cl
 // or F, see hetero.go), α,α-dichloro, -trichloro, -difluoro and -trifluoro
 // (two or three halogens of one element, hetero_sx.go), alkoxy (on O),
-// phenoxy (O on Cb), peroxy (O on O).
-// Sites outside this list use the nearest one and are reported in Missing.
+// phenoxy (O on Cb), peroxy (O on O); on N and S (hetero.go, hetero_n.go):
+// aminyl (R–NH•), dialkylaminyl (R2N•), anilino (Ar–NH•), thiyl (R–S•),
+// arylthiyl (Ar–S•).
+// Sites that only resemble one of these use the nearest one and are
+// reported in Missing; where the direction and size of the error are known
+// (an α-halo centre with an alkyl substituent, an N-substituted anilino
+// site, a thiyl site on an unsaturated carbon) or the published bond
+// enthalpies disagree (dialkylaminyl, arylthiyl), class.go widens the
+// uncertainty by at least that size. Sites for which no increment is at
+// hand and the nearest one is far off — an N• bonded to N, O, S or a
+// halogen (hydrazinyl: N2H3), amidyl, iminyl and diazenyl, an O• bonded to
+// N or S (aminoxyl), an S• bonded to S (perthiyl) — are given a site name
+// with no row in the HBI tables, so addHBI refuses the estimate naming the
+// site and the route (a thermo block: a `group` statement cannot supply an
+// increment).
 //
 // One answer per molecule: the site type is a function of the graph, never
 // of the order in which atoms or neighbours were written. An sp3 carbon
@@ -173,6 +186,24 @@ func severalStabilisers(several, site string) Missing {
 // class.go widens the uncertainty by widenStabiliser.
 const unstabilisedSite = "alkyl increment for a stabilised radical site: "
 
+// noIncrementRoute ends the refusal of a radical site without an increment:
+// kiln's tables have no row for it and a `group` statement cannot supply
+// one, so the species' thermochemistry has to be given.
+const noIncrementRoute = "a `group` statement cannot supply a bond-dissociation increment: give the species a thermo block"
+
+// disputedIncrementNote explains the flag of a site that has its own
+// increment, taken from one of several published bond enthalpies that
+// disagree (dialkylaminyl, arylthiyl): the uncertainty is widened by their
+// spread (class.go).
+const disputedIncrementNote = "the site's own increment, from one of published bond enthalpies that disagree; the uncertainty is widened by their spread"
+
+// substitutedHaloSite starts the note of an α-halo radical centre with a
+// carbon substituent (CH3CH•Cl, CH3C•Cl2): the increment was measured on the
+// halomethane (XCH2–H, X2CH–H), and alkyl substitution at the centre lowers
+// D(R–H), which the increment leaves out; class.go widens the uncertainty
+// by widenSubstitutedHalo.
+const substitutedHaloSite = "α-halo radical site on a substituted carbon, alkyl substitution lowers D(R–H) by several kcal/mol: "
+
 // ketenylSite names the radical site of a ketenyl radical, R–C•=C=O (its
 // other resonance structure R–C≡C–O•): no increment of its own is at hand,
 // and the vinylic increment (on the C=C carbon) or the alkoxy one (on the O
@@ -220,7 +251,7 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 					// substitution at the centre lowers D(R–H) further.
 					for _, j := range g.nbr[i] {
 						if g.isCarbon(j) {
-							missing = s.kind + " radical site on a substituted carbon (the XCH2–H increment is used; alkyl substitution lowers D(R–H) by a few kcal/mol)"
+							missing = substitutedHaloSite + s.kind + " (the XCH2–H increment is used)"
 							break
 						}
 					}
@@ -268,7 +299,26 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 		// type in this order would decide.
 		best := ""
 		for _, j := range g.nbr[i] {
+			switch el := g.m.Atoms[j].Element; el {
+			case "C", "O":
+			case "N":
+				// Aminoxyl (nitroxide, R2N–O•) and iminoxyl sites: the
+				// N lone pair makes the O–H bond of the parent
+				// hydroxylamine or oxime some 30 kcal/mol weaker than an
+				// alcohol's (R2NO–H about 70–75 against CH3O–H 104.6,
+				// from memory); no increment at hand, so the site is
+				// named without an HBI row and refused (addHBI).
+				return "aminoxyl (O• bonded to N)", "", "", nil
+			default:
+				// O• on S (HSO-type), on a halogen …: no increment at
+				// hand either; refused alike.
+				return "oxyl bonded to " + el, "", "", nil
+			}
 			switch g.typ[j] {
+			case "CdN":
+				// R–C(=NR)–O•, the imidate resonance structure of an
+				// amidyl radical: no increment at hand (nitrogenSite).
+				return "amidyl (imidate O• structure)", "", "", nil
 			case "O":
 				best = "peroxy"
 			case "Cb":
@@ -333,9 +383,13 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 			est.Missing = append(est.Missing, severalStabilisers(several, site))
 		}
 		if miss != "" {
+			note := "no increment for this site; nearest site type used"
+			if miss == dialkylaminylSite || miss == arylthiylSite {
+				note = disputedIncrementNote
+			}
 			est.Missing = append(est.Missing, Missing{
 				Group: "HBI: " + miss, Approximation: "HBI: " + site,
-				Note: "no increment for this site; nearest site type used",
+				Note: note,
 			})
 		}
 		if a.Radical > 1 {
@@ -353,7 +407,7 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 	for _, site := range order {
 		h, ok := l.hbi[site]
 		if !ok {
-			return &UnsupportedError{Reason: fmt.Sprintf("no hydrogen-bond increment is at hand for a radical site of type %s", site)}
+			return &UnsupportedError{Reason: fmt.Sprintf("no hydrogen-bond increment is at hand for a radical site of type %s (%s)", site, noIncrementRoute)}
 		}
 		t := term(h.value, count[site])
 		t.Name = "HBI: " + site

@@ -179,3 +179,19 @@ func TestIsotopeRefused(t *testing.T) {
 		assert.Contains(t, ue.Reason, "isotope-labelled", s)
 	}
 }
+
+// TestTerminalAtomRoute: a terminal atom no group accounts for is refused
+// with the route (a thermo block), and a diatomic is told that no group can
+// apply to it at all.
+func TestTerminalAtomRoute(t *testing.T) {
+	for smi, want := range map[string]string{
+		"BrBr": "no atom with two heavy neighbours, so no group applies: give it a thermo block",
+		"ClF":  "no atom with two heavy neighbours, so no group applies: give it a thermo block",
+		"CS=S": "no group can name it: give the species a thermo block",
+	} {
+		_, err := Estimate(parse(t, smi), Options{})
+		if assert.Error(t, err, smi) {
+			assert.Contains(t, err.Error(), want, smi)
+		}
+	}
+}

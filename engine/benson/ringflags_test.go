@@ -29,7 +29,7 @@ func TestThianeRing(t *testing.T) {
 		assert.InDelta(t, r.hf, e.Hf298/calorie/1000, 0.01, smi)
 		assert.Equal(t, 1, count(e), "%s: %v", smi, e.Missing)
 		require.Len(t, e.Missing, 1, smi)
-		assert.InDelta(t, maeToSigma*classMAE[e.Class]*calorie*1000, e.Uncertainty, 1e-6, smi)
+		assert.InDelta(t, maeToSigma*classError(e.Class)*calorie*1000, e.Uncertainty, 1e-6, smi)
 		names := map[string]bool{}
 		for _, c := range e.Corrections {
 			names[c.Name] = true

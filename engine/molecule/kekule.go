@@ -433,6 +433,16 @@ func (p *parser) build() *Molecule {
 			}
 			order = append(order[:at], append([]int{-1}, order[at:]...)...)
 		}
+		// A lone pair of a three-coordinate S, Se or P centre (a
+		// sulfoxide's S) takes the place an implicit hydrogen would
+		// (OpenSMILES): -2, as stereoPositions names it.
+		if el := p.atoms[i].Element; (el == "S" || el == "Se" || el == "P") && p.bracketH[i] == 0 && len(order) == 3 {
+			at := 0
+			if p.hadPrev[i] {
+				at = 1
+			}
+			order = append(order[:at], append([]int{-2}, order[at:]...)...)
+		}
 		m.nbrOrder[remap[i]] = order
 	}
 	return m

@@ -51,3 +51,21 @@ func TestOpticalIsomersFixtures(t *testing.T) {
 	require.NoError(t, sc.Err())
 	assert.GreaterOrEqual(t, rows, 30)
 }
+
+// TestSulfoxideMarks: a written @/@@ on a sulfoxide S (its lone pair in the
+// place of an implicit hydrogen, OpenSMILES) fixes its configuration as a
+// mark on carbon does: one enantiomer (n = 1) against the racemate's 2; the
+// two marks are two structures, each the same whatever the atom order.
+func TestSulfoxideMarks(t *testing.T) {
+	n := func(s string) int { return parse(t, s).OpticalIsomers() }
+	assert.Equal(t, 2, n("CCS(C)=O"))
+	assert.Equal(t, 1, n("CC[S@](C)=O"))
+	assert.Equal(t, 1, n("C[S@](C)=O")) // achiral either way
+	r, s := parse(t, "CC[S@](C)=O").CanonicalStereo(), parse(t, "CC[S@@](C)=O").CanonicalStereo()
+	assert.NotEqual(t, r, s)
+	// the same configuration written from the other end and with =O first
+	assert.Equal(t, r, parse(t, "C[S@](=O)CC").CanonicalStereo())
+	assert.Equal(t, r, parse(t, "O=[S@@](C)CC").CanonicalStereo())
+	back := parse(t, r)
+	assert.Equal(t, r, back.CanonicalStereo(), "the canonical form reads back as itself")
+}

@@ -446,6 +446,8 @@ func (w *writer) outputNeighbours(a int) []int {
 	}
 	if w.m.Atoms[a].HCount > 0 {
 		out = append(out, -1)
+	} else if a < len(w.m.nbrOrder) && slices.Contains(w.m.nbrOrder[a], -2) {
+		out = append(out, -2) // a stereo lone pair stands where a hydrogen would (kekule.go)
 	}
 	for _, rb := range w.closures[a] {
 		out = append(out, w.m.Other(rb, a))

@@ -148,7 +148,7 @@ func TestLookupNSX(t *testing.T) {
 		{"[NH]", 0, "NH"}, {"[NH]", 1, ""},
 		{"N=[N]", 0, "NNH"}, {"O=N", 0, "HNO"}, {"N(=O)O", 0, "HONO"},
 		{"[O-][N+](=O)O", 0, "HNO3"}, {"N#C", 0, "HCN"}, {"N#[C]", 0, "CN"},
-		{"O=C=N", 0, "HNCO"}, {"N#CO", 0, "HOCN"}, {"O=C=[N]", 0, "NCO"},
+		{"O=C=N", 0, "HNCO"}, {"N#CO", 0, "HOCN"}, {"O=C=[N]", 0, "NCO"}, {"N#C[O]", 0, "NCO"}, {"[O]C#N", 2, "NCO"},
 		{"C=C=O", 0, "CH2CO"}, {"C#C[O]", 0, "HCCO"}, {"O=C=[CH]", 0, "HCCO"}, {"C#[C]", 0, "C2H"},
 		{"S=O", 0, "SO"}, {"O=S", 3, "SO"}, {"O=S=O", 0, "SO2"}, {"O=S(=O)=O", 0, "SO3"},
 		{"[C]=S", 0, "CS"}, {"S=C=S", 0, "CS2"}, {"S=C=O", 0, "COS"}, {"[SH]", 0, "SH"}, {"S", 0, "H2S"},

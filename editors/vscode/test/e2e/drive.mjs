@@ -77,7 +77,7 @@ await check('hover on a species name shows thermochemistry', async () => {
     try {
       await page.waitForFunction(
         () => [...document.querySelectorAll('.monaco-hover:not(.hidden)')].some((h) => h.textContent.includes('ΔHf°298')
-          && h.textContent.includes('46.07 g/mol')),
+          && h.textContent.includes('46.069 g/mol')),
         null,
         { timeout: 15000 },
       );
