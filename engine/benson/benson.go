@@ -248,7 +248,7 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	// A cumulated ketene is refused per structure, so that a radical
 	// spelled as one (O=C=C=C1[CH]C=CC=C1, [CH]=C=C=C=O) is estimated
 	// through its other resonance structures, as when spelled otherwise.
-	if err := cumulatedKetene(m); err != nil {
+	if err := keteneRefusal(m); err != nil { // ketene.go
 		return nil, err
 	}
 	unpaired := m.UnpairedElectrons()
@@ -273,6 +273,7 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	addInteractions(g, tab, est)
 	addHalogenFlags(g, tab, est)
 	addAzineFlags(g, tab, est) // hetero_n.go
+	addCumulatedFlags(g, est)  // ketene.go
 	if unpaired > 0 {
 		if err := addHBI(m, g, tab, est); err != nil {
 			return nil, err
@@ -628,50 +629,4 @@ func spinScope(m *molecule.Molecule) error {
 		return &UnsupportedError{Atom: at, Reason: fmt.Sprintf("(%s) and its %s neighbour both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data", first, second)}
 	}
 	return nil
-}
-
-// cumulatedKetene refuses a ketene-type carbon (C=C=O) whose other partner
-// is not a plain double-bonded carbon (one double bond): carbon suboxide
-// O=C=C=C=O, ethylenedione O=C=C=O. The Ck group describes the C=O end of
-// R2C=C=O and was derived from ketenes whose CR2 end is an ordinary Cd; it
-// does not describe a cumulated chain (carbon suboxide came out 21 kcal/mol
-// high, unflagged). The atom is chosen by canonical symmetry class, as for
-// other refusals.
-func cumulatedKetene(m *molecule.Molecule) error {
-	doubles := func(i int) (n int) {
-		for _, b := range m.Adj[i] {
-			if m.Bonds[b].Order == 2 && !m.Bonds[b].Aromatic {
-				n++
-			}
-		}
-		return n
-	}
-	var refusals []atomError
-	for i, a := range m.Atoms {
-		if a.Element != "C" || doubles(i) != 2 {
-			continue
-		}
-		toO, partner := false, -1
-		for _, b := range m.Adj[i] {
-			if m.Bonds[b].Order != 2 {
-				continue
-			}
-			j := m.Other(b, i)
-			if m.Atoms[j].Element == "O" {
-				toO = true
-			} else {
-				partner = j
-			}
-		}
-		if !toO || partner < 0 {
-			continue
-		}
-		if m.Atoms[partner].Element != "C" || doubles(partner) != 1 {
-			refusals = append(refusals, atomError{i, &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(C) is a ketene carbon whose other partner (atom %d, %s) is itself cumulated or not a carbon: the ketene group Ck describes R2C=C=O with an ordinary C=C end only", partner+1, m.Atoms[partner].Element)}})
-		}
-	}
-	if len(refusals) == 0 {
-		return nil
-	}
-	return canonicalRefusal(m, refusals)
 }

@@ -211,13 +211,14 @@ func entropyOnly(m Missing) bool {
 // uncertainty returns the standard uncertainty (1σ, J/mol) of the ΔHf° of
 // an estimate of class c with the approximations in est:
 //
-//	u² = (1.25 · MAE_class)² · max(1, n/validatedGroups) + Σ w_i²
+//	u² = (1.25 · MAE_class)² · max(1, n/validatedGroups) + Σ w_i² + (widenKeteneEnd · k)²
 //
 // with MAE_class from classError (the larger of the class's training and
 // held-out MAE; the largest of all for a class never measured), n the
-// estimate's number of group centres and w_i from the widen constants for
+// estimate's number of group centres, w_i from the widen constants for
 // every entry of est.Missing that changes ΔHf° (the HBI entropy/heat-capacity
-// notes do not). TestAccuracy checks that
+// notes do not), and k the number of carbon substituents on ketene CR2 ends
+// (ketene.go), whose errors share a sign and so add linearly. TestAccuracy checks that
 // the estimate ± 2u covers at least 80 % of the reference species.
 func uncertainty(c string, est *Result, ringStrain float64) float64 {
 	mae := classError(c)
@@ -225,9 +226,16 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 	if n := groupCount(est); n > validatedGroups {
 		u2 *= float64(n) / validatedGroups
 	}
+	keteneEnds := 0
 	for _, m := range est.Missing {
 		w := 0.0
 		switch {
+		case strings.HasSuffix(m.Group, keteneEndSuffix):
+			n, _ := flagCount(m.Group, keteneEndSuffix)
+			keteneEnds += n // added linearly below (ketene.go)
+		case strings.HasSuffix(m.Group, cumuleneSuffix):
+			n, _ := flagCount(m.Group, cumuleneSuffix)
+			w = widenGroup * math.Sqrt(float64(n)) // a stand-in group per centre (ketene.go)
 		case entropyOnly(m):
 			// Entropy/Cp-only approximations: ΔHf°298 is not affected.
 		case strings.HasPrefix(m.Group, "HBI: "+unstabilisedSite), m.Group == "HBI: "+ketenylSite:
@@ -253,6 +261,8 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 		}
 		u2 += w * w
 	}
+	// The substituents on ketene CR2 ends err alike: their widenings add.
+	u2 += (widenKeteneEnd * float64(keteneEnds)) * (widenKeteneEnd * float64(keteneEnds))
 	u2 += halogenInteractionVariance(est) // hetero_sx.go
 	return math.Sqrt(u2) * calorie * 1000
 }

@@ -34,7 +34,9 @@ import (
 //     unsaturated neighbour: C-(CN)(X)… = C-(C)(X)…, CN-(X) = the rest.
 //   - Ck: a cumulated carbon carrying =O (ketene, R2C=C=O). Both double-bond
 //     partners are implied, so its group has no written neighbours, like the
-//     allene centre Ca; the =CR2 end is an ordinary Cd group.
+//     allene centre Ca; the =CR2 end is an ordinary Cd group, flagged when
+//     it carries carbon substituents and refused when it carries a
+//     heteroatom or is itself cumulated (ketene.go).
 //   - CS: a carbon double-bonded to sulfur (thiocarbonyl); its =S is implied
 //     as the =O of CO is. The tables have no CS group: such species are
 //     refused naming the group, and a user group makes them estimable.
