@@ -68,7 +68,7 @@ func (e *cpFloorError) words(u Units) string {
 // cpFloorCheck tests an estimate's Cp at the group temperatures against
 // the floor for a molecule of n atoms: the flag and the fit refusal, or ok
 // false.
-func cpFloorCheck(cp [7]float64, n int, linear bool) (benson.Missing, *cpFloorError, bool) {
+func cpFloorCheck(cp [7]float64, n int, linear, user bool) (benson.Missing, *cpFloorError, bool) {
 	i, below := cpBelowFloor(n, linear, benson.StdTemps[:], cp[:])
 	if !below {
 		return benson.Missing{}, nil, false
@@ -77,7 +77,7 @@ func cpFloorCheck(cp [7]float64, n int, linear bool) (benson.Missing, *cpFloorEr
 	return benson.Missing{
 		Group:         CpFloorGroup,
 		Approximation: "the group sum as it stands",
-		Note:          cpFloorMessage(Units{KJ: true}, e.T, e.Cp, n, linear) + "; the group values do not add up for this structure (check any user-supplied `group` values, or give it a thermo block)",
+		Note:          cpFloorMessage(flagUnits, e.T, e.Cp, n, linear) + doNotAddUp(user),
 	}, e, true
 }
 
@@ -96,15 +96,29 @@ func aboveLimitWords(u Units, T, cp, cpInf float64) string {
 
 // cpCeilingCheck tests an estimate's Cp at the group temperatures up to
 // tHigh (those nasa.Fit uses) against cpInf, as nasa.Fit does.
-func cpCeilingCheck(cp [7]float64, cpInf, tHigh float64) (benson.Missing, bool) {
+func cpCeilingCheck(cp [7]float64, cpInf, tHigh float64, user bool) (benson.Missing, bool) {
 	for i, T := range benson.StdTemps {
 		if T <= tHigh && cpInf > 0 && cp[i] >= cpInf {
 			return benson.Missing{
 				Group:         CpCeilingGroup,
 				Approximation: "the group sum as it stands",
-				Note:          aboveLimitWords(Units{KJ: true}, T, cp[i], cpInf) + "; the group values do not add up for this structure (check any user-supplied `group` values, or give it a thermo block)",
+				Note:          aboveLimitWords(flagUnits, T, cp[i], cpInf) + doNotAddUp(user),
 			}, true
 		}
 	}
 	return benson.Missing{}, false
+}
+
+// flagUnits words the numbers of a flag's note, which is part of a cached
+// estimate and so cannot follow the file's display units: J/(mol·K) with
+// the cal/(mol·K) value beside it.
+var flagUnits = Units{KJ: true, Both: true}
+
+// doNotAddUp ends the note of an out-of-bounds Cp: what to check, naming
+// the user's group values only when the estimate used some.
+func doNotAddUp(user bool) string {
+	if user {
+		return "; the group values do not add up for this structure (check the user-supplied `group` values, or give it a thermo block)"
+	}
+	return "; the built-in group values do not add up for this structure (give it a thermo block)"
 }

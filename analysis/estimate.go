@@ -204,10 +204,10 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 			e.flags = append(e.flags, f)
 		}
 	}
-	if f, refuse, below := cpFloorCheck(g.Cp, nAtoms, linear); below {
+	if f, refuse, below := cpFloorCheck(g.Cp, nAtoms, linear, usesUserGroup(g, o.UserGroups)); below {
 		e.flags, e.cpFloor = append(e.flags, f), refuse
 	}
-	if f, above := cpCeilingCheck(g.Cp, e.cpInf, o.THigh); above {
+	if f, above := cpCeilingCheck(g.Cp, e.cpInf, o.THigh, usesUserGroup(g, o.UserGroups)); above {
 		e.flags = append(e.flags, f) // nasa.Fit refuses it (ShapeAboveLimit)
 	}
 	e.model = newGroupThermo(g.Hf298, g.S298, benson.StdTemps[:], g.Cp[:])
@@ -550,4 +550,15 @@ func (c *moleculeCache) parse(smiles string) parsed {
 	c.m[strings.Clone(smiles)] = p
 	c.mu.Unlock()
 	return p
+}
+
+// usesUserGroup reports whether the estimate g took a term from the user's
+// group values (by name).
+func usesUserGroup(g *benson.Result, user []benson.GroupValue) bool {
+	for _, u := range user {
+		if usesGroup(g, u.Name) {
+			return true
+		}
+	}
+	return false
 }

@@ -19,6 +19,9 @@ import (
 // follow: J/(mol·K) with kJ/mol, cal/(mol·K) with kcal/mol.
 type Units struct {
 	KJ bool // kJ/mol and J/(mol·K); else kcal/mol and cal/(mol·K)
+	// Both adds the other unit's value in parentheses to Entropy: for texts
+	// made once and shown in files of either unit (flag notes).
+	Both bool
 }
 
 // JoulesPerCalorie is the thermochemical calorie (exact by definition).
@@ -108,7 +111,14 @@ func (u Units) Energy(j float64) string { return u.EnergyNumber(j) + " " + u.Ene
 // Entropy writes an entropy or heat capacity (J/(mol K)) for people with
 // its unit: "67.54 cal/(mol·K)" or "282.6 J/(mol·K)" (digits:
 // EntropyNumber).
-func (u Units) Entropy(v float64) string { return u.EntropyNumber(v) + " " + u.EntropyName() }
+func (u Units) Entropy(v float64) string {
+	s := u.EntropyNumber(v) + " " + u.EntropyName()
+	if u.Both {
+		o := Units{KJ: !u.KJ}
+		s += " (" + o.Entropy(v) + ")"
+	}
+	return s
+}
 
 // FormatMolarMass writes a molar mass (g/mol) for people: "46.069 g/mol".
 func FormatMolarMass(m float64) string { return FormatFixed(m, 3) + " g/mol" }

@@ -113,7 +113,8 @@ func TestCpFloorFillCheckAgree(t *testing.T) {
 	assert.Equal(t, "missing-group", before[0].Code)
 	assert.Equal(t, 7, before[0].Line)
 	assert.Contains(t, before[0].Message, "CCl4: the estimate is beyond a physical bound: Cp below the ideal-gas lower bound")
-	assert.Contains(t, before[0].Message, "Cp at 300 K is 8.4 J/(mol·K), below 33.3 J/(mol·K), the translational and rotational heat capacity of any non-linear molecule of 5 atoms")
+	assert.Contains(t, before[0].Message, "Cp at 300 K is 8.4 J/(mol·K) (2.00 cal/(mol·K)), below 33.3 J/(mol·K) (7.95 cal/(mol·K)), the translational and rotational heat capacity of any non-linear molecule of 5 atoms")
+	assert.Contains(t, before[0].Message, "check the user-supplied `group` values")
 
 	code, _, stderr := runKiln(t, "fill", path)
 	assert.Equal(t, exitProblems, code, stderr)
@@ -316,7 +317,7 @@ func TestCpCeilingFillCheckAgree(t *testing.T) {
 	require.Len(t, diags, 1, "%+v", diags)
 	assert.Equal(t, "missing-group", diags[0].Code)
 	assert.Contains(t, diags[0].Message, "CCl4: the estimate is beyond a physical bound: Cp at or above the classical limit")
-	assert.Contains(t, diags[0].Message, "Cp at 300 K, 209.2 J/(mol·K), is not below 108.1 J/(mol·K), the most a molecule of these atoms can hold")
+	assert.Contains(t, diags[0].Message, "Cp at 300 K, 209.2 J/(mol·K) (50.00 cal/(mol·K)), is not below 108.1 J/(mol·K) (25.83 cal/(mol·K)), the most a molecule of these atoms can hold")
 
 	code, _, stderr := runKiln(t, "fill", path)
 	assert.Equal(t, exitProblems, code, stderr)
