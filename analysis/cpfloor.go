@@ -122,3 +122,57 @@ func doNotAddUp(user bool) string {
 	}
 	return "; the built-in group values do not add up for this structure (give it a thermo block)"
 }
+
+// Holding a high-temperature Cp below the classical limit (cpCeilingHold).
+const (
+	// ceilingHoldFrom: only an excess from this temperature up is held: a
+	// group sum that saturates early (many low-frequency modes, as in
+	// perfluoro compounds) overshoots the limit slightly at the top of the
+	// table, which says nothing against its lower-temperature values.
+	ceilingHoldFrom = 1000.0
+	// ceilingHoldExcess: the largest excess, as a fraction of the limit,
+	// that is held rather than refused; a larger one means the group
+	// values themselves are wrong for this structure.
+	ceilingHoldExcess = 0.05
+	// ceilingHoldAt: the fraction of the limit the held values take.
+	ceilingHoldAt = 0.99
+)
+
+// CpHeldGroup is the Missing.Group of an estimate whose Cp at the top of
+// the table was held just below the classical limit (cpCeilingHold).
+const CpHeldGroup = "Cp held below the classical limit"
+
+// cpCeilingHold holds a Cp that reaches the classical limit cpInf only
+// from ceilingHoldFrom up, by at most ceilingHoldExcess of it, at
+// ceilingHoldAt × cpInf (values already below that are kept, so Cp stays
+// non-decreasing), and returns the held values with their flag. ok is false
+// when there is nothing to hold or the excess is not of that kind (then
+// cpCeilingCheck flags it and the fit refuses it).
+func cpCeilingHold(cp [7]float64, cpInf, tHigh float64) ([7]float64, benson.Missing, bool) {
+	if cpInf <= 0 {
+		return cp, benson.Missing{}, false
+	}
+	first, worst := -1, 0.0
+	for i, T := range benson.StdTemps {
+		if T <= tHigh && cp[i] >= cpInf {
+			if first < 0 {
+				first = i
+			}
+			worst = max(worst, cp[i])
+		}
+	}
+	if first < 0 || benson.StdTemps[first] < ceilingHoldFrom || worst > cpInf*(1+ceilingHoldExcess) {
+		return cp, benson.Missing{}, false
+	}
+	held := cp
+	hold := ceilingHoldAt * cpInf
+	for i := range held {
+		held[i] = min(held[i], hold)
+	}
+	return held, benson.Missing{
+		Group:         CpHeldGroup,
+		Approximation: fmt.Sprintf("Cp held at %.0f %% of the classical limit", 100*ceilingHoldAt),
+		Note: aboveLimitWords(flagUnits, benson.StdTemps[first], cp[first], cpInf) +
+			fmt.Sprintf("; the group sum saturates early for this structure, so kiln holds Cp at %s from where it reaches that value (the tabulated Cp and the polynomial use the held values; the true Cp there is not known to better than a few per cent)", flagUnits.Entropy(hold)),
+	}, true
+}

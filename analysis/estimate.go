@@ -207,10 +207,13 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 	if f, refuse, below := cpFloorCheck(g.Cp, nAtoms, linear, usesUserGroup(g, o.UserGroups)); below {
 		e.flags, e.cpFloor = append(e.flags, f), refuse
 	}
-	if f, above := cpCeilingCheck(g.Cp, e.cpInf, o.THigh, usesUserGroup(g, o.UserGroups)); above {
+	if held, f, ok := cpCeilingHold(g.Cp, e.cpInf, o.THigh); ok {
+		e.Cp = held
+		e.flags = append(e.flags, f)
+	} else if f, above := cpCeilingCheck(g.Cp, e.cpInf, o.THigh, usesUserGroup(g, o.UserGroups)); above {
 		e.flags = append(e.flags, f) // nasa.Fit refuses it (ShapeAboveLimit)
 	}
-	e.model = newGroupThermo(g.Hf298, g.S298, benson.StdTemps[:], g.Cp[:])
+	e.model = newGroupThermo(g.Hf298, g.S298, benson.StdTemps[:], e.Cp[:])
 	e.model.continueAlongTail(e.cp0, e.cpInf)
 	return e, nil
 }
@@ -395,6 +398,7 @@ func BeyondBound(m benson.Missing) bool {
 // FlagText: "MISSING group" for an approximation, "FLAGGED group" for a
 // group used as it stands with a known shortcoming (UsedAsItStands),
 // "UNPHYSICAL" for a sum beyond a physical bound (BeyondBound),
+// "APPROXIMATED" for a Cp kiln held below the classical limit (CpHeldGroup),
 // "MODELLED" for a quantity computed by a validated model instead of a
 // table (benson.Missing.Modelled), which check does not warn about.
 func FlagHeading(f Flag) string {
@@ -403,6 +407,8 @@ func FlagHeading(f Flag) string {
 		return "MODELLED"
 	case BeyondBound(f.Missing):
 		return "UNPHYSICAL"
+	case f.Missing.Group == CpHeldGroup:
+		return "APPROXIMATED"
 	case UsedAsItStands(f.Missing):
 		return "FLAGGED group"
 	}
@@ -426,6 +432,9 @@ func FlagText(f Flag) string {
 	}
 	if BeyondBound(m) && m.Note != "" {
 		return s + " (" + m.Note + ")" // nothing stands in: the sum as it is
+	}
+	if m.Group == CpHeldGroup {
+		return s + " (" + m.Approximation + ": " + m.Note + ")" // not a group: a value kiln held
 	}
 	if UsedAsItStands(m) {
 		s += " (used as it stands"

@@ -7,6 +7,7 @@ import (
 	"github.com/stretchr/testify/require"
 
 	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/molecule"
 	"kiln.dev/kiln/engine/nasa"
 	"kiln.dev/kiln/speciesfile"
 )
@@ -73,4 +74,43 @@ func TestCpFloorOneBound(t *testing.T) {
 	assert.Equal(t, CpFloorGroup, m.Group)
 	assert.Equal(t, 300.0, refuse.T)
 	assert.Contains(t, FitRefusal(refuse, Units{}), "the estimated Cp at 300 K is 1.91 cal/(mol·K), below 7.95 cal/(mol·K)")
+}
+
+// TestCpHeldBelowLimit: a group sum that reaches the classical limit only
+// at the top of the table, by a few per cent (C2F6, whose many
+// low-frequency modes saturate early), is held at ceilingHoldAt of the
+// limit and flagged, and the NASA-7 fit is then made; one that is far
+// above it, or already at 300 K, is not held (cpCeilingCheck flags it and
+// the fit refuses it).
+func TestCpHeldBelowLimit(t *testing.T) {
+	m, err := molecule.ParseSMILES("FC(F)(F)C(F)(F)F")
+	require.NoError(t, err)
+	e, err := estimate(newEstimateCache().lib, m, EstimateOptions{})
+	require.NoError(t, err)
+	require.Greater(t, e.cpInf, 0.0)
+	assert.GreaterOrEqual(t, e.Group.Cp[6], e.cpInf, "the premise: the group sum reaches the limit at 1500 K")
+	assert.InDelta(t, ceilingHoldAt*e.cpInf, e.Cp[6], 1e-9)
+	assert.Equal(t, e.Group.Cp[0], e.Cp[0], "values below the hold are kept")
+	held := false
+	for _, f := range e.Flags() {
+		held = held || f.Missing.Group == CpHeldGroup
+		assert.False(t, BeyondBound(f.Missing), "%+v", f)
+	}
+	assert.True(t, held)
+	p, _, err := e.NASA7()
+	require.NoError(t, err)
+	assert.Less(t, p.Cp(1500), e.cpInf)
+
+	var cp [7]float64
+	for i := range cp {
+		cp[i] = 100
+	}
+	_, _, ok := cpCeilingHold(cp, 90, 5000)
+	assert.False(t, ok, "an excess from 300 K is not held")
+	cp[6] = 120
+	for i := range cp[:6] {
+		cp[i] = 50
+	}
+	_, _, ok = cpCeilingHold(cp, 100, 5000)
+	assert.False(t, ok, "an excess of 20 %% is not held")
 }
