@@ -251,7 +251,7 @@ atoms:
 		est.Missing = append(est.Missing, Missing{
 			Group:         name,
 			Approximation: v.Name,
-			Note:          "neighbour types replaced: " + strings.Join(steps, ", "),
+			Note:          "neighbour types replaced: " + strings.Join(steps, ", ") + standInWarning(name, steps), // bias.go
 		})
 	}
 	if len(missing) > 0 {

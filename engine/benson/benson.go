@@ -271,6 +271,8 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	addRingCorrections(g, tab, est)
 	addRingEntropyFlags(tab, est) // rings.go
 	addInteractions(g, tab, est)
+	addPolarPairFlags(g, est) // bias.go
+	addCrowdingFlags(g, est)  // bias.go
 	addHalogenFlags(g, tab, est)
 	addAzineFlags(g, tab, est) // hetero_n.go
 	addCumulatedFlags(g, est)  // ketene.go

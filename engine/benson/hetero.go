@@ -193,10 +193,14 @@ func addHalogenFlags(g *graph, l lookup, est *Result) {
 		if slices.Contains(checkedPolyhaloGroups[:], name) {
 			continue
 		}
+		note := "polyhalogenated carbon whose tabulated group value no handbook molecule checks: its geminal/vicinal halogen interactions are not known; errors of several kcal/mol are possible"
+		if seen, ok := polyhaloGroupSeen[name]; ok { // hetero_sx.go
+			note += " (" + seen + ")"
+		}
 		est.Missing = append(est.Missing, Missing{
 			Group:         name,
 			Approximation: name + withoutHalogenInteractions,
-			Note:          "polyhalogenated carbon whose tabulated group value no handbook molecule checks: its geminal/vicinal halogen interactions are not known; errors of several kcal/mol are possible",
+			Note:          note,
 		})
 	}
 }

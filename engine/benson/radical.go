@@ -214,6 +214,10 @@ const substitutedHaloSite = "α-halo radical site on a substituted carbon, alkyl
 // (5 kcal/mol), as for the other stabilised sites without an increment.
 const ketenylSite = "ketenyl radical site (R–C•=C=O ↔ R–C≡C–O•): no increment of its own; the delocalisation onto the C=O is left out"
 
+// iminoylSite names the radical site on an imine carbon (C• of C=N):
+// no increment at hand, so addHBI refuses it with the thermo-block route.
+const iminoylSite = "iminoyl (C• on an imine carbon, R–C•=N–)"
+
 // siteOf classifies radical site i (an atom of the parent graph g). missing
 // names the approximation when the site only resembles the increment used;
 // several describes the stabilising neighbours of a carbon centre that has
@@ -236,6 +240,13 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 			return "vinylic", "", "", nil
 		case "CO":
 			return "acyl", "", "", nil
+		case "CdN":
+			// An iminoyl (imidoyl) σ radical, R–C•=N–R′ or HC•=NH: the
+			// electron sits in the imine carbon's in-plane orbital, with
+			// no allylic delocalisation, and no C–H increment of an imine
+			// carbon is at hand (the aza-allyl site •C–N=C of its isomer
+			// is another species). Named without an HBI row: refused.
+			return iminoylSite, "", "", nil
 		case "Ct", "Ca":
 			return "vinylic", "ethynyl/allenyl radical site", "", nil
 		}
@@ -381,6 +392,12 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 		}
 		if several != "" {
 			est.Missing = append(est.Missing, severalStabilisers(several, site))
+		}
+		for range g.betaPolyhalo(i) { // bias.go
+			est.Missing = append(est.Missing, Missing{
+				Group: "HBI: " + betaPolyhaloSite, Approximation: "HBI: " + site,
+				Note: "no increment for a site next to a CX3 or CX2 group; the increment of the site type is used, and the estimate is too low by several kcal/mol",
+			})
 		}
 		if miss != "" {
 			note := "no increment for this site; nearest site type used"

@@ -168,13 +168,18 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 		// Benzofuran, benzothiophene, dibenzofuran: the single ring's
 		// correction holds its own aromatic stabilisation, which the fused
 		// benzene ring changes; it is used as an approximation, flagged.
-		return key + " fused to a benzene ring", key
+		return key + fusedBenzeneSuffix, key
 	}
 	if key == "" {
 		key = fmt.Sprintf("%d-membered ring with %d O, %d other heteroatoms, %d double bonds", n, oxy, other, nd)
 	}
 	return key, carbo
 }
+
+// fusedBenzeneSuffix ends the ring correction key of a furan or thiophene
+// ring fused to a benzene ring, which takes the single ring's correction
+// flagged (widened by widenFusedFiveRing, class.go).
+const fusedBenzeneSuffix = " fused to a benzene ring"
 
 // fusedToBenzene reports whether a member of ring r also lies in a
 // benzenoid ring.
