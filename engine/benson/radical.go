@@ -36,13 +36,15 @@ import (
 // arylthiyl (Ar–S•).
 // Sites that only resemble one of these use the nearest one and are
 // reported in Missing; where the direction and size of the error are known
-// (an α-halo centre with an alkyl substituent, an N-substituted anilino
-// site, a thiyl site on an unsaturated carbon) or the published bond
+// (an α-halo centre with an alkyl substituent, a site next to a CX3 or
+// CX2 carbon (bias.go), an N-substituted anilino site, a thiyl site on an
+// unsaturated carbon) or the published bond
 // enthalpies disagree (dialkylaminyl, arylthiyl), class.go widens the
 // uncertainty by at least that size. Sites for which no increment is at
 // hand and the nearest one is far off — an N• bonded to N, O, S or a
-// halogen (hydrazinyl: N2H3), amidyl, iminyl and diazenyl, an O• bonded to
-// N or S (aminoxyl), an S• bonded to S (perthiyl) — are given a site name
+// halogen (hydrazinyl: N2H3), amidyl, iminyl and diazenyl, a C• on an
+// imine carbon (iminoyl), an O• bonded to N or S (aminoxyl), an S• bonded
+// to S (perthiyl) — are given a site name
 // with no row in the HBI tables, so addHBI refuses the estimate naming the
 // site and the route (a thermo block: a `group` statement cannot supply an
 // increment).
