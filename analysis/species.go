@@ -643,7 +643,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		}
 		why := "it has no structure (SMILES) to estimate from"
 		if sp.estimateErr != nil {
-			why = "kiln cannot estimate it: " + RefusalReason(sp.estimateErr)
+			why = sp.Refusal()
 		}
 		what := "has no thermo block"
 		if sp.brokenBlock {

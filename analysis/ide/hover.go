@@ -235,6 +235,9 @@ func (w *writer) species(sp *analysis.Species) {
 	est, giv := estimateValues(sp.Estimate), givenValues(sp.Given)
 	if est == nil && giv == nil {
 		w.line("No thermochemistry: no thermo block in the file and no estimate for this structure.")
+		if why := sp.Refusal(); why != "" {
+			w.line(why + ". Give the species a nasa7 or thermo-table block (or, where a group is named, a `group` statement).")
+		}
 		return
 	}
 	cols := []string{""}
