@@ -246,12 +246,16 @@ func (w *writer) species(sp *analysis.Species) {
 		cols = append(cols, "given")
 		srcs = append(srcs, giv)
 	}
+	estWord := "estimated"
+	if sp.Estimate != nil && sp.ReferenceLibrary() != "" {
+		estWord = sp.ThermoWord() // tabulated data, not a group estimate
+	}
 	if est != nil {
-		cols = append(cols, "estimated")
+		cols = append(cols, estWord)
 		srcs = append(srcs, est)
 	}
 	if giv != nil && est != nil {
-		cols = append(cols, "given − estimated")
+		cols = append(cols, "given − "+estWord)
 	}
 	row := func(label string, f func(v *thermoValues) string, diff func(a, b *thermoValues) string) []string {
 		r := []string{label}
