@@ -237,7 +237,7 @@ func skipReason(sp *Species, u Units) string {
 	case sp.Decl.SMILES == nil:
 		return "no structure (SMILES) to estimate from; add a nasa7 or thermo-table block"
 	case sp.estimateErr != nil:
-		return "kiln cannot estimate it: " + RefusalReason(sp.estimateErr) // as check and estimate word it
+		return sp.Refusal() // as check and estimate word it
 	case sp.Estimate == nil:
 		return "no estimate"
 	}
@@ -276,3 +276,13 @@ var StdTempKeys = func() [7]string {
 	}
 	return k
 }()
+
+// Refusal words why kiln could not estimate sp's structure, as check,
+// estimate and fill word it ("kiln cannot estimate it: …"); "" when it was
+// estimated or has no structure.
+func (sp *Species) Refusal() string {
+	if sp.estimateErr == nil {
+		return ""
+	}
+	return "kiln cannot estimate it: " + RefusalReason(sp.estimateErr)
+}

@@ -632,7 +632,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		if sp.Estimate != nil {
 			sp.Source = SourceEstimate
 			a.report(path, speciesfile.Diagnostic{Span: a.at(d.Name.Span), Severity: speciesfile.SeverityInformation, Code: speciesfile.CodeMissingThermo,
-				Message: fmt.Sprintf("%s: %s; estimated %s", sp.Name, block, a.thermoSummary(sp.Estimate.Hf298, sp.Estimate.S298))})
+				Message: fmt.Sprintf("%s: %s; %s %s", sp.Name, block, estimateWord(sp.Estimate), a.thermoSummary(sp.Estimate.Hf298, sp.Estimate.S298))})
 			return
 		}
 		if sp.SMILESError != nil || sp.rootReported {
@@ -643,7 +643,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		}
 		why := "it has no structure (SMILES) to estimate from"
 		if sp.estimateErr != nil {
-			why = "kiln cannot estimate it: " + RefusalReason(sp.estimateErr)
+			why = sp.Refusal()
 		}
 		what := "has no thermo block"
 		if sp.brokenBlock {
@@ -1059,4 +1059,13 @@ func unwrapPathError(err error) error {
 		return pe.Err
 	}
 	return err
+}
+
+// estimateWord names where the thermo of an estimate without a block comes
+// from: "estimated" from groups, or the reference-library entry it takes.
+func estimateWord(e *Estimate) string {
+	if e.Library != "" {
+		return "reference library " + e.Library + ":"
+	}
+	return "estimated"
 }

@@ -235,6 +235,9 @@ func (w *writer) species(sp *analysis.Species) {
 	est, giv := estimateValues(sp.Estimate), givenValues(sp.Given)
 	if est == nil && giv == nil {
 		w.line("No thermochemistry: no thermo block in the file and no estimate for this structure.")
+		if why := sp.Refusal(); why != "" {
+			w.line(why + ". Give the species a nasa7 or thermo-table block (or, where a group is named, a `group` statement).")
+		}
 		return
 	}
 	cols := []string{""}
@@ -243,12 +246,16 @@ func (w *writer) species(sp *analysis.Species) {
 		cols = append(cols, "given")
 		srcs = append(srcs, giv)
 	}
+	estWord := "estimated"
+	if sp.Estimate != nil && sp.ReferenceLibrary() != "" {
+		estWord = sp.ThermoWord() // tabulated data, not a group estimate
+	}
 	if est != nil {
-		cols = append(cols, "estimated")
+		cols = append(cols, estWord)
 		srcs = append(srcs, est)
 	}
 	if giv != nil && est != nil {
-		cols = append(cols, "given − estimated")
+		cols = append(cols, "given − "+estWord)
 	}
 	row := func(label string, f func(v *thermoValues) string, diff func(a, b *thermoValues) string) []string {
 		r := []string{label}

@@ -200,3 +200,25 @@ func TestHoverTableRange(t *testing.T) {
 	assert.Contains(t, lines["Cp 800 K"], "—")
 	assert.NotContains(t, lines["Cp 800 K"], "14.0")
 }
+
+// TestHoverRefusal: hover on a species kiln cannot estimate says why (as
+// check words it) and how to go on.
+func TestHoverRefusal(t *testing.T) {
+	src := "species tetrazole c1nnn[nH]1\n"
+	x := analyse(t, map[string]string{"/w/a.kiln": src}, "/w/a.kiln")
+	h, ok := Hover(x, "/w/a.kiln", strings.Index(src, "tetrazole"), analysis.DefaultSettings(), false)
+	require.True(t, ok)
+	assert.Contains(t, h.Text, "kiln cannot estimate it: atom 3 (N) no group in the tables has a centre of type NazN")
+	assert.Contains(t, h.Text, "Give the species a nasa7 or thermo-table block")
+}
+
+// TestHoverLibraryColumn: a reference-library species' column is headed by
+// its source, not "estimated".
+func TestHoverLibraryColumn(t *testing.T) {
+	src := "species O2 O=O\n"
+	x := analyse(t, map[string]string{"/w/a.kiln": src}, "/w/a.kiln")
+	h, ok := Hover(x, "/w/a.kiln", strings.Index(src, "O2"), analysis.DefaultSettings(), true)
+	require.True(t, ok)
+	assert.NotContains(t, h.Text, "| estimated |")
+	assert.Contains(t, h.Text, "library")
+}

@@ -30,7 +30,7 @@ func TestHoverAgreesWithCLI(t *testing.T) {
 		{"kcal/mol setting over a kJ/mol file", "units kJ/mol\n", "kcal/mol", "kcal/mol"},
 	}
 	species := [][2]string{{"ethanol", "CCO"}, {"propyl", "CC[CH2]"}}
-	checkRE := regexp.MustCompile(`(\w+): no thermo block; estimated ΔHf°298 = (\S+ \S+), S°298 = (\S+ \S+)`)
+	checkRE := regexp.MustCompile(`(\w+): no thermo block; (?:estimated|reference library \S+:) ΔHf°298 = (\S+ \S+), S°298 = (\S+ \S+)`)
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
 			src := c.header
