@@ -22,6 +22,16 @@ func matchResonance(a, b *compareSide, matchA, matchB []int) {
 		}
 		return fingerprint(sp.Mol, true) + "|m" + strconv.Itoa(effectiveMultiplicity(s.a.w.cache.lib, sp))
 	}
+	pairUnmatched(a, b, matchA, matchB, key, func(x, y *Species) bool {
+		fa := a.resonanceForm(x)
+		return fa != "" && b.resonanceForm(y) == fa
+	})
+}
+
+// pairUnmatched pairs species left unmatched on both sides whose key (""
+// for none) is equal and, when same is not nil, for which same holds: each
+// species of a with the first such species of b still free.
+func pairUnmatched(a, b *compareSide, matchA, matchB []int, key func(*compareSide, *Species) string, same func(x, y *Species) bool) {
 	buckets := map[string][]int{}
 	for j, sp := range b.species {
 		if matchB[j] < 0 {
@@ -38,15 +48,11 @@ func matchResonance(a, b *compareSide, matchA, matchB []int) {
 			continue
 		}
 		k := key(a, sp)
-		if k == "" || len(buckets[k]) == 0 {
-			continue
-		}
-		fa := a.resonanceForm(sp)
-		if fa == "" {
+		if k == "" {
 			continue
 		}
 		for _, j := range buckets[k] {
-			if matchB[j] < 0 && b.resonanceForm(b.species[j]) == fa {
+			if matchB[j] < 0 && (same == nil || same(sp, b.species[j])) {
 				matchA[i], matchB[j] = j, i
 				break
 			}
@@ -80,34 +86,7 @@ func hasRadicalSite(m *molecule.Molecule) bool {
 // the rule the within-file duplicate check uses (species.go,
 // libraryKeyPrefix).
 func matchLibrary(a, b *compareSide, matchA, matchB []int) {
-	buckets := map[string][]int{}
-	for j, sp := range b.species {
-		if matchB[j] < 0 {
-			if k := b.libraryEntry(sp); k != "" {
-				buckets[k] = append(buckets[k], j)
-			}
-		}
-	}
-	if len(buckets) == 0 {
-		return
-	}
-	for i, sp := range a.species {
-		if matchA[i] >= 0 {
-			continue
-		}
-		k := a.libraryEntry(sp)
-		for _, j := range buckets[k] {
-			if k != "" && matchB[j] < 0 {
-				matchA[i], matchB[j] = j, i
-				break
-			}
-		}
-	}
-}
-
-// libraryEntry names the reference-library entry whose data sp takes ("" for
-// none): the entry of its structure and effective multiplicity, as the
-// estimate finds it (estimate.go).
-func (s *compareSide) libraryEntry(sp *Species) string {
-	return libraryEntry(s.a.w.cache.lib, sp)
+	pairUnmatched(a, b, matchA, matchB, func(s *compareSide, sp *Species) string {
+		return libraryEntry(s.a.w.cache.lib, sp)
+	}, nil)
 }
