@@ -23,6 +23,13 @@ func RefusalReason(err error) string {
 	return fmt.Sprintf("atom %d %s", ue.Atom, ue.Reason)
 }
 
+// RefusalGivesRoute reports whether a refusal's reason (RefusalReason)
+// already tells the user to give a thermo block, so that callers adding
+// that route (check, estimate, hover) do not say it twice.
+func RefusalGivesRoute(reason string) bool {
+	return strings.Contains(reason, "thermo block")
+}
+
 // FitRefusal words a refused NASA-7 fit (the error of Estimate.NASA7) for
 // the user in the display units u, with the temperature of the defect and
 // what to do, without the engine's package prefix. Every caller that shows

@@ -650,7 +650,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 			what = "has no usable thermo block (" + sp.blockFault() + ", reported above)"
 		}
 		route := "; add a nasa7 or thermo-table block"
-		if strings.HasSuffix(strings.TrimRight(why, ")"), "give the species a thermo block") || strings.HasSuffix(why, "give it a thermo block from a published table") {
+		if sp.estimateErr != nil && RefusalGivesRoute(RefusalReason(sp.estimateErr)) {
 			route = "" // the reason already gives the route
 		}
 		a.report(path, speciesfile.Diagnostic{Span: a.at(d.Name.Span), Severity: speciesfile.SeverityError, Code: speciesfile.CodeMissingThermo,

@@ -162,7 +162,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		if ue := (*benson.UnsupportedError)(nil); errors.As(err, &ue) && ue.Element != "" {
 			// Nothing kiln can do: say where the thermo has to come from.
 			r.Error.hint = "a species with " + ue.Element + " needs its thermo given in a nasa7 or thermo-table block of its .kiln file"
-		} else if !strings.Contains(r.Error.Message, "thermo block") {
+		} else if !analysis.RefusalGivesRoute(analysis.RefusalReason(err)) {
 			// The reason names what is missing; say how to go on, as
 			// check does.
 			r.Error.hint = "give the species a nasa7 or thermo-table block in its .kiln file"
