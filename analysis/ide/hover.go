@@ -198,10 +198,7 @@ func inUse(sp *analysis.Species) (*thermoValues, string) {
 		}
 	case analysis.SourceEstimate:
 		if v := estimateValues(sp.Estimate); v != nil {
-			if sp.ReferenceLibrary() != "" {
-				return v, sp.ThermoWord() // tabulated data, not a group estimate
-			}
-			return v, "estimated"
+			return v, estimateWord(sp)
 		}
 	}
 	return nil, ""
@@ -246,10 +243,7 @@ func (w *writer) species(sp *analysis.Species) {
 		cols = append(cols, "given")
 		srcs = append(srcs, giv)
 	}
-	estWord := "estimated"
-	if sp.Estimate != nil && sp.ReferenceLibrary() != "" {
-		estWord = sp.ThermoWord() // tabulated data, not a group estimate
-	}
+	estWord := estimateWord(sp)
 	if est != nil {
 		cols = append(cols, estWord)
 		srcs = append(srcs, est)
@@ -502,4 +496,14 @@ func sparkline(vs []float64) string {
 		b.WriteRune(runes[max(0, min(7, i))])
 	}
 	return b.String()
+}
+
+// estimateWord heads sp's estimate where hover shows it: "estimated", or
+// the library word for reference-library data (tabulated, not a group
+// estimate).
+func estimateWord(sp *analysis.Species) string {
+	if sp.ReferenceLibrary() != "" {
+		return sp.ThermoWord()
+	}
+	return "estimated"
 }
