@@ -132,3 +132,22 @@ func TestApproximationWithBlock(t *testing.T) {
 		assert.Contains(t, got[0].Message, "Cd-(F)2 (used as it stands, value from CF2=CF2")
 	}
 }
+
+// TestEntropyOnlyApproximation: an approximation that changes only S° and
+// Cp (an imine group's S°/Cp by analogy) does not claim to widen the
+// estimate's uncertainty, which is that of ΔHf°; one that changes ΔHf° (a
+// substituted ketene end) does.
+func TestEntropyOnlyApproximation(t *testing.T) {
+	res := analyzeText(t, "species I CC=NC\nspecies K CC(C)=C=O\n")
+	byName := map[string]string{}
+	for _, m := range messagesWithCode(res, speciesfile.CodeMissingGroup) {
+		byName[strings.SplitN(m, ":", 2)[0]] = m
+	}
+	require.Contains(t, byName, "I", "%v", res.Diagnostics)
+	assert.Contains(t, byName["I"], "I: S° and Cp estimated with an approximation kiln has no data for: S, Cp by analogy: CdN-(C)(H)")
+	assert.Contains(t, byName["I"], "ΔHf° and its uncertainty are not affected")
+	assert.NotContains(t, byName["I"], "widened")
+	require.Contains(t, byName, "K", "%v", res.Diagnostics)
+	assert.Contains(t, byName["K"], "its uncertainty is widened")
+	assert.NotContains(t, byName["K"], "not affected")
+}

@@ -487,7 +487,7 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 		// Every approximation of the estimate is reported, worded as
 		// estimate, summary and hover word it; what a validated model
 		// computes (a radical site's S°/Cp change) is shown there, not here.
-		var groups, kept, others, unsound []string
+		var groups, kept, others, entropy, unsound []string
 		for _, m := range miss {
 			if m.Modelled() {
 				continue // a validated model, shown with the estimate, not a warning
@@ -499,6 +499,8 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 			switch _, err := benson.ParseGroupName(m.Group); {
 			case BeyondBound(m.Missing):
 				unsound = append(unsound, s)
+			case err != nil && m.EntropyOnly():
+				entropy = append(entropy, s)
 			case err != nil:
 				others = append(others, s)
 			case UsedAsItStands(m.Missing):
@@ -518,6 +520,11 @@ func (a *analysis) reportApproximations(path string, sp *Species) {
 		}
 		if len(others) > 0 {
 			msg = append(msg, fmt.Sprintf("estimated with an approximation kiln has no data for: %s; its uncertainty is widened (a thermo block with measured or computed values replaces the estimate)", strings.Join(others, ", ")))
+		}
+		if len(entropy) > 0 {
+			// S°/Cp-only approximations leave ΔHf° and its uncertainty
+			// as the groups give them; saying "widened" would overstate.
+			msg = append(msg, fmt.Sprintf("S° and Cp estimated with an approximation kiln has no data for: %s; ΔHf° and its uncertainty are not affected (a thermo block with measured or computed values replaces the estimate)", strings.Join(entropy, ", ")))
 		}
 		if len(unsound) > 0 {
 			// Beyond a physical bound: fill writes no block from it

@@ -114,6 +114,10 @@ const siteModel = "statistical-mechanics site model"
 // entry is shown with the estimate but is not an approximation to warn about.
 func (m Missing) Modelled() bool { return m.Approximation == siteModel }
 
+// EntropyOnly reports whether m concerns S° and Cp only, leaving ΔHf°298 as
+// the groups give it (and so not widening the estimate's ΔHf° uncertainty).
+func (m Missing) EntropyOnly() bool { return entropyOnly(m) }
+
 // Result is the outcome of Estimate. Hf298, S298 and every Cp equal exactly
 // the sum of Groups and Corrections. (Go does not allow a type and a function
 // of the same name in one package, so the result type is Result.)
