@@ -434,14 +434,6 @@ func (a *analysis) where(l Location) string {
 	return fmt.Sprintf("%s:%d", shortPath(l.File), line)
 }
 
-// alsoMissing lists the further groups a refused species lacks.
-func alsoMissing(mg *benson.MissingGroupError) string {
-	if len(mg.Also) == 0 {
-		return ""
-	}
-	return " (also missing: " + strings.Join(mg.Also, ", ") + ")"
-}
-
 func shortPath(p string) string {
 	i := strings.LastIndexAny(p, `/\`)
 	return p[i+1:]
@@ -463,7 +455,7 @@ func (a *analysis) estimateSpecies(path string, sp *Species, user []benson.Group
 			}
 			sp.rootReported = true
 			a.report(path, speciesfile.Diagnostic{Span: a.at(d.SMILES.Span), Severity: sev, Code: speciesfile.CodeMissingGroup,
-				Message: fmt.Sprintf("%s: no value for group %s and no group close enough to stand in%s%s", sp.Name, mg.Group, alsoMissing(mg), then)})
+				Message: fmt.Sprintf("%s: no value for group %s and no group close enough to stand in%s%s", sp.Name, mg.Group, mg.Detail(), then)})
 		}
 		return
 	}

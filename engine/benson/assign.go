@@ -367,12 +367,26 @@ func uncovered(g *graph, i, c int) error {
 type MissingGroupError struct {
 	Group string   // trade notation, e.g. "C-(N)(C)(H)2"
 	Also  []string // further groups the species lacks, by name
+	// Form is the resonance structure (canonical SMILES) that lacks Group
+	// when it is not the structure as written, and Written the reason the
+	// structure as written is refused; both "" otherwise.
+	Form, Written string
 }
 
 func (e *MissingGroupError) Error() string {
-	also := ""
+	return fmt.Sprintf("benson: no value and no approximation for group %s%s: supply it with a `group %s` statement (hf298, s298, cp at 300…1500 K, source) or give the species a thermo block", e.Group, e.Detail(), e.Group)
+}
+
+// Detail is what the message adds after the group's name: the further
+// groups missing, and the resonance structure that needs the group when
+// the structure as written is refused for another reason.
+func (e *MissingGroupError) Detail() string {
+	d := ""
 	if len(e.Also) > 0 {
-		also = " (also missing: " + strings.Join(e.Also, ", ") + ")"
+		d = " (also missing: " + strings.Join(e.Also, ", ") + ")"
 	}
-	return fmt.Sprintf("benson: no value and no approximation for group %s%s: supply it with a `group %s` statement (hf298, s298, cp at 300…1500 K, source) or give the species a thermo block", e.Group, also, e.Group)
+	if e.Form != "" {
+		d += fmt.Sprintf(" (needed by the resonance structure %s; the structure as written is refused: %s)", e.Form, e.Written)
+	}
+	return d
 }

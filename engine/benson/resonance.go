@@ -238,6 +238,7 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 		return strings.Compare(x.canon, y.canon)
 	})
 	var firstErr error
+	firstForm := ""
 	for lo := 0; lo < len(cands); {
 		hi := lo + 1
 		for hi < len(cands) && cands[hi].lewis == cands[lo].lewis && cands[hi].arom == cands[lo].arom {
@@ -253,7 +254,7 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 				// radical on a nitro O, an imine N of a resonance form).
 				var mg *MissingGroupError
 				if firstErr == nil || (errors.As(err, &mg) && !errors.As(firstErr, &mg)) {
-					firstErr = err
+					firstErr, firstForm = err, c.canon
 				}
 				continue
 			}
@@ -298,7 +299,27 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 		}
 		lo = hi
 	}
-	return nil, firstErr
+	return nil, explainForm(m, firstErr, firstForm, opts)
+}
+
+// explainForm says, when err is a group missing from resonance structure
+// form of m while m as written is refused for another reason, which
+// structure needs the group and why the one as written is refused: a user
+// who wrote an N-centred amidyl radical is otherwise told only of a group
+// of its O-centred structure.
+func explainForm(m *molecule.Molecule, err error, form string, opts Options) error {
+	var mg *MissingGroupError
+	if !errors.As(err, &mg) || form == m.Canonical() {
+		return err
+	}
+	_, werr := estimateForm(m, opts)
+	var wmg *MissingGroupError
+	if werr == nil || errors.As(werr, &wmg) {
+		return err
+	}
+	out := *mg
+	out.Form, out.Written = form, strings.TrimPrefix(werr.Error(), "benson: ")
+	return &out
 }
 
 // hfTie is the ΔHf° difference (J/mol) below which two resonance

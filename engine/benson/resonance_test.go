@@ -322,3 +322,21 @@ func TestResonanceRefusalNamesGroup(t *testing.T) {
 		assert.Equal(t, group, mg.Group, smiles)
 	}
 }
+
+// A group missing from another resonance structure is reported with that
+// structure and with the reason the structure as written is refused; when
+// the structure as written itself lacks the group, nothing is added.
+func TestResonanceRefusalNamesForm(t *testing.T) {
+	_, err := Estimate(parse(t, "CC(=O)[NH]"), Options{})
+	var mg *MissingGroupError
+	require.ErrorAs(t, err, &mg)
+	assert.Equal(t, "O-(CdN)(H)", mg.Group)
+	assert.NotEmpty(t, mg.Form)
+	assert.Contains(t, mg.Written, "amidyl")
+	assert.Contains(t, err.Error(), "needed by the resonance structure "+mg.Form+"; the structure as written is refused: no hydrogen-bond increment")
+
+	_, err = Estimate(parse(t, "C=[C][N+](=O)[O-]"), Options{})
+	require.ErrorAs(t, err, &mg)
+	assert.Empty(t, mg.Form)
+	assert.NotContains(t, err.Error(), "resonance structure")
+}
