@@ -276,6 +276,27 @@ if live_ok then
     expect(text:find('ΔHf', 1, true) or text:find('kJ/mol', 1, true), 'hover text lacks ΔHf and kJ/mol: ' .. text)
   end)
 
+  check('K on a species name opens the hover (Neovim before 0.10 has no default hover key)', function()
+    local l = line_of('^species ethanol')
+    vim.api.nvim_win_set_cursor(0, { l + 1, 10 })
+    local before = #vim.api.nvim_list_wins()
+    keys('K')
+    local float
+    local ok = vim.wait(TIMEOUT, function()
+      for _, w in ipairs(vim.api.nvim_list_wins()) do
+        if vim.api.nvim_win_get_config(w).relative ~= '' then
+          float = w
+          return true
+        end
+      end
+      return false
+    end, 50)
+    expect(ok, 'no hover window after K (windows before: ' .. before .. ', K maps to ' .. vim.inspect(vim.fn.maparg('K', 'n')) .. ')')
+    local text = table.concat(vim.api.nvim_buf_get_lines(vim.api.nvim_win_get_buf(float), 0, -1, false), '\n')
+    vim.api.nvim_win_close(float, true)
+    expect(text:find('ΔHf', 1, true), 'hover window lacks ΔHf: ' .. text)
+  end)
+
   check('code action inserts a nasa7 block', function()
     local client = kiln_client()
     local l = line_of('^species ethanol')

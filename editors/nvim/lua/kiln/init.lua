@@ -13,6 +13,8 @@
 --     root_markers = { '.git' },              -- optional
 --     inlay_hints = true,                     -- optional: show estimates at line ends
 --     omnifunc = true,                        -- optional: set 'omnifunc' for <C-x><C-o>
+--     hover_key = 'K',                        -- optional: buffer-local hover key on Neovim
+--                                             --   before 0.10 (false: none); 0.10+ maps K itself
 --     debounce_ms = 50,                       -- optional: delay before sending changes
 --     diagnostics = { severity_sort = true }, -- optional: vim.diagnostic options for kiln
 --     on_attach = function(client, bufnr) end, -- optional
@@ -51,6 +53,7 @@ local defaults = {
   root_markers = { '.git' },
   inlay_hints = true,
   omnifunc = true,
+  hover_key = 'K',
   debounce_ms = 50,
   diagnostics = { severity_sort = true },
   on_attach = nil,
@@ -704,6 +707,24 @@ local function start(root, cfg)
   })
 end
 
+-- map_hover maps key (normal mode, buffer-local) to vim.lsp.buf.hover on
+-- Neovim before 0.10, which has no default LSP hover key (there K runs
+-- 'keywordprg', man); 0.10 and later map K themselves. A mapping of key the
+-- user already made, global or for the buffer, is left alone.
+local function map_hover(bufnr, key)
+  if not key or vim.fn.has('nvim-0.10') == 1 then
+    return
+  end
+  local taken = vim.api.nvim_buf_call(bufnr, function()
+    return vim.fn.maparg(key, 'n') ~= ''
+  end)
+  if taken then
+    return
+  end
+  vim.api.nvim_buf_set_keymap(bufnr, 'n', key, '<Cmd>lua vim.lsp.buf.hover()<CR>',
+    { noremap = true, silent = true, desc = 'kiln: hover' })
+end
+
 --- Starts (or reuses) the server for the buffer's root and attaches it.
 ---@param bufnr number|nil buffer, default current
 ---@return number|nil client id
@@ -728,6 +749,7 @@ function M.attach(bufnr)
     if cfg.omnifunc and vim.bo[bufnr].omnifunc == '' then
       vim.bo[bufnr].omnifunc = 'v:lua.vim.lsp.omnifunc'
     end
+    map_hover(bufnr, cfg.hover_key)
   end
   return id
 end
