@@ -97,3 +97,29 @@ func TestFillCheckCages(t *testing.T) {
 		}
 	}
 }
+
+// TestEstimateLibraryHalogens: species kiln refused before the bromine and
+// halomethane entries of the reference library (no group C-(Br)3(H),
+// C-(F)(Cl)(H)2, CO-(F)(H), …; no polyvalent atom in Br, Br2, HBr) now come
+// from the library, named as tabulated data, with the compilation's ΔHf°298.
+func TestEstimateLibraryHalogens(t *testing.T) {
+	for _, tc := range []struct{ smiles, name, hf string }{
+		{"[Br]", "Br", "(111.9 kJ/mol)"},
+		{"BrBr", "Br2", "(30.9 kJ/mol)"},
+		{"Br", "HBr", "(-36.3 kJ/mol)"},
+		{"BrC(Br)Br", "CHBr3", "(16.7 kJ/mol)"},
+		{"BrC(Br)(Br)Br", "CBr4", "(79.5 kJ/mol)"},
+		{"BrCBr", "CH2Br2", "(-14.8 kJ/mol)"},
+		{"ClCBr", "CH2ClBr", "(-45.0 kJ/mol)"},
+		{"F[C](Cl)Cl", "CFCl2", "(-105.0 kJ/mol)"},
+		{"FCCl", "CH2FCl", "(-265.7 kJ/mol)"},
+		{"O=CF", "HCOF", "(-374.6 kJ/mol)"},
+		{"O=C(F)Cl", "COFCl", "(-429.5 kJ/mol)"},
+	} {
+		code, out, stderr := runKiln(t, "estimate", tc.smiles)
+		require.Equal(t, exitOK, code, "%s: %s%s", tc.smiles, out, stderr)
+		assert.Contains(t, out, "reference library: "+tc.name+" (tabulated data", tc.smiles)
+		assert.Contains(t, out, tc.hf, tc.smiles)
+		assert.NotContains(t, out, "cannot estimate", tc.smiles)
+	}
+}

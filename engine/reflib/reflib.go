@@ -5,7 +5,7 @@
 // published source of every number. Species are found by molecular structure
 // (canonical SMILES; see structureKey) and spin multiplicity. It does no I/O.
 //
-// data_nsx.go adds nitrogen, sulfur and halogen species, ketene, ketenyl and
+// data_nsx.go adds nitrogen, sulfur and halogen (F, Cl, Br) species, ketene, ketenyl and
 // ethynyl from NASA/TP-2002-211556 (NASA-9, refitted) and GRI-Mech 3.0.
 //
 // How the polynomials are built (see data.go): most entries store published
