@@ -3,6 +3,7 @@ package equilibrium
 import (
 	"context"
 	"math"
+	"slices"
 	"strings"
 	"testing"
 
@@ -53,11 +54,17 @@ func (l *linearCp) S(T float64) float64 {
 	return l.s298 + l.integrate(T, func(t float64) float64 { return l.cpAt(t) / t })
 }
 
-// hundredSpecies returns the 25 reference-library species and 75 generated
-// C/H/O molecules and radicals (internal/mechgen) estimated by group
-// additivity.
+// hundredSpecies returns 25 reference-library species of C, H, O, N and Ar
+// (the first in the library's order; the library has grown past the 25 it
+// once held, and the benchmark keeps its size) and 75 generated C/H/O
+// molecules and radicals (internal/mechgen) estimated by group additivity.
 func hundredSpecies(b *testing.B) []Species {
-	out := librarySpecies(b)
+	var out []Species
+	for _, s := range librarySpecies(b) {
+		if len(out) < 25 && onlyElements(s.Composition, "C", "H", "O", "N", "Ar") {
+			out = append(out, s)
+		}
+	}
 	have := map[string]bool{}
 	for _, s := range out {
 		have[s.Name] = true
@@ -114,4 +121,14 @@ func BenchmarkAdiabatic100(b *testing.B) {
 			b.Fatal(err)
 		}
 	}
+}
+
+// onlyElements reports whether composition c has no element outside els.
+func onlyElements(c map[string]int, els ...string) bool {
+	for e := range c {
+		if !slices.Contains(els, e) {
+			return false
+		}
+	}
+	return true
 }
