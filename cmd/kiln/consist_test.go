@@ -184,7 +184,7 @@ species lump
 	code, stdout, _ := runKiln(t, "check", "--min-severity", "warning", path)
 	assert.Equal(t, exitProblems, code)
 	assert.Equal(t, 2, strings.Count(stdout, "\n"), stdout)
-	assert.Contains(t, stdout, "f.kiln:17:", "check reports pyrrole on the line where fill said it skipped it")
+	assert.Contains(t, stdout, "f.kiln:17:", "check reports imide on the line where fill said it skipped it")
 	assert.Contains(t, stdout, "f.kiln:18:9:", "check reports lump where fill said it skipped it")
 
 	// A range beyond the reference data is refused, not extrapolated.

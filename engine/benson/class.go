@@ -256,7 +256,7 @@ func groupCount(est *Result) int {
 // entropyOnly reports whether approximation m concerns S° and Cp only,
 // leaving ΔHf°298 as the groups give it.
 func entropyOnly(m Missing) bool {
-	return strings.HasPrefix(m.Group, "HBI dS") || m.Group == cpFallsGroup || m.Group == pyrroleEntropyGroup || m.Group == thiopheneCpGroup ||
+	return strings.HasPrefix(m.Group, "HBI dS") || m.Group == cpFallsGroup ||
 		m.Group == thianeEntropyGroup || m.Group == entropyFloorGroup || strings.HasPrefix(m.Group, ringSystemEntropyGroup) ||
 		strings.HasPrefix(m.Group, analogSCpGroup) // hetero_n.go
 }

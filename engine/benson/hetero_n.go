@@ -271,7 +271,6 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 // ring N 1.7 kcal/mol lower); any other substituent there is flagged, its
 // benzene group being used.
 func addAzineFlags(g *graph, l lookup, est *Result) {
-	addPyrroleFlag(l, est)
 	addNitrogenTableFlags(l, est)
 	if _, user := l.user["Nb"]; user {
 		return
@@ -352,33 +351,6 @@ func addNitrogenTableFlags(l lookup, est *Result) {
 				Approximation: "S° and Cp of an analogous group",
 				Note:          "no S° or Cp of a molecule with this group is at hand; ΔHf° is not affected; source: " + t.Source,
 			})
-		}
-	}
-}
-
-// pyrroleEntropyGroup names the flag of the pyrrole ring correction's S°
-// and Cp, which are carried over from furan (corrections_n.tsv): ΔHf° is
-// not approximated by it, so uncertainty (class.go) does not widen ΔHf°.
-const pyrroleEntropyGroup = "ring S, Cp: pyrrole"
-
-// addPyrroleFlag flags the S° and Cp of an estimate that took the pyrrole
-// ring correction (unless a group statement supplies ring:pyrrole): no S° or
-// Cp of a pyrrole was used to obtain it, and the aromatic five-membered rings
-// at hand disagree by several cal/(mol K) when carried over (with kiln's
-// groups: furan's correction, derived from furan's S° and Cp, gives pyrrole
-// 1.4 cal/(mol K) above the handbook S°, thiophene's 5.7 below).
-func addPyrroleFlag(l lookup, est *Result) {
-	if _, user := l.user["ring:pyrrole"]; user {
-		return
-	}
-	for _, c := range est.Corrections {
-		if c.Name == "ring strain: pyrrole" {
-			est.Missing = append(est.Missing, Missing{
-				Group:         pyrroleEntropyGroup,
-				Approximation: "S and Cp of the furan ring correction",
-				Note:          "no S° or Cp of a pyrrole ring correction is at hand; ΔHf° is not affected, S° is uncertain by several cal/(mol K)",
-			})
-			return
 		}
 	}
 }

@@ -541,23 +541,15 @@ type siteDelta struct {
 func siteChange(g *graph, i int) (siteDelta, bool) {
 	var d siteDelta
 	vib := func(sign float64) {
-		th := secondRadiation * inversionWavenumber
-		x := th / 298.15
-		d.s += sign * R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
+		d.s += sign * harmonicS(inversionWavenumber, t298)
 		for i, T := range StdTemps {
-			x := th / T
-			ex := math.Exp(x)
-			d.cp[i] += sign * R * x * x * ex / ((ex - 1) * (ex - 1))
+			d.cp[i] += sign * harmonicCp(inversionWavenumber, T)
 		}
 	}
 	bend := func(nu float64) { // remove one harmonic mode of wavenumber nu
-		th := secondRadiation * nu
-		x := th / 298.15
-		d.s -= R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
+		d.s -= harmonicS(nu, t298)
 		for i, T := range StdTemps {
-			x := th / T
-			ex := math.Exp(x)
-			d.cp[i] -= R * x * x * ex / ((ex - 1) * (ex - 1))
+			d.cp[i] -= harmonicCp(nu, T)
 		}
 	}
 	a := g.m.Atoms[i]
@@ -568,9 +560,7 @@ func siteChange(g *graph, i int) (siteDelta, bool) {
 	if a.Element == "O" && site == "alkoxy" && len(g.nbr[i]) == 1 && g.typ[g.nbr[i][0]] == "C" {
 		// Replace the stiff 300 cm⁻¹ torsion of lostModes by the
 		// alcohol's nearly free O–H rotor.
-		th := secondRadiation * lostOH[2]
-		x := th / 298.15
-		d.s += R*(x/math.Expm1(x)-math.Log(-math.Expm1(-x))) - ohRotorS*calorie
+		d.s += harmonicS(lostOH[2], t298) - ohRotorS*calorie
 		return d, true
 	}
 	if dS, dCp, ok := heteroSiteChange(g, i, site); ok {
@@ -651,14 +641,27 @@ func lostModes(site string, count int) Term {
 	t := Term{Name: "radical site: lost X–H vibrations (" + site + ")", Count: count, Source: "harmonic oscillators (common practice)"}
 	c := float64(count)
 	for _, nu := range modes {
-		th := secondRadiation * nu
-		x := th / 298.15
-		t.S298 -= c * R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
+		t.S298 -= c * harmonicS(nu, t298)
 		for i, T := range StdTemps {
-			x := th / T
-			ex := math.Exp(x)
-			t.Cp[i] -= c * R * x * x * ex / ((ex - 1) * (ex - 1))
+			t.Cp[i] -= c * harmonicCp(nu, T)
 		}
 	}
 	return t
+}
+
+// harmonicS is the entropy, J/(mol K), of one harmonic oscillator of
+// wavenumber nu (cm⁻¹) at temperature T (K): R [x/(eˣ−1) − ln(1−e⁻ˣ)] with
+// x = θ/T, θ = hc·ν̃/k (the Einstein function).
+func harmonicS(nu, T float64) float64 {
+	x := secondRadiation * nu / T
+	return R * (x/math.Expm1(x) - math.Log(-math.Expm1(-x)))
+}
+
+// harmonicCp is the heat capacity, J/(mol K), of one harmonic oscillator of
+// wavenumber nu (cm⁻¹) at temperature T (K): R x² eˣ/(eˣ−1)² (the Einstein
+// function).
+func harmonicCp(nu, T float64) float64 {
+	x := secondRadiation * nu / T
+	ex := math.Exp(x)
+	return R * x * x * ex / ((ex - 1) * (ex - 1))
 }

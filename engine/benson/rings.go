@@ -292,24 +292,18 @@ func (g *graph) smallestRingThrough(b int) int {
 	return 0 // not a ring bond
 }
 
-// addRingEntropyFlags flags the Cp of an estimate that took the thiophene
-// ring correction (corrections_sx.tsv), unless a group statement supplies
-// ring:thiophene: its ΔHf° and S° are derived from thiophene itself, its Cp
-// is cyclopentene's (thiopheneCpGroup). The only published ideal-gas Cp of
-// thiophene at hand, at 298.15 K (Dorofeeva & Gurvich 1995,
-// thiopheneCp298), is 1.15 cal/(mol K) above the estimate's Cp(300 K); no
-// published Cp(T) above 298 K is at hand to derive the correction from, so
-// the flag stays. Likewise the S° and Cp of the thiane ring
-// correction, whose ΔHf° is derived from thiane (thianeEntropyGroup). (The furan ring correction took cyclopentene's Cp
-// too, which put furan's Cp 1.5–2.2 cal/(mol K) high from 400 to 1500 K;
-// its Cp and S° are now derived from furan's measured values,
-// corrections.tsv, and carry no flag.)
+// addRingEntropyFlags flags the S° and Cp of an estimate that took the
+// thiane ring correction (corrections_sx.tsv), unless a group statement
+// supplies ring:thiane: its ΔHf° is derived from thiane, its S° and Cp are
+// tetrahydropyran's (thianeEntropyGroup). (The furan, thiophene and pyrrole
+// ring corrections once took another ring's Cp, or S° and Cp, too; theirs
+// are now derived from the parent molecule's measured or rigid-rotor
+// harmonic-oscillator values, corrections.tsv, corrections_sx.tsv,
+// corrections_n.tsv and rrho.go, and carry no flag.)
 func addRingEntropyFlags(l lookup, est *Result) {
 	flags := []struct {
 		correction, group, approximation, note string
 	}{
-		{"ring strain: thiophene", thiopheneCpGroup, "Cp of the thiophene ring correction taken as cyclopentene's",
-			"thiophene's own Cp comes out 1.15 cal/(mol K) below its published Cp(298.15 K) of 17.40 (Dorofeeva & Gurvich 1995); no published Cp above 298 K is at hand; ΔHf° and S° are not affected"},
 		{"ring strain: thiane", thianeEntropyGroup, "S and Cp of the thiane ring correction taken as tetrahydropyran's",
 			"no S° or Cp of thiane at hand; the six-membered rings with one heteroatom at hand differ in ring S by up to 2.5 cal/(mol K) (tetrahydropyran 16.3, cyclohexane 18.8); ΔHf° is not affected"},
 	}
@@ -325,18 +319,6 @@ func addRingEntropyFlags(l lookup, est *Result) {
 		}
 	}
 }
-
-// thiopheneCpGroup names the flag of the thiophene ring correction's Cp
-// (addRingEntropyFlags); it concerns Cp only and leaves ΔHf° alone
-// (class.go, entropyOnly).
-const thiopheneCpGroup = "ring Cp: thiophene"
-
-// thiopheneCp298 is thiophene's published ideal-gas Cp at 298.15 K, cal/(mol
-// K): 72.82 J/(mol K), Dorofeeva & Gurvich, J. Phys. Chem. Ref. Data 24
-// (1995) 1351 (rigid-rotor harmonic-oscillator table to 1500 K), as listed by
-// NIST CCCBDB (read from a stored copy; the table above 298 K was not at
-// hand). It is a reference for the flag's note, not used by the estimate.
-const thiopheneCp298 = 72.82 / 4.184
 
 // thianeEntropyGroup names the flag of the thiane ring correction's S° and
 // Cp (tetrahydropyran's; its ΔHf° is derived from thiane, corrections_sx.tsv);
