@@ -21,7 +21,9 @@ import (
 //
 // Convention: the tabulated ΔS_HBI excludes both electronic degeneracy and
 // symmetry; kiln adds R ln(multiplicity) and computes σ and n on the radical
-// graph itself (a radical carbon with three ligands is treated as planar).
+// graph itself (a radical carbon with three ligands is treated as planar,
+// except one bearing two or more fluorines, which is pyramidal:
+// molecule.Molecule.PyramidalRadical).
 // Radical-centred groups (C•-(C)(H)2 …) are not used: the HBI route covers
 // every closed-shell parent the group tables cover.
 //
@@ -480,6 +482,15 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 //     methyl "rotor" of a C≡C–CH3 parent turns about the molecular axis and
 //     is part of overall rotation, not an internal rotor.
 //
+// A pyramidal radical centre (two or more fluorines:
+// molecule.Molecule.PyramidalRadical; CF3•, CHF2•, R–CF2•) has none of
+// these: its umbrella mode stays stiff (inversion barriers of many
+// kcal/mol) and its bonds keep their parent's hindered rotors, so
+// siteChanges skips it, as the symmetry number counts it pyramidal (no
+// planar flip). The α-fluoro centre (one F) is weakly pyramidal with a very
+// low inversion barrier and counts as planar for σ; its increment has no
+// site changes either (it is not an alkyl, α-hydroxy or α-alkoxy site).
+//
 // Spin degeneracy (R ln multiplicity) and the symmetry change (σ of the
 // radical itself) are applied in Estimate.
 const (
@@ -503,7 +514,9 @@ var (
 func siteChanges(m *molecule.Molecule, g *graph) (Term, bool) {
 	var sites []siteDelta
 	for i, a := range m.Atoms {
-		if a.Radical != 1 {
+		if a.Radical != 1 || m.PyramidalRadical(i) {
+			// A pyramidal centre (two or more fluorines) keeps a stiff
+			// umbrella mode and its hindered rotors: no change here.
 			continue
 		}
 		if d, ok := siteChange(g, i); ok {
