@@ -203,7 +203,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		// closed-shell, uncharged one: for a radical or charge-separated
 		// library species (NO2 and NO3 are delocalised; OH, CH3 …) σ is
 		// left null (the tabulated S° contains the true one).
-		if n := m.NeutralNO(); n.UnpairedElectrons() == 0 && !anyCharge(n) {
+		if n := m.NeutralOxo(); n.UnpairedElectrons() == 0 && !anyCharge(n) {
 			if sigma, err := n.SymmetryNumber(); err == nil {
 				r.SymmetryNumber = ptr(json.Number(sigma.String()))
 				r.OpticalIsomers = ptr(n.OpticalIsomers())

@@ -195,7 +195,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	// Charge-separated nitro, nitrate and N-oxide units are read as N=O
 	// first (hetero_n.go).
-	m = neutralNO(m)
+	m = neutralOxo(m)
 	var refusals []atomError
 	for i, a := range m.Atoms {
 		switch {
@@ -555,7 +555,7 @@ func ordinaryValence(el string) (valence int, ok bool) {
 // ordinary valence (N#N=O: five bonds on the middle N), naming the atom and
 // its bonds, before any group is looked for. The one extended valence the
 // groups describe is the nitro/nitrate nitrogen N(=O)=O; charge-separated
-// structures ([N+], [O-]) are read by neutralNO and chargeRefusal, not here.
+// structures ([N+], [O-]) are read by neutralOxo and chargeRefusal, not here.
 // It runs on the structure as written.
 func valenceScope(m *molecule.Molecule) error {
 	for i, a := range m.Atoms {

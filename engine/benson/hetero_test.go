@@ -241,7 +241,7 @@ func TestHeteroAtomAccounting(t *testing.T) {
 				m, err = molecule.ParseSMILES(e.Form)
 				require.NoError(t, err, "%s: form %s", smi, e.Form)
 			}
-			g := newGraph(neutralNO(m)) // the structure estimated: N⁺–O⁻ read as N=O
+			g := newGraph(neutralOxo(m)) // the structure estimated: N⁺–O⁻ read as N=O
 			centres := 0
 			for _, term := range e.Groups {
 				centres += term.Count
