@@ -190,7 +190,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 				err = e2
 			}
 		}
-		return nil, err
+		return nil, withReading(lib, m, err)
 	}
 	if err := physical(g); err != nil {
 		return nil, err

@@ -233,6 +233,10 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 			fmt.Fprintf(w, "  error at position %d: %s\n", *r.Error.Position, r.Error.Message)
 			fmt.Fprintf(w, "    %s\n    %s^\n", r.Input, strings.Repeat(" ", *r.Error.Position-1))
 		} else {
+			if r.Formula != nil && r.MolarMass != nil {
+				// what the SMILES was read as (implicit hydrogens included)
+				fmt.Fprintf(w, "  formula %s, molar mass %s\n", *r.Formula, analysis.FormatMolarMass(*r.MolarMass))
+			}
 			fmt.Fprintf(w, "  error: %s\n", r.Error.Message)
 			if r.Error.hint != "" {
 				fmt.Fprintf(w, "  %s\n", r.Error.hint)

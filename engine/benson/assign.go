@@ -371,6 +371,10 @@ type MissingGroupError struct {
 	// when it is not the structure as written, and Written the reason the
 	// structure as written is refused; both "" otherwise.
 	Form, Written string
+	// Reading is a note the caller adds on how the SMILES was read when a
+	// nearby spelling is known (N(=O)=O is HNO2, and the NO2 radical is
+	// in the reference library); "" for none.
+	Reading string
 }
 
 func (e *MissingGroupError) Error() string {
@@ -387,6 +391,9 @@ func (e *MissingGroupError) Detail() string {
 	}
 	if e.Form != "" {
 		d += fmt.Sprintf(" (needed by the resonance structure %s; the structure as written is refused: %s)", e.Form, e.Written)
+	}
+	if e.Reading != "" {
+		d += " (" + e.Reading + ")"
 	}
 	return d
 }

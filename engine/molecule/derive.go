@@ -41,6 +41,30 @@ func (m *Molecule) WithHydrogenAdded(i int) (*Molecule, error) {
 	return m.derive(atoms, slices.Clone(m.Bonds)), nil
 }
 
+// WithHydrogenRemoved returns the molecule with one hydrogen of atom i
+// replaced by a radical electron (CCC with i = 2 → CC[CH2]), the inverse of
+// WithHydrogenAdded. It is an error when atom i carries no hydrogen.
+func (m *Molecule) WithHydrogenRemoved(i int) (*Molecule, error) {
+	if i < 0 || i >= len(m.Atoms) {
+		return nil, fmt.Errorf("remove hydrogen: atom %d out of range (%d atoms)", i, len(m.Atoms))
+	}
+	if m.Atoms[i].HCount == 0 {
+		return nil, fmt.Errorf("remove hydrogen: atom %d (%s) has no hydrogen", i, m.Atoms[i].Element)
+	}
+	atoms := slices.Clone(m.Atoms)
+	atoms[i].HCount--
+	atoms[i].Radical++
+	return m.derive(atoms, slices.Clone(m.Bonds)), nil
+}
+
+// ImplicitHydrogens reports whether the hydrogens of atom i were implied by
+// the SMILES (an atom written outside brackets takes the hydrogens its
+// ordinary valence leaves) rather than written in a bracket atom.
+func (m *Molecule) ImplicitHydrogens(i int) bool {
+	a := m.Atoms[i]
+	return a.HCount > 0 && a.Pos >= 0 && a.Pos < len(m.SMILES) && m.SMILES[a.Pos] != '['
+}
+
 // WithBondOrders returns a resonance structure of m: bond b gets order
 // orders[b] (1, 2 or 3) and atom i gets radicals[i] radical electrons, all
 // other bonds and atoms unchanged. Every atom must keep its valence (bond
