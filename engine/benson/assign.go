@@ -178,7 +178,7 @@ atoms:
 		}
 		if !l.hasCentre(centre) {
 			if _, nameable := centreLigands[centre]; !nameable {
-				refuse(i, unsupported(g, i, fmt.Sprintf("no group in the tables has a centre of type %s%s", centre, typeNote(centre))))
+				refuse(i, unsupported(g, i, fmt.Sprintf("has no group: no group in the tables has a centre of type %s%s", centre, typeNote(centre))))
 				continue
 			}
 			// A group the user can define (a `group` statement) but no

@@ -34,3 +34,18 @@ func TestChargeSeparatedSulfurOxide(t *testing.T) {
 	require.Error(t, err)
 	assert.Contains(t, err.Error(), "sulfoxides and sulfones")
 }
+
+// A salt of disconnected ions is refused as disconnected parts, not as a
+// charge-separated structure; a refused azole centre's message reads "atom
+// 3 (N) has no group: …".
+func TestRefusalWording(t *testing.T) {
+	for _, smi := range []string{"[Br-].[NH4+]", "C[N+](C)(C)C.[Cl-]"} {
+		_, err := Estimate(parse(t, smi), Options{})
+		require.Error(t, err, smi)
+		assert.Contains(t, err.Error(), "2 disconnected parts", smi)
+		assert.NotContains(t, err.Error(), "charge-separated", smi)
+	}
+	_, err := Estimate(parse(t, "c1nnn[nH]1"), Options{})
+	require.Error(t, err)
+	assert.Contains(t, err.Error(), "atom 3 (N) has no group: no group in the tables has a centre of type NazN")
+}
