@@ -89,49 +89,52 @@ func withReading(lib *reflib.Library, m *molecule.Molecule, err error) error {
 
 // libraryNeighbour returns a note naming the radicals of the reference
 // library whose structure is m with one hydrogen taken from an atom (the
-// hydrogen may be one the SMILES implied) or given to a radical site, with
-// how to write them; "" when there is none.
+// hydrogen may be one the SMILES implied), when m is a closed shell, or
+// given to a radical site, when m is a radical, with how to write them; ""
+// when there is none.
 func libraryNeighbour(lib *reflib.Library, m *molecule.Molecule) string {
 	if m == nil || len(m.Atoms) == 0 || m.HeavyAtoms() > 4 {
 		return "" // the library holds small species only
 	}
+	// A closed shell may be a radical written without brackets (the
+	// implicit H); a radical may lack an H a library radical has ([N]=[N]
+	// for NNH). A radical one H fewer than a radical is another species.
+	minus := m.UnpairedElectrons() == 0
 	seen := map[string]bool{}
 	var notes []string
 	for i, a := range m.Atoms {
 		if a.Element == "H" {
 			continue
 		}
-		for _, minus := range []bool{true, false} {
-			var alt *molecule.Molecule
-			var err error
-			if minus {
-				alt, err = m.WithHydrogenRemoved(i)
-			} else {
-				alt, err = m.WithHydrogenAdded(i)
-			}
-			if err != nil {
-				continue
-			}
-			sp, ok := lib.Lookup(alt, 0)
-			if !ok || sp.Multiplicity < 2 || seen[sp.Name] {
-				continue
-			}
-			seen[sp.Name] = true
-			spell := alt.Canonical()
-			if sp.SMILES != spell {
-				spell = sp.SMILES + " or " + spell
-			}
-			if minus {
-				how := fmt.Sprintf("its %s carries %d H", a.Element, a.HCount)
-				if m.ImplicitHydrogens(i) {
-					how = fmt.Sprintf("its %s takes %d implicit H, as an atom outside brackets takes the hydrogens its ordinary valence leaves", a.Element, a.HCount)
-				}
-				notes = append(notes, fmt.Sprintf("%s is read as %s: %s; the radical with one H fewer, %s, is in the reference library: write it %s",
-					m.SMILES, m.Formula(), how, sp.Name, spell))
-			} else {
-				notes = append(notes, fmt.Sprintf("the radical with one more H on its %s, %s, is in the reference library: write it %s", a.Element, sp.Name, spell))
-			}
+		var alt *molecule.Molecule
+		var err error
+		if minus {
+			alt, err = m.WithHydrogenRemoved(i)
+		} else {
+			alt, err = m.WithHydrogenAdded(i)
 		}
+		if err != nil {
+			continue
+		}
+		sp, ok := lib.Lookup(alt, 0)
+		if !ok || sp.Multiplicity < 2 || seen[sp.Name] {
+			continue
+		}
+		seen[sp.Name] = true
+		spell := alt.Canonical()
+		if sp.SMILES != spell {
+			spell = sp.SMILES + " or " + spell
+		}
+		if !minus {
+			notes = append(notes, fmt.Sprintf("the radical with one more H on its %s, %s, is in the reference library: write it %s", a.Element, sp.Name, spell))
+			continue
+		}
+		how := fmt.Sprintf("its %s carries %d H", a.Element, a.HCount)
+		if m.ImplicitHydrogens(i) {
+			how = fmt.Sprintf("its %s takes %d implicit H, as an atom outside brackets takes the hydrogens its ordinary valence leaves", a.Element, a.HCount)
+		}
+		notes = append(notes, fmt.Sprintf("%s is read as %s: %s; the radical with one H fewer, %s, is in the reference library: write it %s",
+			m.SMILES, m.Formula(), how, sp.Name, spell))
 	}
 	return strings.Join(notes, "; ")
 }

@@ -36,4 +36,11 @@ func TestRefusalReadsImplicitHydrogen(t *testing.T) {
 		require.Error(t, err, smi)
 		assert.Contains(t, RefusalReason(err), want, smi)
 	}
+	// a radical one H fewer than a radical is another species: [S]O (HOS)
+	// is not pointed to the SO diradical
+	m, err := molecule.ParseSMILES("[S]O")
+	require.NoError(t, err)
+	_, err = ws.EstimateMolecule(m, EstimateOptions{})
+	require.Error(t, err)
+	assert.NotContains(t, RefusalReason(err), "reference library")
 }
