@@ -402,17 +402,38 @@ func BeyondBound(m benson.Missing) bool {
 // "MODELLED" for a quantity computed by a validated model instead of a
 // table (benson.Missing.Modelled), which check does not warn about.
 func FlagHeading(f Flag) string {
+	return map[string]string{
+		FlagModelled:     "MODELLED",
+		FlagUnphysical:   "UNPHYSICAL",
+		FlagApproximated: "APPROXIMATED",
+		FlagFlagged:      "FLAGGED group",
+		FlagMissing:      "MISSING group",
+	}[FlagKind(f)]
+}
+
+// The kinds of flag, as FlagKind names them (the JSON `flag_kinds` of
+// estimate and summary); FlagHeading is the word each is shown with.
+const (
+	FlagModelled     = "modelled"     // a validated model's quantity: not warned about
+	FlagUnphysical   = "unphysical"   // beyond a physical bound: fill writes no block
+	FlagApproximated = "approximated" // Cp held below the classical limit
+	FlagFlagged      = "flagged"      // a group used as it stands with a known shortcoming
+	FlagMissing      = "missing"      // no value: an approximation stands in
+)
+
+// FlagKind classifies f: one of the Flag* constants.
+func FlagKind(f Flag) string {
 	switch {
 	case f.Modelled():
-		return "MODELLED"
+		return FlagModelled
 	case BeyondBound(f.Missing):
-		return "UNPHYSICAL"
+		return FlagUnphysical
 	case f.Missing.Group == CpHeldGroup:
-		return "APPROXIMATED"
+		return FlagApproximated
 	case UsedAsItStands(f.Missing):
-		return "FLAGGED group"
+		return FlagFlagged
 	}
-	return "MISSING group"
+	return FlagMissing
 }
 
 // FlagLine is a flag as a line of text: FlagHeading, a blank, FlagText

@@ -34,6 +34,11 @@ type estimateJSON struct {
 	// Flags words each entry of missing_groups as check, summary and hover
 	// word it (extension; analysis.FlagText).
 	Flags []string `json:"flags,omitempty"`
+	// FlagKinds classifies each entry of missing_groups (extension):
+	// "missing", "flagged", "approximated", "unphysical", or "modelled" — a
+	// validated model's quantity (a radical site's S°/Cp change), which
+	// check does not warn about (analysis.FlagKind).
+	FlagKinds []string `json:"flag_kinds,omitempty"`
 	// UncertaintyS298 is the lower bound on the standard uncertainty of
 	// S°298 from approximations that change it (extension; absent when
 	// none does).
@@ -186,6 +191,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		for _, ms := range est.Flags() {
 			r.MissingGroups = append(r.MissingGroups, ms.Group)
 			r.Flags = append(r.Flags, analysis.FlagText(ms))
+			r.FlagKinds = append(r.FlagKinds, analysis.FlagKind(ms))
 		}
 		if g.UncertaintyS298 > 0 {
 			r.UncertaintyS298 = ptr(jnum(g.UncertaintyS298))

@@ -163,3 +163,29 @@ func headed(flag string) string {
 // modelled reports whether a flag, as FlagText words it, is a quantity a
 // validated model computes rather than an approximation.
 func modelled(flag string) bool { return strings.Contains(flag, "(computed by the ") }
+
+// TestFlagKinds: estimate --json and summary --json classify every flag
+// alike (flag_kinds parallel to missing_groups and flags): a radical site's
+// modelled S°/Cp change is "modelled", not a missing group.
+func TestFlagKinds(t *testing.T) {
+	code, stdout, stderr := runKiln(t, "estimate", "--json", "[CH2]S", "C=C(F)F")
+	require.Equal(t, exitOK, code, stderr)
+	var est []estimateJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &est))
+	require.Len(t, est, 2)
+	assert.Equal(t, []string{"modelled", "missing"}, est[0].FlagKinds, "%v", est[0].MissingGroups)
+	assert.Equal(t, []string{"flagged"}, est[1].FlagKinds, "%v", est[1].MissingGroups)
+	for _, r := range est {
+		assert.Len(t, r.FlagKinds, len(r.MissingGroups))
+	}
+
+	path := filepath.Join(t.TempDir(), "k.kiln")
+	require.NoError(t, os.WriteFile(path, []byte("species TM [CH2]S\nspecies DF C=C(F)F\n"), 0o644))
+	code, stdout, stderr = runKiln(t, "summary", "--json", path)
+	require.Equal(t, exitOK, code, stderr)
+	var sum summaryJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &sum))
+	require.Len(t, sum.Species, 2)
+	assert.Equal(t, est[0].FlagKinds, sum.Species[0].FlagKinds)
+	assert.Equal(t, est[1].FlagKinds, sum.Species[1].FlagKinds)
+}

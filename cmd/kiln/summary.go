@@ -37,6 +37,9 @@ type summarySpecies struct {
 	// check, estimate and hover word them (extension; absent when none or
 	// when the thermo comes from the file).
 	Flags []string `json:"flags,omitempty"`
+	// FlagKinds classifies each entry of flags as estimate --json does
+	// (extension; analysis.FlagKind).
+	FlagKinds []string `json:"flag_kinds,omitempty"`
 	// flags are the approximations Flags words, for the text output
 	// (analysis.FlagLine: heading and words together).
 	flags []analysis.Flag
@@ -130,6 +133,7 @@ func buildSummary(results []*analysis.Result) summaryJSON {
 		// check reports them (its missing-group diagnostic).
 		for _, m := range sp.Estimate.Flags() {
 			row.Flags = append(row.Flags, analysis.FlagText(m))
+			row.FlagKinds = append(row.FlagKinds, analysis.FlagKind(m))
 			row.flags = append(row.flags, m)
 		}
 		if sp.Decl.SMILES != nil {

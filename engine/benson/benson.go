@@ -279,6 +279,7 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	addInteractions(g, tab, est)
 	addPolarPairFlags(g, est) // bias.go
 	addCrowdingFlags(g, est)  // bias.go
+	addAzineRingFlags(g, est) // bias.go
 	addHalogenFlags(g, tab, est)
 	addAzineFlags(g, tab, est) // hetero_n.go
 	addCumulatedFlags(g, est)  // ketene.go

@@ -24,6 +24,37 @@ import (
 //     (betaPolyhaloSite, addHBI in radical.go): its C–H bond is stronger
 //     than the alkyl increment says.
 
+// azineGroup names the flag of a six-membered aromatic ring with three or
+// more pyridine-type N (addAzineRingFlags).
+const azineGroup = "azine ring with three or more N"
+
+// addAzineRingFlags flags every benzenoid ring holding three or more
+// pyridine-type ring N (Nb): the Nb value was derived from pyridine and
+// checked on the diazines (pyrimidine, pyrazine within 0.6 kcal/mol), but
+// the ring N do not stay additive beyond two — 1,3,5-triazine comes out
+// about 7 kcal/mol high (61.2 against 54.0, 225.9 kJ/mol, NIST Chemistry
+// WebBook, from memory). class.go widens by widenAzine.
+func addAzineRingFlags(g *graph, est *Result) {
+	for r, ring := range g.rings {
+		if !g.benzRing[r] {
+			continue
+		}
+		n := 0
+		for _, a := range ring {
+			if g.typ[a] == "Nb" {
+				n++
+			}
+		}
+		if n >= 3 {
+			est.Missing = append(est.Missing, Missing{
+				Group:         azineGroup,
+				Approximation: "the Nb group as it stands, without an N/N ring interaction",
+				Note:          fmt.Sprintf("%d pyridine-type N in one six-membered ring: Nb is additive through the diazines, not beyond (1,3,5-triazine comes out about 7 kcal/mol high)", n),
+			})
+		}
+	}
+}
+
 // polarPairSuffix ends the Approximation of a vicinal polar-group flag.
 const polarPairSuffix = " without a vicinal polar-group interaction"
 

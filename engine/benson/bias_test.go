@@ -23,6 +23,8 @@ const (
 	dibenzothiopheneRef   = 49.0   // NIST WebBook, uncertain
 	dimethylanilineRef    = 24.1   // Pedley et al. 1986, uncertain
 	thiazoleRef           = 40.0   // NIST WebBook, unsure
+	triazineRef           = 54.0   // 1,3,5-triazine, NIST WebBook (225.9 kJ/mol)
+	difluoroethyleneRef   = -80.4  // CH2=CF2, NASA/TP-2002-211556 C2H2F2 header (published; not from memory)
 	// D(CF3CH2–H), Luo (from memory).
 	trifluoroethylCHRef = 106.7
 )
@@ -177,4 +179,27 @@ func TestIminoylSiteRefused(t *testing.T) {
 	}
 	e := heteroEstimate(t, "C=N[CH2]")
 	assert.Contains(t, hbiFlag(e), "next to an imine C=N")
+}
+
+// Three or more pyridine-type N in one ring are flagged and widened so that
+// 1,3,5-triazine's error is covered; pyridine and the diazines are not.
+func TestAzineRingFlag(t *testing.T) {
+	e := heteroEstimate(t, "c1ncncn1")
+	require.Equal(t, 1, flagCountOf(e, azineGroup), "%v", e.Missing)
+	hf, u := kcalOf(e)
+	assert.GreaterOrEqual(t, u, math.Abs(triazineRef-hf), "σ %.2f must cover the error %.2f", u, triazineRef-hf)
+	assert.Equal(t, 1, flagCountOf(heteroEstimate(t, "Clc1nc(Cl)nc(Cl)n1"), azineGroup))
+	for _, smi := range []string{"c1ccncc1", "c1cncnc1", "c1cnccn1", "Cc1ccncc1", "c1ccc2ncccc2c1"} {
+		assert.Zero(t, flagCountOf(heteroEstimate(t, smi), azineGroup), smi)
+	}
+}
+
+// Cd-(F)2 next to a carbon without two fluorines is flagged and widened so
+// that CH2=CF2's error against the published C2H2F2 value is covered.
+func TestVinylDifluorideWidened(t *testing.T) {
+	e := heteroEstimate(t, "C=C(F)F")
+	require.Equal(t, 1, flagCountOf(e, "Cd-(F)2"), "%v", e.Missing)
+	hf, u := kcalOf(e)
+	assert.GreaterOrEqual(t, u, math.Abs(difluoroethyleneRef-hf), "σ %.2f must cover the error %.2f", u, difluoroethyleneRef-hf)
+	assert.Zero(t, flagCountOf(heteroEstimate(t, "FC(F)=C(F)F"), "Cd-(F)2"))
 }

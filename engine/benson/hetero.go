@@ -186,7 +186,7 @@ func addHalogenFlags(g *graph, l lookup, est *Result) {
 			est.Missing = append(est.Missing, Missing{
 				Group:         name,
 				Approximation: name + vinylFluorineContext,
-				Note:          "Cd-(F)2 was derived from CF2=CF2 alone; next to a carbon without two fluorines its F/F interaction is not there, and errors of several kcal/mol are possible",
+				Note:          "Cd-(F)2 was derived from CF2=CF2 alone; next to a carbon without two fluorines its F/F interaction is not there: " + polyhaloGroupSeen[name],
 			})
 			continue
 		}

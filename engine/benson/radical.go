@@ -21,7 +21,9 @@ import (
 //
 // Convention: the tabulated ΔS_HBI excludes both electronic degeneracy and
 // symmetry; kiln adds R ln(multiplicity) and computes σ and n on the radical
-// graph itself (a radical carbon with three ligands is treated as planar).
+// graph itself (a radical carbon with three ligands is treated as planar,
+// except one bearing two or more fluorines, which is pyramidal:
+// molecule.Molecule.PyramidalRadical).
 // Radical-centred groups (C•-(C)(H)2 …) are not used: the HBI route covers
 // every closed-shell parent the group tables cover.
 //
@@ -461,9 +463,10 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 //   - Freed rotors: each single bond from such a centre to another carbon
 //     was an internal rotor with a threefold barrier near 3 kcal/mol in the
 //     parent and is nearly free next to the planar centre (barrier a few
-//     tenths of a kcal/mol). Pitzer's hindered-rotor tables give
-//     S_free − S_hindered ≈ 1.0 cal/(mol K) at 298 K for a methyl-type top
-//     at V₀/RT ≈ 5 (freedRotorS), and the hindered rotor's Cp excess over
+//     tenths of a kcal/mol); a bond inside a ring is no rotor and frees
+//     nothing (cyclohexyl and cyclopentyl keep only the umbrella mode).
+//     Pitzer's hindered-rotor tables give S_free − S_hindered ≈ 1.0
+//     cal/(mol K) at 298 K for a methyl-type top at V₀/RT ≈ 5 (freedRotorS), and the hindered rotor's Cp excess over
 //     the free rotor (freedRotorCp) fades with temperature.
 //   - Alkoxy: the O–H torsion of an alcohol parent is a nearly free rotor
 //     (barrier ≈ 1.1 kcal/mol; reduced moment ≈ 0.67 amu·Å² gives a free-rotor
@@ -476,9 +479,23 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 //     stops being a rotor (the barrier rises to 10–15 kcal/mol) and becomes
 //     a torsion near inversionWavenumber: the parent's hindered-rotor S
 //     (hinderedRotorS) and Cp (hinderedRotorCp) are removed and the torsion
-//     added as a harmonic oscillator. A propargylic site is left alone: the
-//     methyl "rotor" of a C≡C–CH3 parent turns about the molecular axis and
+//     added as a harmonic oscillator. Only a bond outside a ring counts: a
+//     ring site conjugated through ring bonds only (cyclopentadienyl,
+//     cyclopentenyl, the C-centred structure of pyrrolyl) is planar with
+//     its ring in parent and radical alike, with no rotor to lose, no
+//     torsion to gain and no inversion mode, so it has no change here
+//     (the H atom's three modes are still taken out by lostModes). A
+//     propargylic site is left alone: the methyl "rotor" of a C≡C–CH3 parent turns about the molecular axis and
 //     is part of overall rotation, not an internal rotor.
+//
+// A pyramidal radical centre (two or more fluorines:
+// molecule.Molecule.PyramidalRadical; CF3•, CHF2•, R–CF2•) has none of
+// these: its umbrella mode stays stiff (inversion barriers of many
+// kcal/mol) and its bonds keep their parent's hindered rotors, so
+// siteChanges skips it, as the symmetry number counts it pyramidal (no
+// planar flip). The α-fluoro centre (one F) is weakly pyramidal with a very
+// low inversion barrier and counts as planar for σ; its increment has no
+// site changes either (it is not an alkyl, α-hydroxy or α-alkoxy site).
 //
 // Spin degeneracy (R ln multiplicity) and the symmetry change (σ of the
 // radical itself) are applied in Estimate.
@@ -503,7 +520,9 @@ var (
 func siteChanges(m *molecule.Molecule, g *graph) (Term, bool) {
 	var sites []siteDelta
 	for i, a := range m.Atoms {
-		if a.Radical != 1 {
+		if a.Radical != 1 || m.PyramidalRadical(i) {
+			// A pyramidal centre (two or more fluorines) keeps a stiff
+			// umbrella mode and its hindered rotors: no change here.
 			continue
 		}
 		if d, ok := siteChange(g, i); ok {
@@ -570,15 +589,25 @@ func siteChange(g *graph, i int) (siteDelta, bool) {
 	if a.Element != "C" || g.typ[i] != "C" {
 		return d, false
 	}
-	conjugated := false
-	for _, j := range g.nbr[i] {
+	// rotor: a neighbour in the π system bonded by an open-chain bond, the
+	// parent's internal rotor that the conjugation stiffens. A bond inside a ring is no rotor: a ring site
+	// conjugated only through ring bonds (cyclopentadienyl, the 2H-pyrrolyl
+	// structure of pyrrolyl, cyclohexenyl) is planar with its ring, so it
+	// loses no rotor and gains no torsion (the H atom's own modes are
+	// lostModes').
+	rotor := false
+	for k, j := range g.nbr[i] {
 		switch g.typ[j] {
 		case "Cd", "Ca", "Cb", "Cbf":
-			conjugated = true
+			if g.smallestRingThrough(g.nbrBond[i][k]) == 0 {
+				rotor = true
+			}
 		}
 	}
-	if (site == "allylic" || site == "benzylic") && !conjugated {
-		return d, false // propargylic: no internal rotor changes
+	if (site == "allylic" || site == "benzylic") && !rotor {
+		// propargylic: no internal rotor changes; ring-conjugated:
+		// none either (above)
+		return d, false
 	}
 	switch site {
 	case "primary", "secondary", "tertiary", "alpha-hydroxy", "alpha-alkoxy":
@@ -592,7 +621,8 @@ func siteChange(g *graph, i int) (siteDelta, bool) {
 		vib(+1)
 		bend(lostCH[2])
 		for k, j := range g.nbr[i] {
-			if g.isCarbon(j) && g.order(g.nbrBond[i][k]) == 1 && len(g.nbr[j])+g.m.Atoms[j].HCount > 1 {
+			// a ring bond is no internal rotor: nothing to free
+			if g.isCarbon(j) && g.order(g.nbrBond[i][k]) == 1 && len(g.nbr[j])+g.m.Atoms[j].HCount > 1 && g.smallestRingThrough(g.nbrBond[i][k]) == 0 {
 				d.s += freedRotorS * calorie
 				for c := range d.cp {
 					d.cp[c] -= freedRotorCp[c] * calorie

@@ -55,7 +55,10 @@ const maxSeeds = 64
 //     alike, swapping them fixes the parity and the atom contributes
 //     Π k!/2 instead of a check;
 //     - other atoms (trigonal, linear, radical centres) permute alike outside
-//     ligands freely: Π k!;
+//     ligands freely: Π k!; but a carbon radical centre with two or more
+//     fluorines is pyramidal (PyramidalRadical) and is checked like a
+//     tetrahedral atom whose singly occupied orbital is the fourth ligand
+//     (CF3• σ 3, CHF2• σ 1);
 //     - an acyclic double bond keeps cis partners cis (an end with two alike
 //     ligands halves the count instead); an allene keeps its handedness;
 //     cumulene chains generalise both: with an odd number of double bonds
@@ -298,6 +301,9 @@ func (m *Molecule) allSingle(i int) bool {
 func (m *Molecule) lonePairLigands(i int) int {
 	a := m.Atoms[i]
 	d := len(m.Adj[i])
+	if m.PyramidalRadical(i) {
+		return 1 // the singly occupied orbital takes the fourth position
+	}
 	if a.Radical != 0 {
 		return 0
 	}
@@ -364,7 +370,45 @@ func (sc *sigmaCalc) tetrahedral(i int) bool {
 	if _, ok := m.hypervalentLonePairs(i); ok && !m.allSingle(i) {
 		return true
 	}
+	if m.PyramidalRadical(i) {
+		return true
+	}
 	return m.allSingle(i) && a.Radical == 0 && len(m.Adj[i])+a.HCount+l == 4 && (a.Element != "C" || l == 0)
+}
+
+// minPyramidalFluorines is the number of fluorine ligands that make a
+// carbon radical centre pyramidal for the symmetry number (see
+// PyramidalRadical).
+const minPyramidalFluorines = 2
+
+// PyramidalRadical reports whether atom i is a pyramidal carbon radical
+// centre: a neutral carbon with one unpaired electron, three σ partners
+// (hydrogens included), single non-aromatic bonds only, and at least two
+// fluorine ligands. Fluorine's electronegativity puts more s character in
+// the singly occupied orbital (Bent's rule, common practice): CF3• is
+// pyramidal (C3v, σ 3, inversion barrier of tens of kcal/mol), and CHF2•,
+// CF2R• are pyramidal with substantial barriers, while the methyl and alkyl
+// radicals are planar or nearly so. A carbon radical with one fluorine
+// (CH2F•, weakly pyramidal with a very low inversion barrier) or with
+// chlorine, bromine or iodine ligands only (CCl3•, CH2Cl•: nearly planar,
+// low barriers) is treated as planar, as are centres conjugated with a
+// double bond or aromatic ring (conjugatedRadical: they are planar with it).
+// A pyramidal centre counts its singly occupied orbital as a fourth
+// ligand, like an amine's lone pair, so σ(CF3•) = 3 and σ(CHF2•) = 1. It is
+// never a stereo unit (stereoUnit excludes radicals): with two alike
+// fluorines it cannot be one.
+func (m *Molecule) PyramidalRadical(i int) bool {
+	a := m.Atoms[i]
+	if a.Element != "C" || a.Radical != 1 || a.Charge != 0 || a.Aromatic || len(m.Adj[i])+a.HCount != 3 || !m.allSingle(i) {
+		return false
+	}
+	f := 0
+	for _, b := range m.Adj[i] {
+		if m.Atoms[m.Other(b, i)].Element == "F" {
+			f++
+		}
+	}
+	return f >= minPyramidalFluorines
 }
 
 // total is σ of the whole molecule.

@@ -258,3 +258,29 @@ func TestSymmetryConjugatedRadicalsCumulenes(t *testing.T) {
 		assert.Equal(t, c.want, s.Int64(), c.smi)
 	}
 }
+
+// A carbon radical centre with two or more fluorines is pyramidal
+// (PyramidalRadical): CF3• C3v σ 3, CHF2• Cs σ 1, CF3CF2• and CH3CF2• 3 (the
+// CX3 top only). One fluorine (CH2F•, weakly pyramidal, very low inversion
+// barrier), chlorine only (CCl3•, nearly planar) and alkyl centres stay
+// planar; so does a CF2 centre conjugated with a double bond (allylic,
+// planar with the π system). Point groups from common structural chemistry
+// (Bent's rule; the pyramidal fluoromethyl radicals).
+func TestPyramidalRadicalSigma(t *testing.T) {
+	for _, c := range []struct {
+		smiles string
+		sigma  int64
+	}{
+		{"F[C](F)F", 3}, {"F[CH]F", 1}, {"FC(F)(F)[C](F)F", 3}, {"F[C](F)C(F)(F)F", 3},
+		{"C[C](F)F", 3}, {"FC[C](F)F", 1}, {"F[C](F)Cl", 1},
+		{"[CH2]F", 2}, {"C[CH]F", 3}, {"Cl[C](Cl)Cl", 6}, {"Cl[CH]Cl", 2}, {"F[C](Cl)Cl", 2},
+		{"[CH3]", 6}, {"C[C](C)C", 162}, {"FC(F)=C[C](F)F", 2},
+	} {
+		m, err := ParseSMILES(c.smiles)
+		require.NoError(t, err, c.smiles)
+		s, err := m.SymmetryNumber()
+		require.NoError(t, err, c.smiles)
+		assert.Equal(t, c.sigma, s.Int64(), c.smiles)
+		assert.Equal(t, 1, m.OpticalIsomers(), "%s: a radical centre is no stereo unit", c.smiles)
+	}
+}
