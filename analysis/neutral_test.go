@@ -40,4 +40,9 @@ func TestSulfoxideSpellingsOneStructure(t *testing.T) {
 		assert.Equal(t, a.Estimate.Hf298, b.Estimate.Hf298)
 		assert.Equal(t, a.Estimate.S298, b.Estimate.S298)
 	}
+	c := compareTexts(t, map[string]string{
+		"/w/a.kiln": "species dmso C[S+](C)[O-]\nspecies sulfone C[S+2]([O-])([O-])C\n",
+		"/w/b.kiln": "species DMSO CS(C)=O\nspecies DMSO2 CS(C)(=O)=O\n",
+	}, "/w/a.kiln", "/w/b.kiln")
+	assert.Equal(t, map[string]string{"dmso": "DMSO", "sulfone": "DMSO2"}, pairNames(c))
 }
