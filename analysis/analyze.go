@@ -435,19 +435,7 @@ func (a *analysis) structure(path string, sp *Species) {
 	m, err := p.mol, p.err
 	if err != nil {
 		sp.SMILESError = err
-		ts := a.at(tok.Span)
-		start, end := ts.Start, ts.End
-		if se, ok := err.(*molecule.SMILESError); ok {
-			start = ts.Start + min(max(se.Pos, 0), len(tok.Text))
-			end = start + 1
-			if end > ts.End {
-				end = ts.End
-				if start == end && start > ts.Start {
-					start--
-				}
-			}
-		}
-		a.report(path, speciesfile.Diagnostic{Span: speciesfile.Span{Start: start, End: end}, Severity: speciesfile.SeverityError,
+		a.report(path, speciesfile.Diagnostic{Span: smilesErrorSpan(a.at(tok.Span), tok.Text, err), Severity: speciesfile.SeverityError,
 			Code: speciesfile.CodeBadSMILES, Message: fmt.Sprintf("bad SMILES for %s: %s", sp.Name, smilesReason(err))})
 		return
 	}
@@ -458,6 +446,27 @@ func (a *analysis) structure(path string, sp *Species) {
 	sp.MolarMass = p.molarMass
 	sp.ident = p.ident
 	sp.inv = p.inv
+}
+
+// smilesErrorSpan returns the span a SMILES error marks in the SMILES
+// token at ts (text its text): the offending character of a
+// *molecule.SMILESError, the whole token otherwise. It is the one home of
+// that position: check's bad-smiles diagnostic and fill's list of skipped
+// species (Result.ProblemLoc) both take it from here.
+func smilesErrorSpan(ts speciesfile.Span, text string, err error) speciesfile.Span {
+	se, ok := err.(*molecule.SMILESError)
+	if !ok {
+		return ts
+	}
+	start := ts.Start + min(max(se.Pos, 0), len(text))
+	end := start + 1
+	if end > ts.End {
+		end = ts.End
+		if start == end && start > ts.Start {
+			start--
+		}
+	}
+	return speciesfile.Span{Start: start, End: end}
 }
 
 // StructurePlaceholder is the structure "Declare species NAME" writes for a

@@ -190,7 +190,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 				err = e2
 			}
 		}
-		return nil, err
+		return nil, withReading(lib, m, err)
 	}
 	if err := physical(g); err != nil {
 		return nil, err
@@ -559,9 +559,10 @@ func (c *moleculeCache) parse(smiles string) parsed {
 	m, err := molecule.ParseSMILES(smiles)
 	if err == nil {
 		// One structure for the charge-separated and the pentavalent
-		// spellings of a nitro or nitrate group (C[N+](=O)[O-], CN(=O)=O):
+		// spellings of a nitro or nitrate group (C[N+](=O)[O-], CN(=O)=O) or of
+		// a sulfoxide or sulfone (C[S+](C)[O-], CS(C)=O):
 		// duplicates, compare and estimates see the same molecule.
-		m = m.NeutralNO()
+		m = m.NeutralOxo()
 	}
 	p = parsed{mol: m, err: err}
 	if err == nil {

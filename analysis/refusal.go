@@ -6,7 +6,9 @@ import (
 	"strings"
 
 	"kiln.dev/kiln/engine/benson"
+	"kiln.dev/kiln/engine/molecule"
 	"kiln.dev/kiln/engine/nasa"
+	"kiln.dev/kiln/engine/reflib"
 )
 
 // RefusalReason words the estimator's refusal for the user: the atom
@@ -58,4 +60,81 @@ func FitRefusal(err error, u Units) string {
 		msg = strings.TrimPrefix(msg, prefix)
 	}
 	return msg + "; " + block
+}
+
+// withReading adds to the estimator's refusal err of m a note on how the
+// SMILES was read when a structure one hydrogen away is a radical of the
+// reference library: N(=O)=O, the usual mistaken spelling of NO2, reads as
+// HNO2 (the N takes an implicit H), and the note says so and how to write
+// the radical. Errors without such a neighbour are returned as they are.
+func withReading(lib *reflib.Library, m *molecule.Molecule, err error) error {
+	note := libraryNeighbour(lib, m)
+	if note == "" {
+		return err
+	}
+	var mg *benson.MissingGroupError
+	if errors.As(err, &mg) {
+		out := *mg
+		out.Reading = note
+		return &out
+	}
+	var ue *benson.UnsupportedError
+	if errors.As(err, &ue) {
+		out := *ue
+		out.Reason += "; " + note
+		return &out
+	}
+	return fmt.Errorf("%w; %s", err, note)
+}
+
+// libraryNeighbour returns a note naming the radicals of the reference
+// library whose structure is m with one hydrogen taken from an atom (the
+// hydrogen may be one the SMILES implied), when m is a closed shell, or
+// given to a radical site, when m is a radical, with how to write them; ""
+// when there is none.
+func libraryNeighbour(lib *reflib.Library, m *molecule.Molecule) string {
+	if m == nil || len(m.Atoms) == 0 || m.HeavyAtoms() > 4 {
+		return "" // the library holds small species only
+	}
+	// A closed shell may be a radical written without brackets (the
+	// implicit H); a radical may lack an H a library radical has ([N]=[N]
+	// for NNH). A radical one H fewer than a radical is another species.
+	minus := m.UnpairedElectrons() == 0
+	seen := map[string]bool{}
+	var notes []string
+	for i, a := range m.Atoms {
+		if a.Element == "H" {
+			continue
+		}
+		var alt *molecule.Molecule
+		var err error
+		if minus {
+			alt, err = m.WithHydrogenRemoved(i)
+		} else {
+			alt, err = m.WithHydrogenAdded(i)
+		}
+		if err != nil {
+			continue
+		}
+		sp, ok := lib.Lookup(alt, 0)
+		if !ok || sp.Multiplicity < 2 || seen[sp.Name] {
+			continue
+		}
+		seen[sp.Name] = true
+		spell := alt.Canonical()
+		if sp.SMILES != spell {
+			spell = sp.SMILES + " or " + spell
+		}
+		if !minus {
+			notes = append(notes, fmt.Sprintf("the radical with one more H on its %s, %s, is in the reference library: write it %s", a.Element, sp.Name, spell))
+			continue
+		}
+		how := fmt.Sprintf("its %s carries %d H", a.Element, a.HCount)
+		if m.ImplicitHydrogens(i) {
+			how = fmt.Sprintf("its %s takes %d implicit H, as an atom outside brackets takes the hydrogens its ordinary valence leaves", a.Element, a.HCount)
+		}
+		notes = append(notes, fmt.Sprintf("%s is read as %s: %s; the radical with one H fewer, %s, is in the reference library: write it %s",
+			m.SMILES, m.Formula(), how, sp.Name, spell))
+	}
+	return strings.Join(notes, "; ")
 }

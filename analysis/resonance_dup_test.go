@@ -1,9 +1,11 @@
 package analysis
 
 import (
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
 
 	"kiln.dev/kiln/speciesfile"
 )
@@ -88,4 +90,52 @@ species CCl3 Cl[C](Cl)Cl
 	}
 	assert.NotEmpty(t, res.ByName["CHCl3"].Estimate.Library, "the library species keeps its data")
 	assert.InDelta(t, -24.60*4184, res.ByName["CHCl3"].Estimate.Hf298, 50)
+}
+
+// TestThiylThioneOneSpecies: vinylthiyl C=C[S] and thioformylmethyl
+// [CH2]C=S are one radical (S• ↔ C=S), as C=C[NH] and [CH2]C=N are: the
+// second spelling is a duplicate, both get one estimate, also when the
+// groups of the thione structure are supplied (its higher ΔHf° loses), and
+// compare pairs them across files.
+func TestThiylThioneOneSpecies(t *testing.T) {
+	groups := `group CS-(C)(H)
+  hf298 30.0
+  s298 30.0
+  cp 300=7.0 400=8.0 500=9.0 600=9.5 800=10.5 1000=11.0 1500=12.0
+  source test value, not real
+group C-(CS)(H)3
+  hf298 -10.2
+  s298 30.4
+  cp 300=6.19 400=7.84 500=9.4 600=10.79 800=13.02 1000=14.77 1500=17.58
+  source test value, not real
+`
+	for _, prefix := range []string{"", groups} {
+		res := analyseWith(t, prefix+`species vts C=C[S]
+species tfm [CH2]C=S
+species thioacetaldehyde CC=S
+`, DefaultSettings())
+		first := strings.Count(prefix, "\n") + 1
+		lines := map[int]bool{}
+		for _, d := range res.Diagnostics {
+			if d.Code == speciesfile.CodeDuplicateSpecies {
+				lines[res.File.Lines.Position(d.Span.Start).Line+1-first] = true
+			}
+		}
+		assert.Equal(t, map[int]bool{1: true}, lines, "%v", res.Diagnostics)
+		hf := map[string]float64{}
+		for _, sp := range res.Species {
+			if sp.Name == "vts" || sp.Name == "tfm" {
+				h, _, ok := sp.Hf298S298()
+				require.True(t, ok, sp.Name)
+				hf[sp.Name] = h
+			}
+		}
+		require.Len(t, hf, 2)
+		assert.Equal(t, hf["vts"], hf["tfm"])
+	}
+	c := compareTexts(t, map[string]string{
+		"/w/a.kiln": "species vts C=C[S]\n",
+		"/w/b.kiln": "species tfm [CH2]C=S\n",
+	}, "/w/a.kiln", "/w/b.kiln")
+	assert.Equal(t, map[string]string{"vts": "tfm"}, pairNames(c))
 }

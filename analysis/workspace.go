@@ -93,6 +93,18 @@ func (r *Result) SpeciesLoc(sp *Species) Location {
 	return Location{File: sp.File, Span: sp.Decl.Name.Span.At(r.declStart(sp))}
 }
 
+// ProblemLoc returns where the reason sp (a species of r) has no thermo is
+// reported: for a species whose SMILES cannot be read, the offending
+// character (or the token), as check's bad-smiles diagnostic marks it;
+// otherwise the name, as SpeciesLoc. fill lists skipped species there.
+func (r *Result) ProblemLoc(sp *Species) Location {
+	if sp.SMILESError != nil && sp.Decl.SMILES != nil {
+		ts := sp.Decl.SMILES.Span.At(r.declStart(sp))
+		return Location{File: sp.File, Span: smilesErrorSpan(ts, sp.Decl.SMILES.Text, sp.SMILESError)}
+	}
+	return r.SpeciesLoc(sp)
+}
+
 // ReactionLine returns the 1-based line of reaction rx (a reaction of r), as
 // StmtLine.
 func (r *Result) ReactionLine(rx *Reaction) int {

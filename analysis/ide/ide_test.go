@@ -208,7 +208,7 @@ func TestHoverRefusal(t *testing.T) {
 	x := analyse(t, map[string]string{"/w/a.kiln": src}, "/w/a.kiln")
 	h, ok := Hover(x, "/w/a.kiln", strings.Index(src, "tetrazole"), analysis.DefaultSettings(), false)
 	require.True(t, ok)
-	assert.Contains(t, h.Text, "kiln cannot estimate it: atom 3 (N) no group in the tables has a centre of type NazN")
+	assert.Contains(t, h.Text, "kiln cannot estimate it: atom 3 (N) has no group: no group in the tables has a centre of type NazN")
 	assert.Contains(t, h.Text, "Give the species a nasa7 or thermo-table block")
 }
 

@@ -209,7 +209,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		// closed-shell, uncharged one: for a radical or charge-separated
 		// library species (NO2 and NO3 are delocalised; OH, CH3 …) σ is
 		// left null (the tabulated S° contains the true one).
-		if n := m.NeutralNO(); n.UnpairedElectrons() == 0 && !anyCharge(n) {
+		if n := m.NeutralOxo(); n.UnpairedElectrons() == 0 && !anyCharge(n) {
 			if sigma, err := n.SymmetryNumber(); err == nil {
 				r.SymmetryNumber = ptr(json.Number(sigma.String()))
 				r.OpticalIsomers = ptr(n.OpticalIsomers())
@@ -239,6 +239,10 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 			fmt.Fprintf(w, "  error at position %d: %s\n", *r.Error.Position, r.Error.Message)
 			fmt.Fprintf(w, "    %s\n    %s^\n", r.Input, strings.Repeat(" ", *r.Error.Position-1))
 		} else {
+			if r.Formula != nil && r.MolarMass != nil {
+				// what the SMILES was read as (implicit hydrogens included)
+				fmt.Fprintf(w, "  formula %s, molar mass %s\n", *r.Formula, analysis.FormatMolarMass(*r.MolarMass))
+			}
 			fmt.Fprintf(w, "  error: %s\n", r.Error.Message)
 			if r.Error.hint != "" {
 				fmt.Fprintf(w, "  %s\n", r.Error.hint)

@@ -39,7 +39,7 @@ func runFill(e env, args []string) (int, error) {
 	lines := speciesfile.NewLineIndex(out)
 	code := exitOK
 	for _, sk := range skips {
-		off := res.SpeciesLoc(sk.Species).Span.Start
+		off := res.ProblemLoc(sk.Species).Span.Start
 		before := res.File.Lines.Position(off)
 		pos := lines.Position(shiftedOffset(off, edits))
 		moved := ""
@@ -56,7 +56,7 @@ func runFill(e env, args []string) (int, error) {
 	included := res.IncludedWithoutThermo()
 	for _, sk := range included {
 		f := res.Files[sk.Species.File]
-		pos := f.Lines.Position(res.SpeciesLoc(sk.Species).Span.Start)
+		pos := f.Lines.Position(res.ProblemLoc(sk.Species).Span.Start)
 		fmt.Fprintf(e.stderr, "%s:%d:%d: not filled %s: %s\n", displayPath(sk.Species.File), pos.Line+1, pos.Char+1, sk.Species.Name, sk.Reason)
 	}
 	notFilled := ""

@@ -360,6 +360,6 @@ reaction NO + O <=> NO2 + X   A=1e13 n=0 Ea=0
 // gets the route on the next line, as check gives it.
 func TestEstimateRefusalRoute(t *testing.T) {
 	_, out, _ := runKiln(t, "estimate", "c1nnn[nH]1")
-	assert.Contains(t, out, "kiln cannot estimate it: atom 3 (N) no group in the tables has a centre of type NazN")
+	assert.Contains(t, out, "kiln cannot estimate it: atom 3 (N) has no group: no group in the tables has a centre of type NazN")
 	assert.Contains(t, out, "give the species a nasa7 or thermo-table block in its .kiln file")
 }

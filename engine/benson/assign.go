@@ -178,7 +178,7 @@ atoms:
 		}
 		if !l.hasCentre(centre) {
 			if _, nameable := centreLigands[centre]; !nameable {
-				refuse(i, unsupported(g, i, fmt.Sprintf("no group in the tables has a centre of type %s%s", centre, typeNote(centre))))
+				refuse(i, unsupported(g, i, fmt.Sprintf("has no group: no group in the tables has a centre of type %s%s", centre, typeNote(centre))))
 				continue
 			}
 			// A group the user can define (a `group` statement) but no
@@ -371,6 +371,10 @@ type MissingGroupError struct {
 	// when it is not the structure as written, and Written the reason the
 	// structure as written is refused; both "" otherwise.
 	Form, Written string
+	// Reading is a note the caller adds on how the SMILES was read when a
+	// nearby spelling is known (N(=O)=O is HNO2, and the NO2 radical is
+	// in the reference library); "" for none.
+	Reading string
 }
 
 func (e *MissingGroupError) Error() string {
@@ -387,6 +391,9 @@ func (e *MissingGroupError) Detail() string {
 	}
 	if e.Form != "" {
 		d += fmt.Sprintf(" (needed by the resonance structure %s; the structure as written is refused: %s)", e.Form, e.Written)
+	}
+	if e.Reading != "" {
+		d += " (" + e.Reading + ")"
 	}
 	return d
 }

@@ -193,9 +193,14 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	if err := valenceScope(m); err != nil {
 		return nil, err
 	}
-	// Charge-separated nitro, nitrate and N-oxide units are read as N=O
-	// first (hetero_n.go).
-	m = neutralNO(m)
+	// Charge-separated nitro, nitrate and N-oxide units are read as N=O,
+	// sulfoxide and sulfone units as S=O, first (hetero_n.go).
+	m = neutralOxo(m)
+	// Disconnected parts before charges: a salt ([Br-].[NH4+]) is two
+	// species, not a charge-separated structure.
+	if n := components(m); n > 1 {
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("the structure has %d disconnected parts ('.' in the SMILES): a species is one molecule — give each part its own species, or give this one a thermo block", n)}
+	}
 	var refusals []atomError
 	for i, a := range m.Atoms {
 		switch {
@@ -210,9 +215,6 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	if len(refusals) > 0 {
 		return nil, canonicalRefusal(m, refusals)
-	}
-	if n := components(m); n > 1 {
-		return nil, &UnsupportedError{Reason: fmt.Sprintf("the structure has %d disconnected parts ('.' in the SMILES): a species is one molecule — give each part its own species, or give this one a thermo block", n)}
 	}
 	if err := spinScope(m); err != nil {
 		return nil, err
@@ -556,7 +558,7 @@ func ordinaryValence(el string) (valence int, ok bool) {
 // ordinary valence (N#N=O: five bonds on the middle N), naming the atom and
 // its bonds, before any group is looked for. The one extended valence the
 // groups describe is the nitro/nitrate nitrogen N(=O)=O; charge-separated
-// structures ([N+], [O-]) are read by neutralNO and chargeRefusal, not here.
+// structures ([N+], [O-]) are read by neutralOxo and chargeRefusal, not here.
 // It runs on the structure as written.
 func valenceScope(m *molecule.Molecule) error {
 	for i, a := range m.Atoms {

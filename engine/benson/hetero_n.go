@@ -63,9 +63,10 @@ import (
 //
 // A nitro, nitrate or N-oxide unit written charge-separated (C[N+](=O)[O-],
 // the usual SMILES) is read as the neutral pentavalent structure
-// (CN(=O)=O) before anything else (neutralNO): both spellings give the same
-// graph, the same groups and the same symmetry number. Any other formal
-// charge is refused.
+// (CN(=O)=O) before anything else (neutralOxo): both spellings give the same
+// graph, the same groups and the same symmetry number. So is a sulfoxide or
+// sulfone written charge-separated (C[S+](C)[O-] as CS(C)=O). Any other
+// formal charge is refused.
 
 //go:embed groups_n.tsv
 var groupsNTSV string
@@ -204,10 +205,10 @@ func (g *graph) impliedTerminal(i, k int, centre string) bool {
 	return ok && g.order(g.nbrBond[i][k]) >= 2 && g.m.Atoms[j].Element == p && g.terminal(j)
 }
 
-// neutralNO returns m with its charge-separated N⁺–O⁻ units written as
-// N=O (molecule.NeutralNO), the pentavalent neutral structure the nitro and
-// nitrate groups describe.
-func neutralNO(m *molecule.Molecule) *molecule.Molecule { return m.NeutralNO() }
+// neutralOxo returns m with its charge-separated N⁺–O⁻ and S⁺–O⁻ units
+// written as N=O and S=O (molecule.NeutralOxo), the neutral structures the
+// nitro, nitrate, sulfoxide and sulfone groups describe.
+func neutralOxo(m *molecule.Molecule) *molecule.Molecule { return m.NeutralOxo() }
 
 // isocyanide reports whether atom i of m is the N⁺ or the terminal C⁻ of an
 // isocyanide group, R–N⁺≡C⁻.
@@ -247,8 +248,8 @@ func isocyanide(m *molecule.Molecule, i int) bool {
 }
 
 // chargeRefusal explains why charged atom i of m is refused: an ion (net
-// charge) or a charge-separated structure other than the N⁺–O⁻ units
-// neutralNO rewrites.
+// charge) or a charge-separated structure other than the N⁺–O⁻ and
+// S⁺–O⁻ units neutralOxo rewrites.
 func chargeRefusal(m *molecule.Molecule, i int) error {
 	net := 0
 	for _, a := range m.Atoms {
@@ -261,7 +262,7 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 	if net != 0 {
 		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d and the species has net charge %+d: ions are outside group additivity", a.Element, a.Charge, net)}
 	}
-	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d in a neutral charge-separated structure that no group describes (only a non-aromatic N⁺ with a terminal O⁻ and a terminal =O, as in nitro and nitrate groups, is read as N(=O)=O; amine oxides and nitrones have no groups)", a.Element, a.Charge)}
+	return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d in a neutral charge-separated structure that no group describes (only a non-aromatic N⁺ with a terminal O⁻ and a terminal =O, as in nitro and nitrate groups, is read as N(=O)=O, and an S⁺ or S²⁺ with as many terminal O⁻, as in sulfoxides and sulfones, as S=O; amine oxides and nitrones have no groups)", a.Element, a.Charge)}
 }
 
 // addAzineFlags handles substituents on a ring carbon next to Nb (the

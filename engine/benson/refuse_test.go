@@ -65,7 +65,7 @@ func TestRefusals(t *testing.T) {
 		// charge separation, cis azo compounds and imines without a group
 		// (oximes here) are refused.
 		{"C[N+]#[C-]", Options{}, "isocyanide"},
-		{"C[N+](C)(C)C.[Cl-]", Options{}, "charge"},
+		{"C[N+](C)(C)C.[Cl-]", Options{}, "2 disconnected parts"}, // a salt: two species, not a charge-separated one
 		{"CC=NO", Options{}, "no value and no approximation for group O-(NI)(H)"},
 		{"C/N=N\\C", Options{}, "cis azo nitrogen"},
 		{"CCN=O", Options{}, "no value and no approximation for group C-(NO)(C)(H)2 (also missing: NO-(C))"},

@@ -26,6 +26,8 @@ var resonanceRadicals = []string{
 	"[CH2]C#CC", "CC#C[CH]C", "[CH2]/C=C/C=C/C", "[CH2]C(=C)C=C", "C=CC(=O)[CH2]",
 	"[CH2]C1=CCCC1", "O=C1[CH]CCC1", "[CH2]C=N", "C=C[NH]", "[CH2]c1ccncc1",
 	"[O]C1=CC=CCC1", "c1ccc2c(c1)[CH]c1ccccc12", "[CH2]C=CC#C",
+	// thiyl ↔ thione (a terminal divalent S as an end of the shift)
+	"C=C[S]", "[S]c1ccccc1", "[S]C=CC=C", "CC(=S)[CH2]",
 }
 
 // respellKekule writes m as a random Kekulé SMILES: a random start atom and
@@ -197,6 +199,9 @@ func TestResonanceRepresentative(t *testing.T) {
 		{"C=C=[CH]", "[CH2]C#C"},
 		{"O=C1C=C[CH]C=C1", "[O]c1ccccc1"},
 		{"C=C[CH]C=C", "[CH2]C=CC=C"},
+		// thioformylmethyl is vinylthiyl (S• ↔ C=S), as [CH2]C=N is C=C[NH]
+		{"[CH2]C=S", "C=C[S]"},
+		{"S=C1C=C[C](C)C=C1", "[S]c1ccc(C)cc1"},
 	} {
 		a, b := estimate(t, c[0], Options{}), estimate(t, c[1], Options{})
 		assert.Equal(t, parse(t, c[1]).Canonical(), a.Form, c[0])
@@ -211,8 +216,10 @@ func TestResonanceRepresentative(t *testing.T) {
 	}
 	e := estimate(t, "[c]1ccccc1", Options{})
 	assert.Equal(t, 1, correctionCount(e, "HBI: phenyl"))
-	// a closed-shell molecule and a radical without conjugation have one structure
-	for _, s := range []string{"C=CC=C", "CC[CH2]", "c1ccccc1"} {
+	// a closed-shell molecule and a radical without conjugation have one
+	// structure; the electron moves neither through S nor onto a sulfur
+	// with other bonds (sulfoxide, thiophene ring, thiol)
+	for _, s := range []string{"C=CC=C", "CC[CH2]", "c1ccccc1", "C[S]", "[CH2]S(C)=O", "[CH2]SC=C", "C=C[SH]"} {
 		assert.Equal(t, "", estimate(t, s, Options{}).Form, s)
 	}
 }

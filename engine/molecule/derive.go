@@ -41,6 +41,30 @@ func (m *Molecule) WithHydrogenAdded(i int) (*Molecule, error) {
 	return m.derive(atoms, slices.Clone(m.Bonds)), nil
 }
 
+// WithHydrogenRemoved returns the molecule with one hydrogen of atom i
+// replaced by a radical electron (CCC with i = 2 → CC[CH2]), the inverse of
+// WithHydrogenAdded. It is an error when atom i carries no hydrogen.
+func (m *Molecule) WithHydrogenRemoved(i int) (*Molecule, error) {
+	if i < 0 || i >= len(m.Atoms) {
+		return nil, fmt.Errorf("remove hydrogen: atom %d out of range (%d atoms)", i, len(m.Atoms))
+	}
+	if m.Atoms[i].HCount == 0 {
+		return nil, fmt.Errorf("remove hydrogen: atom %d (%s) has no hydrogen", i, m.Atoms[i].Element)
+	}
+	atoms := slices.Clone(m.Atoms)
+	atoms[i].HCount--
+	atoms[i].Radical++
+	return m.derive(atoms, slices.Clone(m.Bonds)), nil
+}
+
+// ImplicitHydrogens reports whether the hydrogens of atom i were implied by
+// the SMILES (an atom written outside brackets takes the hydrogens its
+// ordinary valence leaves) rather than written in a bracket atom.
+func (m *Molecule) ImplicitHydrogens(i int) bool {
+	a := m.Atoms[i]
+	return a.HCount > 0 && a.Pos >= 0 && a.Pos < len(m.SMILES) && m.SMILES[a.Pos] != '['
+}
+
 // WithBondOrders returns a resonance structure of m: bond b gets order
 // orders[b] (1, 2 or 3) and atom i gets radicals[i] radical electrons, all
 // other bonds and atoms unchanged. Every atom must keep its valence (bond
@@ -150,45 +174,70 @@ func (m *Molecule) WithCharges(charges map[int]int, orders map[int]int) (*Molecu
 	return m.derive(atoms, bonds), nil
 }
 
-// NeutralNO returns m with every charge-separated N⁺–O⁻ unit — a
-// non-aromatic N⁺ single-bonded to a terminal O⁻ (no H, no radical, no
-// isotope label) that also has a double bond to a terminal O — written as
-// N=O: the one structure for the
-// charge-separated and the pentavalent spellings of nitro, nitrate and
-// N-oxide groups (C[N+](=O)[O-] and CN(=O)=O). m itself is returned when it
+// NeutralOxo returns m with its charge-separated oxo units written with
+// double bonds, atom indices unchanged:
+//
+//   - a nitro, nitrate or N-oxide N⁺–O⁻ unit — a non-aromatic N⁺
+//     single-bonded to a terminal O⁻ (no H, no radical, no isotope label)
+//     that also has a double bond to a terminal O — as N=O: the one
+//     structure for the charge-separated and the pentavalent spellings
+//     (C[N+](=O)[O-] and CN(=O)=O);
+//   - a sulfoxide or sulfone S⁺–O⁻ unit — a non-aromatic S of charge +1 or
+//     +2 with as many single-bonded terminal O⁻ — as S=O: C[S+](C)[O-] is
+//     CS(C)=O and C[S+2]([O-])([O-])C is CS(C)(=O)=O, the structures the
+//     SO and SO2 groups describe (the charge-separated form is how many
+//     databases and toolkits write them).
+//
+// An amine oxide or nitrone keeps its charges (and is refused as a
+// charge-separated structure no group names). m itself is returned when it
 // has no such unit or when the rewritten structure would break a valence
-// rule. Atom indices are unchanged.
-func (m *Molecule) NeutralNO() *Molecule {
+// rule.
+func (m *Molecule) NeutralOxo() *Molecule {
 	var charges, orders map[int]int
+	set := func(i, j, b int) {
+		if charges == nil {
+			charges, orders = map[int]int{}, map[int]int{}
+		}
+		charges[j], orders[b] = 0, 2
+	}
 	for i, a := range m.Atoms {
-		if a.Element != "N" || a.Charge != 1 || a.Aromatic {
+		if a.Aromatic {
 			continue
 		}
-		// Only nitro/nitrate-type units, where the N⁺ already has a double
-		// bond to a terminal O: an amine oxide or nitrone keeps its charges
-		// (and is refused as a charge-separated structure no group names).
-		oxo := false
-		for _, b := range m.Adj[i] {
-			j := m.Other(b, i)
-			if m.Atoms[j].Element == "O" && m.Bonds[b].Order == 2 && len(m.Adj[j]) == 1 && m.Atoms[j].Charge == 0 {
-				oxo = true
+		var want int // O⁻ partners to take
+		switch {
+		case a.Element == "N" && a.Charge == 1:
+			// Only nitro/nitrate-type units, where the N⁺ already has a
+			// double bond to a terminal O.
+			oxo := false
+			for _, b := range m.Adj[i] {
+				j := m.Other(b, i)
+				if m.Atoms[j].Element == "O" && m.Bonds[b].Order == 2 && len(m.Adj[j]) == 1 && m.Atoms[j].Charge == 0 {
+					oxo = true
+				}
 			}
+			if oxo {
+				want = 1
+			}
+		case a.Element == "S" && (a.Charge == 1 || a.Charge == 2):
+			want = a.Charge
 		}
-		if !oxo {
-			continue
-		}
+		var partners [][2]int // (atom, bond)
 		for _, b := range m.Adj[i] {
 			j := m.Other(b, i)
 			o := m.Atoms[j]
 			if o.Element != "O" || o.Charge != -1 || m.Bonds[b].Order != 1 || len(m.Adj[j]) != 1 || o.HCount != 0 || o.Radical != 0 || o.Isotope != 0 {
 				continue
 			}
-			if charges == nil {
-				charges, orders = map[int]int{}, map[int]int{}
-			}
-			charges[i], charges[j], orders[b] = 0, 0, 2
-			break
+			partners = append(partners, [2]int{j, b})
 		}
+		if want == 0 || len(partners) < want || (a.Element == "S" && len(partners) != want) {
+			continue // a sulfur with O⁻ left over is an ion or an ylide: kept
+		}
+		for _, p := range partners[:want] {
+			set(i, p[0], p[1])
+		}
+		charges[i] = 0
 	}
 	if charges == nil {
 		return m

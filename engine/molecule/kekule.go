@@ -1,5 +1,10 @@
 package molecule
 
+import (
+	"fmt"
+	"slices"
+)
+
 // This file turns the parsed token graph into a valence-complete Kekulé graph:
 // kekulization of aromatic input, implicit hydrogens, radicals and folding of
 // explicit hydrogen atoms.
@@ -126,10 +131,54 @@ func (p *parser) kekulize() error {
 		if need[i] && match[i] < 0 {
 			// report at the first atom of this aromatic system
 			first := p.aromaticSystemFirst(i)
-			return errAt(p.atoms[first].Pos, "aromatic ring cannot be kekulized")
+			return errAt(p.atoms[first].Pos, "aromatic ring cannot be kekulized%s", p.kekuleHint(first))
 		}
 	}
 	return nil
+}
+
+// kekuleHint returns advice for an aromatic system that cannot be
+// kekulized (first is one of its atoms), "" for none: the usual cause is a
+// pyrrole-type n written without its H (c1cc[n]c1, c1ccnc1 for pyrrole),
+// which also is how the pyrrolyl radical is often attempted.
+func (p *parser) kekuleHint(first int) string {
+	for _, v := range p.aromaticSystem(first) {
+		a := p.atoms[v]
+		if a.Element != "N" || !a.Aromatic || a.HCount != 0 || a.Charge != 0 || a.Isotope != 0 {
+			continue
+		}
+		deg := 0
+		for _, b := range p.bonds {
+			if b.A == v || b.B == v {
+				deg++
+			}
+		}
+		if deg == 2 {
+			return ": a pyrrole-type aromatic n needs its H ([nH], as in c1cc[nH]c1) or a substituent; " +
+				"for a radical on that N write the ring in Kekulé form (pyrrolyl: [N]1C=CC=C1)"
+		}
+	}
+	return ""
+}
+
+// aromaticSystem returns the atoms connected to i through bonds written
+// aromatic, i included.
+func (p *parser) aromaticSystem(i int) []int {
+	seen := map[int]bool{i: true}
+	out := []int{i}
+	for q := 0; q < len(out); q++ {
+		v := out[q]
+		for k, b := range p.bonds {
+			if !p.aromIn[k] || (b.A != v && b.B != v) {
+				continue
+			}
+			if w := b.A + b.B - v; !seen[w] {
+				seen[w] = true
+				out = append(out, w)
+			}
+		}
+	}
+	return out
 }
 
 // aromaticSystemFirst returns the smallest atom index connected to i through
@@ -286,7 +335,7 @@ func (p *parser) assignHydrogens() error {
 			}
 			v, ok := lowestValence(vs, sums[i])
 			if !ok {
-				return errAt(a.Pos, "%s with valence %d", e.Name, sums[i])
+				return errAt(a.Pos, "%s with valence %d%s", e.Name, sums[i], p.valenceHint(i, e, sums[i]))
 			}
 			a.HCount = v - sums[i]
 			continue
@@ -298,11 +347,34 @@ func (p *parser) assignHydrogens() error {
 		total := sums[i] + a.HCount
 		v, ok := lowestValence(vs, total)
 		if !ok {
+			if a.Charge != 0 {
+				return errAt(a.Pos, "%s with charge %+d and valence %d", e.Name, a.Charge, total)
+			}
 			return errAt(a.Pos, "%s with valence %d", e.Name, total)
 		}
 		a.Radical = v - total
 	}
 	return nil
+}
+
+// valenceHint returns advice for organic-subset atom i (element e) written
+// with more bonds (sum) than its neutral valences allow, "" for none: C#O is
+// carbon monoxide, written [C-]#[O+] or [C]=O; otherwise, when the bonds
+// fit the atom as a cation, an atom outside brackets carries no charge and
+// a charged one is written in brackets.
+func (p *parser) valenceHint(i int, e element, sum int) string {
+	if p.atoms[i].Element == "O" && sum == 3 {
+		for _, b := range p.bonds {
+			if (b.A == i || b.B == i) && b.Order == 3 && p.atoms[b.A+b.B-i].Element == "C" && len(p.atoms) == 2 {
+				return " (carbon monoxide is written [C-]#[O+] or [C]=O)"
+			}
+		}
+	}
+	// an onium atom (O⁺ with three bonds); a five-bonded C is no anion
+	if vs, ok := valences(e, 1); ok && slices.Contains(vs, sum) {
+		return fmt.Sprintf(" (an atom outside brackets carries no charge: if it is charged, write it in brackets, as [%s+])", p.atoms[i].Element)
+	}
+	return ""
 }
 
 // foldable reports whether atom i is a plain explicit hydrogen ([H], no

@@ -506,6 +506,9 @@ func (p *parser) readBracket(start int) (Atom, int, error) {
 			sym = s[i : i+2]
 		} else if strings.IndexByte("bcnops", c) >= 0 {
 			sym = string(c)
+		} else if c == 'e' && (i+1 == end || s[i+1] == '-' || s[i+1] == '+') {
+			// [e-], the electron of ion mechanisms, is not an element
+			return a, 0, errAt(i, `"e" is an electron, not an element: electrons and ions are not supported (kiln estimates neutral molecules and radicals)`)
 		} else {
 			return a, 0, errAt(i, "unknown aromatic element %q", string(c))
 		}

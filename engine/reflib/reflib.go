@@ -110,8 +110,8 @@ func key(canonical string, mult int) string { return canonical + "|" + strconv.I
 // the canonical form, so [2H][2H] and [H+] find no protium entry.
 func structureKey(m *molecule.Molecule) string {
 	// Charge-separated and pentavalent spellings of an N–O unit are one
-	// structure (molecule.NeutralNO), as for the estimator.
-	m = m.NeutralNO()
+	// structure (molecule.NeutralOxo), as for the estimator.
+	m = m.NeutralOxo()
 	for _, a := range m.Atoms {
 		if a.Element != "H" || a.Isotope != 0 || a.Charge != 0 {
 			return m.Canonical()
