@@ -1,6 +1,7 @@
 package reflib
 
-// Nitrogen, sulfur and halogen species, ketene, ketenyl and ethynyl.
+// Nitrogen, sulfur and halogen species, ketene, ketenyl, ethynyl and carbon
+// suboxide.
 //
 // Two kinds of published source are used, each entered coefficient by
 // coefficient:
