@@ -123,3 +123,37 @@ func TestEstimateLibraryHalogens(t *testing.T) {
 		assert.NotContains(t, out, "cannot estimate", tc.smiles)
 	}
 }
+
+// TestEstimateLibraryHaloethylenes: the haloacetylenes, their ethynyl
+// radicals and carbon suboxide, which kiln refused (no group Ct-(F),
+// Ct-(Cl), Cd-(F)(Cl); no group for a cumulated C=C=C=O chain), and
+// trifluoroethylene and the trifluorovinyl radical, which it estimated with
+// flags, come from the reference library with the NASA/TP-2002-211556
+// ΔHf°298 and no estimate flag. The trichlorovinyl radical, whose record
+// is not entered, stays a group estimate.
+func TestEstimateLibraryHaloethylenes(t *testing.T) {
+	for _, tc := range []struct{ smiles, name, hf string }{
+		{"FC=C(F)F", "C2HF3", "(-491.0 kJ/mol)"},
+		{"FC(F)=C(F)Cl", "C2F3Cl", "(-515.2 kJ/mol)"},
+		{"FC(Cl)=C(Cl)Cl", "C2FCl3", "(-166.0 kJ/mol)"},
+		{"C#CF", "C2HF", "(41.7 kJ/mol)"},
+		{"FC#CF", "C2F2", "(-144.7 kJ/mol)"},
+		{"C#CCl", "C2HCl", "(226.4 kJ/mol)"},
+		{"ClC#CCl", "C2Cl2", "(226.6 kJ/mol)"},
+		{"FC#[C]", "C2F", "(353.8 kJ/mol)"},
+		{"ClC#[C]", "C2Cl", "(534.1 kJ/mol)"},
+		{"F[C]=C(F)F", "C2F3", "(-228.2 kJ/mol)"},
+		{"O=C=C=C=O", "C3O2", "(-93.6 kJ/mol)"},
+	} {
+		code, out, stderr := runKiln(t, "estimate", tc.smiles)
+		require.Equal(t, exitOK, code, "%s: %s%s", tc.smiles, out, stderr)
+		assert.Contains(t, out, "reference library: "+tc.name+" (tabulated data", tc.smiles)
+		assert.Contains(t, out, tc.hf, tc.smiles)
+		assert.NotContains(t, out, "cannot estimate", tc.smiles)
+		assert.NotContains(t, out, "approximation", tc.smiles)
+	}
+	code, out, stderr := runKiln(t, "estimate", "Cl[C]=C(Cl)Cl")
+	require.Equal(t, exitOK, code, stderr)
+	assert.NotContains(t, out, "reference library")
+	assert.Contains(t, out, "HBI: vinylic")
+}

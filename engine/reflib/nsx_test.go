@@ -19,9 +19,11 @@ import (
 // a mistyped coefficient: the low block with b1 must give the published
 // ΔHf°298 at 298.15 K (within 5 J/mol + 10 ppm: the compilation's gas constant,
 // 8.31451 J/(mol K), differs from CODATA 2018 by 6 ppm), and
-// the two blocks must meet at 1000 K in Cp, H and S (within 0.05 % of Cp,
-// 5 J/mol of H, 0.01 J/(mol K) of S: the published blocks are constrained to
-// be continuous there and are printed to ten significant digits).
+// the two blocks must meet at 1000 K in Cp, H and S (within 1 ppm of Cp,
+// 0.05 J/mol of H, 10⁻⁴ J/(mol K) of S: the published blocks are constrained
+// to be continuous there and are printed to ten significant digits; every
+// entry meets within 10⁻⁸ of Cp. A looser 0.05 % let through a high-range a7
+// entered with the exponent one too small, which moves Cp(1000 K) by 10⁻⁴.)
 func TestNASA9Entered(t *testing.T) {
 	n := 0
 	for _, e := range nsxEntries {
@@ -31,9 +33,9 @@ func TestNASA9Entered(t *testing.T) {
 		n++
 		assert.InDelta(t, e.hf298, e.n9.h(298.15), 5+1e-5*math.Abs(e.hf298), "%s: ΔHf°298 implied by the low block and b1", e.name)
 		lo, hi := nasa9{lo: e.n9.lo, hi: e.n9.lo}, nasa9{lo: e.n9.hi, hi: e.n9.hi}
-		assert.InEpsilon(t, lo.cp(1000), hi.cp(1000), 5e-4, "%s: Cp at 1000 K", e.name)
-		assert.InDelta(t, lo.h(1000), hi.h(1000), 5, "%s: H at 1000 K", e.name)
-		assert.InDelta(t, lo.s(1000), hi.s(1000), 0.01, "%s: S at 1000 K", e.name)
+		assert.InEpsilon(t, lo.cp(1000), hi.cp(1000), 1e-6, "%s: Cp at 1000 K", e.name)
+		assert.InDelta(t, lo.h(1000), hi.h(1000), 0.05, "%s: H at 1000 K", e.name)
+		assert.InDelta(t, lo.s(1000), hi.s(1000), 1e-4, "%s: S at 1000 K", e.name)
 	}
 	assert.Greater(t, n, 20)
 }
@@ -186,6 +188,14 @@ func TestLookupNSX(t *testing.T) {
 		{"BrCCl", 0, "CH2ClBr"}, {"BrC(F)Cl", 0, "CHFClBr"}, {"BrC(Br)(F)F", 0, "CF2Br2"}, {"BrC(Cl)(F)F", 0, "CF2ClBr"},
 		{"[C](Cl)(Cl)Cl", 0, "CCl3"}, {"[C](F)(F)F", 0, "CF3"}, {"Cl[C](F)Cl", 0, "CFCl2"}, {"[CH](F)F", 0, "CHF2"},
 		{"ClCF", 0, "CH2FCl"}, {"FC=O", 0, "HCOF"}, {"ClC=O", 0, "HCOCl"}, {"ClC(F)=O", 0, "COFCl"},
+		{"FC(F)=CF", 0, "C2HF3"}, {"ClC(F)=C(F)F", 0, "C2F3Cl"}, {"ClC(Cl)=C(F)Cl", 0, "C2FCl3"},
+		{"FC#C", 0, "C2HF"}, {"FC#CF", 0, "C2F2"}, {"ClC#C", 0, "C2HCl"}, {"ClC#CCl", 0, "C2Cl2"},
+		{"[C]#CF", 0, "C2F"}, {"[C]#CCl", 2, "C2Cl"}, {"FC(F)=[C]F", 0, "C2F3"},
+		{"C(=C=O)=C=O", 0, "C3O2"}, {"[C]#CF", 4, ""}, {"FC(F)=[C]F", 4, ""},
+		{"ClC(Cl)=[C]Cl", 0, ""}, // C2Cl3: the compilation's record is not entered (data_nsx.go)
+		// equilibrium mixtures of isomers and training rows of nsx.tsv are not entries
+		{"FC(F)=C", 0, ""}, {"ClC=CCl", 0, ""}, {"FC(F)=C(Cl)Cl", 0, ""}, {"FC(F)=C(F)F", 0, ""},
+		{"ClC(Cl)=C(Cl)Cl", 0, ""}, {"ClC=C(Cl)Cl", 0, ""}, {"C=CF", 0, ""}, {"C=CCl", 0, ""},
 		{"[CH2]Br", 0, ""}, {"Br[CH]Br", 0, ""}, {"OBr", 0, ""}, {"BrC(Br)Br", 3, ""},
 		{"CCl", 3, ""}, {"CCCl", 0, ""},
 	}

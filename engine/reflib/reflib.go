@@ -5,8 +5,9 @@
 // published source of every number. Species are found by molecular structure
 // (canonical SMILES; see structureKey) and spin multiplicity. It does no I/O.
 //
-// data_nsx.go adds nitrogen, sulfur and halogen (F, Cl, Br) species, ketene, ketenyl and
-// ethynyl from NASA/TP-2002-211556 (NASA-9, refitted) and GRI-Mech 3.0.
+// data_nsx.go adds nitrogen, sulfur and halogen (F, Cl, Br) species (among them
+// haloethylenes, haloacetylenes and their radicals), ketene, ketenyl, ethynyl and
+// carbon suboxide from NASA/TP-2002-211556 (NASA-9, refitted) and GRI-Mech 3.0.
 //
 // How the polynomials are built (see data.go): most entries store published
 // NASA-7 coefficient blocks whose a6, a7 are recomputed from the stored
