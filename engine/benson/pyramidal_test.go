@@ -35,9 +35,19 @@ func TestPyramidalRadicalEntropy(t *testing.T) {
 	// whose increment is that of an alkyl-like site (α-hydroxy here).
 	for _, s := range []string{"F[C](F)F", "C[C](F)F", "O[C](F)F", "FC(F)(F)[C](F)F"} {
 		e, err := Estimate(parse(t, s), Options{})
-		if err != nil {
-			continue // parent group not in the tables
-		}
+		require.NoError(t, err, s)
 		assert.Zero(t, correctionCount(e, "radical site: inversion and internal-rotor changes"), s)
+	}
+	// A CF2• centre conjugated with a double bond or a benzene ring is
+	// planar with it (allyl- and benzyl-like): not pyramidal, and it takes
+	// the site change of its allylic or benzylic parent site.
+	for _, s := range []string{"C=C[C](F)F", "F[C](F)c1ccccc1"} {
+		m := parse(t, s)
+		for i := range m.Atoms {
+			assert.False(t, m.PyramidalRadical(i), "%s atom %d", s, i)
+		}
+		e, err := Estimate(m, Options{})
+		require.NoError(t, err, s)
+		assert.Equal(t, 1, correctionCount(e, "radical site: inversion and internal-rotor changes"), s)
 	}
 }

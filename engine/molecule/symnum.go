@@ -404,8 +404,13 @@ func (m *Molecule) PyramidalRadical(i int) bool {
 	}
 	f := 0
 	for _, b := range m.Adj[i] {
-		if m.Atoms[m.Other(b, i)].Element == "F" {
+		n := m.Other(b, i)
+		if m.Atoms[n].Element == "F" {
 			f++
+			continue
+		}
+		if m.Atoms[n].Aromatic || !m.allSingle(n) {
+			return false // conjugated with a π bond (allylic, benzylic, α-carbonyl): planar with it
 		}
 	}
 	return f >= minPyramidalFluorines
