@@ -438,7 +438,7 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 			est.Missing = append(est.Missing, Missing{
 				Group:         "HBI dS, dCp: " + site,
 				Approximation: siteModel,
-				Note:          "no published entropy and heat-capacity increment at hand: the removed H's stretch and bends are taken out as harmonic oscillators, and the radical centre's inversion mode and changed internal rotors are added",
+				Note:          "no published entropy and heat-capacity increment at hand: the removed H's stretch and bends are taken out as harmonic oscillators, and at a planar centre the radical centre's inversion mode and changed internal rotors are added (a pyramidal CF2•-type centre keeps its parent's modes)",
 			})
 		}
 	}

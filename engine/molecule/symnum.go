@@ -60,7 +60,9 @@ const maxSeeds = 64
 //     tetrahedral atom whose singly occupied orbital is the fourth ligand
 //     (CF3• σ 3, CHF2• σ 1);
 //     - an acyclic double bond keeps cis partners cis (an end with two alike
-//     ligands halves the count instead); an allene keeps its handedness;
+//     ligands halves the count instead; the lone pair of an imine N and the
+//     singly occupied orbital of a bent vinyl-type radical carbon count as
+//     a ligand of its end); an allene keeps its handedness;
 //     cumulene chains generalise both: with an odd number of double bonds
 //     the ends are coplanar (cis/trans, butatriene D2h), with an even
 //     number perpendicular (handedness, pentatetraene D2d);
@@ -183,6 +185,7 @@ const (
 	colOut    = -5 // the outward side of a three-connected cage atom
 	colParent = -4 // the bond to the parent fragment (unique)
 	colLP     = -3 // a lone pair counted as a ligand
+	colSOMO   = -6 // the singly occupied σ orbital of a bent vinyl-type radical centre
 	colH      = -2 // an implicit hydrogen
 )
 
@@ -1132,6 +1135,14 @@ func (sc *sigmaCalc) endPositions(x, y int) []int {
 	a := m.Atoms[x]
 	if (a.Element == "N" || a.Element == "P") && len(m.Adj[x])+a.HCount == 2 && a.Radical == 0 && a.Charge == 0 {
 		out = append(out, -(colLP + 10))
+	}
+	if a.Element == "C" && a.Radical == 1 && a.Charge == 0 && !a.Aromatic && len(m.Adj[x])+a.HCount == 2 {
+		// A vinyl-type σ radical (R–C•=CR2) is bent at the radical carbon
+		// (vinyl Cs, σ 1; common practice, as NIST-JANAF's C2H3): its
+		// singly occupied orbital takes the place of a third ligand, as an
+		// imine N's lone pair does, so the two partners on the other end
+		// are cis and trans to it.
+		out = append(out, -(colSOMO + 10))
 	}
 	return out
 }

@@ -284,3 +284,24 @@ func TestPyramidalRadicalSigma(t *testing.T) {
 		assert.Equal(t, 1, m.OpticalIsomers(), "%s: a radical centre is no stereo unit", c.smiles)
 	}
 }
+
+// A vinyl-type σ radical is bent at the radical carbon: the partners on
+// the other end are cis and trans to its singly occupied orbital (vinyl Cs,
+// σ 1, as NIST-JANAF's C2H3), while a π radical next to a double bond
+// (allyl, propargyl) stays a planar delocalised unit and an aryl σ radical
+// keeps its ring's symmetry.
+func TestVinylRadicalSigma(t *testing.T) {
+	for _, c := range []struct {
+		smiles string
+		sigma  int64
+	}{
+		{"C=[CH]", 1}, {"C=[C]C", 3}, {"ClC(Cl)=[C]Cl", 1}, {"FC(F)=[C]F", 1}, {"CC(C)=[CH]", 9},
+		{"C=C[CH2]", 2}, {"C#C[CH2]", 2}, {"c1ccc[c]c1", 2}, {"C=C", 4}, {"C=N", 1},
+	} {
+		m, err := ParseSMILES(c.smiles)
+		require.NoError(t, err, c.smiles)
+		s, err := m.SymmetryNumber()
+		require.NoError(t, err, c.smiles)
+		assert.Equal(t, c.sigma, s.Int64(), c.smiles)
+	}
+}
