@@ -24,7 +24,7 @@ const (
 	dimethylanilineRef    = 24.1   // Pedley et al. 1986, uncertain
 	thiazoleRef           = 40.0   // NIST WebBook, unsure
 	triazineRef           = 54.0   // 1,3,5-triazine, NIST WebBook (225.9 kJ/mol)
-	difluoroethyleneRef   = -80.4  // CH2=CF2, NASA/TP-2002-211556 C2H2F2 header (published; not from memory)
+	difluoroethyleneRef   = -80.4  // CH2=CF2, NASA/TP-2002-211556 C2H2F2 header (published, Gurvich 1991; the record is labelled an equilibrium mixture of the difluoroethylene isomers)
 	// D(CF3CH2–H), Luo (from memory).
 	trifluoroethylCHRef = 106.7
 )
