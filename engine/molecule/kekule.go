@@ -154,7 +154,8 @@ func (p *parser) kekuleHint(first int) string {
 			}
 		}
 		if deg == 2 {
-			return ": a pyrrole-type aromatic n needs its H ([nH], as in c1cc[nH]c1) or a substituent; " +
+			return ": a pyrrole-type aromatic n needs its H ([nH], as in c1cc[nH]c1) or a substituent " +
+				"(a pyridine-type n needs none: then look at the ring's other atoms); " +
 				"for a radical on that N write the ring in Kekulé form (pyrrolyl: [N]1C=CC=C1)"
 		}
 	}
