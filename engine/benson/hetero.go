@@ -95,13 +95,14 @@ func (g *graph) heteroCarbonType(i int) (string, bool) {
 // other than oxygen: halogen (any F, Cl, Br, I), else sulfur, else nitrogen;
 // carbonyl for a C/H/O ketene; "" for other C/H/O molecules.
 func heteroClass(m *molecule.Molecule) string {
-	var n, s, x bool
-	for _, a := range m.Atoms {
+	var n, s, so, x bool
+	for i, a := range m.Atoms {
 		switch a.Element {
 		case "F", "Cl", "Br", "I":
 			x = true
 		case "S":
 			s = true
+			so = so || sulfurOxo(m, i)
 		case "N":
 			n = true
 		}
@@ -109,6 +110,11 @@ func heteroClass(m *molecule.Molecule) string {
 	switch {
 	case x:
 		return "halogen"
+	case so:
+		// Sulfoxides and sulfones: their S=O groups (Benson's, each checked
+		// on one or two molecules) err by more than the thiols and sulfides
+		// that set the sulfur class's error, so they are a class of their own.
+		return "sulfur oxide"
 	case s:
 		return "sulfur"
 	case n:
@@ -117,6 +123,16 @@ func heteroClass(m *molecule.Molecule) string {
 		return "carbonyl" // a ketene is a carbonyl compound, not an ether
 	}
 	return ""
+}
+
+// sulfurOxo reports whether atom i (an S) has a double bond to an oxygen.
+func sulfurOxo(m *molecule.Molecule, i int) bool {
+	for _, b := range m.Adj[i] {
+		if bd := m.Bonds[b]; bd.Order == 2 && !bd.Aromatic && m.Atoms[m.Other(b, i)].Element == "O" {
+			return true
+		}
+	}
+	return false
 }
 
 // ketene reports whether m has a carbon double-bonded to both O and C.
