@@ -192,7 +192,7 @@ func TestImineRadicalSites(t *testing.T) {
 		want := maeToSigma * classError(est.Class)
 		assert.GreaterOrEqual(t, est.Uncertainty, 4184*math.Sqrt(want*want+widenStabiliser*widenStabiliser)-1e-6, smi)
 	}
-	for smi, want := range map[string]string{"CC(C)=[N]": "iminyl", "C/N=[N]": "NA-(H)", "CC/N=[N]": "NA-(H)"} {
+	for smi, want := range map[string]string{"CC(C)=[N]": "iminyl", "C/N=[N]": "diazenyl", "CC/N=[N]": "diazenyl"} {
 		_, err := Estimate(parse(t, smi), Options{})
 		if assert.Error(t, err, smi) {
 			assert.Contains(t, err.Error(), want, smi)

@@ -223,7 +223,15 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	forms, capped := resonanceForms(m, maxResonanceForms)
 	if len(forms) == 1 {
-		return estimateForm(m, opts)
+		est, err := estimateForm(m, opts)
+		var mg *MissingGroupError
+		if errors.As(err, &mg) && !groupsWouldHelp(m, mg, opts) {
+			// The parent's missing group is no route: with it the radical
+			// would still be refused (a site without an increment), and
+			// that reason is the one to give.
+			_, err = estimateForm(m, withPlaceholders(opts, mg))
+		}
+		return est, err
 	}
 	type cand struct {
 		m     *molecule.Molecule
@@ -256,7 +264,7 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 		return strings.Compare(x.canon, y.canon)
 	})
 	var firstErr error
-	firstForm := ""
+	firstForm, firstMol := "", (*molecule.Molecule)(nil)
 	for lo := 0; lo < len(cands); {
 		hi := lo + 1
 		for hi < len(cands) && cands[hi].lewis == cands[lo].lewis && cands[hi].arom == cands[lo].arom {
@@ -272,7 +280,7 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 				// radical on a nitro O, an imine N of a resonance form).
 				var mg *MissingGroupError
 				if firstErr == nil || (errors.As(err, &mg) && !errors.As(firstErr, &mg)) {
-					firstErr, firstForm = err, c.canon
+					firstErr, firstForm, firstMol = err, c.canon, c.m
 				}
 				continue
 			}
@@ -317,15 +325,19 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 		}
 		lo = hi
 	}
-	return nil, explainForm(m, firstErr, firstForm, opts)
+	return nil, explainForm(m, firstErr, firstForm, firstMol, opts)
 }
 
 // explainForm says, when err is a group missing from resonance structure
-// form of m while m as written is refused for another reason, which
-// structure needs the group and why the one as written is refused: a user
-// who wrote an N-centred amidyl radical is otherwise told only of a group
-// of its O-centred structure.
-func explainForm(m *molecule.Molecule, err error, form string, opts Options) error {
+// form (the molecule fm) of m while m as written is refused for another
+// reason, which structure needs the group and why the one as written is
+// refused: a user who wrote an N-centred amidyl radical is otherwise told
+// only of a group of its O-centred structure. When supplying the missing
+// groups would not make form estimable either (it is then refused for a
+// reason no group statement removes, such as a radical site without an
+// increment), the group is no route, and the refusal of the structure as
+// written is returned instead.
+func explainForm(m *molecule.Molecule, err error, form string, fm *molecule.Molecule, opts Options) error {
 	var mg *MissingGroupError
 	if !errors.As(err, &mg) || form == m.Canonical() {
 		return err
@@ -335,9 +347,50 @@ func explainForm(m *molecule.Molecule, err error, form string, opts Options) err
 	if werr == nil || errors.As(werr, &wmg) {
 		return err
 	}
+	if fm != nil && !groupsWouldHelp(fm, mg, opts) {
+		return werr
+	}
 	out := *mg
 	out.Form, out.Written = form, strings.TrimPrefix(werr.Error(), "benson: ")
 	return &out
+}
+
+// groupsWouldHelp reports whether fm, refused for the groups of mg, would
+// be estimated once they (and any further groups it turns out to lack) had
+// values: it is estimated with placeholder values for them, which only
+// decide whether a refusal other than a missing group remains.
+func groupsWouldHelp(fm *molecule.Molecule, mg *MissingGroupError, opts Options) bool {
+	o := withPlaceholders(opts, mg)
+	// Each round supplies the next groups the form lacks; a form lacks few
+	// (maxPlaceholderRounds bounds the work), and a refusal that remains
+	// once none is missing is one no group statement removes.
+	for range maxPlaceholderRounds {
+		_, err := estimateForm(fm, o)
+		var again *MissingGroupError
+		if !errors.As(err, &again) {
+			return err == nil
+		}
+		o = withPlaceholders(o, again)
+	}
+	return true // still lacking groups: supplying them is the route to try
+}
+
+// maxPlaceholderRounds bounds the rounds of groupsWouldHelp.
+const maxPlaceholderRounds = 6
+
+// withPlaceholders returns opts with placeholder values for the groups mg
+// names (used only to see what refusal remains without them; never shown).
+func withPlaceholders(opts Options, mg *MissingGroupError) Options {
+	o := opts
+	o.UserGroups = slices.Clone(opts.UserGroups)
+	for _, name := range append([]string{mg.Group}, mg.Also...) {
+		g := GroupValue{Name: name, S298: 10 * calorie, Source: "placeholder"}
+		for k := range g.Cp {
+			g.Cp[k] = 5 * calorie
+		}
+		o.UserGroups = append(o.UserGroups, g)
+	}
+	return o
 }
 
 // hfTie is the ΔHf° difference (J/mol) below which two resonance

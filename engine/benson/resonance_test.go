@@ -1,6 +1,7 @@
 package benson
 
 import (
+	"errors"
 	"fmt"
 	"math"
 	"math/rand/v2"
@@ -330,20 +331,37 @@ func TestResonanceRefusalNamesGroup(t *testing.T) {
 	}
 }
 
-// A group missing from another resonance structure is reported with that
-// structure and with the reason the structure as written is refused; when
-// the structure as written itself lacks the group, nothing is added.
-func TestResonanceRefusalNamesForm(t *testing.T) {
-	_, err := Estimate(parse(t, "CC(=O)[NH]"), Options{})
+// A radical whose missing parent group would not make it estimable (the
+// site has no increment in any of its structures: amidyl, aminoxyl,
+// oxyl-on-S, perthiyl, diazenyl) is refused for the site, not sent to
+// supply the group; where the group is a route (a vinyl radical with a
+// nitro group), the group is named.
+func TestRefusalNamesSiteWhenGroupIsNoRoute(t *testing.T) {
+	for smi, site := range map[string]string{
+		"CC(=O)[NH]": "amidyl", "[O]N(C)C": "aminoxyl", "CS[O]": "oxyl bonded to S",
+		"CS[S]": "perthiyl", "O[N]O": "oxyaminyl",
+	} {
+		_, err := Estimate(parse(t, smi), Options{})
+		var mg *MissingGroupError
+		assert.False(t, errors.As(err, &mg), "%s: %v", smi, err)
+		assert.ErrorContains(t, err, "radical site of type "+site, smi)
+	}
+	_, err := Estimate(parse(t, "C=[C][N+](=O)[O-]"), Options{})
 	var mg *MissingGroupError
 	require.ErrorAs(t, err, &mg)
-	assert.Equal(t, "O-(CdN)(H)", mg.Group)
-	assert.NotEmpty(t, mg.Form)
-	assert.Contains(t, mg.Written, "amidyl")
-	assert.Contains(t, err.Error(), "needed by the resonance structure "+mg.Form+"; the structure as written is refused: no hydrogen-bond increment")
-
-	_, err = Estimate(parse(t, "C=[C][N+](=O)[O-]"), Options{})
-	require.ErrorAs(t, err, &mg)
+	assert.Equal(t, "Cd-(NO2)(H)", mg.Group)
 	assert.Empty(t, mg.Form)
-	assert.NotContains(t, err.Error(), "resonance structure")
+}
+
+// Where the group is a route through another resonance structure (C=C[N]N:
+// the N• site as written has no increment, the C-centred structure
+// lacks only groups), the refusal names the group, the structure that needs
+// it and why the structure as written is refused.
+func TestResonanceRefusalNamesForm(t *testing.T) {
+	_, err := Estimate(parse(t, "C=C[N]N"), Options{})
+	var mg *MissingGroupError
+	require.ErrorAs(t, err, &mg)
+	assert.NotEmpty(t, mg.Form)
+	assert.Contains(t, mg.Written, "radical site of type")
+	assert.Contains(t, err.Error(), "needed by the resonance structure "+mg.Form+"; the structure as written is refused: no hydrogen-bond increment")
 }
