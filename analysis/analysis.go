@@ -153,6 +153,9 @@ type Estimate struct {
 	Hf298, S298   float64    // J/mol, J/(mol K)
 	Cp            [7]float64 // J/(mol K) at benson.StdTemps
 	Uncertainty   float64    // J/mol
+	// Multiplicity is the spin multiplicity 2S+1 of the data: the library
+	// entry's ground state, or the estimate's.
+	Multiplicity int
 	// The NASA-7 polynomial comes from NASA7(), the model for reaction
 	// thermochemistry from Thermo().
 	libPoly    nasa.NASA7

@@ -147,6 +147,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 			LibrarySource: sp.Source,
 			Hf298:         sp.Hf298,
 			S298:          sp.S298,
+			Multiplicity:  sp.Multiplicity,
 			libPoly:       sp.Poly,
 		}
 		for i, T := range benson.StdTemps {
@@ -196,7 +197,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 		return nil, err
 	}
 	e := &Estimate{Group: g, Hf298: g.Hf298, S298: g.S298, Cp: g.Cp, Uncertainty: g.Uncertainty,
-		fit: &fitResult{}, tMid: o.TMid, tHigh: o.THigh}
+		Multiplicity: g.Multiplicity, fit: &fitResult{}, tMid: o.TMid, tHigh: o.THigh}
 	nAtoms, linear, rotors := shape(m)
 	e.cp0, e.cpInf = nasa.ClassicalLimits(nAtoms, linear, rotors)
 	for _, f := range o.userFlags {

@@ -31,8 +31,9 @@ func TestEstimateJSONContract(t *testing.T) {
 	require.Len(t, arr, 1)
 	o := arr[0]
 	assert.Equal(t, []string{"corrections", "cp_j_mol_k", "error", "formula", "groups", "hf298_kj_mol", "input", "missing_groups",
-		"molar_mass_g_mol", "optical_isomers", "s298_j_mol_k", "symmetry_number", "uncertainty_hf298_kj_mol"}, keysOf(o))
+		"molar_mass_g_mol", "multiplicity", "optical_isomers", "s298_j_mol_k", "symmetry_number", "uncertainty_hf298_kj_mol"}, keysOf(o))
 	assert.Equal(t, "C2H6O", o["formula"])
+	assert.EqualValues(t, 1, o["multiplicity"]) // extension: the contract's keys are all there
 	assert.Nil(t, o["error"])
 	// Ethanol, ΔHf°298(g) = −234.8 kJ/mol (NIST-JANAF / Pedley 1994, from
 	// memory); group additivity within 4 kJ/mol (~1 kcal/mol).

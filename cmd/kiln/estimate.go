@@ -30,7 +30,10 @@ type estimateJSON struct {
 	Corrections    []correctionJSON `json:"corrections"`
 	SymmetryNumber *json.Number     `json:"symmetry_number"` // exact integer of any size
 	OpticalIsomers *int             `json:"optical_isomers"`
-	MissingGroups  []string         `json:"missing_groups"`
+	// Multiplicity is the spin multiplicity 2S+1 of the data, for
+	// reference-library species too (extension).
+	Multiplicity  *int     `json:"multiplicity,omitempty"`
+	MissingGroups []string `json:"missing_groups"`
 	// Flags words each entry of missing_groups as check, summary and hover
 	// word it (extension; analysis.FlagText).
 	Flags []string `json:"flags,omitempty"`
@@ -175,6 +178,7 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		return r, nil
 	}
 	r.Hf298 = ptr(jnum(est.Hf298 / 1000))
+	r.Multiplicity = ptr(est.Multiplicity)
 	r.S298 = ptr(jnum(est.S298))
 	r.Cp = numericMap{}
 	for i, k := range analysis.StdTempKeys {
@@ -277,7 +281,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 			fmt.Fprintln(w, "  (group sources: --sources or --json)")
 		}
 	} else {
-		fmt.Fprintf(w, "  reference library: %s (tabulated data, not a group estimate)\n", est.Library)
+		fmt.Fprintf(w, "  reference library: %s (tabulated data, not a group estimate), multiplicity %d\n", est.Library, est.Multiplicity)
 		if r.SymmetryNumber != nil {
 			fmt.Fprintf(w, "  symmetry number σ = %s, optical isomers n = %d (already contained in the tabulated S°)\n", *r.SymmetryNumber, *r.OpticalIsomers)
 		} else {
