@@ -44,10 +44,7 @@ func TestRefusalSpinState(t *testing.T) {
 // does replace it.
 func TestApproximationAdvice(t *testing.T) {
 	res := analyzeText(t, "species P C=C[CH]C=C\nspecies V FC(=C)C\n")
-	byName := map[string]string{}
-	for _, m := range messagesWithCode(res, speciesfile.CodeMissingGroup) {
-		byName[strings.SplitN(m, ":", 2)[0]] = m
-	}
+	byName := missingGroupBySpecies(res)
 	require.Contains(t, byName, "P", "%v", res.Diagnostics)
 	assert.NotContains(t, byName["P"], "`group` statement")
 	assert.Contains(t, byName["P"], "estimated with an approximation kiln has no data for: HBI: radical delocalised")
@@ -139,10 +136,7 @@ func TestApproximationWithBlock(t *testing.T) {
 // substituted ketene end) does.
 func TestEntropyOnlyApproximation(t *testing.T) {
 	res := analyzeText(t, "species I CC=NC\nspecies K CC(C)=C=O\n")
-	byName := map[string]string{}
-	for _, m := range messagesWithCode(res, speciesfile.CodeMissingGroup) {
-		byName[strings.SplitN(m, ":", 2)[0]] = m
-	}
+	byName := missingGroupBySpecies(res)
 	require.Contains(t, byName, "I", "%v", res.Diagnostics)
 	assert.Contains(t, byName["I"], "I: S° and Cp estimated with an approximation kiln has no data for: S, Cp by analogy: CdN-(C)(H)")
 	assert.Contains(t, byName["I"], "ΔHf° and its uncertainty are not affected")
@@ -150,4 +144,13 @@ func TestEntropyOnlyApproximation(t *testing.T) {
 	require.Contains(t, byName, "K", "%v", res.Diagnostics)
 	assert.Contains(t, byName["K"], "its uncertainty is widened")
 	assert.NotContains(t, byName["K"], "not affected")
+}
+
+// missingGroupBySpecies maps each species name to its missing-group message.
+func missingGroupBySpecies(res *Result) map[string]string {
+	byName := map[string]string{}
+	for _, m := range messagesWithCode(res, speciesfile.CodeMissingGroup) {
+		byName[strings.SplitN(m, ":", 2)[0]] = m
+	}
+	return byName
 }

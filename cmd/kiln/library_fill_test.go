@@ -116,12 +116,20 @@ func TestEstimateLibraryHalogens(t *testing.T) {
 		{"O=CF", "HCOF", "(-374.6 kJ/mol)"},
 		{"O=C(F)Cl", "COFCl", "(-429.5 kJ/mol)"},
 	} {
-		code, out, stderr := runKiln(t, "estimate", tc.smiles)
-		require.Equal(t, exitOK, code, "%s: %s%s", tc.smiles, out, stderr)
-		assert.Contains(t, out, "reference library: "+tc.name+" (tabulated data", tc.smiles)
-		assert.Contains(t, out, tc.hf, tc.smiles)
-		assert.NotContains(t, out, "cannot estimate", tc.smiles)
+		assertLibraryEstimate(t, tc.smiles, tc.name, tc.hf)
 	}
+}
+
+// assertLibraryEstimate checks that kiln estimate gives smiles as the
+// reference-library entry name, with ΔHf°298 text hf, and no estimate flag.
+func assertLibraryEstimate(t *testing.T, smiles, name, hf string) {
+	t.Helper()
+	code, out, stderr := runKiln(t, "estimate", smiles)
+	require.Equal(t, exitOK, code, "%s: %s%s", smiles, out, stderr)
+	assert.Contains(t, out, "reference library: "+name+" (tabulated data", smiles)
+	assert.Contains(t, out, hf, smiles)
+	assert.NotContains(t, out, "cannot estimate", smiles)
+	assert.NotContains(t, out, "approximation", smiles)
 }
 
 // TestEstimateRefusesRoundedHalomethanes: the mixed bromohalomethanes and
@@ -180,12 +188,7 @@ func TestEstimateLibraryHaloethylenes(t *testing.T) {
 		{"F[C]=C(F)F", "C2F3", "(-228.2 kJ/mol)"},
 		{"O=C=C=C=O", "C3O2", "(-93.6 kJ/mol)"},
 	} {
-		code, out, stderr := runKiln(t, "estimate", tc.smiles)
-		require.Equal(t, exitOK, code, "%s: %s%s", tc.smiles, out, stderr)
-		assert.Contains(t, out, "reference library: "+tc.name+" (tabulated data", tc.smiles)
-		assert.Contains(t, out, tc.hf, tc.smiles)
-		assert.NotContains(t, out, "cannot estimate", tc.smiles)
-		assert.NotContains(t, out, "approximation", tc.smiles)
+		assertLibraryEstimate(t, tc.smiles, tc.name, tc.hf)
 	}
 	code, out, stderr := runKiln(t, "estimate", "Cl[C]=C(Cl)Cl")
 	require.Equal(t, exitOK, code, stderr)
