@@ -1,6 +1,7 @@
 package ide
 
 import (
+	"maps"
 	"strconv"
 
 	"kiln.dev/kiln/analysis"
@@ -35,7 +36,9 @@ const Placeholder = analysis.StructurePlaceholder
 // declaredStructure returns what "Declare species NAME" writes after the
 // name: the reference library's SMILES when NAME is the name of one of its
 // species (with a multiplicity line, on a new line, for an entry that is
-// not the ground state of its structure, e.g. CH2(S)), else Placeholder.
+// not the ground state of its structure, e.g. CH2(S)), or when NAME is a
+// formula in another order (CF3H, ClOH) that exactly one library species
+// has; else Placeholder.
 func declaredStructure(name, nl string) string {
 	lib := reflib.New()
 	for _, sp := range lib.All() {
@@ -51,7 +54,57 @@ func declaredStructure(name, nl string) string {
 		}
 		return sp.SMILES + nl + "  multiplicity " + strconv.Itoa(sp.Multiplicity)
 	}
-	return Placeholder
+	want, ok := formulaOf(name)
+	if !ok {
+		return Placeholder
+	}
+	found := ""
+	for _, sp := range lib.All() {
+		m, err := molecule.ParseSMILES(sp.SMILES)
+		if err != nil || !maps.Equal(m.Composition(), want) {
+			continue
+		}
+		if found != "" {
+			return Placeholder // isomers or spin states: the name does not say which
+		}
+		found = sp.SMILES
+	}
+	if found == "" {
+		return Placeholder
+	}
+	return found
+}
+
+// formulaOf reads name as a molecular formula written in any element order
+// (element symbols, each with an optional count: CF3H, HOCl, C2H4), false
+// when it is not one.
+func formulaOf(name string) (map[string]int, bool) {
+	out := map[string]int{}
+	for i := 0; i < len(name); {
+		j := i + 1
+		if j < len(name) && name[j] >= 'a' && name[j] <= 'z' {
+			j++
+		}
+		sym := name[i:j]
+		if _, ok := molecule.AtomicWeight(sym); !ok {
+			return nil, false
+		}
+		k := j
+		for k < len(name) && name[k] >= '0' && name[k] <= '9' {
+			k++
+		}
+		n := 1
+		if k > j {
+			v, err := strconv.Atoi(name[j:k])
+			if err != nil || v == 0 {
+				return nil, false
+			}
+			n = v
+		}
+		out[sym] += n
+		i = k
+	}
+	return out, len(out) > 0
 }
 
 // CodeActions returns the actions for the byte range span of the analysed

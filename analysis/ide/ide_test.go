@@ -222,3 +222,16 @@ func TestHoverLibraryColumn(t *testing.T) {
 	assert.NotContains(t, h.Text, "| estimated |")
 	assert.Contains(t, h.Text, "library")
 }
+
+// "Declare species NAME" for a formula in another element order than the
+// library's name takes the one library species with that formula; a
+// formula several library species share (isomers, spin states) or none
+// has gets the placeholder.
+func TestDeclareFormulaName(t *testing.T) {
+	for name, want := range map[string]string{
+		"CF3H": "FC(F)F", "ClOH": "OCl", "H2ON": Placeholder, "CHNO": Placeholder,
+		"C2H4": Placeholder, "Xy2": Placeholder, "ethyl": Placeholder, "CH3": "[CH3]",
+	} {
+		assert.Equal(t, want, declaredStructure(name, "\n"), name)
+	}
+}
