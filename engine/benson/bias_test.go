@@ -203,3 +203,22 @@ func TestVinylDifluorideWidened(t *testing.T) {
 	assert.GreaterOrEqual(t, u, math.Abs(difluoroethyleneRef-hf), "σ %.2f must cover the error %.2f", u, difluoroethyleneRef-hf)
 	assert.Zero(t, flagCountOf(heteroEstimate(t, "FC(F)=C(F)F"), "Cd-(F)2"))
 }
+
+// A radical site whose only carbon neighbours carry two or more halogens
+// takes the β-polyhalo flag alone (that neighbour raises D(R–H)), not also
+// the alkyl-substitution flag, which says the opposite; a site with an
+// alkyl neighbour keeps the latter.
+func TestPolyhaloNeighbourNotAlkyl(t *testing.T) {
+	for smi, want := range map[string][2]int{ // β-polyhalo, substituted-halo flags
+		"F[C](F)C(F)(F)F":      {1, 0},
+		"FC(F)(F)[CH]F":        {1, 0},
+		"Cl[C](Cl)C(Cl)(Cl)Cl": {1, 0},
+		"C[C](F)F":             {0, 1},
+		"C[CH]Cl":              {0, 1},
+		"FC(F)(F)[C](F)C":      {1, 1},
+	} {
+		e := heteroEstimate(t, smi)
+		assert.Equal(t, want[0], flagCountOf(e, "HBI: "+betaPolyhaloSite), "%s: %v", smi, e.Missing)
+		assert.Equal(t, want[1], flagCountOf(e, "HBI: "+substitutedHaloSite), "%s: %v", smi, e.Missing)
+	}
+}

@@ -378,7 +378,11 @@ func (g *graph) polyhaloSite(i int) (site, missing string, ok bool) {
 		return "", "", false
 	}
 	site = sites[n]
-	if others > 0 {
+	// A CX2/CX3 neighbour raises D(R–H) instead (the β-polyhalo flag of
+	// bias.go says so and widens for it): only other neighbours take the
+	// alkyl-substitution note, so one site does not carry two flags of
+	// opposite sign (CF3CF2•).
+	if others > g.betaPolyhalo(i) {
 		missing = substitutedHaloSite + site + " (the halomethane's increment is used)" // radical.go
 	}
 	return site, missing, true

@@ -263,9 +263,11 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 				missing := s.missing
 				if missing == "" && strings.HasPrefix(s.kind, "alpha-") && s.kind != "alpha-hydroxy" && s.kind != "alpha-alkoxy" && s.kind != "alpha-amino" {
 					// α-halo increments are measured on XCH2–H; alkyl
-					// substitution at the centre lowers D(R–H) further.
+					// substitution at the centre lowers D(R–H) further (a
+					// CX2/CX3 neighbour raises it instead: the β-polyhalo
+					// flag covers that one).
 					for _, j := range g.nbr[i] {
-						if g.isCarbon(j) {
+						if h, _ := g.halogens(j); g.isCarbon(j) && (h < 2 || g.typ[j] != "C") {
 							missing = substitutedHaloSite + s.kind + " (the XCH2–H increment is used)"
 							break
 						}
