@@ -76,35 +76,21 @@ func declaredStructure(name, nl string) string {
 }
 
 // formulaOf reads name as a molecular formula written in any element order
-// (element symbols, each with an optional count: CF3H, HOCl, C2H4), false
-// when it is not one.
+// (speciesfile.ParseFormula: CF3H, HOCl, C2H4) of elements kiln knows,
+// false when it is not one.
 func formulaOf(name string) (map[string]int, bool) {
+	counts, err := speciesfile.ParseFormula(name)
+	if err != nil {
+		return nil, false
+	}
 	out := map[string]int{}
-	for i := 0; i < len(name); {
-		j := i + 1
-		if j < len(name) && name[j] >= 'a' && name[j] <= 'z' {
-			j++
-		}
-		sym := name[i:j]
-		if _, ok := molecule.AtomicWeight(sym); !ok {
+	for _, c := range counts {
+		if _, ok := molecule.AtomicWeight(c.Symbol); !ok {
 			return nil, false
 		}
-		k := j
-		for k < len(name) && name[k] >= '0' && name[k] <= '9' {
-			k++
-		}
-		n := 1
-		if k > j {
-			v, err := strconv.Atoi(name[j:k])
-			if err != nil || v == 0 {
-				return nil, false
-			}
-			n = v
-		}
-		out[sym] += n
-		i = k
+		out[c.Symbol] = c.Count
 	}
-	return out, len(out) > 0
+	return out, true
 }
 
 // CodeActions returns the actions for the byte range span of the analysed
