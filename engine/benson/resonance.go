@@ -225,11 +225,13 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 	if len(forms) == 1 {
 		est, err := estimateForm(m, opts)
 		var mg *MissingGroupError
-		if errors.As(err, &mg) && !groupsWouldHelp(m, mg, opts) {
-			// The parent's missing group is no route: with it the radical
-			// would still be refused (a site without an increment), and
-			// that reason is the one to give.
-			_, err = estimateForm(m, withPlaceholders(opts, mg))
+		if errors.As(err, &mg) {
+			if rest := refusalWithGroups(m, mg, opts); rest != nil {
+				// The parent's missing group is no route: with it the
+				// radical would still be refused (a site without an
+				// increment), and that reason is the one to give.
+				err = rest
+			}
 		}
 		return est, err
 	}
@@ -347,7 +349,7 @@ func explainForm(m *molecule.Molecule, err error, form string, fm *molecule.Mole
 	if werr == nil || errors.As(werr, &wmg) {
 		return err
 	}
-	if fm != nil && !groupsWouldHelp(fm, mg, opts) {
+	if fm != nil && refusalWithGroups(fm, mg, opts) != nil {
 		return werr
 	}
 	out := *mg
@@ -355,27 +357,27 @@ func explainForm(m *molecule.Molecule, err error, form string, fm *molecule.Mole
 	return &out
 }
 
-// groupsWouldHelp reports whether fm, refused for the groups of mg, would
-// be estimated once they (and any further groups it turns out to lack) had
-// values: it is estimated with placeholder values for them, which only
-// decide whether a refusal other than a missing group remains.
-func groupsWouldHelp(fm *molecule.Molecule, mg *MissingGroupError, opts Options) bool {
+// refusalWithGroups returns the refusal that would remain for fm, refused
+// for the groups of mg, once they (and any further groups it turns out to
+// lack) had values — a refusal no group statement removes, such as a
+// radical site without an increment — or nil when supplying them would
+// make an estimate possible (or still more groups are missing after
+// maxPlaceholderRounds: supplying them is then the route to try). fm is
+// estimated with placeholder values, which only decide what remains.
+func refusalWithGroups(fm *molecule.Molecule, mg *MissingGroupError, opts Options) error {
 	o := withPlaceholders(opts, mg)
-	// Each round supplies the next groups the form lacks; a form lacks few
-	// (maxPlaceholderRounds bounds the work), and a refusal that remains
-	// once none is missing is one no group statement removes.
 	for range maxPlaceholderRounds {
 		_, err := estimateForm(fm, o)
 		var again *MissingGroupError
 		if !errors.As(err, &again) {
-			return err == nil
+			return err
 		}
 		o = withPlaceholders(o, again)
 	}
-	return true // still lacking groups: supplying them is the route to try
+	return nil
 }
 
-// maxPlaceholderRounds bounds the rounds of groupsWouldHelp.
+// maxPlaceholderRounds bounds the rounds of refusalWithGroups.
 const maxPlaceholderRounds = 6
 
 // withPlaceholders returns opts with placeholder values for the groups mg
