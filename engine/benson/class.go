@@ -119,7 +119,7 @@ var classMAE = map[string]float64{
 // class uncertainty takes the larger of the two (classError). A class
 // without held-out rows is absent.
 var heldoutMAE = map[string]float64{
-	"alkane": 0.41, "cyclic": 0.22, "alkene": 0.45, "alkyne": 0.09, "aromatic": 0.31,
+	"alkane": 0.41, "cyclic": 0.22, "alkene": 0.45, "alkyne": 0.09, "aromatic": 0.22,
 	"alcohol": 0.63, "ether": 0.96, "carbonyl": 0.31, "acid-ester": 0.26, "peroxide": 1.89,
 	"aromatic-oxygen": 1.86, "radical": 0.37,
 	"nitrogen": 1.04, "sulfur": 0.18, "halogen": 1.02,
@@ -181,9 +181,9 @@ const (
 	// of the system strain beyond the sum of its component ring
 	// corrections (the "ring system strain" term of the matched estimate):
 	// the error a polycyclic system without a value makes when its rings
-	// are summed (bicyclo[2.1.0]pentane 2.1 … norbornadiene 20.9, cubane
+	// are summed (bicyclo[2.1.0]pentane 2.1 … norbornadiene 22.0, cubane
 	// 26.9 kcal/mol). TestSystemWidening recomputes it from the table.
-	widenSystem = 13.2
+	widenSystem = 13.4
 	// Effects the groups miss, with no correction at hand (bias.go), and
 	// approximations whose error is known to be large: each widened by
 	// at least the size of the error it was seen to make. None of these
