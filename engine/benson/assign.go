@@ -24,7 +24,7 @@ func (g *graph) groupOf(i int) (string, ligCounts, bool) {
 	switch centre {
 	case "Cd", "CO", "NA", "NI", "CdN", "Naz": // NI, CdN: the imine C=N (hetero_n.go); Naz: azole.go
 		skip = g.partner(i, 2)
-	case "Ct", "CN":
+	case "Ct", "CN", "NC": // NC: isocyanide N (hetero_n.go)
 		skip = g.partner(i, 3)
 	case "CS":
 		skip = g.partnerElement(i, 2, "S")

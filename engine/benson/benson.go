@@ -204,7 +204,7 @@ func Estimate(m *molecule.Molecule, opts Options) (*Result, error) {
 	var refusals []atomError
 	for i, a := range m.Atoms {
 		switch {
-		case a.Charge != 0:
+		case a.Charge != 0 && !neutralIsocyanide(m, i): // R–N⁺≡C⁻ has groups (hetero_n.go)
 			refusals = append(refusals, atomError{i, chargeRefusal(m, i)})
 		case a.Isotope != 0:
 			// Group values are for natural isotopic composition; a label

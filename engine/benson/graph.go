@@ -115,6 +115,9 @@ func (g *graph) atomType(i int) string {
 	if g.benzAtom[i] == 1 {
 		return "Cb"
 	}
+	if a.Charge == -1 && isocyanide(g.m, i) {
+		return "Cic" // the ≡C⁻ of an isocyanide, implied by its N (hetero_n.go)
+	}
 	if t, ok := g.heteroCarbonType(i); ok {
 		return t
 	}

@@ -60,6 +60,11 @@ import (
 //     cumulated C=N (ketenimine, isocyanate, carbodiimide) is Nk. Neither
 //     is nameable: such species are refused, whichever spelling (Kekulé or
 //     aromatic) is used.
+//   - NC: the N⁺ of an isocyanide R–N⁺≡C⁻ in a neutral molecule, its ≡C⁻
+//     (typed Cic, a ligand of no other group) implied as the ≡N of a nitrile
+//     carbon is: NC-(C), derived from one molecule (groups_n.tsv), with
+//     C-(NC)(X) = C-(C)(X) as for nitriles. An isocyanide is the one
+//     charge-separated structure read as it is written (neutralIsocyanide).
 //
 // A nitro, nitrate or N-oxide unit written charge-separated (C[N+](=O)[O-],
 // the usual SMILES) is read as the neutral pentavalent structure
@@ -87,6 +92,9 @@ func azineN(m *molecule.Molecule, a int) bool {
 // nitrogenType returns the Benson type of nitrogen atom i (see the file
 // comment): Nb, NO2, NO, NA, NI, or N for amine-type (and nitrile) nitrogen.
 func (g *graph) nitrogenType(i int) string {
+	if g.m.Atoms[i].Charge == 1 && isocyanide(g.m, i) {
+		return "NC" // R–N⁺≡C⁻: see the file comment
+	}
 	if g.benzAtom[i] > 0 {
 		for _, j := range g.nbr[i] {
 			if g.benzAtom[j] > 0 && azineN(g.m, j) {
@@ -247,18 +255,28 @@ func isocyanide(m *molecule.Molecule, i int) bool {
 	return len(m.Adj[c]) == 1 && m.Atoms[c].HCount == 0 && len(m.Adj[n]) == 2
 }
 
-// chargeRefusal explains why charged atom i of m is refused: an ion (net
-// charge) or a charge-separated structure other than the N⁺–O⁻ and
-// S⁺–O⁻ units neutralOxo rewrites.
-func chargeRefusal(m *molecule.Molecule, i int) error {
+// netCharge is the sum of the formal charges of m's atoms.
+func netCharge(m *molecule.Molecule) int {
 	net := 0
 	for _, a := range m.Atoms {
 		net += a.Charge
 	}
+	return net
+}
+
+// neutralIsocyanide reports whether atom i of m is the N⁺ or the ≡C⁻ of an
+// isocyanide group in a neutral molecule: charges the NC groups describe
+// (typed NC and Cic), not a charge-separated structure to refuse.
+func neutralIsocyanide(m *molecule.Molecule, i int) bool {
+	return isocyanide(m, i) && netCharge(m) == 0
+}
+
+// chargeRefusal explains why charged atom i of m is refused: an ion (net
+// charge) or a charge-separated structure other than the N⁺–O⁻ and
+// S⁺–O⁻ units neutralOxo rewrites and the isocyanide R–N⁺≡C⁻.
+func chargeRefusal(m *molecule.Molecule, i int) error {
+	net := netCharge(m)
 	a := m.Atoms[i]
-	if net == 0 && isocyanide(m, i) {
-		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) belongs to an isocyanide group, R–N⁺≡C⁻: no group value for isocyanides is at hand", a.Element)}
-	}
 	if net != 0 {
 		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) has charge %+d and the species has net charge %+d: ions are outside group additivity", a.Element, a.Charge, net)}
 	}

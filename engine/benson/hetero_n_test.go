@@ -86,7 +86,7 @@ func TestNitrogenStillRefused(t *testing.T) {
 		"C=C=N":             "cumulated C=N",
 		"CC=NO":             "O-(NI)(H)",
 		"CC=[N]":            "radical site of type iminyl",
-		"C[N+]#[C-]":        "isocyanide",
+		"C=C[N+]#[C-]":      "Cd-(NC)(H)",
 		"CN(C)[N+](=O)[O-]": "NO2-(N)",
 		"C=C[N+](=O)[O-]":   "Cd-(NO2)(H)",
 		"c1ccnnc1":          "Nbb",

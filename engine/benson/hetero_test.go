@@ -267,6 +267,10 @@ func TestHeteroAtomAccounting(t *testing.T) {
 					default:
 						t.Errorf("%s: terminal %s on %s is in no group", smi, a.Element, g.typ[j])
 					}
+				case "C":
+					if g.typ[j] != "NC" { // the ≡C⁻ of an isocyanide (hetero_n.go)
+						t.Errorf("%s: terminal C on %s is in no group", smi, g.typ[j])
+					}
 				default:
 					t.Errorf("%s: terminal %s is in no group", smi, a.Element)
 				}

@@ -26,7 +26,7 @@ var ligandRank = func() map[string]int {
 var centreLigands = map[string]int{
 	"C": 4, "Cd": 2, "Ct": 1, "Cb": 1, "Cbf": 3, "Ca": 0, "CO": 2, "O": 2, "S": 2, "N": 3,
 	"CN": 1, "Ck": 0, "CS": 2, // nitrile, ketene and thiocarbonyl carbons (hetero.go)
-	"NO2": 1, "NO": 1, "NA": 1, "Nb": 0, "Nbb": 0, // nitro, nitroso, azo and azine nitrogen (hetero_n.go)
+	"NO2": 1, "NO": 1, "NA": 1, "Nb": 0, "Nbb": 0, "NC": 1, // nitro, nitroso, azo, azine and isocyanide nitrogen (hetero_n.go)
 	"NI": 1, "CdN": 2, // imine nitrogen and imine carbon (hetero_n.go)
 	"SO": 2, "SO2": 2, // sulfoxide and sulfone sulfur (hetero_sx.go)
 	"Naz": 1, // azole ring "=N–", its double-bond partner implied (azole.go)
@@ -40,6 +40,7 @@ var centreLigands = map[string]int{
 // type (say a thiocarbonyl) declares the terminal atom it carries.
 var impliedPartner = map[string]string{"CO": "O", "Ck": "O", "CS": "S", "CN": "N", "SO": "O", "SO2": "O",
 	"NO2": "O", "NO": "O", // nitro (both =O) and nitroso nitrogen: hetero_n.go
+	"NC": "C", // isocyanide nitrogen: hetero_n.go
 } // Ck, CS, CN: hetero.go; SO, SO2: hetero_sx.go
 
 // ParseGroupName validates a group name in Benson notation, centre-(ligand)n…,
@@ -100,7 +101,7 @@ func ParseGroupName(s string) (string, error) {
 
 // ligCounts counts neighbours by type, indexed by ligandRank (int32: an
 // accumulator of a group is copied and compared per atom).
-type ligCounts [28]int32
+type ligCounts [len(ligandOrder)]int32
 
 // groupName writes a normalised group name from a centre and neighbour counts.
 func groupName(centre string, counts ligCounts) string {
@@ -131,4 +132,4 @@ func groupName(centre string, counts ligCounts) string {
 // NI, azine Nb and Nbb) follow N, and Nb, Nbb follow Cb; the azole ring nitrogens
 // Naz, NazN (azole.go) follow NI; the imine carbon CdN follows Cd; SO, SO2
 // (hetero_sx.go) follow S.
-var ligandOrder = []string{"O", "N", "NO2", "NO", "NA", "NI", "Naz", "NazN", "S", "SO", "SO2", "F", "Cl", "Br", "I", "CO", "CN", "CS", "Cbf", "Cb", "Nb", "Nbb", "Ct", "Cd", "CdN", "Ca", "C", "H"}
+var ligandOrder = [...]string{"O", "N", "NO2", "NO", "NA", "NI", "Naz", "NazN", "S", "SO", "SO2", "F", "Cl", "Br", "I", "CO", "CN", "NC", "CS", "Cbf", "Cb", "Nb", "Nbb", "Ct", "Cd", "CdN", "Ca", "C", "H"}

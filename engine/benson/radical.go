@@ -303,6 +303,8 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 			switch {
 			case g.typ[j] == "CN":
 				return alkyl, unstabilisedSite + "alpha-cyano", "", nil
+			case g.typ[j] == "NC": // isocyanide N (hetero_n.go): conjugates as a nitrile does
+				return alkyl, unstabilisedSite + "alpha-isocyano", "", nil
 			case g.m.Atoms[j].Element == "S":
 				return alkyl, unstabilisedSite + "alpha-thio", "", nil
 			}

@@ -64,7 +64,7 @@ func TestRefusals(t *testing.T) {
 		// nitrogen (hetero_n.go): only N⁺–O⁻ units are read as N=O; other
 		// charge separation, cis azo compounds and imines without a group
 		// (oximes here) are refused.
-		{"C[N+]#[C-]", Options{}, "isocyanide"},
+		{"c1ccccc1[N+]#[C-]", Options{}, "no value and no approximation for group Cb-(NC)"},
 		{"C[N+](C)(C)C.[Cl-]", Options{}, "2 disconnected parts"}, // a salt: two species, not a charge-separated one
 		{"CC=NO", Options{}, "no value and no approximation for group O-(NI)(H)"},
 		{"C/N=N\\C", Options{}, "cis azo nitrogen"},

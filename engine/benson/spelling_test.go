@@ -298,7 +298,7 @@ var spellingRefused = []string{
 	// azoles outside the derived groups (azole.go): N=N in the ring, =N– next to the donor O
 	"Cc1c[nH]nn1", "Cc1cnoc1",
 	// charges other than N⁺–O⁻ units, ions, imines, azo (hetero_n.go)
-	"C[N+]#[C-]", "C[NH3+]", "CC[N+](C)(C)C", "CC=NO", "N=Cc1ccccc1", "CCN=O",
+	"c1ccccc1[N+]#[C-]", "C[NH3+]", "CC[N+](C)(C)C", "CC=NO", "N=Cc1ccccc1", "CCN=O",
 }
 
 // TestRandomSpellingsOneAnswer: ≥ 2,000 estimable random structures
