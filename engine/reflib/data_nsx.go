@@ -22,6 +22,7 @@ package reflib
 const (
 	srcNASA9  = "McBride, Zehe & Gordon, NASA Glenn coefficients for calculating thermodynamic properties of individual species, NASA/TP-2002-211556 (2002): NASA-9 coefficients and ΔHf°298 as published, Cp refitted to NASA-7 by kiln's polynomial fit; S°298 from the NASA-9 coefficients"
 	srcTM4513 = "McBride, Gordon & Reno, Coefficients for calculating thermodynamic and transport properties of individual species, NASA TM-4513 (1993): NASA-7 coefficients (298.15–1000–5000 K) as published, used to 3500 K; ΔHf°298 and S°298 as implied by the coefficients"
+	srcGBR    = "Goos, Burcat & Ruscic, Extended Third Millennium Thermodynamic Database for Combustion and Air-Pollution Use with updates from Active Thermochemical Tables (update of 29 June 2015; print reference Burcat & Ruscic, ANL-05/20, 2005), read from a stored copy: NASA-7 coefficients (200–1000–6000 K) as published, used to 3500 K; ΔHf°298 and S°298 as implied by the coefficients"
 	srcGRI30  = "NASA-7 coefficients of the GRI-Mech 3.0 thermodynamic data set (Smith, Golden, Frenklach, Moriarty, Eiteneer, Goldenberg, Bowman, Hanson, Song, Gardiner, Lissianski, Qin, 1999) as published; ΔHf°298 and S°298 as implied by the coefficients"
 )
 
@@ -152,6 +153,15 @@ var nsxEntries = []entry{
 			hi: [9]float64{1.430040220e+06, -5.284028650e+03, 1.016182124e+01, -9.703849960e-04, 2.154003405e-07, -2.169695700e-11, 9.318163070e-16, 2.908696214e+04, -4.349160391e+01},
 		},
 		source: srcNASA9},
+	// HS=O (not its isomer HOS, S–OH, which has no entry): the compilation's
+	// selected ΔHf°298 is −5.2 ± 0.5 kcal/mol (Denis, Chem. Phys. Lett. 402
+	// (2005) 289), which its coefficients imply; it marks the species as
+	// problematic, its other values ranging from −4.4 (G3B3) to +5.0 kcal/mol
+	// (Benson 1979): the library value is the selected one, not a settled one.
+	{name: "HSO", smiles: "[SH]=O", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{4.34724125e+00, 2.53372236e-03, -9.51430950e-07, 1.58095446e-10, -9.65294637e-15, -4.20893834e+03, 3.15887502e+00},
+		lo:     [7]float64{4.13565093e+00, -3.69243127e-03, 2.05169784e-05, -2.40530656e-08, 9.17084270e-12, -3.82371653e+03, 5.88770120e+00},
+		source: srcGBR + " (HS=O radical; ΔHf°298: Denis 2005, the compilation's selected value; published values span −5.2 to +5.0 kcal/mol)"},
 	{name: "SO", smiles: "[S][O]", aliases: []string{"S=O"}, mult: 3, hf298: 4760.306, tLow: 200, tMid: 1000, tHigh: 3500,
 		n9: &nasa9{
 			lo: [9]float64{-3.342757000e+04, 6.403862500e+02, -1.006641228e+00, 1.381512705e-02, -1.704486364e-05, 1.061294930e-08, -2.645796205e-12, -3.371292190e+03, 3.093861963e+01},
@@ -349,6 +359,13 @@ var nsxEntries = []entry{
 			hi: [9]float64{3.293486700e+06, -1.199850628e+04, 2.104406814e+01, -1.399381724e-03, 1.933173351e-07, -1.318016127e-11, 3.166400170e-16, 8.348433700e+04, -1.155751024e+02},
 		},
 		source: srcNASA9 + " (hydrazine)"},
+	// Hydrazinyl: the compilation's selected ΔHf°298 is the Active
+	// Thermochemical Tables value, 224.856 ± 0.91 kJ/mol, which its
+	// coefficients imply (H298/R = 27043.8 K).
+	{name: "N2H3", smiles: "N[NH]", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{4.04483566e+00, 7.31130186e-03, -2.47625799e-06, 3.83733021e-10, -2.23107573e-14, 2.53241420e+04, 2.88423392e+00},
+		lo:     [7]float64{3.42125505e+00, 1.34901590e-03, 2.23459071e-05, -2.99727732e-08, 1.20978970e-11, 2.58198956e+04, 7.83176309e+00},
+		source: srcGBR + " (hydrazinyl radical H2N–NH•; ΔHf°298: Active Thermochemical Tables)"},
 	{name: "N2H2", smiles: "N=N", mult: 1, hf298: 211858.756, tLow: 200, tMid: 1000, tHigh: 3500,
 		n9: &nasa9{
 			lo: [9]float64{-1.504005163e+05, 2.346687716e+03, -9.405430290e+00, 3.284299800e-02, -3.121920401e-05, 1.721283190e-08, -4.014537220e-12, 1.319384041e+04, 7.832382630e+01},
