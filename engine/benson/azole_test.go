@@ -21,34 +21,34 @@ func heteroRef(t *testing.T, name string) heteroRow {
 	return heteroRow{}
 }
 
-// The azole nitrogen groups were derived from imidazole and pyrazole (train
-// rows): both are reproduced (the header arithmetic of groups_azole.tsv), and
-// the groups carried to other azoles predict the rows that were not used:
-// oxazole (O donor, +1.6 kcal/mol) and 1H-1,2,4-triazole (both Naz groups in
-// one ring, +2.8). The tolerance of 3 kcal/mol is the 2 kcal/mol the rows'
-// own uncertainty allows plus the class's train MAE, rounded up.
-func TestAzoleEstimates(t *testing.T) {
-	for _, c := range []struct {
-		name string
-		tol  float64 // kcal/mol
-	}{
-		{"imidazole", 0.01}, {"pyrazole", 0.01}, // derived from these
-		{"oxazole", 3.0}, {"1H-1,2,4-triazole", 3.0},
-	} {
-		r := heteroRef(t, c.name)
-		require.Equal(t, "train", r.split, c.name)
+// TestAzoleGroupFit: Naz-(Cd) and Naz-(N) are the least-squares fit to the
+// four azole train rows (groups_azole.tsv header), so the residuals are
+// orthogonal to each group's counts: Σ count × (estimate − reference) = 0
+// per group, to the table's rounding. Each row stays within 1.5 kcal/mol
+// (largest residual of the fit 1.19, imidazole), and none carries a ΔHf° flag.
+func TestAzoleGroupFit(t *testing.T) {
+	normal := map[string]float64{"Naz-(Cd)": 0, "Naz-(N)": 0}
+	for _, name := range []string{"imidazole", "pyrazole", "oxazole", "1H-1,2,4-triazole"} {
+		r := heteroRef(t, name)
+		require.Equal(t, "train", r.split, name)
 		e := estimate(t, r.smiles, Options{})
 		d := e.Hf298/calorie/1000 - r.hf
-		t.Logf("%-18s estimate %6.2f, reference %6.2f, %+.2f kcal/mol", c.name, e.Hf298/calorie/1000, r.hf, d)
-		assert.LessOrEqual(t, math.Abs(d), c.tol, c.name)
+		t.Logf("%-18s estimate %6.2f, reference %6.2f, %+.2f kcal/mol", name, e.Hf298/calorie/1000, r.hf, d)
+		assert.LessOrEqual(t, math.Abs(d), 1.5, name)
 		for _, m := range e.Missing {
-			assert.True(t, entropyOnly(m), "%s: a ΔHf° flag %q", c.name, m.Group)
+			assert.True(t, entropyOnly(m), "%s: a ΔHf° flag %q", name, m.Group)
 		}
 		hasNaz := false
 		for _, g := range e.Groups {
-			hasNaz = hasNaz || g.Name == "Naz-(Cd)" || g.Name == "Naz-(N)"
+			if _, ok := normal[g.Name]; ok {
+				normal[g.Name] += float64(g.Count) * d
+				hasNaz = true
+			}
 		}
-		assert.True(t, hasNaz, "%s: %v", c.name, e.Groups)
+		assert.True(t, hasNaz, "%s: %v", name, e.Groups)
+	}
+	for g, v := range normal {
+		assert.InDelta(t, 0, v, 0.05, "%s: Σ count × residual (kcal/mol) — not the least-squares value", g)
 	}
 }
 
@@ -123,7 +123,7 @@ func TestAzoleFlags(t *testing.T) {
 	plain := estimate(t, "c1cocn1", Options{})
 	thz := estimate(t, "c1cscn1", Options{})
 	assert.Greater(t, thz.Uncertainty, plain.Uncertainty, "the thiazole flag widens ΔHf°")
-	u, err := Estimate(parse(t, "c1cscn1"), Options{UserGroups: []GroupValue{{Name: "Naz-(Cd)", Hf298: 12.78 * calorie * 1000, S298: 6.18 * calorie, Source: "test"}}})
+	u, err := Estimate(parse(t, "c1cscn1"), Options{UserGroups: []GroupValue{{Name: "Naz-(Cd)", Hf298: 11.59 * calorie * 1000, S298: 6.18 * calorie, Source: "test"}}})
 	require.NoError(t, err)
 	for _, m := range u.Missing {
 		assert.NotEqual(t, thiazoleGroup, m.Group)

@@ -233,10 +233,10 @@ const (
 	// uncertain, quoted by an independent tester).
 	widenArylAmineStandIn = 10.0
 	// widenThiazole: azole N groups, derived on N-donor rings, used in a
-	// ring with an S donor (azole.go). Thiazole comes out 33.5 against
+	// ring with an S donor (azole.go). Thiazole comes out 32.3 against
 	// about 40 kcal/mol (NIST WebBook, from memory, unsure, quoted by an
-	// independent tester): 6.5 low.
-	widenThiazole = 6.5
+	// independent tester): 7.7 low.
+	widenThiazole = 7.7
 	// widenAzine: a six-membered aromatic ring with three or more Nb
 	// (bias.go, addAzineRingFlags); 1,3,5-triazine is 7.2 kcal/mol off.
 	widenAzine = 7.5
