@@ -31,6 +31,10 @@ type entry struct {
 	// implied: hf298 and s298 are those the lo block implies at 298.15 K
 	// (for coefficient sets published without separate formation data).
 	implied bool
+	// sImplied: S°298 is the one the lo block implies at 298.15 K while
+	// hf298 is given (a coefficient set whose compilation selects another
+	// ΔHf°298 than its coefficients carry).
+	sImplied bool
 	// n9: NASA-9 blocks; Cp is tabulated from them every 50 K and fitted
 	// with nasa.FitPoly, and s298 is theirs at 298.15 K (see data_nsx.go).
 	n9     *nasa9

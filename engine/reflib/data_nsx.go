@@ -22,7 +22,7 @@ package reflib
 const (
 	srcNASA9  = "McBride, Zehe & Gordon, NASA Glenn coefficients for calculating thermodynamic properties of individual species, NASA/TP-2002-211556 (2002): NASA-9 coefficients and ΔHf°298 as published, Cp refitted to NASA-7 by kiln's polynomial fit; S°298 from the NASA-9 coefficients"
 	srcTM4513 = "McBride, Gordon & Reno, Coefficients for calculating thermodynamic and transport properties of individual species, NASA TM-4513 (1993): NASA-7 coefficients (298.15–1000–5000 K) as published, used to 3500 K; ΔHf°298 and S°298 as implied by the coefficients"
-	srcGBR    = "Goos, Burcat & Ruscic, Extended Third Millennium Thermodynamic Database for Combustion and Air-Pollution Use with updates from Active Thermochemical Tables (update of 29 June 2015; print reference Burcat & Ruscic, ANL-05/20, 2005), read from a stored copy: NASA-7 coefficients (200–1000–6000 K) as published, used to 3500 K; ΔHf°298 and S°298 as implied by the coefficients"
+	srcGBR    = "Goos, Burcat & Ruscic, Extended Third Millennium Thermodynamic Database for Combustion and Air-Pollution Use with updates from Active Thermochemical Tables (update of 29 June 2015; print reference Burcat & Ruscic, ANL-05/20, 2005), read from a stored copy: NASA-7 coefficients (200–1000–6000 K) as published, used to 3500 K; ΔHf°298 as the entry states (the value its coefficients imply unless it says otherwise) and S°298 as implied by the coefficients"
 	srcGRI30  = "NASA-7 coefficients of the GRI-Mech 3.0 thermodynamic data set (Smith, Golden, Frenklach, Moriarty, Eiteneer, Goldenberg, Bowman, Hanson, Song, Gardiner, Lissianski, Qin, 1999) as published; ΔHf°298 and S°298 as implied by the coefficients"
 )
 
@@ -429,44 +429,81 @@ var nsxEntries = []entry{
 			hi: [9]float64{-2.392612795e+06, 6.932793130e+03, -2.513183892e+00, 3.446544560e-03, -7.569536840e-07, 6.514291340e-11, -1.715768736e-15, -3.084499064e+04, 5.361048360e+01},
 		},
 		source: srcNASA9 + " (²Π ground state)"},
-	{name: "CH2Br2", smiles: "BrCBr", mult: 1, hf298: -14770, tLow: 200, tMid: 1000, tHigh: 3500,
-		n9: &nasa9{
-			lo: [9]float64{4.797308010e+03, 3.613859240e+02, -1.819592338e+00, 3.477048340e-02, -4.498546180e-05, 3.068623685e-08, -8.434846340e-12, -4.481497060e+03, 3.827123590e+01},
-			hi: [9]float64{1.528284441e+06, -6.673414950e+03, 1.670213316e+01, -1.166351237e-03, 2.122634493e-07, -2.075472240e-11, 8.428577700e-16, 3.600706640e+04, -7.448065490e+01},
-		},
-		source: srcNASA9 + " (dibromomethane)"},
-	{name: "CHBr3", smiles: "BrC(Br)Br", mult: 1, hf298: 16740, tLow: 200, tMid: 1000, tHigh: 3500,
-		n9: &nasa9{
-			lo: [9]float64{4.346576860e+04, -4.999634420e+02, 5.620222110e+00, 2.079346321e-02, -2.921336328e-05, 2.066942448e-08, -5.781220910e-12, 2.627830062e+03, 1.247904015e+00},
-			hi: [9]float64{6.274234950e+05, -3.378711100e+03, 1.487852612e+01, -5.932745270e-04, 1.082421577e-07, -1.061012665e-11, 4.319152450e-16, 1.877234659e+04, -5.311909650e+01},
-		},
-		source: srcNASA9 + " (bromoform)"},
-	{name: "CBr4", smiles: "BrC(Br)(Br)Br", mult: 1, hf298: 79500, tLow: 200, tMid: 1000, tHigh: 3500,
-		n9: &nasa9{
-			lo: [9]float64{1.023083739e+05, -1.735600709e+03, 1.651317914e+01, -3.147664747e-03, 2.924135486e-07, 1.360605681e-09, -6.431758650e-13, 1.500502543e+04, -5.536476760e+01},
-			hi: [9]float64{-2.059785072e+05, -1.048517002e+02, 1.307772550e+01, -3.086857556e-05, 6.775309810e-09, -7.721837540e-13, 3.559218240e-17, 5.615893940e+03, -3.283787630e+01},
-		},
-		source: srcNASA9 + " (tetrabromomethane)"},
-	// Not entered although the compilation has them: the mixed
-	// bromohalomethanes CH2ClBr, CHCl2Br, CHClBr2, CH2FBr, CHF2Br, CHFBr2,
-	// CHFClBr, CCl3Br, CCl2Br2, CClBr3, CFBr3, CF2Br2, CF2ClBr, CFClBr2 and
-	// CFCl2Br, and the radicals CBr3 (235.00), CFCl2 (−105.00) and CF2Cl
-	// (−275.00 kJ/mol). Their ΔHf°298 in NASA/TP-2002-211556 are Gurvich 1991
-	// estimates rounded to 5 kJ/mol (CHF2Br −422 and CCl3Br −43 to 1 kJ/mol), not
-	// data kiln can give as exact, and the bromohalomethanes among them are
-	// inconsistent with the measured pure bromides kept above (Kudchadker
-	// 1975): each Cl→Br replacement through the mixed entries raises ΔHf°298
-	// by +50 to +58 kJ/mol (CH2Cl2 −95.0 → CH2ClBr −45, +50; CHCl3 −102.9 →
-	// CHCl2Br −45 → CHClBr2 10, +57.9 and +55; CCl3Br −43 → CCl2Br2 10 →
-	// CClBr3 65, +53 and +55), but the step into a pure bromide only by +30.2
-	// (CH2ClBr → CH2Br2 −14.77), +6.7 (CHClBr2 → CHBr3 16.74) and +14.5
-	// (CClBr3 → CBr4 79.5): misfits of up to ≈ 45 kJ/mol, so Kp(298 K) of
-	// reactions between them would be off by up to ≈ 10^8 while the summary
-	// counted library data as exact. They were removed
-	// from the library, and kiln estimate refuses them: their groups
-	// (C-(Cl)(Br)(H)2 …; for a radical its parent's, C-(Br)3(H), C-(F)(Cl)2(H),
-	// C-(F)2(Cl)(H)) are not entered (TestNotInLibraryNSX here,
-	// TestEstimateRefusesRoundedHalomethanes in cmd/kiln).
+	// --- the bromomethanes and mixed bromohalomethanes, from Goos, Burcat &
+	// Ruscic's database with the Active Thermochemical Tables ΔHf°298 it
+	// gives for each (read from the entry's header; the coefficients imply
+	// it, except for CBr4 and CH2ClBr, whose coefficients carry another
+	// value and whose ΔHf°298 is set here, S°298 and Cp staying the
+	// coefficients'). These replace the NASA/TP-2002-211556 records of
+	// CH2Br2, CHBr3 and CBr4 (Kudchadker 1975: −14.77, 16.74, 79.5 kJ/mol),
+	// which lie 17.9, 30.6 and 22.5 kJ/mol below the ATcT values and made
+	// each Cl→Br step into a pure bromide 20–45 kJ/mol smaller than the
+	// others; with ATcT every Cl→Br step of the series is +45 to +58 kJ/mol
+	// (CH2Cl2 → CH2ClBr → CH2Br2: +50.0, +47.8; CHCl2Br is not entered, CHClBr2
+	// → CHBr3 +50.3; CCl3Br → CCl2Br2 → CClBr3 → CBr4: +45.5, +49.6, +49.0).
+	// Not entered: CHCl2Br, CHF2Br, CHFClBr (not read from the database), the
+	// CBr3, CFCl2 and CF2Cl radicals (published values spread by 30 kJ/mol
+	// or more), CH2Br and CHBr2. ---
+	{name: "CH2Br2", smiles: "BrCBr", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{6.73007714e+00, 5.54767619e-03, -1.98600141e-06, 3.19869628e-10, -1.91178669e-14, -2.20551217e+03, -5.41565857e+00},
+		lo:     [7]float64{3.02310767e+00, 1.25120467e-02, 1.10912051e-06, -1.30810290e-08, 7.02925787e-12, -1.07188573e+03, 1.43841202e+01},
+		source: srcGBR + " (dibromomethane; ΔHf°298 3.10 ± 1.15 kJ/mol (ATcT))"},
+	{name: "CHBr3", smiles: "BrC(Br)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{9.33702350e+00, 3.32595225e-03, -1.21194327e-06, 1.97616744e-10, -1.19155492e-14, 2.46541883e+03, -1.50773866e+01},
+		lo:     [7]float64{3.64744682e+00, 2.37778637e-02, -2.97514832e-05, 1.82750488e-08, -4.31214235e-12, 3.78290714e+03, 1.30919213e+01},
+		source: srcGBR + " (bromoform; ΔHf°298 47.38 ± 1.24 kJ/mol (ATcT))"},
+	{name: "CBr4", smiles: "BrC(Br)(Br)Br", mult: 1, hf298: 102010, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
+		hi:     [7]float64{1.21245741e+01, 9.15750324e-04, -3.63156485e-07, 6.25001719e-11, -3.90854515e-15, 1.04626368e+04, -2.67954406e+01},
+		lo:     [7]float64{5.10358598e+00, 3.39593343e-02, -6.24045027e-05, 5.36483603e-08, -1.75710183e-11, 1.17592386e+04, 6.21074038e+00},
+		source: srcGBR + " (tetrabromomethane; ΔHf°298 102.01 ± 1.05 kJ/mol (ATcT), the compilation's selected value (its coefficients carry Martin & Burcat's 119.2))"},
+	{name: "CH2ClBr", smiles: "ClCBr", mult: 1, hf298: -44690, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
+		hi:     [7]float64{6.45766631e+00, 5.81973597e-03, -2.09076716e-06, 3.37548946e-10, -2.02083169e-14, -7.75335522e+03, -4.65061231e+00},
+		lo:     [7]float64{3.06179014e+00, 1.04875513e-02, 6.19810183e-06, -1.78894783e-08, 8.64601075e-12, -6.63083008e+03, 1.39041403e+01},
+		source: srcGBR + " (bromochloromethane; ΔHf°298 -44.69 ± 5.4 kJ/mol (ATcT; the compilation's coefficients carry its G3B3 -43.47))"},
+	{name: "CH2FBr", smiles: "FCBr", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{5.95777707e+00, 6.32499431e-03, -2.28672921e-06, 3.70769207e-10, -2.22636839e-14, -2.79869028e+04, -3.41283857e+00},
+		lo:     [7]float64{3.57972287e+00, 3.57449131e-03, 2.30359537e-05, -3.39966418e-08, 1.41510216e-11, -2.69172958e+04, 1.10158218e+01},
+		source: srcGBR + " (bromofluoromethane; ΔHf°298 -212.42 ± 5.4 kJ/mol (ATcT))"},
+	{name: "CHClBr2", smiles: "ClC(Br)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{9.18256568e+00, 3.49092778e-03, -1.27783031e-06, 2.08983143e-10, -1.26268266e-14, -3.57420380e+03, -1.46434839e+01},
+		lo:     [7]float64{3.27786581e+00, 2.41939516e-02, -2.92521273e-05, 1.72039099e-08, -3.83158053e-12, -2.18119112e+03, 1.47186253e+01},
+		source: srcGBR + " (dibromochloromethane; ΔHf°298 -2.95 ± 5.4 kJ/mol (ATcT))"},
+	{name: "CHFBr2", smiles: "FC(Br)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{8.69321713e+00, 3.98144606e-03, -1.46735581e-06, 2.41050298e-10, -1.46087266e-14, -2.47328271e+04, -1.34380772e+01},
+		lo:     [7]float64{3.20834787e+00, 2.03546297e-02, -1.83950640e-05, 6.24105488e-09, 2.47805403e-14, -2.32998593e+04, 1.45308790e+01},
+		source: srcGBR + " (dibromofluoromethane; ΔHf°298 -179.5 ± 5.4 kJ/mol (ATcT))"},
+	{name: "CF2ClBr", smiles: "FC(F)(Cl)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{1.07966238e+01, 2.26676279e-03, -8.90038695e-07, 1.52198147e-10, -9.47616870e-15, -5.69394126e+04, -2.48667347e+01},
+		lo:     [7]float64{2.10552027e+00, 3.56772138e-02, -5.28319040e-05, 3.84797478e-08, -1.11145080e-11, -5.50004605e+04, 1.77301712e+01},
+		source: srcGBR + " (bromochlorodifluoromethane (Halon 1211); ΔHf°298 -442.19 ± 5.4 kJ/mol (ATcT))"},
+	{name: "CFCl2Br", smiles: "FC(Cl)(Cl)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{1.13142710e+01, 1.74468704e-03, -6.87507590e-07, 1.17837300e-10, -7.34842454e-15, -3.26782355e+04, -2.60573217e+01},
+		lo:     [7]float64{2.46597824e+00, 3.92621592e-02, -6.51437480e-05, 5.21389235e-08, -1.62413736e-11, -3.08617318e+04, 1.64933116e+01},
+		source: srcGBR + " (bromodichlorofluoromethane; ΔHf°298 -239.97 ± 5.4 kJ/mol (ATcT))"},
+	{name: "CCl3Br", smiles: "ClC(Cl)(Cl)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{1.17792181e+01, 1.27390888e-03, -5.04454158e-07, 8.67357113e-11, -5.42061783e-15, -8.92364015e+03, -2.96725728e+01},
+		lo:     [7]float64{2.84079870e+00, 4.25731396e-02, -7.69558424e-05, 6.54733701e-08, -2.13014780e-11, -7.23848711e+03, 1.25267742e+01},
+		source: srcGBR + " (bromotrichloromethane; ΔHf°298 -42.07 ± 0.82 kJ/mol (ATcT))"},
+	{name: "CFClBr2", smiles: "FC(Cl)(Br)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{1.14527933e+01, 1.60165393e-03, -6.31223530e-07, 1.08199310e-10, -6.74777985e-15, -2.63654329e+04, -2.52535363e+01},
+		lo:     [7]float64{3.19541516e+00, 3.69113804e-02, -6.18317206e-05, 4.99000367e-08, -1.56504364e-11, -2.46819740e+04, 1.43905762e+01},
+		source: srcGBR + " (dibromochlorofluoromethane; ΔHf°298 -187.44 ± 5.4 kJ/mol (ATcT))"},
+	{name: "CCl2Br2", smiles: "ClC(Cl)(Br)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{1.19534671e+01, 1.09444301e-03, -4.33949662e-07, 7.46764472e-11, -4.66969471e-15, -3.46182866e+03, -2.63645603e+01},
+		lo:     [7]float64{3.47890647e+00, 4.14639981e-02, -7.71493872e-05, 6.70459528e-08, -2.21555030e-11, -1.91288551e+03, 1.33777437e+01},
+		source: srcGBR + " (dibromodichloromethane; ΔHf°298 3.39 ± 1.43 kJ/mol (ATcT))"},
+	{name: "CF2Br2", smiles: "FC(F)(Br)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{1.09382687e+01, 2.12037940e-03, -8.32403094e-07, 1.42324890e-10, -8.86069092e-15, -5.00049177e+04, -2.47517671e+01},
+		lo:     [7]float64{2.86773869e+00, 3.32789929e-02, -4.96372935e-05, 3.65111014e-08, -1.06608303e-11, -4.82071978e+04, 1.47813777e+01},
+		source: srcGBR + " (dibromodifluoromethane (Halon 1202); ΔHf°298 -384.5 ± 1.33 kJ/mol (ATcT))"},
+	{name: "CClBr3", smiles: "ClC(Br)(Br)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{1.20556145e+01, 9.88123508e-04, -3.91913458e-07, 6.74560817e-11, -4.21876873e-15, 2.50679458e+03, -2.65548046e+01},
+		lo:     [7]float64{4.24224713e+00, 3.84130925e-02, -7.18290877e-05, 6.26374080e-08, -2.07485981e-11, 3.92645675e+03, 1.00410875e+01},
+		source: srcGBR + " (tribromochloromethane; ΔHf°298 53.03 ± 1.5 kJ/mol (ATcT))"},
+	{name: "CFBr3", smiles: "FC(Br)(Br)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{1.15902445e+01, 1.45760167e-03, -5.74056035e-07, 9.83587024e-11, -6.13236876e-15, -1.97278365e+04, -2.54447111e+01},
+		lo:     [7]float64{3.96251596e+00, 3.50682619e-02, -6.07742020e-05, 5.06033152e-08, -1.62938746e-11, -1.82074135e+04, 1.09721334e+01},
+		source: srcGBR + " (tribromofluoromethane; ΔHf°298 -132.3 ± 1.5 kJ/mol (ATcT))"},
 
 	// halomethyl radicals, CH2FCl, formyl halides and COFCl
 	{name: "CCl3", smiles: "Cl[C](Cl)Cl", mult: 2, hf298: 71128, tLow: 200, tMid: 1000, tHigh: 3500,

@@ -227,7 +227,7 @@ func (e entry) poly() (nasa.NASA7, error) {
 }
 
 // resolve fills hf298 and s298 where the entry takes them from its
-// coefficients: S°298 of NASA-9 entries, both values of implied entries.
+// coefficients: S°298 of NASA-9 and sImplied entries, both values of implied entries.
 func (e *entry) resolve() {
 	switch {
 	case e.n9 != nil:
@@ -235,6 +235,9 @@ func (e *entry) resolve() {
 	case e.implied:
 		p := nasa.NASA7{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh, Low: e.lo, High: e.lo}
 		e.hf298, e.s298 = p.H(nasa.Tref), p.S(nasa.Tref)
+	case e.sImplied:
+		p := nasa.NASA7{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh, Low: e.lo, High: e.lo}
+		e.s298 = p.S(nasa.Tref)
 	}
 }
 
