@@ -21,9 +21,12 @@ import (
 //     alkene carbon. It does not: substituent effects on ketenes follow the
 //     substituent's electronegativity, by σ donation to the ketene moiety,
 //     and differ from those on alkenes and allenes (Gong, McAllister &
-//     Tidwell, J. Am. Chem. Soc. 113 (1991) 6021, abstract). Such an
-//     estimate is flagged, once per carbon substituent, and its ΔHf°
-//     uncertainty widened by widenKeteneEnd per substituent.
+//     Tidwell, J. Am. Chem. Soc. 113 (1991) 6021, abstract). Each carbon
+//     substituent there adds the correction nni:ketene-end C
+//     (corrections.tsv, derived on alkyl ketenes). A substituent other than
+//     an sp3 carbon (vinyl, aryl, carbonyl …), for which it was not derived,
+//     is flagged, once per ketene end, and its ΔHf° uncertainty widened by
+//     widenKeteneEnd per such substituent.
 //   - A ketene whose CR2 end carries a heteroatom (O, N, S, halogen): the
 //     alkene groups Cd-(O)(H) … carry the π donation that stabilises an
 //     enol ether or enamine, while the same electronegative substituents
@@ -40,21 +43,30 @@ import (
 // nameable group a `group` statement could supply, so it is a thermo block.
 
 // keteneEndSuffix ends the name of the flag on the CR2 end of a ketene with
-// carbon substituents, one flag per ketene end: "1 carbon substituent on
-// the CR2 end of a ketene", "2 carbon substituents …" (keteneEndFlag).
+// unsaturated carbon substituents, one flag per ketene end: "1 unsaturated
+// carbon substituent on the CR2 end of a ketene", "2 unsaturated carbon
+// substituents …" (keteneEndFlag).
 const keteneEndSuffix = " on the CR2 end of a ketene"
 
 // cumuleneSuffix ends the name of the flag on a chain of adjacent allene
 // centres, one flag per chain: "2 adjacent allene centres …" (cumuleneFlag).
 const cumuleneSuffix = " adjacent allene centres (a chain of cumulated double bonds)"
 
-// keteneEndFlag is the flag name for n carbon substituents on one ketene end.
+// keteneEndFlag is the flag name for n unsaturated carbon substituents on
+// one ketene end.
 func keteneEndFlag(n int) string {
 	if n == 1 {
-		return "1 carbon substituent" + keteneEndSuffix
+		return "1 unsaturated carbon substituent" + keteneEndSuffix
 	}
-	return fmt.Sprintf("%d carbon substituents%s", n, keteneEndSuffix)
+	return fmt.Sprintf("%d unsaturated carbon substituents%s", n, keteneEndSuffix)
 }
+
+// keteneEndKey is the correction per carbon substituent on the CR2 end of
+// a ketene (corrections.tsv); keteneEndName names its term.
+const (
+	keteneEndKey  = "nni:ketene-end C"
+	keteneEndName = "carbon substituent on a ketene end"
+)
 
 // cumuleneFlag is the flag name for a chain of k adjacent allene centres.
 func cumuleneFlag(k int) string { return fmt.Sprintf("%d%s", k, cumuleneSuffix) }
@@ -72,14 +84,12 @@ func flagCount(group, suffix string) (int, bool) {
 	return n, true
 }
 
-// widenKeteneEnd (kcal/mol) widens the ΔHf° uncertainty per carbon
-// substituent on the CR2 end of a ketene. The substituents of one ketene err
-// alike, so the widening adds linearly over them (uncertainty): 3 kcal/mol
-// for methylketene, 6 for dimethylketene. Its size is that of the bias a
-// tester reported for methyl- and dimethylketene against the CCSD(T)/G2
-// values of Nguyen & Nguyen, Chem. Phys. Lett. 300 (1999) 346 (3.0 and
-// 5.7 kcal/mol, both estimates too negative; testdata/thermo/nsx.tsv): it
-// sizes the uncertainty only; no group value was changed to match them.
+// widenKeteneEnd (kcal/mol) widens the ΔHf° uncertainty per unsaturated
+// carbon substituent on the CR2 end of a ketene, for which the alkyl-derived
+// correction is not checked. The substituents of one ketene err alike, so
+// the widening adds linearly over them (uncertainty). Its size is the whole
+// alkyl correction (2.9 kcal/mol, rounded up): with no molecule to check
+// it, the correction may not apply at all.
 const widenKeteneEnd = 3.0
 
 // thermoBlockRoute ends a refusal for which no group statement can help
@@ -166,12 +176,13 @@ func heteroSubstituents(m *molecule.Molecule, c, k int) string {
 	return strings.Join(els, ", ")
 }
 
-// addCumulatedFlags flags the stand-ins of substituted ketenes (one flag
-// per ketene end with carbon substituents, naming the alkene group used and
-// their number) and of cumulenes (one flag per chain of allene centres
-// double-bonded to each other, with its length). g is the closed-shell
-// parent graph; keteneRefusal has passed.
-func addCumulatedFlags(g *graph, est *Result) {
+// addCumulatedFlags adds the ketene-end correction per carbon substituent
+// on the CR2 end of a ketene, flags its unsaturated substituents (one flag
+// per ketene end, naming the alkene group used and their number) and flags
+// cumulenes (one flag per chain of allene centres double-bonded to each
+// other, with its length). g is the closed-shell parent graph;
+// keteneRefusal has passed.
+func addCumulatedFlags(g *graph, l lookup, est *Result) {
 	var seen []bool // allene centres already in a reported chain
 	for i := range g.m.Atoms {
 		switch g.typ[i] {
@@ -189,20 +200,29 @@ func addCumulatedFlags(g *graph, est *Result) {
 			if !ok {
 				continue
 			}
-			n := 0
+			n, unsaturated := 0, 0
 			for _, x := range g.nbr[j] {
 				if x != i && g.m.Atoms[x].Element == "C" {
 					n++
+					if g.typ[x] != "C" {
+						unsaturated++
+					}
 				}
 			}
 			if n == 0 {
 				continue
 			}
+			t := term(l.corrections[keteneEndKey], n)
+			t.Name = keteneEndName
+			est.Corrections = append(est.Corrections, t)
+			if unsaturated == 0 {
+				continue
+			}
 			est.Missing = append(est.Missing, Missing{
-				Group:         keteneEndFlag(n),
-				Approximation: groupName(centre, counts) + " (the alkene value)",
-				Note: "the ketene group Ck was derived from ketene CH2=C=O, and a substituent does not stabilise the CR2 end of a ketene as it does an alkene carbon " +
-					"(methyl- and dimethylketene come out about 3 kcal/mol per methyl too negative against computed values); give the species a thermo block for a better value",
+				Group:         keteneEndFlag(unsaturated),
+				Approximation: groupName(centre, counts) + " (the alkene value) with the ketene-end correction derived on alkyl ketenes",
+				Note: "a substituent does not stabilise the CR2 end of a ketene as it does an alkene carbon; the correction for it was derived on methyl and ethyl groups, " +
+					"and no ketene with an unsaturated substituent checks it; give the species a thermo block for a better value",
 			})
 		case "Ca":
 			if seen != nil && seen[i] {

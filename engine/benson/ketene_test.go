@@ -26,41 +26,47 @@ func flagsOf(t *testing.T, e *Result, suffix string) ([]Missing, int) {
 }
 
 // A ketene whose CR2 end carries carbon substituents takes the alkene group
-// there: flagged once, naming the alkene group used and the number of
-// substituents, and its
-// ΔHf° uncertainty widened by widenKeteneEnd per substituent, added
-// linearly. Ketene itself, from which Ck was derived, is not flagged. The
-// result does not depend on the spelling.
-func TestSubstitutedKeteneFlag(t *testing.T) {
+// there and the correction nni:ketene-end C once per carbon substituent; the
+// unsaturated substituents among them (vinyl, aryl) are flagged once per
+// ketene end, naming the alkene group used, and widen the ΔHf° uncertainty
+// by widenKeteneEnd each; every substituent widens it by widenKeteneEndFit.
+// Ketene itself, from which Ck was derived, has neither. The result does not
+// depend on the spelling.
+func TestSubstitutedKeteneEnd(t *testing.T) {
 	cases := []struct {
-		spellings []string
-		subs      int
-		group     string // the alkene group of the CR2 end
+		spellings         []string
+		subs, unsaturated int
+		group             string // the alkene group of the CR2 end
 	}{
-		{[]string{"C=C=O", "O=C=C"}, 0, "Cd-(H)2"},
-		{[]string{"CC=C=O", "O=C=CC", "C(=C=O)C"}, 1, "Cd-(C)(H)"},
-		{[]string{"CC(C)=C=O", "O=C=C(C)C", "C(C)(C)=C=O"}, 2, "Cd-(C)2"},
-		{[]string{"CCC=C=O", "O=C=CCC"}, 1, "Cd-(C)(H)"},
-		{[]string{"O=C=Cc1ccccc1", "O=C=CC1=CC=CC=C1", "c1cccc(C=C=O)c1"}, 1, "Cd-(Cb)(H)"},
-		{[]string{"C=CC=C=O", "O=C=CC=C"}, 1, "Cd-(Cd)(H)"},
+		{[]string{"C=C=O", "O=C=C"}, 0, 0, "Cd-(H)2"},
+		{[]string{"CC=C=O", "O=C=CC", "C(=C=O)C"}, 1, 0, "Cd-(C)(H)"},
+		{[]string{"CC(C)=C=O", "O=C=C(C)C", "C(C)(C)=C=O"}, 2, 0, "Cd-(C)2"},
+		{[]string{"CCC=C=O", "O=C=CCC"}, 1, 0, "Cd-(C)(H)"},
+		{[]string{"O=C=Cc1ccccc1", "O=C=CC1=CC=CC=C1", "c1cccc(C=C=O)c1"}, 1, 1, "Cd-(Cb)(H)"},
+		{[]string{"C=CC=C=O", "O=C=CC=C"}, 1, 1, "Cd-(Cd)(H)"},
 	}
 	for _, c := range cases {
 		var first *Result
 		for _, smi := range c.spellings {
 			e := heteroEstimate(t, smi)
 			assert.Contains(t, groupNames(e), c.group, smi)
+			got := 0
+			for _, k := range e.Corrections {
+				if k.Name == keteneEndName {
+					got += k.Count
+				}
+			}
+			assert.Equal(t, c.subs, got, "%s: one correction per carbon substituent: %v", smi, e.Corrections)
 			flags, n := flagsOf(t, e, keteneEndSuffix)
-			require.Equal(t, c.subs, n, "%s: the flag counts the carbon substituents: %v", smi, e.Missing)
-			if c.subs > 0 {
+			require.Equal(t, c.unsaturated, n, "%s: the flag counts the unsaturated substituents: %v", smi, e.Missing)
+			if c.unsaturated > 0 {
 				require.Len(t, flags, 1, "%s: one flag per ketene end", smi)
-				assert.Equal(t, c.group+" (the alkene value)", flags[0].Approximation, smi)
-				assert.Equal(t, keteneEndFlag(c.subs), flags[0].Group, smi)
+				assert.Equal(t, keteneEndFlag(c.unsaturated), flags[0].Group, smi)
 			}
 			base := maeToSigma * classError(e.Class)
-			want := math.Hypot(base, widenKeteneEnd*float64(c.subs))
-			assert.InDelta(t, want, e.Uncertainty/calorie/1000, 1e-9, "%s: class σ and %d × %.1f kcal/mol", smi, c.subs, widenKeteneEnd)
-			if c.subs > 0 {
-				assert.GreaterOrEqual(t, e.Uncertainty/calorie/1000, 3.0*float64(c.subs), smi)
+			want := math.Sqrt(base*base + math.Pow(widenKeteneEnd*float64(c.unsaturated), 2) + math.Pow(widenKeteneEndFit*float64(c.subs), 2))
+			if len(e.Missing) == len(flags) {
+				assert.InDelta(t, want, e.Uncertainty/calorie/1000, 1e-9, "%s", smi)
 			}
 			if first == nil {
 				first = e
@@ -71,25 +77,33 @@ func TestSubstitutedKeteneFlag(t *testing.T) {
 	}
 }
 
-// The ketene rows of the validation table (computed values, not counted in
-// its MAE) are estimated with the ketene-end flag, and the widened
-// uncertainty covers their difference from the reference at 2σ.
-func TestKeteneRowsFlagged(t *testing.T) {
-	n := 0
+// TestKeteneEndFit: nni:ketene-end C is the least-squares correction over
+// dimethylketene (nsx.tsv train row) and ethylketene (−21.105 kcal/mol, G3B3,
+// Goos, Burcat & Ruscic database 2015; corrections.tsv header): the residuals
+// weighted by the substituent counts sum to zero, to the table's rounding.
+// Held-out methylketene then lies within its widened 2σ.
+func TestKeteneEndFit(t *testing.T) {
+	dmk := heteroEstimate(t, "CC(C)=C=O")
+	ek := heteroEstimate(t, "CCC=C=O")
+	var dmkRef float64
 	for _, r := range readHeteroRef(t) {
-		if r.class != "ketene" {
+		if r.name == "dimethylketene" {
+			dmkRef = r.hf
+		}
+	}
+	require.NotZero(t, dmkRef)
+	normal := 2*(dmk.Hf298/calorie/1000-dmkRef) + (ek.Hf298/calorie/1000 - -21.105)
+	assert.InDelta(t, 0, normal, 0.03, "Σ count × residual (kcal/mol): not the least-squares value")
+	for _, r := range readHeteroRef(t) {
+		if r.name != "methylketene" {
 			continue
 		}
-		n++
+		require.Equal(t, "heldout", r.split)
 		e := heteroEstimate(t, r.smiles)
-		flags, _ := flagsOf(t, e, keteneEndSuffix)
-		assert.Len(t, flags, 1, "%s must be flagged", r.name)
 		d := e.Hf298/calorie/1000 - r.hf
-		u := e.Uncertainty / calorie / 1000
-		t.Logf("%-16s estimate %7.2f ± %.2f kcal/mol, reference %7.2f, difference %+.2f (%.1fσ)", r.name, e.Hf298/calorie/1000, u, r.hf, d, math.Abs(d)/u)
-		assert.LessOrEqual(t, math.Abs(d), 2*u, "%s: off by %.2f kcal/mol, beyond 2σ = %.2f", r.name, d, 2*u)
+		t.Logf("methylketene: estimate %+.2f kcal/mol from its (computed) reference, 1σ %.2f", d, e.Uncertainty/calorie/1000)
+		assert.LessOrEqual(t, math.Abs(d), 2*e.Uncertainty/calorie/1000)
 	}
-	assert.Equal(t, 2, n, "methylketene and dimethylketene rows")
 }
 
 // Ketene-type carbons no group describes are refused: the message names the
