@@ -31,7 +31,7 @@ func TestKeteneRefusalRouteInCommands(t *testing.T) {
 		assert.NotContains(t, out, "ketene carbon", r.smiles)
 		file.WriteString("species " + r.name + " " + r.smiles + "\n")
 	}
-	file.WriteString("species MEKET CC=C=O\nspecies C4H4 C=C=C=C\n")
+	file.WriteString("species VIKET C=CC=C=O\nspecies C4H4 C=C=C=C\n")
 	_, stdout, stderr := runKiln(t, "check", writeTemp(t, "ketenes.kiln", file.String()))
 	out := stdout + stderr
 	for _, r := range refused {
@@ -44,6 +44,6 @@ func TestKeteneRefusalRouteInCommands(t *testing.T) {
 		}
 		assert.Contains(t, out, " "+r.name+" has no thermo block and kiln cannot estimate it", r.name)
 	}
-	assert.Contains(t, out, "MEKET: estimated with an approximation kiln has no data for: 1 carbon substituent on the CR2 end of a ketene (approximated by Cd-(C)(H)")
+	assert.Contains(t, out, "VIKET: estimated with an approximation kiln has no data for: 1 unsaturated carbon substituent on the CR2 end of a ketene (approximated by Cd-(Cd)(H)")
 	assert.Contains(t, out, "C4H4: estimated with an approximation kiln has no data for: 2 adjacent allene centres")
 }

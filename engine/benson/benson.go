@@ -281,7 +281,7 @@ func estimateForm(m *molecule.Molecule, opts Options) (*Result, error) {
 	addCrowdingFlags(g, est)  // bias.go
 	addAzineRingFlags(g, est) // bias.go
 	addHalogenFlags(g, tab, est)
-	addAzineFlags(g, tab, est) // hetero_n.go
+	addAzineFlags(g, tab, est)     // hetero_n.go
 	addCumulatedFlags(g, tab, est) // ketene.go
 	if unpaired > 0 {
 		if err := addHBI(m, g, tab, est); err != nil {
