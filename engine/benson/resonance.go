@@ -222,6 +222,11 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 		return estimateForm(m, opts)
 	}
 	forms, capped := resonanceForms(m, maxResonanceForms)
+	if paired, ok := pairedStructure(forms); ok {
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("its unpaired electrons pair up: a resonance structure puts two of them on bonded atoms, "+
+			"so the species is the closed-shell molecule %s (or a singlet diradical of it), not %d independent radical sites; "+
+			"estimate that structure, or give the species a thermo block", paired, m.UnpairedElectrons())}
+	}
 	if len(forms) == 1 {
 		est, err := estimateForm(m, opts)
 		var mg *MissingGroupError
@@ -422,4 +427,45 @@ func ResonanceStructures(m *molecule.Molecule) (forms []*molecule.Molecule, capp
 		forms = all
 	}
 	return forms, capped
+}
+
+// pairedStructure looks, among the resonance structures of a radical, for
+// one with unpaired electrons on two bonded atoms joined by a single or
+// double bond: those electrons pair into one more bond (p-benzoquinone for
+// the "diradical" [O]c1ccc([O])cc1, butadiene for [CH2]C=C[CH2]), so the
+// written structure is a Kekulé-type diradical, not the independent radical
+// sites group additivity sums. It returns the canonical SMILES of the
+// structure with every such pair bonded (the smallest one, so that the
+// answer does not depend on the spelling) and true, or false when no
+// structure pairs (trimethylenemethane, m-xylylene: non-Kekulé diradicals).
+func pairedStructure(forms []*molecule.Molecule) (string, bool) {
+	best := ""
+	for _, f := range forms {
+		orders, radicals := map[int]int{}, map[int]int{}
+		for b, bond := range f.Bonds {
+			x, y := bond.A, bond.B
+			if bond.Order > 2 || bond.Aromatic || f.Atoms[x].Radical != 1 || f.Atoms[y].Radical != 1 {
+				continue
+			}
+			if _, done := radicals[x]; done {
+				continue
+			}
+			if _, done := radicals[y]; done {
+				continue
+			}
+			orders[b] = bond.Order + 1
+			radicals[x], radicals[y] = 0, 0
+		}
+		if len(orders) == 0 {
+			continue
+		}
+		p, err := f.WithBondOrders(orders, radicals)
+		if err != nil {
+			continue
+		}
+		if c := p.Canonical(); best == "" || c < best {
+			best = c
+		}
+	}
+	return best, best != ""
 }
