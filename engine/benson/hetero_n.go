@@ -603,7 +603,12 @@ func (g *graph) inAzineRing(a int) bool {
 // amine groups differ by about 20 kcal/mol (N-(CO)(H)2 −14.9 against
 // N-(C)(H)2 +4.8, Benson 1976 Table A.3, groups_nsx.tsv), so an amide
 // nitrogen group without a value (N-(CO)(C)2 of N,N-dialkylamides) is
-// refused, naming it, rather than estimated as an amine nitrogen.
+// refused, naming it, rather than estimated as an amine nitrogen. Nor is
+// an O neighbour of an O centre like a C one: the peroxide groups already
+// differ from the ether groups by some 18 kcal/mol (O-(O)(C) −4.5 against
+// O-(C)2 −23.2, groups.tsv), and a third O in a row (trioxides, ozone
+// written as a chain) is less stable again, so the middle O of O–O–O,
+// O-(O)2, is refused, naming it: its O→C stand-in put HOOOH below HOOH.
 func noStandIn(centre, lig string) bool {
-	return centre == "N" && lig == "CO"
+	return centre == "N" && lig == "CO" || centre == "O" && lig == "O"
 }
