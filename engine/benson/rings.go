@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"slices"
 	"strings"
+
+	"kiln.dev/kiln/internal/wording"
 )
 
 // carboFewer names the known all-carbon ring of size n with the most double
@@ -160,6 +162,14 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 	}
 	if key == "" && oxy == 0 {
 		key = g.sulfurRingKey(r, nd, aromatic) // hetero_sx.go
+	}
+	if key != "" && carbonyl > 0 {
+		// A lactone, cyclic anhydride or carbonate (or their S analogues):
+		// the ether ring's correction was derived without a ring carbonyl,
+		// which changes the ring's strain and conformation (γ-butyrolactone
+		// comes out about 3 kcal/mol low with tetrahydrofuran's). It is
+		// used as the approximation, flagged.
+		return fmt.Sprintf("%s ring with %s", key, wording.Count(carbonyl, "ring carbonyl")), key
 	}
 	if key == "" && oxy == 0 && carbonyl == 0 {
 		key = g.nitrogenRingKey(r, nd, aromatic) // hetero_n.go
