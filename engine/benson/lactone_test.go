@@ -31,3 +31,15 @@ func TestCarbonylEtherRingFlagged(t *testing.T) {
 		assert.False(t, strings.HasPrefix(m.Group, "ring"), "tetrahydrofuran: %v", m)
 	}
 }
+
+// TestQuinoneWidened: a carbocycle with ring carbonyls and ring C=C bonds
+// (p-benzoquinone, 15.6 kcal/mol low) is widened by widenQuinone; a
+// saturated cycloalkanone with its own ring correction is not.
+func TestQuinoneWidened(t *testing.T) {
+	q := estimate(t, "O=C1C=CC(=O)C=C1", Options{})
+	assert.GreaterOrEqual(t, q.Uncertainty/calorie/1000, widenQuinone)
+	c := estimate(t, "O=C1CCCC1", Options{})
+	assert.Less(t, c.Uncertainty/calorie/1000, widenRing)
+	assert.True(t, quinoneRing("ring:C6 ring with 2 ring carbonyls, 2 double bonds"))
+	assert.False(t, quinoneRing("ring:C4 ring with 1 ring carbonyls, 0 double bonds"))
+}
