@@ -162,10 +162,10 @@ func (m *Molecule) symmetryInfo(ctx context.Context, budget int) (symmetryInfo, 
 		info = m.symmetryCtx(ctx, budget, true)
 	}
 	if err := ctx.Err(); err != nil {
-		return info, fmt.Errorf("symmetry of %q: %w", m.SMILES, err)
+		return info, fmt.Errorf("symmetry of %s: %w", shortSMILES(m.SMILES), err)
 	}
 	if !info.exact {
-		return info, fmt.Errorf("symmetry of %q: %w (more than %d refinement steps)", m.SMILES, ErrWorkLimit, budget)
+		return info, fmt.Errorf("symmetry of %s: %w (more than %d refinement steps)", shortSMILES(m.SMILES), ErrWorkLimit, budget)
 	}
 	return info, nil
 }
@@ -1714,4 +1714,15 @@ func (r *parityRelations) find(x int) (root, parity int) {
 		x = r.par[x]
 	}
 	return x, parity
+}
+
+// shortSMILES quotes a SMILES for a message, cut to its first 60 characters
+// (and the total length) when longer: the user wrote it, and a message that
+// repeats a long input buries its reason.
+func shortSMILES(s string) string {
+	const keep = 60
+	if r := []rune(s); len(r) > keep {
+		return fmt.Sprintf("%q… (%d characters)", string(r[:keep]), len(r))
+	}
+	return fmt.Sprintf("%q", s)
 }
