@@ -61,11 +61,23 @@ func newGraph(m *molecule.Molecule) *graph {
 			}
 		}
 		g.benzRing[ri] = benz
-		if benz {
-			for k, a := range r {
-				g.benzAtom[a]++
-				g.benzBond[g.bondBetween(a, r[(k+1)%len(r)])] = true
-			}
+	}
+	// Benzenoid rings are looked for among the relevant cycles, which do not
+	// depend on the spelling: in a bridged system (a benzene ring bridged
+	// across, as in a para-cyclophane-type ring) the SSSR may hold the
+	// benzene ring in one atom order and not in another, which changed the
+	// types of its atoms and so the groups (Cb or Cd neighbours).
+	cycles, complete := m.RelevantCycles()
+	if !complete || len(cycles) == 0 {
+		cycles = rings
+	}
+	for _, r := range cycles {
+		if !g.benzenoid(r) {
+			continue
+		}
+		for k, a := range r {
+			g.benzAtom[a]++
+			g.benzBond[g.bondBetween(a, r[(k+1)%len(r)])] = true
 		}
 	}
 	g.typ = make([]string, n)
@@ -171,3 +183,18 @@ func (g *graph) partner(i, order int) int {
 
 // isCarbon reports whether atom i is carbon of any type.
 func (g *graph) isCarbon(i int) bool { return g.m.Atoms[i].Element == "C" }
+
+// benzenoid reports whether cycle r is a six-membered ring of aromatic
+// carbons and azine nitrogens joined by aromatic bonds.
+func (g *graph) benzenoid(r []int) bool {
+	if len(r) != 6 {
+		return false
+	}
+	for k, a := range r {
+		b := g.bondBetween(a, r[(k+1)%len(r)])
+		if b < 0 || (g.m.Atoms[a].Element != "C" && !azineN(g.m, a)) || !g.m.Atoms[a].Aromatic || !g.m.Bonds[b].Aromatic {
+			return false
+		}
+	}
+	return true
+}

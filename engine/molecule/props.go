@@ -169,6 +169,15 @@ func (m *Molecule) HeavyAtoms() int {
 // RingSystemInfo instead. The slices are shared: do not modify them.
 func (m *Molecule) Rings() [][]int { return m.rings }
 
+// RelevantCycles returns the relevant cycles (the union of all minimum cycle
+// bases; each a cyclic atom sequence), which unlike the SSSR do not depend
+// on the spelling, and false when their enumeration stopped at its bound
+// (huge polycyclic systems), where the list is incomplete. The slices are
+// shared: do not modify them.
+func (m *Molecule) RelevantCycles() ([][]int, bool) {
+	return m.cycles, len(m.cycles) < maxRelevantCycles
+}
+
 // RingSystems returns the ring systems: sorted atom lists of SSSR rings joined
 // through shared bonds (fused or bridged). Spiro-joined rings are separate
 // systems that share one atom.
