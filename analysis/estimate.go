@@ -396,20 +396,34 @@ func BeyondBound(m benson.Missing) bool {
 }
 
 // FlagHeading is the word every command and the hover put before
-// FlagText: "MISSING group" for an approximation, "FLAGGED group" for a
-// group used as it stands with a known shortcoming (UsedAsItStands),
-// "UNPHYSICAL" for a sum beyond a physical bound (BeyondBound),
-// "APPROXIMATED" for a Cp kiln held below the classical limit (CpHeldGroup),
-// "MODELLED" for a quantity computed by a validated model instead of a
-// table (benson.Missing.Modelled), which check does not warn about.
+// FlagText: "MISSING" for an approximation, "FLAGGED" for a group used as
+// it stands with a known shortcoming (UsedAsItStands), "UNPHYSICAL" for a
+// sum beyond a physical bound (BeyondBound), "APPROXIMATED" for a Cp kiln
+// held below the classical limit (CpHeldGroup), "MODELLED" for a quantity
+// computed by a validated model instead of a table
+// (benson.Missing.Modelled), which check does not warn about. MISSING and
+// FLAGGED are followed by "group" when the flag names a Benson group
+// ("MISSING group C-(Cl)(C)(H)2"), not when it names an effect, a ring, a
+// site increment or an interaction ("MISSING steric crowding across O").
 func FlagHeading(f Flag) string {
-	return map[string]string{
+	h := map[string]string{
 		FlagModelled:     "MODELLED",
 		FlagUnphysical:   "UNPHYSICAL",
 		FlagApproximated: "APPROXIMATED",
-		FlagFlagged:      "FLAGGED group",
-		FlagMissing:      "MISSING group",
+		FlagFlagged:      "FLAGGED",
+		FlagMissing:      "MISSING",
 	}[FlagKind(f)]
+	if k := FlagKind(f); (k == FlagFlagged || k == FlagMissing) && IsGroupName(f.Missing.Group) {
+		h += " group"
+	}
+	return h
+}
+
+// IsGroupName reports whether s is a Benson group name kiln can read
+// (centre, then its neighbours: "C-(C)(H)3", "Ck", "Nb").
+func IsGroupName(s string) bool {
+	_, err := benson.ParseGroupName(s)
+	return err == nil
 }
 
 // The kinds of flag, as FlagKind names them (the JSON `flag_kinds` of

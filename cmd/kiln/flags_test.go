@@ -145,8 +145,8 @@ func TestFlagsAgreeAcrossCommands(t *testing.T) {
 
 // headed is a flag under the heading every surface gives it (FlagHeading):
 // MODELLED for a quantity a validated model computes, UNPHYSICAL for a sum
-// beyond a physical bound, FLAGGED group for a group used as it stands, else
-// MISSING group.
+// beyond a physical bound, FLAGGED for a group used as it stands, else
+// MISSING; "group" follows when the flag names a Benson group.
 func headed(flag string) string {
 	switch {
 	case modelled(flag):
@@ -155,9 +155,20 @@ func headed(flag string) string {
 		strings.HasPrefix(flag, "Cp at or above the classical limit"):
 		return "UNPHYSICAL " + flag
 	case strings.Contains(flag, " (used as it stands"):
-		return "FLAGGED group " + flag
+		return "FLAGGED" + groupWord(flag) + " " + flag
 	}
-	return "MISSING group " + flag
+	return "MISSING" + groupWord(flag) + " " + flag
+}
+
+// groupWord is " group" when the flag's subject (its text up to the first
+// " (" or " ×") is a Benson group name, as FlagHeading words it.
+func groupWord(flag string) string {
+	name, _, _ := strings.Cut(flag, " (")
+	name, _, _ = strings.Cut(name, " ×")
+	if analysis.IsGroupName(name) {
+		return " group"
+	}
+	return ""
 }
 
 // modelled reports whether a flag, as FlagText words it, is a quantity a
