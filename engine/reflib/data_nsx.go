@@ -429,6 +429,13 @@ var nsxEntries = []entry{
 			hi: [9]float64{-2.392612795e+06, 6.932793130e+03, -2.513183892e+00, 3.446544560e-03, -7.569536840e-07, 6.514291340e-11, -1.715768736e-15, -3.084499064e+04, 5.361048360e+01},
 		},
 		source: srcNASA9 + " (²Π ground state)"},
+	// Hypobromous acid, HOBr: ΔHf°298 −61.78 ± 0.54 kJ/mol (Active
+	// Thermochemical Tables), which its coefficients imply (H298/R =
+	// −7430.74 K); NASA/TP-2002-211556 has no record of it.
+	{name: "HOBr", smiles: "OBr", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{4.52559122e+00, 1.88368072e-03, -6.04303745e-07, 8.98998654e-11, -5.06961671e-15, -8.92977368e+03, 3.31036380e+00},
+		lo:     [7]float64{3.31731799e+00, 5.05328752e-03, -1.73682519e-06, -2.67712334e-09, 1.93314146e-12, -8.62468312e+03, 9.49126178e+00},
+		source: srcGBR + " (hypobromous acid; ΔHf°298: Active Thermochemical Tables)"},
 	// --- the bromomethanes and mixed bromohalomethanes, from Goos, Burcat &
 	// Ruscic's database with the Active Thermochemical Tables ΔHf°298 it
 	// gives for each (read from the entry's header; the coefficients imply

@@ -195,7 +195,7 @@ func TestLookupNSX(t *testing.T) {
 		// equilibrium mixtures of isomers and training rows of nsx.tsv are not entries
 		{"FC(F)=C", 0, ""}, {"ClC=CCl", 0, ""}, {"FC(F)=C(Cl)Cl", 0, ""}, {"FC(F)=C(F)F", 0, ""},
 		{"ClC(Cl)=C(Cl)Cl", 0, ""}, {"ClC=C(Cl)Cl", 0, ""}, {"C=CF", 0, ""}, {"C=CCl", 0, ""},
-		{"[CH2]Br", 0, ""}, {"Br[CH]Br", 0, ""}, {"OBr", 0, ""}, {"BrC(Br)Br", 3, ""},
+		{"[CH2]Br", 0, ""}, {"Br[CH]Br", 0, ""}, {"OBr", 0, "HOBr"}, {"BrC(Br)Br", 3, ""},
 		{"CCl", 3, ""}, {"CCCl", 0, ""},
 	}
 	for _, c := range cases {
