@@ -401,7 +401,8 @@ var nsxEntries = []entry{
 	// --- bromine, the bromomethanes, halomethyl radicals, CH2FCl, the formyl
 	// halides and COFCl, all NASA/TP-2002-211556 records as published.
 	// The compilation has no CH2Br or CHBr2 radical, no HOBr, HSO, N2H3, CH3NC
-	// and no C2 chlorofluorocarbon (CFC-113, -114, -115). BrO, CHF2, CH2FCl
+	// and no C2 chlorofluorocarbon (CFC-113, -114, -115); HOBr, HSO and N2H3
+	// come from Goos, Burcat & Ruscic's database (srcGBR). BrO, CHF2, CH2FCl
 	// and HCOF start at 300 K: below it their NASA-9 Cp
 	// bends more than one NASA-7 block follows within 0.5 % (a fit from 200 K
 	// is off by 0.50–0.62 % below 300 K; one from 300 K by at most 0.23 %). ---
