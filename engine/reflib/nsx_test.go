@@ -65,7 +65,8 @@ func TestNASA7Entered(t *testing.T) {
 // TestNASA9Refit checks the NASA-7 refit of every NASA-9 entry against the
 // NASA-9 Cp at every 50 K from 300 K to the top of its range: within 0.5 %
 // (the agreement the library asks of a polynomial with its table over
-// 300–3000 K in TestAgreesWithJANAF).
+// 300–3000 K in TestAgreesWithJANAF); and H and S from the bottom of its
+// range to the top, within 0.15 kJ/mol and 0.1 J/(mol K).
 func TestNASA9Refit(t *testing.T) {
 	lib := New()
 	byName := map[string]Species{}
@@ -85,6 +86,43 @@ func TestNASA9Refit(t *testing.T) {
 			}
 		}
 		assert.Less(t, worst, 0.005, "%s: NASA-7 refit Cp off by %.3g %% at %g K", e.name, 100*worst, at)
+		for T := e.tLow; T <= e.tHigh; T += 50 {
+			assert.InDelta(t, e.n9.h(T), s.Poly.H(T), 150, "%s: refit H at %g K", e.name, T)
+			assert.InDelta(t, e.n9.s(T), s.Poly.S(T), 0.1, "%s: refit S at %g K", e.name, T)
+		}
+	}
+}
+
+// TestOzoneEntry: ozone is entered from the O3 record of
+// NASA/TP-2002-211556 with the header's ΔHf°298, 141800 J/mol, which its low
+// block and b1 give back at 298.15 K; it is a singlet, found from its
+// charge-separated SMILES in either order and from the diradical chain
+// users type, and not as a triplet.
+func TestOzoneEntry(t *testing.T) {
+	var o3 *entry
+	for i := range nsxEntries {
+		if nsxEntries[i].name == "O3" {
+			o3 = &nsxEntries[i]
+		}
+	}
+	require.NotNil(t, o3, "O3 is a NASA-9 entry")
+	require.NotNil(t, o3.n9)
+	assert.Equal(t, 141800.0, o3.hf298, "header ΔHf°298 of the O3 record")
+	assert.InDelta(t, 141800, o3.n9.h(298.15), 5+1e-5*141800, "ΔHf°298 from the low block and b1")
+	assert.Equal(t, 1, o3.mult)
+	lib := New()
+	for _, smiles := range []string{"O=[O+][O-]", "[O-][O+]=O", "[O]O[O]"} {
+		m, err := molecule.ParseSMILES(smiles)
+		require.NoError(t, err, smiles)
+		for _, mult := range []int{0, 1} {
+			s, ok := lib.Lookup(m, mult)
+			if assert.True(t, ok, "%s ×%d", smiles, mult) {
+				assert.Equal(t, "O3", s.Name, smiles)
+				assert.InDelta(t, 141800, s.Hf298, 1e-6, smiles)
+			}
+		}
+		_, ok := lib.Lookup(m, 3)
+		assert.False(t, ok, "%s: no triplet ozone entry", smiles)
 	}
 }
 

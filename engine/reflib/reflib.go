@@ -6,15 +6,17 @@
 // (canonical SMILES; see structureKey) and spin multiplicity. It does no I/O.
 //
 // data_nsx.go adds nitrogen, sulfur and halogen (F, Cl, Br) species (among them
-// haloethylenes, haloacetylenes and their radicals), ketene, ketenyl, ethynyl and
-// carbon suboxide from NASA/TP-2002-211556 (NASA-9, refitted) and GRI-Mech 3.0.
+// haloethylenes, haloacetylenes and their radicals), ketene, ketenyl, ethynyl,
+// carbon suboxide and ozone from NASA/TP-2002-211556 (NASA-9, refitted) and
+// GRI-Mech 3.0.
 //
 // How the polynomials are built (see data.go): most entries store published
 // NASA-7 coefficient blocks whose a6, a7 are recomputed from the stored
 // ΔHf°298 and S°298; monatomic gases use Cp = 5/2 R; CH4 stores fundamental
 // frequencies and its tabulated rigid-rotor/harmonic-oscillator Cp(T) is
 // fitted with nasa.FitPoly when the library is built. Valid temperature
-// ranges are those of the source (200 or 300 K to 3500, 5000 or 6000 K).
+// ranges are those of the source (200 or 300 K to 3500, 5000 or 6000 K),
+// except where a NASA-9 refit stops lower (F2 at 3000 K, O3 at 2000 K).
 package reflib
 
 import (

@@ -123,7 +123,14 @@ func TestPolynomialsMatchStoredData(t *testing.T) {
 		assert.InDelta(t, s.S298, s.Poly.S(298.15), 1e-9, "%s S°298", s.Name)
 		assert.Empty(t, nasa.Check(s.Poly, nasa.DefaultTolerances(), 0), "%s", s.Name)
 		assert.NotEmpty(t, s.Source, s.Name)
-		assert.True(t, s.Poly.InRange(300) && s.Poly.InRange(3000), "%s range %v–%v", s.Name, s.Poly.TLow, s.Poly.THigh)
+		// Every entry covers 300–3000 K but O3, which stops at 2000 K: above
+		// about 2280 K its record's Cp exceeds the ceiling nasa.Check applies
+		// (data_nsx.go).
+		top := 3000.0
+		if s.Name == "O3" {
+			top = 2000
+		}
+		assert.True(t, s.Poly.InRange(300) && s.Poly.InRange(top), "%s range %v–%v", s.Name, s.Poly.TLow, s.Poly.THigh)
 	}
 }
 

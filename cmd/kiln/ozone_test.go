@@ -1,0 +1,24 @@
+package main
+
+import (
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+)
+
+// TestEstimateLibraryOzone: ozone, which kiln refused before it was a
+// reference-library entry (a charge-separated structure no group describes;
+// as the chain [O]O[O], the group O-(O)2, which has no value), comes from
+// the library under its charge-separated SMILES in either order and under
+// the diradical spelling, with the NASA/TP-2002-211556 header ΔHf°298
+// (141.8 kJ/mol), as a singlet. A triplet is refused, naming the entry.
+func TestEstimateLibraryOzone(t *testing.T) {
+	for _, smiles := range []string{"O=[O+][O-]", "[O-][O+]=O", "[O]O[O]"} {
+		assertLibraryEstimate(t, smiles, "O3", "(141.8 kJ/mol)")
+		_, out, _ := runKiln(t, "estimate", smiles)
+		assert.Contains(t, out, "reference library: O3 (tabulated data, not a group estimate), multiplicity 1", smiles)
+	}
+	code, out, stderr := runKiln(t, "estimate", "--multiplicity", "3", "[O]O[O]")
+	assert.Equal(t, exitProblems, code, out+stderr)
+	assert.Contains(t, out, "the reference library holds this structure only as O3, multiplicity 1")
+}
