@@ -621,10 +621,17 @@ func spinScope(m *molecule.Molecule) error {
 		return &UnsupportedError{Atom: best + 1, Reason: fmt.Sprintf("(%s) carries %d unpaired electrons (a carbene- or vinylidene-type centre): its spin states have no hydrogen-bond-increment data", a.Element, a.Radical)}
 	}
 	pair, at, first, second := "", 0, "", ""
-	for _, b := range m.Bonds {
+	orders, radicals := map[int]int{}, map[int]int{}
+	for bi, b := range m.Bonds {
 		x, y := m.Atoms[b.A], m.Atoms[b.B]
 		if x.Radical == 0 || y.Radical == 0 {
 			continue
+		}
+		if _, used := radicals[b.A]; !used && !b.Aromatic && b.Order < 3 {
+			if _, used := radicals[b.B]; !used {
+				orders[bi] = b.Order + 1
+				radicals[b.A], radicals[b.B] = x.Radical-1, y.Radical-1
+			}
 		}
 		i := b.A
 		if y.Element < x.Element {
@@ -635,7 +642,13 @@ func spinScope(m *molecule.Molecule) error {
 		}
 	}
 	if pair != "" {
-		return &UnsupportedError{Atom: at, Reason: fmt.Sprintf("(%s) and its %s neighbour both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data", first, second)}
+		reason := fmt.Sprintf("(%s) and its %s neighbour both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data", first, second)
+		if p, err := m.WithBondOrders(orders, radicals); err == nil && len(orders) > 0 {
+			// The canonical SMILES of the structure with the pairs bonded:
+			// the same for every spelling, and what the user most likely means.
+			reason += fmt.Sprintf("; paired into a bond they give the molecule %s", p.Canonical())
+		}
+		return &UnsupportedError{Atom: at, Reason: reason}
 	}
 	return nil
 }

@@ -32,9 +32,9 @@ func TestCarbonylEtherRingFlagged(t *testing.T) {
 	}
 }
 
-// TestQuinoneWidened: a carbocycle with ring carbonyls and ring C=C bonds
-// (p-benzoquinone, 15.6 kcal/mol low) is widened by widenQuinone; a
-// saturated cycloalkanone with its own ring correction is not.
+// TestQuinoneWidened: a carbocycle with two ring carbonyls and two ring C=C
+// bonds (p-benzoquinone, 15.6 kcal/mol low) is widened by widenQuinone; a
+// cyclohexenone and a saturated cycloalkanone are not.
 func TestQuinoneWidened(t *testing.T) {
 	q := estimate(t, "O=C1C=CC(=O)C=C1", Options{})
 	assert.GreaterOrEqual(t, q.Uncertainty/calorie/1000, widenQuinone)
@@ -42,4 +42,7 @@ func TestQuinoneWidened(t *testing.T) {
 	assert.Less(t, c.Uncertainty/calorie/1000, widenRing)
 	assert.True(t, quinoneRing("ring:C6 ring with 2 ring carbonyls, 2 double bonds"))
 	assert.False(t, quinoneRing("ring:C4 ring with 1 ring carbonyls, 0 double bonds"))
+	assert.False(t, quinoneRing("ring:C6 ring with 1 ring carbonyls, 1 double bonds"), "cyclohexenone")
+	e := estimate(t, "O=C1C=CCCC1", Options{})
+	assert.Less(t, e.Uncertainty/calorie/1000, widenQuinone, "cyclohexenone")
 }

@@ -12,8 +12,9 @@ import (
 // closed-shell molecule written with its π bond broken), so summing them as
 // independent sites would describe a high-spin state no table covers: the
 // estimate is refused, naming the paired structure, the same for every
-// spelling. Non-Kekulé diradicals (m-xylylene, trimethylenemethane) and
-// sites with no conjugated path between them are estimated.
+// spelling. Non-Kekulé diradicals (m-xylylene, trimethylenemethane), σ
+// diradicals (p-benzyne) and sites with no conjugated path between them
+// are estimated.
 func TestKekuleDiradicalRefused(t *testing.T) {
 	for _, c := range []struct {
 		spellings []string
@@ -32,7 +33,10 @@ func TestKekuleDiradicalRefused(t *testing.T) {
 			assert.Contains(t, err.Error(), "closed-shell molecule "+want, smi)
 		}
 	}
-	for _, smi := range []string{"[CH2]c1cccc([CH2])c1", "C([CH2])([CH2])=C", "[CH2]CC[CH2]", "[CH2]C=C", "[O]CC[O]"} {
+	// σ radicals do not pair through the π system: p-benzyne and
+	// 1,4-didehydronaphthalene are estimated as before.
+	for _, smi := range []string{"[CH2]c1cccc([CH2])c1", "C([CH2])([CH2])=C", "[CH2]CC[CH2]", "[CH2]C=C", "[O]CC[O]",
+		"[c]1cc[c]cc1", "[c]1cc[c]c2ccccc12"} {
 		e, err := Estimate(parse(t, smi), Options{})
 		require.NoError(t, err, smi)
 		assert.GreaterOrEqual(t, e.Multiplicity, 2, smi)

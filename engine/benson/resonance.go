@@ -222,7 +222,7 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 		return estimateForm(m, opts)
 	}
 	forms, capped := resonanceForms(m, maxResonanceForms)
-	if paired, ok := pairedStructure(forms); ok {
+	if paired, ok := pairedStructure(m, forms); ok {
 		return nil, &UnsupportedError{Reason: fmt.Sprintf("its unpaired electrons pair up: a resonance structure puts two of them on bonded atoms, "+
 			"so the species is the closed-shell molecule %s (or a singlet diradical of it), not %d independent radical sites; "+
 			"estimate that structure, or give the species a thermo block", paired, m.UnpairedElectrons())}
@@ -438,7 +438,22 @@ func ResonanceStructures(m *molecule.Molecule) (forms []*molecule.Molecule, capp
 // structure with every such pair bonded (the smallest one, so that the
 // answer does not depend on the spelling) and true, or false when no
 // structure pairs (trimethylenemethane, m-xylylene: non-Kekulé diradicals).
-func pairedStructure(forms []*molecule.Molecule) (string, bool) {
+//
+// Only π radicals pair: when a radical atom of the written structure already
+// carries a double, triple or aromatic bond (an aryl or vinyl σ radical,
+// p-benzyne [c]1cc[c]cc1), its electron lies in the σ plane, which the
+// one-electron shifts do not tell apart, and no pairing is looked for.
+func pairedStructure(m *molecule.Molecule, forms []*molecule.Molecule) (string, bool) {
+	for i, a := range m.Atoms {
+		if a.Radical == 0 {
+			continue
+		}
+		for _, b := range m.Adj[i] {
+			if m.Bonds[b].Order > 1 || m.Bonds[b].Aromatic {
+				return "", false // a σ radical
+			}
+		}
+	}
 	best := ""
 	for _, f := range forms {
 		orders, radicals := map[int]int{}, map[int]int{}

@@ -136,7 +136,7 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 		case carbonyl == 1 && nd == 0 && n == 6:
 			return "cyclohexanone", carbo
 		}
-		return fmt.Sprintf("C%d ring with %d ring carbonyls, %d double bonds", n, carbonyl, nd), carbo
+		return fmt.Sprintf(carbonylRingFormat, n, carbonyl, nd), carbo
 	}
 	key = ""
 	if other == 0 {
@@ -185,6 +185,12 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 	}
 	return key, carbo
 }
+
+// carbonylRingFormat is the key of a carbocycle with ring carbonyls and no
+// correction of its own: size, ring carbonyls, ring double bonds. The
+// quinone widening reads the counts back from the flag (class.go
+// quinoneRing), so both use this one format.
+const carbonylRingFormat = "C%d ring with %d ring carbonyls, %d double bonds"
 
 // fusedBenzeneSuffix ends the ring correction key of a furan or thiophene
 // ring fused to a benzene ring, which takes the single ring's correction
