@@ -155,12 +155,24 @@ var nsxEntries = []entry{
 			hi: [9]float64{1.430040220e+06, -5.284028650e+03, 1.016182124e+01, -9.703849960e-04, 2.154003405e-07, -2.169695700e-11, 9.318163070e-16, 2.908696214e+04, -4.349160391e+01},
 		},
 		source: srcNASA9},
+	// HOOO•, hydrotrioxyl (trans, the compilation's equilibrium record):
+	// ΔHf°298 27.82 kJ/mol (Active Thermochemical Tables), which its
+	// coefficients imply (H298/R = 3345.96 K). Chains of three O are
+	// otherwise refused (the group O-(O)2 has no value).
+	{name: "HO3", smiles: "OO[O]", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{6.36926947e+00, 3.02970087e-03, -1.04545381e-06, 1.64431465e-10, -9.67182653e-15, 1.11737099e+03, -5.67251572e+00},
+		lo:     [7]float64{3.58948457e+00, 1.08560963e-02, -8.05640196e-06, 1.50289080e-09, 6.16206428e-13, 1.86115040e+03, 8.60601405e+00},
+		source: srcGBR + " (hydrotrioxyl radical HOOO•; ΔHf°298: Active Thermochemical Tables)"},
 	// HS=O (not its isomer HOS, S–OH, which has no entry): the compilation's
 	// selected ΔHf°298 is −5.2 ± 0.5 kcal/mol (Denis, Chem. Phys. Lett. 402
 	// (2005) 289), which its coefficients imply; it marks the species as
 	// problematic, its other values ranging from −4.4 (G3B3) to +5.0 kcal/mol
 	// (Benson 1979): the library value is the selected one, not a settled one.
-	{name: "HSO", smiles: "[SH]=O", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+	// It is admitted although the CBr3, CFCl2 and CF2Cl radicals are not:
+	// the spread here is that of older estimates (BAC-MP4, Benson 1979)
+	// around a coupled-cluster value the compilation selects, while for
+	// those radicals no value is selected over the others.
+	{name: "HSO", smiles: "[SH]=O", aliases: []string{"S[O]"}, mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{4.34724125e+00, 2.53372236e-03, -9.51430950e-07, 1.58095446e-10, -9.65294637e-15, -4.20893834e+03, 3.15887502e+00},
 		lo:     [7]float64{4.13565093e+00, -3.69243127e-03, 2.05169784e-05, -2.40530656e-08, 9.17084270e-12, -3.82371653e+03, 5.88770120e+00},
 		source: srcGBR + " (HS=O radical; ΔHf°298: Denis 2005, the compilation's selected value; published values span −5.2 to +5.0 kcal/mol)"},
@@ -449,7 +461,7 @@ var nsxEntries = []entry{
 	// which lie 17.9, 30.6 and 22.5 kJ/mol below the ATcT values and made
 	// each Cl→Br step into a pure bromide 20–45 kJ/mol smaller than the
 	// others; with ATcT every Cl→Br step of the series is +45 to +58 kJ/mol
-	// (CH2Cl2 → CH2ClBr → CH2Br2: +50.0, +47.8; CHCl2Br is not entered, CHClBr2
+	// (CH2Cl2 → CH2ClBr → CH2Br2: +50.3, +47.8; CHCl2Br is not entered, CHClBr2
 	// → CHBr3 +50.3; CCl3Br → CCl2Br2 → CClBr3 → CBr4: +45.5, +49.6, +49.0).
 	// Not entered: CHCl2Br, CHF2Br, CHFClBr (not read from the database), the
 	// CBr3, CFCl2 and CF2Cl radicals (published values spread by 30 kJ/mol
