@@ -313,3 +313,21 @@ func BenchmarkBuild(b *testing.B) {
 		build()
 	}
 }
+
+// TestSImpliedEntries: an entry that takes only S°298 from its coefficients
+// (sImplied) states its ΔHf°298, and that value differs from the one its
+// coefficients carry (else it would be an implied entry).
+func TestSImpliedEntries(t *testing.T) {
+	n := 0
+	for _, e := range nsxEntries {
+		if !e.sImplied {
+			continue
+		}
+		n++
+		assert.False(t, e.implied, e.name)
+		assert.NotZero(t, e.hf298, "%s: no ΔHf°298", e.name)
+		p := nasa.NASA7{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh, Low: e.lo, High: e.lo}
+		assert.Greater(t, math.Abs(p.H(nasa.Tref)-e.hf298), 100.0, "%s: the coefficients already carry %v J/mol", e.name, e.hf298)
+	}
+	assert.Equal(t, 2, n, "CBr4 and CH2ClBr")
+}

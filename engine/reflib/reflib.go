@@ -234,11 +234,11 @@ func (e *entry) resolve() {
 	switch {
 	case e.n9 != nil:
 		e.s298 = e.n9.s(nasa.Tref)
-	case e.implied:
+	case e.implied || e.sImplied:
 		p := nasa.NASA7{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh, Low: e.lo, High: e.lo}
-		e.hf298, e.s298 = p.H(nasa.Tref), p.S(nasa.Tref)
-	case e.sImplied:
-		p := nasa.NASA7{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh, Low: e.lo, High: e.lo}
+		if e.implied {
+			e.hf298 = p.H(nasa.Tref)
+		}
 		e.s298 = p.S(nasa.Tref)
 	}
 }
