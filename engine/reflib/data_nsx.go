@@ -373,6 +373,15 @@ var nsxEntries = []entry{
 			hi: [9]float64{3.293486700e+06, -1.199850628e+04, 2.104406814e+01, -1.399381724e-03, 1.933173351e-07, -1.318016127e-11, 3.166400170e-16, 8.348433700e+04, -1.155751024e+02},
 		},
 		source: srcNASA9 + " (hydrazine)"},
+	// Urea, (NH2)2C=O, gas (urea-SCR chemistry; the group CO-(N)2 has no
+	// value): ΔHf°298 −235.5 kJ/mol, Dorofeeva & Tolmach, Thermochim. Acta
+	// 240 (1994) 47 (an evaluation of the measured sublimation and
+	// combustion data), as the compilation quotes it; its coefficients carry
+	// its own G3B3 value, −232.0, so S°298 and Cp are theirs and ΔHf° is set.
+	{name: "urea", smiles: "NC(N)=O", mult: 1, hf298: -235500, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
+		hi:     [7]float64{1.03465230e+01, 8.95410779e-03, -3.10367689e-06, 4.89573387e-10, -2.88531892e-14, -3.20127628e+04, -2.69745331e+01},
+		lo:     [7]float64{-2.10707501e-01, 4.36948607e-02, -4.60607638e-05, 2.36547939e-08, -4.42050926e-12, -2.94198537e+04, 2.60661959e+01},
+		source: srcGBR + " (urea; ΔHf°298: Dorofeeva & Tolmach 1994)"},
 	// Hydrazinyl: the compilation's selected ΔHf°298 is the Active
 	// Thermochemical Tables value, 224.856 ± 0.91 kJ/mol, which its
 	// coefficients imply (H298/R = 27043.8 K).
