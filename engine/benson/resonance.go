@@ -223,9 +223,18 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	forms, capped := resonanceForms(m, maxResonanceForms)
 	if paired, ok := pairedStructure(m, forms); ok {
+		what := "the closed-shell molecule " + paired + " (or a singlet diradical of it)"
+		if p, err := molecule.ParseSMILES(paired); err == nil && p.UnpairedElectrons() > 0 {
+			what = "the molecule " + paired + " with its remaining unpaired electrons"
+		}
 		return nil, &UnsupportedError{Reason: fmt.Sprintf("its unpaired electrons pair up: a resonance structure puts two of them on bonded atoms, "+
-			"so the species is the closed-shell molecule %s (or a singlet diradical of it), not %d independent radical sites; "+
-			"estimate that structure, or give the species a thermo block", paired, m.UnpairedElectrons())}
+			"so the species is %s, not %d independent radical sites; "+
+			"estimate that structure, or give the species a thermo block", what, m.UnpairedElectrons())}
+	}
+	if conflict, ok := spinConflictForm(m, forms); ok {
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("a resonance structure of it, %s, puts two unpaired electrons on one atom or on bonded atoms "+
+			"(a carbene-type centre, a benzyne or another σ,π-diradical): their coupled spin states have no hydrogen-bond-increment data, "+
+			"as when that structure is written; give the species a thermo block", conflict)}
 	}
 	if len(forms) == 1 {
 		est, err := estimateForm(m, opts)
@@ -480,6 +489,65 @@ func pairedStructure(m *molecule.Molecule, forms []*molecule.Molecule) (string, 
 		}
 		if c := p.Canonical(); best == "" || c < best {
 			best = c
+		}
+	}
+	return best, best != ""
+}
+
+// spinConflictForm looks among the resonance structures of a radical with
+// two or more unpaired electrons for one that spinScope would refuse if it
+// were written: unpaired electrons on bonded atoms, or a one-electron shift
+// that would bring a second electron onto an atom that has one (a
+// carbene-type centre). Written one way such a species (vinylmethylene
+// C=C[CH], a benzyne, a σ-radical next to a benzylic site) is refused; every
+// other spelling must be too, so the first such structure's canonical SMILES
+// (the smallest, for a spelling-independent message) is returned with true.
+// The written structure itself passed spinScope.
+func spinConflictForm(m *molecule.Molecule, forms []*molecule.Molecule) (string, bool) {
+	if m.UnpairedElectrons() < 2 {
+		return "", false
+	}
+	best := ""
+	keep := func(f *molecule.Molecule) {
+		if c := f.Canonical(); best == "" || c < best {
+			best = c
+		}
+	}
+	for _, f := range forms {
+		for _, b := range f.Bonds {
+			if f.Atoms[b.A].Radical > 0 && f.Atoms[b.B].Radical > 0 {
+				keep(f)
+				break
+			}
+		}
+		// The shift X•–Y=Z → X=Y–Z•• onto a Z that already has an electron
+		// (the move resonanceForms does not make).
+		for a, at := range f.Atoms {
+			if at.Radical != 1 || !endAtom(f, a) {
+				continue
+			}
+			for _, b1 := range f.Adj[a] {
+				o1 := f.Bonds[b1].Order
+				if o1 > 2 || (o1 > 1 && !conjugable(at.Element)) {
+					continue
+				}
+				b := f.Other(b1, a)
+				if !conjugable(f.Atoms[b].Element) {
+					continue
+				}
+				for _, b2 := range f.Adj[b] {
+					if b2 == b1 || f.Bonds[b2].Order < 2 || f.Bonds[b2].Order > 3 {
+						continue
+					}
+					c := f.Other(b2, b)
+					if c == a || f.Atoms[c].Radical != 1 || !endAtom(f, c) {
+						continue
+					}
+					if alt, err := f.WithBondOrders(map[int]int{b1: o1 + 1, b2: f.Bonds[b2].Order - 1}, map[int]int{a: 0, c: 2}); err == nil {
+						keep(alt)
+					}
+				}
+			}
 		}
 	}
 	return best, best != ""
