@@ -190,9 +190,9 @@ func (a *analysis) rangeChecks() {
 		at   int              // where that reaction's keyword is (its line)
 		eq   speciesfile.Span // the equation of that reaction (analysed file)
 	}
-	given := false // nothing to check without a given block
+	given := false // nothing to check without a given block or short library data
 	for _, sp := range a.res.Species {
-		if sp.Source == SourceFile {
+		if sp.Source == SourceFile || shortLibrary(sp) {
 			given = true
 			break
 		}
@@ -212,7 +212,7 @@ func (a *analysis) rangeChecks() {
 		for _, ts := range [][]speciesfile.Term{r.Decl.Reactants, r.Decl.Products} {
 			for _, t := range ts {
 				sp := a.res.ByName[t.Name.Text]
-				if sp == nil || sp.Source != SourceFile {
+				if sp == nil || (sp.Source != SourceFile && !shortLibrary(sp)) {
 					continue
 				}
 				if n, ok := needs[sp]; !ok || tmax > n.tmax {
@@ -228,6 +228,18 @@ func (a *analysis) rangeChecks() {
 			continue
 		}
 		start := a.spStart[i]
+		if sp.Source != SourceFile {
+			// Reference-library data that stop short (ozone: 2000 K): said
+			// on the species' declaration, as for a block of the file.
+			lib := sp.Estimate.libPoly
+			if lib.THigh >= n.tmax-rangeSlack {
+				continue
+			}
+			a.reportNamingLine(sp.File, speciesfile.Diagnostic{Span: sp.Decl.Keyword().Span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+				Message: fmt.Sprintf("%s: the reference library's data for it cover %g–%g K, but the reaction on line %d needs them from 298 K to %g K; values outside are extrapolated",
+					sp.Name, lib.TLow, lib.THigh, n.line, n.tmax)}, Location{File: a.res.Path, Span: speciesfile.Span{Start: n.at, End: n.at}}, fmt.Sprintf("line %d", n.line))
+			continue
+		}
 		lo, hi := sp.Given.Range()
 		if lo <= T298+rangeSlack && hi >= n.tmax-rangeSlack {
 			continue
@@ -503,3 +515,10 @@ func (a *analysis) sizes(ts []speciesfile.Term) (masses []float64, heavy []int) 
 // RateUnits names the units of a rate constant of the given order (see
 // kinetics.RateUnits, the one formatter).
 func RateUnits(order int) string { return kinetics.RateUnits(order) }
+
+// shortLibrary reports whether sp takes reference-library data whose
+// polynomial stops below the usual 3000 K (rangeChecks warns when a
+// reaction needs more).
+func shortLibrary(sp *Species) bool {
+	return sp.Source == SourceEstimate && sp.Estimate != nil && sp.Estimate.Library != "" && sp.Estimate.libPoly.THigh < 3000-rangeSlack
+}
