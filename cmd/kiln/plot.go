@@ -46,17 +46,25 @@ func runPlot(e env, args []string) (int, error) {
 			return 0, fmt.Errorf("%s: no NASA-7 polynomial for %s: %s", file, sp.Name, analysis.FitRefusal(err, res.Units()))
 		}
 		cp := est.Cp
-		series = append(series,
-			thermoplot.Series{Name: "group estimate", Points: true, T: benson.StdTemps[:], Eval: func(T float64) (float64, float64, float64) {
-				for i, t := range benson.StdTemps {
-					if t == T {
-						return cp[i], poly.H(T), poly.S(T)
+		if est.Library != "" {
+			// Reference-library data: its polynomial over its own range (a
+			// gap beyond, as for a file block), not a group estimate.
+			s := blockSeries(poly)
+			s.Name = fmt.Sprintf("reference library %s (%g–%g K)", est.Library, poly.TLow, poly.THigh)
+			series = append(series, s)
+		} else {
+			series = append(series,
+				thermoplot.Series{Name: "group estimate", Points: true, T: benson.StdTemps[:], Eval: func(T float64) (float64, float64, float64) {
+					for i, t := range benson.StdTemps {
+						if t == T {
+							return cp[i], poly.H(T), poly.S(T)
+						}
 					}
-				}
-				return poly.Cp(T), poly.H(T), poly.S(T)
-			}},
-			thermoplot.Series{Name: "fitted NASA-7", Eval: func(T float64) (float64, float64, float64) { return poly.Cp(T), poly.H(T), poly.S(T) }},
-		)
+					return poly.Cp(T), poly.H(T), poly.S(T)
+				}},
+				thermoplot.Series{Name: "fitted NASA-7", Eval: func(T float64) (float64, float64, float64) { return poly.Cp(T), poly.H(T), poly.S(T) }},
+			)
+		}
 	}
 	if g := sp.Given; g != nil && g.Poly != nil {
 		series = append(series, blockSeries(*g.Poly))
