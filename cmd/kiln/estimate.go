@@ -281,7 +281,13 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 			fmt.Fprintln(w, "  (group sources: --sources or --json)")
 		}
 	} else {
-		fmt.Fprintf(w, "  reference library: %s (tabulated data, not a group estimate), multiplicity %d\n", est.Library, est.Multiplicity)
+		span := ""
+		if p, _, err := est.NASA7(); err == nil && p.THigh < 3000 {
+			// Data that stop short say so (ozone: 200–2000 K); fill writes no
+			// block beyond them.
+			span = fmt.Sprintf("; its data cover %g–%g K only", p.TLow, p.THigh)
+		}
+		fmt.Fprintf(w, "  reference library: %s (tabulated data, not a group estimate%s), multiplicity %d\n", est.Library, span, est.Multiplicity)
 		if r.SymmetryNumber != nil {
 			fmt.Fprintf(w, "  symmetry number σ = %s, optical isomers n = %d (already contained in the tabulated S°)\n", *r.SymmetryNumber, *r.OpticalIsomers)
 		} else {

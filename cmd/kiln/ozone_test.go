@@ -19,7 +19,7 @@ func TestEstimateLibraryOzone(t *testing.T) {
 	for _, smiles := range []string{"O=[O+][O-]", "[O-][O+]=O", "[O]O[O]"} {
 		assertLibraryEstimate(t, smiles, "O3", "(141.8 kJ/mol)")
 		_, out, _ := runKiln(t, "estimate", smiles)
-		assert.Contains(t, out, "reference library: O3 (tabulated data, not a group estimate), multiplicity 1", smiles)
+		assert.Contains(t, out, "reference library: O3 (tabulated data, not a group estimate; its data cover 200–2000 K only), multiplicity 1", smiles)
 	}
 	code, out, stderr := runKiln(t, "estimate", "--multiplicity", "3", "[O]O[O]")
 	assert.Equal(t, exitProblems, code, out+stderr)
