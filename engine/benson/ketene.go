@@ -184,6 +184,7 @@ func heteroSubstituents(m *molecule.Molecule, c, k int) string {
 // keteneRefusal has passed.
 func addCumulatedFlags(g *graph, l lookup, est *Result) {
 	var seen []bool // allene centres already in a reported chain
+	keteneSubs := 0 // carbon substituents on all ketene ends: one correction term
 	for i := range g.m.Atoms {
 		switch g.typ[i] {
 		case "Ck":
@@ -212,9 +213,7 @@ func addCumulatedFlags(g *graph, l lookup, est *Result) {
 			if n == 0 {
 				continue
 			}
-			t := term(l.corrections[keteneEndKey], n)
-			t.Name = keteneEndName
-			est.Corrections = append(est.Corrections, t)
+			keteneSubs += n
 			if unsaturated == 0 {
 				continue
 			}
@@ -245,6 +244,11 @@ func addCumulatedFlags(g *graph, l lookup, est *Result) {
 					"give the species a thermo block for a better value",
 			})
 		}
+	}
+	if keteneSubs > 0 {
+		t := term(l.corrections[keteneEndKey], keteneSubs)
+		t.Name = keteneEndName
+		est.Corrections = append(est.Corrections, t)
 	}
 }
 
