@@ -353,7 +353,12 @@ const oneMoleculeNote = " (derived from one molecule)"
 // carries its own). One flag per group and mark.
 func addNitrogenTableFlags(l lookup, est *Result) {
 	for _, t := range est.Groups {
-		name, _, _ := strings.Cut(t.Name, " ≈ ")
+		// The marks belong to the value used: for a stand-in
+		// ("NC-(Cb) ≈ NC-(C)") that of the group after "≈".
+		name, used, standIn := strings.Cut(t.Name, " ≈ ")
+		if standIn {
+			name = used
+		}
 		if _, user := l.user[name]; user {
 			continue
 		}
