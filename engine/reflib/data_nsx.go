@@ -470,11 +470,10 @@ var nsxEntries = []entry{
 	// which lie 17.9, 30.6 and 22.5 kJ/mol below the ATcT values and made
 	// each Cl→Br step into a pure bromide 20–45 kJ/mol smaller than the
 	// others; with ATcT every Cl→Br step of the series is +45 to +58 kJ/mol
-	// (CH2Cl2 → CH2ClBr → CH2Br2: +50.3, +47.8; CHCl2Br is not entered, CHClBr2
-	// → CHBr3 +50.3; CCl3Br → CCl2Br2 → CClBr3 → CBr4: +45.5, +49.6, +49.0).
-	// Not entered: CHCl2Br, CHF2Br, CHFClBr (not read from the database), the
-	// CBr3, CFCl2 and CF2Cl radicals (published values spread by 30 kJ/mol
-	// or more), CH2Br and CHBr2. ---
+	// (CH2Cl2 → CH2ClBr → CH2Br2: +50.3, +47.8; CHCl2Br → CHClBr2 → CHBr3:
+	// +48.5, +50.3; CCl3Br → CCl2Br2 → CClBr3 → CBr4: +45.5, +49.6, +49.0).
+	// Not entered: the CBr3, CFCl2 and CF2Cl radicals (published values
+	// spread by 30 kJ/mol or more), CH2Br and CHBr2. ---
 	{name: "CH2Br2", smiles: "BrCBr", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{6.73007714e+00, 5.54767619e-03, -1.98600141e-06, 3.19869628e-10, -1.91178669e-14, -2.20551217e+03, -5.41565857e+00},
 		lo:     [7]float64{3.02310767e+00, 1.25120467e-02, 1.10912051e-06, -1.30810290e-08, 7.02925787e-12, -1.07188573e+03, 1.43841202e+01},
@@ -535,6 +534,18 @@ var nsxEntries = []entry{
 		hi:     [7]float64{1.15902445e+01, 1.45760167e-03, -5.74056035e-07, 9.83587024e-11, -6.13236876e-15, -1.97278365e+04, -2.54447111e+01},
 		lo:     [7]float64{3.96251596e+00, 3.50682619e-02, -6.07742020e-05, 5.06033152e-08, -1.62938746e-11, -1.82074135e+04, 1.09721334e+01},
 		source: srcGBR + " (tribromofluoromethane; ΔHf°298 -132.3 ± 1.5 kJ/mol (ATcT))"},
+	{name: "CHCl2Br", smiles: "ClC(Cl)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{9.03434879e+00, 3.64051268e-03, -1.33590675e-06, 2.18843445e-10, -1.32377776e-14, -9.39499569e+03, -1.52806258e+01},
+		lo:     [7]float64{2.90253448e+00, 2.48114870e-02, -2.93778057e-05, 1.68154229e-08, -3.60707827e-12, -7.93174565e+03, 1.52926890e+01},
+		source: srcGBR + " (bromodichloromethane; ΔHf°298 -51.48 ± 5.4 kJ/mol (ATcT))"},
+	{name: "CHF2Br", smiles: "FC(F)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{7.99574233e+00, 4.68075570e-03, -1.73758062e-06, 2.86772954e-10, -1.74346268e-14, -5.42115449e+04, -1.24352101e+01},
+		lo:     [7]float64{3.31738394e+00, 1.31438938e-02, 1.77618966e-06, -1.45480682e-08, 7.51885656e-12, -5.27345603e+04, 1.27225958e+01},
+		source: srcGBR + " (bromodifluoromethane; ΔHf°298 -425.46 ± 1.07 kJ/mol (ATcT))"},
+	{name: "CHFClBr", smiles: "FC(Cl)Br", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{8.52418598e+00, 4.15098907e-03, -1.53297038e-06, 2.52169636e-10, -1.52968771e-14, -3.10062113e+04, -1.33334931e+01},
+		lo:     [7]float64{2.84647307e+00, 2.04936069e-02, -1.70058829e-05, 4.11372351e-09, 9.31156801e-13, -2.94968490e+04, 1.57567985e+01},
+		source: srcGBR + " (bromochlorofluoromethane; ΔHf°298 -231.75 ± 5.36 kJ/mol (ATcT), its coefficients carry -231.80; a chiral molecule: the compilation's S° is taken as it stands, which does not say whether it holds R ln 2 for the racemate)"},
 
 	// halomethyl radicals, CH2FCl, formyl halides and COFCl
 	{name: "CCl3", smiles: "Cl[C](Cl)Cl", mult: 2, hf298: 71128, tLow: 200, tMid: 1000, tHigh: 3500,
