@@ -618,7 +618,13 @@ func spinScope(m *molecule.Molecule) error {
 	}
 	if best >= 0 {
 		a := m.Atoms[best]
-		return &UnsupportedError{Atom: best + 1, Reason: fmt.Sprintf("(%s) carries %d unpaired electrons (a carbene- or vinylidene-type centre): its spin states have no hydrogen-bond-increment data", a.Element, a.Radical)}
+		reason := fmt.Sprintf("(%s) carries %d unpaired electrons (a carbene- or vinylidene-type centre): its spin states have no hydrogen-bond-increment data", a.Element, a.Radical)
+		if isocyanideCarbene(m, best) {
+			// R–N=C: is the carbene spelling of an isocyanide, which kiln
+			// estimates written as R–N⁺≡C⁻.
+			reason += "; an isocyanide is written with its charges, R–[N+]#[C-]"
+		}
+		return &UnsupportedError{Atom: best + 1, Reason: reason}
 	}
 	pair, at, first, second := "", 0, "", ""
 	orders, radicals := map[int]int{}, map[int]int{}

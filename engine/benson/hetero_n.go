@@ -617,3 +617,16 @@ func (g *graph) inAzineRing(a int) bool {
 func noStandIn(centre, lig string) bool {
 	return centre == "N" && lig == "CO" || centre == "O" && lig == "O"
 }
+
+// isocyanideCarbene reports whether atom i of m is a terminal carbon with two
+// unpaired electrons double-bonded to a neutral nitrogen that has one other
+// neighbour: R–N=C:, the carbene spelling of an isocyanide.
+func isocyanideCarbene(m *molecule.Molecule, i int) bool {
+	a := m.Atoms[i]
+	if a.Element != "C" || a.Radical != 2 || a.HCount != 0 || a.Charge != 0 || len(m.Adj[i]) != 1 {
+		return false
+	}
+	b := m.Adj[i][0]
+	n := m.Other(b, i)
+	return m.Bonds[b].Order == 2 && m.Atoms[n].Element == "N" && m.Atoms[n].Charge == 0 && len(m.Adj[n])+m.Atoms[n].HCount == 2
+}

@@ -59,3 +59,15 @@ func TestIsocyanide(t *testing.T) {
 	assert.Zero(t, flagCountOf(ph, "NC-(Cb)"), "%+v", ph.Missing)
 	assert.InDelta(t, (5*3.30+5.51+55.0)*calorie*1000, ph.Hf298, 1, "J/mol")
 }
+
+// TestIsocyanideCarbeneHint: the carbene spelling of an isocyanide, R–N=C:,
+// is refused as a carbene centre with the hint to write the charges; other
+// carbenes get no such hint.
+func TestIsocyanideCarbeneHint(t *testing.T) {
+	_, err := Estimate(parse(t, "CN=[C]"), Options{})
+	require.Error(t, err)
+	assert.Contains(t, err.Error(), "R–[N+]#[C-]")
+	_, err = Estimate(parse(t, "C[C]C"), Options{})
+	require.Error(t, err)
+	assert.NotContains(t, err.Error(), "isocyanide")
+}
