@@ -1,6 +1,7 @@
 package benson
 
 import (
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -43,20 +44,33 @@ func TestKekuleDiradicalRefused(t *testing.T) {
 // TestSpinConflictRefused: a species one of whose spellings puts two
 // unpaired electrons on one atom (a carbene) or on bonded atoms is refused
 // whichever spelling is written (tester12: C=C[CH] was refused, [CH]=C[CH2]
-// estimated as two independent sites); benzynes and σ,π diradicals are
-// refused with it; single σ and π radicals are not affected.
+// estimated as two independent sites); two σ sites in one aromatic ring
+// (the benzynes) are refused by their own rule; σ sites in different rings
+// are estimated, as is a single σ radical; past the resonance bound a
+// polyradical is refused rather than decided by spelling.
 func TestSpinConflictRefused(t *testing.T) {
-	for _, pair := range [][]string{
-		{"C=C[CH]", "[CH]=C[CH2]"},
-		{"CC(=O)[CH]", "[CH]=C([O])C"},
-		{"C=C1C=C[C]C=C1", "[CH2]c1cc[c]cc1"},
-		{"C=C1[CH][C]=CC=C1", "[CH2]c1c[c]ccc1"},
-		{"[c]1cc[c]cc1", "[c]1c[c]ccc1"},
+	for _, c := range []struct{ written, respelled, want string }{
+		{"C=C[CH]", "[CH]=C[CH2]", "a resonance structure of it"},
+		{"CC(=O)[CH]", "[CH]=C([O])C", "a resonance structure of it"},
+		{"C=C1C=C[C]C=C1", "[CH2]c1cc[c]cc1", "a resonance structure of it"},
+		{"C=C1[CH][C]=CC=C1", "[CH2]c1c[c]ccc1", "a resonance structure of it"},
+		{"[c]1cc[c]cc1", "[c]1ccc([c]c1)", "lie in one aromatic ring"},
+		{"[c]1c[c]ccc1", "c1cc[c]c[c]1", "lie in one aromatic ring"},
 	} {
-		for _, smi := range pair {
+		for _, smi := range []string{c.written, c.respelled} {
 			_, err := Estimate(parse(t, smi), Options{})
 			require.Error(t, err, smi)
-			assert.Regexp(t, "unpaired electron", err.Error(), smi)
+			assert.Contains(t, err.Error(), "unpaired electron", smi)
 		}
+		_, err := Estimate(parse(t, c.respelled), Options{})
+		assert.Contains(t, err.Error(), c.want, c.respelled)
 	}
+	for _, smi := range []string{"[c]1ccc(cc1)-c1cc[c]cc1", "[c]1ccc2c[c]ccc2c1", "[c]1ccccc1", "C=[CH]"} {
+		_, err := Estimate(parse(t, smi), Options{})
+		assert.NoError(t, err, smi)
+	}
+	long := "[CH2]" + strings.Repeat("C=C", 40) + "[CH2]"
+	_, err := Estimate(parse(t, long), Options{})
+	require.Error(t, err)
+	assert.Contains(t, err.Error(), "resonance structures, more than kiln explores")
 }

@@ -233,8 +233,19 @@ func estimateResonance(m *molecule.Molecule, opts Options) (*Result, error) {
 	}
 	if conflict, ok := spinConflictForm(m, forms); ok {
 		return nil, &UnsupportedError{Reason: fmt.Sprintf("a resonance structure of it, %s, puts two unpaired electrons on one atom or on bonded atoms "+
-			"(a carbene-type centre, a benzyne or another σ,π-diradical): their coupled spin states have no hydrogen-bond-increment data, "+
+			"(a carbene-type centre or a σ,π-diradical): their coupled spin states have no hydrogen-bond-increment data, "+
 			"as when that structure is written; give the species a thermo block", conflict)}
+	}
+	if ring, ok := didehydroRing(m); ok {
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("two σ radical sites (unpaired electrons in the ring plane) lie in one aromatic ring (%s, a benzyne-type didehydroarene): "+
+			"their coupled spin states (a singlet ground state well below the triplet two independent sites describe) have no hydrogen-bond-increment data; "+
+			"give the species a thermo block", ring)}
+	}
+	if capped && m.UnpairedElectrons() > 1 {
+		// Past the bound, whether the electrons pair (or meet) is not known,
+		// and the answer could depend on the spelling: refused.
+		return nil, &UnsupportedError{Reason: fmt.Sprintf("its %d unpaired electrons have more than %d resonance structures, more than kiln explores to tell "+
+			"whether they pair or meet on one atom; give the species a thermo block", m.UnpairedElectrons(), maxResonanceForms)}
 	}
 	if len(forms) == 1 {
 		est, err := estimateForm(m, opts)
@@ -497,12 +508,15 @@ func pairedStructure(m *molecule.Molecule, forms []*molecule.Molecule) (string, 
 // spinConflictForm looks among the resonance structures of a radical with
 // two or more unpaired electrons for one that spinScope would refuse if it
 // were written: unpaired electrons on bonded atoms, or a one-electron shift
-// that would bring a second electron onto an atom that has one (a
-// carbene-type centre). Written one way such a species (vinylmethylene
-// C=C[CH], a benzyne, a σ-radical next to a benzylic site) is refused; every
-// other spelling must be too, so the first such structure's canonical SMILES
-// (the smallest, for a spelling-independent message) is returned with true.
-// The written structure itself passed spinScope.
+// of a π radical (an atom whose bonds are all single) that would bring a
+// second electron onto an atom that has one (a carbene-type centre).
+// Written one way such a species (vinylmethylene C=C[CH], a σ-radical next
+// to a benzylic site) is refused; every other spelling must be too, so the
+// smallest such structure's canonical SMILES (for a spelling-independent
+// message) is returned with true. Structures with an sp atom in a small
+// ring, which the shifts of an aryl σ electron through its ring produce, are
+// no Lewis structures of the species and are passed over. The written
+// structure itself passed spinScope.
 func spinConflictForm(m *molecule.Molecule, forms []*molecule.Molecule) (string, bool) {
 	if m.UnpairedElectrons() < 2 {
 		return "", false
@@ -514,6 +528,9 @@ func spinConflictForm(m *molecule.Molecule, forms []*molecule.Molecule) (string,
 		}
 	}
 	for _, f := range forms {
+		if spInSmallRing(f) {
+			continue
+		}
 		for _, b := range f.Bonds {
 			if f.Atoms[b.A].Radical > 0 && f.Atoms[b.B].Radical > 0 {
 				keep(f)
@@ -523,14 +540,11 @@ func spinConflictForm(m *molecule.Molecule, forms []*molecule.Molecule) (string,
 		// The shift X•–Y=Z → X=Y–Z•• onto a Z that already has an electron
 		// (the move resonanceForms does not make).
 		for a, at := range f.Atoms {
-			if at.Radical != 1 || !endAtom(f, a) {
-				continue
+			if at.Radical != 1 || !endAtom(f, a) || !allSingle(f, a) {
+				continue // only a π radical moves
 			}
 			for _, b1 := range f.Adj[a] {
 				o1 := f.Bonds[b1].Order
-				if o1 > 2 || (o1 > 1 && !conjugable(at.Element)) {
-					continue
-				}
 				b := f.Other(b1, a)
 				if !conjugable(f.Atoms[b].Element) {
 					continue
@@ -551,4 +565,65 @@ func spinConflictForm(m *molecule.Molecule, forms []*molecule.Molecule) (string,
 		}
 	}
 	return best, best != ""
+}
+
+// allSingle reports whether every bond of atom a of f is a single,
+// non-aromatic bond.
+func allSingle(f *molecule.Molecule, a int) bool {
+	for _, b := range f.Adj[a] {
+		if f.Bonds[b].Order != 1 || f.Bonds[b].Aromatic {
+			return false
+		}
+	}
+	return true
+}
+
+// spInSmallRing reports whether an atom of f with two double bonds or a
+// triple bond lies in a ring of at most eight atoms (lewisAdmissible's ring
+// rule).
+func spInSmallRing(f *molecule.Molecule) bool {
+	for i := range f.Atoms {
+		multiple, triple := 0, false
+		for _, b := range f.Adj[i] {
+			switch f.Bonds[b].Order {
+			case 2:
+				multiple++
+			case 3:
+				triple = true
+			}
+		}
+		if multiple < 2 && !triple {
+			continue
+		}
+		for _, n := range f.RingSizes(i) {
+			if n <= 8 {
+				return true
+			}
+		}
+	}
+	return false
+}
+
+// didehydroRing reports, as a readable description, a ring of m's relevant
+// cycles that holds two radical atoms with an aromatic or multiple bond each
+// (σ radical sites: o-, m-, p-benzyne and their ring homologues); false
+// when there is none. Their coupled spin states are outside group
+// additivity, as for radical sites on bonded atoms.
+func didehydroRing(m *molecule.Molecule) (string, bool) {
+	cycles, complete := m.RelevantCycles()
+	if !complete {
+		cycles = m.Rings()
+	}
+	for _, r := range cycles {
+		n := 0
+		for _, a := range r {
+			if m.Atoms[a].Radical > 0 && !allSingle(m, a) {
+				n++
+			}
+		}
+		if n >= 2 {
+			return fmt.Sprintf("a %d-membered ring with %d σ radical sites", len(r), n), true
+		}
+	}
+	return "", false
 }
