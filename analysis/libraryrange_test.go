@@ -1,10 +1,13 @@
 package analysis
 
 import (
+	"context"
+	"os"
 	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
 
 	"kiln.dev/kiln/speciesfile"
 )
@@ -29,4 +32,25 @@ func TestLibraryRangeWarned(t *testing.T) {
 	assert.True(t, strings.HasPrefix(msg, "O3: the reference library's data for it cover 200–2000 K"), msg)
 	n, _ = count(analyzeText(t, species))
 	assert.Zero(t, n)
+}
+
+// TestLibraryRangeWarnedInclude: declared in an included file, the species
+// is warned about on the reaction of the analysed file that needs it, naming
+// where it is declared, as a short block there is.
+func TestLibraryRangeWarnedInclude(t *testing.T) {
+	files := map[string]string{
+		"/w/main.kiln": "units kJ/mol\ninclude sp.kiln\nreaction O + O2 <=> O3   A=1.0e12 n=0 Ea=0\n",
+		"/w/sp.kiln":   "species O [O]\n  multiplicity 3\nspecies O2 O=O\n  multiplicity 3\nspecies O3 O=[O+][O-]\n",
+	}
+	ws := NewWorkspace("/w", func(p string) ([]byte, error) {
+		if s, ok := files[p]; ok {
+			return []byte(s), nil
+		}
+		return nil, os.ErrNotExist
+	}, DefaultSettings())
+	res, err := ws.Analyze(context.Background(), "/w/main.kiln")
+	require.NoError(t, err)
+	msgs := messagesWithCode(res, speciesfile.CodeThermoOutOfRange)
+	require.Len(t, msgs, 1, "%v", res.Diagnostics)
+	assert.Contains(t, msgs[0], "O3 (sp.kiln:5): the reference library's data for it cover 200–2000 K")
 }

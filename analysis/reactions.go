@@ -235,6 +235,16 @@ func (a *analysis) rangeChecks() {
 			if lib.THigh >= n.tmax-rangeSlack {
 				continue
 			}
+			if sp.File != a.res.Path {
+				// Declared in an included file: said on the reaction of
+				// this file that needs it, as for a block there.
+				loc := Location{File: sp.File, Span: sp.Decl.Keyword().Span.At(start)}
+				where := a.where(loc)
+				a.reportNamingLine(a.res.Path, speciesfile.Diagnostic{Span: n.eq, Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
+					Message: fmt.Sprintf("%s (%s): the reference library's data for it cover %g–%g K, but this reaction needs them from 298 K to %g K; values outside are extrapolated",
+						sp.Name, where, lib.TLow, lib.THigh, n.tmax)}, loc, where)
+				continue
+			}
 			a.reportNamingLine(sp.File, speciesfile.Diagnostic{Span: sp.Decl.Keyword().Span.At(start), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoOutOfRange,
 				Message: fmt.Sprintf("%s: the reference library's data for it cover %g–%g K, but the reaction on line %d needs them from 298 K to %g K; values outside are extrapolated",
 					sp.Name, lib.TLow, lib.THigh, n.line, n.tmax)}, Location{File: a.res.Path, Span: speciesfile.Span{Start: n.at, End: n.at}}, fmt.Sprintf("line %d", n.line))
