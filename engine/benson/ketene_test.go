@@ -178,3 +178,23 @@ func TestCumuleneFlag(t *testing.T) {
 		}
 	}
 }
+
+// TestTwoKeteneEnds: the carbon substituents of all ketene ends of a
+// molecule make one correction term with their count, and its widening
+// adds linearly over them (they err alike).
+func TestTwoKeteneEnds(t *testing.T) {
+	e := heteroEstimate(t, "O=C=C(C)CCC(C)=C=O")
+	n, terms := 0, 0
+	for _, k := range e.Corrections {
+		if k.Name == keteneEndName {
+			terms++
+			n += k.Count
+		}
+	}
+	assert.Equal(t, 1, terms, "%v", e.Corrections)
+	assert.Equal(t, 4, n)
+	base := maeToSigma * classError(e.Class)
+	if len(e.Missing) == 0 {
+		assert.InDelta(t, math.Hypot(base, 4*widenKeteneEndFit), e.Uncertainty/calorie/1000, 1e-9)
+	}
+}
