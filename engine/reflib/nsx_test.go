@@ -220,7 +220,7 @@ func TestLookupNSX(t *testing.T) {
 		{"[C]=S", 0, "CS"}, {"S=C=S", 0, "CS2"}, {"S=C=O", 0, "COS"}, {"[SH]", 0, "SH"}, {"S", 0, "H2S"},
 		{"Cl", 0, "HCl"}, {"[Cl]", 0, "Cl"}, {"ClCl", 0, "Cl2"}, {"Cl[O]", 0, "ClO"}, {"ClO", 0, "HOCl"},
 		{"ClC(Cl)=O", 0, "COCl2"}, {"FC(F)(F)F", 0, "CF4"}, {"ClC", 0, "CH3Cl"}, {"Cl[CH2]", 0, "CH2Cl"},
-		{"NN", 0, "N2H4"}, {"N#CC#N", 0, "C2N2"}, {"O=C=[C]", 0, "C2O"}, {"O=[N+]([O-])[O]", 0, "NO3"},
+		{"NN", 0, "N2H4"}, {"N#CC#N", 0, "C2N2"}, {"O=C=[C]", 0, "C2O"}, {"[O]C#[C]", 0, "C2O"}, {"O=[N+]([O-])[O]", 0, "NO3"},
 		{"[Br]", 0, "Br"}, {"[Br]", 2, "Br"}, {"BrBr", 0, "Br2"}, {"[H]Br", 0, "HBr"}, {"Br[O]", 0, "BrO"},
 		{"BrCBr", 0, "CH2Br2"}, {"BrC(Br)Br", 0, "CHBr3"}, {"BrC(Br)(Br)Br", 0, "CBr4"}, {"BrC(F)(F)F", 0, "CF3Br"},
 		{"[C](Cl)(Cl)Cl", 0, "CCl3"}, {"[C](F)(F)F", 0, "CF3"}, {"[CH](F)F", 0, "CHF2"}, {"F[CH]Cl", 0, "CHFCl"},
