@@ -251,25 +251,11 @@ func (n *nasa9) block(T float64) *[9]float64 {
 	return &n.lo
 }
 
-// cp is the NASA-9 heat capacity in J/(mol K), Cp/R = Σ a_i T^(i−3).
-func (n *nasa9) cp(T float64) float64 {
-	a := n.block(T)
-	return nasa.R * (a[0]/(T*T) + a[1]/T + a[2] + T*(a[3]+T*(a[4]+T*(a[5]+T*a[6]))))
-}
-
-// h is the NASA-9 enthalpy in J/mol (ΔHf°298 + H(T) − H(298.15)).
-func (n *nasa9) h(T float64) float64 {
-	a := n.block(T)
-	hrt := -a[0]/(T*T) + a[1]*math.Log(T)/T + a[2] + T*(a[3]/2+T*(a[4]/3+T*(a[5]/4+T*a[6]/5))) + a[7]/T
-	return nasa.R * T * hrt
-}
-
-// s is the NASA-9 entropy in J/(mol K) at 1 bar.
-func (n *nasa9) s(T float64) float64 {
-	a := n.block(T)
-	sr := -a[0]/(2*T*T) - a[1]/T + a[2]*math.Log(T) + T*(a[3]+T*(a[4]/2+T*(a[5]/3+T*a[6]/4))) + a[8]
-	return nasa.R * sr
-}
+// cp, h and s evaluate the block valid at T (nasa.Cp9, H9, S9): Cp and S°
+// in J/(mol K), H in J/mol with H(298.15 K) = ΔHf°298.
+func (n *nasa9) cp(T float64) float64 { return nasa.Cp9(n.block(T), T) }
+func (n *nasa9) h(T float64) float64  { return nasa.H9(n.block(T), T) }
+func (n *nasa9) s(T float64) float64  { return nasa.S9(n.block(T), T) }
 
 // lowAt and lowSAt evaluate H and S of the low block at T even when T is
 // TMid (where NASA7 methods use the high block).
