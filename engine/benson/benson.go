@@ -627,17 +627,10 @@ func spinScope(m *molecule.Molecule) error {
 		return &UnsupportedError{Atom: best + 1, Reason: reason}
 	}
 	pair, at, first, second := "", 0, "", ""
-	orders, radicals := map[int]int{}, map[int]int{}
-	for bi, b := range m.Bonds {
+	for _, b := range m.Bonds {
 		x, y := m.Atoms[b.A], m.Atoms[b.B]
 		if x.Radical == 0 || y.Radical == 0 {
 			continue
-		}
-		if _, used := radicals[b.A]; !used && !b.Aromatic && b.Order < 3 {
-			if _, used := radicals[b.B]; !used {
-				orders[bi] = b.Order + 1
-				radicals[b.A], radicals[b.B] = x.Radical-1, y.Radical-1
-			}
 		}
 		i := b.A
 		if y.Element < x.Element {
@@ -649,7 +642,7 @@ func spinScope(m *molecule.Molecule) error {
 	}
 	if pair != "" {
 		reason := fmt.Sprintf("(%s) and its %s neighbour both carry an unpaired electron: the coupled spin state has no hydrogen-bond-increment data", first, second)
-		if p, err := m.WithBondOrders(orders, radicals); err == nil && len(orders) > 0 {
+		if p, ok := pairBonded(m); ok { // every electron here is single
 			// The canonical SMILES of the structure with the pairs bonded:
 			// the same for every spelling, and what the user most likely means.
 			reason += fmt.Sprintf("; paired into a bond they give the molecule %s", p.Canonical())

@@ -94,47 +94,66 @@ func resonanceForms(m *molecule.Molecule, limit int) ([]*molecule.Molecule, bool
 	capped := false
 	for q := 0; q < len(forms); q++ {
 		f := forms[q]
-		for a, at := range f.Atoms {
-			if at.Radical != 1 || !endAtom(f, a) {
+		eachShift(f, func(a, b1, b2, c int) {
+			if f.Atoms[c].Radical != 0 || (f.Bonds[b2].Order > 2 && !conjugable(f.Atoms[c].Element)) {
+				return
+			}
+			alt, err := shifted(f, a, b1, b2, c)
+			if err != nil {
+				return
+			}
+			k := stateKey(alt)
+			if seen[k] {
+				return
+			}
+			if len(forms) >= limit {
+				capped = true
+				return
+			}
+			seen[k] = true
+			forms = append(forms, alt)
+		})
+	}
+	return forms, capped
+}
+
+// eachShift calls fn for every one-electron shift X•–Y=Z → X=Y–Z• that f
+// allows at a single unpaired electron on an end atom a (endAtom): X–Y a
+// single or, for a C, N or O end, double bond b1, Y conjugable, Y=Z a
+// double or triple bond b2 to an end atom c. Whether Z may take the electron
+// (it has none, for a new resonance structure; it has one, for the
+// carbene check of spinConflictForm) is the caller's test.
+func eachShift(f *molecule.Molecule, fn func(a, b1, b2, c int)) {
+	for a, at := range f.Atoms {
+		if at.Radical != 1 || !endAtom(f, a) {
+			continue
+		}
+		for _, b1 := range f.Adj[a] {
+			o1 := f.Bonds[b1].Order
+			if o1 > 2 || (o1 > 1 && !conjugable(at.Element)) {
 				continue
 			}
-			for _, b1 := range f.Adj[a] {
-				o1 := f.Bonds[b1].Order
-				if o1 > 2 || (o1 > 1 && !conjugable(at.Element)) {
+			b := f.Other(b1, a)
+			if !conjugable(f.Atoms[b].Element) {
+				continue
+			}
+			for _, b2 := range f.Adj[b] {
+				if b2 == b1 || f.Bonds[b2].Order < 2 || f.Bonds[b2].Order > 3 {
 					continue
 				}
-				b := f.Other(b1, a)
-				if !conjugable(f.Atoms[b].Element) {
-					continue
-				}
-				for _, b2 := range f.Adj[b] {
-					if b2 == b1 || f.Bonds[b2].Order < 2 || f.Bonds[b2].Order > 3 {
-						continue
-					}
-					c := f.Other(b2, b)
-					if c == a || f.Atoms[c].Radical != 0 || !endAtom(f, c) ||
-						(f.Bonds[b2].Order > 2 && !conjugable(f.Atoms[c].Element)) {
-						continue
-					}
-					alt, err := f.WithBondOrders(map[int]int{b1: o1 + 1, b2: f.Bonds[b2].Order - 1}, map[int]int{a: 0, c: 1})
-					if err != nil {
-						continue
-					}
-					k := stateKey(alt)
-					if seen[k] {
-						continue
-					}
-					if len(forms) >= limit {
-						capped = true
-						continue
-					}
-					seen[k] = true
-					forms = append(forms, alt)
+				if c := f.Other(b2, b); c != a && endAtom(f, c) {
+					fn(a, b1, b2, c)
 				}
 			}
 		}
 	}
-	return forms, capped
+}
+
+// shifted returns f after the shift eachShift reported: b1 up one order,
+// b2 down one, a's electron moved onto c (which may already hold one).
+func shifted(f *molecule.Molecule, a, b1, b2, c int) (*molecule.Molecule, error) {
+	return f.WithBondOrders(map[int]int{b1: f.Bonds[b1].Order + 1, b2: f.Bonds[b2].Order - 1},
+		map[int]int{a: 0, c: f.Atoms[c].Radical + 1})
 }
 
 // conjugable reports whether an unpaired electron may move onto or through
@@ -175,31 +194,18 @@ func stateKey(m *molecule.Molecule) string {
 // is sp (two double bonds or a triple bond) and no two bonded atoms both
 // carry an unpaired electron.
 func lewisAdmissible(m *molecule.Molecule) bool {
+	return !bondedRadicals(m) && !spInSmallRing(m)
+}
+
+// bondedRadicals reports whether two bonded atoms of m both carry an
+// unpaired electron (which pair up).
+func bondedRadicals(m *molecule.Molecule) bool {
 	for _, b := range m.Bonds {
 		if m.Atoms[b.A].Radical > 0 && m.Atoms[b.B].Radical > 0 {
-			return false // unpaired electrons on bonded atoms pair up
+			return true
 		}
 	}
-	for i := range m.Atoms {
-		multiple, triple := 0, false
-		for _, b := range m.Adj[i] {
-			switch m.Bonds[b].Order {
-			case 2:
-				multiple++
-			case 3:
-				triple = true
-			}
-		}
-		if multiple < 2 && !triple {
-			continue
-		}
-		for _, n := range m.RingSizes(i) {
-			if n <= 8 {
-				return false
-			}
-		}
-	}
-	return true
+	return false
 }
 
 // aromaticRings counts the rings of m's smallest set whose atoms are all
@@ -465,37 +471,14 @@ func ResonanceStructures(m *molecule.Molecule) (forms []*molecule.Molecule, capp
 // one-electron shifts do not tell apart, and no pairing is looked for.
 func pairedStructure(m *molecule.Molecule, forms []*molecule.Molecule) (string, bool) {
 	for i, a := range m.Atoms {
-		if a.Radical == 0 {
-			continue
-		}
-		for _, b := range m.Adj[i] {
-			if m.Bonds[b].Order > 1 || m.Bonds[b].Aromatic {
-				return "", false // a σ radical
-			}
+		if a.Radical != 0 && !allSingle(m, i) {
+			return "", false // a σ radical
 		}
 	}
 	best := ""
 	for _, f := range forms {
-		orders, radicals := map[int]int{}, map[int]int{}
-		for b, bond := range f.Bonds {
-			x, y := bond.A, bond.B
-			if bond.Order > 2 || bond.Aromatic || f.Atoms[x].Radical != 1 || f.Atoms[y].Radical != 1 {
-				continue
-			}
-			if _, done := radicals[x]; done {
-				continue
-			}
-			if _, done := radicals[y]; done {
-				continue
-			}
-			orders[b] = bond.Order + 1
-			radicals[x], radicals[y] = 0, 0
-		}
-		if len(orders) == 0 {
-			continue
-		}
-		p, err := f.WithBondOrders(orders, radicals)
-		if err != nil {
+		p, ok := pairBonded(f)
+		if !ok {
 			continue
 		}
 		if c := p.Canonical(); best == "" || c < best {
@@ -503,6 +486,33 @@ func pairedStructure(m *molecule.Molecule, forms []*molecule.Molecule) (string, 
 		}
 	}
 	return best, best != ""
+}
+
+// pairBonded returns f with each pair of single unpaired electrons on atoms
+// joined by a single or double, non-aromatic bond made one bond order more
+// (each atom used once, in bond order), and false when f has no such pair
+// or the result is no valid structure.
+func pairBonded(f *molecule.Molecule) (*molecule.Molecule, bool) {
+	orders, radicals := map[int]int{}, map[int]int{}
+	for b, bond := range f.Bonds {
+		x, y := bond.A, bond.B
+		if bond.Order > 2 || bond.Aromatic || f.Atoms[x].Radical != 1 || f.Atoms[y].Radical != 1 {
+			continue
+		}
+		if _, done := radicals[x]; done {
+			continue
+		}
+		if _, done := radicals[y]; done {
+			continue
+		}
+		orders[b] = bond.Order + 1
+		radicals[x], radicals[y] = 0, 0
+	}
+	if len(orders) == 0 {
+		return nil, false
+	}
+	p, err := f.WithBondOrders(orders, radicals)
+	return p, err == nil
 }
 
 // spinConflictForm looks among the resonance structures of a radical with
@@ -531,38 +541,19 @@ func spinConflictForm(m *molecule.Molecule, forms []*molecule.Molecule) (string,
 		if spInSmallRing(f) {
 			continue
 		}
-		for _, b := range f.Bonds {
-			if f.Atoms[b.A].Radical > 0 && f.Atoms[b.B].Radical > 0 {
-				keep(f)
-				break
-			}
+		if bondedRadicals(f) {
+			keep(f)
 		}
-		// The shift X•–Y=Z → X=Y–Z•• onto a Z that already has an electron
-		// (the move resonanceForms does not make).
-		for a, at := range f.Atoms {
-			if at.Radical != 1 || !endAtom(f, a) || !allSingle(f, a) {
-				continue // only a π radical moves
+		// The shift X•–Y=Z → X=Y–Z•• of a π radical onto a Z that already
+		// has an electron (the move resonanceForms does not make).
+		eachShift(f, func(a, b1, b2, c int) {
+			if !allSingle(f, a) || f.Atoms[c].Radical != 1 {
+				return // only a π radical moves, and onto an electron
 			}
-			for _, b1 := range f.Adj[a] {
-				o1 := f.Bonds[b1].Order
-				b := f.Other(b1, a)
-				if !conjugable(f.Atoms[b].Element) {
-					continue
-				}
-				for _, b2 := range f.Adj[b] {
-					if b2 == b1 || f.Bonds[b2].Order < 2 || f.Bonds[b2].Order > 3 {
-						continue
-					}
-					c := f.Other(b2, b)
-					if c == a || f.Atoms[c].Radical != 1 || !endAtom(f, c) {
-						continue
-					}
-					if alt, err := f.WithBondOrders(map[int]int{b1: o1 + 1, b2: f.Bonds[b2].Order - 1}, map[int]int{a: 0, c: 2}); err == nil {
-						keep(alt)
-					}
-				}
+			if alt, err := shifted(f, a, b1, b2, c); err == nil {
+				keep(alt)
 			}
-		}
+		})
 	}
 	return best, best != ""
 }
@@ -579,8 +570,8 @@ func allSingle(f *molecule.Molecule, a int) bool {
 }
 
 // spInSmallRing reports whether an atom of f with two double bonds or a
-// triple bond lies in a ring of at most eight atoms (lewisAdmissible's ring
-// rule).
+// triple bond lies in a ring of at most eight atoms: no Lewis structure of a
+// species, as the ring cannot hold the linear geometry.
 func spInSmallRing(f *molecule.Molecule) bool {
 	for i := range f.Atoms {
 		multiple, triple := 0, false
