@@ -122,13 +122,8 @@ func TestErrors(t *testing.T) {
 		{"xyz", 0, `"x" is not an element symbol`},
 	}
 	for _, c := range cases {
-		_, err := ParseSMILES(c.smiles)
-		require.Error(t, err, c.smiles)
-		var se *SMILESError
-		require.True(t, errors.As(err, &se), c.smiles)
-		assert.Equal(t, c.pos, se.Pos, "%q: %v", c.smiles, err)
-		assert.Contains(t, se.Msg, c.msg, c.smiles)
-		assert.True(t, strings.HasPrefix(err.Error(), "position "), c.smiles)
+		se := requireSMILESError(t, c.smiles, c.pos, c.msg)
+		assert.True(t, strings.HasPrefix(se.Error(), "position "), c.smiles)
 	}
 }
 
@@ -506,4 +501,17 @@ func TestFormulaIsotopes(t *testing.T) {
 		assert.Equal(t, want, m.Formula(), smi)
 	}
 	assert.Equal(t, "C2H6", HillFormula(parse(t, "CC[2H]").Composition()))
+}
+
+// requireSMILESError parses smiles, requires a *SMILESError, asserts its
+// position and that its message contains msg, and returns it.
+func requireSMILESError(t *testing.T, smiles string, pos int, msg string) *SMILESError {
+	t.Helper()
+	_, err := ParseSMILES(smiles)
+	require.Error(t, err, smiles)
+	var se *SMILESError
+	require.True(t, errors.As(err, &se), smiles)
+	assert.Equal(t, pos, se.Pos, "%q: %v", smiles, err)
+	assert.Contains(t, se.Msg, msg, smiles)
+	return se
 }

@@ -1,7 +1,6 @@
 package molecule
 
 import (
-	"errors"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -29,12 +28,7 @@ func TestSMILESMessageHints(t *testing.T) {
 		{"C=[N+]=[O-]", 7, "oxygen with charge -1 and valence 2", ""},
 	}
 	for _, c := range cases {
-		_, err := ParseSMILES(c.smiles)
-		require.Error(t, err, c.smiles)
-		var se *SMILESError
-		require.True(t, errors.As(err, &se), c.smiles)
-		assert.Equal(t, c.pos, se.Pos, "%q: %v", c.smiles, err)
-		assert.Contains(t, se.Msg, c.msg, c.smiles)
+		se := requireSMILESError(t, c.smiles, c.pos, c.msg)
 		if c.not != "" {
 			assert.NotContains(t, se.Msg, c.not, c.smiles)
 		}
