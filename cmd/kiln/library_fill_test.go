@@ -164,7 +164,7 @@ func TestEstimateRefusesRoundedHalomethanes(t *testing.T) {
 // Ct-(Cl), Cd-(F)(Cl); no group for a cumulated C=C=C=O chain), and
 // trifluoroethylene and the trifluorovinyl radical, which it estimated with
 // flags, come from the reference library with their source's ΔHf°298
-// (NASA/TP-2002-211556; Active Thermochemical Tables for C2HCl and C2Cl2)
+// (NASA/TP-2002-211556; Active Thermochemical Tables for the haloacetylenes)
 // and no estimate flag. The trichlorovinyl radical, whose record
 // is not entered, stays a group estimate.
 func TestEstimateLibraryHaloethylenes(t *testing.T) {
@@ -174,6 +174,9 @@ func TestEstimateLibraryHaloethylenes(t *testing.T) {
 		{"FC(Cl)=C(Cl)Cl", "C2FCl3", "(-166.0 kJ/mol)"},
 		{"C#CCl", "C2HCl", "(229.0 kJ/mol)"},
 		{"ClC#CCl", "C2Cl2", "(233.8 kJ/mol)"},
+		{"C#CF", "C2HF", "(104.4 kJ/mol)"},
+		{"FC#CF", "C2F2", "(2.9 kJ/mol)"},
+		{"C#CBr", "C2HBr", "(275.9 kJ/mol)"},
 		{"ClC#[C]", "C2Cl", "(534.1 kJ/mol)"},
 		{"F[C]=C(F)F", "C2F3", "(-228.2 kJ/mol)"},
 		{"O=C=C=C=O", "C3O2", "(-93.6 kJ/mol)"},

@@ -226,7 +226,7 @@ func TestLookupNSX(t *testing.T) {
 		{"[C](Cl)(Cl)Cl", 0, "CCl3"}, {"[C](F)(F)F", 0, "CF3"}, {"[CH](F)F", 0, "CHF2"}, {"F[CH]Cl", 0, "CHFCl"},
 		{"ClCF", 0, "CH2FCl"}, {"FC=O", 0, "HCOF"}, {"ClC=O", 0, "HCOCl"}, {"ClC(F)=O", 0, "COFCl"},
 		{"FC(F)=CF", 0, "C2HF3"}, {"ClC(F)=C(F)F", 0, "C2F3Cl"}, {"ClC(Cl)=C(F)Cl", 0, "C2FCl3"},
-		{"ClC#C", 0, "C2HCl"}, {"ClC#CCl", 0, "C2Cl2"},
+		{"ClC#C", 0, "C2HCl"}, {"ClC#CCl", 0, "C2Cl2"}, {"FC#C", 0, "C2HF"}, {"FC#CF", 0, "C2F2"}, {"BrC#C", 0, "C2HBr"},
 		{"[C]#CCl", 2, "C2Cl"}, {"FC(F)=[C]F", 0, "C2F3"},
 		{"C(=C=O)=C=O", 0, "C3O2"}, {"[C]#CF", 4, ""}, {"FC(F)=[C]F", 4, ""},
 		{"ClC(Cl)=[C]Cl", 0, ""}, // C2Cl3: the compilation's record is not entered (data_nsx.go)
