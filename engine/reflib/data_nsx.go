@@ -117,10 +117,12 @@ var nsxEntries = []entry{
 		hi:     [7]float64{5.1521845e+00, 2.3051761e-03, -8.8033153e-07, 1.4789098e-10, -9.0977996e-15, 1.4004123e+04, -2.5442660e+00},
 		lo:     [7]float64{2.8269308e+00, 8.8051688e-03, -8.3866134e-06, 4.8016964e-09, -1.3313595e-12, 1.4682477e+04, 9.5504646e+00},
 		source: srcGRI30},
-	{name: "H2CN", smiles: "C=[N]", mult: 2, tLow: 300, tMid: 1000, tHigh: 4000, implied: true,
-		hi:     [7]float64{5.2097030e+00, 2.9692911e-03, -2.8555891e-07, -1.6355500e-10, 3.0432589e-14, 2.7677109e+04, -4.4444780e+00},
-		lo:     [7]float64{2.8516610e+00, 5.6952331e-03, 1.0711400e-06, -1.6226120e-09, -2.3511081e-13, 2.8637820e+04, 8.9927511e+00},
-		source: srcGRI30},
+	// H2CN: the GRI-Mech 3.0 block implies 247.3 kJ/mol, 8.8 above the Active
+	// Thermochemical Tables value the database entry carries (238.569 ± 0.93).
+	{name: "H2CN", smiles: "C=[N]", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{3.80315578e+00, 5.47197362e-03, -1.95314875e-06, 3.13362403e-10, -1.86249384e-14, 2.71302747e+04, 3.31759436e+00},
+		lo:     [7]float64{3.97799555e+00, -3.43275801e-03, 2.59134260e-05, -3.04692171e-08, 1.16272717e-11, 2.74854081e+04, 4.43067396e+00},
+		source: srcGBR + " (iminyl radical H2C=N•; ΔHf°298: Active Thermochemical Tables)"},
 	// --- C2 species of hydrocarbon oxidation ---
 	{name: "CH2CO", smiles: "C=C=O", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{4.51129732e+00, 9.00359745e-03, -4.16939635e-06, 9.23345882e-10, -7.94838201e-14, -7.55105311e+03, 6.32247205e-01},
