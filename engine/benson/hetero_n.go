@@ -478,7 +478,7 @@ func nitrogenSite(g *graph, i int) (site, missing string) {
 	if len(g.nbr[i]) == 0 {
 		return "amidogen (NH2•)", ""
 	}
-	alkyl, aryl := 0, 0
+	alkyl, aryl, hydrazine := 0, 0, -1
 	for _, j := range g.nbr[i] {
 		switch t := g.typ[j]; {
 		case t == "C":
@@ -488,7 +488,10 @@ func nitrogenSite(g *graph, i int) (site, missing string) {
 		case t == "CO":
 			return "amidyl (N• next to C=O)", ""
 		case g.m.Atoms[j].Element == "N":
-			return "hydrazinyl (N• bonded to N)", ""
+			if t != "N" || hydrazine >= 0 {
+				return "hydrazinyl (N• bonded to N)", ""
+			}
+			hydrazine = j
 		case g.m.Atoms[j].Element == "O":
 			return "oxyaminyl (N• bonded to O)", ""
 		case g.m.Atoms[j].Element == "S":
@@ -500,6 +503,8 @@ func nitrogenSite(g *graph, i int) (site, missing string) {
 		}
 	}
 	switch {
+	case hydrazine >= 0:
+		return hydrazinylSite(g, i, hydrazine, alkyl, aryl)
 	case aryl == 1 && alkyl == 0:
 		return "anilino", ""
 	case aryl > 0:
@@ -507,13 +512,49 @@ func nitrogenSite(g *graph, i int) (site, missing string) {
 	case alkyl == 1:
 		return "aminyl", ""
 	}
-	return "dialkylaminyl", dialkylaminylSite
+	return "dialkylaminyl", ""
 }
 
-// dialkylaminylSite flags a dialkylaminyl site (R2N•): its increment rests
-// on published (CH3)2N–H bond enthalpies that disagree by 3.5 kcal/mol
-// (hbi_n.tsv); class.go widens the uncertainty by widenDialkylaminyl.
-const dialkylaminylSite = "dialkylaminyl radical site (R2N•): published (CH3)2N–H bond enthalpies disagree by 3.5 kcal/mol"
+// hydrazinylSite classifies an N• site i bonded to the amine-type N j
+// (a hydrazine N–N), with alkyl and aryl further neighbours of i. The
+// increments (hbi_n.tsv) come from three molecules: H2N–NH• (hydrazinyl),
+// (CH3)2N–NH• (N′,N′-dialkylhydrazinyl) and CH3–N•–NH2 (N-alkylhydrazinyl).
+// A site that matches none of them in the substitution of the other N
+// takes the nearest and is flagged (substitutedHydrazinylSite); an aryl
+// or any non-alkyl substituent on either N has no increment at hand.
+func hydrazinylSite(g *graph, i, j, alkyl, aryl int) (site, missing string) {
+	if aryl > 0 {
+		return "hydrazinyl (N• bonded to N) next to an aryl ring", ""
+	}
+	far := 0 // carbon substituents of the other N
+	for _, k := range g.nbr[j] {
+		if k == i {
+			continue
+		}
+		if g.typ[k] != "C" {
+			return "hydrazinyl (N• bonded to N) next to an N bearing " + g.typ[k], ""
+		}
+		far++
+	}
+	switch {
+	case alkyl > 0 && far == 0:
+		return "N-alkylhydrazinyl", ""
+	case alkyl > 0:
+		return "N-alkylhydrazinyl", substitutedHydrazinylSite
+	case far == 0:
+		return "hydrazinyl", ""
+	case far == 2:
+		return "N',N'-dialkylhydrazinyl", ""
+	}
+	return "N',N'-dialkylhydrazinyl", substitutedHydrazinylSite
+}
+
+// substitutedHydrazinylSite flags a hydrazinyl site whose other N carries
+// a number of alkyl groups that none of the increments was measured with
+// (RNH–NH•, R–N•–NHR′, R–N•–NR′2): the nearest increment is used. Alkyl
+// groups on the other N lower D(N–H) by 3.7 kcal/mol from H2N–NH–H to
+// (CH3)2N–NH–H (hbi_n.tsv); class.go widens the uncertainty by that.
+const substitutedHydrazinylSite = "hydrazinyl radical site whose other N is substituted otherwise than in the molecule its increment comes from"
 
 // substitutedAnilinoSite flags an anilino site whose N carries a further
 // substituent (Ar–N•–R): the C6H5NH–H increment is used, and the

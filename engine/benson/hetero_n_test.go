@@ -85,7 +85,6 @@ func TestNitrogenStillRefused(t *testing.T) {
 		"N=Cc1ccccc1":       "Cb-(CdN)",
 		"C=C=N":             "cumulated C=N",
 		"CC=NO":             "O-(NI)(H)",
-		"CC=[N]":            "radical site of type iminyl",
 		"C=C[N+]#[C-]":      "Cd-(NC)(H)",
 		"CN(C)[N+](=O)[O-]": "NO2-(N)",
 		"C=C[N+](=O)[O-]":   "Cd-(NO2)(H)",

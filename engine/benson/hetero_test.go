@@ -165,7 +165,13 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"C[S]", "thiyl", false},
 		{"CC[S]", "thiyl", false},
 		{"C[NH]", "aminyl", false},
-		{"C[N]C", "dialkylaminyl", true},
+		{"C[N]C", "dialkylaminyl", false}, // hbi_n.tsv: published and computed values agree to 0.8
+		{"C=[N]", "iminyl", false},
+		{"CC(C)=[N]", "iminyl", false},
+		{"N[NH]", "hydrazinyl", false},
+		{"CN(C)[NH]", "N',N'-dialkylhydrazinyl", false},
+		{"C[N]N", "N-alkylhydrazinyl", false},
+		{"CN[NH]", "N',N'-dialkylhydrazinyl", true},
 		{"[CH2]N", "alpha-amino", false},
 		{"c1ccccc1[NH]", "anilino", false}, // hbi_n.tsv
 		{"C[CH][N+](=O)[O-]", "primary", true},

@@ -34,17 +34,17 @@ import (
 // or F, see hetero.go), α,α-dichloro, -trichloro, -difluoro and -trifluoro
 // (two or three halogens of one element, hetero_sx.go), alkoxy (on O),
 // phenoxy (O on Cb), peroxy (O on O); on N and S (hetero.go, hetero_n.go):
-// aminyl (R–NH•), dialkylaminyl (R2N•), anilino (Ar–NH•), thiyl (R–S•),
-// arylthiyl (Ar–S•).
+// aminyl (R–NH•), dialkylaminyl (R2N•), anilino (Ar–NH•), iminyl (R2C=N•),
+// hydrazinyl (H2N–NH•, R2N–NH•, R–N•–NH2), thiyl (R–S•), arylthiyl (Ar–S•).
 // Sites that only resemble one of these use the nearest one and are
 // reported in Missing; where the direction and size of the error are known
 // (an α-halo centre with an alkyl substituent, a site next to a CX3 or
-// CX2 carbon (bias.go), an N-substituted anilino site, a thiyl site on an
-// unsaturated carbon) or the published bond
-// enthalpies disagree (dialkylaminyl, arylthiyl), class.go widens the
-// uncertainty by at least that size. Sites for which no increment is at
-// hand and the nearest one is far off — an N• bonded to N, O, S or a
-// halogen (hydrazinyl: N2H3), amidyl, iminyl and diazenyl, a C• on an
+// CX2 carbon (bias.go), an N-substituted anilino site, a hydrazinyl site
+// whose other N is substituted otherwise, a thiyl site on an unsaturated
+// carbon) or the published bond enthalpies disagree (arylthiyl), class.go
+// widens the uncertainty by at least that size. Sites for which no
+// increment is at hand and the nearest one is far off — an N• bonded to
+// O, S, a halogen or a non-amine N, amidyl, diazenyl, a C• on an
 // imine carbon (iminoyl), an O• bonded to N or S (aminoxyl), an S• bonded
 // to S (perthiyl) — are given a site name
 // with no row in the HBI tables, so addHBI refuses the estimate naming the
@@ -197,7 +197,7 @@ const noIncrementRoute = "a `group` statement cannot supply a bond-dissociation 
 
 // disputedIncrementNote explains the flag of a site that has its own
 // increment, taken from one of several published bond enthalpies that
-// disagree (dialkylaminyl, arylthiyl): the uncertainty is widened by their
+// disagree (arylthiyl): the uncertainty is widened by their
 // spread (class.go).
 const disputedIncrementNote = "the site's own increment, from one of published bond enthalpies that disagree; the uncertainty is widened by their spread"
 
@@ -409,7 +409,7 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 		}
 		if miss != "" {
 			note := "no increment for this site; nearest site type used"
-			if miss == dialkylaminylSite || miss == arylthiylSite {
+			if miss == arylthiylSite {
 				note = disputedIncrementNote
 			}
 			est.Missing = append(est.Missing, Missing{
