@@ -183,6 +183,19 @@ read with the garbage collector held back (`kiln-eglot-gc-cons-threshold')."
                      (propertize (concat "  " (kiln-eglot--label (plist-get h :label)))
                                  'face 'kiln-inlay-hint))))))
 
+(defun kiln-eglot--drop-stale-hints (beg end _len)
+  "Remove the inlay hints of the lines BEG..END just changed; ask again.
+A hint describes its line as the server last analysed it.  Left in place,
+text typed at the end of a line would land after it.  The request waits
+for the change to reach the server (it is deferred), and a publication
+after the analysis refreshes the hints again."
+  (let ((from (save-excursion (goto-char beg) (line-beginning-position)))
+        (to (save-excursion (goto-char end) (min (point-max) (1+ (line-end-position))))))
+    (dolist (ov (overlays-in from to))
+      (when (overlay-get ov 'kiln-eglot-hint)
+        (delete-overlay ov))))
+  (kiln-eglot--schedule-hints (current-buffer) 0.3))
+
 (defun kiln-eglot-refresh-hints (&optional buffer)
   "Ask the server for the inlay hints of the visible part of BUFFER; show them."
   (interactive)
@@ -265,8 +278,10 @@ Diagnostics not yet handed to Flymake are shown for the new lines."
             (setq kiln-eglot--set-idle-time t))
           (add-hook 'window-scroll-functions #'kiln-eglot--on-scroll nil t)
           (when (kiln-eglot--own-hints-p)
+            (add-hook 'after-change-functions #'kiln-eglot--drop-stale-hints nil t)
             (kiln-eglot--schedule-hints)))
       (remove-hook 'window-scroll-functions #'kiln-eglot--on-scroll t)
+      (remove-hook 'after-change-functions #'kiln-eglot--drop-stale-hints t)
       (when kiln-eglot--set-idle-time
         (kill-local-variable 'eglot-send-changes-idle-time)
         (setq kiln-eglot--set-idle-time nil))

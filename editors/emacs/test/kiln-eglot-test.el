@@ -30,6 +30,7 @@
 (declare-function eglot--guess-contact "eglot")
 (declare-function eglot--TextDocumentPositionParams "eglot")
 (declare-function jsonrpc-request "jsonrpc")
+(declare-function eglot--signal-textDocument/didChange "eglot")
 
 (ert-deftest kiln-eglot-server-registered ()
   (skip-unless (kiln-eglot-test--load))
@@ -112,7 +113,23 @@
                                                                  (line-end-position)))))))
                                 (overlays-in (point-min) (point-max))))
                              20)))
-                  (should hint)))))
+                  (should hint)
+                  ;; Text typed at the end of that line: the stale hint goes
+                  ;; at once (else the text would land after it) and comes
+                  ;; back after the text once the server has analysed it.
+                  (goto-char (overlay-start hint))
+                  (insert "  # typed")
+                  (eglot--signal-textDocument/didChange) ; batch: no idle time to send it
+                  (should-not (seq-find (lambda (ov) (overlay-get ov 'kiln-eglot-hint))
+                                        (overlays-in (line-beginning-position)
+                                                     (min (point-max) (1+ (line-end-position))))))
+                  (should (kiln-eglot-test--wait
+                           (lambda ()
+                             (seq-find (lambda (ov)
+                                         (overlay-get ov 'kiln-eglot-hint))
+                                       (overlays-in (line-beginning-position)
+                                                    (min (point-max) (1+ (line-end-position))))))
+                           20))))))
         (when buf
           (with-current-buffer buf
             (when (eglot-current-server)
