@@ -1,6 +1,7 @@
 package benson
 
 import (
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -79,4 +80,32 @@ func TestAceneFlag(t *testing.T) {
 	p := estimate(t, "c1ccc2c(c1)ccc1ccccc12", Options{})
 	assert.GreaterOrEqual(t, a.Uncertainty, widenRing*calorie*1000, "the acene flag widens ΔHf°")
 	assert.Less(t, p.Uncertainty, widenRing*calorie*1000)
+}
+
+// An exocyclic C=N on a three- or four-membered ring (an imine or iminyl
+// radical) takes the exocyclic C=C ring's strain as the approximation,
+// flagged and widened: the plain cycloalkane correction leaves out some 13
+// kcal/mol on cyclopropane. On larger rings the exocyclic double bond adds
+// no correction, as for C=C.
+func TestExocyclicImineRing(t *testing.T) {
+	for smi, flagged := range map[string]bool{
+		"N=C1CC1": true, "[N]=C1CC1": true, "N=C1CCC1": true, "[N]=C1CCC1": true,
+		"C=C1CC1": false, "N=C1CCCCC1": false,
+	} {
+		e := estimate(t, smi, Options{})
+		ring := false
+		for _, m := range e.Missing {
+			ring = ring || strings.HasPrefix(m.Group, "ring:")
+		}
+		assert.Equal(t, flagged, ring, "%s: %v", smi, e.Missing)
+		if flagged {
+			assert.Greater(t, e.Uncertainty/calorie/1000, 5.0, smi)
+		}
+	}
+	e := estimate(t, "N=C1CC1", Options{})
+	found := false
+	for _, c := range e.Corrections {
+		found = found || c.Name == "ring strain: methylenecyclopropane"
+	}
+	assert.True(t, found, "%v", e.Corrections)
 }

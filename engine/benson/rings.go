@@ -49,7 +49,7 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 			return "", ""
 		}
 	}
-	oxy, other, aromatic, carbonyl, exo := 0, 0, 0, 0, 0
+	oxy, other, aromatic, carbonyl, exo, exoN := 0, 0, 0, 0, 0, 0
 	var oPos []int
 	var dbl []int // index k of ring bond r[k]–r[k+1] that is double
 	for k, a := range r {
@@ -68,9 +68,12 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 		if g.typ[a] == "CO" {
 			carbonyl++
 		}
-		if t := g.typ[a]; t == "Cd" || t == "Ca" {
+		if t := g.typ[a]; t == "Cd" || t == "Ca" || t == "CdN" {
 			if p := g.partner(a, 2); p >= 0 && !slices.Contains(r, p) {
 				exo++
+				if t == "CdN" {
+					exoN++ // an exocyclic C=N (imine, iminyl)
+				}
 			}
 		}
 		b := g.bondBetween(a, r[(k+1)%n])
@@ -117,8 +120,13 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 	}
 	if oxy == 0 && other == 0 && carbonyl == 0 {
 		if exo > 0 && n <= 4 {
-			// An exocyclic double bond adds strain to a small ring.
+			// An exocyclic double bond adds strain to a small ring. The
+			// corrections were measured with C=C; an exocyclic C=N takes
+			// them as the approximation, flagged.
 			if n == 3 && nd == 0 && exo == 1 {
+				if exoN > 0 {
+					return "C3 ring with an exocyclic C=N", "methylenecyclopropane"
+				}
 				return "methylenecyclopropane", saturatedRing(n)
 			}
 			return fmt.Sprintf("C%d ring with %d double bonds and %d exocyclic double bonds", n, nd, exo), carboFewer(n, nd)
