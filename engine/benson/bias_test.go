@@ -214,8 +214,9 @@ func TestPolyhaloNeighbourNotAlkyl(t *testing.T) {
 		"FC(F)(F)[CH]F":        {1, 0},
 		"Cl[C](Cl)C(Cl)(Cl)Cl": {1, 0},
 		"C[C](F)F":             {0, 1},
-		"C[CH]Cl":              {0, 1},
-		"FC(F)(F)[C](F)C":      {1, 1},
+		"C[CH]Cl":              {0, 0}, // one alkyl: the CH3CHCl–H increment
+		"C[C](C)Cl":            {0, 1}, // two: the CH3CHCl–H increment, flagged
+		"FC(F)(F)[C](F)C":      {1, 0}, // CH3CHF–H, with the CF3 flagged as β-polyhalo
 	} {
 		e := heteroEstimate(t, smi)
 		assert.Equal(t, want[0], flagCountOf(e, "HBI: "+betaPolyhaloSite), "%s: %v", smi, e.Missing)

@@ -157,8 +157,11 @@ const (
 	// published bond enthalpies that disagree: widened by at least the size
 	// of the bias or the disagreement (kcal/mol).
 	//
-	// widenSubstitutedHalo: an α-halo centre with a carbon substituent
-	// (CH3CH•Cl, CH3C•Cl2) takes the halomethane's increment. In the alkane
+	// widenSubstitutedHalo: an α-halo centre with carbon substituents its
+	// increment was not measured with takes the nearest one: the
+	// halomethane's for α-bromo, α-iodo and α,α-dihalo centres (CH3CH•Br,
+	// CH3C•Cl2), CH3CHX–H for α-chloro and α-fluoro centres with two
+	// (CH3)2C•Cl: the secondary→tertiary drop of the alkanes is 2.1). In the alkane
 	// series one alkyl group on the centre lowers D(C–H) by 2.5 and two by
 	// 4.6 kcal/mol (101.1, 98.6, 96.5: Blanksby & Ellison 2003, hbi.tsv);
 	// for chlorine, CH3CHCl–H is about 96.5 against ClCH2–H 100.1

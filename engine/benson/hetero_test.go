@@ -179,10 +179,12 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"[c]1ccncc1", "phenyl", true},
 		{"[CH2]c1ccccn1", "benzylic", true},
 		{"[CH2]c1ccccc1", "benzylic", false},
-		{"CC[CH]Cl", "alpha-chloro", true}, // substituted α-halo centre: XCH2–H increment
-		{"C[CH]F", "alpha-fluoro", true},
-		{"N#C[CH2]", "primary", true}, // α-cyano: no increment, stabilisation left out
-		{"CS[CH2]", "primary", true},  // α-thio likewise
+		{"CC[CH]Cl", "secondary alpha-chloro", false}, // one alkyl on the centre: CH3CHCl–H (hbi_nsx.tsv)
+		{"C[CH]F", "secondary alpha-fluoro", false},
+		{"CC(C)[C](C)Cl", "secondary alpha-chloro", true}, // two: the CH3CHCl–H increment, flagged
+		{"C[CH]Br", "alpha-bromo", true},                  // no CH3CHBr–H increment: BrCH2–H, flagged
+		{"N#C[CH2]", "primary", true},                     // α-cyano: no increment, stabilisation left out
+		{"CS[CH2]", "primary", true},                      // α-thio likewise
 		{"[CH2]CBr", "primary", false},
 		{"C[CH]Br", "alpha-bromo", true}, // substituted: the BrCH2–H increment, flagged as for Cl and F
 		{"[CH2]Br", "alpha-bromo", false},

@@ -201,6 +201,45 @@ const noIncrementRoute = "a `group` statement cannot supply a bond-dissociation 
 // spread (class.go).
 const disputedIncrementNote = "the site's own increment, from one of published bond enthalpies that disagree; the uncertainty is widened by their spread"
 
+// secondaryHaloSites are the increments of α-halo centres with one alkyl
+// substituent, CH3CHX–H (hbi_nsx.tsv), by the halomethane site they refine.
+var secondaryHaloSites = map[string]string{
+	"alpha-chloro": "secondary alpha-chloro",
+	"alpha-fluoro": "secondary alpha-fluoro",
+}
+
+// alphaHaloSite returns the increment of an sp3 α-halo radical centre i
+// whose best stabiliser is the halogen kind (alpha-chloro …). Increments are
+// measured on XCH2–H and, for Cl and F, on CH3CHX–H; alkyl substitution at
+// the centre lowers D(R–H) (a CX2/CX3 neighbour raises it instead: the
+// β-polyhalo flag covers that one, bias.go). A centre with one alkyl
+// neighbour takes the CH3CHX–H increment where there is one; any other
+// substituted centre takes the nearest increment and is flagged
+// (substitutedHaloSite).
+func (g *graph) alphaHaloSite(i int, kind string) (site, missing string) {
+	alkyl, other := 0, 0
+	for _, j := range g.nbr[i] {
+		if !g.isCarbon(j) {
+			continue
+		}
+		if h, _ := g.halogens(j); g.typ[j] == "C" && h < 2 {
+			alkyl++
+		} else if h < 2 || g.typ[j] != "C" {
+			other++
+		}
+	}
+	secondary, ok := secondaryHaloSites[kind]
+	switch {
+	case alkyl == 0 && other == 0:
+		return kind, ""
+	case ok && alkyl == 1 && other == 0:
+		return secondary, ""
+	case ok:
+		return secondary, substitutedHaloSite + kind + " (the CH3CHX–H increment is used)"
+	}
+	return kind, substitutedHaloSite + kind + " (the XCH2–H increment is used)"
+}
+
 // substitutedHaloSite starts the note of an α-halo radical centre with a
 // carbon substituent (CH3CH•Cl, CH3C•Cl2): the increment was measured on the
 // halomethane (XCH2–H, X2CH–H), and alkyl substitution at the centre lowers
@@ -260,20 +299,11 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 			}
 			if best, several := g.stabilisation(i); best >= 0 {
 				s := stabilisers[best]
-				missing := s.missing
+				site, missing := s.site, s.missing
 				if missing == "" && strings.HasPrefix(s.kind, "alpha-") && s.kind != "alpha-hydroxy" && s.kind != "alpha-alkoxy" && s.kind != "alpha-amino" {
-					// α-halo increments are measured on XCH2–H; alkyl
-					// substitution at the centre lowers D(R–H) further (a
-					// CX2/CX3 neighbour raises it instead: the β-polyhalo
-					// flag covers that one).
-					for _, j := range g.nbr[i] {
-						if h, _ := g.halogens(j); g.isCarbon(j) && (h < 2 || g.typ[j] != "C") {
-							missing = substitutedHaloSite + s.kind + " (the XCH2–H increment is used)"
-							break
-						}
-					}
+					site, missing = g.alphaHaloSite(i, s.kind)
 				}
-				return s.site, missing, several, nil
+				return site, missing, several, nil
 			}
 		}
 		carbons, carbonyl := 0, false
