@@ -439,25 +439,25 @@ func typeNote(centre string) string {
 // where the N carries its H back). Increments (hbi_nsx.tsv, hbi_n.tsv):
 //
 //   - aminyl: R–NH•, one sp3 carbon neighbour (CH3NH–H).
-//   - dialkylaminyl: R2N•, two sp3 carbon neighbours ((CH3)2N–H). The
-//     published values disagree ((CH3)2N–H 95 against 91.5 kcal/mol, see
-//     hbi_n.tsv), so the site is flagged (dialkylaminylSite) and its
-//     uncertainty widened by that spread (class.go).
+//   - dialkylaminyl: R2N•, two sp3 carbon neighbours ((CH3)2N–H 94.3 from
+//     a published radical enthalpy, with which computed values agree).
 //   - anilino: Ar–NH•, one benzene-ring neighbour (C6H5NH–H). With a further
 //     neighbour (N-alkyl or N-aryl anilino, Ar–N•–R) the C6H5NH–H increment
 //     is used and flagged (substitutedAnilinoSite): a substituent on the N
 //     lowers the N–H bond as it does from CH3NH–H to (CH3)2N–H.
+//   - iminyl: R2C=N• (H2C=N–H, 87.9 kcal/mol).
+//   - hydrazinyl: an N• bonded to an amine N with only H or alkyl groups on
+//     either N (hydrazinylSite: H2N–NH–H 83.1, computed values for the
+//     alkylated sites, flagged).
 //
 // Every other N site has no increment at hand and is given a site name with
 // no row in the HBI tables, so the estimate is refused naming it (addHBI):
 //
-//   - iminyl (R2C=N•) and diazenyl (R–N=N•): H2C=N–H is about 90 kcal/mol
-//     against about 100 for CH3NH–H (from memory).
-//   - hydrazinyl (an N• bonded to another N: H2N–NH•, the N2H3 radical):
-//     the lone pair of the neighbouring N weakens the N–H bond by roughly
-//     15–25 kcal/mol (published N–H bond enthalpies of hydrazine range over
-//     about 76–87 kcal/mol against 100 for CH3NH–H, from memory), and no
-//     hydrazine N–H increment is at hand to enter with its source.
+//   - diazenyl (R–N=N•): no R–N=N–H bond enthalpy at hand.
+//   - hydrazinyl sites with any other neighbour (aryl, vinyl, acyl, a hetero
+//     atom) or bonded to a non-amine N: the lone pair of the neighbouring N
+//     weakens the N–H bond by some 17 kcal/mol against CH3NH–H, and no
+//     increment measures the further change such a group brings.
 //   - oxyaminyl (an N• bonded to O: HO–NH•, RO–NR•) and thioaminyl (bonded
 //     to S), haloaminyl (bonded to a halogen): no increment, and the
 //     heteroatom's lone pair changes the N–H bond strength by an amount of
@@ -478,7 +478,12 @@ func nitrogenSite(g *graph, i int) (site, missing string) {
 	if len(g.nbr[i]) == 0 {
 		return "amidogen (NH2•)", ""
 	}
-	alkyl, aryl, hydrazine := 0, 0, -1
+	for _, j := range g.nbr[i] {
+		if g.m.Atoms[j].Element == "N" {
+			return hydrazinylSite(g, i)
+		}
+	}
+	alkyl, aryl := 0, 0
 	for _, j := range g.nbr[i] {
 		switch t := g.typ[j]; {
 		case t == "C":
@@ -487,11 +492,6 @@ func nitrogenSite(g *graph, i int) (site, missing string) {
 			aryl++
 		case t == "CO":
 			return "amidyl (N• next to C=O)", ""
-		case g.m.Atoms[j].Element == "N":
-			if t != "N" || hydrazine >= 0 {
-				return "hydrazinyl (N• bonded to N)", ""
-			}
-			hydrazine = j
 		case g.m.Atoms[j].Element == "O":
 			return "oxyaminyl (N• bonded to O)", ""
 		case g.m.Atoms[j].Element == "S":
@@ -503,8 +503,6 @@ func nitrogenSite(g *graph, i int) (site, missing string) {
 		}
 	}
 	switch {
-	case hydrazine >= 0:
-		return hydrazinylSite(g, i, hydrazine, alkyl, aryl)
 	case aryl == 1 && alkyl == 0:
 		return "anilino", ""
 	case aryl > 0:
@@ -515,16 +513,41 @@ func nitrogenSite(g *graph, i int) (site, missing string) {
 	return "dialkylaminyl", ""
 }
 
-// hydrazinylSite classifies an N• site i bonded to the amine-type N j
-// (a hydrazine N–N), with alkyl and aryl further neighbours of i. The
-// increments (hbi_n.tsv) come from three molecules: H2N–NH• (hydrazinyl),
-// (CH3)2N–NH• (N′,N′-dialkylhydrazinyl) and CH3–N•–NH2 (N-alkylhydrazinyl).
-// A site that matches none of them in the substitution of the other N
-// takes the nearest and is flagged (substitutedHydrazinylSite); an aryl
-// or any non-alkyl substituent on either N has no increment at hand.
-func hydrazinylSite(g *graph, i, j, alkyl, aryl int) (site, missing string) {
-	if aryl > 0 {
-		return "hydrazinyl (N• bonded to N) next to an aryl ring", ""
+// hydrazinylSite classifies an N• site i bonded to an N (a hydrazine N–N
+// when that N is amine-type). The increments (hbi_n.tsv) come from three
+// molecules:
+//
+//   - hydrazinyl, H2N–NH–H (the library's N2H4 and N2H3): a site whose N
+//     and other N carry only H;
+//   - N′,N′-dialkylhydrazinyl, (CH3)2N–NH–H from one computed (G3B3) pair,
+//     79.4, against 70.0 from a published radical enthalpy of Bozzelli &
+//     Ritter: used for an NH• site whose other N carries alkyl groups,
+//     flagged (dialkylHydrazinylSite) and widened by that disagreement;
+//   - N-alkylhydrazinyl, CH3N(–H)–NH2 from one computed (G3B3) pair whose
+//     parent lies 3.5 kcal/mol above the handbook's methylhydrazine: used
+//     for an N• site that carries an alkyl group, flagged
+//     (alkylHydrazinylSite), more widely when the other N is substituted.
+//
+// Any other neighbour of either N (aryl, vinyl, acyl, a hetero atom), a
+// second N neighbour, or a non-amine N has no increment at hand: the site
+// is named without a row, so the estimate is refused naming it.
+func hydrazinylSite(g *graph, i int) (site, missing string) {
+	const refused = "hydrazinyl (N• bonded to N)"
+	j, alkyl := -1, 0
+	for _, k := range g.nbr[i] {
+		switch {
+		case g.m.Atoms[k].Element == "N":
+			if j >= 0 || g.typ[k] != "N" {
+				return refused, ""
+			}
+			j = k
+		case g.typ[k] == "C":
+			alkyl++
+		case g.typ[k] == "Cb" || g.typ[k] == "Cbf":
+			return refused + " next to an aryl ring", ""
+		default:
+			return refused + " next to a " + g.typ[k] + " " + g.m.Atoms[k].Element, ""
+		}
 	}
 	far := 0 // carbon substituents of the other N
 	for _, k := range g.nbr[j] {
@@ -532,29 +555,34 @@ func hydrazinylSite(g *graph, i, j, alkyl, aryl int) (site, missing string) {
 			continue
 		}
 		if g.typ[k] != "C" {
-			return "hydrazinyl (N• bonded to N) next to an N bearing " + g.typ[k], ""
+			return refused + " next to an N bearing " + g.typ[k], ""
 		}
 		far++
 	}
 	switch {
 	case alkyl > 0 && far == 0:
-		return "N-alkylhydrazinyl", ""
+		return "N-alkylhydrazinyl", alkylHydrazinylSite
 	case alkyl > 0:
 		return "N-alkylhydrazinyl", substitutedHydrazinylSite
 	case far == 0:
 		return "hydrazinyl", ""
-	case far == 2:
-		return "N',N'-dialkylhydrazinyl", ""
 	}
-	return "N',N'-dialkylhydrazinyl", substitutedHydrazinylSite
+	return "N',N'-dialkylhydrazinyl", dialkylHydrazinylSite
 }
 
-// substitutedHydrazinylSite flags a hydrazinyl site whose other N carries
-// a number of alkyl groups that none of the increments was measured with
-// (RNH–NH•, R–N•–NHR′, R–N•–NR′2): the nearest increment is used. Alkyl
-// groups on the other N lower D(N–H) by 3.7 kcal/mol from H2N–NH–H to
-// (CH3)2N–NH–H (hbi_n.tsv); class.go widens the uncertainty by that.
-const substitutedHydrazinylSite = "hydrazinyl radical site whose other N is substituted otherwise than in the molecule its increment comes from"
+// Flags of the hydrazinyl sites whose increment rests on one computed pair
+// (hydrazinylSite); class.go widens each.
+const (
+	// alkylHydrazinylSite: R–N•–NH2, the CH3N(–H)–NH2 increment.
+	alkylHydrazinylSite = "N-alkylhydrazinyl radical site (R–N•–NH2): increment from one computed (G3B3) pair whose parent lies 3.5 kcal/mol above the handbook value"
+	// substitutedHydrazinylSite: R–N•–NHR′, R–N•–NR′2, the same increment;
+	// alkyl groups on the other N lower D(N–H) further (by 3.7 kcal/mol from
+	// H2N–NH–H to (CH3)2N–NH–H, hbi_n.tsv).
+	substitutedHydrazinylSite = "N-alkylhydrazinyl radical site whose other N is substituted: CH3N(–H)–NH2 increment (one computed pair) used; substituents on the other N lower D(N–H) by several kcal/mol"
+	// dialkylHydrazinylSite: RNH–NH•, R2N–NH•, the (CH3)2N–NH–H increment,
+	// whose computed and published values disagree by 9.4 kcal/mol.
+	dialkylHydrazinylSite = "hydrazinyl radical site next to an alkylated N (R2N–NH•, RNH–NH•): computed and published (CH3)2N–NH–H bond enthalpies disagree by 9.4 kcal/mol"
+)
 
 // substitutedAnilinoSite flags an anilino site whose N carries a further
 // substituent (Ar–N•–R): the C6H5NH–H increment is used, and the

@@ -201,6 +201,12 @@ const noIncrementRoute = "a `group` statement cannot supply a bond-dissociation 
 // spread (class.go).
 const disputedIncrementNote = "the site's own increment, from one of published bond enthalpies that disagree; the uncertainty is widened by their spread"
 
+// computedIncrementNote explains the flag of a site whose own increment
+// comes from one computed pair of enthalpies that a handbook value of the
+// parent questions (alkylHydrazinylSite): the uncertainty is widened by
+// that difference (class.go).
+const computedIncrementNote = "the site's own increment, from one computed pair of enthalpies whose parent differs from the handbook value; the uncertainty is widened by that difference"
+
 // secondaryHaloSites are the increments of α-halo centres with one alkyl
 // substituent, CH3CHX–H (hbi_nsx.tsv), by the halomethane site they refine.
 var secondaryHaloSites = map[string]string{
@@ -439,8 +445,11 @@ func addHBI(m *molecule.Molecule, g *graph, l lookup, est *Result) error {
 		}
 		if miss != "" {
 			note := "no increment for this site; nearest site type used"
-			if miss == arylthiylSite {
+			switch miss {
+			case arylthiylSite, dialkylHydrazinylSite:
 				note = disputedIncrementNote
+			case alkylHydrazinylSite:
+				note = computedIncrementNote
 			}
 			est.Missing = append(est.Missing, Missing{
 				Group: "HBI: " + miss, Approximation: "HBI: " + site,

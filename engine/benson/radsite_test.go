@@ -1,6 +1,7 @@
 package benson
 
 import (
+	"math"
 	"strings"
 	"testing"
 
@@ -45,6 +46,7 @@ func TestRadicalSiteRefusedNamingSite(t *testing.T) {
 		"c1ccccc1N[NH]": "hydrazinyl (N• bonded to N) next to an N bearing Cb",
 		"CC(=O)N[NH]":   "hydrazinyl (N• bonded to N) next to an N bearing CO",
 		"N[N]c1ccccc1":  "hydrazinyl (N• bonded to N) next to an aryl ring",
+		"C=C[N]N":       "hydrazinyl (N• bonded to N) next to a Cd C",
 		"C/N=[N]":       "diazenyl",
 	} {
 		_, err := Estimate(parse(t, smi), Options{})
@@ -110,15 +112,23 @@ func TestBiasedRadicalSitesWidened(t *testing.T) {
 	// Two alkyl groups on the other N of a hydrazine: H2N–NH–H against
 	// (CH3)2N–NH–H.
 	hzDrop := bde(t, "hydrazinyl") - bde(t, "N',N'-dialkylhydrazinyl")
+	// (CH3)2N–NH–H from the computed pair against 70.0 from Bozzelli &
+	// Ritter's radical enthalpy with the same parent (quoted in hbi_n.tsv).
+	hzDisagree := bde(t, "N',N'-dialkylhydrazinyl") - 70.0
+	// CH3N(–H)–NH2 rests on a computed parent 26.15 kcal/mol (hbi_n.tsv)
+	// against the handbook's methylhydrazine row.
+	hzParent := 26.15 - heteroRef(t, "methylhydrazine").hf
 	// The published C6H5S–H values: 83.5 (tabulated) and about 79.
 	phsSpread := bde(t, "arylthiyl") - 79.0
 	cases := []struct {
 		smiles, site, flag string
 		bias               float64 // kcal/mol
 	}{
-		{"CN[NH]", "N',N'-dialkylhydrazinyl", "hydrazinyl radical site whose other N", hzDrop},
-		{"C[N]NC", "N-alkylhydrazinyl", "hydrazinyl radical site whose other N", hzDrop},
-		{"C[N]N(C)C", "N-alkylhydrazinyl", "hydrazinyl radical site whose other N", hzDrop},
+		{"CN[NH]", "N',N'-dialkylhydrazinyl", "next to an alkylated N", hzDisagree},
+		{"CN(C)[NH]", "N',N'-dialkylhydrazinyl", "next to an alkylated N", hzDisagree},
+		{"C[N]N", "N-alkylhydrazinyl", "(R–N•–NH2)", hzParent},
+		{"C[N]NC", "N-alkylhydrazinyl", "whose other N is substituted", math.Hypot(hzParent, hzDrop)},
+		{"C[N]N(C)C", "N-alkylhydrazinyl", "whose other N is substituted", math.Hypot(hzParent, hzDrop)},
 		{"C[N]c1ccccc1", "anilino", "N-substituted anilino", nDrop},
 		{"C[C](C)Cl", "secondary alpha-chloro", "substituted carbon", alkylDrop},
 		{"C[C](C)F", "secondary alpha-fluoro", "substituted carbon", alkylDrop},
