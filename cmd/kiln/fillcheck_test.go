@@ -59,7 +59,7 @@ func TestFlagOncePerDistinctApproximation(t *testing.T) {
 	require.Len(t, est[0].Flags, 1)
 	assert.True(t, strings.HasPrefix(est[0].Flags[0], "Cd-(F)2 ×2 (used as it stands"), est[0].Flags[0])
 
-	path := writeTemp(t, "f.kiln", "species diene "+smiles+"\nspecies vdf C=C(F)F\n")
+	path := writeTemp(t, "f.kiln", "species diene "+smiles+"\nspecies vdf CC=C(F)F\n")
 	_, stdout, _ = runKiln(t, "check", "--format", "json", path)
 	var diags []checkDiag
 	require.NoError(t, json.Unmarshal([]byte(stdout), &diags))
