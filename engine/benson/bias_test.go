@@ -24,7 +24,7 @@ const (
 	dimethylanilineRef    = 24.1   // Pedley et al. 1986, uncertain
 	thiazoleRef           = 40.0   // NIST WebBook, unsure
 	triazineRef           = 54.0   // 1,3,5-triazine, NIST WebBook (225.9 kJ/mol)
-	difluoroethyleneRef   = -80.4  // CH2=CF2, NASA/TP-2002-211556 C2H2F2 header (published, Gurvich 1991; the record is labelled an equilibrium mixture of the difluoroethylene isomers)
+	difluoroethyleneRef   = -79.57 // CH2=CF2, Active Thermochemical Tables -332.93 ± 2.3 kJ/mol, the 1,1-isomer's record in Goos, Burcat & Ruscic's database (2015); was -80.4, the NASA/TP-2002-211556 header of a record of the isomer mixture (Gurvich 1991)
 	// D(CF3CH2–H), Luo (from memory).
 	trifluoroethylCHRef = 106.7
 )
@@ -195,7 +195,8 @@ func TestAzineRingFlag(t *testing.T) {
 }
 
 // Cd-(F)2 next to a carbon without two fluorines is flagged and widened so
-// that CH2=CF2's error against the published C2H2F2 value is covered.
+// that CH2=CF2's error against its published value is covered (the group
+// estimate, not the library entry).
 func TestVinylDifluorideWidened(t *testing.T) {
 	e := heteroEstimate(t, "C=C(F)F")
 	require.Equal(t, 1, flagCountOf(e, "Cd-(F)2"), "%v", e.Missing)
