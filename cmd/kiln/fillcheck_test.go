@@ -44,22 +44,22 @@ func TestFillSourceNamesEachReferenceOnce(t *testing.T) {
 // summary; a group kiln has and uses as it stands is "FLAGGED", never
 // "approximated by" itself. Diagnostic codes stay as they were.
 func TestFlagOncePerDistinctApproximation(t *testing.T) {
-	const smiles = "FC(F)=CC=C(F)F" // Cd-(F)2 twice, each next to a CH carbon
+	const smiles = "CC(F)(F)CCC(C)(F)F" // C-(F)2(C)2 twice, not adjacent
 	_, text, _ := runKiln(t, "estimate", smiles)
-	assert.Equal(t, 1, strings.Count(text, "Cd-(F)2 ×2 (used as it stands"), text)
-	assert.Contains(t, text, "FLAGGED group Cd-(F)2 ×2 (used as it stands, value from CF2=CF2")
-	assert.NotContains(t, text, "approximated by Cd-(F)2")
-	assert.NotContains(t, text, "MISSING group Cd-(F)2")
+	assert.Equal(t, 1, strings.Count(text, "C-(F)2(C)2 ×2 (used as it stands"), text)
+	assert.Contains(t, text, "FLAGGED group C-(F)2(C)2 ×2 (used as it stands")
+	assert.NotContains(t, text, "approximated by C-(F)2(C)2")
+	assert.NotContains(t, text, "MISSING group C-(F)2(C)2")
 
 	_, stdout, stderr := runKiln(t, "estimate", "--json", smiles)
 	var est []estimateJSON
 	require.NoError(t, json.Unmarshal([]byte(stdout), &est), stderr)
 	require.Len(t, est, 1)
-	assert.Equal(t, []string{"Cd-(F)2"}, est[0].MissingGroups)
+	assert.Equal(t, []string{"C-(F)2(C)2"}, est[0].MissingGroups)
 	require.Len(t, est[0].Flags, 1)
-	assert.True(t, strings.HasPrefix(est[0].Flags[0], "Cd-(F)2 ×2 (used as it stands"), est[0].Flags[0])
+	assert.True(t, strings.HasPrefix(est[0].Flags[0], "C-(F)2(C)2 ×2 (used as it stands"), est[0].Flags[0])
 
-	path := writeTemp(t, "f.kiln", "species diene "+smiles+"\nspecies vdf CC=C(F)F\n")
+	path := writeTemp(t, "f.kiln", "species diene "+smiles+"\nspecies vdf CC(C)(F)F\n")
 	_, stdout, _ = runKiln(t, "check", "--format", "json", path)
 	var diags []checkDiag
 	require.NoError(t, json.Unmarshal([]byte(stdout), &diags))
@@ -72,13 +72,13 @@ func TestFlagOncePerDistinctApproximation(t *testing.T) {
 	}
 	require.Len(t, warned, 2, "one warning per species")
 	assert.Equal(t, 1, strings.Count(warned[0], "(used as it stands"), warned[0])
-	assert.Contains(t, warned[0], "diene: flagged group value: Cd-(F)2 ×2 (used as it stands")
-	assert.Contains(t, warned[1], "vdf: flagged group value: Cd-(F)2 (used as it stands")
+	assert.Contains(t, warned[0], "diene: flagged group value: C-(F)2(C)2 ×2 (used as it stands")
+	assert.Contains(t, warned[1], "vdf: flagged group value: C-(F)2(C)2 (used as it stands")
 	assert.NotContains(t, warned[1], "×", "a flag made once has no count")
 
 	_, text, _ = runKiln(t, "summary", path)
 	text = strings.Join(strings.Fields(text), " ")
-	assert.Equal(t, 1, strings.Count(text, "diene: FLAGGED group Cd-(F)2 ×2"), text)
+	assert.Equal(t, 1, strings.Count(text, "diene: FLAGGED group C-(F)2(C)2 ×2"), text)
 }
 
 // lowCpGroup is a group statement whose Cp lies below what any molecule of

@@ -179,7 +179,7 @@ func modelled(flag string) bool { return strings.Contains(flag, "(computed by th
 // alike (flag_kinds parallel to missing_groups and flags): a radical site's
 // modelled S°/Cp change is "modelled", not a missing group.
 func TestFlagKinds(t *testing.T) {
-	code, stdout, stderr := runKiln(t, "estimate", "--json", "[CH2]S", "CC=C(F)F")
+	code, stdout, stderr := runKiln(t, "estimate", "--json", "[CH2]S", "CC(C)(F)F")
 	require.Equal(t, exitOK, code, stderr)
 	var est []estimateJSON
 	require.NoError(t, json.Unmarshal([]byte(stdout), &est))
@@ -191,7 +191,7 @@ func TestFlagKinds(t *testing.T) {
 	}
 
 	path := filepath.Join(t.TempDir(), "k.kiln")
-	require.NoError(t, os.WriteFile(path, []byte("species TM [CH2]S\nspecies DF CC=C(F)F\n"), 0o644))
+	require.NoError(t, os.WriteFile(path, []byte("species TM [CH2]S\nspecies DF CC(C)(F)F\n"), 0o644))
 	code, stdout, stderr = runKiln(t, "summary", "--json", path)
 	require.Equal(t, exitOK, code, stderr)
 	var sum summaryJSON

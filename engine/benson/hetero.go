@@ -168,8 +168,7 @@ func ketene(m *molecule.Molecule) bool {
 // (checkedPolyhaloGroups): the other tabulated values leave out, or were
 // never checked for, the halogen–halogen interactions that make
 // polyhalogenated molecules non-additive (Cohen & Benson, Chem. Rev. 93
-// (1993), from memory). A Cd-(F)2 carbon outside CF2=CF2 is flagged too
-// (vinylFluorineContext). The estimate is kept but flagged, unless the user
+// (1993), from memory). The estimate is kept but flagged, unless the user
 // supplied the group (a `group` statement), which then carries its own
 // interactions.
 func addHalogenFlags(g *graph, l lookup, est *Result) {
@@ -196,14 +195,6 @@ func addHalogenFlags(g *graph, l lookup, est *Result) {
 		}
 		name := groupName(centre, counts)
 		if _, user := l.user[name]; user {
-			continue
-		}
-		if name == "Cd-(F)2" && !g.cf2Partner(i) {
-			est.Missing = append(est.Missing, Missing{
-				Group:         name,
-				Approximation: name + vinylFluorineContext,
-				Note:          "Cd-(F)2 was derived from CF2=CF2 alone; next to a carbon without two fluorines its F/F interaction is not there: " + polyhaloGroupSeen[name],
-			})
 			continue
 		}
 		if slices.Contains(checkedPolyhaloGroups[:], name) {

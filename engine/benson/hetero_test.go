@@ -386,7 +386,6 @@ func TestPolyhalogenWidening(t *testing.T) {
 		"CC(C)(F)F",          // C-(F)2(C)2: published, no row checks it
 		"FC(F)(Cl)C(F)(F)Cl", // Cl/F gauche pairs: no mixed correction
 		"FCC(Cl)(Cl)Cl",      // F/Cl gauche pairs on a CH2F-CCl3 bond
-		"C=C(F)F",            // Cd-(F)2 outside CF2=CF2
 		"ClC=CF",             // F/Cl across C=C
 	} {
 		e := heteroEstimate(t, smi)
