@@ -601,6 +601,8 @@ func nitrogenSiteNote(g *graph, i int, site string) string {
 		return ""
 	}
 	switch site {
+	case iminoylSite:
+		return "" // on the imine carbon itself: its own increment (radical.go)
 	case "phenyl":
 		if g.inAzineRing(i) {
 			return "radical site on an azine ring carbon (benzene increment used)"

@@ -263,9 +263,10 @@ const substitutedHaloSite = "α-halo radical site on a substituted carbon, alkyl
 // (5 kcal/mol), as for the other stabilised sites without an increment.
 const ketenylSite = "ketenyl radical site (R–C•=C=O ↔ R–C≡C–O•): no increment of its own; the delocalisation onto the C=O is left out"
 
-// iminoylSite names the radical site on an imine carbon (C• of C=N):
-// no increment at hand, so addHBI refuses it with the thermo-block route.
-const iminoylSite = "iminoyl (C• on an imine carbon, R–C•=N–)"
+// iminoylSite names the radical site on an imine carbon (C• of C=N, an
+// iminoyl σ radical): its increment is H–C(H)=NH of trans-HC•=NH
+// (hbi_n.tsv).
+const iminoylSite = "iminoyl"
 
 // siteOf classifies radical site i (an atom of the parent graph g). missing
 // names the approximation when the site only resembles the increment used;
@@ -292,9 +293,10 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 		case "CdN":
 			// An iminoyl (imidoyl) σ radical, R–C•=N–R′ or HC•=NH: the
 			// electron sits in the imine carbon's in-plane orbital, with
-			// no allylic delocalisation, and no C–H increment of an imine
-			// carbon is at hand (the aza-allyl site •C–N=C of its isomer
-			// is another species). Named without an HBI row: refused.
+			// no allylic delocalisation (the aza-allyl site •C–N=C of its
+			// isomer is another species). Its increment is that of
+			// trans-HC•=NH, the lower of the two HC•=NH isomers, as an E/Z
+			// imine takes one value.
 			return iminoylSite, "", "", nil
 		case "Ct", "Ca":
 			return "vinylic", "ethynyl/allenyl radical site", "", nil

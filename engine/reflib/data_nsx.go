@@ -123,6 +123,14 @@ var nsxEntries = []entry{
 		hi:     [7]float64{3.80315578e+00, 5.47197362e-03, -1.95314875e-06, 3.13362403e-10, -1.86249384e-14, 2.71302747e+04, 3.31759436e+00},
 		lo:     [7]float64{3.97799555e+00, -3.43275801e-03, 2.59134260e-05, -3.04692171e-08, 1.16272717e-11, 2.74854081e+04, 4.43067396e+00},
 		source: srcGBR + " (iminyl radical H2C=N•; ΔHf°298: Active Thermochemical Tables)"},
+	// trans-HC•=NH, the lower of the two iminoyl isomers (cis lies 18.5 kJ/mol
+	// above): ΔHf°298 272.59 ± 1.31 kJ/mol as the database gives it, with no
+	// reference written beside it (the cis record cites the Active
+	// Thermochemical Tables, version C 2011, with the same ± 1.31).
+	{name: "HCNH", smiles: "[CH]=N", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{4.04014700e+00, 5.16591694e-03, -1.82276828e-06, 2.90299053e-10, -1.71614589e-14, 3.11540211e+04, 2.58894095e+00},
+		lo:     [7]float64{3.97114555e+00, -3.88875724e-03, 2.92918950e-05, -3.57482411e-08, 1.40303911e-11, 3.15789298e+04, 5.06388721e+00},
+		source: srcGBR + " (iminoyl radical trans-HC•=NH; ΔHf°298 as the entry gives it)"},
 	// --- C2 species of hydrocarbon oxidation ---
 	{name: "CH2CO", smiles: "C=C=O", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{4.51129732e+00, 9.00359745e-03, -4.16939635e-06, 9.23345882e-10, -7.94838201e-14, -7.55105311e+03, 6.32247205e-01},
