@@ -33,20 +33,21 @@ import (
 // next to O bearing H or not), α-amino, α-chloro and α-fluoro (next to N, Cl
 // or F, see hetero.go), α,α-dichloro, -trichloro, -difluoro and -trifluoro
 // (two or three halogens of one element, hetero_sx.go), alkoxy (on O),
-// phenoxy (O on Cb), peroxy (O on O); on N and S (hetero.go, hetero_n.go):
-// aminyl (R–NH•), dialkylaminyl (R2N•), anilino (Ar–NH•), iminyl (R2C=N•),
-// hydrazinyl (H2N–NH•, R2N–NH•, R–N•–NH2), thiyl (R–S•), arylthiyl (Ar–S•).
+// phenoxy (O on Cb), peroxy (O on O), iminoyl (a C• on an imine carbon);
+// on N and S (hetero.go, hetero_n.go): aminyl (R–NH•), dialkylaminyl
+// (R2N•), anilino (Ar–NH•), iminyl (R2C=N•), hydrazinyl (H2N–NH•, R2N–NH•,
+// R–N•–NH2), thiyl (R–S•), arylthiyl (Ar–S•).
 // Sites that only resemble one of these use the nearest one and are
 // reported in Missing; where the direction and size of the error are known
-// (an α-halo centre with an alkyl substituent, a site next to a CX3 or
-// CX2 carbon (bias.go), an N-substituted anilino site, a hydrazinyl site
-// whose other N is substituted otherwise, a thiyl site on an unsaturated
-// carbon) or the published bond enthalpies disagree (arylthiyl), class.go
-// widens the uncertainty by at least that size. Sites for which no
-// increment is at hand and the nearest one is far off — an N• bonded to
-// O, S, a halogen or a non-amine N, amidyl, diazenyl, a C• on an
-// imine carbon (iminoyl), an O• bonded to N or S (aminoxyl), an S• bonded
-// to S (perthiyl) — are given a site name
+// (an α-halo centre with alkyl substituents its increment was not
+// measured with, a site next to a CX3 or CX2 carbon (bias.go), an
+// N-substituted anilino site, an alkylated hydrazinyl site, a thiyl site
+// on an unsaturated carbon) or the published bond enthalpies disagree
+// (arylthiyl, (CH3)2N–NH–H), class.go widens the uncertainty by at least
+// that size. Sites for which no increment is at hand and the nearest one
+// is far off — an N• bonded to O, S, a halogen or a non-amine N, amidyl,
+// diazenyl, an O• bonded to N or S (aminoxyl), an S• bonded to S
+// (perthiyl) — are given a site name
 // with no row in the HBI tables, so addHBI refuses the estimate naming the
 // site and the route (a thermo block: a `group` statement cannot supply an
 // increment).
