@@ -26,7 +26,7 @@ func TestNitrogenRadicalIncrementsAgainstLibrary(t *testing.T) {
 	}{
 		{"C=[N]", "H2CN", 0.85, 0.05, 0.1},
 		{"[CH]=N", "HCNH", 0.85, 0.05, 0.1}, // the iminoyl increment
-		{"N[NH]", "N2H3", 0.1, 0.15, 1.35}, // hydrazine's groups give Cp 0.5–1.3 above its library entry
+		{"N[NH]", "N2H3", 0.1, 0.15, 1.35},  // hydrazine's groups give Cp 0.5–1.3 above its library entry
 	} {
 		m, err := molecule.ParseSMILES(c.smiles)
 		require.NoError(t, err)
