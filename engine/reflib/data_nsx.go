@@ -450,7 +450,7 @@ var nsxEntries = []entry{
 		source: srcGBR + " (hydroxyamidogen HN•–OH, trans (the entry's record); ΔHf°298: Active Thermochemical Tables version D (2013), 94.70 ± 0.98 kJ/mol, which the entry quotes beside its main value 100.9 (version C, 2011) that its coefficients carry; S°298 and Cp from its coefficients)"},
 	{name: "H2NN", smiles: "[NH2+]=[N-]", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{3.05903670e+00, 6.18382347e-03, -2.22171165e-06, 3.58539206e-10, -2.14532905e-14, 3.48530149e+04, 6.69893515e+00},
-		lo:     [7]float64{4.53204001e+00, -7.32418578e-03, 3.00803713e-05, -3.04000551e-08, 1.04700639e-11, 3.49580003e+04, 1.51074195e+01},
+		lo:     [7]float64{4.53204001e+00, -7.32418578e-03, 3.00803713e-05, -3.04000551e-08, 1.04700639e-11, 3.49580003e+04, 1.51074195e+00},
 		source: srcGBR + " (isodiazene H2N=N (1,1-diazene), singlet; ΔHf°298: Active Thermochemical Tables)"},
 	{name: "N2O3", smiles: "O=N[N+](=O)[O-]", mult: 1, hf298: 86090, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
 		hi:     [7]float64{9.08583845e+00, 3.37756330e-03, -1.31583890e-06, 2.30762329e-10, -1.47151267e-14, 7.27160146e+03, -1.55361904e+01},
