@@ -750,13 +750,18 @@ var nsxEntries = []entry{
 	// C2HF, C2F2 and C2HBr are entered from Goos, Burcat & Ruscic's records,
 	// which carry those values. C2F• has no second source and stays refused.
 	// ---
-	// 1,1-difluoroethylene (HFC-1132a): the database's record of the one isomer,
-	// with the Active Thermochemical Tables value (−332.93 ± 2.3 kJ/mol), not
-	// the compilation's record of the isomer mixture (not entered, above).
-	{name: "CH2CF2", smiles: "C=C(F)F", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
-		hi:     [7]float64{8.95189658e+00, 7.14641061e-03, -2.79505418e-06, 4.77439020e-10, -2.97191427e-14, -4.38495534e+04, -2.29204220e+01},
-		lo:     [7]float64{1.28301801e+00, 2.31903824e-02, -9.70095198e-06, -4.40973912e-09, 3.38826355e-12, -4.13624968e+04, 1.82378552e+01},
-		source: srcGBR + " (1,1-difluoroethylene; ΔHf°298: Active Thermochemical Tables)"},
+	// 1,1-difluoroethylene (HFC-1132a): ΔHf°298 −332.93 ± 2.3 kJ/mol (Active
+	// Thermochemical Tables) and S°298 from the database's record of the one
+	// isomer. Its Cp is not used: apart from a6 its coefficients are those of
+	// the record of the isomer mixture (not entered, above), 0.2–2.1
+	// cal/(mol K) above the pure isomer's Cp at 400–1500 K. Cp is computed
+	// instead (rigid rotor, harmonic oscillator) from the 1,1-isomer's
+	// fundamentals listed in the mixture record (Gurvich 1991; "3057,3" read
+	// as 3057.3); with its moments of inertia the same sum gives S°298 266.04
+	// J/(mol K), the record's 266.06.
+	{name: "CH2CF2", smiles: "C=C(F)F", mult: 1, hf298: -332930, s298: 266.06, tLow: 200, tMid: 1000, tHigh: 3500,
+		freqs:  []float64{1727.6, 3057.3, 1393, 925.5, 549.7, 592, 3174, 1300.8, 954.3, 437, 803.5, 609.6},
+		source: srcGBR + " (1,1-difluoroethylene; ΔHf°298: Active Thermochemical Tables; S°298 from the record; Cp(T): rigid rotor, harmonic oscillator with the 1,1-isomer's fundamentals listed in the database's record of the isomer mixture (Gurvich 1991), fitted to NASA-7 by kiln's polynomial fit)"},
 	{name: "C2HF3", smiles: "FC=C(F)F", mult: 1, hf298: -491000, tLow: 200, tMid: 1000, tHigh: 3500,
 		n9: &nasa9{
 			lo: [9]float64{-1.410969036e+04, 3.687624920e+02, -1.144797568e+00, 3.956306020e-02, -4.602001360e-05, 2.785149385e-08, -6.903760080e-12, -6.226410330e+04, 3.289661690e+01},
