@@ -435,35 +435,27 @@ var nsxEntries = []entry{
 	// Burcat & Ruscic's database (srcGBR): its NASA-7 records as published,
 	// ΔHf°298 as each entry states (the value its coefficients carry) except
 	// where the entry quotes a newer Active Thermochemical Tables value beside
-	// it (NH2O, HNOH, N2O3, ClCN: that value, with S°298 and Cp from the
-	// coefficients). Several values are the database's own G3B3 calculations
-	// (NH2NO, HSO3, HOSO, ClONO2; ± 2 kcal/mol as it states), said in each
-	// source. Not in the database: H–NO2, HNNO, HO2NO2, H–SO2, CH3SO, BrNO,
+	// it (NH2O, ClCN: that value, with S°298 and Cp from the coefficients).
+	// Several values are the database's own G3B3 calculations (NH2NO, HSO3,
+	// HOSO: ± 2 kcal/mol as it states; ClONO2: no uncertainty given), said in
+	// each source. Not entered: N2O3, N2O4 and N2O5, whose records carry
+	// Active Thermochemical Tables values while the library's NO, NO2 and
+	// NO3 are NIST-JANAF's (a mixed pair misstates N2O4 ⇌ 2 NO2 at 298 K by a
+	// factor 2, N2O5 ⇌ NO2 + NO3 by 6; NIST-JANAF's dimer records were not at
+	// hand). Not in the database: H–NO2, HNNO, HO2NO2, H–SO2, CH3SO, BrNO,
 	// HOI. ---
 	{name: "NH2O", smiles: "N[O]", mult: 2, hf298: 64730, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
 		hi:     [7]float64{3.75555914e+00, 5.16219354e-03, -1.76387387e-06, 2.75052692e-10, -1.60643143e-14, 6.51826177e+03, 4.30933053e+00},
 		lo:     [7]float64{3.93201139e+00, -1.64028165e-04, 1.39161409e-05, -1.62747853e-08, 6.00352834e-12, 6.71178975e+03, 4.58837038e+00},
 		source: srcGBR + " (aminoxyl radical H2N–O•; ΔHf°298: Active Thermochemical Tables 64.730 ± 0.83 kJ/mol, which the entry quotes beside its own G3B3 value (66.27), S°298 and Cp from its coefficients)"},
-	{name: "HNOH", smiles: "[NH]O", mult: 2, hf298: 94700, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
+	{name: "HNOH", smiles: "[NH]O", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{3.98321933e+00, 4.88846374e-03, -1.65086637e-06, 2.55371446e-10, -1.48308561e-14, 1.05780106e+04, 3.62582838e+00},
 		lo:     [7]float64{3.95608248e+00, -3.02611020e-03, 2.56874396e-05, -3.15645120e-08, 1.24084574e-11, 1.09199790e+04, 5.55950983e+00},
-		source: srcGBR + " (hydroxyamidogen HN•–OH, trans (the entry's record); ΔHf°298: Active Thermochemical Tables version D (2013), 94.70 ± 0.98 kJ/mol, which the entry quotes beside its main value 100.9 (version C, 2011) that its coefficients carry; S°298 and Cp from its coefficients)"},
+		source: srcGBR + " (hydroxyamidogen HN•–OH, trans (the entry's record); ΔHf°298: Active Thermochemical Tables version C (2011), 100.9 ± 0.98 kJ/mol, as for H2NO; the entry also quotes 94.70 from version D, 2013)"},
 	{name: "H2NN", smiles: "[NH2+]=[N-]", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{3.05903670e+00, 6.18382347e-03, -2.22171165e-06, 3.58539206e-10, -2.14532905e-14, 3.48530149e+04, 6.69893515e+00},
 		lo:     [7]float64{4.53204001e+00, -7.32418578e-03, 3.00803713e-05, -3.04000551e-08, 1.04700639e-11, 3.49580003e+04, 1.51074195e+00},
 		source: srcGBR + " (isodiazene H2N=N (1,1-diazene), singlet; ΔHf°298: Active Thermochemical Tables)"},
-	{name: "N2O3", smiles: "O=N[N+](=O)[O-]", mult: 1, hf298: 86090, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
-		hi:     [7]float64{9.08583845e+00, 3.37756330e-03, -1.31583890e-06, 2.30762329e-10, -1.47151267e-14, 7.27160146e+03, -1.55361904e+01},
-		lo:     [7]float64{5.81083964e+00, 1.43330962e-02, -1.96208597e-05, 1.73060735e-08, -6.46553954e-12, 8.19184453e+03, 1.20461321e+00},
-		source: srcGBR + " (dinitrogen trioxide O=N–NO2; ΔHf°298: Active Thermochemical Tables 86.090 ± 0.18 kJ/mol, which the entry quotes (its coefficients carry 86.63, from Gurvich 1989), S°298 and Cp from its coefficients)"},
-	{name: "N2O4", smiles: "[O-][N+](=O)[N+](=O)[O-]", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
-		hi:     [7]float64{1.15752932e+01, 4.01615532e-03, -1.57178022e-06, 2.68273657e-10, -1.66921538e-14, -2.96111235e+03, -3.19488625e+01},
-		lo:     [7]float64{3.02002271e+00, 2.95904359e-02, -3.01342572e-05, 1.42360526e-08, -2.44100411e-12, -6.79238803e+02, 1.18059620e+01},
-		source: srcGBR + " (dinitrogen tetroxide O2N–NO2; ΔHf°298: Active Thermochemical Tables)"},
-	{name: "N2O5", smiles: "[O-][N+](=O)O[N+](=O)[O-]", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
-		hi:     [7]float64{1.31108043e+01, 4.87436380e-03, -1.87548689e-06, 3.16374735e-10, -1.95927279e-14, -2.85932484e+03, -3.46877475e+01},
-		lo:     [7]float64{3.68767456e+00, 3.92120802e-02, -5.53770082e-05, 4.20097925e-08, -1.31260758e-11, -5.73270648e+02, 1.21967861e+01},
-		source: srcGBR + " (dinitrogen pentoxide; ΔHf°298: Active Thermochemical Tables)"},
 	{name: "NH2NO", smiles: "NN=O", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{5.78592771e+00, 6.03964151e-03, -2.08624357e-06, 3.28153040e-10, -1.92960549e-14, 7.61382696e+03, -5.32127808e+00},
 		lo:     [7]float64{3.68835855e+00, 5.97978170e-03, 1.22601857e-05, -2.07157226e-08, 8.83557926e-12, 8.44917678e+03, 6.85576793e+00},
