@@ -532,6 +532,34 @@ var nsxEntries = []entry{
 		hi:     [7]float64{1.03751478e+01, 2.68796464e-03, -1.05251679e-06, 1.79661207e-10, -1.11723869e-14, -7.47183936e+04, -2.40254556e+01},
 		lo:     [7]float64{2.56291747e+00, 2.85073277e-02, -3.36989302e-05, 1.87293958e-08, -3.92162636e-12, -7.27890500e+04, 1.52377317e+01},
 		source: srcGBR + " (trifluoroiodomethane (a halon replacement); ΔHf°298: Active Thermochemical Tables)"},
+	// --- iodine: the atom, I2, HI, IO, CH3I and C2H5I from Goos, Burcat &
+	// Ruscic's database (srcGBR), so that CF3I (above) and the iodomethanes
+	// have their partners; kiln has no iodine group (iodides other than these
+	// are refused). ---
+	{name: "I", smiles: "[I]", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{2.61667712e+00, -2.66010320e-04, 1.86060150e-07, -3.81927472e-11, 2.52036053e-15, 1.20582790e+04, 6.87896653e+00},
+		lo:     [7]float64{2.50041683e+00, -4.48046831e-06, 1.69962536e-08, -2.67708030e-11, 1.48927452e-14, 1.20947990e+04, 7.49816581e+00},
+		source: srcGBR + " (iodine atom, ²P3/2 ground state with the ²P1/2 level; ΔHf°298: NIST-JANAF as the entry gives it (ATcT 106.756 ± 0.002 quoted))"},
+	{name: "I2", smiles: "II", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{4.56588102e+00, -3.42229361e-04, 4.84410977e-07, -1.42632157e-10, 1.14951099e-14, 6.16023838e+03, 5.41958286e+00},
+		lo:     [7]float64{3.87234634e+00, 3.64265414e-03, -7.95349191e-06, 7.82149773e-09, -2.80608071e-12, 6.24644830e+03, 8.49410267e+00},
+		source: srcGBR + " (diiodine gas (Gurvich 1989 tables); ΔHf°298: Active Thermochemical Tables (reference state I2 crystal))"},
+	{name: "HI", smiles: "I", aliases: []string{"[H]I"}, mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{2.97348457e+00, 1.43564535e-03, -5.02266380e-07, 8.15769578e-11, -4.90179013e-15, 2.25405142e+03, 7.52526168e+00},
+		lo:     [7]float64{3.55499590e+00, -3.48919962e-04, 2.02666229e-07, 1.78572096e-09, -1.21092442e-12, 2.14501374e+03, 4.67388039e+00},
+		source: srcGBR + " (hydrogen iodide; ΔHf°298: Active Thermochemical Tables (2005) as the entry gives it)"},
+	{name: "IO", smiles: "I[O]", mult: 2, hf298: 125040, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
+		hi:     [7]float64{4.43373036e+00, 8.12520620e-04, -3.07327741e-07, 6.49186840e-11, -1.64640359e-15, 1.36225573e+04, 2.96744910e+00},
+		lo:     [7]float64{2.90243248e+00, 5.16413407e-03, -6.69836698e-06, 5.78794148e-09, -2.15394553e-12, 1.41080990e+04, 1.10195868e+01},
+		source: srcGBR + " (iodine monoxide; ΔHf°298: Active Thermochemical Tables 125.04 ± 1 kJ/mol (2011), which the entry quotes beside Chase's 126 ± 18 that its coefficients carry; S°298 and Cp from its coefficients)"},
+	{name: "CH3I", smiles: "CI", mult: 1, hf298: 14950, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
+		hi:     [7]float64{4.44377329e+00, 7.45523940e-03, -2.63962017e-06, 4.21796322e-10, -2.50645631e-14, -1.90140790e+02, 2.47913765e+00},
+		lo:     [7]float64{3.27037586e+00, 3.04938761e-03, 2.00286679e-05, -2.82751858e-08, 1.15828787e-11, 4.82743383e+02, 1.03200626e+01},
+		source: srcGBR + " (iodomethane; ΔHf°298: Active Thermochemical Tables 14.95 ± 0.17 kJ/mol, which the entry quotes beside the value its coefficients carry (14.3 ± 1.4, NIST WebBook 2000); S°298 and Cp from its coefficients)"},
+	{name: "C2H5I", smiles: "CCI", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{7.97461860e+00, 1.28549646e-02, -4.59993101e-06, 7.40450718e-10, -4.42307467e-14, -4.37826965e+03, -1.45972741e+01},
+		lo:     [7]float64{2.63041302e+00, 1.89595239e-02, 1.17450857e-05, -3.10554440e-08, 1.46462936e-11, -2.52381380e+03, 1.49681231e+01},
+		source: srcGBR + " (iodoethane; ΔHf°298: Active Thermochemical Tables)"},
 	// --- bromine, the bromomethanes, halomethyl radicals, CH2FCl, the formyl
 	// halides and COFCl, all NASA/TP-2002-211556 records as published.
 	// The compilation has no CH2Br or CHBr2 radical, no HOBr, HSO, N2H3, CH3NC

@@ -244,6 +244,7 @@ func TestLookupNSX(t *testing.T) {
 		{"O=NCl", 0, "NOCl"}, {"[O-][N+](=O)Cl", 0, "NO2Cl"}, {"[O-][N+](=O)OCl", 0, "ClONO2"}, {"O=NF", 0, "FNO"},
 		{"ClOCl", 0, "Cl2O"}, {"[O-][Cl+][O]", 0, "OClO"}, {"[O]OCl", 0, "ClOO"},
 		{"N#CCl", 0, "ClCN"}, {"N#CBr", 0, "BrCN"}, {"N#CF", 0, "FCN"}, {"IC(F)(F)F", 0, "CF3I"}, {"N=[CH]", 0, "HCNH"},
+		{"[I]", 0, "I"}, {"II", 0, "I2"}, {"[H]I", 0, "HI"}, {"I", 0, "HI"}, {"[O]I", 0, "IO"}, {"IC", 0, "CH3I"}, {"ICC", 0, "C2H5I"},
 		{"[C]#CCl", 2, "C2Cl"}, {"FC(F)=[C]F", 0, "C2F3"},
 		{"C(=C=O)=C=O", 0, "C3O2"}, {"[C]#CF", 4, ""}, {"FC(F)=[C]F", 4, ""},
 		{"ClC(Cl)=[C]Cl", 0, ""}, // C2Cl3: the compilation's record is not entered (data_nsx.go)
@@ -343,5 +344,5 @@ func TestSImpliedEntries(t *testing.T) {
 		p := nasa.NASA7{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh, Low: e.lo, High: e.lo}
 		assert.Greater(t, math.Abs(p.H(nasa.Tref)-e.hf298), 100.0, "%s: the coefficients already carry %v J/mol", e.name, e.hf298)
 	}
-	assert.Equal(t, 5, n, "CBr4, CH2ClBr, urea, NH2O and ClCN")
+	assert.Equal(t, 7, n, "CBr4, CH2ClBr, urea, NH2O, ClCN, IO and CH3I")
 }
