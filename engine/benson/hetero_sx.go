@@ -119,7 +119,7 @@ const withoutHalogenInteractions = " without halogen interactions"
 
 // widenPolyhalogen (kcal/mol) widens the ΔHf° uncertainty per polyhalogen
 // flag (a polyhalogenated group no handbook molecule checks, a halogen pair
-// on adjacent carbons without a correction, Cd-(F)2 outside CF2=CF2). It
+// on adjacent carbons without a correction). It
 // was measured (2026-12-03) as sqrt(mean(d²/k)) over the 10 training rows of
 // testdata/thermo/nsx.tsv whose estimates then carried k such flags with the
 // published, unchecked groups (1,1-dichloroethane … CH3CF3, up to 10 kcal/mol
@@ -196,8 +196,9 @@ var widenHalogenInteraction = map[string]float64{
 	"gauche F/F interaction":   2.55,
 	vinylChlorineName:          0.15, // four rows, two parameters: an in-sample residual
 	// one training row (CF2=CF2) fixes it exactly: the residual of the
-	// check molecule CHF=CF2 (the library's NASA/TP-2002-211556 value), per
-	// pair (TestVinylFluorineInteraction)
+	// check molecule CHF=CF2 (the library's NASA/TP-2002-211556 value) per
+	// pair (TestVinylFluorineInteraction), applied once per estimate that
+	// carries the term, as the other interaction terms' widenings are
 	vinylFluorineName: 0.47,
 }
 
@@ -306,7 +307,7 @@ func addHalogenInteractions(g *graph, l lookup, est *Result) {
 		est.Missing = append(est.Missing, Missing{
 			Group:         "vicinal " + pair,
 			Approximation: "halogens on two bonded carbons (" + pair + ")" + withoutHalogenInteractions,
-			Note:          "no interaction correction for these halogens on adjacent carbons (kiln has gauche Cl/Cl and F/F on sp3 carbons and Cl/Cl across C=C); errors of several kcal/mol are possible",
+			Note:          "no interaction correction for these halogens on adjacent carbons (kiln has gauche Cl/Cl and F/F on sp3 carbons, and Cl/Cl and F/F across C=C); errors of several kcal/mol are possible",
 		})
 	}
 	for k, n := range gauche {
