@@ -152,7 +152,9 @@ func TestRederivedHalogenGroups(t *testing.T) {
 		"C-(Cl)2(C)2":    "2,2-dichloropropane",
 		"C-(F)3(Cb)":     "benzotrifluoride",
 		"Cd-(Cl)(H)":     "vinyl chloride",
-		"Cd-(F)2":        "tetrafluoroethylene",
+		"Cd-(F)2":        "tetrafluoroethylene", // with the vinylic F/F term fitted to it; the group itself: TestVinylFluorineInteraction
+		"Cd-(F)(H)":      "vinyl fluoride",
+		"C-(F)(C)(H)2":   "fluoroethane",
 		"Cd-(Cl)(C)":     "2-chloropropene",
 		"CO-(F)(C)":      "acetyl fluoride",
 		"CO-(Br)(C)":     "acetyl bromide",

@@ -179,8 +179,9 @@ const (
 	vinylChlorineName = "vinylic Cl/Cl interaction"
 )
 
-// vinylFluorineKey is the correction for each F/F pair across an acyclic
-// C=C bond (corrections_sx.tsv); vinylFluorineName names its term.
+// vinylFluorineKey is the correction for an acyclic C=C bond with
+// fluorine on both carbons (corrections_sx.tsv); vinylFluorineName names
+// its term.
 const (
 	vinylFluorineKey  = "nni:vinyl F/F"
 	vinylFluorineName = "vinylic F/F interaction"
@@ -193,13 +194,12 @@ const (
 // exact, and its rows' residuals say by how much.
 var widenHalogenInteraction = map[string]float64{
 	"gauche Cl/Cl interaction": 1.41,
-	"gauche F/F interaction":   2.55,
+	"gauche F/F interaction":   3.03,
 	vinylChlorineName:          0.15, // four rows, two parameters: an in-sample residual
-	// one training row (CF2=CF2) fixes it exactly: the residual of the
-	// check molecule CHF=CF2 (the library's NASA/TP-2002-211556 value) per
-	// pair (TestVinylFluorineInteraction), applied once per estimate that
-	// carries the term, as the other interaction terms' widenings are
-	vinylFluorineName: 0.47,
+	// one training row (CF2=CF2) fixes it exactly: the RMS residual of the
+	// check molecules CHF=CF2 and cis-, trans-CHF=CHF
+	// (TestVinylFluorineInteraction)
+	vinylFluorineName: 2.24,
 }
 
 // halogenInteractionVariance returns the sum of the squared widenings
@@ -259,8 +259,7 @@ func halogenPair(ex, ey string) string {
 //     staggered rotamer puts min(nA, nB) pairs anti), each "gauche X/X";
 //     zero pairs (XCH2–CH2X, XCH2–CHX–) need no correction;
 //   - an acyclic C=C with chlorine only on both carbons: one vinylic Cl/Cl
-//     correction; with fluorine only on both: one vinylic F/F correction
-//     per F/F pair (nA·nB: CHF=CHF 1, CHF=CF2 2, CF2=CF2 4);
+//     correction; with fluorine only on both: one vinylic F/F correction;
 //   - a C≡C with Cl on both carbons needs none (two Ct-(Cl) give ClC≡CCl
 //     within 0.3 kcal/mol); F on both (FC≡CF, 4.6 off) is flagged;
 //   - any other bond between carbons that both bear halogens (mixed or
@@ -297,7 +296,7 @@ func addHalogenInteractions(g *graph, l lookup, est *Result) {
 				continue
 			}
 			if ex == "F" && ey == "F" {
-				vinylF += nx * ny
+				vinylF++
 				continue
 			}
 		case g.order(e) == 3 && ex == "Cl" && ey == "Cl":
