@@ -156,7 +156,7 @@ var polyhaloGroupSeen = map[string]string{
 // halogens and another heavy neighbour whose ΔHf° was derived from, or
 // checked against, a handbook molecule in which that carbon has the same
 // neighbours (groups_nsx.tsv, groups_sx.tsv: CH3CHF2, CH3CHCl2, CH3CCl3,
-// CH3CF3, (CH3)2CCl2, C6H5CF3, CH3CHBr2, the chloroethylenes, CF2=CF2). Such a group
+// CH3CF3, (CH3)2CCl2, C6H5CF3, CH3CHBr2, the chloroethylenes, CH2=CF2). Such a group
 // carries the geminal interactions of its molecule, and the vicinal ones
 // are corrections (addHalogenInteractions), so it is not flagged. Any other
 // polyhalogenated group keeps the polyhalogen flag (addHalogenFlags).

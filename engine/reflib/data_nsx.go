@@ -532,10 +532,11 @@ var nsxEntries = []entry{
 		hi:     [7]float64{1.03751478e+01, 2.68796464e-03, -1.05251679e-06, 1.79661207e-10, -1.11723869e-14, -7.47183936e+04, -2.40254556e+01},
 		lo:     [7]float64{2.56291747e+00, 2.85073277e-02, -3.36989302e-05, 1.87293958e-08, -3.92162636e-12, -7.27890500e+04, 1.52377317e+01},
 		source: srcGBR + " (trifluoroiodomethane (a halon replacement); ΔHf°298: Active Thermochemical Tables)"},
-	// --- iodine: the atom, I2, HI, IO, CH3I and C2H5I from Goos, Burcat &
-	// Ruscic's database (srcGBR), so that CF3I (above) and the iodomethanes
-	// have their partners; kiln has no iodine group (iodides other than these
-	// are refused). ---
+	// --- iodine: the atom, I2, HI, IO and CH3I from Goos, Burcat & Ruscic's
+	// database (srcGBR), so that CF3I (above) has its partners; kiln has no
+	// iodine group (other iodides are refused). Not entered: C2H5I, whose
+	// record counts the CH3 torsion twice (among its 18 fundamentals and as a
+	// hindered rotor: Cp about 2 cal/(mol K) and S°298 1.65 high). ---
 	{name: "I", smiles: "[I]", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{2.61667712e+00, -2.66010320e-04, 1.86060150e-07, -3.81927472e-11, 2.52036053e-15, 1.20582790e+04, 6.87896653e+00},
 		lo:     [7]float64{2.50041683e+00, -4.48046831e-06, 1.69962536e-08, -2.67708030e-11, 1.48927452e-14, 1.20947990e+04, 7.49816581e+00},
@@ -556,10 +557,6 @@ var nsxEntries = []entry{
 		hi:     [7]float64{4.44377329e+00, 7.45523940e-03, -2.63962017e-06, 4.21796322e-10, -2.50645631e-14, -1.90140790e+02, 2.47913765e+00},
 		lo:     [7]float64{3.27037586e+00, 3.04938761e-03, 2.00286679e-05, -2.82751858e-08, 1.15828787e-11, 4.82743383e+02, 1.03200626e+01},
 		source: srcGBR + " (iodomethane; ΔHf°298: Active Thermochemical Tables 14.95 ± 0.17 kJ/mol, which the entry quotes beside the value its coefficients carry (14.3 ± 1.4, NIST WebBook 2000); S°298 and Cp from its coefficients)"},
-	{name: "C2H5I", smiles: "CCI", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
-		hi:     [7]float64{7.97461860e+00, 1.28549646e-02, -4.59993101e-06, 7.40450718e-10, -4.42307467e-14, -4.37826965e+03, -1.45972741e+01},
-		lo:     [7]float64{2.63041302e+00, 1.89595239e-02, 1.17450857e-05, -3.10554440e-08, 1.46462936e-11, -2.52381380e+03, 1.49681231e+01},
-		source: srcGBR + " (iodoethane; ΔHf°298: Active Thermochemical Tables)"},
 	// --- bromine, the bromomethanes, halomethyl radicals, CH2FCl, the formyl
 	// halides and COFCl, all NASA/TP-2002-211556 records as published.
 	// The compilation has no CH2Br or CHBr2 radical, no HOBr, HSO, N2H3, CH3NC
@@ -781,7 +778,7 @@ var nsxEntries = []entry{
 	// J/(mol K), the record's 266.06.
 	{name: "CH2CF2", smiles: "C=C(F)F", mult: 1, hf298: -332930, s298: 266.06, tLow: 200, tMid: 1000, tHigh: 3500,
 		freqs:  []float64{1727.6, 3057.3, 1393, 925.5, 549.7, 592, 3174, 1300.8, 954.3, 437, 803.5, 609.6},
-		source: srcGBR + " (1,1-difluoroethylene; ΔHf°298: Active Thermochemical Tables; S°298 from the record; Cp(T): rigid rotor, harmonic oscillator with the 1,1-isomer's fundamentals listed in the database's record of the isomer mixture (Gurvich 1991), fitted to NASA-7 by kiln's polynomial fit)"},
+		source: "1,1-difluoroethylene: ΔHf°298 (Active Thermochemical Tables, -332.93 ± 2.3 kJ/mol) and S°298 from the 1,1-C2H2F2 record of Goos, Burcat & Ruscic's database (update of 29 June 2015, read from a stored copy); Cp(T) computed by kiln (rigid rotor, harmonic oscillator) from the 1,1-isomer's fundamentals listed in the database's record of the isomer mixture (Gurvich 1991), fitted to NASA-7 by kiln's polynomial fit"},
 	{name: "C2HF3", smiles: "FC=C(F)F", mult: 1, hf298: -491000, tLow: 200, tMid: 1000, tHigh: 3500,
 		n9: &nasa9{
 			lo: [9]float64{-1.410969036e+04, 3.687624920e+02, -1.144797568e+00, 3.956306020e-02, -4.602001360e-05, 2.785149385e-08, -6.903760080e-12, -6.226410330e+04, 3.289661690e+01},
