@@ -37,6 +37,8 @@ type estimateJSON struct {
 	// Flags words each entry of missing_groups as check, summary and hover
 	// word it (extension; analysis.FlagText).
 	Flags []string `json:"flags,omitempty"`
+	// On a refusal for want of groups, missing_groups names them, with
+	// flag kind "missing" (extension).
 	// FlagKinds classifies each entry of missing_groups (extension):
 	// "missing", "flagged", "approximated", "unphysical", or "modelled" — a
 	// validated model's quantity (a radical site's S°/Cp change), which
@@ -174,6 +176,16 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 			// The reason names what is missing; say how to go on, as
 			// check does.
 			r.Error.hint = "give the species a nasa7 or thermo-table block in its .kiln file"
+		}
+		if me := (*benson.MissingGroupError)(nil); errors.As(err, &me) {
+			// The groups whose absence refuses the estimate, as a tool
+			// reading missing_groups of a flagged estimate would look
+			// for them (kind "missing").
+			for _, g := range append([]string{me.Group}, me.Also...) {
+				r.MissingGroups = append(r.MissingGroups, g)
+				r.Flags = append(r.Flags, g+": no value and no approximation (the estimate is refused)")
+				r.FlagKinds = append(r.FlagKinds, "missing")
+			}
 		}
 		return r, nil
 	}

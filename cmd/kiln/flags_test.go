@@ -200,3 +200,25 @@ func TestFlagKinds(t *testing.T) {
 	assert.Equal(t, est[0].FlagKinds, sum.Species[0].FlagKinds)
 	assert.Equal(t, est[1].FlagKinds, sum.Species[1].FlagKinds)
 }
+
+// TestRefusalNamesMissingGroups: a refusal for want of groups lists them in
+// missing_groups (kind "missing"), beside the error, so a tool reads the
+// same field for refused and flagged estimates.
+func TestRefusalNamesMissingGroups(t *testing.T) {
+	code, stdout, stderr := runKiln(t, "estimate", "--json", "CC(F)=C", "CCN=O", "CC")
+	require.NotEqual(t, exitOK, code, stderr)
+	var est []estimateJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &est), stderr)
+	require.Len(t, est, 3)
+	assert.Equal(t, []string{"Cd-(F)(C)"}, est[0].MissingGroups)
+	assert.Equal(t, []string{"C-(NO)(C)(H)2", "NO-(C)"}, est[1].MissingGroups)
+	for _, e := range est[:2] {
+		require.NotNil(t, e.Error, e.Input)
+		assert.Nil(t, e.Hf298, e.Input)
+		assert.Len(t, e.Flags, len(e.MissingGroups), e.Input)
+		for _, k := range e.FlagKinds {
+			assert.Equal(t, "missing", k, e.Input)
+		}
+	}
+	assert.Empty(t, est[2].MissingGroups, "ethane: nothing missing")
+}
