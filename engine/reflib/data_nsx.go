@@ -532,6 +532,15 @@ var nsxEntries = []entry{
 		hi:     [7]float64{1.03751478e+01, 2.68796464e-03, -1.05251679e-06, 1.79661207e-10, -1.11723869e-14, -7.47183936e+04, -2.40254556e+01},
 		lo:     [7]float64{2.56291747e+00, 2.85073277e-02, -3.36989302e-05, 1.87293958e-08, -3.92162636e-12, -7.27890500e+04, 1.52377317e+01},
 		source: srcGBR + " (trifluoroiodomethane (a halon replacement); ΔHf°298: Active Thermochemical Tables)"},
+	// --- the cyanomethyl radical and thioformaldehyde, from the same database. ---
+	{name: "CH2CN", smiles: "[CH2]C#N", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{6.14873620e+00, 6.06600240e-03, -2.17174620e-06, 3.49750387e-10, -2.09004207e-14, 2.86491222e+04, -6.59235995e+00},
+		lo:     [7]float64{2.63064017e+00, 1.73644377e-02, -1.70284117e-05, 9.86551140e-09, -2.46033517e-12, 2.95791691e+04, 1.12776223e+01},
+		source: srcGBR + " (cyanomethyl radical •CH2C≡N; ΔHf°298: C. Melius's BAC-MP4 value as the entry gives it, 61.61 kcal/mol, with which the entry's other values agree (61.60, Tumanov & Denisov 2004; 61.47, Janoschek & Rossi 2004))"},
+	{name: "CH2S", smiles: "C=S", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+		hi:     [7]float64{4.19801901e+00, 5.14114256e-03, -1.90400104e-06, 3.33562196e-10, -2.14380834e-14, 1.21202116e+04, 1.89538934e+00},
+		lo:     [7]float64{3.98890625e+00, -4.48093468e-03, 3.23152583e-05, -3.98564197e-08, 1.57804745e-11, 1.26210562e+04, 5.29851918e+00},
+		source: srcGBR + " (thioformaldehyde; ΔHf°298: the database's G3B3 calculation, 27.474 kcal/mol (computed; Ruscic & Berkowitz 1993 measured 28.2 ± 2))"},
 	// --- iodine: the atom, I2, HI, IO and CH3I from Goos, Burcat & Ruscic's
 	// database (srcGBR), so that CF3I (above) has its partners; kiln has no
 	// iodine group (other iodides are refused). Not entered: C2H5I, whose
