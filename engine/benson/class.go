@@ -329,7 +329,7 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 			// Entropy/Cp-only approximations: ΔHf°298 is not affected.
 		case strings.HasPrefix(m.Group, "HBI: "+unstabilisedSite), m.Group == "HBI: "+ketenylSite:
 			w = widenStabiliser
-		case strings.HasPrefix(m.Group, "HBI: "+substitutedHaloSite), m.Group == "HBI: "+substitutedCyanoSite: // radical.go
+		case strings.HasPrefix(m.Group, "HBI: "+substitutedHaloSite): // radical.go
 			w = widenSubstitutedHalo
 		case m.Group == "HBI: "+alkylHydrazinylSite: // hetero_n.go
 			w = widenAlkylHydrazinyl

@@ -183,8 +183,7 @@ func TestHeteroRadicalSites(t *testing.T) {
 		{"C[CH]F", "secondary alpha-fluoro", false},
 		{"CC(C)[C](C)Cl", "secondary alpha-chloro", true}, // two: the CH3CHCl–H increment, flagged
 		{"C[CH]Br", "alpha-bromo", true},                  // no CH3CHBr–H increment: BrCH2–H, flagged
-		{"N#C[CH2]", "alpha-cyano", false},                // NCCH2–H (hbi_n.tsv)
-		{"C[CH]C#N", "alpha-cyano", true},                 // a further carbon: the same increment, flagged
+		{"N#C[CH2]", "primary", true},                     // α-cyano: no increment, stabilisation left out
 		{"CS[CH2]", "primary", true},                      // α-thio likewise
 		{"[CH2]CBr", "primary", false},
 		{"C[CH]Br", "alpha-bromo", true}, // substituted: the BrCH2–H increment, flagged as for Cl and F

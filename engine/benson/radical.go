@@ -254,12 +254,6 @@ func (g *graph) alphaHaloSite(i int, kind string) (site, missing string) {
 // by widenSubstitutedHalo.
 const substitutedHaloSite = "α-halo radical site on a substituted carbon, alkyl substitution lowers D(R–H) by several kcal/mol: "
 
-// substitutedCyanoSite flags an α-cyano radical centre with a further
-// carbon (CH3CH•CN): the NCCH2–H increment is used, and alkyl substitution
-// lowers D(C–H) by several kcal/mol; class.go widens the uncertainty by
-// widenSubstitutedHalo, sized on the same alkane series.
-const substitutedCyanoSite = "α-cyano radical site on a substituted carbon (the NCCH2–H increment is used); alkyl substitution lowers D(C–H) by several kcal/mol"
-
 // ketenylSite names the radical site of a ketenyl radical, R–C•=C=O (its
 // other resonance structure R–C≡C–O•): no increment of its own is at hand,
 // and the vinylic increment (on the C=C carbon) or the alkoxy one (on the O
@@ -347,12 +341,7 @@ func siteOf(g *graph, i int) (site, missing, several string, err error) {
 		for _, j := range g.nbr[i] {
 			switch {
 			case g.typ[j] == "CN":
-				// NCCH2–H (hbi_n.tsv); a further carbon on the centre
-				// lowers D(C–H), as for the α-halo sites.
-				if carbons == 1 {
-					return "alpha-cyano", "", "", nil
-				}
-				return "alpha-cyano", substitutedCyanoSite, "", nil
+				return alkyl, unstabilisedSite + "alpha-cyano", "", nil
 			case g.typ[j] == "NC": // isocyanide N (hetero_n.go): conjugates as a nitrile does
 				return alkyl, unstabilisedSite + "alpha-isocyano", "", nil
 			case g.m.Atoms[j].Element == "S":
