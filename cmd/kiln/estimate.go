@@ -33,12 +33,13 @@ type estimateJSON struct {
 	// Multiplicity is the spin multiplicity 2S+1 of the data, for
 	// reference-library species too (extension).
 	Multiplicity  *int     `json:"multiplicity,omitempty"`
+	// MissingGroups names the groups an estimate approximated or flagged;
+	// on a refusal for want of groups, the groups missing (flag kind
+	// "missing", extension).
 	MissingGroups []string `json:"missing_groups"`
 	// Flags words each entry of missing_groups as check, summary and hover
 	// word it (extension; analysis.FlagText).
 	Flags []string `json:"flags,omitempty"`
-	// On a refusal for want of groups, missing_groups names them, with
-	// flag kind "missing" (extension).
 	// FlagKinds classifies each entry of missing_groups (extension):
 	// "missing", "flagged", "approximated", "unphysical", or "modelled" — a
 	// validated model's quantity (a radical site's S°/Cp change), which
