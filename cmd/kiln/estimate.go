@@ -32,7 +32,7 @@ type estimateJSON struct {
 	OpticalIsomers *int             `json:"optical_isomers"`
 	// Multiplicity is the spin multiplicity 2S+1 of the data, for
 	// reference-library species too (extension).
-	Multiplicity  *int     `json:"multiplicity,omitempty"`
+	Multiplicity *int `json:"multiplicity,omitempty"`
 	// MissingGroups names the groups an estimate approximated or flagged;
 	// on a refusal for want of groups, the groups missing (flag kind
 	// "missing", extension).
