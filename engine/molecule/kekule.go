@@ -375,6 +375,11 @@ func (p *parser) valenceHint(i int, e element, sum int) string {
 	if vs, ok := valences(e, 1); ok && slices.Contains(vs, sum) {
 		return fmt.Sprintf(" (an atom outside brackets carries no charge: if it is charged, write it in brackets, as [%s+])", p.atoms[i].Element)
 	}
+	switch p.atoms[i].Element {
+	case "Cl", "Br", "I":
+		// OpenSMILES gives halogens valence 1 only.
+		return " (a halogen with more bonds is written with charges, as chlorine dioxide OClO is: [O][Cl+][O-])"
+	}
 	return ""
 }
 

@@ -452,7 +452,7 @@ var nsxEntries = []entry{
 		hi:     [7]float64{3.98321933e+00, 4.88846374e-03, -1.65086637e-06, 2.55371446e-10, -1.48308561e-14, 1.05780106e+04, 3.62582838e+00},
 		lo:     [7]float64{3.95608248e+00, -3.02611020e-03, 2.56874396e-05, -3.15645120e-08, 1.24084574e-11, 1.09199790e+04, 5.55950983e+00},
 		source: srcGBR + " (hydroxyamidogen HN•–OH, trans (the entry's record); ΔHf°298: Active Thermochemical Tables version C (2011), 100.9 ± 0.98 kJ/mol, as for H2NO; the entry also quotes 94.70 from version D, 2013)"},
-	{name: "H2NN", smiles: "[NH2+]=[N-]", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+	{name: "H2NN", smiles: "[NH2+]=[N-]", aliases: []string{"[N]N"}, mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{3.05903670e+00, 6.18382347e-03, -2.22171165e-06, 3.58539206e-10, -2.14532905e-14, 3.48530149e+04, 6.69893515e+00},
 		lo:     [7]float64{4.53204001e+00, -7.32418578e-03, 3.00803713e-05, -3.04000551e-08, 1.04700639e-11, 3.49580003e+04, 1.51074195e+00},
 		source: srcGBR + " (isodiazene H2N=N (1,1-diazene), singlet; ΔHf°298: Active Thermochemical Tables)"},

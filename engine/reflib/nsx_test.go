@@ -240,7 +240,7 @@ func TestLookupNSX(t *testing.T) {
 		{"S=S", 0, "S2"}, {"[S][S]", 0, "S2"}, {"S=S=O", 0, "S2O"}, {"[S]S", 0, "HS2"}, {"SS", 0, "H2S2"},
 		{"O=NCl", 0, "NOCl"}, {"[O-][N+](=O)Cl", 0, "NO2Cl"}, {"[O-][N+](=O)OCl", 0, "ClONO2"}, {"O=NF", 0, "FNO"},
 		{"ClOCl", 0, "Cl2O"}, {"[O-][Cl+][O]", 0, "OClO"}, {"[O]OCl", 0, "ClOO"},
-		{"N#CCl", 0, "ClCN"}, {"N#CBr", 0, "BrCN"}, {"N#CF", 0, "FCN"}, {"IC(F)(F)F", 0, "CF3I"}, {"N=[CH]", 0, "HCNH"},
+		{"N#CCl", 0, "ClCN"}, {"N#CBr", 0, "BrCN"}, {"N#CF", 0, "FCN"}, {"IC(F)(F)F", 0, "CF3I"}, {"N=[CH]", 0, "HCNH"}, {"N[N]", 0, "H2NN"},
 		{"N#C[CH2]", 0, "CH2CN"}, {"S=C", 0, "CH2S"}, {"[I]", 0, "I"}, {"II", 0, "I2"}, {"[H]I", 0, "HI"}, {"I", 0, "HI"}, {"[O]I", 0, "IO"}, {"IC", 0, "CH3I"}, {"ICC", 0, ""},
 		{"[C]#CCl", 2, "C2Cl"}, {"FC(F)=[C]F", 0, "C2F3"},
 		{"C(=C=O)=C=O", 0, "C3O2"}, {"[C]#CF", 4, ""}, {"FC(F)=[C]F", 4, ""},
