@@ -25,6 +25,28 @@ func RefusalReason(err error) string {
 	return fmt.Sprintf("atom %d %s", ue.Atom, ue.Reason)
 }
 
+// RefusalGroups names the groups whose absence refused an estimate (the
+// one the engine names and any further ones), nil when err is not such a
+// refusal.
+func RefusalGroups(err error) []string {
+	var me *benson.MissingGroupError
+	if !errors.As(err, &me) {
+		return nil
+	}
+	return append([]string{me.Group}, me.Also...)
+}
+
+// RefusalGroupFlag words one group of RefusalGroups as a flag, for the
+// JSON outputs that list a refused species' missing groups (kind
+// "missing").
+func RefusalGroupFlag(group string) string {
+	return group + ": no value and no approximation (the estimate is refused)"
+}
+
+// RefusalGroups names the groups whose absence refused the species'
+// estimate; nil when it was estimated or refused for another reason.
+func (s *Species) RefusalGroups() []string { return RefusalGroups(s.estimateErr) }
+
 // RefusalGivesRoute reports whether a refusal's reason (RefusalReason)
 // already tells the user to give a thermo block, so that callers adding
 // that route (check, estimate, hover) do not say it twice.

@@ -178,15 +178,12 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 			// check does.
 			r.Error.hint = "give the species a nasa7 or thermo-table block in its .kiln file"
 		}
-		if me := (*benson.MissingGroupError)(nil); errors.As(err, &me) {
-			// The groups whose absence refuses the estimate, as a tool
-			// reading missing_groups of a flagged estimate would look
-			// for them (kind "missing").
-			for _, g := range append([]string{me.Group}, me.Also...) {
-				r.MissingGroups = append(r.MissingGroups, g)
-				r.Flags = append(r.Flags, g+": no value and no approximation (the estimate is refused)")
-				r.FlagKinds = append(r.FlagKinds, "missing")
-			}
+		// The groups whose absence refuses the estimate, where a tool
+		// reading missing_groups of a flagged estimate looks for them.
+		for _, g := range analysis.RefusalGroups(err) {
+			r.MissingGroups = append(r.MissingGroups, g)
+			r.Flags = append(r.Flags, analysis.RefusalGroupFlag(g))
+			r.FlagKinds = append(r.FlagKinds, "missing")
 		}
 		return r, nil
 	}

@@ -221,4 +221,14 @@ func TestRefusalNamesMissingGroups(t *testing.T) {
 		}
 	}
 	assert.Empty(t, est[2].MissingGroups, "ethane: nothing missing")
+
+	// summary --json words them as flags of the refused species.
+	path := writeTemp(t, "r.kiln", "species A CC(F)=C\nspecies B CC\n")
+	_, stdout, _ = runKiln(t, "summary", "--json", path)
+	var sum summaryJSON
+	require.NoError(t, json.Unmarshal([]byte(stdout), &sum), stdout)
+	require.Len(t, sum.Species, 2)
+	assert.Equal(t, []string{"Cd-(F)(C): no value and no approximation (the estimate is refused)"}, sum.Species[0].Flags)
+	assert.Equal(t, []string{"missing"}, sum.Species[0].FlagKinds)
+	assert.Empty(t, sum.Species[1].Flags)
 }

@@ -35,7 +35,8 @@ type summarySpecies struct {
 	Cp    numericMap `json:"cp_j_mol_k"` // null where the block does not reach
 	// Flags are the approximations of an estimated species, worded as
 	// check, estimate and hover word them (extension; absent when none or
-	// when the thermo comes from the file).
+	// when the thermo comes from the file); for a species refused for want
+	// of groups and given no thermo, those groups (kind "missing").
 	Flags []string `json:"flags,omitempty"`
 	// FlagKinds classifies each entry of flags as estimate --json does
 	// (extension; analysis.FlagKind).
@@ -135,6 +136,13 @@ func buildSummary(results []*analysis.Result) summaryJSON {
 			row.Flags = append(row.Flags, analysis.FlagText(m))
 			row.FlagKinds = append(row.FlagKinds, analysis.FlagKind(m))
 			row.flags = append(row.flags, m)
+		}
+		if sp.Estimate == nil && sp.Given == nil {
+			// Refused for want of groups: name them, as estimate --json does.
+			for _, g := range sp.RefusalGroups() {
+				row.Flags = append(row.Flags, analysis.RefusalGroupFlag(g))
+				row.FlagKinds = append(row.FlagKinds, "missing")
+			}
 		}
 		if sp.Decl.SMILES != nil {
 			row.SMILES = ptr(sp.Decl.SMILES.Text)
