@@ -295,29 +295,13 @@ func TestAcetylenicHalogenGroups(t *testing.T) {
 		{"FC#CF", "C2F2", 5.0, 1.5, 0.5, true},     // not additive: flagged, covered by ±2u below
 	}
 	for _, c := range cases {
-		m, err := molecule.ParseSMILES(c.smiles)
-		require.NoError(t, err)
-		sp, ok := lib.Lookup(m, 0)
-		require.True(t, ok, c.name)
-		e, err := Estimate(m, Options{})
-		require.NoError(t, err, c.smiles)
-		dH := (e.Hf298 - sp.Hf298) / calorie / 1000
-		t.Logf("%-8s ΔHf° group %.2f, library %.2f kcal/mol (%+.2f); S° %+.2f cal/(mol K)", c.name,
-			e.Hf298/calorie/1000, sp.Hf298/calorie/1000, dH, (e.S298-sp.S298)/calorie)
-		assert.InDelta(t, 0, dH, c.tolH, "%s ΔHf°", c.name)
-		assert.InDelta(t, sp.S298/calorie, e.S298/calorie, c.tolS, "%s S°", c.name)
-		for k, T := range StdTemps {
-			assert.InDelta(t, sp.Poly.Cp(T)/calorie, e.Cp[k]/calorie, c.tolC, "%s Cp(%g K)", c.name, T)
-		}
+		sp, e := againstLibrary(t, lib, c.smiles, c.name, c.tolH, c.tolS, c.tolC)
 		assert.Equal(t, c.flagged, hfApproximated(e), "%s: %v", c.smiles, e.Missing)
 		assert.LessOrEqual(t, math.Abs(e.Hf298-sp.Hf298), 2*e.Uncertainty, "%s: ±2u covers the library value", c.name)
 	}
 	// A carbon partner: Ct-(Cl) is used as it stands; Ct-(F), Ct-(Br) flagged.
 	for smi, flagged := range map[string]bool{"CC#CCl": false, "CC#CF": true, "CC#CBr": true} {
-		m, err := molecule.ParseSMILES(smi)
-		require.NoError(t, err)
-		e, err := Estimate(m, Options{})
-		require.NoError(t, err, smi)
+		e := heteroEstimate(t, smi)
 		assert.Equal(t, flagged, hfApproximated(e), "%s: %v", smi, e.Missing)
 	}
 }
