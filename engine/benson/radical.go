@@ -229,10 +229,11 @@ func (g *graph) alphaHaloSite(i int, kind string) (site, missing string) {
 		if !g.isCarbon(j) {
 			continue
 		}
-		if h, _ := g.halogens(j); g.typ[j] == "C" && h < 2 {
-			alkyl++
-		} else if h < 2 || g.typ[j] != "C" {
-			other++
+		switch h, _ := g.halogens(j); {
+		case g.typ[j] != "C":
+			other++ // an unsaturated or hetero-typed carbon
+		case h < 2:
+			alkyl++ // (a CX2/CX3 neighbour counts as neither)
 		}
 	}
 	secondary, ok := secondaryHaloSites[kind]
