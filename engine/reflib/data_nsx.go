@@ -38,7 +38,11 @@ type nasa9 struct {
 	lo, hi [9]float64
 }
 
-var nsxEntries = []entry{
+// nsxEntries are the N, S and halogen entries of this file and those of
+// data_inorg.go.
+var nsxEntries = append(nsxCore, inorgEntries...)
+
+var nsxCore = []entry{
 	// --- nitrogen ---
 	{name: "N", smiles: "[N]", mult: 4, tLow: 200, tMid: 1000, tHigh: 6000, implied: true,
 		hi:     [7]float64{2.4159429e+00, 1.7489065e-04, -1.1902369e-07, 3.0226245e-11, -2.0360982e-15, 5.6133773e+04, 4.6496096e+00},

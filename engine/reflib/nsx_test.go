@@ -250,6 +250,25 @@ func TestLookupNSX(t *testing.T) {
 		{"ClC(Cl)=C(Cl)Cl", 0, ""}, {"ClC=C(Cl)Cl", 0, ""}, {"C=CF", 0, ""}, {"C=CCl", 0, ""},
 		{"[CH2]Br", 0, ""}, {"Br[CH]Br", 0, ""}, {"OBr", 0, "HOBr"}, {"BrC(Br)Br", 3, ""},
 		{"CCl", 3, ""}, {"CCCl", 0, ""},
+		// inorganic F, Cl, Br, I, S and N species (data_inorg.go), each under
+		// its entry's SMILES and another spelling
+		{"[N]F", 0, "NF"}, {"F[N]", 3, "NF"}, {"[N]F", 1, ""}, {"F[N]F", 0, "NF2"}, {"[N](F)F", 2, "NF2"},
+		{"FN(F)F", 0, "NF3"}, {"N(F)(F)F", 0, "NF3"}, {"FN(F)N(F)F", 0, "N2F4"}, {"N(F)(F)N(F)F", 0, "N2F4"},
+		{"NF", 0, "NH2F"}, {"FN", 0, "NH2F"}, {"FNF", 0, "NHF2"}, {"N(F)F", 0, "NHF2"},
+		{"[O]F", 0, "FO"}, {"F[O]", 2, "FO"}, {"F[O]", 4, ""}, {"FO[O]", 0, "FOO"}, {"[O]OF", 2, "FOO"},
+		{"FOF", 0, "F2O"}, {"O(F)F", 0, "F2O"}, {"OF", 0, "HOF"}, {"FO", 0, "HOF"}, {"[H]OF", 0, "HOF"},
+		{"FCl", 0, "ClF"}, {"ClF", 0, "ClF"}, {"FBr", 0, "BrF"}, {"BrF", 0, "BrF"},
+		{"ClBr", 0, "BrCl"}, {"BrCl", 0, "BrCl"}, {"FI", 0, "IF"}, {"IF", 0, "IF"},
+		{"ClI", 0, "ICl"}, {"ICl", 0, "ICl"}, {"BrI", 0, "IBr"}, {"IBr", 0, "IBr"}, {"IBr", 3, ""},
+		{"F[S]", 0, "SF"}, {"[S]F", 2, "SF"}, {"[S]F", 4, ""}, {"FSF", 0, "SF2"}, {"S(F)F", 0, "SF2"},
+		{"FS(F)(F)F", 0, "SF4"}, {"S(F)(F)(F)F", 0, "SF4"}, {"FS(F)(F)(F)(F)F", 0, "SF6"}, {"S(F)(F)(F)(F)(F)F", 0, "SF6"},
+		{"Cl[S]", 0, "SCl"}, {"[S]Cl", 2, "SCl"}, {"ClSCl", 0, "SCl2"}, {"S(Cl)Cl", 0, "SCl2"},
+		{"ClSSCl", 0, "S2Cl2"}, {"S(Cl)SCl", 0, "S2Cl2"}, {"O=S(F)F", 0, "SOF2"}, {"FS(F)=O", 0, "SOF2"},
+		{"O=S(=O)(F)F", 0, "SO2F2"}, {"FS(F)(=O)=O", 0, "SO2F2"}, {"O=S(=O)(Cl)Cl", 0, "SO2Cl2"}, {"ClS(Cl)(=O)=O", 0, "SO2Cl2"},
+		{"O=S(=O)(F)Cl", 0, "SO2ClF"}, {"ClS(F)(=O)=O", 0, "SO2ClF"},
+		{"NCl", 0, "NH2Cl"}, {"ClN", 0, "NH2Cl"}, {"ClNCl", 0, "NHCl2"}, {"N(Cl)Cl", 0, "NHCl2"},
+		{"ClN(Cl)Cl", 0, "NCl3"}, {"N(Cl)(Cl)Cl", 0, "NCl3"},
+		{"O=S(Cl)Cl", 0, ""}, {"FC(F)(F)C#N", 0, ""}, {"CN=C=O", 0, ""}, // in neither compilation (data_inorg.go)
 	}
 	for _, c := range cases {
 		m, err := molecule.ParseSMILES(c.smiles)
