@@ -378,7 +378,7 @@ func (p *parser) valenceHint(i int, e element, sum int) string {
 	switch p.atoms[i].Element {
 	case "Cl", "Br", "I":
 		// OpenSMILES gives halogens valence 1 only.
-		return " (a halogen with more bonds is written with charges, as chlorine dioxide OClO is: [O][Cl+][O-])"
+		return " (a halogen outside brackets has one bond: write a hypervalent one in brackets, as chlorine trifluoride F[Cl](F)F, or with charges, as chlorine dioxide OClO is: [O][Cl+][O-])"
 	}
 	return ""
 }

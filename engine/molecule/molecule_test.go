@@ -108,7 +108,7 @@ func TestErrors(t *testing.T) {
 		{"CCc1cccc1", 2, "aromatic ring cannot be kekulized"},
 		{"C(C)(C)(C)(C)C", 0, "carbon with valence 5"},
 		{"CO(C)C", 1, "oxygen with valence 3"},
-		{"O=Cl[O]", 2, "chlorine with valence 3 (a halogen with more bonds is written with charges, as chlorine dioxide OClO is: [O][Cl+][O-])"},
+		{"O=Cl[O]", 2, "chlorine with valence 3 (a halogen outside brackets has one bond: write a hypervalent one in brackets, as chlorine trifluoride F[Cl](F)F, or with charges, as chlorine dioxide OClO is: [O][Cl+][O-])"},
 		{"[CH5]", 0, "carbon with valence 5"},
 		{"*C", 0, "wildcard"},
 		{"C=1CC-1", 5, "two different bond symbols"},

@@ -21,8 +21,12 @@ package reflib
 // The chloramines' ΔHf°298 are the database's own G3B3 calculations
 // (± 2 kcal/mol), said in each source. Not entered: thionyl chloride SOCl2,
 // CF3CN, methyl isocyanate CH3NCO and HNCS/HSCN, which neither compilation
-// has (notes/burcat_e.md lists the neighbouring records), and the
-// hypervalent interhalogens (ClF3, BrF5, IF7 …), whose SMILES kiln refuses.
+// has (notes/burcat_e.md lists the neighbouring records). The hypervalent
+// interhalogens ClF3, ClF5, BrF3, BrF5 and IF5 are NASA-9 records too
+// (notes/nasa_hyper.md), written with the central halogen in brackets. IF7's
+// record is not entered: no NASA-7 refit of it meets TestNASA9Refit's
+// 0.1 J/(mol K) in S between 200 and 650 K (0.13 at 200 K, even with the
+// range cut to 2500 K).
 var inorgEntries = []entry{
 	// --- nitrogen fluorides, fluoramines, oxygen fluorides, interhalogens and
 	// sulfur fluorides, chlorides and oxyhalides: NASA/TP-2002-211556 records
@@ -205,4 +209,38 @@ var inorgEntries = []entry{
 		hi:     [7]float64{9.25726100e+00, 7.80592071e-04, -3.10425586e-07, 5.35236861e-11, -3.35146319e-15, 2.44687844e+04, -1.74943044e+01},
 		lo:     [7]float64{1.80619014e+00, 3.83840322e-02, -7.51564682e-05, 6.76752874e-08, -2.29314418e-11, 2.57469932e+04, 1.69868855e+01},
 		source: srcGBR + " (nitrogen trichloride; ΔHf°298: the database's G3B3 calculation, 54.55 ± 2 kcal/mol (computed))"},
+	// --- hypervalent interhalogens: NASA/TP-2002-211556 records as published
+	// (notes/nasa_hyper.md; Gurvich 1989 tables, date code tpis89). Their
+	// SMILES write the central halogen in brackets (F[Cl](F)F): kiln reads a
+	// halogen outside brackets with one bond only. No group applies to them. ---
+	{name: "ClF3", smiles: "F[Cl](F)F", mult: 1, hf298: -164600, tLow: 200, tMid: 1000, tHigh: 3500,
+		n9: &nasa9{
+			lo: [9]float64{1.285175171e+05, -2.140445721e+03, 1.493096474e+01, -6.042471040e-03, 3.718968610e-06, -8.053201100e-10, -7.985600530e-14, -1.138459640e+04, -5.594838353e+01},
+			hi: [9]float64{-2.294956235e+05, -1.220741000e+02, 1.009124644e+01, -3.649724750e-05, 8.058910750e-09, -9.230849950e-13, 4.272569490e-17, -2.282840447e+04, -2.511605479e+01},
+		},
+		source: srcNASA9 + " (chlorine trifluoride; ΔHf°298 and functions: Gurvich,1989 pt1 p193 pt2 p98, as the record gives them)"},
+	{name: "ClF5", smiles: "F[Cl](F)(F)(F)F", mult: 1, hf298: -238000, tLow: 200, tMid: 1000, tHigh: 3500,
+		n9: &nasa9{
+			lo: [9]float64{2.459703939e+05, -4.315348070e+03, 2.727005972e+01, -1.670193839e-02, 1.421668208e-05, -6.426479740e-09, 1.183099799e-12, -1.071423726e+04, -1.267466837e+02},
+			hi: [9]float64{-4.269327450e+05, -2.058057390e+02, 1.615465278e+01, -6.212688180e-05, 1.376637959e-08, -1.581335709e-12, 7.336422490e-17, -3.361466600e+04, -5.757531175e+01},
+		},
+		source: srcNASA9 + " (chlorine pentafluoride; ΔHf°298 and functions: Gurvich,1989 pt1 p194 pt2 p99, as the record gives them)"},
+	{name: "BrF3", smiles: "F[Br](F)F", mult: 1, hf298: -255600, tLow: 200, tMid: 1000, tHigh: 3500,
+		n9: &nasa9{
+			lo: [9]float64{1.116455127e+05, -1.959424330e+03, 1.526220126e+01, -7.999362300e-03, 6.982030260e-06, -3.242757960e-09, 6.164751460e-13, -2.345341551e+04, -5.522633600e+01},
+			hi: [9]float64{-1.886532240e+05, -8.245232970e+01, 1.006180694e+01, -2.477319092e-05, 5.478576860e-09, -6.282655260e-13, 2.910628214e-17, -3.386800370e+04, -2.298937369e+01},
+		},
+		source: srcNASA9 + " (bromine trifluoride; ΔHf°298 and functions: Gurvich,1989 pt1 p211 pt2 p110, as the record gives them)"},
+	{name: "BrF5", smiles: "F[Br](F)(F)(F)F", mult: 1, hf298: -428800, tLow: 200, tMid: 1000, tHigh: 3500,
+		n9: &nasa9{
+			lo: [9]float64{2.211366805e+05, -4.024809220e+03, 2.734900212e+01, -1.832254979e-02, 1.721754649e-05, -8.753508630e-09, 1.860196959e-12, -3.537447670e+04, -1.244296466e+02},
+			hi: [9]float64{-3.757647640e+05, -1.575896472e+02, 1.611869838e+01, -4.776497800e-05, 1.059755365e-08, -1.218527723e-12, 5.657535450e-17, -5.667266800e+04, -5.540839310e+01},
+		},
+		source: srcNASA9 + " (bromine pentafluoride; ΔHf°298 and functions: Gurvich,1989 pt1 p212 pt2 p111, as the record gives them)"},
+	{name: "IF5", smiles: "F[I](F)(F)(F)F", mult: 1, hf298: -841000, tLow: 200, tMid: 1000, tHigh: 3500,
+		n9: &nasa9{
+			lo: [9]float64{2.026184530e+05, -3.598183170e+03, 2.530349738e+01, -1.348602458e-02, 1.105687229e-05, -4.707939510e-09, 7.864411470e-13, -8.700147250e+04, -1.112719941e+02},
+			hi: [9]float64{-3.620506260e+05, -1.639236093e+02, 1.612272743e+01, -4.914431550e-05, 1.086015052e-08, -1.244672691e-12, 5.763593620e-17, -1.061642293e+05, -5.398773360e+01},
+		},
+		source: srcNASA9 + " (iodine pentafluoride; ΔHf°298 and functions: Gurvich,1989 pt1 p232 pt2 p123, as the record gives them)"},
 }

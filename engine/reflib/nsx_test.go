@@ -268,6 +268,10 @@ func TestLookupNSX(t *testing.T) {
 		{"O=S(=O)(F)Cl", 0, "SO2ClF"}, {"ClS(F)(=O)=O", 0, "SO2ClF"},
 		{"NCl", 0, "NH2Cl"}, {"ClN", 0, "NH2Cl"}, {"ClNCl", 0, "NHCl2"}, {"N(Cl)Cl", 0, "NHCl2"},
 		{"ClN(Cl)Cl", 0, "NCl3"}, {"N(Cl)(Cl)Cl", 0, "NCl3"},
+		{"F[Cl](F)F", 0, "ClF3"}, {"[Cl](F)(F)F", 1, "ClF3"}, {"F[Cl](F)(F)(F)F", 0, "ClF5"}, {"[Cl](F)(F)(F)(F)F", 0, "ClF5"},
+		{"F[Br](F)F", 0, "BrF3"}, {"[Br](F)(F)F", 0, "BrF3"}, {"F[Br](F)(F)(F)F", 0, "BrF5"}, {"[Br](F)(F)(F)(F)F", 0, "BrF5"},
+		{"F[I](F)(F)(F)F", 0, "IF5"}, {"[I](F)(F)(F)(F)F", 0, "IF5"}, {"F[I](F)(F)(F)(F)(F)F", 0, ""},
+		{"F[Cl](F)F", 3, ""}, {"O=[Cl][O]", 0, "OClO"}, {"[O][Cl]=O", 2, "OClO"},
 		{"O=S(Cl)Cl", 0, ""}, {"FC(F)(F)C#N", 0, ""}, {"CN=C=O", 0, ""}, // in neither compilation (data_inorg.go)
 	}
 	for _, c := range cases {
