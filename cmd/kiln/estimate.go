@@ -222,7 +222,9 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		// σ of a written Lewis structure describes the molecule only for a
 		// closed-shell, uncharged one: for a radical or charge-separated
 		// library species (NO2 and NO3 are delocalised; OH, CH3 …) σ is
-		// left null (the tabulated S° contains the true one).
+		// left null (the tabulated S° contains the true one); so is σ of a
+		// hypervalent centre that is not the whole molecule (molecule
+		// package, hypervalent.go).
 		if n := m.NeutralOxo(); n.UnpairedElectrons() == 0 && !anyCharge(n) {
 			if sigma, err := n.SymmetryNumber(); err == nil {
 				r.SymmetryNumber = ptr(json.Number(sigma.String()))
@@ -301,7 +303,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		if r.SymmetryNumber != nil {
 			fmt.Fprintf(w, "  symmetry number σ = %s, optical isomers n = %d (already contained in the tabulated S°)\n", *r.SymmetryNumber, *r.OpticalIsomers)
 		} else {
-			fmt.Fprintln(w, "  symmetry number: not derived from an open-shell or charge-separated structure (the tabulated S° contains it)")
+			fmt.Fprintln(w, "  symmetry number: not derived from an open-shell, charge-separated or hypervalent structure (the tabulated S° contains it)")
 		}
 		if withSources {
 			writeWrapped(w, "    ", "source: "+est.LibrarySource)

@@ -90,6 +90,11 @@ const maxSeeds = 64
 //     bridged bicycles (at most nine atoms) have both bridgeheads "out".
 //  4. Identical '.'-separated components multiply σ by k! for k copies.
 //
+// A molecule with a hypervalent centre (more than four σ partners and lone
+// pairs: SF4, SF6, ClF3) is outside this rule; its σ is the VSEPR shape's
+// when the centre is the whole molecule, and an error otherwise
+// (hypervalent.go).
+//
 // Written configurations are used inside rigid fragments: tetrahedral
 // centres marked @/@@ (@TH1/@TH2) and double bonds marked / \ fix their
 // configuration relative to each other (cis-1,4-dimethylcyclohexane 9,
@@ -122,6 +127,12 @@ func (m *Molecule) SymmetryNumberContext(ctx context.Context) (*big.Int, error) 
 func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, error) {
 	if len(m.Atoms) == 0 {
 		return big.NewInt(1), nil
+	}
+	if s, hyper, err := m.hypervalentSigma(); hyper {
+		if err != nil {
+			return nil, err
+		}
+		return big.NewInt(int64(s)), nil
 	}
 	hybrid, hbonds := m.conjugatedRadical()
 	if hybrid != nil {

@@ -60,6 +60,23 @@ var sigmaCases = []struct {
 	{"[H][H]", 2}, {"O=O", 2}, {"[C-]#[O+]", 1}, {"Cl", 1}, {"CCl", 3}, {"ClC(Cl)(Cl)Cl", 12},
 	{"FC(F)F", 3}, {"C=CC=C", 2}, {"CC(C)=C", 18}, {"CC#C", 3},
 	{"CC.CC", 2 * 18 * 18}, // two identical components: 2!·18²
+	// hypervalent centres, by VSEPR shape (hypervalent.go): seesaw SF4 C_2v,
+	// octahedral SF6 O_h → O, T-shaped ClF3 C_2v, square pyramidal ClF5 and
+	// IF5 C_4v, pentagonal bipyramidal IF7 D_5h → D_5; SO2F2 (four domains)
+	// stays with the tetrahedral rule, C_2v
+	{"FS(F)(F)F", 2}, {"FS(F)(F)(F)(F)F", 24}, {"F[Cl](F)F", 2}, {"F[Cl](F)(F)(F)F", 4},
+	{"F[I](F)(F)(F)F", 4}, {"F[I](F)(F)(F)(F)(F)F", 10}, {"O=S(=O)(F)F", 2},
+}
+
+// TestHypervalentSigmaRefused: a hypervalent centre that is not the whole
+// molecule, or whose ligands differ, gets no σ (the rule for atoms with at
+// most four electron domains would give a wrong one: SF5Cl 120, CF3SF5 360).
+func TestHypervalentSigmaRefused(t *testing.T) {
+	for _, smi := range []string{"FS(F)(F)(F)(F)Cl", "FC(F)(F)S(F)(F)(F)(F)F", "FS(F)(F)C"} {
+		_, err := parse(t, smi).SymmetryNumber()
+		require.Error(t, err, smi)
+		assert.Contains(t, err.Error(), "hypervalent centre", smi)
+	}
 }
 
 func TestSymmetryNumberTable(t *testing.T) {
