@@ -159,6 +159,7 @@ type Estimate struct {
 	// The NASA-7 polynomial comes from NASA7(), the model for reaction
 	// thermochemistry from Thermo().
 	libPoly    nasa.NASA7
+	libFit     nasa.FitReport // the library's fit of libPoly to its source's Cp; zero when entered as published NASA-7 blocks
 	model      *groupThermo
 	fit        *fitResult
 	cp0, cpInf float64 // classical limits for the fit (J/(mol K))

@@ -149,6 +149,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 			S298:          sp.S298,
 			Multiplicity:  sp.Multiplicity,
 			libPoly:       sp.Poly,
+			libFit:        sp.Fit,
 		}
 		for i, T := range benson.StdTemps {
 			e.Cp[i] = sp.Poly.Cp(T)

@@ -192,7 +192,9 @@ type fitResult struct {
 // NASA7 returns the estimate's NASA-7 polynomial: the reference library's own
 // for library species, else a fit to the group values (made on first use;
 // fitting is the costly step of an estimate, and most uses need only the
-// values). FitReport is zero for library species.
+// values). For a library species the FitReport is that of the library's own
+// fit to its source's Cp (reflib.Species.Fit): zero for one entered as
+// published NASA-7 blocks.
 //
 // With explicit fit temperatures (EstimateOptions.ExplicitRange) a library
 // polynomial is refitted to the requested TMid and THigh: its Cp sampled
@@ -201,7 +203,7 @@ type fitResult struct {
 // extrapolate the reference data).
 func (e *Estimate) NASA7() (nasa.NASA7, nasa.FitReport, error) {
 	if e.Library != "" && e.fit == nil {
-		return e.libPoly, nasa.FitReport{}, nil
+		return e.libPoly, e.libFit, nil
 	}
 	f := e.fit
 	if e.Library != "" {

@@ -327,7 +327,14 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	}
 	fmt.Fprintln(w)
 	if p, fit, err := est.NASA7(); withNASA && err == nil {
-		fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %s):\n", u.Entropy(fit.MaxCpResidual))
+		switch {
+		case est.Library != "" && fit.MaxCpResidual == 0:
+			fmt.Fprintln(w, "  NASA-7 polynomial (the source's published Cp coefficients):")
+		case est.Library != "":
+			fmt.Fprintf(w, "  NASA-7 polynomial (the library's fit to its source's Cp; worst Cp residual %s):\n", u.Entropy(fit.MaxCpResidual))
+		default:
+			fmt.Fprintf(w, "  NASA-7 fit (worst Cp residual %s):\n", u.Entropy(fit.MaxCpResidual))
+		}
 		fmt.Fprint(w, speciesfile.FormatNASA7Block("  ", p.TLow, p.TMid, p.THigh, p.Low, p.High, est.BlockSource(stamp), "\n"))
 	} else if withNASA {
 		writeWrapped(w, "  ", "NASA-7 fit refused: "+analysis.FitRefusal(err, u))

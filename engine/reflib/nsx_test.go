@@ -92,6 +92,9 @@ func TestNASA9Refit(t *testing.T) {
 			}
 		}
 		assert.Less(t, worst, 0.005, "%s: NASA-7 refit Cp off by %.3g %% at %g K", e.name, 100*worst, at)
+		// the species carries its refit's report, which the commands print
+		assert.Positive(t, s.Fit.MaxCpResidual, e.name)
+		assert.GreaterOrEqual(t, s.Fit.MaxCpResidual, worst*e.n9.cp(at)-1e-9, "%s: the report's worst residual covers the sampled points", e.name)
 		for T := e.tLow; T <= e.tHigh; T += 50 {
 			assert.InDelta(t, e.n9.h(T), s.Poly.H(T), 150, "%s: refit H at %g K", e.name, T)
 			assert.InDelta(t, e.n9.s(T), s.Poly.S(T), 0.1, "%s: refit S at %g K", e.name, T)

@@ -39,7 +39,12 @@ type Species struct {
 	Hf298        float64
 	S298         float64
 	Poly         nasa.NASA7
-	Source       string
+	// Fit is the report of the NASA-7 fit that made Poly from the source's
+	// Cp (NASA-9 coefficients, or an RRHO sum, sampled every 50 K); zero
+	// for an entry entered as published NASA-7 blocks, which is used as it
+	// stands.
+	Fit    nasa.FitReport
+	Source string
 }
 
 // Library is an immutable, indexed set of reference species, safe for
@@ -71,13 +76,13 @@ func build() *Library {
 	l := &Library{index: map[string]int{}, ground: map[string]int{}}
 	for _, e := range append(append([]entry(nil), entries...), nsxEntries...) {
 		e.resolve()
-		p, err := e.poly()
+		p, fit, err := e.poly()
 		if err != nil {
 			panic(fmt.Sprintf("reflib: %s: %v", e.name, err))
 		}
 		l.species = append(l.species, Species{
 			Name: e.name, SMILES: e.smiles, Multiplicity: e.mult,
-			Hf298: e.hf298, S298: e.s298, Poly: p, Source: e.source,
+			Hf298: e.hf298, S298: e.s298, Poly: p, Fit: fit, Source: e.source,
 		})
 		for _, s := range append([]string{e.smiles}, e.aliases...) {
 			m, err := molecule.ParseSMILES(s)
@@ -187,8 +192,9 @@ func (l *Library) All() []Species {
 // c2 is the second radiation constant hc/k in cm K (CODATA 2018).
 const c2 = 1.438776877
 
-// poly builds the entry's polynomial (see the entry type).
-func (e entry) poly() (nasa.NASA7, error) {
+// poly builds the entry's polynomial (see the entry type) and, for a
+// polynomial fitted to the source's Cp, the fit's report.
+func (e entry) poly() (nasa.NASA7, nasa.FitReport, error) {
 	p := nasa.NASA7{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh}
 	switch {
 	case e.monatomic:
@@ -199,22 +205,22 @@ func (e entry) poly() (nasa.NASA7, error) {
 			T = append(T, t)
 			Cp = append(Cp, e.n9.cp(t))
 		}
-		fit, _, err := nasa.FitPoly(e.hf298, e.s298, T, Cp, nasa.FitOptions{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh})
+		fit, rep, err := nasa.FitPoly(e.hf298, e.s298, T, Cp, nasa.FitOptions{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh})
 		if err != nil {
-			return p, fmt.Errorf("fitting NASA-9 Cp: %w", err)
+			return p, rep, fmt.Errorf("fitting NASA-9 Cp: %w", err)
 		}
-		return fit, nil
+		return fit, rep, nil
 	case len(e.freqs) > 0:
 		var T, Cp []float64
 		for t := e.tLow; t <= e.tHigh; t += 50 {
 			T = append(T, t)
 			Cp = append(Cp, rrhoCp(t, e.freqs, e.linear))
 		}
-		fit, _, err := nasa.FitPoly(e.hf298, e.s298, T, Cp, nasa.FitOptions{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh})
+		fit, rep, err := nasa.FitPoly(e.hf298, e.s298, T, Cp, nasa.FitOptions{TLow: e.tLow, TMid: e.tMid, THigh: e.tHigh})
 		if err != nil {
-			return p, fmt.Errorf("fitting RRHO Cp: %w", err)
+			return p, rep, fmt.Errorf("fitting RRHO Cp: %w", err)
 		}
-		return fit, nil
+		return fit, rep, nil
 	default:
 		p.Low, p.High = e.lo, e.hi
 	}
@@ -225,7 +231,7 @@ func (e entry) poly() (nasa.NASA7, error) {
 	hLow, sLow := lowAt(p, p.TMid), lowSAt(p, p.TMid)
 	p.High[5] += (hLow - p.H(p.TMid)) / nasa.R
 	p.High[6] += (sLow - p.S(p.TMid)) / nasa.R
-	return p, nil
+	return p, nasa.FitReport{}, nil
 }
 
 // resolve fills hf298 and s298 where the entry takes them from its
