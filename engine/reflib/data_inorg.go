@@ -14,9 +14,10 @@ package reflib
 //   - implied: the Goos–Burcat–Ruscic record (srcGBR) where it has none
 //     (IF, ICl, IBr, the chloramines), or where the database quotes an
 //     Active Thermochemical Tables ΔHf°298 more than 1 kJ/mol away from the
-//     NASA header value (FO: 111.27 against 109.01; HOF: −87.26 against
-//     −96.90); for those two the database's coefficients carry the ATcT
-//     value.
+//     NASA header value (FO: 110.9 against 109.01; HOF: −87.26 against
+//     −96.90). HOF's coefficients carry the ATcT value; FO's carry the
+//     older ATcT (A, 2005) 111.267, and the entry takes the 2011 value its
+//     header quotes, 110.9 ± 0.14 (sImplied).
 //
 // The chloramines' ΔHf°298 are the database's own G3B3 calculations
 // (± 2 kcal/mol), said in each source. Not entered: thionyl chloride SOCl2,
@@ -177,10 +178,10 @@ var inorgEntries = []entry{
 	// Thermochemical Tables values that the database's records carry; the
 	// interhalogens of iodine and the chloramines, which NASA/TP-2002-211556
 	// does not have. ---
-	{name: "FO", smiles: "[O]F", mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+	{name: "FO", smiles: "[O]F", mult: 2, hf298: 110900, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
 		hi:     [7]float64{4.10435161e+00, 3.22444815e-04, -6.01630664e-08, -1.10998596e-11, 1.61567239e-15, 1.20593514e+04, 2.35480534e+00},
 		lo:     [7]float64{4.34438108e+00, -5.37168023e-03, 1.77166504e-05, -2.00073120e-08, 7.67510992e-12, 1.22051341e+04, 2.24948929e+00},
-		source: srcGBR + " (FO radical, ²Π ground state; ΔHf°298: Active Thermochemical Tables (A), 111.267 ± 0.69 kJ/mol, which its coefficients carry; the NASA/TP-2002-211556 record (Chase 1996, 109.0 ± 10) lies 2.3 kJ/mol below)"},
+		source: srcGBR + " (FO radical, ²Π ground state; ΔHf°298: Active Thermochemical Tables (C, 2011), 110.9 ± 0.14 kJ/mol, which the entry quotes beside the older ATcT (A, 2005) value 111.267 ± 0.69 that its coefficients carry; S°298 and Cp from its coefficients; the NASA/TP-2002-211556 record (Chase 1996, 109.0 ± 10) lies 1.9 kJ/mol below)"},
 	{name: "HOF", smiles: "OF", mult: 1, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{4.12528386e+00, 2.31519777e-03, -7.76666333e-07, 1.19549024e-10, -6.91728055e-15, -1.19136862e+04, 2.89862207e+00},
 		lo:     [7]float64{3.92035391e+00, -1.39927977e-03, 1.39115337e-05, -1.79018174e-08, 7.24565658e-12, -1.16927573e+04, 4.87858424e+00},
