@@ -148,6 +148,7 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 			Hf298:         sp.Hf298,
 			S298:          sp.S298,
 			Multiplicity:  sp.Multiplicity,
+			Uncertainty:   sp.Hf298Unc, // the source's, where it is large; else exact
 			libPoly:       sp.Poly,
 			libFit:        sp.Fit,
 		}

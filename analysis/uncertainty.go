@@ -18,7 +18,10 @@ import (
 //	σ(ΔG°r) = sqrt(Σ_j (ν_j σ_j)²)        J/mol
 //	factor  = exp(σ(ΔG°r)/(R T))         (k_r is uncertain by ×/÷ factor)
 //
-// Thermochemistry from the reference library counts as exact. A species
+// Thermochemistry from the reference library counts as exact, except where
+// its source states an uncertainty of ΔHf°298 of 4 kJ/mol or more
+// (reflib.Species.Hf298Unc: an old estimate, a computed value, a poorly
+// determined molecule), which enters as an estimate's does. A species
 // whose thermochemistry comes from the file's own block (nasa7 or
 // thermo-table) is treated by what the block holds, since neither block
 // states an uncertainty (FORMAT.md §3.3):
@@ -40,7 +43,8 @@ type ReverseUncertainty struct {
 	Sigma  float64 // σ(ΔG°r), J/mol
 	Factor float64 // exp(σ/(R T)), ≥ 1
 	// Estimated lists the species whose estimates contribute, by name
-	// (including file blocks that hold their estimate's numbers).
+	// (including file blocks that hold their estimate's numbers, and
+	// reference-library species whose source states a large uncertainty).
 	Estimated []string
 	// Unmeasured lists estimated species without an uncertainty (a class
 	// with no measured error): the factor is then a lower bound.
@@ -103,7 +107,7 @@ func (res *Result) ReverseRateUncertainty(r *Reaction, T float64) (ReverseUncert
 			out.Given = append(out.Given, n)
 			continue
 		}
-		if sp.Source != SourceFile && sp.Source != SourceEstimate || sp.Estimate.Library != "" {
+		if sp.Source != SourceFile && sp.Source != SourceEstimate || sp.Estimate.Library != "" && sp.Estimate.Uncertainty <= 0 {
 			continue
 		}
 		out.Estimated = append(out.Estimated, n)

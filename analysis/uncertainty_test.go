@@ -121,3 +121,32 @@ reaction propane + H <=> propyl + H2   A=1e14 n=0 Ea=9
 	assert.Equal(t, []string{"propyl"}, ue.Given)
 	assert.Less(t, ue.Factor, ua.Factor)
 }
+
+// TestReverseUncertaintyStatedByLibrary: reference-library data count as
+// exact, except an entry whose source states a large uncertainty of its
+// ΔHf°298 (thionyl fluoride, ± 50 kJ/mol in Gurvich 1989), which enters the
+// reverse-rate factor as an estimate's uncertainty does, and survives fill.
+func TestReverseUncertaintyStatedByLibrary(t *testing.T) {
+	text := `species SOF2 O=S(F)F
+species SF2 FSF
+species O [O]
+  multiplicity 3
+species H [H]
+species H2 [H][H]
+reaction SF2 + O <=> SOF2   A=1e13 n=0 Ea=0
+reaction H + H <=> H2   A=1e13 n=0 Ea=0
+`
+	res := analyzeText(t, text)
+	require.Len(t, res.Reactions, 2)
+	unc := func(name string) float64 { return res.ByName[name].Estimate.Uncertainty }
+	assert.Equal(t, 50000.0, unc("SOF2"))
+	assert.Equal(t, 10000.0, unc("SF2"))
+	assert.Zero(t, unc("O"), "NIST-JANAF O atom: exact")
+	u, ok := res.ReverseRateUncertainty(res.Reactions[0], 1000)
+	require.True(t, ok)
+	assert.InDelta(t, math.Hypot(50000, 10000), u.Sigma, 1e-6)
+	assert.Equal(t, []string{"SF2", "SOF2"}, u.Estimated)
+	u, ok = res.ReverseRateUncertainty(res.Reactions[1], 1000)
+	require.True(t, ok)
+	assert.Equal(t, 1.0, u.Factor, "library data without a stated large uncertainty are exact")
+}

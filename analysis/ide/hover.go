@@ -329,6 +329,8 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		unc := "Uncertainty ±" + w.u.Energy(e.Uncertainty)
 		if g != nil && g.Class != "" {
 			unc += " (class " + g.Class + ")"
+		} else if e.Library != "" {
+			unc += " (as the source states)"
 		}
 		w.line(unc)
 	}

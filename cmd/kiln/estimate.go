@@ -194,6 +194,9 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 	for i, k := range analysis.StdTempKeys {
 		r.Cp[k] = ptr(est.Cp[i])
 	}
+	if est.Library != "" && est.Uncertainty > 0 {
+		r.Uncertainty = ptr(jnum(est.Uncertainty / 1000)) // as the source states it
+	}
 	if g := est.Group; g != nil {
 		r.Uncertainty = ptr(jnum(est.Uncertainty / 1000))
 		for _, t := range g.Groups {
@@ -311,7 +314,9 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 			fmt.Fprintln(w, "  (source: --sources or --json)")
 		}
 	}
-	if r.Uncertainty != nil {
+	if r.Uncertainty != nil && est.Library != "" {
+		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), tabulated, ± %s as its source states\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.Uncertainty))
+	} else if r.Uncertainty != nil {
 		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), ± %s, 1σ: class error widened by each approximation\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.Uncertainty))
 	} else {
 		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), tabulated: its uncertainty is the source's\n", u.Energy(est.Hf298), other.Energy(est.Hf298))

@@ -369,3 +369,23 @@ func TestSImpliedEntries(t *testing.T) {
 	}
 	assert.Equal(t, 8, n, "CBr4, CH2ClBr, urea, NH2O, ClCN, IO, CH3I and FO")
 }
+
+// TestStatedUncertainties: an entry carries a ΔHf°298 uncertainty only where
+// its source states one of 4 kJ/mol or more, and its source string says so.
+func TestStatedUncertainties(t *testing.T) {
+	n := 0
+	for _, e := range append(append([]entry{}, entries...), nsxEntries...) {
+		if e.hfUnc == 0 {
+			continue
+		}
+		n++
+		assert.GreaterOrEqual(t, e.hfUnc, 4000.0, e.name)
+		assert.Contains(t, e.source, "±", "%s: the source string states the uncertainty", e.name)
+	}
+	assert.Equal(t, 25, n)
+	m, err := molecule.ParseSMILES("O=S(F)F")
+	require.NoError(t, err)
+	sp, ok := New().Lookup(m, 0)
+	require.True(t, ok)
+	assert.Equal(t, 50000.0, sp.Hf298Unc)
+}

@@ -43,8 +43,11 @@ type Species struct {
 	// Cp (NASA-9 coefficients, or an RRHO sum, sampled every 50 K); zero
 	// for an entry entered as published NASA-7 blocks, which is used as it
 	// stands.
-	Fit    nasa.FitReport
-	Source string
+	Fit nasa.FitReport
+	// Hf298Unc is the uncertainty of Hf298 (J/mol) the source states, where
+	// it is 4 kJ/mol or more; 0 for an entry that counts as exact.
+	Hf298Unc float64
+	Source   string
 }
 
 // Library is an immutable, indexed set of reference species, safe for
@@ -82,7 +85,7 @@ func build() *Library {
 		}
 		l.species = append(l.species, Species{
 			Name: e.name, SMILES: e.smiles, Multiplicity: e.mult,
-			Hf298: e.hf298, S298: e.s298, Poly: p, Fit: fit, Source: e.source,
+			Hf298: e.hf298, S298: e.s298, Poly: p, Fit: fit, Hf298Unc: e.hfUnc, Source: e.source,
 		})
 		for _, s := range append([]string{e.smiles}, e.aliases...) {
 			m, err := molecule.ParseSMILES(s)
