@@ -13,8 +13,22 @@ import (
 	"kiln.dev/kiln/speciesfile"
 )
 
-// Caution is the line every species hover ends with.
-const Caution = "Group additivity typically errs by 1–3 kcal/mol; check against measured data, licensed engineering practice and local codes before relying on it."
+// Caution is the line every species hover ends with; CautionTabulated
+// replaces it when the species' values are reference-library data, which
+// are no group estimate (CautionFor chooses).
+const (
+	Caution          = "Group additivity typically errs by 1–3 kcal/mol; check against measured data, licensed engineering practice and local codes before relying on it."
+	CautionTabulated = "Tabulated reference data, as good as the source named (weak values carry the source's stated uncertainty); check against measured data, licensed engineering practice and local codes before relying on them."
+)
+
+// CautionFor returns the caution line for a species estimated as e (nil
+// for a species without an estimate).
+func CautionFor(e *analysis.Estimate) string {
+	if e != nil && e.Library != "" {
+		return CautionTabulated
+	}
+	return Caution
+}
 
 // T298 is the reference temperature, K.
 const T298 = 298.15
@@ -291,7 +305,7 @@ func (w *writer) species(sp *analysis.Species) {
 	if e := sp.Estimate; e != nil {
 		w.estimateDetail(e)
 	}
-	w.line(w.italic(Caution))
+	w.line(w.italic(CautionFor(sp.Estimate)))
 }
 
 func (w *writer) estimateDetail(e *analysis.Estimate) {

@@ -344,7 +344,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	} else if withNASA {
 		writeWrapped(w, "  ", "NASA-7 fit refused: "+analysis.FitRefusal(err, u))
 	}
-	writeWrapped(w, "  ", ide.Caution)
+	writeWrapped(w, "  ", ide.CautionFor(est))
 }
 
 // anyCharge reports whether an atom of m carries a formal charge.
