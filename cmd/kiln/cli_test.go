@@ -436,3 +436,18 @@ reaction C2H6 <=> CH3 + CH3   A=1e16 n=0 Ea=88
 	require.Equal(t, exitOK, code)
 	assert.NotContains(t, stdout, "rate_table_edge_bar")
 }
+
+// TestEstimateSymmetryFlagOnLibrary: --symmetry changes a group estimate's
+// σ, and for reference-library data (whose tabulated S° holds σ) it says on
+// stderr that it does not apply, leaving stdout (and --json) as it was.
+func TestEstimateSymmetryFlagOnLibrary(t *testing.T) {
+	code, out, errOut := runKiln(t, "estimate", "--json", "--symmetry", "12", "FS(F)(F)F")
+	require.Equal(t, 0, code, errOut)
+	assert.Contains(t, errOut, "--symmetry and --optical-isomers do not apply to reference-library data (SF4)")
+	var arr []map[string]any
+	require.NoError(t, json.Unmarshal([]byte(out), &arr))
+	assert.EqualValues(t, 2, arr[0]["symmetry_number"], "the structure's σ, not the flag's")
+	code, _, errOut = runKiln(t, "estimate", "--symmetry", "12", "CCC")
+	require.Equal(t, 0, code)
+	assert.NotContains(t, errOut, "do not apply")
+}

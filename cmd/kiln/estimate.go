@@ -130,6 +130,10 @@ func runEstimate(e env, args []string) (int, error) {
 		if r.Error != nil {
 			failed = true
 		}
+		if est != nil && est.Library != "" && (opts.Symmetry > 0 || opts.OpticalIsomers > 0) {
+			// Said on stderr, so that --json stays one document.
+			fmt.Fprintf(e.stderr, "kiln: %s: --symmetry and --optical-isomers do not apply to reference-library data (%s): its tabulated S°298 already holds σ and n\n", in, est.Library)
+		}
 		if flags["json"] == "true" {
 			results = append(results, r)
 			continue
