@@ -21,8 +21,6 @@ const (
 	diTertButylSulfideRef = -44.9  // Pedley et al. 1986, uncertain
 	difluoropropaneRef    = -128.4 // middle of −127…−130, uncertain
 	octafluoropropaneRef  = -426.6 // NIST/TRC
-	benzothiopheneRef     = 39.6   // NIST WebBook, uncertain
-	dibenzothiopheneRef   = 49.0   // NIST WebBook, uncertain
 	dimethylanilineRef    = 24.1   // Pedley et al. 1986, uncertain
 	thiazoleRef           = 40.0   // NIST WebBook, unsure
 	triazineRef           = 54.0   // 1,3,5-triazine, NIST WebBook (225.9 kJ/mol)
@@ -142,8 +140,6 @@ func TestKnownLargeErrorsWidened(t *testing.T) {
 	}{
 		{"CC(F)(F)C", "C-(F)2(C)2", difluoropropaneRef, 1},
 		{"FC(F)(F)C(F)(F)C(F)(F)F", "C-(F)2(C)2", octafluoropropaneRef, 2},
-		{"c1ccc2sccc2c1", "ring:thiophene" + fusedBenzeneSuffix, benzothiopheneRef, 1},
-		{"c1ccc2c(c1)sc1ccccc12", "ring:thiophene" + fusedBenzeneSuffix, dibenzothiopheneRef, 1},
 		{"CN(C)c1ccccc1", "N-(Cb)(C)2", dimethylanilineRef, 1},
 		{"c1cscn1", thiazoleGroup, thiazoleRef, 1},
 	} {

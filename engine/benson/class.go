@@ -347,7 +347,7 @@ func uncertainty(c string, est *Result, ringStrain float64) float64 {
 			w = widenRadical
 		case strings.HasPrefix(m.Group, "ring system:"):
 			w = max(widenSystem, widenRingShare*math.Abs(ringStrain))
-		case strings.HasSuffix(m.Group, fusedBenzeneSuffix): // rings.go
+		case strings.HasPrefix(m.Group, "ring:") && isFusedFiveRing(m.Group): // rings.go: no correction for this fused ring
 			w = max(widenFusedFiveRing, widenRingShare*math.Abs(ringStrain))
 		case strings.HasSuffix(m.Approximation, withoutHalogenInteractions):
 			w = widenPolyhalogen // hetero_sx.go

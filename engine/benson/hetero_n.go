@@ -3,6 +3,7 @@ package benson
 import (
 	_ "embed"
 	"fmt"
+	"slices"
 	"strings"
 
 	"kiln.dev/kiln/engine/molecule"
@@ -348,11 +349,11 @@ const analogSCpGroup = "S, Cp by analogy: "
 // from one molecule (oneMoleculeMark).
 const oneMoleculeNote = " (derived from one molecule)"
 
-// addNitrogenTableFlags flags the groups of est whose built-in value carries
-// analogSCpMark or oneMoleculeMark in its source (a group the user supplied
+// addNitrogenTableFlags flags the groups and corrections of est whose
+// built-in value carries analogSCpMark or oneMoleculeMark in its source (a group the user supplied
 // carries its own). One flag per group and mark.
 func addNitrogenTableFlags(l lookup, est *Result) {
-	for _, t := range est.Groups {
+	for _, t := range slices.Concat(est.Groups, est.Corrections) {
 		// The marks belong to the value used: for a stand-in
 		// ("NC-(Cb) ≈ NC-(C)") that of the group after "≈".
 		name, used, standIn := strings.Cut(t.Name, " ≈ ")

@@ -185,7 +185,14 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 	if (key == "furan" || key == "thiophene") && g.fusedToBenzene(r) {
 		// Benzofuran, benzothiophene, dibenzofuran: the single ring's
 		// correction holds its own aromatic stabilisation, which the fused
-		// benzene ring changes; it is used as an approximation, flagged.
+		// benzene rings change. The fused ring has a correction of its own
+		// by the number of benzene rings it shares a bond with (one:
+		// benzothiophene; two: dibenzothiophene, dibenzofuran) where a
+		// parent molecule gave one; otherwise the single ring's is used as
+		// an approximation, flagged.
+		if g.fusedBenzeneBonds(r) >= 2 {
+			return key + fusedTwoBenzenesSuffix, key
+		}
 		return key + fusedBenzeneSuffix, key
 	}
 	if key == "" {
@@ -200,10 +207,32 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 // quinoneRing), so both use this one format.
 const carbonylRingFormat = "C%d ring with %d ring carbonyls, %d double bonds"
 
-// fusedBenzeneSuffix ends the ring correction key of a furan or thiophene
-// ring fused to a benzene ring, which takes the single ring's correction
-// flagged (widened by widenFusedFiveRing, class.go).
-const fusedBenzeneSuffix = " fused to a benzene ring"
+// fusedBenzeneSuffix and fusedTwoBenzenesSuffix end the ring correction
+// key of a furan or thiophene ring fused to one or to two benzene rings.
+// Where the key has no correction, the single ring's is used, flagged
+// (widened by widenFusedFiveRing, class.go; isFusedFiveRing).
+const (
+	fusedBenzeneSuffix     = " fused to a benzene ring"
+	fusedTwoBenzenesSuffix = " fused to two benzene rings"
+)
+
+// isFusedFiveRing reports whether a ring correction name (or key) is that
+// of a furan or thiophene ring fused to benzene rings.
+func isFusedFiveRing(name string) bool {
+	return strings.HasSuffix(name, fusedBenzeneSuffix) || strings.HasSuffix(name, fusedTwoBenzenesSuffix)
+}
+
+// fusedBenzeneBonds counts the bonds of ring r that lie in a benzenoid
+// ring: one for each benzene ring fused to r.
+func (g *graph) fusedBenzeneBonds(r []int) int {
+	n := 0
+	for k, a := range r {
+		if b := g.bondBetween(a, r[(k+1)%len(r)]); b >= 0 && g.benzBond[b] {
+			n++
+		}
+	}
+	return n
+}
 
 // fusedToBenzene reports whether a member of ring r also lies in a
 // benzenoid ring.

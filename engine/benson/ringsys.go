@@ -840,7 +840,7 @@ func (g *graph) ringCorrection(r []int, l lookup, est *Result) string {
 	note := "no ring correction known; none applied"
 	if approx != "" {
 		note = "no correction for this ring: the ring of the same size with fewer features (" + fallback + ") is used"
-		if strings.HasSuffix(key, fusedBenzeneSuffix) { // rings.go
+		if isFusedFiveRing(key) { // rings.go
 			note += "; the fused benzene ring changes the five-membered ring's aromatic stabilisation, and estimates of this kind were seen off by up to 11 kcal/mol, either way (benzofuran, benzothiophene, dibenzothiophene)"
 		}
 	}
