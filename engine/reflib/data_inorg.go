@@ -7,7 +7,7 @@ package reflib
 // sulfur fluorides, chlorides and oxyhalides, and the chloramines.
 //
 // Each is entered coefficient by coefficient, from the record copied
-// verbatim into notes/burcat_e.md (with the read offset of each):
+// verbatim into testdata/thermo/records/burcat_e.md (with the read offset of each):
 //
 //   - n9: the NASA/TP-2002-211556 record (srcNASA9, see data_nsx.go) where
 //     that compilation has one;
@@ -22,16 +22,16 @@ package reflib
 // The chloramines' ΔHf°298 are the database's own G3B3 calculations
 // (± 2 kcal/mol), said in each source. Not entered: thionyl chloride SOCl2,
 // CF3CN, methyl isocyanate CH3NCO and HNCS/HSCN, which neither compilation
-// has (notes/burcat_e.md lists the neighbouring records). The hypervalent
+// has (testdata/thermo/records/burcat_e.md lists the neighbouring records). The hypervalent
 // interhalogens ClF3, ClF5, BrF3, BrF5 and IF5 are NASA-9 records too
-// (notes/nasa_hyper.md), written with the central halogen in brackets. IF7's
+// (testdata/thermo/records/nasa_hyper.md), written with the central halogen in brackets. IF7's
 // record is not entered: no NASA-7 refit of it meets TestNASA9Refit's
 // 0.1 J/(mol K) in S between 200 and 650 K (0.13 at 200 K, even with the
 // range cut to 2500 K).
 var inorgEntries = []entry{
 	// --- nitrogen fluorides, fluoramines, oxygen fluorides, interhalogens and
 	// sulfur fluorides, chlorides and oxyhalides: NASA/TP-2002-211556 records
-	// as published (notes/burcat_e.md). Gurvich 1989 or NIST-JANAF (Chase
+	// as published (testdata/thermo/records/burcat_e.md). Gurvich 1989 or NIST-JANAF (Chase
 	// 1998) values as each header gives them; Goos, Burcat & Ruscic's
 	// database quotes no Active Thermochemical Tables value more than
 	// 1 kJ/mol away from them (FOO 25.115, F2O 24.67, ClF −55.70, BrCl
@@ -211,7 +211,7 @@ var inorgEntries = []entry{
 		lo:     [7]float64{1.80619014e+00, 3.83840322e-02, -7.51564682e-05, 6.76752874e-08, -2.29314418e-11, 2.57469932e+04, 1.69868855e+01},
 		source: srcGBR + " (nitrogen trichloride; all its data computed: ΔHf°298 the database's G3B3 calculation, 54.55 ± 2 kcal/mol, S°298 and Cp from computed structure and frequencies; other calculations the entry quotes: 54.36 (Trogolo et al. 2015), 53.56 kcal/mol (Rayne & Forest 2011))"},
 	// --- hypervalent interhalogens: NASA/TP-2002-211556 records as published
-	// (notes/nasa_hyper.md; Gurvich 1989 tables, date code tpis89). Their
+	// (testdata/thermo/records/nasa_hyper.md; Gurvich 1989 tables, date code tpis89). Their
 	// SMILES write the central halogen in brackets (F[Cl](F)F): kiln reads a
 	// halogen outside brackets with one bond only. No group applies to them. ---
 	{name: "ClF3", smiles: "F[Cl](F)F", mult: 1, hf298: -164600, hfUnc: 5000, tLow: 200, tMid: 1000, tHigh: 3500,
