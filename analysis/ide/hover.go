@@ -353,6 +353,8 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 	}
 	if _, fit, err := e.NASA7(); err != nil {
 		w.line("NASA-7 fit failed: " + analysis.FitRefusal(err, w.u))
+	} else if fit.MaxCpResidual > 0 && e.Library != "" {
+		w.line("NASA-7 polynomial: the library's fit to its source's Cp, worst residual " + w.u.Entropy(fit.MaxCpResidual))
 	} else if fit.MaxCpResidual > 0 {
 		w.line("NASA-7 fit: worst Cp residual " + w.u.Entropy(fit.MaxCpResidual))
 	}
