@@ -39,8 +39,8 @@ type nasa9 struct {
 }
 
 // nsxEntries are the N, S and halogen entries of this file and those of
-// data_inorg.go.
-var nsxEntries = append(nsxCore, inorgEntries...)
+// data_inorg.go and data_nox.go.
+var nsxEntries = append(append(nsxCore, inorgEntries...), noxEntries...)
 
 var nsxCore = []entry{
 	// --- nitrogen ---
