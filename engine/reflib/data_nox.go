@@ -22,11 +22,12 @@ package reflib
 //
 // HNCN, carbodiimide, nitrosomethane, H2C=N–O• and ClClO rest on the
 // database's own G3B3 calculations (± 2 kcal/mol as it states; computed,
-// said in each source). For every record H298 from the low block agrees with
-// the header to 0.01 kJ/mol, the blocks meet at 1000 K, and S°298 and Cp°298
-// from the header's molecular data (rigid rotor, harmonic oscillator) agree
-// with the coefficients within 0.01 J/(mol K) (nitrosomethane: its CH3
-// torsion is a hindered rotor, not recomputed).
+// said in each source). For every GBR record read (ClCO's too) H298 from the
+// low block agrees with the header to 0.01 kJ/mol, the blocks meet at
+// 1000 K, and S°298 and Cp°298 from the header's molecular data (rigid rotor,
+// harmonic oscillator) agree with the coefficients within 0.01 J/(mol K)
+// (nitrosomethane: its CH3 torsion is a hindered rotor, not recomputed). The
+// NASA ClCO record's S°298 is 265.19 J/(mol K), the GBR one's 265.91.
 //
 // Not entered (see burcat_nox.md): cyanamide H2N–C≡N, whose record takes
 // σ = 2 for a non-planar (Cs) molecule (its moments have IC < IA + IB), so
