@@ -134,11 +134,10 @@ func (m *Molecule) piContribution(i int, inRing []bool) (int, bool) {
 		}
 		return 0, false
 	}
-	e, ok := elementIndex(a.Element)
-	if !ok || e.Group < 13 {
+	ve, ok := valenceElectrons(a.Element, a.Charge)
+	if !ok {
 		return 0, false
 	}
-	ve := e.Group - 10 - a.Charge
 	nonbonding := ve - sigma
 	switch {
 	case a.Radical != 0:

@@ -3,14 +3,16 @@ package molecule
 import "fmt"
 
 // A hypervalent centre is an atom with more than four electron domains
-// (σ partners plus lone pairs): SF4 (four F and one lone pair), SF6, ClF3
-// (three F and two lone pairs), IF5. The symmetry rule of SymmetryNumber
-// (tetrahedral atoms checked for parity, other atoms permuting alike
-// ligands freely) describes atoms with at most four domains only: it gives
-// SF6 720 and SF4 12 where the point groups give 24 and 2. So a molecule
-// with such a centre gets σ from the VSEPR shape of the centre when it is
-// the whole molecule — one central atom with n identical terminal ligands
-// and m lone pairs (AXnEm) — and an error otherwise.
+// (σ partners, lone pairs and an unpaired electron): SF4 (four F and one
+// lone pair), SF6, ClF3 (three F and two lone pairs), IF5, SF5• (five F and
+// the odd electron). The symmetry rule of SymmetryNumber (tetrahedral atoms
+// checked for parity, other atoms permuting alike ligands freely) describes
+// atoms with at most four domains only: it gives SF6 720 and SF4 12 where
+// the point groups give 24 and 2. So a connected component with such a
+// centre gets σ from the VSEPR shape of the centre when the centre is the
+// whole component — one central atom with n identical terminal ligands that
+// carry no hydrogen (no internal rotors) and m other domains (AXnEm) — and
+// an error otherwise. Identical components still multiply σ by k!.
 
 // vseprSigma holds the rotational symmetry number of AXnEm with identical
 // ligands, by (n, m): the order of the proper rotation group of the
@@ -22,32 +24,43 @@ var vseprSigma = map[[2]int]int{
 	{2, 3}: 2, {3, 2}: 2, {4, 1}: 2, {4, 2}: 8, {5, 0}: 6, {5, 1}: 4, {6, 0}: 24, {7, 0}: 10,
 }
 
-// lonePairs returns the lone pairs of atom i: its valence electrons (main
-// groups 13–18) less its charge, its bonds, its hydrogens and its unpaired
-// electrons, halved; ok is false outside groups 13–18.
-func (m *Molecule) lonePairs(i int) (int, bool) {
-	a := m.Atoms[i]
-	e, ok := elementIndex(a.Element)
+// valenceElectrons returns the valence electrons of a main-group atom of
+// element sym with formal charge q (groups 13–18: group − 10 − q); ok is
+// false outside groups 13–18.
+func valenceElectrons(sym string, q int) (int, bool) {
+	e, ok := elementIndex(sym)
 	if !ok || e.Group < 13 {
 		return 0, false
 	}
-	n := e.Group - 10 - a.Charge - a.HCount - a.Radical
+	return e.Group - 10 - q, true
+}
+
+// otherDomains returns the electron domains of atom i that are not bonds:
+// its lone pairs, plus one for an odd (unpaired) electron; ok is false
+// outside groups 13–18 or when the bonds exceed the valence electrons.
+func (m *Molecule) otherDomains(i int) (int, bool) {
+	a := m.Atoms[i]
+	n, ok := valenceElectrons(a.Element, a.Charge)
+	if !ok {
+		return 0, false
+	}
+	n -= a.HCount
 	for _, b := range m.Adj[i] {
 		n -= m.Bonds[b].Order
 	}
 	if n < 0 {
 		return 0, false
 	}
-	return n / 2, true
+	return (n + 1) / 2, true
 }
 
-// hypervalentSigma reports whether m has a hypervalent centre and, if it
-// does, σ of m (see vseprSigma) or an error saying why σ is not given.
-func (m *Molecule) hypervalentSigma() (sigma int, hyper bool, err error) {
+// hypervalentSigma reports whether the component atoms (ascending) holds a
+// hypervalent centre and, if it does, the component's σ (see vseprSigma)
+// or an error saying why σ is not given.
+func (m *Molecule) hypervalentSigma(atoms []int) (sigma int, hyper bool, err error) {
 	centre := -1
-	for i := range m.Atoms {
-		lp, ok := m.lonePairs(i)
-		if ok && len(m.Adj[i])+m.Atoms[i].HCount+lp > 4 {
+	for _, i := range atoms {
+		if d, ok := m.otherDomains(i); ok && len(m.Adj[i])+m.Atoms[i].HCount+d > 4 {
 			centre = i
 			break
 		}
@@ -56,25 +69,24 @@ func (m *Molecule) hypervalentSigma() (sigma int, hyper bool, err error) {
 		return 0, false, nil
 	}
 	a := m.Atoms[centre]
-	lp, _ := m.lonePairs(centre)
+	d, _ := m.otherDomains(centre)
 	n := len(m.Adj[centre])
-	shape := fmt.Sprintf("%s with %d σ partners and %d lone pairs", a.Element, n+a.HCount, lp)
-	if s, ok := vseprSigma[[2]int{n, lp}]; ok && a.HCount == 0 && len(m.Atoms) == n+1 && m.identicalTerminals(centre) {
+	if s, ok := vseprSigma[[2]int{n, d}]; ok && a.HCount == 0 && len(atoms) == n+1 && m.identicalTerminals(centre) {
 		return s, true, nil
 	}
-	return 0, true, fmt.Errorf("symmetry number of atom %d (%s, a hypervalent centre) not derived: kiln gives it only for one central atom with identical terminal ligands", centre+1, shape)
+	return 0, true, fmt.Errorf("symmetry number of atom %d (%s with %d σ partners and %d other electron domains, a hypervalent centre) not derived: kiln gives it only for one central atom with identical terminal ligands that carry no hydrogen", centre+1, a.Element, n+a.HCount, d)
 }
 
 // identicalTerminals reports whether every neighbour of atom c is a
-// terminal atom (no other bond) bonded to c alike and identical to the
-// others in element, isotope, charge, hydrogens and unpaired electrons.
+// terminal atom without hydrogens (no other bond, no internal rotor) bonded
+// to c alike and identical to the others in element, isotope, charge and
+// unpaired electrons.
 func (m *Molecule) identicalTerminals(c int) bool {
 	var first *Atom
 	order := 0
 	for _, b := range m.Adj[c] {
-		j := m.Other(b, c)
-		x := &m.Atoms[j]
-		if len(m.Adj[j]) != 1 {
+		x := &m.Atoms[m.Other(b, c)]
+		if len(m.Adj[m.Other(b, c)]) != 1 || x.HCount != 0 {
 			return false
 		}
 		if first == nil {
@@ -82,7 +94,7 @@ func (m *Molecule) identicalTerminals(c int) bool {
 			continue
 		}
 		if x.Element != first.Element || x.Isotope != first.Isotope || x.Charge != first.Charge ||
-			x.HCount != first.HCount || x.Radical != first.Radical || m.Bonds[b].Order != order {
+			x.Radical != first.Radical || m.Bonds[b].Order != order {
 			return false
 		}
 	}

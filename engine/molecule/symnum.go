@@ -128,12 +128,6 @@ func (m *Molecule) symmetryNumber(ctx context.Context, budget int) (*big.Int, er
 	if len(m.Atoms) == 0 {
 		return big.NewInt(1), nil
 	}
-	if s, hyper, err := m.hypervalentSigma(); hyper {
-		if err != nil {
-			return nil, err
-		}
-		return big.NewInt(int64(s)), nil
-	}
 	hybrid, hbonds := m.conjugatedRadical()
 	if hybrid != nil {
 		m = m.hybridForm(hybrid, hbonds)
@@ -345,15 +339,12 @@ func (m *Molecule) lonePairLigands(i int) int {
 // four electron domains (σ partners + lone pairs): ok is false otherwise.
 func (m *Molecule) hypervalentLonePairs(i int) (int, bool) {
 	a := m.Atoms[i]
-	valence := 0
 	switch a.Element {
-	case "S", "Se":
-		valence = 6
-	case "P":
-		valence = 5
+	case "S", "Se", "P":
 	default:
 		return 0, false
 	}
+	valence, _ := valenceElectrons(a.Element, 0)
 	if a.Aromatic || a.Radical != 0 {
 		return 0, false
 	}
@@ -469,6 +460,14 @@ func (sc *sigmaCalc) total() (*big.Int, error) {
 // component is σ of one connected component (atoms ascending).
 func (sc *sigmaCalc) component(atoms []int) (prod, error) {
 	m := sc.m
+	if s, hyper, err := m.hypervalentSigma(atoms); hyper { // hypervalent.go
+		if err != nil {
+			return prod{}, err
+		}
+		p := oneProd()
+		p.mulUint(uint64(s))
+		return p, nil
+	}
 	nf := len(sc.frags)
 	// fragment tree of this component; per-fragment state in slices indexed
 	// by fragment (seen, degree, removed, visited)

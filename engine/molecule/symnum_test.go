@@ -66,13 +66,18 @@ var sigmaCases = []struct {
 	// stays with the tetrahedral rule, C_2v
 	{"FS(F)(F)F", 2}, {"FS(F)(F)(F)(F)F", 24}, {"F[Cl](F)F", 2}, {"F[Cl](F)(F)(F)F", 4},
 	{"F[I](F)(F)(F)F", 4}, {"F[I](F)(F)(F)(F)(F)F", 10}, {"O=S(=O)(F)F", 2},
+	// the odd electron of a radical is a domain: SF5• square pyramidal C_4v;
+	// identical hypervalent components multiply by k! (2!·24²)
+	{"F[S](F)(F)(F)F", 4}, {"FS(F)(F)(F)(F)F.FS(F)(F)(F)(F)F", 2 * 24 * 24},
 }
 
 // TestHypervalentSigmaRefused: a hypervalent centre that is not the whole
 // molecule, or whose ligands differ, gets no σ (the rule for atoms with at
 // most four electron domains would give a wrong one: SF5Cl 120, CF3SF5 360).
 func TestHypervalentSigmaRefused(t *testing.T) {
-	for _, smi := range []string{"FS(F)(F)(F)(F)Cl", "FC(F)(F)S(F)(F)(F)(F)F", "FS(F)(F)C"} {
+	// ligands with H have internal rotors the VSEPR σ leaves out: (CH3)4S
+	// would be 2 where its methyl tops make it 162
+	for _, smi := range []string{"FS(F)(F)(F)(F)Cl", "FC(F)(F)S(F)(F)(F)(F)F", "FS(F)(F)C", "CS(C)(C)C", "C[S+](C)(C)(C)C"} {
 		_, err := parse(t, smi).SymmetryNumber()
 		require.Error(t, err, smi)
 		assert.Contains(t, err.Error(), "hypervalent centre", smi)

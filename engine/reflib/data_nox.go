@@ -18,7 +18,8 @@ package reflib
 //   - sImplied: NCN, whose coefficients carry the Active Thermochemical
 //     Tables version C (2011) value 445.73 kJ/mol while the entry quotes the
 //     version D (2012) value 457.8 ± 2.0 kJ/mol, which the library takes
-//     (as for FO in data_inorg.go: the newest ATcT value the entry quotes).
+//     (as for FO in data_inorg.go: the newest ATcT value the entry quotes),
+//     with the 12.1 kJ/mol between the two versions as its uncertainty.
 //
 // HNCN, carbodiimide, nitrosomethane, H2C=N–O• and ClClO rest on the
 // database's own G3B3 calculations (± 2 kcal/mol as it states; computed,
@@ -41,10 +42,10 @@ package reflib
 // and a doubly degenerate bend). Not in the database: HCNN, HCNOH, HO2NO2,
 // CH3O2NO2, CH3OONO, H–NO2, ClCO2.
 var noxEntries = []entry{
-	{name: "NCN", smiles: "[N]=C=[N]", aliases: []string{"N#C[N]"}, mult: 3, hf298: 457800, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
+	{name: "NCN", smiles: "[N]=C=[N]", aliases: []string{"N#C[N]"}, mult: 3, hf298: 457800, hfUnc: 12100, tLow: 200, tMid: 1000, tHigh: 3500, sImplied: true,
 		hi:     [7]float64{5.68744173e+00, 1.82662756e-03, -7.07546249e-07, 1.19515592e-10, -7.31827071e-15, 5.15901177e+04, -6.31954433e+00},
 		lo:     [7]float64{2.79807977e+00, 1.00008683e-02, -9.59229469e-06, 4.75546842e-09, -1.04340146e-12, 5.24021705e+04, 8.62129767e+00},
-		source: srcGBR + " (cyanonitrene N=C=N, ³Σg⁻ ground state; ΔHf°298: Active Thermochemical Tables version D (2012; Goos et al., Proc. Combust. Inst. 2012 as the entry cites it), 457.8 ± 2.0 kJ/mol, which the entry quotes beside the version C (2011) value 445.73 ± 1.7 that its coefficients carry; S°298 and Cp from its coefficients; NASA/TP-2002-211556 has no record)"},
+		source: srcGBR + " (cyanonitrene N=C=N, ³Σg⁻ ground state; ΔHf°298: Active Thermochemical Tables version D (2012; Goos et al., Proc. Combust. Inst. 2012 as the entry cites it), 457.8 ± 2.0 kJ/mol, which the entry quotes beside the version C (2011) value 445.73 ± 1.7 that its coefficients carry; the two versions differ by 12.1 kJ/mol, far beyond either stated uncertainty, and kiln carries that spread, ± 12.1 kJ/mol, as the entry's uncertainty; S°298 and Cp from its coefficients; NASA/TP-2002-211556 has no record)"},
 	{name: "HNCN", smiles: "N=C=[N]", aliases: []string{"[NH]C#N"}, mult: 2, hfUnc: 8368, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{5.53846448e+00, 3.89054126e-03, -1.38104752e-06, 2.21294765e-10, -1.31827325e-14, 3.59635337e+04, -3.39587098e+00},
 		lo:     [7]float64{3.06754311e+00, 1.06789939e-02, -7.96224305e-06, 2.59883390e-09, -1.27057612e-13, 3.66623508e+04, 9.41074995e+00},

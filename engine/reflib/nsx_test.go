@@ -393,7 +393,7 @@ func TestStatedUncertainties(t *testing.T) {
 		assert.GreaterOrEqual(t, e.hfUnc, 4000.0, e.name)
 		assert.Contains(t, e.source, "±", "%s: the source string states the uncertainty", e.name)
 	}
-	assert.Equal(t, 31, n)
+	assert.Equal(t, 32, n)
 	m, err := molecule.ParseSMILES("O=S(F)F")
 	require.NoError(t, err)
 	sp, ok := New().Lookup(m, 0)
