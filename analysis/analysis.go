@@ -152,7 +152,11 @@ type Estimate struct {
 	LibrarySource string
 	Hf298, S298   float64    // J/mol, J/(mol K)
 	Cp            [7]float64 // J/(mol K) at benson.StdTemps
-	Uncertainty   float64    // J/mol
+	Uncertainty   float64    // J/mol, 1σ
+	// StatedUncertainty is, for a reference-library species, the ± its
+	// source states for ΔHf°298 (J/mol) where kiln carries one; Uncertainty
+	// is half of it.
+	StatedUncertainty float64
 	// Multiplicity is the spin multiplicity 2S+1 of the data: the library
 	// entry's ground state, or the estimate's.
 	Multiplicity int

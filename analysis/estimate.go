@@ -148,9 +148,13 @@ func estimate(lib *reflib.Library, m *molecule.Molecule, o EstimateOptions) (*Es
 			Hf298:         sp.Hf298,
 			S298:          sp.S298,
 			Multiplicity:  sp.Multiplicity,
-			Uncertainty:   sp.Hf298Unc, // the source's, where it is large; else exact
-			libPoly:       sp.Poly,
-			libFit:        sp.Fit,
+			// 1σ: half the ± the source states, read as a 95 % bound
+			// (common practice); 0 (exact) where it states less than
+			// 4 kJ/mol or none (reflib.Species.Hf298Unc).
+			Uncertainty:       sp.Hf298Unc / 2,
+			StatedUncertainty: sp.Hf298Unc,
+			libPoly:           sp.Poly,
+			libFit:            sp.Fit,
 		}
 		for i, T := range benson.StdTemps {
 			e.Cp[i] = sp.Poly.Cp(T)

@@ -238,6 +238,11 @@ func (e *Estimate) NASA7() (nasa.NASA7, nasa.FitReport, error) {
 	return f.poly, f.report, f.err
 }
 
+// LibraryRefitted reports whether NASA7 refits a reference-library species'
+// polynomial to requested fit temperatures (EstimateOptions.ExplicitRange)
+// rather than giving the library's own.
+func (e *Estimate) LibraryRefitted() bool { return e.Library != "" && e.fit != nil }
+
 // refitLibrary fits the library polynomial anew with the requested TMid and
 // THigh (see NASA7).
 func (e *Estimate) refitLibrary() (nasa.NASA7, nasa.FitReport, error) {

@@ -21,7 +21,8 @@ import (
 // Thermochemistry from the reference library counts as exact, except where
 // its source states an uncertainty of ΔHf°298 of 4 kJ/mol or more
 // (reflib.Species.Hf298Unc: an old estimate, a computed value, a poorly
-// determined molecule), which enters as an estimate's does. A species
+// determined molecule): that ± is read as a 95 % bound, and its half enters
+// as an estimate's 1σ does (Estimate.Uncertainty). A species
 // whose thermochemistry comes from the file's own block (nasa7 or
 // thermo-table) is treated by what the block holds, since neither block
 // states an uncertainty (FORMAT.md §3.3):

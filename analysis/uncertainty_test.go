@@ -124,8 +124,8 @@ reaction propane + H <=> propyl + H2   A=1e14 n=0 Ea=9
 
 // TestReverseUncertaintyStatedByLibrary: reference-library data count as
 // exact, except an entry whose source states a large uncertainty of its
-// ΔHf°298 (thionyl fluoride, ± 50 kJ/mol in Gurvich 1989), which enters the
-// reverse-rate factor as an estimate's uncertainty does, and survives fill.
+// ΔHf°298 (thionyl fluoride, ± 50 kJ/mol in Gurvich 1989), read as a 95 %
+// bound: its half enters the reverse-rate factor as an estimate's 1σ does.
 func TestReverseUncertaintyStatedByLibrary(t *testing.T) {
 	text := `species SOF2 O=S(F)F
 species SF2 FSF
@@ -139,12 +139,14 @@ reaction H + H <=> H2   A=1e13 n=0 Ea=0
 	res := analyzeText(t, text)
 	require.Len(t, res.Reactions, 2)
 	unc := func(name string) float64 { return res.ByName[name].Estimate.Uncertainty }
-	assert.Equal(t, 50000.0, unc("SOF2"))
-	assert.Equal(t, 10000.0, unc("SF2"))
+	// the stated ± read as a 95 % bound: 1σ is half of it
+	assert.Equal(t, 25000.0, unc("SOF2"))
+	assert.Equal(t, 50000.0, res.ByName["SOF2"].Estimate.StatedUncertainty)
+	assert.Equal(t, 5000.0, unc("SF2"))
 	assert.Zero(t, unc("O"), "NIST-JANAF O atom: exact")
 	u, ok := res.ReverseRateUncertainty(res.Reactions[0], 1000)
 	require.True(t, ok)
-	assert.InDelta(t, math.Hypot(50000, 10000), u.Sigma, 1e-6)
+	assert.InDelta(t, math.Hypot(25000, 5000), u.Sigma, 1e-6)
 	assert.Equal(t, []string{"SF2", "SOF2"}, u.Estimated)
 	u, ok = res.ReverseRateUncertainty(res.Reactions[1], 1000)
 	require.True(t, ok)

@@ -344,7 +344,7 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		if g != nil && g.Class != "" {
 			unc += " (class " + g.Class + ")"
 		} else if e.Library != "" {
-			unc += " (as the source states)"
+			unc += " (1σ: half the ±" + w.u.Energy(e.StatedUncertainty) + " its source states, read as a 95 % bound)"
 		}
 		w.line(unc)
 	}
@@ -353,6 +353,8 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 	}
 	if _, fit, err := e.NASA7(); err != nil {
 		w.line("NASA-7 fit failed: " + analysis.FitRefusal(err, w.u))
+	} else if fit.MaxCpResidual > 0 && e.LibraryRefitted() {
+		w.line("NASA-7 polynomial: refitted to the fit temperatures from the library's, worst Cp residual " + w.u.Entropy(fit.MaxCpResidual))
 	} else if fit.MaxCpResidual > 0 && e.Library != "" {
 		w.line("NASA-7 polynomial: the library's fit to its source's Cp, worst residual " + w.u.Entropy(fit.MaxCpResidual))
 	} else if fit.MaxCpResidual > 0 {

@@ -451,3 +451,31 @@ func TestEstimateSymmetryFlagOnLibrary(t *testing.T) {
 	require.Equal(t, 0, code)
 	assert.NotContains(t, errOut, "do not apply")
 }
+
+// TestEstimateLibraryUncertaintyAndPolynomial: a library entry whose source
+// states a large uncertainty gives it in the text (with its 1σ, half of it)
+// and in the JSON (uncertainty_hf298_kj_mol is the 1σ, the extension
+// stated_uncertainty_hf298_kj_mol the ±); an entry without one gives
+// neither; --nasa names the polynomial it prints: the source's published
+// coefficients, the library's fit to its source's Cp, or a refit to the
+// requested range.
+func TestEstimateLibraryUncertaintyAndPolynomial(t *testing.T) {
+	code, out, errOut := runKiln(t, "estimate", "--json", "O=S(F)F", "O=O")
+	require.Equal(t, 0, code, errOut)
+	var arr []map[string]any
+	require.NoError(t, json.Unmarshal([]byte(out), &arr))
+	assert.EqualValues(t, 25, arr[0]["uncertainty_hf298_kj_mol"])
+	assert.EqualValues(t, 50, arr[0]["stated_uncertainty_hf298_kj_mol"])
+	assert.Nil(t, arr[1]["uncertainty_hf298_kj_mol"])
+	assert.NotContains(t, arr[1], "stated_uncertainty_hf298_kj_mol")
+
+	_, out, _ = runKiln(t, "estimate", "--units", "kJ/mol", "O=S(F)F")
+	assert.Contains(t, out, "tabulated, ± 50.0 kJ/mol as its source states (read as a 95 % bound: 1σ 25.0 kJ/mol)")
+
+	_, out, _ = runKiln(t, "estimate", "--nasa", "O=O")
+	assert.Contains(t, out, "NASA-7 polynomial (the source's published Cp coefficients):")
+	_, out, _ = runKiln(t, "estimate", "--nasa", "[NH2]")
+	assert.Contains(t, out, "NASA-7 polynomial (the library's fit to its source's Cp; worst Cp residual")
+	_, out, _ = runKiln(t, "estimate", "--nasa", "--tmid", "1200", "--thigh", "3000", "O=O")
+	assert.Contains(t, out, "NASA-7 polynomial (refitted to 200–1200–3000 K from the library's; worst Cp residual")
+}

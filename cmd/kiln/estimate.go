@@ -55,10 +55,13 @@ type estimateJSON struct {
 	// ReferenceLibrary names the reference entry whose tabulated data are
 	// given instead of an estimate (extension). Its uncertainty is that of
 	// the source, so uncertainty_hf298_kj_mol is null for it.
-	ReferenceLibrary string     `json:"reference_library,omitempty"`
-	Uncertainty      *float64   `json:"uncertainty_hf298_kj_mol"`
-	Error            *errorJSON `json:"error"`
-	NASA7            *nasaJSON  `json:"nasa7,omitempty"`
+	ReferenceLibrary string   `json:"reference_library,omitempty"`
+	Uncertainty      *float64 `json:"uncertainty_hf298_kj_mol"`
+	// StatedUncertainty is the ± a reference-library entry's source states
+	// (extension; uncertainty_hf298_kj_mol is its 1σ, half of it).
+	StatedUncertainty *float64   `json:"stated_uncertainty_hf298_kj_mol,omitempty"`
+	Error             *errorJSON `json:"error"`
+	NASA7             *nasaJSON  `json:"nasa7,omitempty"`
 }
 
 type groupJSON struct {
@@ -199,7 +202,8 @@ func estimateOne(ws *analysis.Workspace, in string, opts analysis.EstimateOption
 		r.Cp[k] = ptr(est.Cp[i])
 	}
 	if est.Library != "" && est.Uncertainty > 0 {
-		r.Uncertainty = ptr(jnum(est.Uncertainty / 1000)) // as the source states it
+		r.Uncertainty = ptr(jnum(est.Uncertainty / 1000)) // 1σ, as for an estimate
+		r.StatedUncertainty = ptr(jnum(est.StatedUncertainty / 1000))
 	}
 	if g := est.Group; g != nil {
 		r.Uncertainty = ptr(jnum(est.Uncertainty / 1000))
@@ -319,7 +323,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		}
 	}
 	if r.Uncertainty != nil && est.Library != "" {
-		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), tabulated, ± %s as its source states\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.Uncertainty))
+		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), tabulated, ± %s as its source states (read as a 95 %% bound: 1σ %s)\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.StatedUncertainty), u.Energy(est.Uncertainty))
 	} else if r.Uncertainty != nil {
 		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), ± %s, 1σ: class error widened by each approximation\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.Uncertainty))
 	} else {
@@ -337,6 +341,8 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 	fmt.Fprintln(w)
 	if p, fit, err := est.NASA7(); withNASA && err == nil {
 		switch {
+		case est.LibraryRefitted():
+			fmt.Fprintf(w, "  NASA-7 polynomial (refitted to %g–%g–%g K from the library's; worst Cp residual %s):\n", p.TLow, p.TMid, p.THigh, u.Entropy(fit.MaxCpResidual))
 		case est.Library != "" && fit.MaxCpResidual == 0:
 			fmt.Fprintln(w, "  NASA-7 polynomial (the source's published Cp coefficients):")
 		case est.Library != "":
