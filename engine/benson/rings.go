@@ -190,10 +190,20 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 		// benzothiophene; two: dibenzothiophene, dibenzofuran) where a
 		// parent molecule gave one; otherwise the single ring's is used as
 		// an approximation, flagged.
-		if g.fusedBenzeneBonds(r) >= 2 {
+		benzene, other := g.fusedAromaticRings(r)
+		switch {
+		case other > 0:
+			return key + fusedOtherSuffix, key
+		case benzene >= 2:
 			return key + fusedTwoBenzenesSuffix, key
 		}
 		return key + fusedBenzeneSuffix, key
+	}
+	if (key == "furan" || key == "thiophene") && g.fusedToAromatic(r) {
+		// Thienothiophene, furofuran, thienopyrrole: a five-membered
+		// aromatic ring fused to another aromatic ring that is no
+		// benzenoid ring; no correction describes it.
+		return key + fusedOtherSuffix, key
 	}
 	if key == "" {
 		key = fmt.Sprintf("%d-membered ring with %d O, %d other heteroatoms, %d double bonds", n, oxy, other, nd)
@@ -211,27 +221,97 @@ const carbonylRingFormat = "C%d ring with %d ring carbonyls, %d double bonds"
 // key of a furan or thiophene ring fused to one or to two benzene rings.
 // Where the key has no correction, the single ring's is used, flagged
 // (widened by widenFusedFiveRing, class.go; isFusedFiveRing).
+// fusedOtherSuffix ends the key of a furan or thiophene ring fused to an
+// aromatic ring that is not a carbocyclic benzene ring (a pyridine ring,
+// another five-membered aromatic ring): no correction, flagged.
 const (
 	fusedBenzeneSuffix     = " fused to a benzene ring"
 	fusedTwoBenzenesSuffix = " fused to two benzene rings"
+	fusedOtherSuffix       = " fused to another aromatic ring"
 )
 
 // isFusedFiveRing reports whether a ring correction name (or key) is that
-// of a furan or thiophene ring fused to benzene rings.
+// of a furan or thiophene ring fused to another aromatic ring.
 func isFusedFiveRing(name string) bool {
-	return strings.HasSuffix(name, fusedBenzeneSuffix) || strings.HasSuffix(name, fusedTwoBenzenesSuffix)
+	return strings.HasSuffix(name, fusedBenzeneSuffix) || strings.HasSuffix(name, fusedTwoBenzenesSuffix) ||
+		strings.HasSuffix(name, fusedOtherSuffix)
 }
 
-// fusedBenzeneBonds counts the bonds of ring r that lie in a benzenoid
-// ring: one for each benzene ring fused to r.
-func (g *graph) fusedBenzeneBonds(r []int) int {
-	n := 0
-	for k, a := range r {
-		if b := g.bondBetween(a, r[(k+1)%len(r)]); b >= 0 && g.benzBond[b] {
-			n++
+// fusedAromaticRings counts the aromatic rings of the molecule that share a
+// bond with ring r: carbocyclic benzene rings, and all others (azine rings,
+// aromatic five-membered rings).
+func (g *graph) fusedAromaticRings(r []int) (benzene, other int) {
+	for ri, s := range g.rings {
+		if !sharesBond(r, s) || sameCycle(r, s) || !g.aromaticRing(s) {
+			continue
+		}
+		if g.benzRing[ri] && g.allCarbon(s) {
+			benzene++
+		} else {
+			other++
 		}
 	}
-	return n
+	return benzene, other
+}
+
+// fusedToAromatic reports whether an aromatic ring other than r shares a
+// bond with r.
+func (g *graph) fusedToAromatic(r []int) bool {
+	b, o := g.fusedAromaticRings(r)
+	return b+o > 0
+}
+
+// aromaticRing reports whether every atom of ring s is aromatic.
+func (g *graph) aromaticRing(s []int) bool {
+	for _, a := range s {
+		if !g.m.Atoms[a].Aromatic {
+			return false
+		}
+	}
+	return true
+}
+
+// allCarbon reports whether every atom of ring s is a carbon.
+func (g *graph) allCarbon(s []int) bool {
+	for _, a := range s {
+		if !g.isCarbon(a) {
+			return false
+		}
+	}
+	return true
+}
+
+// sharesBond reports whether rings r and s (cyclic atom lists) have two
+// atoms bonded along both of them in common.
+func sharesBond(r, s []int) bool {
+	in := map[int]bool{}
+	for _, a := range s {
+		in[a] = true
+	}
+	shared := 0
+	for _, a := range r {
+		if in[a] {
+			shared++
+		}
+	}
+	return shared >= 2
+}
+
+// sameCycle reports whether r and s hold the same atoms.
+func sameCycle(r, s []int) bool {
+	if len(r) != len(s) {
+		return false
+	}
+	in := map[int]bool{}
+	for _, a := range s {
+		in[a] = true
+	}
+	for _, a := range r {
+		if !in[a] {
+			return false
+		}
+	}
+	return true
 }
 
 // fusedToBenzene reports whether a member of ring r also lies in a

@@ -172,6 +172,11 @@ func TestFusedFiveRingFlagged(t *testing.T) {
 		{"c1ccc2sccc2c1", "thiophene" + fusedBenzeneSuffix, 39.74},
 		{"c1ccc2c(c1)sc1ccccc12", "thiophene" + fusedTwoBenzenesSuffix, 51.0},
 		{"c1ccc2c(c1)oc1ccccc12", "furan" + fusedTwoBenzenesSuffix, 11.31},
+		// fused to a pyridine ring or to another five-membered aromatic
+		// ring: no correction (the benzene ones are not used), flagged
+		{"c1cnc2ccsc2c1", "thiophene" + fusedOtherSuffix, 0},
+		{"c1csc2ccsc12", "thiophene" + fusedOtherSuffix, 0},
+		{"c1coc2ccoc12", "furan" + fusedOtherSuffix, 0},
 		{"c1ccoc1", "", 0},
 		{"c1ccsc1", "", 0},
 		{"c1ccc(-c2ccco2)cc1", "", 0},
