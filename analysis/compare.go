@@ -569,6 +569,16 @@ func (f *fitShare) of(e *Estimate) (rep *Estimate, fresh bool) {
 	return e, true
 }
 
+// statedLibraryUncertainty is the ± the source of sp's values states for
+// ΔHf°298 (J/mol) when they are reference-library data that carry one
+// (reflib.Species.Hf298Unc), else 0.
+func (sp *Species) statedLibraryUncertainty() float64 {
+	if sp.Source != SourceEstimate || sp.Estimate == nil || sp.Estimate.Library == "" {
+		return 0
+	}
+	return sp.Estimate.StatedUncertainty
+}
+
 // thermoDiff compares the thermochemistry of a matched pair.
 func (f *fitShare) thermoDiff(a, b *Species, set Settings) *ThermoDiff {
 	ta, tb := f.compareModel(a), f.compareModel(b)
@@ -583,7 +593,10 @@ func (f *fitShare) thermoDiff(a, b *Species, set Settings) *ThermoDiff {
 			d.Flags = append(d.Flags, name)
 		}
 	}
-	flag("hf298", d.Hf298A, d.Hf298B, set.MismatchHf298)
+	// A side whose values are reference data with a stated ± wider than
+	// the threshold is not flagged within that ±.
+	hfLimit := max(set.MismatchHf298, a.statedLibraryUncertainty(), b.statedLibraryUncertainty())
+	flag("hf298", d.Hf298A, d.Hf298B, hfLimit)
 	flag("s298", d.S298A, d.S298B, set.MismatchS298)
 	for k, t := range CompareThermoTemps {
 		d.CpA[k] = ta.Cp(t.T)
@@ -595,7 +608,7 @@ func (f *fitShare) thermoDiff(a, b *Species, set Settings) *ThermoDiff {
 		flag("cp"+t.Key, d.CpA[k], d.CpB[k], set.MismatchS298)
 	}
 	for k, t := range CompareThermoTemps {
-		flag("g"+t.Key, d.GA[k], d.GB[k], set.MismatchHf298)
+		flag("g"+t.Key, d.GA[k], d.GB[k], hfLimit)
 	}
 	return d
 }

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"regexp"
+	"slices"
 	"strconv"
 	"strings"
 	"testing"
@@ -381,4 +382,23 @@ reaction C2H6 + CH3 <=> C2H5 + CH4   A=6e6 n=1.74 Ea=10 Ea=11
 		assert.InDelta(t, 1, *c.Reactions[0].Ratio[i], 1e-12)
 	}
 	assert.Empty(t, c.ReactionsOnlyA)
+}
+
+// TestCompareWithinStatedUncertainty: a block compared with reference data
+// whose source states a ± wider than the threshold is not flagged on
+// ΔHf° or G within that ± (SOF2: ± 50 kJ/mol); beyond it, it is.
+func TestCompareWithinStatedUncertainty(t *testing.T) {
+	lib := "species SOF2 O=S(F)F\n"
+	blk := func(hf string) string {
+		return "species SOF2 O=S(F)F\n  thermo-table\n    hf298 " + hf + "\n    s298 66.72\n    cp 300=13.68 1000=18.78 1500=19.35\n"
+	}
+	for _, c := range []struct {
+		hf      string
+		flagged bool
+	}{{"-130", false}, {"-125", true}} {
+		cmp := compareTexts(t, map[string]string{"a.kiln": lib, "b.kiln": blk(c.hf)}, "a.kiln", "b.kiln")
+		require.Len(t, cmp.Species, 1)
+		require.NotNil(t, cmp.Species[0].Thermo)
+		assert.Equal(t, c.flagged, slices.Contains(cmp.Species[0].Thermo.Flags, "hf298"), "hf298 %s: %v", c.hf, cmp.Species[0].Thermo.Flags)
+	}
 }

@@ -703,15 +703,25 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 		hfSpan = d.NASA7.Header.Span
 		sSpan = hfSpan
 	}
-	if math.Abs(dh) > a.set.MismatchHf298 {
+	// What the block is compared with: an estimate, or reference data
+	// (whose source may state a ± wider than the threshold: a block within
+	// it is not flagged).
+	other, limit, why := "estimated", a.set.MismatchHf298, ""
+	if lib := sp.Estimate.Library; lib != "" {
+		other = "reference library " + lib
+		if st := sp.Estimate.StatedUncertainty; st > limit {
+			limit, why = st, ": the ± its source states"
+		}
+	}
+	if math.Abs(dh) > limit {
 		a.report(path, speciesfile.Diagnostic{Span: a.at(hfSpan), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
-			Message: fmt.Sprintf("%s: ΔHf°298 given %s vs estimated %s (difference %s, threshold %s)",
-				sp.Name, a.energy(hf), a.energy(sp.Estimate.Hf298), a.energy(dh), a.energy(a.set.MismatchHf298))})
+			Message: fmt.Sprintf("%s: ΔHf°298 given %s vs %s %s (difference %s, threshold %s%s)",
+				sp.Name, a.energy(hf), other, a.energy(sp.Estimate.Hf298), a.energy(dh), a.energy(limit), why)})
 	}
 	if math.Abs(ds) > a.set.MismatchS298 {
 		a.report(path, speciesfile.Diagnostic{Span: a.at(sSpan), Severity: speciesfile.SeverityWarning, Code: speciesfile.CodeThermoMismatch,
-			Message: fmt.Sprintf("%s: S°298 given %s vs estimated %s (difference %s, threshold %s)",
-				sp.Name, a.entropy(s), a.entropy(sp.Estimate.S298), a.entropy(ds), a.entropy(a.set.MismatchS298))})
+			Message: fmt.Sprintf("%s: S°298 given %s vs %s %s (difference %s, threshold %s)",
+				sp.Name, a.entropy(s), other, a.entropy(sp.Estimate.S298), a.entropy(ds), a.entropy(a.set.MismatchS298))})
 	}
 	if !defects {
 		// A block with a defect of its own (reported above) is not also

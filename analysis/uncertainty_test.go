@@ -10,6 +10,7 @@ import (
 	"github.com/stretchr/testify/require"
 
 	"kiln.dev/kiln/engine/kinetics"
+	"kiln.dev/kiln/speciesfile"
 )
 
 func analyzeText(t *testing.T, text string) *Result {
@@ -151,4 +152,24 @@ reaction H + H <=> H2   A=1e13 n=0 Ea=0
 	u, ok = res.ReverseRateUncertainty(res.Reactions[1], 1000)
 	require.True(t, ok)
 	assert.Equal(t, 1.0, u.Factor, "library data without a stated large uncertainty are exact")
+}
+
+// TestMismatchWithinStatedUncertainty: a block is compared with reference
+// data by the larger of the mismatch threshold and the ± the data's source
+// states, and the message names the reference library, not an estimate;
+// compare widens its ΔHf° and G flags alike.
+func TestMismatchWithinStatedUncertainty(t *testing.T) {
+	block := func(name, smiles, extra string, hf float64) string {
+		return "species " + name + " " + smiles + "\n" + extra + "  thermo-table\n    hf298 " + strconv.FormatFloat(hf, 'f', 2, 64) + "\n    s298 66.72\n    cp 300=13.68 1000=18.78\n"
+	}
+	// SOF2: library -139.81 kcal/mol, ± 50 kJ/mol (11.95 kcal/mol) stated
+	within := messagesWithCode(analyzeText(t, block("SOF2", "O=S(F)F", "", -130)), speciesfile.CodeThermoMismatch)
+	assert.Empty(t, within, "9.8 kcal/mol off, inside the stated ± 11.95")
+	beyond := messagesWithCode(analyzeText(t, block("SOF2", "O=S(F)F", "", -125)), speciesfile.CodeThermoMismatch)
+	require.Len(t, beyond, 1)
+	assert.Contains(t, beyond[0], "vs reference library SOF2 -139.81 kcal/mol (difference 14.81 kcal/mol, threshold 11.95 kcal/mol: the ± its source states)")
+	// O2 states no large uncertainty: the setting's 3 kcal/mol applies
+	o2 := messagesWithCode(analyzeText(t, block("O2", "O=O", "  multiplicity 3\n", 5)), speciesfile.CodeThermoMismatch)
+	require.NotEmpty(t, o2)
+	assert.Contains(t, o2[0], "vs reference library O2 0.00 kcal/mol (difference 5.00 kcal/mol, threshold 3.00 kcal/mol)")
 }
