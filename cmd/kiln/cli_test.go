@@ -443,13 +443,15 @@ reaction C2H6 <=> CH3 + CH3   A=1e16 n=0 Ea=88
 func TestEstimateSymmetryFlagOnLibrary(t *testing.T) {
 	code, out, errOut := runKiln(t, "estimate", "--json", "--symmetry", "12", "FS(F)(F)F")
 	require.Equal(t, 0, code, errOut)
-	assert.Contains(t, errOut, "--symmetry and --optical-isomers do not apply to reference-library data (SF4)")
+	assert.Contains(t, errOut, "--symmetry does not apply to reference-library data (SF4)")
 	var arr []map[string]any
 	require.NoError(t, json.Unmarshal([]byte(out), &arr))
 	assert.EqualValues(t, 2, arr[0]["symmetry_number"], "the structure's σ, not the flag's")
 	code, _, errOut = runKiln(t, "estimate", "--symmetry", "12", "CCC")
 	require.Equal(t, 0, code)
-	assert.NotContains(t, errOut, "do not apply")
+	assert.NotContains(t, errOut, "does not apply")
+	_, _, errOut = runKiln(t, "estimate", "--symmetry", "2", "--optical-isomers", "2", "O=O")
+	assert.Contains(t, errOut, "--symmetry and --optical-isomers do not apply to reference-library data (O2)")
 }
 
 // TestEstimateLibraryUncertaintyAndPolynomial: a library entry whose source

@@ -135,7 +135,18 @@ func runEstimate(e env, args []string) (int, error) {
 		}
 		if est != nil && est.Library != "" && (opts.Symmetry > 0 || opts.OpticalIsomers > 0) {
 			// Said on stderr, so that --json stays one document.
-			fmt.Fprintf(e.stderr, "kiln: %s: --symmetry and --optical-isomers do not apply to reference-library data (%s): its tabulated S°298 already holds σ and n\n", in, est.Library)
+			var given []string
+			if opts.Symmetry > 0 {
+				given = append(given, "--symmetry")
+			}
+			if opts.OpticalIsomers > 0 {
+				given = append(given, "--optical-isomers")
+			}
+			verb := "does"
+			if len(given) > 1 {
+				verb = "do"
+			}
+			fmt.Fprintf(e.stderr, "kiln: %s: %s %s not apply to reference-library data (%s): its tabulated S°298 already holds σ and n\n", in, strings.Join(given, " and "), verb, est.Library)
 		}
 		if flags["json"] == "true" {
 			results = append(results, r)

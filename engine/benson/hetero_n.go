@@ -291,7 +291,7 @@ func chargeRefusal(m *molecule.Molecule, i int) error {
 // ring N 1.7 kcal/mol lower); any other substituent there is flagged, its
 // benzene group being used.
 func addAzineFlags(g *graph, l lookup, est *Result) {
-	addNitrogenTableFlags(l, est)
+	addTableMarkFlags(l, est)
 	if _, user := l.user["Nb"]; user {
 		return
 	}
@@ -327,7 +327,7 @@ func addAzineFlags(g *graph, l lookup, est *Result) {
 }
 
 // Marks in the source column of groups_n.tsv that make every estimate
-// using the group flagged (addNitrogenTableFlags):
+// using the group flagged (addTableMarkFlags):
 //
 //   - analogSCpMark: no S° or Cp of any molecule with the group was at
 //     hand; they are those of the analogous group the source names. ΔHf° is
@@ -349,10 +349,10 @@ const analogSCpGroup = "S, Cp by analogy: "
 // from one molecule (oneMoleculeMark).
 const oneMoleculeNote = " (derived from one molecule)"
 
-// addNitrogenTableFlags flags the groups and corrections of est whose
+// addTableMarkFlags flags the groups and corrections of est whose
 // built-in value carries analogSCpMark or oneMoleculeMark in its source (a group the user supplied
 // carries its own). One flag per group and mark.
-func addNitrogenTableFlags(l lookup, est *Result) {
+func addTableMarkFlags(l lookup, est *Result) {
 	for _, t := range slices.Concat(est.Groups, est.Corrections) {
 		// The marks belong to the value used: for a stand-in
 		// ("NC-(Cb) ≈ NC-(C)") that of the group after "≈".

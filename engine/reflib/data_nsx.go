@@ -512,7 +512,7 @@ var nsxCore = []entry{
 		hi:     [7]float64{6.46240197e+00, 5.61884201e-04, -2.22714655e-07, 3.83169690e-11, -2.39565689e-15, 7.38139210e+03, -5.08724437e+00},
 		lo:     [7]float64{2.51987138e+00, 1.81635131e-02, -3.15603254e-05, 2.58329935e-08, -8.11855976e-12, 8.14354216e+03, 1.36447841e+01},
 		source: srcGBR + " (dichlorine monoxide Cl–O–Cl; ΔHf°298: Karton, Parthiban & Martin, J. Phys. Chem. A 113 (2009) 4802 (W4 theory))"},
-	{name: "OClO", smiles: "[O][Cl+][O-]", aliases: []string{"O=[Cl][O]"}, mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
+	{name: "OClO", smiles: "[O][Cl+][O-]", aliases: []string{"O=[Cl][O]", "O=[Cl]=O"}, mult: 2, tLow: 200, tMid: 1000, tHigh: 3500, implied: true,
 		hi:     [7]float64{5.85461529e+00, 1.17335288e-03, -4.59511860e-07, 7.84402168e-11, -4.87788804e-15, 9.89135616e+03, -3.23627349e+00},
 		lo:     [7]float64{3.26911630e+00, 6.37173558e-03, 4.93743200e-07, -7.70110927e-09, 4.20853283e-12, 1.06621173e+04, 1.04885411e+01},
 		source: srcGBR + " (chlorine dioxide OClO; ΔHf°298: Karton, Parthiban & Martin (2009) (W4 theory))"},
