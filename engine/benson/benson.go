@@ -590,6 +590,14 @@ func valenceScope(m *molecule.Molecule) error {
 		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) exceeds its valence: %d bonds (%s) where a neutral %s has %d; %s",
 			a.Element, total, strings.Join(bonds, ", "), a.Element, max, why)}
 	}
+	// Any other centre with more than four electron domains (SF4, SF6,
+	// SF5Cl, (CH3)2SF2): the S groups describe two-coordinate sulfur and
+	// the sulfoxide and sulfone units only, and a group statement cannot
+	// name it (benson.ParseGroupName), so the refusal offers no group.
+	if i, partners, other, ok := m.HypervalentCentre(); ok {
+		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) is a hypervalent centre: %d σ partners and %d other electron domains (lone pairs or an odd electron), more than four in all (as in SF4 or SF6); no group describes it",
+			m.Atoms[i].Element, partners, other)}
+	}
 	return nil
 }
 

@@ -195,3 +195,28 @@ func TestTerminalAtomRoute(t *testing.T) {
 		}
 	}
 }
+
+// TestHypervalentRefused: a centre with more than four electron domains
+// (SF5Cl, CF3SF5, (CH3)2SF2, SOF4) is refused as such, naming the atom and
+// no group (a group statement cannot name one: ParseGroupName takes
+// two-coordinate S); sulfoxides, sulfones and nitro groups are not.
+func TestHypervalentRefused(t *testing.T) {
+	for _, c := range []struct {
+		smi  string
+		atom int
+	}{{"FS(F)(F)(F)(F)Cl", 2}, {"FC(F)(F)S(F)(F)(F)(F)F", 5}, {"CS(C)(F)F", 2}, {"O=S(F)(F)(F)F", 2}} {
+		_, err := Estimate(parse(t, c.smi), Options{})
+		var ue *UnsupportedError
+		require.ErrorAs(t, err, &ue, c.smi)
+		assert.Equal(t, c.atom, ue.Atom, c.smi)
+		assert.Contains(t, ue.Reason, "is a hypervalent centre", c.smi)
+		_, perr := ParseGroupName("S-(F)5(Cl)")
+		assert.Error(t, perr)
+	}
+	for _, smi := range []string{"CS(C)=O", "CS(C)(=O)=O", "C[N+](=O)[O-]", "C[S+](C)[O-]", "OS(=O)(=O)C"} {
+		_, err := Estimate(parse(t, smi), Options{})
+		if err != nil {
+			assert.NotContains(t, err.Error(), "hypervalent", smi)
+		}
+	}
+}

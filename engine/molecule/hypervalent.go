@@ -60,7 +60,7 @@ func (m *Molecule) otherDomains(i int) (int, bool) {
 func (m *Molecule) hypervalentSigma(atoms []int) (sigma int, hyper bool, err error) {
 	centre := -1
 	for _, i := range atoms {
-		if d, ok := m.otherDomains(i); ok && len(m.Adj[i])+m.Atoms[i].HCount+d > 4 {
+		if m.hypervalent(i) {
 			centre = i
 			break
 		}
@@ -99,4 +99,24 @@ func (m *Molecule) identicalTerminals(c int) bool {
 		}
 	}
 	return true
+}
+
+// HypervalentCentre returns the first atom (0-based, in atom order) with
+// more than four electron domains — partners σ partners (bonded atoms and
+// hydrogens) and other lone pairs or an odd electron — such as the S of SF4
+// or SF6 or the Cl of ClF3; ok is false when the molecule has none.
+func (m *Molecule) HypervalentCentre() (atom, partners, other int, ok bool) {
+	for i := range m.Atoms {
+		if m.hypervalent(i) {
+			d, _ := m.otherDomains(i)
+			return i, len(m.Adj[i]) + m.Atoms[i].HCount, d, true
+		}
+	}
+	return 0, 0, 0, false
+}
+
+// hypervalent reports whether atom i has more than four electron domains.
+func (m *Molecule) hypervalent(i int) bool {
+	d, ok := m.otherDomains(i)
+	return ok && len(m.Adj[i])+m.Atoms[i].HCount+d > 4
 }
