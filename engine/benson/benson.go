@@ -595,8 +595,8 @@ func valenceScope(m *molecule.Molecule) error {
 	// the sulfoxide and sulfone units only, and a group statement cannot
 	// name it (benson.ParseGroupName), so the refusal offers no group.
 	if i, partners, other, ok := m.HypervalentCentre(); ok {
-		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) is a hypervalent centre: %d σ partners and %d other electron domains (lone pairs or an odd electron), more than four in all (as in SF4 or SF6); no group describes it",
-			m.Atoms[i].Element, partners, other)}
+		return &UnsupportedError{Atom: i + 1, Reason: fmt.Sprintf("(%s) is a hypervalent centre: %d σ partners and %s (lone pairs or an odd electron), more than four electron domains in all (as in SF4 or SF6); no group describes it",
+			m.Atoms[i].Element, partners, wording.Count(other, "other electron domain"))}
 	}
 	return nil
 }
