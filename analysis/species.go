@@ -710,7 +710,7 @@ func (a *analysis) thermoChecks(path string, sp *Species) {
 	if lib := sp.Estimate.Library; lib != "" {
 		other = "reference library " + lib
 		if st := sp.Estimate.StatedUncertainty; st > limit {
-			limit, why = st, ": the ± its source states"
+			limit, why = st, ": the ± its source gives"
 		}
 	}
 	if math.Abs(dh) > limit {

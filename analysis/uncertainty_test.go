@@ -167,7 +167,7 @@ func TestMismatchWithinStatedUncertainty(t *testing.T) {
 	assert.Empty(t, within, "9.8 kcal/mol off, inside the stated ± 11.95")
 	beyond := messagesWithCode(analyzeText(t, block("SOF2", "O=S(F)F", "", -125)), speciesfile.CodeThermoMismatch)
 	require.Len(t, beyond, 1)
-	assert.Contains(t, beyond[0], "vs reference library SOF2 -139.81 kcal/mol (difference 14.81 kcal/mol, threshold 11.95 kcal/mol: the ± its source states)")
+	assert.Contains(t, beyond[0], "vs reference library SOF2 -139.81 kcal/mol (difference 14.81 kcal/mol, threshold 11.95 kcal/mol: the ± its source gives)")
 	// O2 states no large uncertainty: the setting's 3 kcal/mol applies
 	o2 := messagesWithCode(analyzeText(t, block("O2", "O=O", "  multiplicity 3\n", 5)), speciesfile.CodeThermoMismatch)
 	require.NotEmpty(t, o2)

@@ -344,7 +344,7 @@ func (w *writer) estimateDetail(e *analysis.Estimate) {
 		if g != nil && g.Class != "" {
 			unc += " (class " + g.Class + ")"
 		} else if e.Library != "" {
-			unc += " (1σ: half the ±" + w.u.Energy(e.StatedUncertainty) + " its source states, read as a 95 % bound)"
+			unc += " (1σ: half the ±" + w.u.Energy(e.StatedUncertainty) + " its source gives, read as a 95 % bound)"
 		}
 		w.line(unc)
 	}

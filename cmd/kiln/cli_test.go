@@ -472,7 +472,7 @@ func TestEstimateLibraryUncertaintyAndPolynomial(t *testing.T) {
 	assert.NotContains(t, arr[1], "stated_uncertainty_hf298_kj_mol")
 
 	_, out, _ = runKiln(t, "estimate", "--units", "kJ/mol", "O=S(F)F")
-	assert.Contains(t, out, "tabulated, ± 50.0 kJ/mol as its source states (read as a 95 % bound: 1σ 25.0 kJ/mol)")
+	assert.Contains(t, out, "tabulated, ± 50.0 kJ/mol as its source gives it (read as a 95 % bound: 1σ 25.0 kJ/mol)")
 
 	_, out, _ = runKiln(t, "estimate", "--nasa", "O=O")
 	assert.Contains(t, out, "NASA-7 polynomial (the source's published Cp coefficients):")

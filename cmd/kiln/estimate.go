@@ -334,7 +334,7 @@ func writeEstimateText(w io.Writer, r estimateJSON, est *analysis.Estimate, u an
 		}
 	}
 	if r.Uncertainty != nil && est.Library != "" {
-		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), tabulated, ± %s as its source states (read as a 95 %% bound: 1σ %s)\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.StatedUncertainty), u.Energy(est.Uncertainty))
+		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), tabulated, ± %s as its source gives it (read as a 95 %% bound: 1σ %s)\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.StatedUncertainty), u.Energy(est.Uncertainty))
 	} else if r.Uncertainty != nil {
 		fmt.Fprintf(w, "  ΔHf°298 = %s (%s), ± %s, 1σ: class error widened by each approximation\n", u.Energy(est.Hf298), other.Energy(est.Hf298), u.Energy(est.Uncertainty))
 	} else {

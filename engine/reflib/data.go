@@ -38,9 +38,11 @@ type entry struct {
 	// n9: NASA-9 blocks; Cp is tabulated from them every 50 K and fitted
 	// with nasa.FitPoly, and s298 is theirs at 298.15 K (see data_nsx.go).
 	n9 *nasa9
-	// hfUnc is the uncertainty of ΔHf°298 (J/mol) that the source states,
-	// carried where it is 4 kJ/mol (about 1 kcal/mol) or more: a weak
-	// tabulated value (an old estimate, a computed value, a poorly
+	// hfUnc is the uncertainty of ΔHf°298 (J/mol) that the source gives —
+	// the ± it states, or, where it quotes values further apart than their
+	// stated uncertainties (NCN), their spread; the source string says
+	// which — carried where it is 4 kJ/mol (about 1 kcal/mol) or more: a
+	// weak tabulated value (an old estimate, a computed value, a poorly
 	// determined molecule). Smaller stated uncertainties lie below any
 	// group-additivity class error, and such entries count as exact, as
 	// do entries whose source states none.
