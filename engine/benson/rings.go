@@ -182,28 +182,24 @@ func (g *graph) ringKey(r []int) (key, fallback string) {
 	if key == "" && oxy == 0 && carbonyl == 0 {
 		key = g.nitrogenRingKey(r, nd, aromatic) // hetero_n.go
 	}
-	if (key == "furan" || key == "thiophene") && g.fusedToBenzene(r) {
-		// Benzofuran, benzothiophene, dibenzofuran: the single ring's
-		// correction holds its own aromatic stabilisation, which the fused
-		// benzene rings change. The fused ring has a correction of its own
-		// by the number of benzene rings it shares a bond with (one:
+	if key == "furan" || key == "thiophene" {
+		// A furan or thiophene ring fused to aromatic rings: the single
+		// ring's correction holds its own aromatic stabilisation, which
+		// the fused rings change. The fused ring has a correction of its
+		// own by the number of benzene rings it shares a bond with (one:
 		// benzothiophene; two: dibenzothiophene, dibenzofuran) where a
-		// parent molecule gave one; otherwise the single ring's is used as
-		// an approximation, flagged.
-		benzene, other := g.fusedAromaticRings(r)
-		switch {
+		// parent molecule gave one; fused to any other aromatic ring (a
+		// pyridine ring, thienothiophene, furofuran), or where no parent
+		// gave one (benzofuran), the single ring's is used as an
+		// approximation, flagged.
+		switch benzene, other := g.fusedAromaticRings(r); {
 		case other > 0:
 			return key + fusedOtherSuffix, key
 		case benzene >= 2:
 			return key + fusedTwoBenzenesSuffix, key
+		case benzene == 1:
+			return key + fusedBenzeneSuffix, key
 		}
-		return key + fusedBenzeneSuffix, key
-	}
-	if (key == "furan" || key == "thiophene") && g.fusedToAromatic(r) {
-		// Thienothiophene, furofuran, thienopyrrole: a five-membered
-		// aromatic ring fused to another aromatic ring that is no
-		// benzenoid ring; no correction describes it.
-		return key + fusedOtherSuffix, key
 	}
 	if key == "" {
 		key = fmt.Sprintf("%d-membered ring with %d O, %d other heteroatoms, %d double bonds", n, oxy, other, nd)
@@ -252,13 +248,6 @@ func (g *graph) fusedAromaticRings(r []int) (benzene, other int) {
 		}
 	}
 	return benzene, other
-}
-
-// fusedToAromatic reports whether an aromatic ring other than r shares a
-// bond with r.
-func (g *graph) fusedToAromatic(r []int) bool {
-	b, o := g.fusedAromaticRings(r)
-	return b+o > 0
 }
 
 // aromaticRing reports whether every atom of ring s is aromatic.
