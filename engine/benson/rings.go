@@ -238,8 +238,9 @@ func isFusedFiveRing(name string) bool {
 // aromatic five-membered rings).
 func (g *graph) fusedAromaticRings(r []int) (benzene, other int) {
 	for ri, s := range g.rings {
-		if !sharesBond(r, s) || sameCycle(r, s) || !g.aromaticRing(s) {
-			continue
+		shared := commonAtoms(r, s)
+		if shared < 2 || shared == len(r) && shared == len(s) || !g.aromaticRing(s) {
+			continue // not fused to r, or r itself
 		}
 		if g.benzRing[ri] && g.allCarbon(s) {
 			benzene++
@@ -270,37 +271,16 @@ func (g *graph) allCarbon(s []int) bool {
 	return true
 }
 
-// sharesBond reports whether rings r and s (cyclic atom lists) have two
-// atoms bonded along both of them in common.
-func sharesBond(r, s []int) bool {
-	in := map[int]bool{}
-	for _, a := range s {
-		in[a] = true
-	}
-	shared := 0
+// commonAtoms counts the atoms rings r and s have in common: two or more
+// for fused rings (a shared bond), all of them for the same ring.
+func commonAtoms(r, s []int) int {
+	n := 0
 	for _, a := range r {
-		if in[a] {
-			shared++
+		if slices.Contains(s, a) {
+			n++
 		}
 	}
-	return shared >= 2
-}
-
-// sameCycle reports whether r and s hold the same atoms.
-func sameCycle(r, s []int) bool {
-	if len(r) != len(s) {
-		return false
-	}
-	in := map[int]bool{}
-	for _, a := range s {
-		in[a] = true
-	}
-	for _, a := range r {
-		if !in[a] {
-			return false
-		}
-	}
-	return true
+	return n
 }
 
 // fusedToBenzene reports whether a member of ring r also lies in a

@@ -85,8 +85,9 @@ func (m *Molecule) identicalTerminals(c int) bool {
 	var first *Atom
 	order := 0
 	for _, b := range m.Adj[c] {
-		x := &m.Atoms[m.Other(b, c)]
-		if len(m.Adj[m.Other(b, c)]) != 1 || x.HCount != 0 {
+		j := m.Other(b, c)
+		x := &m.Atoms[j]
+		if len(m.Adj[j]) != 1 || x.HCount != 0 {
 			return false
 		}
 		if first == nil {
